@@ -1,0 +1,57 @@
+import { Module, type DynamicModule } from '@nestjs/common';
+import { ConfigModule, ConfigService } from '@nestjs/config';
+import { APP_FILTER, APP_GUARD } from '@nestjs/core';
+import { MikroOrmModule } from '@mikro-orm/nestjs';
+import { PostgreSqlDriver } from '@mikro-orm/postgresql';
+import { ServeStaticModule } from '@nestjs/serve-static';
+import { LoggerModule } from 'nestjs-pino';
+import { appConfig } from './config/app.config';
+import { databaseConfig } from './config/database.config';
+import { mailConfig } from './config/mail.config';
+import { validateEnv } from './config/validate-env';
+import { baseOrmOptions } from './mikro-orm.config';
+import { AllExceptionsFilter } from './common/filters/all-exceptions.filter';
+import { JwtAuthGuard } from './common/guards/jwt-auth.guard';
+import { RolesGuard } from './common/guards/roles.guard';
+import { AuthModule } from './auth/auth.module';
+import { UsersModule } from './users/users.module';
+import { HealthModule } from './health/health.module';
+
+function staticClient(): DynamicModule[] {
+  const dist = process.env.CLIENT_DIST;
+  if (!dist) return [];
+  return [ServeStaticModule.forRoot({ rootPath: dist, exclude: ['/api/{*path}'] })];
+}
+
+@Module({
+  imports: [
+    ConfigModule.forRoot({ isGlobal: true, cache: true, load: [appConfig, databaseConfig, mailConfig], validate: validateEnv }),
+    LoggerModule.forRoot({
+      pinoHttp: {
+        level: process.env.LOG_LEVEL ?? 'info',
+        redact: ['req.headers.authorization', 'req.headers.cookie', 'res.headers["set-cookie"]'],
+        autoLogging: { ignore: (req) => req.url === '/api/health' },
+      },
+    }),
+    MikroOrmModule.forRootAsync({
+      inject: [ConfigService],
+      useFactory: (config: ConfigService) => ({
+        ...baseOrmOptions(config.getOrThrow<string>('database.url')),
+        autoLoadEntities: true,
+        registerRequestContext: true,
+      }),
+      // Registers the PostgreSQL-typed EntityManager and MikroORM for injection too.
+      driver: PostgreSqlDriver,
+    }),
+    ...staticClient(),
+    AuthModule,
+    UsersModule,
+    HealthModule,
+  ],
+  providers: [
+    { provide: APP_FILTER, useClass: AllExceptionsFilter },
+    { provide: APP_GUARD, useClass: JwtAuthGuard },
+    { provide: APP_GUARD, useClass: RolesGuard },
+  ],
+})
+export class AppModule {}

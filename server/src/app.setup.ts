@@ -1,0 +1,31 @@
+import { ValidationPipe, type INestApplication } from '@nestjs/common';
+import type { NestExpressApplication } from '@nestjs/platform-express';
+import cookieParser from 'cookie-parser';
+import helmet from 'helmet';
+import { Logger } from 'nestjs-pino';
+import { validationExceptionFactory } from './common/filters/validation-exception.factory';
+import { CSRF } from './common/csrf/csrf.provider';
+import type { Csrf } from './common/csrf/csrf';
+
+/** Everything main.ts and the tests must share, so tests exercise the real app. */
+export function configureApp(app: INestApplication): INestApplication {
+  const express = app as NestExpressApplication;
+  express.useLogger(app.get(Logger));
+  express.set('trust proxy', 'loopback');
+  express.disable('x-powered-by');
+  app.setGlobalPrefix('api');
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: { 'img-src': ["'self'", 'data:', 'blob:'], 'script-src': ["'self'"], 'style-src': ["'self'", "'unsafe-inline'"] },
+      },
+    }),
+  );
+  app.use(cookieParser());
+  app.use(app.get<Csrf>(CSRF).doubleCsrfProtection);
+  app.useGlobalPipes(
+    new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true, exceptionFactory: validationExceptionFactory }),
+  );
+  app.enableShutdownHooks();
+  return app;
+}

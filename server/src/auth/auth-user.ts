@@ -1,0 +1,14 @@
+import type { AccountRole } from '@broodsilk/shared';
+
+/** What a request knows about its caller once the session is checked. */
+export interface AuthUser {
+  id: string;
+  email: string;
+  role: AccountRole;
+  timeZone: string;
+}
+
+export interface JwtPayload {
+  sub: string;
+  ver: number;
+}

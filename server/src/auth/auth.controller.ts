@@ -1,0 +1,82 @@
+import { Body, Controller, Get, HttpCode, Inject, Post, Req, Res, UseGuards } from '@nestjs/common';
+import { ConfigType } from '@nestjs/config';
+import { ThrottlerGuard } from '@nestjs/throttler';
+import type { Request, Response } from 'express';
+import type { CsrfResponse, LoginResponse, Me } from '@broodsilk/shared';
+import { appConfig } from '../config/app.config';
+import { Public } from '../common/decorators/public.decorator';
+import { CurrentUser } from '../common/decorators/current-user.decorator';
+import { CSRF } from '../common/csrf/csrf.provider';
+import { mintCsrfToken, type Csrf } from '../common/csrf/csrf';
+import { AuthService, type IssuedSession } from './auth.service';
+import { RegisterDto } from './dto/register.dto';
+import { LoginDto } from './dto/login.dto';
+import { PasswordResetConfirmDto, PasswordResetDto } from './dto/password-reset.dto';
+import { clearSessionCookie, setSessionCookie } from './session-cookie';
+import type { AuthUser } from './auth-user';
+
+@Controller('auth')
+export class AuthController {
+  constructor(
+    private readonly auth: AuthService,
+    @Inject(CSRF) private readonly csrf: Csrf,
+    @Inject(appConfig.KEY) private readonly app: ConfigType<typeof appConfig>,
+  ) {}
+
+  @Public()
+  @UseGuards(ThrottlerGuard)
+  @Post('register')
+  async register(@Body() dto: RegisterDto, @Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<LoginResponse> {
+    return this.startSession(await this.auth.register(dto), req, res);
+  }
+
+  @Public()
+  @UseGuards(ThrottlerGuard)
+  @HttpCode(200)
+  @Post('login')
+  async login(@Body() dto: LoginDto, @Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<LoginResponse> {
+    return this.startSession(await this.auth.login(dto), req, res);
+  }
+
+  @HttpCode(204)
+  @Post('logout')
+  async logout(@CurrentUser() user: AuthUser, @Res({ passthrough: true }) res: Response): Promise<void> {
+    await this.auth.logout(user.id);
+    clearSessionCookie(res, this.app.secureCookies);
+  }
+
+  @Get('me')
+  me(@CurrentUser() user: AuthUser): Promise<Me> {
+    return this.auth.me(user.id);
+  }
+
+  /** A fresh CSRF token for the current session (after a reload the client asks again). */
+  @Public()
+  @Get('csrf')
+  csrfToken(@Req() req: Request, @Res({ passthrough: true }) res: Response): CsrfResponse {
+    return { csrfToken: this.csrf.generateCsrfToken(req, res, { overwrite: true }) };
+  }
+
+  @Public()
+  @UseGuards(ThrottlerGuard)
+  @HttpCode(202)
+  @Post('password-reset')
+  async requestReset(@Body() dto: PasswordResetDto): Promise<{ message: string }> {
+    await this.auth.requestPasswordReset(dto.email);
+    return { message: 'If an account uses this e-mail, a reset link is on its way. It works once, within 45 minutes.' };
+  }
+
+  @Public()
+  @UseGuards(ThrottlerGuard)
+  @HttpCode(204)
+  @Post('password-reset/confirm')
+  async confirmReset(@Body() dto: PasswordResetConfirmDto): Promise<void> {
+    await this.auth.confirmPasswordReset(dto.token, dto.password);
+  }
+
+  private startSession(session: IssuedSession, req: Request, res: Response): LoginResponse {
+    setSessionCookie(res, session.accessToken, this.app.secureCookies);
+    const csrfToken = mintCsrfToken(this.csrf, req, res, session.accessToken);
+    return { user: session.user, accessToken: session.accessToken, csrfToken, expiresAt: session.expiresAt.toISOString() };
+  }
+}

@@ -1,0 +1,26 @@
+import { IsEmail, IsNotEmpty, IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
+import { Transform } from 'class-transformer';
+import { MIN_PASSWORD_LENGTH, type RegisterRequest } from '@broodsilk/shared';
+import { IsTimeZone } from '../../common/validators/is-time-zone.validator';
+
+export class RegisterDto implements RegisterRequest {
+  @Transform(({ value }) => (typeof value === 'string' ? value.trim().toLowerCase() : value))
+  @IsEmail({}, { message: 'Enter a valid e-mail address.' })
+  @MaxLength(254)
+  email!: string;
+
+  @IsString()
+  @MinLength(MIN_PASSWORD_LENGTH, { message: `Use a password of at least ${MIN_PASSWORD_LENGTH} characters.` })
+  @MaxLength(200, { message: 'Use a password of at most 200 characters.' })
+  password!: string;
+
+  @Transform(({ value }) => (typeof value === 'string' ? value.trim() : value))
+  @IsString()
+  @IsNotEmpty({ message: 'Tell us the name to show to your partners.' })
+  @MaxLength(80)
+  displayName!: string;
+
+  @IsOptional()
+  @IsTimeZone()
+  timeZone?: string;
+}

@@ -1,0 +1,22 @@
+import { BadRequestException, type ValidationError } from '@nestjs/common';
+import type { FieldError } from '@broodsilk/shared';
+
+function flatten(errors: ValidationError[], prefix = ''): FieldError[] {
+  return errors.flatMap((e) => {
+    const field = prefix ? `${prefix}.${e.property}` : e.property;
+    const own = Object.values(e.constraints ?? {}).map((message) => ({ field, message: humanise(message, field) }));
+    return [...own, ...flatten(e.children ?? [], field)];
+  });
+}
+
+/** class-validator says "property foo should not exist"; say it so a person understands. */
+function humanise(message: string, field: string): string {
+  if (message.endsWith('should not exist')) return `"${field}" is not a field this form accepts.`;
+  return message;
+}
+
+export function validationExceptionFactory(errors: ValidationError[]): BadRequestException {
+  const details = flatten(errors);
+  const message = details.length === 1 ? details[0].message : `Please correct ${details.length} fields: ${details.map((d) => d.field).join(', ')}.`;
+  return new BadRequestException({ message, details });
+}

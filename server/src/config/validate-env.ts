@@ -1,0 +1,18 @@
+/**
+ * Checked once at start so a misconfigured instance fails loudly instead of
+ * signing sessions with an empty secret.
+ */
+export function validateEnv(env: Record<string, unknown>): Record<string, unknown> {
+  const problems: string[] = [];
+  for (const key of ['JWT_SECRET', 'CSRF_SECRET']) {
+    const value = env[key];
+    if (typeof value !== 'string' || value.length < 32) {
+      problems.push(`${key} must be set to a random string of at least 32 characters`);
+    }
+  }
+  if (typeof env.DATABASE_URL !== 'string' || !env.DATABASE_URL.startsWith('postgres')) {
+    problems.push('DATABASE_URL must be a postgres:// connection URL');
+  }
+  if (problems.length) throw new Error(`Configuration error:\n- ${problems.join('\n- ')}`);
+  return env;
+}

@@ -1,0 +1,21 @@
+import { IsIn, IsNotEmpty, IsOptional, IsString, MaxLength } from 'class-validator';
+import { Transform } from 'class-transformer';
+import { TEMPERATURE_UNITS, type TemperatureUnit, type UpdateProfileRequest } from '@broodsilk/shared';
+import { IsTimeZone } from '../../common/validators/is-time-zone.validator';
+
+export class UpdateProfileDto implements UpdateProfileRequest {
+  @IsOptional()
+  @Transform(({ value }) => (typeof value === 'string' ? value.trim() : value))
+  @IsString()
+  @IsNotEmpty({ message: 'Your display name cannot be empty.' })
+  @MaxLength(80)
+  displayName?: string;
+
+  @IsOptional()
+  @IsTimeZone()
+  timeZone?: string;
+
+  @IsOptional()
+  @IsIn(TEMPERATURE_UNITS, { message: 'Choose °C or °F.' })
+  temperatureUnit?: TemperatureUnit;
+}

@@ -1,0 +1,29 @@
+import { Entity, Enum, Property, Unique } from '@mikro-orm/core';
+import type { AccountRole, TemperatureUnit } from '@broodsilk/shared';
+import { BaseEntity } from '../database/base.entity';
+
+@Entity({ tableName: 'users' })
+export class User extends BaseEntity<'role' | 'timeZone' | 'temperatureUnit' | 'tokenVersion'> {
+  @Property({ type: 'text' })
+  @Unique()
+  email!: string;
+
+  @Property({ type: 'text', hidden: true, lazy: true })
+  passwordHash!: string;
+
+  @Property({ type: 'text' })
+  displayName!: string;
+
+  @Enum({ items: ['keeper', 'admin'], nativeEnumName: 'account_role' })
+  role: AccountRole = 'keeper';
+
+  @Property({ type: 'text' })
+  timeZone: string = 'UTC';
+
+  @Enum({ items: ['C', 'F'] })
+  temperatureUnit: TemperatureUnit = 'C';
+
+  /** Bumped on logout and password change: every JWT carries it, so older tokens stop working. */
+  @Property({ type: 'integer' })
+  tokenVersion: number = 0;
+}

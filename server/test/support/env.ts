@@ -1,0 +1,9 @@
+// Loaded before every test file (vitest setupFiles), before AppModule reads the environment.
+process.env.JWT_SECRET ??= 'test-jwt-secret-test-jwt-secret-0123456789';
+process.env.CSRF_SECRET ??= 'test-csrf-secret-test-csrf-secret-012345678';
+process.env.DATABASE_URL = process.env.TEST_DATABASE_URL ?? 'postgres://app@127.0.0.1:54329/broodsilk_test';
+process.env.LOG_LEVEL ??= 'silent';
+process.env.AUTH_RATE_LIMIT ??= '1000';
+if (!process.env.DATABASE_URL.includes('test')) {
+  throw new Error(`Refusing to run tests against ${process.env.DATABASE_URL}: the database name must contain "test".`);
+}

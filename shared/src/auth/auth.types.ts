@@ -1,0 +1,55 @@
+export const ACCOUNT_ROLES = ['keeper', 'admin'] as const;
+export type AccountRole = (typeof ACCOUNT_ROLES)[number];
+
+export const TEMPERATURE_UNITS = ['C', 'F'] as const;
+export type TemperatureUnit = (typeof TEMPERATURE_UNITS)[number];
+
+export const MIN_PASSWORD_LENGTH = 10;
+
+export interface RegisterRequest {
+  email: string;
+  password: string;
+  displayName: string;
+  timeZone?: string;
+}
+
+export interface LoginRequest {
+  email: string;
+  password: string;
+}
+
+export interface PasswordResetRequest {
+  email: string;
+}
+
+export interface PasswordResetConfirmRequest {
+  token: string;
+  password: string;
+}
+
+/** The signed-in user, as `GET /api/auth/me` returns it. */
+export interface Me {
+  id: string;
+  email: string;
+  displayName: string;
+  role: AccountRole;
+  timeZone: string;
+  temperatureUnit: TemperatureUnit;
+}
+
+export interface LoginResponse {
+  user: Me;
+  /** The same JWT the session cookie carries, for API clients that send `Authorization: Bearer`. */
+  accessToken: string;
+  /** Token for the `x-csrf-token` header on cookie-authenticated writes. */
+  csrfToken: string;
+  expiresAt: string;
+}
+
+export interface CsrfResponse {
+  csrfToken: string;
+}
+
+export const SESSION_COOKIE = 'broodsilk_session';
+export const CSRF_HEADER = 'x-csrf-token';
+export const SESSION_HOURS = 12;
