@@ -1,4 +1,5 @@
 import swc from 'unplugin-swc';
+import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'vitest/config';
 
 export default defineConfig({
@@ -13,6 +14,8 @@ export default defineConfig({
       },
     }),
   ],
+  // Tests read shared/ from source, so a change there needs no rebuild.
+  resolve: { alias: { '@broodsilk/shared': fileURLToPath(new URL('../shared/src/index.ts', import.meta.url)) } },
   test: {
     environment: 'node',
     include: ['src/**/*.spec.ts', 'test/**/*.e2e-spec.ts'],
