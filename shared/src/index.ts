@@ -4,3 +4,7 @@ export * from './users/users.types.js';
 export * from './time/temperature.js';
 export * from './time/time-zone.js';
 export const APP_NAME = 'Broodsilk';
+export * from './breeding/calendar-day.js';
+export * from './breeding/pull-window.js';
+export * from './collection/male-clock.js';
+export * from './collection/female-readiness.js';
