@@ -16,6 +16,9 @@ import { RolesGuard } from './common/guards/roles.guard';
 import { AuthModule } from './auth/auth.module';
 import { UsersModule } from './users/users.module';
 import { HealthModule } from './health/health.module';
+import { SpeciesModule } from './species/species.module';
+import { AnimalsModule } from './animals/animals.module';
+import { PhotosModule } from './photos/photos.module';
 
 function staticClient(): DynamicModule[] {
   const dist = process.env.CLIENT_DIST;
@@ -47,6 +50,9 @@ function staticClient(): DynamicModule[] {
     AuthModule,
     UsersModule,
     HealthModule,
+    SpeciesModule,
+    AnimalsModule,
+    PhotosModule,
   ],
   providers: [
     { provide: APP_FILTER, useClass: AllExceptionsFilter },

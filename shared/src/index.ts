@@ -8,3 +8,5 @@ export * from './breeding/calendar-day.js';
 export * from './breeding/pull-window.js';
 export * from './collection/male-clock.js';
 export * from './collection/female-readiness.js';
+export * from './collection/species.types.js';
+export * from './collection/animals.types.js';

@@ -1,0 +1,102 @@
+/** The five husbandry groups a species belongs to; group defaults fill a species' missing values. */
+export const SPECIES_GROUPS = ['nw-terrestrial', 'nw-arboreal', 'ow-terrestrial', 'ow-arboreal', 'fossorial'] as const;
+export type SpeciesGroup = (typeof SPECIES_GROUPS)[number];
+
+/**
+ * Where a value comes from: a named publication or catalogue, keeper practice
+ * with no written source, or recalled by the author of the dataset.
+ */
+export type ValueSource =
+  | { kind: 'published'; citation: string }
+  | { kind: 'common-practice' }
+  | { kind: 'memory' };
+
+/** An inclusive whole-number range, e.g. eggs per sac 100–600. */
+export interface NumberRange {
+  min: number;
+  max: number;
+}
+
+export interface Sourced<T> {
+  value: T;
+  source: ValueSource;
+}
+
+/** The breeding values of a species: each may be missing, so the group default applies. */
+export interface SpeciesBreedingValues {
+  /** Days after the lay date in which to pull the sac. */
+  pullWindow?: Sourced<{ fromDay: number; toDay: number }>;
+  /** Days from pairing to the sac. */
+  pairingToSacDays?: Sourced<NumberRange>;
+  eggsPerSac?: Sourced<NumberRange>;
+  /** Months a male typically lives after his maturing molt. */
+  matureMaleLifespanMonths?: Sourced<NumberRange>;
+}
+
+/** The values in force for a species, after falling back to its group and the product default. */
+export interface EffectiveBreedingValues {
+  pullWindow: Sourced<{ fromDay: number; toDay: number }> & { from: ValueOrigin };
+  pairingToSacDays: Sourced<NumberRange> & { from: ValueOrigin };
+  eggsPerSac: Sourced<NumberRange> & { from: ValueOrigin };
+  matureMaleLifespanMonths: Sourced<NumberRange> & { from: ValueOrigin };
+}
+
+/** Whether an effective value is the species' own, its group's, or the product's default. */
+export type ValueOrigin = 'species' | 'group' | 'default';
+
+export interface SpeciesCautions {
+  urticatingHairs: Sourced<boolean>;
+  medicallySignificantVenom: Sourced<boolean>;
+  /** Shown beside the flags; defers to local law and licensed practice. */
+  cautionText: string;
+}
+
+export interface SpeciesResponse {
+  id: string;
+  /** Current name as the World Spider Catalog gives it, e.g. "Tliltocatl vagans". */
+  scientificName: string;
+  genus: string;
+  /** Author and year, e.g. "(Ausserer, 1875)". */
+  authority: string;
+  /** Former names keepers may still use, e.g. "Brachypelma vagans". */
+  formerNames: string[];
+  commonNames: string[];
+  group: SpeciesGroup;
+  nameSource: ValueSource;
+  cautions: SpeciesCautions;
+  /** e.g. "CITES Appendix II"; null when not listed. */
+  tradeListing: Sourced<string | null>;
+  /** The species' own values only (what an admin edits). */
+  breeding: SpeciesBreedingValues;
+  /** The values in force: species, else group, else product default. */
+  effective: EffectiveBreedingValues;
+  updatedAt: string;
+}
+
+export interface SpeciesListQuery {
+  q?: string;
+  group?: SpeciesGroup;
+  limit?: number;
+  offset?: number;
+}
+
+/** What an admin may change; a range value replaces the species' own value and its source. */
+export interface UpdateSpeciesRequest {
+  commonNames?: string[];
+  formerNames?: string[];
+  group?: SpeciesGroup;
+  urticatingHairs?: boolean;
+  medicallySignificantVenom?: boolean;
+  tradeListing?: string | null;
+  pullFromDay?: number | null;
+  pullToDay?: number | null;
+  pairingToSacMinDays?: number | null;
+  pairingToSacMaxDays?: number | null;
+  eggsMin?: number | null;
+  eggsMax?: number | null;
+  lifespanMinMonths?: number | null;
+  lifespanMaxMonths?: number | null;
+  /** Where the values changed in this request come from; a citation is required for `published`. */
+  sourceKind?: ValueSource['kind'];
+  sourceCitation?: string;
+}
