@@ -12,3 +12,5 @@ export * from './collection/male-clock.js';
 export * from './collection/female-readiness.js';
 export * from './breeding/brood-stage.js';
 export * from './breeding/roll-schedule.js';
+export * from './accounts/fraction.js';
+export * from './accounts/shares.js';

@@ -1,0 +1,219 @@
+import { approxFraction, formatFraction } from './fraction.js';
+
+/** One party of the terms, as the share rule needs it. */
+export interface ShareParty {
+  partyId: string;
+  /** Whole number ≥ 0; the party's part of what is left after fixed counts is weight / sum of weights. */
+  weight: number;
+  /** Whole number ≥ 0 taken off the top before the split by weight. */
+  fixedCount?: number;
+  /** 1 = picks first. Serves fixed counts and breaks ties in remainders. Unique per party. */
+  pickOrder: number;
+}
+
+export interface ShareAllocation {
+  partyId: string;
+  weight: number;
+  pickOrder: number;
+  /** The fixed count asked for in the terms. */
+  fixedAsked: number;
+  /** The fixed count actually served (less when the young ran out). */
+  fixed: number;
+  /** Young from the split by weight. */
+  proportional: number;
+  /** fixed + proportional. */
+  count: number;
+  /** Exact quota of the split by weight, rest × weight / sum of weights, reduced: "35/3", "12", "0". */
+  exactQuota: string;
+  /** True when the party got one extra young for a largest remainder. */
+  roundedUp: boolean;
+}
+
+export interface ShareResult {
+  total: number;
+  fixedTotal: number;
+  /** Young left after the fixed counts, split by weight. */
+  rest: number;
+  weightTotal: number;
+  /** In the order the parties were given. */
+  parties: ShareAllocation[];
+}
+
+function assertWhole(value: number, message: string): void {
+  if (!Number.isSafeInteger(value) || value < 0) throw new RangeError(message);
+}
+
+function assertInput(total: number, parties: readonly ShareParty[]): void {
+  assertWhole(total, `The number of young must be a whole number of 0 or more (got ${total}).`);
+  const ids = new Set<string>();
+  const picks = new Map<number, string>();
+  for (const p of parties) {
+    if (ids.has(p.partyId)) throw new RangeError(`Party ${p.partyId} is listed twice in the terms.`);
+    ids.add(p.partyId);
+    assertWhole(p.weight, `Party ${p.partyId}: the weight must be a whole number of 0 or more (got ${p.weight}).`);
+    if (p.fixedCount !== undefined) {
+      assertWhole(p.fixedCount, `Party ${p.partyId}: the fixed count must be a whole number of 0 or more (got ${p.fixedCount}).`);
+    }
+    if (!Number.isSafeInteger(p.pickOrder)) {
+      throw new RangeError(`Party ${p.partyId}: the pick order must be a whole number (got ${p.pickOrder}).`);
+    }
+    const other = picks.get(p.pickOrder);
+    if (other !== undefined) {
+      throw new RangeError(`Parties ${other} and ${p.partyId} both have pick order ${p.pickOrder}; each party needs its own place.`);
+    }
+    picks.set(p.pickOrder, p.partyId);
+  }
+}
+
+/**
+ * The share rule. First each party's fixed count comes off the top, served in pick order while
+ * young last. The rest is split by weight with the largest-remainder method (Hamilton /
+ * Hare–Niemeyer): each party gets the whole part of rest × weight / sum of weights, and the young
+ * still left go one each to the largest remainders, a tie going to the earlier pick. All arithmetic
+ * is in BigInt, so the counts always add up to `total`.
+ */
+export function computeShares(total: number, parties: readonly ShareParty[]): ShareResult {
+  assertInput(total, parties);
+  const byPick = [...parties].sort((a, b) => a.pickOrder - b.pickOrder);
+
+  const fixed = new Map<string, number>();
+  let left = total;
+  for (const p of byPick) {
+    const served = Math.min(p.fixedCount ?? 0, left);
+    fixed.set(p.partyId, served);
+    left -= served;
+  }
+  const rest = left;
+  const weightTotal = parties.reduce((sum, p) => sum + p.weight, 0);
+  if (rest > 0 && weightTotal === 0) {
+    throw new RangeError(`${rest} young are left after the fixed counts, but no party has a weight above 0 to share them.`);
+  }
+
+  const R = BigInt(rest);
+  const W = BigInt(weightTotal);
+  const whole = new Map<string, bigint>();
+  const remainder = new Map<string, bigint>(); // numerator over W, so remainders compare directly
+  for (const p of parties) {
+    const numerator = R * BigInt(p.weight);
+    whole.set(p.partyId, W === 0n ? 0n : numerator / W);
+    remainder.set(p.partyId, W === 0n ? 0n : numerator % W);
+  }
+  let extra = rest - Number([...whole.values()].reduce((a, b) => a + b, 0n));
+  const roundedUp = new Set<string>();
+  const ranked = [...byPick].sort((a, b) => {
+    const ra = remainder.get(a.partyId)!;
+    const rb = remainder.get(b.partyId)!;
+    return ra === rb ? a.pickOrder - b.pickOrder : rb > ra ? 1 : -1;
+  });
+  for (const p of ranked) {
+    if (extra === 0) break;
+    roundedUp.add(p.partyId);
+    extra -= 1;
+  }
+
+  const allocations = parties.map((p): ShareAllocation => {
+    const proportional = Number(whole.get(p.partyId)!) + (roundedUp.has(p.partyId) ? 1 : 0);
+    const f = fixed.get(p.partyId)!;
+    return {
+      partyId: p.partyId,
+      weight: p.weight,
+      pickOrder: p.pickOrder,
+      fixedAsked: p.fixedCount ?? 0,
+      fixed: f,
+      proportional,
+      count: f + proportional,
+      exactQuota: W === 0n ? '0' : formatFraction(R * BigInt(p.weight), W),
+      roundedUp: roundedUp.has(p.partyId),
+    };
+  });
+  return { total, fixedTotal: total - rest, rest, weightTotal, parties: allocations };
+}
+
+export type PartyNames = Readonly<Record<string, string>> | ((partyId: string) => string);
+
+function namer(names?: PartyNames): (id: string) => string {
+  if (!names) return (id) => id;
+  if (typeof names === 'function') return names;
+  return (id) => names[id] ?? id;
+}
+
+const young = (n: number) => (n === 1 ? '1 young' : `${n} young`);
+
+/** The share calculation in plain words, one sentence per line, for the account page. */
+export function explainShares(result: ShareResult, names?: PartyNames): string[] {
+  const name = namer(names);
+  const byPick = [...result.parties].sort((a, b) => a.pickOrder - b.pickOrder);
+  const lines = [`The sac counts ${young(result.total)}.`];
+
+  const withFixed = byPick.filter((p) => p.fixedAsked > 0);
+  if (withFixed.length > 0) {
+    const parts = withFixed.map((p) =>
+      p.fixed === p.fixedAsked ? `${name(p.partyId)} ${p.fixed}` : `${name(p.partyId)} ${p.fixed} of the ${p.fixedAsked} agreed`,
+    );
+    lines.push(`Fixed counts come first, in pick order: ${parts.join(', ')}. ${young(result.rest)} remain.`);
+    if (withFixed.some((p) => p.fixed < p.fixedAsked)) {
+      lines.push('There were not enough young to serve every fixed count in full; later picks got fewer.');
+    }
+  }
+  if (result.rest === 0) {
+    lines.push('Nothing is left to split by weight.');
+  } else {
+    const W = BigInt(result.weightTotal);
+    const R = BigInt(result.rest);
+    const quotas = byPick
+      .filter((p) => p.weight > 0)
+      .map((p) => `${name(p.partyId)} ${result.rest} × ${p.weight}/${result.weightTotal} = ${p.exactQuota} ≈ ${approxFraction(R * BigInt(p.weight), W)}`);
+    lines.push(`The remaining ${young(result.rest)} are split by weight: ${quotas.join('; ')}.`);
+    const up = byPick.filter((p) => p.roundedUp);
+    if (up.length === 0) {
+      lines.push('Every quota is a whole number, so no rounding was needed.');
+    } else {
+      const remainders = new Map(byPick.map((p) => [p.partyId, (R * BigInt(p.weight)) % W]));
+      const cut = remainders.get(up[up.length - 1]!.partyId)!;
+      const tiedOut = byPick.some((p) => !p.roundedUp && remainders.get(p.partyId) === cut);
+      lines.push(
+        `Each party first gets the whole part of its quota; the ${young(up.length)} still left go one each to the largest remainders: ` +
+          `${up.map((p) => name(p.partyId)).join(', ')}.` +
+          (tiedOut ? ' Equal remainders went to the earlier pick.' : ''),
+      );
+    }
+  }
+  lines.push(`In all: ${result.parties.map((p) => `${name(p.partyId)} ${p.count}`).join(', ')}.`);
+  return lines;
+}
+
+export interface ShareChange {
+  partyId: string;
+  before: number;
+  after: number;
+  change: number;
+}
+
+export interface ShareDiff {
+  totalBefore: number;
+  totalAfter: number;
+  /** Every party in either result, in the order first seen (before, then after). */
+  changes: ShareChange[];
+  /** Plain-words lines for the parties whose count changed; empty when nothing did. */
+  lines: string[];
+}
+
+/** What changed between two share results (a new count of young, or new terms). */
+export function diffShares(before: ShareResult, after: ShareResult, names?: PartyNames): ShareDiff {
+  const name = namer(names);
+  const ids = [...new Set([...before.parties, ...after.parties].map((p) => p.partyId))];
+  const countOf = (r: ShareResult, id: string) => r.parties.find((p) => p.partyId === id)?.count ?? 0;
+  const changes = ids.map((id) => {
+    const b = countOf(before, id);
+    const a = countOf(after, id);
+    return { partyId: id, before: b, after: a, change: a - b };
+  });
+  const lines: string[] = [];
+  if (before.total !== after.total) lines.push(`The count of young changed from ${before.total} to ${after.total}.`);
+  for (const c of changes) {
+    if (c.change === 0) continue;
+    const sign = c.change > 0 ? `+${c.change}` : `−${-c.change}`;
+    lines.push(`${name(c.partyId)}: ${c.before} → ${c.after} (${sign}).`);
+  }
+  return { totalBefore: before.total, totalAfter: after.total, changes, lines };
+}
