@@ -14,3 +14,5 @@ export * from './breeding/brood-stage.js';
 export * from './breeding/roll-schedule.js';
 export * from './accounts/fraction.js';
 export * from './accounts/shares.js';
+export * from './accounts/ledger.types.js';
+export * from './accounts/balances.js';
