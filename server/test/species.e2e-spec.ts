@@ -1,20 +1,103 @@
+import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Paged, SpeciesResponse } from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
+import { registerKeeper, type SignedIn } from './support/users';
+import { User } from '../src/users/user.entity';
+import { SPECIES_DATA } from '../src/species/data/species.data';
 
 let t: TestApp;
+let keeper: SignedIn;
+let admin: SignedIn;
+const http = () => request(t.app.getHttpServer());
+
+async function search(q: string): Promise<Paged<SpeciesResponse>> {
+  const res = await http().get('/api/species').query({ q }).set('Authorization', keeper.bearer).expect(200);
+  return res.body as Paged<SpeciesResponse>;
+}
 
 beforeAll(async () => {
   t = await createTestApp();
+  keeper = await registerKeeper(t.app, 'Catalogue Reader');
+  admin = await registerKeeper(t.app, 'Catalogue Admin');
+  await t.orm.em.fork().nativeUpdate(User, { id: admin.user.id }, { role: 'admin' });
 });
 afterAll(async () => {
   await t.close();
 });
 
-describe('collection schema', () => {
-  it('migrates the species and animals tables up from empty', async () => {
-    const rows = await t.orm.em.getConnection().execute<{ table_name: string }[]>(
-      `select table_name from information_schema.tables where table_schema = 'public' and table_name in ('species', 'animals', 'molts', 'photos') order by table_name`,
-    );
-    expect(rows.map((r) => r.table_name)).toEqual(['animals', 'molts', 'photos', 'species']);
+describe('species catalogue', () => {
+  it('the migration seeds every dataset row', async () => {
+    const all = await http().get('/api/species').query({ limit: 200 }).set('Authorization', keeper.bearer).expect(200);
+    expect(all.body.total).toBe(SPECIES_DATA.length);
+    expect(all.body.items.map((s: SpeciesResponse) => s.scientificName)).toEqual([...SPECIES_DATA.map((r) => r.scientificName)].sort());
+  });
+
+  it('needs a session', async () => {
+    await http().get('/api/species').expect(401);
+  });
+
+  it.each([
+    ['Euathlus vagans', 'Tliltocatl vagans'],
+    ['eurypelma VAG', 'Tliltocatl vagans'],
+    ['brachypelma vagans', 'Tliltocatl vagans'],
+    ['Avicularia versicolor', 'Caribena versicolor'],
+    ['citharischius', 'Pelinobius muticus'],
+    ['crawshayi', 'Pelinobius muticus'],
+  ])('an old name "%s" finds %s', async (q, expected) => {
+    const found = await search(q);
+    expect(found.items.map((s) => s.scientificName)).toContain(expected);
+  });
+
+  it('searches by genus prefix and by epithet prefix, case-insensitively', async () => {
+    const genus = await search('POECILO');
+    expect(genus.total).toBe(SPECIES_DATA.filter((r) => r.scientificName.startsWith('Poecilotheria')).length);
+    const epithet = await search('regal');
+    expect(epithet.items.map((s) => s.scientificName)).toEqual(['Poecilotheria regalis']);
+    expect((await search('vagan')).items.map((s) => s.scientificName)).toEqual(['Tliltocatl vagans']);
+    // a wildcard typed by a person is a letter, not "anything"
+    expect((await search('%')).total).toBe(0);
+  });
+
+  it('a species response carries cautions, sources and effective values', async () => {
+    const [regalis] = (await search('Poecilotheria regalis')).items;
+    expect(regalis.cautions.medicallySignificantVenom.value).toBe(true);
+    expect(regalis.cautions.medicallySignificantVenom.source).toMatchObject({ kind: 'published' });
+    expect(regalis.cautions.cautionText).toMatch(/local law/);
+    expect(regalis.tradeListing.value).toBe('CITES Appendix II');
+    expect(regalis.effective.pullWindow).toMatchObject({ value: { fromDay: 21, toDay: 30 }, from: 'species' });
+    const [fimbriatus] = (await search('Chilobrachys')).items;
+    expect(fimbriatus.effective.pullWindow).toEqual({ value: { fromDay: 21, toDay: 45 }, source: { kind: 'common-practice' }, from: 'default' });
+  });
+
+  it('only an admin edits; a value change needs its source; bad ranges are 400', async () => {
+    const [smithi] = (await search('Brachypelma smithi')).items;
+    const url = `/api/species/${smithi.id}`;
+    await http().patch(url).set('Authorization', keeper.bearer).send({ eggsMax: 700 }).expect(403);
+
+    const noSource = await http().patch(url).set('Authorization', admin.bearer).send({ eggsMax: 700 }).expect(400);
+    expect(noSource.body.details).toContainEqual({ field: 'sourceKind', message: expect.stringMatching(/where the new values come from/) });
+
+    const upside = await http().patch(url).set('Authorization', admin.bearer).send({ pullFromDay: 40, pullToDay: 30, sourceKind: 'memory' }).expect(400);
+    expect(upside.body.details[0]).toMatchObject({ field: 'pullFromDay', message: expect.stringMatching(/starts after it ends/) });
+
+    const half = await http().patch(url).set('Authorization', admin.bearer).send({ eggsMin: null, sourceKind: 'memory' }).expect(400);
+    expect(half.body.details[0].message).toMatch(/both ends/);
+
+    const ok = await http()
+      .patch(url)
+      .set('Authorization', admin.bearer)
+      .send({ eggsMin: 150, eggsMax: 650, sourceKind: 'published', sourceCitation: 'Our own breeding records 2026' })
+      .expect(200);
+    expect(ok.body.breeding.eggsPerSac).toEqual({ value: { min: 150, max: 650 }, source: { kind: 'published', citation: 'Our own breeding records 2026' } });
+    // clearing both ends falls back to the group's default
+    const cleared = await http().patch(url).set('Authorization', admin.bearer).send({ eggsMin: null, eggsMax: null, sourceKind: 'memory' }).expect(200);
+    expect(cleared.body.breeding.eggsPerSac).toBeUndefined();
+    expect(cleared.body.effective.eggsPerSac.from).toBe('group');
+  });
+
+  it('an unknown id is 404, a malformed one 400', async () => {
+    await http().get('/api/species/00000000-0000-4000-8000-000000000000').set('Authorization', keeper.bearer).expect(404);
+    await http().get('/api/species/not-a-uuid').set('Authorization', keeper.bearer).expect(400);
   });
 });

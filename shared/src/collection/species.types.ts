@@ -7,9 +7,9 @@ export type SpeciesGroup = (typeof SPECIES_GROUPS)[number];
  * with no written source, or recalled by the author of the dataset.
  */
 export type ValueSource =
-  | { kind: 'published'; citation: string }
-  | { kind: 'common-practice' }
-  | { kind: 'memory' };
+  | { kind: 'published'; citation: string; note?: string }
+  | { kind: 'common-practice'; note?: string }
+  | { kind: 'memory'; note?: string };
 
 /** An inclusive whole-number range, e.g. eggs per sac 100–600. */
 export interface NumberRange {

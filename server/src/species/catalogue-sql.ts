@@ -1,0 +1,36 @@
+import type { SpeciesDataRow } from './data/species.data';
+import type { SpeciesSourceKey } from './species.entity';
+
+const lit = (v: string | null): string => (v === null ? 'null' : `'${v.replace(/'/g, "''")}'`);
+const num = (v: number | undefined): string => (v === undefined ? 'null' : String(Math.trunc(v)));
+const arr = (v: string[]): string => `array[${v.map(lit).join(', ')}]::text[]`;
+
+function sources(r: SpeciesDataRow): Partial<Record<SpeciesSourceKey, unknown>> {
+  return {
+    name: r.nameSource,
+    urticatingHairs: r.urticatingHairs.source,
+    venom: r.medicallySignificantVenom.source,
+    tradeListing: r.tradeListing.source,
+    ...(r.pullWindow ? { pullWindow: r.pullWindow.source } : {}),
+    ...(r.pairingToSacDays ? { pairingToSac: r.pairingToSacDays.source } : {}),
+    ...(r.eggsPerSac ? { eggs: r.eggsPerSac.source } : {}),
+    ...(r.matureMaleLifespanMonths ? { lifespan: r.matureMaleLifespanMonths.source } : {}),
+  };
+}
+
+/**
+ * One statement inserting the checked-in catalogue. Rows already present (by key) are left alone,
+ * so an admin's edits survive; a later migration can call this again to add new dataset rows.
+ */
+export function catalogueInsertSql(rows: SpeciesDataRow[]): string {
+  const values = rows.map((r) =>
+    [
+      'gen_random_uuid()', 'now()', 'now()', lit(r.key), lit(r.scientificName), lit(r.scientificName.split(' ')[0]), lit(r.authority),
+      arr(r.formerNames), arr(r.commonNames), `${lit(r.group)}::species_group`, String(r.urticatingHairs.value), String(r.medicallySignificantVenom.value),
+      lit(r.tradeListing.value), num(r.pullWindow?.value.fromDay), num(r.pullWindow?.value.toDay),
+      num(r.pairingToSacDays?.value.min), num(r.pairingToSacDays?.value.max), num(r.eggsPerSac?.value.min), num(r.eggsPerSac?.value.max),
+      num(r.matureMaleLifespanMonths?.value.min), num(r.matureMaleLifespanMonths?.value.max), `${lit(JSON.stringify(sources(r)))}::jsonb`,
+    ].join(', '),
+  );
+  return `insert into "species" ("id", "created_at", "updated_at", "key", "scientific_name", "genus", "authority", "former_names", "common_names", "group", "urticating_hairs", "medically_significant_venom", "trade_listing", "pull_from_day", "pull_to_day", "pairing_to_sac_min_days", "pairing_to_sac_max_days", "eggs_min", "eggs_max", "lifespan_min_months", "lifespan_max_months", "sources") values\n(${values.join('),\n(')})\non conflict ("key") do nothing;`;
+}
