@@ -16,3 +16,5 @@ export * from './accounts/fraction.js';
 export * from './accounts/shares.js';
 export * from './accounts/ledger.types.js';
 export * from './accounts/balances.js';
+export * from './breeding/pairing.types.js';
+export * from './breeding/project-stage.js';
