@@ -20,7 +20,7 @@ const APP = 'https://app.broodsilk.test';
 interface Received {
   headers: IncomingHttpHeaders;
   raw: string;
-  json: { id: string; type: string; data: { object: Record<string, any> } };
+  json: { id: string; type: string; data: { object: Record<string, unknown> } };
 }
 
 class WebhookReceiver {
