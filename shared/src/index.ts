@@ -18,3 +18,4 @@ export * from './accounts/ledger.types.js';
 export * from './accounts/balances.js';
 export * from './breeding/pairing.types.js';
 export * from './breeding/project-stage.js';
+export * from './breeding/pairing-warnings.js';
