@@ -1,0 +1,66 @@
+import {
+  femaleReadiness, maleClock,
+  type AnimalOwner, type AnimalResponse, type AnimalSummary, type FemaleReadinessView, type MaleClockView,
+} from '@broodsilk/shared';
+import type { Animal } from './animal.entity';
+import { effectiveBreeding } from '../species/effective-breeding';
+import { ownBreeding } from '../species/species.mapper';
+
+export function toAnimalSummary(a: Animal): AnimalSummary {
+  const s = a.species;
+  return {
+    id: a.id,
+    label: a.label,
+    species: { id: s.id, scientificName: s.scientificName, group: s.group, urticatingHairs: s.urticatingHairs, medicallySignificantVenom: s.medicallySignificantVenom },
+    sex: a.sex,
+    maturity: a.maturity,
+    maturedOn: a.maturedOn ?? null,
+    status: a.status,
+    statusOn: a.statusOn ?? null,
+    custody: a.custody,
+    enclosure: a.enclosure ?? null,
+    lastMoltOn: a.lastMoltOn ?? null,
+    createdAt: a.createdAt.toISOString(),
+  };
+}
+
+/** The male clock of a mature male, against his species' effective lifespan; null otherwise. */
+export function maleClockOf(a: Animal, today: string): MaleClockView | null {
+  if (a.sex !== 'male' || a.maturity !== 'mature' || !a.maturedOn || a.maturedOn > today) return null;
+  const life = effectiveBreeding(a.species.group, ownBreeding(a.species)).matureMaleLifespanMonths;
+  const clock = maleClock(a.maturedOn, today, { minMonths: life.value.min, maxMonths: life.value.max });
+  return { ...clock, maturedOn: a.maturedOn, lifespanMonths: { ...life.value, from: life.from } };
+}
+
+function readinessOf(a: Animal, today: string): FemaleReadinessView | null {
+  if (a.sex !== 'female' || a.maturity !== 'mature') return null;
+  const last = a.lastMoltOn && a.lastMoltOn <= today ? a.lastMoltOn : null;
+  return { ...femaleReadiness(last, today), lastMoltOn: last, premoltNote: a.premoltNote ?? null };
+}
+
+function ownerOf(a: Animal): AnimalOwner {
+  if (a.ownerKind === 'party') return { kind: 'party', name: a.ownerName ?? '', ...(a.ownerEmail ? { email: a.ownerEmail } : {}) };
+  const user = a.ownerKind === 'self' ? a.recordedBy : a.ownerUser;
+  return { kind: a.ownerKind, ...(user ? { userId: user.id } : {}), name: user?.displayName ?? a.ownerName ?? '' };
+}
+
+/** Needs `species`, `recordedBy` and `ownerUser` loaded. */
+export function toAnimalResponse(a: Animal, today: string, viewerId: string): AnimalResponse {
+  return {
+    ...toAnimalSummary(a),
+    recordedBy: { id: a.recordedBy.id, name: a.recordedBy.displayName },
+    acquiredOn: a.acquiredOn ?? null,
+    acquiredFrom: a.acquiredFrom ?? null,
+    pricePaidMinor: a.pricePaidMinor ?? null,
+    priceCurrency: a.priceCurrency ?? null,
+    owner: ownerOf(a),
+    custodyParty: a.custodyParty ?? null,
+    dueBackOn: a.dueBackOn ?? null,
+    notes: a.notes ?? null,
+    premoltNote: a.premoltNote ?? null,
+    maleClock: maleClockOf(a, today),
+    readiness: readinessOf(a, today),
+    editable: a.recordedBy.id === viewerId,
+    updatedAt: a.updatedAt.toISOString(),
+  };
+}

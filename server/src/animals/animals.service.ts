@@ -1,0 +1,134 @@
+import { BadRequestException, ConflictException, Injectable } from '@nestjs/common';
+import { EntityManager, type QueryBuilder } from '@mikro-orm/postgresql';
+import { ForeignKeyConstraintViolationException } from '@mikro-orm/core';
+import { todayIn, type AnimalResponse, type FieldError, type MaleClockRow, type Paged, type AnimalSummary } from '@broodsilk/shared';
+import type { AuthUser } from '../auth/auth-user';
+import { User } from '../users/user.entity';
+import { escapeLike } from '../species/species.service';
+import { Animal } from './animal.entity';
+import { maleClockOf, toAnimalResponse, toAnimalSummary } from './animals.mapper';
+import { resolveAnimalInput } from './animal-input';
+import { AnimalUsageRegistry } from './animal-usage.registry';
+import type { CreateAnimalDto } from './dto/create-animal.dto';
+import type { UpdateAnimalDto } from './dto/update-animal.dto';
+import type { AnimalListQueryDto } from './dto/animal-list-query.dto';
+
+const SORT_COLUMNS = {
+  label: 'a.label',
+  species: 's.scientificName',
+  sex: 'a.sex',
+  status: 'a.status',
+  maturedOn: 'a.maturedOn',
+  createdAt: 'a.createdAt',
+} as const;
+
+const CLOCK_URGENCY = { 'past-typical': 0, late: 1, prime: 2, fresh: 3 } as const;
+
+export function badRequest(errors: FieldError[]): BadRequestException {
+  const message = errors.length === 1 ? errors[0].message : `Please correct ${errors.length} fields: ${errors.map((d) => d.field).join(', ')}.`;
+  return new BadRequestException({ message, details: errors });
+}
+
+@Injectable()
+export class AnimalsService {
+  constructor(
+    private readonly em: EntityManager,
+    private readonly usage: AnimalUsageRegistry,
+  ) {}
+
+  today(viewer: AuthUser): string {
+    return todayIn(viewer.timeZone, new Date());
+  }
+
+  async list(viewer: AuthUser, q: AnimalListQueryDto): Promise<Paged<AnimalSummary>> {
+    const qb = this.em.createQueryBuilder(Animal, 'a').joinAndSelect('a.species', 's').where({ recordedBy: viewer.id });
+    this.applyFilters(qb, q);
+    const dir = q.order === 'desc' ? 'desc' : 'asc';
+    const column = SORT_COLUMNS[q.sort ?? 'createdAt'];
+    // nulls last either way, and the id breaks ties so pages never overlap
+    qb.orderBy([{ [column]: `${dir} nulls last` } as never, { id: 'asc' }]);
+    qb.limit(q.limit ?? 50).offset(q.offset ?? 0);
+    const [rows, total] = await qb.getResultAndCount();
+    return { items: rows.map(toAnimalSummary), total };
+  }
+
+  private applyFilters(qb: QueryBuilder<Animal>, q: AnimalListQueryDto): void {
+    if (q.speciesId) qb.andWhere({ species: q.speciesId });
+    if (q.sex) qb.andWhere({ sex: q.sex });
+    if (q.status) qb.andWhere({ status: q.status });
+    if (q.mature !== undefined) qb.andWhere({ maturity: q.mature ? 'mature' : 'immature' });
+    const text = q.q?.trim().toLowerCase();
+    if (text) {
+      const like = `%${escapeLike(text)}%`;
+      qb.andWhere(
+        `(lower(a.label) like ? or lower(a.enclosure) like ? or lower(s.scientific_name) like ? or exists (select 1 from unnest(s.former_names || s.common_names) as n(name) where lower(n.name) like ?))`,
+        [like, like, like, like],
+      );
+    }
+  }
+
+  /** An animal the viewer recorded; anybody else's is a 404, so its existence is not revealed. */
+  async own(viewer: AuthUser, id: string, em: EntityManager = this.em): Promise<Animal> {
+    return em.findOneOrFail(Animal, { id, recordedBy: viewer.id }, { populate: ['species', 'recordedBy', 'ownerUser'] });
+  }
+
+  async get(viewer: AuthUser, id: string): Promise<AnimalResponse> {
+    return toAnimalResponse(await this.own(viewer, id), this.today(viewer), viewer.id);
+  }
+
+  /**
+   * For the projects module: reads an animal for a member of a project it belongs to. The caller
+   * must have checked the membership; the response is read-only (`editable` false unless the
+   * viewer recorded it).
+   */
+  async getForProjectMember(animalId: string, viewer: AuthUser): Promise<AnimalResponse> {
+    const a = await this.em.findOneOrFail(Animal, { id: animalId }, { populate: ['species', 'recordedBy', 'ownerUser'] });
+    return toAnimalResponse(a, this.today(viewer), viewer.id);
+  }
+
+  async create(viewer: AuthUser, dto: CreateAnimalDto): Promise<AnimalResponse> {
+    const { errors, values } = await resolveAnimalInput(this.em, viewer, dto, null, this.today(viewer));
+    if (errors.length) throw badRequest(errors);
+    const animal = this.em.create(Animal, { ...values, recordedBy: this.em.getReference(User, viewer.id) } as never);
+    await this.em.flush();
+    return this.get(viewer, (animal as Animal).id);
+  }
+
+  async update(viewer: AuthUser, id: string, dto: UpdateAnimalDto): Promise<AnimalResponse> {
+    const animal = await this.own(viewer, id);
+    const { errors, values } = await resolveAnimalInput(this.em, viewer, dto, animal, this.today(viewer));
+    if (errors.length) throw badRequest(errors);
+    this.em.assign(animal, values);
+    await this.em.flush();
+    return toAnimalResponse(animal, this.today(viewer), viewer.id);
+  }
+
+  /** Only for mistakes: a sold or dead animal keeps its record (set its status instead). */
+  async remove(viewer: AuthUser, id: string): Promise<void> {
+    const animal = await this.own(viewer, id);
+    const reasons = await this.usage.reasons(this.em, id);
+    if (reasons.length) throw new ConflictException({ message: `This animal cannot be deleted: ${reasons.join(' ')} Mark it sold or deceased instead.` });
+    try {
+      await this.em.remove(animal).flush();
+    } catch (e) {
+      if (e instanceof ForeignKeyConstraintViolationException) {
+        throw new ConflictException({ message: 'This animal is part of a breeding project, so it cannot be deleted. Mark it sold or deceased instead.' });
+      }
+      throw e;
+    }
+  }
+
+  /** Mature males of the viewer's collection still in their hands, the most urgent clock first. */
+  async malesByClock(viewer: AuthUser): Promise<MaleClockRow[]> {
+    const males = await this.em.find(
+      Animal,
+      { recordedBy: viewer.id, sex: 'male', maturity: 'mature', maturedOn: { $ne: null }, status: { $in: ['active', 'on-loan'] } },
+      { populate: ['species'] },
+    );
+    const today = this.today(viewer);
+    return males
+      .map((a) => ({ animal: toAnimalSummary(a), clock: maleClockOf(a, today) }))
+      .filter((r): r is MaleClockRow => r.clock !== null)
+      .sort((x, y) => CLOCK_URGENCY[x.clock.state] - CLOCK_URGENCY[y.clock.state] || x.clock.daysUntilPastTypical - y.clock.daysUntilPastTypical || x.animal.label.localeCompare(y.animal.label));
+  }
+}

@@ -1,0 +1,158 @@
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { addDays, todayIn, type AnimalResponse } from '@broodsilk/shared';
+import { createTestApp, type TestApp } from './support/test-app';
+import { registerKeeper, type SignedIn } from './support/users';
+import { createAnimal, speciesId } from './support/fixtures/collection';
+
+let t: TestApp;
+let mira: SignedIn;
+let other: SignedIn;
+let vagans: string;
+let regalis: string;
+let today: string;
+const http = () => request(t.app.getHttpServer());
+
+beforeAll(async () => {
+  t = await createTestApp();
+  mira = await registerKeeper(t.app, 'Mira');
+  other = await registerKeeper(t.app, 'Other Keeper');
+  vagans = await speciesId(t.orm, 'Tliltocatl vagans');
+  regalis = await speciesId(t.orm, 'Poecilotheria regalis');
+  // registerKeeper leaves the time zone at UTC
+  today = todayIn('UTC', new Date());
+});
+afterAll(async () => {
+  await t.close();
+});
+
+describe('animals CRUD', () => {
+  it('creates, reads, edits and deletes an animal of one’s own', async () => {
+    const created = await createAnimal(t.app, mira, { speciesId: vagans, label: 'TV-001', sex: 'female', acquiredOn: addDays(today, -100), pricePaidMinor: 4500, priceCurrency: 'eur' });
+    expect(created).toMatchObject({
+      label: 'TV-001', sex: 'female', maturity: 'immature', status: 'active', custody: 'with-owner', priceCurrency: 'EUR', pricePaidMinor: 4500,
+      owner: { kind: 'self', userId: mira.user.id, name: 'Mira' }, recordedBy: { id: mira.user.id, name: 'Mira' }, editable: true, maleClock: null,
+      species: { id: vagans, scientificName: 'Tliltocatl vagans', group: 'nw-terrestrial', urticatingHairs: true },
+    });
+    const got = await http().get(`/api/animals/${created.id}`).set('Authorization', mira.bearer).expect(200);
+    expect(got.body).toEqual(created);
+    const patched = await http().patch(`/api/animals/${created.id}`).set('Authorization', mira.bearer).send({ enclosure: 'Rack B2', maturity: 'mature', premoltNote: 'Dark abdomen, refusing food' }).expect(200);
+    expect(patched.body).toMatchObject({ enclosure: 'Rack B2', maturity: 'mature', readiness: { state: 'no-molt-recorded', lastMoltOn: null, premoltNote: 'Dark abdomen, refusing food' } });
+    await http().delete(`/api/animals/${created.id}`).set('Authorization', mira.bearer).expect(204);
+    await http().get(`/api/animals/${created.id}`).set('Authorization', mira.bearer).expect(404);
+  });
+
+  it('another keeper’s animal is 404 for GET, PATCH and DELETE, and absent from their list', async () => {
+    const a = await createAnimal(t.app, mira, { speciesId: vagans, label: 'TV-PRIVATE', sex: 'male' });
+    for (const call of [
+      http().get(`/api/animals/${a.id}`),
+      http().patch(`/api/animals/${a.id}`).send({ notes: 'mine now' }),
+      http().delete(`/api/animals/${a.id}`),
+    ]) {
+      const res = await call.set('Authorization', other.bearer).expect(404);
+      expect(res.body.message).toMatch(/not yours to see/);
+    }
+    const list = await http().get('/api/animals').set('Authorization', other.bearer).expect(200);
+    expect(list.body.items.map((x: AnimalResponse) => x.id)).not.toContain(a.id);
+    const still = await http().get(`/api/animals/${a.id}`).set('Authorization', mira.bearer).expect(200);
+    expect(still.body.notes).toBeNull();
+  });
+
+  it('needs a session', async () => {
+    await http().get('/api/animals').expect(401);
+  });
+});
+
+describe('clear 400s with field messages', () => {
+  const post = (body: object) => http().post('/api/animals').set('Authorization', mira.bearer).send(body).expect(400);
+
+  it('an unknown species', async () => {
+    const res = await post({ speciesId: '00000000-0000-4000-8000-000000000000', label: 'X-1', sex: 'female' });
+    expect(res.body.details).toEqual([{ field: 'speciesId', message: 'Choose a species from the catalogue.' }]);
+    const malformed = await post({ speciesId: 'tarantula', label: 'X-1', sex: 'female' });
+    expect(malformed.body.details).toEqual([{ field: 'speciesId', message: 'Choose a species from the catalogue.' }]);
+  });
+
+  it('a maturity date before the acquisition date', async () => {
+    const res = await post({ speciesId: vagans, label: 'X-2', sex: 'male', maturity: 'mature', maturedOn: addDays(today, -30), acquiredOn: addDays(today, -10) });
+    expect(res.body.details).toEqual([{ field: 'maturedOn', message: expect.stringMatching(/before the acquisition date/) }]);
+  });
+
+  it('a male marked mature with no date', async () => {
+    const res = await post({ speciesId: vagans, label: 'X-3', sex: 'male', maturity: 'mature' });
+    expect(res.body.details).toEqual([{ field: 'maturedOn', message: expect.stringMatching(/mature male needs the date of his maturing molt/) }]);
+  });
+
+  it('dates that are not ISO 8601 calendar dates, or in the future', async () => {
+    const res = await post({ speciesId: vagans, label: 'X-4', sex: 'female', acquiredOn: '2025-02-29' });
+    expect(res.body.details).toEqual([{ field: 'acquiredOn', message: 'The acquisition date must be a date written YYYY-MM-DD.' }]);
+    const future = await post({ speciesId: vagans, label: 'X-4', sex: 'female', acquiredOn: addDays(today, 2) });
+    expect(future.body.details[0]).toMatchObject({ field: 'acquiredOn', message: expect.stringMatching(/in the future/) });
+  });
+
+  it('a price without a currency, and a currency that ISO 4217 does not have', async () => {
+    const res = await post({ speciesId: vagans, label: 'X-5', sex: 'female', pricePaidMinor: 1000 });
+    expect(res.body.details).toEqual([{ field: 'priceCurrency', message: expect.stringMatching(/which currency/) }]);
+    const bad = await post({ speciesId: vagans, label: 'X-5', sex: 'female', pricePaidMinor: 1000, priceCurrency: 'XYZ' });
+    expect(bad.body.details).toEqual([{ field: 'priceCurrency', message: 'XYZ is not an ISO 4217 currency code.' }]);
+  });
+
+  it('a duplicate label is refused and named', async () => {
+    await createAnimal(t.app, mira, { speciesId: vagans, label: 'DUP-1', sex: 'female' });
+    const res = await post({ speciesId: vagans, label: 'DUP-1', sex: 'male' });
+    expect(res.body.details).toEqual([{ field: 'label', message: 'You already have an animal labelled "DUP-1".' }]);
+    // another keeper may use the same label
+    await createAnimal(t.app, other, { speciesId: vagans, label: 'DUP-1', sex: 'female' });
+  });
+});
+
+describe('owner and custody', () => {
+  it('a male owned by another keeper, on loan to me, with a due-back date', async () => {
+    const lender = await registerKeeper(t.app, 'Lender');
+    const a = await createAnimal(t.app, mira, {
+      speciesId: regalis, label: 'PR-LOAN', sex: 'male', maturity: 'mature', maturedOn: addDays(today, -60),
+      ownerKind: 'keeper', ownerEmail: lender.user.email, custody: 'loan-in', dueBackOn: addDays(today, 60),
+    });
+    expect(a).toMatchObject({ owner: { kind: 'keeper', userId: lender.user.id, name: 'Lender' }, custody: 'loan-in', custodyParty: 'Lender', dueBackOn: addDays(today, 60) });
+    // the owner does not see the record: it lives in the holder's collection
+    await http().get(`/api/animals/${a.id}`).set('Authorization', lender.bearer).expect(404);
+  });
+
+  it('refuses a loan-in owned by myself and an unknown keeper e-mail', async () => {
+    const selfLoan = await http().post('/api/animals').set('Authorization', mira.bearer).send({ speciesId: regalis, label: 'PR-X', sex: 'male', custody: 'loan-in' }).expect(400);
+    expect(selfLoan.body.details).toContainEqual({ field: 'custody', message: expect.stringMatching(/belongs to someone else/) });
+    const unknown = await http().post('/api/animals').set('Authorization', mira.bearer).send({ speciesId: regalis, label: 'PR-X', sex: 'male', ownerKind: 'keeper', ownerEmail: 'nobody@example.test' }).expect(400);
+    expect(unknown.body.details).toEqual([{ field: 'ownerEmail', message: expect.stringMatching(/No keeper of this instance/) }]);
+  });
+
+  it('sold and deceased need a date', async () => {
+    const a = await createAnimal(t.app, mira, { speciesId: vagans, label: 'SOLD-1', sex: 'female' });
+    const res = await http().patch(`/api/animals/${a.id}`).set('Authorization', mira.bearer).send({ status: 'sold' }).expect(400);
+    expect(res.body.details).toEqual([{ field: 'statusOn', message: 'Give the date the animal was sold.' }]);
+    const ok = await http().patch(`/api/animals/${a.id}`).set('Authorization', mira.bearer).send({ status: 'sold', statusOn: today }).expect(200);
+    expect(ok.body).toMatchObject({ status: 'sold', statusOn: today });
+  });
+});
+
+describe('male clock in responses', () => {
+  // State boundaries as shared/collection/male-clock.ts defines them; Poecilotheria uses the
+  // ow-arboreal group lifespan of 4–12 months (from memory, TRADE-FACTS §5).
+  it.each([
+    [5, 'fresh'],
+    [60, 'prime'],
+    [200, 'late'],
+    [420, 'past-typical'],
+  ])('a male matured %i days ago is %s', async (days, state) => {
+    const a = await createAnimal(t.app, mira, { speciesId: regalis, label: `PR-CLOCK-${days}`, sex: 'male', maturity: 'mature', maturedOn: addDays(today, -days) });
+    expect(a.maleClock).toMatchObject({ daysSinceMaturing: days, state, maturedOn: addDays(today, -days), lifespanMonths: { min: 4, max: 12, from: 'group' } });
+  });
+
+  it('GET /api/animals/males/clock lists mature males, the most urgent first', async () => {
+    const res = await http().get('/api/animals/males/clock').set('Authorization', mira.bearer).expect(200);
+    const states = res.body.map((r: { clock: { state: string } }) => r.clock.state);
+    const rank = { 'past-typical': 0, late: 1, prime: 2, fresh: 3 } as Record<string, number>;
+    expect(states.length).toBeGreaterThanOrEqual(4);
+    expect([...states].sort((x: string, y: string) => rank[x] - rank[y])).toEqual(states);
+    expect(states[0]).toBe('past-typical');
+  });
+});
