@@ -37,6 +37,15 @@ export function makeId(prefix, length = 24) {
 
 const nowSeconds = () => Math.floor(Date.now() / 1000);
 
+/** decodeURIComponent that yields '' instead of throwing on a malformed escape. @param {string} text */
+function decodePart(text) {
+  try {
+    return decodeURIComponent(text);
+  } catch {
+    return '';
+  }
+}
+
 /**
  * The provider's webhook signature header: `t=<unix seconds>,v1=<hex HMAC-SHA256>`
  * where the HMAC key is the endpoint's signing secret and the signed text is
@@ -591,31 +600,31 @@ export async function startPaymentFake(options) {
     let m;
     if (method === 'POST' && path === '/v1/accounts') return [200, createAccount(params, version)];
     if (method === 'GET' && (m = /^\/v1\/accounts\/([^/]+)$/.exec(path))) {
-      const account = state.accounts.get(decodeURIComponent(m[1]));
-      if (!account) throw missing('account', decodeURIComponent(m[1]));
+      const account = state.accounts.get(decodePart(m[1]));
+      if (!account) throw missing('account', decodePart(m[1]));
       return [200, account];
     }
     if (method === 'POST' && path === '/v1/account_links') return [200, createAccountLink(params)];
     if (method === 'POST' && path === '/v1/checkout/sessions') return [200, createCheckoutSession(params, version)];
     if (method === 'GET' && (m = /^\/v1\/checkout\/sessions\/([^/]+)$/.exec(path))) {
-      const id = decodeURIComponent(m[1]);
+      const id = decodePart(m[1]);
       const session = state.checkoutSessions.get(id);
       if (!session) throw missing('checkout.session', id);
       return [200, session];
     }
     if (method === 'POST' && (m = /^\/v1\/checkout\/sessions\/([^/]+)\/expire$/.exec(path))) {
-      const { session, delivery } = expireCheckoutSession(decodeURIComponent(m[1]));
+      const { session, delivery } = expireCheckoutSession(decodePart(m[1]));
       await within(delivery, responseBudgetMs);
       return [200, session];
     }
     if (method === 'GET' && (m = /^\/v1\/payment_intents\/([^/]+)$/.exec(path))) {
-      const id = decodeURIComponent(m[1]);
+      const id = decodePart(m[1]);
       const intent = state.paymentIntents.get(id);
       if (!intent) throw missing('payment_intent', id);
       return [200, intent];
     }
     if (method === 'GET' && (m = /^\/v1\/events\/([^/]+)$/.exec(path))) {
-      const id = decodeURIComponent(m[1]);
+      const id = decodePart(m[1]);
       const event = state.events.find((e) => e.id === id);
       if (!event) throw missing('event', id);
       return [200, event];
@@ -821,19 +830,32 @@ export async function startPaymentFake(options) {
     }
 
     if ((m = /^\/onboarding\/([^/]+)$/.exec(path)) && (method === 'GET' || method === 'POST')) {
-      const form = method === 'POST' ? parseFormBody(await readBody(req)) : {};
-      return onboarding(method, decodeURIComponent(m[1]), url.searchParams, form, res);
+      let form = {};
+      try {
+        if (method === 'POST') form = parseFormBody(await readBody(req));
+      } catch (err) {
+        if (err instanceof FormError || err instanceof ApiError) return sendHtml(res, 400, messagePage('Bad request', err.message));
+        throw err;
+      }
+      return onboarding(method, decodePart(m[1]), url.searchParams, form, res);
     }
     if ((m = /^\/pay\/([^/]+?)(?:\/(cancel))?$/.exec(path))) {
-      if (method === 'POST') await readBody(req);
-      return pay(method, decodeURIComponent(m[1]), m[2], res);
+      if (method === 'POST') {
+        try {
+          await readBody(req);
+        } catch (err) {
+          if (err instanceof ApiError) return sendHtml(res, err.status, messagePage('Bad request', err.message));
+          throw err;
+        }
+      }
+      return pay(method, decodePart(m[1]), m[2], res);
     }
     if (method === 'GET' && path === '/_fake/events') {
       return sendJson(res, 200, { events: state.events, deliveries: state.deliveries });
     }
     if (method === 'POST' && (m = /^\/_fake\/redeliver\/([^/]+)$/.exec(path))) {
-      const event = state.events.find((e) => e.id === decodeURIComponent(m[1]));
-      if (!event) return sendJson(res, 404, new ApiError(404, `No such event: '${m[1]}'`, { code: 'resource_missing' }).toJSON());
+      const event = state.events.find((e) => e.id === decodePart(m[1]));
+      if (!event) return sendJson(res, 404, new ApiError(404, `No such event: '${decodePart(m[1])}'`, { code: 'resource_missing' }).toJSON());
       /** @type {DeliveryRecord | null} */
       let record = null;
       const job = deliver(event, true);

@@ -2,13 +2,18 @@
  * The local payment provider fake (scripts/payment-fake) driven by the real
  * Stripe SDK, built through the server's own client factory. No database.
  */
+import { spawn } from 'node:child_process';
 import { createHmac, timingSafeEqual } from 'node:crypto';
 import { createServer, type IncomingHttpHeaders, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
+import { createInterface } from 'node:readline';
+import { fileURLToPath } from 'node:url';
+import { ConfigModule } from '@nestjs/config';
+import { Test } from '@nestjs/testing';
 import Stripe from 'stripe';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { readPaymentsConfig } from '../src/config/payments.config';
-import { createStripeClient, stripeClientOptions } from '../src/payments/stripe.client';
+import { paymentsConfig, readPaymentsConfig } from '../src/config/payments.config';
+import { STRIPE_CLIENT, createStripeClient, stripeClientOptions, stripeClientProvider } from '../src/payments/stripe.client';
 import type { PaymentFake } from '../../scripts/payment-fake/server.mjs';
 
 const SECRET_KEY = 'sk_test_broodsilk_fake_0123456789';
@@ -276,6 +281,10 @@ describe('payment fake: connected accounts and onboarding', () => {
     const err = await stripe.accounts.retrieve('acct_0000000000000000').then(() => null, (e: unknown) => e);
     expect(err).toBeInstanceOf(Stripe.errors.StripeInvalidRequestError);
     expect(err).toMatchObject({ statusCode: 404, code: 'resource_missing', param: 'id' });
+
+    const malformed = await fetch(`${fake.url}/v1/accounts/%E0%A4%A`, { headers: { authorization: `Bearer ${SECRET_KEY}` } });
+    expect(malformed.status).toBe(404);
+    expect((await malformed.json()).error).toMatchObject({ type: 'invalid_request_error', code: 'resource_missing' });
   });
 });
 
@@ -552,5 +561,68 @@ describe('server payments config and Stripe client factory', () => {
     expect(() => readPaymentsConfig({ STRIPE_API_PORT: '70000' })).toThrow(/STRIPE_API_PORT/);
     expect(() => readPaymentsConfig({ STRIPE_API_PROTOCOL: 'ftp' })).toThrow(/STRIPE_API_PROTOCOL/);
     expect(() => createStripeClient(readPaymentsConfig({}))).toThrow(/STRIPE_SECRET_KEY is not set/);
+  });
+});
+
+describe('the Nest provider and the start script', () => {
+  it('STRIPE_CLIENT resolves through Nest DI from the STRIPE_* environment and reaches the fake', async () => {
+    const keys = ['STRIPE_SECRET_KEY', 'STRIPE_API_HOST', 'STRIPE_API_PORT', 'STRIPE_API_PROTOCOL'] as const;
+    const saved = keys.map((k) => process.env[k]);
+    Object.assign(process.env, { STRIPE_SECRET_KEY: SECRET_KEY, STRIPE_API_HOST: '127.0.0.1', STRIPE_API_PORT: String(fake.port), STRIPE_API_PROTOCOL: 'http' });
+    try {
+      const moduleRef = await Test.createTestingModule({
+        imports: [ConfigModule.forFeature(paymentsConfig)],
+        providers: [stripeClientProvider],
+      }).compile();
+      const client = moduleRef.get<Stripe>(STRIPE_CLIENT);
+      expect(client).toBeInstanceOf(Stripe);
+      const account = await client.accounts.create({ type: 'express', country: 'FR' });
+      expect(fake.state.accounts.get(account.id)).toMatchObject({ country: 'FR', default_currency: 'eur' });
+      await moduleRef.close();
+    } finally {
+      keys.forEach((k, i) => {
+        if (saved[i] === undefined) delete process.env[k];
+        else process.env[k] = saved[i];
+      });
+    }
+  });
+
+  it('node scripts/payment-fake/start.mjs announces its URL, serves the SDK and stops on SIGTERM', async () => {
+    const script = fileURLToPath(new URL('../../scripts/payment-fake/start.mjs', import.meta.url));
+    const child = spawn(process.execPath, [script], {
+      env: { ...process.env, PAYMENT_FAKE_PORT: '0', STRIPE_SECRET_KEY: SECRET_KEY, STRIPE_WEBHOOK_SECRET: WEBHOOK_SECRET, PAYMENT_WEBHOOK_URL: '' },
+      stdio: ['ignore', 'pipe', 'pipe'],
+    });
+    const exited = new Promise<number | null>((resolve) => child.once('exit', (code) => resolve(code)));
+    try {
+      const firstLine = await new Promise<string>((resolve, reject) => {
+        createInterface({ input: child.stdout! }).once('line', resolve);
+        child.once('exit', (code) => reject(new Error(`start.mjs exited with ${code} before announcing itself`)));
+      });
+      const match = /^payment fake listening on (http:\/\/127\.0\.0\.1:(\d+))$/.exec(firstLine);
+      expect(match, firstLine).not.toBeNull();
+      const client = createStripeClient(readPaymentsConfig({
+        STRIPE_SECRET_KEY: SECRET_KEY, STRIPE_API_HOST: '127.0.0.1', STRIPE_API_PORT: match![2], STRIPE_API_PROTOCOL: 'http',
+      }));
+      const account = await client.accounts.create({ type: 'express' });
+      expect(account.id).toMatch(/^acct_/);
+      expect(await client.accounts.retrieve(account.id)).toMatchObject({ id: account.id, charges_enabled: false });
+    } finally {
+      child.kill('SIGTERM');
+    }
+    expect(await exited).toBe(0);
+  });
+
+  it('start.mjs refuses to start without the keys', async () => {
+    const script = fileURLToPath(new URL('../../scripts/payment-fake/start.mjs', import.meta.url));
+    const env = { ...process.env, PAYMENT_FAKE_PORT: '0' };
+    delete env.STRIPE_SECRET_KEY;
+    delete env.STRIPE_WEBHOOK_SECRET;
+    const child = spawn(process.execPath, [script], { env, stdio: ['ignore', 'pipe', 'pipe'] });
+    let stderr = '';
+    child.stderr!.on('data', (c: Buffer) => (stderr += c.toString()));
+    const code = await new Promise<number | null>((resolve) => child.once('exit', (c) => resolve(c)));
+    expect(code).toBe(2);
+    expect(stderr).toContain('STRIPE_SECRET_KEY and STRIPE_WEBHOOK_SECRET');
   });
 });
