@@ -200,7 +200,7 @@ describe('share explanation and changes', () => {
       'The sac counts 47 young.',
       'Fixed counts come first, in pick order: Ben (male) 12. 35 young remain.',
       'The remaining 35 young are split by weight: Ana (female) 35 × 2/3 = 70/3 ≈ 23.33; Ben (male) 35 × 1/3 = 35/3 ≈ 11.67.',
-      'Each party first gets the whole part of its quota; the 1 young still left go one each to the largest remainders: Ben (male).',
+      'Each party first gets the whole part of its quota; the 1 young still left goes to the largest remainder: Ben (male).',
       'In all: Ana (female) 23, Ben (male) 24.',
     ]);
   });
@@ -209,8 +209,10 @@ describe('share explanation and changes', () => {
     const short = explainShares(computeShares(8, [party('f', 1, 2, 5), party('m', 1, 1, 5)]), names);
     expect(short[1]).toBe('Fixed counts come first, in pick order: Ben (male) 5, Ana (female) 3 of the 5 agreed. 0 young remain.');
     expect(short).toContain('Nothing is left to split by weight.');
-    const tie = explainShares(computeShares(3, [party('f', 1, 2), party('m', 1, 1)]));
-    expect(tie.some((l) => l.endsWith('Equal remainders went to the earlier pick.'))).toBe(true);
+    const tie = explainShares(computeShares(3, [party('f', 1, 2), party('m', 1, 1)]), names);
+    expect(tie[2]).toBe('Each party first gets the whole part of its quota; the 1 young still left goes to the largest remainder: Ben (male). Equal remainders went to the earlier pick.');
+    const two = explainShares(computeShares(5, [party('a', 1, 1), party('b', 1, 2), party('c', 1, 3)]));
+    expect(two[2]).toBe('Each party first gets the whole part of its quota; the 2 young still left go one each to the largest remainders: a, b. Equal remainders went to the earlier pick.');
   });
 
   it('lists what changed between two results', () => {
