@@ -615,7 +615,7 @@ describe('the Nest provider and the start script', () => {
 
   it('start.mjs refuses to start without the keys', async () => {
     const script = fileURLToPath(new URL('../../scripts/payment-fake/start.mjs', import.meta.url));
-    const env = { ...process.env, PAYMENT_FAKE_PORT: '0' };
+    const env: NodeJS.ProcessEnv = { ...process.env, PAYMENT_FAKE_PORT: '0' };
     delete env.STRIPE_SECRET_KEY;
     delete env.STRIPE_WEBHOOK_SECRET;
     const child = spawn(process.execPath, [script], { env, stdio: ['ignore', 'pipe', 'pipe'] });
