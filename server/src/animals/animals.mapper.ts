@@ -1,6 +1,6 @@
 import {
   femaleReadiness, maleClock,
-  type AnimalOwner, type AnimalResponse, type AnimalSummary, type FemaleReadinessView, type MaleClockView,
+  type AnimalOwner, type AnimalResponse, type PhotoRef, type AnimalSummary, type FemaleReadinessView, type MaleClockView,
 } from '@broodsilk/shared';
 import type { Animal } from './animal.entity';
 import { effectiveBreeding } from '../species/effective-breeding';
@@ -45,7 +45,7 @@ function ownerOf(a: Animal): AnimalOwner {
 }
 
 /** Needs `species`, `recordedBy` and `ownerUser` loaded. */
-export function toAnimalResponse(a: Animal, today: string, viewerId: string): AnimalResponse {
+export function toAnimalResponse(a: Animal, today: string, viewerId: string, photos: PhotoRef[] = []): AnimalResponse {
   return {
     ...toAnimalSummary(a),
     recordedBy: { id: a.recordedBy.id, name: a.recordedBy.displayName },
@@ -60,6 +60,7 @@ export function toAnimalResponse(a: Animal, today: string, viewerId: string): An
     premoltNote: a.premoltNote ?? null,
     maleClock: maleClockOf(a, today),
     readiness: readinessOf(a, today),
+    photos,
     editable: a.recordedBy.id === viewerId,
     updatedAt: a.updatedAt.toISOString(),
   };

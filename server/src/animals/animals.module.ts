@@ -1,15 +1,22 @@
 import { Module } from '@nestjs/common';
+import { ConfigModule } from '@nestjs/config';
 import { MikroOrmModule } from '@mikro-orm/nestjs';
+import { storageConfig } from '../config/storage.config';
+import { PhotosModule } from '../photos/photos.module';
 import { Animal } from './animal.entity';
 import { Molt } from './molt.entity';
 import { AnimalsService } from './animals.service';
 import { AnimalsController } from './animals.controller';
 import { AnimalUsageRegistry } from './animal-usage.registry';
+import { MoltsService } from './molts.service';
+import { MoltsController } from './molts.controller';
+import { AnimalPhotosService } from './animal-photos.service';
+import { AnimalPhotosController } from './animal-photos.controller';
 
 @Module({
-  imports: [MikroOrmModule.forFeature([Animal, Molt])],
-  controllers: [AnimalsController],
-  providers: [AnimalsService, AnimalUsageRegistry],
+  imports: [ConfigModule.forFeature(storageConfig), MikroOrmModule.forFeature([Animal, Molt]), PhotosModule],
+  controllers: [AnimalsController, MoltsController, AnimalPhotosController],
+  providers: [AnimalsService, AnimalUsageRegistry, MoltsService, AnimalPhotosService],
   exports: [AnimalsService, AnimalUsageRegistry],
 })
 export class AnimalsModule {}

@@ -9,6 +9,10 @@ import { Animal } from './animal.entity';
 import { maleClockOf, toAnimalResponse, toAnimalSummary } from './animals.mapper';
 import { resolveAnimalInput } from './animal-input';
 import { AnimalUsageRegistry } from './animal-usage.registry';
+import { PhotosService } from '../photos/photos.service';
+
+/** Photo subject type of an animal's own photos. */
+export const ANIMAL_PHOTO = 'animal';
 import type { CreateAnimalDto } from './dto/create-animal.dto';
 import type { UpdateAnimalDto } from './dto/update-animal.dto';
 import type { AnimalListQueryDto } from './dto/animal-list-query.dto';
@@ -34,7 +38,13 @@ export class AnimalsService {
   constructor(
     private readonly em: EntityManager,
     private readonly usage: AnimalUsageRegistry,
+    private readonly photos: PhotosService,
   ) {}
+
+  private async respond(a: Animal, viewer: AuthUser): Promise<AnimalResponse> {
+    const photos = await this.photos.refsFor(ANIMAL_PHOTO, [a.id]);
+    return toAnimalResponse(a, this.today(viewer), viewer.id, photos.get(a.id) ?? []);
+  }
 
   today(viewer: AuthUser): string {
     return todayIn(viewer.timeZone, new Date());
@@ -73,7 +83,7 @@ export class AnimalsService {
   }
 
   async get(viewer: AuthUser, id: string): Promise<AnimalResponse> {
-    return toAnimalResponse(await this.own(viewer, id), this.today(viewer), viewer.id);
+    return this.respond(await this.own(viewer, id), viewer);
   }
 
   /**
@@ -83,7 +93,7 @@ export class AnimalsService {
    */
   async getForProjectMember(animalId: string, viewer: AuthUser): Promise<AnimalResponse> {
     const a = await this.em.findOneOrFail(Animal, { id: animalId }, { populate: ['species', 'recordedBy', 'ownerUser'] });
-    return toAnimalResponse(a, this.today(viewer), viewer.id);
+    return this.respond(a, viewer);
   }
 
   async create(viewer: AuthUser, dto: CreateAnimalDto): Promise<AnimalResponse> {
@@ -100,7 +110,7 @@ export class AnimalsService {
     if (errors.length) throw badRequest(errors);
     this.em.assign(animal, values);
     await this.em.flush();
-    return toAnimalResponse(animal, this.today(viewer), viewer.id);
+    return this.respond(animal, viewer);
   }
 
   /** Only for mistakes: a sold or dead animal keeps its record (set its status instead). */

@@ -7,3 +7,10 @@ process.env.AUTH_RATE_LIMIT ??= '1000';
 if (!process.env.DATABASE_URL.includes('test')) {
   throw new Error(`Refusing to run tests against ${process.env.DATABASE_URL}: the database name must contain "test".`);
 }
+// Photo storage: an S3-compatible fake (s3rver) on 127.0.0.1:4570 unless the test script says otherwise.
+process.env.S3_ENDPOINT ??= 'http://127.0.0.1:4570';
+process.env.S3_REGION ??= 'us-east-1';
+process.env.S3_BUCKET ??= 'broodsilk-photos-test';
+process.env.S3_ACCESS_KEY_ID ??= 'S3RVER';
+process.env.S3_SECRET_ACCESS_KEY ??= 'S3RVER';
+process.env.S3_FORCE_PATH_STYLE ??= 'true';

@@ -133,6 +133,8 @@ export interface AnimalResponse extends AnimalSummary {
   maleClock: MaleClockView | null;
   /** Only for mature females. */
   readiness: FemaleReadinessView | null;
+  /** Photos of the animal itself (molt photos come with the molts), oldest first. */
+  photos: PhotoRef[];
   /** True when the viewer recorded it and may edit it. */
   editable: boolean;
   updatedAt: string;

@@ -1,0 +1,28 @@
+import { Controller, Param, ParseUUIDPipe, Post, UploadedFile, UseInterceptors } from '@nestjs/common';
+import type { PhotoRef } from '@broodsilk/shared';
+import { CurrentUser } from '../common/decorators/current-user.decorator';
+import type { AuthUser } from '../auth/auth-user';
+import { ImageUploadInterceptor } from '../photos/image-upload.interceptor';
+import { AnimalPhotosService } from './animal-photos.service';
+
+@Controller('animals/:animalId')
+export class AnimalPhotosController {
+  constructor(private readonly photos: AnimalPhotosService) {}
+
+  @Post('photos')
+  @UseInterceptors(ImageUploadInterceptor)
+  forAnimal(@CurrentUser() user: AuthUser, @Param('animalId', ParseUUIDPipe) animalId: string, @UploadedFile() file?: { buffer?: Buffer }): Promise<PhotoRef> {
+    return this.photos.addToAnimal(user, animalId, file);
+  }
+
+  @Post('molts/:moltId/photos')
+  @UseInterceptors(ImageUploadInterceptor)
+  forMolt(
+    @CurrentUser() user: AuthUser,
+    @Param('animalId', ParseUUIDPipe) animalId: string,
+    @Param('moltId', ParseUUIDPipe) moltId: string,
+    @UploadedFile() file?: { buffer?: Buffer },
+  ): Promise<PhotoRef> {
+    return this.photos.addToMolt(user, animalId, moltId, file);
+  }
+}

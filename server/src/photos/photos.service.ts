@@ -1,0 +1,58 @@
+import { BadRequestException, Injectable, NotFoundException, StreamableFile } from '@nestjs/common';
+import { EntityManager } from '@mikro-orm/postgresql';
+import type { PhotoRef } from '@broodsilk/shared';
+import type { AuthUser } from '../auth/auth-user';
+import { User } from '../users/user.entity';
+import { Photo } from './photo.entity';
+import { PhotoStorageService } from './photo-storage.service';
+import { PhotoAccessRegistry } from './photo-access.registry';
+import { processImage } from './image-processing';
+import { toPhotoRef } from './photos.mapper';
+
+const NOT_FOUND = 'That photo does not exist or is not yours to see.';
+
+@Injectable()
+export class PhotosService {
+  constructor(
+    private readonly em: EntityManager,
+    private readonly storage: PhotoStorageService,
+    private readonly access: PhotoAccessRegistry,
+  ) {}
+
+  /** Re-encodes and stores an upload for a subject the caller has already checked the viewer may change. */
+  async store(viewer: AuthUser, subjectType: string, subjectId: string, file: { buffer?: Buffer } | undefined): Promise<PhotoRef> {
+    if (!file?.buffer?.length) throw new BadRequestException({ message: 'Attach the photo as the form field "file".', details: [{ field: 'file', message: 'Attach a photo.' }] });
+    const image = await processImage(file.buffer);
+    const photo = this.em.create(Photo, {
+      uploadedBy: this.em.getReference(User, viewer.id), subjectType, subjectId, storageKey: '', thumbKey: '',
+      contentType: image.contentType, width: image.width, height: image.height, bytes: image.full.length,
+    });
+    photo.storageKey = `photos/${photo.id}.jpg`;
+    photo.thumbKey = `photos/${photo.id}-thumb.jpg`;
+    await this.storage.put(photo.storageKey, image.full, image.contentType);
+    await this.storage.put(photo.thumbKey, image.thumb, image.contentType);
+    try {
+      await this.em.flush();
+    } catch (e) {
+      await Promise.allSettled([this.storage.delete(photo.storageKey), this.storage.delete(photo.thumbKey)]);
+      throw e;
+    }
+    return toPhotoRef(photo);
+  }
+
+  /** Photos of many subjects at once, oldest first, keyed by subject id. */
+  async refsFor(subjectType: string, subjectIds: string[]): Promise<Map<string, PhotoRef[]>> {
+    const out = new Map<string, PhotoRef[]>();
+    if (!subjectIds.length) return out;
+    const photos = await this.em.find(Photo, { subjectType, subjectId: { $in: subjectIds } }, { orderBy: { createdAt: 'asc' } });
+    for (const p of photos) out.set(p.subjectId, [...(out.get(p.subjectId) ?? []), toPhotoRef(p)]);
+    return out;
+  }
+
+  async read(viewer: AuthUser, id: string, variant: 'full' | 'thumb'): Promise<StreamableFile> {
+    const photo = await this.em.findOne(Photo, { id });
+    if (!photo || !(await this.access.allows(this.em, viewer, photo.subjectType, photo.subjectId))) throw new NotFoundException({ message: NOT_FOUND });
+    const body = await this.storage.get(variant === 'full' ? photo.storageKey : photo.thumbKey);
+    return new StreamableFile(body, { type: photo.contentType, length: body.length });
+  }
+}
