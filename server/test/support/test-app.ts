@@ -32,7 +32,7 @@ export async function createTestApp(options: { fresh?: boolean } = { fresh: true
   const app = moduleRef.createNestApplication({ rawBody: true });
   configureApp(app);
   await app.init();
-  const orm = app.get(MikroORM);
+  const orm = app.get(MikroORM) as unknown as MikroORM;
   if (options.fresh !== false) {
     await resetDatabase(orm);
   }

@@ -1,0 +1,8 @@
+import type { NavItem } from '@/components/layouts/app-layout';
+import { paths } from '@/config/paths';
+
+/** The navbar, in the order a keeper's day runs. */
+export const NAV_ITEMS: NavItem[] = [
+  { label: 'Today', to: paths.home.href(), end: true },
+  { label: 'Settings', to: paths.settings.href() },
+];

@@ -1,0 +1,29 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { createBrowserRouter } from 'react-router-dom';
+import { paths } from '@/config/paths';
+import { RouteError } from './routes/route-error';
+import { PageLoader } from '@/components/ui/page-loader';
+
+/** Route modules are loaded lazily; loaders get the query client to prefetch with. */
+export function createRouter(queryClient: QueryClient) {
+  return createBrowserRouter([
+    {
+      path: paths.home.path,
+      ErrorBoundary: RouteError,
+      HydrateFallback: PageLoader,
+      lazy: async () => {
+        const m = await import('./routes/protected-layout');
+        return { Component: m.Component, loader: m.clientLoader(queryClient) };
+      },
+      children: [
+        { index: true, lazy: () => import('./routes/home') },
+        { path: paths.settings.path, lazy: () => import('./routes/settings') },
+      ],
+    },
+    { path: paths.signIn.path, lazy: () => import('./routes/sign-in'), ErrorBoundary: RouteError },
+    { path: paths.register.path, lazy: () => import('./routes/register'), ErrorBoundary: RouteError },
+    { path: paths.forgotPassword.path, lazy: () => import('./routes/forgot-password'), ErrorBoundary: RouteError },
+    { path: paths.resetPassword.path, lazy: () => import('./routes/reset-password'), ErrorBoundary: RouteError },
+    { path: '*', lazy: () => import('./routes/not-found') },
+  ]);
+}

@@ -1,0 +1,34 @@
+import { Outlet, redirect, useNavigate, type LoaderFunctionArgs } from 'react-router-dom';
+import type { QueryClient } from '@tanstack/react-query';
+import { AppLayout } from '@/components/layouts/app-layout';
+import { paths } from '@/config/paths';
+import { meQuery, useMe } from '@/features/auth/api/me';
+import { useLogout } from '@/features/auth/api/session';
+import { NAV_ITEMS } from '../nav-items';
+
+/** Every signed-in page goes through here: no session, no page. */
+export const clientLoader = (qc: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
+  const me = await qc.ensureQueryData(meQuery());
+  if (!me) {
+    const url = new URL(request.url);
+    throw redirect(paths.signIn.href(url.pathname + url.search));
+  }
+  return null;
+};
+
+export function Component() {
+  const { data: me } = useMe();
+  const logout = useLogout();
+  const navigate = useNavigate();
+  if (!me) return null;
+  return (
+    <AppLayout
+      nav={NAV_ITEMS}
+      userName={me.displayName}
+      settingsHref={paths.settings.href()}
+      onSignOut={() => logout.mutate(undefined, { onSettled: () => navigate(paths.signIn.href()) })}
+    >
+      <Outlet />
+    </AppLayout>
+  );
+}

@@ -1,0 +1,21 @@
+import { Button, Container, Stack, Text, Title } from '@mantine/core';
+import { Link } from 'react-router-dom';
+
+export function ErrorPage({ title, message, status }: { title: string; message: string; status?: number }) {
+  return (
+    <Container size={560} py={64}>
+      <Stack align="flex-start">
+        {status && (
+          <Text className="tone-failed" fw={700}>
+            {status}
+          </Text>
+        )}
+        <Title order={1}>{title}</Title>
+        <Text>{message}</Text>
+        <Button component={Link} to="/" variant="light">
+          Back to today
+        </Button>
+      </Stack>
+    </Container>
+  );
+}

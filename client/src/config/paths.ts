@@ -1,0 +1,9 @@
+/** Every route path of the client, in one place. */
+export const paths = {
+  home: { path: '/', href: () => '/' },
+  signIn: { path: '/sign-in', href: (next?: string) => (next && next !== '/' ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in') },
+  register: { path: '/register', href: () => '/register' },
+  forgotPassword: { path: '/forgot-password', href: () => '/forgot-password' },
+  resetPassword: { path: '/reset-password', href: () => '/reset-password' },
+  settings: { path: '/settings', href: () => '/settings' },
+} as const;

@@ -1,0 +1,33 @@
+import { Alert, Button, Stack, TextInput } from '@mantine/core';
+import { useForm } from '@mantine/form';
+import { useState } from 'react';
+import { applyServerErrors } from '@/lib/form-errors';
+import { useRequestPasswordReset } from '../api/password-reset';
+
+export function ForgotPasswordForm() {
+  const request = useRequestPasswordReset();
+  const [answer, setAnswer] = useState<{ ok: boolean; text: string } | null>(null);
+  const form = useForm({ mode: 'uncontrolled', initialValues: { email: '' } });
+  return (
+    <form
+      onSubmit={form.onSubmit((values) =>
+        request.mutate(values, {
+          onSuccess: (res) => setAnswer({ ok: true, text: res.message }),
+          onError: (e) => setAnswer({ ok: false, text: applyServerErrors(form, e) }),
+        }),
+      )}
+    >
+      <Stack>
+        {answer && (
+          <Alert color={answer.ok ? 'moss' : 'clay'} variant="light" role="status">
+            {answer.text}
+          </Alert>
+        )}
+        <TextInput label="E-mail" type="email" withAsterisk key={form.key('email')} {...form.getInputProps('email')} />
+        <Button type="submit" loading={request.isPending}>
+          Send me a reset link
+        </Button>
+      </Stack>
+    </form>
+  );
+}

@@ -1,0 +1,31 @@
+import { Alert, Button, PasswordInput, Stack } from '@mantine/core';
+import { useForm } from '@mantine/form';
+import { useState } from 'react';
+import { MIN_PASSWORD_LENGTH } from '@broodsilk/shared';
+import { applyServerErrors } from '@/lib/form-errors';
+import { useConfirmPasswordReset } from '../api/password-reset';
+
+export function ResetPasswordForm({ token, onDone }: { token: string; onDone: () => void }) {
+  const confirm = useConfirmPasswordReset();
+  const [problem, setProblem] = useState<string | null>(null);
+  const form = useForm({
+    mode: 'uncontrolled',
+    initialValues: { password: '' },
+    validate: { password: (v) => (v.length >= MIN_PASSWORD_LENGTH ? null : `Use a password of at least ${MIN_PASSWORD_LENGTH} characters.`) },
+  });
+  return (
+    <form onSubmit={form.onSubmit((v) => confirm.mutate({ token, password: v.password }, { onSuccess: onDone, onError: (e) => setProblem(applyServerErrors(form, e)) }))}>
+      <Stack>
+        {problem && (
+          <Alert color="clay" variant="light" role="alert">
+            {problem}
+          </Alert>
+        )}
+        <PasswordInput label="New password" autoComplete="new-password" withAsterisk key={form.key('password')} {...form.getInputProps('password')} />
+        <Button type="submit" loading={confirm.isPending}>
+          Set new password
+        </Button>
+      </Stack>
+    </form>
+  );
+}

@@ -1,0 +1,51 @@
+import { Alert, Anchor, Button, PasswordInput, Stack, Text, TextInput } from '@mantine/core';
+import { useForm } from '@mantine/form';
+import { useState } from 'react';
+import { Link } from 'react-router-dom';
+import { applyServerErrors } from '@/lib/form-errors';
+import { paths } from '@/config/paths';
+import { useLogin } from '../api/session';
+
+export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
+  const login = useLogin();
+  const [problem, setProblem] = useState<string | null>(null);
+  const form = useForm({
+    mode: 'uncontrolled',
+    initialValues: { email: '', password: '' },
+    validate: {
+      email: (v) => (/^\S+@\S+\.\S+$/.test(v.trim()) ? null : 'Enter your e-mail address.'),
+      password: (v) => (v ? null : 'Enter your password.'),
+    },
+  });
+
+  return (
+    <form
+      onSubmit={form.onSubmit((values) => {
+        setProblem(null);
+        login.mutate(values, { onSuccess: onSignedIn, onError: (e) => setProblem(applyServerErrors(form, e)) });
+      })}
+    >
+      <Stack>
+        {problem && (
+          <Alert color="clay" variant="light" role="alert">
+            {problem}
+          </Alert>
+        )}
+        <TextInput label="E-mail" type="email" autoComplete="email" withAsterisk key={form.key('email')} {...form.getInputProps('email')} />
+        <PasswordInput label="Password" autoComplete="current-password" withAsterisk key={form.key('password')} {...form.getInputProps('password')} />
+        <Button type="submit" loading={login.isPending}>
+          Sign in
+        </Button>
+        <Text size="sm">
+          <Anchor component={Link} to={paths.forgotPassword.href()}>
+            Forgot your password?
+          </Anchor>{' '}
+          · New here?{' '}
+          <Anchor component={Link} to={paths.register.href()}>
+            Create an account
+          </Anchor>
+        </Text>
+      </Stack>
+    </form>
+  );
+}

@@ -1,0 +1,54 @@
+import { Button, Select, SegmentedControl, Stack, Text, TextInput } from '@mantine/core';
+import { useForm } from '@mantine/form';
+import { notifications } from '@mantine/notifications';
+import type { Me, TemperatureUnit } from '@broodsilk/shared';
+import { applyServerErrors } from '@/lib/form-errors';
+import { useUpdateProfile } from '../api/profile';
+
+const zones = typeof Intl.supportedValuesOf === 'function' ? Intl.supportedValuesOf('timeZone') : ['UTC'];
+
+export function ProfileForm({ me }: { me: Me }) {
+  const update = useUpdateProfile();
+  const form = useForm({
+    mode: 'uncontrolled',
+    initialValues: { displayName: me.displayName, timeZone: me.timeZone, temperatureUnit: me.temperatureUnit as TemperatureUnit },
+  });
+  return (
+    <form
+      onSubmit={form.onSubmit((values) =>
+        update.mutate(values, {
+          onSuccess: () => notifications.show({ color: 'moss', message: 'Settings saved.' }),
+          onError: (e) => notifications.show({ color: 'clay', message: applyServerErrors(form, e) }),
+        }),
+      )}
+    >
+      <Stack maw={480}>
+        <TextInput label="Display name" withAsterisk key={form.key('displayName')} {...form.getInputProps('displayName')} />
+        <Select
+          label="Time zone"
+          description="Dates, day numbers and what is due today follow this zone."
+          searchable
+          data={zones.includes(me.timeZone) ? zones : [me.timeZone, ...zones]}
+          key={form.key('timeZone')}
+          {...form.getInputProps('timeZone')}
+        />
+        <div>
+          <Text size="sm" fw={500} mb={4}>
+            Temperature unit
+          </Text>
+          <SegmentedControl
+            data={[
+              { label: '°C', value: 'C' },
+              { label: '°F', value: 'F' },
+            ]}
+            key={form.key('temperatureUnit')}
+            {...form.getInputProps('temperatureUnit')}
+          />
+        </div>
+        <Button type="submit" loading={update.isPending} w="fit-content">
+          Save settings
+        </Button>
+      </Stack>
+    </form>
+  );
+}

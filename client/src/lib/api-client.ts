@@ -1,0 +1,82 @@
+import { CSRF_HEADER, type ApiErrorBody, type CsrfResponse } from '@broodsilk/shared';
+import { ApiError } from './api-error';
+
+type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
+
+export interface RequestOptions {
+  body?: unknown;
+  query?: Record<string, string | number | boolean | undefined | null>;
+  signal?: AbortSignal;
+  /** Do not send the user to sign-in on a 401 (the session probe itself). */
+  allowAnonymous?: boolean;
+}
+
+let csrfToken: string | null = null;
+let onUnauthorized: () => void = () => undefined;
+
+/** Set by the app layer: where a 401 sends the user. */
+export function setUnauthorizedHandler(handler: () => void): void {
+  onUnauthorized = handler;
+}
+
+/** Login and password change hand out a token for the new session. */
+export function setCsrfToken(token: string | null): void {
+  csrfToken = token;
+}
+
+async function ensureCsrfToken(): Promise<string> {
+  if (csrfToken) return csrfToken;
+  const res = await fetch('/api/auth/csrf', { credentials: 'same-origin' });
+  csrfToken = ((await res.json()) as CsrfResponse).csrfToken;
+  return csrfToken;
+}
+
+function buildUrl(path: string, query?: RequestOptions['query']): string {
+  const url = new URL(`/api${path}`, window.location.origin);
+  for (const [k, v] of Object.entries(query ?? {})) if (v !== undefined && v !== null && v !== '') url.searchParams.set(k, String(v));
+  return url.pathname + url.search;
+}
+
+async function toError(res: Response): Promise<ApiError> {
+  try {
+    const body = (await res.json()) as ApiErrorBody;
+    if (typeof body?.message === 'string') return new ApiError(body);
+  } catch {
+    /* not JSON */
+  }
+  return new ApiError({ statusCode: res.status, error: res.statusText, message: 'The server could not be reached. Check your connection and try again.' });
+}
+
+async function send<T>(method: Method, path: string, options: RequestOptions = {}, retried = false): Promise<T> {
+  const headers: Record<string, string> = { Accept: 'application/json' };
+  let body: BodyInit | undefined;
+  if (options.body instanceof FormData) body = options.body;
+  else if (options.body !== undefined) {
+    headers['Content-Type'] = 'application/json';
+    body = JSON.stringify(options.body);
+  }
+  if (method !== 'GET') headers[CSRF_HEADER] = await ensureCsrfToken();
+  const res = await fetch(buildUrl(path, options.query), { method, headers, body, credentials: 'same-origin', signal: options.signal });
+  if (res.ok) {
+    if (res.status === 204) return undefined as T;
+    const type = res.headers.get('content-type') ?? '';
+    return (type.includes('application/json') ? await res.json() : await res.text()) as T;
+  }
+  const error = await toError(res);
+  // A stale CSRF token (after a reload or a new session): fetch a fresh one once.
+  if (res.status === 403 && method !== 'GET' && !retried && /out of date/.test(error.message)) {
+    csrfToken = null;
+    return send<T>(method, path, options, true);
+  }
+  if (res.status === 401 && !options.allowAnonymous) onUnauthorized();
+  throw error;
+}
+
+/** The one API client: unwraps JSON, turns failures into ApiError, sends a 401 to sign-in. */
+export const api = {
+  get: <T>(path: string, options?: RequestOptions) => send<T>('GET', path, options),
+  post: <T>(path: string, body?: unknown, options?: RequestOptions) => send<T>('POST', path, { ...options, body }),
+  patch: <T>(path: string, body?: unknown, options?: RequestOptions) => send<T>('PATCH', path, { ...options, body }),
+  put: <T>(path: string, body?: unknown, options?: RequestOptions) => send<T>('PUT', path, { ...options, body }),
+  delete: <T>(path: string, options?: RequestOptions) => send<T>('DELETE', path, options),
+};

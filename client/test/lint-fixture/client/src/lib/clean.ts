@@ -1,0 +1,1 @@
+export const clean = 1;

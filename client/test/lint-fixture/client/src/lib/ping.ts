@@ -1,0 +1,4 @@
+// Deliberately wrong: ping and pong import each other.
+import { pong } from './pong';
+
+export const ping = (): string => `ping ${pong.length}`;

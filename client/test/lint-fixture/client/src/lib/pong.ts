@@ -1,0 +1,3 @@
+import { ping } from './ping';
+
+export const pong = [ping];

@@ -1,0 +1,31 @@
+// @vitest-environment node
+import { ESLint, type Linter } from 'eslint';
+import { fileURLToPath } from 'node:url';
+import path from 'node:path';
+import { describe, expect, it } from 'vitest';
+
+const fixture = fileURLToPath(new URL('./lint-fixture', import.meta.url));
+
+// The repository's own configuration, built for the fixture's root, so the real rules are tested.
+const configUrl = new URL('../../eslint.config.mjs', import.meta.url).href;
+
+async function lint(file: string) {
+  const { createConfig } = (await import(/* @vite-ignore */ configUrl)) as { createConfig: (o: { root: string }) => Linter.Config[] };
+  const eslint = new ESLint({ cwd: fixture, overrideConfigFile: true, overrideConfig: createConfig({ root: fixture }) });
+  const [result] = await eslint.lintFiles([path.join(fixture, file)]);
+  return result.messages.map((m) => m.ruleId);
+}
+
+describe('architecture lint rules are on', () => {
+  it('an import across client features is an error', async () => {
+    expect(await lint('client/src/features/alpha/alpha-card.ts')).toContain('import-x/no-restricted-paths');
+  });
+
+  it('an import cycle is an error', async () => {
+    expect(await lint('client/src/lib/ping.ts')).toContain('import-x/no-cycle');
+  });
+
+  it('a clean file passes', async () => {
+    expect(await lint('client/src/lib/clean.ts')).toEqual([]);
+  });
+});

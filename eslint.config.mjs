@@ -1,0 +1,72 @@
+// Lint for every workspace. Beyond typescript-eslint's recommended rules it enforces
+// the architecture: no import cycles anywhere, and in the client one-way imports
+// (shared code → features → app) with no feature importing another feature.
+import { readdirSync, existsSync } from 'node:fs';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import js from '@eslint/js';
+import tseslint from 'typescript-eslint';
+import { importX } from 'eslint-plugin-import-x';
+import { createTypeScriptImportResolver } from 'eslint-import-resolver-typescript';
+import globals from 'globals';
+
+/** Zones that keep client features apart and imports one-way (after bulletproof-react). */
+function clientBoundaryZones(root) {
+  const features = path.join(root, 'client/src/features');
+  const names = existsSync(features) ? readdirSync(features, { withFileTypes: true }).filter((d) => d.isDirectory()).map((d) => d.name) : [];
+  return [
+    ...names.map((name) => ({
+      target: path.join(features, name),
+      from: features,
+      except: [`./${name}`],
+      message: 'A feature must not import another feature; compose them in client/src/app instead.',
+    })),
+    { target: features, from: path.join(root, 'client/src/app'), message: 'Features must not import the app layer.' },
+    {
+      target: [path.join(root, 'client/src/components'), path.join(root, 'client/src/lib'), path.join(root, 'client/src/config')],
+      from: [features, path.join(root, 'client/src/app')],
+      message: 'Shared client code must not import features or the app layer.',
+    },
+  ];
+}
+
+export function createConfig({ root }) {
+  return tseslint.config(
+    { ignores: ['**/dist/**', '**/node_modules/**', '**/coverage/**', '.data/**', 'client/test/lint-fixture/**', '**/*.d.ts', '**/*.d.mts'] },
+    js.configs.recommended,
+    ...tseslint.configs.recommended,
+    {
+      files: ['**/*.{ts,tsx,mts,cts,js,mjs}'],
+      plugins: { 'import-x': importX },
+      languageOptions: { globals: { ...globals.node } },
+      settings: {
+        // no-cycle reads the imported files itself, so it must know how to parse TypeScript.
+        'import-x/extensions': ['.ts', '.tsx', '.mts', '.js', '.mjs'],
+        'import-x/parsers': { '@typescript-eslint/parser': ['.ts', '.tsx', '.mts', '.cts'] },
+        'import-x/resolver-next': [
+          createTypeScriptImportResolver({
+            alwaysTryTypes: true,
+            noWarnOnMultipleProjects: true,
+            project: ['shared/tsconfig.json', 'server/tsconfig.json', 'client/tsconfig.json'].map((p) => path.join(root, p)).filter((p) => existsSync(p)),
+          }),
+        ],
+      },
+      rules: {
+        'import-x/no-cycle': ['error', { ignoreExternal: true }],
+        'import-x/no-restricted-paths': ['error', { zones: clientBoundaryZones(root) }],
+        '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_', destructuredArrayIgnorePattern: '^_' }],
+        '@typescript-eslint/consistent-type-imports': 'off',
+      },
+    },
+    {
+      files: ['**/*.cjs'],
+      languageOptions: { sourceType: 'commonjs', globals: { ...globals.node } },
+    },
+    {
+      files: ['client/**/*.{ts,tsx}'],
+      languageOptions: { globals: { ...globals.browser } },
+    },
+  );
+}
+
+export default createConfig({ root: path.dirname(fileURLToPath(import.meta.url)) });
