@@ -1,0 +1,85 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { AnimalListQuery, AnimalResponse, AnimalSummary, CreateAnimalRequest, MaleClockRow, Paged, UpdateAnimalRequest } from '@broodsilk/shared';
+import { api } from '@/lib/api-client';
+
+export function fetchAnimals(query: AnimalListQuery, signal?: AbortSignal): Promise<Paged<AnimalSummary>> {
+  return api.get<Paged<AnimalSummary>>('/animals', { query: { ...query }, signal });
+}
+
+export function fetchAnimal(id: string, signal?: AbortSignal): Promise<AnimalResponse> {
+  return api.get<AnimalResponse>(`/animals/${id}`, { signal });
+}
+
+export function fetchMalesByClock(signal?: AbortSignal): Promise<MaleClockRow[]> {
+  return api.get<MaleClockRow[]>('/animals/males/clock', { signal });
+}
+
+/** ['animals'] → ['animals','list',query] · ['animals','detail',id] · ['animals','males'] */
+export const animalQueries = {
+  all: () => ['animals'] as const,
+  lists: () => [...animalQueries.all(), 'list'] as const,
+  list: (query: AnimalListQuery) =>
+    queryOptions({
+      queryKey: [...animalQueries.lists(), query] as const,
+      queryFn: ({ signal }) => fetchAnimals(query, signal),
+    }),
+  details: () => [...animalQueries.all(), 'detail'] as const,
+  detail: (id: string) =>
+    queryOptions({
+      queryKey: [...animalQueries.details(), id] as const,
+      queryFn: ({ signal }) => fetchAnimal(id, signal),
+    }),
+  males: () =>
+    queryOptions({
+      queryKey: [...animalQueries.all(), 'males'] as const,
+      queryFn: ({ signal }) => fetchMalesByClock(signal),
+    }),
+};
+
+export function useAnimals(query: AnimalListQuery) {
+  return useQuery({ ...animalQueries.list(query), placeholderData: (prev) => prev });
+}
+
+export function useAnimal(id: string) {
+  return useQuery(animalQueries.detail(id));
+}
+
+export function useMalesByClock() {
+  return useQuery(animalQueries.males());
+}
+
+export function useCreateAnimal() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (body: CreateAnimalRequest) => api.post<AnimalResponse>('/animals', body),
+    meta: { handlesErrors: true },
+    onSuccess: async (animal) => {
+      qc.setQueryData(animalQueries.detail(animal.id).queryKey, animal);
+      await Promise.all([qc.invalidateQueries({ queryKey: animalQueries.lists() }), qc.invalidateQueries({ queryKey: animalQueries.males().queryKey })]);
+    },
+  });
+}
+
+export function useUpdateAnimal(id: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (body: UpdateAnimalRequest) => api.patch<AnimalResponse>(`/animals/${id}`, body),
+    meta: { handlesErrors: true },
+    onSuccess: async (animal) => {
+      qc.setQueryData(animalQueries.detail(id).queryKey, animal);
+      await Promise.all([qc.invalidateQueries({ queryKey: animalQueries.lists() }), qc.invalidateQueries({ queryKey: animalQueries.males().queryKey })]);
+    },
+  });
+}
+
+export function useDeleteAnimal(id: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: () => api.delete<void>(`/animals/${id}`),
+    meta: { handlesErrors: true },
+    onSuccess: async () => {
+      qc.removeQueries({ queryKey: animalQueries.detail(id).queryKey });
+      await Promise.all([qc.invalidateQueries({ queryKey: animalQueries.lists() }), qc.invalidateQueries({ queryKey: animalQueries.males().queryKey })]);
+    },
+  });
+}

@@ -1,0 +1,136 @@
+import { Badge, Card, Group, Pagination, Select, SimpleGrid, Stack, Text, TextInput } from '@mantine/core';
+import { useDebouncedValue } from '@mantine/hooks';
+import { useState } from 'react';
+import { SPECIES_GROUPS, type SpeciesGroup, type SpeciesResponse, type Sourced } from '@broodsilk/shared';
+import { useSpeciesList } from '../api/species';
+import { GROUP_LABELS, ORIGIN_LABELS, formatRange, matchedFormerName, sourceLabel } from '../utils/species-view';
+
+const PAGE = 24;
+
+function Value({ label, text, value }: { label: string; text: string; value: Sourced<unknown> & { from: keyof typeof ORIGIN_LABELS } }) {
+  return (
+    <Group justify="space-between" gap="xs" wrap="nowrap" align="flex-start">
+      <Text size="sm" c="dimmed">
+        {label}
+      </Text>
+      <Stack gap={0} align="flex-end">
+        <Text size="sm" fw={600}>
+          {text}
+        </Text>
+        <Text size="xs" c="dimmed" ta="right">
+          {sourceLabel(value.source)}
+          {value.from !== 'species' ? ` · ${ORIGIN_LABELS[value.from]}` : ''}
+        </Text>
+      </Stack>
+    </Group>
+  );
+}
+
+function SpeciesCard({ species, query }: { species: SpeciesResponse; query: string }) {
+  const e = species.effective;
+  const former = matchedFormerName(species, query);
+  return (
+    <Card withBorder padding="sm" data-testid="species-card">
+      <Stack gap={6}>
+        <div>
+          <Text fw={700} fs="italic">
+            {species.scientificName}{' '}
+            <Text span size="xs" c="dimmed" fs="normal">
+              {species.authority}
+            </Text>
+          </Text>
+          {former && (
+            <Text size="xs" c="dimmed">
+              formerly <i>{former}</i>
+            </Text>
+          )}
+          {species.commonNames.length > 0 && (
+            <Text size="xs" c="dimmed">
+              {species.commonNames.join(', ')}
+            </Text>
+          )}
+        </div>
+        <Group gap={6}>
+          <Badge variant="light" color="moss" size="sm">
+            {GROUP_LABELS[species.group]}
+          </Badge>
+          {species.cautions.urticatingHairs.value && (
+            <Badge variant="light" color="amber" size="sm">
+              urticating hairs
+            </Badge>
+          )}
+          {species.cautions.medicallySignificantVenom.value && (
+            <Badge variant="light" color="clay" size="sm">
+              strong venom
+            </Badge>
+          )}
+          {species.tradeListing.value && (
+            <Badge variant="outline" color="gray" size="sm">
+              {species.tradeListing.value}
+            </Badge>
+          )}
+        </Group>
+        <Value label="Pull window" text={`day ${e.pullWindow.value.fromDay}–${e.pullWindow.value.toDay}`} value={e.pullWindow} />
+        <Value label="Pairing → sac" text={`${formatRange(e.pairingToSacDays.value.min, e.pairingToSacDays.value.max)} days`} value={e.pairingToSacDays} />
+        <Value label="Eggs per sac" text={formatRange(e.eggsPerSac.value.min, e.eggsPerSac.value.max)} value={e.eggsPerSac} />
+        <Value
+          label="Male lifespan after maturing"
+          text={`${formatRange(e.matureMaleLifespanMonths.value.min, e.matureMaleLifespanMonths.value.max)} months`}
+          value={e.matureMaleLifespanMonths}
+        />
+      </Stack>
+    </Card>
+  );
+}
+
+/** The catalogue: search by current, former or common name, filter by group, page through. */
+export function SpeciesCatalogue() {
+  const [text, setText] = useState('');
+  const [group, setGroup] = useState<SpeciesGroup | null>(null);
+  const [page, setPage] = useState(1);
+  const [q] = useDebouncedValue(text.trim(), 250);
+  const { data, isPending, isError, error } = useSpeciesList({ q: q || undefined, group: group ?? undefined, limit: PAGE, offset: (page - 1) * PAGE });
+  const pages = Math.max(1, Math.ceil((data?.total ?? 0) / PAGE));
+  return (
+    <Stack>
+      <Group align="flex-end" wrap="wrap">
+        <TextInput
+          label="Search names"
+          placeholder="Current, former or common name"
+          value={text}
+          onChange={(e) => {
+            setText(e.currentTarget.value);
+            setPage(1);
+          }}
+          w={{ base: '100%', sm: 320 }}
+        />
+        <Select
+          label="Group"
+          placeholder="All groups"
+          clearable
+          data={SPECIES_GROUPS.map((g) => ({ value: g, label: GROUP_LABELS[g] }))}
+          value={group}
+          onChange={(g) => {
+            setGroup(g as SpeciesGroup | null);
+            setPage(1);
+          }}
+          w={{ base: '100%', sm: 260 }}
+        />
+      </Group>
+      {isError && <Text className="tone-failed">{error.message}</Text>}
+      {isPending ? (
+        <Text c="dimmed">Loading the catalogue…</Text>
+      ) : (
+        <>
+          <Text size="sm" c="dimmed">
+            {data?.total ?? 0} species
+          </Text>
+          <SimpleGrid cols={{ base: 1, sm: 2, lg: 3 }}>
+            {data?.items.map((s) => <SpeciesCard key={s.id} species={s} query={q} />)}
+          </SimpleGrid>
+          {pages > 1 && <Pagination total={pages} value={page} onChange={setPage} size="lg" />}
+        </>
+      )}
+    </Stack>
+  );
+}
