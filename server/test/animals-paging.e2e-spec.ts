@@ -114,4 +114,3 @@ describe('paging, sorting and filtering against PostgreSQL', () => {
     expect(res.body.details.map((d: { field: string }) => d.field).sort()).toEqual(['limit', 'sort']);
   });
 });
-});

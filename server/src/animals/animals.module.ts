@@ -12,11 +12,13 @@ import { MoltsService } from './molts.service';
 import { MoltsController } from './molts.controller';
 import { AnimalPhotosService } from './animal-photos.service';
 import { AnimalPhotosController } from './animal-photos.controller';
+import { AnimalsCsvService } from './animals-csv.service';
+import { AnimalsCsvController } from './animals-csv.controller';
 
 @Module({
   imports: [ConfigModule.forFeature(storageConfig), MikroOrmModule.forFeature([Animal, Molt]), PhotosModule],
-  controllers: [AnimalsController, MoltsController, AnimalPhotosController],
-  providers: [AnimalsService, AnimalUsageRegistry, MoltsService, AnimalPhotosService],
+  controllers: [AnimalsCsvController, AnimalsController, MoltsController, AnimalPhotosController],
+  providers: [AnimalsService, AnimalsCsvService, AnimalUsageRegistry, MoltsService, AnimalPhotosService],
   exports: [AnimalsService, AnimalUsageRegistry],
 })
 export class AnimalsModule {}

@@ -1,0 +1,29 @@
+import { Controller, Get, Header, HttpCode, Post, Req, UploadedFile, UseInterceptors } from '@nestjs/common';
+import { FileInterceptor } from '@nestjs/platform-express';
+import type { Request } from 'express';
+import type { ImportResult } from '@broodsilk/shared';
+import { CurrentUser } from '../common/decorators/current-user.decorator';
+import type { AuthUser } from '../auth/auth-user';
+import { AnimalsCsvService } from './animals-csv.service';
+import { CSV_MAX_BYTES } from './animals-csv.columns';
+import { csvText } from './csv-text';
+
+/** Registered before AnimalsController so `export.csv` is not taken for an animal id. */
+@Controller('animals')
+export class AnimalsCsvController {
+  constructor(private readonly csv: AnimalsCsvService) {}
+
+  @Get('export.csv')
+  @Header('Content-Type', 'text/csv; charset=utf-8; header=present')
+  @Header('Content-Disposition', 'attachment; filename="broodsilk-animals.csv"')
+  export(@CurrentUser() user: AuthUser): Promise<string> {
+    return this.csv.export(user);
+  }
+
+  @Post('import')
+  @HttpCode(201)
+  @UseInterceptors(FileInterceptor('file', { limits: { fileSize: CSV_MAX_BYTES, files: 1 } }))
+  async import(@CurrentUser() user: AuthUser, @Req() req: Request, @UploadedFile() file?: { buffer?: Buffer }): Promise<ImportResult> {
+    return this.csv.import(user, await csvText(req, file));
+  }
+}

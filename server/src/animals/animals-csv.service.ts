@@ -1,0 +1,144 @@
+import { BadRequestException, Injectable, PayloadTooLargeException } from '@nestjs/common';
+import { EntityManager } from '@mikro-orm/postgresql';
+import { plainToInstance } from 'class-transformer';
+import { validate, type ValidationError } from 'class-validator';
+import { parse } from 'csv-parse/sync';
+import { stringify } from 'csv-stringify/sync';
+import type { FieldError, ImportResult } from '@broodsilk/shared';
+import type { AuthUser } from '../auth/auth-user';
+import { User } from '../users/user.entity';
+import { Species } from '../species/species.entity';
+import { Animal } from './animal.entity';
+import { AnimalsService } from './animals.service';
+import { CreateAnimalDto } from './dto/create-animal.dto';
+import { resolveAnimalInput, type AnimalValues } from './animal-input';
+import { CSV_COLUMNS, CSV_FIELDS, CSV_MAX_BYTES, CSV_MAX_ROWS } from './animals-csv.columns';
+
+interface ParsedRow {
+  line: number;
+  record: Record<string, string>;
+}
+
+function messages(errors: ValidationError[]): string[] {
+  return errors.flatMap((e) =>
+    Object.values(e.constraints ?? {}).map((m) => (m.endsWith('should not exist') ? `"${e.property}" is not a column this import knows.` : `${e.property}: ${m}`)),
+  );
+}
+
+function tooMany(errors: FieldError[]): BadRequestException {
+  const lines = [...new Set(errors.map((e) => e.field))];
+  return new BadRequestException({
+    message: `Nothing was imported: ${lines.length === 1 ? `${lines[0]} has a problem` : `${lines.length} lines have problems`}. Correct them and import the file again.`,
+    details: errors,
+  });
+}
+
+@Injectable()
+export class AnimalsCsvService {
+  constructor(
+    private readonly em: EntityManager,
+    private readonly animals: AnimalsService,
+  ) {}
+
+  /** RFC 4180: header row, CRLF line ends, quotes where needed; UTF-8 with a BOM so spreadsheets read accents. */
+  async export(viewer: AuthUser): Promise<string> {
+    const animals = await this.em.find(Animal, { recordedBy: viewer.id }, { populate: ['species'], orderBy: { label: 'asc' } });
+    const rows = animals.map((a) => ({
+      ...Object.fromEntries(CSV_FIELDS.map((f) => [f, f === 'speciesId' ? a.species.id : (a[f as keyof Animal] ?? '')])),
+      species: a.species.scientificName,
+      lastMoltOn: a.lastMoltOn ?? '',
+    }));
+    return stringify(rows, { header: true, columns: [...CSV_COLUMNS], record_delimiter: 'windows', bom: true, cast: { number: String } });
+  }
+
+  /** Checks every row like the create route does, then imports all of them in one transaction, or none. */
+  async import(viewer: AuthUser, text: string): Promise<ImportResult> {
+    if (Buffer.byteLength(text) > CSV_MAX_BYTES) throw new PayloadTooLargeException({ message: 'The file is larger than 5 MB; import it in parts.' });
+    const rows = this.parse(text);
+    const today = this.animals.today(viewer);
+    const errors: FieldError[] = [];
+    const ready: AnimalValues[] = [];
+    const labels = new Map<string, number>();
+    const speciesByName = await this.speciesNames();
+
+    for (const { line, record } of rows) {
+      const at = `line ${line}`;
+      const plain: Record<string, string> = {};
+      let speciesReported = false;
+      for (const [k, v] of Object.entries(record)) if (v !== '' && k !== 'lastMoltOn') plain[k] = v;
+      if (plain.species !== undefined) {
+        const id = speciesByName.get(plain.species.trim().toLowerCase());
+        speciesReported = !id || (plain.speciesId !== undefined && plain.speciesId !== id);
+        if (!id) errors.push({ field: at, message: `species: "${plain.species}" is not a name in the catalogue.` });
+        else if (speciesReported) errors.push({ field: at, message: `species: "${plain.species}" and speciesId name different species.` });
+        else plain.speciesId = id;
+        delete plain.species;
+      }
+      const dto = plainToInstance(CreateAnimalDto, plain);
+      const invalid = (await validate(dto, { whitelist: true, forbidNonWhitelisted: true })).filter((e) => !(speciesReported && e.property === 'speciesId'));
+      if (invalid.length || speciesReported) {
+        errors.push(...messages(invalid).map((m) => ({ field: at, message: m })));
+        continue;
+      }
+      const { errors: ruleErrors, values } = await resolveAnimalInput(this.em, viewer, dto, null, today);
+      const first = labels.get(dto.label);
+      if (first !== undefined) ruleErrors.push({ field: 'label', message: `The label "${dto.label}" is also on line ${first}.` });
+      labels.set(dto.label, line);
+      if (ruleErrors.length) errors.push(...ruleErrors.map((e) => ({ field: at, message: `${e.field}: ${e.message}` })));
+      else ready.push(values);
+    }
+    if (errors.length) throw tooMany(errors);
+    if (!ready.length) throw new BadRequestException({ message: 'The file has a header but no animals.' });
+
+    await this.em.transactional(async (tx) => {
+      const recorder = tx.getReference(User, viewer.id);
+      for (const values of ready) tx.create(Animal, { ...values, recordedBy: recorder } as never);
+    });
+    return { imported: ready.length };
+  }
+
+  private parse(text: string): ParsedRow[] {
+    let parsed: { record: Record<string, string>; info: { bytes: number } }[];
+    try {
+      parsed = parse(text, { bom: true, columns: (header: string[]) => header.map((h) => h.trim()), skip_empty_lines: true, info: true, relax_column_count: false });
+    } catch (e) {
+      const err = e as { message?: string; lines?: number };
+      throw new BadRequestException({ message: `The file is not valid CSV${err.lines ? ` near line ${err.lines}` : ''}: ${err.message ?? 'unreadable'}.` });
+    }
+    if (parsed.length > CSV_MAX_ROWS) throw new PayloadTooLargeException({ message: `A file can hold at most ${CSV_MAX_ROWS} animals; import it in parts.` });
+    return numberLines(Buffer.from(text, 'utf8'), parsed);
+  }
+
+  private async speciesNames(): Promise<Map<string, string>> {
+    const all = await this.em.find(Species, {});
+    const map = new Map<string, string>();
+    for (const s of all) for (const n of [...s.formerNames, ...s.commonNames]) map.set(n.toLowerCase(), s.id);
+    // current names win over a former name that happens to match
+    for (const s of all) map.set(s.scientificName.toLowerCase(), s.id);
+    return map;
+  }
+}
+
+const CR = 0x0d;
+const LF = 0x0a;
+
+/**
+ * The line each record starts on, as an editor shows it (header = line 1), so a quoted field that
+ * spans lines or a blank line between records does not shift the count. csv-parse's `info.bytes`
+ * is where each record (with its line end) stops.
+ */
+function numberLines(bytes: Buffer, parsed: { record: Record<string, string>; info: { bytes: number } }[]): ParsedRow[] {
+  let pos = bytes.indexOf(LF) + 1;
+  let line = 2;
+  const out: ParsedRow[] = [];
+  for (const { record, info } of parsed) {
+    // skip blank lines before the record
+    while (pos < bytes.length && (bytes[pos] === CR || bytes[pos] === LF)) {
+      if (bytes[pos] === LF || bytes[pos + 1] !== LF) line += 1;
+      pos += 1;
+    }
+    out.push({ line, record });
+    for (; pos < info.bytes; pos++) if (bytes[pos] === LF || (bytes[pos] === CR && bytes[pos + 1] !== LF)) line += 1;
+  }
+  return out;
+}
