@@ -19,6 +19,9 @@ import { HealthModule } from './health/health.module';
 import { SpeciesModule } from './species/species.module';
 import { AnimalsModule } from './animals/animals.module';
 import { PhotosModule } from './photos/photos.module';
+import { ProjectsModule } from './projects/projects.module';
+import { ActivityModule } from './activity/activity.module';
+import { ProjectRoleGuard } from './common/guards/project-role.guard';
 
 function staticClient(): DynamicModule[] {
   const dist = process.env.CLIENT_DIST;
@@ -53,11 +56,15 @@ function staticClient(): DynamicModule[] {
     SpeciesModule,
     AnimalsModule,
     PhotosModule,
+    ProjectsModule,
+    ActivityModule,
   ],
   providers: [
     { provide: APP_FILTER, useClass: AllExceptionsFilter },
     { provide: APP_GUARD, useClass: JwtAuthGuard },
     { provide: APP_GUARD, useClass: RolesGuard },
+    // After authentication: checks @ProjectRoles(...) (see projects/README.md).
+    { provide: APP_GUARD, useClass: ProjectRoleGuard },
   ],
 })
 export class AppModule {}

@@ -19,3 +19,8 @@ export * from './accounts/balances.js';
 export * from './breeding/pairing.types.js';
 export * from './breeding/project-stage.js';
 export * from './breeding/pairing-warnings.js';
+export * from './projects/project.types.js';
+export * from './projects/terms.types.js';
+export * from './projects/pairings.types.js';
+export * from './projects/invitations.types.js';
+export * from './projects/activity.types.js';

@@ -1,0 +1,43 @@
+import { CanActivate, ExecutionContext, Injectable, NotFoundException, UnauthorizedException } from '@nestjs/common';
+import { Reflector } from '@nestjs/core';
+import { EntityManager } from '@mikro-orm/postgresql';
+import type { ProjectRole } from '@broodsilk/shared';
+import type { Request } from 'express';
+import type { AuthUser } from '../../auth/auth-user';
+import { PROJECT_FROM_KEY, PROJECT_ROLES_KEY, type ProjectFromSpec } from '../decorators/project-roles.decorator';
+import { NOT_FOUND_MESSAGE, ProjectAccessService } from '../../projects/project-access.service';
+import { ProjectResolverRegistry } from '../../projects/project-resolver.registry';
+
+/**
+ * Global guard after authentication: on routes with `@ProjectRoles(...)` it finds the project,
+ * checks the caller's role in it and leaves the result on the request for `@CurrentProject()`.
+ */
+@Injectable()
+export class ProjectRoleGuard implements CanActivate {
+  constructor(
+    private readonly reflector: Reflector,
+    private readonly access: ProjectAccessService,
+    private readonly resolvers: ProjectResolverRegistry,
+    private readonly em: EntityManager,
+  ) {}
+
+  async canActivate(context: ExecutionContext): Promise<boolean> {
+    const targets = [context.getHandler(), context.getClass()];
+    const roles = this.reflector.getAllAndOverride<ProjectRole[] | undefined>(PROJECT_ROLES_KEY, targets);
+    if (!roles?.length) return true;
+    const req = context.switchToHttp().getRequest<Request & { user?: AuthUser; projectAccess?: unknown }>();
+    if (!req.user) throw new UnauthorizedException('Please sign in to continue.');
+    const from = this.reflector.getAllAndOverride<ProjectFromSpec | undefined>(PROJECT_FROM_KEY, targets);
+    const params = req.params as Record<string, string | undefined>;
+    let projectId: string | null | undefined;
+    if (from) {
+      const id = params[from.param];
+      projectId = id ? await this.resolvers.resolve(from.kind, this.em, id) : null;
+    } else {
+      projectId = params.projectId ?? params.id;
+    }
+    if (!projectId) throw new NotFoundException(NOT_FOUND_MESSAGE);
+    req.projectAccess = await this.access.assertRole(projectId, req.user.id, roles);
+    return true;
+  }
+}
