@@ -211,8 +211,7 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
           <Textarea
             label="Premolt note"
             description="Signs she may molt soon (off food, dark abdomen): a molt after pairing loses the pairing."
-            autosize
-            minRows={2}
+            rows={2}
             key={form.key('premoltNote')}
             {...form.getInputProps('premoltNote')}
           />
@@ -284,7 +283,7 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
             {...form.getInputProps('statusOn')}
           />
         </SimpleGrid>
-        <Textarea label="Notes" autosize minRows={2} key={form.key('notes')} {...form.getInputProps('notes')} />
+        <Textarea label="Notes" rows={3} key={form.key('notes')} {...form.getInputProps('notes')} />
         <Group justify="flex-end">
           {onCancel && (
             <Button variant="default" onClick={onCancel} size="md">

@@ -25,7 +25,6 @@ export function CautionNotice({ species }: { species: CautionSpecies }) {
   return (
     <Alert
       role="note"
-      aria-label="Handling and legal cautions"
       variant="light"
       color={venom ? 'clay' : 'amber'}
       title={
