@@ -21,6 +21,7 @@ import { AnimalsModule } from './animals/animals.module';
 import { PhotosModule } from './photos/photos.module';
 import { ProjectsModule } from './projects/projects.module';
 import { ActivityModule } from './activity/activity.module';
+import { InvitationsModule } from './invitations/invitations.module';
 import { ProjectRoleGuard } from './common/guards/project-role.guard';
 
 function staticClient(): DynamicModule[] {
@@ -58,6 +59,7 @@ function staticClient(): DynamicModule[] {
     PhotosModule,
     ProjectsModule,
     ActivityModule,
+    InvitationsModule,
   ],
   providers: [
     { provide: APP_FILTER, useClass: AllExceptionsFilter },

@@ -1,4 +1,4 @@
-import { Entity, Enum, ManyToOne, Property, Unique } from '@mikro-orm/core';
+import { Entity, Enum, Index, ManyToOne, Property, Unique } from '@mikro-orm/core';
 import { PROJECT_ROLES, type ProjectRole } from '@broodsilk/shared';
 import { BaseEntity } from '../database/base.entity';
 import { User } from '../users/user.entity';
@@ -11,6 +11,7 @@ import { Project } from './project.entity';
  */
 @Entity({ tableName: 'project_members' })
 @Unique({ properties: ['project', 'user'] })
+@Index({ name: 'project_members_user_id_index', properties: ['user'] })
 export class ProjectMember extends BaseEntity {
   @ManyToOne(() => Project, { deleteRule: 'cascade' })
   project!: Project;

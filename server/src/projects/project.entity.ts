@@ -1,4 +1,4 @@
-import { Entity, Enum, Index, ManyToOne, Property } from '@mikro-orm/core';
+import { Check, Entity, Enum, Index, ManyToOne, Property } from '@mikro-orm/core';
 import type { EndedEarlyReason } from '@broodsilk/shared';
 import { BaseEntity } from '../database/base.entity';
 import { User } from '../users/user.entity';
@@ -10,6 +10,7 @@ import { Animal } from '../animals/animal.entity';
  */
 @Entity({ tableName: 'projects' })
 @Index({ properties: ['owner', 'createdAt'] })
+@Check({ name: 'projects_two_animals_check', expression: 'female_id <> male_id' })
 export class Project extends BaseEntity {
   /** The keeper who runs it; also a member with role `owner`. */
   @ManyToOne(() => User, { deleteRule: 'cascade' })

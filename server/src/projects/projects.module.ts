@@ -5,12 +5,16 @@ import { AnimalUsageRegistry } from '../animals/animal-usage.registry';
 import { ActivityModule } from '../activity/activity.module';
 import { Project } from './project.entity';
 import { ProjectMember } from './project-member.entity';
+import { Pairing } from './pairing.entity';
+import { TermsVersion } from './terms-version.entity';
+import { TermsLine } from './terms-line.entity';
+import { TermsAcceptance } from './terms-acceptance.entity';
 import { ProjectAccessService } from './project-access.service';
 import { ProjectResolverRegistry } from './project-resolver.registry';
 import { ProjectFactsRegistry } from './project-facts.registry';
 
 @Module({
-  imports: [MikroOrmModule.forFeature([Project, ProjectMember]), AnimalsModule, ActivityModule],
+  imports: [MikroOrmModule.forFeature([Project, ProjectMember, Pairing, TermsVersion, TermsLine, TermsAcceptance]), AnimalsModule, ActivityModule],
   providers: [ProjectAccessService, ProjectResolverRegistry, ProjectFactsRegistry],
   exports: [ProjectAccessService, ProjectResolverRegistry, ProjectFactsRegistry],
 })
