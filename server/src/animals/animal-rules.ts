@@ -32,7 +32,8 @@ export function animalRuleErrors(a: AnimalState, today: string): FieldError[] {
   if (a.maturedOn && a.maturity !== 'mature') add('maturedOn', 'Only a mature animal has a maturing date; set maturity to mature or clear the date.');
   if (a.maturedOn && a.maturedOn > today) add('maturedOn', `The maturing date ${a.maturedOn} is in the future.`);
   if (a.acquiredOn && a.acquiredOn > today) add('acquiredOn', `The acquisition date ${a.acquiredOn} is in the future.`);
-  if (a.maturedOn && a.acquiredOn && a.maturedOn < a.acquiredOn) {
+  // A loaned male usually arrives already mature, so the check applies to the keeper's own stock only.
+  if (a.maturedOn && a.acquiredOn && a.maturedOn < a.acquiredOn && a.custody !== 'loan-in') {
     add('maturedOn', `The maturing date ${a.maturedOn} is before the acquisition date ${a.acquiredOn}.`);
   }
   if (a.statusOn && a.statusOn > today) add('statusOn', `The status date ${a.statusOn} is in the future.`);

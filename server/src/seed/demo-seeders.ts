@@ -1,4 +1,5 @@
 import type { FeatureSeeder } from './demo-seed';
+import { seedCollection } from './collection.seeder';
 
 /** The scenario's parts, in dependency order; each feature adds its seeder here. */
-export const DEMO_SEEDERS: FeatureSeeder[] = [];
+export const DEMO_SEEDERS: FeatureSeeder[] = [seedCollection];
