@@ -4,6 +4,7 @@ import { addDays, todayIn, type AnimalResponse } from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper, type SignedIn } from './support/users';
 import { createAnimal, speciesId } from './support/fixtures/collection';
+import { AnimalUsageRegistry } from '../src/animals/animal-usage.registry';
 
 let t: TestApp;
 let mira: SignedIn;
@@ -154,5 +155,29 @@ describe('male clock in responses', () => {
     expect(states.length).toBeGreaterThanOrEqual(4);
     expect([...states].sort((x: string, y: string) => rank[x] - rank[y])).toEqual(states);
     expect(states[0]).toBe('past-typical');
+  });
+});
+
+describe('deleting an animal that is used elsewhere', () => {
+  it('a registered usage check refuses DELETE with 409 and its reason', async () => {
+    const a = await createAnimal(t.app, mira, { speciesId: vagans, label: 'USED-1', sex: 'female' });
+    t.app.get(AnimalUsageRegistry).register(async (_em, id) => (id === a.id ? 'It is the female of project "Spring pairing".' : null));
+    const res = await http().delete(`/api/animals/${a.id}`).set('Authorization', mira.bearer).expect(409);
+    expect(res.body.message).toBe('This animal cannot be deleted: It is the female of project "Spring pairing". Mark it sold or deceased instead.');
+    await http().get(`/api/animals/${a.id}`).set('Authorization', mira.bearer).expect(200);
+  });
+
+  it('a foreign key from another table (as the projects module will add) turns into a 409 with a reason', async () => {
+    const a = await createAnimal(t.app, mira, { speciesId: vagans, label: 'USED-2', sex: 'male' });
+    const conn = t.orm.em.getConnection();
+    await conn.execute('create table "test_project_animals" ("animal_id" uuid not null references "animals" ("id") on delete restrict)');
+    try {
+      await conn.execute('insert into "test_project_animals" values (?)', [a.id]);
+      const res = await http().delete(`/api/animals/${a.id}`).set('Authorization', mira.bearer).expect(409);
+      expect(res.body.message).toMatch(/part of a breeding project.*Mark it sold or deceased instead/);
+      await http().get(`/api/animals/${a.id}`).set('Authorization', mira.bearer).expect(200);
+    } finally {
+      await conn.execute('drop table "test_project_animals"');
+    }
   });
 });
