@@ -1,0 +1,124 @@
+import { Anchor, Badge, Group, Table, Text, Tooltip, UnstyledButton } from '@mantine/core';
+import { Link } from 'react-router-dom';
+import type { AnimalSort, AnimalSummary, MaleClock } from '@broodsilk/shared';
+import { formatDate } from '@/lib/dates';
+import { CUSTODY_LABELS, MATURITY_LABELS, SEX_LABELS, SEX_SIGNS, STATUS_LABELS } from '../utils/animal-view';
+import { ClockBadge } from './clock-badge';
+
+interface AnimalTableProps {
+  items: AnimalSummary[];
+  sort: AnimalSort;
+  order: 'asc' | 'desc';
+  onSort: (sort: AnimalSort, order: 'asc' | 'desc') => void;
+  hrefOf: (id: string) => string;
+  /** Male clocks by animal id (the list itself carries none). */
+  clocks?: ReadonlyMap<string, MaleClock>;
+  /** Former names by species id, for the hover on the species name. */
+  formerNames?: ReadonlyMap<string, string[]>;
+}
+
+function SortHeader({ label, column, sort, order, onSort }: { label: string; column: AnimalSort } & Pick<AnimalTableProps, 'sort' | 'order' | 'onSort'>) {
+  const active = sort === column;
+  const next = active && order === 'asc' ? 'desc' : 'asc';
+  return (
+    <Table.Th aria-sort={active ? (order === 'asc' ? 'ascending' : 'descending') : 'none'}>
+      <UnstyledButton onClick={() => onSort(column, next)} style={{ minHeight: 44, fontWeight: 700, fontSize: 'var(--mantine-font-size-sm)' }} aria-label={`Sort by ${label.toLowerCase()}`}>
+        {label} <span aria-hidden>{active ? (order === 'asc' ? '▲' : '▼') : '↕'}</span>
+      </UnstyledButton>
+    </Table.Th>
+  );
+}
+
+/** The collection as a dense table; on a phone it scrolls sideways rather than squeezing. */
+export function AnimalTable({ items, sort, order, onSort, hrefOf, clocks, formerNames }: AnimalTableProps) {
+  const head = { sort, order, onSort };
+  return (
+    <Table.ScrollContainer minWidth={860}>
+      <Table striped highlightOnHover verticalSpacing={4} aria-label="Animals">
+        <Table.Thead>
+          <Table.Tr>
+            <SortHeader label="Label" column="label" {...head} />
+            <SortHeader label="Species" column="species" {...head} />
+            <SortHeader label="Sex" column="sex" {...head} />
+            <SortHeader label="Maturity" column="maturedOn" {...head} />
+            <SortHeader label="Status" column="status" {...head} />
+            <Table.Th>Custody</Table.Th>
+            <Table.Th>Enclosure</Table.Th>
+            <Table.Th>Last molt</Table.Th>
+          </Table.Tr>
+        </Table.Thead>
+        <Table.Tbody>
+          {items.map((a) => {
+            const clock = clocks?.get(a.id);
+            const former = formerNames?.get(a.species.id) ?? [];
+            return (
+              <Table.Tr key={a.id}>
+                <Table.Td>
+                  <Anchor component={Link} to={hrefOf(a.id)} fw={600} style={{ display: 'inline-block', paddingBlock: 10 }}>
+                    {a.label}
+                  </Anchor>
+                </Table.Td>
+                <Table.Td>
+                  {former.length > 0 ? (
+                    <Tooltip label={`formerly ${former.join(', ')}`} events={{ hover: true, focus: true, touch: true }}>
+                      <Text size="sm" fs="italic" tabIndex={0} style={{ textDecoration: 'underline dotted' }}>
+                        {a.species.scientificName}
+                      </Text>
+                    </Tooltip>
+                  ) : (
+                    <Text size="sm" fs="italic">
+                      {a.species.scientificName}
+                    </Text>
+                  )}
+                </Table.Td>
+                <Table.Td>
+                  <Text size="sm">
+                    <span aria-hidden>{SEX_SIGNS[a.sex]} </span>
+                    {SEX_LABELS[a.sex]}
+                  </Text>
+                </Table.Td>
+                <Table.Td>
+                  {clock ? (
+                    <ClockBadge clock={clock} />
+                  ) : (
+                    <Text size="sm" c={a.maturity === 'mature' ? undefined : 'dimmed'}>
+                      {MATURITY_LABELS[a.maturity]}
+                    </Text>
+                  )}
+                </Table.Td>
+                <Table.Td>
+                  <Text size="sm" className={a.status === 'deceased' ? undefined : a.status === 'active' ? undefined : 'tone-due'}>
+                    {STATUS_LABELS[a.status]}
+                    {a.statusOn && a.status !== 'active' ? ` · ${formatDate(a.statusOn)}` : ''}
+                  </Text>
+                </Table.Td>
+                <Table.Td>
+                  {a.custody === 'with-owner' ? (
+                    <Text size="sm" c="dimmed">
+                      {CUSTODY_LABELS[a.custody]}
+                    </Text>
+                  ) : (
+                    <Badge variant="outline" color={a.custody === 'loan-in' ? 'amber' : 'gray'} size="sm" style={{ textTransform: 'none' }}>
+                      {CUSTODY_LABELS[a.custody]}
+                    </Badge>
+                  )}
+                </Table.Td>
+                <Table.Td>
+                  <Text size="sm">{a.enclosure ?? '—'}</Text>
+                </Table.Td>
+                <Table.Td>
+                  <Text size="sm">{a.lastMoltOn ? formatDate(a.lastMoltOn) : '—'}</Text>
+                </Table.Td>
+              </Table.Tr>
+            );
+          })}
+        </Table.Tbody>
+      </Table>
+      {items.length === 0 && (
+        <Group justify="center" p="lg">
+          <Text c="dimmed">No animals match these filters.</Text>
+        </Group>
+      )}
+    </Table.ScrollContainer>
+  );
+}

@@ -1,0 +1,57 @@
+import { Button, Group, Select, TextInput } from '@mantine/core';
+import { useDebouncedCallback } from '@mantine/hooks';
+import type { ReactNode } from 'react';
+import { ANIMAL_SEXES, ANIMAL_STATUSES, type AnimalSex, type AnimalStatus } from '@broodsilk/shared';
+import { SEX_LABELS, STATUS_LABELS, type CollectionFilters as Filters } from '../utils/animal-view';
+
+interface CollectionFiltersProps {
+  filters: Filters;
+  onChange: (next: Partial<Filters>) => void;
+  /** The species filter, a picker supplied by the app layer. */
+  speciesFilter: ReactNode;
+}
+
+/** Text, species, sex and status filters; every change starts again at the first page. */
+export function CollectionFilters({ filters, onChange, speciesFilter }: CollectionFiltersProps) {
+  const setText = useDebouncedCallback((q: string) => onChange({ q: q.trim() || undefined, offset: 0 }), 300);
+  const any = Boolean(filters.q || filters.sex || filters.status || filters.speciesId);
+  return (
+    <Group align="flex-end" gap="sm" wrap="wrap">
+      <TextInput
+        label="Search"
+        placeholder="Label, enclosure or species"
+        defaultValue={filters.q ?? ''}
+        key={`q-${filters.q ?? ''}`}
+        onChange={(e) => setText(e.currentTarget.value)}
+        w={{ base: '100%', sm: 240 }}
+        size="md"
+      />
+      <div style={{ flex: '1 1 240px', maxWidth: 320 }}>{speciesFilter}</div>
+      <Select
+        label="Sex"
+        placeholder="Any"
+        clearable
+        data={ANIMAL_SEXES.map((s) => ({ value: s, label: SEX_LABELS[s] }))}
+        value={filters.sex ?? null}
+        onChange={(v) => onChange({ sex: (v as AnimalSex | null) ?? undefined, offset: 0 })}
+        w={{ base: '47%', sm: 140 }}
+        size="md"
+      />
+      <Select
+        label="Status"
+        placeholder="Any"
+        clearable
+        data={ANIMAL_STATUSES.map((s) => ({ value: s, label: STATUS_LABELS[s] }))}
+        value={filters.status ?? null}
+        onChange={(v) => onChange({ status: (v as AnimalStatus | null) ?? undefined, offset: 0 })}
+        w={{ base: '47%', sm: 180 }}
+        size="md"
+      />
+      {any && (
+        <Button variant="subtle" size="md" onClick={() => onChange({ q: undefined, sex: undefined, status: undefined, speciesId: undefined, offset: 0 })}>
+          Clear filters
+        </Button>
+      )}
+    </Group>
+  );
+}

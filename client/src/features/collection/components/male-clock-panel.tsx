@@ -1,0 +1,53 @@
+import { Card, Group, Stack, Table, Text, Title } from '@mantine/core';
+import type { MaleClockView } from '@broodsilk/shared';
+import { formatDate } from '@/lib/dates';
+import { CLOCK_STATES } from '../utils/animal-view';
+
+const ORIGIN: Record<MaleClockView['lifespanMonths']['from'], string> = {
+  species: 'this species’ own value',
+  group: 'the default for its group',
+  default: 'the Broodsilk default',
+};
+
+/** A mature male's clock: where he stands, the dates it changes and what it runs against. */
+export function MaleClockPanel({ clock }: { clock: MaleClockView }) {
+  const now = CLOCK_STATES[clock.state];
+  return (
+    <Card withBorder>
+      <Stack gap="xs">
+        <Title order={3} size="h5">
+          Male clock
+        </Title>
+        <Group gap="xs" align="baseline">
+          <Text fw={700} size="lg" className={now.tone}>
+            {now.label}
+          </Text>
+          <Text size="sm" c="dimmed">
+            day {clock.daysSinceMaturing} since his maturing molt on {formatDate(clock.maturedOn)}
+          </Text>
+        </Group>
+        <Text size="sm">{now.hint}</Text>
+        <Table verticalSpacing={4} aria-label="When the male clock changes">
+          <Table.Tbody>
+            {clock.changes.map((c) => (
+              <Table.Tr key={c.state} fw={c.state === clock.state ? 700 : undefined}>
+                <Table.Td>
+                  <Text size="sm" className={c.state === clock.state ? now.tone : undefined}>
+                    {CLOCK_STATES[c.state].label}
+                  </Text>
+                </Table.Td>
+                <Table.Td>
+                  <Text size="sm">from {formatDate(c.from)}</Text>
+                </Table.Td>
+              </Table.Tr>
+            ))}
+          </Table.Tbody>
+        </Table>
+        <Text size="xs" c="dimmed">
+          Males of this kind typically live {clock.lifespanMonths.min}–{clock.lifespanMonths.max} months after maturing ({ORIGIN[clock.lifespanMonths.from]}). These are
+          typical ranges, not a forecast for him.
+        </Text>
+      </Stack>
+    </Card>
+  );
+}

@@ -1,0 +1,60 @@
+import { Badge, Button, Group, Modal, Stack, Text, Timeline, Title } from '@mantine/core';
+import { useDisclosure } from '@mantine/hooks';
+import type { AnimalSex } from '@broodsilk/shared';
+import { formatDate } from '@/lib/dates';
+import { useMolts } from '../api/molts';
+import { EXUVIA_LABELS } from '../utils/animal-view';
+import { MoltForm } from './molt-form';
+
+/** Molt history, newest first, with the command to record another. */
+export function MoltTimeline({ animalId, sex, editable }: { animalId: string; sex: AnimalSex; editable: boolean }) {
+  const { data, isPending, isError, error } = useMolts(animalId);
+  const [opened, { open, close }] = useDisclosure();
+  const molts = [...(data ?? [])].sort((a, b) => (a.moltedOn < b.moltedOn ? 1 : a.moltedOn > b.moltedOn ? -1 : 0));
+  return (
+    <Stack>
+      <Group justify="space-between">
+        <Title order={3} size="h4">
+          Molts
+        </Title>
+        {editable && (
+          <Button onClick={open} variant="light" size="md">
+            Record a molt
+          </Button>
+        )}
+      </Group>
+      {isPending && <Text c="dimmed">Loading…</Text>}
+      {isError && <Text className="tone-failed">{error.message}</Text>}
+      {data && molts.length === 0 && <Text c="dimmed">No molts recorded yet.</Text>}
+      {molts.length > 0 && (
+        <Timeline active={0} bulletSize={18} lineWidth={2} color="moss" aria-label="Molt history">
+          {molts.map((m, i) => (
+            <Timeline.Item
+              key={m.id}
+              title={
+                <Group gap="xs">
+                  <Text fw={600} size="sm">
+                    {formatDate(m.moltedOn)}
+                  </Text>
+                  {m.maturing && (
+                    <Badge size="xs" color="amber" variant="light" style={{ textTransform: 'none' }}>
+                      maturing molt
+                    </Badge>
+                  )}
+                </Group>
+              }
+            >
+              <Text size="sm" c="dimmed">
+                {[m.exuviaSex && `Exuvia: ${EXUVIA_LABELS[m.exuviaSex]}`, m.sizeCm != null && `${m.sizeCm} cm`].filter(Boolean).join(' · ') || (i === molts.length - 1 ? 'First recorded molt' : 'Molt')}
+              </Text>
+              {m.notes && <Text size="sm">{m.notes}</Text>}
+            </Timeline.Item>
+          ))}
+        </Timeline>
+      )}
+      <Modal opened={opened} onClose={close} title="Record a molt" centered>
+        <MoltForm animalId={animalId} sex={sex} onDone={close} />
+      </Modal>
+    </Stack>
+  );
+}
