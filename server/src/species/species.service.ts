@@ -1,8 +1,9 @@
 import { BadRequestException, Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
-import type { FieldError, Paged, SpeciesResponse, ValueSource } from '@broodsilk/shared';
+import type { EffectiveBreedingValues, FieldError, Paged, SpeciesResponse, ValueSource } from '@broodsilk/shared';
 import { Species, type SpeciesSourceKey } from './species.entity';
-import { toSpeciesResponse } from './species.mapper';
+import { ownBreeding, toSpeciesResponse } from './species.mapper';
+import { effectiveBreeding } from './effective-breeding';
 import type { SpeciesListQueryDto } from './dto/species-list-query.dto';
 import type { UpdateSpeciesDto } from './dto/update-species.dto';
 
@@ -47,6 +48,12 @@ export class SpeciesService {
 
   async get(id: string): Promise<SpeciesResponse> {
     return toSpeciesResponse(await this.em.findOneOrFail(Species, { id }));
+  }
+
+  /** For other modules (projects, sacs): the breeding values in force for a species, each with its source and origin. */
+  async effective(id: string): Promise<EffectiveBreedingValues> {
+    const s = await this.em.findOneOrFail(Species, { id });
+    return effectiveBreeding(s.group, ownBreeding(s));
   }
 
   /** For other modules: the entity, or a 400 naming the field when the id is not in the catalogue. */
