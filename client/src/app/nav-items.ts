@@ -4,5 +4,6 @@ import { paths } from '@/config/paths';
 /** The navbar, in the order a keeper's day runs. */
 export const NAV_ITEMS: NavItem[] = [
   { label: 'Today', to: paths.home.href(), end: true },
+  { label: 'Collection', to: paths.collection.href() },
   { label: 'Settings', to: paths.settings.href() },
 ];

@@ -18,6 +18,22 @@ export function createRouter(queryClient: QueryClient) {
       children: [
         { index: true, lazy: () => import('./routes/home') },
         { path: paths.settings.path, lazy: () => import('./routes/settings') },
+        {
+          path: paths.collection.path,
+          lazy: async () => {
+            const m = await import('./routes/collection');
+            return { Component: m.Component, loader: m.clientLoader(queryClient), shouldRevalidate: m.shouldRevalidate };
+          },
+        },
+        {
+          path: paths.animal.path,
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const m = await import('./routes/animal');
+            return { Component: m.Component, loader: m.clientLoader(queryClient) };
+          },
+        },
+        { path: paths.species.path, lazy: () => import('./routes/species') },
       ],
     },
     { path: paths.signIn.path, lazy: () => import('./routes/sign-in'), ErrorBoundary: RouteError },

@@ -6,4 +6,7 @@ export const paths = {
   forgotPassword: { path: '/forgot-password', href: () => '/forgot-password' },
   resetPassword: { path: '/reset-password', href: () => '/reset-password' },
   settings: { path: '/settings', href: () => '/settings' },
+  collection: { path: '/collection', href: () => '/collection' },
+  animal: { path: '/collection/:animalId', href: (animalId: string) => `/collection/${animalId}` },
+  species: { path: '/species', href: () => '/species' },
 } as const;

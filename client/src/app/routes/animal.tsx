@@ -1,0 +1,139 @@
+import { Anchor, Badge, Breadcrumbs, Button, Drawer, Grid, Group, Stack, Text, Title } from '@mantine/core';
+import { useMediaQuery } from '@mantine/hooks';
+import { notifications } from '@mantine/notifications';
+import type { QueryClient } from '@tanstack/react-query';
+import { useState } from 'react';
+import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { paths } from '@/config/paths';
+import { formatDate } from '@/lib/dates';
+import { animalQueries, useAnimal } from '@/features/collection/api/animals';
+import { moltQueries } from '@/features/collection/api/molts';
+import { AnimalForm } from '@/features/collection/components/animal-form';
+import { DeleteAnimal } from '@/features/collection/components/delete-animal';
+import { MaleClockPanel } from '@/features/collection/components/male-clock-panel';
+import { MoltTimeline } from '@/features/collection/components/molt-timeline';
+import { PhotoPanel } from '@/features/collection/components/photo-panel';
+import { ReadinessPanel } from '@/features/collection/components/readiness-panel';
+import { CUSTODY_LABELS, MATURITY_LABELS, SEX_LABELS, SEX_SIGNS, STATUS_LABELS, formatMoney } from '@/features/collection/utils/animal-view';
+import { speciesQueries, useSpecies } from '@/features/species/api/species';
+import { CautionNotice } from '@/features/species/components/caution-notice';
+import { SpeciesPicker } from '@/features/species/components/species-picker';
+
+export const clientLoader =
+  (qc: QueryClient) =>
+  async ({ params }: LoaderFunctionArgs) => {
+    const id = params.animalId!;
+    const animal = await qc.ensureQueryData(animalQueries.detail(id));
+    await Promise.all([qc.prefetchQuery(moltQueries.list(id)), qc.prefetchQuery(speciesQueries.detail(animal.species.id))]);
+    return null;
+  };
+
+function Fact({ label, children }: { label: string; children: React.ReactNode }) {
+  return (
+    <Group gap="xs" wrap="nowrap" align="flex-start">
+      <Text size="sm" c="dimmed" miw={120}>
+        {label}
+      </Text>
+      <Text size="sm">{children}</Text>
+    </Group>
+  );
+}
+
+export function Component() {
+  const { animalId } = useParams();
+  const id = animalId!;
+  const { data: animal } = useAnimal(id);
+  const species = useSpecies(animal?.species.id);
+  const navigate = useNavigate();
+  const phone = useMediaQuery('(max-width: 48em)');
+  const [editing, setEditing] = useState(false);
+  if (!animal) return null;
+
+  const owner = animal.owner.kind === 'self' ? 'You' : animal.owner.name;
+  return (
+    <Stack>
+      <Breadcrumbs>
+        <Anchor component={Link} to={paths.collection.href()} size="sm">
+          Collection
+        </Anchor>
+        <Text size="sm">{animal.label}</Text>
+      </Breadcrumbs>
+      <Group justify="space-between" align="flex-start" wrap="wrap">
+        <Stack gap={2}>
+          <Title order={2}>{animal.label}</Title>
+          <Text fs="italic">{animal.species.scientificName}</Text>
+          <Group gap={6}>
+            <Badge variant="light" color="gray" style={{ textTransform: 'none' }}>
+              {SEX_SIGNS[animal.sex]} {SEX_LABELS[animal.sex]}
+            </Badge>
+            <Badge variant="light" color="gray" style={{ textTransform: 'none' }}>
+              {MATURITY_LABELS[animal.maturity]}
+            </Badge>
+            <Badge variant="light" color={animal.status === 'active' ? 'moss' : 'amber'} style={{ textTransform: 'none' }}>
+              {STATUS_LABELS[animal.status]}
+              {animal.statusOn ? ` since ${formatDate(animal.statusOn)}` : ''}
+            </Badge>
+          </Group>
+        </Stack>
+        {animal.editable && (
+          <Group gap="xs">
+            <Button variant="light" onClick={() => setEditing(true)} size="md">
+              Edit
+            </Button>
+            <DeleteAnimal
+              animalId={animal.id}
+              label={animal.label}
+              onDeleted={() => {
+                notifications.show({ color: 'moss', message: `${animal.label} was deleted.` });
+                navigate(paths.collection.href());
+              }}
+            />
+          </Group>
+        )}
+      </Group>
+      {species.data && <CautionNotice species={species.data} />}
+      <Grid gap="lg">
+        <Grid.Col span={{ base: 12, md: 6 }}>
+          <Stack>
+            {animal.maleClock && <MaleClockPanel clock={animal.maleClock} />}
+            {animal.readiness && <ReadinessPanel readiness={animal.readiness} />}
+            <Stack gap={6}>
+              <Fact label="Enclosure">{animal.enclosure ?? '—'}</Fact>
+              <Fact label="Owner">{owner}</Fact>
+              <Fact label="Custody">
+                {CUSTODY_LABELS[animal.custody]}
+                {animal.custodyParty ? ` · ${animal.custody === 'loan-out' ? 'held by' : 'from'} ${animal.custodyParty}` : ''}
+                {animal.dueBackOn ? ` · due back ${formatDate(animal.dueBackOn)}` : ''}
+              </Fact>
+              <Fact label="Acquired">
+                {[animal.acquiredOn && formatDate(animal.acquiredOn), animal.acquiredFrom && `from ${animal.acquiredFrom}`, animal.pricePaidMinor != null && animal.priceCurrency && formatMoney(animal.pricePaidMinor, animal.priceCurrency)]
+                  .filter(Boolean)
+                  .join(' · ') || '—'}
+              </Fact>
+              {animal.maturedOn && !animal.maleClock && <Fact label="Matured">{formatDate(animal.maturedOn)}</Fact>}
+              {animal.notes && <Fact label="Notes">{animal.notes}</Fact>}
+              {!animal.editable && <Fact label="Recorded by">{animal.recordedBy.name}</Fact>}
+            </Stack>
+          </Stack>
+        </Grid.Col>
+        <Grid.Col span={{ base: 12, md: 6 }}>
+          <MoltTimeline animalId={animal.id} sex={animal.sex} editable={animal.editable} />
+        </Grid.Col>
+      </Grid>
+      <PhotoPanel animalId={animal.id} photos={animal.photos} editable={animal.editable} label={animal.label} />
+      <Drawer opened={editing} onClose={() => setEditing(false)} title={`Edit ${animal.label}`} position="right" size={phone ? '100%' : 'lg'}>
+        {editing && (
+          <AnimalForm
+            animal={animal}
+            renderSpeciesPicker={(p) => <SpeciesPicker {...p} />}
+            onCancel={() => setEditing(false)}
+            onSaved={() => {
+              setEditing(false);
+              notifications.show({ color: 'moss', message: 'Changes saved.' });
+            }}
+          />
+        )}
+      </Drawer>
+    </Stack>
+  );
+}
