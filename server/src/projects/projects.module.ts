@@ -12,11 +12,21 @@ import { TermsAcceptance } from './terms-acceptance.entity';
 import { ProjectAccessService } from './project-access.service';
 import { ProjectResolverRegistry } from './project-resolver.registry';
 import { ProjectFactsRegistry } from './project-facts.registry';
+import { ProjectStageService } from './project-stage.service';
+import { ProjectsService } from './projects.service';
+import { ProjectsController } from './projects.controller';
+import { MembersService } from './members.service';
+import { MembersController } from './members.controller';
+import { TermsService } from './terms.service';
+import { TermsController } from './terms.controller';
+import { PairingsService } from './pairings.service';
+import { PairingsController } from './pairings.controller';
 
 @Module({
   imports: [MikroOrmModule.forFeature([Project, ProjectMember, Pairing, TermsVersion, TermsLine, TermsAcceptance]), AnimalsModule, ActivityModule],
-  providers: [ProjectAccessService, ProjectResolverRegistry, ProjectFactsRegistry],
-  exports: [ProjectAccessService, ProjectResolverRegistry, ProjectFactsRegistry],
+  controllers: [ProjectsController, MembersController, TermsController, PairingsController],
+  providers: [ProjectAccessService, ProjectResolverRegistry, ProjectFactsRegistry, ProjectStageService, ProjectsService, MembersService, TermsService, PairingsService],
+  exports: [ProjectAccessService, ProjectResolverRegistry, ProjectFactsRegistry, ProjectStageService, TermsService],
 })
 export class ProjectsModule implements OnModuleInit {
   constructor(private readonly usage: AnimalUsageRegistry) {}

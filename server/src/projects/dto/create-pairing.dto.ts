@@ -1,0 +1,19 @@
+import { IsIn, IsInt, IsISO8601, IsOptional, IsString, Max, MaxLength, Min, ValidateIf } from 'class-validator';
+import { PAIRING_OUTCOMES, type CreatePairingRequest, type PairingOutcome } from '@broodsilk/shared';
+
+export class CreatePairingDto implements CreatePairingRequest {
+  @IsISO8601({ strict: true, strictSeparator: true }, { message: 'The start must be a date and time such as 2026-05-03T19:30:00+02:00.' })
+  startedAt!: string;
+
+  @IsInt({ message: 'The duration is a whole number of minutes.' })
+  @Min(1, { message: 'The duration must be at least 1 minute.' })
+  @Max(20_160, { message: 'The duration can be at most 14 days (20160 minutes).' })
+  durationMinutes!: number;
+
+  @IsIn(PAIRING_OUTCOMES, { message: `The outcome must be one of: ${PAIRING_OUTCOMES.join(', ')}.` })
+  outcome!: PairingOutcome;
+
+  @IsOptional() @ValidateIf((_, v) => v !== null)
+  @IsString() @MaxLength(2000, { message: 'The notes can be at most 2000 characters.' })
+  notes?: string | null;
+}

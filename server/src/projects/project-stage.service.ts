@@ -1,0 +1,78 @@
+import { Injectable } from '@nestjs/common';
+import { EntityManager } from '@mikro-orm/postgresql';
+import {
+  deriveProjectStage, pairingWarnings,
+  type DerivedProjectStage, type FailureClause, type PairingWarning, type ProjectFacts,
+} from '@broodsilk/shared';
+import { Molt } from '../animals/molt.entity';
+import { effectiveBreeding } from '../species/effective-breeding';
+import { ownBreeding } from '../species/species.mapper';
+import { Pairing } from './pairing.entity';
+import type { Project } from './project.entity';
+import { ProjectFactsRegistry } from './project-facts.registry';
+
+export interface ProjectStanding {
+  stage: DerivedProjectStage;
+  facts: ProjectFacts;
+}
+
+/**
+ * Gathers each project's facts (its pairings, the female's molts, the male's death, what the sacs
+ * and accounts modules register) and derives stage and warnings with the shared rules.
+ */
+@Injectable()
+export class ProjectStageService {
+  constructor(
+    private readonly em: EntityManager,
+    private readonly registry: ProjectFactsRegistry,
+  ) {}
+
+  /** Projects need `female` and `male` loaded (ids and status). */
+  async standings(projects: readonly Project[]): Promise<Map<string, ProjectStanding>> {
+    const ids = projects.map((p) => p.id);
+    const out = new Map<string, ProjectStanding>();
+    if (!ids.length) return out;
+    const [pairings, molts, contributed] = await Promise.all([
+      this.em.find(Pairing, { project: { $in: ids } }, { fields: ['project', 'startedOn', 'outcome'] }),
+      this.em.find(Molt, { animal: { $in: projects.map((p) => p.female.id) } }, { fields: ['animal', 'moltedOn'] }),
+      this.registry.collect(this.em, ids),
+    ]);
+    for (const p of projects) {
+      const facts: ProjectFacts = {
+        pairings: pairings.filter((x) => x.project.id === p.id).map((x) => ({ on: x.startedOn, outcome: x.outcome })),
+        femaleMolts: molts.filter((m) => m.animal.id === p.female.id).map((m) => m.moltedOn),
+        sacs: contributed.get(p.id)?.sacs ?? [],
+        sharesSettled: contributed.get(p.id)?.sharesSettled ?? false,
+        closedOn: p.closedOn ?? null,
+        endedEarly: p.endedEarlyReason ?? null,
+        maleDiedOn: p.male.status === 'deceased' ? (p.male.statusOn ?? p.male.updatedAt.toISOString().slice(0, 10)) : null,
+      };
+      out.set(p.id, { stage: deriveProjectStage(facts), facts });
+    }
+    return out;
+  }
+
+  /**
+   * Warnings while the project is open (not ended or closed by the keeper). Needs `male.species`
+   * loaded; `failureClause` comes from the terms in force.
+   */
+  warnings(p: Project, standing: ProjectStanding, today: string, failureClause: FailureClause): PairingWarning[] {
+    if (p.endedEarlyReason || p.closedOn) return [];
+    const m = p.male;
+    const life = effectiveBreeding(m.species.group, ownBreeding(m.species)).matureMaleLifespanMonths.value;
+    return pairingWarnings({
+      today,
+      pairings: standing.facts.pairings,
+      femaleMolts: standing.facts.femaleMolts.filter((d) => d <= today),
+      sacLayDates: standing.facts.sacs.map((s) => s.layDate),
+      male: {
+        maturedOn: m.maturity === 'mature' ? (m.maturedOn ?? null) : null,
+        lifespan: { minMonths: life.min, maxMonths: life.max },
+        diedOn: standing.facts.maleDiedOn ?? null,
+        dueBackOn: m.custody === 'loan-in' ? (m.dueBackOn ?? null) : null,
+        returnedOn: null,
+      },
+      failureClause,
+    });
+  }
+}

@@ -1,0 +1,108 @@
+import { ConflictException, Injectable } from '@nestjs/common';
+import { EntityManager } from '@mikro-orm/postgresql';
+import { todayIn, type FieldError, type ProjectResponse, type ProjectSummary } from '@broodsilk/shared';
+import type { AuthUser } from '../auth/auth-user';
+import { Animal } from '../animals/animal.entity';
+import { badRequest } from '../animals/animals.service';
+import { User } from '../users/user.entity';
+import { ActivityService } from '../activity/activity.service';
+import { Project } from './project.entity';
+import { ProjectMember } from './project-member.entity';
+import type { ProjectAccess } from './project-access.service';
+import { ProjectStageService } from './project-stage.service';
+import { TermsService } from './terms.service';
+import { toProjectResponse, toProjectSummary } from './projects.mapper';
+import type { CreateProjectDto } from './dto/create-project.dto';
+import type { UpdateProjectDto } from './dto/update-project.dto';
+import type { EndProjectDto } from './dto/end-project.dto';
+
+const PROJECT_POPULATE = ['owner', 'female.species', 'male.species'] as const;
+const DETAIL_POPULATE = ['owner', 'female.species', 'female.recordedBy', 'female.ownerUser', 'male.species', 'male.recordedBy', 'male.ownerUser'] as const;
+
+@Injectable()
+export class ProjectsService {
+  constructor(
+    private readonly em: EntityManager,
+    private readonly stages: ProjectStageService,
+    private readonly terms: TermsService,
+    private readonly activity: ActivityService,
+  ) {}
+
+  private today(viewer: AuthUser): string {
+    return todayIn(viewer.timeZone, new Date());
+  }
+
+  /** Every project the viewer is a member of, newest first, with its stage. */
+  async list(viewer: AuthUser): Promise<ProjectSummary[]> {
+    const memberships = await this.em.find(ProjectMember, { user: viewer.id }, { populate: ['project'] });
+    const projects = await this.em.find(Project, { id: { $in: memberships.map((m) => m.project.id) } }, { populate: PROJECT_POPULATE, orderBy: { createdAt: 'desc', id: 'asc' } });
+    const standings = await this.stages.standings(projects);
+    const roleOf = new Map(memberships.map((m) => [m.project.id, m.role]));
+    return projects.map((p) => toProjectSummary(p, standings.get(p.id)!.stage, roleOf.get(p.id)!));
+  }
+
+  async get(viewer: AuthUser, access: ProjectAccess): Promise<ProjectResponse> {
+    const p = await this.em.findOneOrFail(Project, { id: access.project.id }, { populate: DETAIL_POPULATE, refresh: true });
+    const standing = (await this.stages.standings([p])).get(p.id)!;
+    const today = this.today(viewer);
+    const clause = (await this.terms.inForceClause(p.id)) ?? 'nothing-owed';
+    const members = await this.em.find(ProjectMember, { project: p.id }, { populate: ['user'], orderBy: { createdAt: 'asc' } });
+    return toProjectResponse(p, standing.stage, access.role, today, viewer.id, this.stages.warnings(p, standing, today, clause), members);
+  }
+
+  /** The owner must have recorded both animals; the owner becomes the first party, role `owner`. */
+  async create(viewer: AuthUser, dto: CreateProjectDto): Promise<ProjectResponse> {
+    const project = await this.em.transactional(async (tx) => {
+      const [female, male] = await Promise.all([
+        tx.findOne(Animal, { id: dto.femaleId, recordedBy: viewer.id }),
+        tx.findOne(Animal, { id: dto.maleId, recordedBy: viewer.id }),
+      ]);
+      const errors: FieldError[] = [];
+      const check = (a: Animal | null, field: 'femaleId' | 'maleId', sex: 'female' | 'male') => {
+        if (!a) errors.push({ field, message: `There is no such animal in your collection; choose the ${sex} from the animals you recorded.` });
+        else if (a.sex !== sex) errors.push({ field, message: `${a.label} is recorded as ${a.sex}, not ${sex}.` });
+        else if (a.status === 'sold' || a.status === 'deceased') errors.push({ field, message: `${a.label} is marked ${a.status}, so it cannot start a project.` });
+      };
+      check(female, 'femaleId', 'female');
+      check(male, 'maleId', 'male');
+      if (errors.length) throw badRequest(errors);
+      const owner = await tx.findOneOrFail(User, viewer.id);
+      const p = tx.create(Project, { owner, female: female!, male: male!, title: dto.title.trim(), notes: dto.notes ?? null });
+      tx.create(ProjectMember, { project: p, user: owner, role: 'owner', name: owner.displayName, email: owner.email });
+      this.activity.record(tx, {
+        projectId: p.id, actorId: viewer.id, kind: 'project.created', subjectType: 'project', subjectId: p.id,
+        summary: `${owner.displayName} started the project "${p.title}" with ${female!.label} and ${male!.label}.`,
+        data: { femaleId: female!.id, maleId: male!.id },
+      });
+      return p;
+    });
+    return this.get(viewer, { project, role: 'owner' } as ProjectAccess);
+  }
+
+  async update(viewer: AuthUser, access: ProjectAccess, dto: UpdateProjectDto): Promise<ProjectResponse> {
+    await this.em.transactional(async (tx) => {
+      const p = await tx.findOneOrFail(Project, access.project.id);
+      const changed: string[] = [];
+      if (dto.title !== undefined && dto.title.trim() !== p.title) { p.title = dto.title.trim(); changed.push('title'); }
+      if (dto.notes !== undefined && dto.notes !== (p.notes ?? null)) { p.notes = dto.notes; changed.push('notes'); }
+      if (changed.length) {
+        this.activity.record(tx, { projectId: p.id, actorId: viewer.id, kind: 'project.updated', subjectType: 'project', subjectId: p.id, summary: `Changed the project's ${changed.join(' and ')}.`, data: { changed } });
+      }
+    });
+    return this.get(viewer, access);
+  }
+
+  /** The owner calls the project off, with a reason; it cannot be undone here. */
+  async end(viewer: AuthUser, access: ProjectAccess, dto: EndProjectDto): Promise<ProjectResponse> {
+    await this.em.transactional(async (tx) => {
+      const p = await tx.findOneOrFail(Project, access.project.id);
+      if (p.endedEarlyReason) throw new ConflictException({ message: `This project already ended early on ${p.endedOn} (${p.endedEarlyReason}).` });
+      if (p.closedOn) throw new ConflictException({ message: `This project was closed on ${p.closedOn}.` });
+      p.endedEarlyReason = dto.reason;
+      p.endedEarlyNote = dto.note ?? null;
+      p.endedOn = this.today(viewer);
+      this.activity.record(tx, { projectId: p.id, actorId: viewer.id, kind: 'project.ended', subjectType: 'project', subjectId: p.id, summary: `Ended the project early: ${dto.reason}.`, data: { reason: dto.reason, note: dto.note ?? null } });
+    });
+    return this.get(viewer, access);
+  }
+}
