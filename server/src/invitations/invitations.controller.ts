@@ -1,0 +1,37 @@
+import { Body, Controller, Get, HttpCode, Param, Post } from '@nestjs/common';
+import type { AcceptInvitationResponse, InvitationPreview, InvitationResponse } from '@broodsilk/shared';
+import { CurrentUser } from '../common/decorators/current-user.decorator';
+import { Public } from '../common/decorators/public.decorator';
+import { CurrentProject, ProjectRoles } from '../common/decorators/project-roles.decorator';
+import type { AuthUser } from '../auth/auth-user';
+import type { ProjectAccess } from '../projects/project-access.service';
+import { InvitationsService } from './invitations.service';
+import { CreateInvitationDto } from './dto/create-invitation.dto';
+
+@Controller('projects/:projectId/invitations')
+export class ProjectInvitationsController {
+  constructor(private readonly invitations: InvitationsService) {}
+
+  @Post()
+  @ProjectRoles('owner')
+  create(@CurrentUser() user: AuthUser, @CurrentProject() access: ProjectAccess, @Body() dto: CreateInvitationDto): Promise<InvitationResponse> {
+    return this.invitations.create(user, access, dto);
+  }
+}
+
+@Controller('invitations')
+export class InvitationsController {
+  constructor(private readonly invitations: InvitationsService) {}
+
+  @Get(':token')
+  @Public()
+  preview(@Param('token') token: string): Promise<InvitationPreview> {
+    return this.invitations.preview(token);
+  }
+
+  @Post(':token/accept')
+  @HttpCode(200)
+  accept(@CurrentUser() user: AuthUser, @Param('token') token: string): Promise<AcceptInvitationResponse> {
+    return this.invitations.accept(user, token);
+  }
+}

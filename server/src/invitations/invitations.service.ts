@@ -1,0 +1,116 @@
+import { BadRequestException, ConflictException, GoneException, Inject, Injectable, Logger, NotFoundException, ServiceUnavailableException } from '@nestjs/common';
+import type { ConfigType } from '@nestjs/config';
+import { EntityManager } from '@mikro-orm/postgresql';
+import { LockMode } from '@mikro-orm/core';
+import type { AcceptInvitationResponse, InvitationPreview, InvitationResponse } from '@broodsilk/shared';
+import { appConfig } from '../config/app.config';
+import type { AuthUser } from '../auth/auth-user';
+import { MailService } from '../mail/mail.service';
+import { User } from '../users/user.entity';
+import { ActivityService } from '../activity/activity.service';
+import type { ProjectAccess } from '../projects/project-access.service';
+import { ProjectMember } from '../projects/project-member.entity';
+import { Invitation } from './invitation.entity';
+import { hashInvitationToken, INVITATION_DAYS, newInvitationToken } from './invitation-token';
+import { invitationProblem, toInvitationPreview, toInvitationResponse } from './invitations.mapper';
+import type { CreateInvitationDto } from './dto/create-invitation.dto';
+
+const INVALID_LINK = 'This invitation link is not valid. Check that you copied all of it.';
+
+@Injectable()
+export class InvitationsService {
+  private readonly logger = new Logger(InvitationsService.name);
+
+  constructor(
+    private readonly em: EntityManager,
+    private readonly mail: MailService,
+    private readonly activity: ActivityService,
+    @Inject(appConfig.KEY) private readonly app: ConfigType<typeof appConfig>,
+  ) {}
+
+  /** Sends a single-use link; an open invitation to the same address in this project stops working. */
+  async create(viewer: AuthUser, access: ProjectAccess, dto: CreateInvitationDto): Promise<InvitationResponse> {
+    const email = dto.email.trim().toLowerCase();
+    const { token, hash } = newInvitationToken();
+    const { invitation, inviter } = await this.em.transactional(async (tx) => {
+      const members = await tx.find(ProjectMember, { project: access.project.id }, { populate: ['user'] });
+      if (members.some((m) => m.user?.email.toLowerCase() === email)) throw new ConflictException({ message: 'Someone with this e-mail address is already a member of the project.' });
+      let member: ProjectMember | null = null;
+      if (dto.memberId) {
+        member = members.find((m) => m.id === dto.memberId) ?? null;
+        if (!member) throw new BadRequestException({ message: 'This project has no such party.', details: [{ field: 'memberId', message: 'This project has no such party.' }] });
+        if (member.user) throw new BadRequestException({ message: `${member.user.displayName} already has an account in this project.`, details: [{ field: 'memberId', message: 'This party already has an account.' }] });
+        if (member.role !== dto.role) throw new BadRequestException({ message: `${member.name} is a ${member.role} of this project; invite them as ${member.role}.`, details: [{ field: 'role', message: `${member.name} is a ${member.role}.` }] });
+      }
+      await tx.nativeUpdate(Invitation, { project: access.project.id, email, acceptedAt: null, replacedAt: null }, { replacedAt: new Date() });
+      const inviter = await tx.findOneOrFail(User, viewer.id);
+      const invitation = tx.create(Invitation, {
+        project: access.project, email, role: dto.role, member, tokenHash: hash, invitedBy: inviter,
+        expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000),
+      });
+      this.activity.record(tx, {
+        projectId: access.project.id, actorId: viewer.id, kind: 'invitation.sent', subjectType: 'invitation', subjectId: invitation.id,
+        summary: `Invited ${email} as ${dto.role}.`, data: { email, role: dto.role },
+      });
+      return { invitation, inviter };
+    });
+    const link = `${this.app.publicUrl}/invitations/${token}`;
+    try {
+      await this.mail.send({
+        to: email,
+        subject: `${inviter.displayName} invites you to the breeding project "${access.project.title}"`,
+        text:
+          `Hello,\n\n${inviter.displayName} invites you to join the breeding project "${access.project.title}" on Broodsilk as ${dto.role}.\n\n` +
+          `Open this link within ${INVITATION_DAYS} days to accept (sign in or create an account first):\n\n${link}\n\n` +
+          `The link works once. If you did not expect this e-mail, ignore it.\n`,
+      });
+    } catch (e) {
+      this.logger.error(`invitation mail failed: ${e instanceof Error ? e.message : String(e)}`);
+      throw new ServiceUnavailableException('The invitation is saved but the e-mail could not be sent. Please send it again in a moment.');
+    }
+    return toInvitationResponse(invitation);
+  }
+
+  private async byToken(token: string, em: EntityManager, lock = false): Promise<Invitation> {
+    const found = await em.findOne(Invitation, { tokenHash: hashInvitationToken(token) }, {
+      populate: ['project', 'invitedBy', 'member'],
+      ...(lock ? { lockMode: LockMode.PESSIMISTIC_WRITE } : {}),
+    });
+    if (!found) throw new NotFoundException(INVALID_LINK);
+    return found;
+  }
+
+  async preview(token: string): Promise<InvitationPreview> {
+    return toInvitationPreview(await this.byToken(token, this.em));
+  }
+
+  /** Joins the signed-in user to the project with the invitation's role; the link then stops working. */
+  async accept(viewer: AuthUser, token: string): Promise<AcceptInvitationResponse> {
+    return this.em.transactional(async (tx) => {
+      const inv = await this.byToken(token, tx, true);
+      const problem = invitationProblem(inv);
+      if (problem) throw new GoneException(problem);
+      const projectId = inv.project.id;
+      if (await tx.count(ProjectMember, { project: projectId, user: viewer.id })) {
+        throw new ConflictException({ message: 'You are already a member of this project.' });
+      }
+      const user = await tx.findOneOrFail(User, viewer.id);
+      let member: ProjectMember;
+      if (inv.member) {
+        if (inv.member.user) throw new ConflictException({ message: 'This party of the project is already linked to an account.' });
+        member = inv.member;
+        member.user = user;
+        member.role = inv.role;
+      } else {
+        member = tx.create(ProjectMember, { project: projectId, user, role: inv.role, name: user.displayName, email: user.email });
+      }
+      inv.acceptedAt = new Date();
+      inv.acceptedBy = user;
+      this.activity.record(tx, {
+        projectId, actorId: viewer.id, kind: 'member.joined', subjectType: 'member', subjectId: member.id,
+        summary: `${user.displayName} joined as ${inv.role}.`, data: { role: inv.role, invitationId: inv.id },
+      });
+      return { projectId, role: inv.role };
+    });
+  }
+}
