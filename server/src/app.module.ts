@@ -22,7 +22,9 @@ import { PhotosModule } from './photos/photos.module';
 import { ProjectsModule } from './projects/projects.module';
 import { ActivityModule } from './activity/activity.module';
 import { InvitationsModule } from './invitations/invitations.module';
+import { SacsModule } from './sacs/sacs.module';
 import { ProjectRoleGuard } from './common/guards/project-role.guard';
+import { AccountsModule } from './accounts/accounts.module';
 
 function staticClient(): DynamicModule[] {
   const dist = process.env.CLIENT_DIST;
@@ -60,6 +62,7 @@ function staticClient(): DynamicModule[] {
     ProjectsModule,
     ActivityModule,
     InvitationsModule,
+    SacsModule,
   ],
   providers: [
     { provide: APP_FILTER, useClass: AllExceptionsFilter },

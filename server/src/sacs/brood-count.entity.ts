@@ -1,0 +1,39 @@
+import { Check, Entity, Enum, Index, ManyToOne, Property } from '@mikro-orm/core';
+import { BROOD_LOSS_REASONS, BROOD_STAGES, type BroodLossReason, type BroodStage } from '@broodsilk/shared';
+import { BaseEntity } from '../database/base.entity';
+import { User } from '../users/user.entity';
+import { Sac } from './sac.entity';
+
+/** A live count of a sac's brood at one instant; the latest one is the count of young in care. */
+@Entity({ tableName: 'brood_counts' })
+@Index({ properties: ['sac', 'at'] })
+@Check({ name: 'brood_counts_non_negative_check', expression: 'alive >= 0 and lost >= 0' })
+export class BroodCount extends BaseEntity<'lost' | 'source'> {
+  @ManyToOne(() => Sac, { deleteRule: 'cascade' })
+  sac!: Sac;
+
+  @Property({ type: 'timestamptz' })
+  at!: Date;
+
+  @Enum({ items: [...BROOD_STAGES], nativeEnumName: 'brood_stage' })
+  stage!: BroodStage;
+
+  @Property({ type: 'integer' })
+  alive!: number;
+
+  /** Lost since the previous count. */
+  @Property({ type: 'integer' })
+  lost: number = 0;
+
+  @Enum({ items: [...BROOD_LOSS_REASONS], nativeEnumName: 'brood_loss_reason', nullable: true })
+  lossReason?: BroodLossReason | null;
+
+  @Property({ type: 'text', nullable: true })
+  note?: string | null;
+
+  @Enum({ items: ['opening', 'count'], nativeEnumName: 'brood_count_source' })
+  source: 'opening' | 'count' = 'count';
+
+  @ManyToOne(() => User, { nullable: true, deleteRule: 'set null' })
+  recordedBy?: User | null;
+}

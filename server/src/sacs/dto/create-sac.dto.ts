@@ -1,0 +1,35 @@
+import { IsBoolean, IsInt, IsOptional, IsString, Max, MaxLength, Min, ValidateIf } from 'class-validator';
+import { PULL_DAY_MAX, ROLL_INTERVAL_LIMITS, type CreateSacRequest } from '@broodsilk/shared';
+import { IsCalendarDate } from '../../animals/dto/is-calendar-date.validator';
+import { IsInstant } from './is-instant.validator';
+
+const dayRule = (what: string) => ({ message: `The ${what} must be a whole day number from 0 to ${PULL_DAY_MAX}.` });
+
+export class CreateSacDto implements CreateSacRequest {
+  @IsCalendarDate({ message: 'The lay date must be a date written YYYY-MM-DD.' })
+  layDate!: string;
+
+  @IsOptional() @ValidateIf((_, v) => v !== null)
+  @IsInstant({ message: 'The pull time must be a date and time with its offset, e.g. 2026-03-08T07:30:00Z.' })
+  pulledAt?: string | null;
+
+  @IsOptional() @ValidateIf((_, v) => v !== null)
+  @IsInt(dayRule('first pull day')) @Min(0, dayRule('first pull day')) @Max(PULL_DAY_MAX, dayRule('first pull day'))
+  pullFromDay?: number | null;
+
+  @IsOptional() @ValidateIf((_, v) => v !== null)
+  @IsInt(dayRule('last pull day')) @Min(0, dayRule('last pull day')) @Max(PULL_DAY_MAX, dayRule('last pull day'))
+  pullToDay?: number | null;
+
+  @IsOptional()
+  @IsInt({ message: 'The roll interval must be a whole number of hours.' })
+  @Min(ROLL_INTERVAL_LIMITS.minHours, { message: `The roll interval must be at least ${ROLL_INTERVAL_LIMITS.minHours} hour.` })
+  @Max(ROLL_INTERVAL_LIMITS.maxHours, { message: `The roll interval cannot be more than ${ROLL_INTERVAL_LIMITS.maxHours} hours.` })
+  rollIntervalHours?: number;
+
+  @IsOptional() @IsBoolean({ message: 'rollingOff must be true or false.' })
+  rollingOff?: boolean;
+
+  @IsOptional() @ValidateIf((_, v) => v !== null) @IsString() @MaxLength(2000)
+  notes?: string | null;
+}

@@ -1,0 +1,17 @@
+import { IsIn, IsOptional, ValidateIf } from 'class-validator';
+import { SAC_FAILURE_REASONS, SAC_OUTCOMES, type SacFailureReason, type SacOutcomeState, type UpdateSacRequest } from '@broodsilk/shared';
+import { CreateSacDto } from './create-sac.dto';
+
+/** Every create field, each optional (same checks), plus the outcome. */
+export class UpdateSacDto extends CreateSacDto implements UpdateSacRequest {
+  @IsOptional()
+  declare layDate: string;
+
+  @IsOptional()
+  @IsIn(SAC_OUTCOMES, { message: `The outcome must be one of: ${SAC_OUTCOMES.join(', ')}.` })
+  outcome?: SacOutcomeState;
+
+  @IsOptional() @ValidateIf((_, v) => v !== null)
+  @IsIn(SAC_FAILURE_REASONS, { message: `The failure reason must be one of: ${SAC_FAILURE_REASONS.join(', ')}.` })
+  failureReason?: SacFailureReason | null;
+}

@@ -1,0 +1,40 @@
+import type { EntityManager } from '@mikro-orm/postgresql';
+
+/** `(?, ?, …)` for a list of ids (knex expands an array parameter into a comma list, not a PostgreSQL array). */
+const marks = (ids: string[]) => `(${ids.map(() => '?').join(', ')})`;
+
+/**
+ * Set-based reads several views need for many sacs at once (lists, the dashboard, reminders).
+ * Raw SQL because "latest row per sac" is one DISTINCT ON in PostgreSQL.
+ */
+
+/** The last roll per sac that still counts: not struck, and not before the pull. */
+export async function lastRollsOf(em: EntityManager, sacIds: string[]): Promise<Map<string, Date>> {
+  if (!sacIds.length) return new Map();
+  const rows = await em.getConnection().execute<{ sac_id: string; at: Date }[]>(
+    `select distinct on (e.sac_id) e.sac_id, e.at
+       from sac_log_entries e join sacs s on s.id = e.sac_id
+      where e.sac_id in ${marks(sacIds)} and e.kind = 'roll' and s.pulled_at is not null and e.at >= s.pulled_at
+        and not exists (select 1 from sac_log_entries k where k.strikes_id = e.id)
+      order by e.sac_id, e.at desc, e.created_at desc`,
+    sacIds,
+  );
+  return new Map(rows.map((r) => [r.sac_id, new Date(r.at)]));
+}
+
+/** The latest alive count per sac (by instant, then by when it was written). */
+export async function currentCountsOf(em: EntityManager, sacIds: string[]): Promise<Map<string, number>> {
+  if (!sacIds.length) return new Map();
+  const rows = await em.getConnection().execute<{ sac_id: string; alive: number }[]>(
+    `select distinct on (sac_id) sac_id, alive from brood_counts
+      where sac_id in ${marks(sacIds)} order by sac_id, at desc, created_at desc`,
+    sacIds,
+  );
+  return new Map(rows.map((r) => [r.sac_id, Number(r.alive)]));
+}
+
+export async function openedSacsOf(em: EntityManager, sacIds: string[]): Promise<Set<string>> {
+  if (!sacIds.length) return new Set();
+  const rows = await em.getConnection().execute<{ sac_id: string }[]>(`select sac_id from sac_openings where sac_id in ${marks(sacIds)}`, sacIds);
+  return new Set(rows.map((r) => r.sac_id));
+}

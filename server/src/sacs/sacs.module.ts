@@ -1,0 +1,46 @@
+import { Module, type OnModuleInit } from '@nestjs/common';
+import { MikroOrmModule } from '@mikro-orm/nestjs';
+import { ProjectsModule } from '../projects/projects.module';
+import { ProjectResolverRegistry } from '../projects/project-resolver.registry';
+import { ProjectFactsRegistry } from '../projects/project-facts.registry';
+import { ActivityModule } from '../activity/activity.module';
+import { Sac } from './sac.entity';
+import { SacLogEntry } from './sac-log-entry.entity';
+import { SacOpening } from './sac-opening.entity';
+import { BroodCount } from './brood-count.entity';
+import { Clock } from './clock';
+import { SacViewsService } from './sac-views.service';
+import { SacsService } from './sacs.service';
+import { BroodService } from './brood.service';
+import { ProjectSacsController, SacsController } from './sacs.controller';
+import { toSacFact } from './sacs.mapper';
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+@Module({
+  imports: [MikroOrmModule.forFeature([Sac, SacLogEntry, SacOpening, BroodCount]), ProjectsModule, ActivityModule],
+  controllers: [ProjectSacsController, SacsController],
+  providers: [Clock, SacViewsService, SacsService, BroodService],
+  exports: [Clock, SacViewsService, SacsService, BroodService],
+})
+export class SacsModule implements OnModuleInit {
+  constructor(
+    private readonly resolvers: ProjectResolverRegistry,
+    private readonly facts: ProjectFactsRegistry,
+  ) {}
+
+  onModuleInit(): void {
+    // A malformed id is simply "no such sac" (404), never a database error.
+    this.resolvers.register('sac', async (em, id) => (UUID.test(id) ? ((await em.findOne(Sac, id, { fields: ['project'] }))?.project.id ?? null) : null));
+    this.facts.register(async (em, projectIds) => {
+      const sacs = await em.find(Sac, { project: { $in: projectIds } });
+      const out = new Map<string, { sacs: ReturnType<typeof toSacFact>[] }>();
+      for (const s of sacs) {
+        const entry = out.get(s.project.id) ?? { sacs: [] };
+        entry.sacs.push(toSacFact(s));
+        out.set(s.project.id, entry);
+      }
+      return out;
+    });
+  }
+}

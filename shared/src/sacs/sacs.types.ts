@@ -1,0 +1,91 @@
+import type { CalendarDate } from '../breeding/calendar-day.js';
+import type { BroodStage } from '../breeding/brood-stage.js';
+import type { PullWindowView } from '../breeding/pull-window.js';
+import type { RollStatus } from '../breeding/roll-schedule.js';
+
+/** How a sac ended up; `failed` carries a reason. */
+export const SAC_OUTCOMES = ['in-progress', 'hatched', 'failed'] as const;
+export type SacOutcomeState = (typeof SAC_OUTCOMES)[number];
+
+export const SAC_FAILURE_REASONS = ['infertile', 'spoiled', 'eaten', 'other'] as const;
+export type SacFailureReason = (typeof SAC_FAILURE_REASONS)[number];
+
+/** Limits the server enforces on per-sac settings. */
+export const ROLL_INTERVAL_LIMITS = Object.freeze({ minHours: 1, maxHours: 72 });
+export const PULL_DAY_MAX = 120;
+
+/**
+ * Shown next to incubator settings. Our own wording of the usual advice: heat sources need a
+ * thermostat and can start fires; local law and licensed practice take precedence.
+ */
+export const INCUBATOR_CAUTION =
+  'Any heat source for an incubator belongs behind a thermostat and out of reach of bedding, paper and cables: ' +
+  'unregulated heat mats and bulbs overheat eggs and can start fires. Check the setup daily. Where local law or a licensed ' +
+  'keeper\'s practice says otherwise, follow them.';
+
+export interface CreateSacRequest {
+  /** Calendar date in the keeper's time zone; today or earlier. */
+  layDate: CalendarDate;
+  /** Set when the sac has already been taken from the mother (an instant, ISO 8601). */
+  pulledAt?: string | null;
+  pullFromDay?: number | null;
+  pullToDay?: number | null;
+  rollIntervalHours?: number;
+  rollingOff?: boolean;
+  notes?: string | null;
+}
+
+export interface UpdateSacRequest {
+  layDate?: CalendarDate;
+  /** An instant sets the sac as pulled; null puts it back with the mother (a mistaken entry). */
+  pulledAt?: string | null;
+  outcome?: SacOutcomeState;
+  failureReason?: SacFailureReason | null;
+  /** Both set, or both null to fall back to the species / default window. */
+  pullFromDay?: number | null;
+  pullToDay?: number | null;
+  rollIntervalHours?: number;
+  rollingOff?: boolean;
+  notes?: string | null;
+}
+
+/** Where the pull window in force comes from. */
+export type PullWindowOrigin = 'sac' | 'species' | 'default';
+
+export interface SacRollView {
+  /** Instant the next roll is due (ISO 8601). */
+  due: string;
+  status: RollStatus;
+  /** Last roll that counts (not struck), if any. */
+  lastRollAt: string | null;
+}
+
+export interface SacResponse {
+  id: string;
+  projectId: string;
+  layDate: CalendarDate;
+  /** Day N for the viewer today (lay date = day 0, the viewer's own time zone). */
+  dayNumber: number;
+  /** The viewer's date used for `dayNumber` and the pull window state. */
+  today: CalendarDate;
+  pulled: boolean;
+  pulledAt: string | null;
+  /** The calendar date of the pull in the recorder's time zone, fixed when recorded. */
+  pulledOn: CalendarDate | null;
+  outcome: SacOutcomeState;
+  failureReason: SacFailureReason | null;
+  pullWindow: PullWindowView & { fromDay: number; toDay: number; origin: PullWindowOrigin };
+  rollIntervalHours: number;
+  rollingOff: boolean;
+  /** Null when rolling does not apply (left with the mother, first instar reached, or turned off). */
+  roll: SacRollView | null;
+  broodStage: BroodStage;
+  opened: boolean;
+  /** Latest alive count of the brood; null before the opening. */
+  currentCount: number | null;
+  notes: string | null;
+  /** Present for a pulled sac: the heat-source caution the incubator view shows. */
+  incubatorCaution: string | null;
+  createdAt: string;
+  updatedAt: string;
+}
