@@ -78,3 +78,44 @@ describe('collection', () => {
     }
   });
 });
+
+describe('mature males and the species catalogue', () => {
+  it('lists mature males with the least time left first, and finds a species by its former name', async () => {
+    const page = b.page;
+    await page.goto(`${BASE_URL}/collection?view=males`);
+    const days = page.getByTestId('days-left');
+    await days.first().waitFor();
+    const left = (await days.evaluateAll((els) => els.map((e) => Number(e.getAttribute('data-days'))))) as number[];
+    expect(left.length).toBeGreaterThan(0);
+    expect(left).toEqual([...left].sort((a, b) => a - b));
+    await screenshot(page, 'mature-males');
+
+    await page.goto(`${BASE_URL}/species`);
+    await page.getByLabel('Search names').fill('Brachypelma vagans');
+    const card = page.getByTestId('species-card').filter({ hasText: 'Tliltocatl vagans' });
+    await expect.poll(() => card.count()).toBe(1);
+    expect(await card.textContent()).toContain('formerly Brachypelma vagans');
+    expect(await card.textContent()).toMatch(/Pull window.*day \d+–\d+/);
+    await page.getByLabel('Search names').fill('');
+    await page.getByTestId('species-card').nth(5).waitFor();
+    await screenshot(page, 'species-catalogue');
+  });
+
+  it('shows the add form on a phone', async () => {
+    const phone = await openBrowser({ phone: true });
+    try {
+      await phone.page.goto(`${BASE_URL}/sign-in`);
+      await signIn(phone.page, 'keeper@broodsilk.test');
+      await phone.page.goto(`${BASE_URL}/collection`);
+      await phone.page.getByRole('button', { name: 'Add animal' }).click();
+      const form = phone.page.getByRole('form', { name: 'Add animal' });
+      await form.getByText('Male', { exact: true }).click();
+      await form.getByText('Mature', { exact: true }).click();
+      await form.getByRole('button', { name: 'Add to collection' }).click();
+      await expect.poll(() => form.textContent()).toContain('needs the date of his maturing molt');
+      await screenshot(phone.page, 'add-form-phone');
+    } finally {
+      await phone.close();
+    }
+  });
+});

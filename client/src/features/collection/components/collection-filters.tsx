@@ -1,4 +1,4 @@
-import { Button, Group, Select, TextInput } from '@mantine/core';
+import { Box, Button, Group, Select, TextInput } from '@mantine/core';
 import { useDebouncedCallback } from '@mantine/hooks';
 import type { ReactNode } from 'react';
 import { ANIMAL_SEXES, ANIMAL_STATUSES, type AnimalSex, type AnimalStatus } from '@broodsilk/shared';
@@ -26,7 +26,7 @@ export function CollectionFilters({ filters, onChange, speciesFilter }: Collecti
         w={{ base: '100%', sm: 240 }}
         size="md"
       />
-      <div style={{ flex: '1 1 240px', maxWidth: 320 }}>{speciesFilter}</div>
+      <Box w={{ base: '100%', sm: 300 }}>{speciesFilter}</Box>
       <Select
         label="Sex"
         placeholder="Any"

@@ -34,7 +34,7 @@ export function MatureMales({ hrefOf }: { hrefOf: (id: string) => string }) {
             <Text size="sm" fs="italic">
               {animal.species.scientificName}
             </Text>
-            <Text size="sm" className={CLOCK_STATES[clock.state].tone}>
+            <Text size="sm" className={CLOCK_STATES[clock.state].tone} data-testid="days-left" data-days={clock.daysUntilPastTypical}>
               {daysLeftText(clock.daysUntilPastTypical)}
             </Text>
             <Text size="xs" c="dimmed">

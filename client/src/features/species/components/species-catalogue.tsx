@@ -8,21 +8,21 @@ import { GROUP_LABELS, ORIGIN_LABELS, formatRange, matchedFormerName, sourceLabe
 const PAGE = 24;
 
 function Value({ label, text, value }: { label: string; text: string; value: Sourced<unknown> & { from: keyof typeof ORIGIN_LABELS } }) {
+  const source = `${sourceLabel(value.source)}${value.from !== 'species' ? ` · ${ORIGIN_LABELS[value.from]}` : ''}`;
   return (
-    <Group justify="space-between" gap="xs" wrap="nowrap" align="flex-start">
-      <Text size="sm" c="dimmed">
-        {label}
-      </Text>
-      <Stack gap={0} align="flex-end">
-        <Text size="sm" fw={600}>
+    <div>
+      <Group justify="space-between" gap="xs" wrap="nowrap">
+        <Text size="sm" c="dimmed">
+          {label}
+        </Text>
+        <Text size="sm" fw={600} style={{ whiteSpace: 'nowrap' }}>
           {text}
         </Text>
-        <Text size="xs" c="dimmed" ta="right">
-          {sourceLabel(value.source)}
-          {value.from !== 'species' ? ` · ${ORIGIN_LABELS[value.from]}` : ''}
-        </Text>
-      </Stack>
-    </Group>
+      </Group>
+      <Text size="xs" c="dimmed" lineClamp={2} title={source}>
+        Source: {source}
+      </Text>
+    </div>
   );
 }
 
