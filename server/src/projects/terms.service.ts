@@ -90,7 +90,7 @@ export class TermsService {
   /** The owner proposes a new version; they accept it by proposing, every partner party still has to. */
   async propose(viewer: AuthUser, access: ProjectAccess, dto: ProposeTermsDto): Promise<TermsVersionResponse> {
     const number = await this.em.transactional(async (tx) => {
-      const parties = await tx.find(ProjectMember, { project: access.project.id, role: { $in: ['owner', 'partner'] } }, { populate: ['user'] });
+      const parties = await tx.find(ProjectMember, { project: access.project.id, role: { $in: ['owner', 'partner'] } }, { populate: ['user'], orderBy: { createdAt: 'asc' } });
       const errors = this.validate(dto, parties);
       if (errors.length) throw badRequest(errors);
       const last = await tx.findOne(TermsVersion, { project: access.project.id }, { orderBy: { number: 'desc' } });

@@ -1,0 +1,108 @@
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { Invitation } from '../src/invitations/invitation.entity';
+import { hashInvitationToken } from '../src/invitations/invitation-token';
+import { createTestApp, type TestApp } from './support/test-app';
+import { registerKeeper, type SignedIn } from './support/users';
+import { mailsTo, waitForMail } from './support/mail-sink';
+import { createProject } from './support/projects';
+
+let t: TestApp;
+let mira: SignedIn;
+let tomasz: SignedIn;
+const http = () => request(t.app.getHttpServer());
+
+beforeAll(async () => {
+  t = await createTestApp();
+  mira = await registerKeeper(t.app, 'Mira');
+  tomasz = await registerKeeper(t.app, 'Tomasz');
+});
+afterAll(async () => {
+  await t.close();
+});
+
+const LINK = /\/invitations\/([A-Za-z0-9_-]{43})\b/;
+
+/** The token of an invitation mail to `to` about `title`, other than `not` (an older link still in the sink). */
+async function tokenFromMail(to: string, title: string, not?: string): Promise<string> {
+  await waitForMail(to, new RegExp(title));
+  for (let attempt = 0; attempt < 60; attempt += 1) {
+    const tokens = (await mailsTo(to))
+      .filter((m) => (m.subject ?? '').includes(title))
+      .map((m) => LINK.exec(m.text ?? '')?.[1])
+      .filter((x): x is string => !!x && x !== not);
+    if (tokens.length) return tokens[0];
+    await new Promise((r) => setTimeout(r, 150));
+  }
+  throw new Error(`no new invitation mail to ${to} about ${title}`);
+}
+
+describe('invitations', () => {
+  it('an e-mailed link shows the project, joins the invited keeper once, and then stops working', async () => {
+    const p = await createProject(t.app, t.orm, mira, { title: `Invite test ${Date.now()}` });
+    const res = await http().post(`/api/projects/${p.id}/invitations`).set('Authorization', mira.bearer).send({ email: tomasz.user.email, role: 'partner' }).expect(201);
+    expect(res.body).toMatchObject({ email: tomasz.user.email.toLowerCase(), role: 'partner', memberId: null });
+    const mail = await waitForMail(tomasz.user.email, new RegExp(p.title));
+    expect(mail.subject).toBe(`Mira invites you to the breeding project "${p.title}"`);
+    const token = LINK.exec(mail.text ?? '')![1];
+    // Only the hash is stored.
+    const row = await t.orm.em.fork().findOneOrFail(Invitation, res.body.id);
+    expect(row.tokenHash).toBe(hashInvitationToken(token));
+    expect(row.tokenHash).not.toContain(token);
+
+    const preview = await http().get(`/api/invitations/${token}`).expect(200);
+    expect(preview.body).toMatchObject({ projectTitle: p.title, inviterName: 'Mira', role: 'partner', valid: true, problem: null });
+    await http().get(`/api/projects/${p.id}`).set('Authorization', tomasz.bearer).expect(404);
+    await http().post(`/api/invitations/${token}/accept`).expect(401);
+    const joined = await http().post(`/api/invitations/${token}/accept`).set('Authorization', tomasz.bearer).expect(200);
+    expect(joined.body).toEqual({ projectId: p.id, role: 'partner' });
+    const seen = await http().get(`/api/projects/${p.id}`).set('Authorization', tomasz.bearer).expect(200);
+    expect(seen.body.myRole).toBe('partner');
+
+    const again = await http().post(`/api/invitations/${token}/accept`).set('Authorization', tomasz.bearer).expect(410);
+    expect(again.body.message).toBe('This invitation has already been used.');
+    expect((await http().get(`/api/invitations/${token}`).expect(200)).body).toMatchObject({ valid: false, problem: 'This invitation has already been used.' });
+    await http().get('/api/invitations/not-a-real-token').expect(404);
+  });
+
+  it('an expired link is refused with a clear message', async () => {
+    const p = await createProject(t.app, t.orm, mira, { title: `Expiry test ${Date.now()}` });
+    const invitee = await registerKeeper(t.app, 'Late Reader');
+    await http().post(`/api/projects/${p.id}/invitations`).set('Authorization', mira.bearer).send({ email: invitee.user.email, role: 'caretaker' }).expect(201);
+    const token = await tokenFromMail(invitee.user.email, p.title);
+    await t.orm.em.fork().nativeUpdate(Invitation, { tokenHash: hashInvitationToken(token) }, { expiresAt: new Date(Date.now() - 60_000) });
+    const res = await http().post(`/api/invitations/${token}/accept`).set('Authorization', invitee.bearer).expect(410);
+    expect(res.body.message).toMatch(/expired; ask the project owner to send a new one/);
+    await http().get(`/api/projects/${p.id}`).set('Authorization', invitee.bearer).expect(404);
+  });
+
+  it('a re-send replaces the old link; accepting links the outside party to the account', async () => {
+    const p = await createProject(t.app, t.orm, mira, { title: `Resend test ${Date.now()}` });
+    const invitee = await registerKeeper(t.app, 'Jonas');
+    const party = await http().post(`/api/projects/${p.id}/members`).set('Authorization', mira.bearer).send({ name: 'Jonas (lends the male)', email: invitee.user.email, role: 'partner' }).expect(201);
+    await http().post(`/api/projects/${p.id}/invitations`).set('Authorization', mira.bearer).send({ email: invitee.user.email, role: 'caretaker', memberId: party.body.id }).expect(400);
+    await http().post(`/api/projects/${p.id}/invitations`).set('Authorization', mira.bearer).send({ email: invitee.user.email, role: 'partner', memberId: party.body.id }).expect(201);
+    const first = await tokenFromMail(invitee.user.email, p.title);
+    await http().post(`/api/projects/${p.id}/invitations`).set('Authorization', mira.bearer).send({ email: invitee.user.email, role: 'partner', memberId: party.body.id }).expect(201);
+    const second = await tokenFromMail(invitee.user.email, p.title, first);
+    expect(second).not.toBe(first);
+    const old = await http().post(`/api/invitations/${first}/accept`).set('Authorization', invitee.bearer).expect(410);
+    expect(old.body.message).toMatch(/replaced by a newer one/);
+    await http().post(`/api/invitations/${second}/accept`).set('Authorization', invitee.bearer).expect(200);
+    const members = await http().get(`/api/projects/${p.id}/members`).set('Authorization', mira.bearer).expect(200);
+    expect(members.body).toHaveLength(2);
+    expect(members.body[1]).toMatchObject({ id: party.body.id, userId: invitee.user.id, hasAccount: true, role: 'partner' });
+  });
+
+  it('only the owner invites; a member cannot be invited twice', async () => {
+    const p = await createProject(t.app, t.orm, mira, { title: `Owner only ${Date.now()}` });
+    const partner = await registerKeeper(t.app, 'Partner');
+    await http().post(`/api/projects/${p.id}/invitations`).set('Authorization', mira.bearer).send({ email: partner.user.email, role: 'partner' }).expect(201);
+    await http().post(`/api/invitations/${await tokenFromMail(partner.user.email, p.title)}/accept`).set('Authorization', partner.bearer).expect(200);
+    const res = await http().post(`/api/projects/${p.id}/invitations`).set('Authorization', partner.bearer).send({ email: 'friend@example.test', role: 'caretaker' }).expect(403);
+    expect(res.body.message).toMatch(/Only the owner/);
+    await http().post(`/api/projects/${p.id}/invitations`).set('Authorization', mira.bearer).send({ email: partner.user.email, role: 'partner' }).expect(409);
+    const bad = await http().post(`/api/projects/${p.id}/invitations`).set('Authorization', mira.bearer).send({ email: 'nope', role: 'owner' }).expect(400);
+    expect(bad.body.details.map((d: { field: string }) => d.field).sort()).toEqual(['email', 'role']);
+  });
+});
