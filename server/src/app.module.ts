@@ -63,6 +63,7 @@ function staticClient(): DynamicModule[] {
     ActivityModule,
     InvitationsModule,
     SacsModule,
+    AccountsModule,
   ],
   providers: [
     { provide: APP_FILTER, useClass: AllExceptionsFilter },

@@ -27,3 +27,4 @@ export * from './projects/activity.types.js';
 export * from './sacs/sacs.types.js';
 export * from './sacs/care-log.types.js';
 export * from './sacs/brood.types.js';
+export * from './accounts/account-api.types.js';

@@ -1,0 +1,38 @@
+import { Module, type OnModuleInit } from '@nestjs/common';
+import { MikroOrmModule } from '@mikro-orm/nestjs';
+import { ActivityModule } from '../activity/activity.module';
+import { ProjectsModule } from '../projects/projects.module';
+import { ProjectFactsRegistry } from '../projects/project-facts.registry';
+import { Project } from '../projects/project.entity';
+import { ProjectAccount } from './project-account.entity';
+import { LedgerEntryRow } from './ledger-entry.entity';
+import { ShareBasis } from './share-basis.entity';
+import { AccountLock } from './account-lock';
+import { SharesService } from './shares.service';
+import { BalancesService } from './balances.service';
+import { EntriesService } from './entries.service';
+import { SharesController } from './shares.controller';
+import { BalancesController } from './balances.controller';
+import { EntriesController } from './entries.controller';
+import { loadAccount } from './account-loader';
+import { isSettled } from './balances.mapper';
+
+@Module({
+  imports: [MikroOrmModule.forFeature([ProjectAccount, LedgerEntryRow, ShareBasis]), ProjectsModule, ActivityModule],
+  controllers: [SharesController, BalancesController, EntriesController],
+  providers: [AccountLock, SharesService, BalancesService, EntriesService],
+  exports: [AccountLock, EntriesService, BalancesService, SharesService],
+})
+export class AccountsModule implements OnModuleInit {
+  constructor(private readonly facts: ProjectFactsRegistry) {}
+
+  onModuleInit(): void {
+    // Stage `shares-settled`: nothing owed in young or money (see balances.mapper isSettled).
+    this.facts.register(async (em, projectIds) => {
+      const projects = await em.find(Project, { id: { $in: projectIds } });
+      const out = new Map<string, { sharesSettled: boolean }>();
+      for (const p of projects) out.set(p.id, { sharesSettled: isSettled(await loadAccount(em, p)) });
+      return out;
+    });
+  }
+}

@@ -1,0 +1,59 @@
+import { IsIn, IsInt, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, MinLength } from 'class-validator';
+import { HAND_OVER_METHODS, RECORDABLE_ENTRY_KINDS, type CreateEntryRequest, type HandOverMethod, type RecordableEntryKind } from '@broodsilk/shared';
+import { IsCalendarDate } from '../../animals/dto/is-calendar-date.validator';
+
+const MAX_MINOR = 2_000_000_000; // fits the integer columns
+
+/** Types only; which fields each kind needs is checked in EntriesService with messages per kind. */
+export class CreateEntryDto implements CreateEntryRequest {
+  @IsIn(RECORDABLE_ENTRY_KINDS, { message: `kind must be one of: ${RECORDABLE_ENTRY_KINDS.join(', ')}.` })
+  kind!: RecordableEntryKind;
+
+  @IsCalendarDate()
+  date!: string;
+
+  @IsOptional() @IsUUID('all', { message: 'memberId must be the id of a party of this project.' })
+  memberId?: string;
+
+  @IsOptional() @IsUUID('all', { message: 'sacId must be the id of a sac of this project.' })
+  sacId?: string;
+
+  @IsOptional() @IsInt({ message: 'count must be a whole number.' }) @Min(1, { message: 'count must be at least 1.' }) @Max(100_000)
+  count?: number;
+
+  @IsOptional() @IsIn(HAND_OVER_METHODS, { message: 'method must be pick-up or shipment.' })
+  method?: HandOverMethod;
+
+  @IsOptional() @IsString() @MinLength(1) @MaxLength(100)
+  carrier?: string;
+
+  @IsOptional() @IsString() @MinLength(1) @MaxLength(100)
+  tracking?: string;
+
+  @IsOptional() @IsInt({ message: 'priceMinor must be a whole number of minor units (cents).' }) @Min(0) @Max(MAX_MINOR)
+  priceMinor?: number;
+
+  @IsOptional() @IsInt({ message: 'pricePerSpiderlingMinor must be a whole number of minor units (cents).' }) @Min(0) @Max(MAX_MINOR)
+  pricePerSpiderlingMinor?: number;
+
+  @IsOptional() @IsUUID('all', { message: 'fromMemberId must be the id of a party of this project.' })
+  fromMemberId?: string;
+
+  @IsOptional() @IsUUID('all', { message: 'toMemberId must be the id of a party of this project.' })
+  toMemberId?: string;
+
+  @IsOptional() @IsInt({ message: 'amountMinor must be a whole number of minor units (cents).' }) @Min(1, { message: 'amountMinor must be above 0.' }) @Max(MAX_MINOR)
+  amountMinor?: number;
+
+  @IsOptional() @Matches(/^[A-Z]{3}$/, { message: 'currency must be an ISO 4217 code such as EUR.' })
+  currency?: string;
+
+  @IsOptional() @IsUUID('all', { message: 'reversesId must be the id of an earlier entry.' })
+  reversesId?: string;
+
+  @IsOptional() @IsString() @MinLength(3, { message: 'reason must say in a few words why the entry is reversed.' }) @MaxLength(500)
+  reason?: string;
+
+  @IsOptional() @IsString() @MaxLength(1000)
+  note?: string;
+}

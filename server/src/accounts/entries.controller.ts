@@ -1,0 +1,28 @@
+import { Body, Controller, Get, Param, ParseUUIDPipe, Post } from '@nestjs/common';
+import type { HandOverFormResponse, LedgerEntryResponse } from '@broodsilk/shared';
+import { CurrentProject, ProjectRoles } from '../common/decorators/project-roles.decorator';
+import { CurrentUser } from '../common/decorators/current-user.decorator';
+import type { AuthUser } from '../auth/auth-user';
+import type { ProjectAccess } from '../projects/project-access.service';
+import { EntriesService } from './entries.service';
+import { BalancesService } from './balances.service';
+import { CreateEntryDto } from './dto/create-entry.dto';
+import { ConfirmEntryDto } from './dto/confirm-entry.dto';
+
+/** The ledger is append-only: there is no PATCH or DELETE here on purpose. */
+@Controller('projects/:projectId/entries')
+export class EntriesController {
+  constructor(private readonly entries: EntriesService, private readonly balances: BalancesService) {}
+
+  @Get() @ProjectRoles('owner', 'partner')
+  list(@CurrentProject() a: ProjectAccess): Promise<LedgerEntryResponse[]> { return this.entries.list(a); }
+
+  @Get('hand-over-form') @ProjectRoles('owner', 'partner')
+  form(@CurrentProject() a: ProjectAccess): Promise<HandOverFormResponse> { return this.balances.handOverForm(a); }
+
+  @Post() @ProjectRoles('owner', 'partner')
+  create(@CurrentProject() a: ProjectAccess, @CurrentUser() u: AuthUser, @Body() dto: CreateEntryDto): Promise<LedgerEntryResponse> { return this.entries.create(a, u, dto); }
+
+  @Post(':entryId/confirm') @ProjectRoles('owner', 'partner')
+  confirm(@CurrentProject() a: ProjectAccess, @CurrentUser() u: AuthUser, @Param('entryId', ParseUUIDPipe) id: string, @Body() dto: ConfirmEntryDto): Promise<LedgerEntryResponse> { return this.entries.confirm(a, u, id, dto); }
+}

@@ -1,0 +1,121 @@
+import { BadRequestException, ConflictException, ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
+import { EntityManager } from '@mikro-orm/postgresql';
+import type { ConfirmEntryRequest, CreateEntryRequest, LedgerEntryResponse } from '@broodsilk/shared';
+import type { AuthUser } from '../auth/auth-user';
+import { ActivityService } from '../activity/activity.service';
+import type { ProjectAccess } from '../projects/project-access.service';
+import { Project } from '../projects/project.entity';
+import { User } from '../users/user.entity';
+import { AccountLock } from './account-lock';
+import { loadAccount } from './account-loader';
+import type { AccountView } from './account-view';
+import { toEntryResponses } from './accounts.mapper';
+import { draftEntry, type EntryDraft } from './entry-rules';
+import { LedgerEntryRow } from './ledger-entry.entity';
+import { describeEntry } from './entry-words';
+
+@Injectable()
+export class EntriesService {
+  constructor(
+    private readonly em: EntityManager,
+    private readonly lock: AccountLock,
+    private readonly activity: ActivityService,
+  ) {}
+
+  async list(access: ProjectAccess): Promise<LedgerEntryResponse[]> {
+    return toEntryResponses(await loadAccount(this.em, access.project));
+  }
+
+  /** Checks and appends one entry under the account lock, with its activity record, in one transaction. */
+  async create(access: ProjectAccess, user: AuthUser, dto: CreateEntryRequest): Promise<LedgerEntryResponse> {
+    return this.write(access, async (tx, view) => draftEntry(view, access, user.id, dto), user);
+  }
+
+  /** The recipient confirms a hand-over (arrival counts) or the payee confirms a payment. */
+  async confirm(access: ProjectAccess, user: AuthUser, entryId: string, dto: ConfirmEntryRequest): Promise<LedgerEntryResponse> {
+    return this.write(access, async (_tx, view) => confirmationDraft(view, access, user.id, entryId, dto), user);
+  }
+
+  /** Appends a row the payment provider reported (no user); used by the webhook inside its own transaction. */
+  async appendInTransaction(tx: EntityManager, project: Project, draft: EntryDraft & { source: 'payment-provider'; providerRef: string }): Promise<LedgerEntryRow> {
+    await this.lock.take(tx, project.id);
+    const row = await this.persistRow(tx, project, draft, null);
+    const view = await loadAccount(tx, project);
+    this.recordActivity(tx, view, row, null);
+    return row;
+  }
+
+  private async write(access: ProjectAccess, draft: (tx: EntityManager, view: AccountView) => Promise<EntryDraft>, user: AuthUser): Promise<LedgerEntryResponse> {
+    return this.em.transactional(async (tx) => {
+      await this.lock.take(tx, access.project.id);
+      const view = await loadAccount(tx, access.project);
+      const row = await this.persistRow(tx, access.project, await draft(tx, view), user.id);
+      await tx.flush();
+      const after = await loadAccount(tx, access.project);
+      this.recordActivity(tx, after, row, user.id);
+      await tx.flush();
+      return toEntryResponses(after).find((e) => e.id === row.id)!;
+    });
+  }
+
+  private async persistRow(tx: EntityManager, project: Project, d: EntryDraft & { source?: 'manual' | 'payment-provider'; providerRef?: string }, userId: string | null): Promise<LedgerEntryRow> {
+    const [{ n }] = await tx.execute<{ n: number }[]>(`select nextval('ledger_entry_seq')::int as n`);
+    const row = tx.create(LedgerEntryRow, {
+      ...d,
+      project: tx.getReference(Project, project.id),
+      seq: Number(n),
+      recordedBy: userId ? tx.getReference(User, userId) : null,
+    });
+    await tx.flush();
+    return row;
+  }
+
+  private recordActivity(tx: EntityManager, view: AccountView, row: LedgerEntryRow, actorId: string | null): void {
+    this.activity.record(tx, {
+      projectId: view.data.project.id,
+      actorId,
+      kind: `account.${row.kind}`,
+      subjectType: 'ledger-entry',
+      subjectId: row.id,
+      summary: describeEntry(view, row),
+      data: { kind: row.kind, count: row.count ?? null, amountMinor: row.amountMinor ?? null },
+      audience: 'partners',
+    });
+  }
+}
+
+/** Who confirms: the party it is about, or the owner for a party without an account. */
+function assertConfirmer(access: ProjectAccess, userId: string, party: NonNullable<LedgerEntryRow['party']>, what: string): void {
+  const mine = party.user ? party.user.id === userId : access.role === 'owner';
+  if (!mine) throw new ForbiddenException(`Only ${what} confirms this${party.user ? '' : ' (or the owner, for a party without an account)'}.`);
+}
+
+function confirmationDraft(view: AccountView, access: ProjectAccess, userId: string, entryId: string, dto: ConfirmEntryRequest): EntryDraft {
+  const row = view.data.rows.find((r) => r.id === entryId);
+  if (!row) throw new NotFoundException('There is no such entry in this project.');
+  const date = dto.date ?? new Date().toISOString().slice(0, 10);
+  const inForce = new Set(view.balances.inForce);
+  if (row.kind === 'hand-over') {
+    assertConfirmer(access, userId, row.party!, 'the party who received the hand-over');
+    if (!inForce.has(row.id)) throw new ConflictException('This hand-over was reversed by a correction; there is nothing to confirm.');
+    if (view.data.rows.some((r) => r.kind === 'arrival' && r.target?.id === row.id && inForce.has(r.id))) {
+      throw new ConflictException('This hand-over is already confirmed.');
+    }
+    if (dto.arrivedAlive === undefined || dto.arrivedDead === undefined) {
+      throw new BadRequestException('Say how many arrived alive (arrivedAlive) and how many dead (arrivedDead).');
+    }
+    if (dto.arrivedAlive + dto.arrivedDead !== row.count) {
+      throw new BadRequestException(`The hand-over was of ${row.count} young; arrived alive and arrived dead must add up to ${row.count} (got ${dto.arrivedAlive + dto.arrivedDead}).`);
+    }
+    return { kind: 'arrival', date, target: row, party: row.party!, arrivedAlive: dto.arrivedAlive, arrivedDead: dto.arrivedDead };
+  }
+  if (row.kind === 'money') {
+    assertConfirmer(access, userId, row.toParty!, 'the party who received the payment');
+    if (!view.pending.has(row.id)) throw new ConflictException('This payment already counts; there is nothing to confirm.');
+    if (view.data.rows.some((r) => r.kind === 'correction' && r.target?.id === row.id)) {
+      throw new ConflictException('This payment was reversed by a correction; there is nothing to confirm.');
+    }
+    return { kind: 'confirmation', date, target: row, party: row.toParty! };
+  }
+  throw new BadRequestException('Only hand-overs and payments are confirmed.');
+}

@@ -1,0 +1,122 @@
+import { BadRequestException, ConflictException, ForbiddenException, NotFoundException } from '@nestjs/common';
+import { checkWithdrawal, type CreateEntryRequest } from '@broodsilk/shared';
+import type { ProjectMember } from '../projects/project-member.entity';
+import type { ProjectAccess } from '../projects/project-access.service';
+import type { AccountView, SacShareState } from './account-view';
+import type { LedgerEntryRow } from './ledger-entry.entity';
+
+/** The checked parts of a new row; EntriesService turns them into an entity. */
+export type EntryDraft = Partial<Pick<LedgerEntryRow, 'sacId' | 'count' | 'method' | 'carrier' | 'tracking' | 'priceMinor' | 'pricePerSpiderlingMinor' | 'amountMinor' | 'currency' | 'arrivedAlive' | 'arrivedDead' | 'reason' | 'note'>> & {
+  kind: LedgerEntryRow['kind'];
+  date: string;
+  party?: ProjectMember;
+  fromParty?: ProjectMember;
+  toParty?: ProjectMember;
+  target?: LedgerEntryRow;
+};
+
+const need = (value: unknown, message: string): void => {
+  if (value === undefined || value === null) throw new BadRequestException(message);
+};
+
+function partyOf(view: AccountView, id: string | undefined, field: string): ProjectMember {
+  need(id, `${field} is required: say which party of the project this is about.`);
+  const m = view.data.members.find((x) => x.id === id);
+  if (!m) throw new BadRequestException(`${field} is not a party of this project.`);
+  if (m.role === 'caretaker') throw new BadRequestException(`${view.nameOf(m.id)} is a caretaker of this project and holds no share in its account.`);
+  return m;
+}
+
+function sacFor(view: AccountView, dto: CreateEntryRequest): SacShareState {
+  if (dto.sacId) {
+    const s = view.sacs.find((x) => x.fact.sacId === dto.sacId);
+    if (!s) throw new BadRequestException('sacId is not a sac of this project.');
+    return s;
+  }
+  const withYoung = view.sacs.filter((s) => s.aliveInCare > 0);
+  if (withYoung.length === 1) return withYoung[0]!;
+  if (withYoung.length === 0) throw new ConflictException('No sac of this project has young in care, so none can be handed over, sold or cashed out.');
+  throw new BadRequestException('Several sacs have young in care: say which one with sacId.');
+}
+
+/** Young out of a share: fits the sac's live count and what the party is still owed (409 saying by how much). */
+function withdrawal(view: AccountView, dto: CreateEntryRequest, party: ProjectMember): Pick<EntryDraft, 'sacId' | 'count'> {
+  need(dto.count, 'count is required: how many young.');
+  const sac = sacFor(view, dto);
+  const count = dto.count!;
+  if (count > sac.aliveInCare) {
+    throw new ConflictException(`Only ${sac.aliveInCare} young of this sac are alive in care; this is ${count - sac.aliveInCare} more than that.`);
+  }
+  const balance = view.balances.parties.find((p) => p.partyId === party.id);
+  if (!balance || !view.data.terms?.lines.getItems().some((l) => l.member.id === party.id)) {
+    throw new ConflictException(`${view.nameOf(party.id)} has no share in the terms in force.`);
+  }
+  const check = checkWithdrawal(balance, count);
+  if (check.message) throw new ConflictException(`${view.nameOf(party.id)}: ${check.message}`);
+  return { sacId: sac.fact.sacId, count };
+}
+
+function currencyOf(view: AccountView, given: string | undefined): string {
+  const currency = view.data.terms!.currency;
+  if (given && given !== currency) throw new BadRequestException(`This account is kept in ${currency}; ${given} cannot be recorded in it.`);
+  return currency;
+}
+
+/** Who may record what: the owner everything; a partner only payments they are part of, and corrections of their own entries. */
+function assertMayRecord(view: AccountView, access: ProjectAccess, userId: string, dto: CreateEntryRequest): void {
+  if (access.role === 'owner') return;
+  const me = access.member.id;
+  if (dto.kind === 'money' && (dto.fromMemberId === me || dto.toMemberId === me)) return;
+  if (dto.kind === 'correction') {
+    const target = view.data.rows.find((r) => r.id === dto.reversesId);
+    if (target && target.recordedBy?.id === userId) return;
+    throw new ForbiddenException('A partner may only correct entries they recorded themselves; ask the project owner for others.');
+  }
+  if (dto.kind === 'money') throw new ForbiddenException('A partner may only record payments they made or received.');
+  throw new ForbiddenException('Only the owner of this project records hand-overs, sales and cash-outs; partners confirm hand-overs and record payments.');
+}
+
+export function draftEntry(view: AccountView, access: ProjectAccess, userId: string, dto: CreateEntryRequest): EntryDraft {
+  assertMayRecord(view, access, userId, dto);
+  const base = { kind: dto.kind, date: dto.date, note: dto.note ?? null };
+  if (dto.kind !== 'correction' && !view.data.terms) {
+    throw new ConflictException('No version of the terms is in force yet, so nothing can be recorded against shares. Every partner must accept the terms first.');
+  }
+  switch (dto.kind) {
+    case 'hand-over': {
+      need(dto.method, 'method is required: pick-up or shipment.');
+      if (dto.method === 'shipment' && (!dto.carrier || !dto.tracking)) throw new BadRequestException('A shipment needs the carrier and the tracking reference.');
+      if (dto.method === 'pick-up' && (dto.carrier || dto.tracking)) throw new BadRequestException('A pick-up has no carrier or tracking reference.');
+      const party = partyOf(view, dto.memberId, 'memberId');
+      return { ...base, party, method: dto.method, carrier: dto.carrier ?? null, tracking: dto.tracking ?? null, ...withdrawal(view, dto, party) };
+    }
+    case 'sale': {
+      need(dto.priceMinor, 'priceMinor is required: the total price in minor units (cents).');
+      const party = partyOf(view, dto.memberId, 'memberId');
+      return { ...base, party, priceMinor: dto.priceMinor, currency: currencyOf(view, dto.currency), ...withdrawal(view, dto, party) };
+    }
+    case 'cash-out': {
+      const party = partyOf(view, dto.memberId, 'memberId');
+      if (party.id === view.owner.id) throw new BadRequestException('The project owner cannot cash out to themselves; cash-outs are paid by the owner.');
+      return { ...base, party, pricePerSpiderlingMinor: dto.pricePerSpiderlingMinor ?? null, ...withdrawal(view, dto, party) };
+    }
+    case 'money': {
+      need(dto.amountMinor, 'amountMinor is required: the amount in minor units (cents).');
+      const fromParty = partyOf(view, dto.fromMemberId, 'fromMemberId');
+      const toParty = partyOf(view, dto.toMemberId, 'toMemberId');
+      if (fromParty.id === toParty.id) throw new BadRequestException('A payment goes from one party to another, not to the same party.');
+      return { ...base, fromParty, toParty, amountMinor: dto.amountMinor, currency: currencyOf(view, dto.currency) };
+    }
+    case 'correction': {
+      need(dto.reversesId, 'reversesId is required: the entry this correction reverses.');
+      need(dto.reason, 'reason is required: say why the entry is reversed.');
+      const target = view.data.rows.find((r) => r.id === dto.reversesId);
+      if (!target) throw new NotFoundException('There is no such entry in this project.');
+      if (target.kind === 'confirmation') throw new BadRequestException('A confirmation cannot be reversed on its own; reverse the payment it confirms.');
+      const inForce = new Set(view.balances.inForce);
+      const already = view.data.rows.find((r) => r.kind === 'correction' && r.target?.id === target.id && (inForce.has(r.id) || view.pending.has(target.id)));
+      if (already) throw new ConflictException('This entry is already reversed by an earlier correction.');
+      return { ...base, target, reason: dto.reason };
+    }
+  }
+}

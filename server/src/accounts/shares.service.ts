@@ -1,0 +1,20 @@
+import { Injectable } from '@nestjs/common';
+import { EntityManager } from '@mikro-orm/postgresql';
+import type { SharesResponse } from '@broodsilk/shared';
+import type { ProjectAccess } from '../projects/project-access.service';
+import { loadAccount } from './account-loader';
+import { trackShareBases } from './share-bases';
+import { toSharesResponse } from './shares.mapper';
+
+@Injectable()
+export class SharesService {
+  constructor(private readonly em: EntityManager) {}
+
+  /** Shares per sac with their explanation, and what changed since the basis before. */
+  async shares(access: ProjectAccess): Promise<SharesResponse> {
+    return this.em.transactional(async (tx) => {
+      const view = await loadAccount(tx, access.project);
+      return toSharesResponse(view, await trackShareBases(tx, view));
+    });
+  }
+}
