@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
-import { currentCountsOf } from './sac-queries';
+import { currentCountsOf, latestCountsOf } from './sac-queries';
 
 /** The brood's counts as other modules (the partner account) read them. */
 @Injectable()
@@ -20,5 +20,10 @@ export class BroodService {
   async currentCounts(sacIds: string[], em: EntityManager = this.em): Promise<Map<string, number>> {
     const found = await currentCountsOf(em, sacIds);
     return new Map(sacIds.map((id) => [id, found.get(id) ?? 0]));
+  }
+
+  /** Alive and the instant of each sac's latest count (sacs without a count are missing from the map). */
+  latestCounts(sacIds: string[], em: EntityManager = this.em): Promise<Map<string, { alive: number; at: Date }>> {
+    return latestCountsOf(em, sacIds);
   }
 }

@@ -22,15 +22,19 @@ export async function lastRollsOf(em: EntityManager, sacIds: string[]): Promise<
   return new Map(rows.map((r) => [r.sac_id, new Date(r.at)]));
 }
 
-/** The latest alive count per sac (by instant, then by when it was written). */
-export async function currentCountsOf(em: EntityManager, sacIds: string[]): Promise<Map<string, number>> {
+/** The latest count per sac (by instant, then by when it was written): alive, and when it was taken. */
+export async function latestCountsOf(em: EntityManager, sacIds: string[]): Promise<Map<string, { alive: number; at: Date }>> {
   if (!sacIds.length) return new Map();
-  const rows = await em.getConnection().execute<{ sac_id: string; alive: number }[]>(
-    `select distinct on (sac_id) sac_id, alive from brood_counts
+  const rows = await em.getConnection().execute<{ sac_id: string; alive: number; at: Date }[]>(
+    `select distinct on (sac_id) sac_id, alive, at from brood_counts
       where sac_id in ${marks(sacIds)} order by sac_id, at desc, created_at desc`,
     sacIds,
   );
-  return new Map(rows.map((r) => [r.sac_id, Number(r.alive)]));
+  return new Map(rows.map((r) => [r.sac_id, { alive: Number(r.alive), at: new Date(r.at) }]));
+}
+
+export async function currentCountsOf(em: EntityManager, sacIds: string[]): Promise<Map<string, number>> {
+  return new Map([...(await latestCountsOf(em, sacIds))].map(([id, c]) => [id, c.alive]));
 }
 
 export async function openedSacsOf(em: EntityManager, sacIds: string[]): Promise<Set<string>> {

@@ -14,13 +14,15 @@ import { SacsService } from './sacs.service';
 import { BroodService } from './brood.service';
 import { ProjectSacsController, SacsController } from './sacs.controller';
 import { toSacFact } from './sacs.mapper';
+import { CareLogService } from './care-log.service';
+import { CareLogController } from './care-log.controller';
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 @Module({
   imports: [MikroOrmModule.forFeature([Sac, SacLogEntry, SacOpening, BroodCount]), ProjectsModule, ActivityModule],
-  controllers: [ProjectSacsController, SacsController],
-  providers: [Clock, SacViewsService, SacsService, BroodService],
+  controllers: [ProjectSacsController, SacsController, CareLogController],
+  providers: [Clock, SacViewsService, SacsService, BroodService, CareLogService],
   exports: [Clock, SacViewsService, SacsService, BroodService],
 })
 export class SacsModule implements OnModuleInit {

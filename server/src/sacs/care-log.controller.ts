@@ -1,0 +1,24 @@
+import { Body, Controller, Get, Param, ParseUUIDPipe, Post } from '@nestjs/common';
+import type { CareLogEntryResponse } from '@broodsilk/shared';
+import { AnyProjectMember, CurrentProject, ProjectFrom, ProjectRoles } from '../common/decorators/project-roles.decorator';
+import { CurrentUser } from '../common/decorators/current-user.decorator';
+import type { AuthUser } from '../auth/auth-user';
+import type { ProjectAccess } from '../projects/project-access.service';
+import { CareLogService } from './care-log.service';
+import { CareLogEntryDto } from './dto/care-log-entry.dto';
+
+/** Partners read the log; the owner and caretakers write it (PRODUCT.md: caretakers add log entries). */
+@Controller('sacs/:id/log')
+export class CareLogController {
+  constructor(private readonly log: CareLogService) {}
+
+  @Get() @AnyProjectMember() @ProjectFrom('sac')
+  list(@CurrentProject() a: ProjectAccess, @Param('id', ParseUUIDPipe) id: string): Promise<CareLogEntryResponse[]> {
+    return this.log.list(a, id);
+  }
+
+  @Post() @ProjectRoles('owner', 'caretaker') @ProjectFrom('sac')
+  add(@CurrentProject() a: ProjectAccess, @CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: CareLogEntryDto): Promise<CareLogEntryResponse> {
+    return this.log.add(a, user, id, dto);
+  }
+}

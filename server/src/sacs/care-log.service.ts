@@ -1,0 +1,85 @@
+import { BadRequestException, ConflictException, Injectable } from '@nestjs/common';
+import { EntityManager } from '@mikro-orm/postgresql';
+import { todayIn, type CareLogEntryResponse } from '@broodsilk/shared';
+import type { AuthUser } from '../auth/auth-user';
+import type { ProjectAccess } from '../projects/project-access.service';
+import { ActivityService } from '../activity/activity.service';
+import { User } from '../users/user.entity';
+import type { Sac } from './sac.entity';
+import { SacLogEntry } from './sac-log-entry.entity';
+import { SacsService } from './sacs.service';
+import { Clock } from './clock';
+import { assertNotFuture, fieldError } from './sac-rules';
+import { assertStageMove, entryValues } from './care-log-rules';
+import { careLogSummary, toCareLogResponse } from './care-log.mapper';
+import type { CareLogEntryDto } from './dto/care-log-entry.dto';
+
+@Injectable()
+export class CareLogService {
+  constructor(
+    private readonly em: EntityManager,
+    private readonly sacs: SacsService,
+    private readonly activity: ActivityService,
+    private readonly clock: Clock,
+  ) {}
+
+  /** Newest first; struck entries stay, flagged with the strike that corrected them. */
+  async list(access: ProjectAccess, sacId: string): Promise<CareLogEntryResponse[]> {
+    const sac = await this.sacs.find(access, sacId);
+    const entries = await this.em.find(SacLogEntry, { sac }, { populate: ['author'], orderBy: { at: 'desc', createdAt: 'desc' } });
+    const struckBy = new Map(entries.filter((e) => e.strikes).map((e) => [e.strikes!.id, e]));
+    return entries.map((e) => toCareLogResponse(e, struckBy.get(e.id)));
+  }
+
+  async add(access: ProjectAccess, viewer: AuthUser, sacId: string, dto: CareLogEntryDto): Promise<CareLogEntryResponse> {
+    const now = this.clock.now();
+    const at = dto.at ? new Date(dto.at) : now;
+    assertNotFuture('at', 'time of the entry', at, now);
+    const values = entryValues(dto);
+    const id = await this.em.transactional(async (tx) => {
+      const sac = await this.sacs.find(access, sacId, tx);
+      const atDate = todayIn(viewer.timeZone, at);
+      if (atDate < sac.layDate) throw fieldError('at', `The entry (${atDate}) is dated before the sac was laid (${sac.layDate}).`);
+      const strikes = dto.kind === 'strike' ? await this.strikeTarget(tx, sac, dto) : null;
+      if (dto.kind === 'roll') this.assertRollable(sac, at);
+      if (dto.kind === 'stage') assertStageMove(sac.broodStage, values.stage!);
+      const entry = tx.create(SacLogEntry, {
+        sac, kind: dto.kind, at, author: tx.getReference(User, viewer.id), ...values,
+        text: dto.kind === 'strike' ? dto.reason?.trim() || null : values.text, strikes,
+      });
+      if (dto.kind === 'stage' || strikes?.kind === 'stage') {
+        await tx.flush();
+        sac.broodStage = await this.stageFromLog(tx, sac);
+      }
+      this.activity.record(tx, {
+        projectId: access.project.id, actorId: viewer.id, kind: `care.${dto.kind}`, subjectType: 'sac', subjectId: sac.id,
+        summary: careLogSummary(entry, sac.layDate), data: { entryId: entry.id, at: at.toISOString(), ...(strikes ? { strikes: strikes.id } : {}) }, at,
+      });
+      return entry.id;
+    });
+    const saved = await this.em.findOneOrFail(SacLogEntry, id, { populate: ['author'] });
+    return toCareLogResponse(saved, undefined);
+  }
+
+  private async strikeTarget(tx: EntityManager, sac: Sac, dto: CareLogEntryDto): Promise<SacLogEntry> {
+    if (!dto.strikes) throw fieldError('strikes', 'Say which entry this corrects (its id).');
+    if (!dto.reason?.trim()) throw fieldError('reason', 'Say briefly why the entry is struck.');
+    const target = await tx.findOne(SacLogEntry, { id: dto.strikes, sac });
+    if (!target) throw fieldError('strikes', 'There is no such entry in this sac’s log.');
+    if (target.kind === 'strike') throw fieldError('strikes', 'A correction cannot be struck; add the entry again instead.');
+    if (await tx.count(SacLogEntry, { strikes: target })) throw new ConflictException({ message: 'That entry has already been struck.' });
+    return target;
+  }
+
+  private assertRollable(sac: Sac, at: Date): void {
+    if (!sac.pulledAt) throw new BadRequestException({ message: 'This sac is with its mother: she turns it herself, so rolls apply only once it is pulled.', details: [{ field: 'kind', message: 'No rolls for a sac left with the mother.' }] });
+    if (at < sac.pulledAt) throw fieldError('at', `A roll cannot come before the pull (${sac.pulledAt.toISOString()}).`);
+  }
+
+  /** The brood stage is the latest stage entry not struck (eggs when there is none). */
+  private async stageFromLog(tx: EntityManager, sac: Sac): Promise<Sac['broodStage']> {
+    const entries = await tx.find(SacLogEntry, { sac, kind: 'stage' }, { orderBy: { at: 'desc', createdAt: 'desc' } });
+    const struck = new Set((await tx.find(SacLogEntry, { sac, kind: 'strike' })).map((s) => s.strikes?.id));
+    return entries.find((e) => !struck.has(e.id))?.stage ?? 'eggs';
+  }
+}
