@@ -5,5 +5,7 @@ import { paths } from '@/config/paths';
 export const NAV_ITEMS: NavItem[] = [
   { label: 'Today', to: paths.home.href(), end: true },
   { label: 'Collection', to: paths.collection.href() },
+  { label: 'Projects', to: paths.projects.href() },
+  { label: 'Incubator', to: paths.incubator.href() },
   { label: 'Settings', to: paths.settings.href() },
 ];

@@ -34,12 +34,46 @@ export function createRouter(queryClient: QueryClient) {
           },
         },
         { path: paths.species.path, lazy: () => import('./routes/species') },
+        {
+          path: paths.projects.path,
+          lazy: async () => {
+            const m = await import('./routes/projects');
+            return { Component: m.Component, loader: m.clientLoader(queryClient) };
+          },
+        },
+        { path: paths.newProject.path, lazy: () => import('./routes/project-new') },
+        {
+          path: paths.project.path,
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const m = await import('./routes/project');
+            return { Component: m.Component, loader: m.clientLoader(queryClient) };
+          },
+        },
+        {
+          path: paths.sac.path,
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const m = await import('./routes/sac');
+            return { Component: m.Component, loader: m.clientLoader(queryClient) };
+          },
+        },
+        { path: paths.incubator.path, lazy: () => import('./routes/incubator') },
+        {
+          path: paths.incubatorSac.path,
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const m = await import('./routes/incubator-sac');
+            return { Component: m.Component, loader: m.clientLoader(queryClient) };
+          },
+        },
       ],
     },
     { path: paths.signIn.path, lazy: () => import('./routes/sign-in'), ErrorBoundary: RouteError },
     { path: paths.register.path, lazy: () => import('./routes/register'), ErrorBoundary: RouteError },
     { path: paths.forgotPassword.path, lazy: () => import('./routes/forgot-password'), ErrorBoundary: RouteError },
     { path: paths.resetPassword.path, lazy: () => import('./routes/reset-password'), ErrorBoundary: RouteError },
+    { path: paths.invitation.path, lazy: () => import('./routes/invitation'), ErrorBoundary: RouteError },
     { path: '*', lazy: () => import('./routes/not-found') },
   ]);
 }

@@ -1,0 +1,48 @@
+import { Alert, Anchor, Group } from '@mantine/core';
+import { useQuery, type QueryClient } from '@tanstack/react-query';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import type { ProjectResponse } from '@broodsilk/shared';
+import { PageLoader } from '@/components/ui/page-loader';
+import { paths } from '@/config/paths';
+import { useMe } from '@/features/auth/api/me';
+import { projectQueries } from '@/features/projects/api/projects';
+import { sacQueries, useSac } from '@/features/sacs/api/sacs';
+import { IncubatorEntry } from '@/features/sacs/components/incubator-entry';
+
+export const clientLoader = (qc: QueryClient) => async ({ params }: LoaderFunctionArgs) => {
+  await qc.ensureQueryData(sacQueries.detail(params.sacId!));
+  return null;
+};
+
+/** Species cautions of the pair, in words, for the incubator screen. */
+function speciesCautions(project: ProjectResponse | undefined): string[] {
+  if (!project) return [];
+  const species = [project.femaleAnimal.species, project.maleAnimal.species];
+  const out: string[] = [];
+  if (species.some((s) => s.urticatingHairs)) out.push('Urticating hairs: keep your face away when opening the container; gloves and eye protection help.');
+  if (species.some((s) => s.medicallySignificantVenom))
+    out.push('Medically significant venom: work with tools, never bare hands; young ones are fast. Follow local law and licensed practice.');
+  return out;
+}
+
+export function Component() {
+  const { sacId } = useParams() as { sacId: string };
+  const { data: me } = useMe();
+  const sac = useSac(sacId);
+  const project = useQuery({ ...projectQueries.detail(sac.data?.projectId ?? ''), enabled: !!sac.data });
+  if (!me || sac.isPending) return <PageLoader />;
+  if (sac.isError) return <Alert color="clay">{sac.error.message}</Alert>;
+  return (
+    <>
+      <Group justify="space-between" mb="xs">
+        <Anchor component={Link} to={paths.incubator.href()} size="sm">
+          All sacs in the incubator
+        </Anchor>
+        <Anchor component={Link} to={paths.sac.href(sacId)} size="sm">
+          Full care log
+        </Anchor>
+      </Group>
+      <IncubatorEntry sac={sac.data} timeZone={me.timeZone} temperatureUnit={me.temperatureUnit} title={project.data?.title} speciesCautions={speciesCautions(project.data)} />
+    </>
+  );
+}

@@ -1,0 +1,113 @@
+import { Alert, Anchor, Badge, Card, Grid, Group, Stack, Text, Title } from '@mantine/core';
+import type { QueryClient } from '@tanstack/react-query';
+import type { ReactNode } from 'react';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { PageHeader } from '@/components/ui/page-header';
+import { PageLoader } from '@/components/ui/page-loader';
+import { paths } from '@/config/paths';
+import { useMe } from '@/features/auth/api/me';
+import { projectQueries, useProject, useProjectActivity } from '@/features/projects/api/projects';
+import { ActivityTimeline } from '@/features/projects/components/activity-timeline';
+import { EndProjectForm } from '@/features/projects/components/end-project-form';
+import { PairingsPanel } from '@/features/projects/components/pairings-panel';
+import { PartiesPanel } from '@/features/projects/components/parties-panel';
+import { ProjectAnimals } from '@/features/projects/components/project-animals';
+import { StageLine } from '@/features/projects/components/stage-line';
+import { TermsPanel } from '@/features/projects/components/terms-panel';
+import { WarningsList } from '@/features/projects/components/warnings-list';
+import { ROLE_LABELS } from '@/features/projects/utils/labels';
+import { ProjectSacs } from '@/features/sacs/components/project-sacs';
+import { CalendarFeedCard } from '@/features/dashboard/components/calendar-feed-card';
+
+/** A missing or foreign project throws its 404 into the route's error boundary. */
+export const clientLoader = (qc: QueryClient) => async ({ params }: LoaderFunctionArgs) => {
+  await qc.ensureQueryData(projectQueries.detail(params.projectId!));
+  return null;
+};
+
+function Section({ title, children, testId }: { title: string; children: ReactNode; testId?: string }) {
+  return (
+    <Card withBorder data-testid={testId}>
+      <Title order={3} size="h4" mb="sm">
+        {title}
+      </Title>
+      {children}
+    </Card>
+  );
+}
+
+export function Component() {
+  const { projectId } = useParams() as { projectId: string };
+  const { data: me } = useMe();
+  const project = useProject(projectId);
+  const activity = useProjectActivity(projectId);
+  if (!me || project.isPending) return <PageLoader />;
+  if (project.isError) return <Alert color="clay">{project.error.message}</Alert>;
+  const p = project.data;
+  const isOwner = p.myRole === 'owner';
+  const live = p.stage.stage !== 'ended-early' && p.stage.stage !== 'closed';
+
+  return (
+    <Stack>
+      <PageHeader
+        title={p.title}
+        description={
+          <>
+            {p.femaleAnimal.label} × {p.maleAnimal.label} · run by {p.owner.name} · you: {ROLE_LABELS[p.myRole].toLowerCase()}
+          </>
+        }
+        actions={
+          <Anchor component={Link} to={paths.projects.href()} size="sm">
+            All projects
+          </Anchor>
+        }
+      />
+      <StageLine stage={p.stage} note={p.endedEarlyNote} />
+      <WarningsList warnings={p.warnings} />
+      <Grid>
+        <Grid.Col span={{ base: 12, md: 7 }}>
+          <Stack>
+            <Section title="Sacs" testId="section-sacs">
+              <ProjectSacs projectId={p.id} timeZone={me.timeZone} canRecord={isOwner && live} sacHref={paths.sac.href} incubatorHref={paths.incubatorSac.href} />
+            </Section>
+            <Section title="Pairings" testId="section-pairings">
+              <PairingsPanel projectId={p.id} timeZone={me.timeZone} canRecord={isOwner && live} />
+            </Section>
+            <Section title="Terms" testId="section-terms">
+              <TermsPanel projectId={p.id} me={me} myRole={p.myRole} members={p.members} />
+            </Section>
+          </Stack>
+        </Grid.Col>
+        <Grid.Col span={{ base: 12, md: 5 }}>
+          <Stack>
+            <Section title="The pair">
+              <ProjectAnimals female={p.femaleAnimal} male={p.maleAnimal} />
+            </Section>
+            <Section title="Parties" testId="section-parties">
+              <PartiesPanel projectId={p.id} members={p.members} myRole={p.myRole} timeZone={me.timeZone} />
+            </Section>
+            <Section title="Timeline" testId="section-timeline">
+              {activity.isError ? <Alert color="clay">{activity.error.message}</Alert> : activity.data ? <ActivityTimeline events={activity.data} timeZone={me.timeZone} /> : <Text c="dimmed">Loading…</Text>}
+            </Section>
+            <CalendarFeedCard />
+            {p.notes && (
+              <Section title="Notes">
+                <Text size="sm" style={{ whiteSpace: 'pre-wrap' }}>
+                  {p.notes}
+                </Text>
+              </Section>
+            )}
+            {isOwner && live && <EndProjectForm projectId={p.id} />}
+            {!live && (
+              <Group>
+                <Badge color="gray" variant="light" tt="none">
+                  {p.stage.stage === 'closed' ? `Closed${p.closedOn ? ` ${p.closedOn}` : ''}` : `Ended${p.endedOn ? ` ${p.endedOn}` : ''}`}
+                </Badge>
+              </Group>
+            )}
+          </Stack>
+        </Grid.Col>
+      </Grid>
+    </Stack>
+  );
+}

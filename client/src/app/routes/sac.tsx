@@ -1,0 +1,80 @@
+import { Alert, Anchor, Button, Card, Group, Stack, Title } from '@mantine/core';
+import { useQuery, type QueryClient } from '@tanstack/react-query';
+import type { ReactNode } from 'react';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { PageHeader } from '@/components/ui/page-header';
+import { PageLoader } from '@/components/ui/page-loader';
+import { paths } from '@/config/paths';
+import { useMe } from '@/features/auth/api/me';
+import { projectQueries } from '@/features/projects/api/projects';
+import { sacQueries, useSac } from '@/features/sacs/api/sacs';
+import { BroodCounts } from '@/features/sacs/components/brood-counts';
+import { CareLogList } from '@/features/sacs/components/care-log-list';
+import { OpeningPanel } from '@/features/sacs/components/opening-panel';
+import { SacOverview } from '@/features/sacs/components/sac-overview';
+
+export const clientLoader = (qc: QueryClient) => async ({ params }: LoaderFunctionArgs) => {
+  await qc.ensureQueryData(sacQueries.detail(params.sacId!));
+  return null;
+};
+
+function Section({ title, children, action }: { title: string; children: ReactNode; action?: ReactNode }) {
+  return (
+    <Card withBorder>
+      <Group justify="space-between" mb="sm">
+        <Title order={3} size="h4">
+          {title}
+        </Title>
+        {action}
+      </Group>
+      {children}
+    </Card>
+  );
+}
+
+export function Component() {
+  const { sacId } = useParams() as { sacId: string };
+  const { data: me } = useMe();
+  const sac = useSac(sacId);
+  const project = useQuery({ ...projectQueries.detail(sac.data?.projectId ?? ''), enabled: !!sac.data });
+  if (!me || sac.isPending) return <PageLoader />;
+  if (sac.isError) return <Alert color="clay">{sac.error.message}</Alert>;
+  const s = sac.data;
+  const role = project.data?.myRole;
+  const isOwner = role === 'owner';
+
+  return (
+    <Stack>
+      <PageHeader
+        title={`Sac of ${project.data?.title ?? '…'}`}
+        description={project.data ? `${project.data.femaleAnimal.label} × ${project.data.maleAnimal.label}` : undefined}
+        actions={
+          <Group>
+            {s.roll && (
+              <Button component={Link} to={paths.incubatorSac.href(s.id)}>
+                Incubator screen
+              </Button>
+            )}
+            <Anchor component={Link} to={paths.project.href(s.projectId)} size="sm">
+              Back to the project
+            </Anchor>
+          </Group>
+        }
+      />
+      <SacOverview sac={s} timeZone={me.timeZone} canEdit={isOwner} />
+      <Section title="Care log">
+        <CareLogList sacId={s.id} timeZone={me.timeZone} temperatureUnit={me.temperatureUnit} canStrike={role === 'owner' || role === 'caretaker'} />
+      </Section>
+      {s.pulled && (
+        <Section title="Opening">
+          <OpeningPanel sacId={s.id} timeZone={me.timeZone} canEdit={isOwner} />
+        </Section>
+      )}
+      {s.opened && (
+        <Section title="Brood">
+          <BroodCounts sacId={s.id} timeZone={me.timeZone} canRecord={isOwner || role === 'caretaker'} stage={s.broodStage} />
+        </Section>
+      )}
+    </Stack>
+  );
+}

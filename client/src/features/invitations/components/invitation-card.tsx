@@ -1,0 +1,70 @@
+import { Alert, Button, Stack, Text } from '@mantine/core';
+import { useState } from 'react';
+import { Link } from 'react-router-dom';
+import type { AcceptInvitationResponse, InvitationPreview } from '@broodsilk/shared';
+import { isApiError } from '@/lib/api-error';
+import { useAcceptInvitation } from '../api/invitation';
+
+const ROLE_TEXT = { partner: 'a partner (you share in the brood and agree the terms)', caretaker: 'the caretaker (you roll the eggs and keep the care log)' } as const;
+
+interface InvitationCardProps {
+  token: string;
+  preview: InvitationPreview;
+  signedInAs: string | null;
+  signInHref: string;
+  registerHref: string;
+  onJoined: (r: AcceptInvitationResponse) => void;
+}
+
+/** What an invitation offers and the one action: join (after signing in, if needed). */
+export function InvitationCard({ token, preview, signedInAs, signInHref, registerHref, onJoined }: InvitationCardProps) {
+  const accept = useAcceptInvitation(token);
+  const [error, setError] = useState<string | null>(null);
+  return (
+    <Stack data-testid="invitation">
+      <Text>
+        <b>{preview.inviterName}</b> invites you to the project <b>{preview.projectTitle}</b> as {ROLE_TEXT[preview.role]}.
+      </Text>
+      {!preview.valid ? (
+        <Alert color="clay" title="This invitation no longer works">
+          {preview.problem ?? 'Ask the keeper to send a new one.'}
+        </Alert>
+      ) : signedInAs ? (
+        <>
+          <Text size="sm" c="dimmed">
+            Signed in as {signedInAs}.
+          </Text>
+          {error && (
+            <Alert color="clay" role="alert">
+              {error}
+            </Alert>
+          )}
+          <Button
+            size="md"
+            loading={accept.isPending}
+            onClick={async () => {
+              setError(null);
+              try {
+                onJoined(await accept.mutateAsync());
+              } catch (e) {
+                setError(isApiError(e) ? e.message : 'Joining did not work. Try again.');
+              }
+            }}
+          >
+            Join the project
+          </Button>
+        </>
+      ) : (
+        <>
+          <Text size="sm">Sign in to join. New to Broodsilk? Create an account with the address the invitation went to, then come back to this link.</Text>
+          <Button component={Link} to={signInHref} size="md">
+            Sign in to join
+          </Button>
+          <Button component={Link} to={registerHref} variant="light">
+            Create an account
+          </Button>
+        </>
+      )}
+    </Stack>
+  );
+}

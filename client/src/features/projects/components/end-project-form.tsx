@@ -1,0 +1,57 @@
+import { Alert, Button, Collapse, Group, Select, Stack, TextInput } from '@mantine/core';
+import { useForm } from '@mantine/form';
+import { useDisclosure } from '@mantine/hooks';
+import { useState } from 'react';
+import { ENDED_EARLY_REASONS, type EndedEarlyReason } from '@broodsilk/shared';
+import { applyServerErrors } from '@/lib/form-errors';
+import { useEndProject } from '../api/projects';
+import { ENDED_EARLY_LABELS } from '../utils/labels';
+
+const reasonOptions = ENDED_EARLY_REASONS.map((r) => ({ value: r, label: ENDED_EARLY_LABELS[r].replace(/^./, (c) => c.toUpperCase()) }));
+
+/** The keeper calls a project off, with the reason the stage line will show. */
+export function EndProjectForm({ projectId }: { projectId: string }) {
+  const [opened, { toggle }] = useDisclosure(false);
+  const [message, setMessage] = useState<string | null>(null);
+  const end = useEndProject(projectId);
+  const form = useForm<{ reason: EndedEarlyReason | null; note: string }>({
+    mode: 'uncontrolled',
+    initialValues: { reason: null, note: '' },
+    validate: { reason: (v) => (v ? null : 'Why does it end?') },
+  });
+  const submit = form.onSubmit(async (v) => {
+    setMessage(null);
+    try {
+      await end.mutateAsync({ reason: v.reason!, note: v.note.trim() || null });
+    } catch (e) {
+      setMessage(applyServerErrors(form, e));
+    }
+  });
+  return (
+    <Stack gap="xs">
+      <Group>
+        <Button variant="subtle" color="clay" onClick={toggle}>
+          {opened ? 'Keep the project going' : 'End this project early'}
+        </Button>
+      </Group>
+      <Collapse expanded={opened}>
+        <form onSubmit={submit} noValidate>
+          <Stack maw={420}>
+            <Select label="Reason" data={reasonOptions} key={form.key('reason')} {...form.getInputProps('reason')} />
+            <TextInput label="Note" key={form.key('note')} {...form.getInputProps('note')} />
+            {message && (
+              <Alert color="clay" role="alert">
+                {message}
+              </Alert>
+            )}
+            <Group>
+              <Button type="submit" color="clay" loading={end.isPending}>
+                End project
+              </Button>
+            </Group>
+          </Stack>
+        </form>
+      </Collapse>
+    </Stack>
+  );
+}

@@ -1,0 +1,118 @@
+import { Alert, Badge, Button, Collapse, Group, NumberInput, Select, Stack, Table, Text, Textarea } from '@mantine/core';
+import { DateInput, TimeInput } from '@mantine/dates';
+import { useForm } from '@mantine/form';
+import { useDisclosure } from '@mantine/hooks';
+import { useState } from 'react';
+import { PAIRING_OUTCOMES, todayIn, type PairingOutcome } from '@broodsilk/shared';
+import { dayjs, formatInstant } from '@/lib/dates';
+import { applyServerErrors } from '@/lib/form-errors';
+import { usePairings, useRecordPairing } from '../api/pairings';
+import { PAIRING_OUTCOME_LABELS } from '../utils/labels';
+
+const outcomeOptions = PAIRING_OUTCOMES.map((o) => ({ value: o, label: PAIRING_OUTCOME_LABELS[o] }));
+
+interface Values {
+  on: string | null;
+  time: string;
+  durationMinutes: number | string;
+  outcome: PairingOutcome;
+  notes: string;
+}
+
+/** Pairing attempts of a project and, for the keeper, a form to record one. */
+export function PairingsPanel({ projectId, timeZone, canRecord }: { projectId: string; timeZone: string; canRecord: boolean }) {
+  const today = todayIn(timeZone, new Date());
+  const pairings = usePairings(projectId);
+  const record = useRecordPairing(projectId);
+  const [opened, { toggle, close }] = useDisclosure(false);
+  const [message, setMessage] = useState<string | null>(null);
+  const form = useForm<Values>({
+    mode: 'uncontrolled',
+    initialValues: { on: null, time: '20:00', durationMinutes: 20, outcome: 'connected', notes: '' },
+    validate: {
+      on: (v) => (v ? null : 'On which day was the male put in?'),
+      time: (v) => (/^\d{2}:\d{2}$/.test(v) ? null : 'The time as HH:MM.'),
+      durationMinutes: (v) => (Number(v) >= 0 && Number.isInteger(Number(v)) ? null : 'Minutes as a whole number.'),
+    },
+  });
+
+  const submit = form.onSubmit(async (v) => {
+    setMessage(null);
+    try {
+      // Day and wall-clock time are read in the keeper's own zone.
+      const startedAt = dayjs.tz(`${v.on}T${v.time}`, timeZone).toISOString();
+      await record.mutateAsync({ startedAt, durationMinutes: Number(v.durationMinutes), outcome: v.outcome, notes: v.notes.trim() || null });
+      form.reset();
+      close();
+    } catch (e) {
+      setMessage(applyServerErrors(form, e));
+    }
+  });
+
+  return (
+    <Stack>
+      {pairings.isError && <Alert color="clay">{pairings.error.message}</Alert>}
+      {pairings.data && pairings.data.length === 0 && <Text c="dimmed">No pairing recorded yet.</Text>}
+      {pairings.data && pairings.data.length > 0 && (
+        <Table.ScrollContainer minWidth={360}>
+          <Table striped verticalSpacing={4} fz="sm" data-testid="pairings-table">
+            <Table.Thead>
+              <Table.Tr>
+                <Table.Th>Started</Table.Th>
+                <Table.Th>Minutes</Table.Th>
+                <Table.Th>Outcome</Table.Th>
+                <Table.Th visibleFrom="sm">Notes</Table.Th>
+              </Table.Tr>
+            </Table.Thead>
+            <Table.Tbody>
+              {pairings.data.map((p) => (
+                <Table.Tr key={p.id}>
+                  <Table.Td>{formatInstant(p.startedAt, timeZone)}</Table.Td>
+                  <Table.Td>{p.durationMinutes}</Table.Td>
+                  <Table.Td>
+                    <Badge variant="light" tt="none" color={p.outcome === 'connected' ? 'moss' : p.outcome === 'interest-only' ? 'gray' : 'clay'}>
+                      {PAIRING_OUTCOME_LABELS[p.outcome]}
+                    </Badge>
+                  </Table.Td>
+                  <Table.Td visibleFrom="sm">{p.notes ?? ''}</Table.Td>
+                </Table.Tr>
+              ))}
+            </Table.Tbody>
+          </Table>
+        </Table.ScrollContainer>
+      )}
+      {canRecord && (
+        <>
+          <Group>
+            <Button variant="light" onClick={toggle}>
+              {opened ? 'Close' : 'Record a pairing'}
+            </Button>
+          </Group>
+          <Collapse expanded={opened}>
+            <form onSubmit={submit} noValidate>
+              <Stack maw={480}>
+                <Group grow align="flex-start">
+                  <DateInput label="Day the male went in" placeholder="YYYY-MM-DD" valueFormat="YYYY-MM-DD" withAsterisk maxDate={today} key={form.key('on')} {...form.getInputProps('on')} />
+                  <TimeInput label="At" key={form.key('time')} {...form.getInputProps('time')} />
+                </Group>
+                <NumberInput label="How long (minutes)" min={0} allowDecimal={false} key={form.key('durationMinutes')} {...form.getInputProps('durationMinutes')} />
+                <Select label="Outcome" data={outcomeOptions} allowDeselect={false} key={form.key('outcome')} {...form.getInputProps('outcome')} />
+                <Textarea label="Notes" autosize minRows={2} key={form.key('notes')} {...form.getInputProps('notes')} />
+                {message && (
+                  <Alert color="clay" role="alert">
+                    {message}
+                  </Alert>
+                )}
+                <Group>
+                  <Button type="submit" loading={record.isPending}>
+                    Save pairing
+                  </Button>
+                </Group>
+              </Stack>
+            </form>
+          </Collapse>
+        </>
+      )}
+    </Stack>
+  );
+}

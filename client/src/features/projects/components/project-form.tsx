@@ -1,0 +1,217 @@
+import { ActionIcon, Alert, Button, Card, Checkbox, Group, NumberInput, Select, SimpleGrid, Stack, Switch, Text, TextInput, Textarea, Title } from '@mantine/core';
+import { useForm } from '@mantine/form';
+import { useState } from 'react';
+import { DEFAULT_HAND_OVER_STAGE, type AnimalSummary, type BroodStage, type FailureClause, type InvitableRole, type ShippingPayer } from '@broodsilk/shared';
+import { applyServerErrors } from '@/lib/form-errors';
+import { useCreateProject, type NewProjectResult } from '../hooks/use-create-project';
+import { CURRENCIES, failureOptions, handOverOptions, shippingOptions } from './propose-terms-form';
+
+interface PartyValues {
+  name: string;
+  email: string;
+  role: InvitableRole;
+  invite: boolean;
+  weight: number | string;
+  fixedCount: number | string;
+  pickOrder: number | string;
+}
+
+interface Values {
+  title: string;
+  femaleId: string | null;
+  maleId: string | null;
+  notes: string;
+  parties: PartyValues[];
+  withTerms: boolean;
+  ownerWeight: number | string;
+  ownerFixedCount: number | string;
+  ownerPickOrder: number | string;
+  price: number | string;
+  currency: string;
+  failureClause: FailureClause;
+  handOverStage: BroodStage;
+  shippingPaidBy: ShippingPayer;
+}
+
+const roleOptions = [
+  { value: 'partner', label: 'Partner' },
+  { value: 'caretaker', label: 'Caretaker' },
+];
+
+const emptyParty = (pickOrder: number): PartyValues => ({ name: '', email: '', role: 'partner', invite: true, weight: 1, fixedCount: 0, pickOrder });
+
+function animalOption(a: AnimalSummary) {
+  const loan = a.custody === 'loan-in' ? ' · on loan to you' : '';
+  return { value: a.id, label: `${a.label} · ${a.species.scientificName}${loan}` };
+}
+
+interface ProjectFormProps {
+  females: AnimalSummary[];
+  males: AnimalSummary[];
+  onCreated: (result: NewProjectResult) => void;
+}
+
+/** A new project: the pair from the keeper's collection, the parties, and the first terms. */
+export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
+  const create = useCreateProject();
+  const [message, setMessage] = useState<string | null>(null);
+  const [partyCount, setPartyCount] = useState(0);
+  const [withTerms, setWithTerms] = useState(true);
+  const [maleId, setMaleId] = useState<string | null>(null);
+  const form = useForm<Values>({
+    mode: 'uncontrolled',
+    initialValues: {
+      title: '',
+      femaleId: null,
+      maleId: null,
+      notes: '',
+      parties: [],
+      withTerms: true,
+      ownerWeight: 1,
+      ownerFixedCount: 0,
+      ownerPickOrder: 1,
+      price: 0,
+      currency: 'EUR',
+      failureClause: 'nothing-owed',
+      handOverStage: DEFAULT_HAND_OVER_STAGE,
+      shippingPaidBy: 'recipient',
+    },
+    validate: {
+      title: (v) => (v.trim() ? null : 'Give the project a title.'),
+      femaleId: (v) => (v ? null : 'Choose the female.'),
+      maleId: (v) => (v ? null : 'Choose the male.'),
+      parties: {
+        name: (v) => (v.trim() ? null : 'Give the party a name.'),
+        email: (v, values, path) => {
+          const i = Number(path.split('.')[1]);
+          return values.parties[i]?.invite && !/^\S+@\S+\.\S+$/.test(v.trim()) ? 'An invitation needs an e-mail address.' : null;
+        },
+      },
+      currency: (v, values) => (!values.withTerms || /^[A-Z]{3}$/.test(v) ? null : 'A three-letter code, e.g. EUR.'),
+    },
+  });
+  form.watch('parties', ({ value }) => setPartyCount(value.length));
+  form.watch('withTerms', ({ value }) => setWithTerms(value));
+  form.watch('maleId', ({ value }) => setMaleId(value));
+  const male = males.find((m) => m.id === maleId);
+
+  const submit = form.onSubmit(async (v) => {
+    setMessage(null);
+    try {
+      const result = await create.mutateAsync({
+        project: { title: v.title.trim(), femaleId: v.femaleId!, maleId: v.maleId!, notes: v.notes.trim() || null },
+        parties: v.parties.map((p) => ({
+          name: p.name.trim(),
+          email: p.email.trim() || null,
+          role: p.role,
+          invite: p.invite && !!p.email.trim(),
+          terms: { weight: Number(p.weight), fixedCount: Number(p.fixedCount) || 0, pickOrder: Number(p.pickOrder) },
+        })),
+        terms: v.withTerms
+          ? {
+              ownerLine: { weight: Number(v.ownerWeight), fixedCount: Number(v.ownerFixedCount) || 0, pickOrder: Number(v.ownerPickOrder) },
+              pricePerSpiderlingMinor: Math.round(Number(v.price) * 100),
+              currency: v.currency,
+              failureClause: v.failureClause,
+              handOverStage: v.handOverStage,
+              shippingPaidBy: v.shippingPaidBy,
+            }
+          : null,
+      });
+      onCreated(result);
+    } catch (e) {
+      setMessage(applyServerErrors(form, e));
+    }
+  });
+
+  return (
+    <form onSubmit={submit} noValidate>
+      <Stack maw={760}>
+        <TextInput label="Title" placeholder="e.g. Regalis 2027, MO-007 × MO-030" withAsterisk key={form.key('title')} {...form.getInputProps('title')} />
+        <SimpleGrid cols={{ base: 1, sm: 2 }}>
+          <Select label="Female" placeholder="Mature female from your collection" data={females.map(animalOption)} searchable withAsterisk nothingFoundMessage="No mature female in your collection" key={form.key('femaleId')} {...form.getInputProps('femaleId')} />
+          <Select label="Male" placeholder="Mature male, yours or on loan" data={males.map(animalOption)} searchable withAsterisk nothingFoundMessage="No mature male in your collection" key={form.key('maleId')} {...form.getInputProps('maleId')} />
+        </SimpleGrid>
+        {male?.custody === 'loan-in' && (
+          <Alert color="moss" variant="light">
+            {male.label} is on a breeding loan to you. Add his owner as a partner below so they can follow the project and agree the split.
+          </Alert>
+        )}
+        <Textarea label="Notes" autosize minRows={2} key={form.key('notes')} {...form.getInputProps('notes')} />
+
+        <Title order={3} size="h4" mt="sm">
+          Parties
+        </Title>
+        <Text size="sm" c="dimmed">
+          You take part as the keeper. Add partners who share in the brood and a caretaker who rolls the eggs. With an e-mail address they get an invitation to join; without one they are kept on record.
+        </Text>
+        {Array.from({ length: partyCount }, (_, i) => (
+          <Card withBorder key={form.key(`parties.${i}`)} padding="sm" data-testid={`party-${i}`}>
+            <Stack gap="xs">
+              <Group justify="space-between">
+                <Text fw={600} size="sm">
+                  Party {i + 1}
+                </Text>
+                <ActionIcon variant="subtle" color="clay" aria-label={`Remove party ${i + 1}`} onClick={() => form.removeListItem('parties', i)}>
+                  ×
+                </ActionIcon>
+              </Group>
+              <SimpleGrid cols={{ base: 1, sm: 3 }}>
+                <TextInput label="Name" withAsterisk key={form.key(`parties.${i}.name`)} {...form.getInputProps(`parties.${i}.name`)} />
+                <TextInput label="E-mail" type="email" key={form.key(`parties.${i}.email`)} {...form.getInputProps(`parties.${i}.email`)} />
+                <Select label="Role" data={roleOptions} allowDeselect={false} key={form.key(`parties.${i}.role`)} {...form.getInputProps(`parties.${i}.role`)} />
+              </SimpleGrid>
+              <Checkbox label="Send an invitation to join" key={form.key(`parties.${i}.invite`)} {...form.getInputProps(`parties.${i}.invite`, { type: 'checkbox' })} />
+              {withTerms && (
+                <SimpleGrid cols={3}>
+                  <NumberInput label="Weight" min={0} allowDecimal={false} key={form.key(`parties.${i}.weight`)} {...form.getInputProps(`parties.${i}.weight`)} />
+                  <NumberInput label="Fixed count" min={0} allowDecimal={false} key={form.key(`parties.${i}.fixedCount`)} {...form.getInputProps(`parties.${i}.fixedCount`)} />
+                  <NumberInput label="Pick order" min={1} allowDecimal={false} key={form.key(`parties.${i}.pickOrder`)} {...form.getInputProps(`parties.${i}.pickOrder`)} />
+                </SimpleGrid>
+              )}
+            </Stack>
+          </Card>
+        ))}
+        <Group>
+          <Button variant="light" onClick={() => form.insertListItem('parties', emptyParty(partyCount + 2))}>
+            Add a party
+          </Button>
+        </Group>
+
+        <Title order={3} size="h4" mt="sm">
+          Terms
+        </Title>
+        <Switch label="Propose terms now (partners accept them on the project page)" key={form.key('withTerms')} {...form.getInputProps('withTerms', { type: 'checkbox' })} />
+        {withTerms && (
+          <Stack>
+            <Text size="sm" c="dimmed">
+              Shares are each party&apos;s weight over the sum of weights (partners only; caretakers take no share). A fixed count comes off the top first.
+            </Text>
+            <SimpleGrid cols={3}>
+              <NumberInput label="Your weight" min={0} allowDecimal={false} key={form.key('ownerWeight')} {...form.getInputProps('ownerWeight')} />
+              <NumberInput label="Your fixed count" min={0} allowDecimal={false} key={form.key('ownerFixedCount')} {...form.getInputProps('ownerFixedCount')} />
+              <NumberInput label="Your pick order" min={1} allowDecimal={false} key={form.key('ownerPickOrder')} {...form.getInputProps('ownerPickOrder')} />
+            </SimpleGrid>
+            <SimpleGrid cols={{ base: 1, sm: 3 }}>
+              <NumberInput label="Price per spiderling" min={0} decimalScale={2} key={form.key('price')} {...form.getInputProps('price')} />
+              <Select label="Currency" data={CURRENCIES} searchable allowDeselect={false} key={form.key('currency')} {...form.getInputProps('currency')} />
+              <Select label="If the project fails" data={failureOptions} allowDeselect={false} key={form.key('failureClause')} {...form.getInputProps('failureClause')} />
+              <Select label="Handed over at" data={handOverOptions} allowDeselect={false} key={form.key('handOverStage')} {...form.getInputProps('handOverStage')} />
+              <Select label="Shipping" data={shippingOptions} allowDeselect={false} key={form.key('shippingPaidBy')} {...form.getInputProps('shippingPaidBy')} />
+            </SimpleGrid>
+          </Stack>
+        )}
+        {message && (
+          <Alert color="clay" role="alert">
+            {message}
+          </Alert>
+        )}
+        <Group>
+          <Button type="submit" loading={create.isPending}>
+            Create project
+          </Button>
+        </Group>
+      </Stack>
+    </form>
+  );
+}

@@ -1,0 +1,145 @@
+import { Alert, Button, Collapse, Group, NumberInput, Select, SimpleGrid, Stack, Table, Text, TextInput } from '@mantine/core';
+import { useForm } from '@mantine/form';
+import { useDisclosure } from '@mantine/hooks';
+import { useState } from 'react';
+import {
+  BROOD_STAGES,
+  BROOD_STAGE_LABEL_SETS,
+  DEFAULT_HAND_OVER_STAGE,
+  FAILURE_CLAUSES,
+  SHIPPING_PAYERS,
+  type BroodStage,
+  type FailureClause,
+  type ProjectMemberResponse,
+  type ShippingPayer,
+  type TermsVersionResponse,
+} from '@broodsilk/shared';
+import { applyServerErrors } from '@/lib/form-errors';
+import { useProposeTerms } from '../api/terms';
+import { FAILURE_CLAUSE_LABELS, SHIPPING_LABELS } from '../utils/labels';
+
+export const CURRENCIES = ['EUR', 'USD', 'GBP', 'PLN', 'CHF', 'CZK', 'SEK', 'CAD', 'AUD'];
+export const failureOptions = FAILURE_CLAUSES.map((c) => ({ value: c, label: FAILURE_CLAUSE_LABELS[c] }));
+export const shippingOptions = SHIPPING_PAYERS.map((s) => ({ value: s, label: SHIPPING_LABELS[s] }));
+export const handOverOptions = BROOD_STAGES.map((s) => ({ value: s, label: BROOD_STAGE_LABEL_SETS.us[s] }));
+
+interface Values {
+  lines: { memberId: string; name: string; weight: number | string; fixedCount: number | string; pickOrder: number | string }[];
+  price: number | string;
+  currency: string;
+  failureClause: FailureClause;
+  handOverStage: BroodStage;
+  shippingPaidBy: ShippingPayer;
+  note: string;
+}
+
+/** The owner proposes a new version of the terms; it starts from the latest one. */
+export function ProposeTermsForm({ projectId, members, base }: { projectId: string; members: ProjectMemberResponse[]; base?: TermsVersionResponse }) {
+  const [opened, { toggle, close }] = useDisclosure(false);
+  const [message, setMessage] = useState<string | null>(null);
+  const propose = useProposeTerms(projectId);
+  const parties = members.filter((m) => m.role === 'owner' || m.role === 'partner');
+  const form = useForm<Values>({
+    mode: 'uncontrolled',
+    initialValues: {
+      lines: parties.map((m, i) => {
+        const prev = base?.lines.find((l) => l.memberId === m.id);
+        return { memberId: m.id, name: m.name, weight: prev?.weight ?? 1, fixedCount: prev?.fixedCount ?? 0, pickOrder: prev?.pickOrder ?? i + 1 };
+      }),
+      price: base ? base.pricePerSpiderlingMinor / 100 : 0,
+      currency: base?.currency ?? 'EUR',
+      failureClause: base?.failureClause ?? 'nothing-owed',
+      handOverStage: base?.handOverStage ?? DEFAULT_HAND_OVER_STAGE,
+      shippingPaidBy: base?.shippingPaidBy ?? 'recipient',
+      note: '',
+    },
+    validate: {
+      price: (v) => (Number(v) < 0 ? 'The price cannot be negative.' : null),
+      currency: (v) => (/^[A-Z]{3}$/.test(v) ? null : 'Use a three-letter currency code, e.g. EUR.'),
+    },
+  });
+
+  const submit = form.onSubmit(async (v) => {
+    setMessage(null);
+    try {
+      await propose.mutateAsync({
+        lines: v.lines.map((l) => ({ memberId: l.memberId, weight: Number(l.weight), fixedCount: Number(l.fixedCount) || 0, pickOrder: Number(l.pickOrder) })),
+        pricePerSpiderlingMinor: Math.round(Number(v.price) * 100),
+        currency: v.currency,
+        failureClause: v.failureClause,
+        handOverStage: v.handOverStage,
+        shippingPaidBy: v.shippingPaidBy,
+        note: v.note.trim() || null,
+      });
+      close();
+    } catch (e) {
+      setMessage(applyServerErrors(form, e));
+    }
+  });
+
+  return (
+    <Stack gap="xs">
+      <Group>
+        <Button variant="light" onClick={toggle}>
+          {opened ? 'Close' : base ? 'Propose changed terms' : 'Propose terms'}
+        </Button>
+      </Group>
+      <Collapse expanded={opened}>
+        <form onSubmit={submit} noValidate>
+          <Stack>
+            <Text size="sm" c="dimmed">
+              Shares are each party&apos;s weight over the sum of weights. A fixed count is taken off the top before the split. Partners must accept a new version before it is in force.
+            </Text>
+            <Table.ScrollContainer minWidth={420}>
+              <Table verticalSpacing={4}>
+                <Table.Thead>
+                  <Table.Tr>
+                    <Table.Th>Party</Table.Th>
+                    <Table.Th>Weight</Table.Th>
+                    <Table.Th>Fixed count</Table.Th>
+                    <Table.Th>Pick order</Table.Th>
+                  </Table.Tr>
+                </Table.Thead>
+                <Table.Tbody>
+                  {form.getValues().lines.map((l, i) => (
+                    <Table.Tr key={l.memberId}>
+                      <Table.Td>{l.name}</Table.Td>
+                      <Table.Td>
+                        <NumberInput aria-label={`Weight of ${l.name}`} min={0} allowDecimal={false} key={form.key(`lines.${i}.weight`)} {...form.getInputProps(`lines.${i}.weight`)} />
+                      </Table.Td>
+                      <Table.Td>
+                        <NumberInput aria-label={`Fixed count of ${l.name}`} min={0} allowDecimal={false} key={form.key(`lines.${i}.fixedCount`)} {...form.getInputProps(`lines.${i}.fixedCount`)} />
+                      </Table.Td>
+                      <Table.Td>
+                        <NumberInput aria-label={`Pick order of ${l.name}`} min={1} allowDecimal={false} key={form.key(`lines.${i}.pickOrder`)} {...form.getInputProps(`lines.${i}.pickOrder`)} />
+                      </Table.Td>
+                    </Table.Tr>
+                  ))}
+                </Table.Tbody>
+              </Table>
+            </Table.ScrollContainer>
+            <SimpleGrid cols={{ base: 1, sm: 3 }}>
+              <NumberInput label="Price per spiderling" min={0} decimalScale={2} key={form.key('price')} {...form.getInputProps('price')} />
+              <Select label="Currency" data={CURRENCIES} searchable key={form.key('currency')} {...form.getInputProps('currency')} />
+              <Select label="If the project fails" data={failureOptions} allowDeselect={false} key={form.key('failureClause')} {...form.getInputProps('failureClause')} />
+              <Select label="Handed over at" data={handOverOptions} allowDeselect={false} key={form.key('handOverStage')} {...form.getInputProps('handOverStage')} />
+              <Select label="Shipping" data={shippingOptions} allowDeselect={false} key={form.key('shippingPaidBy')} {...form.getInputProps('shippingPaidBy')} />
+              <TextInput label="Note to partners" key={form.key('note')} {...form.getInputProps('note')} />
+            </SimpleGrid>
+            {message && (
+              <Alert color="clay" role="alert">
+                {message}
+              </Alert>
+            )}
+            <Group>
+              <Button type="submit" loading={propose.isPending}>
+                Propose this version
+              </Button>
+            </Group>
+          </Stack>
+        </form>
+      </Collapse>
+    </Stack>
+  );
+}
+

@@ -1,0 +1,46 @@
+import { screen, within } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import { ENDED_EARLY_REASONS, PROJECT_STAGE_LINE } from '@broodsilk/shared';
+import { renderWithProviders } from '@/testing/render';
+import { StageLine } from './stage-line';
+
+const NAMES = ['Planned', 'Paired', 'Waiting for sac', 'Sac laid', 'In incubator', 'Brood', 'Shares settled', 'Closed'];
+
+function steps() {
+  return within(screen.getByTestId('stage-line')).getAllByRole('listitem');
+}
+
+describe('StageLine', () => {
+  it.each(PROJECT_STAGE_LINE.map((s, i) => [s, i] as const))('marks %s as the current step with the ones before it done', (stage, index) => {
+    renderWithProviders(<StageLine stage={{ stage }} />);
+    const items = steps();
+    expect(items).toHaveLength(8);
+    items.forEach((item, i) => {
+      expect(item).toHaveAttribute('data-state', i < index ? 'done' : i === index ? 'current' : 'ahead');
+    });
+    expect(items[index]).toHaveAttribute('aria-current', 'step');
+    expect(screen.getByTestId('stage-current')).toHaveTextContent(`${NAMES[index]} · step ${index + 1} of 8`);
+  });
+
+  it.each([
+    ['no-sac', 'Ended early: no sac'],
+    ['female-molted', 'Ended early: the female molted'],
+    ['sac-failed', 'Ended early: the sac failed'],
+    ['sac-eaten', 'Ended early: the sac was eaten'],
+    ['male-died', 'Ended early: the male died before pairing'],
+  ] as const)('shows an early end for %s with its reason and no current step', (reason, text) => {
+    renderWithProviders(<StageLine stage={{ stage: 'ended-early', reason }} note="Waited ten months" />);
+    const current = screen.getByTestId('stage-current');
+    expect(current).toHaveTextContent(text);
+    expect(current).toHaveClass('tone-failed');
+    expect(screen.getByText(/Waited ten months/)).toBeInTheDocument();
+    for (const item of steps()) {
+      expect(item).toHaveAttribute('data-state', 'ended');
+      expect(item).not.toHaveAttribute('aria-current');
+    }
+  });
+
+  it('covers every early-end reason the shared list knows', () => {
+    expect([...ENDED_EARLY_REASONS].sort()).toEqual(['female-molted', 'male-died', 'no-sac', 'sac-eaten', 'sac-failed']);
+  });
+});

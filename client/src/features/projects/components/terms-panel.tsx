@@ -1,0 +1,136 @@
+import { Alert, Badge, Button, Card, Group, Stack, Table, Text, Title } from '@mantine/core';
+import type { Me, ProjectMemberResponse, ProjectRole, TermsVersionResponse } from '@broodsilk/shared';
+import { BROOD_STAGE_LABEL_SETS } from '@broodsilk/shared';
+import { formatInstant } from '@/lib/dates';
+import { useAcceptTerms, useTerms } from '../api/terms';
+import { FAILURE_CLAUSE_LABELS, formatMoney, SHIPPING_LABELS } from '../utils/labels';
+import { ProposeTermsForm } from './propose-terms-form';
+
+interface TermsPanelProps {
+  projectId: string;
+  me: Pick<Me, 'id' | 'timeZone'>;
+  myRole: ProjectRole;
+  members: ProjectMemberResponse[];
+}
+
+/** The terms of a project: the version in force, a newer proposed one (with accept), and a form to propose changes. */
+export function TermsPanel({ projectId, me, myRole, members }: TermsPanelProps) {
+  const terms = useTerms(projectId);
+  const accept = useAcceptTerms(projectId);
+  if (terms.isPending) return <Text c="dimmed">Loading the terms…</Text>;
+  if (terms.isError) return <Alert color="clay">{terms.error.message}</Alert>;
+
+  const shown = terms.data.versions.filter((v) => v.status !== 'superseded').sort((a, b) => b.number - a.number);
+  const myMember = members.find((m) => m.userId === me.id);
+  const latest = terms.data.versions.reduce<TermsVersionResponse | undefined>((a, v) => (!a || v.number > a.number ? v : a), undefined);
+
+  return (
+    <Stack data-testid="terms-panel">
+      {shown.length === 0 && <Text c="dimmed">No terms yet. {myRole === 'owner' ? 'Propose how the brood is split below.' : 'The keeper has not proposed any.'}</Text>}
+      {shown.map((v) => {
+        const myLine = v.lines.find((l) => l.memberId === myMember?.id);
+        const mayAccept = v.status === 'proposed' && myRole === 'partner' && !!myLine && myLine.mustAccept && !myLine.accepted;
+        const outsideAwaiting = v.status === 'proposed' && myRole === 'owner' ? v.awaiting.filter((a) => !members.find((m) => m.id === a.memberId)?.hasAccount) : [];
+        return (
+          <Card key={v.number} withBorder data-testid={`terms-version-${v.number}`}>
+            <Group justify="space-between" mb="xs" wrap="wrap">
+              <Group gap="xs">
+                <Title order={4} size="h5">
+                  Version {v.number}
+                </Title>
+                {v.status === 'in-force' ? (
+                  <Badge color="moss">In force</Badge>
+                ) : (
+                  <Badge color="amber" variant="light">
+                    Proposed
+                  </Badge>
+                )}
+              </Group>
+              <Text size="xs" c="dimmed">
+                by {v.createdBy.name}, {formatInstant(v.createdAt, me.timeZone)}
+              </Text>
+            </Group>
+            <Table.ScrollContainer minWidth={420}>
+              <Table striped verticalSpacing={4} fz="sm">
+                <Table.Thead>
+                  <Table.Tr>
+                    <Table.Th>Party</Table.Th>
+                    <Table.Th>Share</Table.Th>
+                    <Table.Th>Taken first</Table.Th>
+                    <Table.Th>Picks</Table.Th>
+                    <Table.Th>Accepted</Table.Th>
+                  </Table.Tr>
+                </Table.Thead>
+                <Table.Tbody>
+                  {[...v.lines]
+                    .sort((a, b) => a.pickOrder - b.pickOrder)
+                    .map((l) => (
+                      <Table.Tr key={l.memberId}>
+                        <Table.Td>{l.memberName}</Table.Td>
+                        <Table.Td>
+                          {l.share} <Text span size="xs" c="dimmed">(weight {l.weight})</Text>
+                        </Table.Td>
+                        <Table.Td>{l.fixedCount > 0 ? l.fixedCount : '—'}</Table.Td>
+                        <Table.Td>#{l.pickOrder}</Table.Td>
+                        <Table.Td>
+                          {!l.mustAccept ? (
+                            <Text size="sm" c="dimmed">
+                              proposer
+                            </Text>
+                          ) : l.accepted ? (
+                            <Text size="sm" className="tone-ok">
+                              yes
+                            </Text>
+                          ) : (
+                            <Text size="sm" className="tone-due">
+                              not yet
+                            </Text>
+                          )}
+                        </Table.Td>
+                      </Table.Tr>
+                    ))}
+                </Table.Tbody>
+              </Table>
+            </Table.ScrollContainer>
+            <Text size="sm" mt="xs">
+              {formatMoney(v.pricePerSpiderlingMinor, v.currency)} per spiderling · {FAILURE_CLAUSE_LABELS[v.failureClause]} · handed over at{' '}
+              {BROOD_STAGE_LABEL_SETS.us[v.handOverStage].toLowerCase()} · shipping: {SHIPPING_LABELS[v.shippingPaidBy].toLowerCase()}
+            </Text>
+            {v.note && (
+              <Text size="sm" c="dimmed">
+                {v.note}
+              </Text>
+            )}
+            {v.status === 'proposed' && v.awaiting.length > 0 && (
+              <Text size="sm" className="tone-due" mt={4}>
+                Waiting for {v.awaiting.map((a) => a.name).join(', ')} to accept.
+              </Text>
+            )}
+            {mayAccept && (
+              <Group mt="sm">
+                <Button loading={accept.isPending} onClick={() => accept.mutate({ version: v.number })}>
+                  Accept these terms
+                </Button>
+              </Group>
+            )}
+            {outsideAwaiting.map((a) => (
+              <Group mt="sm" key={a.memberId}>
+                <Button
+                  variant="light"
+                  size="xs"
+                  loading={accept.isPending}
+                  onClick={() => accept.mutate({ version: v.number, body: { memberId: a.memberId, note: 'Recorded by the keeper on their behalf.' } })}
+                >
+                  Record {a.name}&apos;s acceptance
+                </Button>
+              </Group>
+            ))}
+          </Card>
+        );
+      })}
+      {myRole === 'owner' && (
+        <ProposeTermsForm projectId={projectId} members={members} base={latest} />
+      )}
+    </Stack>
+  );
+}

@@ -1,0 +1,64 @@
+import type {
+  EndedEarlyReason,
+  FailureClause,
+  PairingOutcome,
+  ProjectRole,
+  ProjectStage,
+  ShippingPayer,
+  WarningSeverity,
+} from '@broodsilk/shared';
+
+/** The progress line in our own words (PRODUCT.md). */
+export const STAGE_LABELS: Record<ProjectStage, string> = {
+  planned: 'Planned',
+  paired: 'Paired',
+  'waiting-for-sac': 'Waiting for sac',
+  'sac-laid': 'Sac laid',
+  'in-incubator': 'In incubator',
+  brood: 'Brood',
+  'shares-settled': 'Shares settled',
+  closed: 'Closed',
+  'ended-early': 'Ended early',
+};
+
+export const ENDED_EARLY_LABELS: Record<EndedEarlyReason, string> = {
+  'no-sac': 'no sac',
+  'female-molted': 'the female molted',
+  'sac-failed': 'the sac failed',
+  'sac-eaten': 'the sac was eaten',
+  'male-died': 'the male died before pairing',
+};
+
+export const PAIRING_OUTCOME_LABELS: Record<PairingOutcome, string> = {
+  connected: 'Connected',
+  'interest-only': 'Interest only',
+  'female-refused': 'Female refused',
+  aggression: 'Aggression, separated',
+  'male-lost': 'Male lost',
+};
+
+export const ROLE_LABELS: Record<ProjectRole, string> = { owner: 'Keeper (runs it)', partner: 'Partner', caretaker: 'Caretaker' };
+
+export const FAILURE_CLAUSE_LABELS: Record<FailureClause, string> = {
+  'nothing-owed': 'Nothing is owed if it fails',
+  'carries-over': 'Carries over to the next sac',
+};
+
+export const SHIPPING_LABELS: Record<ShippingPayer, string> = { sender: 'Sender pays', recipient: 'Recipient pays', split: 'Split between both' };
+
+export const SEVERITY_COLOURS: Record<WarningSeverity, string> = { danger: 'clay', warning: 'amber', info: 'moss' };
+
+/** "Ended early: the female molted" for an ended project, else the stage's own name. */
+export function stageText(stage: ProjectStage, reason?: EndedEarlyReason): string {
+  if (stage === 'ended-early') return reason ? `Ended early: ${ENDED_EARLY_LABELS[reason]}` : 'Ended early';
+  return STAGE_LABELS[stage];
+}
+
+/** Minor units to "€12.50" in the given currency. */
+export function formatMoney(minor: number, currency: string): string {
+  try {
+    return new Intl.NumberFormat('en-GB', { style: 'currency', currency }).format(minor / 100);
+  } catch {
+    return `${(minor / 100).toFixed(2)} ${currency}`;
+  }
+}

@@ -1,0 +1,30 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { BroodCountRequest, BroodCountResponse, BroodCountsResponse } from '@broodsilk/shared';
+import { api } from '@/lib/api-client';
+import { invalidateAfterSacChange, sacQueries } from './sacs';
+
+export function fetchBroodCounts(sacId: string, signal?: AbortSignal): Promise<BroodCountsResponse> {
+  return api.get<BroodCountsResponse>(`/sacs/${sacId}/brood`, { signal });
+}
+
+/** ['sacs','brood',sacId] */
+export const broodQueries = {
+  counts: (sacId: string) =>
+    queryOptions({
+      queryKey: [...sacQueries.all(), 'brood', sacId] as const,
+      queryFn: ({ signal }) => fetchBroodCounts(sacId, signal),
+    }),
+};
+
+export function useBroodCounts(sacId: string, enabled = true) {
+  return useQuery({ ...broodQueries.counts(sacId), enabled });
+}
+
+export function useRecordBroodCount(sacId: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (body: BroodCountRequest) => api.post<BroodCountResponse>(`/sacs/${sacId}/brood`, body),
+    meta: { handlesErrors: true },
+    onSuccess: () => invalidateAfterSacChange(qc),
+  });
+}

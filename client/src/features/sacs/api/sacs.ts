@@ -1,0 +1,70 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { CreateSacRequest, SacResponse, UpdateSacRequest } from '@broodsilk/shared';
+import { api } from '@/lib/api-client';
+
+export function fetchProjectSacs(projectId: string, signal?: AbortSignal): Promise<SacResponse[]> {
+  return api.get<SacResponse[]>(`/projects/${projectId}/sacs`, { signal });
+}
+
+export function fetchSac(id: string, signal?: AbortSignal): Promise<SacResponse> {
+  return api.get<SacResponse>(`/sacs/${id}`, { signal });
+}
+
+/**
+ * ['sacs'] → ['sacs','project',projectId] · ['sacs','detail',id] · ['sacs','log',id] · ['sacs','opening',id] · ['sacs','brood',id].
+ * A project's sacs are listed under the sacs keys (not the project's) so this feature owns them.
+ */
+export const sacQueries = {
+  all: () => ['sacs'] as const,
+  ofProject: (projectId: string) =>
+    queryOptions({
+      queryKey: [...sacQueries.all(), 'project', projectId] as const,
+      queryFn: ({ signal }) => fetchProjectSacs(projectId, signal),
+    }),
+  detail: (id: string) =>
+    queryOptions({
+      queryKey: [...sacQueries.all(), 'detail', id] as const,
+      queryFn: ({ signal }) => fetchSac(id, signal),
+    }),
+};
+
+export function useProjectSacs(projectId: string) {
+  return useQuery(sacQueries.ofProject(projectId));
+}
+
+export function useSac(id: string) {
+  return useQuery(sacQueries.detail(id));
+}
+
+/**
+ * A sac changed: every sac query (day N, roll and window states are derived together) and the
+ * project pages and dashboard, whose stage and due lists follow from it.
+ */
+export async function invalidateAfterSacChange(qc: ReturnType<typeof useQueryClient>): Promise<void> {
+  await Promise.all([
+    qc.invalidateQueries({ queryKey: sacQueries.all() }),
+    qc.invalidateQueries({ queryKey: ['projects'] }),
+    qc.invalidateQueries({ queryKey: ['dashboard'] }),
+  ]);
+}
+
+export function useCreateSac(projectId: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (body: CreateSacRequest) => api.post<SacResponse>(`/projects/${projectId}/sacs`, body),
+    meta: { handlesErrors: true },
+    onSuccess: () => invalidateAfterSacChange(qc),
+  });
+}
+
+export function useUpdateSac(id: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (body: UpdateSacRequest) => api.patch<SacResponse>(`/sacs/${id}`, body),
+    meta: { handlesErrors: true },
+    onSuccess: async (sac) => {
+      qc.setQueryData(sacQueries.detail(id).queryKey, sac);
+      await invalidateAfterSacChange(qc);
+    },
+  });
+}

@@ -1,0 +1,139 @@
+import { Alert, Button, Collapse, Group, NumberInput, Select, SimpleGrid, Stack, Table, Text, TextInput } from '@mantine/core';
+import { useForm } from '@mantine/form';
+import { useDisclosure } from '@mantine/hooks';
+import { useState } from 'react';
+import { BROOD_LOSS_REASONS, BROOD_STAGES, type BroodLossReason, type BroodStage } from '@broodsilk/shared';
+import { formatInstant } from '@/lib/dates';
+import { applyServerErrors } from '@/lib/form-errors';
+import { useBroodCounts, useRecordBroodCount } from '../api/brood';
+import { broodLabel } from '../utils/sac-view';
+
+const LOSS_LABELS: Record<BroodLossReason, string> = {
+  died: 'Died',
+  'failed-molt': 'Failed molt',
+  cannibalism: 'Eaten by siblings',
+  mould: 'Mould',
+  escaped: 'Escaped',
+  other: 'Other',
+};
+
+const stageOptions = BROOD_STAGES.map((s) => ({ value: s, label: broodLabel(s) }));
+const lossOptions = BROOD_LOSS_REASONS.map((r) => ({ value: r, label: LOSS_LABELS[r] }));
+
+interface Values {
+  stage: BroodStage;
+  alive: number | string;
+  lost: number | string;
+  lossReason: BroodLossReason | null;
+  note: string;
+}
+
+/** The brood's counts over time, and a form to record a new count. */
+export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: string; timeZone: string; canRecord: boolean; stage: BroodStage }) {
+  const counts = useBroodCounts(sacId);
+  const record = useRecordBroodCount(sacId);
+  const [opened, { toggle, close }] = useDisclosure(false);
+  const [message, setMessage] = useState<string | null>(null);
+  const form = useForm<Values>({
+    mode: 'uncontrolled',
+    initialValues: { stage, alive: '', lost: 0, lossReason: null, note: '' },
+    validate: {
+      alive: (v) => (v === '' || Number(v) < 0 ? 'How many are alive?' : null),
+      lossReason: (v, values) => (Number(values.lost) > 0 && !v ? 'Why were they lost?' : null),
+    },
+  });
+  const submit = form.onSubmit(async (v) => {
+    setMessage(null);
+    try {
+      await record.mutateAsync({
+        stage: v.stage,
+        alive: Number(v.alive),
+        lost: Number(v.lost) || 0,
+        ...(Number(v.lost) > 0 && v.lossReason ? { lossReason: v.lossReason } : {}),
+        note: v.note.trim() || null,
+      });
+      form.reset();
+      close();
+    } catch (e) {
+      setMessage(applyServerErrors(form, e));
+    }
+  });
+  return (
+    <Stack>
+      {counts.isError && <Alert color="clay">{counts.error.message}</Alert>}
+      {counts.data && counts.data.counts.length === 0 && <Text c="dimmed">No counts yet; the opening gives the first one.</Text>}
+      {counts.data && counts.data.counts.length > 0 && (
+        <>
+          <Text size="sm">
+            Alive now: <b>{counts.data.current ?? '—'}</b>
+          </Text>
+          <Table.ScrollContainer minWidth={360}>
+            <Table verticalSpacing={4} fz="sm" data-testid="brood-counts">
+              <Table.Thead>
+                <Table.Tr>
+                  <Table.Th>When</Table.Th>
+                  <Table.Th>Stage</Table.Th>
+                  <Table.Th>Alive</Table.Th>
+                  <Table.Th>Lost</Table.Th>
+                </Table.Tr>
+              </Table.Thead>
+              <Table.Tbody>
+                {[...counts.data.counts]
+                  .sort((a, b) => (a.at < b.at ? 1 : -1))
+                  .map((c) => (
+                    <Table.Tr key={c.id}>
+                      <Table.Td>{formatInstant(c.at, timeZone)}</Table.Td>
+                      <Table.Td>{broodLabel(c.stage)}</Table.Td>
+                      <Table.Td>{c.alive}</Table.Td>
+                      <Table.Td>
+                        {c.lost > 0 ? (
+                          <Text size="sm" className="tone-failed">
+                            {c.lost}
+                            {c.lossReason ? ` (${LOSS_LABELS[c.lossReason].toLowerCase()})` : ''}
+                          </Text>
+                        ) : (
+                          '—'
+                        )}
+                      </Table.Td>
+                    </Table.Tr>
+                  ))}
+              </Table.Tbody>
+            </Table>
+          </Table.ScrollContainer>
+        </>
+      )}
+      {canRecord && (
+        <>
+          <Group>
+            <Button variant="light" onClick={toggle}>
+              {opened ? 'Close' : 'Record a count'}
+            </Button>
+          </Group>
+          <Collapse expanded={opened}>
+            <form onSubmit={submit} noValidate>
+              <Stack maw={520}>
+                <SimpleGrid cols={{ base: 2, sm: 4 }}>
+                  <Select label="Stage" data={stageOptions} allowDeselect={false} key={form.key('stage')} {...form.getInputProps('stage')} />
+                  <NumberInput label="Alive" min={0} allowDecimal={false} key={form.key('alive')} {...form.getInputProps('alive')} />
+                  <NumberInput label="Lost" min={0} allowDecimal={false} key={form.key('lost')} {...form.getInputProps('lost')} />
+                  <Select label="Lost because" data={lossOptions} key={form.key('lossReason')} {...form.getInputProps('lossReason')} />
+                </SimpleGrid>
+                <TextInput label="Note" key={form.key('note')} {...form.getInputProps('note')} />
+                {message && (
+                  <Alert color="clay" role="alert">
+                    {message}
+                  </Alert>
+                )}
+                <Group>
+                  <Button type="submit" loading={record.isPending}>
+                    Save count
+                  </Button>
+                </Group>
+              </Stack>
+            </form>
+          </Collapse>
+        </>
+      )}
+    </Stack>
+  );
+}

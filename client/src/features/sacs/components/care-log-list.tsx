@@ -1,0 +1,128 @@
+import { Alert, Badge, Button, Group, Popover, Stack, Table, Text, TextInput } from '@mantine/core';
+import { useState } from 'react';
+import { formatTemperature, type CareLogEntryResponse, type CareLogKind, type TemperatureUnit } from '@broodsilk/shared';
+import { formatInstant } from '@/lib/dates';
+import { isApiError } from '@/lib/api-error';
+import { useAddCareLogEntry, useCareLog } from '../api/care-log';
+import { broodLabel } from '../utils/sac-view';
+
+const KIND_LABELS: Record<CareLogKind, string> = {
+  roll: 'Rolled',
+  temperature: 'Temperature',
+  humidity: 'Humidity',
+  check: 'Checked',
+  stage: 'Stage',
+  note: 'Note',
+  strike: 'Correction',
+};
+
+function what(e: CareLogEntryResponse, unit: TemperatureUnit): string {
+  switch (e.kind) {
+    case 'temperature':
+      return e.temperatureC !== null ? formatTemperature(e.temperatureC, unit) : '';
+    case 'humidity':
+      return e.humidityPercent !== null ? `${e.humidityPercent} %` : '';
+    case 'stage':
+      return e.stage ? broodLabel(e.stage) : '';
+    case 'strike':
+      return e.text ?? '';
+    default:
+      return e.text ?? '';
+  }
+}
+
+function StrikeButton({ sacId, entry }: { sacId: string; entry: CareLogEntryResponse }) {
+  const add = useAddCareLogEntry(sacId);
+  const [opened, setOpened] = useState(false);
+  const [reason, setReason] = useState('');
+  const [error, setError] = useState<string | null>(null);
+  return (
+    <Popover opened={opened} onChange={setOpened} position="bottom-end" withArrow trapFocus>
+      <Popover.Target>
+        <Button size="compact-xs" variant="subtle" color="clay" onClick={() => setOpened((o) => !o)}>
+          Strike
+        </Button>
+      </Popover.Target>
+      <Popover.Dropdown>
+        <Stack gap="xs" w={260}>
+          <TextInput label="Why is this entry wrong?" value={reason} onChange={(e) => setReason(e.currentTarget.value)} data-autofocus />
+          {error && (
+            <Text size="xs" className="tone-failed" role="alert">
+              {error}
+            </Text>
+          )}
+          <Button
+            size="xs"
+            color="clay"
+            disabled={!reason.trim()}
+            loading={add.isPending}
+            onClick={async () => {
+              setError(null);
+              try {
+                await add.mutateAsync({ kind: 'strike', strikes: entry.id, reason: reason.trim(), text: reason.trim() });
+                setOpened(false);
+              } catch (e) {
+                setError(isApiError(e) ? e.message : 'Not saved.');
+              }
+            }}
+          >
+            Strike entry
+          </Button>
+        </Stack>
+      </Popover.Dropdown>
+    </Popover>
+  );
+}
+
+/** The care log of a sac, newest first; wrong entries stay visible, struck through, with the reason. */
+export function CareLogList({ sacId, timeZone, temperatureUnit, canStrike }: { sacId: string; timeZone: string; temperatureUnit: TemperatureUnit; canStrike: boolean }) {
+  const log = useCareLog(sacId);
+  if (log.isPending) return <Text c="dimmed">Loading the care log…</Text>;
+  if (log.isError) return <Alert color="clay">{log.error.message}</Alert>;
+  if (log.data.length === 0) return <Text c="dimmed">No entries yet.</Text>;
+  const entries = [...log.data].sort((a, b) => (a.at < b.at ? 1 : -1));
+  return (
+    <Table.ScrollContainer minWidth={360}>
+      <Table verticalSpacing={4} fz="sm" data-testid="care-log">
+        <Table.Thead>
+          <Table.Tr>
+            <Table.Th>When</Table.Th>
+            <Table.Th>Entry</Table.Th>
+            <Table.Th visibleFrom="sm">By</Table.Th>
+            <Table.Th />
+          </Table.Tr>
+        </Table.Thead>
+        <Table.Tbody>
+          {entries.map((e) => {
+            const struck = !!e.struck;
+            return (
+              <Table.Tr key={e.id} data-struck={struck || undefined}>
+                <Table.Td style={{ textDecoration: struck ? 'line-through' : undefined }}>{formatInstant(e.at, timeZone)}</Table.Td>
+                <Table.Td>
+                  <Group gap={6} wrap="nowrap">
+                    <Badge size="sm" variant="light" tt="none" color={e.kind === 'strike' ? 'clay' : e.kind === 'roll' ? 'moss' : 'gray'}>
+                      {KIND_LABELS[e.kind]}
+                    </Badge>
+                    <Text size="sm" td={struck ? 'line-through' : undefined} c={struck ? 'dimmed' : undefined}>
+                      {what(e, temperatureUnit)}
+                    </Text>
+                  </Group>
+                  {e.struck && (
+                    <Text size="xs" className="tone-failed">
+                      struck{e.struck.reason ? `: ${e.struck.reason}` : ''}
+                    </Text>
+                  )}
+                  <Text size="xs" c="dimmed" hiddenFrom="sm">
+                    {e.author?.name}
+                  </Text>
+                </Table.Td>
+                <Table.Td visibleFrom="sm">{e.author?.name ?? '—'}</Table.Td>
+                <Table.Td>{canStrike && !struck && e.kind !== 'strike' && <StrikeButton sacId={sacId} entry={e} />}</Table.Td>
+              </Table.Tr>
+            );
+          })}
+        </Table.Tbody>
+      </Table>
+    </Table.ScrollContainer>
+  );
+}

@@ -1,0 +1,179 @@
+import { Alert, Box, Button, Group, NumberInput, Select, Stack, Text, TextInput } from '@mantine/core';
+import { useState } from 'react';
+import { BROOD_STAGES, fahrenheitToCelsius, formatTemperature, type BroodStage, type CareLogRequest, type SacResponse, type TemperatureUnit } from '@broodsilk/shared';
+import { formatInstant } from '@/lib/dates';
+import { isApiError } from '@/lib/api-error';
+import { useAddCareLogEntry } from '../api/care-log';
+import { useUpdateSac } from '../api/sacs';
+import { broodLabel, ROLL_TEXT } from '../utils/sac-view';
+import classes from './incubator-entry.module.css';
+
+interface IncubatorEntryProps {
+  sac: SacResponse;
+  timeZone: string;
+  temperatureUnit: TemperatureUnit;
+  /** Cautions of the species (urticating hairs, venom) in words, shown under the heat-source caution. */
+  speciesCautions?: string[];
+  /** What the sac is, e.g. the project title. */
+  title?: string;
+}
+
+const stageOptions = BROOD_STAGES.map((s) => ({ value: s, label: broodLabel(s) }));
+
+/**
+ * The one-handed screen at the incubator: the next roll due at the top, readings and notes in the
+ * middle, the big "Rolled now" at the bottom where the thumb is.
+ */
+export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions = [], title }: IncubatorEntryProps) {
+  const add = useAddCareLogEntry(sac.id);
+  const update = useUpdateSac(sac.id);
+  const [done, setDone] = useState<string | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  const [temperature, setTemperature] = useState<number | string>('');
+  const [humidity, setHumidity] = useState<number | string>('');
+  const [note, setNote] = useState('');
+  const [stage, setStage] = useState<string | null>(null);
+
+  async function send(entries: CareLogRequest[], what: string) {
+    setError(null);
+    setDone(null);
+    try {
+      let last: { at: string } | undefined;
+      for (const entry of entries) last = await add.mutateAsync(entry);
+      setDone(`${what} logged${last ? ` at ${formatInstant(last.at, timeZone)}` : ''}.`);
+      return true;
+    } catch (e) {
+      setError(isApiError(e) ? e.message : 'The entry was not saved. Try again.');
+      return false;
+    }
+  }
+
+  async function saveReadings() {
+    const entries: CareLogRequest[] = [];
+    if (temperature !== '') entries.push({ kind: 'temperature', temperature: { value: Number(temperature), unit: temperatureUnit } });
+    if (humidity !== '') entries.push({ kind: 'humidity', humidityPercent: Number(humidity) });
+    if (entries.length === 0) {
+      setError('Enter a temperature or a humidity first.');
+      return;
+    }
+    if (await send(entries, entries.length === 2 ? 'Temperature and humidity' : entries[0]!.kind === 'temperature' ? 'Temperature' : 'Humidity')) {
+      setTemperature('');
+      setHumidity('');
+    }
+  }
+
+  const roll = sac.roll;
+  const rollText = roll ? ROLL_TEXT[roll.status] : null;
+  const tempHint = temperature !== '' && temperatureUnit === 'F' ? formatTemperature(fahrenheitToCelsius(Number(temperature)), 'C') : null;
+
+  return (
+    <Stack gap="md" className={classes.screen}>
+      <Stack gap={2}>
+        {title && (
+          <Text fw={700} size="lg">
+            {title}
+          </Text>
+        )}
+        <Text size="sm" c="dimmed">
+          Day {sac.dayNumber} · {broodLabel(sac.broodStage)}
+        </Text>
+        {roll && rollText ? (
+          <Box data-testid="next-roll">
+            <Text size="xl" fw={800} className={rollText.tone}>
+              {rollText.label}
+            </Text>
+            <Text size="md">due {formatInstant(roll.due, timeZone)}</Text>
+            {roll.lastRollAt && (
+              <Text size="sm" c="dimmed">
+                last roll {formatInstant(roll.lastRollAt, timeZone)}
+              </Text>
+            )}
+          </Box>
+        ) : (
+          <Text size="md" c="dimmed" data-testid="next-roll">
+            No rolls for this sac {sac.pulled ? '(rolling is off or the young are free-living)' : '(still with the mother)'}.
+          </Text>
+        )}
+      </Stack>
+
+      <Alert color="amber" variant="light" title="Heat sources" data-testid="heat-caution">
+        <Text size="sm">{sac.incubatorCaution ?? 'Heat only behind a thermostat, away from bedding and cables, and never left running unattended without checks: unregulated heat can cook eggs and start fires. Local law and licensed practice come first.'}</Text>
+        {speciesCautions.map((c) => (
+          <Text size="sm" mt={4} key={c} fw={600}>
+            {c}
+          </Text>
+        ))}
+      </Alert>
+
+      <Group grow align="flex-end">
+        <NumberInput label={`Temperature (°${temperatureUnit})`} size="lg" decimalScale={1} inputMode="decimal" value={temperature} onChange={setTemperature} description={tempHint ? `= ${tempHint}` : undefined} />
+        <NumberInput label="Humidity (%)" size="lg" min={0} max={100} allowDecimal={false} inputMode="numeric" value={humidity} onChange={setHumidity} />
+      </Group>
+      <Button size="lg" variant="light" onClick={saveReadings} loading={add.isPending}>
+        Save readings
+      </Button>
+
+      <Group grow align="flex-end">
+        <TextInput label="Note" size="lg" value={note} onChange={(e) => setNote(e.currentTarget.value)} placeholder="e.g. a little condensation" />
+      </Group>
+      <Group grow>
+        <Button size="lg" variant="default" onClick={() => send([{ kind: 'check' }], 'Check')} loading={add.isPending}>
+          Checked, all well
+        </Button>
+        <Button
+          size="lg"
+          variant="default"
+          disabled={!note.trim()}
+          onClick={async () => {
+            if (await send([{ kind: 'note', text: note.trim() }], 'Note')) setNote('');
+          }}
+        >
+          Add note
+        </Button>
+      </Group>
+      <Group grow align="flex-end">
+        <Select label="Stage now" size="lg" data={stageOptions} value={stage} onChange={setStage} placeholder={broodLabel(sac.broodStage)} />
+        <Button size="lg" variant="default" disabled={!stage} onClick={() => send([{ kind: 'stage', stage: stage as BroodStage }], 'Stage')} loading={add.isPending}>
+          Set stage
+        </Button>
+      </Group>
+
+      <Box className={classes.thumbZone}>
+        {error && (
+          <Alert color="clay" role="alert" mb="xs">
+            {error}
+          </Alert>
+        )}
+        {done && (
+          <Text className="tone-ok" fw={600} mb="xs" role="status">
+            {done}
+          </Text>
+        )}
+        {!sac.pulled && sac.outcome === 'in-progress' ? (
+          <Button
+            fullWidth
+            size="xl"
+            h={76}
+            fz={22}
+            loading={update.isPending}
+            onClick={async () => {
+              setError(null);
+              try {
+                await update.mutateAsync({ pulledAt: new Date().toISOString() });
+                setDone('Pulled: the first roll is due now.');
+              } catch (e) {
+                setError(isApiError(e) ? e.message : 'The pull was not saved. Try again.');
+              }
+            }}
+          >
+            Pulled now, into the incubator
+          </Button>
+        ) : (
+          <Button fullWidth size="xl" h={76} fz={24} onClick={() => send([{ kind: 'roll' }], 'Roll')} loading={add.isPending} disabled={!roll} data-testid="rolled-now">
+            Rolled now
+          </Button>
+        )}
+      </Box>
+    </Stack>
+  );
+}

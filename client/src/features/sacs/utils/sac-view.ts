@@ -1,0 +1,49 @@
+import { BROOD_STAGE_LABEL_SETS, type BroodStage, type PullWindowState, type RollStatus, type SacResponse } from '@broodsilk/shared';
+import { formatDate, formatInstant } from '@/lib/dates';
+
+export const BROOD_LABELS = BROOD_STAGE_LABEL_SETS.us;
+
+export function broodLabel(stage: BroodStage): string {
+  return BROOD_LABELS[stage];
+}
+
+/** Tone class and words for a pull window state. */
+export const PULL_WINDOW_TEXT: Record<PullWindowState, { label: string; tone: string; colour: string }> = {
+  'not-yet': { label: 'Not yet', tone: '', colour: 'gray' },
+  open: { label: 'Pull window open', tone: 'tone-ok', colour: 'moss' },
+  closing: { label: 'Pull window closing', tone: 'tone-due', colour: 'amber' },
+  past: { label: 'Pull window past', tone: 'tone-failed', colour: 'clay' },
+};
+
+export const ROLL_TEXT: Record<RollStatus, { label: string; tone: string; colour: string }> = {
+  upcoming: { label: 'Next roll', tone: '', colour: 'gray' },
+  'due-soon': { label: 'Roll due soon', tone: 'tone-due', colour: 'amber' },
+  due: { label: 'Roll due now', tone: 'tone-due', colour: 'amber' },
+  overdue: { label: 'Roll overdue', tone: 'tone-failed', colour: 'clay' },
+};
+
+const days = (n: number) => (n === 1 ? '1 day' : `${n} days`);
+
+/** One sentence about the pull window, e.g. "Opens in 3 days (12 Dec 2026), closes 5 Jan 2027". */
+export function pullWindowSentence(sac: SacResponse): string {
+  const w = sac.pullWindow;
+  if (sac.pulled) return `Pulled${sac.pulledOn ? ` on ${formatDate(sac.pulledOn)}` : ''} (window was day ${w.fromDay}–${w.toDay}).`;
+  switch (w.state) {
+    case 'not-yet':
+      return `Opens in ${days(w.daysUntilOpens)} on ${formatDate(w.opensOn)} (day ${w.fromDay}); closes ${formatDate(w.closesOn)} (day ${w.toDay}).`;
+    case 'open':
+      return `Open since ${formatDate(w.opensOn)}; closes ${formatDate(w.closesOn)}, in ${days(w.daysUntilCloses ?? 0)}.`;
+    case 'closing':
+      return w.daysUntilCloses === 0 ? `Closes today, ${formatDate(w.closesOn)}.` : `Closing: last day ${formatDate(w.closesOn)}, in ${days(w.daysUntilCloses ?? 0)}.`;
+    case 'past':
+      return `Closed ${formatDate(w.closesOn)}, ${days(w.daysPastClose)} ago.`;
+  }
+}
+
+/** "Roll overdue · due Tue 1 Dec, 08:00" or null when rolling does not apply. */
+export function rollSentence(sac: SacResponse, timeZone: string): string | null {
+  if (!sac.roll) return null;
+  return `${ROLL_TEXT[sac.roll.status].label} · due ${formatInstant(sac.roll.due, timeZone)}`;
+}
+
+export const SAC_OUTCOME_TEXT: Record<SacResponse['outcome'], string> = { 'in-progress': 'In progress', hatched: 'Hatched', failed: 'Failed' };
