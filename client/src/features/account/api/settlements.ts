@@ -1,0 +1,45 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { CheckoutResponse, CreateCheckoutRequest, CreatePayoutAccountRequest, PayoutAccountResponse } from '@broodsilk/shared';
+import { api } from '@/lib/api-client';
+import { accountKeys } from './keys';
+
+export function fetchPayoutAccount(signal?: AbortSignal): Promise<PayoutAccountResponse> {
+  return api.get<PayoutAccountResponse>('/settlements/payout-account', { signal });
+}
+
+export const payoutQueries = {
+  account: () =>
+    queryOptions({
+      queryKey: accountKeys.payoutAccount(),
+      queryFn: ({ signal }) => fetchPayoutAccount(signal),
+    }),
+};
+
+export function usePayoutAccount(enabled = true) {
+  return useQuery({ ...payoutQueries.account(), enabled });
+}
+
+/** Links (or re-links) a payout account; the answer carries the onboarding link. */
+export function useCreatePayoutAccount() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (body: CreatePayoutAccountRequest) => api.post<PayoutAccountResponse>('/settlements/payout-account', body),
+    meta: { handlesErrors: true },
+    onSuccess: async (account) => {
+      qc.setQueryData(accountKeys.payoutAccount(), account);
+      await qc.invalidateQueries({ queryKey: accountKeys.payoutAccount() });
+    },
+  });
+}
+
+/** Starts a payment to another party; the browser is then sent to the payment page at `url`. */
+export function useCreateCheckout(projectId: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (body: CreateCheckoutRequest) => api.post<CheckoutResponse>(`/projects/${projectId}/settlements/checkout`, body),
+    meta: { handlesErrors: true },
+    onSuccess: async () => {
+      await qc.invalidateQueries({ queryKey: accountKeys.project(projectId) });
+    },
+  });
+}

@@ -1,0 +1,113 @@
+import { Alert, Anchor, Stack, Table, Text } from '@mantine/core';
+import type { ReactNode } from 'react';
+import type { LedgerEntryResponse } from '@broodsilk/shared';
+import { formatDate } from '@/lib/dates';
+import { useEntries } from '../api/entries';
+import { ENTRY_KIND_LABELS, METHOD_LABELS, STATUS_LABELS, young } from '../utils/labels';
+import { formatMoney } from '../utils/money';
+
+const rowId = (seq: number) => `account-entry-${seq}`;
+
+function partyText(e: LedgerEntryResponse): string {
+  if (e.party) return e.party.name;
+  if (e.from && e.to) return `${e.from.name} → ${e.to.name}`;
+  return '—';
+}
+
+function amountText(e: LedgerEntryResponse): string {
+  const parts: string[] = [];
+  if (e.count !== null) parts.push(young(e.count));
+  if (e.kind === 'arrival' && e.arrivedAlive !== null) parts.push(`${e.arrivedAlive} alive, ${e.arrivedDead ?? 0} dead`);
+  if (e.amountMinor !== null && e.currency) parts.push(formatMoney(e.amountMinor, e.currency));
+  if (e.priceMinor !== null && e.currency) parts.push(`for ${formatMoney(e.priceMinor, e.currency)}`);
+  if (e.pricePerSpiderlingMinor !== null && e.currency) parts.push(`at ${formatMoney(e.pricePerSpiderlingMinor, e.currency)} each`);
+  return parts.join(' ') || '—';
+}
+
+function Details({ e, bySeq }: { e: LedgerEntryResponse; bySeq: Map<string, LedgerEntryResponse> }) {
+  const lines: ReactNode[] = [];
+  if (e.method) lines.push(`${METHOD_LABELS[e.method]}${e.carrier ? ` with ${e.carrier}` : ''}${e.tracking ? `, tracking ${e.tracking}` : ''}`);
+  const target = e.reversesId ? bySeq.get(e.reversesId) : e.handOverId ? bySeq.get(e.handOverId) : e.confirmsId ? bySeq.get(e.confirmsId) : undefined;
+  if (target) {
+    const verb = e.reversesId ? 'Reverses' : 'For';
+    lines.push(
+      <>
+        {verb}{' '}
+        <Anchor href={`#${rowId(target.seq)}`} size="xs">
+          #{target.seq} {ENTRY_KIND_LABELS[target.kind].toLowerCase()}
+        </Anchor>
+      </>,
+    );
+  }
+  if (e.reason) lines.push(`Why: ${e.reason}`);
+  if (e.note) lines.push(e.note);
+  if (e.problem) lines.push(<span className="tone-failed">{e.problem}</span>);
+  if (!lines.length) return null;
+  return (
+    <Stack gap={0}>
+      {lines.map((l, i) => (
+        <Text key={i} size="xs" c="dimmed">
+          {l}
+        </Text>
+      ))}
+    </Stack>
+  );
+}
+
+/** The ledger as recorded: nothing here is editable; a correction is a new entry that reverses an old one. */
+export function EntriesTable({ projectId }: { projectId: string }) {
+  const entries = useEntries(projectId);
+  if (entries.isPending) return <Text c="dimmed">Loading entries…</Text>;
+  if (entries.isError) return <Alert color="clay">{entries.error.message}</Alert>;
+  const list = entries.data;
+  if (list.length === 0) return <Text c="dimmed">Nothing has been recorded in this account yet.</Text>;
+  const byId = new Map(list.map((e) => [e.id, e]));
+  const reversedBy = new Map<string, LedgerEntryResponse>();
+  for (const e of list) if (e.kind === 'correction' && e.reversesId && e.status === 'in-force') reversedBy.set(e.reversesId, e);
+  return (
+    <Table.ScrollContainer minWidth={760}>
+      <Table aria-label="Account entries" verticalSpacing="xs" striped>
+        <Table.Thead>
+          <Table.Tr>
+            <Table.Th>#</Table.Th>
+            <Table.Th>Date</Table.Th>
+            <Table.Th>Kind</Table.Th>
+            <Table.Th>Party</Table.Th>
+            <Table.Th>Count / amount</Table.Th>
+            <Table.Th>Recorded by</Table.Th>
+            <Table.Th>State</Table.Th>
+          </Table.Tr>
+        </Table.Thead>
+        <Table.Tbody>
+          {list.map((e) => {
+            const status = STATUS_LABELS[e.status];
+            const reverser = reversedBy.get(e.id);
+            return (
+              <Table.Tr key={e.id} id={rowId(e.seq)} data-testid={`entry-${e.kind}`}>
+                <Table.Td>{e.seq}</Table.Td>
+                <Table.Td style={{ whiteSpace: 'nowrap' }}>{formatDate(e.date)}</Table.Td>
+                <Table.Td>
+                  {ENTRY_KIND_LABELS[e.kind]}
+                  <Details e={e} bySeq={byId} />
+                </Table.Td>
+                <Table.Td>{partyText(e)}</Table.Td>
+                <Table.Td>{amountText(e)}</Table.Td>
+                <Table.Td>{e.source === 'payment-provider' ? 'Payment provider' : (e.recordedBy?.name ?? '—')}</Table.Td>
+                <Table.Td>
+                  <Text size="sm" className={status.tone}>
+                    {e.status === 'awaiting-confirmation' && e.awaitingConfirmationBy ? `Waiting for ${e.awaitingConfirmationBy.name} to confirm` : status.label}
+                  </Text>
+                  {reverser && (
+                    <Anchor href={`#${rowId(reverser.seq)}`} size="xs">
+                      by correction #{reverser.seq}
+                    </Anchor>
+                  )}
+                </Table.Td>
+              </Table.Tr>
+            );
+          })}
+        </Table.Tbody>
+      </Table>
+    </Table.ScrollContainer>
+  );
+}

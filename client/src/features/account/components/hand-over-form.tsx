@@ -1,0 +1,130 @@
+import { Alert, Button, Group, List, NativeSelect, NumberInput, SegmentedControl, Stack, Text, TextInput } from '@mantine/core';
+import { useForm } from '@mantine/form';
+import { useState } from 'react';
+import type { HandOverMethod, SacSharesView } from '@broodsilk/shared';
+import { useCreateEntry, useHandOverForm } from '../api/entries';
+import { applyEntryErrors } from '../utils/entry-errors';
+import { METHOD_LABELS, young } from '../utils/labels';
+import { formatDate } from '@/lib/dates';
+
+interface Values {
+  memberId: string;
+  sacId: string;
+  count: number | string;
+  date: string;
+  method: HandOverMethod;
+  carrier: string;
+  tracking: string;
+  note: string;
+}
+
+/** The owner records spiderlings delivered to a party, by pick-up or shipment. */
+export function HandOverForm({ projectId, today, sacs, onDone }: { projectId: string; today: string; sacs: SacSharesView[]; onDone?: () => void }) {
+  const info = useHandOverForm(projectId);
+  const create = useCreateEntry(projectId);
+  const [message, setMessage] = useState<string | null>(null);
+  const [method, setMethod] = useState<HandOverMethod>('pick-up');
+  const withYoung = sacs.filter((s) => s.aliveInCare > 0);
+  const form = useForm<Values>({
+    mode: 'uncontrolled',
+    initialValues: { memberId: '', sacId: '', count: '', date: today, method: 'pick-up', carrier: '', tracking: '', note: '' },
+    validate: {
+      memberId: (v) => (v ? null : 'Who receives the spiderlings?'),
+      count: (v) => (Number.isInteger(Number(v)) && Number(v) > 0 ? null : 'How many spiderlings? A whole number above 0.'),
+      date: (v) => (/^\d{4}-\d{2}-\d{2}$/.test(v) ? null : 'Give the date as YYYY-MM-DD.'),
+      sacId: (v) => (withYoung.length > 1 && !v ? 'Several sacs have young in care: which one?' : null),
+    },
+  });
+  form.watch('method', ({ value }) => setMethod(value));
+
+  const submit = form.onSubmit(async (v) => {
+    setMessage(null);
+    try {
+      await create.mutateAsync({
+        kind: 'hand-over',
+        memberId: v.memberId,
+        sacId: v.sacId || undefined,
+        count: Number(v.count),
+        date: v.date,
+        method: v.method,
+        carrier: v.method === 'shipment' && v.carrier.trim() ? v.carrier.trim() : undefined,
+        tracking: v.method === 'shipment' && v.tracking.trim() ? v.tracking.trim() : undefined,
+        note: v.note.trim() || undefined,
+      });
+      form.reset();
+      onDone?.();
+    } catch (e) {
+      setMessage(applyEntryErrors(form, e));
+    }
+  });
+
+  if (info.isPending) return <Text c="dimmed">Loading…</Text>;
+  if (info.isError) return <Alert color="clay">{info.error.message}</Alert>;
+  const partyOptions = [
+    { value: '', label: 'Choose a party' },
+    ...info.data.parties.map((p) => ({ value: p.memberId, label: `${p.name} (${young(p.owedSpiderlings)} still owed)` })),
+  ];
+
+  return (
+    <form onSubmit={submit} noValidate aria-label="Record a hand-over">
+      <Stack maw={520} gap="sm">
+        {info.data.handOverStage && (
+          <Text size="sm" c="dimmed">
+            The terms hand young over at {info.data.handOverStage}
+            {info.data.shippingPaidBy ? `; shipping is paid by ${info.data.shippingPaidBy}` : ''}.
+          </Text>
+        )}
+        <NativeSelect label="To" data={partyOptions} withAsterisk key={form.key('memberId')} {...form.getInputProps('memberId')} />
+        {withYoung.length > 1 && (
+          <NativeSelect
+            label="From the sac"
+            data={[{ value: '', label: 'Choose a sac' }, ...withYoung.map((s) => ({ value: s.sacId, label: `Laid ${formatDate(s.layDate)} (${s.aliveInCare} in care)` }))]}
+            key={form.key('sacId')}
+            {...form.getInputProps('sacId')}
+          />
+        )}
+        <Group grow align="flex-start">
+          <NumberInput label="Count" min={1} allowDecimal={false} withAsterisk key={form.key('count')} {...form.getInputProps('count')} />
+          <TextInput label="Date" type="date" max={today} withAsterisk key={form.key('date')} {...form.getInputProps('date')} />
+        </Group>
+        <Stack gap={4}>
+          <Text size="sm" fw={500} id="hand-over-method">
+            How
+          </Text>
+          <SegmentedControl
+            aria-labelledby="hand-over-method"
+            data={info.data.methods.map((m) => ({ value: m, label: METHOD_LABELS[m] }))}
+            key={form.key('method')}
+            {...form.getInputProps('method')}
+          />
+        </Stack>
+        {method === 'shipment' && (
+          <>
+            <Group grow align="flex-start">
+              <TextInput label="Carrier" key={form.key('carrier')} {...form.getInputProps('carrier')} />
+              <TextInput label="Tracking number" key={form.key('tracking')} {...form.getInputProps('tracking')} />
+            </Group>
+            <Alert color="amber" variant="light" title="Before you ship live spiderlings" data-testid="shipping-cautions">
+              <List size="sm" spacing={4}>
+                {info.data.shippingCautions.map((c) => (
+                  <List.Item key={c}>{c}</List.Item>
+                ))}
+              </List>
+            </Alert>
+          </>
+        )}
+        <TextInput label="Note" key={form.key('note')} {...form.getInputProps('note')} />
+        {message && (
+          <Alert color="clay" role="alert">
+            {message}
+          </Alert>
+        )}
+        <Group>
+          <Button type="submit" loading={create.isPending}>
+            Record hand-over
+          </Button>
+        </Group>
+      </Stack>
+    </form>
+  );
+}

@@ -1,0 +1,66 @@
+import { Alert, Button, Group, NumberInput, Stack, Text } from '@mantine/core';
+import { useForm } from '@mantine/form';
+import { useState } from 'react';
+import { applyServerErrors } from '@/lib/form-errors';
+import { useCreateCheckout } from '../api/settlements';
+import { formatMoney, minorDigits, toMajor, toMinor } from '../utils/money';
+
+interface Props {
+  projectId: string;
+  toMemberId: string;
+  toName: string;
+  owedMinor: number;
+  currency: string;
+  /** Where the browser goes for the payment page; the real one leaves the app. */
+  goTo?: (url: string) => void;
+}
+
+/** "Pay what you owe": an amount up to the debt, paid on the payment provider's page. */
+export function PayForm({ projectId, toMemberId, toName, owedMinor, currency, goTo = (url) => window.location.assign(url) }: Props) {
+  const checkout = useCreateCheckout(projectId);
+  const [message, setMessage] = useState<string | null>(null);
+  const digits = minorDigits(currency);
+  const form = useForm<{ amount: number | string }>({
+    mode: 'uncontrolled',
+    initialValues: { amount: toMajor(owedMinor, currency) },
+    validate: {
+      amount: (v) => {
+        const minor = toMinor(v, currency);
+        if (!(minor > 0)) return 'The amount must be above 0.';
+        return minor > owedMinor ? `You owe ${toName} ${formatMoney(owedMinor, currency)}; the amount cannot be more than that.` : null;
+      },
+    },
+  });
+  const submit = form.onSubmit(async (v) => {
+    setMessage(null);
+    try {
+      const session = await checkout.mutateAsync({ toMemberId, amountMinor: toMinor(v.amount, currency) });
+      goTo(session.url);
+    } catch (e) {
+      setMessage(applyServerErrors(form, e));
+    }
+  });
+  return (
+    <form onSubmit={submit} noValidate aria-label={`Pay ${toName}`}>
+      <Stack gap="xs" maw={420}>
+        <Text size="sm">
+          You owe {toName} {formatMoney(owedMinor, currency)}.
+        </Text>
+        <NumberInput label={`Amount (${currency})`} min={0} max={toMajor(owedMinor, currency)} decimalScale={digits} allowDecimal={digits > 0} key={form.key('amount')} {...form.getInputProps('amount')} />
+        {message && (
+          <Alert color="clay" role="alert">
+            {message}
+          </Alert>
+        )}
+        <Group>
+          <Button type="submit" loading={checkout.isPending}>
+            Pay what you owe
+          </Button>
+        </Group>
+        <Text size="xs" c="dimmed">
+          You will pay on the payment provider’s page and come back here afterwards.
+        </Text>
+      </Stack>
+    </form>
+  );
+}

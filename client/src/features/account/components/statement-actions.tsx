@@ -1,0 +1,49 @@
+import { Alert, Anchor, Button, Group, NativeSelect, Stack, Text } from '@mantine/core';
+import { useState } from 'react';
+import type { PartyRef } from '@broodsilk/shared';
+import { statementFileUrl, useEmailStatement } from '../api/statements';
+
+/** A party's statement as a CSV or PDF file, or e-mailed to that party. The owner picks the party; a partner gets their own. */
+export function StatementActions({ projectId, parties, fixedMemberId }: { projectId: string; parties: PartyRef[]; fixedMemberId?: string }) {
+  const [memberId, setMemberId] = useState(fixedMemberId ?? parties[0]?.memberId ?? '');
+  const email = useEmailStatement(projectId);
+  if (!memberId) return <Text c="dimmed">No party has a statement yet.</Text>;
+  const name = parties.find((p) => p.memberId === memberId)?.name ?? 'the party';
+  return (
+    <Stack gap="xs" data-testid="statement-actions">
+      {!fixedMemberId && (
+        <NativeSelect
+          label="Statement for"
+          maw={320}
+          data={parties.map((p) => ({ value: p.memberId, label: p.name }))}
+          value={memberId}
+          onChange={(e) => {
+            setMemberId(e.currentTarget.value);
+            email.reset();
+          }}
+        />
+      )}
+      <Group gap="md">
+        <Anchor href={statementFileUrl(projectId, memberId, 'csv')} download>
+          Download CSV
+        </Anchor>
+        <Anchor href={statementFileUrl(projectId, memberId, 'pdf')} download>
+          Download PDF
+        </Anchor>
+        <Button size="xs" variant="light" loading={email.isPending} onClick={() => email.mutate(memberId)}>
+          E-mail it to {name}
+        </Button>
+      </Group>
+      {email.isSuccess && (
+        <Text size="sm" className="tone-ok" role="status">
+          The statement was e-mailed to {name}.
+        </Text>
+      )}
+      {email.isError && (
+        <Alert color="clay" role="alert">
+          {email.error.message}
+        </Alert>
+      )}
+    </Stack>
+  );
+}
