@@ -98,6 +98,7 @@ export function Component() {
                 <SpeciesPicker
                   key={`${filters.speciesId ?? 'none'}-${chosenSpecies.data ? 'named' : 'unnamed'}`}
                   label="Species"
+                  size="md"
                   defaultValue={filters.speciesId ?? null}
                   defaultName={chosenSpecies.data?.scientificName ?? null}
                   onChange={(id) => update({ speciesId: id ?? undefined, offset: 0 })}

@@ -7,6 +7,12 @@ import { AnimalForm, type SpeciesFieldProps } from './animal-form';
 
 afterEach(() => vi.unstubAllGlobals());
 
+/** Pastes instead of typing key by key: the form is large and typing it is slow in jsdom. */
+async function fill(input: HTMLElement, text: string) {
+  await userEvent.click(input);
+  await userEvent.paste(text);
+}
+
 /** The form's contract with the app layer: any picker that reports a species id. */
 function PlainSpeciesField({ onChange, error }: SpeciesFieldProps) {
   return <TextInput label="Species id" error={error} onChange={(e) => onChange?.(e.currentTarget.value)} />;
@@ -14,14 +20,15 @@ function PlainSpeciesField({ onChange, error }: SpeciesFieldProps) {
 
 const SPECIES_ID = '5b1f7e56-8f07-4a55-9f55-0f3c1a6f0d11';
 
-describe('AnimalForm', () => {
+// A loaded machine renders this large form slowly; the limit is generous, nothing here is timed.
+describe('AnimalForm', { timeout: 30_000 }, () => {
   it('requires the maturing molt date for a mature male before sending anything', async () => {
     const { fetchStub, calls } = stubFetch({});
     vi.stubGlobal('fetch', fetchStub);
     const onSaved = vi.fn();
     renderWithProviders(<AnimalForm renderSpeciesPicker={(p) => <PlainSpeciesField {...p} />} onSaved={onSaved} />);
-    await userEvent.type(screen.getByLabelText(/Species id/), SPECIES_ID);
-    await userEvent.type(screen.getByLabelText(/^Label/), 'Ferdinand');
+    await fill(screen.getByLabelText(/Species id/), SPECIES_ID);
+    await fill(screen.getByLabelText(/^Label/), 'Ferdinand');
     await userEvent.click(screen.getByRole('radio', { name: 'Male' }));
     await userEvent.click(screen.getByRole('radio', { name: 'Mature' }));
     await userEvent.click(screen.getByRole('button', { name: 'Add to collection' }));
@@ -39,8 +46,8 @@ describe('AnimalForm', () => {
     vi.stubGlobal('fetch', fetchStub);
     const onSaved = vi.fn();
     renderWithProviders(<AnimalForm renderSpeciesPicker={(p) => <PlainSpeciesField {...p} />} onSaved={onSaved} />);
-    await userEvent.type(screen.getByLabelText(/Species id/), SPECIES_ID);
-    await userEvent.type(screen.getByLabelText(/^Label/), 'Rosa');
+    await fill(screen.getByLabelText(/Species id/), SPECIES_ID);
+    await fill(screen.getByLabelText(/^Label/), 'Rosa');
     await userEvent.click(screen.getByRole('radio', { name: 'Female' }));
     expect(screen.queryByLabelText(/Maturing molt/)).not.toBeInTheDocument();
     await userEvent.click(screen.getByRole('button', { name: 'Add to collection' }));
@@ -68,10 +75,10 @@ describe('AnimalForm', () => {
     vi.stubGlobal('fetch', fetchStub);
     const onSaved = vi.fn();
     renderWithProviders(<AnimalForm renderSpeciesPicker={(p) => <PlainSpeciesField {...p} />} onSaved={onSaved} />);
-    await userEvent.type(screen.getByLabelText(/Species id/), SPECIES_ID);
-    await userEvent.type(screen.getByLabelText(/^Label/), 'Rosa');
-    await userEvent.type(screen.getByLabelText(/Price paid/), '40');
-    await userEvent.type(screen.getByLabelText(/Currency/), 'EUR');
+    await fill(screen.getByLabelText(/Species id/), SPECIES_ID);
+    await fill(screen.getByLabelText(/^Label/), 'Rosa');
+    await fill(screen.getByLabelText(/Price paid/), '40');
+    await fill(screen.getByLabelText(/Currency/), 'EUR');
     await userEvent.click(screen.getByRole('button', { name: 'Add to collection' }));
     await waitFor(() => expect(screen.getByLabelText(/^Label/)).toHaveAccessibleDescription(/You already have an animal labelled "Rosa"\./));
     expect(screen.getByLabelText(/Price paid/)).toHaveAccessibleDescription('The price must be a whole number of cents.');

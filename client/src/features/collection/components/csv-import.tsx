@@ -41,7 +41,7 @@ export function CsvImportResult({ imported, error, onClose }: { imported?: numbe
 export function CsvTools() {
   const importCsv = useImportAnimalsCsv();
   return (
-    <Stack gap="xs">
+    <Stack gap="xs" maw={560}>
       <Group gap="xs">
         <Button component="a" href={ANIMALS_CSV_EXPORT_URL} download variant="default" size="md">
           Export CSV

@@ -14,13 +14,14 @@ export interface SpeciesPickerProps {
   error?: React.ReactNode;
   withAsterisk?: boolean;
   description?: string;
+  size?: 'sm' | 'md';
 }
 
 /**
  * Picks a species from the catalogue by its current or a former name. A hit through a former
  * name says so ("formerly Brachypelma vagans"), since keepers still buy and sell under old names.
  */
-export function SpeciesPicker({ label = 'Species', defaultValue = null, defaultName = null, onChange, error, withAsterisk, description }: SpeciesPickerProps) {
+export function SpeciesPicker({ label = 'Species', defaultValue = null, defaultName = null, onChange, error, withAsterisk, description, size = 'sm' }: SpeciesPickerProps) {
   const [value, setValue] = useState<string | null>(defaultValue);
   const [picked, setPicked] = useState<{ value: string; label: string } | null>(defaultValue && defaultName ? { value: defaultValue, label: defaultName } : null);
   const [search, setSearch] = useState(defaultName ?? '');
@@ -42,6 +43,7 @@ export function SpeciesPicker({ label = 'Species', defaultValue = null, defaultN
       label={label}
       description={description}
       withAsterisk={withAsterisk}
+      size={size}
       placeholder="Type a current or former name"
       searchable
       clearable
