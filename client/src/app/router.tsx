@@ -51,6 +51,15 @@ export function createRouter(queryClient: QueryClient) {
           },
         },
         {
+          path: paths.projectAccount.path,
+          ErrorBoundary: RouteError,
+          lazy: async () => {
+            const m = await import('./routes/project-account');
+            return { Component: m.Component, loader: m.clientLoader(queryClient) };
+          },
+        },
+        { path: paths.payouts.path, lazy: () => import('./routes/payouts') },
+        {
           path: paths.sac.path,
           ErrorBoundary: RouteError,
           lazy: async () => {

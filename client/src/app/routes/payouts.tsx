@@ -1,0 +1,18 @@
+import { Card, Stack, Text } from '@mantine/core';
+import { PageHeader } from '@/components/ui/page-header';
+import { PayoutSetup } from '@/features/account/components/payout-setup';
+
+/** Where the payment provider's onboarding sends the keeper back to: the payout account's state. */
+export function Component() {
+  return (
+    <Stack>
+      <PageHeader title="Payouts" description="Receive what partners pay you through the payment provider." />
+      <Card withBorder maw={640}>
+        <PayoutSetup />
+      </Card>
+      <Text size="xs" c="dimmed">
+        Broodsilk never sees your bank details; the payment provider keeps them.
+      </Text>
+    </Stack>
+  );
+}
