@@ -16,24 +16,36 @@ import { ProjectSacsController, SacsController } from './sacs.controller';
 import { toSacFact } from './sacs.mapper';
 import { CareLogService } from './care-log.service';
 import { CareLogController } from './care-log.controller';
+import { OPENING_PHOTO, OpeningService } from './opening.service';
+import { BroodCountsService } from './brood-counts.service';
+import { BroodController } from './brood.controller';
+import { PhotosModule } from '../photos/photos.module';
+import { PhotoAccessRegistry } from '../photos/photo-access.registry';
+import { ProjectMember } from '../projects/project-member.entity';
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 @Module({
-  imports: [MikroOrmModule.forFeature([Sac, SacLogEntry, SacOpening, BroodCount]), ProjectsModule, ActivityModule],
-  controllers: [ProjectSacsController, SacsController, CareLogController],
-  providers: [Clock, SacViewsService, SacsService, BroodService, CareLogService],
+  imports: [MikroOrmModule.forFeature([Sac, SacLogEntry, SacOpening, BroodCount]), ProjectsModule, ActivityModule, PhotosModule],
+  controllers: [ProjectSacsController, SacsController, CareLogController, BroodController],
+  providers: [Clock, SacViewsService, SacsService, BroodService, CareLogService, OpeningService, BroodCountsService],
   exports: [Clock, SacViewsService, SacsService, BroodService],
 })
 export class SacsModule implements OnModuleInit {
   constructor(
     private readonly resolvers: ProjectResolverRegistry,
     private readonly facts: ProjectFactsRegistry,
+    private readonly photoAccess: PhotoAccessRegistry,
   ) {}
 
   onModuleInit(): void {
     // A malformed id is simply "no such sac" (404), never a database error.
     this.resolvers.register('sac', async (em, id) => (UUID.test(id) ? ((await em.findOne(Sac, id, { fields: ['project'] }))?.project.id ?? null) : null));
+    // Opening photos: the same access as the project (any member).
+    this.photoAccess.register(OPENING_PHOTO, async (em, viewer, openingId) => {
+      const o = await em.findOne(SacOpening, openingId, { populate: ['sac'] });
+      return !!o && (await em.count(ProjectMember, { project: o.sac.project.id, user: viewer.id })) > 0;
+    });
     this.facts.register(async (em, projectIds) => {
       const sacs = await em.find(Sac, { project: { $in: projectIds } });
       const out = new Map<string, { sacs: ReturnType<typeof toSacFact>[] }>();

@@ -1,0 +1,44 @@
+import { Body, Controller, Get, Param, ParseUUIDPipe, Post, UploadedFile, UseInterceptors } from '@nestjs/common';
+import type { BroodCountResponse, BroodCountsResponse, OpeningResponse, PhotoRef } from '@broodsilk/shared';
+import { AnyProjectMember, CurrentProject, ProjectFrom, ProjectRoles } from '../common/decorators/project-roles.decorator';
+import { CurrentUser } from '../common/decorators/current-user.decorator';
+import type { AuthUser } from '../auth/auth-user';
+import type { ProjectAccess } from '../projects/project-access.service';
+import { ImageUploadInterceptor } from '../photos/image-upload.interceptor';
+import { OpeningService } from './opening.service';
+import { BroodCountsService } from './brood-counts.service';
+import { OpeningDto } from './dto/opening.dto';
+import { BroodCountDto } from './dto/brood-count.dto';
+
+@Controller('sacs/:id')
+export class BroodController {
+  constructor(
+    private readonly openings: OpeningService,
+    private readonly counts: BroodCountsService,
+  ) {}
+
+  @Get('opening') @AnyProjectMember() @ProjectFrom('sac')
+  opening(@CurrentProject() a: ProjectAccess, @Param('id', ParseUUIDPipe) id: string): Promise<OpeningResponse> {
+    return this.openings.get(a, id);
+  }
+
+  @Post('opening') @ProjectRoles('owner') @ProjectFrom('sac')
+  open(@CurrentProject() a: ProjectAccess, @CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: OpeningDto): Promise<OpeningResponse> {
+    return this.openings.open(a, user, id, dto);
+  }
+
+  @Post('opening/photos') @ProjectRoles('owner') @ProjectFrom('sac') @UseInterceptors(ImageUploadInterceptor)
+  photo(@CurrentProject() a: ProjectAccess, @CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string, @UploadedFile() file?: { buffer?: Buffer }): Promise<PhotoRef> {
+    return this.openings.addPhoto(a, user, id, file);
+  }
+
+  @Get('counts') @AnyProjectMember() @ProjectFrom('sac')
+  listCounts(@CurrentProject() a: ProjectAccess, @Param('id', ParseUUIDPipe) id: string): Promise<BroodCountsResponse> {
+    return this.counts.list(a, id);
+  }
+
+  @Post('counts') @ProjectRoles('owner', 'caretaker') @ProjectFrom('sac')
+  addCount(@CurrentProject() a: ProjectAccess, @CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: BroodCountDto): Promise<BroodCountResponse> {
+    return this.counts.add(a, user, id, dto);
+  }
+}

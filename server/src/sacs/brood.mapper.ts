@@ -1,0 +1,25 @@
+import type { BroodCountResponse, OpeningResponse, PhotoRef } from '@broodsilk/shared';
+import type { BroodCount } from './brood-count.entity';
+import type { SacOpening } from './sac-opening.entity';
+
+export const viableOf = (o: Pick<SacOpening, 'healthyEggs' | 'eggsWithLegs' | 'nymphs'>) => o.healthyEggs + o.eggsWithLegs + o.nymphs;
+
+/** Needs `recordedBy` loaded. */
+export function toOpeningResponse(o: SacOpening, photos: PhotoRef[]): OpeningResponse {
+  const viable = viableOf(o);
+  return {
+    id: o.id, sacId: o.sac.id, openedAt: o.openedAt.toISOString(),
+    healthyEggs: o.healthyEggs, eggsWithLegs: o.eggsWithLegs, nymphs: o.nymphs, darkEggs: o.darkEggs, spoiledEggs: o.spoiledEggs,
+    keptBack: o.keptBack, viable, total: viable + o.darkEggs + o.spoiledEggs, notes: o.notes ?? null, photos,
+    recordedBy: { id: o.recordedBy.id, name: o.recordedBy.displayName },
+  };
+}
+
+/** Needs `recordedBy` loaded. */
+export function toBroodCountResponse(c: BroodCount): BroodCountResponse {
+  return {
+    id: c.id, sacId: c.sac.id, at: c.at.toISOString(), stage: c.stage, alive: c.alive, lost: c.lost,
+    lossReason: c.lossReason ?? null, note: c.note ?? null, source: c.source,
+    recordedBy: c.recordedBy ? { id: c.recordedBy.id, name: c.recordedBy.displayName } : null,
+  };
+}

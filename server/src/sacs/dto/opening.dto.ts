@@ -1,0 +1,28 @@
+import { IsInt, IsOptional, IsString, Max, MaxLength, Min, ValidateIf } from 'class-validator';
+import { BROOD_COUNT_MAX, type OpeningRequest } from '@broodsilk/shared';
+import { IsInstant } from './is-instant.validator';
+
+/** A count is a whole number from 0 to BROOD_COUNT_MAX. */
+export function IsCount(what: string): PropertyDecorator {
+  const message = `The number of ${what} must be a whole number from 0 to ${BROOD_COUNT_MAX}.`;
+  return (target, key) => {
+    IsInt({ message })(target, key);
+    Min(0, { message })(target, key);
+    Max(BROOD_COUNT_MAX, { message })(target, key);
+  };
+}
+
+export class OpeningDto implements OpeningRequest {
+  @IsOptional() @IsInstant({ message: 'The opening time must be a date and time with its offset, e.g. 2026-03-08T07:30:00Z.' })
+  openedAt?: string;
+
+  @IsCount('healthy eggs') healthyEggs!: number;
+  @IsCount('eggs with legs') eggsWithLegs!: number;
+  @IsCount('nymphs') nymphs!: number;
+  @IsCount('dark eggs') darkEggs!: number;
+  @IsCount('spoiled eggs') spoiledEggs!: number;
+  @IsCount('kept-back young') keptBack!: number;
+
+  @IsOptional() @ValidateIf((_, v) => v !== null) @IsString() @MaxLength(2000)
+  notes?: string | null;
+}
