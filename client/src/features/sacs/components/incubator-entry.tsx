@@ -96,7 +96,7 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
         )}
       </Stack>
 
-      <Alert color="amber" variant="light" title="Heat sources" data-testid="heat-caution">
+      <Alert color="amber" variant="light" title="Heat sources" data-testid="heat-caution" role="note">
         <Text size="sm">{sac.incubatorCaution ?? 'Heat only behind a thermostat, away from bedding and cables, and never left running unattended without checks: unregulated heat can cook eggs and start fires. Local law and licensed practice come first.'}</Text>
         {speciesCautions.map((c) => (
           <Text size="sm" mt={4} key={c} fw={600}>
@@ -145,7 +145,7 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
           </Alert>
         )}
         {done && (
-          <Text className="tone-ok" fw={600} mb="xs" role="status">
+          <Text className="tone-ok" fw={600} mb="xs" role="status" data-testid="entry-done">
             {done}
           </Text>
         )}
