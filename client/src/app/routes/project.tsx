@@ -57,9 +57,16 @@ export function Component() {
           </>
         }
         actions={
-          <Anchor component={Link} to={paths.projects.href()} size="sm">
-            All projects
-          </Anchor>
+          <Group gap="md">
+            {p.myRole !== 'caretaker' && (
+              <Anchor component={Link} to={paths.projectAccount.href(p.id)} size="sm" fw={600}>
+                Account
+              </Anchor>
+            )}
+            <Anchor component={Link} to={paths.projects.href()} size="sm">
+              All projects
+            </Anchor>
+          </Group>
         }
       />
       <StageLine stage={p.stage} note={p.endedEarlyNote} />
