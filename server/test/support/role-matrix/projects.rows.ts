@@ -2,7 +2,7 @@ import request from 'supertest';
 import { todayIn, addDays } from '@broodsilk/shared';
 import { createAnimal, speciesId } from '../fixtures/collection';
 import { ProjectMember } from '../../../src/projects/project-member.entity';
-import { ANY_MEMBER, OWNER_AND_PARTNER, OWNER_ONLY, type Actor, type MatrixFixture, type MatrixProject, type MatrixRow } from './matrix.types';
+import { ANY_MEMBER, OWNER_AND_PARTNER, OWNER_ONLY, type Actor, type MatrixFixture, type MatrixProject, type MatrixRequest, type MatrixRow } from './matrix.types';
 
 let n = 0;
 const unique = () => `${Date.now()}-${(n += 1)}`;
@@ -52,7 +52,7 @@ export const rows: MatrixRow[] = [
   { method: 'PATCH', path: '/api/projects/:id', expect: OWNER_ONLY, request: () => ({ body: { notes: 'Changed by the matrix' } }) },
   {
     method: 'POST', path: '/api/projects/:id/end', expect: OWNER_ONLY,
-    request: async (fx, actor) => ({ params: actor === 'owner' ? { id: (await fx.freshProject()).id } : {}, body: { reason: 'no-sac' } }),
+    request: async (fx, actor): Promise<MatrixRequest> => ({ params: actor === 'owner' ? { id: (await fx.freshProject()).id } : {}, body: { reason: 'no-sac' } }),
   },
   { method: 'GET', path: '/api/projects/:projectId/members', expect: ANY_MEMBER },
   { method: 'POST', path: '/api/projects/:projectId/members', expect: OWNER_ONLY, request: () => ({ body: { name: `Party ${unique()}`, role: 'partner' } }) },
@@ -78,7 +78,7 @@ export const rows: MatrixRow[] = [
   {
     method: 'POST', path: '/api/projects/:projectId/terms/:version/accept', expect: OWNER_AND_PARTNER,
     // The partner accepts for themselves; the owner records the outside party's acceptance.
-    request: async (fx, actor) => {
+    request: async (fx, actor): Promise<MatrixRequest> => {
       if (actor !== 'owner' && actor !== 'partner') return { params: { version: '1' }, body: {} };
       const { project, outside } = await projectWithProposedTerms(fx);
       return { params: { projectId: project.id, version: '1' }, body: actor === 'owner' ? { memberId: outside, note: 'Agreed in person' } : {} };
