@@ -23,8 +23,10 @@ import { ProjectsModule } from './projects/projects.module';
 import { ActivityModule } from './activity/activity.module';
 import { InvitationsModule } from './invitations/invitations.module';
 import { SacsModule } from './sacs/sacs.module';
+import { DashboardModule } from './dashboard/dashboard.module';
 import { ProjectRoleGuard } from './common/guards/project-role.guard';
 import { AccountsModule } from './accounts/accounts.module';
+import { SettlementsModule } from './settlements/settlements.module';
 
 function staticClient(): DynamicModule[] {
   const dist = process.env.CLIENT_DIST;
@@ -63,7 +65,9 @@ function staticClient(): DynamicModule[] {
     ActivityModule,
     InvitationsModule,
     SacsModule,
+    DashboardModule,
     AccountsModule,
+    SettlementsModule,
   ],
   providers: [
     { provide: APP_FILTER, useClass: AllExceptionsFilter },

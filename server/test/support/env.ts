@@ -14,3 +14,6 @@ process.env.S3_BUCKET ??= 'broodsilk-photos-test';
 process.env.S3_ACCESS_KEY_ID ??= 'S3RVER';
 process.env.S3_SECRET_ACCESS_KEY ??= 'S3RVER';
 process.env.S3_FORCE_PATH_STYLE ??= 'true';
+// Payments: the local fake's keys (a spec that talks to the fake starts it and sets STRIPE_API_*).
+process.env.STRIPE_SECRET_KEY ??= 'sk_test_broodsilk_tests_0123456789';
+process.env.STRIPE_WEBHOOK_SECRET ??= 'whsec_broodsilk_tests_abcdefghijklmnop';

@@ -1,0 +1,69 @@
+import { ConflictException, Inject, Injectable, BadRequestException } from '@nestjs/common';
+import { ConfigType } from '@nestjs/config';
+import { EntityManager } from '@mikro-orm/postgresql';
+import type Stripe from 'stripe';
+import type { CheckoutResponse, CreateCheckoutRequest } from '@broodsilk/shared';
+import type { AuthUser } from '../auth/auth-user';
+import { appConfig } from '../config/app.config';
+import { STRIPE_CLIENT } from '../payments/stripe.client';
+import type { ProjectAccess } from '../projects/project-access.service';
+import { loadAccount } from '../accounts/account-loader';
+import { formatMinor } from '../accounts/money-format';
+import { User } from '../users/user.entity';
+import { PayoutAccount } from './payout-account.entity';
+import { SettlementCheckout } from './settlement-checkout.entity';
+
+@Injectable()
+export class CheckoutService {
+  constructor(
+    private readonly em: EntityManager,
+    @Inject(STRIPE_CLIENT) private readonly stripe: Stripe,
+    @Inject(appConfig.KEY) private readonly app: ConfigType<typeof appConfig>,
+  ) {}
+
+  /**
+   * The caller pays what they owe a party through the provider as a destination charge: the
+   * money goes to the creditor's connected account, the platform only routes it. The ledger
+   * entry is written by the webhook once the provider says the session is paid.
+   */
+  async create(access: ProjectAccess, user: AuthUser, dto: CreateCheckoutRequest): Promise<CheckoutResponse> {
+    const view = await loadAccount(this.em, access.project);
+    const me = access.member;
+    const creditor = view.data.members.find((m) => m.id === dto.toMemberId);
+    if (!creditor || creditor.role === 'caretaker') throw new BadRequestException('toMemberId is not a party of this project.');
+    if (creditor.id === me.id) throw new BadRequestException('You cannot pay yourself.');
+    const currency = view.balances.currency;
+    const debt = view.balances.debts.find((d) => d.fromPartyId === me.id && d.toPartyId === creditor.id);
+    if (!debt) throw new ConflictException(`You owe ${view.nameOf(creditor.id)} nothing on this project's account.`);
+    if (dto.amountMinor > debt.amountMinor) {
+      throw new ConflictException(`You owe ${view.nameOf(creditor.id)} ${formatMinor(debt.amountMinor, currency)}; ${formatMinor(dto.amountMinor, currency)} is ${formatMinor(dto.amountMinor - debt.amountMinor, currency)} more than that.`);
+    }
+    const payout = creditor.user ? await this.em.findOne(PayoutAccount, { user: creditor.user.id }) : null;
+    if (!payout) throw new ConflictException(`${view.nameOf(creditor.id)} has not linked a payout account yet, so they cannot be paid here. Pay them another way and record the payment.`);
+    if (!payout.chargesEnabled) throw new ConflictException(`${view.nameOf(creditor.id)} has not finished setting up their payout account yet.`);
+
+    const back = `${this.app.publicUrl}/projects/${access.project.id}/account`;
+    const session = await this.stripe.checkout.sessions.create({
+      mode: 'payment',
+      line_items: [{ quantity: 1, price_data: { currency: currency.toLowerCase(), unit_amount: dto.amountMinor, product_data: { name: `Settlement: ${access.project.title}` } } }],
+      payment_intent_data: { transfer_data: { destination: payout.providerAccountId }, metadata: { projectId: access.project.id, fromMemberId: me.id, toMemberId: creditor.id } },
+      success_url: `${back}?paid={CHECKOUT_SESSION_ID}`,
+      cancel_url: `${back}?cancelled=1`,
+      client_reference_id: access.project.id,
+      customer_email: user.email,
+      metadata: { projectId: access.project.id, fromMemberId: me.id, toMemberId: creditor.id },
+    });
+    this.em.create(SettlementCheckout, {
+      sessionId: session.id,
+      project: access.project,
+      fromParty: me,
+      toParty: creditor,
+      amountMinor: dto.amountMinor,
+      currency,
+      destinationAccountId: payout.providerAccountId,
+      createdBy: this.em.getReference(User, user.id),
+    });
+    await this.em.flush();
+    return { sessionId: session.id, url: session.url!, amountMinor: dto.amountMinor, currency };
+  }
+}
