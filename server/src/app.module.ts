@@ -23,6 +23,7 @@ import { ProjectsModule } from './projects/projects.module';
 import { ActivityModule } from './activity/activity.module';
 import { InvitationsModule } from './invitations/invitations.module';
 import { SacsModule } from './sacs/sacs.module';
+import { DashboardModule } from './dashboard/dashboard.module';
 import { ProjectRoleGuard } from './common/guards/project-role.guard';
 import { AccountsModule } from './accounts/accounts.module';
 import { SettlementsModule } from './settlements/settlements.module';
@@ -64,6 +65,7 @@ function staticClient(): DynamicModule[] {
     ActivityModule,
     InvitationsModule,
     SacsModule,
+    DashboardModule,
     AccountsModule,
     SettlementsModule,
   ],

@@ -28,3 +28,6 @@ export * from './sacs/sacs.types.js';
 export * from './sacs/care-log.types.js';
 export * from './sacs/brood.types.js';
 export * from './accounts/account-api.types.js';
+export * from './dashboard/dashboard.types.js';
+export * from './dashboard/calendar.types.js';
+export * from './dashboard/notifications.types.js';
