@@ -1,6 +1,7 @@
 import { Module, type OnModuleInit } from '@nestjs/common';
 import { MikroOrmModule } from '@mikro-orm/nestjs';
 import { ActivityModule } from '../activity/activity.module';
+import { MailModule } from '../mail/mail.module';
 import { ProjectsModule } from '../projects/projects.module';
 import { ProjectFactsRegistry } from '../projects/project-facts.registry';
 import { Project } from '../projects/project.entity';
@@ -14,13 +15,15 @@ import { EntriesService } from './entries.service';
 import { SharesController } from './shares.controller';
 import { BalancesController } from './balances.controller';
 import { EntriesController } from './entries.controller';
+import { StatementsController } from './statements.controller';
+import { StatementsService } from './statements.service';
 import { loadAccount } from './account-loader';
 import { isSettled } from './balances.mapper';
 
 @Module({
-  imports: [MikroOrmModule.forFeature([ProjectAccount, LedgerEntryRow, ShareBasis]), ProjectsModule, ActivityModule],
-  controllers: [SharesController, BalancesController, EntriesController],
-  providers: [AccountLock, SharesService, BalancesService, EntriesService],
+  imports: [MikroOrmModule.forFeature([ProjectAccount, LedgerEntryRow, ShareBasis]), ProjectsModule, ActivityModule, MailModule],
+  controllers: [SharesController, BalancesController, EntriesController, StatementsController],
+  providers: [AccountLock, SharesService, BalancesService, EntriesService, StatementsService],
   exports: [AccountLock, EntriesService, BalancesService, SharesService],
 })
 export class AccountsModule implements OnModuleInit {

@@ -1,0 +1,42 @@
+import { stringify } from 'csv-stringify/sync';
+import type { StatementResponse } from '@broodsilk/shared';
+import { formatMinor } from './money-format';
+
+export const STATEMENT_CSV_COLUMNS = [
+  'line', 'date', 'kind', 'status', 'party', 'from', 'to', 'count', 'amount_minor', 'amount', 'currency', 'method', 'carrier', 'tracking', 'reason', 'recorded_by', 'recorded_at',
+] as const;
+
+/**
+ * The statement as RFC 4180 CSV (CRLF, quoted where needed, one header row): the party's ledger
+ * lines, then summary lines (`kind` share, handed-over, sold, cashed-out, still-owed, debt) with
+ * an empty `line`.
+ */
+export function statementCsv(s: StatementResponse): string {
+  const currency = s.terms?.currency ?? '';
+  const rows: Record<string, string | number>[] = s.entries.map((e) => ({
+    line: e.seq,
+    date: e.date,
+    kind: e.kind,
+    status: e.status,
+    party: e.party?.name ?? '',
+    from: e.from?.name ?? '',
+    to: e.to?.name ?? '',
+    count: e.count ?? (e.kind === 'arrival' ? `${e.arrivedAlive} alive, ${e.arrivedDead} dead` : ''),
+    amount_minor: e.amountMinor ?? e.priceMinor ?? '',
+    amount: e.amountMinor != null ? formatMinor(e.amountMinor, e.currency!) : e.priceMinor != null ? formatMinor(e.priceMinor, e.currency!) : '',
+    currency: e.currency ?? '',
+    method: e.method ?? '',
+    carrier: e.carrier ?? '',
+    tracking: e.tracking ?? '',
+    reason: e.reason ?? e.note ?? '',
+    recorded_by: e.recordedBy?.name ?? (e.source === 'payment-provider' ? 'payment provider' : ''),
+    recorded_at: e.recordedAt,
+  }));
+  const b = s.balance;
+  if (b) {
+    const summary = (kind: string, count: number) => ({ kind, party: s.party.name, count });
+    rows.push(summary('share', b.share), summary('handed-over', b.handedOver), summary('sold', b.sold), summary('cashed-out', b.cashedOut), summary('still-owed', b.owedSpiderlings));
+  }
+  for (const d of s.debts) rows.push({ kind: 'debt', from: d.fromName, to: d.toName, amount_minor: d.amountMinor, amount: formatMinor(d.amountMinor, d.currency), currency: d.currency || currency });
+  return stringify(rows, { header: true, columns: [...STATEMENT_CSV_COLUMNS], record_delimiter: 'windows' });
+}

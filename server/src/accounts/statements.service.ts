@@ -1,0 +1,98 @@
+import { ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
+import { EntityManager } from '@mikro-orm/postgresql';
+import type { StatementResponse } from '@broodsilk/shared';
+import type { ProjectAccess } from '../projects/project-access.service';
+import { MailService } from '../mail/mail.service';
+import { loadAccount } from './account-loader';
+import { memberName, type AccountView } from './account-view';
+import { toEntryResponses } from './accounts.mapper';
+import type { LedgerEntryRow } from './ledger-entry.entity';
+import { failureNote, toSacSharesView, toTermsSummary } from './shares.mapper';
+import { SHIPPING_CAUTIONS } from './shipping-cautions';
+import { statementCsv } from './statement-csv';
+import { statementPdf } from './statement-pdf';
+
+/** Whether a row is about the party: theirs, or an arrival/confirmation/correction of one that is. */
+function concerns(row: LedgerEntryRow, memberId: string, depth = 0): boolean {
+  if (row.party?.id === memberId || row.fromParty?.id === memberId || row.toParty?.id === memberId) return true;
+  return depth < 50 && !!row.target && concerns(row.target, memberId, depth + 1);
+}
+
+@Injectable()
+export class StatementsService {
+  constructor(private readonly em: EntityManager, private readonly mail: MailService) {}
+
+  async statement(access: ProjectAccess, memberId: string): Promise<StatementResponse> {
+    return this.build(await this.viewFor(access, memberId), memberId);
+  }
+
+  async csv(access: ProjectAccess, memberId: string): Promise<{ filename: string; body: string }> {
+    const s = await this.statement(access, memberId);
+    return { filename: fileName(s, 'csv'), body: statementCsv(s) };
+  }
+
+  async pdf(access: ProjectAccess, memberId: string): Promise<{ filename: string; body: Buffer }> {
+    const s = await this.statement(access, memberId);
+    return { filename: fileName(s, 'pdf'), body: await statementPdf(s) };
+  }
+
+  /** E-mails the statement (PDF attached) to the party's address: their account's, else the one the owner noted. */
+  async email(access: ProjectAccess, memberId: string): Promise<{ sentTo: string }> {
+    const view = await this.viewFor(access, memberId);
+    const member = view.data.members.find((m) => m.id === memberId)!;
+    const to = member.user?.email ?? member.email;
+    if (!to) throw new NotFoundException(`${memberName(member)} has no e-mail address on this project; add one to e-mail the statement.`);
+    const s = this.build(view, memberId);
+    const b = s.balance;
+    await this.mail.send({
+      to,
+      subject: `Broodsilk statement: ${s.project.title} (${s.party.name})`,
+      text: [
+        `Hello ${s.party.name},`,
+        '',
+        `attached is your account statement for the breeding project "${s.project.title}".`,
+        b ? `Share: ${b.share} young. Still owed: ${b.owedSpiderlings} young.` : 'No terms are in force yet.',
+        '',
+        'Broodsilk',
+      ].join('\n'),
+      attachments: [{ filename: fileName(s, 'pdf'), content: await statementPdf(s), contentType: 'application/pdf' }],
+    });
+    return { sentTo: to };
+  }
+
+  private async viewFor(access: ProjectAccess, memberId: string): Promise<AccountView> {
+    if (access.role !== 'owner' && access.member.id !== memberId) {
+      throw new ForbiddenException('You can see only your own statement; the project owner sees every party’s.');
+    }
+    const view = await loadAccount(this.em, access.project);
+    const member = view.data.members.find((m) => m.id === memberId);
+    if (!member || member.role === 'caretaker') throw new NotFoundException('There is no such party in this project.');
+    return view;
+  }
+
+  private build(view: AccountView, memberId: string): StatementResponse {
+    const member = view.data.members.find((m) => m.id === memberId)!;
+    const mine = new Set(view.data.rows.filter((r) => concerns(r, memberId)).map((r) => r.id));
+    const entries = toEntryResponses(view).filter((e) => mine.has(e.id));
+    const balance = view.balances.parties.find((p) => p.partyId === memberId);
+    return {
+      project: { id: view.data.project.id, title: view.data.project.title },
+      party: { memberId, name: memberName(member), role: member.role },
+      generatedAt: new Date().toISOString(),
+      terms: view.data.terms ? toTermsSummary(view.data.terms) : null,
+      sacs: view.sacs.map((s) => toSacSharesView(view, s, null)),
+      entries,
+      balance: balance ? { ...balance, memberId, name: memberName(member) } : null,
+      debts: view.balances.debts
+        .filter((d) => d.fromPartyId === memberId || d.toPartyId === memberId)
+        .map((d) => ({ ...d, fromName: view.nameOf(d.fromPartyId), toName: view.nameOf(d.toPartyId) })),
+      failureNotes: view.sacs.map((s) => failureNote(view, s)).filter((x): x is string => !!x),
+      shippingCautions: entries.some((e) => e.kind === 'hand-over' && e.method === 'shipment') ? [...SHIPPING_CAUTIONS] : [],
+    };
+  }
+}
+
+function fileName(s: StatementResponse, ext: string): string {
+  const slug = (x: string) => x.toLowerCase().normalize('NFKD').replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'party';
+  return `statement-${slug(s.project.title)}-${slug(s.party.name)}.${ext}`;
+}

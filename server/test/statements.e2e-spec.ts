@@ -1,0 +1,133 @@
+/**
+ * Statements per party: JSON, CSV read back with an independent parser (papaparse), PDF text
+ * extracted with pdf-parse, and the e-mail with its attachment read from the mail sink with
+ * mailparser. Every figure is compared with what the balances route says.
+ */
+import Papa from 'papaparse';
+import { PDFParse } from 'pdf-parse';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { BalancesResponse, StatementResponse } from '@broodsilk/shared';
+import { STATEMENT_CSV_COLUMNS } from '../src/accounts/statement-csv';
+import { createTestApp, type TestApp } from './support/test-app';
+import { waitForMail } from './support/mail-sink';
+import { createSac } from './support/sacs';
+import { accountScenario, api, type AccountScenario } from './accounts.fixtures';
+
+let t: TestApp;
+let s: AccountScenario;
+let balances: BalancesResponse;
+
+const D = '2026-11-20';
+const binary = (res: NodeJS.ReadableStream & { setEncoding?: unknown }, cb: (err: Error | null, body: Buffer) => void) => {
+  const chunks: Buffer[] = [];
+  res.on('data', (c: Buffer) => chunks.push(c));
+  res.on('end', () => cb(null, Buffer.concat(chunks)));
+};
+const pdfText = async (data: Buffer): Promise<string> => {
+  const parser = new PDFParse({ data });
+  try {
+    return (await parser.getText()).text;
+  } finally {
+    await parser.destroy();
+  }
+};
+
+beforeAll(async () => {
+  t = await createTestApp();
+  s = await accountScenario(t.app, t.orm);
+  const post = (body: object) => api(t.app).post(`/api/projects/${s.projectId}/entries`).set('Authorization', s.mira.bearer).send(body).expect(201);
+  await post({ kind: 'hand-over', date: D, memberId: s.tomaszId, count: 10, method: 'shipment', carrier: 'Overnight courier', tracking: 'TRK-88, "fragile"' });
+  await post({ kind: 'cash-out', date: D, memberId: s.tomaszId, count: 3 });
+  await post({ kind: 'sale', date: D, memberId: s.lenaId, count: 2, priceMinor: 3000 });
+  // An earlier sac that failed: its count is 0 and the failure clause is said in plain words.
+  const failed = await createSac(t.app, s.mira, s.projectId, { layDate: '2026-06-01' });
+  await api(t.app).patch(`/api/sacs/${failed.id}`).set('Authorization', s.mira.bearer).send({ outcome: 'failed', failureReason: 'spoiled' }).expect(200);
+  balances = (await api(t.app).get(`/api/projects/${s.projectId}/balances`).set('Authorization', s.mira.bearer).expect(200)).body as BalancesResponse;
+}, 90_000);
+afterAll(async () => t?.close());
+
+const tomasz = () => balances.parties.find((p) => p.memberId === s.tomaszId)!;
+
+describe('statement page data', () => {
+  it('shows the party its own entries and balance, equal to the balances route', async () => {
+    const res = await api(t.app).get(`/api/projects/${s.projectId}/statements/${s.tomaszId}`).set('Authorization', s.tomasz.bearer).expect(200);
+    const st = res.body as StatementResponse;
+    expect(st.party).toMatchObject({ memberId: s.tomaszId, name: 'Tomasz Partner', role: 'partner' });
+    expect(st.entries.map((e) => e.kind)).toEqual(['hand-over', 'cash-out']); // Lena's sale is not his
+    expect(st.balance).toEqual(tomasz());
+    expect(st.debts).toEqual(balances.debts.filter((d) => d.toPartyId === s.tomaszId || d.fromPartyId === s.tomaszId));
+    expect(st.failureNotes).toEqual([expect.stringContaining('the deal carries over')]);
+    expect(st.shippingCautions.length).toBeGreaterThan(0);
+  });
+
+  it('a partner sees only their own statement; the owner sees everyone’s', async () => {
+    const other = await api(t.app).get(`/api/projects/${s.projectId}/statements/${s.lenaId}`).set('Authorization', s.tomasz.bearer);
+    expect(other.status).toBe(403);
+    expect(other.body.message).toBe('You can see only your own statement; the project owner sees every party’s.');
+    await api(t.app).get(`/api/projects/${s.projectId}/statements/${s.lenaId}`).set('Authorization', s.mira.bearer).expect(200);
+    await api(t.app).get(`/api/projects/${s.projectId}/statements/00000000-0000-4000-8000-000000000000`).set('Authorization', s.mira.bearer).expect(404);
+  });
+});
+
+describe('statement CSV', () => {
+  it('is RFC 4180 with a header row; papaparse reads back the entries and the balance figures', async () => {
+    const res = await api(t.app).get(`/api/projects/${s.projectId}/statements/${s.tomaszId}.csv`).set('Authorization', s.tomasz.bearer).expect(200);
+    expect(res.headers['content-type']).toMatch(/^text\/csv/);
+    expect(res.headers['content-disposition']).toMatch(/attachment; filename="statement-account-test-project-tomasz-partner\.csv"/);
+    expect(res.text).toContain('\r\n'); // RFC 4180 line breaks
+    const parsed = Papa.parse<Record<string, string>>(res.text.trimEnd(), { header: true });
+    expect(parsed.errors).toEqual([]);
+    expect(parsed.meta.fields).toEqual([...STATEMENT_CSV_COLUMNS]);
+    const handOver = parsed.data.find((r) => r.kind === 'hand-over')!;
+    expect(handOver).toMatchObject({ party: 'Tomasz Partner', count: '10', method: 'shipment', tracking: 'TRK-88, "fragile"' }); // comma and quotes survive
+    const summary = (kind: string) => Number(parsed.data.find((r) => r.kind === kind)!.count);
+    expect(summary('share')).toBe(tomasz().share);
+    expect(summary('handed-over')).toBe(tomasz().handedOver);
+    expect(summary('cashed-out')).toBe(tomasz().cashedOut);
+    expect(summary('still-owed')).toBe(tomasz().owedSpiderlings);
+    const debt = parsed.data.find((r) => r.kind === 'debt')!;
+    expect(Number(debt.amount_minor)).toBe(balances.debts.find((d) => d.toPartyId === s.tomaszId)!.amountMinor);
+    expect(debt.amount).toBe('EUR 15.00');
+  });
+});
+
+describe('statement PDF', () => {
+  it('holds the project, party, terms, shares, entries and the same balance figures as the route', async () => {
+    const res = await api(t.app).get(`/api/projects/${s.projectId}/statements/${s.tomaszId}.pdf`).set('Authorization', s.tomasz.bearer).buffer(true).parse(binary).expect(200);
+    expect(res.headers['content-type']).toBe('application/pdf');
+    const text = await pdfText(res.body as Buffer);
+    const b = tomasz();
+    expect(text).toContain('Project: Account test project');
+    expect(text).toContain('Party: Tomasz Partner (partner)');
+    expect(text).toContain('Version 1. Price per spiderling for cash-outs: EUR 5.00.');
+    expect(text).toContain(`Share: ${b.share} young`);
+    expect(text).toContain(`Handed over: ${b.handedOver} young`);
+    expect(text).toContain(`Cashed out: ${b.cashedOut} young`);
+    expect(text).toContain(`Still owed: ${b.owedSpiderlings} young`);
+    expect(text).toContain('Money: Mira Keeper owes Tomasz Partner EUR 15.00');
+    expect(text).toContain('In all: Mira Keeper 30, Tomasz Partner 17, Lena Outside 15.');
+    expect(text).toMatch(/The terms say the deal carries over/);
+    expect(text).toMatch(/Overnight courier, tracking TRK-88/);
+    expect(text).toMatch(/overnight service/i);
+  });
+});
+
+describe('statement e-mail', () => {
+  it('arrives in the mail sink with the PDF attached (read with mailparser and pdf-parse)', async () => {
+    const res = await api(t.app).post(`/api/projects/${s.projectId}/statements/${s.tomaszId}/email`).set('Authorization', s.mira.bearer).expect(201);
+    expect(res.body).toEqual({ sentTo: s.tomasz.user.email });
+    const mail = await waitForMail(s.tomasz.user.email, /Broodsilk statement: Account test project \(Tomasz Partner\)/);
+    expect(mail.text).toContain(`Still owed: ${tomasz().owedSpiderlings} young.`);
+    expect(mail.attachments).toHaveLength(1);
+    const [pdf] = mail.attachments;
+    expect(pdf!.contentType).toBe('application/pdf');
+    expect(pdf!.filename).toBe('statement-account-test-project-tomasz-partner.pdf');
+    expect(await pdfText(pdf!.content)).toContain(`Still owed: ${tomasz().owedSpiderlings} young`);
+  });
+
+  it('says so when the party has no e-mail address', async () => {
+    const res = await api(t.app).post(`/api/projects/${s.projectId}/statements/${s.lenaId}/email`).set('Authorization', s.mira.bearer);
+    expect(res.status).toBe(404);
+    expect(res.body.message).toBe('Lena Outside has no e-mail address on this project; add one to e-mail the statement.');
+  });
+});
