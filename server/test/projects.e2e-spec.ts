@@ -149,6 +149,18 @@ describe('stage and warnings in responses', () => {
     expect(late.body.message).toMatch(/has ended/);
   });
 
+  it('a pairing counts on the owner’s calendar day, whoever looks', async () => {
+    const kiwi = await registerKeeper(t.app, 'Kiwi Keeper');
+    await http().patch('/api/users/me').set('Authorization', kiwi.bearer).send({ timeZone: 'Pacific/Auckland' }).expect(200);
+    const p = await createProject(t.app, t.orm, kiwi);
+    // 2 days ago at 20:00 UTC is the next morning in Auckland (UTC+12 or +13): the calendar day after.
+    const at = new Date(`${addDays(today, -2)}T20:00:00Z`);
+    const expected = new Intl.DateTimeFormat('en-CA', { timeZone: 'Pacific/Auckland', year: 'numeric', month: '2-digit', day: '2-digit' }).format(at);
+    expect(expected).toBe(addDays(today, -1));
+    const res = await http().post(`/api/projects/${p.id}/pairings`).set('Authorization', kiwi.bearer).send({ startedAt: at.toISOString(), durationMinutes: 30, outcome: 'connected' }).expect(201);
+    expect(res.body.on).toBe(expected);
+  });
+
   it('refuses a pairing in the future or with a made-up outcome', async () => {
     const p = await createProject(t.app, t.orm, mira);
     const res = await http().post(`/api/projects/${p.id}/pairings`).set('Authorization', mira.bearer)
