@@ -104,7 +104,7 @@ export function HandOverForm({ projectId, today, sacs, onDone }: { projectId: st
               <TextInput label="Carrier" key={form.key('carrier')} {...form.getInputProps('carrier')} />
               <TextInput label="Tracking number" key={form.key('tracking')} {...form.getInputProps('tracking')} />
             </Group>
-            <Alert color="amber" variant="light" title="Before you ship live spiderlings" data-testid="shipping-cautions">
+            <Alert color="amber" variant="light" title="Before you ship live spiderlings" role="note" data-testid="shipping-cautions">
               <List size="sm" spacing={4}>
                 {info.data.shippingCautions.map((c) => (
                   <List.Item key={c}>{c}</List.Item>

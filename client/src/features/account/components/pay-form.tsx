@@ -46,7 +46,7 @@ export function PayForm({ projectId, toMemberId, toName, owedMinor, currency, go
         <Text size="sm">
           You owe {toName} {formatMoney(owedMinor, currency)}.
         </Text>
-        <NumberInput label={`Amount (${currency})`} min={0} max={toMajor(owedMinor, currency)} decimalScale={digits} allowDecimal={digits > 0} key={form.key('amount')} {...form.getInputProps('amount')} />
+        <NumberInput label={`Amount (${currency})`} min={0} decimalScale={digits} allowDecimal={digits > 0} key={form.key('amount')} {...form.getInputProps('amount')} />
         {message && (
           <Alert color="clay" role="alert">
             {message}

@@ -1,0 +1,40 @@
+import { screen, within } from '@testing-library/react';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { renderWithProviders, stubFetch } from '@/testing/render';
+import { BalancesPanel } from './balances-panel';
+import { balances, MIRA, party, PROJECT_ID, TOMASZ } from './account.fixtures';
+
+afterEach(() => vi.unstubAllGlobals());
+
+describe('BalancesPanel', () => {
+  it('shows the netted money line and the spiderlings still owed per party', async () => {
+    const { fetchStub, calls } = stubFetch({ [`GET /api/projects/${PROJECT_ID}/balances`]: () => ({ status: 200, body: balances() }) });
+    vi.stubGlobal('fetch', fetchStub);
+    renderWithProviders(<BalancesPanel projectId={PROJECT_ID} />);
+    expect(await screen.findByText('Tomasz owes Mira €12.00')).toBeInTheDocument();
+    const table = screen.getByRole('table', { name: 'Balances' });
+    const tomasz = within(table).getByRole('row', { name: /Tomasz/ });
+    // share 8, handed over 3, sold 0, cashed out 0, still owed 5
+    expect(within(tomasz).getAllByRole('cell').map((c) => c.textContent)).toEqual(['Tomasz', '8', '3', '0', '0', '5']);
+    expect(screen.getByTestId(`owed-${MIRA.memberId}`)).toHaveTextContent('12');
+    expect(calls).toEqual([{ method: 'GET', path: `/api/projects/${PROJECT_ID}/balances`, body: undefined }]);
+  });
+
+  it('formats a currency without minor units from its minor units, and says when nothing is owed', async () => {
+    const yen = balances({
+      currency: 'JPY',
+      debts: [{ fromPartyId: MIRA.memberId, toPartyId: TOMASZ.memberId, amountMinor: 1500, currency: 'JPY', fromName: 'Mira', toName: 'Tomasz' }],
+    });
+    const { fetchStub } = stubFetch({ [`GET /api/projects/${PROJECT_ID}/balances`]: () => ({ status: 200, body: yen }) });
+    vi.stubGlobal('fetch', fetchStub);
+    const { unmount } = renderWithProviders(<BalancesPanel projectId={PROJECT_ID} />);
+    expect(await screen.findByText('Mira owes Tomasz ¥1,500')).toBeInTheDocument();
+    unmount();
+
+    const even = balances({ parties: [party(MIRA, { share: 4 }), party(TOMASZ, { share: 2, handedOver: 3, owedSpiderlings: -1 })], debts: [], settled: false });
+    vi.stubGlobal('fetch', stubFetch({ [`GET /api/projects/${PROJECT_ID}/balances`]: () => ({ status: 200, body: even }) }).fetchStub);
+    renderWithProviders(<BalancesPanel projectId={PROJECT_ID} />);
+    expect(await screen.findByText('No money is owed between parties.')).toBeInTheDocument();
+    expect(screen.getByTestId(`owed-${TOMASZ.memberId}`)).toHaveTextContent('1 over the share');
+  });
+});
