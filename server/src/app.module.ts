@@ -24,9 +24,16 @@ import { ActivityModule } from './activity/activity.module';
 import { InvitationsModule } from './invitations/invitations.module';
 import { SacsModule } from './sacs/sacs.module';
 import { DashboardModule } from './dashboard/dashboard.module';
+import { CalendarModule } from './calendar/calendar.module';
+import { RemindersModule } from './reminders/reminders.module';
 import { ProjectRoleGuard } from './common/guards/project-role.guard';
 import { AccountsModule } from './accounts/accounts.module';
 import { SettlementsModule } from './settlements/settlements.module';
+
+/** Calendar-feed and invitation tokens travel in the path; they are secrets, so not logged. */
+function redactSecrets(url: string): string {
+  return url.split('?')[0].replace(/^(\/api\/(?:calendar|invitations)\/)[^/]+/, '$1[secret]');
+}
 
 function staticClient(): DynamicModule[] {
   const dist = process.env.CLIENT_DIST;
@@ -42,7 +49,7 @@ function staticClient(): DynamicModule[] {
         level: process.env.LOG_LEVEL ?? 'info',
         // One short line per request: no headers, so no cookies or tokens can reach the log.
         serializers: {
-          req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url.split('?')[0] }),
+          req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: redactSecrets(req.url) }),
           res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
         },
         autoLogging: { ignore: (req) => req.url === '/api/health' },
@@ -70,6 +77,8 @@ function staticClient(): DynamicModule[] {
     InvitationsModule,
     SacsModule,
     DashboardModule,
+    CalendarModule,
+    RemindersModule,
     AccountsModule,
     SettlementsModule,
   ],
