@@ -16,7 +16,13 @@ export function createRouter(queryClient: QueryClient) {
         return { Component: m.Component, loader: m.clientLoader(queryClient) };
       },
       children: [
-        { index: true, lazy: () => import('./routes/home') },
+        {
+          index: true,
+          lazy: async () => {
+            const m = await import('./routes/home');
+            return { Component: m.Component, loader: m.clientLoader(queryClient) };
+          },
+        },
         { path: paths.settings.path, lazy: () => import('./routes/settings') },
         {
           path: paths.collection.path,

@@ -1,39 +1,43 @@
-import { Card, Group, SimpleGrid, Stack, Text, Title } from '@mantine/core';
+import { Alert, Button, Group, Stack } from '@mantine/core';
+import type { QueryClient } from '@tanstack/react-query';
+import { Link } from 'react-router-dom';
+import { PageHeader } from '@/components/ui/page-header';
+import { PageLoader } from '@/components/ui/page-loader';
+import { paths } from '@/config/paths';
 import { todayLabel } from '@/lib/today';
 import { useMe } from '@/features/auth/api/me';
-import { PageHeader } from '@/components/ui/page-header';
+import { dashboardQueries, useDashboard } from '@/features/dashboard/api/dashboard';
+import { CalendarFeedCard } from '@/features/dashboard/components/calendar-feed-card';
+import { DashboardView } from '@/features/dashboard/components/dashboard-view';
+
+export const clientLoader = (qc: QueryClient) => async () => {
+  // Start loading early; the page shows its own loader and error.
+  void qc.prefetchQuery(dashboardQueries.today());
+  return null;
+};
 
 export function Component() {
   const { data: me } = useMe();
+  const dashboard = useDashboard();
   if (!me) return null;
   return (
     <Stack>
-      <PageHeader title={`Good to see you, ${me.displayName}`} description={todayLabel(me.timeZone)} />
-      <SimpleGrid cols={{ base: 1, sm: 2 }}>
-        <Card withBorder>
-          <Title order={3} size="h5" mb="xs">
-            Your account
-          </Title>
+      <PageHeader
+        title="Today"
+        description={todayLabel(me.timeZone)}
+        actions={
           <Group gap="xs">
-            <Text size="sm" c="dimmed">
-              E-mail
-            </Text>
-            <Text size="sm">{me.email}</Text>
+            <Button component={Link} to={paths.incubator.href()} variant="light">
+              Incubator
+            </Button>
+            <Button component={Link} to={paths.newProject.href()}>
+              New project
+            </Button>
           </Group>
-          <Group gap="xs">
-            <Text size="sm" c="dimmed">
-              Time zone
-            </Text>
-            <Text size="sm">{me.timeZone}</Text>
-          </Group>
-          <Group gap="xs">
-            <Text size="sm" c="dimmed">
-              Temperatures in
-            </Text>
-            <Text size="sm">°{me.temperatureUnit}</Text>
-          </Group>
-        </Card>
-      </SimpleGrid>
+        }
+      />
+      {dashboard.isPending ? <PageLoader /> : dashboard.isError ? <Alert color="clay">{dashboard.error.message}</Alert> : <DashboardView data={dashboard.data} timeZone={me.timeZone} />}
+      <CalendarFeedCard />
     </Stack>
   );
 }

@@ -1,10 +1,6 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { CalendarFeedResponse } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
-
-// TODO(shared): replace with the shared calendar type once it lands.
-interface CalendarFeedResponse {
-  url: string;
-}
 
 export function fetchCalendarFeed(signal?: AbortSignal): Promise<CalendarFeedResponse> {
   return api.get<CalendarFeedResponse>('/calendar/feed', { signal });

@@ -2,11 +2,11 @@ import { Alert, Badge, Button, Checkbox, Collapse, Group, Select, Stack, Table, 
 import { useForm } from '@mantine/form';
 import { useDisclosure } from '@mantine/hooks';
 import { useState } from 'react';
-import type { InvitableRole, ProjectMemberResponse, ProjectRole } from '@broodsilk/shared';
+import type { InvitableRole, InvitationResponse, ProjectMemberResponse, ProjectRole } from '@broodsilk/shared';
 import { formatInstant } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useAddProjectMember } from '../api/projects';
-import { useProjectInvitations, useResendInvitation, useSendInvitation } from '../api/invitations';
+import { useSendInvitation } from '../api/invitations';
 import { ROLE_LABELS } from '../utils/labels';
 
 interface PartiesPanelProps {
@@ -24,10 +24,11 @@ const roleOptions = [
 /** The parties with their roles; the keeper adds one and invites them by e-mail. */
 export function PartiesPanel({ projectId, members, myRole, timeZone }: PartiesPanelProps) {
   const isOwner = myRole === 'owner';
-  const invitations = useProjectInvitations(projectId, isOwner);
   const send = useSendInvitation(projectId);
-  const resend = useResendInvitation(projectId);
-  const pendingFor = (m: ProjectMemberResponse) => invitations.data?.find((i) => i.memberId === m.id);
+  // The server keeps no list of invitations for the page; what was sent from here is shown until reload.
+  const [sent, setSent] = useState<Record<string, InvitationResponse>>({});
+  const invite = (m: ProjectMemberResponse) =>
+    send.mutate({ email: m.email!, role: m.role as InvitableRole, memberId: m.id }, { onSuccess: (inv) => setSent((s) => ({ ...s, [m.id]: inv })) });
 
   return (
     <Stack>
@@ -42,7 +43,7 @@ export function PartiesPanel({ projectId, members, myRole, timeZone }: PartiesPa
           </Table.Thead>
           <Table.Tbody>
             {members.map((m) => {
-              const invite = pendingFor(m);
+              const invitation = sent[m.id];
               return (
                 <Table.Tr key={m.id}>
                   <Table.Td>
@@ -58,31 +59,28 @@ export function PartiesPanel({ projectId, members, myRole, timeZone }: PartiesPa
                   <Table.Td>{ROLE_LABELS[m.role]}</Table.Td>
                   {isOwner && (
                     <Table.Td>
-                      {m.hasAccount ? (
+                      {m.role === 'owner' ? (
+                        <Text size="xs" c="dimmed">
+                          you
+                        </Text>
+                      ) : m.hasAccount ? (
                         <Badge variant="light" color="moss" tt="none">
                           joined
                         </Badge>
-                      ) : invite ? (
+                      ) : m.email ? (
                         <Group gap={6} wrap="nowrap">
-                          <Text size="xs" className="tone-due">
-                            invited, until {formatInstant(invite.expiresAt, timeZone)}
-                          </Text>
-                          <Button size="compact-xs" variant="subtle" loading={resend.isPending} onClick={() => resend.mutate(invite.id)}>
-                            Resend
+                          {invitation && (
+                            <Text size="xs" className="tone-due">
+                              sent, valid until {formatInstant(invitation.expiresAt, timeZone)}
+                            </Text>
+                          )}
+                          <Button size="compact-xs" variant={invitation ? 'subtle' : 'light'} loading={send.isPending && send.variables?.memberId === m.id} onClick={() => invite(m)}>
+                            {invitation ? 'Send again' : 'Send invitation'}
                           </Button>
                         </Group>
-                      ) : m.email && m.role !== 'owner' ? (
-                        <Button
-                          size="compact-xs"
-                          variant="light"
-                          loading={send.isPending}
-                          onClick={() => send.mutate({ email: m.email!, role: m.role as InvitableRole, memberId: m.id })}
-                        >
-                          Invite to join
-                        </Button>
                       ) : (
                         <Text size="xs" c="dimmed">
-                          {m.role === 'owner' ? '—' : 'no e-mail, kept on record only'}
+                          no e-mail, kept on record only
                         </Text>
                       )}
                     </Table.Td>
@@ -93,25 +91,6 @@ export function PartiesPanel({ projectId, members, myRole, timeZone }: PartiesPa
           </Table.Tbody>
         </Table>
       </Table.ScrollContainer>
-      {isOwner && invitations.data && invitations.data.some((i) => !i.memberId) && (
-        <Stack gap={4}>
-          <Text size="sm" fw={600}>
-            Open invitations
-          </Text>
-          {invitations.data
-            .filter((i) => !i.memberId)
-            .map((i) => (
-              <Group key={i.id} gap="xs">
-                <Text size="sm">
-                  {i.email} · {ROLE_LABELS[i.role]}
-                </Text>
-                <Button size="compact-xs" variant="subtle" onClick={() => resend.mutate(i.id)}>
-                  Resend
-                </Button>
-              </Group>
-            ))}
-        </Stack>
-      )}
       {isOwner && <AddPartyForm projectId={projectId} />}
     </Stack>
   );

@@ -4,7 +4,7 @@ import { api } from '@/lib/api-client';
 import { invalidateAfterSacChange, sacQueries } from './sacs';
 
 export function fetchBroodCounts(sacId: string, signal?: AbortSignal): Promise<BroodCountsResponse> {
-  return api.get<BroodCountsResponse>(`/sacs/${sacId}/brood`, { signal });
+  return api.get<BroodCountsResponse>(`/sacs/${sacId}/counts`, { signal });
 }
 
 /** ['sacs','brood',sacId] */
@@ -23,7 +23,7 @@ export function useBroodCounts(sacId: string, enabled = true) {
 export function useRecordBroodCount(sacId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (body: BroodCountRequest) => api.post<BroodCountResponse>(`/sacs/${sacId}/brood`, body),
+    mutationFn: (body: BroodCountRequest) => api.post<BroodCountResponse>(`/sacs/${sacId}/counts`, body),
     meta: { handlesErrors: true },
     onSuccess: () => invalidateAfterSacChange(qc),
   });

@@ -1,0 +1,60 @@
+import { screen, within } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import type { DashboardResponse, DashboardSac, RollStatus, SacResponse } from '@broodsilk/shared';
+import { renderWithProviders } from '@/testing/render';
+import { DashboardView } from './dashboard-view';
+
+function sac(id: string, roll: { status: RollStatus; due: string } | null, state: SacResponse['pullWindow']['state'] = 'open'): SacResponse {
+  return {
+    id, projectId: `p-${id}`, layDate: '2026-11-01', dayNumber: 30, today: '2026-12-01', pulled: !!roll, pulledAt: roll ? '2026-11-25T07:00:00Z' : null, pulledOn: roll ? '2026-11-25' : null,
+    outcome: 'in-progress', failureReason: null,
+    pullWindow: { fromDay: 21, toDay: 45, origin: 'default', opensOn: '2026-11-22', closesOn: '2026-12-16', closingFrom: '2026-12-14', dayNumber: 30, state, daysUntilOpens: 0, daysUntilCloses: 15, daysPastClose: 0 },
+    rollIntervalHours: 12, rollingOff: false, roll: roll ? { ...roll, lastRollAt: null } : null, broodStage: 'eggs', opened: false, currentCount: null, notes: null,
+    incubatorCaution: null, createdAt: '2026-11-01T00:00:00Z', updatedAt: '2026-11-01T00:00:00Z',
+  };
+}
+
+const item = (title: string, s: SacResponse): DashboardSac => ({ projectId: s.projectId, projectTitle: title, myRole: 'owner', sac: s });
+
+const data: DashboardResponse = {
+  today: '2026-12-01',
+  dueToday: {
+    rolls: [item('Regalis pair', sac('a', { status: 'overdue', due: '2026-12-01T05:00:00Z' })), item('Versicolor pair', sac('b', { status: 'due', due: '2026-12-01T10:00:00Z' }))],
+    pullWindows: [{ ...item('Hamorii pair', sac('c', null)), event: 'closes-today' }],
+  },
+  openProjects: [],
+  upcomingPullWindows: [item('Albopilosum pair', sac('d', null, 'not-yet'))],
+  matureMales: [],
+  recentActivity: [],
+};
+
+describe('DashboardView', () => {
+  it('puts overdue rolls in clay and due rolls in amber, with their time in the viewer zone', () => {
+    renderWithProviders(<DashboardView data={data} timeZone="Europe/Berlin" />);
+    const rolls = screen.getByTestId('card-rolls');
+    const statuses = within(rolls).getAllByTestId('roll-status');
+    expect(statuses.map((s) => s.textContent)).toEqual(['Overdue', 'Due now']);
+    expect(statuses[0]).toHaveClass('tone-failed');
+    expect(statuses[1]).toHaveClass('tone-due');
+    expect(within(rolls).getByText('Regalis pair')).toBeInTheDocument();
+    expect(within(rolls).getByText('Tue, 1 Dec 2026, 06:00')).toBeInTheDocument();
+    expect(within(rolls).getAllByRole('link', { name: 'Log a roll' })[0]).toHaveAttribute('href', '/incubator/a');
+  });
+
+  it('names a pull window closing today, and the upcoming ones with their dates', () => {
+    renderWithProviders(<DashboardView data={data} timeZone="UTC" />);
+    const today = screen.getByTestId('card-pull-today');
+    expect(within(today).getByText('Hamorii pair')).toBeInTheDocument();
+    expect(within(today).getByText('Closes today')).toHaveClass('tone-failed');
+    const upcoming = screen.getByTestId('card-upcoming');
+    expect(within(upcoming).getByText('Albopilosum pair')).toBeInTheDocument();
+    expect(within(upcoming).getByText('22 Nov 2026 – 16 Dec 2026')).toBeInTheDocument();
+    expect(screen.queryByText('Nothing needs doing right now.')).not.toBeInTheDocument();
+  });
+
+  it('says so when nothing is due', () => {
+    renderWithProviders(<DashboardView data={{ ...data, dueToday: { rolls: [], pullWindows: [] } }} timeZone="UTC" />);
+    expect(within(screen.getByTestId('card-rolls')).getByText('No roll is due.')).toBeInTheDocument();
+    expect(screen.getByText('Nothing needs doing right now.')).toBeInTheDocument();
+  });
+});
