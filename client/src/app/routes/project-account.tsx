@@ -1,6 +1,6 @@
 import { Alert, Anchor, Group } from '@mantine/core';
 import type { QueryClient } from '@tanstack/react-query';
-import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Link, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '@/components/ui/page-header';
 import { PageLoader } from '@/components/ui/page-loader';
 import { paths } from '@/config/paths';
@@ -19,6 +19,7 @@ export function Component() {
   const { projectId } = useParams() as { projectId: string };
   const { data: me } = useMe();
   const project = useProject(projectId);
+  const [search] = useSearchParams();
   if (!me || project.isPending) return <PageLoader />;
   if (project.isError) return <Alert color="clay">{project.error.message}</Alert>;
   const p = project.data;
@@ -36,6 +37,16 @@ export function Component() {
           </Group>
         }
       />
+      {search.has('paid') && (
+        <Alert color="moss" mb="md" role="status" title="Payment made">
+          The payment provider took your payment. It shows in the entries below as soon as the provider confirms it.
+        </Alert>
+      )}
+      {search.has('cancelled') && (
+        <Alert color="amber" mb="md" role="status">
+          The payment was cancelled; nothing was paid.
+        </Alert>
+      )}
       {p.myRole === 'caretaker' ? (
         <Alert color="gray">The account of this project is seen by its owner and partners only.</Alert>
       ) : (
