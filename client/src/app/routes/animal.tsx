@@ -83,9 +83,9 @@ export function Component() {
             <DeleteAnimal
               animalId={animal.id}
               label={animal.label}
-              onDeleted={() => {
+              onDeleted={async () => {
                 notifications.show({ color: 'moss', message: `${animal.label} was deleted.` });
-                navigate(paths.collection.href());
+                await navigate(paths.collection.href());
               }}
             />
           </Group>

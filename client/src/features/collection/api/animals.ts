@@ -1,4 +1,4 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
 import type { AnimalListQuery, AnimalResponse, AnimalSummary, CreateAnimalRequest, MaleClockRow, Paged, UpdateAnimalRequest } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
 
@@ -77,9 +77,15 @@ export function useDeleteAnimal(id: string) {
   return useMutation({
     mutationFn: () => api.delete<void>(`/animals/${id}`),
     meta: { handlesErrors: true },
+    // The detail stays cached while its page is still shown (removing it there would refetch a 404);
+    // call forgetAnimal once the page has moved on.
     onSuccess: async () => {
-      qc.removeQueries({ queryKey: animalQueries.detail(id).queryKey });
       await Promise.all([qc.invalidateQueries({ queryKey: animalQueries.lists() }), qc.invalidateQueries({ queryKey: animalQueries.males().queryKey })]);
     },
   });
+}
+
+/** Drops a deleted animal and its molts from the cache, so its old page cannot come back from it. */
+export function forgetAnimal(qc: QueryClient, id: string): void {
+  qc.removeQueries({ queryKey: animalQueries.detail(id).queryKey });
 }

@@ -1,11 +1,13 @@
 import { Alert, Button, Group, Modal, Stack, Text } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
-import { useDeleteAnimal } from '../api/animals';
+import { useQueryClient } from '@tanstack/react-query';
+import { forgetAnimal, useDeleteAnimal } from '../api/animals';
 
 /** Delete is for a record made by mistake; a sold or dead animal is marked so instead. */
-export function DeleteAnimal({ animalId, label, onDeleted }: { animalId: string; label: string; onDeleted: () => void }) {
+export function DeleteAnimal({ animalId, label, onDeleted }: { animalId: string; label: string; onDeleted: () => void | Promise<void> }) {
   const [opened, { open, close }] = useDisclosure();
   const remove = useDeleteAnimal(animalId);
+  const qc = useQueryClient();
   return (
     <>
       <Button variant="subtle" color="clay" onClick={open} size="md">
@@ -36,7 +38,14 @@ export function DeleteAnimal({ animalId, label, onDeleted }: { animalId: string;
             <Button variant="default" onClick={close} size="md">
               Keep it
             </Button>
-            <Button color="clay" loading={remove.isPending} onClick={() => remove.mutate(undefined, { onSuccess: onDeleted })} size="md">
+            <Button color="clay" loading={remove.isPending} onClick={() =>
+                remove.mutate(undefined, {
+                  onSuccess: async () => {
+                    await onDeleted();
+                    forgetAnimal(qc, animalId);
+                  },
+                })
+              } size="md">
               Delete for good
             </Button>
           </Group>
