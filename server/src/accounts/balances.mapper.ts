@@ -1,10 +1,14 @@
 import type { BalancesResponse } from '@broodsilk/shared';
 import type { AccountView } from './account-view';
 
-/** Nothing owed: at least one counted sac under terms in force, no young still owed, no money owed. */
+/**
+ * Nothing owed: a counted sac under terms in force, every other party has had its share (the
+ * owner keeps what is left in care), no money is owed and no payment waits for confirmation.
+ */
 export function isSettled(view: AccountView): boolean {
   if (!view.data.terms || !view.sacs.some((s) => s.count > 0)) return false;
-  return view.balances.parties.every((p) => p.owedSpiderlings === 0) && view.balances.debts.length === 0 && view.pending.size === 0;
+  const others = view.balances.parties.filter((p) => p.partyId !== view.owner.id);
+  return others.every((p) => p.owedSpiderlings <= 0) && view.balances.debts.length === 0 && view.pending.size === 0;
 }
 
 export function toBalancesResponse(view: AccountView): BalancesResponse {
