@@ -104,7 +104,7 @@ export function buildAccountView(data: AccountData): AccountView {
 
   const price = data.terms?.pricePerSpiderlingMinor ?? 0;
   const currency = data.terms?.currency ?? NO_CURRENCY;
-  const lines = data.terms?.lines.getItems() ?? [];
+  const lines = [...(data.terms?.lines.getItems() ?? [])].sort((a, b) => a.pickOrder - b.pickOrder); // parties in pick order, whatever order the rows came in
   const parties = lines.length ? lines.map((l) => l.member.id) : data.members.filter((m) => m.role !== 'caretaker').map((m) => m.id);
   const firstPass = computeBalances(parties.map((partyId) => ({ partyId, count: 0 })), entries, price, currency, owner.id);
   const inForce = new Set(firstPass.inForce);

@@ -1,6 +1,8 @@
 import type { FeatureSeeder } from './demo-seed';
 import { seedCollection } from './collection.seeder';
 import { seedProjects } from './projects.seeder';
+import { seedAccounts } from './accounts.seeder';
 
 /** The scenario's parts, in dependency order; each feature adds its seeder here. */
-export const DEMO_SEEDERS: FeatureSeeder[] = [seedCollection, seedProjects];
+// seedAccounts stays last: it reads the counted broods the sacs seeder lays.
+export const DEMO_SEEDERS: FeatureSeeder[] = [seedCollection, seedProjects, seedAccounts];
