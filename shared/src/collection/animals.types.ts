@@ -113,6 +113,9 @@ export interface AnimalSummary {
   status: AnimalStatus;
   statusOn: DateString | null;
   custody: Custody;
+  /** Who the animal is on loan from or to, and when it goes back (loans only). */
+  custodyParty: string | null;
+  dueBackOn: DateString | null;
   enclosure: string | null;
   lastMoltOn: DateString | null;
   createdAt: string;

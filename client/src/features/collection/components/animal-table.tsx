@@ -98,9 +98,16 @@ export function AnimalTable({ items, sort, order, onSort, hrefOf, clocks, former
                       {CUSTODY_LABELS[a.custody]}
                     </Text>
                   ) : (
-                    <Badge variant="outline" color={a.custody === 'loan-in' ? 'amber' : 'gray'} size="sm" style={{ textTransform: 'none' }}>
-                      {CUSTODY_LABELS[a.custody]}
-                    </Badge>
+                    <Group gap={4} wrap="nowrap">
+                      <Badge variant="outline" color={a.custody === 'loan-in' ? 'amber' : 'gray'} size="sm" style={{ textTransform: 'none' }}>
+                        {CUSTODY_LABELS[a.custody]}
+                      </Badge>
+                      {(a.custodyParty || a.dueBackOn) && (
+                        <Text size="xs" c="dimmed">
+                          {[a.custodyParty, a.dueBackOn ? `back ${formatDate(a.dueBackOn)}` : null].filter(Boolean).join(' · ')}
+                        </Text>
+                      )}
+                    </Group>
                   )}
                 </Table.Td>
                 <Table.Td>
