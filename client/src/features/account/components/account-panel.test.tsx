@@ -67,7 +67,7 @@ describe('AccountPanel', { timeout: 30_000 }, () => {
     await screen.findByRole('table', { name: 'Account entries' });
     expect(screen.queryByRole('button', { name: 'Confirm receipt' })).not.toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Pay what you owe' })).not.toBeInTheDocument();
-    expect(screen.getByText('Waiting for Tomasz to confirm')).toBeInTheDocument();
+    expect(screen.getByText('Waiting for Tomasz to confirm receipt')).toBeInTheDocument();
     expect(await screen.findByRole('button', { name: 'Set up payouts' })).toBeInTheDocument();
   });
 });

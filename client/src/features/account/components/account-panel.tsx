@@ -62,7 +62,7 @@ export function AccountPanel({ projectId, me, myRole, myMemberId }: AccountPanel
   const sacs = shares.data?.sacs ?? [];
   const parties = balances.data?.parties ?? [];
   const currency = balances.data?.currency ?? shares.data?.terms?.currency ?? null;
-  const awaiting = (entries.data ?? []).filter((e) => e.status === 'awaiting-confirmation' && myMemberId !== null && e.awaitingConfirmationBy?.memberId === myMemberId);
+  const awaiting = (entries.data ?? []).filter((e) => myMemberId !== null && e.awaitingConfirmationBy?.memberId === myMemberId && e.status !== 'reversed' && e.status !== 'left-out');
   const myDebts = (balances.data?.debts ?? []).filter((d) => d.fromPartyId === myMemberId);
   const owedToMe = (balances.data?.debts ?? []).some((d) => d.toPartyId === myMemberId);
   const close = () => setAction(null);

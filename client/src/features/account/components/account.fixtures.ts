@@ -52,7 +52,7 @@ export function entry(over: Partial<LedgerEntryResponse>): LedgerEntryResponse {
     id: '55555555-5555-4555-8555-555555555555', seq: 1, kind: 'hand-over', date: '2026-11-20', sacId: null, party: TOMASZ, from: null, to: null, count: 3,
     method: 'pick-up', carrier: null, tracking: null, priceMinor: null, pricePerSpiderlingMinor: null, amountMinor: null, currency: null, handOverId: null,
     arrivedAlive: null, arrivedDead: null, reversesId: null, confirmsId: null, reason: null, note: null, source: 'manual',
-    recordedBy: { id: 'u1', name: 'Mira' }, recordedAt: '2026-11-20T10:00:00.000Z', status: 'awaiting-confirmation', problem: null,
+    recordedBy: { id: 'u1', name: 'Mira' }, recordedAt: '2026-11-20T10:00:00.000Z', status: 'in-force', problem: null,
     awaitingConfirmationBy: TOMASZ, ...over,
   };
 }

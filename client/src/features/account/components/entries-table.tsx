@@ -94,9 +94,16 @@ export function EntriesTable({ projectId }: { projectId: string }) {
                 <Table.Td>{amountText(e)}</Table.Td>
                 <Table.Td>{e.source === 'payment-provider' ? 'Payment provider' : (e.recordedBy?.name ?? '—')}</Table.Td>
                 <Table.Td>
-                  <Text size="sm" className={status.tone}>
-                    {e.status === 'awaiting-confirmation' && e.awaitingConfirmationBy ? `Waiting for ${e.awaitingConfirmationBy.name} to confirm` : status.label}
-                  </Text>
+                  {e.status !== 'awaiting-confirmation' && (
+                    <Text size="sm" className={status.tone}>
+                      {status.label}
+                    </Text>
+                  )}
+                  {e.awaitingConfirmationBy && e.status !== 'reversed' && e.status !== 'left-out' && (
+                    <Text size="sm" className="tone-due">
+                      Waiting for {e.awaitingConfirmationBy.name} to confirm{e.kind === 'hand-over' ? ' receipt' : ''}
+                    </Text>
+                  )}
                   {reverser && (
                     <Anchor href={`#${rowId(reverser.seq)}`} size="xs">
                       by correction #{reverser.seq}
