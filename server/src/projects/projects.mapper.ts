@@ -26,7 +26,7 @@ export function toProjectSummary(p: Project, stage: DerivedProjectStage, myRole:
 /** What members see of an animal: no price paid, no photos, not editable here. Needs species, recordedBy, ownerUser. */
 export function toProjectAnimal(a: Animal, today: string, viewerId: string): ProjectAnimal {
   const r = toAnimalResponse(a, today, viewerId);
-  const { pricePaidMinor: _p, priceCurrency: _c, photos: _ph, editable: _e, recordedBy: _r, acquiredFrom: _f, acquiredOn: _o, notes: _n, custodyParty: _cp, updatedAt: _u, premoltNote: _pm, owner, ...summary } = r;
+  const { pricePaidMinor: _p, priceCurrency: _c, photos: _ph, editable: _e, recordedBy: _r, acquiredFrom: _f, acquiredOn: _o, notes: _n, updatedAt: _u, premoltNote: _pm, owner, ...summary } = r;
   return { ...summary, owner: { name: owner.name, ...(owner.userId ? { userId: owner.userId } : {}) }, dueBackOn: r.dueBackOn, maleClock: r.maleClock, readiness: r.readiness };
 }
 
