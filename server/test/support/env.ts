@@ -7,8 +7,8 @@ process.env.AUTH_RATE_LIMIT ??= '1000';
 if (!process.env.DATABASE_URL.includes('test')) {
   throw new Error(`Refusing to run tests against ${process.env.DATABASE_URL}: the database name must contain "test".`);
 }
-// Photo storage: an S3-compatible fake (s3rver) on 127.0.0.1:4570 unless the test script says otherwise.
-process.env.S3_ENDPOINT ??= 'http://127.0.0.1:4570';
+// Photo storage: an S3-compatible fake (s3rver) on 127.0.0.1:4569 (as `npm start` runs it) unless the test script says otherwise.
+process.env.S3_ENDPOINT ??= 'http://127.0.0.1:4569';
 process.env.S3_REGION ??= 'us-east-1';
 process.env.S3_BUCKET ??= 'broodsilk-photos-test';
 process.env.S3_ACCESS_KEY_ID ??= 'S3RVER';
