@@ -1,8 +1,9 @@
 import type { FeatureSeeder } from './demo-seed';
 import { seedCollection } from './collection.seeder';
 import { seedProjects } from './projects.seeder';
+import { seedSacs } from './sacs.seeder';
 import { seedAccounts } from './accounts.seeder';
 
 /** The scenario's parts, in dependency order; each feature adds its seeder here. */
 // seedAccounts stays last: it reads the counted broods the sacs seeder lays.
-export const DEMO_SEEDERS: FeatureSeeder[] = [seedCollection, seedProjects, seedAccounts];
+export const DEMO_SEEDERS: FeatureSeeder[] = [seedCollection, seedProjects, seedSacs, seedAccounts];

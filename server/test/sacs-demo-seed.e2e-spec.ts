@@ -1,0 +1,53 @@
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { DashboardResponse, ProjectSummary, SacResponse } from '@broodsilk/shared';
+import { seedDemo } from '../src/seed/demo-seed';
+import { seedCollection } from '../src/seed/collection.seeder';
+import { DEMO_PROJECTS, seedProjects } from '../src/seed/projects.seeder';
+import { seedSacs } from '../src/seed/sacs.seeder';
+import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../src/seed/demo-accounts';
+import { createTestApp, type TestApp } from './support/test-app';
+import { login, type SignedIn } from './support/users';
+
+let t: TestApp;
+let mira: SignedIn;
+let ines: SignedIn;
+let list: ProjectSummary[];
+const http = () => request(t.app.getHttpServer());
+const account = (key: string) => DEMO_ACCOUNTS.find((a) => a.key === key)!.email;
+const byTitle = (title: string) => list.find((p) => p.title === title)!;
+const sacsOf = async (title: string): Promise<SacResponse[]> => (await http().get(`/api/projects/${byTitle(title).id}/sacs`).set('Authorization', mira.bearer).expect(200)).body;
+
+beforeAll(async () => {
+  t = await createTestApp();
+  expect(await seedDemo(t.orm.em.fork(), [seedCollection, seedProjects, seedSacs])).toBe(true);
+  mira = await login(t.app, account('keeper'), DEMO_PASSWORD);
+  ines = await login(t.app, account('caretaker'), DEMO_PASSWORD);
+  list = (await http().get('/api/projects').set('Authorization', mira.bearer).expect(200)).body;
+});
+afterAll(async () => {
+  await t.close();
+});
+
+describe('demo sacs', () => {
+  it('put three projects in the stages sac laid, in incubator and brood', async () => {
+    expect(byTitle(DEMO_PROJECTS.vagansSac).stage.stage).toBe('sac-laid');
+    expect(byTitle(DEMO_PROJECTS.hamoriiIncubator).stage.stage).toBe('in-incubator');
+    expect(byTitle(DEMO_PROJECTS.versicolorBrood).stage.stage).toBe('brood');
+    const [v] = await sacsOf(DEMO_PROJECTS.vagansSac);
+    expect(v).toMatchObject({ dayNumber: 12, pulled: false, roll: null });
+    const [b] = await sacsOf(DEMO_PROJECTS.versicolorBrood);
+    expect(b).toMatchObject({ dayNumber: 70, opened: true, currentCount: 97, broodStage: 'second-instar', roll: null });
+  });
+
+  it('leave a roll due on the dashboard for the owner and the caretaker, with readings in the log', async () => {
+    for (const who of [mira, ines]) {
+      const d = (await http().get('/api/dashboard').set('Authorization', who.bearer).expect(200)).body as DashboardResponse;
+      expect(d.dueToday.rolls.map((r) => [r.projectTitle, r.sac.dayNumber, r.sac.roll!.status])).toEqual([[DEMO_PROJECTS.hamoriiIncubator, 26, 'due']]);
+    }
+    const [h] = await sacsOf(DEMO_PROJECTS.hamoriiIncubator);
+    const log = (await http().get(`/api/sacs/${h.id}/log`).set('Authorization', ines.bearer).expect(200)).body as { kind: string; author: { name: string } }[];
+    expect(new Set(log.map((e) => e.kind))).toEqual(new Set(['roll', 'temperature', 'humidity', 'note']));
+    expect(log.find((e) => e.kind === 'roll')!.author.name).toBe('Ines Carvalho');
+  });
+});
