@@ -200,3 +200,14 @@ describe('bad input and who may do what', () => {
     expect(res.body.shippingCautions.join(' ')).toMatch(/−4 °C .* 32 °C .* \(25–90 °F\)/);
   });
 });
+
+describe('reinstating an entry', () => {
+  it('refuses to bring back a hand-over by reversing its correction when the share is used up since', async () => {
+    const h = await entry({ kind: 'hand-over', date: D, memberId: s.tomaszId, count: 3, method: 'pick-up' });
+    const c = await entry({ kind: 'correction', date: D, reversesId: h.id, reason: 'recorded for the wrong day' });
+    await entry({ kind: 'hand-over', date: D, memberId: s.tomaszId, count: 4, method: 'pick-up' }); // Tomasz: 17 − 10 − 3 − 4 = 0 owed
+    const res = await post({ kind: 'correction', date: D, reversesId: c.id, reason: 'it was right after all' });
+    expect(res.status).toBe(409);
+    expect(res.body.message).toBe('Reinstating that hand-over would take too many young. Tomasz Partner: This is 3 more than the 0 young still owed to this party (share 17; 14 handed over, 0 sold, 3 cashed out).');
+  });
+});

@@ -18,11 +18,6 @@ let s: AccountScenario;
 let balances: BalancesResponse;
 
 const D = '2026-11-20';
-const binary = (res: NodeJS.ReadableStream & { setEncoding?: unknown }, cb: (err: Error | null, body: Buffer) => void) => {
-  const chunks: Buffer[] = [];
-  res.on('data', (c: Buffer) => chunks.push(c));
-  res.on('end', () => cb(null, Buffer.concat(chunks)));
-};
 const pdfText = async (data: Buffer): Promise<string> => {
   const parser = new PDFParse({ data });
   try {
@@ -93,7 +88,11 @@ describe('statement CSV', () => {
 
 describe('statement PDF', () => {
   it('holds the project, party, terms, shares, entries and the same balance figures as the route', async () => {
-    const res = await api(t.app).get(`/api/projects/${s.projectId}/statements/${s.tomaszId}.pdf`).set('Authorization', s.tomasz.bearer).buffer(true).parse(binary).expect(200);
+    const res = await api(t.app).get(`/api/projects/${s.projectId}/statements/${s.tomaszId}.pdf`).set('Authorization', s.tomasz.bearer).buffer(true).parse((r, cb) => {
+      const chunks: Buffer[] = [];
+      r.on('data', (c: Buffer) => chunks.push(c));
+      r.on('end', () => cb(null, Buffer.concat(chunks)));
+    }).expect(200);
     expect(res.headers['content-type']).toBe('application/pdf');
     const text = await pdfText(res.body as Buffer);
     const b = tomasz();

@@ -116,7 +116,18 @@ export function draftEntry(view: AccountView, access: ProjectAccess, userId: str
       const inForce = new Set(view.balances.inForce);
       const already = view.data.rows.find((r) => r.kind === 'correction' && r.target?.id === target.id && (inForce.has(r.id) || view.pending.has(target.id)));
       if (already) throw new ConflictException('This entry is already reversed by an earlier correction.');
+      assertReinstatementFits(view, target);
       return { ...base, target, reason: dto.reason };
     }
   }
+}
+
+/** Reversing a correction brings its target back; a hand-over, sale or cash-out coming back must still fit the share. */
+function assertReinstatementFits(view: AccountView, correction: LedgerEntryRow): void {
+  const back = correction.kind === 'correction' ? correction.target : null;
+  if (!back || !['hand-over', 'sale', 'cash-out'].includes(back.kind) || !back.party) return;
+  const balance = view.balances.parties.find((p) => p.partyId === back.party!.id);
+  if (!balance) return;
+  const check = checkWithdrawal(balance, back.count!);
+  if (check.message) throw new ConflictException(`Reinstating that ${back.kind} would take too many young. ${view.nameOf(back.party.id)}: ${check.message}`);
 }

@@ -47,7 +47,7 @@ export const rows: MatrixRow[] = [
   {
     method: 'POST', path: '/api/projects/:projectId/entries', expect: OWNER_AND_PARTNER,
     // The owner hands one young over; the partner records a payment he made to the owner.
-    request: async (fx, actor) => {
+    request: async (fx, actor): Promise<MatrixRequest> => {
       if (!allowed(actor)) return { body: { kind: 'hand-over', date: today(), memberId: fx.project.memberIds.partner, count: 1, method: 'pick-up' } };
       const p = await accountReady(fx);
       const body = actor === 'owner'
@@ -59,7 +59,7 @@ export const rows: MatrixRow[] = [
   {
     method: 'POST', path: '/api/projects/:projectId/entries/:entryId/confirm', expect: OWNER_AND_PARTNER,
     // The partner confirms a hand-over he received; the owner confirms a payment the partner recorded.
-    request: async (fx, actor) => {
+    request: async (fx, actor): Promise<MatrixRequest> => {
       if (!allowed(actor)) return { params: { entryId: NOBODY }, body: {} };
       const p = await accountReady(fx);
       if (actor === 'partner') {
