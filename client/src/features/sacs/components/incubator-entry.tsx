@@ -1,5 +1,5 @@
 import { Alert, Box, Button, Group, NumberInput, Select, Stack, Text, TextInput } from '@mantine/core';
-import { useState } from 'react';
+import { useRef, useState } from 'react';
 import { BROOD_STAGES, fahrenheitToCelsius, formatTemperature, type BroodStage, type CareLogRequest, type SacResponse, type TemperatureUnit } from '@broodsilk/shared';
 import { formatInstant } from '@/lib/dates';
 import { isApiError } from '@/lib/api-error';
@@ -34,19 +34,28 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
   const [note, setNote] = useState('');
   const [stage, setStage] = useState<string | null>(null);
 
-  async function send(entries: CareLogRequest[], what: string) {
+  // Only the latest action may report: a slow answer must not overwrite a newer one.
+  const latest = useRef(0);
+  async function run(action: () => Promise<string>, failure: string): Promise<boolean> {
+    const mine = ++latest.current;
     setError(null);
     setDone(null);
     try {
-      let last: { at: string } | undefined;
-      for (const entry of entries) last = await add.mutateAsync(entry);
-      setDone(`${what} logged${last ? ` at ${formatInstant(last.at, timeZone)}` : ''}.`);
+      const message = await action();
+      if (mine === latest.current) setDone(message);
       return true;
     } catch (e) {
-      setError(isApiError(e) ? e.message : 'The entry was not saved. Try again.');
+      if (mine === latest.current) setError(isApiError(e) ? e.message : failure);
       return false;
     }
   }
+
+  const send = (entries: CareLogRequest[], what: string) =>
+    run(async () => {
+      let last: { at: string } | undefined;
+      for (const entry of entries) last = await add.mutateAsync(entry);
+      return `${what} logged${last ? ` at ${formatInstant(last.at, timeZone)}` : ''}.`;
+    }, 'The entry was not saved. Try again.');
 
   async function saveReadings() {
     const entries: CareLogRequest[] = [];
@@ -156,15 +165,12 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
             h={76}
             fz={22}
             loading={update.isPending}
-            onClick={async () => {
-              setError(null);
-              try {
+            onClick={() =>
+              run(async () => {
                 await update.mutateAsync({ pulledAt: new Date().toISOString() });
-                setDone('Pulled: the first roll is due now.');
-              } catch (e) {
-                setError(isApiError(e) ? e.message : 'The pull was not saved. Try again.');
-              }
-            }}
+                return 'Pulled: the first roll is due now.';
+              }, 'The pull was not saved. Try again.')
+            }
           >
             Pulled now, into the incubator
           </Button>
