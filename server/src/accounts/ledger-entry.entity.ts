@@ -1,4 +1,4 @@
-import { Entity, Enum, Index, ManyToOne, Property } from '@mikro-orm/core';
+import { Check, Entity, Enum, Index, ManyToOne, Property } from '@mikro-orm/core';
 import type { HandOverMethod } from '@broodsilk/shared';
 import { BaseEntity } from '../database/base.entity';
 import { Project } from '../projects/project.entity';
@@ -14,6 +14,7 @@ export type LedgerRowKind = (typeof LEDGER_ROW_KINDS)[number];
  */
 @Entity({ tableName: 'ledger_entries' })
 @Index({ properties: ['project', 'seq'] })
+@Check({ name: 'ledger_entries_counts_check', expression: 'coalesce("count", 1) > 0 and coalesce("amount_minor", 1) > 0 and coalesce("price_minor", 0) >= 0 and coalesce("arrived_alive", 0) >= 0 and coalesce("arrived_dead", 0) >= 0' })
 export class LedgerEntryRow extends BaseEntity<'source'> {
   @ManyToOne(() => Project, { deleteRule: 'cascade' })
   project!: Project;
