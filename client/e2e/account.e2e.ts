@@ -49,7 +49,7 @@ const balanceRows = (page: Page) =>
     .evaluateAll((rows) => rows.map((r) => Array.from(r.querySelectorAll('td,th')).map((c) => c.textContent?.trim())));
 
 const owedTo = (page: Page, name: RegExp) =>
-  page.getByRole('table', { name: 'Balances' }).getByRole('row').filter({ hasText: name }).locator('td').last().textContent();
+  page.getByRole('table', { name: 'Balances' }).getByRole('row').filter({ hasText: name }).locator('td').nth(1).textContent();
 
 beforeAll(async () => {
   keeper = await openBrowser();
@@ -196,7 +196,10 @@ describe('account', () => {
       await phone.page.goto(`${BASE_URL}/sign-in`);
       await signIn(phone.page, 'partner@broodsilk.test');
       await phone.page.goto(`${BASE_URL}/projects/${projectId}/account`);
-      await phone.page.getByRole('table', { name: 'Account entries' }).waitFor();
+      const cards = phone.page.getByRole('list', { name: 'Account entries, newest last' });
+      await cards.waitFor();
+      expect(await phone.page.getByRole('table', { name: 'Account entries' }).isVisible()).toBe(false);
+      await poll(() => cards.getByRole('listitem').filter({ hasText: 'Payment provider' }).count()).toBeGreaterThan(0);
       const widths = await phone.page.evaluate(() => ({ doc: document.documentElement.scrollWidth, view: window.innerWidth }));
       expect(widths.doc).toBeLessThanOrEqual(widths.view + 1);
       await screenshot(phone.page, 'account-phone');

@@ -64,10 +64,10 @@ describe('AccountPanel', { timeout: 30_000 }, () => {
     renderWithProviders(<AccountPanel projectId={PROJECT_ID} me={me('Mira')} myRole="owner" myMemberId={MIRA.memberId} />);
     expect(await screen.findByRole('button', { name: 'Record a hand-over' })).toBeInTheDocument();
     expect(screen.getByRole('button', { name: 'Correct an entry' })).toBeInTheDocument();
-    await screen.findByRole('table', { name: 'Account entries' });
+    const table = await screen.findByRole('table', { name: 'Account entries' });
     expect(screen.queryByRole('button', { name: 'Confirm receipt' })).not.toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Pay what you owe' })).not.toBeInTheDocument();
-    expect(screen.getByText('Waiting for Tomasz to confirm receipt')).toBeInTheDocument();
+    expect(within(table).getByText('Waiting for Tomasz to confirm receipt')).toBeInTheDocument();
     expect(await screen.findByRole('button', { name: 'Set up payouts' })).toBeInTheDocument();
   });
 });

@@ -17,16 +17,16 @@ export function BalancesPanel({ projectId }: { projectId: string }) {
           </Badge>
         </Group>
       )}
-      <Table.ScrollContainer minWidth={560}>
+      <Table.ScrollContainer minWidth={520}>
         <Table aria-label="Balances" striped verticalSpacing="xs">
           <Table.Thead>
             <Table.Tr>
               <Table.Th>Party</Table.Th>
+              <Table.Th ta="right">Still owed</Table.Th>
               <Table.Th ta="right">Share</Table.Th>
               <Table.Th ta="right">Handed over</Table.Th>
               <Table.Th ta="right">Sold</Table.Th>
               <Table.Th ta="right">Cashed out</Table.Th>
-              <Table.Th ta="right">Still owed</Table.Th>
             </Table.Tr>
           </Table.Thead>
           <Table.Tbody>
@@ -41,18 +41,6 @@ export function BalancesPanel({ projectId }: { projectId: string }) {
                     </Text>
                   )}
                 </Table.Td>
-                <Table.Td ta="right">{p.share}</Table.Td>
-                <Table.Td ta="right">
-                  {p.handedOver}
-                  {p.unconfirmedHandOvers > 0 && (
-                    <Text span size="xs" className="tone-due">
-                      {' '}
-                      ({p.unconfirmedHandOvers} not confirmed)
-                    </Text>
-                  )}
-                </Table.Td>
-                <Table.Td ta="right">{p.sold}</Table.Td>
-                <Table.Td ta="right">{p.cashedOut}</Table.Td>
                 <Table.Td ta="right" data-testid={`owed-${p.memberId}`}>
                   {p.owedSpiderlings > 0 ? (
                     <Text span fw={600} className="tone-due">
@@ -68,6 +56,18 @@ export function BalancesPanel({ projectId }: { projectId: string }) {
                     </Text>
                   )}
                 </Table.Td>
+                <Table.Td ta="right">{p.share}</Table.Td>
+                <Table.Td ta="right">
+                  {p.handedOver}
+                  {p.unconfirmedHandOvers > 0 && (
+                    <Text span size="xs" className="tone-due">
+                      {' '}
+                      ({p.unconfirmedHandOvers} not confirmed)
+                    </Text>
+                  )}
+                </Table.Td>
+                <Table.Td ta="right">{p.sold}</Table.Td>
+                <Table.Td ta="right">{p.cashedOut}</Table.Td>
               </Table.Tr>
             ))}
           </Table.Tbody>

@@ -1,4 +1,4 @@
-import { Alert, Anchor, Stack, Table, Text } from '@mantine/core';
+import { Alert, Anchor, Card, Group, Stack, Table, Text } from '@mantine/core';
 import type { ReactNode } from 'react';
 import type { LedgerEntryResponse } from '@broodsilk/shared';
 import { formatDate } from '@/lib/dates';
@@ -54,6 +54,29 @@ function Details({ e, bySeq }: { e: LedgerEntryResponse; bySeq: Map<string, Ledg
   );
 }
 
+function EntryState({ e, reverser }: { e: LedgerEntryResponse; reverser?: LedgerEntryResponse }) {
+  const status = STATUS_LABELS[e.status];
+  return (
+    <>
+      {e.status !== 'awaiting-confirmation' && (
+        <Text size="sm" className={status.tone}>
+          {status.label}
+        </Text>
+      )}
+      {e.awaitingConfirmationBy && e.status !== 'reversed' && e.status !== 'left-out' && (
+        <Text size="sm" className="tone-due">
+          Waiting for {e.awaitingConfirmationBy.name} to confirm{e.kind === 'hand-over' ? ' receipt' : ''}
+        </Text>
+      )}
+      {reverser && (
+        <Anchor href={`#${rowId(reverser.seq)}`} size="xs">
+          by correction #{reverser.seq}
+        </Anchor>
+      )}
+    </>
+  );
+}
+
 /** The ledger as recorded: nothing here is editable; a correction is a new entry that reverses an old one. */
 export function EntriesTable({ projectId }: { projectId: string }) {
   const entries = useEntries(projectId);
@@ -65,7 +88,34 @@ export function EntriesTable({ projectId }: { projectId: string }) {
   const reversedBy = new Map<string, LedgerEntryResponse>();
   for (const e of list) if (e.kind === 'correction' && e.reversesId && e.status === 'in-force') reversedBy.set(e.reversesId, e);
   return (
-    <Table.ScrollContainer minWidth={760}>
+    <>
+      <Stack gap="xs" hiddenFrom="sm" component="ol" aria-label="Account entries, newest last" p={0} m={0} style={{ listStyle: 'none' }}>
+        {list.map((e) => (
+          <Card key={e.id} withBorder padding="xs" component="li" data-testid={`entry-card-${e.kind}`}>
+            <Group justify="space-between" gap="xs" wrap="nowrap" align="flex-start">
+              <Text size="sm" fw={600}>
+                #{e.seq} {ENTRY_KIND_LABELS[e.kind]}
+              </Text>
+              <Text size="xs" c="dimmed" style={{ whiteSpace: 'nowrap' }}>
+                {formatDate(e.date)}
+              </Text>
+            </Group>
+            <Text size="sm">
+              {partyText(e)} · {amountText(e)}
+            </Text>
+            <Details e={e} bySeq={byId} />
+            <Group justify="space-between" gap="xs" align="flex-end">
+              <Stack gap={0}>
+                <EntryState e={e} reverser={reversedBy.get(e.id)} />
+              </Stack>
+              <Text size="xs" c="dimmed">
+                {e.source === 'payment-provider' ? 'Payment provider' : (e.recordedBy?.name ?? '')}
+              </Text>
+            </Group>
+          </Card>
+        ))}
+      </Stack>
+    <Table.ScrollContainer minWidth={760} visibleFrom="sm">
       <Table aria-label="Account entries" verticalSpacing="xs" striped>
         <Table.Thead>
           <Table.Tr>
@@ -80,7 +130,6 @@ export function EntriesTable({ projectId }: { projectId: string }) {
         </Table.Thead>
         <Table.Tbody>
           {list.map((e) => {
-            const status = STATUS_LABELS[e.status];
             const reverser = reversedBy.get(e.id);
             return (
               <Table.Tr key={e.id} id={rowId(e.seq)} data-testid={`entry-${e.kind}`}>
@@ -94,21 +143,7 @@ export function EntriesTable({ projectId }: { projectId: string }) {
                 <Table.Td>{amountText(e)}</Table.Td>
                 <Table.Td>{e.source === 'payment-provider' ? 'Payment provider' : (e.recordedBy?.name ?? '—')}</Table.Td>
                 <Table.Td>
-                  {e.status !== 'awaiting-confirmation' && (
-                    <Text size="sm" className={status.tone}>
-                      {status.label}
-                    </Text>
-                  )}
-                  {e.awaitingConfirmationBy && e.status !== 'reversed' && e.status !== 'left-out' && (
-                    <Text size="sm" className="tone-due">
-                      Waiting for {e.awaitingConfirmationBy.name} to confirm{e.kind === 'hand-over' ? ' receipt' : ''}
-                    </Text>
-                  )}
-                  {reverser && (
-                    <Anchor href={`#${rowId(reverser.seq)}`} size="xs">
-                      by correction #{reverser.seq}
-                    </Anchor>
-                  )}
+                  <EntryState e={e} reverser={reverser} />
                 </Table.Td>
               </Table.Tr>
             );
@@ -116,5 +151,6 @@ export function EntriesTable({ projectId }: { projectId: string }) {
         </Table.Tbody>
       </Table>
     </Table.ScrollContainer>
+    </>
   );
 }

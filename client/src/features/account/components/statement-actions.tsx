@@ -5,8 +5,10 @@ import { statementFileUrl, useEmailStatement } from '../api/statements';
 
 /** A party's statement as a CSV or PDF file, or e-mailed to that party. The owner picks the party; a partner gets their own. */
 export function StatementActions({ projectId, parties, fixedMemberId }: { projectId: string; parties: PartyRef[]; fixedMemberId?: string }) {
-  const [memberId, setMemberId] = useState(fixedMemberId ?? parties[0]?.memberId ?? '');
+  const [chosen, setMemberId] = useState<string | null>(null);
   const email = useEmailStatement(projectId);
+  // The parties arrive with the balances: until one is chosen, the first one is meant.
+  const memberId = fixedMemberId ?? chosen ?? parties[0]?.memberId ?? '';
   if (!memberId) return <Text c="dimmed">No party has a statement yet.</Text>;
   const name = parties.find((p) => p.memberId === memberId)?.name ?? 'the party';
   return (
