@@ -125,6 +125,12 @@ describe('a breeding project from loaned male to the first roll', () => {
       await phone.page.goto(`${BASE_URL}/sacs/${sacId}`);
       await eventually(() => phone.page.getByTestId('care-log').textContent()).toContain('Rolled');
       expect(existsSync(await screenshot(phone.page, 'sac-phone'))).toBe(true);
+      await phone.page.goto(projectUrl);
+      await eventually(() => phone.page.getByTestId('stage-current').textContent()).toContain('In incubator');
+      expect(existsSync(await screenshot(phone.page, 'project-phone'))).toBe(true);
+      await phone.page.goto(`${BASE_URL}/`);
+      await eventually(() => phone.page.getByTestId('card-rolls').textContent()).toContain('Rolls');
+      expect(existsSync(await screenshot(phone.page, 'dashboard-phone'))).toBe(true);
     } finally {
       await phone.close();
     }

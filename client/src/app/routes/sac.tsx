@@ -4,6 +4,7 @@ import type { ReactNode } from 'react';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '@/components/ui/page-header';
 import { PageLoader } from '@/components/ui/page-loader';
+import { formatDate } from '@/lib/dates';
 import { paths } from '@/config/paths';
 import { useMe } from '@/features/auth/api/me';
 import { projectQueries } from '@/features/projects/api/projects';
@@ -46,8 +47,8 @@ export function Component() {
   return (
     <Stack>
       <PageHeader
-        title={`Sac of ${project.data?.title ?? '…'}`}
-        description={project.data ? `${project.data.femaleAnimal.label} × ${project.data.maleAnimal.label}` : undefined}
+        title={`Sac laid ${formatDate(s.layDate)}`}
+        description={project.data ? `${project.data.title} · ${project.data.femaleAnimal.label} × ${project.data.maleAnimal.label}` : undefined}
         actions={
           <Group>
             {s.roll && (

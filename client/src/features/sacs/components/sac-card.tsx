@@ -10,7 +10,7 @@ export function SacCard({ sac, timeZone, href, incubatorHref }: { sac: SacRespon
   const roll = rollSentence(sac, timeZone);
   return (
     <Card withBorder padding="sm" data-testid="sac-card">
-      <Group justify="space-between" wrap="nowrap" align="flex-start">
+      <Group justify="space-between" wrap="wrap" align="flex-start" gap="xs">
         <Stack gap={2}>
           <Anchor component={Link} to={href} fw={700}>
             Sac laid {formatDate(sac.layDate)}
