@@ -188,6 +188,20 @@ describe('account', () => {
     // The keeper sees the same payment.
     await page.reload();
     await poll(() => page.getByRole('table', { name: 'Account entries' }).getByRole('row').filter({ hasText: 'Payment provider' }).count()).toBeGreaterThan(0);
+
+    // Tomasz's statement: the CSV link downloads with Mira's session; the e-mail goes to him.
+    const statement = page.getByTestId('statement-actions');
+    const picker = statement.getByLabel('Statement for');
+    await picker.selectOption((await picker.locator('option', { hasText: 'Tomasz' }).getAttribute('value'))!);
+    const csvHref = await statement.getByRole('link', { name: 'Download CSV' }).getAttribute('href');
+    const csv = await page.request.get(`${BASE_URL}${csvHref}`);
+    expect(csv.status()).toBe(200);
+    expect(csv.headers()['content-type']).toContain('text/csv');
+    expect(await csv.text()).toContain('Tomasz');
+    const pdf = await page.request.get(`${BASE_URL}${await statement.getByRole('link', { name: 'Download PDF' }).getAttribute('href')}`);
+    expect(pdf.headers()['content-type']).toContain('application/pdf');
+    await statement.getByRole('button', { name: /^E-mail it to Tomasz/ }).click();
+    await statement.getByRole('status').filter({ hasText: 'The statement was e-mailed to Tomasz' }).waitFor();
   });
 
   it('works on a phone: the account stacks and its tables scroll inside the page', async () => {

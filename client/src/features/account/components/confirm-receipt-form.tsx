@@ -38,7 +38,7 @@ function ConfirmHandOver({ projectId, entry }: { projectId: string; entry: Ledge
   });
   return (
     <form onSubmit={submit} noValidate aria-label={`Confirm receipt of hand-over #${entry.seq}`}>
-      <Stack gap="xs">
+      <Stack gap="xs" maw={420}>
         <Group grow align="flex-start">
           <NumberInput label="Arrived alive" min={0} allowDecimal={false} key={form.key('arrivedAlive')} {...form.getInputProps('arrivedAlive')} />
           <NumberInput label="Arrived dead" min={0} allowDecimal={false} key={form.key('arrivedDead')} {...form.getInputProps('arrivedDead')} />
