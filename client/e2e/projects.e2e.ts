@@ -150,6 +150,7 @@ describe('a breeding project from loaned male to the first roll', () => {
       await partner.page.getByRole('button', { name: 'Sign in' }).click();
       await partner.page.waitForURL(/\/invitations\//);
       await eventually(() => partner.page.getByTestId('invitation').textContent()).toContain('Signed in as Tomasz Wierzba');
+      expect(existsSync(await screenshot(partner.page, 'invitation'))).toBe(true);
       await partner.page.getByRole('button', { name: 'Join the project' }).click();
       await partner.page.waitForURL(projectUrl);
       await eventually(() => partner.page.getByRole('heading', { name: TITLE }).count()).toBe(1);

@@ -54,12 +54,12 @@ export function PairingsPanel({ projectId, timeZone, canRecord }: { projectId: s
       {pairings.isError && <Alert color="clay">{pairings.error.message}</Alert>}
       {pairings.data && pairings.data.length === 0 && <Text c="dimmed">No pairing recorded yet.</Text>}
       {pairings.data && pairings.data.length > 0 && (
-        <Table.ScrollContainer minWidth={360}>
+        <Table.ScrollContainer minWidth={300}>
           <Table striped verticalSpacing={4} fz="sm" data-testid="pairings-table">
             <Table.Thead>
               <Table.Tr>
                 <Table.Th>Started</Table.Th>
-                <Table.Th>Minutes</Table.Th>
+                <Table.Th visibleFrom="sm">Minutes</Table.Th>
                 <Table.Th>Outcome</Table.Th>
                 <Table.Th visibleFrom="sm">Notes</Table.Th>
               </Table.Tr>
@@ -68,7 +68,7 @@ export function PairingsPanel({ projectId, timeZone, canRecord }: { projectId: s
               {pairings.data.map((p) => (
                 <Table.Tr key={p.id}>
                   <Table.Td>{formatInstant(p.startedAt, timeZone)}</Table.Td>
-                  <Table.Td>{p.durationMinutes}</Table.Td>
+                  <Table.Td visibleFrom="sm">{p.durationMinutes}</Table.Td>
                   <Table.Td>
                     <Badge variant="light" tt="none" color={p.outcome === 'connected' ? 'moss' : p.outcome === 'interest-only' ? 'gray' : 'clay'}>
                       {PAIRING_OUTCOME_LABELS[p.outcome]}

@@ -32,12 +32,12 @@ export function PartiesPanel({ projectId, members, myRole, timeZone }: PartiesPa
 
   return (
     <Stack>
-      <Table.ScrollContainer minWidth={360}>
+      <Table.ScrollContainer minWidth={300}>
         <Table verticalSpacing={4} fz="sm" data-testid="parties-table">
           <Table.Thead>
             <Table.Tr>
               <Table.Th>Party</Table.Th>
-              <Table.Th>Role</Table.Th>
+              <Table.Th visibleFrom="sm">Role</Table.Th>
               {isOwner && <Table.Th>Account</Table.Th>}
             </Table.Tr>
           </Table.Thead>
@@ -55,8 +55,11 @@ export function PartiesPanel({ projectId, members, myRole, timeZone }: PartiesPa
                         {m.email}
                       </Text>
                     )}
+                    <Text size="xs" c="dimmed" hiddenFrom="sm">
+                      {ROLE_LABELS[m.role]}
+                    </Text>
                   </Table.Td>
-                  <Table.Td>{ROLE_LABELS[m.role]}</Table.Td>
+                  <Table.Td visibleFrom="sm">{ROLE_LABELS[m.role]}</Table.Td>
                   {isOwner && (
                     <Table.Td>
                       {m.role === 'owner' ? (

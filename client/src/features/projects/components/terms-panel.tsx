@@ -50,14 +50,14 @@ export function TermsPanel({ projectId, me, myRole, members }: TermsPanelProps) 
                 by {v.createdBy.name}, {formatInstant(v.createdAt, me.timeZone)}
               </Text>
             </Group>
-            <Table.ScrollContainer minWidth={420}>
+            <Table.ScrollContainer minWidth={300}>
               <Table striped verticalSpacing={4} fz="sm">
                 <Table.Thead>
                   <Table.Tr>
                     <Table.Th>Party</Table.Th>
                     <Table.Th>Share</Table.Th>
-                    <Table.Th>Taken first</Table.Th>
-                    <Table.Th>Picks</Table.Th>
+                    <Table.Th visibleFrom="sm">Taken first</Table.Th>
+                    <Table.Th visibleFrom="sm">Picks</Table.Th>
                     <Table.Th>Accepted</Table.Th>
                   </Table.Tr>
                 </Table.Thead>
@@ -66,12 +66,18 @@ export function TermsPanel({ projectId, me, myRole, members }: TermsPanelProps) 
                     .sort((a, b) => a.pickOrder - b.pickOrder)
                     .map((l) => (
                       <Table.Tr key={l.memberId}>
-                        <Table.Td>{l.memberName}</Table.Td>
+                        <Table.Td>
+                          {l.memberName}
+                          <Text size="xs" c="dimmed" hiddenFrom="sm">
+                            picks #{l.pickOrder}
+                            {l.fixedCount > 0 ? ` · ${l.fixedCount} first` : ''}
+                          </Text>
+                        </Table.Td>
                         <Table.Td>
                           {l.share} <Text span size="xs" c="dimmed">(weight {l.weight})</Text>
                         </Table.Td>
-                        <Table.Td>{l.fixedCount > 0 ? l.fixedCount : '—'}</Table.Td>
-                        <Table.Td>#{l.pickOrder}</Table.Td>
+                        <Table.Td visibleFrom="sm">{l.fixedCount > 0 ? l.fixedCount : '—'}</Table.Td>
+                        <Table.Td visibleFrom="sm">#{l.pickOrder}</Table.Td>
                         <Table.Td>
                           {!l.mustAccept ? (
                             <Text size="sm" c="dimmed">
