@@ -19,6 +19,7 @@ let t: TestApp;
 let s: AccountScenario;
 let stripe: Stripe;
 let webhookUrl: string;
+const savedEnv = { ...process.env };
 
 /** The form holding the button labelled `label` on one of the fake's pages. */
 function formAction(html: string, label: string): { action: string; fields: URLSearchParams } {
@@ -57,7 +58,10 @@ beforeAll(async () => {
 afterAll(async () => {
   await t?.close();
   await fake?.close();
-  for (const k of ['STRIPE_API_HOST', 'STRIPE_API_PORT', 'STRIPE_API_PROTOCOL']) delete process.env[k];
+  for (const k of ['STRIPE_SECRET_KEY', 'STRIPE_WEBHOOK_SECRET', 'STRIPE_API_HOST', 'STRIPE_API_PORT', 'STRIPE_API_PROTOCOL']) {
+    if (savedEnv[k] === undefined) delete process.env[k];
+    else process.env[k] = savedEnv[k];
+  }
 });
 
 const payout = async (who = s.tomasz) =>
