@@ -2,8 +2,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { BASE_URL, openBrowser, screenshot, signIn, type Browser } from './support/browser';
 
-// A project of Mira's with Tomasz as partner and terms in force (from the demo seed).
-const PROJECT_TITLE = 'Regalis breeding loan with Tomasz';
+// The demo project with a counted brood: Mira runs it, Tomasz is a partner, terms in force (from the demo seed).
+const PROJECT_TITLE = 'Versicolor shared brood';
 
 /** Waits (up to a limit, not a measurement) for what the page shows after a refetch. */
 const poll = <T>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 20_000, interval: 250 });
