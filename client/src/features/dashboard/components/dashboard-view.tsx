@@ -179,8 +179,8 @@ export function DashboardView({ data, timeZone }: { data: DashboardResponse; tim
                         {p.female.label} × {p.male.label}
                       </Text>
                     </Table.Td>
-                    <Table.Td>
-                      <Badge variant="light" tt="none" color="moss">
+                    <Table.Td style={{ width: '1%', whiteSpace: 'nowrap' }}>
+                      <Badge variant="light" tt="none" color="moss" style={{ overflow: 'visible' }}>
                         {STAGE[p.stage.stage]}
                       </Badge>
                     </Table.Td>

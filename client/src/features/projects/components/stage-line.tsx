@@ -63,7 +63,7 @@ export function StageLine({ stage, note }: { stage: DerivedProjectStage; note?: 
 export function StageBadge({ stage }: { stage: DerivedProjectStage }) {
   const colour = stage.stage === 'ended-early' ? 'clay' : stage.stage === 'closed' || stage.stage === 'shares-settled' ? 'gray' : 'moss';
   return (
-    <Badge color={colour} variant="light" tt="none" data-testid="stage-badge">
+    <Badge color={colour} variant="light" tt="none" data-testid="stage-badge" style={{ overflow: 'visible', maxWidth: 'none' }}>
       {stageText(stage.stage, stage.reason)}
     </Badge>
   );
