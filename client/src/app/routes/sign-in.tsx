@@ -1,18 +1,19 @@
 import { useNavigate, useSearchParams } from 'react-router-dom';
 import { PublicLayout } from '@/components/layouts/public-layout';
 import { SignInForm } from '@/features/auth/components/sign-in-form';
+import { safeNext } from './safe-next';
+import { paths } from '@/config/paths';
 
-/** Only same-site paths are followed after sign-in. */
-function safeNext(next: string | null): string {
-  return next && next.startsWith('/') && !next.startsWith('//') ? next : '/';
-}
 
 export function Component() {
   const navigate = useNavigate();
   const [params] = useSearchParams();
   return (
     <PublicLayout title="Sign in to Broodsilk" subtitle="Your pairings, sacs and partner accounts in one place.">
-      <SignInForm onSignedIn={() => navigate(safeNext(params.get('next')), { replace: true })} />
+      <SignInForm
+        onSignedIn={() => navigate(safeNext(params.get('next')), { replace: true })}
+        registerHref={params.get('next') ? `${paths.register.href()}?next=${encodeURIComponent(safeNext(params.get('next')))}` : paths.register.href()}
+      />
     </PublicLayout>
   );
 }

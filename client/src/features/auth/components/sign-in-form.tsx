@@ -6,7 +6,8 @@ import { applyServerErrors } from '@/lib/form-errors';
 import { paths } from '@/config/paths';
 import { useLogin } from '../api/session';
 
-export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
+/** `registerHref` lets the sign-in page keep where the user was going (e.g. an invitation) when they register instead. */
+export function SignInForm({ onSignedIn, registerHref = paths.register.href() }: { onSignedIn: () => void; registerHref?: string }) {
   const login = useLogin();
   const [problem, setProblem] = useState<string | null>(null);
   const form = useForm({
@@ -41,7 +42,7 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
             Forgot your password?
           </Anchor>{' '}
           · New here?{' '}
-          <Anchor component={Link} to={paths.register.href()}>
+          <Anchor component={Link} to={registerHref}>
             Create an account
           </Anchor>
         </Text>
