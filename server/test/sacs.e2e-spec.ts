@@ -154,3 +154,15 @@ describe('sac routes for outsiders', () => {
     await http().get('/api/sacs/not-a-uuid').set('Authorization', owner.bearer).expect(404);
   });
 });
+
+describe('changing the window', () => {
+  it('moves one end alone, falls back to the species window when both are cleared, and refuses a backwards window', async () => {
+    pin('2025-06-10T12:00:00Z');
+    const sac = await createSac(t.app, owner, projectId, { layDate: '2025-05-20', pullFromDay: 21, pullToDay: 45 });
+    const moved = await http().patch(`/api/sacs/${sac.id}`).set('Authorization', owner.bearer).send({ pullToDay: 30 }).expect(200);
+    expect(moved.body.pullWindow).toMatchObject({ fromDay: 21, toDay: 30, origin: 'sac', closesOn: luxonPlus('2025-05-20', 30) });
+    await http().patch(`/api/sacs/${sac.id}`).set('Authorization', owner.bearer).send({ pullFromDay: 31 }).expect(400);
+    const cleared = await http().patch(`/api/sacs/${sac.id}`).set('Authorization', owner.bearer).send({ pullFromDay: null, pullToDay: null }).expect(200);
+    expect(cleared.body.pullWindow).toMatchObject({ fromDay: 30, toDay: 45, origin: 'species' });
+  });
+});

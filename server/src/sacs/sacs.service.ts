@@ -66,12 +66,12 @@ export class SacsService {
       const wasPulled = !!sac.pulledAt;
       const wasOutcome = sac.outcome;
       const pulledAt = dto.pulledAt === undefined ? sac.pulledAt ?? null : dto.pulledAt === null ? null : new Date(dto.pulledAt);
-      const windowGiven = dto.pullFromDay !== undefined || dto.pullToDay !== undefined;
+      // Each end of the window falls back to the stored one, so one end can be moved alone.
       const next = {
         layDate: dto.layDate ?? sac.layDate,
         pulledAt,
-        pullFromDay: windowGiven ? dto.pullFromDay ?? null : sac.pullFromDay ?? null,
-        pullToDay: windowGiven ? dto.pullToDay ?? null : sac.pullToDay ?? null,
+        pullFromDay: dto.pullFromDay !== undefined ? dto.pullFromDay : sac.pullFromDay ?? null,
+        pullToDay: dto.pullToDay !== undefined ? dto.pullToDay : sac.pullToDay ?? null,
       };
       assertSacDates(next, viewer.timeZone, now);
       const outcome = dto.outcome ?? sac.outcome;
