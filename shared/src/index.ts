@@ -31,3 +31,4 @@ export * from './accounts/account-api.types.js';
 export * from './dashboard/dashboard.types.js';
 export * from './dashboard/calendar.types.js';
 export * from './dashboard/notifications.types.js';
+export * from './vocabulary/labels.js';

@@ -2,6 +2,7 @@ import {
   ANIMAL_SEXES,
   ANIMAL_SORTS,
   ANIMAL_STATUSES,
+  MALE_CLOCK_LABELS,
   type AnimalListQuery,
   type AnimalSex,
   type AnimalSort,
@@ -24,10 +25,10 @@ export const EXUVIA_LABELS: Record<ExuviaSex, string> = { female: 'Female (sperm
 
 /** Our own words for the male clock; the tone class keeps text contrast in both schemes. */
 export const CLOCK_STATES: Record<MaleClockState, { label: string; hint: string; tone: 'tone-ok' | 'tone-due' | 'tone-failed'; color: string }> = {
-  fresh: { label: 'Just matured', hint: 'Give him time to build his first sperm web before pairing.', tone: 'tone-ok', color: 'moss' },
-  prime: { label: 'Ready to pair', hint: 'His best time for pairings.', tone: 'tone-ok', color: 'moss' },
-  late: { label: 'Time running short', hint: 'He is into the range where males of his group usually die; pair him soon.', tone: 'tone-due', color: 'amber' },
-  'past-typical': { label: 'Beyond the usual span', hint: 'He has outlived the typical range for his group; any pairing now is a bonus.', tone: 'tone-failed', color: 'clay' },
+  fresh: { ...MALE_CLOCK_LABELS.fresh, tone: 'tone-ok', color: 'moss' },
+  prime: { ...MALE_CLOCK_LABELS.prime, tone: 'tone-ok', color: 'moss' },
+  late: { ...MALE_CLOCK_LABELS.late, tone: 'tone-due', color: 'amber' },
+  'past-typical': { ...MALE_CLOCK_LABELS['past-typical'], tone: 'tone-failed', color: 'clay' },
 };
 
 export const READINESS_STATES: Record<FemaleReadinessState, { label: string; tone: 'tone-ok' | 'tone-due' | 'tone-failed' }> = {

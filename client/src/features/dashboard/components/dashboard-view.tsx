@@ -1,7 +1,7 @@
 import { Anchor, Badge, Card, Group, SimpleGrid, Stack, Table, Text, Title } from '@mantine/core';
 import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
-import type { DashboardResponse, DashboardSac, MaleClockState, ProjectStage, RollStatus } from '@broodsilk/shared';
+import { MALE_CLOCK_LABELS, PROJECT_STAGE_LABELS, type DashboardResponse, type DashboardSac, type MaleClockState, type RollStatus } from '@broodsilk/shared';
 import { paths } from '@/config/paths';
 import { formatDate, formatInstant } from '@/lib/dates';
 
@@ -12,24 +12,7 @@ const ROLL: Record<RollStatus, { label: string; tone: string; colour: string }> 
   upcoming: { label: 'Later', tone: '', colour: 'gray' },
 };
 
-const STAGE: Record<ProjectStage, string> = {
-  planned: 'Planned',
-  paired: 'Paired',
-  'waiting-for-sac': 'Waiting for sac',
-  'sac-laid': 'Sac laid',
-  'in-incubator': 'In incubator',
-  brood: 'Brood',
-  'shares-settled': 'Shares settled',
-  closed: 'Closed',
-  'ended-early': 'Ended early',
-};
-
-const CLOCK: Record<MaleClockState, { label: string; tone: string }> = {
-  fresh: { label: 'Fresh', tone: '' },
-  prime: { label: 'Prime', tone: 'tone-ok' },
-  late: { label: 'Late', tone: 'tone-due' },
-  'past-typical': { label: 'Past typical', tone: 'tone-failed' },
-};
+const CLOCK_TONE: Record<MaleClockState, string> = { fresh: 'tone-ok', prime: 'tone-ok', late: 'tone-due', 'past-typical': 'tone-failed' };
 
 function Panel({ title, children, testId, accent }: { title: string; children: ReactNode; testId: string; accent?: 'amber' | 'clay' }) {
   return (
@@ -180,8 +163,8 @@ export function DashboardView({ data, timeZone }: { data: DashboardResponse; tim
                       </Text>
                     </Table.Td>
                     <Table.Td style={{ width: '1%', whiteSpace: 'nowrap' }}>
-                      <Badge variant="light" tt="none" color="moss" style={{ overflow: 'visible' }}>
-                        {STAGE[p.stage.stage]}
+                      <Badge variant="light" tt="none" color={p.stage.stage === 'ended-early' ? 'clay' : 'moss'} styles={{ label: { overflow: 'visible' } }}>
+                        {PROJECT_STAGE_LABELS[p.stage.stage]}
                       </Badge>
                     </Table.Td>
                   </Table.Tr>
@@ -199,7 +182,7 @@ export function DashboardView({ data, timeZone }: { data: DashboardResponse; tim
             <Table verticalSpacing={4} fz="sm">
               <Table.Tbody>
                 {data.matureMales.slice(0, 8).map((m) => {
-                  const c = CLOCK[m.clock.state];
+                  const c = { ...MALE_CLOCK_LABELS[m.clock.state], tone: CLOCK_TONE[m.clock.state] };
                   return (
                     <Table.Tr key={m.animal.id}>
                       <Table.Td>

@@ -1,8 +1,7 @@
 import { Card, SimpleGrid, Stack, Text } from '@mantine/core';
-import type { ProjectAnimal } from '@broodsilk/shared';
+import { MALE_CLOCK_LABELS, type ProjectAnimal } from '@broodsilk/shared';
 import { formatDate } from '@/lib/dates';
 
-const CLOCK_TEXT = { fresh: 'fresh (wait for a sperm web)', prime: 'in his prime', late: 'late in his life', 'past-typical': 'past his usual lifespan' } as const;
 
 function AnimalLine({ role, animal }: { role: string; animal: ProjectAnimal }) {
   const clock = animal.maleClock;
@@ -25,7 +24,7 @@ function AnimalLine({ role, animal }: { role: string; animal: ProjectAnimal }) {
         </Text>
         {clock && (
           <Text size="sm" className={clock.state === 'past-typical' ? 'tone-failed' : clock.state === 'late' ? 'tone-due' : undefined}>
-            Male clock: day {clock.daysSinceMaturing} since maturing, {CLOCK_TEXT[clock.state]}
+            Male clock: day {clock.daysSinceMaturing} since maturing, {MALE_CLOCK_LABELS[clock.state].label.toLowerCase()}
           </Text>
         )}
         {animal.lastMoltOn && <Text size="sm">Last molt {formatDate(animal.lastMoltOn)}</Text>}

@@ -1,3 +1,4 @@
+import { ENDED_EARLY_LABELS, PROJECT_STAGE_LABELS } from '@broodsilk/shared';
 import type {
   EndedEarlyReason,
   FailureClause,
@@ -8,26 +9,9 @@ import type {
   WarningSeverity,
 } from '@broodsilk/shared';
 
-/** The progress line in our own words (PRODUCT.md). */
-export const STAGE_LABELS: Record<ProjectStage, string> = {
-  planned: 'Planned',
-  paired: 'Paired',
-  'waiting-for-sac': 'Waiting for sac',
-  'sac-laid': 'Sac laid',
-  'in-incubator': 'In incubator',
-  brood: 'Brood',
-  'shares-settled': 'Shares settled',
-  closed: 'Closed',
-  'ended-early': 'Ended early',
-};
-
-export const ENDED_EARLY_LABELS: Record<EndedEarlyReason, string> = {
-  'no-sac': 'no sac',
-  'female-molted': 'the female molted',
-  'sac-failed': 'the sac failed',
-  'sac-eaten': 'the sac was eaten',
-  'male-died': 'the male died before pairing',
-};
+/** The progress line in our own words (PRODUCT.md); the words live in shared/ so every screen agrees. */
+export const STAGE_LABELS = PROJECT_STAGE_LABELS;
+export { ENDED_EARLY_LABELS };
 
 export const PAIRING_OUTCOME_LABELS: Record<PairingOutcome, string> = {
   connected: 'Connected',
