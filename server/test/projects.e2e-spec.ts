@@ -181,6 +181,9 @@ describe('parties', () => {
     await http().post(`/api/projects/${p.id}/members`).set('Authorization', caretaker.bearer).send({ name: 'Friend', role: 'partner' }).expect(403);
     const list = await http().get(`/api/projects/${p.id}/members`).set('Authorization', caretaker.bearer).expect(200);
     expect(list.body.map((m: { role: string }) => m.role)).toEqual(['owner', 'caretaker', 'partner']);
+    // The project list names the partners (not the caretaker) so a keeper sees who shares each brood.
+    const projects = await http().get('/api/projects').set('Authorization', mira.bearer).expect(200);
+    expect(projects.body.find((x: { id: string }) => x.id === p.id).partners).toEqual(['Jonas Feld']);
     const ownerMember = list.body[0].id;
     await http().delete(`/api/projects/${p.id}/members/${ownerMember}`).set('Authorization', mira.bearer).expect(400);
     await http().delete(`/api/projects/${p.id}/members/${added.body.id}`).set('Authorization', mira.bearer).expect(204);

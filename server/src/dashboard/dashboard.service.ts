@@ -6,6 +6,7 @@ import { ProjectMember } from '../projects/project-member.entity';
 import { Project } from '../projects/project.entity';
 import { ProjectStageService } from '../projects/project-stage.service';
 import { toProjectSummary } from '../projects/projects.mapper';
+import { partnerNamesOf } from '../projects/partner-names';
 import { AnimalsService } from '../animals/animals.service';
 import { ActivityService } from '../activity/activity.service';
 import { Sac } from '../sacs/sac.entity';
@@ -33,7 +34,8 @@ export class DashboardService {
     const roleOf = new Map(memberships.map((m) => [m.project.id, m.role]));
     const projects = await this.em.find(Project, { id: { $in: [...roleOf.keys()] } }, { populate: ['owner', 'female.species', 'male.species'], orderBy: { createdAt: 'desc', id: 'asc' } });
     const standings = await this.stages.standings(projects);
-    const summaries: ProjectSummary[] = projects.map((p) => toProjectSummary(p, standings.get(p.id)!.stage, roleOf.get(p.id)!));
+    const partners = await partnerNamesOf(this.em, projects.map((p) => p.id));
+    const summaries: ProjectSummary[] = projects.map((p) => toProjectSummary(p, standings.get(p.id)!.stage, roleOf.get(p.id)!, partners.get(p.id) ?? []));
     const openIds = new Set(summaries.filter((s) => s.stage.stage !== 'closed' && s.stage.stage !== 'ended-early').map((s) => s.id));
 
     const sacs = await this.em.find(Sac, { project: { $in: [...openIds] }, outcome: 'in-progress' }, { populate: SAC_POPULATE });

@@ -3,17 +3,19 @@ import type { Animal } from '../animals/animal.entity';
 import { toAnimalResponse } from '../animals/animals.mapper';
 import type { Project } from './project.entity';
 import type { ProjectMember } from './project-member.entity';
+import { memberName } from './partner-names';
 
 const animalRef = (a: Animal) => ({ id: a.id, label: a.label, scientificName: a.species.scientificName });
 
 /** Needs `owner`, `female.species`, `male.species` loaded. */
-export function toProjectSummary(p: Project, stage: DerivedProjectStage, myRole: ProjectRole): ProjectSummary {
+export function toProjectSummary(p: Project, stage: DerivedProjectStage, myRole: ProjectRole, partners: string[]): ProjectSummary {
   return {
     id: p.id,
     title: p.title,
     stage,
     myRole,
     owner: { id: p.owner.id, name: p.owner.displayName },
+    partners,
     female: animalRef(p.female),
     male: animalRef(p.male),
     endedOn: p.endedOn ?? null,
@@ -47,7 +49,7 @@ export function toProjectResponse(
   warnings: PairingWarning[], members: ProjectMember[],
 ): ProjectResponse {
   return {
-    ...toProjectSummary(p, stage, myRole),
+    ...toProjectSummary(p, stage, myRole, members.filter((m) => m.role === 'partner').map(memberName)),
     notes: p.notes ?? null,
     endedEarlyNote: p.endedEarlyNote ?? null,
     femaleAnimal: toProjectAnimal(p.female, today, viewerId),

@@ -12,6 +12,7 @@ import type { ProjectAccess } from './project-access.service';
 import { ProjectStageService } from './project-stage.service';
 import { TermsService } from './terms.service';
 import { toProjectResponse, toProjectSummary } from './projects.mapper';
+import { partnerNamesOf } from './partner-names';
 import type { CreateProjectDto } from './dto/create-project.dto';
 import type { UpdateProjectDto } from './dto/update-project.dto';
 import type { EndProjectDto } from './dto/end-project.dto';
@@ -38,7 +39,8 @@ export class ProjectsService {
     const projects = await this.em.find(Project, { id: { $in: memberships.map((m) => m.project.id) } }, { populate: PROJECT_POPULATE, orderBy: { createdAt: 'desc', id: 'asc' } });
     const standings = await this.stages.standings(projects);
     const roleOf = new Map(memberships.map((m) => [m.project.id, m.role]));
-    return projects.map((p) => toProjectSummary(p, standings.get(p.id)!.stage, roleOf.get(p.id)!));
+    const partners = await partnerNamesOf(this.em, projects.map((p) => p.id));
+    return projects.map((p) => toProjectSummary(p, standings.get(p.id)!.stage, roleOf.get(p.id)!, partners.get(p.id) ?? []));
   }
 
   async get(viewer: AuthUser, access: ProjectAccess): Promise<ProjectResponse> {

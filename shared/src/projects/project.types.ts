@@ -45,6 +45,8 @@ export interface ProjectSummary {
   /** The viewer's role in this project. */
   myRole: ProjectRole;
   owner: { id: string; name: string };
+  /** Names of the parties with the partner role, oldest first. */
+  partners: string[];
   female: { id: string; label: string; scientificName: string };
   male: { id: string; label: string; scientificName: string };
   endedOn: CalendarDate | null;

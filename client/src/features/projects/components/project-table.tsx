@@ -22,7 +22,7 @@ export function ProjectTable({ projects, projectHref, nextDue }: ProjectTablePro
             <Table.Th>Project</Table.Th>
             <Table.Th visibleFrom="sm">Female × male</Table.Th>
             <Table.Th>Stage</Table.Th>
-            <Table.Th visibleFrom="sm">Keeper</Table.Th>
+            <Table.Th visibleFrom="sm">Keeper · partners</Table.Th>
             <Table.Th visibleFrom="md">Next</Table.Th>
           </Table.Tr>
         </Table.Thead>
@@ -60,6 +60,9 @@ export function ProjectTable({ projects, projectHref, nextDue }: ProjectTablePro
               </Table.Td>
               <Table.Td visibleFrom="sm">
                 <Text size="sm">{p.owner.name}</Text>
+                <Text size="xs" c="dimmed">
+                  {p.partners.length ? `with ${p.partners.join(', ')}` : 'no partner'}
+                </Text>
               </Table.Td>
               <Table.Td visibleFrom="md">
                 <Text size="sm">{nextDue?.(p) ?? '—'}</Text>
