@@ -6,6 +6,7 @@ import { formatDate } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useConfirmEntry } from '../api/entries';
 import { formatMoney } from '../utils/money';
+import { FormActions } from '@/components/ui/form-actions';
 
 interface Values {
   arrivedAlive: number | string;
@@ -43,16 +44,7 @@ function ConfirmHandOver({ projectId, entry }: { projectId: string; entry: Ledge
           <NumberInput label="Arrived alive" min={0} allowDecimal={false} key={form.key('arrivedAlive')} {...form.getInputProps('arrivedAlive')} />
           <NumberInput label="Arrived dead" min={0} allowDecimal={false} key={form.key('arrivedDead')} {...form.getInputProps('arrivedDead')} />
         </Group>
-        {message && (
-          <Alert color="clay" role="alert">
-            {message}
-          </Alert>
-        )}
-        <Group>
-          <Button type="submit" loading={confirm.isPending}>
-            Confirm receipt
-          </Button>
-        </Group>
+        <FormActions message={message} loading={confirm.isPending} submitLabel="Confirm receipt" />
       </Stack>
     </form>
   );

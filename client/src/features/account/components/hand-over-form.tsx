@@ -1,4 +1,4 @@
-import { Alert, Button, Group, List, NativeSelect, NumberInput, SegmentedControl, Stack, Text, TextInput } from '@mantine/core';
+import { Alert, Group, List, NativeSelect, NumberInput, SegmentedControl, Stack, Text, TextInput } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import type { HandOverMethod, SacSharesView } from '@broodsilk/shared';
@@ -6,6 +6,7 @@ import { useCreateEntry, useHandOverForm } from '../api/entries';
 import { applyEntryErrors } from '../utils/entry-errors';
 import { METHOD_LABELS, young } from '../utils/labels';
 import { formatDate } from '@/lib/dates';
+import { FormActions } from '@/components/ui/form-actions';
 
 interface Values {
   memberId: string;
@@ -114,16 +115,7 @@ export function HandOverForm({ projectId, today, sacs, onDone }: { projectId: st
           </>
         )}
         <TextInput label="Note" key={form.key('note')} {...form.getInputProps('note')} />
-        {message && (
-          <Alert color="clay" role="alert">
-            {message}
-          </Alert>
-        )}
-        <Group>
-          <Button type="submit" loading={create.isPending}>
-            Record hand-over
-          </Button>
-        </Group>
+        <FormActions message={message} loading={create.isPending} submitLabel="Record hand-over" />
       </Stack>
     </form>
   );

@@ -1,9 +1,10 @@
-import { Alert, Button, Group, NumberInput, Stack, Text } from '@mantine/core';
+import { NumberInput, Stack, Text } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateCheckout } from '../api/settlements';
 import { formatMoney, minorDigits, toMajor, toMinor } from '../utils/money';
+import { FormActions } from '@/components/ui/form-actions';
 
 interface Props {
   projectId: string;
@@ -47,16 +48,7 @@ export function PayForm({ projectId, toMemberId, toName, owedMinor, currency, go
           You owe {toName} {formatMoney(owedMinor, currency)}.
         </Text>
         <NumberInput label={`Amount (${currency})`} min={0} decimalScale={digits} allowDecimal={digits > 0} key={form.key('amount')} {...form.getInputProps('amount')} />
-        {message && (
-          <Alert color="clay" role="alert">
-            {message}
-          </Alert>
-        )}
-        <Group>
-          <Button type="submit" loading={checkout.isPending}>
-            Pay what you owe
-          </Button>
-        </Group>
+        <FormActions message={message} loading={checkout.isPending} submitLabel="Pay what you owe" />
         <Text size="xs" c="dimmed">
           You will pay on the payment provider’s page and come back here afterwards.
         </Text>

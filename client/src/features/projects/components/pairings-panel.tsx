@@ -8,6 +8,7 @@ import { dayjs, formatInstant } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
 import { usePairings, useRecordPairing } from '../api/pairings';
 import { PAIRING_OUTCOME_LABELS } from '../utils/labels';
+import { FormActions } from '@/components/ui/form-actions';
 
 const outcomeOptions = PAIRING_OUTCOMES.map((o) => ({ value: o, label: PAIRING_OUTCOME_LABELS[o] }));
 
@@ -98,16 +99,7 @@ export function PairingsPanel({ projectId, timeZone, canRecord }: { projectId: s
                 <NumberInput label="How long (minutes)" min={0} allowDecimal={false} key={form.key('durationMinutes')} {...form.getInputProps('durationMinutes')} />
                 <Select label="Outcome" data={outcomeOptions} allowDeselect={false} key={form.key('outcome')} {...form.getInputProps('outcome')} />
                 <Textarea label="Notes" autosize minRows={2} key={form.key('notes')} {...form.getInputProps('notes')} />
-                {message && (
-                  <Alert color="clay" role="alert">
-                    {message}
-                  </Alert>
-                )}
-                <Group>
-                  <Button type="submit" loading={record.isPending}>
-                    Save pairing
-                  </Button>
-                </Group>
+                <FormActions message={message} loading={record.isPending} submitLabel="Save pairing" />
               </Stack>
             </form>
           </Collapse>

@@ -1,4 +1,4 @@
-import { Alert, Badge, Button, Checkbox, Collapse, Group, Select, Stack, Table, Text, TextInput } from '@mantine/core';
+import { Badge, Button, Checkbox, Collapse, Group, Select, Stack, Table, Text, TextInput } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useDisclosure } from '@mantine/hooks';
 import { useState } from 'react';
@@ -8,6 +8,7 @@ import { applyServerErrors } from '@/lib/form-errors';
 import { useAddProjectMember } from '../api/projects';
 import { useSendInvitation } from '../api/invitations';
 import { ROLE_LABELS } from '../utils/labels';
+import { FormActions } from '@/components/ui/form-actions';
 
 interface PartiesPanelProps {
   projectId: string;
@@ -144,16 +145,7 @@ function AddPartyForm({ projectId }: { projectId: string }) {
             <TextInput label="E-mail" type="email" key={form.key('email')} {...form.getInputProps('email')} />
             <Select label="Role" data={roleOptions} allowDeselect={false} key={form.key('role')} {...form.getInputProps('role')} />
             <Checkbox label="E-mail an invitation to join this project in Broodsilk" key={form.key('invite')} {...form.getInputProps('invite', { type: 'checkbox' })} />
-            {message && (
-              <Alert color="clay" role="alert">
-                {message}
-              </Alert>
-            )}
-            <Group>
-              <Button type="submit" loading={add.isPending || send.isPending}>
-                Add party
-              </Button>
-            </Group>
+            <FormActions message={message} loading={add.isPending || send.isPending} submitLabel="Add party" />
           </Stack>
         </form>
       </Collapse>

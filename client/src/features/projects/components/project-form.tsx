@@ -5,6 +5,7 @@ import { DEFAULT_HAND_OVER_STAGE, type AnimalSummary, type BroodStage, type Fail
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateProject, type NewProjectResult } from '../hooks/use-create-project';
 import { CURRENCIES, failureOptions, handOverOptions, shippingOptions } from './propose-terms-form';
+import { FormActions } from '@/components/ui/form-actions';
 
 interface PartyValues {
   name: string;
@@ -201,16 +202,7 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
             </SimpleGrid>
           </Stack>
         )}
-        {message && (
-          <Alert color="clay" role="alert">
-            {message}
-          </Alert>
-        )}
-        <Group>
-          <Button type="submit" loading={create.isPending}>
-            Create project
-          </Button>
-        </Group>
+        <FormActions message={message} loading={create.isPending} submitLabel="Create project" />
       </Stack>
     </form>
   );

@@ -1,4 +1,4 @@
-import { Alert, Button, Collapse, Group, NumberInput, Select, SimpleGrid, Stack, Table, Text, TextInput } from '@mantine/core';
+import { Button, Collapse, Group, NumberInput, Select, SimpleGrid, Stack, Table, Text, TextInput } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useDisclosure } from '@mantine/hooks';
 import { useState } from 'react';
@@ -17,6 +17,7 @@ import {
 import { applyServerErrors } from '@/lib/form-errors';
 import { useProposeTerms } from '../api/terms';
 import { FAILURE_CLAUSE_LABELS, SHIPPING_LABELS } from '../utils/labels';
+import { FormActions } from '@/components/ui/form-actions';
 
 export const CURRENCIES = ['EUR', 'USD', 'GBP', 'PLN', 'CHF', 'CZK', 'SEK', 'CAD', 'AUD'];
 export const failureOptions = FAILURE_CLAUSES.map((c) => ({ value: c, label: FAILURE_CLAUSE_LABELS[c] }));
@@ -126,16 +127,7 @@ export function ProposeTermsForm({ projectId, members, base }: { projectId: stri
               <Select label="Shipping" data={shippingOptions} allowDeselect={false} key={form.key('shippingPaidBy')} {...form.getInputProps('shippingPaidBy')} />
               <TextInput label="Note to partners" key={form.key('note')} {...form.getInputProps('note')} />
             </SimpleGrid>
-            {message && (
-              <Alert color="clay" role="alert">
-                {message}
-              </Alert>
-            )}
-            <Group>
-              <Button type="submit" loading={propose.isPending}>
-                Propose this version
-              </Button>
-            </Group>
+            <FormActions message={message} loading={propose.isPending} submitLabel="Propose this version" />
           </Stack>
         </form>
       </Collapse>

@@ -7,6 +7,7 @@ import { formatInstant } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useBroodCounts, useRecordBroodCount } from '../api/brood';
 import { broodLabel } from '../utils/sac-view';
+import { FormActions } from '@/components/ui/form-actions';
 
 const LOSS_LABELS: Record<BroodLossReason, string> = {
   died: 'Died',
@@ -119,16 +120,7 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
                   <Select label="Lost because" data={lossOptions} key={form.key('lossReason')} {...form.getInputProps('lossReason')} />
                 </SimpleGrid>
                 <TextInput label="Note" key={form.key('note')} {...form.getInputProps('note')} />
-                {message && (
-                  <Alert color="clay" role="alert">
-                    {message}
-                  </Alert>
-                )}
-                <Group>
-                  <Button type="submit" loading={record.isPending}>
-                    Save count
-                  </Button>
-                </Group>
+                <FormActions message={message} loading={record.isPending} submitLabel="Save count" />
               </Stack>
             </form>
           </Collapse>

@@ -1,4 +1,4 @@
-import { Alert, Button, Group, Image, NumberInput, SimpleGrid, Stack, Table, Text, Textarea } from '@mantine/core';
+import { Alert, Image, NumberInput, SimpleGrid, Stack, Table, Text, Textarea } from '@mantine/core';
 import { Dropzone, IMAGE_MIME_TYPE } from '@mantine/dropzone';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
@@ -7,6 +7,7 @@ import { formatInstant } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
 import { isApiError } from '@/lib/api-error';
 import { useOpening, useRecordOpening, useUploadOpeningPhoto } from '../api/opening';
+import { FormActions } from '@/components/ui/form-actions';
 
 const COUNT_FIELDS = [
   ['healthyEggs', 'Healthy eggs'],
@@ -129,16 +130,7 @@ export function OpeningPanel({ sacId, timeZone, canEdit }: { sacId: string; time
           ))}
         </SimpleGrid>
         <Textarea label="Notes" autosize minRows={2} key={form.key('notes')} {...form.getInputProps('notes')} />
-        {message && (
-          <Alert color="clay" role="alert">
-            {message}
-          </Alert>
-        )}
-        <Group>
-          <Button type="submit" loading={record.isPending}>
-            Save opening
-          </Button>
-        </Group>
+        <FormActions message={message} loading={record.isPending} submitLabel="Save opening" />
       </Stack>
     </form>
   );

@@ -1,4 +1,4 @@
-import { Alert, Button, Group, SegmentedControl, Stack, Text, Textarea } from '@mantine/core';
+import { Group, SegmentedControl, Stack, Text, Textarea } from '@mantine/core';
 import { DateInput, TimeInput } from '@mantine/dates';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
@@ -6,6 +6,7 @@ import { todayIn } from '@broodsilk/shared';
 import { dayjs } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateSac } from '../api/sacs';
+import { FormActions } from '@/components/ui/form-actions';
 
 interface Values {
   layDate: string | null;
@@ -70,16 +71,7 @@ export function RecordSacForm({ projectId, timeZone, onDone }: { projectId: stri
           </Group>
         )}
         <Textarea label="Notes" autosize minRows={2} key={form.key('notes')} {...form.getInputProps('notes')} />
-        {message && (
-          <Alert color="clay" role="alert">
-            {message}
-          </Alert>
-        )}
-        <Group>
-          <Button type="submit" loading={create.isPending}>
-            Save sac
-          </Button>
-        </Group>
+        <FormActions message={message} loading={create.isPending} submitLabel="Save sac" />
       </Stack>
     </form>
   );
