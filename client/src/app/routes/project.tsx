@@ -1,6 +1,5 @@
-import { Alert, Anchor, Badge, Card, Grid, Group, Stack, Text, Title } from '@mantine/core';
+import { Alert, Anchor, Badge, Grid, Group, Stack, Text } from '@mantine/core';
 import type { QueryClient } from '@tanstack/react-query';
-import type { ReactNode } from 'react';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '@/components/ui/page-header';
 import { PageLoader } from '@/components/ui/page-loader';
@@ -18,6 +17,7 @@ import { WarningsList } from '@/features/projects/components/warnings-list';
 import { ROLE_LABELS } from '@/features/projects/utils/labels';
 import { ProjectSacs } from '@/features/sacs/components/project-sacs';
 import { CalendarFeedCard } from '@/features/dashboard/components/calendar-feed-card';
+import { SectionCard } from '@/components/ui/section-card';
 
 /** A missing or foreign project throws its 404 into the route's error boundary. */
 export const clientLoader = (qc: QueryClient) => async ({ params }: LoaderFunctionArgs) => {
@@ -25,16 +25,6 @@ export const clientLoader = (qc: QueryClient) => async ({ params }: LoaderFuncti
   return null;
 };
 
-function Section({ title, children, testId }: { title: string; children: ReactNode; testId?: string }) {
-  return (
-    <Card withBorder data-testid={testId}>
-      <Title order={3} size="h4" mb="sm">
-        {title}
-      </Title>
-      {children}
-    </Card>
-  );
-}
 
 export function Component() {
   const { projectId } = useParams() as { projectId: string };
@@ -74,35 +64,35 @@ export function Component() {
       <Grid>
         <Grid.Col span={{ base: 12, md: 7 }}>
           <Stack>
-            <Section title="Sacs" testId="section-sacs">
+            <SectionCard title="Sacs" testId="section-sacs">
               <ProjectSacs projectId={p.id} timeZone={me.timeZone} canRecord={isOwner && live} sacHref={paths.sac.href} incubatorHref={paths.incubatorSac.href} />
-            </Section>
-            <Section title="Pairings" testId="section-pairings">
+            </SectionCard>
+            <SectionCard title="Pairings" testId="section-pairings">
               <PairingsPanel projectId={p.id} timeZone={me.timeZone} canRecord={isOwner && live} />
-            </Section>
-            <Section title="Terms" testId="section-terms">
+            </SectionCard>
+            <SectionCard title="Terms" testId="section-terms">
               <TermsPanel projectId={p.id} me={me} myRole={p.myRole} members={p.members} />
-            </Section>
+            </SectionCard>
           </Stack>
         </Grid.Col>
         <Grid.Col span={{ base: 12, md: 5 }}>
           <Stack>
-            <Section title="The pair">
+            <SectionCard title="The pair">
               <ProjectAnimals female={p.femaleAnimal} male={p.maleAnimal} />
-            </Section>
-            <Section title="Parties" testId="section-parties">
+            </SectionCard>
+            <SectionCard title="Parties" testId="section-parties">
               <PartiesPanel projectId={p.id} members={p.members} myRole={p.myRole} timeZone={me.timeZone} />
-            </Section>
-            <Section title="Timeline" testId="section-timeline">
+            </SectionCard>
+            <SectionCard title="Timeline" testId="section-timeline">
               {activity.isError ? <Alert color="clay">{activity.error.message}</Alert> : activity.data ? <ActivityTimeline events={activity.data} timeZone={me.timeZone} /> : <Text c="dimmed">Loading…</Text>}
-            </Section>
+            </SectionCard>
             <CalendarFeedCard />
             {p.notes && (
-              <Section title="Notes">
+              <SectionCard title="Notes">
                 <Text size="sm" style={{ whiteSpace: 'pre-wrap' }}>
                   {p.notes}
                 </Text>
-              </Section>
+              </SectionCard>
             )}
             {isOwner && live && <EndProjectForm projectId={p.id} />}
             {!live && (

@@ -1,6 +1,5 @@
-import { Alert, Anchor, Button, Card, Group, Stack, Title } from '@mantine/core';
+import { Alert, Anchor, Button, Group, Stack } from '@mantine/core';
 import { useQuery, type QueryClient } from '@tanstack/react-query';
-import type { ReactNode } from 'react';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '@/components/ui/page-header';
 import { PageLoader } from '@/components/ui/page-loader';
@@ -13,25 +12,13 @@ import { BroodCounts } from '@/features/sacs/components/brood-counts';
 import { CareLogList } from '@/features/sacs/components/care-log-list';
 import { OpeningPanel } from '@/features/sacs/components/opening-panel';
 import { SacOverview } from '@/features/sacs/components/sac-overview';
+import { SectionCard } from '@/components/ui/section-card';
 
 export const clientLoader = (qc: QueryClient) => async ({ params }: LoaderFunctionArgs) => {
   await qc.ensureQueryData(sacQueries.detail(params.sacId!));
   return null;
 };
 
-function Section({ title, children, action }: { title: string; children: ReactNode; action?: ReactNode }) {
-  return (
-    <Card withBorder>
-      <Group justify="space-between" mb="sm">
-        <Title order={3} size="h4">
-          {title}
-        </Title>
-        {action}
-      </Group>
-      {children}
-    </Card>
-  );
-}
 
 export function Component() {
   const { sacId } = useParams() as { sacId: string };
@@ -63,18 +50,18 @@ export function Component() {
         }
       />
       <SacOverview sac={s} timeZone={me.timeZone} canEdit={isOwner} />
-      <Section title="Care log">
+      <SectionCard title="Care log">
         <CareLogList sacId={s.id} timeZone={me.timeZone} temperatureUnit={me.temperatureUnit} canStrike={role === 'owner' || role === 'caretaker'} />
-      </Section>
+      </SectionCard>
       {s.pulled && (
-        <Section title="Opening">
+        <SectionCard title="Opening">
           <OpeningPanel sacId={s.id} timeZone={me.timeZone} canEdit={isOwner} />
-        </Section>
+        </SectionCard>
       )}
       {s.opened && (
-        <Section title="Brood">
+        <SectionCard title="Brood">
           <BroodCounts sacId={s.id} timeZone={me.timeZone} canRecord={isOwner || role === 'caretaker'} stage={s.broodStage} />
-        </Section>
+        </SectionCard>
       )}
     </Stack>
   );

@@ -1,5 +1,5 @@
-import { Alert, Button, Card, CloseButton, Group, Stack, Text, Title } from '@mantine/core';
-import { useState, type ReactNode } from 'react';
+import { Alert, Button, Card, CloseButton, Group, Stack, Text } from '@mantine/core';
+import { useState } from 'react';
 import { todayIn, type Me, type ProjectRole } from '@broodsilk/shared';
 import { useBalances } from '../api/balances';
 import { useEntries } from '../api/entries';
@@ -15,6 +15,7 @@ import { PayoutSetup } from './payout-setup';
 import { SharesPanel } from './shares-panel';
 import { StatementActions } from './statement-actions';
 import { WithdrawalForm } from './withdrawal-form';
+import { SectionCard } from '@/components/ui/section-card';
 
 type OwnerAction = 'hand-over' | 'sale' | 'cash-out' | 'money' | 'correction';
 const OWNER_ACTIONS: { value: OwnerAction; label: string }[] = [
@@ -25,16 +26,6 @@ const OWNER_ACTIONS: { value: OwnerAction; label: string }[] = [
   { value: 'correction', label: 'Correct an entry' },
 ];
 
-function Section({ title, children, testId }: { title: string; children: ReactNode; testId?: string }) {
-  return (
-    <Card withBorder data-testid={testId}>
-      <Title order={3} size="h4" mb="sm">
-        {title}
-      </Title>
-      {children}
-    </Card>
-  );
-}
 
 export interface AccountPanelProps {
   projectId: string;
@@ -70,13 +61,13 @@ export function AccountPanel({ projectId, me, myRole, myMemberId }: AccountPanel
   return (
     <Stack data-testid="account-panel">
       {awaiting.length > 0 && (
-        <Section title="Waiting for you" testId="section-awaiting">
+        <SectionCard title="Waiting for you" testId="section-awaiting">
           <AwaitingMe projectId={projectId} entries={awaiting} />
-        </Section>
+        </SectionCard>
       )}
 
       {myDebts.length > 0 && (
-        <Section title="What you owe" testId="section-pay">
+        <SectionCard title="What you owe" testId="section-pay">
           <Stack>
             {myDebts.map((d) => (
               <Stack key={d.toPartyId} gap="xs">
@@ -110,15 +101,15 @@ export function AccountPanel({ projectId, me, myRole, myMemberId }: AccountPanel
               </Stack>
             ))}
           </Stack>
-        </Section>
+        </SectionCard>
       )}
 
-      <Section title="Balance" testId="section-balance">
+      <SectionCard title="Balance" testId="section-balance">
         <BalancesPanel projectId={projectId} />
-      </Section>
+      </SectionCard>
 
       {isOwner && (
-        <Section title="Record in the account" testId="section-actions">
+        <SectionCard title="Record in the account" testId="section-actions">
           <Stack>
             <Group gap="xs">
               {OWNER_ACTIONS.map((a) => (
@@ -153,25 +144,25 @@ export function AccountPanel({ projectId, me, myRole, myMemberId }: AccountPanel
               </Card>
             )}
           </Stack>
-        </Section>
+        </SectionCard>
       )}
 
-      <Section title="Shares" testId="section-shares">
+      <SectionCard title="Shares" testId="section-shares">
         <SharesPanel projectId={projectId} timeZone={me.timeZone} />
-      </Section>
+      </SectionCard>
 
-      <Section title="Entries" testId="section-entries">
+      <SectionCard title="Entries" testId="section-entries">
         <EntriesTable projectId={projectId} />
-      </Section>
+      </SectionCard>
 
-      <Section title="Statement" testId="section-statement">
+      <SectionCard title="Statement" testId="section-statement">
         <StatementActions projectId={projectId} parties={parties} fixedMemberId={isOwner ? undefined : (myMemberId ?? undefined)} />
-      </Section>
+      </SectionCard>
 
       {(isOwner || owedToMe) && (
-        <Section title="Receiving payments" testId="section-payouts">
+        <SectionCard title="Receiving payments" testId="section-payouts">
           <PayoutSetup />
-        </Section>
+        </SectionCard>
       )}
     </Stack>
   );

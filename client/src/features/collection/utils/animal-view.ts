@@ -14,6 +14,7 @@ import {
   type Maturity,
   type OwnerKind,
 } from '@broodsilk/shared';
+import { MALE_CLOCK_TONE, type ToneStyle } from '@/lib/tones';
 
 export const SEX_LABELS: Record<AnimalSex, string> = { female: 'Female', male: 'Male', unsexed: 'Unsexed' };
 export const SEX_SIGNS: Record<AnimalSex, string> = { female: '♀', male: '♂', unsexed: '?' };
@@ -24,11 +25,11 @@ export const OWNER_LABELS: Record<OwnerKind, string> = { self: 'Me', keeper: 'An
 export const EXUVIA_LABELS: Record<ExuviaSex, string> = { female: 'Female (spermathecae seen)', male: 'Male (no spermathecae)', 'not-sure': 'Could not tell' };
 
 /** Our own words for the male clock; the tone class keeps text contrast in both schemes. */
-export const CLOCK_STATES: Record<MaleClockState, { label: string; hint: string; tone: 'tone-ok' | 'tone-due' | 'tone-failed'; color: string }> = {
-  fresh: { ...MALE_CLOCK_LABELS.fresh, tone: 'tone-ok', color: 'moss' },
-  prime: { ...MALE_CLOCK_LABELS.prime, tone: 'tone-ok', color: 'moss' },
-  late: { ...MALE_CLOCK_LABELS.late, tone: 'tone-due', color: 'amber' },
-  'past-typical': { ...MALE_CLOCK_LABELS['past-typical'], tone: 'tone-failed', color: 'clay' },
+export const CLOCK_STATES: Record<MaleClockState, { label: string; hint: string } & ToneStyle> = {
+  fresh: { ...MALE_CLOCK_LABELS.fresh, ...MALE_CLOCK_TONE.fresh },
+  prime: { ...MALE_CLOCK_LABELS.prime, ...MALE_CLOCK_TONE.prime },
+  late: { ...MALE_CLOCK_LABELS.late, ...MALE_CLOCK_TONE.late },
+  'past-typical': { ...MALE_CLOCK_LABELS['past-typical'], ...MALE_CLOCK_TONE['past-typical'] },
 };
 
 export const READINESS_STATES: Record<FemaleReadinessState, { label: string; tone: 'tone-ok' | 'tone-due' | 'tone-failed' }> = {

@@ -1,29 +1,14 @@
-import { Anchor, Badge, Card, Group, SimpleGrid, Stack, Table, Text, Title } from '@mantine/core';
+import { Anchor, Badge, Group, SimpleGrid, Stack, Table, Text } from '@mantine/core';
 import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
-import { MALE_CLOCK_LABELS, PROJECT_STAGE_LABELS, type DashboardResponse, type DashboardSac, type MaleClockState, type RollStatus } from '@broodsilk/shared';
+import { MALE_CLOCK_LABELS, PROJECT_STAGE_LABELS, type DashboardResponse, type DashboardSac, type RollStatus } from '@broodsilk/shared';
 import { paths } from '@/config/paths';
 import { formatDate, formatInstant } from '@/lib/dates';
+import { MALE_CLOCK_TONE, ROLL_STATUS_TONE } from '@/lib/tones';
+import { SectionCard } from '@/components/ui/section-card';
 
-const ROLL: Record<RollStatus, { label: string; tone: string; colour: string }> = {
-  overdue: { label: 'Overdue', tone: 'tone-failed', colour: 'clay' },
-  due: { label: 'Due now', tone: 'tone-due', colour: 'amber' },
-  'due-soon': { label: 'Due within the hour', tone: 'tone-due', colour: 'amber' },
-  upcoming: { label: 'Later', tone: '', colour: 'gray' },
-};
+const ROLL_LABEL: Record<RollStatus, string> = { overdue: 'Overdue', due: 'Due now', 'due-soon': 'Due within the hour', upcoming: 'Later' };
 
-const CLOCK_TONE: Record<MaleClockState, string> = { fresh: 'tone-ok', prime: 'tone-ok', late: 'tone-due', 'past-typical': 'tone-failed' };
-
-function Panel({ title, children, testId, accent }: { title: string; children: ReactNode; testId: string; accent?: 'amber' | 'clay' }) {
-  return (
-    <Card withBorder data-testid={testId} style={accent ? { borderLeft: `6px solid var(--mantine-color-${accent}-5)` } : undefined}>
-      <Title order={3} size="h5" mb="xs">
-        {title}
-      </Title>
-      {children}
-    </Card>
-  );
-}
 
 function SacLine({ item, right }: { item: DashboardSac; right: ReactNode }) {
   return (
@@ -49,14 +34,14 @@ export function DashboardView({ data, timeZone }: { data: DashboardResponse; tim
   return (
     <Stack>
       <SimpleGrid cols={{ base: 1, md: 2 }}>
-        <Panel title="Rolls" testId="card-rolls" accent={overdue ? 'clay' : rolls.length ? 'amber' : undefined}>
+        <SectionCard compact title="Rolls" testId="card-rolls" accent={overdue ? 'clay' : rolls.length ? 'amber' : undefined}>
           {rolls.length === 0 ? (
             <Text size="sm" c="dimmed">
               No roll is due.
             </Text>
           ) : (
             rolls.map((r) => {
-              const s = ROLL[r.sac.roll!.status];
+              const s = { label: ROLL_LABEL[r.sac.roll!.status], ...ROLL_STATUS_TONE[r.sac.roll!.status] };
               return (
                 <SacLine
                   key={r.sac.id}
@@ -78,8 +63,8 @@ export function DashboardView({ data, timeZone }: { data: DashboardResponse; tim
               );
             })
           )}
-        </Panel>
-        <Panel title="Pull windows today" testId="card-pull-today" accent={pullWindows.some((p) => p.event === 'closes-today') ? 'clay' : pullWindows.length ? 'amber' : undefined}>
+        </SectionCard>
+        <SectionCard compact title="Pull windows today" testId="card-pull-today" accent={pullWindows.some((p) => p.event === 'closes-today') ? 'clay' : pullWindows.length ? 'amber' : undefined}>
           {pullWindows.length === 0 ? (
             <Text size="sm" c="dimmed">
               No window opens or closes today.
@@ -97,7 +82,7 @@ export function DashboardView({ data, timeZone }: { data: DashboardResponse; tim
               />
             ))
           )}
-        </Panel>
+        </SectionCard>
       </SimpleGrid>
       {nothingDue && (
         <Text size="sm" className="tone-ok">
@@ -106,7 +91,7 @@ export function DashboardView({ data, timeZone }: { data: DashboardResponse; tim
       )}
 
       <SimpleGrid cols={{ base: 1, md: 2 }}>
-        <Panel title="Upcoming pull windows (30 days)" testId="card-upcoming">
+        <SectionCard compact title="Upcoming pull windows (30 days)" testId="card-upcoming">
           {data.upcomingPullWindows.length === 0 ? (
             <Text size="sm" c="dimmed">
               None in the next 30 days.
@@ -143,8 +128,8 @@ export function DashboardView({ data, timeZone }: { data: DashboardResponse; tim
               </Table.Tbody>
             </Table>
           )}
-        </Panel>
-        <Panel title="Open projects" testId="card-projects">
+        </SectionCard>
+        <SectionCard compact title="Open projects" testId="card-projects">
           {data.openProjects.length === 0 ? (
             <Text size="sm" c="dimmed">
               No open project. <Anchor component={Link} to={paths.newProject.href()}>Start one</Anchor>.
@@ -172,8 +157,8 @@ export function DashboardView({ data, timeZone }: { data: DashboardResponse; tim
               </Table.Tbody>
             </Table>
           )}
-        </Panel>
-        <Panel title="Mature males" testId="card-males">
+        </SectionCard>
+        <SectionCard compact title="Mature males" testId="card-males">
           {data.matureMales.length === 0 ? (
             <Text size="sm" c="dimmed">
               No mature male in your collection.
@@ -182,7 +167,7 @@ export function DashboardView({ data, timeZone }: { data: DashboardResponse; tim
             <Table verticalSpacing={4} fz="sm">
               <Table.Tbody>
                 {data.matureMales.slice(0, 8).map((m) => {
-                  const c = { ...MALE_CLOCK_LABELS[m.clock.state], tone: CLOCK_TONE[m.clock.state] };
+                  const c = { ...MALE_CLOCK_LABELS[m.clock.state], ...MALE_CLOCK_TONE[m.clock.state] };
                   return (
                     <Table.Tr key={m.animal.id}>
                       <Table.Td>
@@ -210,8 +195,8 @@ export function DashboardView({ data, timeZone }: { data: DashboardResponse; tim
               </Table.Tbody>
             </Table>
           )}
-        </Panel>
-        <Panel title="From your partners" testId="card-activity">
+        </SectionCard>
+        <SectionCard compact title="From your partners" testId="card-activity">
           {data.recentActivity.length === 0 ? (
             <Text size="sm" c="dimmed">
               Nothing new from others.
@@ -233,7 +218,7 @@ export function DashboardView({ data, timeZone }: { data: DashboardResponse; tim
               ))}
             </Stack>
           )}
-        </Panel>
+        </SectionCard>
       </SimpleGrid>
     </Stack>
   );

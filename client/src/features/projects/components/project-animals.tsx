@@ -1,6 +1,7 @@
 import { Card, SimpleGrid, Stack, Text } from '@mantine/core';
 import { MALE_CLOCK_LABELS, type ProjectAnimal } from '@broodsilk/shared';
 import { formatDate } from '@/lib/dates';
+import { MALE_CLOCK_TONE } from '@/lib/tones';
 
 
 function AnimalLine({ role, animal }: { role: string; animal: ProjectAnimal }) {
@@ -23,7 +24,7 @@ function AnimalLine({ role, animal }: { role: string; animal: ProjectAnimal }) {
           {animal.dueBackOn && ` · due back ${formatDate(animal.dueBackOn)}`}
         </Text>
         {clock && (
-          <Text size="sm" className={clock.state === 'past-typical' ? 'tone-failed' : clock.state === 'late' ? 'tone-due' : undefined}>
+          <Text size="sm" className={MALE_CLOCK_TONE[clock.state].tone || undefined}>
             Male clock: day {clock.daysSinceMaturing} since maturing, {MALE_CLOCK_LABELS[clock.state].label.toLowerCase()}
           </Text>
         )}

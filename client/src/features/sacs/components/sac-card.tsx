@@ -29,7 +29,7 @@ export function SacCard({ sac, timeZone, href, incubatorHref }: { sac: SacRespon
           </Badge>
         ) : (
           !sac.pulled && (
-            <Badge color={window.colour} variant="light" tt="none" data-testid="pull-window-badge">
+            <Badge color={window.color} variant="light" tt="none" data-testid="pull-window-badge">
               {window.label}
             </Badge>
           )

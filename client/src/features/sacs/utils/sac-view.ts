@@ -1,5 +1,6 @@
 import { BROOD_STAGE_LABEL_SETS, type BroodStage, type PullWindowState, type RollStatus, type SacResponse } from '@broodsilk/shared';
 import { formatDate, formatInstant } from '@/lib/dates';
+import { PULL_WINDOW_TONE, ROLL_STATUS_TONE, type ToneStyle } from '@/lib/tones';
 
 export const BROOD_LABELS = BROOD_STAGE_LABEL_SETS.us;
 
@@ -8,18 +9,18 @@ export function broodLabel(stage: BroodStage): string {
 }
 
 /** Tone class and words for a pull window state. */
-export const PULL_WINDOW_TEXT: Record<PullWindowState, { label: string; tone: string; colour: string }> = {
-  'not-yet': { label: 'Not yet', tone: '', colour: 'gray' },
-  open: { label: 'Pull window open', tone: 'tone-ok', colour: 'moss' },
-  closing: { label: 'Pull window closing', tone: 'tone-due', colour: 'amber' },
-  past: { label: 'Pull window past', tone: 'tone-failed', colour: 'clay' },
+export const PULL_WINDOW_TEXT: Record<PullWindowState, { label: string } & ToneStyle> = {
+  'not-yet': { label: 'Not yet', ...PULL_WINDOW_TONE['not-yet'] },
+  open: { label: 'Pull window open', ...PULL_WINDOW_TONE.open },
+  closing: { label: 'Pull window closing', ...PULL_WINDOW_TONE.closing },
+  past: { label: 'Pull window past', ...PULL_WINDOW_TONE.past },
 };
 
-export const ROLL_TEXT: Record<RollStatus, { label: string; tone: string; colour: string }> = {
-  upcoming: { label: 'Next roll', tone: '', colour: 'gray' },
-  'due-soon': { label: 'Roll due soon', tone: 'tone-due', colour: 'amber' },
-  due: { label: 'Roll due now', tone: 'tone-due', colour: 'amber' },
-  overdue: { label: 'Roll overdue', tone: 'tone-failed', colour: 'clay' },
+export const ROLL_TEXT: Record<RollStatus, { label: string } & ToneStyle> = {
+  upcoming: { label: 'Next roll', ...ROLL_STATUS_TONE.upcoming },
+  'due-soon': { label: 'Roll due soon', ...ROLL_STATUS_TONE['due-soon'] },
+  due: { label: 'Roll due now', ...ROLL_STATUS_TONE.due },
+  overdue: { label: 'Roll overdue', ...ROLL_STATUS_TONE.overdue },
 };
 
 const days = (n: number) => (n === 1 ? '1 day' : `${n} days`);
