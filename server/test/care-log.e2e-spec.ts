@@ -3,8 +3,8 @@ import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from 'vitest
 import { DateTime } from 'luxon';
 import type { CareLogEntryResponse, SacResponse } from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
-import { registerKeeper, type SignedIn } from './support/users';
-import { addMember, createProject } from './support/projects';
+import type { SignedIn } from './support/users';
+import { projectWithRoles } from './support/projects';
 import { createSac, setTimeZone } from './support/sacs';
 import { Clock } from '../src/sacs/clock';
 
@@ -24,12 +24,7 @@ const pulledSac = () => createSac(t.app, owner, projectId, { layDate: '2025-08-2
 
 beforeAll(async () => {
   t = await createTestApp();
-  owner = await registerKeeper(t.app, 'Oona');
-  partner = await registerKeeper(t.app, 'Piet');
-  caretaker = await registerKeeper(t.app, 'Cleo');
-  projectId = (await createProject(t.app, t.orm, owner, { title: 'Incubator log' })).id;
-  await addMember(t.orm, projectId, partner, 'partner');
-  await addMember(t.orm, projectId, caretaker, 'caretaker');
+  ({ projectId, owner, partner, caretaker } = await projectWithRoles(t.app, t.orm, 'Incubator log', ['Oona', 'Piet', 'Cleo']));
 });
 afterEach(() => vi.restoreAllMocks());
 afterAll(async () => {

@@ -4,7 +4,7 @@ import { DateTime } from 'luxon';
 import type { DashboardResponse } from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper, type SignedIn } from './support/users';
-import { addMember, createProject } from './support/projects';
+import { projectWithRoles } from './support/projects';
 import { createSac } from './support/sacs';
 import { Clock } from '../src/sacs/clock';
 
@@ -22,13 +22,8 @@ const dashboard = async (who: SignedIn): Promise<DashboardResponse> => (await ht
 
 beforeAll(async () => {
   t = await createTestApp();
-  owner = await registerKeeper(t.app, 'Olwen');
-  partner = await registerKeeper(t.app, 'Priya');
-  caretaker = await registerKeeper(t.app, 'Corin');
+  ({ projectId, owner, partner, caretaker } = await projectWithRoles(t.app, t.orm, 'Dashboard pair', ['Olwen', 'Priya', 'Corin']));
   loner = await registerKeeper(t.app, 'Lone');
-  projectId = (await createProject(t.app, t.orm, owner, { title: 'Dashboard pair' })).id;
-  await addMember(t.orm, projectId, partner, 'partner');
-  await addMember(t.orm, projectId, caretaker, 'caretaker');
 });
 afterEach(() => vi.restoreAllMocks());
 afterAll(async () => {

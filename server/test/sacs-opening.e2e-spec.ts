@@ -4,7 +4,7 @@ import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from 'vitest
 import type { BroodCountsResponse, SacResponse } from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper, type SignedIn } from './support/users';
-import { addMember, createProject } from './support/projects';
+import { projectWithRoles } from './support/projects';
 import { createSac } from './support/sacs';
 import { Clock } from '../src/sacs/clock';
 import { BroodService } from '../src/sacs/brood.service';
@@ -25,13 +25,8 @@ const newSac = () => createSac(t.app, owner, projectId, { layDate: '2025-09-10',
 
 beforeAll(async () => {
   t = await createTestApp();
-  owner = await registerKeeper(t.app, 'Oriane');
-  partner = await registerKeeper(t.app, 'Paulo');
-  caretaker = await registerKeeper(t.app, 'Cyra');
+  ({ projectId, owner, partner, caretaker } = await projectWithRoles(t.app, t.orm, 'Opening day', ['Oriane', 'Paulo', 'Cyra']));
   stranger = await registerKeeper(t.app, 'Sten');
-  projectId = (await createProject(t.app, t.orm, owner, { title: 'Opening day' })).id;
-  await addMember(t.orm, projectId, partner, 'partner');
-  await addMember(t.orm, projectId, caretaker, 'caretaker');
 });
 afterEach(() => vi.restoreAllMocks());
 afterAll(async () => {

@@ -4,7 +4,7 @@ import { DateTime } from 'luxon';
 import type { SacResponse } from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper, type SignedIn } from './support/users';
-import { addMember, createProject } from './support/projects';
+import { addMember, createProject, projectWithRoles } from './support/projects';
 import { createSac, setTimeZone } from './support/sacs';
 import { Clock } from '../src/sacs/clock';
 
@@ -23,13 +23,7 @@ const luxonPlus = (date: string, days: number) => DateTime.fromISO(date, { zone:
 
 beforeAll(async () => {
   t = await createTestApp();
-  owner = await registerKeeper(t.app, 'Odile');
-  partner = await registerKeeper(t.app, 'Pavel');
-  caretaker = await registerKeeper(t.app, 'Cato');
-  const p = await createProject(t.app, t.orm, owner, { title: 'Sac arithmetic' });
-  projectId = p.id;
-  await addMember(t.orm, projectId, partner, 'partner');
-  await addMember(t.orm, projectId, caretaker, 'caretaker');
+  ({ projectId, owner, partner, caretaker } = await projectWithRoles(t.app, t.orm, 'Sac arithmetic', ['Odile', 'Pavel', 'Cato']));
 });
 afterEach(() => vi.restoreAllMocks());
 afterAll(async () => {

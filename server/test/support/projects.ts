@@ -4,7 +4,7 @@ import type { MikroORM } from '@mikro-orm/postgresql';
 import { addDays, todayIn, type ProjectResponse, type ProjectRole } from '@broodsilk/shared';
 import { ProjectMember } from '../../src/projects/project-member.entity';
 import { createAnimal, speciesId } from './fixtures/collection';
-import type { SignedIn } from './users';
+import { registerKeeper, type SignedIn } from './users';
 
 let n = 0;
 
@@ -30,4 +30,20 @@ export async function addMember(orm: MikroORM, projectId: string, who: SignedIn,
   const m = em.create(ProjectMember, { project: projectId, user: who.user.id, role, name: who.user.displayName, email: who.user.email });
   await em.flush();
   return m.id;
+}
+
+export interface ProjectWithRoles {
+  projectId: string;
+  owner: SignedIn;
+  partner: SignedIn;
+  caretaker: SignedIn;
+}
+
+/** A fresh project with a keeper in each project role, the usual start of a sac or dashboard spec. */
+export async function projectWithRoles(app: INestApplication, orm: MikroORM, title: string, names: [string, string, string]): Promise<ProjectWithRoles> {
+  const [owner, partner, caretaker] = [await registerKeeper(app, names[0]), await registerKeeper(app, names[1]), await registerKeeper(app, names[2])];
+  const projectId = (await createProject(app, orm, owner, { title })).id;
+  await addMember(orm, projectId, partner, 'partner');
+  await addMember(orm, projectId, caretaker, 'caretaker');
+  return { projectId, owner, partner, caretaker };
 }
