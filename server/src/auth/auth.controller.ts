@@ -7,12 +7,12 @@ import { appConfig } from '../config/app.config';
 import { Public } from '../common/decorators/public.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { CSRF } from '../common/csrf/csrf.provider';
-import { mintCsrfToken, type Csrf } from '../common/csrf/csrf';
+import type { Csrf } from '../common/csrf/csrf';
 import { AuthService, type IssuedSession } from './auth.service';
 import { RegisterDto } from './dto/register.dto';
 import { LoginDto } from './dto/login.dto';
 import { PasswordResetConfirmDto, PasswordResetDto } from './dto/password-reset.dto';
-import { clearSessionCookie, setSessionCookie } from './session-cookie';
+import { clearSessionCookie, startSession } from './session-cookie';
 import type { AuthUser } from './auth-user';
 
 @Controller('auth')
@@ -75,8 +75,6 @@ export class AuthController {
   }
 
   private startSession(session: IssuedSession, req: Request, res: Response): LoginResponse {
-    setSessionCookie(res, session.accessToken, this.app.secureCookies);
-    const csrfToken = mintCsrfToken(this.csrf, req, res, session.accessToken);
-    return { user: session.user, accessToken: session.accessToken, csrfToken, expiresAt: session.expiresAt.toISOString() };
+    return startSession(this.csrf, session, req, res, this.app.secureCookies);
   }
 }

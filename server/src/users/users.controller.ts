@@ -4,10 +4,10 @@ import type { Request, Response } from 'express';
 import type { LoginResponse, Me } from '@broodsilk/shared';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { CSRF } from '../common/csrf/csrf.provider';
-import { mintCsrfToken, type Csrf } from '../common/csrf/csrf';
+import type { Csrf } from '../common/csrf/csrf';
 import { appConfig } from '../config/app.config';
 import { AuthService } from '../auth/auth.service';
-import { setSessionCookie } from '../auth/session-cookie';
+import { startSession } from '../auth/session-cookie';
 import type { AuthUser } from '../auth/auth-user';
 import { UsersService } from './users.service';
 import { UpdateProfileDto } from './dto/update-profile.dto';
@@ -35,9 +35,6 @@ export class UsersController {
     @Req() req: Request,
     @Res({ passthrough: true }) res: Response,
   ): Promise<LoginResponse> {
-    const session = await this.auth.changePassword(user.id, dto.currentPassword, dto.newPassword);
-    setSessionCookie(res, session.accessToken, this.app.secureCookies);
-    const csrfToken = mintCsrfToken(this.csrf, req, res, session.accessToken);
-    return { user: session.user, accessToken: session.accessToken, csrfToken, expiresAt: session.expiresAt.toISOString() };
+    return startSession(this.csrf, await this.auth.changePassword(user.id, dto.currentPassword, dto.newPassword), req, res, this.app.secureCookies);
   }
 }
