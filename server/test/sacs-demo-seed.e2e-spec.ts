@@ -1,6 +1,6 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { DashboardResponse, ProjectSummary, SacResponse } from '@broodsilk/shared';
+import { dayNumber, todayIn, type DashboardResponse, type ProjectSummary, type SacResponse } from '@broodsilk/shared';
 import { seedDemo } from '../src/seed/demo-seed';
 import { seedCollection } from '../src/seed/collection.seeder';
 import { DEMO_PROJECTS, seedProjects } from '../src/seed/projects.seeder';
@@ -41,11 +41,15 @@ describe('demo sacs', () => {
   });
 
   it('leave a roll due on the dashboard for the owner and the caretaker, with readings in the log', async () => {
+    const [h] = await sacsOf(DEMO_PROJECTS.hamoriiIncubator);
+    // Laid 26 days ago in Mira's zone (Europe/Berlin); Ines (Europe/Lisbon) counts from her own
+    // calendar date, which is a day behind in the hour before Berlin's midnight.
+    expect(dayNumber(h.layDate, todayIn(mira.user.timeZone, new Date()))).toBe(26);
     for (const who of [mira, ines]) {
       const d = (await http().get('/api/dashboard').set('Authorization', who.bearer).expect(200)).body as DashboardResponse;
-      expect(d.dueToday.rolls.map((r) => [r.projectTitle, r.sac.dayNumber, r.sac.roll!.status])).toEqual([[DEMO_PROJECTS.hamoriiIncubator, 26, 'due']]);
+      const expectedDay = dayNumber(h.layDate, todayIn(who.user.timeZone, new Date()));
+      expect(d.dueToday.rolls.map((r) => [r.projectTitle, r.sac.dayNumber, r.sac.roll!.status])).toEqual([[DEMO_PROJECTS.hamoriiIncubator, expectedDay, 'due']]);
     }
-    const [h] = await sacsOf(DEMO_PROJECTS.hamoriiIncubator);
     const log = (await http().get(`/api/sacs/${h.id}/log`).set('Authorization', ines.bearer).expect(200)).body as { kind: string; author: { name: string } }[];
     expect(new Set(log.map((e) => e.kind))).toEqual(new Set(['roll', 'temperature', 'humidity', 'note']));
     expect(log.find((e) => e.kind === 'roll')!.author.name).toBe('Ines Carvalho');
