@@ -13,7 +13,11 @@ import globals from 'globals';
 /** Zones that keep client features apart and imports one-way (after bulletproof-react). */
 function clientBoundaryZones(root) {
   const features = path.join(root, 'client/src/features');
-  const names = existsSync(features) ? readdirSync(features, { withFileTypes: true }).filter((d) => d.isDirectory()).map((d) => d.name) : [];
+  const names = existsSync(features)
+    ? readdirSync(features, { withFileTypes: true })
+        .filter((d) => d.isDirectory())
+        .map((d) => d.name)
+    : [];
   return [
     ...names.map((name) => ({
       target: path.join(features, name),

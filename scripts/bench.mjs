@@ -44,14 +44,22 @@ function report(name, target, s) {
 // 2. Sign-in (argon2id dominates) and the collection list on a large collection.
 const email = `bench.${Date.now()}@example.test`;
 const password = 'bench password 1234';
-const reg = await fetch(`${base}/api/auth/register`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email, password, displayName: 'Bench' }) });
+const reg = await fetch(`${base}/api/auth/register`, {
+  method: 'POST',
+  headers: { 'content-type': 'application/json' },
+  body: JSON.stringify({ email, password, displayName: 'Bench' }),
+});
 const { accessToken, user } = await reg.json();
 const auth = { authorization: `Bearer ${accessToken}` };
 
 report(
   'POST /api/auth/login (argon2id verify)',
   'p95 < 250 ms',
-  await timed(20, () => fetch(`${base}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email, password }) }).then((r) => r.arrayBuffer())),
+  await timed(20, () =>
+    fetch(`${base}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email, password }) }).then((r) =>
+      r.arrayBuffer(),
+    ),
+  ),
 );
 
 const animalCount = Number(process.env.BENCH_ANIMALS ?? 5000);
@@ -70,11 +78,17 @@ if (hasAnimals) {
   );
   rows.push({ measurement: `insert ${animalCount} animals (SQL)`, target: '', n: 1, p50: `${(performance.now() - t).toFixed(0)} ms`, p95: '', max: '' });
   await client.query('analyze animals');
-  report(`GET /api/animals page 1 of ${animalCount}`, 'p95 < 100 ms', await timed(100, () => fetch(`${base}/api/animals?limit=50`, { headers: auth }).then((r) => r.arrayBuffer())));
+  report(
+    `GET /api/animals page 1 of ${animalCount}`,
+    'p95 < 100 ms',
+    await timed(100, () => fetch(`${base}/api/animals?limit=50`, { headers: auth }).then((r) => r.arrayBuffer())),
+  );
   report(
     `GET /api/animals filtered + text search, deep page`,
     'p95 < 150 ms',
-    await timed(100, (i) => fetch(`${base}/api/animals?limit=50&offset=${(i % 20) * 50}&sex=female&status=active&q=B-00&sort=label`, { headers: auth }).then((r) => r.arrayBuffer())),
+    await timed(100, (i) =>
+      fetch(`${base}/api/animals?limit=50&offset=${(i % 20) * 50}&sex=female&status=active&q=B-00&sort=label`, { headers: auth }).then((r) => r.arrayBuffer()),
+    ),
   );
 } else {
   rows.push({ measurement: 'animals list', target: '', n: 0, p50: 'skipped: no animals table yet', p95: '', max: '' });

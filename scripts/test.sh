@@ -51,6 +51,7 @@ cd "$ROOT"
 step "build shared" npm run build --silent -w shared
 step "type-check" npm run typecheck --silent
 step "lint" npx eslint . --max-warnings 0
+step "format" npx prettier --check . --log-level warn
 step "shared unit tests" npx vitest run --root shared --reporter=default --reporter=json --outputFile="$REPORTS/shared.json"
 step "server unit and integration tests" bash -c "cd server && npx vitest run --reporter=default --reporter=json --outputFile='$REPORTS/server.json'"
 step "client tests" bash -c "cd client && npx vitest run --reporter=default --reporter=json --outputFile='$REPORTS/client.json'"

@@ -24,7 +24,9 @@ async function ensureCountedBrood(page: Page): Promise<string> {
     };
     const { csrfToken } = await json(await fetch('/api/auth/csrf'));
     const post = (path: string, body: unknown) =>
-      fetch(`/api${path}`, { method: 'POST', headers: { 'content-type': 'application/json', 'x-csrf-token': csrfToken }, body: JSON.stringify(body) }).then(json);
+      fetch(`/api${path}`, { method: 'POST', headers: { 'content-type': 'application/json', 'x-csrf-token': csrfToken }, body: JSON.stringify(body) }).then(
+        json,
+      );
     const list = await json(await fetch('/api/projects'));
     const project = (list.items ?? list).find((p: { title: string }) => p.title === title);
     if (!project) throw new Error(`No demo project "${title}"`);
@@ -114,12 +116,16 @@ describe('account', () => {
     const partnerRow = p.getByRole('table', { name: 'Account entries' }).getByRole('row').filter({ hasText: 'Overnight courier' }).last();
     await poll(() => partnerRow.textContent()).not.toContain('Waiting for');
     expect(await partnerRow.textContent()).toContain('Counts');
-    await poll(() => p.getByRole('table', { name: 'Account entries' }).getByRole('row').filter({ hasText: 'Arrival count' }).last().textContent()).toContain('3 alive, 0 dead');
+    await poll(() => p.getByRole('table', { name: 'Account entries' }).getByRole('row').filter({ hasText: 'Arrival count' }).last().textContent()).toContain(
+      '3 alive, 0 dead',
+    );
 
     // Both see the same balance.
     await page.reload();
     await page.getByRole('table', { name: 'Balances' }).waitFor();
-    await poll(() => page.getByRole('table', { name: 'Account entries' }).getByRole('row').filter({ hasText: 'Overnight courier' }).last().textContent()).not.toContain('Waiting for');
+    await poll(() =>
+      page.getByRole('table', { name: 'Account entries' }).getByRole('row').filter({ hasText: 'Overnight courier' }).last().textContent(),
+    ).not.toContain('Waiting for');
     const keeperView = await balanceRows(page);
     const partnerView = await balanceRows(p);
     expect(partnerView).toEqual(keeperView);

@@ -21,7 +21,10 @@ async function pick(page: Page, label: string, search: string) {
   const input = page.getByLabel(new RegExp(`^${label}`)).first();
   await input.click();
   await input.fill(search);
-  await page.getByRole('option', { name: new RegExp(search) }).first().click();
+  await page
+    .getByRole('option', { name: new RegExp(search) })
+    .first()
+    .click();
 }
 
 async function typeDate(page: Page, label: string, date: string) {

@@ -111,10 +111,7 @@ export function onboardingPage({ account, linkToken }) {
 export function payPage({ session, lineItems, destination, applicationFeeAmount }) {
   const base = `/pay/${encodeURIComponent(session.id)}`;
   const rows = lineItems
-    .map(
-      (li) =>
-        `<tr><td>${escapeHtml(li.name)}</td><td>${li.quantity} ×</td><td>${escapeHtml(formatMoney(li.unitAmount, session.currency))}</td></tr>`,
-    )
+    .map((li) => `<tr><td>${escapeHtml(li.name)}</td><td>${li.quantity} ×</td><td>${escapeHtml(formatMoney(li.unitAmount, session.currency))}</td></tr>`)
     .join('\n');
   const open = session.status === 'open';
   return page(

@@ -84,8 +84,7 @@ class ApiError extends Error {
 }
 
 /** @param {string} kind @param {string} id @param {string} [param] */
-const missing = (kind, id, param = 'id') =>
-  new ApiError(404, `No such ${kind}: '${id}'`, { code: 'resource_missing', param });
+const missing = (kind, id, param = 'id') => new ApiError(404, `No such ${kind}: '${id}'`, { code: 'resource_missing', param });
 
 /** @param {string} param @param {string} message */
 const invalid = (param, message) => new ApiError(400, message, { code: 'parameter_invalid', param });
@@ -187,10 +186,22 @@ function currencyParam(value, param) {
 }
 
 const EURO_COUNTRIES = new Set(['AT', 'BE', 'CY', 'DE', 'EE', 'ES', 'FI', 'FR', 'GR', 'HR', 'IE', 'IT', 'LT', 'LU', 'LV', 'MT', 'NL', 'PT', 'SI', 'SK']);
-const COUNTRY_CURRENCY = /** @type {Record<string, string>} */ ({ US: 'usd', GB: 'gbp', CH: 'chf', CA: 'cad', AU: 'aud', SE: 'sek', DK: 'dkk', NO: 'nok', PL: 'pln', CZ: 'czk', JP: 'jpy' });
+const COUNTRY_CURRENCY = /** @type {Record<string, string>} */ ({
+  US: 'usd',
+  GB: 'gbp',
+  CH: 'chf',
+  CA: 'cad',
+  AU: 'aud',
+  SE: 'sek',
+  DK: 'dkk',
+  NO: 'nok',
+  PL: 'pln',
+  CZ: 'czk',
+  JP: 'jpy',
+});
 
 /** @param {string} country */
-const currencyForCountry = (country) => (EURO_COUNTRIES.has(country) ? 'eur' : COUNTRY_CURRENCY[country] ?? 'usd');
+const currencyForCountry = (country) => (EURO_COUNTRIES.has(country) ? 'eur' : (COUNTRY_CURRENCY[country] ?? 'usd'));
 
 /** @param {string} a @param {string} b */
 function safeEqual(a, b) {
@@ -238,15 +249,7 @@ function redactKey(key) {
  * @param {PaymentFakeOptions} options
  */
 export async function startPaymentFake(options) {
-  const {
-    port = 0,
-    host = '127.0.0.1',
-    secretKey,
-    webhookSecret,
-    retryDelaysMs = [250, 1000],
-    attemptTimeoutMs = 1500,
-    responseBudgetMs = 2000,
-  } = options;
+  const { port = 0, host = '127.0.0.1', secretKey, webhookSecret, retryDelaysMs = [250, 1000], attemptTimeoutMs = 1500, responseBudgetMs = 2000 } = options;
   if (typeof secretKey !== 'string' || !secretKey.startsWith('sk_')) {
     throw new Error('startPaymentFake: secretKey must be a secret API key starting with "sk_"');
   }
@@ -334,8 +337,16 @@ export async function startPaymentFake(options) {
     const job = (async () => {
       /** @type {DeliveryRecord} */
       let record = {
-        eventId: event.id, type: event.type, url, attempt: 0, redelivery, signedAt: null,
-        status: null, ok: false, error: 'no webhook URL configured', at: new Date().toISOString(),
+        eventId: event.id,
+        type: event.type,
+        url,
+        attempt: 0,
+        redelivery,
+        signedAt: null,
+        status: null,
+        ok: false,
+        error: 'no webhook URL configured',
+        at: new Date().toISOString(),
       };
       if (!url) {
         state.deliveries.push(record);
@@ -344,8 +355,16 @@ export async function startPaymentFake(options) {
       for (let attempt = 1; attempt <= retryDelaysMs.length + 1 && !closed; attempt++) {
         const signedAt = nowSeconds();
         record = {
-          eventId: event.id, type: event.type, url, attempt, redelivery, signedAt,
-          status: null, ok: false, error: null, at: new Date().toISOString(),
+          eventId: event.id,
+          type: event.type,
+          url,
+          attempt,
+          redelivery,
+          signedAt,
+          status: null,
+          ok: false,
+          error: null,
+          at: new Date().toISOString(),
         };
         state.deliveries.push(record);
         try {
@@ -449,8 +468,13 @@ export async function startPaymentFake(options) {
       metadata: metadataParam(params.metadata),
       payouts_enabled: false,
       requirements: {
-        currently_due: [...due], eventually_due: [...due], past_due: [...due], pending_verification: [],
-        disabled_reason: 'requirements.past_due', current_deadline: null, errors: [],
+        currently_due: [...due],
+        eventually_due: [...due],
+        past_due: [...due],
+        pending_verification: [],
+        disabled_reason: 'requirements.past_due',
+        current_deadline: null,
+        errors: [],
       },
       settings: { payouts: { schedule: { interval: 'daily' } } },
       tos_acceptance: { date: null },
@@ -521,7 +545,10 @@ export async function startPaymentFake(options) {
     if (destination) {
       const account = state.accounts.get(destination);
       if (!account) {
-        throw new ApiError(400, `No such destination: '${destination}'`, { code: 'resource_missing', param: 'payment_intent_data[transfer_data][destination]' });
+        throw new ApiError(400, `No such destination: '${destination}'`, {
+          code: 'resource_missing',
+          param: 'payment_intent_data[transfer_data][destination]',
+        });
       }
       if (!account.charges_enabled || !account.details_submitted) {
         throw invalid(
@@ -533,7 +560,10 @@ export async function startPaymentFake(options) {
     const applicationFeeAmount = integerParam(pid.application_fee_amount, 'payment_intent_data[application_fee_amount]', { optional: true });
     if (applicationFeeAmount !== null) {
       if (!destination) {
-        throw invalid('payment_intent_data[application_fee_amount]', 'An application fee needs a connected account (payment_intent_data[transfer_data][destination]).');
+        throw invalid(
+          'payment_intent_data[application_fee_amount]',
+          'An application fee needs a connected account (payment_intent_data[transfer_data][destination]).',
+        );
       }
       if (applicationFeeAmount > amountTotal) {
         throw invalid('payment_intent_data[application_fee_amount]', 'The application fee cannot be greater than the amount of the payment.');
@@ -634,7 +664,10 @@ export async function startPaymentFake(options) {
       const data = state.events.filter((e) => !type || e.type === type).reverse();
       return [200, { object: 'list', data, has_more: false, url: '/v1/events' }];
     }
-    throw new ApiError(404, `Unrecognized request URL (${method}: ${path}). This local fake answers only the calls Broodsilk makes; see scripts/payment-fake/README.md.`);
+    throw new ApiError(
+      404,
+      `Unrecognized request URL (${method}: ${path}). This local fake answers only the calls Broodsilk makes; see scripts/payment-fake/README.md.`,
+    );
   }
 
   // ---- pages ------------------------------------------------------------------
@@ -663,7 +696,7 @@ export async function startPaymentFake(options) {
    * @param {import('node:http').ServerResponse} res
    */
   async function onboarding(method, accountId, query, form, res) {
-    const token = method === 'GET' ? query.get('link') ?? '' : typeof form.link === 'string' ? form.link : '';
+    const token = method === 'GET' ? (query.get('link') ?? '') : typeof form.link === 'string' ? form.link : '';
     const link = state.accountLinks.get(token);
     const account = state.accounts.get(accountId);
     if (!link || !account || link.account !== accountId) {
@@ -681,7 +714,15 @@ export async function startPaymentFake(options) {
         account.details_submitted = true;
         account.business_type ??= 'individual';
         account.capabilities = Object.fromEntries(Object.keys(account.capabilities).map((c) => [c, 'active']));
-        account.requirements = { currently_due: [], eventually_due: [], past_due: [], pending_verification: [], disabled_reason: null, current_deadline: null, errors: [] };
+        account.requirements = {
+          currently_due: [],
+          eventually_due: [],
+          past_due: [],
+          pending_verification: [],
+          disabled_reason: null,
+          current_deadline: null,
+          errors: [],
+        };
         account.tos_acceptance = { date: nowSeconds() };
         const { delivery } = emit('account.updated', account, {
           account: account.id,
@@ -710,7 +751,11 @@ export async function startPaymentFake(options) {
       return sendHtml(res, 404, messagePage('Checkout not found', 'This checkout session is not known to the local payment stand-in.'));
     }
     if (method === 'GET' && !action) {
-      return sendHtml(res, 200, payPage({ session, lineItems: details.lineItems, destination: details.destination, applicationFeeAmount: details.applicationFeeAmount }));
+      return sendHtml(
+        res,
+        200,
+        payPage({ session, lineItems: details.lineItems, destination: details.destination, applicationFeeAmount: details.applicationFeeAmount }),
+      );
     }
     if (method !== 'POST') return sendHtml(res, 405, messagePage('Not allowed', 'Use the buttons on the pay page.'));
     if (action === 'cancel') {
@@ -859,12 +904,24 @@ export async function startPaymentFake(options) {
       /** @type {DeliveryRecord | null} */
       let record = null;
       const job = deliver(event, true);
-      job.then((r) => { record = r; }, () => undefined);
+      job.then(
+        (r) => {
+          record = r;
+        },
+        () => undefined,
+      );
       await within(job, responseBudgetMs);
       return sendJson(res, 202, { event: event.id, delivery: record ?? 'still trying' });
     }
     if (method === 'GET' && path === '/') {
-      return sendHtml(res, 200, messagePage('Payment provider stand-in', `Running. ${state.accounts.size} connected account(s), ${state.checkoutSessions.size} checkout session(s), ${state.events.length} event(s). API at /v1, event log at /_fake/events.`));
+      return sendHtml(
+        res,
+        200,
+        messagePage(
+          'Payment provider stand-in',
+          `Running. ${state.accounts.size} connected account(s), ${state.checkoutSessions.size} checkout session(s), ${state.events.length} event(s). API at /v1, event log at /_fake/events.`,
+        ),
+      );
     }
     return sendHtml(res, 404, messagePage('Not found', `Nothing at ${method} ${path} on the local payment stand-in.`));
   }

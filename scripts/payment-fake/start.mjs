@@ -44,6 +44,9 @@ for (const signal of /** @type {const} */ (['SIGINT', 'SIGTERM'])) {
   process.on(signal, () => {
     if (stopping) return;
     stopping = true;
-    fake.close().then(() => process.exit(0), () => process.exit(1));
+    fake.close().then(
+      () => process.exit(0),
+      () => process.exit(1),
+    );
   });
 }

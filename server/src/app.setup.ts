@@ -23,9 +23,7 @@ export function configureApp(app: INestApplication): INestApplication {
   );
   app.use(cookieParser());
   app.use(app.get<Csrf>(CSRF).doubleCsrfProtection);
-  app.useGlobalPipes(
-    new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true, exceptionFactory: validationExceptionFactory }),
-  );
+  app.useGlobalPipes(new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true, exceptionFactory: validationExceptionFactory }));
   app.enableShutdownHooks();
   return app;
 }

@@ -19,7 +19,8 @@ beforeAll(async () => {
 }, 90_000);
 afterAll(async () => t?.close());
 
-const stage = async () => ((await api(t.app).get(`/api/projects/${s.projectId}`).set('Authorization', s.tomasz.bearer).expect(200)).body as ProjectResponse).stage.stage;
+const stage = async () =>
+  ((await api(t.app).get(`/api/projects/${s.projectId}`).set('Authorization', s.tomasz.bearer).expect(200)).body as ProjectResponse).stage.stage;
 const post = async (body: object, who = s.mira) => {
   const res = await api(t.app).post(`/api/projects/${s.projectId}/entries`).set('Authorization', who.bearer).send(body);
   expect(res.status, JSON.stringify(res.body)).toBe(201);
@@ -40,7 +41,9 @@ describe('stage shares-settled', () => {
     expect(await stage()).toBe('brood'); // waiting for Tomasz to confirm
     await api(t.app).post(`/api/projects/${s.projectId}/entries/${paid.id}/confirm`).set('Authorization', s.tomasz.bearer).send({}).expect(201);
     expect(await stage()).toBe('shares-settled');
-    expect(((await api(t.app).get(`/api/projects/${s.projectId}/balances`).set('Authorization', s.mira.bearer).expect(200)).body as BalancesResponse).settled).toBe(true);
+    expect(
+      ((await api(t.app).get(`/api/projects/${s.projectId}/balances`).set('Authorization', s.mira.bearer).expect(200)).body as BalancesResponse).settled,
+    ).toBe(true);
 
     await post({ kind: 'correction', date: D, reversesId: paid.id, reason: 'the transfer bounced' });
     expect(await stage()).toBe('brood');

@@ -34,7 +34,11 @@ describe('shares', () => {
     expect(body.terms).toMatchObject({ number: 1, currency: 'EUR', pricePerSpiderlingMinor: 500, failureClause: 'carries-over' });
     expect(body.sacs).toHaveLength(1);
     expect(body.sacs[0]!.count).toBe(62);
-    expect(body.sacs[0]!.parties.map((p) => [p.name, p.count])).toEqual([['Mira Keeper', 30], ['Tomasz Partner', 17], ['Lena Outside', 15]]);
+    expect(body.sacs[0]!.parties.map((p) => [p.name, p.count])).toEqual([
+      ['Mira Keeper', 30],
+      ['Tomasz Partner', 17],
+      ['Lena Outside', 15],
+    ]);
     expect(body.sacs[0]!.explanation[0]).toBe('The sac counts 62 young.');
     expect(body.sacs[0]!.explanation.at(-1)).toBe('In all: Mira Keeper 30, Tomasz Partner 17, Lena Outside 15.');
     expect(body.sacs[0]!.change).toBeNull();
@@ -49,29 +53,53 @@ describe('balances after every kind of entry', () => {
 
   it('starts with each party owed its share and nothing owed in money', async () => {
     const b = await balances();
-    expect(b.parties.map((p) => [p.name, p.share, p.owedSpiderlings])).toEqual([['Mira Keeper', 30, 30], ['Tomasz Partner', 17, 17], ['Lena Outside', 15, 15]]);
+    expect(b.parties.map((p) => [p.name, p.share, p.owedSpiderlings])).toEqual([
+      ['Mira Keeper', 30, 30],
+      ['Tomasz Partner', 17, 17],
+      ['Lena Outside', 15, 15],
+    ]);
     expect(b.debts).toEqual([]);
     expect(b.settled).toBe(false);
   });
 
   it('a shipment hand-over counts against the share and waits for the recipient', async () => {
-    handOver = await entry({ kind: 'hand-over', date: D, memberId: s.tomaszId, count: 10, method: 'shipment', carrier: 'Overnight courier', tracking: 'TRK-4471' });
+    handOver = await entry({
+      kind: 'hand-over',
+      date: D,
+      memberId: s.tomaszId,
+      count: 10,
+      method: 'shipment',
+      carrier: 'Overnight courier',
+      tracking: 'TRK-4471',
+    });
     expect(handOver).toMatchObject({ kind: 'hand-over', count: 10, status: 'in-force', awaitingConfirmationBy: { memberId: s.tomaszId } });
     expect(handOver.recordedBy?.name).toBe('Mira Keeper');
     expect(party(await balances(), s.tomaszId)).toMatchObject({ handedOver: 10, owedSpiderlings: 7, unconfirmedHandOvers: 1 });
   });
 
   it('the recipient confirms the arrival; losses in transit stay his (the share is not given back)', async () => {
-    const bad = await api(t.app).post(`/api/projects/${s.projectId}/entries/${handOver.id}/confirm`).set('Authorization', s.tomasz.bearer).send({ arrivedAlive: 9, arrivedDead: 2 });
+    const bad = await api(t.app)
+      .post(`/api/projects/${s.projectId}/entries/${handOver.id}/confirm`)
+      .set('Authorization', s.tomasz.bearer)
+      .send({ arrivedAlive: 9, arrivedDead: 2 });
     expect(bad.status).toBe(400);
     expect(bad.body.message).toBe('The hand-over was of 10 young; arrived alive and arrived dead must add up to 10 (got 11).');
-    const notHis = await api(t.app).post(`/api/projects/${s.projectId}/entries/${handOver.id}/confirm`).set('Authorization', s.mira.bearer).send({ arrivedAlive: 9, arrivedDead: 1 });
+    const notHis = await api(t.app)
+      .post(`/api/projects/${s.projectId}/entries/${handOver.id}/confirm`)
+      .set('Authorization', s.mira.bearer)
+      .send({ arrivedAlive: 9, arrivedDead: 1 });
     expect(notHis.status).toBe(403);
-    const ok = await api(t.app).post(`/api/projects/${s.projectId}/entries/${handOver.id}/confirm`).set('Authorization', s.tomasz.bearer).send({ arrivedAlive: 9, arrivedDead: 1 });
+    const ok = await api(t.app)
+      .post(`/api/projects/${s.projectId}/entries/${handOver.id}/confirm`)
+      .set('Authorization', s.tomasz.bearer)
+      .send({ arrivedAlive: 9, arrivedDead: 1 });
     expect(ok.status).toBe(201);
     expect(ok.body).toMatchObject({ kind: 'arrival', handOverId: handOver.id, arrivedAlive: 9, arrivedDead: 1 });
     expect(party(await balances(), s.tomaszId)).toMatchObject({ handedOver: 10, owedSpiderlings: 7, arrivedAlive: 9, arrivedDead: 1, unconfirmedHandOvers: 0 });
-    const again = await api(t.app).post(`/api/projects/${s.projectId}/entries/${handOver.id}/confirm`).set('Authorization', s.tomasz.bearer).send({ arrivedAlive: 9, arrivedDead: 1 });
+    const again = await api(t.app)
+      .post(`/api/projects/${s.projectId}/entries/${handOver.id}/confirm`)
+      .set('Authorization', s.tomasz.bearer)
+      .send({ arrivedAlive: 9, arrivedDead: 1 });
     expect(again.status).toBe(409);
   });
 
@@ -86,7 +114,9 @@ describe('balances after every kind of entry', () => {
     await entry({ kind: 'cash-out', date: D, memberId: s.lenaId, count: 4 });
     const b = await balances();
     expect(party(b, s.lenaId)).toMatchObject({ cashedOut: 4, owedSpiderlings: 6, cashOutValueMinor: 2000, moneyOwedToMinor: 2000 });
-    expect(b.debts).toEqual([{ fromPartyId: s.miraId, toPartyId: s.lenaId, amountMinor: 2000, currency: 'EUR', fromName: 'Mira Keeper', toName: 'Lena Outside' }]);
+    expect(b.debts).toEqual([
+      { fromPartyId: s.miraId, toPartyId: s.lenaId, amountMinor: 2000, currency: 'EUR', fromName: 'Mira Keeper', toName: 'Lena Outside' },
+    ]);
   });
 
   it('the owner records a payment to a party without an account: it counts at once', async () => {
@@ -195,7 +225,11 @@ describe('bad input and who may do what', () => {
 
   it('the hand-over form lists what each party is still owed and the shipping cautions', async () => {
     const res = await api(t.app).get(`/api/projects/${s.projectId}/entries/hand-over-form`).set('Authorization', s.mira.bearer).expect(200);
-    expect(res.body.parties.map((p: { name: string; owedSpiderlings: number }) => [p.name, p.owedSpiderlings])).toEqual([['Mira Keeper', 29], ['Tomasz Partner', 4], ['Lena Outside', 5]]);
+    expect(res.body.parties.map((p: { name: string; owedSpiderlings: number }) => [p.name, p.owedSpiderlings])).toEqual([
+      ['Mira Keeper', 29],
+      ['Tomasz Partner', 4],
+      ['Lena Outside', 5],
+    ]);
     expect(res.body.shippingCautions.join(' ')).toMatch(/overnight/i);
     expect(res.body.shippingCautions.join(' ')).toMatch(/−4 °C .* 32 °C .* \(25–90 °F\)/);
   });
@@ -208,6 +242,8 @@ describe('reinstating an entry', () => {
     await entry({ kind: 'hand-over', date: D, memberId: s.tomaszId, count: 4, method: 'pick-up' }); // Tomasz: 17 − 10 − 3 − 4 = 0 owed
     const res = await post({ kind: 'correction', date: D, reversesId: c.id, reason: 'it was right after all' });
     expect(res.status).toBe(409);
-    expect(res.body.message).toBe('Reinstating that hand-over would take too many young. Tomasz Partner: This is 3 more than the 0 young still owed to this party (share 17; 14 handed over, 0 sold, 3 cashed out).');
+    expect(res.body.message).toBe(
+      'Reinstating that hand-over would take too many young. Tomasz Partner: This is 3 more than the 0 young still owed to this party (share 17; 14 handed over, 0 sold, 3 cashed out).',
+    );
   });
 });

@@ -27,13 +27,20 @@ export interface AccountScenario {
 
 export const api = (app: INestApplication) => request(app.getHttpServer());
 
-export async function proposeAndAccept(app: INestApplication, s: Pick<AccountScenario, 'projectId' | 'mira' | 'tomasz' | 'lenaId'>, body: ProposeTermsRequest): Promise<number> {
+export async function proposeAndAccept(
+  app: INestApplication,
+  s: Pick<AccountScenario, 'projectId' | 'mira' | 'tomasz' | 'lenaId'>,
+  body: ProposeTermsRequest,
+): Promise<number> {
   const res = await api(app).post(`/api/projects/${s.projectId}/terms`).set('Authorization', s.mira.bearer).send(body);
   if (res.status !== 201) throw new Error(`propose terms answered ${res.status}: ${JSON.stringify(res.body)}`);
   const version = (res.body as { number: number }).number;
   const a = await api(app).post(`/api/projects/${s.projectId}/terms/${version}/accept`).set('Authorization', s.tomasz.bearer).send({});
   if (a.status >= 300) throw new Error(`accept answered ${a.status}: ${JSON.stringify(a.body)}`);
-  const b = await api(app).post(`/api/projects/${s.projectId}/terms/${version}/accept`).set('Authorization', s.mira.bearer).send({ memberId: s.lenaId, note: 'Agreed by phone.' });
+  const b = await api(app)
+    .post(`/api/projects/${s.projectId}/terms/${version}/accept`)
+    .set('Authorization', s.mira.bearer)
+    .send({ memberId: s.lenaId, note: 'Agreed by phone.' });
   if (b.status >= 300) throw new Error(`accept for Lena answered ${b.status}: ${JSON.stringify(b.body)}`);
   return version;
 }

@@ -14,11 +14,16 @@ const http = () => request(t.app.getHttpServer());
 const BOM = '\uFEFF';
 
 async function exportCsv(who: SignedIn): Promise<{ text: string; bytes: Buffer; type: string }> {
-  const res = await http().get('/api/animals/export.csv').set('Authorization', who.bearer).buffer(true).parse((r, cb) => {
-    const chunks: Buffer[] = [];
-    r.on('data', (c: Buffer) => chunks.push(c));
-    r.on('end', () => cb(null, Buffer.concat(chunks)));
-  }).expect(200);
+  const res = await http()
+    .get('/api/animals/export.csv')
+    .set('Authorization', who.bearer)
+    .buffer(true)
+    .parse((r, cb) => {
+      const chunks: Buffer[] = [];
+      r.on('data', (c: Buffer) => chunks.push(c));
+      r.on('end', () => cb(null, Buffer.concat(chunks)));
+    })
+    .expect(200);
   const bytes = res.body as Buffer;
   return { bytes, text: bytes.toString('utf8'), type: res.headers['content-type'] };
 }
@@ -39,8 +44,16 @@ beforeAll(async () => {
   today = todayIn('UTC', new Date());
   for (const [i, notes] of TRICKY.entries()) {
     await createAnimal(t.app, mira, {
-      speciesId: vagans, label: `RT-${i}`, sex: i % 2 ? 'male' : 'female', maturity: i % 2 ? 'mature' : 'immature',
-      maturedOn: i % 2 ? addDays(today, -30 * i) : null, acquiredOn: addDays(today, -400), pricePaidMinor: 1250 * i, priceCurrency: 'EUR', notes, enclosure: `E,${i}`,
+      speciesId: vagans,
+      label: `RT-${i}`,
+      sex: i % 2 ? 'male' : 'female',
+      maturity: i % 2 ? 'mature' : 'immature',
+      maturedOn: i % 2 ? addDays(today, -30 * i) : null,
+      acquiredOn: addDays(today, -400),
+      pricePaidMinor: 1250 * i,
+      priceCurrency: 'EUR',
+      notes,
+      enclosure: `E,${i}`,
     });
   }
 });
@@ -63,7 +76,16 @@ describe('CSV export (RFC 4180, checked with papaparse as an independent parser)
     // the product trims spaces around typed text
     expect(parsed.data.map((r) => r.notes)).toEqual(TRICKY.map((n) => n.trim()));
     expect(parsed.data.map((r) => r.enclosure)).toEqual(TRICKY.map((_, i) => `E,${i}`));
-    expect(parsed.data[1]).toMatchObject({ label: 'RT-1', species: 'Tliltocatl vagans', speciesId: vagans, sex: 'male', maturity: 'mature', maturedOn: addDays(today, -30), pricePaidMinor: '1250', priceCurrency: 'EUR' });
+    expect(parsed.data[1]).toMatchObject({
+      label: 'RT-1',
+      species: 'Tliltocatl vagans',
+      speciesId: vagans,
+      sex: 'male',
+      maturity: 'mature',
+      maturedOn: addDays(today, -30),
+      pricePaidMinor: '1250',
+      priceCurrency: 'EUR',
+    });
     // §2.7: a quote inside a field is doubled
     expect(body).toContain('"Rack 3, shelf ""top"""');
   });
@@ -81,7 +103,8 @@ describe('CSV export (RFC 4180, checked with papaparse as an independent parser)
 describe('CSV import', () => {
   it('reads RFC 4180 edge cases written by hand, with a BOM, and species by a former name', async () => {
     const keeper = await registerKeeper(t.app, 'Hand Written');
-    const text = `${BOM}label,species,sex,notes,enclosure\r\n` +
+    const text =
+      `${BOM}label,species,sex,notes,enclosure\r\n` +
       `"HW-1",Brachypelma vagans,female,"comma, inside",A1\r\n` +
       `HW-2,Tliltocatl vagans,male,"she said ""wait""",A2\r\n` +
       `HW-3,Avicularia versicolor,unsexed,"two\r\nlines",A3\r\n` +
@@ -105,7 +128,12 @@ describe('CSV import', () => {
 
   it('accepts a text/csv body as well as a multipart file', async () => {
     const keeper = await registerKeeper(t.app, 'Body Sender');
-    await http().post('/api/animals/import').set('Authorization', keeper.bearer).set('Content-Type', 'text/csv').send('label,species,sex\nTB-1,Poecilotheria regalis,female\n').expect(201);
+    await http()
+      .post('/api/animals/import')
+      .set('Authorization', keeper.bearer)
+      .set('Content-Type', 'text/csv')
+      .send('label,species,sex\nTB-1,Poecilotheria regalis,female\n')
+      .expect(201);
     expect(await labels(keeper)).toEqual(['TB-1']);
   });
 
@@ -149,8 +177,11 @@ describe('CSV import', () => {
     expect(unknown.body.details).toEqual([{ field: 'line 2', message: '"colour" is not a column this import knows.' }]);
     const broken = await importCsv(keeper, 'label,species,sex\n"OF-2,Tliltocatl vagans,female\n').expect(400);
     expect(broken.body.message).toMatch(/not valid CSV/);
-    const latin1 = await http().post('/api/animals/import').set('Authorization', keeper.bearer)
-      .attach('file', Buffer.from('label,species,sex\nOF-3,Tliltocatl vagans,female,H\xe9naut\n', 'latin1'), 'old.csv').expect(400);
+    const latin1 = await http()
+      .post('/api/animals/import')
+      .set('Authorization', keeper.bearer)
+      .attach('file', Buffer.from('label,species,sex\nOF-3,Tliltocatl vagans,female,H\xe9naut\n', 'latin1'), 'old.csv')
+      .expect(400);
     expect(latin1.body.message).toMatch(/not UTF-8/);
     expect(await labels(keeper)).toEqual([]);
   });

@@ -27,10 +27,21 @@ afterAll(async () => {
 describe('molts', () => {
   it('a maturing molt on a male sets his maturity date and starts his clock', async () => {
     const m = await createAnimal(t.app, mira, { speciesId: species, label: 'GP-M1', sex: 'male' });
-    const res = await molt(mira, m.id, { moltedOn: addDays(today, -10), maturing: true, sizeCm: 12.5, exuviaSex: 'male', notes: 'Tibial hooks and bulbs visible' }).expect(201);
+    const res = await molt(mira, m.id, {
+      moltedOn: addDays(today, -10),
+      maturing: true,
+      sizeCm: 12.5,
+      exuviaSex: 'male',
+      notes: 'Tibial hooks and bulbs visible',
+    }).expect(201);
     expect(res.body).toMatchObject({ moltedOn: addDays(today, -10), maturing: true, sizeCm: 12.5, exuviaSex: 'male', photos: [] });
     const after = await http().get(`/api/animals/${m.id}`).set('Authorization', mira.bearer).expect(200);
-    expect(after.body).toMatchObject({ maturity: 'mature', maturedOn: addDays(today, -10), lastMoltOn: addDays(today, -10), maleClock: { state: 'fresh', daysSinceMaturing: 10 } });
+    expect(after.body).toMatchObject({
+      maturity: 'mature',
+      maturedOn: addDays(today, -10),
+      lastMoltOn: addDays(today, -10),
+      maleClock: { state: 'fresh', daysSinceMaturing: 10 },
+    });
   });
 
   it('a molt in the future is a 400 with a field message', async () => {

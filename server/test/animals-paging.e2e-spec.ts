@@ -18,7 +18,14 @@ const SPECIES = ['Tliltocatl vagans', 'Caribena versicolor', 'Poecilotheria rega
 const ids: Record<string, string> = {};
 const http = () => request(t.app.getHttpServer());
 
-interface Row { label: string; species: string; sex: string; status: string; mature: boolean; enclosure: string }
+interface Row {
+  label: string;
+  species: string;
+  sex: string;
+  status: string;
+  mature: boolean;
+  enclosure: string;
+}
 const rows: Row[] = [];
 
 async function page(query: Record<string, string | number | boolean>): Promise<Paged<AnimalSummary>> {
@@ -46,9 +53,16 @@ beforeAll(async () => {
     };
     rows.push(r);
     em.create(Animal, {
-      recordedBy: owner, ownerUser: owner, species: em.getReference(Species, ids[r.species]), label: r.label, sex: r.sex as never,
-      status: r.status as never, statusOn: r.status === 'active' ? null : today, maturity: r.mature ? 'mature' : 'immature',
-      maturedOn: r.mature && r.sex === 'male' ? addDays(today, -i) : null, enclosure: r.enclosure,
+      recordedBy: owner,
+      ownerUser: owner,
+      species: em.getReference(Species, ids[r.species]),
+      label: r.label,
+      sex: r.sex as never,
+      status: r.status as never,
+      statusOn: r.status === 'active' ? null : today,
+      maturity: r.mature ? 'mature' : 'immature',
+      maturedOn: r.mature && r.sex === 'male' ? addDays(today, -i) : null,
+      enclosure: r.enclosure,
       createdAt: new Date(Date.UTC(2026, 0, 1) + i * 60_000),
     });
   }

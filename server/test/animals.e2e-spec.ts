@@ -29,16 +29,40 @@ afterAll(async () => {
 
 describe('animals CRUD', () => {
   it('creates, reads, edits and deletes an animal of one’s own', async () => {
-    const created = await createAnimal(t.app, mira, { speciesId: vagans, label: 'TV-001', sex: 'female', acquiredOn: addDays(today, -100), pricePaidMinor: 4500, priceCurrency: 'eur' });
+    const created = await createAnimal(t.app, mira, {
+      speciesId: vagans,
+      label: 'TV-001',
+      sex: 'female',
+      acquiredOn: addDays(today, -100),
+      pricePaidMinor: 4500,
+      priceCurrency: 'eur',
+    });
     expect(created).toMatchObject({
-      label: 'TV-001', sex: 'female', maturity: 'immature', status: 'active', custody: 'with-owner', priceCurrency: 'EUR', pricePaidMinor: 4500,
-      owner: { kind: 'self', userId: mira.user.id, name: 'Mira' }, recordedBy: { id: mira.user.id, name: 'Mira' }, editable: true, maleClock: null,
+      label: 'TV-001',
+      sex: 'female',
+      maturity: 'immature',
+      status: 'active',
+      custody: 'with-owner',
+      priceCurrency: 'EUR',
+      pricePaidMinor: 4500,
+      owner: { kind: 'self', userId: mira.user.id, name: 'Mira' },
+      recordedBy: { id: mira.user.id, name: 'Mira' },
+      editable: true,
+      maleClock: null,
       species: { id: vagans, scientificName: 'Tliltocatl vagans', group: 'nw-terrestrial', urticatingHairs: true },
     });
     const got = await http().get(`/api/animals/${created.id}`).set('Authorization', mira.bearer).expect(200);
     expect(got.body).toEqual(created);
-    const patched = await http().patch(`/api/animals/${created.id}`).set('Authorization', mira.bearer).send({ enclosure: 'Rack B2', maturity: 'mature', premoltNote: 'Dark abdomen, refusing food' }).expect(200);
-    expect(patched.body).toMatchObject({ enclosure: 'Rack B2', maturity: 'mature', readiness: { state: 'no-molt-recorded', lastMoltOn: null, premoltNote: 'Dark abdomen, refusing food' } });
+    const patched = await http()
+      .patch(`/api/animals/${created.id}`)
+      .set('Authorization', mira.bearer)
+      .send({ enclosure: 'Rack B2', maturity: 'mature', premoltNote: 'Dark abdomen, refusing food' })
+      .expect(200);
+    expect(patched.body).toMatchObject({
+      enclosure: 'Rack B2',
+      maturity: 'mature',
+      readiness: { state: 'no-molt-recorded', lastMoltOn: null, premoltNote: 'Dark abdomen, refusing food' },
+    });
     await http().delete(`/api/animals/${created.id}`).set('Authorization', mira.bearer).expect(204);
     await http().get(`/api/animals/${created.id}`).set('Authorization', mira.bearer).expect(404);
   });
@@ -75,7 +99,14 @@ describe('clear 400s with field messages', () => {
   });
 
   it('a maturity date before the acquisition date', async () => {
-    const res = await post({ speciesId: vagans, label: 'X-2', sex: 'male', maturity: 'mature', maturedOn: addDays(today, -30), acquiredOn: addDays(today, -10) });
+    const res = await post({
+      speciesId: vagans,
+      label: 'X-2',
+      sex: 'male',
+      maturity: 'mature',
+      maturedOn: addDays(today, -30),
+      acquiredOn: addDays(today, -10),
+    });
     expect(res.body.details).toEqual([{ field: 'maturedOn', message: expect.stringMatching(/before the acquisition date/) }]);
   });
 
@@ -111,18 +142,38 @@ describe('owner and custody', () => {
   it('a male owned by another keeper, on loan to me, with a due-back date', async () => {
     const lender = await registerKeeper(t.app, 'Lender');
     const a = await createAnimal(t.app, mira, {
-      speciesId: regalis, label: 'PR-LOAN', sex: 'male', maturity: 'mature', maturedOn: addDays(today, -60),
-      ownerKind: 'keeper', ownerEmail: lender.user.email, custody: 'loan-in', dueBackOn: addDays(today, 60),
+      speciesId: regalis,
+      label: 'PR-LOAN',
+      sex: 'male',
+      maturity: 'mature',
+      maturedOn: addDays(today, -60),
+      ownerKind: 'keeper',
+      ownerEmail: lender.user.email,
+      custody: 'loan-in',
+      dueBackOn: addDays(today, 60),
     });
-    expect(a).toMatchObject({ owner: { kind: 'keeper', userId: lender.user.id, name: 'Lender' }, custody: 'loan-in', custodyParty: 'Lender', dueBackOn: addDays(today, 60) });
+    expect(a).toMatchObject({
+      owner: { kind: 'keeper', userId: lender.user.id, name: 'Lender' },
+      custody: 'loan-in',
+      custodyParty: 'Lender',
+      dueBackOn: addDays(today, 60),
+    });
     // the owner does not see the record: it lives in the holder's collection
     await http().get(`/api/animals/${a.id}`).set('Authorization', lender.bearer).expect(404);
   });
 
   it('refuses a loan-in owned by myself and an unknown keeper e-mail', async () => {
-    const selfLoan = await http().post('/api/animals').set('Authorization', mira.bearer).send({ speciesId: regalis, label: 'PR-X', sex: 'male', custody: 'loan-in' }).expect(400);
+    const selfLoan = await http()
+      .post('/api/animals')
+      .set('Authorization', mira.bearer)
+      .send({ speciesId: regalis, label: 'PR-X', sex: 'male', custody: 'loan-in' })
+      .expect(400);
     expect(selfLoan.body.details).toContainEqual({ field: 'custody', message: expect.stringMatching(/belongs to someone else/) });
-    const unknown = await http().post('/api/animals').set('Authorization', mira.bearer).send({ speciesId: regalis, label: 'PR-X', sex: 'male', ownerKind: 'keeper', ownerEmail: 'nobody@example.test' }).expect(400);
+    const unknown = await http()
+      .post('/api/animals')
+      .set('Authorization', mira.bearer)
+      .send({ speciesId: regalis, label: 'PR-X', sex: 'male', ownerKind: 'keeper', ownerEmail: 'nobody@example.test' })
+      .expect(400);
     expect(unknown.body.details).toEqual([{ field: 'ownerEmail', message: expect.stringMatching(/No keeper of this instance/) }]);
   });
 
@@ -144,7 +195,13 @@ describe('male clock in responses', () => {
     [200, 'late'],
     [420, 'past-typical'],
   ])('a male matured %i days ago is %s', async (days, state) => {
-    const a = await createAnimal(t.app, mira, { speciesId: regalis, label: `PR-CLOCK-${days}`, sex: 'male', maturity: 'mature', maturedOn: addDays(today, -days) });
+    const a = await createAnimal(t.app, mira, {
+      speciesId: regalis,
+      label: `PR-CLOCK-${days}`,
+      sex: 'male',
+      maturity: 'mature',
+      maturedOn: addDays(today, -days),
+    });
     expect(a.maleClock).toMatchObject({ daysSinceMaturing: days, state, maturedOn: addDays(today, -days), lifespanMonths: { min: 4, max: 12, from: 'group' } });
   });
 

@@ -19,9 +19,12 @@ describe('sign-in rate limit', () => {
     const http = () => request(t.app.getHttpServer());
     const statuses: number[] = [];
     for (let i = 0; i < 5; i++) {
-      const res = await http().post('/api/auth/login').send({ email: 'someone@example.test', password: `guess number ${i}` });
+      const res = await http()
+        .post('/api/auth/login')
+        .send({ email: 'someone@example.test', password: `guess number ${i}` });
       statuses.push(res.status);
-      if (res.status === 429) expect(res.body).toEqual({ statusCode: 429, error: 'Too Many Requests', message: 'Too many attempts. Wait a minute and try again.' });
+      if (res.status === 429)
+        expect(res.body).toEqual({ statusCode: 429, error: 'Too Many Requests', message: 'Too many attempts. Wait a minute and try again.' });
     }
     expect(statuses).toEqual([401, 401, 401, 429, 429]);
     // Routes outside sign-in are not limited by it.

@@ -27,7 +27,13 @@ describe('register → login → me → logout', () => {
       .post('/api/auth/register')
       .send({ email: '  Ada.Keeper@Example.test ', password: 'long enough pass', displayName: 'Ada', timeZone: 'Europe/Vienna' })
       .expect(201);
-    expect(reg.body.user).toMatchObject({ email: 'ada.keeper@example.test', displayName: 'Ada', role: 'keeper', timeZone: 'Europe/Vienna', temperatureUnit: 'C' });
+    expect(reg.body.user).toMatchObject({
+      email: 'ada.keeper@example.test',
+      displayName: 'Ada',
+      role: 'keeper',
+      timeZone: 'Europe/Vienna',
+      temperatureUnit: 'C',
+    });
 
     const res = await http().post('/api/auth/login').send({ email: 'ada.keeper@example.test', password: 'long enough pass' }).expect(200);
     const cookie = cookieFrom(res, SESSION_COOKIE)!;
@@ -37,7 +43,14 @@ describe('register → login → me → logout', () => {
     const token = res.body.accessToken as string;
 
     const me = await http().get('/api/auth/me').set('Authorization', `Bearer ${token}`).expect(200);
-    expect(me.body).toEqual({ id: reg.body.user.id, email: 'ada.keeper@example.test', displayName: 'Ada', role: 'keeper', timeZone: 'Europe/Vienna', temperatureUnit: 'C' });
+    expect(me.body).toEqual({
+      id: reg.body.user.id,
+      email: 'ada.keeper@example.test',
+      displayName: 'Ada',
+      role: 'keeper',
+      timeZone: 'Europe/Vienna',
+      temperatureUnit: 'C',
+    });
 
     await http().post('/api/auth/logout').set('Authorization', `Bearer ${token}`).expect(204);
     const after = await http().get('/api/auth/me').set('Authorization', `Bearer ${token}`).expect(401);
@@ -68,7 +81,10 @@ describe('refusals', () => {
 
   it('a duplicate e-mail is 409', async () => {
     const k = await registerKeeper(t.app);
-    const res = await http().post('/api/auth/register').send({ email: k.user.email.toUpperCase(), password: 'another long one', displayName: 'Twin' }).expect(409);
+    const res = await http()
+      .post('/api/auth/register')
+      .send({ email: k.user.email.toUpperCase(), password: 'another long one', displayName: 'Twin' })
+      .expect(409);
     expect(res.body.message).toMatch(/already exists/);
   });
 
@@ -78,8 +94,15 @@ describe('refusals', () => {
   });
 
   it('an unknown field is 400 and named', async () => {
-    const res = await http().post('/api/auth/register').send({ email: 'x@example.test', password: 'long enough pass', displayName: 'X', role: 'admin' }).expect(400);
-    expect(res.body).toMatchObject({ statusCode: 400, error: 'Bad Request', details: [{ field: 'role', message: '"role" is not a field this form accepts.' }] });
+    const res = await http()
+      .post('/api/auth/register')
+      .send({ email: 'x@example.test', password: 'long enough pass', displayName: 'X', role: 'admin' })
+      .expect(400);
+    expect(res.body).toMatchObject({
+      statusCode: 400,
+      error: 'Bad Request',
+      details: [{ field: 'role', message: '"role" is not a field this form accepts.' }],
+    });
   });
 
   it('an admin-only route refuses a keeper (403) and an anonymous caller (401), and lets an admin in', async () => {
@@ -99,8 +122,16 @@ describe('refusals', () => {
 describe('password change and reset', () => {
   it('changing the password needs the current one and ends older sessions', async () => {
     const k = await registerKeeper(t.app);
-    await http().patch('/api/users/me/password').set('Authorization', k.bearer).send({ currentPassword: 'wrong wrong wrong', newPassword: 'brand new password' }).expect(400);
-    const res = await http().patch('/api/users/me/password').set('Authorization', k.bearer).send({ currentPassword: k.password, newPassword: 'brand new password' }).expect(200);
+    await http()
+      .patch('/api/users/me/password')
+      .set('Authorization', k.bearer)
+      .send({ currentPassword: 'wrong wrong wrong', newPassword: 'brand new password' })
+      .expect(400);
+    const res = await http()
+      .patch('/api/users/me/password')
+      .set('Authorization', k.bearer)
+      .send({ currentPassword: k.password, newPassword: 'brand new password' })
+      .expect(200);
     await http().get('/api/auth/me').set('Authorization', k.bearer).expect(401);
     await http().get('/api/auth/me').set('Authorization', `Bearer ${res.body.accessToken}`).expect(200);
     await login(t.app, k.user.email, 'brand new password');

@@ -14,15 +14,30 @@ let owner: SignedIn;
 let partner: SignedIn;
 let projectId: string;
 const http = () => request(t.app.getHttpServer());
-const feedOf = async (who: SignedIn): Promise<CalendarFeedResponse> => (await http().get('/api/calendar/feed').set('Authorization', who.bearer).expect(200)).body;
+const feedOf = async (who: SignedIn): Promise<CalendarFeedResponse> =>
+  (await http().get('/api/calendar/feed').set('Authorization', who.bearer).expect(200)).body;
 
-interface Parsed { uid: string; start: string; end: string; isDate: boolean; summary: string; description: string }
+interface Parsed {
+  uid: string;
+  start: string;
+  end: string;
+  isDate: boolean;
+  summary: string;
+  description: string;
+}
 /** Parsed with ical.js, an independent RFC 5545 parser. */
 function parse(text: string): Parsed[] {
   const cal = new ICAL.Component(ICAL.parse(text));
   return cal.getAllSubcomponents('vevent').map((v) => {
     const e = new ICAL.Event(v);
-    return { uid: e.uid, start: e.startDate.toString(), end: e.endDate.toString(), isDate: e.startDate.isDate && e.endDate.isDate, summary: e.summary, description: e.description };
+    return {
+      uid: e.uid,
+      start: e.startDate.toString(),
+      end: e.endDate.toString(),
+      isDate: e.startDate.isDate && e.endDate.isDate,
+      summary: e.summary,
+      description: e.description,
+    };
   });
 }
 
@@ -57,7 +72,11 @@ describe('calendar feed (RFC 5545)', () => {
     expect(DateTime.fromISO('2024-02-05').plus({ days: 21 }).toISODate()).toBe(pull.start);
 
     const legs = events.find((e) => e.uid === `eggs-with-legs-${sac.id}@broodsilk`)!;
-    expect(legs).toMatchObject({ start: DateTime.fromISO('2024-02-05').plus({ days: 20 }).toISODate(), end: DateTime.fromISO('2024-02-05').plus({ days: 26 }).toISODate(), isDate: true });
+    expect(legs).toMatchObject({
+      start: DateTime.fromISO('2024-02-05').plus({ days: 20 }).toISODate(),
+      end: DateTime.fromISO('2024-02-05').plus({ days: 26 }).toISODate(),
+      isDate: true,
+    });
     expect(legs.description).toMatch(/medium confidence/);
     const young = events.find((e) => e.uid === `free-living-${sac.id}@broodsilk`)!;
     expect([young.start, young.end]).toEqual([42, 57].map((d) => DateTime.fromISO('2024-02-05').plus({ days: d }).toISODate())); // day 42 to day 56 inclusive
@@ -68,9 +87,19 @@ describe('calendar feed (RFC 5545)', () => {
     for (const e of clock) expect(DateTime.fromISO(e.end).diff(DateTime.fromISO(e.start), 'days').days).toBe(1);
 
     // Stable UIDs: a second fetch gives the same set.
-    expect(parse((await http().get(feed.path).expect(200)).text).map((e) => e.uid).sort()).toEqual(events.map((e) => e.uid).sort());
+    expect(
+      parse((await http().get(feed.path).expect(200)).text)
+        .map((e) => e.uid)
+        .sort(),
+    ).toEqual(events.map((e) => e.uid).sort());
     // A partner's own feed shows the project's sac, but not the owner's male.
-    const theirs = parse((await http().get((await feedOf(partner)).path).expect(200)).text);
+    const theirs = parse(
+      (
+        await http()
+          .get((await feedOf(partner)).path)
+          .expect(200)
+      ).text,
+    );
     expect(theirs.map((e) => e.uid)).toContain(`pull-window-${sac.id}@broodsilk`);
     expect(theirs.some((e) => e.uid.startsWith('male-clock-'))).toBe(false);
   });

@@ -143,7 +143,15 @@ describe('who writes the log', () => {
     const entries = (await http().get(`/api/sacs/${sac.id}/log`).set('Authorization', partner.bearer).expect(200)).body as CareLogEntryResponse[];
     expect(entries.map((e) => e.kind)).toEqual(['roll', 'check']);
     expect(entries[0].author).toEqual({ id: caretaker.user.id, name: 'Cleo' });
-    const timeline = (await http().get(`/api/projects/${projectId}/activity`).set('Authorization', owner.bearer)).body as { kind: string; subject: { id: string } }[];
-    expect(timeline.filter((e) => e.subject.id === sac.id).map((e) => e.kind).sort()).toEqual(['care.check', 'care.roll', 'sac.laid']);
+    const timeline = (await http().get(`/api/projects/${projectId}/activity`).set('Authorization', owner.bearer)).body as {
+      kind: string;
+      subject: { id: string };
+    }[];
+    expect(
+      timeline
+        .filter((e) => e.subject.id === sac.id)
+        .map((e) => e.kind)
+        .sort(),
+    ).toEqual(['care.check', 'care.roll', 'sac.laid']);
   });
 });

@@ -40,7 +40,11 @@ async function tokenFromMail(to: string, title: string, not?: string): Promise<s
 describe('invitations', () => {
   it('an e-mailed link shows the project, joins the invited keeper once, and then stops working', async () => {
     const p = await createProject(t.app, t.orm, mira, { title: `Invite test ${Date.now()}` });
-    const res = await http().post(`/api/projects/${p.id}/invitations`).set('Authorization', mira.bearer).send({ email: tomasz.user.email, role: 'partner' }).expect(201);
+    const res = await http()
+      .post(`/api/projects/${p.id}/invitations`)
+      .set('Authorization', mira.bearer)
+      .send({ email: tomasz.user.email, role: 'partner' })
+      .expect(201);
     expect(res.body).toMatchObject({ email: tomasz.user.email.toLowerCase(), role: 'partner', memberId: null });
     const mail = await waitForMail(tomasz.user.email, new RegExp(p.title));
     expect(mail.subject).toBe(`Mira invites you to the breeding project "${p.title}"`);
@@ -79,11 +83,27 @@ describe('invitations', () => {
   it('a re-send replaces the old link; accepting links the outside party to the account', async () => {
     const p = await createProject(t.app, t.orm, mira, { title: `Resend test ${Date.now()}` });
     const invitee = await registerKeeper(t.app, 'Jonas');
-    const party = await http().post(`/api/projects/${p.id}/members`).set('Authorization', mira.bearer).send({ name: 'Jonas (lends the male)', email: invitee.user.email, role: 'partner' }).expect(201);
-    await http().post(`/api/projects/${p.id}/invitations`).set('Authorization', mira.bearer).send({ email: invitee.user.email, role: 'caretaker', memberId: party.body.id }).expect(400);
-    await http().post(`/api/projects/${p.id}/invitations`).set('Authorization', mira.bearer).send({ email: invitee.user.email, role: 'partner', memberId: party.body.id }).expect(201);
+    const party = await http()
+      .post(`/api/projects/${p.id}/members`)
+      .set('Authorization', mira.bearer)
+      .send({ name: 'Jonas (lends the male)', email: invitee.user.email, role: 'partner' })
+      .expect(201);
+    await http()
+      .post(`/api/projects/${p.id}/invitations`)
+      .set('Authorization', mira.bearer)
+      .send({ email: invitee.user.email, role: 'caretaker', memberId: party.body.id })
+      .expect(400);
+    await http()
+      .post(`/api/projects/${p.id}/invitations`)
+      .set('Authorization', mira.bearer)
+      .send({ email: invitee.user.email, role: 'partner', memberId: party.body.id })
+      .expect(201);
     const first = await tokenFromMail(invitee.user.email, p.title);
-    await http().post(`/api/projects/${p.id}/invitations`).set('Authorization', mira.bearer).send({ email: invitee.user.email, role: 'partner', memberId: party.body.id }).expect(201);
+    await http()
+      .post(`/api/projects/${p.id}/invitations`)
+      .set('Authorization', mira.bearer)
+      .send({ email: invitee.user.email, role: 'partner', memberId: party.body.id })
+      .expect(201);
     const second = await tokenFromMail(invitee.user.email, p.title, first);
     expect(second).not.toBe(first);
     const old = await http().post(`/api/invitations/${first}/accept`).set('Authorization', invitee.bearer).expect(410);
@@ -98,8 +118,15 @@ describe('invitations', () => {
     const p = await createProject(t.app, t.orm, mira, { title: `Owner only ${Date.now()}` });
     const partner = await registerKeeper(t.app, 'Partner');
     await http().post(`/api/projects/${p.id}/invitations`).set('Authorization', mira.bearer).send({ email: partner.user.email, role: 'partner' }).expect(201);
-    await http().post(`/api/invitations/${await tokenFromMail(partner.user.email, p.title)}/accept`).set('Authorization', partner.bearer).expect(200);
-    const res = await http().post(`/api/projects/${p.id}/invitations`).set('Authorization', partner.bearer).send({ email: 'friend@example.test', role: 'caretaker' }).expect(403);
+    await http()
+      .post(`/api/invitations/${await tokenFromMail(partner.user.email, p.title)}/accept`)
+      .set('Authorization', partner.bearer)
+      .expect(200);
+    const res = await http()
+      .post(`/api/projects/${p.id}/invitations`)
+      .set('Authorization', partner.bearer)
+      .send({ email: 'friend@example.test', role: 'caretaker' })
+      .expect(403);
     expect(res.body.message).toMatch(/Only the owner/);
     await http().post(`/api/projects/${p.id}/invitations`).set('Authorization', mira.bearer).send({ email: partner.user.email, role: 'partner' }).expect(409);
     const bad = await http().post(`/api/projects/${p.id}/invitations`).set('Authorization', mira.bearer).send({ email: 'nope', role: 'owner' }).expect(400);

@@ -24,8 +24,11 @@ afterAll(async () => t?.close());
 /** Tomasz's share is 17 (see accounts.fixtures); hand over 14 first so 3 are still owed. */
 async function scenarioOwingThree(): Promise<AccountScenario> {
   const s = await accountScenario(t.app, t.orm);
-  await api(t.app).post(`/api/projects/${s.projectId}/entries`).set('Authorization', s.mira.bearer)
-    .send({ kind: 'hand-over', date: '2026-11-20', memberId: s.tomaszId, count: 14, method: 'pick-up' }).expect(201);
+  await api(t.app)
+    .post(`/api/projects/${s.projectId}/entries`)
+    .set('Authorization', s.mira.bearer)
+    .send({ kind: 'hand-over', date: '2026-11-20', memberId: s.tomaszId, count: 14, method: 'pick-up' })
+    .expect(201);
   return s;
 }
 

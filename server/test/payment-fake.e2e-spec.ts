@@ -184,9 +184,16 @@ function signatureOf(headers: IncomingHttpHeaders): string {
 
 describe('payment fake: API keys', () => {
   it('refuses a wrong key through the SDK and a missing key with the provider error shape', async () => {
-    const wrong = new Stripe('sk_test_not_the_right_key', stripeClientOptions(readPaymentsConfig({
-      STRIPE_API_HOST: '127.0.0.1', STRIPE_API_PORT: String(fake.port), STRIPE_API_PROTOCOL: 'http',
-    })));
+    const wrong = new Stripe(
+      'sk_test_not_the_right_key',
+      stripeClientOptions(
+        readPaymentsConfig({
+          STRIPE_API_HOST: '127.0.0.1',
+          STRIPE_API_PORT: String(fake.port),
+          STRIPE_API_PROTOCOL: 'http',
+        }),
+      ),
+    );
     const refused = await wrong.accounts.create({ type: 'express' }).then(
       () => null,
       (err: unknown) => err,
@@ -268,7 +275,10 @@ describe('payment fake: connected accounts and onboarding', () => {
   it('leaving onboarding unfinished returns to return_url with nothing enabled and no event', async () => {
     const account = await stripe.accounts.create({ type: 'express', country: 'GB' });
     const link = await stripe.accountLinks.create({
-      account: account.id, type: 'account_onboarding', refresh_url: `${APP}/r`, return_url: `${APP}/back`,
+      account: account.id,
+      type: 'account_onboarding',
+      refresh_url: `${APP}/r`,
+      return_url: `${APP}/back`,
     });
     const left = await pressOnboardingButton(link.url, 'Leave without finishing');
     expect(left.status).toBe(303);
@@ -278,7 +288,10 @@ describe('payment fake: connected accounts and onboarding', () => {
   });
 
   it('answers an unknown account with 404 resource_missing', async () => {
-    const err = await stripe.accounts.retrieve('acct_0000000000000000').then(() => null, (e: unknown) => e);
+    const err = await stripe.accounts.retrieve('acct_0000000000000000').then(
+      () => null,
+      (e: unknown) => e,
+    );
     expect(err).toBeInstanceOf(Stripe.errors.StripeInvalidRequestError);
     expect(err).toMatchObject({ statusCode: 404, code: 'resource_missing', param: 'id' });
 
@@ -293,12 +306,18 @@ describe('payment fake: checkout with a destination charge', () => {
     const fresh = await stripe.accounts.create({ type: 'express', country: 'DE' });
     const before = fake.state.checkoutSessions.size;
 
-    const notReady = await stripe.checkout.sessions.create(checkoutParams(fresh.id)).then(() => null, (e: unknown) => e);
+    const notReady = await stripe.checkout.sessions.create(checkoutParams(fresh.id)).then(
+      () => null,
+      (e: unknown) => e,
+    );
     expect(notReady).toBeInstanceOf(Stripe.errors.StripeInvalidRequestError);
     expect(notReady).toMatchObject({ statusCode: 400, param: 'payment_intent_data[transfer_data][destination]' });
     expect((notReady as Error).message).toContain('has not completed onboarding');
 
-    const unknown = await stripe.checkout.sessions.create(checkoutParams('acct_nobodyhere000000')).then(() => null, (e: unknown) => e);
+    const unknown = await stripe.checkout.sessions.create(checkoutParams('acct_nobodyhere000000')).then(
+      () => null,
+      (e: unknown) => e,
+    );
     expect(unknown).toMatchObject({ statusCode: 400, code: 'resource_missing', param: 'payment_intent_data[transfer_data][destination]' });
 
     expect(fake.state.checkoutSessions.size).toBe(before);
@@ -355,11 +374,20 @@ describe('payment fake: checkout with a destination charge', () => {
     expect(completed).toMatchObject({ id: session.id, status: 'complete', payment_status: 'paid', amount_total: 2800, metadata: session.metadata });
     expect(completed.payment_intent).toMatch(/^pi_/);
 
-    expect(await stripe.checkout.sessions.retrieve(session.id)).toMatchObject({ status: 'complete', payment_status: 'paid', payment_intent: completed.payment_intent });
+    expect(await stripe.checkout.sessions.retrieve(session.id)).toMatchObject({
+      status: 'complete',
+      payment_status: 'paid',
+      payment_intent: completed.payment_intent,
+    });
     const intent = await stripe.paymentIntents.retrieve(completed.payment_intent as string);
     expect(intent).toMatchObject({
-      object: 'payment_intent', amount: 2800, currency: 'eur', status: 'succeeded',
-      application_fee_amount: 150, transfer_data: { destination: account.id }, metadata: { entry: 'cash-9' },
+      object: 'payment_intent',
+      amount: 2800,
+      currency: 'eur',
+      status: 'succeeded',
+      application_fee_amount: 150,
+      transfer_data: { destination: account.id },
+      metadata: { entry: 'cash-9' },
     });
 
     // A second press of "Pay" changes nothing and sends no second event.
@@ -385,18 +413,30 @@ describe('payment fake: checkout with a destination charge', () => {
     const cases: [Stripe.Checkout.SessionCreateParams, string][] = [
       [{ ...base, mode: 'subscription' }, 'mode'],
       [{ ...base, line_items: undefined }, 'line_items'],
-      [{ ...base, line_items: [{ price_data: { currency: 'euro', unit_amount: 100, product_data: { name: 'x' } }, quantity: 1 }] }, 'line_items[0][price_data][currency]'],
-      [{ ...base, line_items: [{ price_data: { currency: 'eur', unit_amount: 12.5, product_data: { name: 'x' } }, quantity: 1 }] }, 'line_items[0][price_data][unit_amount]'],
+      [
+        { ...base, line_items: [{ price_data: { currency: 'euro', unit_amount: 100, product_data: { name: 'x' } }, quantity: 1 }] },
+        'line_items[0][price_data][currency]',
+      ],
+      [
+        { ...base, line_items: [{ price_data: { currency: 'eur', unit_amount: 12.5, product_data: { name: 'x' } }, quantity: 1 }] },
+        'line_items[0][price_data][unit_amount]',
+      ],
       [{ ...base, line_items: [{ price_data: { currency: 'eur', unit_amount: 100, product_data: { name: 'x' } }, quantity: 0 }] }, 'line_items[0][quantity]'],
       [{ ...base, payment_intent_data: { ...base.payment_intent_data, application_fee_amount: 999_999 } }, 'payment_intent_data[application_fee_amount]'],
       [{ ...base, success_url: 'not a url' }, 'success_url'],
     ];
     for (const [params, param] of cases) {
-      const err = await stripe.checkout.sessions.create(params).then(() => null, (e: unknown) => e);
+      const err = await stripe.checkout.sessions.create(params).then(
+        () => null,
+        (e: unknown) => e,
+      );
       expect(err, param).toBeInstanceOf(Stripe.errors.StripeInvalidRequestError);
       expect(err, param).toMatchObject({ statusCode: 400, param });
     }
-    const missing = await stripe.checkout.sessions.retrieve('cs_test_missing').then(() => null, (e: unknown) => e);
+    const missing = await stripe.checkout.sessions.retrieve('cs_test_missing').then(
+      () => null,
+      (e: unknown) => e,
+    );
     expect(missing).toMatchObject({ statusCode: 404, code: 'resource_missing' });
   });
 });
@@ -414,13 +454,21 @@ describe('payment fake: webhook signatures', () => {
 
     const tampered = delivery.raw.replace('"amount_total": 900', '"amount_total": 1');
     expect(tampered).not.toBe(delivery.raw);
-    expect(() => stripe.webhooks.constructEvent(tampered, header, WEBHOOK_SECRET, 300, undefined, at(t))).toThrow(Stripe.errors.StripeSignatureVerificationError);
-    expect(() => stripe.webhooks.constructEvent(delivery.raw, header, 'whsec_someone_else_entirely', 300, undefined, at(t))).toThrow(Stripe.errors.StripeSignatureVerificationError);
+    expect(() => stripe.webhooks.constructEvent(tampered, header, WEBHOOK_SECRET, 300, undefined, at(t))).toThrow(
+      Stripe.errors.StripeSignatureVerificationError,
+    );
+    expect(() => stripe.webhooks.constructEvent(delivery.raw, header, 'whsec_someone_else_entirely', 300, undefined, at(t))).toThrow(
+      Stripe.errors.StripeSignatureVerificationError,
+    );
 
     // Tolerance: 299 s old is fine, 301 s old is refused, with the default tolerance (300 s) too.
     expect(stripe.webhooks.constructEvent(delivery.raw, header, WEBHOOK_SECRET, 300, undefined, at(t + 299)).id).toBe(delivery.json.id);
-    expect(() => stripe.webhooks.constructEvent(delivery.raw, header, WEBHOOK_SECRET, 300, undefined, at(t + 301))).toThrow('Timestamp outside the tolerance zone');
-    expect(() => stripe.webhooks.constructEvent(delivery.raw, header, WEBHOOK_SECRET, undefined, undefined, at(t + 301))).toThrow('Timestamp outside the tolerance zone');
+    expect(() => stripe.webhooks.constructEvent(delivery.raw, header, WEBHOOK_SECRET, 300, undefined, at(t + 301))).toThrow(
+      'Timestamp outside the tolerance zone',
+    );
+    expect(() => stripe.webhooks.constructEvent(delivery.raw, header, WEBHOOK_SECRET, undefined, undefined, at(t + 301))).toThrow(
+      'Timestamp outside the tolerance zone',
+    );
   });
 
   it('signs as documented, checked with our own HMAC', async () => {
@@ -465,7 +513,10 @@ describe('payment fake: delivery log, redelivery and retries', () => {
     const log = await (await fetch(`${fake.url}/_fake/events`)).json();
     expect(log.events.map((e: { id: string }) => e.id)).toContain(eventId);
     const sends = log.deliveries.filter((d: { eventId: string }) => d.eventId === eventId);
-    expect(sends.map((d: { redelivery: boolean; ok: boolean }) => [d.redelivery, d.ok])).toEqual([[false, true], [true, true]]);
+    expect(sends.map((d: { redelivery: boolean; ok: boolean }) => [d.redelivery, d.ok])).toEqual([
+      [false, true],
+      [true, true],
+    ]);
 
     expect((await fetch(`${fake.url}/_fake/redeliver/evt_unknown`, { method: 'POST' })).status).toBe(404);
   });
@@ -480,7 +531,10 @@ describe('payment fake: delivery log, redelivery and retries', () => {
     expect(retry.json.id).toBe(first.json.id);
     await fake.whenDeliveriesSettled();
     const attempts = fake.state.deliveries.filter((d) => d.eventId === first.json.id);
-    expect(attempts.map((d) => [d.attempt, d.status, d.ok])).toEqual([[1, 500, false], [2, 200, true]]);
+    expect(attempts.map((d) => [d.attempt, d.status, d.ok])).toEqual([
+      [1, 500, false],
+      [2, 200, true],
+    ]);
   });
 
   it('gives up on a target that is down, still answering the pay page', async () => {
@@ -502,7 +556,11 @@ describe('payment fake: delivery log, redelivery and retries', () => {
     const event = fake.state.events.find((e) => e.type === 'checkout.session.completed' && e.data.object.id === session.id);
     expect(event).toBeDefined();
     const attempts = fake.state.deliveries.filter((d) => d.eventId === event!.id);
-    expect(attempts.map((d) => [d.attempt, d.ok, d.url])).toEqual([[1, false, deadUrl], [2, false, deadUrl], [3, false, deadUrl]]);
+    expect(attempts.map((d) => [d.attempt, d.ok, d.url])).toEqual([
+      [1, false, deadUrl],
+      [2, false, deadUrl],
+      [3, false, deadUrl],
+    ]);
     expect(attempts.every((d) => d.status === null && typeof d.error === 'string')).toBe(true);
     expect(receiver.received.some((r) => r.json.id === event!.id)).toBe(false);
   });
@@ -541,7 +599,11 @@ describe('payment fake: form bodies', () => {
 describe('server payments config and Stripe client factory', () => {
   it('reads host, port and protocol from the environment and leaves them out when unset', () => {
     const local = readPaymentsConfig({
-      STRIPE_SECRET_KEY: 'sk_test_x', STRIPE_WEBHOOK_SECRET: 'whsec_y', STRIPE_API_HOST: '127.0.0.1', STRIPE_API_PORT: '12180', STRIPE_API_PROTOCOL: 'HTTP',
+      STRIPE_SECRET_KEY: 'sk_test_x',
+      STRIPE_WEBHOOK_SECRET: 'whsec_y',
+      STRIPE_API_HOST: '127.0.0.1',
+      STRIPE_API_PORT: '12180',
+      STRIPE_API_PROTOCOL: 'HTTP',
     });
     expect(local).toEqual({ secretKey: 'sk_test_x', webhookSecret: 'whsec_y', apiHost: '127.0.0.1', apiPort: 12180, apiProtocol: 'http', apiVersion: null });
     expect(stripeClientOptions(local)).toMatchObject({ host: '127.0.0.1', port: 12180, protocol: 'http' });
@@ -568,7 +630,12 @@ describe('the Nest provider and the start script', () => {
   it('STRIPE_CLIENT resolves through Nest DI from the STRIPE_* environment and reaches the fake', async () => {
     const keys = ['STRIPE_SECRET_KEY', 'STRIPE_API_HOST', 'STRIPE_API_PORT', 'STRIPE_API_PROTOCOL'] as const;
     const saved = keys.map((k) => process.env[k]);
-    Object.assign(process.env, { STRIPE_SECRET_KEY: SECRET_KEY, STRIPE_API_HOST: '127.0.0.1', STRIPE_API_PORT: String(fake.port), STRIPE_API_PROTOCOL: 'http' });
+    Object.assign(process.env, {
+      STRIPE_SECRET_KEY: SECRET_KEY,
+      STRIPE_API_HOST: '127.0.0.1',
+      STRIPE_API_PORT: String(fake.port),
+      STRIPE_API_PROTOCOL: 'http',
+    });
     try {
       const moduleRef = await Test.createTestingModule({
         imports: [ConfigModule.forFeature(paymentsConfig)],
@@ -601,9 +668,14 @@ describe('the Nest provider and the start script', () => {
       });
       const match = /^payment fake listening on (http:\/\/127\.0\.0\.1:(\d+))$/.exec(firstLine);
       expect(match, firstLine).not.toBeNull();
-      const client = createStripeClient(readPaymentsConfig({
-        STRIPE_SECRET_KEY: SECRET_KEY, STRIPE_API_HOST: '127.0.0.1', STRIPE_API_PORT: match![2], STRIPE_API_PROTOCOL: 'http',
-      }));
+      const client = createStripeClient(
+        readPaymentsConfig({
+          STRIPE_SECRET_KEY: SECRET_KEY,
+          STRIPE_API_HOST: '127.0.0.1',
+          STRIPE_API_PORT: match![2],
+          STRIPE_API_PROTOCOL: 'http',
+        }),
+      );
       const account = await client.accounts.create({ type: 'express' });
       expect(account.id).toMatch(/^acct_/);
       expect(await client.accounts.retrieve(account.id)).toMatchObject({ id: account.id, charges_enabled: false });

@@ -23,7 +23,10 @@ const download = async (url: string, who: SignedIn): Promise<Buffer> =>
   (await http().get(url).set('Authorization', who.bearer).buffer(true).parse(binary).expect(200)).body as Buffer;
 
 const upload = (url: string, who: SignedIn, bytes: Buffer, filename: string) =>
-  http().post(url).set('Authorization', who.bearer).attach('file', bytes, { filename, contentType: filename.endsWith('.png') ? 'image/png' : 'image/jpeg' });
+  http()
+    .post(url)
+    .set('Authorization', who.bearer)
+    .attach('file', bytes, { filename, contentType: filename.endsWith('.png') ? 'image/png' : 'image/jpeg' });
 
 /** A JPEG carrying a GPS position (51.5 N, 0.125 W) and a camera make, written by sharp's withExif. */
 async function jpegWithGps(): Promise<Buffer> {
@@ -48,7 +51,9 @@ afterAll(async () => {
 
 describe('photo uploads', () => {
   it('a PNG is accepted, re-encoded, and listed on the animal with a thumbnail', async () => {
-    const png = await sharp({ create: { width: 800, height: 600, channels: 4, background: { r: 47, g: 93, b: 80, alpha: 1 } } }).png().toBuffer();
+    const png = await sharp({ create: { width: 800, height: 600, channels: 4, background: { r: 47, g: 93, b: 80, alpha: 1 } } })
+      .png()
+      .toBuffer();
     expect((await sharp(png).metadata()).format).toBe('png');
     const res = await upload(`/api/animals/${animal.id}/photos`, mira, png, 'cv.png').expect(201);
     const ref = res.body as PhotoRef;
@@ -80,7 +85,10 @@ describe('photo uploads', () => {
 
   it('turns a photo upright from its EXIF orientation before the metadata goes', async () => {
     // 60×20 pixels stored sideways with orientation 6 (rotate 90° clockwise to view)
-    const sideways = await sharp({ create: { width: 60, height: 20, channels: 3, background: '#d98e04' } }).withMetadata({ orientation: 6 }).jpeg().toBuffer();
+    const sideways = await sharp({ create: { width: 60, height: 20, channels: 3, background: '#d98e04' } })
+      .withMetadata({ orientation: 6 })
+      .jpeg()
+      .toBuffer();
     const res = await upload(`/api/animals/${animal.id}/photos`, mira, sideways, 'side.jpg').expect(201);
     expect(res.body).toMatchObject({ width: 20, height: 60 });
     const stored = await sharp(await download(res.body.url, mira)).metadata();
@@ -103,7 +111,9 @@ describe('photo uploads', () => {
   });
 
   it('another keeper can neither fetch the photo (404) nor upload to the animal (404)', async () => {
-    const png = await sharp({ create: { width: 10, height: 10, channels: 3, background: '#b5473a' } }).png().toBuffer();
+    const png = await sharp({ create: { width: 10, height: 10, channels: 3, background: '#b5473a' } })
+      .png()
+      .toBuffer();
     const ref = (await upload(`/api/animals/${animal.id}/photos`, mira, png, 'a.png').expect(201)).body as PhotoRef;
     const full = await http().get(ref.url).set('Authorization', other.bearer).expect(404);
     expect(full.body.message).toMatch(/not yours to see/);
@@ -114,8 +124,16 @@ describe('photo uploads', () => {
 
   it('a molt photo belongs to the molt and is listed with it', async () => {
     const today = todayIn('UTC', new Date());
-    const molt = (await http().post(`/api/animals/${animal.id}/molts`).set('Authorization', mira.bearer).send({ moltedOn: addDays(today, -3), exuviaSex: 'female' }).expect(201)).body as MoltResponse;
-    const png = await sharp({ create: { width: 30, height: 30, channels: 3, background: '#2f5d50' } }).png().toBuffer();
+    const molt = (
+      await http()
+        .post(`/api/animals/${animal.id}/molts`)
+        .set('Authorization', mira.bearer)
+        .send({ moltedOn: addDays(today, -3), exuviaSex: 'female' })
+        .expect(201)
+    ).body as MoltResponse;
+    const png = await sharp({ create: { width: 30, height: 30, channels: 3, background: '#2f5d50' } })
+      .png()
+      .toBuffer();
     const ref = (await upload(`/api/animals/${animal.id}/molts/${molt.id}/photos`, mira, png, 'exuvia.png').expect(201)).body as PhotoRef;
     const molts = (await http().get(`/api/animals/${animal.id}/molts`).set('Authorization', mira.bearer).expect(200)).body as MoltResponse[];
     expect(molts[0].photos.map((p) => p.id)).toEqual([ref.id]);

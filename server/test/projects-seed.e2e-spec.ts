@@ -42,8 +42,14 @@ describe('demo projects', () => {
     const id = byTitle(DEMO_PROJECTS.regalisLoan).id;
     const terms = (await http().get(`/api/projects/${id}/terms`).set('Authorization', tomasz.bearer).expect(200)).body as TermsListResponse;
     expect(terms.inForce).toBe(1);
-    expect(terms.versions.map((v) => [v.number, v.status])).toEqual([[2, 'proposed'], [1, 'in-force']]);
-    expect(terms.versions[1].lines.map((l) => [l.memberName, l.weight, l.share])).toEqual([['Mira Okonkwo', 2, '2/3'], ['Tomasz Wierzba', 1, '1/3']]);
+    expect(terms.versions.map((v) => [v.number, v.status])).toEqual([
+      [2, 'proposed'],
+      [1, 'in-force'],
+    ]);
+    expect(terms.versions[1].lines.map((l) => [l.memberName, l.weight, l.share])).toEqual([
+      ['Mira Okonkwo', 2, '2/3'],
+      ['Tomasz Wierzba', 1, '1/3'],
+    ]);
     expect(terms.versions[0].awaiting).toEqual([expect.objectContaining({ name: 'Tomasz Wierzba' })]);
     await http().get(`/api/projects/${id}/terms`).set('Authorization', ines.bearer).expect(403);
     const detail = (await http().get(`/api/projects/${id}`).set('Authorization', ines.bearer).expect(200)).body as ProjectResponse;
@@ -55,12 +61,22 @@ describe('demo projects', () => {
     const terms = (await http().get(`/api/projects/${id}/terms`).set('Authorization', mira.bearer).expect(200)).body as TermsListResponse;
     expect(terms.versions[0]).toMatchObject({ status: 'in-force' });
     expect(terms.versions[0].acceptances.find((a) => a.memberName === 'Jonas Feld')).toMatchObject({ onBehalf: true, recordedBy: { name: 'Mira Okonkwo' } });
-    const planned = (await http().get(`/api/projects/${byTitle(DEMO_PROJECTS.metallica).id}`).set('Authorization', mira.bearer).expect(200)).body as ProjectResponse;
+    const planned = (
+      await http()
+        .get(`/api/projects/${byTitle(DEMO_PROJECTS.metallica).id}`)
+        .set('Authorization', mira.bearer)
+        .expect(200)
+    ).body as ProjectResponse;
     expect(planned.warnings.map((w) => w.code)).toContain('no-pairing-male-late');
   });
 
   it('Tomasz sees only the projects he is in, as partner', async () => {
     const his = (await http().get('/api/projects').set('Authorization', tomasz.bearer).expect(200)).body as ProjectSummary[];
-    expect(his.map((p) => [p.title, p.myRole]).sort()).toEqual([[DEMO_PROJECTS.regalisLoan, 'partner'], [DEMO_PROJECTS.versicolorBrood, 'partner']].sort());
+    expect(his.map((p) => [p.title, p.myRole]).sort()).toEqual(
+      [
+        [DEMO_PROJECTS.regalisLoan, 'partner'],
+        [DEMO_PROJECTS.versicolorBrood, 'partner'],
+      ].sort(),
+    );
   });
 });

@@ -67,7 +67,11 @@ describe('access', () => {
       await http().get(`/api/projects/${p.id}${path}`).set('Authorization', other.bearer).expect(404);
     }
     await http().patch(`/api/projects/${p.id}`).set('Authorization', other.bearer).send({ title: 'Mine now' }).expect(404);
-    await http().post(`/api/projects/${p.id}/pairings`).set('Authorization', other.bearer).send({ startedAt: daysAgoAt(1), durationMinutes: 30, outcome: 'connected' }).expect(404);
+    await http()
+      .post(`/api/projects/${p.id}/pairings`)
+      .set('Authorization', other.bearer)
+      .send({ startedAt: daysAgoAt(1), durationMinutes: 30, outcome: 'connected' })
+      .expect(404);
     await http().get('/api/projects/not-a-uuid').set('Authorization', other.bearer).expect(404);
     const after = await http().get(`/api/projects/${p.id}`).set('Authorization', mira.bearer).expect(200);
     expect(after.body.title).toBe(p.title);
@@ -94,10 +98,18 @@ describe('access', () => {
 describe('stage and warnings in responses', () => {
   it('a connected pairing moves the project to waiting-for-sac', async () => {
     const p = await createProject(t.app, t.orm, mira);
-    await http().post(`/api/projects/${p.id}/pairings`).set('Authorization', mira.bearer).send({ startedAt: daysAgoAt(3), durationMinutes: 25, outcome: 'interest-only' }).expect(201);
+    await http()
+      .post(`/api/projects/${p.id}/pairings`)
+      .set('Authorization', mira.bearer)
+      .send({ startedAt: daysAgoAt(3), durationMinutes: 25, outcome: 'interest-only' })
+      .expect(201);
     const paired = await http().get(`/api/projects/${p.id}`).set('Authorization', mira.bearer).expect(200);
     expect(paired.body.stage).toEqual({ stage: 'paired' });
-    const pr = await http().post(`/api/projects/${p.id}/pairings`).set('Authorization', mira.bearer).send({ startedAt: daysAgoAt(2), durationMinutes: 40, outcome: 'connected', notes: 'Insertion seen twice' }).expect(201);
+    const pr = await http()
+      .post(`/api/projects/${p.id}/pairings`)
+      .set('Authorization', mira.bearer)
+      .send({ startedAt: daysAgoAt(2), durationMinutes: 40, outcome: 'connected', notes: 'Insertion seen twice' })
+      .expect(201);
     expect(pr.body).toMatchObject({ on: addDays(today, -2), outcome: 'connected', durationMinutes: 40, recordedBy: { id: mira.user.id } });
     const res = await http().get(`/api/projects/${p.id}`).set('Authorization', mira.bearer).expect(200);
     expect(res.body.stage).toEqual({ stage: 'waiting-for-sac' });
@@ -109,13 +121,25 @@ describe('stage and warnings in responses', () => {
 
   it('a molt of the female after the pairing shows the warning and ends the stage as female-molted', async () => {
     const p = await createProject(t.app, t.orm, mira);
-    await http().post(`/api/projects/${p.id}/pairings`).set('Authorization', mira.bearer).send({ startedAt: daysAgoAt(20), durationMinutes: 30, outcome: 'connected' }).expect(201);
+    await http()
+      .post(`/api/projects/${p.id}/pairings`)
+      .set('Authorization', mira.bearer)
+      .send({ startedAt: daysAgoAt(20), durationMinutes: 30, outcome: 'connected' })
+      .expect(201);
     const before = await http().get(`/api/projects/${p.id}`).set('Authorization', mira.bearer).expect(200);
     expect(before.body.warnings.map((w: { code: string }) => w.code)).not.toContain('female-molted-after-pairing');
-    await http().post(`/api/animals/${p.female.id}/molts`).set('Authorization', mira.bearer).send({ moltedOn: addDays(today, -4) }).expect(201);
+    await http()
+      .post(`/api/animals/${p.female.id}/molts`)
+      .set('Authorization', mira.bearer)
+      .send({ moltedOn: addDays(today, -4) })
+      .expect(201);
     const res = await http().get(`/api/projects/${p.id}`).set('Authorization', mira.bearer).expect(200);
     expect(res.body.stage).toEqual({ stage: 'ended-early', reason: 'female-molted' });
-    expect(res.body.warnings[0]).toMatchObject({ code: 'female-molted-after-pairing', severity: 'danger', message: expect.stringContaining(addDays(today, -4)) });
+    expect(res.body.warnings[0]).toMatchObject({
+      code: 'female-molted-after-pairing',
+      severity: 'danger',
+      message: expect.stringContaining(addDays(today, -4)),
+    });
   });
 
   it('an old male with no pairing yet warns that his clock is running out', async () => {
@@ -127,12 +151,26 @@ describe('stage and warnings in responses', () => {
   it('a loaned male past his due-back date, and a male who died before pairing, with the failure clause', async () => {
     const f = await createAnimal(t.app, mira, { speciesId: species, label: 'LN-F1', sex: 'female', maturity: 'mature' });
     const m = await createAnimal(t.app, mira, {
-      speciesId: species, label: 'LN-M1', sex: 'male', maturity: 'mature', maturedOn: addDays(today, -50),
-      ownerKind: 'party', ownerName: 'Tomasz', custody: 'loan-in', dueBackOn: addDays(today, -3),
+      speciesId: species,
+      label: 'LN-M1',
+      sex: 'male',
+      maturity: 'mature',
+      maturedOn: addDays(today, -50),
+      ownerKind: 'party',
+      ownerName: 'Tomasz',
+      custody: 'loan-in',
+      dueBackOn: addDays(today, -3),
     });
-    const p = (await http().post('/api/projects').set('Authorization', mira.bearer).send({ title: 'Loan', femaleId: f.id, maleId: m.id }).expect(201)).body as ProjectResponse;
-    expect(p.warnings).toEqual([expect.objectContaining({ code: 'loan-overdue', message: `The loaned male was due back on ${addDays(today, -3)}, 3 days ago.` })]);
-    await http().patch(`/api/animals/${m.id}`).set('Authorization', mira.bearer).send({ status: 'deceased', statusOn: addDays(today, -1) }).expect(200);
+    const p = (await http().post('/api/projects').set('Authorization', mira.bearer).send({ title: 'Loan', femaleId: f.id, maleId: m.id }).expect(201))
+      .body as ProjectResponse;
+    expect(p.warnings).toEqual([
+      expect.objectContaining({ code: 'loan-overdue', message: `The loaned male was due back on ${addDays(today, -3)}, 3 days ago.` }),
+    ]);
+    await http()
+      .patch(`/api/animals/${m.id}`)
+      .set('Authorization', mira.bearer)
+      .send({ status: 'deceased', statusOn: addDays(today, -1) })
+      .expect(200);
     const res = await http().get(`/api/projects/${p.id}`).set('Authorization', mira.bearer).expect(200);
     expect(res.body.stage).toEqual({ stage: 'ended-early', reason: 'male-died' });
     expect(res.body.warnings).toEqual([expect.objectContaining({ code: 'male-died-before-pairing', message: expect.stringContaining('nothing is owed') })]);
@@ -142,10 +180,23 @@ describe('stage and warnings in responses', () => {
     const p = await createProject(t.app, t.orm, mira);
     const bad = await http().post(`/api/projects/${p.id}/end`).set('Authorization', mira.bearer).send({ reason: 'bored' }).expect(400);
     expect(bad.body.details[0].field).toBe('reason');
-    const res = await http().post(`/api/projects/${p.id}/end`).set('Authorization', mira.bearer).send({ reason: 'no-sac', note: 'Nothing after eight months' }).expect(200);
-    expect(res.body).toMatchObject({ stage: { stage: 'ended-early', reason: 'no-sac' }, endedOn: today, endedEarlyNote: 'Nothing after eight months', warnings: [] });
+    const res = await http()
+      .post(`/api/projects/${p.id}/end`)
+      .set('Authorization', mira.bearer)
+      .send({ reason: 'no-sac', note: 'Nothing after eight months' })
+      .expect(200);
+    expect(res.body).toMatchObject({
+      stage: { stage: 'ended-early', reason: 'no-sac' },
+      endedOn: today,
+      endedEarlyNote: 'Nothing after eight months',
+      warnings: [],
+    });
     await http().post(`/api/projects/${p.id}/end`).set('Authorization', mira.bearer).send({ reason: 'no-sac' }).expect(409);
-    const late = await http().post(`/api/projects/${p.id}/pairings`).set('Authorization', mira.bearer).send({ startedAt: daysAgoAt(0), durationMinutes: 10, outcome: 'connected' }).expect(409);
+    const late = await http()
+      .post(`/api/projects/${p.id}/pairings`)
+      .set('Authorization', mira.bearer)
+      .send({ startedAt: daysAgoAt(0), durationMinutes: 10, outcome: 'connected' })
+      .expect(409);
     expect(late.body.message).toMatch(/has ended/);
   });
 
@@ -157,16 +208,27 @@ describe('stage and warnings in responses', () => {
     const at = new Date(`${addDays(today, -2)}T20:00:00Z`);
     const expected = new Intl.DateTimeFormat('en-CA', { timeZone: 'Pacific/Auckland', year: 'numeric', month: '2-digit', day: '2-digit' }).format(at);
     expect(expected).toBe(addDays(today, -1));
-    const res = await http().post(`/api/projects/${p.id}/pairings`).set('Authorization', kiwi.bearer).send({ startedAt: at.toISOString(), durationMinutes: 30, outcome: 'connected' }).expect(201);
+    const res = await http()
+      .post(`/api/projects/${p.id}/pairings`)
+      .set('Authorization', kiwi.bearer)
+      .send({ startedAt: at.toISOString(), durationMinutes: 30, outcome: 'connected' })
+      .expect(201);
     expect(res.body.on).toBe(expected);
   });
 
   it('refuses a pairing in the future or with a made-up outcome', async () => {
     const p = await createProject(t.app, t.orm, mira);
-    const res = await http().post(`/api/projects/${p.id}/pairings`).set('Authorization', mira.bearer)
-      .send({ startedAt: new Date(Date.now() + 86_400_000).toISOString(), durationMinutes: 30, outcome: 'connected' }).expect(400);
+    const res = await http()
+      .post(`/api/projects/${p.id}/pairings`)
+      .set('Authorization', mira.bearer)
+      .send({ startedAt: new Date(Date.now() + 86_400_000).toISOString(), durationMinutes: 30, outcome: 'connected' })
+      .expect(400);
     expect(res.body.details).toEqual([{ field: 'startedAt', message: expect.stringMatching(/in the future/) }]);
-    const bad = await http().post(`/api/projects/${p.id}/pairings`).set('Authorization', mira.bearer).send({ startedAt: daysAgoAt(1), durationMinutes: 0, outcome: 'maybe' }).expect(400);
+    const bad = await http()
+      .post(`/api/projects/${p.id}/pairings`)
+      .set('Authorization', mira.bearer)
+      .send({ startedAt: daysAgoAt(1), durationMinutes: 0, outcome: 'maybe' })
+      .expect(400);
     expect(bad.body.details.map((d: { field: string }) => d.field).sort()).toEqual(['durationMinutes', 'outcome']);
   });
 });
@@ -175,9 +237,17 @@ describe('parties', () => {
   it('the owner adds an outside party; a caretaker cannot; the owner cannot be removed', async () => {
     const p = await createProject(t.app, t.orm, mira);
     await addMember(t.orm, p.id, caretaker, 'caretaker');
-    const added = await http().post(`/api/projects/${p.id}/members`).set('Authorization', mira.bearer).send({ name: 'Jonas Feld', email: 'Jonas@Example.test', role: 'partner' }).expect(201);
+    const added = await http()
+      .post(`/api/projects/${p.id}/members`)
+      .set('Authorization', mira.bearer)
+      .send({ name: 'Jonas Feld', email: 'Jonas@Example.test', role: 'partner' })
+      .expect(201);
     expect(added.body).toMatchObject({ name: 'Jonas Feld', email: 'jonas@example.test', role: 'partner', hasAccount: false, userId: null });
-    await http().post(`/api/projects/${p.id}/members`).set('Authorization', mira.bearer).send({ name: 'Jonas again', email: 'jonas@example.test', role: 'partner' }).expect(409);
+    await http()
+      .post(`/api/projects/${p.id}/members`)
+      .set('Authorization', mira.bearer)
+      .send({ name: 'Jonas again', email: 'jonas@example.test', role: 'partner' })
+      .expect(409);
     await http().post(`/api/projects/${p.id}/members`).set('Authorization', caretaker.bearer).send({ name: 'Friend', role: 'partner' }).expect(403);
     const list = await http().get(`/api/projects/${p.id}/members`).set('Authorization', caretaker.bearer).expect(200);
     expect(list.body.map((m: { role: string }) => m.role)).toEqual(['owner', 'caretaker', 'partner']);
@@ -195,10 +265,19 @@ describe('parties', () => {
 describe('activity', () => {
   it('records each change in the timeline, newest first, and shows partners’ doings on the dashboard feed', async () => {
     const p = await createProject(t.app, t.orm, mira, { title: 'Timeline pair' });
-    await http().post(`/api/projects/${p.id}/pairings`).set('Authorization', mira.bearer).send({ startedAt: daysAgoAt(1), durationMinutes: 15, outcome: 'female-refused' }).expect(201);
+    await http()
+      .post(`/api/projects/${p.id}/pairings`)
+      .set('Authorization', mira.bearer)
+      .send({ startedAt: daysAgoAt(1), durationMinutes: 15, outcome: 'female-refused' })
+      .expect(201);
     await http().patch(`/api/projects/${p.id}`).set('Authorization', mira.bearer).send({ notes: 'Try again after her next meal' }).expect(200);
     const res = await http().get(`/api/projects/${p.id}/activity`).set('Authorization', mira.bearer).expect(200);
     expect(res.body.map((e: { kind: string }) => e.kind)).toEqual(['project.updated', 'pairing.recorded', 'project.created']);
-    expect(res.body[1]).toMatchObject({ actor: { id: mira.user.id, name: 'Mira' }, subject: { type: 'pairing' }, projectTitle: 'Timeline pair', data: { outcome: 'female-refused' } });
+    expect(res.body[1]).toMatchObject({
+      actor: { id: mira.user.id, name: 'Mira' },
+      subject: { type: 'pairing' },
+      projectTitle: 'Timeline pair',
+      data: { outcome: 'female-refused' },
+    });
   });
 });

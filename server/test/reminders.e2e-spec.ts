@@ -17,7 +17,8 @@ let partner: SignedIn;
 const http = () => request(t.app.getHttpServer());
 const now = new Date();
 const utcDaysAgo = (n: number) => DateTime.fromJSDate(now, { zone: 'utc' }).minus({ days: n }).toISODate()!;
-const notes = async (who: SignedIn): Promise<NotificationResponse[]> => (await http().get('/api/notifications').set('Authorization', who.bearer).expect(200)).body;
+const notes = async (who: SignedIn): Promise<NotificationResponse[]> =>
+  (await http().get('/api/notifications').set('Authorization', who.bearer).expect(200)).body;
 
 beforeAll(async () => {
   t = await createTestApp();
@@ -29,7 +30,11 @@ beforeAll(async () => {
   await addMember(t.orm, p.id, caretaker, 'caretaker');
   await addMember(t.orm, p.id, partner, 'partner');
   const pulled = await createSac(t.app, owner, p.id, { layDate: utcDaysAgo(26), pulledAt: new Date(now.getTime() - 30 * 3_600_000).toISOString() });
-  await http().post(`/api/sacs/${pulled.id}/log`).set('Authorization', caretaker.bearer).send({ kind: 'roll', at: new Date(now.getTime() - 13.5 * 3_600_000).toISOString() }).expect(201);
+  await http()
+    .post(`/api/sacs/${pulled.id}/log`)
+    .set('Authorization', caretaker.bearer)
+    .send({ kind: 'roll', at: new Date(now.getTime() - 13.5 * 3_600_000).toISOString() })
+    .expect(201);
   await createSac(t.app, owner, p.id, { layDate: utcDaysAgo(21), pullFromDay: 21, pullToDay: 40 }); // window opens today
   await createSac(t.app, owner, p.id, { layDate: utcDaysAgo(10), pullFromDay: 21, pullToDay: 40 }); // nothing today
 });

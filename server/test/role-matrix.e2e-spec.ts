@@ -29,7 +29,11 @@ beforeAll(async () => {
     const p = await createProject(t.app, t.orm, users.owner, { title: 'Matrix project' });
     return {
       id: p.id,
-      memberIds: { owner: p.members[0].id, partner: await addMember(t.orm, p.id, users.partner, 'partner'), caretaker: await addMember(t.orm, p.id, users.caretaker, 'caretaker') },
+      memberIds: {
+        owner: p.members[0].id,
+        partner: await addMember(t.orm, p.id, users.partner, 'partner'),
+        caretaker: await addMember(t.orm, p.id, users.caretaker, 'caretaker'),
+      },
     };
   };
   fx = { app: t.app, orm: t.orm, users, project: await freshProject(), freshProject };
@@ -62,8 +66,14 @@ describe('role matrix', () => {
     const rowKeys = ROWS.map((r) => key(r.method, r.path));
     expect(routeKeys.size).toBeGreaterThan(0);
     expect([...routeKeys].filter((k) => !rowKeys.includes(k)).sort(), 'routes without a row in test/support/role-matrix/*.rows.ts').toEqual([]);
-    expect(rowKeys.filter((k) => !routeKeys.has(k)), 'rows for routes that do not exist').toEqual([]);
-    expect(rowKeys.filter((k, i) => rowKeys.indexOf(k) !== i), 'routes with two rows').toEqual([]);
+    expect(
+      rowKeys.filter((k) => !routeKeys.has(k)),
+      'rows for routes that do not exist',
+    ).toEqual([]);
+    expect(
+      rowKeys.filter((k, i) => rowKeys.indexOf(k) !== i),
+      'routes with two rows',
+    ).toEqual([]);
   });
 
   describe.each(ROWS.map((r) => [key(r.method, r.path), r] as const))('%s', (_name, row) => {

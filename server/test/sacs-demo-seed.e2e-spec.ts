@@ -16,7 +16,13 @@ let list: ProjectSummary[];
 const http = () => request(t.app.getHttpServer());
 const account = (key: string) => DEMO_ACCOUNTS.find((a) => a.key === key)!.email;
 const byTitle = (title: string) => list.find((p) => p.title === title)!;
-const sacsOf = async (title: string): Promise<SacResponse[]> => (await http().get(`/api/projects/${byTitle(title).id}/sacs`).set('Authorization', mira.bearer).expect(200)).body;
+const sacsOf = async (title: string): Promise<SacResponse[]> =>
+  (
+    await http()
+      .get(`/api/projects/${byTitle(title).id}/sacs`)
+      .set('Authorization', mira.bearer)
+      .expect(200)
+  ).body;
 
 beforeAll(async () => {
   t = await createTestApp();
@@ -48,7 +54,9 @@ describe('demo sacs', () => {
     for (const who of [mira, ines]) {
       const d = (await http().get('/api/dashboard').set('Authorization', who.bearer).expect(200)).body as DashboardResponse;
       const expectedDay = dayNumber(h.layDate, todayIn(who.user.timeZone, new Date()));
-      expect(d.dueToday.rolls.map((r) => [r.projectTitle, r.sac.dayNumber, r.sac.roll!.status])).toEqual([[DEMO_PROJECTS.hamoriiIncubator, expectedDay, 'due']]);
+      expect(d.dueToday.rolls.map((r) => [r.projectTitle, r.sac.dayNumber, r.sac.roll!.status])).toEqual([
+        [DEMO_PROJECTS.hamoriiIncubator, expectedDay, 'due'],
+      ]);
     }
     const log = (await http().get(`/api/sacs/${h.id}/log`).set('Authorization', ines.bearer).expect(200)).body as { kind: string; author: { name: string } }[];
     expect(new Set(log.map((e) => e.kind))).toEqual(new Set(['roll', 'temperature', 'humidity', 'note']));

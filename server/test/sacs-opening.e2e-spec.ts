@@ -20,7 +20,16 @@ const NOW = '2025-10-20T18:00:00Z';
 const pin = () => vi.spyOn(t.app.get(Clock), 'now').mockReturnValue(new Date(NOW));
 const open = (who: SignedIn, sacId: string, body: object) => http().post(`/api/sacs/${sacId}/opening`).set('Authorization', who.bearer).send(body);
 const count = (who: SignedIn, sacId: string, body: object) => http().post(`/api/sacs/${sacId}/counts`).set('Authorization', who.bearer).send(body);
-const GOOD = { openedAt: '2025-10-18T09:00:00Z', healthyEggs: 40, eggsWithLegs: 120, nymphs: 0, darkEggs: 12, spoiledEggs: 3, keptBack: 160, notes: 'Two dented eggs removed' };
+const GOOD = {
+  openedAt: '2025-10-18T09:00:00Z',
+  healthyEggs: 40,
+  eggsWithLegs: 120,
+  nymphs: 0,
+  darkEggs: 12,
+  spoiledEggs: 3,
+  keptBack: 160,
+  notes: 'Two dented eggs removed',
+};
 const newSac = () => createSac(t.app, owner, projectId, { layDate: '2025-09-10', pulledAt: '2025-10-05T10:00:00Z' });
 
 beforeAll(async () => {
@@ -60,7 +69,12 @@ describe('the opening', () => {
     const { healthyEggs: _h, ...missing } = GOOD;
     expect((await open(owner, sac.id, missing).expect(400)).body.details[0].field).toBe('healthyEggs');
     const tooMany = await open(owner, sac.id, { ...GOOD, keptBack: 161 }).expect(400);
-    expect(tooMany.body.details).toEqual([{ field: 'keptBack', message: 'Only viable young can go back into incubation: 161 kept back, but 160 counted as healthy eggs, eggs with legs and nymphs.' }]);
+    expect(tooMany.body.details).toEqual([
+      {
+        field: 'keptBack',
+        message: 'Only viable young can go back into incubation: 161 kept back, but 160 counted as healthy eggs, eggs with legs and nymphs.',
+      },
+    ]);
     const empty = await open(owner, sac.id, { ...GOOD, healthyEggs: 0, eggsWithLegs: 0, darkEggs: 0, spoiledEggs: 0, keptBack: 0 }).expect(400);
     expect(empty.body.message).toMatch(/Nothing was counted/);
     const future = await open(owner, sac.id, { ...GOOD, openedAt: '2025-10-21T09:00:00Z' }).expect(400);
@@ -75,9 +89,19 @@ describe('the opening', () => {
     for (const who of [partner, caretaker]) await open(who, sac.id, GOOD).expect(403);
     await open(stranger, sac.id, GOOD).expect(404);
     await open(owner, sac.id, GOOD).expect(201);
-    const png = await sharp({ create: { width: 32, height: 24, channels: 3, background: '#d9c9a3' } }).png().toBuffer();
-    const photo = await http().post(`/api/sacs/${sac.id}/opening/photos`).set('Authorization', owner.bearer).attach('file', png, { filename: 'eggs.png', contentType: 'image/png' }).expect(201);
-    await http().post(`/api/sacs/${sac.id}/opening/photos`).set('Authorization', caretaker.bearer).attach('file', png, { filename: 'eggs.png', contentType: 'image/png' }).expect(403);
+    const png = await sharp({ create: { width: 32, height: 24, channels: 3, background: '#d9c9a3' } })
+      .png()
+      .toBuffer();
+    const photo = await http()
+      .post(`/api/sacs/${sac.id}/opening/photos`)
+      .set('Authorization', owner.bearer)
+      .attach('file', png, { filename: 'eggs.png', contentType: 'image/png' })
+      .expect(201);
+    await http()
+      .post(`/api/sacs/${sac.id}/opening/photos`)
+      .set('Authorization', caretaker.bearer)
+      .attach('file', png, { filename: 'eggs.png', contentType: 'image/png' })
+      .expect(403);
     await http().get(photo.body.url).set('Authorization', partner.bearer).expect(200);
     await http().get(photo.body.url).set('Authorization', stranger.bearer).expect(404);
     const read = await http().get(`/api/sacs/${sac.id}/opening`).set('Authorization', partner.bearer).expect(200);
@@ -92,19 +116,35 @@ describe('brood counts', () => {
     await count(caretaker, sac.id, { stage: 'first-instar', alive: 150 }).expect(400); // no opening yet
     await open(owner, sac.id, GOOD).expect(201);
     await count(caretaker, sac.id, { at: '2025-10-19T09:00:00Z', stage: 'first-instar', alive: 155, lost: 5, lossReason: 'failed-molt' }).expect(201);
-    await count(owner, sac.id, { at: '2025-10-20T09:00:00Z', stage: 'second-instar', alive: 151, lost: 4, lossReason: 'cannibalism', note: 'Separated into deli cups' }).expect(201);
+    await count(owner, sac.id, {
+      at: '2025-10-20T09:00:00Z',
+      stage: 'second-instar',
+      alive: 151,
+      lost: 4,
+      lossReason: 'cannibalism',
+      note: 'Separated into deli cups',
+    }).expect(201);
     // Entered late but dated earlier: the latest instant still decides.
     await count(owner, sac.id, { at: '2025-10-18T20:00:00Z', stage: 'eggs-with-legs', alive: 158, lost: 2, lossReason: 'mould' }).expect(201);
     const res = (await http().get(`/api/sacs/${sac.id}/counts`).set('Authorization', partner.bearer).expect(200)).body as BroodCountsResponse;
-    expect(res.counts.map((c) => [c.alive, c.stage])).toEqual([[160, 'eggs'], [158, 'eggs-with-legs'], [155, 'first-instar'], [151, 'second-instar']]);
+    expect(res.counts.map((c) => [c.alive, c.stage])).toEqual([
+      [160, 'eggs'],
+      [158, 'eggs-with-legs'],
+      [155, 'first-instar'],
+      [151, 'second-instar'],
+    ]);
     expect(res.current).toBe(151);
     const brood = t.app.get(BroodService);
     expect(await brood.currentCount(sac.id)).toBe(151);
     const other = await newSac();
     expect(await brood.currentCount(other.id)).toBe(0);
-    expect([...(await brood.currentCounts([sac.id, other.id]))]).toEqual([[sac.id, 151], [other.id, 0]]);
+    expect([...(await brood.currentCounts([sac.id, other.id]))]).toEqual([
+      [sac.id, 151],
+      [other.id, 0],
+    ]);
     const kinds = (await http().get(`/api/projects/${projectId}/activity`).set('Authorization', owner.bearer)).body
-      .filter((e: { subject: { id: string } }) => e.subject.id === sac.id).map((e: { kind: string }) => e.kind);
+      .filter((e: { subject: { id: string } }) => e.subject.id === sac.id)
+      .map((e: { kind: string }) => e.kind);
     expect(kinds.filter((k: string) => k === 'brood.counted')).toHaveLength(3);
     expect(kinds).toContain('sac.opened');
   });

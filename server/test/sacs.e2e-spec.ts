@@ -34,7 +34,16 @@ describe('recording a sac', () => {
   it('the owner records a sac left with the mother; members read it; the project moves to sac-laid with one activity event', async () => {
     pin('2025-06-10T12:00:00Z');
     const sac = await createSac(t.app, owner, projectId, { layDate: '2025-05-29' });
-    expect(sac).toMatchObject({ layDate: '2025-05-29', dayNumber: 12, pulled: false, roll: null, outcome: 'in-progress', broodStage: 'eggs', incubatorCaution: null, rollIntervalHours: 12 });
+    expect(sac).toMatchObject({
+      layDate: '2025-05-29',
+      dayNumber: 12,
+      pulled: false,
+      roll: null,
+      outcome: 'in-progress',
+      broodStage: 'eggs',
+      incubatorCaution: null,
+      rollIntervalHours: 12,
+    });
     // G. pulchripes has its own window (day 30–45) in the catalogue.
     expect(sac.pullWindow).toMatchObject({ fromDay: 30, toDay: 45, origin: 'species', state: 'not-yet', opensOn: '2025-06-28', closesOn: '2025-07-13' });
     for (const who of [partner, caretaker]) {
@@ -51,16 +60,34 @@ describe('recording a sac', () => {
   it('a lay date after the keeper’s today, a half window and a backwards window are 400s with readable messages', async () => {
     pin('2025-06-10T12:00:00Z');
     const future = await http().post(`/api/projects/${projectId}/sacs`).set('Authorization', owner.bearer).send({ layDate: '2025-06-11' }).expect(400);
-    expect(future.body.details).toEqual([{ field: 'layDate', message: 'The lay date 2025-06-11 is after today (2025-06-10 where you are); a sac is recorded once it is laid.' }]);
+    expect(future.body.details).toEqual([
+      { field: 'layDate', message: 'The lay date 2025-06-11 is after today (2025-06-10 where you are); a sac is recorded once it is laid.' },
+    ]);
     const bad = await http().post(`/api/projects/${projectId}/sacs`).set('Authorization', owner.bearer).send({ layDate: '2025-02-29' }).expect(400);
     expect(bad.body.details).toEqual([{ field: 'layDate', message: 'The lay date must be a date written YYYY-MM-DD.' }]);
-    const half = await http().post(`/api/projects/${projectId}/sacs`).set('Authorization', owner.bearer).send({ layDate: '2025-06-01', pullFromDay: 20 }).expect(400);
+    const half = await http()
+      .post(`/api/projects/${projectId}/sacs`)
+      .set('Authorization', owner.bearer)
+      .send({ layDate: '2025-06-01', pullFromDay: 20 })
+      .expect(400);
     expect(half.body.message).toBe('Give both the first and the last pull day, or neither to use the species window.');
-    const back = await http().post(`/api/projects/${projectId}/sacs`).set('Authorization', owner.bearer).send({ layDate: '2025-06-01', pullFromDay: 30, pullToDay: 25 }).expect(400);
+    const back = await http()
+      .post(`/api/projects/${projectId}/sacs`)
+      .set('Authorization', owner.bearer)
+      .send({ layDate: '2025-06-01', pullFromDay: 30, pullToDay: 25 })
+      .expect(400);
     expect(back.body.message).toMatch(/must close on or after the day it opens/);
-    const early = await http().post(`/api/projects/${projectId}/sacs`).set('Authorization', owner.bearer).send({ layDate: '2025-06-05', pulledAt: '2025-06-04T10:00:00Z' }).expect(400);
+    const early = await http()
+      .post(`/api/projects/${projectId}/sacs`)
+      .set('Authorization', owner.bearer)
+      .send({ layDate: '2025-06-05', pulledAt: '2025-06-04T10:00:00Z' })
+      .expect(400);
     expect(early.body.details[0]).toMatchObject({ field: 'pulledAt', message: 'The sac cannot be pulled (2025-06-04) before it was laid (2025-06-05).' });
-    const noZone = await http().post(`/api/projects/${projectId}/sacs`).set('Authorization', owner.bearer).send({ layDate: '2025-06-05', pulledAt: '2025-06-06' }).expect(400);
+    const noZone = await http()
+      .post(`/api/projects/${projectId}/sacs`)
+      .set('Authorization', owner.bearer)
+      .send({ layDate: '2025-06-05', pulledAt: '2025-06-06' })
+      .expect(400);
     expect(noZone.body.details[0].field).toBe('pulledAt');
   });
 
@@ -83,12 +110,21 @@ describe('recording a sac', () => {
     expect(project.body.stage.stage).toBe('in-incubator');
     const noReason = await http().patch(`/api/sacs/${sac.id}`).set('Authorization', owner.bearer).send({ outcome: 'failed' }).expect(400);
     expect(noReason.body.details).toEqual([{ field: 'failureReason', message: 'Say why the sac failed: infertile, spoiled, eaten or other.' }]);
-    const failed = await http().patch(`/api/sacs/${sac.id}`).set('Authorization', owner.bearer).send({ outcome: 'failed', failureReason: 'spoiled' }).expect(200);
+    const failed = await http()
+      .patch(`/api/sacs/${sac.id}`)
+      .set('Authorization', owner.bearer)
+      .send({ outcome: 'failed', failureReason: 'spoiled' })
+      .expect(200);
     expect(failed.body).toMatchObject({ outcome: 'failed', failureReason: 'spoiled', roll: null });
-    const wrong = await http().patch(`/api/sacs/${sac.id}`).set('Authorization', owner.bearer).send({ outcome: 'in-progress', failureReason: 'eaten' }).expect(400);
+    const wrong = await http()
+      .patch(`/api/sacs/${sac.id}`)
+      .set('Authorization', owner.bearer)
+      .send({ outcome: 'in-progress', failureReason: 'eaten' })
+      .expect(400);
     expect(wrong.body.message).toBe('A failure reason only goes with the outcome "failed".');
     const kinds = (await http().get(`/api/projects/${projectId}/activity`).set('Authorization', owner.bearer)).body
-      .filter((e: { subject: { id: string } }) => e.subject.id === sac.id).map((e: { kind: string }) => e.kind);
+      .filter((e: { subject: { id: string } }) => e.subject.id === sac.id)
+      .map((e: { kind: string }) => e.kind);
     expect(kinds.sort()).toEqual(['sac.failed', 'sac.laid', 'sac.pulled']);
   });
 });

@@ -44,7 +44,13 @@ beforeAll(async () => {
   const { startPaymentFake } = await import('../../scripts/payment-fake/server.mjs');
   fake = await startPaymentFake({ secretKey: SECRET_KEY, webhookSecret: WEBHOOK_SECRET, port: 0, retryDelaysMs: [20, 40] });
   // The config is read at module init, so the environment is set before the app is made.
-  Object.assign(process.env, { STRIPE_SECRET_KEY: SECRET_KEY, STRIPE_WEBHOOK_SECRET: WEBHOOK_SECRET, STRIPE_API_HOST: '127.0.0.1', STRIPE_API_PORT: String(fake.port), STRIPE_API_PROTOCOL: 'http' });
+  Object.assign(process.env, {
+    STRIPE_SECRET_KEY: SECRET_KEY,
+    STRIPE_WEBHOOK_SECRET: WEBHOOK_SECRET,
+    STRIPE_API_HOST: '127.0.0.1',
+    STRIPE_API_PORT: String(fake.port),
+    STRIPE_API_PROTOCOL: 'http',
+  });
   t = await createTestApp();
   await t.app.listen(0, '127.0.0.1');
   webhookUrl = `http://127.0.0.1:${(t.app.getHttpServer().address() as AddressInfo).port}/api/webhooks/payments`;
@@ -52,7 +58,11 @@ beforeAll(async () => {
   stripe = new Stripe(SECRET_KEY, { host: '127.0.0.1', port: fake.port, protocol: 'http' });
   s = await accountScenario(t.app, t.orm);
   // Tomasz cashes out 4 young at EUR 5.00: Mira owes him EUR 20.00.
-  await api(t.app).post(`/api/projects/${s.projectId}/entries`).set('Authorization', s.mira.bearer).send({ kind: 'cash-out', date: '2026-11-20', memberId: s.tomaszId, count: 4 }).expect(201);
+  await api(t.app)
+    .post(`/api/projects/${s.projectId}/entries`)
+    .set('Authorization', s.mira.bearer)
+    .send({ kind: 'cash-out', date: '2026-11-20', memberId: s.tomaszId, count: 4 })
+    .expect(201);
 }, 90_000);
 
 afterAll(async () => {
@@ -69,13 +79,17 @@ const payout = async (who = s.tomasz) =>
 const checkout = (amountMinor: number, who = s.mira, toMemberId = s.tomaszId) =>
   api(t.app).post(`/api/projects/${s.projectId}/settlements/checkout`).set('Authorization', who.bearer).send({ toMemberId, amountMinor });
 const moneyEntries = async () =>
-  ((await api(t.app).get(`/api/projects/${s.projectId}/entries`).set('Authorization', s.mira.bearer).expect(200)).body as LedgerEntryResponse[]).filter((e) => e.kind === 'money');
+  ((await api(t.app).get(`/api/projects/${s.projectId}/entries`).set('Authorization', s.mira.bearer).expect(200)).body as LedgerEntryResponse[]).filter(
+    (e) => e.kind === 'money',
+  );
 
 describe('payout account', () => {
   it('cannot be paid before linking a payout account', async () => {
     const res = await checkout(2000);
     expect(res.status).toBe(409);
-    expect(res.body.message).toBe('Tomasz Partner has not linked a payout account yet, so they cannot be paid here. Pay them another way and record the payment.');
+    expect(res.body.message).toBe(
+      'Tomasz Partner has not linked a payout account yet, so they cannot be paid here. Pay them another way and record the payment.',
+    );
   });
 
   it('links an express account, then onboarding on the provider enables charges (account.updated webhook)', async () => {
@@ -125,7 +139,15 @@ describe('checkout and webhook', () => {
 
     const money = await moneyEntries();
     expect(money).toHaveLength(1);
-    expect(money[0]).toMatchObject({ source: 'payment-provider', amountMinor: 2000, currency: 'EUR', status: 'in-force', from: { memberId: s.miraId }, to: { memberId: s.tomaszId }, recordedBy: null });
+    expect(money[0]).toMatchObject({
+      source: 'payment-provider',
+      amountMinor: 2000,
+      currency: 'EUR',
+      status: 'in-force',
+      from: { memberId: s.miraId },
+      to: { memberId: s.tomaszId },
+      recordedBy: null,
+    });
     const b = (await api(t.app).get(`/api/projects/${s.projectId}/balances`).set('Authorization', s.tomasz.bearer).expect(200)).body as BalancesResponse;
     expect(b.debts).toEqual([]);
   });
@@ -142,8 +164,14 @@ describe('checkout and webhook', () => {
   });
 
   it('a bad signature or a stale timestamp is refused with 400 and records nothing', async () => {
-    const payload = JSON.stringify({ id: 'evt_forged_1', object: 'event', type: 'checkout.session.completed', data: { object: { id: session.sessionId, payment_status: 'paid', amount_total: 2000, currency: 'eur' } } });
-    const send = (signature: string) => fetch(webhookUrl, { method: 'POST', headers: { 'content-type': 'application/json', 'stripe-signature': signature }, body: payload });
+    const payload = JSON.stringify({
+      id: 'evt_forged_1',
+      object: 'event',
+      type: 'checkout.session.completed',
+      data: { object: { id: session.sessionId, payment_status: 'paid', amount_total: 2000, currency: 'eur' } },
+    });
+    const send = (signature: string) =>
+      fetch(webhookUrl, { method: 'POST', headers: { 'content-type': 'application/json', 'stripe-signature': signature }, body: payload });
     const wrongSecret = stripe.webhooks.generateTestHeaderString({ payload, secret: 'whsec_not_ours_at_all' });
     let res = await send(wrongSecret);
     expect(res.status).toBe(400);
@@ -163,7 +191,15 @@ describe('checkout and webhook', () => {
   it('the route is open without a session but every settlement route needs one', async () => {
     await api(t.app).get('/api/settlements/payout-account').expect(401);
     await api(t.app).post(`/api/projects/${s.projectId}/settlements/checkout`).send({ toMemberId: s.tomaszId, amountMinor: 1 }).expect(401);
-    await api(t.app).post(`/api/projects/${s.projectId}/settlements/checkout`).set('Authorization', s.caretaker.bearer).send({ toMemberId: s.tomaszId, amountMinor: 1 }).expect(403);
-    await api(t.app).post(`/api/projects/${s.projectId}/settlements/checkout`).set('Authorization', s.stranger.bearer).send({ toMemberId: s.tomaszId, amountMinor: 1 }).expect(404);
+    await api(t.app)
+      .post(`/api/projects/${s.projectId}/settlements/checkout`)
+      .set('Authorization', s.caretaker.bearer)
+      .send({ toMemberId: s.tomaszId, amountMinor: 1 })
+      .expect(403);
+    await api(t.app)
+      .post(`/api/projects/${s.projectId}/settlements/checkout`)
+      .set('Authorization', s.stranger.bearer)
+      .send({ toMemberId: s.tomaszId, amountMinor: 1 })
+      .expect(404);
   });
 });

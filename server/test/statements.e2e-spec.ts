@@ -88,11 +88,16 @@ describe('statement CSV', () => {
 
 describe('statement PDF', () => {
   it('holds the project, party, terms, shares, entries and the same balance figures as the route', async () => {
-    const res = await api(t.app).get(`/api/projects/${s.projectId}/statements/${s.tomaszId}.pdf`).set('Authorization', s.tomasz.bearer).buffer(true).parse((r, cb) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => cb(null, Buffer.concat(chunks)));
-    }).expect(200);
+    const res = await api(t.app)
+      .get(`/api/projects/${s.projectId}/statements/${s.tomaszId}.pdf`)
+      .set('Authorization', s.tomasz.bearer)
+      .buffer(true)
+      .parse((r, cb) => {
+        const chunks: Buffer[] = [];
+        r.on('data', (c: Buffer) => chunks.push(c));
+        r.on('end', () => cb(null, Buffer.concat(chunks)));
+      })
+      .expect(200);
     expect(res.headers['content-type']).toBe('application/pdf');
     const text = await pdfText(res.body as Buffer);
     const b = tomasz();

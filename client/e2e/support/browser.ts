@@ -23,7 +23,15 @@ export async function openBrowser(options: { phone?: boolean } = {}): Promise<Br
     isMobile: options.phone,
     hasTouch: options.phone,
     timezoneId: 'Europe/Berlin',
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
   });
   const page = context.pages()[0] ?? (await context.newPage());
   const errors: string[] = [];

@@ -10,7 +10,15 @@ dayjs.extend(relativeTime);
 
 /** An instant in the viewer's zone, e.g. "Tue 1 Dec 2026, 20:15". */
 export function formatInstant(iso: string, timeZone: string): string {
-  return new Intl.DateTimeFormat('en-GB', { timeZone, weekday: 'short', day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' }).format(new Date(iso));
+  return new Intl.DateTimeFormat('en-GB', {
+    timeZone,
+    weekday: 'short',
+    day: 'numeric',
+    month: 'short',
+    year: 'numeric',
+    hour: '2-digit',
+    minute: '2-digit',
+  }).format(new Date(iso));
 }
 
 /** A calendar date (YYYY-MM-DD), shown without shifting zones. */

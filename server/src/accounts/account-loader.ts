@@ -12,6 +12,10 @@ export async function loadAccount(em: EntityManager, project: Project): Promise<
   const members = await em.find(ProjectMember, { project: project.id }, { populate: ['user'], orderBy: { createdAt: 'asc' } });
   const terms = await termsInForce(em, project.id);
   const sacs = await sacCountsOf(em, project.id);
-  const rows = await em.find(LedgerEntryRow, { project: project.id }, { populate: ['party', 'fromParty', 'toParty', 'target', 'recordedBy'], orderBy: { seq: 'asc' } });
+  const rows = await em.find(
+    LedgerEntryRow,
+    { project: project.id },
+    { populate: ['party', 'fromParty', 'toParty', 'target', 'recordedBy'], orderBy: { seq: 'asc' } },
+  );
   return buildAccountView({ project, members, terms, sacs, rows });
 }

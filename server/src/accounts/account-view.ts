@@ -1,10 +1,4 @@
-import {
-  computeBalances,
-  computeShares,
-  type AccountBalances,
-  type LedgerEntry,
-  type ShareResult,
-} from '@broodsilk/shared';
+import { computeBalances, computeShares, type AccountBalances, type LedgerEntry, type ShareResult } from '@broodsilk/shared';
 import type { Project } from '../projects/project.entity';
 import type { ProjectMember } from '../projects/project-member.entity';
 import type { TermsVersion } from '../projects/terms-version.entity';
@@ -72,13 +66,27 @@ function toLedgerEntry(r: LedgerEntryRow): LedgerEntry | null {
   const base = { id: r.id, date: r.date };
   switch (r.kind) {
     case 'hand-over':
-      return { ...base, kind: 'hand-over', partyId: r.party!.id, count: r.count!, method: r.method!, ...(r.carrier ? { carrier: r.carrier } : {}), ...(r.tracking ? { tracking: r.tracking } : {}) };
+      return {
+        ...base,
+        kind: 'hand-over',
+        partyId: r.party!.id,
+        count: r.count!,
+        method: r.method!,
+        ...(r.carrier ? { carrier: r.carrier } : {}),
+        ...(r.tracking ? { tracking: r.tracking } : {}),
+      };
     case 'arrival':
       return { ...base, kind: 'arrival', handOverId: r.target!.id, arrivedAlive: r.arrivedAlive!, arrivedDead: r.arrivedDead! };
     case 'sale':
       return { ...base, kind: 'sale', partyId: r.party!.id, count: r.count!, priceMinor: r.priceMinor!, currency: r.currency! };
     case 'cash-out':
-      return { ...base, kind: 'cash-out', partyId: r.party!.id, count: r.count!, ...(r.pricePerSpiderlingMinor != null ? { pricePerSpiderlingMinor: r.pricePerSpiderlingMinor } : {}) };
+      return {
+        ...base,
+        kind: 'cash-out',
+        partyId: r.party!.id,
+        count: r.count!,
+        ...(r.pricePerSpiderlingMinor != null ? { pricePerSpiderlingMinor: r.pricePerSpiderlingMinor } : {}),
+      };
     case 'money':
       return { ...base, kind: 'money', fromPartyId: r.fromParty!.id, toPartyId: r.toParty!.id, amountMinor: r.amountMinor!, currency: r.currency! };
     case 'correction':
@@ -100,13 +108,22 @@ export function buildAccountView(data: AccountData): AccountView {
   const pending = pendingPayments(data, owner);
   const excluded = new Set(pending);
   for (const r of data.rows) if (r.kind === 'correction' && r.target && excluded.has(r.target.id)) excluded.add(r.id);
-  const entries = data.rows.filter((r) => !excluded.has(r.id)).map(toLedgerEntry).filter((e): e is LedgerEntry => e !== null);
+  const entries = data.rows
+    .filter((r) => !excluded.has(r.id))
+    .map(toLedgerEntry)
+    .filter((e): e is LedgerEntry => e !== null);
 
   const price = data.terms?.pricePerSpiderlingMinor ?? 0;
   const currency = data.terms?.currency ?? NO_CURRENCY;
   const lines = [...(data.terms?.lines.getItems() ?? [])].sort((a, b) => a.pickOrder - b.pickOrder); // parties in pick order, whatever order the rows came in
   const parties = lines.length ? lines.map((l) => l.member.id) : data.members.filter((m) => m.role !== 'caretaker').map((m) => m.id);
-  const firstPass = computeBalances(parties.map((partyId) => ({ partyId, count: 0 })), entries, price, currency, owner.id);
+  const firstPass = computeBalances(
+    parties.map((partyId) => ({ partyId, count: 0 })),
+    entries,
+    price,
+    currency,
+    owner.id,
+  );
   const inForce = new Set(firstPass.inForce);
 
   const sacs = data.sacs.map((fact): SacShareState => {
@@ -119,7 +136,10 @@ export function buildAccountView(data: AccountData): AccountView {
     }
     const count = fact.aliveAtCount + before;
     const result = lines.length
-      ? computeShares(count, lines.map((l) => ({ partyId: l.member.id, weight: l.weight, pickOrder: l.pickOrder, ...(l.fixedCount ? { fixedCount: l.fixedCount } : {}) })))
+      ? computeShares(
+          count,
+          lines.map((l) => ({ partyId: l.member.id, weight: l.weight, pickOrder: l.pickOrder, ...(l.fixedCount ? { fixedCount: l.fixedCount } : {}) })),
+        )
       : null;
     return { fact, count, aliveInCare: Math.max(0, fact.aliveAtCount - after), withdrawn: before + after, result };
   });

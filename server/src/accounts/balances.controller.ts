@@ -8,6 +8,9 @@ import { BalancesService } from './balances.service';
 export class BalancesController {
   constructor(private readonly balances: BalancesService) {}
 
-  @Get() @ProjectRoles('owner', 'partner')
-  get(@CurrentProject() a: ProjectAccess): Promise<BalancesResponse> { return this.balances.balances(a); }
+  @Get()
+  @ProjectRoles('owner', 'partner')
+  get(@CurrentProject() a: ProjectAccess): Promise<BalancesResponse> {
+    return this.balances.balances(a);
+  }
 }

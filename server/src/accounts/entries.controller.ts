@@ -12,17 +12,37 @@ import { ConfirmEntryDto } from './dto/confirm-entry.dto';
 /** The ledger is append-only: there is no PATCH or DELETE here on purpose. */
 @Controller('projects/:projectId/entries')
 export class EntriesController {
-  constructor(private readonly entries: EntriesService, private readonly balances: BalancesService) {}
+  constructor(
+    private readonly entries: EntriesService,
+    private readonly balances: BalancesService,
+  ) {}
 
-  @Get() @ProjectRoles('owner', 'partner')
-  list(@CurrentProject() a: ProjectAccess): Promise<LedgerEntryResponse[]> { return this.entries.list(a); }
+  @Get()
+  @ProjectRoles('owner', 'partner')
+  list(@CurrentProject() a: ProjectAccess): Promise<LedgerEntryResponse[]> {
+    return this.entries.list(a);
+  }
 
-  @Get('hand-over-form') @ProjectRoles('owner', 'partner')
-  form(@CurrentProject() a: ProjectAccess): Promise<HandOverFormResponse> { return this.balances.handOverForm(a); }
+  @Get('hand-over-form')
+  @ProjectRoles('owner', 'partner')
+  form(@CurrentProject() a: ProjectAccess): Promise<HandOverFormResponse> {
+    return this.balances.handOverForm(a);
+  }
 
-  @Post() @ProjectRoles('owner', 'partner')
-  create(@CurrentProject() a: ProjectAccess, @CurrentUser() u: AuthUser, @Body() dto: CreateEntryDto): Promise<LedgerEntryResponse> { return this.entries.create(a, u, dto); }
+  @Post()
+  @ProjectRoles('owner', 'partner')
+  create(@CurrentProject() a: ProjectAccess, @CurrentUser() u: AuthUser, @Body() dto: CreateEntryDto): Promise<LedgerEntryResponse> {
+    return this.entries.create(a, u, dto);
+  }
 
-  @Post(':entryId/confirm') @ProjectRoles('owner', 'partner')
-  confirm(@CurrentProject() a: ProjectAccess, @CurrentUser() u: AuthUser, @Param('entryId', ParseUUIDPipe) id: string, @Body() dto: ConfirmEntryDto): Promise<LedgerEntryResponse> { return this.entries.confirm(a, u, id, dto); }
+  @Post(':entryId/confirm')
+  @ProjectRoles('owner', 'partner')
+  confirm(
+    @CurrentProject() a: ProjectAccess,
+    @CurrentUser() u: AuthUser,
+    @Param('entryId', ParseUUIDPipe) id: string,
+    @Body() dto: ConfirmEntryDto,
+  ): Promise<LedgerEntryResponse> {
+    return this.entries.confirm(a, u, id, dto);
+  }
 }

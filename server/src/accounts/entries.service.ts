@@ -37,7 +37,11 @@ export class EntriesService {
   }
 
   /** Appends a row the payment provider reported (no user); used by the webhook inside its own transaction. */
-  async appendInTransaction(tx: EntityManager, project: Project, draft: EntryDraft & { source: 'payment-provider'; providerRef: string }): Promise<LedgerEntryRow> {
+  async appendInTransaction(
+    tx: EntityManager,
+    project: Project,
+    draft: EntryDraft & { source: 'payment-provider'; providerRef: string },
+  ): Promise<LedgerEntryRow> {
     await this.lock.take(tx, project.id);
     const row = await this.persistRow(tx, project, draft, null);
     const view = await loadAccount(tx, project);
@@ -45,7 +49,11 @@ export class EntriesService {
     return row;
   }
 
-  private async write(access: ProjectAccess, draft: (tx: EntityManager, view: AccountView) => Promise<EntryDraft>, user: AuthUser): Promise<LedgerEntryResponse> {
+  private async write(
+    access: ProjectAccess,
+    draft: (tx: EntityManager, view: AccountView) => Promise<EntryDraft>,
+    user: AuthUser,
+  ): Promise<LedgerEntryResponse> {
     return this.em.transactional(async (tx) => {
       await this.lock.take(tx, access.project.id);
       const view = await loadAccount(tx, access.project);
@@ -58,7 +66,12 @@ export class EntriesService {
     });
   }
 
-  private async persistRow(tx: EntityManager, project: Project, d: EntryDraft & { source?: 'manual' | 'payment-provider'; providerRef?: string }, userId: string | null): Promise<LedgerEntryRow> {
+  private async persistRow(
+    tx: EntityManager,
+    project: Project,
+    d: EntryDraft & { source?: 'manual' | 'payment-provider'; providerRef?: string },
+    userId: string | null,
+  ): Promise<LedgerEntryRow> {
     const [{ n }] = await tx.execute<{ n: number }[]>(`select nextval('ledger_entry_seq')::int as n`);
     const row = tx.create(LedgerEntryRow, {
       ...d,
@@ -105,7 +118,9 @@ function confirmationDraft(view: AccountView, access: ProjectAccess, userId: str
       throw new BadRequestException('Say how many arrived alive (arrivedAlive) and how many dead (arrivedDead).');
     }
     if (dto.arrivedAlive + dto.arrivedDead !== row.count) {
-      throw new BadRequestException(`The hand-over was of ${row.count} young; arrived alive and arrived dead must add up to ${row.count} (got ${dto.arrivedAlive + dto.arrivedDead}).`);
+      throw new BadRequestException(
+        `The hand-over was of ${row.count} young; arrived alive and arrived dead must add up to ${row.count} (got ${dto.arrivedAlive + dto.arrivedDead}).`,
+      );
     }
     return { kind: 'arrival', date, target: row, party: row.party!, arrivedAlive: dto.arrivedAlive, arrivedDead: dto.arrivedDead };
   }

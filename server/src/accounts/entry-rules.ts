@@ -6,7 +6,24 @@ import type { AccountView, SacShareState } from './account-view';
 import type { LedgerEntryRow } from './ledger-entry.entity';
 
 /** The checked parts of a new row; EntriesService turns them into an entity. */
-export type EntryDraft = Partial<Pick<LedgerEntryRow, 'sacId' | 'count' | 'method' | 'carrier' | 'tracking' | 'priceMinor' | 'pricePerSpiderlingMinor' | 'amountMinor' | 'currency' | 'arrivedAlive' | 'arrivedDead' | 'reason' | 'note'>> & {
+export type EntryDraft = Partial<
+  Pick<
+    LedgerEntryRow,
+    | 'sacId'
+    | 'count'
+    | 'method'
+    | 'carrier'
+    | 'tracking'
+    | 'priceMinor'
+    | 'pricePerSpiderlingMinor'
+    | 'amountMinor'
+    | 'currency'
+    | 'arrivedAlive'
+    | 'arrivedDead'
+    | 'reason'
+    | 'note'
+  >
+> & {
   kind: LedgerEntryRow['kind'];
   date: string;
   party?: ProjectMember;
@@ -80,12 +97,15 @@ export function draftEntry(view: AccountView, access: ProjectAccess, userId: str
   assertMayRecord(view, access, userId, dto);
   const base = { kind: dto.kind, date: dto.date, note: dto.note ?? null };
   if (dto.kind !== 'correction' && !view.data.terms) {
-    throw new ConflictException('No version of the terms is in force yet, so nothing can be recorded against shares. Every partner must accept the terms first.');
+    throw new ConflictException(
+      'No version of the terms is in force yet, so nothing can be recorded against shares. Every partner must accept the terms first.',
+    );
   }
   switch (dto.kind) {
     case 'hand-over': {
       need(dto.method, 'method is required: pick-up or shipment.');
-      if (dto.method === 'shipment' && (!dto.carrier || !dto.tracking)) throw new BadRequestException('A shipment needs the carrier and the tracking reference.');
+      if (dto.method === 'shipment' && (!dto.carrier || !dto.tracking))
+        throw new BadRequestException('A shipment needs the carrier and the tracking reference.');
       if (dto.method === 'pick-up' && (dto.carrier || dto.tracking)) throw new BadRequestException('A pick-up has no carrier or tracking reference.');
       const party = partyOf(view, dto.memberId, 'memberId');
       return { ...base, party, method: dto.method, carrier: dto.carrier ?? null, tracking: dto.tracking ?? null, ...withdrawal(view, dto, party) };

@@ -2,7 +2,6 @@ import { formatMinor as money } from './money-format';
 import type { AccountView } from './account-view';
 import type { LedgerEntryRow } from './ledger-entry.entity';
 
-
 /** One sentence for the timeline and the statement. */
 export function describeEntry(view: AccountView, r: LedgerEntryRow): string {
   const n = (id: string | undefined) => (id ? view.nameOf(id) : 'someone');

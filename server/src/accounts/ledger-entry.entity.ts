@@ -14,7 +14,11 @@ export type LedgerRowKind = (typeof LEDGER_ROW_KINDS)[number];
  */
 @Entity({ tableName: 'ledger_entries' })
 @Index({ properties: ['project', 'seq'] })
-@Check({ name: 'ledger_entries_counts_check', expression: 'coalesce("count", 1) > 0 and coalesce("amount_minor", 1) > 0 and coalesce("price_minor", 0) >= 0 and coalesce("arrived_alive", 0) >= 0 and coalesce("arrived_dead", 0) >= 0' })
+@Check({
+  name: 'ledger_entries_counts_check',
+  expression:
+    'coalesce("count", 1) > 0 and coalesce("amount_minor", 1) > 0 and coalesce("price_minor", 0) >= 0 and coalesce("arrived_alive", 0) >= 0 and coalesce("arrived_dead", 0) >= 0',
+})
 export class LedgerEntryRow extends BaseEntity<'source'> {
   @ManyToOne(() => Project, { deleteRule: 'cascade' })
   project!: Project;

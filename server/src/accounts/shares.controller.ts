@@ -8,6 +8,9 @@ import { SharesService } from './shares.service';
 export class SharesController {
   constructor(private readonly shares: SharesService) {}
 
-  @Get() @ProjectRoles('owner', 'partner')
-  get(@CurrentProject() a: ProjectAccess): Promise<SharesResponse> { return this.shares.shares(a); }
+  @Get()
+  @ProjectRoles('owner', 'partner')
+  get(@CurrentProject() a: ProjectAccess): Promise<SharesResponse> {
+    return this.shares.shares(a);
+  }
 }

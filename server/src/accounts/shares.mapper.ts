@@ -8,8 +8,10 @@ export const FAILURE_CLAUSE_TEXT: Record<FailureClause, string> = {
 };
 
 const FAILED_SAC_TEXT: Record<FailureClause, string> = {
-  'nothing-owed': 'This sac failed. The terms say nothing is owed for a failed sac: no party is owed young from it beyond what was already handed over, sold or cashed out.',
-  'carries-over': 'This sac failed. The terms say the deal carries over: the parties are owed their shares from the next sac instead, worked out on that sac’s count.',
+  'nothing-owed':
+    'This sac failed. The terms say nothing is owed for a failed sac: no party is owed young from it beyond what was already handed over, sold or cashed out.',
+  'carries-over':
+    'This sac failed. The terms say the deal carries over: the parties are owed their shares from the next sac instead, worked out on that sac’s count.',
 };
 
 export function toTermsSummary(t: TermsVersion): TermsSummary {
@@ -58,7 +60,8 @@ export function toSacSharesView(view: AccountView, s: SacShareState, change: Sac
 
 export function toSharesResponse(view: AccountView, changes: Map<string, SacShareChange | null>): SharesResponse {
   const notices: string[] = [];
-  if (!view.data.terms) notices.push('No version of the terms is in force yet, so there are no shares. Shares follow once every partner has accepted the terms.');
+  if (!view.data.terms)
+    notices.push('No version of the terms is in force yet, so there are no shares. Shares follow once every partner has accepted the terms.');
   if (!view.sacs.length) notices.push('This project has no sac yet; shares are worked out per sac from its count of young.');
   return {
     projectId: view.data.project.id,

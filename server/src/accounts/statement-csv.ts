@@ -3,7 +3,23 @@ import type { StatementResponse } from '@broodsilk/shared';
 import { formatMinor } from './money-format';
 
 export const STATEMENT_CSV_COLUMNS = [
-  'line', 'date', 'kind', 'status', 'party', 'from', 'to', 'count', 'amount_minor', 'amount', 'currency', 'method', 'carrier', 'tracking', 'reason', 'recorded_by', 'recorded_at',
+  'line',
+  'date',
+  'kind',
+  'status',
+  'party',
+  'from',
+  'to',
+  'count',
+  'amount_minor',
+  'amount',
+  'currency',
+  'method',
+  'carrier',
+  'tracking',
+  'reason',
+  'recorded_by',
+  'recorded_at',
 ] as const;
 
 /**
@@ -35,8 +51,22 @@ export function statementCsv(s: StatementResponse): string {
   const b = s.balance;
   if (b) {
     const summary = (kind: string, count: number) => ({ kind, party: s.party.name, count });
-    rows.push(summary('share', b.share), summary('handed-over', b.handedOver), summary('sold', b.sold), summary('cashed-out', b.cashedOut), summary('still-owed', b.owedSpiderlings));
+    rows.push(
+      summary('share', b.share),
+      summary('handed-over', b.handedOver),
+      summary('sold', b.sold),
+      summary('cashed-out', b.cashedOut),
+      summary('still-owed', b.owedSpiderlings),
+    );
   }
-  for (const d of s.debts) rows.push({ kind: 'debt', from: d.fromName, to: d.toName, amount_minor: d.amountMinor, amount: formatMinor(d.amountMinor, d.currency), currency: d.currency || currency });
+  for (const d of s.debts)
+    rows.push({
+      kind: 'debt',
+      from: d.fromName,
+      to: d.toName,
+      amount_minor: d.amountMinor,
+      amount: formatMinor(d.amountMinor, d.currency),
+      currency: d.currency || currency,
+    });
   return stringify(rows, { header: true, columns: [...STATEMENT_CSV_COLUMNS], record_delimiter: 'windows' });
 }

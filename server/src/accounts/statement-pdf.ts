@@ -9,12 +9,17 @@ export const pdfSafe = (text: string): string => text.replace(/[−→≈≤≥]
 const entryLine = (e: StatementResponse['entries'][number]): string => {
   const who = e.party?.name ?? (e.from && e.to ? `${e.from.name} to ${e.to.name}` : '');
   const what =
-    e.kind === 'arrival' ? `arrived ${e.arrivedAlive} alive, ${e.arrivedDead} dead`
-    : e.kind === 'money' ? formatMinor(e.amountMinor!, e.currency!)
-    : e.kind === 'sale' ? `${e.count} young for ${formatMinor(e.priceMinor!, e.currency!)}`
-    : e.kind === 'correction' ? `reverses an earlier entry: ${e.reason}`
-    : e.kind === 'confirmation' ? 'payment confirmed'
-    : `${e.count} young${e.method === 'shipment' ? ` by ${e.carrier}, tracking ${e.tracking}` : e.method ? ', picked up' : ''}`;
+    e.kind === 'arrival'
+      ? `arrived ${e.arrivedAlive} alive, ${e.arrivedDead} dead`
+      : e.kind === 'money'
+        ? formatMinor(e.amountMinor!, e.currency!)
+        : e.kind === 'sale'
+          ? `${e.count} young for ${formatMinor(e.priceMinor!, e.currency!)}`
+          : e.kind === 'correction'
+            ? `reverses an earlier entry: ${e.reason}`
+            : e.kind === 'confirmation'
+              ? 'payment confirmed'
+              : `${e.count} young${e.method === 'shipment' ? ` by ${e.carrier}, tracking ${e.tracking}` : e.method ? ', picked up' : ''}`;
   return `#${e.seq}  ${e.date}  ${e.kind}  ${who}: ${what}  [${e.status}]`;
 };
 

@@ -20,7 +20,10 @@ function concerns(row: LedgerEntryRow, memberId: string, depth = 0): boolean {
 
 @Injectable()
 export class StatementsService {
-  constructor(private readonly em: EntityManager, private readonly mail: MailService) {}
+  constructor(
+    private readonly em: EntityManager,
+    private readonly mail: MailService,
+  ) {}
 
   async statement(access: ProjectAccess, memberId: string): Promise<StatementResponse> {
     return this.build(await this.viewFor(access, memberId), memberId);
@@ -93,6 +96,11 @@ export class StatementsService {
 }
 
 function fileName(s: StatementResponse, ext: string): string {
-  const slug = (x: string) => x.toLowerCase().normalize('NFKD').replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'party';
+  const slug = (x: string) =>
+    x
+      .toLowerCase()
+      .normalize('NFKD')
+      .replace(/[^a-z0-9]+/g, '-')
+      .replace(/^-|-$/g, '') || 'party';
   return `statement-${slug(s.project.title)}-${slug(s.party.name)}.${ext}`;
 }

@@ -28,7 +28,8 @@ export function animalRuleErrors(a: AnimalState, today: string): FieldError[] {
   const e: FieldError[] = [];
   const add = (field: string, message: string) => e.push({ field, message });
 
-  if (a.sex === 'male' && a.maturity === 'mature' && !a.maturedOn) add('maturedOn', 'A mature male needs the date of his maturing molt: his male clock counts from it.');
+  if (a.sex === 'male' && a.maturity === 'mature' && !a.maturedOn)
+    add('maturedOn', 'A mature male needs the date of his maturing molt: his male clock counts from it.');
   if (a.maturedOn && a.maturity !== 'mature') add('maturedOn', 'Only a mature animal has a maturing date; set maturity to mature or clear the date.');
   if (a.maturedOn && a.maturedOn > today) add('maturedOn', `The maturing date ${a.maturedOn} is in the future.`);
   if (a.acquiredOn && a.acquiredOn > today) add('acquiredOn', `The acquisition date ${a.acquiredOn} is in the future.`);
@@ -49,6 +50,7 @@ export function animalRuleErrors(a: AnimalState, today: string): FieldError[] {
   if (a.custody === 'loan-out' && !a.custodyParty) add('custodyParty', 'Say who holds the animal while it is lent out.');
   if (a.custody === 'with-owner' && a.dueBackOn) add('dueBackOn', 'A due-back date belongs to a loan; set the custody to a loan or clear the date.');
   if (a.status === 'on-loan' && a.custody !== 'loan-out') add('status', 'An animal on loan is lent out: set custody to loan-out and say who holds it.');
-  if ((a.status === 'sold' || a.status === 'deceased') && !a.statusOn) add('statusOn', `Give the date the animal was ${a.status === 'sold' ? 'sold' : 'found dead'}.`);
+  if ((a.status === 'sold' || a.status === 'deceased') && !a.statusOn)
+    add('statusOn', `Give the date the animal was ${a.status === 'sold' ? 'sold' : 'found dead'}.`);
   return e;
 }

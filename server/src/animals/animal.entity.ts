@@ -1,7 +1,15 @@
 import { Entity, Enum, Index, ManyToOne, Property, Unique } from '@mikro-orm/core';
 import {
-  ANIMAL_SEXES, ANIMAL_STATUSES, CUSTODIES, MATURITIES, OWNER_KINDS,
-  type AnimalSex, type AnimalStatus, type Custody, type Maturity, type OwnerKind,
+  ANIMAL_SEXES,
+  ANIMAL_STATUSES,
+  CUSTODIES,
+  MATURITIES,
+  OWNER_KINDS,
+  type AnimalSex,
+  type AnimalStatus,
+  type Custody,
+  type Maturity,
+  type OwnerKind,
 } from '@broodsilk/shared';
 import { BaseEntity } from '../database/base.entity';
 import { User } from '../users/user.entity';

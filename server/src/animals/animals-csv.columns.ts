@@ -6,8 +6,26 @@ import type { CreateAnimalRequest } from '@broodsilk/shared';
  * stand in for `speciesId`, and `lastMoltOn` is written for reading only.
  */
 export const CSV_FIELDS = [
-  'label', 'speciesId', 'sex', 'maturity', 'maturedOn', 'acquiredOn', 'acquiredFrom', 'pricePaidMinor', 'priceCurrency',
-  'ownerKind', 'ownerEmail', 'ownerName', 'custody', 'custodyParty', 'dueBackOn', 'status', 'statusOn', 'enclosure', 'notes', 'premoltNote',
+  'label',
+  'speciesId',
+  'sex',
+  'maturity',
+  'maturedOn',
+  'acquiredOn',
+  'acquiredFrom',
+  'pricePaidMinor',
+  'priceCurrency',
+  'ownerKind',
+  'ownerEmail',
+  'ownerName',
+  'custody',
+  'custodyParty',
+  'dueBackOn',
+  'status',
+  'statusOn',
+  'enclosure',
+  'notes',
+  'premoltNote',
 ] as const satisfies readonly (keyof CreateAnimalRequest)[];
 
 export const CSV_EXTRA = ['species', 'lastMoltOn'] as const;

@@ -21,7 +21,9 @@ interface ParsedRow {
 
 function messages(errors: ValidationError[]): string[] {
   return errors.flatMap((e) =>
-    Object.values(e.constraints ?? {}).map((m) => (m.endsWith('should not exist') ? `"${e.property}" is not a column this import knows.` : `${e.property}: ${m}`)),
+    Object.values(e.constraints ?? {}).map((m) =>
+      m.endsWith('should not exist') ? `"${e.property}" is not a column this import knows.` : `${e.property}: ${m}`,
+    ),
   );
 }
 
@@ -100,7 +102,13 @@ export class AnimalsCsvService {
   private parse(text: string): ParsedRow[] {
     let parsed: { record: Record<string, string>; info: { bytes: number } }[];
     try {
-      parsed = parse(text, { bom: true, columns: (header: string[]) => header.map((h) => h.trim()), skip_empty_lines: true, info: true, relax_column_count: false });
+      parsed = parse(text, {
+        bom: true,
+        columns: (header: string[]) => header.map((h) => h.trim()),
+        skip_empty_lines: true,
+        info: true,
+        relax_column_count: false,
+      });
     } catch (e) {
       const err = e as { message?: string; lines?: number };
       throw new BadRequestException({ message: `The file is not valid CSV${err.lines ? ` near line ${err.lines}` : ''}: ${err.message ?? 'unreadable'}.` });

@@ -1,6 +1,12 @@
 import {
-  femaleReadiness, maleClock,
-  type AnimalOwner, type AnimalResponse, type PhotoRef, type AnimalSummary, type FemaleReadinessView, type MaleClockView,
+  femaleReadiness,
+  maleClock,
+  type AnimalOwner,
+  type AnimalResponse,
+  type PhotoRef,
+  type AnimalSummary,
+  type FemaleReadinessView,
+  type MaleClockView,
 } from '@broodsilk/shared';
 import type { Animal } from './animal.entity';
 import { effectiveBreeding } from '../species/effective-breeding';
@@ -11,7 +17,13 @@ export function toAnimalSummary(a: Animal): AnimalSummary {
   return {
     id: a.id,
     label: a.label,
-    species: { id: s.id, scientificName: s.scientificName, group: s.group, urticatingHairs: s.urticatingHairs, medicallySignificantVenom: s.medicallySignificantVenom },
+    species: {
+      id: s.id,
+      scientificName: s.scientificName,
+      group: s.group,
+      urticatingHairs: s.urticatingHairs,
+      medicallySignificantVenom: s.medicallySignificantVenom,
+    },
     sex: a.sex,
     maturity: a.maturity,
     maturedOn: a.maturedOn ?? null,

@@ -139,6 +139,11 @@ export class AnimalsService {
     return males
       .map((a) => ({ animal: toAnimalSummary(a), clock: maleClockOf(a, today) }))
       .filter((r): r is MaleClockRow => r.clock !== null)
-      .sort((x, y) => CLOCK_URGENCY[x.clock.state] - CLOCK_URGENCY[y.clock.state] || x.clock.daysUntilPastTypical - y.clock.daysUntilPastTypical || x.animal.label.localeCompare(y.animal.label));
+      .sort(
+        (x, y) =>
+          CLOCK_URGENCY[x.clock.state] - CLOCK_URGENCY[y.clock.state] ||
+          x.clock.daysUntilPastTypical - y.clock.daysUntilPastTypical ||
+          x.animal.label.localeCompare(y.animal.label),
+      );
   }
 }

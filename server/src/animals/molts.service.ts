@@ -20,7 +20,10 @@ export class MoltsService {
   async list(viewer: AuthUser, animalId: string): Promise<MoltResponse[]> {
     const animal = await this.animals.own(viewer, animalId);
     const molts = await this.em.find(Molt, { animal }, { orderBy: { moltedOn: 'desc', createdAt: 'desc' } });
-    const photos = await this.photos.refsFor(MOLT_PHOTO, molts.map((m) => m.id));
+    const photos = await this.photos.refsFor(
+      MOLT_PHOTO,
+      molts.map((m) => m.id),
+    );
     return molts.map((m) => toMoltResponse(m, photos.get(m.id) ?? []));
   }
 
@@ -38,13 +41,21 @@ export class MoltsService {
         errors.push({ field: 'moltedOn', message: `The molt date ${dto.moltedOn} is before you acquired the animal (${animal.acquiredOn}).` });
       }
       const sex = animal.sex === 'unsexed' && (dto.exuviaSex === 'male' || dto.exuviaSex === 'female') ? dto.exuviaSex : animal.sex;
-      if (dto.maturing && sex !== 'male') errors.push({ field: 'maturing', message: 'Only a male has a maturing molt; record his sex first (or the exuvia result).' });
+      if (dto.maturing && sex !== 'male')
+        errors.push({ field: 'maturing', message: 'Only a male has a maturing molt; record his sex first (or the exuvia result).' });
       if (dto.maturing && animal.maturity === 'mature' && animal.maturedOn && animal.maturedOn !== dto.moltedOn) {
         errors.push({ field: 'maturing', message: `He already matured on ${animal.maturedOn}.` });
       }
       if (errors.length) throw badRequest(errors);
 
-      const molt = tx.create(Molt, { animal, moltedOn: dto.moltedOn, exuviaSex: dto.exuviaSex ?? null, sizeCm: dto.sizeCm == null ? null : dto.sizeCm.toFixed(1), maturing: dto.maturing ?? false, notes: dto.notes ?? null });
+      const molt = tx.create(Molt, {
+        animal,
+        moltedOn: dto.moltedOn,
+        exuviaSex: dto.exuviaSex ?? null,
+        sizeCm: dto.sizeCm == null ? null : dto.sizeCm.toFixed(1),
+        maturing: dto.maturing ?? false,
+        notes: dto.notes ?? null,
+      });
       animal.sex = sex;
       if (!animal.lastMoltOn || dto.moltedOn > animal.lastMoltOn) animal.lastMoltOn = dto.moltedOn;
       if (dto.maturing) {

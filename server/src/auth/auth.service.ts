@@ -59,7 +59,11 @@ export class AuthService {
 
   /** Ends every session of the user: tokens carry the version, and it moves on. */
   async logout(userId: string): Promise<void> {
-    await this.em.createQueryBuilder(User).update({ tokenVersion: raw('token_version + 1') }).where({ id: userId }).execute();
+    await this.em
+      .createQueryBuilder(User)
+      .update({ tokenVersion: raw('token_version + 1') })
+      .where({ id: userId })
+      .execute();
   }
 
   async me(userId: string): Promise<Me> {
@@ -106,7 +110,10 @@ export class AuthService {
   async changePassword(userId: string, currentPassword: string, newPassword: string): Promise<IssuedSession> {
     const user = await this.em.findOneOrFail(User, { id: userId }, { populate: ['passwordHash'] });
     if (!(await verifyPassword(user.passwordHash, currentPassword))) {
-      throw new BadRequestException({ message: 'Your current password is not right.', details: [{ field: 'currentPassword', message: 'This is not your current password.' }] });
+      throw new BadRequestException({
+        message: 'Your current password is not right.',
+        details: [{ field: 'currentPassword', message: 'This is not your current password.' }],
+      });
     }
     user.passwordHash = await hashPassword(newPassword);
     user.tokenVersion += 1;

@@ -14,13 +14,16 @@ export class CalendarController {
     return this.calendar.current(user);
   }
 
-  @Post('feed/rotate') @HttpCode(200)
+  @Post('feed/rotate')
+  @HttpCode(200)
   rotate(@CurrentUser() user: AuthUser): Promise<CalendarFeedResponse> {
     return this.calendar.rotate(user);
   }
 
   /** Phone calendars cannot sign in: the token in the URL is the secret. */
-  @Get(':token.ics') @Public() @Header('Cache-Control', 'private, no-store')
+  @Get(':token.ics')
+  @Public()
+  @Header('Cache-Control', 'private, no-store')
   ics(@Param('token') token: string): Promise<StreamableFile> {
     return this.calendar.file(token);
   }

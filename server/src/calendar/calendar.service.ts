@@ -68,13 +68,18 @@ export class CalendarService {
     const events = [...(await this.sacEvents(viewer)), ...(await this.animals.malesByClock(viewer)).flatMap(maleClockEvents)];
     const cal = ical({ name: 'Broodsilk', prodId: { company: 'Broodsilk', product: 'breeding-calendar', language: 'EN' } });
     // Dates stay floating calendar dates (no time zone): all-day events, DTEND exclusive (RFC 5545 §3.6.1).
-    for (const e of events) cal.createEvent({ id: e.uid, start: e.start, end: e.end, allDay: true, summary: e.summary, description: e.description, stamp: feed.createdAt });
+    for (const e of events)
+      cal.createEvent({ id: e.uid, start: e.start, end: e.end, allDay: true, summary: e.summary, description: e.description, stamp: feed.createdAt });
     return cal.toString();
   }
 
   private async sacEvents(viewer: AuthUser): Promise<FeedEvent[]> {
     const memberships = await this.em.find(ProjectMember, { user: viewer.id });
-    const sacs = await this.em.find(Sac, { project: { $in: memberships.map((m) => m.project.id) }, outcome: 'in-progress' }, { populate: SAC_POPULATE, orderBy: { layDate: 'asc' } });
+    const sacs = await this.em.find(
+      Sac,
+      { project: { $in: memberships.map((m) => m.project.id) }, outcome: 'in-progress' },
+      { populate: SAC_POPULATE, orderBy: { layDate: 'asc' } },
+    );
     const responses = await this.views.build(this.em, sacs, viewer.timeZone);
     return sacs.flatMap((s, i) => sacEvents(s.project.title, responses[i]));
   }

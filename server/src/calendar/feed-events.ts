@@ -18,12 +18,22 @@ export interface FeedEvent {
  */
 export const EXPECTED_STAGES = [
   {
-    key: 'eggs-with-legs', stage: 'eggs-with-legs', fromDay: 20, toDay: 25, title: 'Eggs with legs expected',
-    source: 'Guide only, medium confidence: prelarvae hatch about day 20 (B. smithi; brachypelma-smithi.de after Vachon 1957), later in some genera (arachnoworld.de: day 25–42).',
+    key: 'eggs-with-legs',
+    stage: 'eggs-with-legs',
+    fromDay: 20,
+    toDay: 25,
+    title: 'Eggs with legs expected',
+    source:
+      'Guide only, medium confidence: prelarvae hatch about day 20 (B. smithi; brachypelma-smithi.de after Vachon 1957), later in some genera (arachnoworld.de: day 25–42).',
   },
   {
-    key: 'free-living', stage: 'first-instar', fromDay: 42, toDay: 56, title: 'Free-living young expected',
-    source: 'Guide only, medium confidence: young leave the sac about 6–8 weeks after laying (Theraphosa blondi, day 42–56; with the mother about week 6, tarantulaspider.net).',
+    key: 'free-living',
+    stage: 'first-instar',
+    fromDay: 42,
+    toDay: 56,
+    title: 'Free-living young expected',
+    source:
+      'Guide only, medium confidence: young leave the sac about 6–8 weeks after laying (Theraphosa blondi, day 42–56; with the mother about week 6, tarantulaspider.net).',
   },
 ] as const;
 
@@ -34,7 +44,9 @@ export function sacEvents(projectTitle: string, sac: SacResponse): FeedEvent[] {
   const where = `${projectTitle}, sac laid ${sac.layDate}`;
   if (!sac.pulled) {
     out.push({
-      uid: `pull-window-${sac.id}@${DOMAIN}`, start: sac.pullWindow.opensOn, end: addDays(sac.pullWindow.closesOn, 1),
+      uid: `pull-window-${sac.id}@${DOMAIN}`,
+      start: sac.pullWindow.opensOn,
+      end: addDays(sac.pullWindow.closesOn, 1),
       summary: `Pull window: ${projectTitle}`,
       description: `${where}. Pull between day ${sac.pullWindow.fromDay} and day ${sac.pullWindow.toDay} (${sac.pullWindow.opensOn} to ${sac.pullWindow.closesOn}).`,
     });
@@ -42,8 +54,11 @@ export function sacEvents(projectTitle: string, sac: SacResponse): FeedEvent[] {
   for (const e of EXPECTED_STAGES) {
     if (isBroodStageAtLeast(sac.broodStage, e.stage)) continue;
     out.push({
-      uid: `${e.key}-${sac.id}@${DOMAIN}`, start: addDays(sac.layDate, e.fromDay), end: addDays(sac.layDate, e.toDay + 1),
-      summary: `${e.title}: ${projectTitle}`, description: `${where}. Day ${e.fromDay}–${e.toDay}. ${e.source}`,
+      uid: `${e.key}-${sac.id}@${DOMAIN}`,
+      start: addDays(sac.layDate, e.fromDay),
+      end: addDays(sac.layDate, e.toDay + 1),
+      summary: `${e.title}: ${projectTitle}`,
+      description: `${where}. Day ${e.fromDay}–${e.toDay}. ${e.source}`,
     });
   }
   return out;
@@ -56,7 +71,9 @@ export function maleClockEvents(row: MaleClockRow): FeedEvent[] {
   return row.clock.changes
     .filter((c) => c.state !== 'fresh')
     .map((c) => ({
-      uid: `male-clock-${row.animal.id}-${c.state}@${DOMAIN}`, start: c.from, end: addDays(c.from, 1),
+      uid: `male-clock-${row.animal.id}-${c.state}@${DOMAIN}`,
+      start: c.from,
+      end: addDays(c.from, 1),
       summary: `${row.animal.label}: ${CLOCK_WORDS[c.state]}`,
       description: `Male clock of ${row.animal.label}: from ${c.from} he is ${CLOCK_WORDS[c.state]} (typical lifespan after the maturing molt, from memory; species differ).`,
     }));

@@ -16,5 +16,12 @@ export function invitationProblem(i: Invitation, now = new Date()): string | nul
 /** Needs `project` and `invitedBy` loaded. */
 export function toInvitationPreview(i: Invitation): InvitationPreview {
   const problem = invitationProblem(i);
-  return { projectTitle: i.project.title, inviterName: i.invitedBy.displayName, role: i.role, valid: problem === null, problem, expiresAt: i.expiresAt.toISOString() };
+  return {
+    projectTitle: i.project.title,
+    inviterName: i.invitedBy.displayName,
+    role: i.role,
+    valid: problem === null,
+    problem,
+    expiresAt: i.expiresAt.toISOString(),
+  };
 }

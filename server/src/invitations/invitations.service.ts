@@ -1,4 +1,13 @@
-import { BadRequestException, ConflictException, GoneException, Inject, Injectable, Logger, NotFoundException, ServiceUnavailableException } from '@nestjs/common';
+import {
+  BadRequestException,
+  ConflictException,
+  GoneException,
+  Inject,
+  Injectable,
+  Logger,
+  NotFoundException,
+  ServiceUnavailableException,
+} from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
 import { EntityManager } from '@mikro-orm/postgresql';
 import { LockMode } from '@mikro-orm/core';
@@ -34,23 +43,46 @@ export class InvitationsService {
     const { token, hash } = newInvitationToken();
     const { invitation, inviter } = await this.em.transactional(async (tx) => {
       const members = await tx.find(ProjectMember, { project: access.project.id }, { populate: ['user'] });
-      if (members.some((m) => m.user?.email.toLowerCase() === email)) throw new ConflictException({ message: 'Someone with this e-mail address is already a member of the project.' });
+      if (members.some((m) => m.user?.email.toLowerCase() === email))
+        throw new ConflictException({ message: 'Someone with this e-mail address is already a member of the project.' });
       let member: ProjectMember | null = null;
       if (dto.memberId) {
         member = members.find((m) => m.id === dto.memberId) ?? null;
-        if (!member) throw new BadRequestException({ message: 'This project has no such party.', details: [{ field: 'memberId', message: 'This project has no such party.' }] });
-        if (member.user) throw new BadRequestException({ message: `${member.user.displayName} already has an account in this project.`, details: [{ field: 'memberId', message: 'This party already has an account.' }] });
-        if (member.role !== dto.role) throw new BadRequestException({ message: `${member.name} is a ${member.role} of this project; invite them as ${member.role}.`, details: [{ field: 'role', message: `${member.name} is a ${member.role}.` }] });
+        if (!member)
+          throw new BadRequestException({
+            message: 'This project has no such party.',
+            details: [{ field: 'memberId', message: 'This project has no such party.' }],
+          });
+        if (member.user)
+          throw new BadRequestException({
+            message: `${member.user.displayName} already has an account in this project.`,
+            details: [{ field: 'memberId', message: 'This party already has an account.' }],
+          });
+        if (member.role !== dto.role)
+          throw new BadRequestException({
+            message: `${member.name} is a ${member.role} of this project; invite them as ${member.role}.`,
+            details: [{ field: 'role', message: `${member.name} is a ${member.role}.` }],
+          });
       }
       await tx.nativeUpdate(Invitation, { project: access.project.id, email, acceptedAt: null, replacedAt: null }, { replacedAt: new Date() });
       const inviter = await tx.findOneOrFail(User, viewer.id);
       const invitation = tx.create(Invitation, {
-        project: access.project, email, role: dto.role, member, tokenHash: hash, invitedBy: inviter,
+        project: access.project,
+        email,
+        role: dto.role,
+        member,
+        tokenHash: hash,
+        invitedBy: inviter,
         expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000),
       });
       this.activity.record(tx, {
-        projectId: access.project.id, actorId: viewer.id, kind: 'invitation.sent', subjectType: 'invitation', subjectId: invitation.id,
-        summary: `Invited ${email} as ${dto.role}.`, data: { email, role: dto.role },
+        projectId: access.project.id,
+        actorId: viewer.id,
+        kind: 'invitation.sent',
+        subjectType: 'invitation',
+        subjectId: invitation.id,
+        summary: `Invited ${email} as ${dto.role}.`,
+        data: { email, role: dto.role },
       });
       return { invitation, inviter };
     });
@@ -72,10 +104,14 @@ export class InvitationsService {
   }
 
   private async byToken(token: string, em: EntityManager, lock = false): Promise<Invitation> {
-    const found = await em.findOne(Invitation, { tokenHash: hashInvitationToken(token) }, {
-      populate: ['project', 'invitedBy', 'member'],
-      ...(lock ? { lockMode: LockMode.PESSIMISTIC_WRITE } : {}),
-    });
+    const found = await em.findOne(
+      Invitation,
+      { tokenHash: hashInvitationToken(token) },
+      {
+        populate: ['project', 'invitedBy', 'member'],
+        ...(lock ? { lockMode: LockMode.PESSIMISTIC_WRITE } : {}),
+      },
+    );
     if (!found) throw new NotFoundException(INVALID_LINK);
     return found;
   }
@@ -107,8 +143,13 @@ export class InvitationsService {
       inv.acceptedAt = new Date();
       inv.acceptedBy = user;
       this.activity.record(tx, {
-        projectId, actorId: viewer.id, kind: 'member.joined', subjectType: 'member', subjectId: member.id,
-        summary: `${user.displayName} joined as ${inv.role}.`, data: { role: inv.role, invitationId: inv.id },
+        projectId,
+        actorId: viewer.id,
+        kind: 'member.joined',
+        subjectType: 'member',
+        subjectId: member.id,
+        summary: `${user.displayName} joined as ${inv.role}.`,
+        data: { role: inv.role, invitationId: inv.id },
       });
       return { projectId, role: inv.role };
     });

@@ -35,7 +35,11 @@ export async function processImage(input: Buffer): Promise<ProcessedImage> {
       .resize({ width: MAX_SIDE, height: MAX_SIDE, fit: 'inside', withoutEnlargement: true })
       .jpeg({ quality: 85, mozjpeg: true })
       .toBuffer({ resolveWithObject: true });
-    const thumb = await upright.clone().resize({ width: THUMB_SIDE, height: THUMB_SIDE, fit: 'inside', withoutEnlargement: true }).jpeg({ quality: 75 }).toBuffer();
+    const thumb = await upright
+      .clone()
+      .resize({ width: THUMB_SIDE, height: THUMB_SIDE, fit: 'inside', withoutEnlargement: true })
+      .jpeg({ quality: 75 })
+      .toBuffer();
     return { full, thumb, width: info.width, height: info.height, contentType: 'image/jpeg' };
   } catch {
     throw refuse();

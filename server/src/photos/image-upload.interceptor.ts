@@ -20,7 +20,8 @@ export class ImageUploadInterceptor implements NestInterceptor {
     try {
       return await (this.inner.intercept(ctx, next) as Promise<Observable<unknown>>);
     } catch (e) {
-      if (e instanceof PayloadTooLargeException) throw new PayloadTooLargeException({ message: `The photo is larger than ${this.limitMb} MB. Send a smaller one.` });
+      if (e instanceof PayloadTooLargeException)
+        throw new PayloadTooLargeException({ message: `The photo is larger than ${this.limitMb} MB. Send a smaller one.` });
       throw e;
     }
   }

@@ -28,7 +28,8 @@ export class PhotoStorageService implements OnModuleInit {
       } catch (e) {
         const name = (e as { name?: string }).name;
         // Another instance created it meanwhile, or storage is down: uploads will report it then.
-        if (name !== 'BucketAlreadyOwnedByYou' && name !== 'BucketAlreadyExists') this.logger.warn(`Could not create bucket ${this.config.bucket}: ${String(e)}`);
+        if (name !== 'BucketAlreadyOwnedByYou' && name !== 'BucketAlreadyExists')
+          this.logger.warn(`Could not create bucket ${this.config.bucket}: ${String(e)}`);
       }
     }
   }

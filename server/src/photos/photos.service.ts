@@ -21,11 +21,19 @@ export class PhotosService {
 
   /** Re-encodes and stores an upload for a subject the caller has already checked the viewer may change. */
   async store(viewer: AuthUser, subjectType: string, subjectId: string, file: { buffer?: Buffer } | undefined): Promise<PhotoRef> {
-    if (!file?.buffer?.length) throw new BadRequestException({ message: 'Attach the photo as the form field "file".', details: [{ field: 'file', message: 'Attach a photo.' }] });
+    if (!file?.buffer?.length)
+      throw new BadRequestException({ message: 'Attach the photo as the form field "file".', details: [{ field: 'file', message: 'Attach a photo.' }] });
     const image = await processImage(file.buffer);
     const photo = this.em.create(Photo, {
-      uploadedBy: this.em.getReference(User, viewer.id), subjectType, subjectId, storageKey: '', thumbKey: '',
-      contentType: image.contentType, width: image.width, height: image.height, bytes: image.full.length,
+      uploadedBy: this.em.getReference(User, viewer.id),
+      subjectType,
+      subjectId,
+      storageKey: '',
+      thumbKey: '',
+      contentType: image.contentType,
+      width: image.width,
+      height: image.height,
+      bytes: image.full.length,
     });
     photo.storageKey = `photos/${photo.id}.jpg`;
     photo.thumbKey = `photos/${photo.id}-thumb.jpg`;

@@ -31,7 +31,15 @@ export class MembersService {
         if (same) throw new ConflictException({ message: `${same.user?.displayName ?? same.name} already has this e-mail address in the project.` });
       }
       const m = tx.create(ProjectMember, { project: access.project.id, user: null, role: dto.role, name: dto.name.trim(), email });
-      this.activity.record(tx, { projectId: access.project.id, actorId: viewer.id, kind: 'member.added', subjectType: 'member', subjectId: m.id, summary: `Added ${m.name} as ${dto.role}.`, data: { role: dto.role } });
+      this.activity.record(tx, {
+        projectId: access.project.id,
+        actorId: viewer.id,
+        kind: 'member.added',
+        subjectType: 'member',
+        subjectId: m.id,
+        summary: `Added ${m.name} as ${dto.role}.`,
+        data: { role: dto.role },
+      });
       return m;
     });
     return toMemberResponse(member, access.role);
@@ -44,8 +52,19 @@ export class MembersService {
       if (!m) throw new NotFoundException('This project has no such party.');
       if (m.role === 'owner') throw new BadRequestException({ message: 'The owner cannot be removed from their own project.' });
       const inTerms = await tx.count(TermsLine, { member: m.id });
-      if (inTerms) throw new ConflictException({ message: `${m.user?.displayName ?? m.name} is a party of the project's terms, so they stay on the record. Propose new terms giving them weight 0 instead.` });
-      this.activity.record(tx, { projectId: access.project.id, actorId: viewer.id, kind: 'member.removed', subjectType: 'member', subjectId: m.id, summary: `Removed ${m.user?.displayName ?? m.name} (${m.role}).`, data: { role: m.role } });
+      if (inTerms)
+        throw new ConflictException({
+          message: `${m.user?.displayName ?? m.name} is a party of the project's terms, so they stay on the record. Propose new terms giving them weight 0 instead.`,
+        });
+      this.activity.record(tx, {
+        projectId: access.project.id,
+        actorId: viewer.id,
+        kind: 'member.removed',
+        subjectType: 'member',
+        subjectId: m.id,
+        summary: `Removed ${m.user?.displayName ?? m.name} (${m.role}).`,
+        data: { role: m.role },
+      });
       tx.remove(m);
     });
   }

@@ -28,19 +28,30 @@ export class PairingsService {
 
   async create(viewer: AuthUser, access: ProjectAccess, dto: CreatePairingDto): Promise<PairingResponse> {
     const startedAt = new Date(dto.startedAt);
-    if (startedAt.getTime() > Date.now() + FUTURE_SLACK_MS) throw badRequest([{ field: 'startedAt', message: 'The pairing start is in the future; record a pairing once it has happened.' }]);
+    if (startedAt.getTime() > Date.now() + FUTURE_SLACK_MS)
+      throw badRequest([{ field: 'startedAt', message: 'The pairing start is in the future; record a pairing once it has happened.' }]);
     const id = await this.em.transactional(async (tx) => {
       const p = await tx.findOneOrFail(Project, access.project.id, { populate: ['owner', 'male'] });
       if (p.endedEarlyReason || p.closedOn) throw new ConflictException({ message: 'This project has ended, so no more pairings can be recorded in it.' });
       // The owner's calendar day, so every member sees the same stage and warnings.
       const startedOn = todayIn(p.owner.timeZone, startedAt);
       const pairing = tx.create(Pairing, {
-        project: p, startedAt, startedOn, durationMinutes: dto.durationMinutes, outcome: dto.outcome, notes: dto.notes ?? null,
+        project: p,
+        startedAt,
+        startedOn,
+        durationMinutes: dto.durationMinutes,
+        outcome: dto.outcome,
+        notes: dto.notes ?? null,
         recordedBy: tx.getReference(User, viewer.id),
       });
       this.activity.record(tx, {
-        projectId: p.id, actorId: viewer.id, kind: 'pairing.recorded', subjectType: 'pairing', subjectId: pairing.id,
-        summary: `Pairing on ${startedOn} (${dto.durationMinutes} min): ${dto.outcome}.`, data: { on: startedOn, outcome: dto.outcome, durationMinutes: dto.durationMinutes },
+        projectId: p.id,
+        actorId: viewer.id,
+        kind: 'pairing.recorded',
+        subjectType: 'pairing',
+        subjectId: pairing.id,
+        summary: `Pairing on ${startedOn} (${dto.durationMinutes} min): ${dto.outcome}.`,
+        data: { on: startedOn, outcome: dto.outcome, durationMinutes: dto.durationMinutes },
       });
       return pairing.id;
     });

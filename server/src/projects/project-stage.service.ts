@@ -1,9 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
-import {
-  deriveProjectStage, pairingWarnings,
-  type DerivedProjectStage, type FailureClause, type PairingWarning, type ProjectFacts,
-} from '@broodsilk/shared';
+import { deriveProjectStage, pairingWarnings, type DerivedProjectStage, type FailureClause, type PairingWarning, type ProjectFacts } from '@broodsilk/shared';
 import { Molt } from '../animals/molt.entity';
 import { effectiveBreeding } from '../species/effective-breeding';
 import { ownBreeding } from '../species/species.mapper';

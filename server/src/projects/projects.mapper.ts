@@ -1,4 +1,12 @@
-import type { ProjectAnimal, ProjectMemberResponse, ProjectResponse, ProjectRole, ProjectSummary, DerivedProjectStage, PairingWarning } from '@broodsilk/shared';
+import type {
+  ProjectAnimal,
+  ProjectMemberResponse,
+  ProjectResponse,
+  ProjectRole,
+  ProjectSummary,
+  DerivedProjectStage,
+  PairingWarning,
+} from '@broodsilk/shared';
 import type { Animal } from '../animals/animal.entity';
 import { toAnimalResponse } from '../animals/animals.mapper';
 import type { Project } from './project.entity';
@@ -28,8 +36,27 @@ export function toProjectSummary(p: Project, stage: DerivedProjectStage, myRole:
 /** What members see of an animal: no price paid, no photos, not editable here. Needs species, recordedBy, ownerUser. */
 export function toProjectAnimal(a: Animal, today: string, viewerId: string): ProjectAnimal {
   const r = toAnimalResponse(a, today, viewerId);
-  const { pricePaidMinor: _p, priceCurrency: _c, photos: _ph, editable: _e, recordedBy: _r, acquiredFrom: _f, acquiredOn: _o, notes: _n, updatedAt: _u, premoltNote: _pm, owner, ...summary } = r;
-  return { ...summary, owner: { name: owner.name, ...(owner.userId ? { userId: owner.userId } : {}) }, dueBackOn: r.dueBackOn, maleClock: r.maleClock, readiness: r.readiness };
+  const {
+    pricePaidMinor: _p,
+    priceCurrency: _c,
+    photos: _ph,
+    editable: _e,
+    recordedBy: _r,
+    acquiredFrom: _f,
+    acquiredOn: _o,
+    notes: _n,
+    updatedAt: _u,
+    premoltNote: _pm,
+    owner,
+    ...summary
+  } = r;
+  return {
+    ...summary,
+    owner: { name: owner.name, ...(owner.userId ? { userId: owner.userId } : {}) },
+    dueBackOn: r.dueBackOn,
+    maleClock: r.maleClock,
+    readiness: r.readiness,
+  };
 }
 
 /** Needs `user` loaded. E-mail addresses are the owner's business only. */
@@ -45,8 +72,13 @@ export function toMemberResponse(m: ProjectMember, viewerRole: ProjectRole): Pro
 }
 
 export function toProjectResponse(
-  p: Project, stage: DerivedProjectStage, myRole: ProjectRole, today: string, viewerId: string,
-  warnings: PairingWarning[], members: ProjectMember[],
+  p: Project,
+  stage: DerivedProjectStage,
+  myRole: ProjectRole,
+  today: string,
+  viewerId: string,
+  warnings: PairingWarning[],
+  members: ProjectMember[],
 ): ProjectResponse {
   return {
     ...toProjectSummary(p, stage, myRole, members.filter((m) => m.role === 'partner').map(memberName)),

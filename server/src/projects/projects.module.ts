@@ -25,7 +25,16 @@ import { PairingsController } from './pairings.controller';
 @Module({
   imports: [MikroOrmModule.forFeature([Project, ProjectMember, Pairing, TermsVersion, TermsLine, TermsAcceptance]), AnimalsModule, ActivityModule],
   controllers: [ProjectsController, MembersController, TermsController, PairingsController],
-  providers: [ProjectAccessService, ProjectResolverRegistry, ProjectFactsRegistry, ProjectStageService, ProjectsService, MembersService, TermsService, PairingsService],
+  providers: [
+    ProjectAccessService,
+    ProjectResolverRegistry,
+    ProjectFactsRegistry,
+    ProjectStageService,
+    ProjectsService,
+    MembersService,
+    TermsService,
+    PairingsService,
+  ],
   exports: [ProjectAccessService, ProjectResolverRegistry, ProjectFactsRegistry, ProjectStageService, TermsService],
 })
 export class ProjectsModule implements OnModuleInit {

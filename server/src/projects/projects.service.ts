@@ -36,10 +36,17 @@ export class ProjectsService {
   /** Every project the viewer is a member of, newest first, with its stage. */
   async list(viewer: AuthUser): Promise<ProjectSummary[]> {
     const memberships = await this.em.find(ProjectMember, { user: viewer.id }, { populate: ['project'] });
-    const projects = await this.em.find(Project, { id: { $in: memberships.map((m) => m.project.id) } }, { populate: PROJECT_POPULATE, orderBy: { createdAt: 'desc', id: 'asc' } });
+    const projects = await this.em.find(
+      Project,
+      { id: { $in: memberships.map((m) => m.project.id) } },
+      { populate: PROJECT_POPULATE, orderBy: { createdAt: 'desc', id: 'asc' } },
+    );
     const standings = await this.stages.standings(projects);
     const roleOf = new Map(memberships.map((m) => [m.project.id, m.role]));
-    const partners = await partnerNamesOf(this.em, projects.map((p) => p.id));
+    const partners = await partnerNamesOf(
+      this.em,
+      projects.map((p) => p.id),
+    );
     return projects.map((p) => toProjectSummary(p, standings.get(p.id)!.stage, roleOf.get(p.id)!, partners.get(p.id) ?? []));
   }
 
@@ -63,7 +70,8 @@ export class ProjectsService {
       const check = (a: Animal | null, field: 'femaleId' | 'maleId', sex: 'female' | 'male') => {
         if (!a) errors.push({ field, message: `There is no such animal in your collection; choose the ${sex} from the animals you recorded.` });
         else if (a.sex !== sex) errors.push({ field, message: `${a.label} is recorded as ${a.sex}, not ${sex}.` });
-        else if (a.status === 'sold' || a.status === 'deceased') errors.push({ field, message: `${a.label} is marked ${a.status}, so it cannot start a project.` });
+        else if (a.status === 'sold' || a.status === 'deceased')
+          errors.push({ field, message: `${a.label} is marked ${a.status}, so it cannot start a project.` });
       };
       check(female, 'femaleId', 'female');
       check(male, 'maleId', 'male');
@@ -72,7 +80,11 @@ export class ProjectsService {
       const p = tx.create(Project, { owner, female: female!, male: male!, title: dto.title.trim(), notes: dto.notes ?? null });
       tx.create(ProjectMember, { project: p, user: owner, role: 'owner', name: owner.displayName, email: owner.email });
       this.activity.record(tx, {
-        projectId: p.id, actorId: viewer.id, kind: 'project.created', subjectType: 'project', subjectId: p.id,
+        projectId: p.id,
+        actorId: viewer.id,
+        kind: 'project.created',
+        subjectType: 'project',
+        subjectId: p.id,
         summary: `${owner.displayName} started the project "${p.title}" with ${female!.label} and ${male!.label}.`,
         data: { femaleId: female!.id, maleId: male!.id },
       });
@@ -85,10 +97,24 @@ export class ProjectsService {
     await this.em.transactional(async (tx) => {
       const p = await tx.findOneOrFail(Project, access.project.id);
       const changed: string[] = [];
-      if (dto.title !== undefined && dto.title.trim() !== p.title) { p.title = dto.title.trim(); changed.push('title'); }
-      if (dto.notes !== undefined && dto.notes !== (p.notes ?? null)) { p.notes = dto.notes; changed.push('notes'); }
+      if (dto.title !== undefined && dto.title.trim() !== p.title) {
+        p.title = dto.title.trim();
+        changed.push('title');
+      }
+      if (dto.notes !== undefined && dto.notes !== (p.notes ?? null)) {
+        p.notes = dto.notes;
+        changed.push('notes');
+      }
       if (changed.length) {
-        this.activity.record(tx, { projectId: p.id, actorId: viewer.id, kind: 'project.updated', subjectType: 'project', subjectId: p.id, summary: `Changed the project's ${changed.join(' and ')}.`, data: { changed } });
+        this.activity.record(tx, {
+          projectId: p.id,
+          actorId: viewer.id,
+          kind: 'project.updated',
+          subjectType: 'project',
+          subjectId: p.id,
+          summary: `Changed the project's ${changed.join(' and ')}.`,
+          data: { changed },
+        });
       }
     });
     return this.get(viewer, access);
@@ -103,7 +129,15 @@ export class ProjectsService {
       p.endedEarlyReason = dto.reason;
       p.endedEarlyNote = dto.note ?? null;
       p.endedOn = this.today(viewer);
-      this.activity.record(tx, { projectId: p.id, actorId: viewer.id, kind: 'project.ended', subjectType: 'project', subjectId: p.id, summary: `Ended the project early: ${dto.reason}.`, data: { reason: dto.reason, note: dto.note ?? null } });
+      this.activity.record(tx, {
+        projectId: p.id,
+        actorId: viewer.id,
+        kind: 'project.ended',
+        subjectType: 'project',
+        subjectId: p.id,
+        summary: `Ended the project early: ${dto.reason}.`,
+        data: { reason: dto.reason, note: dto.note ?? null },
+      });
     });
     return this.get(viewer, access);
   }

@@ -14,7 +14,11 @@ describe('termsStatuses', () => {
       { number: 3, mustAccept: ['p1'], accepted: [] },
     ]);
     expect(r.inForce).toBe(1);
-    expect([...r.status]).toEqual([[1, 'in-force'], [2, 'proposed'], [3, 'proposed']]);
+    expect([...r.status]).toEqual([
+      [1, 'in-force'],
+      [2, 'proposed'],
+      [3, 'proposed'],
+    ]);
   });
 
   it('once a newer version is accepted, every older one is superseded, accepted or not', () => {
@@ -24,6 +28,10 @@ describe('termsStatuses', () => {
       { number: 3, mustAccept: ['p1'], accepted: ['p1'] },
     ]);
     expect(r.inForce).toBe(3);
-    expect([...r.status]).toEqual([[1, 'superseded'], [2, 'superseded'], [3, 'in-force']]);
+    expect([...r.status]).toEqual([
+      [1, 'superseded'],
+      [2, 'superseded'],
+      [3, 'in-force'],
+    ]);
   });
 });

@@ -16,7 +16,10 @@ export function termsStatuses(versions: readonly VersionAcceptanceFacts[]): { in
   const inForce = versions.filter(fullyAccepted).reduce<number | null>((max, v) => (max === null || v.number > max ? v.number : max), null);
   const status = new Map<number, TermsStatus>();
   for (const v of versions) {
-    status.set(v.number, v.number === inForce ? 'in-force' : inForce !== null && v.number < inForce ? 'superseded' : fullyAccepted(v) ? 'superseded' : 'proposed');
+    status.set(
+      v.number,
+      v.number === inForce ? 'in-force' : inForce !== null && v.number < inForce ? 'superseded' : fullyAccepted(v) ? 'superseded' : 'proposed',
+    );
   }
   return { inForce, status };
 }

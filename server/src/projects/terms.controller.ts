@@ -29,8 +29,10 @@ export class TermsController {
   @HttpCode(200)
   @ProjectRoles('owner', 'partner')
   accept(
-    @CurrentUser() user: AuthUser, @CurrentProject() access: ProjectAccess,
-    @Param('version', new ParseIntPipe({ errorHttpStatusCode: 404 })) version: number, @Body() dto: AcceptTermsDto,
+    @CurrentUser() user: AuthUser,
+    @CurrentProject() access: ProjectAccess,
+    @Param('version', new ParseIntPipe({ errorHttpStatusCode: 404 })) version: number,
+    @Body() dto: AcceptTermsDto,
   ): Promise<TermsVersionResponse> {
     return this.terms.accept(user, access, version, dto);
   }

@@ -41,6 +41,9 @@ export function toTermsVersionResponse(v: TermsVersion, status: TermsStatus): Te
         onBehalf: a.onBehalf,
         note: a.note ?? null,
       })),
-    awaiting: status === 'proposed' ? lines.filter((l) => mustAccept(l.member.role) && !acceptedIds.has(l.member.id)).map((l) => ({ memberId: l.member.id, name: nameOf(l.member) })) : [],
+    awaiting:
+      status === 'proposed'
+        ? lines.filter((l) => mustAccept(l.member.role) && !acceptedIds.has(l.member.id)).map((l) => ({ memberId: l.member.id, name: nameOf(l.member) }))
+        : [],
   };
 }

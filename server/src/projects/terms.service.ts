@@ -1,6 +1,13 @@
 import { BadRequestException, ConflictException, ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
-import { computeShares, DEFAULT_HAND_OVER_STAGE, type FailureClause, type FieldError, type TermsListResponse, type TermsVersionResponse } from '@broodsilk/shared';
+import {
+  computeShares,
+  DEFAULT_HAND_OVER_STAGE,
+  type FailureClause,
+  type FieldError,
+  type TermsListResponse,
+  type TermsVersionResponse,
+} from '@broodsilk/shared';
 import type { AuthUser } from '../auth/auth-user';
 import { badRequest } from '../animals/animals.service';
 import { User } from '../users/user.entity';
@@ -63,23 +70,31 @@ export class TermsService {
     const byId = new Map(parties.map((m) => [m.id, m]));
     const seen = new Set<string>();
     dto.lines.forEach((l, i) => {
-      if (!byId.has(l.memberId)) errors.push({ field: `lines.${i}.memberId`, message: 'This line names nobody who is an owner or partner of the project (caretakers hold no share).' });
-      else if (seen.has(l.memberId)) errors.push({ field: `lines.${i}.memberId`, message: `${byId.get(l.memberId)!.name} is listed twice; give each party one line.` });
+      if (!byId.has(l.memberId))
+        errors.push({ field: `lines.${i}.memberId`, message: 'This line names nobody who is an owner or partner of the project (caretakers hold no share).' });
+      else if (seen.has(l.memberId))
+        errors.push({ field: `lines.${i}.memberId`, message: `${byId.get(l.memberId)!.name} is listed twice; give each party one line.` });
       seen.add(l.memberId);
     });
     const missing = parties.filter((m) => !seen.has(m.id));
-    if (missing.length) errors.push({ field: 'lines', message: `Every party needs a line; missing: ${missing.map((m) => m.user?.displayName ?? m.name).join(', ')}.` });
-    if (dto.lines.reduce((s, l) => s + l.weight, 0) <= 0) errors.push({ field: 'lines', message: 'At least one party needs a weight above 0, or nobody would get a share.' });
+    if (missing.length)
+      errors.push({ field: 'lines', message: `Every party needs a line; missing: ${missing.map((m) => m.user?.displayName ?? m.name).join(', ')}.` });
+    if (dto.lines.reduce((s, l) => s + l.weight, 0) <= 0)
+      errors.push({ field: 'lines', message: 'At least one party needs a weight above 0, or nobody would get a share.' });
     const picks = new Map<number, number>();
     dto.lines.forEach((l, i) => {
-      if (picks.has(l.pickOrder)) errors.push({ field: `lines.${i}.pickOrder`, message: `Pick order ${l.pickOrder} is used twice; each party needs its own place.` });
+      if (picks.has(l.pickOrder))
+        errors.push({ field: `lines.${i}.pickOrder`, message: `Pick order ${l.pickOrder} is used twice; each party needs its own place.` });
       picks.set(l.pickOrder, i);
     });
     if (!CURRENCIES.has(dto.currency)) errors.push({ field: 'currency', message: `${dto.currency} is not an ISO 4217 currency code.` });
     if (!errors.length) {
       // The share rule has its own input checks; run it once so terms it would refuse never get stored.
       try {
-        computeShares(0, dto.lines.map((l) => ({ partyId: l.memberId, weight: l.weight, fixedCount: l.fixedCount ?? 0, pickOrder: l.pickOrder })));
+        computeShares(
+          0,
+          dto.lines.map((l) => ({ partyId: l.memberId, weight: l.weight, fixedCount: l.fixedCount ?? 0, pickOrder: l.pickOrder })),
+        );
       } catch (e) {
         errors.push({ field: 'lines', message: e instanceof Error ? e.message : String(e) });
       }
@@ -90,22 +105,40 @@ export class TermsService {
   /** The owner proposes a new version; they accept it by proposing, every partner party still has to. */
   async propose(viewer: AuthUser, access: ProjectAccess, dto: ProposeTermsDto): Promise<TermsVersionResponse> {
     const number = await this.em.transactional(async (tx) => {
-      const parties = await tx.find(ProjectMember, { project: access.project.id, role: { $in: ['owner', 'partner'] } }, { populate: ['user'], orderBy: { createdAt: 'asc' } });
+      const parties = await tx.find(
+        ProjectMember,
+        { project: access.project.id, role: { $in: ['owner', 'partner'] } },
+        { populate: ['user'], orderBy: { createdAt: 'asc' } },
+      );
       const errors = this.validate(dto, parties);
       if (errors.length) throw badRequest(errors);
       const last = await tx.findOne(TermsVersion, { project: access.project.id }, { orderBy: { number: 'desc' } });
       const me = tx.getReference(User, viewer.id);
       const v = tx.create(TermsVersion, {
-        project: access.project.id, number: (last?.number ?? 0) + 1, createdBy: me,
-        pricePerSpiderlingMinor: dto.pricePerSpiderlingMinor, currency: dto.currency, failureClause: dto.failureClause,
-        handOverStage: dto.handOverStage ?? DEFAULT_HAND_OVER_STAGE, shippingPaidBy: dto.shippingPaidBy, note: dto.note ?? null,
+        project: access.project.id,
+        number: (last?.number ?? 0) + 1,
+        createdBy: me,
+        pricePerSpiderlingMinor: dto.pricePerSpiderlingMinor,
+        currency: dto.currency,
+        failureClause: dto.failureClause,
+        handOverStage: dto.handOverStage ?? DEFAULT_HAND_OVER_STAGE,
+        shippingPaidBy: dto.shippingPaidBy,
+        note: dto.note ?? null,
       });
-      for (const l of dto.lines) tx.create(TermsLine, { version: v, member: l.memberId, weight: l.weight, fixedCount: l.fixedCount ?? 0, pickOrder: l.pickOrder });
+      for (const l of dto.lines)
+        tx.create(TermsLine, { version: v, member: l.memberId, weight: l.weight, fixedCount: l.fixedCount ?? 0, pickOrder: l.pickOrder });
       tx.create(TermsAcceptance, { version: v, member: access.member, recordedBy: me, note: 'Proposed these terms.' });
       const waiting = parties.filter((m) => m.role === 'partner').length;
       this.activity.record(tx, {
-        projectId: access.project.id, actorId: viewer.id, kind: 'terms.proposed', subjectType: 'terms-version', subjectId: v.id, audience: 'partners',
-        summary: waiting ? `Proposed terms version ${v.number}; waiting for ${waiting} partner${waiting === 1 ? '' : 's'} to accept.` : `Set terms version ${v.number}.`,
+        projectId: access.project.id,
+        actorId: viewer.id,
+        kind: 'terms.proposed',
+        subjectType: 'terms-version',
+        subjectId: v.id,
+        audience: 'partners',
+        summary: waiting
+          ? `Proposed terms version ${v.number}; waiting for ${waiting} partner${waiting === 1 ? '' : 's'} to accept.`
+          : `Set terms version ${v.number}.`,
         data: { number: v.number },
       });
       return v.number;
@@ -137,11 +170,13 @@ export class TermsService {
       let party: ProjectMember;
       const onBehalf = dto.memberId !== undefined && dto.memberId !== access.member.id;
       if (onBehalf) {
-        if (access.role !== 'owner') throw new ForbiddenException('Only the owner may record acceptance on behalf of another party; accept for yourself instead.');
+        if (access.role !== 'owner')
+          throw new ForbiddenException('Only the owner may record acceptance on behalf of another party; accept for yourself instead.');
         const line = [...v.lines].find((l) => l.member.id === dto.memberId);
         if (!line) throw badRequest([{ field: 'memberId', message: `This party is not in terms version ${number}.` }]);
         if (line.member.user) throw badRequest([{ field: 'memberId', message: `${line.member.user.displayName} has an account and accepts for themselves.` }]);
-        if (!dto.note?.trim()) throw badRequest([{ field: 'note', message: 'Say how the party agreed (e.g. "agreed by e-mail on 3 May"); it is kept with the acceptance.' }]);
+        if (!dto.note?.trim())
+          throw badRequest([{ field: 'note', message: 'Say how the party agreed (e.g. "agreed by e-mail on 3 May"); it is kept with the acceptance.' }]);
         party = line.member;
       } else {
         const line = [...v.lines].find((l) => l.member.id === access.member.id);
@@ -151,18 +186,35 @@ export class TermsService {
       if ([...v.acceptances].some((a) => a.member.id === party.id)) {
         throw new ConflictException({ message: `${party.user?.displayName ?? party.name} has already accepted terms version ${number}.` });
       }
-      const acceptance = tx.create(TermsAcceptance, { version: v, member: party, recordedBy: tx.getReference(User, viewer.id), onBehalf, note: dto.note ?? null });
+      const acceptance = tx.create(TermsAcceptance, {
+        version: v,
+        member: party,
+        recordedBy: tx.getReference(User, viewer.id),
+        onBehalf,
+        note: dto.note ?? null,
+      });
       v.acceptances.add(acceptance);
       const who = party.user?.displayName ?? party.name;
       this.activity.record(tx, {
-        projectId: access.project.id, actorId: viewer.id, kind: 'terms.accepted', subjectType: 'terms-version', subjectId: v.id, audience: 'partners',
+        projectId: access.project.id,
+        actorId: viewer.id,
+        kind: 'terms.accepted',
+        subjectType: 'terms-version',
+        subjectId: v.id,
+        audience: 'partners',
         summary: onBehalf ? `Recorded that ${who} accepted terms version ${number} (on their behalf).` : `${who} accepted terms version ${number}.`,
         data: { number, memberId: party.id, onBehalf },
       });
       if (this.statuses(versions).inForce === number) {
         this.activity.record(tx, {
-          projectId: access.project.id, actorId: viewer.id, kind: 'terms.in-force', subjectType: 'terms-version', subjectId: v.id, audience: 'partners',
-          summary: `Terms version ${number} is now in force.`, data: { number },
+          projectId: access.project.id,
+          actorId: viewer.id,
+          kind: 'terms.in-force',
+          subjectType: 'terms-version',
+          subjectId: v.id,
+          audience: 'partners',
+          summary: `Terms version ${number} is now in force.`,
+          data: { number },
         });
       }
     });

@@ -13,7 +13,8 @@ export class NotificationsController {
     return this.notifications.list(user);
   }
 
-  @Post(':id/read') @HttpCode(200)
+  @Post(':id/read')
+  @HttpCode(200)
   read(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<NotificationResponse> {
     return this.notifications.markRead(user, id);
   }

@@ -25,16 +25,30 @@ export function sacCandidates(person: Person, projectId: string, projectTitle: s
   if (sac.roll && (sac.roll.status === 'due' || sac.roll.status === 'overdue')) {
     const overdue = sac.roll.status === 'overdue';
     out.push({
-      ...base, key: `roll:${sac.id}:${person.id}:${sac.today}`, kind: overdue ? 'roll-overdue' : 'roll-due',
+      ...base,
+      key: `roll:${sac.id}:${person.id}:${sac.today}`,
+      kind: overdue ? 'roll-overdue' : 'roll-due',
       title: overdue ? `Roll overdue: ${projectTitle}` : `Roll due: ${projectTitle}`,
       body: `${where}: the next roll was due at ${sac.roll.due} (UTC).`,
     });
   }
   if (!sac.pulled && sac.pullWindow.opensOn === sac.today) {
-    out.push({ ...base, key: `pull-opens:${sac.id}:${person.id}:${sac.today}`, kind: 'pull-window-opens', title: `Pull window opens today: ${projectTitle}`, body: `${where}: the pull window opens today and closes on ${sac.pullWindow.closesOn}.` });
+    out.push({
+      ...base,
+      key: `pull-opens:${sac.id}:${person.id}:${sac.today}`,
+      kind: 'pull-window-opens',
+      title: `Pull window opens today: ${projectTitle}`,
+      body: `${where}: the pull window opens today and closes on ${sac.pullWindow.closesOn}.`,
+    });
   }
   if (!sac.pulled && sac.pullWindow.closesOn === sac.today) {
-    out.push({ ...base, key: `pull-closes:${sac.id}:${person.id}:${sac.today}`, kind: 'pull-window-closes', title: `Pull window closes today: ${projectTitle}`, body: `${where}: today is the last day of the pull window.` });
+    out.push({
+      ...base,
+      key: `pull-closes:${sac.id}:${person.id}:${sac.today}`,
+      kind: 'pull-window-closes',
+      title: `Pull window closes today: ${projectTitle}`,
+      body: `${where}: today is the last day of the pull window.`,
+    });
   }
   return out;
 }

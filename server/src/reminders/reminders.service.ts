@@ -45,7 +45,11 @@ export class RemindersService {
   private async sacReminders(em: EntityManager, now: Date): Promise<Candidate[]> {
     const sacs = await em.find(Sac, { outcome: 'in-progress', project: { endedOn: null, closedOn: null } }, { populate: SAC_POPULATE });
     if (!sacs.length) return [];
-    const members = await em.find(ProjectMember, { project: { $in: [...new Set(sacs.map((s) => s.project.id))] }, role: { $in: ['owner', 'caretaker'] }, user: { $ne: null } }, { populate: ['user'] });
+    const members = await em.find(
+      ProjectMember,
+      { project: { $in: [...new Set(sacs.map((s) => s.project.id))] }, role: { $in: ['owner', 'caretaker'] }, user: { $ne: null } },
+      { populate: ['user'] },
+    );
     const out: Candidate[] = [];
     for (const m of members) {
       const own = sacs.filter((s) => s.project.id === m.project.id);
@@ -70,9 +74,14 @@ export class RemindersService {
       const change = clock?.changes.find((c) => c.from === today);
       if (!clock || !change || change.state === 'fresh') continue;
       out.push({
-        key: `male-clock:${a.id}:${change.state}:${u.id}:${today}`, userId: u.id, email: u.email, kind: 'male-clock',
-        title: `Male clock: ${a.label}`, body: `${a.label} ${CLOCK_WORDS[change.state]} (day ${clock.daysSinceMaturing} since his maturing molt).`,
-        subject: { type: 'animal', id: a.id }, projectId: null,
+        key: `male-clock:${a.id}:${change.state}:${u.id}:${today}`,
+        userId: u.id,
+        email: u.email,
+        kind: 'male-clock',
+        title: `Male clock: ${a.label}`,
+        body: `${a.label} ${CLOCK_WORDS[change.state]} (day ${clock.daysSinceMaturing} since his maturing molt).`,
+        subject: { type: 'animal', id: a.id },
+        projectId: null,
       });
     }
     return out;
@@ -82,13 +91,30 @@ export class RemindersService {
   private async deliver(c: Candidate): Promise<boolean> {
     try {
       return await this.orm.em.fork().transactional(async (tx) => {
-        const claimed = await tx.getConnection().execute<{ key: string }[]>(
-          `insert into reminder_sent (id, created_at, updated_at, key) values (gen_random_uuid(), now(), now(), ?) on conflict (key) do nothing returning key`, [c.key], 'all', tx.getTransactionContext(),
-        );
+        const claimed = await tx
+          .getConnection()
+          .execute<{ key: string }[]>(
+            `insert into reminder_sent (id, created_at, updated_at, key) values (gen_random_uuid(), now(), now(), ?) on conflict (key) do nothing returning key`,
+            [c.key],
+            'all',
+            tx.getTransactionContext(),
+          );
         if (!claimed.length) return false;
-        tx.create(Notification, { user: tx.getReference(User, c.userId), kind: c.kind, title: c.title, body: c.body, subjectType: c.subject.type, subjectId: c.subject.id, projectId: c.projectId });
+        tx.create(Notification, {
+          user: tx.getReference(User, c.userId),
+          kind: c.kind,
+          title: c.title,
+          body: c.body,
+          subjectType: c.subject.type,
+          subjectId: c.subject.id,
+          projectId: c.projectId,
+        });
         await tx.flush();
-        await this.mail.send({ to: c.email, subject: `Broodsilk: ${c.title}`, text: `${c.body}\n\nYou get this reminder once a day per sac or animal while it is due.` });
+        await this.mail.send({
+          to: c.email,
+          subject: `Broodsilk: ${c.title}`,
+          text: `${c.body}\n\nYou get this reminder once a day per sac or animal while it is due.`,
+        });
         return true;
       });
     } catch (e) {
@@ -100,7 +126,13 @@ export class RemindersService {
 
 export function toNotificationResponse(n: Notification): NotificationResponse {
   return {
-    id: n.id, kind: n.kind, title: n.title, body: n.body, subject: { type: n.subjectType, id: n.subjectId },
-    projectId: n.projectId ?? null, createdAt: n.createdAt.toISOString(), readAt: n.readAt?.toISOString() ?? null,
+    id: n.id,
+    kind: n.kind,
+    title: n.title,
+    body: n.body,
+    subject: { type: n.subjectType, id: n.subjectId },
+    projectId: n.projectId ?? null,
+    createdAt: n.createdAt.toISOString(),
+    readAt: n.readAt?.toISOString() ?? null,
   };
 }

@@ -42,11 +42,23 @@ export class BroodCountsService {
       if (!opening) throw new BadRequestException({ message: 'Record the opening first: it starts the brood and its first count.' });
       if (at < opening.openedAt) throw fieldError('at', `A count cannot come before the opening (${opening.openedAt.toISOString()}).`);
       const c = tx.create(BroodCount, {
-        sac, at, stage: dto.stage, alive: dto.alive, lost, lossReason: dto.lossReason ?? null, note: dto.note ?? null,
-        source: 'count', recordedBy: tx.getReference(User, viewer.id),
+        sac,
+        at,
+        stage: dto.stage,
+        alive: dto.alive,
+        lost,
+        lossReason: dto.lossReason ?? null,
+        note: dto.note ?? null,
+        source: 'count',
+        recordedBy: tx.getReference(User, viewer.id),
       });
       this.activity.record(tx, {
-        projectId: access.project.id, actorId: viewer.id, kind: 'brood.counted', subjectType: 'sac', subjectId: sac.id, at,
+        projectId: access.project.id,
+        actorId: viewer.id,
+        kind: 'brood.counted',
+        subjectType: 'sac',
+        subjectId: sac.id,
+        at,
         summary: `Brood of the sac laid ${sac.layDate}: ${dto.alive} alive at ${dto.stage}${lost ? `, ${lost} lost (${dto.lossReason})` : ''}.`,
         data: { countId: c.id, stage: dto.stage, alive: dto.alive, lost },
       });

@@ -17,28 +17,54 @@ export class BroodController {
     private readonly counts: BroodCountsService,
   ) {}
 
-  @Get('opening') @AnyProjectMember() @ProjectFrom('sac')
+  @Get('opening')
+  @AnyProjectMember()
+  @ProjectFrom('sac')
   opening(@CurrentProject() a: ProjectAccess, @Param('id', ParseUUIDPipe) id: string): Promise<OpeningResponse> {
     return this.openings.get(a, id);
   }
 
-  @Post('opening') @ProjectRoles('owner') @ProjectFrom('sac')
-  open(@CurrentProject() a: ProjectAccess, @CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: OpeningDto): Promise<OpeningResponse> {
+  @Post('opening')
+  @ProjectRoles('owner')
+  @ProjectFrom('sac')
+  open(
+    @CurrentProject() a: ProjectAccess,
+    @CurrentUser() user: AuthUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Body() dto: OpeningDto,
+  ): Promise<OpeningResponse> {
     return this.openings.open(a, user, id, dto);
   }
 
-  @Post('opening/photos') @ProjectRoles('owner') @ProjectFrom('sac') @UseInterceptors(ImageUploadInterceptor)
-  photo(@CurrentProject() a: ProjectAccess, @CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string, @UploadedFile() file?: { buffer?: Buffer }): Promise<PhotoRef> {
+  @Post('opening/photos')
+  @ProjectRoles('owner')
+  @ProjectFrom('sac')
+  @UseInterceptors(ImageUploadInterceptor)
+  photo(
+    @CurrentProject() a: ProjectAccess,
+    @CurrentUser() user: AuthUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @UploadedFile() file?: { buffer?: Buffer },
+  ): Promise<PhotoRef> {
     return this.openings.addPhoto(a, user, id, file);
   }
 
-  @Get('counts') @AnyProjectMember() @ProjectFrom('sac')
+  @Get('counts')
+  @AnyProjectMember()
+  @ProjectFrom('sac')
   listCounts(@CurrentProject() a: ProjectAccess, @Param('id', ParseUUIDPipe) id: string): Promise<BroodCountsResponse> {
     return this.counts.list(a, id);
   }
 
-  @Post('counts') @ProjectRoles('owner', 'caretaker') @ProjectFrom('sac')
-  addCount(@CurrentProject() a: ProjectAccess, @CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: BroodCountDto): Promise<BroodCountResponse> {
+  @Post('counts')
+  @ProjectRoles('owner', 'caretaker')
+  @ProjectFrom('sac')
+  addCount(
+    @CurrentProject() a: ProjectAccess,
+    @CurrentUser() user: AuthUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Body() dto: BroodCountDto,
+  ): Promise<BroodCountResponse> {
     return this.counts.add(a, user, id, dto);
   }
 }

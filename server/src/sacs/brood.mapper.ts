@@ -8,9 +8,19 @@ export const viableOf = (o: Pick<SacOpening, 'healthyEggs' | 'eggsWithLegs' | 'n
 export function toOpeningResponse(o: SacOpening, photos: PhotoRef[]): OpeningResponse {
   const viable = viableOf(o);
   return {
-    id: o.id, sacId: o.sac.id, openedAt: o.openedAt.toISOString(),
-    healthyEggs: o.healthyEggs, eggsWithLegs: o.eggsWithLegs, nymphs: o.nymphs, darkEggs: o.darkEggs, spoiledEggs: o.spoiledEggs,
-    keptBack: o.keptBack, viable, total: viable + o.darkEggs + o.spoiledEggs, notes: o.notes ?? null, photos,
+    id: o.id,
+    sacId: o.sac.id,
+    openedAt: o.openedAt.toISOString(),
+    healthyEggs: o.healthyEggs,
+    eggsWithLegs: o.eggsWithLegs,
+    nymphs: o.nymphs,
+    darkEggs: o.darkEggs,
+    spoiledEggs: o.spoiledEggs,
+    keptBack: o.keptBack,
+    viable,
+    total: viable + o.darkEggs + o.spoiledEggs,
+    notes: o.notes ?? null,
+    photos,
     recordedBy: { id: o.recordedBy.id, name: o.recordedBy.displayName },
   };
 }
@@ -18,8 +28,15 @@ export function toOpeningResponse(o: SacOpening, photos: PhotoRef[]): OpeningRes
 /** Needs `recordedBy` loaded. */
 export function toBroodCountResponse(c: BroodCount): BroodCountResponse {
   return {
-    id: c.id, sacId: c.sac.id, at: c.at.toISOString(), stage: c.stage, alive: c.alive, lost: c.lost,
-    lossReason: c.lossReason ?? null, note: c.note ?? null, source: c.source,
+    id: c.id,
+    sacId: c.sac.id,
+    at: c.at.toISOString(),
+    stage: c.stage,
+    alive: c.alive,
+    lost: c.lost,
+    lossReason: c.lossReason ?? null,
+    note: c.note ?? null,
+    source: c.source,
     recordedBy: c.recordedBy ? { id: c.recordedBy.id, name: c.recordedBy.displayName } : null,
   };
 }

@@ -1,5 +1,12 @@
 import {
-  BROOD_STAGES, HUMIDITY_LIMITS, TEMPERATURE_LIMITS_C, broodStageIndex, celsiusToFahrenheit, fahrenheitToCelsius, type BroodStage, type CareLogKind,
+  BROOD_STAGES,
+  HUMIDITY_LIMITS,
+  TEMPERATURE_LIMITS_C,
+  broodStageIndex,
+  celsiusToFahrenheit,
+  fahrenheitToCelsius,
+  type BroodStage,
+  type CareLogKind,
 } from '@broodsilk/shared';
 import { fieldError } from './sac-rules';
 import type { CareLogEntryDto } from './dto/care-log-entry.dto';
@@ -36,7 +43,10 @@ export function entryValues(dto: CareLogEntryDto): EntryValues {
     const { value, unit } = dto.temperature;
     const c = unit === 'F' ? fahrenheitToCelsius(value) : value;
     if (c < TEMPERATURE_LIMITS_C.min || c > TEMPERATURE_LIMITS_C.max) {
-      const [lo, hi] = unit === 'F' ? [celsiusToFahrenheit(TEMPERATURE_LIMITS_C.min), celsiusToFahrenheit(TEMPERATURE_LIMITS_C.max)] : [TEMPERATURE_LIMITS_C.min, TEMPERATURE_LIMITS_C.max];
+      const [lo, hi] =
+        unit === 'F'
+          ? [celsiusToFahrenheit(TEMPERATURE_LIMITS_C.min), celsiusToFahrenheit(TEMPERATURE_LIMITS_C.max)]
+          : [TEMPERATURE_LIMITS_C.min, TEMPERATURE_LIMITS_C.max];
       throw fieldError('temperature.value', `${value} °${unit} is not a plausible incubator reading; it must be between ${lo} and ${hi} °${unit}.`);
     }
     Object.assign(out, { temperatureC: c, enteredValue: value, enteredUnit: unit });

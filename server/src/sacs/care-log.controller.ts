@@ -12,13 +12,22 @@ import { CareLogEntryDto } from './dto/care-log-entry.dto';
 export class CareLogController {
   constructor(private readonly log: CareLogService) {}
 
-  @Get() @AnyProjectMember() @ProjectFrom('sac')
+  @Get()
+  @AnyProjectMember()
+  @ProjectFrom('sac')
   list(@CurrentProject() a: ProjectAccess, @Param('id', ParseUUIDPipe) id: string): Promise<CareLogEntryResponse[]> {
     return this.log.list(a, id);
   }
 
-  @Post() @ProjectRoles('owner', 'caretaker') @ProjectFrom('sac')
-  add(@CurrentProject() a: ProjectAccess, @CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: CareLogEntryDto): Promise<CareLogEntryResponse> {
+  @Post()
+  @ProjectRoles('owner', 'caretaker')
+  @ProjectFrom('sac')
+  add(
+    @CurrentProject() a: ProjectAccess,
+    @CurrentUser() user: AuthUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Body() dto: CareLogEntryDto,
+  ): Promise<CareLogEntryResponse> {
     return this.log.add(a, user, id, dto);
   }
 }

@@ -21,14 +21,25 @@ export function toCareLogResponse(e: SacLogEntry, struckBy: SacLogEntry | undefi
 }
 
 const KIND_WORDS: Record<SacLogEntry['kind'], string> = {
-  roll: 'Roll', temperature: 'Temperature', humidity: 'Humidity', check: 'Check', stage: 'Stage change', note: 'Note', strike: 'Correction',
+  roll: 'Roll',
+  temperature: 'Temperature',
+  humidity: 'Humidity',
+  check: 'Check',
+  stage: 'Stage change',
+  note: 'Note',
+  strike: 'Correction',
 };
 
 export function careLogSummary(e: SacLogEntry, layDate: string): string {
   const what =
-    e.kind === 'temperature' ? `Temperature ${e.temperatureC!.toFixed(1)} °C` :
-    e.kind === 'humidity' ? `Humidity ${e.humidityPercent} %` :
-    e.kind === 'stage' ? `Stage now ${e.stage}` :
-    e.kind === 'strike' ? `Entry struck${e.text ? `: ${e.text}` : ''}` : KIND_WORDS[e.kind];
+    e.kind === 'temperature'
+      ? `Temperature ${e.temperatureC!.toFixed(1)} °C`
+      : e.kind === 'humidity'
+        ? `Humidity ${e.humidityPercent} %`
+        : e.kind === 'stage'
+          ? `Stage now ${e.stage}`
+          : e.kind === 'strike'
+            ? `Entry struck${e.text ? `: ${e.text}` : ''}`
+            : KIND_WORDS[e.kind];
   return `${what} (sac laid ${layDate}).`;
 }

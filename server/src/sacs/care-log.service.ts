@@ -44,16 +44,27 @@ export class CareLogService {
       if (dto.kind === 'roll') this.assertRollable(sac, at);
       if (dto.kind === 'stage') assertStageMove(sac.broodStage, values.stage!);
       const entry = tx.create(SacLogEntry, {
-        sac, kind: dto.kind, at, author: tx.getReference(User, viewer.id), ...values,
-        text: dto.kind === 'strike' ? dto.reason?.trim() || null : values.text, strikes,
+        sac,
+        kind: dto.kind,
+        at,
+        author: tx.getReference(User, viewer.id),
+        ...values,
+        text: dto.kind === 'strike' ? dto.reason?.trim() || null : values.text,
+        strikes,
       });
       if (dto.kind === 'stage' || strikes?.kind === 'stage') {
         await tx.flush();
         sac.broodStage = await this.stageFromLog(tx, sac);
       }
       this.activity.record(tx, {
-        projectId: access.project.id, actorId: viewer.id, kind: `care.${dto.kind}`, subjectType: 'sac', subjectId: sac.id,
-        summary: careLogSummary(entry, sac.layDate), data: { entryId: entry.id, at: at.toISOString(), ...(strikes ? { strikes: strikes.id } : {}) }, at,
+        projectId: access.project.id,
+        actorId: viewer.id,
+        kind: `care.${dto.kind}`,
+        subjectType: 'sac',
+        subjectId: sac.id,
+        summary: careLogSummary(entry, sac.layDate),
+        data: { entryId: entry.id, at: at.toISOString(), ...(strikes ? { strikes: strikes.id } : {}) },
+        at,
       });
       return entry.id;
     });
@@ -72,7 +83,11 @@ export class CareLogService {
   }
 
   private assertRollable(sac: Sac, at: Date): void {
-    if (!sac.pulledAt) throw new BadRequestException({ message: 'This sac is with its mother: she turns it herself, so rolls apply only once it is pulled.', details: [{ field: 'kind', message: 'No rolls for a sac left with the mother.' }] });
+    if (!sac.pulledAt)
+      throw new BadRequestException({
+        message: 'This sac is with its mother: she turns it herself, so rolls apply only once it is pulled.',
+        details: [{ field: 'kind', message: 'No rolls for a sac left with the mother.' }],
+      });
     if (at < sac.pulledAt) throw fieldError('at', `A roll cannot come before the pull (${sac.pulledAt.toISOString()}).`);
   }
 

@@ -41,22 +41,41 @@ export class OpeningService {
     assertNotFuture('openedAt', 'opening time', openedAt, now);
     const viable = viableOf(dto);
     if (dto.keptBack > viable) {
-      throw badRequest([{ field: 'keptBack', message: `Only viable young can go back into incubation: ${dto.keptBack} kept back, but ${viable} counted as healthy eggs, eggs with legs and nymphs.` }]);
+      throw badRequest([
+        {
+          field: 'keptBack',
+          message: `Only viable young can go back into incubation: ${dto.keptBack} kept back, but ${viable} counted as healthy eggs, eggs with legs and nymphs.`,
+        },
+      ]);
     }
     if (viable + dto.darkEggs + dto.spoiledEggs === 0) throw fieldError('healthyEggs', 'Nothing was counted; an opening records at least one egg or nymph.');
     await this.em.transactional(async (tx) => {
       const sac = await this.sacs.find(access, sacId, tx);
-      if (await tx.count(SacOpening, { sac })) throw new ConflictException({ message: 'This sac has already been opened; record later changes as brood counts.' });
+      if (await tx.count(SacOpening, { sac }))
+        throw new ConflictException({ message: 'This sac has already been opened; record later changes as brood counts.' });
       const on = todayIn(viewer.timeZone, openedAt);
       if (on < sac.layDate) throw fieldError('openedAt', `The opening (${on}) is dated before the sac was laid (${sac.layDate}).`);
       const recordedBy = tx.getReference(User, viewer.id);
       const o = tx.create(SacOpening, {
-        sac, openedAt, healthyEggs: dto.healthyEggs, eggsWithLegs: dto.eggsWithLegs, nymphs: dto.nymphs,
-        darkEggs: dto.darkEggs, spoiledEggs: dto.spoiledEggs, keptBack: dto.keptBack, notes: dto.notes ?? null, recordedBy,
+        sac,
+        openedAt,
+        healthyEggs: dto.healthyEggs,
+        eggsWithLegs: dto.eggsWithLegs,
+        nymphs: dto.nymphs,
+        darkEggs: dto.darkEggs,
+        spoiledEggs: dto.spoiledEggs,
+        keptBack: dto.keptBack,
+        notes: dto.notes ?? null,
+        recordedBy,
       });
       tx.create(BroodCount, { sac, at: openedAt, stage: sac.broodStage, alive: viable, source: 'opening', recordedBy, note: 'First count, at the opening.' });
       this.activity.record(tx, {
-        projectId: access.project.id, actorId: viewer.id, kind: 'sac.opened', subjectType: 'sac', subjectId: sac.id, at: openedAt,
+        projectId: access.project.id,
+        actorId: viewer.id,
+        kind: 'sac.opened',
+        subjectType: 'sac',
+        subjectId: sac.id,
+        at: openedAt,
         summary: `Sac laid ${sac.layDate} opened: ${viable} viable (${dto.keptBack} kept back in incubation), ${dto.darkEggs} dark and ${dto.spoiledEggs} spoiled eggs.`,
         data: { openingId: o.id, viable, keptBack: dto.keptBack, darkEggs: dto.darkEggs, spoiledEggs: dto.spoiledEggs },
       });

@@ -28,7 +28,14 @@ export class SacViewsService {
     const [rolls, counts, opened] = await Promise.all([lastRollsOf(em, ids), currentCountsOf(em, ids), openedSacsOf(em, ids)]);
     const today = todayIn(timeZone, now);
     return sacs.map((s) =>
-      toSacResponse(s, { today, now, window: windowOf(s), lastRollAt: rolls.get(s.id) ?? null, opened: opened.has(s.id), currentCount: counts.get(s.id) ?? null }),
+      toSacResponse(s, {
+        today,
+        now,
+        window: windowOf(s),
+        lastRollAt: rolls.get(s.id) ?? null,
+        opened: opened.has(s.id),
+        currentCount: counts.get(s.id) ?? null,
+      }),
     );
   }
 

@@ -12,12 +12,14 @@ import { UpdateSacDto } from './dto/update-sac.dto';
 export class ProjectSacsController {
   constructor(private readonly sacs: SacsService) {}
 
-  @Get() @AnyProjectMember()
+  @Get()
+  @AnyProjectMember()
   list(@CurrentProject() a: ProjectAccess, @CurrentUser() user: AuthUser): Promise<SacResponse[]> {
     return this.sacs.list(a, user);
   }
 
-  @Post() @ProjectRoles('owner')
+  @Post()
+  @ProjectRoles('owner')
   create(@CurrentProject() a: ProjectAccess, @CurrentUser() user: AuthUser, @Body() dto: CreateSacDto): Promise<SacResponse> {
     return this.sacs.create(a, user, dto);
   }
@@ -27,13 +29,22 @@ export class ProjectSacsController {
 export class SacsController {
   constructor(private readonly sacs: SacsService) {}
 
-  @Get(':id') @AnyProjectMember() @ProjectFrom('sac')
+  @Get(':id')
+  @AnyProjectMember()
+  @ProjectFrom('sac')
   get(@CurrentProject() a: ProjectAccess, @CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<SacResponse> {
     return this.sacs.get(a, user, id);
   }
 
-  @Patch(':id') @ProjectRoles('owner') @ProjectFrom('sac')
-  update(@CurrentProject() a: ProjectAccess, @CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: UpdateSacDto): Promise<SacResponse> {
+  @Patch(':id')
+  @ProjectRoles('owner')
+  @ProjectFrom('sac')
+  update(
+    @CurrentProject() a: ProjectAccess,
+    @CurrentUser() user: AuthUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Body() dto: UpdateSacDto,
+  ): Promise<SacResponse> {
     return this.sacs.update(a, user, id, dto);
   }
 }

@@ -21,8 +21,13 @@ export interface SacViewContext {
 export function rollOf(sac: Sac, now: Date, lastRollAt: Date | null): SacResponse['roll'] {
   const pulled = !!sac.pulledAt && sac.outcome === 'in-progress';
   const state = rollState({
-    pulled, stage: sac.broodStage, rollingOff: sac.rollingOff,
-    pulledAt: sac.pulledAt ?? now, lastRollAt, intervalHours: sac.rollIntervalHours, now,
+    pulled,
+    stage: sac.broodStage,
+    rollingOff: sac.rollingOff,
+    pulledAt: sac.pulledAt ?? now,
+    lastRollAt,
+    intervalHours: sac.rollIntervalHours,
+    now,
   });
   return state ? { due: state.due.toISOString(), status: state.status, lastRollAt: lastRollAt?.toISOString() ?? null } : null;
 }

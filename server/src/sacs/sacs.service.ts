@@ -45,12 +45,23 @@ export class SacsService {
     assertSacDates({ layDate: dto.layDate, pulledAt, pullFromDay: dto.pullFromDay ?? null, pullToDay: dto.pullToDay ?? null }, viewer.timeZone, now);
     const id = await this.em.transactional(async (tx) => {
       const sac = tx.create(Sac, {
-        project: access.project.id, layDate: dto.layDate, pulledAt, pulledOn: pulledAt ? todayIn(viewer.timeZone, pulledAt) : null,
-        pullFromDay: dto.pullFromDay ?? null, pullToDay: dto.pullToDay ?? null, rollIntervalHours: dto.rollIntervalHours ?? 12,
-        rollingOff: dto.rollingOff ?? false, notes: dto.notes ?? null, recordedBy: tx.getReference(User, viewer.id),
+        project: access.project.id,
+        layDate: dto.layDate,
+        pulledAt,
+        pulledOn: pulledAt ? todayIn(viewer.timeZone, pulledAt) : null,
+        pullFromDay: dto.pullFromDay ?? null,
+        pullToDay: dto.pullToDay ?? null,
+        rollIntervalHours: dto.rollIntervalHours ?? 12,
+        rollingOff: dto.rollingOff ?? false,
+        notes: dto.notes ?? null,
+        recordedBy: tx.getReference(User, viewer.id),
       });
       this.activity.record(tx, {
-        projectId: access.project.id, actorId: viewer.id, kind: 'sac.laid', subjectType: 'sac', subjectId: sac.id,
+        projectId: access.project.id,
+        actorId: viewer.id,
+        kind: 'sac.laid',
+        subjectType: 'sac',
+        subjectId: sac.id,
         summary: `Sac laid on ${dto.layDate}${pulledAt ? `, pulled on ${sac.pulledOn}` : ', left with the mother'}.`,
         data: { layDate: dto.layDate, pulledOn: sac.pulledOn },
       });
@@ -65,32 +76,38 @@ export class SacsService {
       const sac = await this.find(access, id, tx);
       const wasPulled = !!sac.pulledAt;
       const wasOutcome = sac.outcome;
-      const pulledAt = dto.pulledAt === undefined ? sac.pulledAt ?? null : dto.pulledAt === null ? null : new Date(dto.pulledAt);
+      const pulledAt = dto.pulledAt === undefined ? (sac.pulledAt ?? null) : dto.pulledAt === null ? null : new Date(dto.pulledAt);
       // Each end of the window falls back to the stored one, so one end can be moved alone.
       const next = {
         layDate: dto.layDate ?? sac.layDate,
         pulledAt,
-        pullFromDay: dto.pullFromDay !== undefined ? dto.pullFromDay : sac.pullFromDay ?? null,
-        pullToDay: dto.pullToDay !== undefined ? dto.pullToDay : sac.pullToDay ?? null,
+        pullFromDay: dto.pullFromDay !== undefined ? dto.pullFromDay : (sac.pullFromDay ?? null),
+        pullToDay: dto.pullToDay !== undefined ? dto.pullToDay : (sac.pullToDay ?? null),
       };
       assertSacDates(next, viewer.timeZone, now);
       const outcome = dto.outcome ?? sac.outcome;
-      const failureReason = outcome === 'failed' ? (dto.failureReason !== undefined ? dto.failureReason : sac.failureReason) ?? null : null;
+      const failureReason = outcome === 'failed' ? ((dto.failureReason !== undefined ? dto.failureReason : sac.failureReason) ?? null) : null;
       if (outcome === 'failed' && !failureReason) throw fieldError('failureReason', 'Say why the sac failed: infertile, spoiled, eaten or other.');
       if (outcome !== 'failed' && dto.failureReason) throw fieldError('failureReason', 'A failure reason only goes with the outcome "failed".');
 
       const pulledChanged = (sac.pulledAt?.getTime() ?? null) !== (pulledAt?.getTime() ?? null);
       tx.assign(sac, {
         ...next,
-        pulledOn: !pulledChanged ? sac.pulledOn ?? null : pulledAt ? todayIn(viewer.timeZone, pulledAt) : null,
-        outcome, failureReason,
+        pulledOn: !pulledChanged ? (sac.pulledOn ?? null) : pulledAt ? todayIn(viewer.timeZone, pulledAt) : null,
+        outcome,
+        failureReason,
         ...(dto.rollIntervalHours !== undefined ? { rollIntervalHours: dto.rollIntervalHours } : {}),
         ...(dto.rollingOff !== undefined ? { rollingOff: dto.rollingOff } : {}),
         ...(dto.notes !== undefined ? { notes: dto.notes } : {}),
       });
       const { kind, summary } = describeChange(sac, wasPulled, pulledChanged, wasOutcome !== sac.outcome);
       this.activity.record(tx, {
-        projectId: access.project.id, actorId: viewer.id, kind, subjectType: 'sac', subjectId: sac.id, summary,
+        projectId: access.project.id,
+        actorId: viewer.id,
+        kind,
+        subjectType: 'sac',
+        subjectId: sac.id,
+        summary,
         data: { changed: Object.keys(dto), outcome: sac.outcome, pulledOn: sac.pulledOn ?? null },
       });
     });

@@ -22,7 +22,10 @@ export async function seedDemo(em: EntityManager, seeders: FeatureSeeder[] = [],
   const passwordHash = await hashPassword(DEMO_PASSWORD);
   await em.transactional(async (tx) => {
     const users = Object.fromEntries(
-      DEMO_ACCOUNTS.map((a) => [a.key, tx.create(User, { email: a.email, displayName: a.displayName, role: a.role, timeZone: a.timeZone, temperatureUnit: a.temperatureUnit, passwordHash })]),
+      DEMO_ACCOUNTS.map((a) => [
+        a.key,
+        tx.create(User, { email: a.email, displayName: a.displayName, role: a.role, timeZone: a.timeZone, temperatureUnit: a.temperatureUnit, passwordHash }),
+      ]),
     ) as SeedContext['users'];
     await tx.flush();
     for (const seeder of seeders) {

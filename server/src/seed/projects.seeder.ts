@@ -59,34 +59,70 @@ interface ProjectSpec {
 
 const PROJECTS: ProjectSpec[] = [
   {
-    key: 'metallica', female: 'MO-008', male: 'MO-016', daysAgo: 5, ines: true,
+    key: 'metallica',
+    female: 'MO-008',
+    male: 'MO-016',
+    daysAgo: 5,
+    ines: true,
     notes: 'She molted twelve days ago; pair once her fangs are dark and she takes food again. His clock is running.',
   },
   {
-    key: 'regalisLoan', female: 'MO-007', male: 'MO-030', daysAgo: 16, tomasz: 'partner', ines: true,
+    key: 'regalisLoan',
+    female: 'MO-007',
+    male: 'MO-030',
+    daysAgo: 16,
+    tomasz: 'partner',
+    ines: true,
     notes: "Tomasz's male on a breeding loan; he goes back after the pairings.",
-    pairings: [[10, 15, 'female-refused', 'She threat-posed; male removed.'], [6, 45, 'connected', 'Two insertions seen, male left calmly.']],
+    pairings: [
+      [10, 15, 'female-refused', 'She threat-posed; male removed.'],
+      [6, 45, 'connected', 'Two insertions seen, male left calmly.'],
+    ],
     terms: [
       { lines: { mira: [2, 0, 1], tomasz: [1, 0, 2] }, priceMinor: 2500, clause: 'carries-over', daysAgo: 15, acceptedBy: ['tomasz'] },
-      { lines: { mira: [2, 0, 2], tomasz: [1, 5, 1] }, priceMinor: 2500, clause: 'carries-over', daysAgo: 2, acceptedBy: [], note: 'Tomasz picks first and gets 5 off the top for the loan.' },
+      {
+        lines: { mira: [2, 0, 2], tomasz: [1, 5, 1] },
+        priceMinor: 2500,
+        clause: 'carries-over',
+        daysAgo: 2,
+        acceptedBy: [],
+        note: 'Tomasz picks first and gets 5 off the top for the loan.',
+      },
     ],
   },
   {
-    key: 'vagansMolted', female: 'MO-002', male: 'MO-015', daysAgo: 100, ines: true,
+    key: 'vagansMolted',
+    female: 'MO-002',
+    male: 'MO-015',
+    daysAgo: 100,
+    ines: true,
     pairings: [[80, 30, 'connected']],
     ended: { reason: 'female-molted', daysAgo: 28, note: 'She molted 30 days ago, before any sac; the pairing is lost.' },
   },
   {
-    key: 'vagansSac', female: 'MO-001', male: 'MO-015', daysAgo: 90, ines: true,
+    key: 'vagansSac',
+    female: 'MO-001',
+    male: 'MO-015',
+    daysAgo: 90,
+    ines: true,
     pairings: [[75, 40, 'connected']],
   },
   {
-    key: 'hamoriiIncubator', female: 'MO-004', male: 'MO-026', daysAgo: 170, outside: { name: 'Jonas Feld', email: 'jonas.feld@example.test' },
+    key: 'hamoriiIncubator',
+    female: 'MO-004',
+    male: 'MO-026',
+    daysAgo: 170,
+    outside: { name: 'Jonas Feld', email: 'jonas.feld@example.test' },
     pairings: [[150, 35, 'connected', 'His last good pairing before he died.']],
     terms: [{ lines: { mira: [3, 0, 1], outside: [1, 0, 2] }, priceMinor: 4000, clause: 'nothing-owed', daysAgo: 160, acceptedBy: ['outside'] }],
   },
   {
-    key: 'versicolorBrood', female: 'MO-006', male: 'MO-028', daysAgo: 140, tomasz: 'partner', ines: true,
+    key: 'versicolorBrood',
+    female: 'MO-006',
+    male: 'MO-028',
+    daysAgo: 140,
+    tomasz: 'partner',
+    ines: true,
     pairings: [[130, 25, 'connected']],
     terms: [{ lines: { mira: [2, 0, 1], tomasz: [1, 0, 2] }, priceMinor: 1800, clause: 'carries-over', daysAgo: 135, acceptedBy: ['tomasz'] }],
   },
@@ -109,8 +145,24 @@ export const seedProjects: FeatureSeeder = async (ctx) => {
     const female = animals.get(s.female)!;
     const male = animals.get(s.male)!;
     const p = em.create(Project, { owner: mira, female, male, title: DEMO_PROJECTS[s.key], notes: s.notes ?? null, createdAt: start });
-    const log = (actor: User | null, at: Date, kind: string, summary: string, extra: { subjectType?: string; subjectId?: string; audience?: 'members' | 'partners'; data?: Record<string, unknown> } = {}) =>
-      activity.record(em, { projectId: p.id, actorId: actor?.id ?? null, kind, subjectType: extra.subjectType ?? 'project', subjectId: extra.subjectId ?? p.id, summary, at, data: extra.data ?? {}, audience: extra.audience });
+    const log = (
+      actor: User | null,
+      at: Date,
+      kind: string,
+      summary: string,
+      extra: { subjectType?: string; subjectId?: string; audience?: 'members' | 'partners'; data?: Record<string, unknown> } = {},
+    ) =>
+      activity.record(em, {
+        projectId: p.id,
+        actorId: actor?.id ?? null,
+        kind,
+        subjectType: extra.subjectType ?? 'project',
+        subjectId: extra.subjectId ?? p.id,
+        summary,
+        at,
+        data: extra.data ?? {},
+        audience: extra.audience,
+      });
     log(mira, start, 'project.created', `${mira.displayName} started the project "${p.title}" with ${female.label} and ${male.label}.`);
 
     const members: Record<string, ProjectMember> = {
@@ -131,29 +183,74 @@ export const seedProjects: FeatureSeeder = async (ctx) => {
 
     for (const [daysAgo, minutes, outcome, notes] of s.pairings ?? []) {
       const startedOn = addDays(today, -daysAgo);
-      const pairing = em.create(Pairing, { project: p, startedAt: eveningOf(startedOn), startedOn, durationMinutes: minutes, outcome, notes: notes ?? null, recordedBy: mira, createdAt: eveningOf(startedOn) });
-      log(mira, eveningOf(startedOn), 'pairing.recorded', `Pairing on ${startedOn} (${minutes} min): ${outcome}.`, { subjectType: 'pairing', subjectId: pairing.id, data: { on: startedOn, outcome } });
+      const pairing = em.create(Pairing, {
+        project: p,
+        startedAt: eveningOf(startedOn),
+        startedOn,
+        durationMinutes: minutes,
+        outcome,
+        notes: notes ?? null,
+        recordedBy: mira,
+        createdAt: eveningOf(startedOn),
+      });
+      log(mira, eveningOf(startedOn), 'pairing.recorded', `Pairing on ${startedOn} (${minutes} min): ${outcome}.`, {
+        subjectType: 'pairing',
+        subjectId: pairing.id,
+        data: { on: startedOn, outcome },
+      });
     }
 
     for (const [i, t] of (s.terms ?? []).entries()) {
       const at = eveningOf(addDays(today, -t.daysAgo));
       const v = em.create(TermsVersion, {
-        project: p, number: i + 1, createdBy: mira, pricePerSpiderlingMinor: t.priceMinor, currency: 'EUR', failureClause: t.clause,
-        handOverStage: 'second-instar', shippingPaidBy: 'recipient', note: t.note ?? null, createdAt: at,
+        project: p,
+        number: i + 1,
+        createdBy: mira,
+        pricePerSpiderlingMinor: t.priceMinor,
+        currency: 'EUR',
+        failureClause: t.clause,
+        handOverStage: 'second-instar',
+        shippingPaidBy: 'recipient',
+        note: t.note ?? null,
+        createdAt: at,
       });
       for (const [party, [weight, fixedCount, pickOrder]] of Object.entries(t.lines) as [string, [number, number, number]][]) {
         em.create(TermsLine, { version: v, member: members[party], weight, fixedCount, pickOrder, createdAt: at });
       }
       em.create(TermsAcceptance, { version: v, member: members.mira, recordedBy: mira, note: 'Proposed these terms.', createdAt: at });
-      log(mira, at, 'terms.proposed', `Proposed terms version ${v.number}.`, { subjectType: 'terms-version', subjectId: v.id, audience: 'partners', data: { number: v.number } });
+      log(mira, at, 'terms.proposed', `Proposed terms version ${v.number}.`, {
+        subjectType: 'terms-version',
+        subjectId: v.id,
+        audience: 'partners',
+        data: { number: v.number },
+      });
       const later = new Date(at.getTime() + 86_400_000);
       for (const party of t.acceptedBy) {
         const onBehalf = party === 'outside';
-        em.create(TermsAcceptance, { version: v, member: members[party], recordedBy: onBehalf ? mira : tomasz, onBehalf, note: onBehalf ? 'Agreed by e-mail.' : null, createdAt: later });
+        em.create(TermsAcceptance, {
+          version: v,
+          member: members[party],
+          recordedBy: onBehalf ? mira : tomasz,
+          onBehalf,
+          note: onBehalf ? 'Agreed by e-mail.' : null,
+          createdAt: later,
+        });
         const who = members[party].name;
-        log(onBehalf ? mira : tomasz, later, 'terms.accepted', onBehalf ? `Recorded that ${who} accepted terms version ${v.number} (on their behalf).` : `${who} accepted terms version ${v.number}.`, { subjectType: 'terms-version', subjectId: v.id, audience: 'partners', data: { number: v.number } });
+        log(
+          onBehalf ? mira : tomasz,
+          later,
+          'terms.accepted',
+          onBehalf ? `Recorded that ${who} accepted terms version ${v.number} (on their behalf).` : `${who} accepted terms version ${v.number}.`,
+          { subjectType: 'terms-version', subjectId: v.id, audience: 'partners', data: { number: v.number } },
+        );
       }
-      if (t.acceptedBy.length) log(onBehalfActor(t, mira, tomasz), later, 'terms.in-force', `Terms version ${v.number} is now in force.`, { subjectType: 'terms-version', subjectId: v.id, audience: 'partners', data: { number: v.number } });
+      if (t.acceptedBy.length)
+        log(onBehalfActor(t, mira, tomasz), later, 'terms.in-force', `Terms version ${v.number} is now in force.`, {
+          subjectType: 'terms-version',
+          subjectId: v.id,
+          audience: 'partners',
+          data: { number: v.number },
+        });
     }
 
     if (s.ended) {

@@ -36,17 +36,30 @@ export class CheckoutService {
     const debt = view.balances.debts.find((d) => d.fromPartyId === me.id && d.toPartyId === creditor.id);
     if (!debt) throw new ConflictException(`You owe ${view.nameOf(creditor.id)} nothing on this project's account.`);
     if (dto.amountMinor > debt.amountMinor) {
-      throw new ConflictException(`You owe ${view.nameOf(creditor.id)} ${formatMinor(debt.amountMinor, currency)}; ${formatMinor(dto.amountMinor, currency)} is ${formatMinor(dto.amountMinor - debt.amountMinor, currency)} more than that.`);
+      throw new ConflictException(
+        `You owe ${view.nameOf(creditor.id)} ${formatMinor(debt.amountMinor, currency)}; ${formatMinor(dto.amountMinor, currency)} is ${formatMinor(dto.amountMinor - debt.amountMinor, currency)} more than that.`,
+      );
     }
     const payout = creditor.user ? await this.em.findOne(PayoutAccount, { user: creditor.user.id }) : null;
-    if (!payout) throw new ConflictException(`${view.nameOf(creditor.id)} has not linked a payout account yet, so they cannot be paid here. Pay them another way and record the payment.`);
+    if (!payout)
+      throw new ConflictException(
+        `${view.nameOf(creditor.id)} has not linked a payout account yet, so they cannot be paid here. Pay them another way and record the payment.`,
+      );
     if (!payout.chargesEnabled) throw new ConflictException(`${view.nameOf(creditor.id)} has not finished setting up their payout account yet.`);
 
     const back = `${this.app.publicUrl}/projects/${access.project.id}/account`;
     const session = await this.stripe.checkout.sessions.create({
       mode: 'payment',
-      line_items: [{ quantity: 1, price_data: { currency: currency.toLowerCase(), unit_amount: dto.amountMinor, product_data: { name: `Settlement: ${access.project.title}` } } }],
-      payment_intent_data: { transfer_data: { destination: payout.providerAccountId }, metadata: { projectId: access.project.id, fromMemberId: me.id, toMemberId: creditor.id } },
+      line_items: [
+        {
+          quantity: 1,
+          price_data: { currency: currency.toLowerCase(), unit_amount: dto.amountMinor, product_data: { name: `Settlement: ${access.project.title}` } },
+        },
+      ],
+      payment_intent_data: {
+        transfer_data: { destination: payout.providerAccountId },
+        metadata: { projectId: access.project.id, fromMemberId: me.id, toMemberId: creditor.id },
+      },
       success_url: `${back}?paid={CHECKOUT_SESSION_ID}`,
       cancel_url: `${back}?cancelled=1`,
       client_reference_id: access.project.id,

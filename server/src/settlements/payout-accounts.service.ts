@@ -30,7 +30,13 @@ export class PayoutAccountsService {
     let account = await this.em.findOne(PayoutAccount, { user: user.id });
     if (!account) {
       const created = await this.stripe.accounts.create(
-        { type: 'express', country: dto.country, email: user.email, capabilities: { card_payments: { requested: true }, transfers: { requested: true } }, metadata: { userId: user.id } },
+        {
+          type: 'express',
+          country: dto.country,
+          email: user.email,
+          capabilities: { card_payments: { requested: true }, transfers: { requested: true } },
+          metadata: { userId: user.id },
+        },
         { idempotencyKey: `payout-account-${user.id}` },
       );
       account = this.em.create(PayoutAccount, { user: this.em.getReference(User, user.id), providerAccountId: created.id });

@@ -15,16 +15,23 @@ export class PayoutAccountController {
   constructor(private readonly payouts: PayoutAccountsService) {}
 
   @Get()
-  status(@CurrentUser() u: AuthUser): Promise<PayoutAccountResponse> { return this.payouts.status(u); }
+  status(@CurrentUser() u: AuthUser): Promise<PayoutAccountResponse> {
+    return this.payouts.status(u);
+  }
 
   @Post()
-  link(@CurrentUser() u: AuthUser, @Body() dto: CreatePayoutAccountDto): Promise<PayoutAccountResponse> { return this.payouts.link(u, dto); }
+  link(@CurrentUser() u: AuthUser, @Body() dto: CreatePayoutAccountDto): Promise<PayoutAccountResponse> {
+    return this.payouts.link(u, dto);
+  }
 }
 
 @Controller('projects/:projectId/settlements')
 export class ProjectSettlementsController {
   constructor(private readonly checkout: CheckoutService) {}
 
-  @Post('checkout') @ProjectRoles('owner', 'partner')
-  create(@CurrentProject() a: ProjectAccess, @CurrentUser() u: AuthUser, @Body() dto: CreateCheckoutDto): Promise<CheckoutResponse> { return this.checkout.create(a, u, dto); }
+  @Post('checkout')
+  @ProjectRoles('owner', 'partner')
+  create(@CurrentProject() a: ProjectAccess, @CurrentUser() u: AuthUser, @Body() dto: CreateCheckoutDto): Promise<CheckoutResponse> {
+    return this.checkout.create(a, u, dto);
+  }
 }

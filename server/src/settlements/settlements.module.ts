@@ -15,7 +15,12 @@ import { PayoutAccountController, ProjectSettlementsController } from './settlem
 import { WebhooksController } from './webhooks.controller';
 
 @Module({
-  imports: [MikroOrmModule.forFeature([PayoutAccount, PaymentEvent, SettlementCheckout]), ConfigModule.forFeature(paymentsConfig), AccountsModule, ProjectsModule],
+  imports: [
+    MikroOrmModule.forFeature([PayoutAccount, PaymentEvent, SettlementCheckout]),
+    ConfigModule.forFeature(paymentsConfig),
+    AccountsModule,
+    ProjectsModule,
+  ],
   controllers: [PayoutAccountController, ProjectSettlementsController, WebhooksController],
   providers: [stripeClientProvider, PayoutAccountsService, CheckoutService, WebhookService],
 })

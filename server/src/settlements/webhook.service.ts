@@ -54,7 +54,9 @@ export class WebhookService {
     }
     if (session.payment_status !== 'paid') return;
     if (session.amount_total !== checkout.amountMinor || session.currency?.toUpperCase() !== checkout.currency) {
-      this.logger.warn(`session ${session.id} paid ${session.amount_total} ${session.currency}, expected ${checkout.amountMinor} ${checkout.currency}; recording what was paid`);
+      this.logger.warn(
+        `session ${session.id} paid ${session.amount_total} ${session.currency}, expected ${checkout.amountMinor} ${checkout.currency}; recording what was paid`,
+      );
     }
     const project = await tx.findOneOrFail(Project, checkout.project.id);
     await this.entries.appendInTransaction(tx, project, {

@@ -8,6 +8,10 @@ import { WebhookService } from './webhook.service';
 export class WebhooksController {
   constructor(private readonly webhooks: WebhookService) {}
 
-  @Post('payments') @Public() @HttpCode(200)
-  payments(@Req() req: RawBodyRequest<Request>, @Headers('stripe-signature') signature?: string) { return this.webhooks.handle(req.rawBody, signature); }
+  @Post('payments')
+  @Public()
+  @HttpCode(200)
+  payments(@Req() req: RawBodyRequest<Request>, @Headers('stripe-signature') signature?: string) {
+    return this.webhooks.handle(req.rawBody, signature);
+  }
 }

@@ -25,11 +25,28 @@ function sources(r: SpeciesDataRow): Partial<Record<SpeciesSourceKey, unknown>> 
 export function catalogueInsertSql(rows: SpeciesDataRow[]): string {
   const values = rows.map((r) =>
     [
-      'gen_random_uuid()', 'now()', 'now()', lit(r.key), lit(r.scientificName), lit(r.scientificName.split(' ')[0]), lit(r.authority),
-      arr(r.formerNames), arr(r.commonNames), `${lit(r.group)}::species_group`, String(r.urticatingHairs.value), String(r.medicallySignificantVenom.value),
-      lit(r.tradeListing.value), num(r.pullWindow?.value.fromDay), num(r.pullWindow?.value.toDay),
-      num(r.pairingToSacDays?.value.min), num(r.pairingToSacDays?.value.max), num(r.eggsPerSac?.value.min), num(r.eggsPerSac?.value.max),
-      num(r.matureMaleLifespanMonths?.value.min), num(r.matureMaleLifespanMonths?.value.max), `${lit(JSON.stringify(sources(r)))}::jsonb`,
+      'gen_random_uuid()',
+      'now()',
+      'now()',
+      lit(r.key),
+      lit(r.scientificName),
+      lit(r.scientificName.split(' ')[0]),
+      lit(r.authority),
+      arr(r.formerNames),
+      arr(r.commonNames),
+      `${lit(r.group)}::species_group`,
+      String(r.urticatingHairs.value),
+      String(r.medicallySignificantVenom.value),
+      lit(r.tradeListing.value),
+      num(r.pullWindow?.value.fromDay),
+      num(r.pullWindow?.value.toDay),
+      num(r.pairingToSacDays?.value.min),
+      num(r.pairingToSacDays?.value.max),
+      num(r.eggsPerSac?.value.min),
+      num(r.eggsPerSac?.value.max),
+      num(r.matureMaleLifespanMonths?.value.min),
+      num(r.matureMaleLifespanMonths?.value.max),
+      `${lit(JSON.stringify(sources(r)))}::jsonb`,
     ].join(', '),
   );
   return `insert into "species" ("id", "created_at", "updated_at", "key", "scientific_name", "genus", "authority", "former_names", "common_names", "group", "urticating_hairs", "medically_significant_venom", "trade_listing", "pull_from_day", "pull_to_day", "pairing_to_sac_min_days", "pairing_to_sac_max_days", "eggs_min", "eggs_max", "lifespan_min_months", "lifespan_max_months", "sources") values\n(${values.join('),\n(')})\non conflict ("key") do nothing;`;

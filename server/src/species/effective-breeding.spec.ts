@@ -6,7 +6,10 @@ describe('effectiveBreeding', () => {
   it('a species with no own values gets day 21–45 (common practice) and its group’s values', () => {
     const e = effectiveBreeding('ow-arboreal', {});
     expect(e.pullWindow).toEqual({ value: { fromDay: 21, toDay: 45 }, source: { kind: 'common-practice' }, from: 'default' });
-    expect(e.matureMaleLifespanMonths.value).toEqual({ min: GROUP_LIFESPAN_DEFAULTS['ow-arboreal'].minMonths, max: GROUP_LIFESPAN_DEFAULTS['ow-arboreal'].maxMonths });
+    expect(e.matureMaleLifespanMonths.value).toEqual({
+      min: GROUP_LIFESPAN_DEFAULTS['ow-arboreal'].minMonths,
+      max: GROUP_LIFESPAN_DEFAULTS['ow-arboreal'].maxMonths,
+    });
     expect(e.matureMaleLifespanMonths.from).toBe('group');
     expect(e.eggsPerSac.from).toBe('group');
   });

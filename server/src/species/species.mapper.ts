@@ -9,7 +9,12 @@ function src(s: Species, key: SpeciesSourceKey): ValueSource {
   return s.sources[key] ?? UNSOURCED;
 }
 
-function range(s: Species, min: number | null | undefined, max: number | null | undefined, key: SpeciesSourceKey): Sourced<{ min: number; max: number }> | undefined {
+function range(
+  s: Species,
+  min: number | null | undefined,
+  max: number | null | undefined,
+  key: SpeciesSourceKey,
+): Sourced<{ min: number; max: number }> | undefined {
   return min != null && max != null ? { value: { min, max }, source: src(s, key) } : undefined;
 }
 

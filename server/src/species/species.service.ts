@@ -41,7 +41,9 @@ export class SpeciesService {
       );
     }
     if (query.group) qb.andWhere({ group: query.group });
-    qb.orderBy({ scientificName: 'asc' }).limit(query.limit ?? 50).offset(query.offset ?? 0);
+    qb.orderBy({ scientificName: 'asc' })
+      .limit(query.limit ?? 50)
+      .offset(query.offset ?? 0);
     const [rows, total] = await qb.getResultAndCount();
     return { items: rows.map(toSpeciesResponse), total };
   }
@@ -59,7 +61,8 @@ export class SpeciesService {
   /** For other modules: the entity, or a 400 naming the field when the id is not in the catalogue. */
   async require(id: string, field = 'speciesId'): Promise<Species> {
     const found = await this.em.findOne(Species, { id });
-    if (!found) throw new BadRequestException({ message: 'Choose a species from the catalogue.', details: [{ field, message: 'Choose a species from the catalogue.' }] });
+    if (!found)
+      throw new BadRequestException({ message: 'Choose a species from the catalogue.', details: [{ field, message: 'Choose a species from the catalogue.' }] });
     return found;
   }
 
@@ -76,7 +79,8 @@ export class SpeciesService {
     for (const [a, b, , what, least] of PAIRS) {
       const lo = s[a] as number | null | undefined;
       const hi = s[b] as number | null | undefined;
-      if ((lo == null) !== (hi == null)) problems.push({ field: String(lo == null ? a : b), message: `Give both ends of the ${what}, or clear both to use the default.` });
+      if ((lo == null) !== (hi == null))
+        problems.push({ field: String(lo == null ? a : b), message: `Give both ends of the ${what}, or clear both to use the default.` });
       else if (lo != null && hi != null && lo > hi) problems.push({ field: String(a), message: `The ${what} starts after it ends (${lo} > ${hi}).` });
       else if (lo != null && lo < least) problems.push({ field: String(a), message: `The ${what} must start at ${least} or more.` });
     }

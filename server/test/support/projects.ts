@@ -9,13 +9,26 @@ import { registerKeeper, type SignedIn } from './users';
 let n = 0;
 
 /** A project of `owner` with a fresh mature female and a mature male (matured `maleAgeDays` ago). */
-export async function createProject(app: INestApplication, orm: MikroORM, owner: SignedIn, opts: { title?: string; maleAgeDays?: number } = {}): Promise<ProjectResponse> {
+export async function createProject(
+  app: INestApplication,
+  orm: MikroORM,
+  owner: SignedIn,
+  opts: { title?: string; maleAgeDays?: number } = {},
+): Promise<ProjectResponse> {
   n += 1;
   const today = todayIn('UTC', new Date());
   const species = await speciesId(orm, 'Grammostola pulchripes');
   const female = await createAnimal(app, owner, { speciesId: species, label: `F-${n}-${Date.now()}`, sex: 'female', maturity: 'mature' });
-  const male = await createAnimal(app, owner, { speciesId: species, label: `M-${n}-${Date.now()}`, sex: 'male', maturity: 'mature', maturedOn: addDays(today, -(opts.maleAgeDays ?? 60)) });
-  const res = await request(app.getHttpServer()).post('/api/projects').set('Authorization', owner.bearer)
+  const male = await createAnimal(app, owner, {
+    speciesId: species,
+    label: `M-${n}-${Date.now()}`,
+    sex: 'male',
+    maturity: 'mature',
+    maturedOn: addDays(today, -(opts.maleAgeDays ?? 60)),
+  });
+  const res = await request(app.getHttpServer())
+    .post('/api/projects')
+    .set('Authorization', owner.bearer)
     .send({ title: opts.title ?? `Project ${n}`, femaleId: female.id, maleId: male.id });
   if (res.status !== 201) throw new Error(`create project answered ${res.status}: ${JSON.stringify(res.body)}`);
   return res.body as ProjectResponse;

@@ -15,18 +15,37 @@ const PRICE = 500;
 const bal = (entries: LedgerEntry[]) => computeBalances(shares, entries, PRICE, 'EUR', 'ana');
 const of = (b: AccountBalances, id: string) => b.parties.find((p) => p.partyId === id)!;
 
-const handOver = (id: string, partyId: string, count: number): LedgerEntry =>
-  ({ kind: 'hand-over', id, date: '2026-05-02', partyId, count, method: 'shipment', carrier: 'Overnight courier', tracking: 'TRK-1' });
+const handOver = (id: string, partyId: string, count: number): LedgerEntry => ({
+  kind: 'hand-over',
+  id,
+  date: '2026-05-02',
+  partyId,
+  count,
+  method: 'shipment',
+  carrier: 'Overnight courier',
+  tracking: 'TRK-1',
+});
 const cashOut = (id: string, partyId: string, count: number): LedgerEntry => ({ kind: 'cash-out', id, date: '2026-05-03', partyId, count });
-const money = (id: string, fromPartyId: string, toPartyId: string, amountMinor: number): LedgerEntry =>
-  ({ kind: 'money', id, date: '2026-05-04', fromPartyId, toPartyId, amountMinor, currency: 'EUR' });
+const money = (id: string, fromPartyId: string, toPartyId: string, amountMinor: number): LedgerEntry => ({
+  kind: 'money',
+  id,
+  date: '2026-05-04',
+  fromPartyId,
+  toPartyId,
+  amountMinor,
+  currency: 'EUR',
+});
 const correction = (id: string, reversesId: string): LedgerEntry => ({ kind: 'correction', id, date: '2026-05-05', reversesId, reason: 'entered twice' });
 
 describe('balances', () => {
   it('starts with every party owed its share', () => {
     expect(shares.map((s) => s.count)).toEqual([25, 23, 12]);
     const b = bal([]);
-    expect(b.parties.map((p) => [p.partyId, p.share, p.owedSpiderlings])).toEqual([['ana', 25, 25], ['ben', 23, 23], ['cleo', 12, 12]]);
+    expect(b.parties.map((p) => [p.partyId, p.share, p.owedSpiderlings])).toEqual([
+      ['ana', 25, 25],
+      ['ben', 23, 23],
+      ['cleo', 12, 12],
+    ]);
     expect(b.debts).toEqual([]);
     expect(b.problems).toEqual([]);
   });
@@ -93,7 +112,9 @@ describe('balances', () => {
       handOver('h1', 'cleo', 2),
       { kind: 'arrival', id: 'a1', date: '2026-05-03', handOverId: 'h1', arrivedAlive: 1, arrivedDead: 1 },
       money('m1', 'ben', 'ana', 100),
-      correction('x1', 's1'), correction('x2', 'a1'), correction('x3', 'm1'),
+      correction('x1', 's1'),
+      correction('x2', 'a1'),
+      correction('x3', 'm1'),
     ]);
     expect(of(b, 'cleo')).toMatchObject({ sold: 0, salesMinor: 0, handedOver: 2, owedSpiderlings: 10, arrivedAlive: 0, unconfirmedHandOvers: 1 });
     expect(b.debts).toEqual([]);
@@ -141,14 +162,33 @@ describe('balances', () => {
 describe('balances: invariants over random ledgers', () => {
   const ids = ['ana', 'ben', 'cleo'];
   const arbEntry = fc.oneof(
-    fc.record({ kind: fc.constant('hand-over' as const), partyId: fc.constantFrom(...ids), count: fc.integer({ min: 1, max: 20 }), method: fc.constantFrom('pick-up' as const, 'shipment' as const) }),
-    fc.record({ kind: fc.constant('sale' as const), partyId: fc.constantFrom(...ids), count: fc.integer({ min: 1, max: 20 }), priceMinor: fc.integer({ min: 0, max: 10_000 }), currency: fc.constant('EUR') }),
+    fc.record({
+      kind: fc.constant('hand-over' as const),
+      partyId: fc.constantFrom(...ids),
+      count: fc.integer({ min: 1, max: 20 }),
+      method: fc.constantFrom('pick-up' as const, 'shipment' as const),
+    }),
+    fc.record({
+      kind: fc.constant('sale' as const),
+      partyId: fc.constantFrom(...ids),
+      count: fc.integer({ min: 1, max: 20 }),
+      priceMinor: fc.integer({ min: 0, max: 10_000 }),
+      currency: fc.constant('EUR'),
+    }),
     fc.record({ kind: fc.constant('cash-out' as const), partyId: fc.constantFrom('ben', 'cleo'), count: fc.integer({ min: 1, max: 20 }) }),
-    fc.record({ kind: fc.constant('money' as const), fromPartyId: fc.constantFrom(...ids), toPartyId: fc.constantFrom(...ids), amountMinor: fc.integer({ min: 1, max: 20_000 }), currency: fc.constant('EUR') }),
+    fc.record({
+      kind: fc.constant('money' as const),
+      fromPartyId: fc.constantFrom(...ids),
+      toPartyId: fc.constantFrom(...ids),
+      amountMinor: fc.integer({ min: 1, max: 20_000 }),
+      currency: fc.constant('EUR'),
+    }),
   );
-  const arbLedger = fc.array(arbEntry, { maxLength: 25 }).map((rows) =>
-    rows.map((r, i) => ({ ...r, id: `e${i}`, date: '2026-05-01' }) as LedgerEntry).filter((e) => !(e.kind === 'money' && e.fromPartyId === e.toPartyId)),
-  );
+  const arbLedger = fc
+    .array(arbEntry, { maxLength: 25 })
+    .map((rows) =>
+      rows.map((r, i) => ({ ...r, id: `e${i}`, date: '2026-05-01' }) as LedgerEntry).filter((e) => !(e.kind === 'money' && e.fromPartyId === e.toPartyId)),
+    );
 
   it('keeps spiderlings and money consistent', () => {
     fc.assert(

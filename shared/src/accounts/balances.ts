@@ -56,8 +56,21 @@ const isMinor = (n: number) => Number.isSafeInteger(n) && n >= 0;
 
 function emptyBalance(partyId: string, share: number): PartyBalance {
   return {
-    partyId, share, handedOver: 0, sold: 0, cashedOut: 0, owedSpiderlings: share, arrivedAlive: 0, arrivedDead: 0,
-    unconfirmedHandOvers: 0, salesMinor: 0, cashOutValueMinor: 0, paidMinor: 0, receivedMinor: 0, moneyOwedToMinor: 0, moneyOwesMinor: 0,
+    partyId,
+    share,
+    handedOver: 0,
+    sold: 0,
+    cashedOut: 0,
+    owedSpiderlings: share,
+    arrivedAlive: 0,
+    arrivedDead: 0,
+    unconfirmedHandOvers: 0,
+    salesMinor: 0,
+    cashOutValueMinor: 0,
+    paidMinor: 0,
+    receivedMinor: 0,
+    moneyOwedToMinor: 0,
+    moneyOwesMinor: 0,
   };
 }
 
@@ -144,7 +157,11 @@ export function computeBalances(
     if (!inForce.has(e.id)) continue;
     switch (e.kind) {
       case 'hand-over': {
-        if (!isCount(e.count)) { skip(e.id, `Hand-over ${e.id}: the count must be a whole number above 0.`); inForce.delete(e.id); break; }
+        if (!isCount(e.count)) {
+          skip(e.id, `Hand-over ${e.id}: the count must be a whole number above 0.`);
+          inForce.delete(e.id);
+          break;
+        }
         const b = party(e.partyId, e.id);
         b.handedOver += e.count;
         handOvers.set(e.id, { partyId: e.partyId, count: e.count });
@@ -152,9 +169,21 @@ export function computeBalances(
       }
       case 'arrival': {
         const h = handOvers.get(e.handOverId);
-        if (!h) { skip(e.id, `Arrival ${e.id} refers to ${e.handOverId}, which is not a hand-over in force.`); inForce.delete(e.id); break; }
-        if (!isMinor(e.arrivedAlive) || !isMinor(e.arrivedDead)) { skip(e.id, `Arrival ${e.id}: counts must be whole numbers, 0 or more.`); inForce.delete(e.id); break; }
-        if (arrived.has(e.handOverId)) { skip(e.id, `Hand-over ${e.handOverId} already has an arrival count; ${e.id} is ignored.`); inForce.delete(e.id); break; }
+        if (!h) {
+          skip(e.id, `Arrival ${e.id} refers to ${e.handOverId}, which is not a hand-over in force.`);
+          inForce.delete(e.id);
+          break;
+        }
+        if (!isMinor(e.arrivedAlive) || !isMinor(e.arrivedDead)) {
+          skip(e.id, `Arrival ${e.id}: counts must be whole numbers, 0 or more.`);
+          inForce.delete(e.id);
+          break;
+        }
+        if (arrived.has(e.handOverId)) {
+          skip(e.id, `Hand-over ${e.handOverId} already has an arrival count; ${e.id} is ignored.`);
+          inForce.delete(e.id);
+          break;
+        }
         arrived.add(e.handOverId);
         const b = balances.get(h.partyId)!;
         b.arrivedAlive += e.arrivedAlive;
@@ -165,8 +194,16 @@ export function computeBalances(
         break;
       }
       case 'sale': {
-        if (!isCount(e.count) || !isMinor(e.priceMinor)) { skip(e.id, `Sale ${e.id}: the count must be above 0 and the price a whole number of minor units.`); inForce.delete(e.id); break; }
-        if (e.currency !== currency) { skip(e.id, `Sale ${e.id} is in ${e.currency}, but this account is kept in ${currency}.`); inForce.delete(e.id); break; }
+        if (!isCount(e.count) || !isMinor(e.priceMinor)) {
+          skip(e.id, `Sale ${e.id}: the count must be above 0 and the price a whole number of minor units.`);
+          inForce.delete(e.id);
+          break;
+        }
+        if (e.currency !== currency) {
+          skip(e.id, `Sale ${e.id} is in ${e.currency}, but this account is kept in ${currency}.`);
+          inForce.delete(e.id);
+          break;
+        }
         const b = party(e.partyId, e.id);
         b.sold += e.count;
         b.salesMinor += e.priceMinor;
@@ -174,8 +211,16 @@ export function computeBalances(
       }
       case 'cash-out': {
         const price = e.pricePerSpiderlingMinor ?? pricePerSpiderlingMinor;
-        if (!isCount(e.count) || !isMinor(price)) { skip(e.id, `Cash-out ${e.id}: the count must be above 0 and the price a whole number of minor units.`); inForce.delete(e.id); break; }
-        if (e.partyId === ownerPartyId) { skip(e.id, `Cash-out ${e.id}: the project owner cannot cash out to themselves.`); inForce.delete(e.id); break; }
+        if (!isCount(e.count) || !isMinor(price)) {
+          skip(e.id, `Cash-out ${e.id}: the count must be above 0 and the price a whole number of minor units.`);
+          inForce.delete(e.id);
+          break;
+        }
+        if (e.partyId === ownerPartyId) {
+          skip(e.id, `Cash-out ${e.id}: the project owner cannot cash out to themselves.`);
+          inForce.delete(e.id);
+          break;
+        }
         const b = party(e.partyId, e.id);
         b.cashedOut += e.count;
         b.cashOutValueMinor += e.count * price;
@@ -183,9 +228,21 @@ export function computeBalances(
         break;
       }
       case 'money': {
-        if (!isCount(e.amountMinor)) { skip(e.id, `Payment ${e.id}: the amount must be a whole number of minor units above 0.`); inForce.delete(e.id); break; }
-        if (e.currency !== currency) { skip(e.id, `Payment ${e.id} is in ${e.currency}, but this account is kept in ${currency}.`); inForce.delete(e.id); break; }
-        if (e.fromPartyId === e.toPartyId) { skip(e.id, `Payment ${e.id} goes from a party to itself.`); inForce.delete(e.id); break; }
+        if (!isCount(e.amountMinor)) {
+          skip(e.id, `Payment ${e.id}: the amount must be a whole number of minor units above 0.`);
+          inForce.delete(e.id);
+          break;
+        }
+        if (e.currency !== currency) {
+          skip(e.id, `Payment ${e.id} is in ${e.currency}, but this account is kept in ${currency}.`);
+          inForce.delete(e.id);
+          break;
+        }
+        if (e.fromPartyId === e.toPartyId) {
+          skip(e.id, `Payment ${e.id} goes from a party to itself.`);
+          inForce.delete(e.id);
+          break;
+        }
         party(e.fromPartyId, e.id).paidMinor += e.amountMinor;
         party(e.toPartyId, e.id).receivedMinor += e.amountMinor;
         addDebt(e.fromPartyId, e.toPartyId, -e.amountMinor);

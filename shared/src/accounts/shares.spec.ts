@@ -17,7 +17,10 @@ describe('share rule: published worked examples of the largest-remainder method'
     // 100 000 votes, 10 seats, Hare quota 10 000: quotas 4.70, 1.60, 1.58, 1.20, 0.61, 0.31 → 4,1,1,1,0,0
     // and the 3 seats left go to remainders .70 (Yellows), .61 (Blues), .60 (Whites).
     const votes = { yellows: 47_000, whites: 16_000, reds: 15_800, greens: 12_000, blues: 6_100, pinks: 3_100 };
-    const r = computeShares(10, Object.entries(votes).map(([id, w], i) => party(id, w, i + 1)));
+    const r = computeShares(
+      10,
+      Object.entries(votes).map(([id, w], i) => party(id, w, i + 1)),
+    );
     expect(counts(r)).toEqual({ yellows: 5, whites: 2, reds: 1, greens: 1, blues: 1, pinks: 0 });
     expect(r.parties.find((p) => p.partyId === 'yellows')!.exactQuota).toBe('47/10');
     expect(hareNiemeyer(votes, 10, false)).toEqual(counts(r));
@@ -105,9 +108,12 @@ const arbParties = fc
     maxLength: 8,
   })
   .chain((rows) =>
-    fc.shuffledSubarray(rows.map((_, i) => i + 1), { minLength: rows.length, maxLength: rows.length }).map((picks) =>
-      rows.map((r, i) => party(`p${i}`, r.weight, picks[i]!, r.fixed)),
-    ),
+    fc
+      .shuffledSubarray(
+        rows.map((_, i) => i + 1),
+        { minLength: rows.length, maxLength: rows.length },
+      )
+      .map((picks) => rows.map((r, i) => party(`p${i}`, r.weight, picks[i]!, r.fixed))),
   );
 
 describe('share rule: property checks against hare-niemeyer', () => {
@@ -210,9 +216,13 @@ describe('share explanation and changes', () => {
     expect(short[1]).toBe('Fixed counts come first, in pick order: Ben (male) 5, Ana (female) 3 of the 5 agreed. 0 young remain.');
     expect(short).toContain('Nothing is left to split by weight.');
     const tie = explainShares(computeShares(3, [party('f', 1, 2), party('m', 1, 1)]), names);
-    expect(tie[2]).toBe('Each party first gets the whole part of its quota; the 1 young still left goes to the largest remainder: Ben (male). Equal remainders went to the earlier pick.');
+    expect(tie[2]).toBe(
+      'Each party first gets the whole part of its quota; the 1 young still left goes to the largest remainder: Ben (male). Equal remainders went to the earlier pick.',
+    );
     const two = explainShares(computeShares(5, [party('a', 1, 1), party('b', 1, 2), party('c', 1, 3)]));
-    expect(two[2]).toBe('Each party first gets the whole part of its quota; the 2 young still left go one each to the largest remainders: a, b. Equal remainders went to the earlier pick.');
+    expect(two[2]).toBe(
+      'Each party first gets the whole part of its quota; the 2 young still left go one each to the largest remainders: a, b. Equal remainders went to the earlier pick.',
+    );
   });
 
   it('lists what changed between two results', () => {

@@ -171,7 +171,8 @@ export function explainShares(result: ShareResult, names?: PartyNames): string[]
       const remainders = new Map(byPick.map((p) => [p.partyId, (R * BigInt(p.weight)) % W]));
       const cut = remainders.get(up[up.length - 1]!.partyId)!;
       const tiedOut = byPick.some((p) => !p.roundedUp && remainders.get(p.partyId) === cut);
-      const leftOver = up.length === 1 ? 'the 1 young still left goes to the largest remainder' : `the ${up.length} young still left go one each to the largest remainders`;
+      const leftOver =
+        up.length === 1 ? 'the 1 young still left goes to the largest remainder' : `the ${up.length} young still left go one each to the largest remainders`;
       lines.push(
         `Each party first gets the whole part of its quota; ${leftOver}: ${up.map((p) => name(p.partyId)).join(', ')}.` +
           (tiedOut ? ' Equal remainders went to the earlier pick.' : ''),

@@ -1,7 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import {
-  BROOD_STAGES, GERMAN_BROOD_STAGE_LABELS, US_BROOD_STAGE_LABELS, broodStageLabel, compareBroodStages,
-  isBroodStage, isBroodStageAtLeast,
+  BROOD_STAGES,
+  GERMAN_BROOD_STAGE_LABELS,
+  US_BROOD_STAGE_LABELS,
+  broodStageLabel,
+  compareBroodStages,
+  isBroodStage,
+  isBroodStageAtLeast,
 } from './brood-stage.js';
 
 // Order of development: TRADE-FACTS §1 (egg → prelarva "eggs with legs" → … → free-living nymph),

@@ -7,7 +7,12 @@ import { pairingWarnings, type PairingWarningFacts } from './pairing-warnings.js
 // Lifespan groups: TRADE-FACTS §5, from memory. First sperm web after 2–4 weeks: common practice.
 const lifespan = GROUP_LIFESPAN_DEFAULTS['nw-terrestrial']; // 12–24 months
 const base = (over: Partial<PairingWarningFacts> = {}): PairingWarningFacts => ({
-  today: '2026-06-01', pairings: [], femaleMolts: [], sacLayDates: [], failureClause: 'nothing-owed', ...over,
+  today: '2026-06-01',
+  pairings: [],
+  femaleMolts: [],
+  sacLayDates: [],
+  failureClause: 'nothing-owed',
+  ...over,
 });
 const codes = (f: PairingWarningFacts) => pairingWarnings(f).map((w) => w.code);
 
@@ -58,10 +63,13 @@ describe('pairing warnings', () => {
   it("says what the terms' failure clause means when the male dies before a successful pairing", () => {
     const died = { maturedOn: '2025-06-01', lifespan, diedOn: '2026-05-15' };
     const nothing = pairingWarnings(base({ male: died, pairings: [{ on: '2026-05-01', outcome: 'aggression' }] }));
-    expect(nothing).toEqual([{
-      code: 'male-died-before-pairing', severity: 'danger',
-      message: 'The male died on 2026-05-15 before a successful pairing. Under these terms nothing is owed when a project fails.',
-    }]);
+    expect(nothing).toEqual([
+      {
+        code: 'male-died-before-pairing',
+        severity: 'danger',
+        message: 'The male died on 2026-05-15 before a successful pairing. Under these terms nothing is owed when a project fails.',
+      },
+    ]);
     expect(pairingWarnings(base({ male: died, failureClause: 'carries-over' }))[0]!.message).toMatch(/carries over to the next sac or pairing/);
     const after = pairingWarnings(base({ male: died, pairings: [{ on: '2026-05-01', outcome: 'connected' }] }));
     expect(after.map((w) => [w.code, w.severity])).toEqual([['male-died-after-pairing', 'info']]);

@@ -55,7 +55,10 @@ export function pairingWarnings(facts: PairingWarningFacts): PairingWarning[] {
   const { today, male } = facts;
   assertCalendarDate(today, 'date today');
   const out: PairingWarning[] = [];
-  const connected = facts.pairings.filter((p) => p.outcome === 'connected').map((p) => p.on).sort();
+  const connected = facts.pairings
+    .filter((p) => p.outcome === 'connected')
+    .map((p) => p.on)
+    .sort();
   const lastConnected = connected.at(-1);
   const sacSince = (date: string) => facts.sacLayDates.some((d) => d >= date);
   const anySac = facts.sacLayDates.length > 0;

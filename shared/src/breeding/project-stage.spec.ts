@@ -24,7 +24,9 @@ describe('project stage', () => {
   it('waits for a sac after a connected pairing, whatever came after it', () => {
     expect(deriveProjectStage(facts({ pairings: [paired('2025-11-01'), paired('2025-11-08', 'female-refused')] }))).toEqual({ stage: 'waiting-for-sac' });
     // the male died after connecting: the female can still lay
-    expect(deriveProjectStage(facts({ pairings: [paired('2025-11-01'), paired('2025-11-08', 'male-lost')], maleDiedOn: '2025-11-08' }))).toEqual({ stage: 'waiting-for-sac' });
+    expect(deriveProjectStage(facts({ pairings: [paired('2025-11-01'), paired('2025-11-08', 'male-lost')], maleDiedOn: '2025-11-08' }))).toEqual({
+      stage: 'waiting-for-sac',
+    });
     // a molt before the pairing does not matter
     expect(deriveProjectStage(facts({ pairings: [paired('2025-11-01')], femaleMolts: ['2025-08-01'] }))).toEqual({ stage: 'waiting-for-sac' });
   });
@@ -34,7 +36,9 @@ describe('project stage', () => {
     expect(deriveProjectStage(facts(base))).toEqual({ stage: 'ended-early', reason: 'female-molted' });
     expect(deriveProjectStage(facts({ ...base, femaleMolts: ['2025-11-01'] }))).toEqual({ stage: 'ended-early', reason: 'female-molted' }); // same day counts as after
     // a later attempt that did not connect does not help
-    expect(deriveProjectStage(facts({ ...base, pairings: [...base.pairings, paired('2026-03-01', 'interest-only')] }))).toMatchObject({ reason: 'female-molted' });
+    expect(deriveProjectStage(facts({ ...base, pairings: [...base.pairings, paired('2026-03-01', 'interest-only')] }))).toMatchObject({
+      reason: 'female-molted',
+    });
     // a later connected pairing does
     expect(deriveProjectStage(facts({ ...base, pairings: [...base.pairings, paired('2026-03-01')] }))).toEqual({ stage: 'waiting-for-sac' });
   });
@@ -50,10 +54,16 @@ describe('project stage', () => {
     expect(deriveProjectStage(facts({ pairings, sacs: [sac()] }))).toEqual({ stage: 'sac-laid', sacId: 's1' });
     expect(deriveProjectStage(facts({ pairings, sacs: [sac({ broodStage: 'eggs-with-legs' })] }))).toEqual({ stage: 'sac-laid', sacId: 's1' });
     expect(deriveProjectStage(facts({ pairings, sacs: [sac({ pulledOn: '2026-03-25' })] }))).toEqual({ stage: 'in-incubator', sacId: 's1' });
-    expect(deriveProjectStage(facts({ pairings, sacs: [sac({ pulledOn: '2026-03-25', broodStage: 'first-instar' })] }))).toEqual({ stage: 'brood', sacId: 's1' });
+    expect(deriveProjectStage(facts({ pairings, sacs: [sac({ pulledOn: '2026-03-25', broodStage: 'first-instar' })] }))).toEqual({
+      stage: 'brood',
+      sacId: 's1',
+    });
     // a sac left with the mother also gives a brood
     expect(deriveProjectStage(facts({ pairings, sacs: [sac({ broodStage: 'second-instar' })] }))).toEqual({ stage: 'brood', sacId: 's1' });
-    expect(deriveProjectStage(facts({ pairings, sacs: [sac({ broodStage: 'second-instar' })], sharesSettled: true }))).toEqual({ stage: 'shares-settled', sacId: 's1' });
+    expect(deriveProjectStage(facts({ pairings, sacs: [sac({ broodStage: 'second-instar' })], sharesSettled: true }))).toEqual({
+      stage: 'shares-settled',
+      sacId: 's1',
+    });
   });
 
   it('ignores a female molt once a sac is laid', () => {
@@ -71,8 +81,9 @@ describe('project stage', () => {
     expect(deriveProjectStage(facts(again))).toEqual({ stage: 'waiting-for-sac' });
     expect(deriveProjectStage(facts({ ...again, femaleMolts: ['2026-07-01'] }))).toEqual({ stage: 'ended-early', reason: 'female-molted' });
     // a second sac after the failed one
-    expect(deriveProjectStage(facts({ ...again, sacs: [sac({ outcome: 'eaten' }), sac({ id: 's2', layDate: '2026-08-01', pulledOn: '2026-08-25' })] })))
-      .toEqual({ stage: 'in-incubator', sacId: 's2' });
+    expect(
+      deriveProjectStage(facts({ ...again, sacs: [sac({ outcome: 'eaten' }), sac({ id: 's2', layDate: '2026-08-01', pulledOn: '2026-08-25' })] })),
+    ).toEqual({ stage: 'in-incubator', sacId: 's2' });
   });
 
   it('prefers the sac furthest along when several are live', () => {

@@ -3,11 +3,17 @@ import { isBroodStageAtLeast } from './brood-stage.js';
 import type { PairingFact, SacFact } from './pairing.types.js';
 
 /** The progress line of a project (our own words), in order; `ended-early` stands outside it. */
-export type ProjectStage =
-  | 'planned' | 'paired' | 'waiting-for-sac' | 'sac-laid' | 'in-incubator' | 'brood' | 'shares-settled' | 'closed' | 'ended-early';
+export type ProjectStage = 'planned' | 'paired' | 'waiting-for-sac' | 'sac-laid' | 'in-incubator' | 'brood' | 'shares-settled' | 'closed' | 'ended-early';
 
 export const PROJECT_STAGE_LINE: readonly ProjectStage[] = [
-  'planned', 'paired', 'waiting-for-sac', 'sac-laid', 'in-incubator', 'brood', 'shares-settled', 'closed',
+  'planned',
+  'paired',
+  'waiting-for-sac',
+  'sac-laid',
+  'in-incubator',
+  'brood',
+  'shares-settled',
+  'closed',
 ];
 
 export type EndedEarlyReason = 'no-sac' | 'female-molted' | 'sac-failed' | 'sac-eaten' | 'male-died';
@@ -65,12 +71,14 @@ export function deriveProjectStage(facts: ProjectFacts): DerivedProjectStage {
   if (facts.endedEarly) return { stage: 'ended-early', reason: facts.endedEarly };
   if (facts.closedOn) return { stage: 'closed' };
 
-  const withId = (stage: ProjectStage, sac: SacFact | undefined): DerivedProjectStage =>
-    sac?.id !== undefined ? { stage, sacId: sac.id } : { stage };
+  const withId = (stage: ProjectStage, sac: SacFact | undefined): DerivedProjectStage => (sac?.id !== undefined ? { stage, sacId: sac.id } : { stage });
   const brood = latest(facts.sacs.filter(hasBrood), (s) => s.layDate);
   if (brood) return withId(facts.sharesSettled ? 'shares-settled' : 'brood', brood);
   const live = facts.sacs.filter(isLive);
-  const pulled = latest(live.filter((s) => !!s.pulledOn), (s) => s.layDate);
+  const pulled = latest(
+    live.filter((s) => !!s.pulledOn),
+    (s) => s.layDate,
+  );
   if (pulled) return withId('in-incubator', pulled);
   const laid = latest(live, (s) => s.layDate);
   if (laid) return withId('sac-laid', laid);
@@ -78,7 +86,10 @@ export function deriveProjectStage(facts: ProjectFacts): DerivedProjectStage {
   const lastDead = latest(facts.sacs, (s) => s.layDate);
   const since = lastDead?.layDate;
   const attempt = facts.pairings.filter((p) => since === undefined || p.on > since);
-  const lastConnected = latest(attempt.filter((p) => p.outcome === 'connected'), (p) => p.on);
+  const lastConnected = latest(
+    attempt.filter((p) => p.outcome === 'connected'),
+    (p) => p.on,
+  );
   if (!lastConnected) {
     if (lastDead) return { ...withId('ended-early', lastDead), reason: lastDead.outcome === 'eaten' ? 'sac-eaten' : 'sac-failed' };
     const lastPairing = latest(attempt, (p) => p.on);

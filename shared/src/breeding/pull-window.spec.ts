@@ -66,8 +66,14 @@ describe('pull window', () => {
 
   it('gives a screen the day number, state and days to go', () => {
     expect(pullWindowView('2024-02-01', '2024-02-15')).toEqual({
-      opensOn: '2024-02-22', closesOn: '2024-03-17', closingFrom: '2024-03-15',
-      dayNumber: 14, state: 'not-yet', daysUntilOpens: 7, daysUntilCloses: 31, daysPastClose: 0,
+      opensOn: '2024-02-22',
+      closesOn: '2024-03-17',
+      closingFrom: '2024-03-15',
+      dayNumber: 14,
+      state: 'not-yet',
+      daysUntilOpens: 7,
+      daysUntilCloses: 31,
+      daysPastClose: 0,
     });
     expect(pullWindowView('2024-02-01', '2024-03-17')).toMatchObject({ dayNumber: 45, state: 'closing', daysUntilOpens: 0, daysUntilCloses: 0 });
     expect(pullWindowView('2024-02-01', '2024-03-20')).toMatchObject({ dayNumber: 48, state: 'past', daysUntilCloses: null, daysPastClose: 3 });

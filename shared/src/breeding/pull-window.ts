@@ -60,11 +60,7 @@ export function pullWindowDates(layDate: CalendarDate, window: PullWindow = DEFA
   };
 }
 
-export function pullWindowState(
-  layDate: CalendarDate,
-  today: CalendarDate,
-  window: PullWindow = DEFAULT_PULL_WINDOW,
-): PullWindowState {
+export function pullWindowState(layDate: CalendarDate, today: CalendarDate, window: PullWindow = DEFAULT_PULL_WINDOW): PullWindowState {
   assertPullWindow(window);
   const day = dayNumber(layDate, today);
   if (day < window.fromDay) return 'not-yet';
@@ -72,11 +68,7 @@ export function pullWindowState(
   return day >= closingFromDay(window) ? 'closing' : 'open';
 }
 
-export function pullWindowView(
-  layDate: CalendarDate,
-  today: CalendarDate,
-  window: PullWindow = DEFAULT_PULL_WINDOW,
-): PullWindowView {
+export function pullWindowView(layDate: CalendarDate, today: CalendarDate, window: PullWindow = DEFAULT_PULL_WINDOW): PullWindowView {
   const dates = pullWindowDates(layDate, window);
   const day = dayNumber(layDate, today);
   return {

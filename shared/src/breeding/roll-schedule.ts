@@ -80,9 +80,7 @@ export interface RollState {
 }
 
 /** Next roll and its status for a dashboard, or null when rolling does not apply. */
-export function rollState(
-  facts: RollingFacts & NextRollInput & { now: Instant },
-): RollState | null {
+export function rollState(facts: RollingFacts & NextRollInput & { now: Instant }): RollState | null {
   if (!rollingApplies(facts)) return null;
   const due = nextRollDue(facts);
   return { due, status: rollStatus(facts.now, due, facts.intervalHours ?? DEFAULT_ROLL_INTERVAL_HOURS) };

@@ -16,8 +16,7 @@ export interface FemaleReadiness {
   note: string;
 }
 
-const LOST_PAIRING_NOTE =
-  'If she molts again before she lays, the pairing is lost: the stored sperm is shed with the old skin.';
+const LOST_PAIRING_NOTE = 'If she molts again before she lays, the pairing is lost: the stored sperm is shed with the old skin.';
 
 export function femaleReadiness(lastMoltOn: CalendarDate | null, today: CalendarDate): FemaleReadiness {
   assertCalendarDate(today, 'date today');

@@ -7,9 +7,7 @@ export type SpeciesGroup = (typeof SPECIES_GROUPS)[number];
  * with no written source, or recalled by the author of the dataset.
  */
 export type ValueSource =
-  | { kind: 'published'; citation: string; note?: string }
-  | { kind: 'common-practice'; note?: string }
-  | { kind: 'memory'; note?: string };
+  { kind: 'published'; citation: string; note?: string } | { kind: 'common-practice'; note?: string } | { kind: 'memory'; note?: string };
 
 /** An inclusive whole-number range, e.g. eggs per sac 100–600. */
 export interface NumberRange {

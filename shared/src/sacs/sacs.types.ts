@@ -21,7 +21,7 @@ export const PULL_DAY_MAX = 120;
 export const INCUBATOR_CAUTION =
   'Any heat source for an incubator belongs behind a thermostat and out of reach of bedding, paper and cables: ' +
   'unregulated heat mats and bulbs overheat eggs and can start fires. Check the setup daily. Where local law or a licensed ' +
-  'keeper\'s practice says otherwise, follow them.';
+  "keeper's practice says otherwise, follow them.";
 
 export interface CreateSacRequest {
   /** Calendar date in the keeper's time zone; today or earlier. */

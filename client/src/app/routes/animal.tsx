@@ -106,7 +106,11 @@ export function Component() {
                 {animal.dueBackOn ? ` · due back ${formatDate(animal.dueBackOn)}` : ''}
               </Fact>
               <Fact label="Acquired">
-                {[animal.acquiredOn && formatDate(animal.acquiredOn), animal.acquiredFrom && `from ${animal.acquiredFrom}`, animal.pricePaidMinor != null && animal.priceCurrency && formatMoney(animal.pricePaidMinor, animal.priceCurrency)]
+                {[
+                  animal.acquiredOn && formatDate(animal.acquiredOn),
+                  animal.acquiredFrom && `from ${animal.acquiredFrom}`,
+                  animal.pricePaidMinor != null && animal.priceCurrency && formatMoney(animal.pricePaidMinor, animal.priceCurrency),
+                ]
                   .filter(Boolean)
                   .join(' · ') || '—'}
               </Fact>

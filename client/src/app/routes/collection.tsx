@@ -23,7 +23,11 @@ export const clientLoader =
   (qc: QueryClient) =>
   async ({ request }: LoaderFunctionArgs) => {
     const filters = filtersFromParams(new URL(request.url).searchParams);
-    await Promise.all([qc.ensureQueryData(animalQueries.list(filters)), qc.prefetchQuery(animalQueries.males()), qc.prefetchQuery(speciesQueries.list(ALL_SPECIES))]);
+    await Promise.all([
+      qc.ensureQueryData(animalQueries.list(filters)),
+      qc.prefetchQuery(animalQueries.males()),
+      qc.prefetchQuery(speciesQueries.list(ALL_SPECIES)),
+    ]);
     return null;
   };
 
@@ -68,7 +72,11 @@ export function Component() {
         title="Collection"
         description={
           <>
-            Your animals, their molts and photos. Species names follow the <Anchor component={Link} to={paths.species.href()} inherit>catalogue</Anchor>.
+            Your animals, their molts and photos. Species names follow the{' '}
+            <Anchor component={Link} to={paths.species.href()} inherit>
+              catalogue
+            </Anchor>
+            .
           </>
         }
         actions={
@@ -132,7 +140,9 @@ export function Component() {
                   w={130}
                   size="md"
                 />
-                {pages > 1 && <Pagination total={pages} value={page} onChange={(p) => update({ offset: (p - 1) * filters.limit })} size="lg" siblings={phone ? 0 : 1} />}
+                {pages > 1 && (
+                  <Pagination total={pages} value={page} onChange={(p) => update({ offset: (p - 1) * filters.limit })} size="lg" siblings={phone ? 0 : 1} />
+                )}
               </Group>
             </Group>
           </Stack>

@@ -36,7 +36,13 @@ export function Component() {
           </Group>
         }
       />
-      {dashboard.isPending ? <PageLoader /> : dashboard.isError ? <Alert color="clay">{dashboard.error.message}</Alert> : <DashboardView data={dashboard.data} timeZone={me.timeZone} />}
+      {dashboard.isPending ? (
+        <PageLoader />
+      ) : dashboard.isError ? (
+        <Alert color="clay">{dashboard.error.message}</Alert>
+      ) : (
+        <DashboardView data={dashboard.data} timeZone={me.timeZone} />
+      )}
       <CalendarFeedCard />
     </Stack>
   );

@@ -9,10 +9,12 @@ import { projectQueries } from '@/features/projects/api/projects';
 import { sacQueries, useSac } from '@/features/sacs/api/sacs';
 import { IncubatorEntry } from '@/features/sacs/components/incubator-entry';
 
-export const clientLoader = (qc: QueryClient) => async ({ params }: LoaderFunctionArgs) => {
-  await qc.ensureQueryData(sacQueries.detail(params.sacId!));
-  return null;
-};
+export const clientLoader =
+  (qc: QueryClient) =>
+  async ({ params }: LoaderFunctionArgs) => {
+    await qc.ensureQueryData(sacQueries.detail(params.sacId!));
+    return null;
+  };
 
 /** Species cautions of the pair, in words, for the incubator screen. */
 function speciesCautions(project: ProjectResponse | undefined): string[] {
@@ -42,7 +44,13 @@ export function Component() {
           Full care log
         </Anchor>
       </Group>
-      <IncubatorEntry sac={sac.data} timeZone={me.timeZone} temperatureUnit={me.temperatureUnit} title={project.data?.title} speciesCautions={speciesCautions(project.data)} />
+      <IncubatorEntry
+        sac={sac.data}
+        timeZone={me.timeZone}
+        temperatureUnit={me.temperatureUnit}
+        title={project.data?.title}
+        speciesCautions={speciesCautions(project.data)}
+      />
     </>
   );
 }

@@ -9,10 +9,12 @@ import { projectQueries, useProject } from '@/features/projects/api/projects';
 import { AccountPanel } from '@/features/account/components/account-panel';
 
 /** A missing or foreign project throws its 404 into the route's error boundary. */
-export const clientLoader = (qc: QueryClient) => async ({ params }: LoaderFunctionArgs) => {
-  await qc.ensureQueryData(projectQueries.detail(params.projectId!));
-  return null;
-};
+export const clientLoader =
+  (qc: QueryClient) =>
+  async ({ params }: LoaderFunctionArgs) => {
+    await qc.ensureQueryData(projectQueries.detail(params.projectId!));
+    return null;
+  };
 
 /** The Account of one project, for its owner and partners. */
 export function Component() {

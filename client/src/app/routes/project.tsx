@@ -20,11 +20,12 @@ import { CalendarFeedCard } from '@/features/dashboard/components/calendar-feed-
 import { SectionCard } from '@/components/ui/section-card';
 
 /** A missing or foreign project throws its 404 into the route's error boundary. */
-export const clientLoader = (qc: QueryClient) => async ({ params }: LoaderFunctionArgs) => {
-  await qc.ensureQueryData(projectQueries.detail(params.projectId!));
-  return null;
-};
-
+export const clientLoader =
+  (qc: QueryClient) =>
+  async ({ params }: LoaderFunctionArgs) => {
+    await qc.ensureQueryData(projectQueries.detail(params.projectId!));
+    return null;
+  };
 
 export function Component() {
   const { projectId } = useParams() as { projectId: string };
@@ -65,7 +66,13 @@ export function Component() {
         <Grid.Col span={{ base: 12, md: 7 }}>
           <Stack>
             <SectionCard title="Sacs" testId="section-sacs">
-              <ProjectSacs projectId={p.id} timeZone={me.timeZone} canRecord={isOwner && live} sacHref={paths.sac.href} incubatorHref={paths.incubatorSac.href} />
+              <ProjectSacs
+                projectId={p.id}
+                timeZone={me.timeZone}
+                canRecord={isOwner && live}
+                sacHref={paths.sac.href}
+                incubatorHref={paths.incubatorSac.href}
+              />
             </SectionCard>
             <SectionCard title="Pairings" testId="section-pairings">
               <PairingsPanel projectId={p.id} timeZone={me.timeZone} canRecord={isOwner && live} />
@@ -84,7 +91,13 @@ export function Component() {
               <PartiesPanel projectId={p.id} members={p.members} myRole={p.myRole} timeZone={me.timeZone} />
             </SectionCard>
             <SectionCard title="Timeline" testId="section-timeline">
-              {activity.isError ? <Alert color="clay">{activity.error.message}</Alert> : activity.data ? <ActivityTimeline events={activity.data} timeZone={me.timeZone} /> : <Text c="dimmed">Loading…</Text>}
+              {activity.isError ? (
+                <Alert color="clay">{activity.error.message}</Alert>
+              ) : activity.data ? (
+                <ActivityTimeline events={activity.data} timeZone={me.timeZone} />
+              ) : (
+                <Text c="dimmed">Loading…</Text>
+              )}
             </SectionCard>
             <CalendarFeedCard />
             {p.notes && (

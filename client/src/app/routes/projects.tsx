@@ -46,7 +46,13 @@ export function Component() {
           </Button>
         }
       />
-      {projects.isPending ? <PageLoader /> : projects.isError ? <Alert color="clay">{projects.error.message}</Alert> : <ProjectTable projects={projects.data} projectHref={paths.project.href} nextDue={nextDueFrom(dashboard.data)} />}
+      {projects.isPending ? (
+        <PageLoader />
+      ) : projects.isError ? (
+        <Alert color="clay">{projects.error.message}</Alert>
+      ) : (
+        <ProjectTable projects={projects.data} projectHref={paths.project.href} nextDue={nextDueFrom(dashboard.data)} />
+      )}
     </>
   );
 }

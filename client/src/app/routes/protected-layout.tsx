@@ -7,14 +7,16 @@ import { useLogout } from '@/features/auth/api/session';
 import { NAV_ITEMS } from '../nav-items';
 
 /** Every signed-in page goes through here: no session, no page. */
-export const clientLoader = (qc: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  const me = await qc.ensureQueryData(meQuery());
-  if (!me) {
-    const url = new URL(request.url);
-    throw redirect(paths.signIn.href(url.pathname + url.search));
-  }
-  return null;
-};
+export const clientLoader =
+  (qc: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    const me = await qc.ensureQueryData(meQuery());
+    if (!me) {
+      const url = new URL(request.url);
+      throw redirect(paths.signIn.href(url.pathname + url.search));
+    }
+    return null;
+  };
 
 export function Component() {
   const { data: me } = useMe();

@@ -14,11 +14,12 @@ import { OpeningPanel } from '@/features/sacs/components/opening-panel';
 import { SacOverview } from '@/features/sacs/components/sac-overview';
 import { SectionCard } from '@/components/ui/section-card';
 
-export const clientLoader = (qc: QueryClient) => async ({ params }: LoaderFunctionArgs) => {
-  await qc.ensureQueryData(sacQueries.detail(params.sacId!));
-  return null;
-};
-
+export const clientLoader =
+  (qc: QueryClient) =>
+  async ({ params }: LoaderFunctionArgs) => {
+    await qc.ensureQueryData(sacQueries.detail(params.sacId!));
+    return null;
+  };
 
 export function Component() {
   const { sacId } = useParams() as { sacId: string };

@@ -4,7 +4,6 @@ import { SignInForm } from '@/features/auth/components/sign-in-form';
 import { safeNext } from './safe-next';
 import { paths } from '@/config/paths';
 
-
 export function Component() {
   const navigate = useNavigate();
   const [params] = useSearchParams();

@@ -40,7 +40,13 @@ export function AppLayout({ nav, userName, onSignOut, settingsHref, children }: 
             </Tooltip>
             <Menu position="bottom-end" withinPortal>
               <Menu.Target>
-                <Text component="button" fw={600} size="sm" data-testid="shell-user" style={{ background: 'none', border: 0, cursor: 'pointer', color: 'inherit' }}>
+                <Text
+                  component="button"
+                  fw={600}
+                  size="sm"
+                  data-testid="shell-user"
+                  style={{ background: 'none', border: 0, cursor: 'pointer', color: 'inherit' }}
+                >
                   {userName}
                 </Text>
               </Menu.Target>

@@ -12,48 +12,78 @@ export class CreateEntryDto implements CreateEntryRequest {
   @IsCalendarDate()
   date!: string;
 
-  @IsOptional() @IsUUID('all', { message: 'memberId must be the id of a party of this project.' })
+  @IsOptional()
+  @IsUUID('all', { message: 'memberId must be the id of a party of this project.' })
   memberId?: string;
 
-  @IsOptional() @IsUUID('all', { message: 'sacId must be the id of a sac of this project.' })
+  @IsOptional()
+  @IsUUID('all', { message: 'sacId must be the id of a sac of this project.' })
   sacId?: string;
 
-  @IsOptional() @IsInt({ message: 'count must be a whole number.' }) @Min(1, { message: 'count must be at least 1.' }) @Max(100_000)
+  @IsOptional()
+  @IsInt({ message: 'count must be a whole number.' })
+  @Min(1, { message: 'count must be at least 1.' })
+  @Max(100_000)
   count?: number;
 
-  @IsOptional() @IsIn(HAND_OVER_METHODS, { message: 'method must be pick-up or shipment.' })
+  @IsOptional()
+  @IsIn(HAND_OVER_METHODS, { message: 'method must be pick-up or shipment.' })
   method?: HandOverMethod;
 
-  @IsOptional() @IsString() @MinLength(1) @MaxLength(100)
+  @IsOptional()
+  @IsString()
+  @MinLength(1)
+  @MaxLength(100)
   carrier?: string;
 
-  @IsOptional() @IsString() @MinLength(1) @MaxLength(100)
+  @IsOptional()
+  @IsString()
+  @MinLength(1)
+  @MaxLength(100)
   tracking?: string;
 
-  @IsOptional() @IsInt({ message: 'priceMinor must be a whole number of minor units (cents).' }) @Min(0) @Max(MAX_MINOR)
+  @IsOptional()
+  @IsInt({ message: 'priceMinor must be a whole number of minor units (cents).' })
+  @Min(0)
+  @Max(MAX_MINOR)
   priceMinor?: number;
 
-  @IsOptional() @IsInt({ message: 'pricePerSpiderlingMinor must be a whole number of minor units (cents).' }) @Min(0) @Max(MAX_MINOR)
+  @IsOptional()
+  @IsInt({ message: 'pricePerSpiderlingMinor must be a whole number of minor units (cents).' })
+  @Min(0)
+  @Max(MAX_MINOR)
   pricePerSpiderlingMinor?: number;
 
-  @IsOptional() @IsUUID('all', { message: 'fromMemberId must be the id of a party of this project.' })
+  @IsOptional()
+  @IsUUID('all', { message: 'fromMemberId must be the id of a party of this project.' })
   fromMemberId?: string;
 
-  @IsOptional() @IsUUID('all', { message: 'toMemberId must be the id of a party of this project.' })
+  @IsOptional()
+  @IsUUID('all', { message: 'toMemberId must be the id of a party of this project.' })
   toMemberId?: string;
 
-  @IsOptional() @IsInt({ message: 'amountMinor must be a whole number of minor units (cents).' }) @Min(1, { message: 'amountMinor must be above 0.' }) @Max(MAX_MINOR)
+  @IsOptional()
+  @IsInt({ message: 'amountMinor must be a whole number of minor units (cents).' })
+  @Min(1, { message: 'amountMinor must be above 0.' })
+  @Max(MAX_MINOR)
   amountMinor?: number;
 
-  @IsOptional() @Matches(/^[A-Z]{3}$/, { message: 'currency must be an ISO 4217 code such as EUR.' })
+  @IsOptional()
+  @Matches(/^[A-Z]{3}$/, { message: 'currency must be an ISO 4217 code such as EUR.' })
   currency?: string;
 
-  @IsOptional() @IsUUID('all', { message: 'reversesId must be the id of an earlier entry.' })
+  @IsOptional()
+  @IsUUID('all', { message: 'reversesId must be the id of an earlier entry.' })
   reversesId?: string;
 
-  @IsOptional() @IsString() @MinLength(3, { message: 'reason must say in a few words why the entry is reversed.' }) @MaxLength(500)
+  @IsOptional()
+  @IsString()
+  @MinLength(3, { message: 'reason must say in a few words why the entry is reversed.' })
+  @MaxLength(500)
   reason?: string;
 
-  @IsOptional() @IsString() @MaxLength(1000)
+  @IsOptional()
+  @IsString()
+  @MaxLength(1000)
   note?: string;
 }

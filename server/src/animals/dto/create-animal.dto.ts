@@ -1,8 +1,17 @@
 import { Transform } from 'class-transformer';
 import { IsEmail, IsIn, IsInt, IsNotEmpty, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, ValidateIf } from 'class-validator';
 import {
-  ANIMAL_SEXES, ANIMAL_STATUSES, CUSTODIES, MATURITIES, OWNER_KINDS,
-  type AnimalSex, type AnimalStatus, type CreateAnimalRequest, type Custody, type Maturity, type OwnerKind,
+  ANIMAL_SEXES,
+  ANIMAL_STATUSES,
+  CUSTODIES,
+  MATURITIES,
+  OWNER_KINDS,
+  type AnimalSex,
+  type AnimalStatus,
+  type CreateAnimalRequest,
+  type Custody,
+  type Maturity,
+  type OwnerKind,
 } from '@broodsilk/shared';
 import { IsCalendarDate } from './is-calendar-date.validator';
 
@@ -30,13 +39,20 @@ export class CreateAnimalDto implements CreateAnimalRequest {
   @IsIn(MATURITIES, oneOf('maturity', MATURITIES))
   maturity?: Maturity;
 
-  @Transform(blankToNull) @ValidateIf(notNull) @IsCalendarDate({ message: 'The maturing date must be a date written YYYY-MM-DD.' })
+  @Transform(blankToNull)
+  @ValidateIf(notNull)
+  @IsCalendarDate({ message: 'The maturing date must be a date written YYYY-MM-DD.' })
   maturedOn?: string | null;
 
-  @Transform(blankToNull) @ValidateIf(notNull) @IsCalendarDate({ message: 'The acquisition date must be a date written YYYY-MM-DD.' })
+  @Transform(blankToNull)
+  @ValidateIf(notNull)
+  @IsCalendarDate({ message: 'The acquisition date must be a date written YYYY-MM-DD.' })
   acquiredOn?: string | null;
 
-  @Transform(blankToNull) @ValidateIf(notNull) @IsString() @MaxLength(200)
+  @Transform(blankToNull)
+  @ValidateIf(notNull)
+  @IsString()
+  @MaxLength(200)
   acquiredFrom?: string | null;
 
   @Transform(({ value }) => (value === '' ? null : typeof value === 'string' && /^-?\d+$/.test(value.trim()) ? Number(value) : value))
@@ -51,40 +67,64 @@ export class CreateAnimalDto implements CreateAnimalRequest {
   @Matches(/^[A-Z]{3}$/, { message: 'The currency is a three-letter ISO 4217 code such as EUR or USD.' })
   priceCurrency?: string | null;
 
-  @Transform(blankToNull) @ValidateIf(notNull)
+  @Transform(blankToNull)
+  @ValidateIf(notNull)
   @IsIn(OWNER_KINDS, oneOf('ownerKind', OWNER_KINDS))
   ownerKind?: OwnerKind;
 
   @Transform(({ value }) => (typeof value === 'string' ? (value.trim() === '' ? null : value.trim().toLowerCase()) : value))
-  @ValidateIf(notNull) @IsEmail({}, { message: 'The owner’s e-mail does not look like an e-mail address.' }) @MaxLength(200)
+  @ValidateIf(notNull)
+  @IsEmail({}, { message: 'The owner’s e-mail does not look like an e-mail address.' })
+  @MaxLength(200)
   ownerEmail?: string | null;
 
-  @Transform(blankToNull) @ValidateIf(notNull) @IsString() @MaxLength(120)
+  @Transform(blankToNull)
+  @ValidateIf(notNull)
+  @IsString()
+  @MaxLength(120)
   ownerName?: string | null;
 
-  @Transform(blankToNull) @ValidateIf(notNull)
+  @Transform(blankToNull)
+  @ValidateIf(notNull)
   @IsIn(CUSTODIES, oneOf('custody', CUSTODIES))
   custody?: Custody;
 
-  @Transform(blankToNull) @ValidateIf(notNull) @IsString() @MaxLength(120)
+  @Transform(blankToNull)
+  @ValidateIf(notNull)
+  @IsString()
+  @MaxLength(120)
   custodyParty?: string | null;
 
-  @Transform(blankToNull) @ValidateIf(notNull) @IsCalendarDate({ message: 'The due-back date must be a date written YYYY-MM-DD.' })
+  @Transform(blankToNull)
+  @ValidateIf(notNull)
+  @IsCalendarDate({ message: 'The due-back date must be a date written YYYY-MM-DD.' })
   dueBackOn?: string | null;
 
-  @Transform(blankToNull) @ValidateIf(notNull)
+  @Transform(blankToNull)
+  @ValidateIf(notNull)
   @IsIn(ANIMAL_STATUSES, oneOf('status', ANIMAL_STATUSES))
   status?: AnimalStatus;
 
-  @Transform(blankToNull) @ValidateIf(notNull) @IsCalendarDate({ message: 'The status date must be a date written YYYY-MM-DD.' })
+  @Transform(blankToNull)
+  @ValidateIf(notNull)
+  @IsCalendarDate({ message: 'The status date must be a date written YYYY-MM-DD.' })
   statusOn?: string | null;
 
-  @Transform(blankToNull) @ValidateIf(notNull) @IsString() @MaxLength(60)
+  @Transform(blankToNull)
+  @ValidateIf(notNull)
+  @IsString()
+  @MaxLength(60)
   enclosure?: string | null;
 
-  @Transform(blankToNull) @ValidateIf(notNull) @IsString() @MaxLength(4000)
+  @Transform(blankToNull)
+  @ValidateIf(notNull)
+  @IsString()
+  @MaxLength(4000)
   notes?: string | null;
 
-  @Transform(blankToNull) @ValidateIf(notNull) @IsString() @MaxLength(500)
+  @Transform(blankToNull)
+  @ValidateIf(notNull)
+  @IsString()
+  @MaxLength(500)
   premoltNote?: string | null;
 }

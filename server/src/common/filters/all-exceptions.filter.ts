@@ -58,7 +58,8 @@ export class AllExceptionsFilter implements ExceptionFilter {
     if (isExposedHttpError(exception)) {
       // http-errors from Express middleware (body parser, CSRF): their messages are written for clients.
       const status = exception.status;
-      const message = exception.type === 'entity.parse.failed' ? 'The request body is not valid JSON.' : status === 413 ? 'The request is too large.' : exception.message;
+      const message =
+        exception.type === 'entity.parse.failed' ? 'The request body is not valid JSON.' : status === 413 ? 'The request is too large.' : exception.message;
       return { statusCode: status, error: REASON[status] ?? 'Error', message };
     }
     return { statusCode: HttpStatus.INTERNAL_SERVER_ERROR, error: REASON[500], message: 'Something went wrong on our side. Please try again.' };

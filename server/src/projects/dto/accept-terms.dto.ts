@@ -7,7 +7,9 @@ export class AcceptTermsDto implements AcceptTermsRequest {
   @IsUUID('all', { message: 'memberId must name a party of the project.' })
   memberId?: string;
 
-  @IsOptional() @ValidateIf((_, v) => v !== null)
-  @IsString() @MaxLength(2000, { message: 'The note can be at most 2000 characters.' })
+  @IsOptional()
+  @ValidateIf((_, v) => v !== null)
+  @IsString()
+  @MaxLength(2000, { message: 'The note can be at most 2000 characters.' })
   note?: string | null;
 }

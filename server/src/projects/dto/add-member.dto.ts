@@ -7,7 +7,8 @@ export class AddMemberDto implements AddMemberRequest {
   @MaxLength(120, { message: 'The name can be at most 120 characters.' })
   name!: string;
 
-  @IsOptional() @ValidateIf((_, v) => v !== null)
+  @IsOptional()
+  @ValidateIf((_, v) => v !== null)
   @IsEmail({}, { message: 'The e-mail address does not look right.' })
   email?: string | null;
 

@@ -13,7 +13,9 @@ export class CreatePairingDto implements CreatePairingRequest {
   @IsIn(PAIRING_OUTCOMES, { message: `The outcome must be one of: ${PAIRING_OUTCOMES.join(', ')}.` })
   outcome!: PairingOutcome;
 
-  @IsOptional() @ValidateIf((_, v) => v !== null)
-  @IsString() @MaxLength(2000, { message: 'The notes can be at most 2000 characters.' })
+  @IsOptional()
+  @ValidateIf((_, v) => v !== null)
+  @IsString()
+  @MaxLength(2000, { message: 'The notes can be at most 2000 characters.' })
   notes?: string | null;
 }

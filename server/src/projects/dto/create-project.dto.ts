@@ -13,7 +13,8 @@ export class CreateProjectDto implements CreateProjectRequest {
   @IsUUID('all', { message: 'Choose the male from your collection.' })
   maleId!: string;
 
-  @IsOptional() @ValidateIf((_, v) => v !== null)
+  @IsOptional()
+  @ValidateIf((_, v) => v !== null)
   @IsString({ message: 'The notes must be text.' })
   @MaxLength(5000, { message: 'The notes can be at most 5000 characters.' })
   notes?: string | null;

@@ -5,7 +5,8 @@ export class EndProjectDto implements EndProjectRequest {
   @IsIn(ENDED_EARLY_REASONS, { message: `The reason must be one of: ${ENDED_EARLY_REASONS.join(', ')}.` })
   reason!: EndedEarlyReason;
 
-  @IsOptional() @ValidateIf((_, v) => v !== null)
+  @IsOptional()
+  @ValidateIf((_, v) => v !== null)
   @IsString({ message: 'The note must be text.' })
   @MaxLength(2000, { message: 'The note can be at most 2000 characters.' })
   note?: string | null;

@@ -1,8 +1,14 @@
 import { Type } from 'class-transformer';
 import { ArrayMinSize, IsArray, IsIn, IsInt, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, ValidateIf, ValidateNested } from 'class-validator';
 import {
-  BROOD_STAGES, FAILURE_CLAUSES, SHIPPING_PAYERS,
-  type BroodStage, type FailureClause, type ProposeTermsRequest, type ShippingPayer, type TermsLineInput,
+  BROOD_STAGES,
+  FAILURE_CLAUSES,
+  SHIPPING_PAYERS,
+  type BroodStage,
+  type FailureClause,
+  type ProposeTermsRequest,
+  type ShippingPayer,
+  type TermsLineInput,
 } from '@broodsilk/shared';
 
 export class TermsLineDto implements TermsLineInput {
@@ -14,7 +20,8 @@ export class TermsLineDto implements TermsLineInput {
   @Max(1_000_000, { message: 'A weight can be at most 1,000,000.' })
   weight!: number;
 
-  @IsOptional() @ValidateIf((_, v) => v !== null)
+  @IsOptional()
+  @ValidateIf((_, v) => v !== null)
   @IsInt({ message: 'A fixed count must be a whole number of young.' })
   @Min(0, { message: 'A fixed count cannot be negative.' })
   @Max(100_000, { message: 'A fixed count can be at most 100,000.' })
@@ -52,7 +59,9 @@ export class ProposeTermsDto implements ProposeTermsRequest {
   @IsIn(SHIPPING_PAYERS, { message: `Who pays shipping must be one of: ${SHIPPING_PAYERS.join(', ')}.` })
   shippingPaidBy!: ShippingPayer;
 
-  @IsOptional() @ValidateIf((_, v) => v !== null)
-  @IsString() @MaxLength(2000, { message: 'The note can be at most 2000 characters.' })
+  @IsOptional()
+  @ValidateIf((_, v) => v !== null)
+  @IsString()
+  @MaxLength(2000, { message: 'The note can be at most 2000 characters.' })
   note?: string | null;
 }

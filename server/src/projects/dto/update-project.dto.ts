@@ -9,7 +9,8 @@ export class UpdateProjectDto implements UpdateProjectRequest {
   @MaxLength(120, { message: 'The title can be at most 120 characters.' })
   title?: string;
 
-  @IsOptional() @ValidateIf((_, v) => v !== null)
+  @IsOptional()
+  @ValidateIf((_, v) => v !== null)
   @IsString({ message: 'The notes must be text.' })
   @MaxLength(5000, { message: 'The notes can be at most 5000 characters.' })
   notes?: string | null;

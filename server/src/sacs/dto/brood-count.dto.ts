@@ -4,7 +4,8 @@ import { IsInstant } from './is-instant.validator';
 import { IsCount } from './opening.dto';
 
 export class BroodCountDto implements BroodCountRequest {
-  @IsOptional() @IsInstant({ message: 'The time of the count must be a date and time with its offset, e.g. 2026-03-08T07:30:00Z.' })
+  @IsOptional()
+  @IsInstant({ message: 'The time of the count must be a date and time with its offset, e.g. 2026-03-08T07:30:00Z.' })
   at?: string;
 
   @IsIn(BROOD_STAGES, { message: `The stage must be one of: ${BROOD_STAGES.join(', ')}.` })
@@ -14,9 +15,13 @@ export class BroodCountDto implements BroodCountRequest {
 
   @IsOptional() @IsCount('young lost') lost?: number;
 
-  @IsOptional() @IsIn(BROOD_LOSS_REASONS, { message: `The loss reason must be one of: ${BROOD_LOSS_REASONS.join(', ')}.` })
+  @IsOptional()
+  @IsIn(BROOD_LOSS_REASONS, { message: `The loss reason must be one of: ${BROOD_LOSS_REASONS.join(', ')}.` })
   lossReason?: BroodLossReason;
 
-  @IsOptional() @ValidateIf((_, v) => v !== null) @IsString() @MaxLength(2000)
+  @IsOptional()
+  @ValidateIf((_, v) => v !== null)
+  @IsString()
+  @MaxLength(2000)
   note?: string | null;
 }

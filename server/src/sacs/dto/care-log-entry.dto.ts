@@ -1,6 +1,14 @@
 import { Type } from 'class-transformer';
 import { IsDefined, IsIn, IsNumber, IsOptional, IsString, IsUUID, MaxLength, ValidateNested } from 'class-validator';
-import { BROOD_STAGES, CARE_LOG_KINDS, TEMPERATURE_UNITS, type BroodStage, type CareLogKind, type CareLogRequest, type TemperatureUnit } from '@broodsilk/shared';
+import {
+  BROOD_STAGES,
+  CARE_LOG_KINDS,
+  TEMPERATURE_UNITS,
+  type BroodStage,
+  type CareLogKind,
+  type CareLogRequest,
+  type TemperatureUnit,
+} from '@broodsilk/shared';
 import { IsInstant } from './is-instant.validator';
 
 export class TemperatureReadingDto {
@@ -16,24 +24,34 @@ export class CareLogEntryDto implements CareLogRequest {
   @IsIn(CARE_LOG_KINDS, { message: `The kind of entry must be one of: ${CARE_LOG_KINDS.join(', ')}.` })
   kind!: CareLogKind;
 
-  @IsOptional() @IsInstant({ message: 'The time of the entry must be a date and time with its offset, e.g. 2026-03-08T07:30:00Z.' })
+  @IsOptional()
+  @IsInstant({ message: 'The time of the entry must be a date and time with its offset, e.g. 2026-03-08T07:30:00Z.' })
   at?: string;
 
-  @IsOptional() @ValidateNested() @Type(() => TemperatureReadingDto)
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => TemperatureReadingDto)
   temperature?: TemperatureReadingDto;
 
-  @IsOptional() @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'The humidity must be a number of percent, e.g. 75.' })
+  @IsOptional()
+  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'The humidity must be a number of percent, e.g. 75.' })
   humidityPercent?: number;
 
-  @IsOptional() @IsIn(BROOD_STAGES, { message: `The stage must be one of: ${BROOD_STAGES.join(', ')}.` })
+  @IsOptional()
+  @IsIn(BROOD_STAGES, { message: `The stage must be one of: ${BROOD_STAGES.join(', ')}.` })
   stage?: BroodStage;
 
-  @IsOptional() @IsString() @MaxLength(2000, { message: 'Keep the text under 2000 characters.' })
+  @IsOptional()
+  @IsString()
+  @MaxLength(2000, { message: 'Keep the text under 2000 characters.' })
   text?: string;
 
-  @IsOptional() @IsUUID('all', { message: 'strikes must be the id of the entry to strike.' })
+  @IsOptional()
+  @IsUUID('all', { message: 'strikes must be the id of the entry to strike.' })
   strikes?: string;
 
-  @IsOptional() @IsString() @MaxLength(500, { message: 'Keep the reason under 500 characters.' })
+  @IsOptional()
+  @IsString()
+  @MaxLength(500, { message: 'Keep the reason under 500 characters.' })
   reason?: string;
 }

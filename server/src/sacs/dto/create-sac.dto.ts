@@ -9,16 +9,23 @@ export class CreateSacDto implements CreateSacRequest {
   @IsCalendarDate({ message: 'The lay date must be a date written YYYY-MM-DD.' })
   layDate!: string;
 
-  @IsOptional() @ValidateIf((_, v) => v !== null)
+  @IsOptional()
+  @ValidateIf((_, v) => v !== null)
   @IsInstant({ message: 'The pull time must be a date and time with its offset, e.g. 2026-03-08T07:30:00Z.' })
   pulledAt?: string | null;
 
-  @IsOptional() @ValidateIf((_, v) => v !== null)
-  @IsInt(dayRule('first pull day')) @Min(0, dayRule('first pull day')) @Max(PULL_DAY_MAX, dayRule('first pull day'))
+  @IsOptional()
+  @ValidateIf((_, v) => v !== null)
+  @IsInt(dayRule('first pull day'))
+  @Min(0, dayRule('first pull day'))
+  @Max(PULL_DAY_MAX, dayRule('first pull day'))
   pullFromDay?: number | null;
 
-  @IsOptional() @ValidateIf((_, v) => v !== null)
-  @IsInt(dayRule('last pull day')) @Min(0, dayRule('last pull day')) @Max(PULL_DAY_MAX, dayRule('last pull day'))
+  @IsOptional()
+  @ValidateIf((_, v) => v !== null)
+  @IsInt(dayRule('last pull day'))
+  @Min(0, dayRule('last pull day'))
+  @Max(PULL_DAY_MAX, dayRule('last pull day'))
   pullToDay?: number | null;
 
   @IsOptional()
@@ -27,9 +34,13 @@ export class CreateSacDto implements CreateSacRequest {
   @Max(ROLL_INTERVAL_LIMITS.maxHours, { message: `The roll interval cannot be more than ${ROLL_INTERVAL_LIMITS.maxHours} hours.` })
   rollIntervalHours?: number;
 
-  @IsOptional() @IsBoolean({ message: 'rollingOff must be true or false.' })
+  @IsOptional()
+  @IsBoolean({ message: 'rollingOff must be true or false.' })
   rollingOff?: boolean;
 
-  @IsOptional() @ValidateIf((_, v) => v !== null) @IsString() @MaxLength(2000)
+  @IsOptional()
+  @ValidateIf((_, v) => v !== null)
+  @IsString()
+  @MaxLength(2000)
   notes?: string | null;
 }

@@ -13,7 +13,8 @@ export function IsCount(what: string): PropertyDecorator {
 }
 
 export class OpeningDto implements OpeningRequest {
-  @IsOptional() @IsInstant({ message: 'The opening time must be a date and time with its offset, e.g. 2026-03-08T07:30:00Z.' })
+  @IsOptional()
+  @IsInstant({ message: 'The opening time must be a date and time with its offset, e.g. 2026-03-08T07:30:00Z.' })
   openedAt?: string;
 
   @IsCount('healthy eggs') healthyEggs!: number;
@@ -23,6 +24,9 @@ export class OpeningDto implements OpeningRequest {
   @IsCount('spoiled eggs') spoiledEggs!: number;
   @IsCount('kept-back young') keptBack!: number;
 
-  @IsOptional() @ValidateIf((_, v) => v !== null) @IsString() @MaxLength(2000)
+  @IsOptional()
+  @ValidateIf((_, v) => v !== null)
+  @IsString()
+  @MaxLength(2000)
   notes?: string | null;
 }

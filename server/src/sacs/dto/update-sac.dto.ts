@@ -11,7 +11,8 @@ export class UpdateSacDto extends CreateSacDto implements UpdateSacRequest {
   @IsIn(SAC_OUTCOMES, { message: `The outcome must be one of: ${SAC_OUTCOMES.join(', ')}.` })
   outcome?: SacOutcomeState;
 
-  @IsOptional() @ValidateIf((_, v) => v !== null)
+  @IsOptional()
+  @ValidateIf((_, v) => v !== null)
   @IsIn(SAC_FAILURE_REASONS, { message: `The failure reason must be one of: ${SAC_FAILURE_REASONS.join(', ')}.` })
   failureReason?: SacFailureReason | null;
 }

@@ -28,7 +28,11 @@ function sourcedValues(r: SpeciesDataRow): [string, Sourced<unknown> | { source:
 describe('species dataset', () => {
   it('holds at least 40 species across all five groups', () => {
     expect(SPECIES_DATA.length).toBeGreaterThanOrEqual(40);
-    for (const g of SPECIES_GROUPS) expect(SPECIES_DATA.some((r) => r.group === g), g).toBe(true);
+    for (const g of SPECIES_GROUPS)
+      expect(
+        SPECIES_DATA.some((r) => r.group === g),
+        g,
+      ).toBe(true);
     // New World and Old World both present (PRODUCT.md: commonly bred species of both)
     expect(SPECIES_DATA.filter((r) => r.group.startsWith('ow')).length).toBeGreaterThanOrEqual(10);
   });

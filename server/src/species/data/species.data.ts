@@ -94,24 +94,39 @@ const cramps = (source: ValueSource = SRC.haukeHerzig2020): Options => ({ medica
 
 export const SPECIES_DATA: SpeciesDataRow[] = [
   // New World terrestrial
-  sp('Tliltocatl vagans', '(Ausserer, 1875)', 'nw-terrestrial', tlil({
-    formerNames: ['Eurypelma vagans', 'Brachypelma vagans', 'Euathlus vagans'],
-    eggsPerSac: range(200, 200, SRC.dorHenaut2012),
-  })),
-  sp('Tliltocatl albopilosus', '(Valerio, 1980)', 'nw-terrestrial', tlil({
-    formerNames: ['Brachypelma albopilosum'],
-    eggsPerSac: range(300, 1000, memo('Tliltocatl albopilosus range')),
-    matureMaleLifespanMonths: range(6, 12, { ...SRC.arachnofolies, note: 'upper bound from the source; lower bound from memory' } as ValueSource),
-  })),
+  sp(
+    'Tliltocatl vagans',
+    '(Ausserer, 1875)',
+    'nw-terrestrial',
+    tlil({
+      formerNames: ['Eurypelma vagans', 'Brachypelma vagans', 'Euathlus vagans'],
+      eggsPerSac: range(200, 200, SRC.dorHenaut2012),
+    }),
+  ),
+  sp(
+    'Tliltocatl albopilosus',
+    '(Valerio, 1980)',
+    'nw-terrestrial',
+    tlil({
+      formerNames: ['Brachypelma albopilosum'],
+      eggsPerSac: range(300, 1000, memo('Tliltocatl albopilosus range')),
+      matureMaleLifespanMonths: range(6, 12, { ...SRC.arachnofolies, note: 'upper bound from the source; lower bound from memory' } as ValueSource),
+    }),
+  ),
   sp('Tliltocatl kahlenbergi', '(Rudloff, 2008)', 'nw-terrestrial', tlil({ formerNames: ['Brachypelma kahlenbergi'] })),
   sp('Tliltocatl sabulosus', '(F. O. Pickard-Cambridge, 1897)', 'nw-terrestrial', tlil({ formerNames: ['Brachypelma sabulosum'] })),
   sp('Tliltocatl schroederi', '(Rudloff, 2003)', 'nw-terrestrial', tlil({ formerNames: ['Brachypelma schroederi'] })),
   sp('Tliltocatl verdezi', '(Schmidt, 2003)', 'nw-terrestrial', tlil({ formerNames: ['Brachypelma verdezi'] })),
   sp('Tliltocatl epicureanus', '(Chamberlin, 1925)', 'nw-terrestrial', tlil({ formerNames: ['Brachypelma epicureanum'] })),
-  sp('Brachypelma smithi', '(F. O. Pickard-Cambridge, 1897)', 'nw-terrestrial', brachy({
-    formerNames: ['Eurypelma smithi'],
-    eggsPerSac: range(100, 600, { ...SRC.brachypelmaSmithiDe, note: 'up to 600 for B. smithi; lower bound is the genus range' } as ValueSource),
-  })),
+  sp(
+    'Brachypelma smithi',
+    '(F. O. Pickard-Cambridge, 1897)',
+    'nw-terrestrial',
+    brachy({
+      formerNames: ['Eurypelma smithi'],
+      eggsPerSac: range(100, 600, { ...SRC.brachypelmaSmithiDe, note: 'up to 600 for B. smithi; lower bound is the genus range' } as ValueSource),
+    }),
+  ),
   sp('Brachypelma hamorii', 'Tesmoingt, Cleton & Verdez, 1997', 'nw-terrestrial', brachy({ formerNames: ['Brachypelma annitha'] })),
   sp('Brachypelma auratum', 'Schmidt, 1992', 'nw-terrestrial', brachy()),
   sp('Brachypelma boehmei', 'Schmidt & Klaas, 1993', 'nw-terrestrial', brachy()),
@@ -119,21 +134,36 @@ export const SPECIES_DATA: SpeciesDataRow[] = [
   sp('Brachypelma albiceps', 'Pocock, 1903', 'nw-terrestrial', brachy({ formerNames: ['Brachypelma ruhnaui', 'Aphonopelma albiceps'] })),
   sp('Brachypelma klaasi', '(Schmidt & Krause, 1994)', 'nw-terrestrial', brachy()),
   sp('Brachypelma baumgarteni', 'Smith, 1993', 'nw-terrestrial', brachy()),
-  sp('Grammostola rosea', '(Walckenaer, 1837)', 'nw-terrestrial', grammo({
-    formerNames: ['Mygale rosea', 'Phrixotrichus roseus', 'Grammostola spatulata', 'Grammostola cala'],
-    urticatingHairs: { value: true, source: SRC.carrim2010 },
-    eggsPerSac: range(80, 1000, SRC.mommajorje2010),
-    pairingToSacDays: range(120, 400, memo('G. rosea sometimes lays more than 12 months after pairing')),
-  })),
+  sp(
+    'Grammostola rosea',
+    '(Walckenaer, 1837)',
+    'nw-terrestrial',
+    grammo({
+      formerNames: ['Mygale rosea', 'Phrixotrichus roseus', 'Grammostola spatulata', 'Grammostola cala'],
+      urticatingHairs: { value: true, source: SRC.carrim2010 },
+      eggsPerSac: range(80, 1000, SRC.mommajorje2010),
+      pairingToSacDays: range(120, 400, memo('G. rosea sometimes lays more than 12 months after pairing')),
+    }),
+  ),
   sp('Grammostola porteri', '(Mello-Leitão, 1936)', 'nw-terrestrial', grammo()),
-  sp('Grammostola pulchripes', '(Simon, 1891)', 'nw-terrestrial', grammo({
-    formerNames: ['Grammostola aureostriata'],
-    eggsPerSac: range(400, 1000, memo('Grammostola pulchripes range')),
-  })),
+  sp(
+    'Grammostola pulchripes',
+    '(Simon, 1891)',
+    'nw-terrestrial',
+    grammo({
+      formerNames: ['Grammostola aureostriata'],
+      eggsPerSac: range(400, 1000, memo('Grammostola pulchripes range')),
+    }),
+  ),
   sp('Grammostola pulchra', 'Mello-Leitão, 1921', 'nw-terrestrial', grammo()),
-  sp('Grammostola mollicoma', '(Ausserer, 1875)', 'nw-terrestrial', grammo({
-    eggsPerSac: range(150, 250, { ...SRC.arachnoworld, note: 'about 200; the span around it is ours' } as ValueSource),
-  })),
+  sp(
+    'Grammostola mollicoma',
+    '(Ausserer, 1875)',
+    'nw-terrestrial',
+    grammo({
+      eggsPerSac: range(150, 250, { ...SRC.arachnoworld, note: 'about 200; the span around it is ours' } as ValueSource),
+    }),
+  ),
   sp('Lasiodora parahybana', 'Mello-Leitão, 1917', 'nw-terrestrial', {
     pullWindow: pull(25, 35, 'Lasiodora'),
     eggsPerSac: range(1000, 2000, { ...SRC.lasiodoraZoo, note: 'upper bound from the source; lower bound from memory' } as ValueSource),
@@ -170,18 +200,33 @@ export const SPECIES_DATA: SpeciesDataRow[] = [
   sp('Phormictopus cancerides', '(Latreille, 1806)', 'nw-terrestrial'),
 
   // New World arboreal
-  sp('Caribena versicolor', '(Walckenaer, 1837)', 'nw-arboreal', aviculariine({
-    formerNames: ['Avicularia versicolor', 'Mygale versicolor'],
-    nameSource: SRC.fukushimaBertani2017,
-    eggsPerSac: range(50, 150, memo('Caribena versicolor range')),
-  })),
+  sp(
+    'Caribena versicolor',
+    '(Walckenaer, 1837)',
+    'nw-arboreal',
+    aviculariine({
+      formerNames: ['Avicularia versicolor', 'Mygale versicolor'],
+      nameSource: SRC.fukushimaBertani2017,
+      eggsPerSac: range(50, 150, memo('Caribena versicolor range')),
+    }),
+  ),
   sp('Caribena laeta', '(C. L. Koch, 1842)', 'nw-arboreal', aviculariine({ formerNames: ['Avicularia laeta'], nameSource: SRC.fukushimaBertani2017 })),
   sp('Avicularia avicularia', '(Linnaeus, 1758)', 'nw-arboreal', aviculariine({ formerNames: ['Aranea avicularia', 'Avicularia metallica'] })),
   sp('Avicularia purpurea', 'Kirk, 1990', 'nw-arboreal', aviculariine()),
-  sp('Ybyrapora diversipes', '(C. L. Koch, 1842)', 'nw-arboreal', aviculariine({ formerNames: ['Avicularia diversipes'], nameSource: SRC.fukushimaBertani2017 })),
-  sp('Psalmopoeus irminia', 'Saager, 1994', 'nw-arboreal', psalmo({
-    matureMaleLifespanMonths: range(2, 6, memo('German Wikipedia: males live only weeks to months after maturing')),
-  })),
+  sp(
+    'Ybyrapora diversipes',
+    '(C. L. Koch, 1842)',
+    'nw-arboreal',
+    aviculariine({ formerNames: ['Avicularia diversipes'], nameSource: SRC.fukushimaBertani2017 }),
+  ),
+  sp(
+    'Psalmopoeus irminia',
+    'Saager, 1994',
+    'nw-arboreal',
+    psalmo({
+      matureMaleLifespanMonths: range(2, 6, memo('German Wikipedia: males live only weeks to months after maturing')),
+    }),
+  ),
   sp('Psalmopoeus cambridgei', 'Pocock, 1895', 'nw-arboreal', psalmo()),
 
   // Old World terrestrial
@@ -210,10 +255,17 @@ export const SPECIES_DATA: SpeciesDataRow[] = [
   // Fossorial
   sp('Pelinobius muticus', 'Karsch, 1885', 'fossorial', {
     formerNames: ['Citharischius crawshayi'],
-    eggsPerSac: range(1000, 2000, { ...SRC.tarantulaspiderNet, note: 'more than 1000 per the source; 2000 is the family-wide maximum (vogelspinnen-seite.de)' } as ValueSource),
+    eggsPerSac: range(1000, 2000, {
+      ...SRC.tarantulaspiderNet,
+      note: 'more than 1000 per the source; 2000 is the family-wide maximum (vogelspinnen-seite.de)',
+    } as ValueSource),
   }),
   sp('Cyriopagopus lividus', '(Smith, 1996)', 'fossorial', { formerNames: ['Haplopelma lividum'] }),
   sp('Idiothele mira', 'Gallon, 2010', 'fossorial', cramps()),
-  sp('Ephebopus murinus', '(Walckenaer, 1837)', 'fossorial', { urticatingHairs: { value: true, source: memo('Ephebopus carries urticating hairs on the palps') } }),
-  sp('Ephebopus cyanognathus', 'West & Marshall, 2000', 'fossorial', { urticatingHairs: { value: true, source: memo('Ephebopus carries urticating hairs on the palps') } }),
+  sp('Ephebopus murinus', '(Walckenaer, 1837)', 'fossorial', {
+    urticatingHairs: { value: true, source: memo('Ephebopus carries urticating hairs on the palps') },
+  }),
+  sp('Ephebopus cyanognathus', 'West & Marshall, 2000', 'fossorial', {
+    urticatingHairs: { value: true, source: memo('Ephebopus carries urticating hairs on the palps') },
+  }),
 ];

@@ -15,23 +15,36 @@ function Count(max: number): PropertyDecorator {
 }
 
 export class UpdateSpeciesDto implements UpdateSpeciesRequest {
-  @IsOptional() @IsArray() @ArrayMaxSize(20) @IsString({ each: true }) @MaxLength(120, { each: true })
+  @IsOptional()
+  @IsArray()
+  @ArrayMaxSize(20)
+  @IsString({ each: true })
+  @MaxLength(120, { each: true })
   commonNames?: string[];
 
-  @IsOptional() @IsArray() @ArrayMaxSize(20) @IsString({ each: true }) @MaxLength(120, { each: true })
+  @IsOptional()
+  @IsArray()
+  @ArrayMaxSize(20)
+  @IsString({ each: true })
+  @MaxLength(120, { each: true })
   formerNames?: string[];
 
   @IsOptional()
   @IsIn(SPECIES_GROUPS, { message: `group must be one of ${SPECIES_GROUPS.join(', ')}.` })
   group?: SpeciesGroup;
 
-  @IsOptional() @IsBoolean()
+  @IsOptional()
+  @IsBoolean()
   urticatingHairs?: boolean;
 
-  @IsOptional() @IsBoolean()
+  @IsOptional()
+  @IsBoolean()
   medicallySignificantVenom?: boolean;
 
-  @IsOptional() @ValidateIf((_, v) => v !== null) @IsString() @MaxLength(120)
+  @IsOptional()
+  @ValidateIf((_, v) => v !== null)
+  @IsString()
+  @MaxLength(120)
   tradeListing?: string | null;
 
   @Count(365) pullFromDay?: number | null;
@@ -47,6 +60,9 @@ export class UpdateSpeciesDto implements UpdateSpeciesRequest {
   @IsIn(SOURCE_KINDS, { message: 'sourceKind must be published, common-practice or memory.' })
   sourceKind?: ValueSource['kind'];
 
-  @IsOptional() @IsString() @IsNotEmpty() @MaxLength(500)
+  @IsOptional()
+  @IsString()
+  @IsNotEmpty()
+  @MaxLength(500)
   sourceCitation?: string;
 }

@@ -11,14 +11,26 @@ const allowed = (a: Actor) => a === 'owner' || a === 'partner';
 /** A fresh project whose account can take entries: terms in force (owner 2, partner 1) and a counted sac of 30. */
 async function accountReady(fx: MatrixFixture): Promise<MatrixProject> {
   const p = await fx.freshProject();
-  const terms = await api(fx).post(`/api/projects/${p.id}/terms`).set('Authorization', fx.users.owner.bearer).send({
-    lines: [{ memberId: p.memberIds.owner, weight: 2, pickOrder: 1 }, { memberId: p.memberIds.partner, weight: 1, pickOrder: 2 }],
-    pricePerSpiderlingMinor: 800, currency: 'EUR', failureClause: 'nothing-owed', shippingPaidBy: 'recipient',
-  });
+  const terms = await api(fx)
+    .post(`/api/projects/${p.id}/terms`)
+    .set('Authorization', fx.users.owner.bearer)
+    .send({
+      lines: [
+        { memberId: p.memberIds.owner, weight: 2, pickOrder: 1 },
+        { memberId: p.memberIds.partner, weight: 1, pickOrder: 2 },
+      ],
+      pricePerSpiderlingMinor: 800,
+      currency: 'EUR',
+      failureClause: 'nothing-owed',
+      shippingPaidBy: 'recipient',
+    });
   if (terms.status !== 201) throw new Error(`propose terms answered ${terms.status}: ${JSON.stringify(terms.body)}`);
   const accepted = await api(fx).post(`/api/projects/${p.id}/terms/${terms.body.number}/accept`).set('Authorization', fx.users.partner.bearer).send({});
   if (accepted.status >= 300) throw new Error(`accept terms answered ${accepted.status}: ${JSON.stringify(accepted.body)}`);
-  const sac = await api(fx).post(`/api/projects/${p.id}/sacs`).set('Authorization', fx.users.owner.bearer).send({ layDate: addDays(todayIn('UTC', new Date()), -60) });
+  const sac = await api(fx)
+    .post(`/api/projects/${p.id}/sacs`)
+    .set('Authorization', fx.users.owner.bearer)
+    .send({ layDate: addDays(todayIn('UTC', new Date()), -60) });
   if (sac.status !== 201) throw new Error(`create sac answered ${sac.status}: ${JSON.stringify(sac.body)}`);
   const em = fx.orm.em.fork();
   const s = await em.findOneOrFail(Sac, sac.body.id);
@@ -45,28 +57,47 @@ export const rows: MatrixRow[] = [
   { method: 'GET', path: '/api/projects/:projectId/entries', expect: OWNER_AND_PARTNER },
   { method: 'GET', path: '/api/projects/:projectId/entries/hand-over-form', expect: OWNER_AND_PARTNER },
   {
-    method: 'POST', path: '/api/projects/:projectId/entries', expect: OWNER_AND_PARTNER,
+    method: 'POST',
+    path: '/api/projects/:projectId/entries',
+    expect: OWNER_AND_PARTNER,
     // The owner hands one young over; the partner records a payment he made to the owner.
     request: async (fx, actor): Promise<MatrixRequest> => {
       if (!allowed(actor)) return { body: { kind: 'hand-over', date: today(), memberId: fx.project.memberIds.partner, count: 1, method: 'pick-up' } };
       const p = await accountReady(fx);
-      const body = actor === 'owner'
-        ? { kind: 'hand-over', date: today(), memberId: p.memberIds.partner, count: 1, method: 'pick-up' }
-        : { kind: 'money', date: today(), fromMemberId: p.memberIds.partner, toMemberId: p.memberIds.owner, amountMinor: 100 };
+      const body =
+        actor === 'owner'
+          ? { kind: 'hand-over', date: today(), memberId: p.memberIds.partner, count: 1, method: 'pick-up' }
+          : { kind: 'money', date: today(), fromMemberId: p.memberIds.partner, toMemberId: p.memberIds.owner, amountMinor: 100 };
       return { params: { projectId: p.id }, body };
     },
   },
   {
-    method: 'POST', path: '/api/projects/:projectId/entries/:entryId/confirm', expect: OWNER_AND_PARTNER,
+    method: 'POST',
+    path: '/api/projects/:projectId/entries/:entryId/confirm',
+    expect: OWNER_AND_PARTNER,
     // The partner confirms a hand-over he received; the owner confirms a payment the partner recorded.
     request: async (fx, actor): Promise<MatrixRequest> => {
       if (!allowed(actor)) return { params: { entryId: NOBODY }, body: {} };
       const p = await accountReady(fx);
       if (actor === 'partner') {
-        const id = await entry(fx, p, 'owner', { kind: 'hand-over', date: today(), memberId: p.memberIds.partner, count: 2, method: 'shipment', carrier: 'Courier', tracking: 'RM-1' });
+        const id = await entry(fx, p, 'owner', {
+          kind: 'hand-over',
+          date: today(),
+          memberId: p.memberIds.partner,
+          count: 2,
+          method: 'shipment',
+          carrier: 'Courier',
+          tracking: 'RM-1',
+        });
         return { params: { projectId: p.id, entryId: id }, body: { arrivedAlive: 2, arrivedDead: 0 } };
       }
-      const id = await entry(fx, p, 'partner', { kind: 'money', date: today(), fromMemberId: p.memberIds.partner, toMemberId: p.memberIds.owner, amountMinor: 100 });
+      const id = await entry(fx, p, 'partner', {
+        kind: 'money',
+        date: today(),
+        fromMemberId: p.memberIds.partner,
+        toMemberId: p.memberIds.owner,
+        amountMinor: 100,
+      });
       return { params: { projectId: p.id, entryId: id }, body: {} };
     },
   },
@@ -75,7 +106,9 @@ export const rows: MatrixRow[] = [
   { method: 'GET', path: '/api/projects/:projectId/statements/:memberId.pdf', expect: OWNER_AND_PARTNER, request: partnerStatement },
   { method: 'POST', path: '/api/projects/:projectId/statements/:memberId/email', expect: OWNER_AND_PARTNER, request: partnerStatement },
   {
-    method: 'POST', path: '/api/projects/:projectId/settlements/checkout', expect: PAST_THE_GUARD,
+    method: 'POST',
+    path: '/api/projects/:projectId/settlements/checkout',
+    expect: PAST_THE_GUARD,
     request: (fx, actor) => ({ body: { toMemberId: actor === 'owner' ? fx.project.memberIds.partner : fx.project.memberIds.owner, amountMinor: 100 } }),
   },
 ];

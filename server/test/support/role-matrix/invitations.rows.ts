@@ -10,8 +10,13 @@ async function invitation(fx: MatrixFixture, projectId: string): Promise<string>
   const em = fx.orm.em.fork();
   const { token, hash } = newInvitationToken();
   em.create(Invitation, {
-    project: projectId, email: `matrix-invitee-${Date.now()}-${(n += 1)}@example.test`, role: 'caretaker', member: null, tokenHash: hash,
-    invitedBy: em.getReference(User, fx.users.owner.user.id), expiresAt: new Date(Date.now() + 86_400_000),
+    project: projectId,
+    email: `matrix-invitee-${Date.now()}-${(n += 1)}@example.test`,
+    role: 'caretaker',
+    member: null,
+    tokenHash: hash,
+    invitedBy: em.getReference(User, fx.users.owner.user.id),
+    expiresAt: new Date(Date.now() + 86_400_000),
   });
   await em.flush();
   return token;
@@ -19,17 +24,21 @@ async function invitation(fx: MatrixFixture, projectId: string): Promise<string>
 
 export const rows: MatrixRow[] = [
   {
-    method: 'POST', path: '/api/projects/:projectId/invitations', expect: OWNER_ONLY,
+    method: 'POST',
+    path: '/api/projects/:projectId/invitations',
+    expect: OWNER_ONLY,
     request: () => ({ body: { email: `matrix-${Date.now()}-${(n += 1)}@example.test`, role: 'caretaker' } }),
   },
   {
-    method: 'GET', path: '/api/invitations/:token',
+    method: 'GET',
+    path: '/api/invitations/:token',
     // Public: the page shows what the link is before anybody signs in.
     expect: { anonymous: '2xx', stranger: '2xx', caretaker: '2xx', partner: '2xx', owner: '2xx' },
     request: async (fx) => ({ params: { token: await invitation(fx, fx.project.id) } }),
   },
   {
-    method: 'POST', path: '/api/invitations/:token/accept',
+    method: 'POST',
+    path: '/api/invitations/:token/accept',
     // Anyone signed in holding the link joins; members already in the project get a 409.
     expect: { anonymous: 401, stranger: '2xx', caretaker: 409, partner: 409, owner: 409 },
     request: async (fx) => ({ params: { token: await invitation(fx, (await fx.freshProject()).id) } }),

@@ -29,7 +29,9 @@ function perRow(opened: boolean) {
   return (fx: MatrixFixture) => (sac ??= newSac(fx, opened));
 }
 
-const onSac = (pick: (fx: MatrixFixture) => Promise<string>, body?: object) => async (fx: MatrixFixture): Promise<MatrixRequest> => ({ params: { id: await pick(fx) }, ...(body ? { body } : {}) });
+const onSac =
+  (pick: (fx: MatrixFixture) => Promise<string>, body?: object) =>
+  async (fx: MatrixFixture): Promise<MatrixRequest> => ({ params: { id: await pick(fx) }, ...(body ? { body } : {}) });
 const openingSac = perRow(false);
 
 export const rows: MatrixRow[] = [
@@ -44,5 +46,10 @@ export const rows: MatrixRow[] = [
   // No file attached: the owner gets past the guard to the "attach a photo" 400; everyone else is stopped before.
   { method: 'POST', path: '/api/sacs/:id/opening/photos', expect: { ...OWNER_ONLY, owner: 400 }, request: onSac(sharedSac) },
   { method: 'GET', path: '/api/sacs/:id/counts', expect: ANY_MEMBER, request: onSac(sharedSac) },
-  { method: 'POST', path: '/api/sacs/:id/counts', expect: OWNER_AND_CARETAKER, request: onSac(sharedSac, { stage: 'eggs-with-legs', alive: 29, lost: 1, lossReason: 'mould' }) },
+  {
+    method: 'POST',
+    path: '/api/sacs/:id/counts',
+    expect: OWNER_AND_CARETAKER,
+    request: onSac(sharedSac, { stage: 'eggs-with-legs', alive: 29, lost: 1, lossReason: 'mould' }),
+  },
 ];

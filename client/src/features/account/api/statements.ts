@@ -4,8 +4,7 @@ import { api } from '@/lib/api-client';
 import { accountKeys } from './keys';
 
 /** Plain links download these: the session cookie authenticates a GET and the server names the file. */
-export const statementFileUrl = (projectId: string, memberId: string, format: 'csv' | 'pdf') =>
-  `/api/projects/${projectId}/statements/${memberId}.${format}`;
+export const statementFileUrl = (projectId: string, memberId: string, format: 'csv' | 'pdf') => `/api/projects/${projectId}/statements/${memberId}.${format}`;
 
 export function fetchStatement(projectId: string, memberId: string, signal?: AbortSignal): Promise<StatementResponse> {
   return api.get<StatementResponse>(`/projects/${projectId}/statements/${memberId}`, { signal });

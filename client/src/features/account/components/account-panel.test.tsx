@@ -8,7 +8,14 @@ import { balances, entry, MIRA, PROJECT_ID, shares, TOMASZ } from './account.fix
 
 afterEach(() => vi.unstubAllGlobals());
 
-const me = (displayName: string): Me => ({ id: `user-${displayName}`, email: `${displayName}@example.test`, displayName, role: 'keeper', timeZone: 'Europe/Berlin', temperatureUnit: 'C' });
+const me = (displayName: string): Me => ({
+  id: `user-${displayName}`,
+  email: `${displayName}@example.test`,
+  displayName,
+  role: 'keeper',
+  timeZone: 'Europe/Berlin',
+  temperatureUnit: 'C',
+});
 const HAND_OVER = entry({});
 
 function stubAccount() {

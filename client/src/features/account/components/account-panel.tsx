@@ -26,7 +26,6 @@ const OWNER_ACTIONS: { value: OwnerAction; label: string }[] = [
   { value: 'correction', label: 'Correct an entry' },
 ];
 
-
 export interface AccountPanelProps {
   projectId: string;
   me: Me;
@@ -53,7 +52,9 @@ export function AccountPanel({ projectId, me, myRole, myMemberId }: AccountPanel
   const sacs = shares.data?.sacs ?? [];
   const parties = balances.data?.parties ?? [];
   const currency = balances.data?.currency ?? shares.data?.terms?.currency ?? null;
-  const awaiting = (entries.data ?? []).filter((e) => myMemberId !== null && e.awaitingConfirmationBy?.memberId === myMemberId && e.status !== 'reversed' && e.status !== 'left-out');
+  const awaiting = (entries.data ?? []).filter(
+    (e) => myMemberId !== null && e.awaitingConfirmationBy?.memberId === myMemberId && e.status !== 'reversed' && e.status !== 'left-out',
+  );
   const myDebts = (balances.data?.debts ?? []).filter((d) => d.fromPartyId === myMemberId);
   const owedToMe = (balances.data?.debts ?? []).some((d) => d.toPartyId === myMemberId);
   const close = () => setAction(null);
@@ -113,7 +114,12 @@ export function AccountPanel({ projectId, me, myRole, myMemberId }: AccountPanel
           <Stack>
             <Group gap="xs">
               {OWNER_ACTIONS.map((a) => (
-                <Button key={a.value} size="xs" variant={action === a.value ? 'filled' : 'light'} onClick={() => setAction(action === a.value ? null : a.value)}>
+                <Button
+                  key={a.value}
+                  size="xs"
+                  variant={action === a.value ? 'filled' : 'light'}
+                  onClick={() => setAction(action === a.value ? null : a.value)}
+                >
                   {a.label}
                 </Button>
               ))}
@@ -139,7 +145,12 @@ export function AccountPanel({ projectId, me, myRole, myMemberId }: AccountPanel
                   ) : (
                     <Text c="dimmed">No terms are in force yet.</Text>
                   ))}
-                {action === 'money' && (currency ? <MoneyForm projectId={projectId} parties={parties} currency={currency} today={today} onDone={close} /> : <Text c="dimmed">No terms are in force yet.</Text>)}
+                {action === 'money' &&
+                  (currency ? (
+                    <MoneyForm projectId={projectId} parties={parties} currency={currency} today={today} onDone={close} />
+                  ) : (
+                    <Text c="dimmed">No terms are in force yet.</Text>
+                  ))}
                 {action === 'correction' && <CorrectionForm projectId={projectId} today={today} onDone={close} />}
               </Card>
             )}

@@ -7,8 +7,23 @@ export const PROJECT_ID = '33333333-3333-4333-8333-333333333333';
 
 export function party(ref: { memberId: string; name: string }, over: Partial<PartyBalanceView> = {}): PartyBalanceView {
   return {
-    ...ref, partyId: ref.memberId, share: 0, handedOver: 0, sold: 0, cashedOut: 0, owedSpiderlings: 0, arrivedAlive: 0, arrivedDead: 0,
-    unconfirmedHandOvers: 0, salesMinor: 0, cashOutValueMinor: 0, paidMinor: 0, receivedMinor: 0, moneyOwedToMinor: 0, moneyOwesMinor: 0, ...over,
+    ...ref,
+    partyId: ref.memberId,
+    share: 0,
+    handedOver: 0,
+    sold: 0,
+    cashedOut: 0,
+    owedSpiderlings: 0,
+    arrivedAlive: 0,
+    arrivedDead: 0,
+    unconfirmedHandOvers: 0,
+    salesMinor: 0,
+    cashOutValueMinor: 0,
+    paidMinor: 0,
+    receivedMinor: 0,
+    moneyOwedToMinor: 0,
+    moneyOwesMinor: 0,
+    ...over,
   };
 }
 
@@ -29,31 +44,72 @@ export function shares(): SharesResponse {
   return {
     projectId: PROJECT_ID,
     terms: {
-      number: 1, pricePerSpiderlingMinor: 400, currency: 'EUR', failureClause: 'nothing-owed', failureClauseText: 'nothing is owed', handOverStage: 'second instar',
-      shippingPaidBy: 'the recipient', lines: [],
+      number: 1,
+      pricePerSpiderlingMinor: 400,
+      currency: 'EUR',
+      failureClause: 'nothing-owed',
+      failureClauseText: 'nothing is owed',
+      handOverStage: 'second instar',
+      shippingPaidBy: 'the recipient',
+      lines: [],
     },
     sacs: [
       {
-        sacId: '44444444-4444-4444-8444-444444444444', layDate: '2026-09-01', outcome: 'hatched', count: 20, aliveInCare: 17, withdrawn: 3,
+        sacId: '44444444-4444-4444-8444-444444444444',
+        layDate: '2026-09-01',
+        outcome: 'hatched',
+        count: 20,
+        aliveInCare: 17,
+        withdrawn: 3,
         parties: [
           { ...MIRA, count: 12, fixed: 0, proportional: 12, exactQuota: '12', roundedUp: false },
           { ...TOMASZ, count: 8, fixed: 0, proportional: 8, exactQuota: '8', roundedUp: false },
         ],
-        explanation: ['20 young are shared 3 : 2.'], change: null, failure: null,
+        explanation: ['20 young are shared 3 : 2.'],
+        change: null,
+        failure: null,
       },
     ],
-    totals: [{ ...MIRA, count: 12 }, { ...TOMASZ, count: 8 }],
+    totals: [
+      { ...MIRA, count: 12 },
+      { ...TOMASZ, count: 8 },
+    ],
     notices: [],
   };
 }
 
 export function entry(over: Partial<LedgerEntryResponse>): LedgerEntryResponse {
   return {
-    id: '55555555-5555-4555-8555-555555555555', seq: 1, kind: 'hand-over', date: '2026-11-20', sacId: null, party: TOMASZ, from: null, to: null, count: 3,
-    method: 'pick-up', carrier: null, tracking: null, priceMinor: null, pricePerSpiderlingMinor: null, amountMinor: null, currency: null, handOverId: null,
-    arrivedAlive: null, arrivedDead: null, reversesId: null, confirmsId: null, reason: null, note: null, source: 'manual',
-    recordedBy: { id: 'u1', name: 'Mira' }, recordedAt: '2026-11-20T10:00:00.000Z', status: 'in-force', problem: null,
-    awaitingConfirmationBy: TOMASZ, ...over,
+    id: '55555555-5555-4555-8555-555555555555',
+    seq: 1,
+    kind: 'hand-over',
+    date: '2026-11-20',
+    sacId: null,
+    party: TOMASZ,
+    from: null,
+    to: null,
+    count: 3,
+    method: 'pick-up',
+    carrier: null,
+    tracking: null,
+    priceMinor: null,
+    pricePerSpiderlingMinor: null,
+    amountMinor: null,
+    currency: null,
+    handOverId: null,
+    arrivedAlive: null,
+    arrivedDead: null,
+    reversesId: null,
+    confirmsId: null,
+    reason: null,
+    note: null,
+    source: 'manual',
+    recordedBy: { id: 'u1', name: 'Mira' },
+    recordedAt: '2026-11-20T10:00:00.000Z',
+    status: 'in-force',
+    problem: null,
+    awaitingConfirmationBy: TOMASZ,
+    ...over,
   };
 }
 
@@ -62,7 +118,10 @@ export const CAUTION_LAW = 'Local law and the carrier’s rules come first.';
 
 export function handOverForm(): HandOverFormResponse {
   return {
-    parties: [{ ...MIRA, owedSpiderlings: 12 }, { ...TOMASZ, owedSpiderlings: 5 }],
+    parties: [
+      { ...MIRA, owedSpiderlings: 12 },
+      { ...TOMASZ, owedSpiderlings: 5 },
+    ],
     methods: ['pick-up', 'shipment'],
     handOverStage: 'second instar',
     shippingPaidBy: 'the recipient',

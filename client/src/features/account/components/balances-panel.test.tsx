@@ -15,7 +15,11 @@ describe('BalancesPanel', () => {
     const table = screen.getByRole('table', { name: 'Balances' });
     const tomasz = within(table).getByRole('row', { name: /Tomasz/ });
     // still owed 5; share 8, handed over 3, sold 0, cashed out 0
-    expect(within(tomasz).getAllByRole('cell').map((c) => c.textContent)).toEqual(['Tomasz', '5', '8', '3', '0', '0']);
+    expect(
+      within(tomasz)
+        .getAllByRole('cell')
+        .map((c) => c.textContent),
+    ).toEqual(['Tomasz', '5', '8', '3', '0', '0']);
     expect(screen.getByTestId(`owed-${MIRA.memberId}`)).toHaveTextContent('12');
     expect(calls).toEqual([{ method: 'GET', path: `/api/projects/${PROJECT_ID}/balances`, body: undefined }]);
   });

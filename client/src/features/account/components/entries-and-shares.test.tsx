@@ -11,8 +11,16 @@ describe('EntriesTable', () => {
   it('links a correction to the entry it reverses and marks that one reversed, with the reason', async () => {
     const handOver = entry({ status: 'reversed', awaitingConfirmationBy: null });
     const correction = entry({
-      id: '66666666-6666-4666-8666-666666666666', seq: 2, kind: 'correction', party: null, count: null, method: null, reversesId: handOver.id,
-      reason: 'Counted twice', status: 'in-force', awaitingConfirmationBy: null,
+      id: '66666666-6666-4666-8666-666666666666',
+      seq: 2,
+      kind: 'correction',
+      party: null,
+      count: null,
+      method: null,
+      reversesId: handOver.id,
+      reason: 'Counted twice',
+      status: 'in-force',
+      awaitingConfirmationBy: null,
     });
     vi.stubGlobal('fetch', stubFetch({ [`GET /api/projects/${PROJECT_ID}/entries`]: () => ({ status: 200, body: [handOver, correction] }) }).fetchStub);
     renderWithProviders(<EntriesTable projectId={PROJECT_ID} />);
@@ -30,11 +38,22 @@ describe('SharesPanel', () => {
   it('says what a failed sac means under the terms and what changed in the shares and why', async () => {
     const body = shares();
     body.sacs.push({
-      ...body.sacs[0]!, sacId: '77777777-7777-4777-8777-777777777777', layDate: '2026-06-01', outcome: 'failed', count: 0, aliveInCare: 0, withdrawn: 0, parties: [],
-      explanation: [], failure: 'The sac failed: under the terms nothing is owed for it.',
+      ...body.sacs[0]!,
+      sacId: '77777777-7777-4777-8777-777777777777',
+      layDate: '2026-06-01',
+      outcome: 'failed',
+      count: 0,
+      aliveInCare: 0,
+      withdrawn: 0,
+      parties: [],
+      explanation: [],
+      failure: 'The sac failed: under the terms nothing is owed for it.',
     });
     body.sacs[0]!.change = {
-      changedAt: '2026-11-28T09:00:00.000Z', reasons: ['The count went from 24 to 20.'], lines: ['Tomasz: 10 → 8'], changes: [],
+      changedAt: '2026-11-28T09:00:00.000Z',
+      reasons: ['The count went from 24 to 20.'],
+      lines: ['Tomasz: 10 → 8'],
+      changes: [],
     };
     vi.stubGlobal('fetch', stubFetch({ [`GET /api/projects/${PROJECT_ID}/shares`]: () => ({ status: 200, body }) }).fetchStub);
     renderWithProviders(<SharesPanel projectId={PROJECT_ID} timeZone="Europe/Berlin" />);

@@ -115,42 +115,42 @@ export function EntriesTable({ projectId }: { projectId: string }) {
           </Card>
         ))}
       </Stack>
-    <Table.ScrollContainer minWidth={760} visibleFrom="sm">
-      <Table aria-label="Account entries" verticalSpacing="xs" striped>
-        <Table.Thead>
-          <Table.Tr>
-            <Table.Th>#</Table.Th>
-            <Table.Th>Date</Table.Th>
-            <Table.Th>Kind</Table.Th>
-            <Table.Th>Party</Table.Th>
-            <Table.Th>Count / amount</Table.Th>
-            <Table.Th>Recorded by</Table.Th>
-            <Table.Th>State</Table.Th>
-          </Table.Tr>
-        </Table.Thead>
-        <Table.Tbody>
-          {list.map((e) => {
-            const reverser = reversedBy.get(e.id);
-            return (
-              <Table.Tr key={e.id} id={rowId(e.seq)} data-testid={`entry-${e.kind}`}>
-                <Table.Td>{e.seq}</Table.Td>
-                <Table.Td style={{ whiteSpace: 'nowrap' }}>{formatDate(e.date)}</Table.Td>
-                <Table.Td>
-                  {ENTRY_KIND_LABELS[e.kind]}
-                  <Details e={e} bySeq={byId} />
-                </Table.Td>
-                <Table.Td>{partyText(e)}</Table.Td>
-                <Table.Td>{amountText(e)}</Table.Td>
-                <Table.Td>{e.source === 'payment-provider' ? 'Payment provider' : (e.recordedBy?.name ?? '—')}</Table.Td>
-                <Table.Td>
-                  <EntryState e={e} reverser={reverser} />
-                </Table.Td>
-              </Table.Tr>
-            );
-          })}
-        </Table.Tbody>
-      </Table>
-    </Table.ScrollContainer>
+      <Table.ScrollContainer minWidth={760} visibleFrom="sm">
+        <Table aria-label="Account entries" verticalSpacing="xs" striped>
+          <Table.Thead>
+            <Table.Tr>
+              <Table.Th>#</Table.Th>
+              <Table.Th>Date</Table.Th>
+              <Table.Th>Kind</Table.Th>
+              <Table.Th>Party</Table.Th>
+              <Table.Th>Count / amount</Table.Th>
+              <Table.Th>Recorded by</Table.Th>
+              <Table.Th>State</Table.Th>
+            </Table.Tr>
+          </Table.Thead>
+          <Table.Tbody>
+            {list.map((e) => {
+              const reverser = reversedBy.get(e.id);
+              return (
+                <Table.Tr key={e.id} id={rowId(e.seq)} data-testid={`entry-${e.kind}`}>
+                  <Table.Td>{e.seq}</Table.Td>
+                  <Table.Td style={{ whiteSpace: 'nowrap' }}>{formatDate(e.date)}</Table.Td>
+                  <Table.Td>
+                    {ENTRY_KIND_LABELS[e.kind]}
+                    <Details e={e} bySeq={byId} />
+                  </Table.Td>
+                  <Table.Td>{partyText(e)}</Table.Td>
+                  <Table.Td>{amountText(e)}</Table.Td>
+                  <Table.Td>{e.source === 'payment-provider' ? 'Payment provider' : (e.recordedBy?.name ?? '—')}</Table.Td>
+                  <Table.Td>
+                    <EntryState e={e} reverser={reverser} />
+                  </Table.Td>
+                </Table.Tr>
+              );
+            })}
+          </Table.Tbody>
+        </Table>
+      </Table.ScrollContainer>
     </>
   );
 }

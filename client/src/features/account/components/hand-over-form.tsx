@@ -79,7 +79,10 @@ export function HandOverForm({ projectId, today, sacs, onDone }: { projectId: st
         {withYoung.length > 1 && (
           <NativeSelect
             label="From the sac"
-            data={[{ value: '', label: 'Choose a sac' }, ...withYoung.map((s) => ({ value: s.sacId, label: `Laid ${formatDate(s.layDate)} (${s.aliveInCare} in care)` }))]}
+            data={[
+              { value: '', label: 'Choose a sac' },
+              ...withYoung.map((s) => ({ value: s.sacId, label: `Laid ${formatDate(s.layDate)} (${s.aliveInCare} in care)` })),
+            ]}
             key={form.key('sacId')}
             {...form.getInputProps('sacId')}
           />

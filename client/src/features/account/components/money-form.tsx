@@ -71,11 +71,25 @@ export function MoneyForm({ projectId, parties, currency, today, fromMemberId, t
     <form onSubmit={submit} noValidate aria-label="Record a payment">
       <Stack maw={520} gap="sm">
         <Group grow align="flex-start">
-          <NativeSelect label="Paid by" data={options} disabled={fromMemberId !== undefined} key={form.key('fromMemberId')} {...form.getInputProps('fromMemberId')} />
+          <NativeSelect
+            label="Paid by"
+            data={options}
+            disabled={fromMemberId !== undefined}
+            key={form.key('fromMemberId')}
+            {...form.getInputProps('fromMemberId')}
+          />
           <NativeSelect label="Paid to" data={options} disabled={toMemberId !== undefined} key={form.key('toMemberId')} {...form.getInputProps('toMemberId')} />
         </Group>
         <Group grow align="flex-start">
-          <NumberInput label={`Amount (${currency})`} min={0} decimalScale={digits} allowDecimal={digits > 0} withAsterisk key={form.key('amount')} {...form.getInputProps('amount')} />
+          <NumberInput
+            label={`Amount (${currency})`}
+            min={0}
+            decimalScale={digits}
+            allowDecimal={digits > 0}
+            withAsterisk
+            key={form.key('amount')}
+            {...form.getInputProps('amount')}
+          />
           <TextInput label="Date" type="date" max={today} withAsterisk key={form.key('date')} {...form.getInputProps('date')} />
         </Group>
         <TextInput label="Note" placeholder="e.g. bank transfer" key={form.key('note')} {...form.getInputProps('note')} />

@@ -12,7 +12,10 @@ describe('PayForm', { timeout: 30_000 }, () => {
     const url = 'http://127.0.0.1:12190/pay/cs_test_1';
     const { fetchStub, calls } = stubFetch({
       'GET /api/auth/csrf': () => ({ status: 200, body: { csrfToken: 't' } }),
-      [`POST /api/projects/${PROJECT_ID}/settlements/checkout`]: () => ({ status: 201, body: { sessionId: 'cs_test_1', url, amountMinor: 750, currency: 'EUR' } }),
+      [`POST /api/projects/${PROJECT_ID}/settlements/checkout`]: () => ({
+        status: 201,
+        body: { sessionId: 'cs_test_1', url, amountMinor: 750, currency: 'EUR' },
+      }),
     });
     vi.stubGlobal('fetch', fetchStub);
     const goTo = vi.fn();

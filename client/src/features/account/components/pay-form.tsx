@@ -47,7 +47,14 @@ export function PayForm({ projectId, toMemberId, toName, owedMinor, currency, go
         <Text size="sm">
           You owe {toName} {formatMoney(owedMinor, currency)}.
         </Text>
-        <NumberInput label={`Amount (${currency})`} min={0} decimalScale={digits} allowDecimal={digits > 0} key={form.key('amount')} {...form.getInputProps('amount')} />
+        <NumberInput
+          label={`Amount (${currency})`}
+          min={0}
+          decimalScale={digits}
+          allowDecimal={digits > 0}
+          key={form.key('amount')}
+          {...form.getInputProps('amount')}
+        />
         <FormActions message={message} loading={checkout.isPending} submitLabel="Pay what you owe" />
         <Text size="xs" c="dimmed">
           You will pay on the payment provider’s page and come back here afterwards.

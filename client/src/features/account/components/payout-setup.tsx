@@ -3,9 +3,24 @@ import { useState } from 'react';
 import { usePayoutAccount, useCreatePayoutAccount } from '../api/settlements';
 
 const COUNTRIES = [
-  ['DE', 'Germany'], ['AT', 'Austria'], ['BE', 'Belgium'], ['CH', 'Switzerland'], ['CZ', 'Czechia'], ['DK', 'Denmark'], ['ES', 'Spain'],
-  ['FR', 'France'], ['GB', 'United Kingdom'], ['IE', 'Ireland'], ['IT', 'Italy'], ['NL', 'Netherlands'], ['PL', 'Poland'], ['PT', 'Portugal'],
-  ['SE', 'Sweden'], ['US', 'United States'], ['CA', 'Canada'], ['AU', 'Australia'],
+  ['DE', 'Germany'],
+  ['AT', 'Austria'],
+  ['BE', 'Belgium'],
+  ['CH', 'Switzerland'],
+  ['CZ', 'Czechia'],
+  ['DK', 'Denmark'],
+  ['ES', 'Spain'],
+  ['FR', 'France'],
+  ['GB', 'United Kingdom'],
+  ['IE', 'Ireland'],
+  ['IT', 'Italy'],
+  ['NL', 'Netherlands'],
+  ['PL', 'Poland'],
+  ['PT', 'Portugal'],
+  ['SE', 'Sweden'],
+  ['US', 'United States'],
+  ['CA', 'Canada'],
+  ['AU', 'Australia'],
 ] as const;
 
 /** A keeper who receives money links a payout account and finishes onboarding on the provider's page. */
@@ -48,7 +63,12 @@ export function PayoutSetup({ goTo = (url: string) => window.location.assign(url
           </Text>
           <Group align="flex-end">
             {!a.linked && (
-              <NativeSelect label="Country of your bank account" data={COUNTRIES.map(([value, label]) => ({ value, label }))} value={country} onChange={(e) => setCountry(e.currentTarget.value)} />
+              <NativeSelect
+                label="Country of your bank account"
+                data={COUNTRIES.map(([value, label]) => ({ value, label }))}
+                value={country}
+                onChange={(e) => setCountry(e.currentTarget.value)}
+              />
             )}
             <Button variant="light" loading={create.isPending} onClick={() => void start().catch(() => undefined)}>
               {a.linked ? 'Finish setting up payouts' : 'Set up payouts'}

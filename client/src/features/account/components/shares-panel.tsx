@@ -104,7 +104,8 @@ export function SharesPanel({ projectId, timeZone }: { projectId: string; timeZo
     <Stack gap="sm" data-testid="account-shares">
       {s.terms ? (
         <Text size="sm" c="dimmed">
-          Terms version {s.terms.number} in force · {formatMoney(s.terms.pricePerSpiderlingMinor, s.terms.currency)} per spiderling for a cash-out · {s.terms.failureClauseText}
+          Terms version {s.terms.number} in force · {formatMoney(s.terms.pricePerSpiderlingMinor, s.terms.currency)} per spiderling for a cash-out ·{' '}
+          {s.terms.failureClauseText}
         </Text>
       ) : (
         <Alert color="amber">No version of the terms is in force yet, so there are no shares. Every partner must accept the terms first.</Alert>

@@ -74,7 +74,10 @@ export function WithdrawalForm({ projectId, kind, parties, sacs, currency, terms
       <Stack maw={520} gap="sm">
         <NativeSelect
           label={sale ? 'Sold from the share of' : 'Cashed out by'}
-          data={[{ value: '', label: 'Choose a party' }, ...parties.map((p) => ({ value: p.memberId, label: `${p.name} (${young(p.owedSpiderlings)} still owed)` }))]}
+          data={[
+            { value: '', label: 'Choose a party' },
+            ...parties.map((p) => ({ value: p.memberId, label: `${p.name} (${young(p.owedSpiderlings)} still owed)` })),
+          ]}
           withAsterisk
           key={form.key('memberId')}
           {...form.getInputProps('memberId')}
@@ -82,7 +85,10 @@ export function WithdrawalForm({ projectId, kind, parties, sacs, currency, terms
         {withYoung.length > 1 && (
           <NativeSelect
             label="From the sac"
-            data={[{ value: '', label: 'Choose a sac' }, ...withYoung.map((s) => ({ value: s.sacId, label: `Laid ${formatDate(s.layDate)} (${s.aliveInCare} in care)` }))]}
+            data={[
+              { value: '', label: 'Choose a sac' },
+              ...withYoung.map((s) => ({ value: s.sacId, label: `Laid ${formatDate(s.layDate)} (${s.aliveInCare} in care)` })),
+            ]}
             key={form.key('sacId')}
             {...form.getInputProps('sacId')}
           />

@@ -14,7 +14,11 @@ export function ResetPasswordForm({ token, onDone }: { token: string; onDone: ()
     validate: { password: (v) => (v.length >= MIN_PASSWORD_LENGTH ? null : `Use a password of at least ${MIN_PASSWORD_LENGTH} characters.`) },
   });
   return (
-    <form onSubmit={form.onSubmit((v) => confirm.mutate({ token, password: v.password }, { onSuccess: onDone, onError: (e) => setProblem(applyServerErrors(form, e)) }))}>
+    <form
+      onSubmit={form.onSubmit((v) =>
+        confirm.mutate({ token, password: v.password }, { onSuccess: onDone, onError: (e) => setProblem(applyServerErrors(form, e)) }),
+      )}
+    >
       <Stack>
         {problem && (
           <Alert color="clay" variant="light" role="alert">

@@ -27,7 +27,12 @@ describe('SignInForm', () => {
       'GET /api/auth/csrf': () => ({ status: 200, body: { csrfToken: 't' } }),
       'POST /api/auth/login': () => ({
         status: 200,
-        body: { user: { id: '1', email: 'mira@example.test', displayName: 'Mira', role: 'keeper', timeZone: 'UTC', temperatureUnit: 'C' }, accessToken: 'a', csrfToken: 'c', expiresAt: '' },
+        body: {
+          user: { id: '1', email: 'mira@example.test', displayName: 'Mira', role: 'keeper', timeZone: 'UTC', temperatureUnit: 'C' },
+          accessToken: 'a',
+          csrfToken: 'c',
+          expiresAt: '',
+        },
       }),
     });
     vi.stubGlobal('fetch', fetchStub);

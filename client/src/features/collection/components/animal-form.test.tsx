@@ -53,7 +53,15 @@ describe('AnimalForm', { timeout: 30_000 }, () => {
     await userEvent.click(screen.getByRole('button', { name: 'Add to collection' }));
     await waitFor(() => expect(onSaved).toHaveBeenCalled());
     const sent = calls.find((c) => c.method === 'POST' && c.path === '/api/animals')?.body as Record<string, unknown>;
-    expect(sent).toMatchObject({ speciesId: SPECIES_ID, label: 'Rosa', sex: 'female', maturity: 'immature', maturedOn: null, ownerKind: 'self', custody: 'with-owner' });
+    expect(sent).toMatchObject({
+      speciesId: SPECIES_ID,
+      label: 'Rosa',
+      sex: 'female',
+      maturity: 'immature',
+      maturedOn: null,
+      ownerKind: 'self',
+      custody: 'with-owner',
+    });
   });
 
   it('puts the server field errors next to their fields', async () => {

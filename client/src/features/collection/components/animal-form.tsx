@@ -131,20 +131,33 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
   const save = animal ? update : create;
   const [message, setMessage] = useState<string | null>(null);
   const start = initialValues(animal);
-  const [shape, setShape] = useState<Shape>({ sex: start.sex, maturity: start.maturity, ownerKind: start.ownerKind, custody: start.custody, status: start.status });
+  const [shape, setShape] = useState<Shape>({
+    sex: start.sex,
+    maturity: start.maturity,
+    ownerKind: start.ownerKind,
+    custody: start.custody,
+    status: start.status,
+  });
 
   const form = useForm<AnimalFormValues>({
     mode: 'uncontrolled',
     initialValues: start,
-    onValuesChange: (v) => setShape((s) => (s.sex === v.sex && s.maturity === v.maturity && s.ownerKind === v.ownerKind && s.custody === v.custody && s.status === v.status ? s : { sex: v.sex, maturity: v.maturity, ownerKind: v.ownerKind, custody: v.custody, status: v.status })),
+    onValuesChange: (v) =>
+      setShape((s) =>
+        s.sex === v.sex && s.maturity === v.maturity && s.ownerKind === v.ownerKind && s.custody === v.custody && s.status === v.status
+          ? s
+          : { sex: v.sex, maturity: v.maturity, ownerKind: v.ownerKind, custody: v.custody, status: v.status },
+      ),
     validate: {
       speciesId: (v) => (v ? null : 'Choose a species from the catalogue.'),
       label: (v) => (v.trim() ? null : 'Give the animal a label (a name or a code on its enclosure).'),
       maturedOn: (v, all) => (all.sex === 'male' && all.maturity === 'mature' && !v ? MATURE_MALE_NEEDS_DATE : null),
       priceCurrency: (v, all) => (all.price !== '' && all.price !== null && !v.trim() ? 'Say which currency the price is in (e.g. EUR).' : null),
-      ownerEmail: (v, all) => (all.ownerKind === 'keeper' && !v.trim() && animal?.owner.kind !== 'keeper' ? 'Give the e-mail of the keeper who owns the animal.' : null),
+      ownerEmail: (v, all) =>
+        all.ownerKind === 'keeper' && !v.trim() && animal?.owner.kind !== 'keeper' ? 'Give the e-mail of the keeper who owns the animal.' : null,
       ownerName: (v, all) => (all.ownerKind === 'party' && !v.trim() ? 'Give the name of the owner.' : null),
-      statusOn: (v, all) => ((all.status === 'sold' || all.status === 'deceased') && !v ? `Give the date the animal was ${all.status === 'sold' ? 'sold' : 'found dead'}.` : null),
+      statusOn: (v, all) =>
+        (all.status === 'sold' || all.status === 'deceased') && !v ? `Give the date the animal was ${all.status === 'sold' ? 'sold' : 'found dead'}.` : null,
     },
   });
 
@@ -185,13 +198,25 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
             <Text size="sm" fw={500} id="animal-sex-label">
               Sex
             </Text>
-            <SegmentedControl aria-labelledby="animal-sex-label" fullWidth data={ANIMAL_SEXES.map((s) => ({ value: s, label: SEX_LABELS[s] }))} key={form.key('sex')} {...form.getInputProps('sex')} />
+            <SegmentedControl
+              aria-labelledby="animal-sex-label"
+              fullWidth
+              data={ANIMAL_SEXES.map((s) => ({ value: s, label: SEX_LABELS[s] }))}
+              key={form.key('sex')}
+              {...form.getInputProps('sex')}
+            />
           </Stack>
           <Stack gap={4}>
             <Text size="sm" fw={500} id="animal-maturity-label">
               Maturity
             </Text>
-            <SegmentedControl aria-labelledby="animal-maturity-label" fullWidth data={MATURITIES.map((m) => ({ value: m, label: MATURITY_LABELS[m] }))} key={form.key('maturity')} {...form.getInputProps('maturity')} />
+            <SegmentedControl
+              aria-labelledby="animal-maturity-label"
+              fullWidth
+              data={MATURITIES.map((m) => ({ value: m, label: MATURITY_LABELS[m] }))}
+              key={form.key('maturity')}
+              {...form.getInputProps('maturity')}
+            />
           </Stack>
         </SimpleGrid>
         {shape.maturity === 'mature' && (
@@ -219,7 +244,15 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
 
         <Fieldset legend="Acquisition">
           <SimpleGrid cols={{ base: 1, sm: 2 }}>
-            <DateInput label="Acquired on" valueFormat="YYYY-MM-DD" placeholder="YYYY-MM-DD" clearable maxDate={new Date()} key={form.key('acquiredOn')} {...form.getInputProps('acquiredOn')} />
+            <DateInput
+              label="Acquired on"
+              valueFormat="YYYY-MM-DD"
+              placeholder="YYYY-MM-DD"
+              clearable
+              maxDate={new Date()}
+              key={form.key('acquiredOn')}
+              {...form.getInputProps('acquiredOn')}
+            />
             <TextInput label="Acquired from" key={form.key('acquiredFrom')} {...form.getInputProps('acquiredFrom')} />
             <NumberInput label="Price paid" min={0} decimalScale={2} hideControls key={form.key('price')} {...form.getInputProps('price')} />
             <TextInput label="Currency" placeholder="EUR" maxLength={3} key={form.key('priceCurrency')} {...form.getInputProps('priceCurrency')} />
@@ -240,7 +273,10 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
                 label="Owner's e-mail"
                 description={animal?.owner.kind === 'keeper' ? `Now ${animal.owner.name}; leave empty to keep` : 'The e-mail they sign in to Broodsilk with'}
                 type="email"
-                withAsterisk={animal?.owner.kind !== 'keeper'} key={form.key('ownerEmail')} {...form.getInputProps('ownerEmail')} />
+                withAsterisk={animal?.owner.kind !== 'keeper'}
+                key={form.key('ownerEmail')}
+                {...form.getInputProps('ownerEmail')}
+              />
             )}
             {shape.ownerKind === 'party' && (
               <SimpleGrid cols={{ base: 1, sm: 2 }}>
@@ -264,14 +300,27 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
                   key={form.key('custodyParty')}
                   {...form.getInputProps('custodyParty')}
                 />
-                <DateInput label="Due back on" valueFormat="YYYY-MM-DD" placeholder="YYYY-MM-DD" clearable key={form.key('dueBackOn')} {...form.getInputProps('dueBackOn')} />
+                <DateInput
+                  label="Due back on"
+                  valueFormat="YYYY-MM-DD"
+                  placeholder="YYYY-MM-DD"
+                  clearable
+                  key={form.key('dueBackOn')}
+                  {...form.getInputProps('dueBackOn')}
+                />
               </SimpleGrid>
             )}
           </Stack>
         </Fieldset>
 
         <SimpleGrid cols={{ base: 1, sm: 2 }}>
-          <Select label="Status" allowDeselect={false} data={ANIMAL_STATUSES.map((s) => ({ value: s, label: STATUS_LABELS[s] }))} key={form.key('status')} {...form.getInputProps('status')} />
+          <Select
+            label="Status"
+            allowDeselect={false}
+            data={ANIMAL_STATUSES.map((s) => ({ value: s, label: STATUS_LABELS[s] }))}
+            key={form.key('status')}
+            {...form.getInputProps('status')}
+          />
           <DateInput
             label="Status since"
             withAsterisk={shape.status === 'sold' || shape.status === 'deceased'}

@@ -22,7 +22,11 @@ function SortHeader({ label, column, sort, order, onSort }: { label: string; col
   const next = active && order === 'asc' ? 'desc' : 'asc';
   return (
     <Table.Th aria-sort={active ? (order === 'asc' ? 'ascending' : 'descending') : 'none'}>
-      <UnstyledButton onClick={() => onSort(column, next)} style={{ minHeight: 44, fontWeight: 700, fontSize: 'var(--mantine-font-size-sm)' }} aria-label={`Sort by ${label.toLowerCase()}`}>
+      <UnstyledButton
+        onClick={() => onSort(column, next)}
+        style={{ minHeight: 44, fontWeight: 700, fontSize: 'var(--mantine-font-size-sm)' }}
+        aria-label={`Sort by ${label.toLowerCase()}`}
+      >
         {label} <span aria-hidden>{active ? (order === 'asc' ? '▲' : '▼') : '↕'}</span>
       </UnstyledButton>
     </Table.Th>

@@ -45,7 +45,9 @@ describe('CSV import', () => {
     const { container } = renderWithProviders(<CsvTools />);
     await userEvent.upload(container.querySelector('input[type=file]') as HTMLInputElement, csvFile('label,species\nA,B\n'));
     const list = await screen.findByRole('list', { name: 'Rows with problems' });
-    const items = within(list).getAllByRole('listitem').map((li) => li.textContent);
+    const items = within(list)
+      .getAllByRole('listitem')
+      .map((li) => li.textContent);
     expect(items).toEqual([
       'Line 3: A mature male needs the date of his maturing molt: his male clock counts from it.',
       'Line 7: species: "Brachypelma nonsense" is not a name in the catalogue.',

@@ -20,7 +20,14 @@ export function CsvImportResult({ imported, error, onClose }: { imported?: numbe
   if (!error) return null;
   const rows = isApiError(error) ? [...error.details].sort((a, b) => lineNumber(a.field) - lineNumber(b.field)) : [];
   return (
-    <Alert color="clay" variant="light" withCloseButton closeButtonLabel="Close" onClose={onClose} title={<span className="tone-failed">The file was not imported</span>}>
+    <Alert
+      color="clay"
+      variant="light"
+      withCloseButton
+      closeButtonLabel="Close"
+      onClose={onClose}
+      title={<span className="tone-failed">The file was not imported</span>}
+    >
       <Stack gap="xs">
         <Text size="sm">{isApiError(error) ? error.message : 'The file could not be sent. Try again.'}</Text>
         {rows.length > 0 && (

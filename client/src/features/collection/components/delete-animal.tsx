@@ -24,8 +24,8 @@ export function DeleteAnimal({ animalId, label, onDeleted }: { animalId: string;
       >
         <Stack>
           <Text size="sm">
-            Deleting removes the record, its molts and its photos for good. It is meant for a record made by mistake. If {label} was sold, lent out or has died, edit
-            the status instead, so the history stays in your collection and in any project it was part of.
+            Deleting removes the record, its molts and its photos for good. It is meant for a record made by mistake. If {label} was sold, lent out or has died,
+            edit the status instead, so the history stays in your collection and in any project it was part of.
           </Text>
           {remove.error && (
             <Alert color="clay" variant="light" role="alert">
@@ -38,14 +38,19 @@ export function DeleteAnimal({ animalId, label, onDeleted }: { animalId: string;
             <Button variant="default" onClick={close} size="md">
               Keep it
             </Button>
-            <Button color="clay" loading={remove.isPending} onClick={() =>
+            <Button
+              color="clay"
+              loading={remove.isPending}
+              onClick={() =>
                 remove.mutate(undefined, {
                   onSuccess: async () => {
                     await onDeleted();
                     forgetAnimal(qc, animalId);
                   },
                 })
-              } size="md">
+              }
+              size="md"
+            >
               Delete for good
             </Button>
           </Group>

@@ -44,8 +44,8 @@ export function MaleClockPanel({ clock }: { clock: MaleClockView }) {
           </Table.Tbody>
         </Table>
         <Text size="xs" c="dimmed">
-          Males of this kind typically live {clock.lifespanMonths.min}–{clock.lifespanMonths.max} months after maturing ({ORIGIN[clock.lifespanMonths.from]}). These are
-          typical ranges, not a forecast for him.
+          Males of this kind typically live {clock.lifespanMonths.min}–{clock.lifespanMonths.max} months after maturing ({ORIGIN[clock.lifespanMonths.from]}).
+          These are typical ranges, not a forecast for him.
         </Text>
       </Stack>
     </Card>

@@ -48,7 +48,15 @@ export function MoltForm({ animalId, sex, onDone }: { animalId: string; sex: Ani
             </Text>
           </Alert>
         )}
-        <DateInput label="Molted on" withAsterisk valueFormat="YYYY-MM-DD" placeholder="YYYY-MM-DD" maxDate={new Date()} key={form.key('moltedOn')} {...form.getInputProps('moltedOn')} />
+        <DateInput
+          label="Molted on"
+          withAsterisk
+          valueFormat="YYYY-MM-DD"
+          placeholder="YYYY-MM-DD"
+          maxDate={new Date()}
+          key={form.key('moltedOn')}
+          {...form.getInputProps('moltedOn')}
+        />
         <Select
           label="Sexed from the exuvia"
           placeholder="Not checked"

@@ -45,7 +45,8 @@ export function MoltTimeline({ animalId, sex, editable }: { animalId: string; se
               }
             >
               <Text size="sm" c="dimmed">
-                {[m.exuviaSex && `Exuvia: ${EXUVIA_LABELS[m.exuviaSex]}`, m.sizeCm != null && `${m.sizeCm} cm`].filter(Boolean).join(' · ') || (i === molts.length - 1 ? 'First recorded molt' : 'Molt')}
+                {[m.exuviaSex && `Exuvia: ${EXUVIA_LABELS[m.exuviaSex]}`, m.sizeCm != null && `${m.sizeCm} cm`].filter(Boolean).join(' · ') ||
+                  (i === molts.length - 1 ? 'First recorded molt' : 'Molt')}
               </Text>
               {m.notes && <Text size="sm">{m.notes}</Text>}
             </Timeline.Item>

@@ -14,7 +14,9 @@ describe('PhotoPanel', () => {
       'POST /api/animals/a1/photos': () => ({ status: 415, body: { statusCode: 415, error: 'Unsupported Media Type', message: refusal } }),
     });
     // The upload is FormData, which stubFetch would try to read as JSON.
-    vi.stubGlobal('fetch', (input: RequestInfo | URL, init?: RequestInit) => fetchStub(input, init?.body instanceof FormData ? { ...init, body: undefined } : init));
+    vi.stubGlobal('fetch', (input: RequestInfo | URL, init?: RequestInit) =>
+      fetchStub(input, init?.body instanceof FormData ? { ...init, body: undefined } : init),
+    );
     renderWithProviders(<PhotoPanel animalId="a1" photos={[]} editable label="Rosa" />);
     expect(screen.getByText(/up to 15 MB/)).toBeInTheDocument();
     const input = screen.getByTestId('photo-dropzone').querySelector('input[type=file]') as HTMLInputElement;

@@ -19,7 +19,14 @@ export function CalendarFeedCard() {
         </Text>
       ) : (
         <Group gap="xs" align="flex-end" wrap="nowrap">
-          <TextInput aria-label="Calendar feed address" readOnly value={feed.data?.url ?? ''} placeholder="Loading…" style={{ flex: 1 }} onFocus={(e) => e.currentTarget.select()} />
+          <TextInput
+            aria-label="Calendar feed address"
+            readOnly
+            value={feed.data?.url ?? ''}
+            placeholder="Loading…"
+            style={{ flex: 1 }}
+            onFocus={(e) => e.currentTarget.select()}
+          />
           <CopyButton value={feed.data?.url ?? ''}>
             {({ copied, copy }) => (
               <Button variant="light" onClick={copy} disabled={!feed.data}>

@@ -6,11 +6,39 @@ import { DashboardView } from './dashboard-view';
 
 function sac(id: string, roll: { status: RollStatus; due: string } | null, state: SacResponse['pullWindow']['state'] = 'open'): SacResponse {
   return {
-    id, projectId: `p-${id}`, layDate: '2026-11-01', dayNumber: 30, today: '2026-12-01', pulled: !!roll, pulledAt: roll ? '2026-11-25T07:00:00Z' : null, pulledOn: roll ? '2026-11-25' : null,
-    outcome: 'in-progress', failureReason: null,
-    pullWindow: { fromDay: 21, toDay: 45, origin: 'default', opensOn: '2026-11-22', closesOn: '2026-12-16', closingFrom: '2026-12-14', dayNumber: 30, state, daysUntilOpens: 0, daysUntilCloses: 15, daysPastClose: 0 },
-    rollIntervalHours: 12, rollingOff: false, roll: roll ? { ...roll, lastRollAt: null } : null, broodStage: 'eggs', opened: false, currentCount: null, notes: null,
-    incubatorCaution: null, createdAt: '2026-11-01T00:00:00Z', updatedAt: '2026-11-01T00:00:00Z',
+    id,
+    projectId: `p-${id}`,
+    layDate: '2026-11-01',
+    dayNumber: 30,
+    today: '2026-12-01',
+    pulled: !!roll,
+    pulledAt: roll ? '2026-11-25T07:00:00Z' : null,
+    pulledOn: roll ? '2026-11-25' : null,
+    outcome: 'in-progress',
+    failureReason: null,
+    pullWindow: {
+      fromDay: 21,
+      toDay: 45,
+      origin: 'default',
+      opensOn: '2026-11-22',
+      closesOn: '2026-12-16',
+      closingFrom: '2026-12-14',
+      dayNumber: 30,
+      state,
+      daysUntilOpens: 0,
+      daysUntilCloses: 15,
+      daysPastClose: 0,
+    },
+    rollIntervalHours: 12,
+    rollingOff: false,
+    roll: roll ? { ...roll, lastRollAt: null } : null,
+    broodStage: 'eggs',
+    opened: false,
+    currentCount: null,
+    notes: null,
+    incubatorCaution: null,
+    createdAt: '2026-11-01T00:00:00Z',
+    updatedAt: '2026-11-01T00:00:00Z',
   };
 }
 
@@ -19,7 +47,10 @@ const item = (title: string, s: SacResponse): DashboardSac => ({ projectId: s.pr
 const data: DashboardResponse = {
   today: '2026-12-01',
   dueToday: {
-    rolls: [item('Regalis pair', sac('a', { status: 'overdue', due: '2026-12-01T05:00:00Z' })), item('Versicolor pair', sac('b', { status: 'due', due: '2026-12-01T10:00:00Z' }))],
+    rolls: [
+      item('Regalis pair', sac('a', { status: 'overdue', due: '2026-12-01T05:00:00Z' })),
+      item('Versicolor pair', sac('b', { status: 'due', due: '2026-12-01T10:00:00Z' })),
+    ],
     pullWindows: [{ ...item('Hamorii pair', sac('c', null)), event: 'closes-today' }],
   },
   openProjects: [],

@@ -9,7 +9,6 @@ import { SectionCard } from '@/components/ui/section-card';
 
 const ROLL_LABEL: Record<RollStatus, string> = { overdue: 'Overdue', due: 'Due now', 'due-soon': 'Due within the hour', upcoming: 'Later' };
 
-
 function SacLine({ item, right }: { item: DashboardSac; right: ReactNode }) {
   return (
     <Group justify="space-between" wrap="nowrap" gap="xs" py={4}>
@@ -64,7 +63,12 @@ export function DashboardView({ data, timeZone }: { data: DashboardResponse; tim
             })
           )}
         </SectionCard>
-        <SectionCard compact title="Pull windows today" testId="card-pull-today" accent={pullWindows.some((p) => p.event === 'closes-today') ? 'clay' : pullWindows.length ? 'amber' : undefined}>
+        <SectionCard
+          compact
+          title="Pull windows today"
+          testId="card-pull-today"
+          accent={pullWindows.some((p) => p.event === 'closes-today') ? 'clay' : pullWindows.length ? 'amber' : undefined}
+        >
           {pullWindows.length === 0 ? (
             <Text size="sm" c="dimmed">
               No window opens or closes today.
@@ -132,7 +136,11 @@ export function DashboardView({ data, timeZone }: { data: DashboardResponse; tim
         <SectionCard compact title="Open projects" testId="card-projects">
           {data.openProjects.length === 0 ? (
             <Text size="sm" c="dimmed">
-              No open project. <Anchor component={Link} to={paths.newProject.href()}>Start one</Anchor>.
+              No open project.{' '}
+              <Anchor component={Link} to={paths.newProject.href()}>
+                Start one
+              </Anchor>
+              .
             </Text>
           ) : (
             <Table verticalSpacing={4} fz="sm">

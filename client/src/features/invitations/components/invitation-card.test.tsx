@@ -7,13 +7,27 @@ import { InvitationCard } from './invitation-card';
 
 afterEach(() => vi.unstubAllGlobals());
 
-const preview: InvitationPreview = { projectTitle: 'Regalis 2027', inviterName: 'Mira', role: 'partner', valid: true, problem: null, expiresAt: '2026-12-15T00:00:00Z' };
+const preview: InvitationPreview = {
+  projectTitle: 'Regalis 2027',
+  inviterName: 'Mira',
+  role: 'partner',
+  valid: true,
+  problem: null,
+  expiresAt: '2026-12-15T00:00:00Z',
+};
 
 describe('InvitationCard', () => {
   it('sends a visitor to sign in with the invitation kept as the next page', () => {
     vi.stubGlobal('fetch', stubFetch({}).fetchStub);
     renderWithProviders(
-      <InvitationCard token="tok" preview={preview} signedInAs={null} signInHref="/sign-in?next=%2Finvitations%2Ftok" registerHref="/register" onJoined={vi.fn()} />,
+      <InvitationCard
+        token="tok"
+        preview={preview}
+        signedInAs={null}
+        signInHref="/sign-in?next=%2Finvitations%2Ftok"
+        registerHref="/register"
+        onJoined={vi.fn()}
+      />,
     );
     expect(screen.getByTestId('invitation')).toHaveTextContent('Mira invites you to the project Regalis 2027 as a partner');
     expect(screen.getByRole('link', { name: 'Sign in to join' })).toHaveAttribute('href', '/sign-in?next=%2Finvitations%2Ftok');
@@ -27,7 +41,9 @@ describe('InvitationCard', () => {
     });
     vi.stubGlobal('fetch', fetchStub);
     const onJoined = vi.fn();
-    renderWithProviders(<InvitationCard token="tok" preview={preview} signedInAs="Tomasz" signInHref="/sign-in" registerHref="/register" onJoined={onJoined} />);
+    renderWithProviders(
+      <InvitationCard token="tok" preview={preview} signedInAs="Tomasz" signInHref="/sign-in" registerHref="/register" onJoined={onJoined} />,
+    );
     await userEvent.click(screen.getByRole('button', { name: 'Join the project' }));
     await waitFor(() => expect(onJoined).toHaveBeenCalledWith({ projectId: 'p1', role: 'partner' }));
     expect(calls.filter((c) => c.method === 'POST').map((c) => c.path)).toEqual(['/api/invitations/tok/accept']);
@@ -36,7 +52,14 @@ describe('InvitationCard', () => {
   it('shows why an invitation no longer works, without a join button', () => {
     vi.stubGlobal('fetch', stubFetch({}).fetchStub);
     renderWithProviders(
-      <InvitationCard token="tok" preview={{ ...preview, valid: false, problem: 'This invitation was already used.' }} signedInAs="Tomasz" signInHref="/sign-in" registerHref="/register" onJoined={vi.fn()} />,
+      <InvitationCard
+        token="tok"
+        preview={{ ...preview, valid: false, problem: 'This invitation was already used.' }}
+        signedInAs="Tomasz"
+        signInHref="/sign-in"
+        registerHref="/register"
+        onJoined={vi.fn()}
+      />,
     );
     expect(screen.getByText('This invitation was already used.')).toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Join the project' })).not.toBeInTheDocument();

@@ -5,7 +5,10 @@ import type { AcceptInvitationResponse, InvitationPreview } from '@broodsilk/sha
 import { isApiError } from '@/lib/api-error';
 import { useAcceptInvitation } from '../api/invitation';
 
-const ROLE_TEXT = { partner: 'a partner (you share in the brood and agree the terms)', caretaker: 'the caretaker (you roll the eggs and keep the care log)' } as const;
+const ROLE_TEXT = {
+  partner: 'a partner (you share in the brood and agree the terms)',
+  caretaker: 'the caretaker (you roll the eggs and keep the care log)',
+} as const;
 
 interface InvitationCardProps {
   token: string;

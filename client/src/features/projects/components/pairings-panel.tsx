@@ -93,10 +93,24 @@ export function PairingsPanel({ projectId, timeZone, canRecord }: { projectId: s
             <form onSubmit={submit} noValidate>
               <Stack maw={480}>
                 <Group grow align="flex-start">
-                  <DateInput label="Day the male went in" placeholder="YYYY-MM-DD" valueFormat="YYYY-MM-DD" withAsterisk maxDate={today} key={form.key('on')} {...form.getInputProps('on')} />
+                  <DateInput
+                    label="Day the male went in"
+                    placeholder="YYYY-MM-DD"
+                    valueFormat="YYYY-MM-DD"
+                    withAsterisk
+                    maxDate={today}
+                    key={form.key('on')}
+                    {...form.getInputProps('on')}
+                  />
                   <TimeInput label="At" key={form.key('time')} {...form.getInputProps('time')} />
                 </Group>
-                <NumberInput label="How long (minutes)" min={0} allowDecimal={false} key={form.key('durationMinutes')} {...form.getInputProps('durationMinutes')} />
+                <NumberInput
+                  label="How long (minutes)"
+                  min={0}
+                  allowDecimal={false}
+                  key={form.key('durationMinutes')}
+                  {...form.getInputProps('durationMinutes')}
+                />
                 <Select label="Outcome" data={outcomeOptions} allowDeselect={false} key={form.key('outcome')} {...form.getInputProps('outcome')} />
                 <Textarea label="Notes" autosize minRows={2} key={form.key('notes')} {...form.getInputProps('notes')} />
                 <FormActions message={message} loading={record.isPending} submitLabel="Save pairing" />

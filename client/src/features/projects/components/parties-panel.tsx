@@ -78,7 +78,12 @@ export function PartiesPanel({ projectId, members, myRole, timeZone }: PartiesPa
                               sent, valid until {formatInstant(invitation.expiresAt, timeZone)}
                             </Text>
                           )}
-                          <Button size="compact-xs" variant={invitation ? 'subtle' : 'light'} loading={send.isPending && send.variables?.memberId === m.id} onClick={() => invite(m)}>
+                          <Button
+                            size="compact-xs"
+                            variant={invitation ? 'subtle' : 'light'}
+                            loading={send.isPending && send.variables?.memberId === m.id}
+                            onClick={() => invite(m)}
+                          >
                             {invitation ? 'Send again' : 'Send invitation'}
                           </Button>
                         </Group>
@@ -144,7 +149,11 @@ function AddPartyForm({ projectId }: { projectId: string }) {
             <TextInput label="Name" withAsterisk key={form.key('name')} {...form.getInputProps('name')} />
             <TextInput label="E-mail" type="email" key={form.key('email')} {...form.getInputProps('email')} />
             <Select label="Role" data={roleOptions} allowDeselect={false} key={form.key('role')} {...form.getInputProps('role')} />
-            <Checkbox label="E-mail an invitation to join this project in Broodsilk" key={form.key('invite')} {...form.getInputProps('invite', { type: 'checkbox' })} />
+            <Checkbox
+              label="E-mail an invitation to join this project in Broodsilk"
+              key={form.key('invite')}
+              {...form.getInputProps('invite', { type: 'checkbox' })}
+            />
             <FormActions message={message} loading={add.isPending || send.isPending} submitLabel="Add party" />
           </Stack>
         </form>

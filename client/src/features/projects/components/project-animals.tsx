@@ -3,7 +3,6 @@ import { MALE_CLOCK_LABELS, type ProjectAnimal } from '@broodsilk/shared';
 import { formatDate } from '@/lib/dates';
 import { MALE_CLOCK_TONE } from '@/lib/tones';
 
-
 function AnimalLine({ role, animal }: { role: string; animal: ProjectAnimal }) {
   const clock = animal.maleClock;
   return (

@@ -1,4 +1,20 @@
-import { ActionIcon, Alert, Button, Card, Checkbox, Group, NumberInput, Select, SimpleGrid, Stack, Switch, Text, TextInput, Textarea, Title } from '@mantine/core';
+import {
+  ActionIcon,
+  Alert,
+  Button,
+  Card,
+  Checkbox,
+  Group,
+  NumberInput,
+  Select,
+  SimpleGrid,
+  Stack,
+  Switch,
+  Text,
+  TextInput,
+  Textarea,
+  Title,
+} from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { DEFAULT_HAND_OVER_STAGE, type AnimalSummary, type BroodStage, type FailureClause, type InvitableRole, type ShippingPayer } from '@broodsilk/shared';
@@ -130,8 +146,26 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
       <Stack maw={760}>
         <TextInput label="Title" placeholder="e.g. Regalis 2027, MO-007 × MO-030" withAsterisk key={form.key('title')} {...form.getInputProps('title')} />
         <SimpleGrid cols={{ base: 1, sm: 2 }}>
-          <Select label="Female" placeholder="Mature female from your collection" data={females.map(animalOption)} searchable withAsterisk nothingFoundMessage="No mature female in your collection" key={form.key('femaleId')} {...form.getInputProps('femaleId')} />
-          <Select label="Male" placeholder="Mature male, yours or on loan" data={males.map(animalOption)} searchable withAsterisk nothingFoundMessage="No mature male in your collection" key={form.key('maleId')} {...form.getInputProps('maleId')} />
+          <Select
+            label="Female"
+            placeholder="Mature female from your collection"
+            data={females.map(animalOption)}
+            searchable
+            withAsterisk
+            nothingFoundMessage="No mature female in your collection"
+            key={form.key('femaleId')}
+            {...form.getInputProps('femaleId')}
+          />
+          <Select
+            label="Male"
+            placeholder="Mature male, yours or on loan"
+            data={males.map(animalOption)}
+            searchable
+            withAsterisk
+            nothingFoundMessage="No mature male in your collection"
+            key={form.key('maleId')}
+            {...form.getInputProps('maleId')}
+          />
         </SimpleGrid>
         {male?.custody === 'loan-in' && (
           <Alert color="moss" variant="light">
@@ -144,7 +178,8 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
           Parties
         </Title>
         <Text size="sm" c="dimmed">
-          You take part as the keeper. Add partners who share in the brood and a caretaker who rolls the eggs. With an e-mail address they get an invitation to join; without one they are kept on record.
+          You take part as the keeper. Add partners who share in the brood and a caretaker who rolls the eggs. With an e-mail address they get an invitation to
+          join; without one they are kept on record.
         </Text>
         {Array.from({ length: partyCount }, (_, i) => (
           <Card withBorder key={form.key(`parties.${i}`)} padding="sm" data-testid={`party-${i}`}>
@@ -160,14 +195,42 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
               <SimpleGrid cols={{ base: 1, sm: 3 }}>
                 <TextInput label="Name" withAsterisk key={form.key(`parties.${i}.name`)} {...form.getInputProps(`parties.${i}.name`)} />
                 <TextInput label="E-mail" type="email" key={form.key(`parties.${i}.email`)} {...form.getInputProps(`parties.${i}.email`)} />
-                <Select label="Role" data={roleOptions} allowDeselect={false} key={form.key(`parties.${i}.role`)} {...form.getInputProps(`parties.${i}.role`)} />
+                <Select
+                  label="Role"
+                  data={roleOptions}
+                  allowDeselect={false}
+                  key={form.key(`parties.${i}.role`)}
+                  {...form.getInputProps(`parties.${i}.role`)}
+                />
               </SimpleGrid>
-              <Checkbox label="Send an invitation to join" key={form.key(`parties.${i}.invite`)} {...form.getInputProps(`parties.${i}.invite`, { type: 'checkbox' })} />
+              <Checkbox
+                label="Send an invitation to join"
+                key={form.key(`parties.${i}.invite`)}
+                {...form.getInputProps(`parties.${i}.invite`, { type: 'checkbox' })}
+              />
               {withTerms && (
                 <SimpleGrid cols={3}>
-                  <NumberInput label="Weight" min={0} allowDecimal={false} key={form.key(`parties.${i}.weight`)} {...form.getInputProps(`parties.${i}.weight`)} />
-                  <NumberInput label="Fixed count" min={0} allowDecimal={false} key={form.key(`parties.${i}.fixedCount`)} {...form.getInputProps(`parties.${i}.fixedCount`)} />
-                  <NumberInput label="Pick order" min={1} allowDecimal={false} key={form.key(`parties.${i}.pickOrder`)} {...form.getInputProps(`parties.${i}.pickOrder`)} />
+                  <NumberInput
+                    label="Weight"
+                    min={0}
+                    allowDecimal={false}
+                    key={form.key(`parties.${i}.weight`)}
+                    {...form.getInputProps(`parties.${i}.weight`)}
+                  />
+                  <NumberInput
+                    label="Fixed count"
+                    min={0}
+                    allowDecimal={false}
+                    key={form.key(`parties.${i}.fixedCount`)}
+                    {...form.getInputProps(`parties.${i}.fixedCount`)}
+                  />
+                  <NumberInput
+                    label="Pick order"
+                    min={1}
+                    allowDecimal={false}
+                    key={form.key(`parties.${i}.pickOrder`)}
+                    {...form.getInputProps(`parties.${i}.pickOrder`)}
+                  />
                 </SimpleGrid>
               )}
             </Stack>
@@ -182,7 +245,11 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
         <Title order={3} size="h4" mt="sm">
           Terms
         </Title>
-        <Switch label="Propose terms now (partners accept them on the project page)" key={form.key('withTerms')} {...form.getInputProps('withTerms', { type: 'checkbox' })} />
+        <Switch
+          label="Propose terms now (partners accept them on the project page)"
+          key={form.key('withTerms')}
+          {...form.getInputProps('withTerms', { type: 'checkbox' })}
+        />
         {withTerms && (
           <Stack>
             <Text size="sm" c="dimmed">
@@ -196,9 +263,27 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
             <SimpleGrid cols={{ base: 1, sm: 3 }}>
               <NumberInput label="Price per spiderling" min={0} decimalScale={2} key={form.key('price')} {...form.getInputProps('price')} />
               <Select label="Currency" data={CURRENCIES} searchable allowDeselect={false} key={form.key('currency')} {...form.getInputProps('currency')} />
-              <Select label="If the project fails" data={failureOptions} allowDeselect={false} key={form.key('failureClause')} {...form.getInputProps('failureClause')} />
-              <Select label="Handed over at" data={handOverOptions} allowDeselect={false} key={form.key('handOverStage')} {...form.getInputProps('handOverStage')} />
-              <Select label="Shipping" data={shippingOptions} allowDeselect={false} key={form.key('shippingPaidBy')} {...form.getInputProps('shippingPaidBy')} />
+              <Select
+                label="If the project fails"
+                data={failureOptions}
+                allowDeselect={false}
+                key={form.key('failureClause')}
+                {...form.getInputProps('failureClause')}
+              />
+              <Select
+                label="Handed over at"
+                data={handOverOptions}
+                allowDeselect={false}
+                key={form.key('handOverStage')}
+                {...form.getInputProps('handOverStage')}
+              />
+              <Select
+                label="Shipping"
+                data={shippingOptions}
+                allowDeselect={false}
+                key={form.key('shippingPaidBy')}
+                {...form.getInputProps('shippingPaidBy')}
+              />
             </SimpleGrid>
           </Stack>
         )}

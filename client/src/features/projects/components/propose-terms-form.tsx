@@ -89,7 +89,8 @@ export function ProposeTermsForm({ projectId, members, base }: { projectId: stri
         <form onSubmit={submit} noValidate>
           <Stack>
             <Text size="sm" c="dimmed">
-              Shares are each party&apos;s weight over the sum of weights. A fixed count is taken off the top before the split. Partners must accept a new version before it is in force.
+              Shares are each party&apos;s weight over the sum of weights. A fixed count is taken off the top before the split. Partners must accept a new
+              version before it is in force.
             </Text>
             <Table.ScrollContainer minWidth={420}>
               <Table verticalSpacing={4}>
@@ -106,13 +107,31 @@ export function ProposeTermsForm({ projectId, members, base }: { projectId: stri
                     <Table.Tr key={l.memberId}>
                       <Table.Td>{l.name}</Table.Td>
                       <Table.Td>
-                        <NumberInput aria-label={`Weight of ${l.name}`} min={0} allowDecimal={false} key={form.key(`lines.${i}.weight`)} {...form.getInputProps(`lines.${i}.weight`)} />
+                        <NumberInput
+                          aria-label={`Weight of ${l.name}`}
+                          min={0}
+                          allowDecimal={false}
+                          key={form.key(`lines.${i}.weight`)}
+                          {...form.getInputProps(`lines.${i}.weight`)}
+                        />
                       </Table.Td>
                       <Table.Td>
-                        <NumberInput aria-label={`Fixed count of ${l.name}`} min={0} allowDecimal={false} key={form.key(`lines.${i}.fixedCount`)} {...form.getInputProps(`lines.${i}.fixedCount`)} />
+                        <NumberInput
+                          aria-label={`Fixed count of ${l.name}`}
+                          min={0}
+                          allowDecimal={false}
+                          key={form.key(`lines.${i}.fixedCount`)}
+                          {...form.getInputProps(`lines.${i}.fixedCount`)}
+                        />
                       </Table.Td>
                       <Table.Td>
-                        <NumberInput aria-label={`Pick order of ${l.name}`} min={1} allowDecimal={false} key={form.key(`lines.${i}.pickOrder`)} {...form.getInputProps(`lines.${i}.pickOrder`)} />
+                        <NumberInput
+                          aria-label={`Pick order of ${l.name}`}
+                          min={1}
+                          allowDecimal={false}
+                          key={form.key(`lines.${i}.pickOrder`)}
+                          {...form.getInputProps(`lines.${i}.pickOrder`)}
+                        />
                       </Table.Td>
                     </Table.Tr>
                   ))}
@@ -122,9 +141,27 @@ export function ProposeTermsForm({ projectId, members, base }: { projectId: stri
             <SimpleGrid cols={{ base: 1, sm: 3 }}>
               <NumberInput label="Price per spiderling" min={0} decimalScale={2} key={form.key('price')} {...form.getInputProps('price')} />
               <Select label="Currency" data={CURRENCIES} searchable key={form.key('currency')} {...form.getInputProps('currency')} />
-              <Select label="If the project fails" data={failureOptions} allowDeselect={false} key={form.key('failureClause')} {...form.getInputProps('failureClause')} />
-              <Select label="Handed over at" data={handOverOptions} allowDeselect={false} key={form.key('handOverStage')} {...form.getInputProps('handOverStage')} />
-              <Select label="Shipping" data={shippingOptions} allowDeselect={false} key={form.key('shippingPaidBy')} {...form.getInputProps('shippingPaidBy')} />
+              <Select
+                label="If the project fails"
+                data={failureOptions}
+                allowDeselect={false}
+                key={form.key('failureClause')}
+                {...form.getInputProps('failureClause')}
+              />
+              <Select
+                label="Handed over at"
+                data={handOverOptions}
+                allowDeselect={false}
+                key={form.key('handOverStage')}
+                {...form.getInputProps('handOverStage')}
+              />
+              <Select
+                label="Shipping"
+                data={shippingOptions}
+                allowDeselect={false}
+                key={form.key('shippingPaidBy')}
+                {...form.getInputProps('shippingPaidBy')}
+              />
               <TextInput label="Note to partners" key={form.key('note')} {...form.getInputProps('note')} />
             </SimpleGrid>
             <FormActions message={message} loading={propose.isPending} submitLabel="Propose this version" />
@@ -134,4 +171,3 @@ export function ProposeTermsForm({ projectId, members, base }: { projectId: stri
     </Stack>
   );
 }
-

@@ -26,11 +26,14 @@ export function TermsPanel({ projectId, me, myRole, members }: TermsPanelProps) 
 
   return (
     <Stack data-testid="terms-panel">
-      {shown.length === 0 && <Text c="dimmed">No terms yet. {myRole === 'owner' ? 'Propose how the brood is split below.' : 'The keeper has not proposed any.'}</Text>}
+      {shown.length === 0 && (
+        <Text c="dimmed">No terms yet. {myRole === 'owner' ? 'Propose how the brood is split below.' : 'The keeper has not proposed any.'}</Text>
+      )}
       {shown.map((v) => {
         const myLine = v.lines.find((l) => l.memberId === myMember?.id);
         const mayAccept = v.status === 'proposed' && myRole === 'partner' && !!myLine && myLine.mustAccept && !myLine.accepted;
-        const outsideAwaiting = v.status === 'proposed' && myRole === 'owner' ? v.awaiting.filter((a) => !members.find((m) => m.id === a.memberId)?.hasAccount) : [];
+        const outsideAwaiting =
+          v.status === 'proposed' && myRole === 'owner' ? v.awaiting.filter((a) => !members.find((m) => m.id === a.memberId)?.hasAccount) : [];
         return (
           <Card key={v.number} withBorder data-testid={`terms-version-${v.number}`}>
             <Group justify="space-between" mb="xs" wrap="wrap">
@@ -74,7 +77,10 @@ export function TermsPanel({ projectId, me, myRole, members }: TermsPanelProps) 
                           </Text>
                         </Table.Td>
                         <Table.Td>
-                          {l.share} <Text span size="xs" c="dimmed">(weight {l.weight})</Text>
+                          {l.share}{' '}
+                          <Text span size="xs" c="dimmed">
+                            (weight {l.weight})
+                          </Text>
                         </Table.Td>
                         <Table.Td visibleFrom="sm">{l.fixedCount > 0 ? l.fixedCount : '—'}</Table.Td>
                         <Table.Td visibleFrom="sm">#{l.pickOrder}</Table.Td>
@@ -134,9 +140,7 @@ export function TermsPanel({ projectId, me, myRole, members }: TermsPanelProps) 
           </Card>
         );
       })}
-      {myRole === 'owner' && (
-        <ProposeTermsForm projectId={projectId} members={members} base={latest} />
-      )}
+      {myRole === 'owner' && <ProposeTermsForm projectId={projectId} members={members} base={latest} />}
     </Stack>
   );
 }

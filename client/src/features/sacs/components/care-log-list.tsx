@@ -75,7 +75,17 @@ function StrikeButton({ sacId, entry }: { sacId: string; entry: CareLogEntryResp
 }
 
 /** The care log of a sac, newest first; wrong entries stay visible, struck through, with the reason. */
-export function CareLogList({ sacId, timeZone, temperatureUnit, canStrike }: { sacId: string; timeZone: string; temperatureUnit: TemperatureUnit; canStrike: boolean }) {
+export function CareLogList({
+  sacId,
+  timeZone,
+  temperatureUnit,
+  canStrike,
+}: {
+  sacId: string;
+  timeZone: string;
+  temperatureUnit: TemperatureUnit;
+  canStrike: boolean;
+}) {
   const log = useCareLog(sacId);
   if (log.isPending) return <Text c="dimmed">Loading the care log…</Text>;
   if (log.isError) return <Alert color="clay">{log.error.message}</Alert>;

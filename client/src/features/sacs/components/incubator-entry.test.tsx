@@ -44,8 +44,19 @@ const sac: SacResponse = {
 };
 
 const entry = (kind: string) => ({
-  id: 'e1', sacId: 's1', kind, at: '2026-12-01T09:30:00Z', author: { id: 'u', name: 'Ines' }, temperatureC: null, entered: null,
-  humidityPercent: null, stage: null, text: null, strikes: null, struck: null, createdAt: '2026-12-01T09:30:00Z',
+  id: 'e1',
+  sacId: 's1',
+  kind,
+  at: '2026-12-01T09:30:00Z',
+  author: { id: 'u', name: 'Ines' },
+  temperatureC: null,
+  entered: null,
+  humidityPercent: null,
+  stage: null,
+  text: null,
+  strikes: null,
+  struck: null,
+  createdAt: '2026-12-01T09:30:00Z',
 });
 
 describe('IncubatorEntry', () => {
@@ -69,7 +80,10 @@ describe('IncubatorEntry', () => {
       'fetch',
       stubFetch({
         'GET /api/auth/csrf': () => ({ status: 200, body: { csrfToken: 't' } }),
-        'POST /api/sacs/s1/log': () => ({ status: 403, body: { statusCode: 403, error: 'Forbidden', message: 'Only the keeper and the caretaker can log on this sac.' } }),
+        'POST /api/sacs/s1/log': () => ({
+          status: 403,
+          body: { statusCode: 403, error: 'Forbidden', message: 'Only the keeper and the caretaker can log on this sac.' },
+        }),
       }).fetchStub,
     );
     renderWithProviders(<IncubatorEntry sac={sac} timeZone="Europe/Berlin" temperatureUnit="C" />);
@@ -105,7 +119,9 @@ describe('IncubatorEntry', () => {
 
   it('offers the pull instead of a roll while the sac is with the mother', () => {
     vi.stubGlobal('fetch', stubFetch({}).fetchStub);
-    renderWithProviders(<IncubatorEntry sac={{ ...sac, pulled: false, pulledAt: null, pulledOn: null, roll: null, incubatorCaution: null }} timeZone="UTC" temperatureUnit="C" />);
+    renderWithProviders(
+      <IncubatorEntry sac={{ ...sac, pulled: false, pulledAt: null, pulledOn: null, roll: null, incubatorCaution: null }} timeZone="UTC" temperatureUnit="C" />,
+    );
     expect(screen.queryByRole('button', { name: 'Rolled now' })).not.toBeInTheDocument();
     expect(screen.getByRole('button', { name: 'Pulled now, into the incubator' })).toBeInTheDocument();
     expect(screen.getByTestId('heat-caution')).toHaveTextContent(/thermostat/);

@@ -1,6 +1,14 @@
 import { Alert, Box, Button, Group, NumberInput, Select, Stack, Text, TextInput } from '@mantine/core';
 import { useRef, useState } from 'react';
-import { BROOD_STAGES, fahrenheitToCelsius, formatTemperature, type BroodStage, type CareLogRequest, type SacResponse, type TemperatureUnit } from '@broodsilk/shared';
+import {
+  BROOD_STAGES,
+  fahrenheitToCelsius,
+  formatTemperature,
+  type BroodStage,
+  type CareLogRequest,
+  type SacResponse,
+  type TemperatureUnit,
+} from '@broodsilk/shared';
 import { formatInstant } from '@/lib/dates';
 import { isApiError } from '@/lib/api-error';
 import { useAddCareLogEntry } from '../api/care-log';
@@ -106,7 +114,10 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
       </Stack>
 
       <Alert color="amber" variant="light" title="Heat sources" data-testid="heat-caution" role="note">
-        <Text size="sm">{sac.incubatorCaution ?? 'Heat only behind a thermostat, away from bedding and cables, and never left running unattended without checks: unregulated heat can cook eggs and start fires. Local law and licensed practice come first.'}</Text>
+        <Text size="sm">
+          {sac.incubatorCaution ??
+            'Heat only behind a thermostat, away from bedding and cables, and never left running unattended without checks: unregulated heat can cook eggs and start fires. Local law and licensed practice come first.'}
+        </Text>
         {speciesCautions.map((c) => (
           <Text size="sm" mt={4} key={c} fw={600}>
             {c}
@@ -115,7 +126,15 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
       </Alert>
 
       <Group grow align="flex-end">
-        <NumberInput label={`Temperature (°${temperatureUnit})`} size="lg" decimalScale={1} inputMode="decimal" value={temperature} onChange={setTemperature} description={tempHint ? `= ${tempHint}` : undefined} />
+        <NumberInput
+          label={`Temperature (°${temperatureUnit})`}
+          size="lg"
+          decimalScale={1}
+          inputMode="decimal"
+          value={temperature}
+          onChange={setTemperature}
+          description={tempHint ? `= ${tempHint}` : undefined}
+        />
         <NumberInput label="Humidity (%)" size="lg" min={0} max={100} allowDecimal={false} inputMode="numeric" value={humidity} onChange={setHumidity} />
       </Group>
       <Button size="lg" variant="light" onClick={saveReadings} loading={add.isPending}>
@@ -142,7 +161,13 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
       </Group>
       <Group grow align="flex-end">
         <Select label="Stage now" size="lg" data={stageOptions} value={stage} onChange={setStage} placeholder={broodLabel(sac.broodStage)} />
-        <Button size="lg" variant="default" disabled={!stage} onClick={() => send([{ kind: 'stage', stage: stage as BroodStage }], 'Stage')} loading={add.isPending}>
+        <Button
+          size="lg"
+          variant="default"
+          disabled={!stage}
+          onClick={() => send([{ kind: 'stage', stage: stage as BroodStage }], 'Stage')}
+          loading={add.isPending}
+        >
           Set stage
         </Button>
       </Group>
@@ -175,7 +200,16 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
             Pulled now, into the incubator
           </Button>
         ) : (
-          <Button fullWidth size="xl" h={76} fz={24} onClick={() => send([{ kind: 'roll' }], 'Roll')} loading={add.isPending} disabled={!roll} data-testid="rolled-now">
+          <Button
+            fullWidth
+            size="xl"
+            h={76}
+            fz={24}
+            onClick={() => send([{ kind: 'roll' }], 'Roll')}
+            loading={add.isPending}
+            disabled={!roll}
+            data-testid="rolled-now"
+          >
             Rolled now
           </Button>
         )}

@@ -10,11 +10,21 @@ import classes from './incubator-list.module.css';
 const URGENCY = { overdue: 0, due: 1, 'due-soon': 2, upcoming: 3 } as const;
 
 /** Every sac of these projects that is being rolled, the most urgent first, as big tap targets. */
-export function IncubatorList({ projects, timeZone, hrefFor }: { projects: { id: string; title: string }[]; timeZone: string; hrefFor: (sacId: string) => string }) {
+export function IncubatorList({
+  projects,
+  timeZone,
+  hrefFor,
+}: {
+  projects: { id: string; title: string }[];
+  timeZone: string;
+  hrefFor: (sacId: string) => string;
+}) {
   const results = useQueries({ queries: projects.map((p) => sacQueries.ofProject(p.id)) });
   const failed = results.find((r) => r.isError);
   const pending = results.some((r) => r.isPending);
-  const rows: { sac: SacResponse; title: string }[] = results.flatMap((r, i) => (r.data ?? []).filter((s) => s.roll).map((sac) => ({ sac, title: projects[i]!.title })));
+  const rows: { sac: SacResponse; title: string }[] = results.flatMap((r, i) =>
+    (r.data ?? []).filter((s) => s.roll).map((sac) => ({ sac, title: projects[i]!.title })),
+  );
   rows.sort((a, b) => URGENCY[a.sac.roll!.status] - URGENCY[b.sac.roll!.status] || (a.sac.roll!.due < b.sac.roll!.due ? -1 : 1));
 
   if (failed?.error) return <Alert color="clay">{failed.error.message}</Alert>;

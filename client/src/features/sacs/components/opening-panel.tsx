@@ -94,7 +94,9 @@ export function OpeningPanel({ sacId, timeZone, canEdit }: { sacId: string; time
     initialValues: { healthyEggs: 0, eggsWithLegs: 0, nymphs: 0, darkEggs: 0, spoiledEggs: 0, keptBack: 0, notes: '' },
     validate: {
       keptBack: (v, values) =>
-        Number(v) > Number(values.healthyEggs) + Number(values.eggsWithLegs) + Number(values.nymphs) ? 'No more than the viable ones (healthy eggs, eggs with legs, nymphs).' : null,
+        Number(v) > Number(values.healthyEggs) + Number(values.eggsWithLegs) + Number(values.nymphs)
+          ? 'No more than the viable ones (healthy eggs, eggs with legs, nymphs).'
+          : null,
     },
   });
   if (opening.isPending) return <Text c="dimmed">Loading…</Text>;

@@ -26,7 +26,12 @@ export function RecordSacForm({ projectId, timeZone, onDone }: { projectId: stri
     initialValues: { layDate: null, where: 'mother', pulledOn: null, pulledTime: '08:00', notes: '' },
     validate: {
       layDate: (v) => (!v ? 'On which day was the sac laid?' : v > today ? 'The lay date cannot be in the future.' : null),
-      pulledOn: (v, values) => (values.where === 'pulled' && !v ? 'On which day was it pulled?' : v && values.layDate && v < values.layDate ? 'The pull comes after the lay date.' : null),
+      pulledOn: (v, values) =>
+        values.where === 'pulled' && !v
+          ? 'On which day was it pulled?'
+          : v && values.layDate && v < values.layDate
+            ? 'The pull comes after the lay date.'
+            : null,
     },
   });
   const [where, setWhere] = useState<Values['where']>('mother');
@@ -50,7 +55,15 @@ export function RecordSacForm({ projectId, timeZone, onDone }: { projectId: stri
   return (
     <form onSubmit={submit} noValidate>
       <Stack maw={480}>
-        <DateInput label="Lay date" placeholder="YYYY-MM-DD" valueFormat="YYYY-MM-DD" maxDate={today} withAsterisk key={form.key('layDate')} {...form.getInputProps('layDate')} />
+        <DateInput
+          label="Lay date"
+          placeholder="YYYY-MM-DD"
+          valueFormat="YYYY-MM-DD"
+          maxDate={today}
+          withAsterisk
+          key={form.key('layDate')}
+          {...form.getInputProps('layDate')}
+        />
         <Stack gap={4}>
           <Text size="sm" fw={500}>
             Where is the sac?
@@ -66,7 +79,14 @@ export function RecordSacForm({ projectId, timeZone, onDone }: { projectId: stri
         </Stack>
         {where === 'pulled' && (
           <Group grow align="flex-start">
-            <DateInput label="Pulled on" placeholder="YYYY-MM-DD" valueFormat="YYYY-MM-DD" maxDate={today} key={form.key('pulledOn')} {...form.getInputProps('pulledOn')} />
+            <DateInput
+              label="Pulled on"
+              placeholder="YYYY-MM-DD"
+              valueFormat="YYYY-MM-DD"
+              maxDate={today}
+              key={form.key('pulledOn')}
+              {...form.getInputProps('pulledOn')}
+            />
             <TimeInput label="At" key={form.key('pulledTime')} {...form.getInputProps('pulledTime')} />
           </Group>
         )}

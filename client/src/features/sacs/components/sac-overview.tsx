@@ -81,11 +81,21 @@ export function SacOverview({ sac, timeZone, canEdit }: { sac: SacResponse; time
           </>
         ) : (
           <Text size="sm" c="dimmed" data-testid="roll-state">
-            {!sac.pulled ? 'No rolls while the sac is with the mother.' : sac.rollingOff ? 'Rolling is turned off.' : 'The young are free-living; no more rolls.'}
+            {!sac.pulled
+              ? 'No rolls while the sac is with the mother.'
+              : sac.rollingOff
+                ? 'Rolling is turned off.'
+                : 'The young are free-living; no more rolls.'}
           </Text>
         )}
         {canEdit && sac.pulled && (
-          <Switch mt="xs" label="Roll this sac" checked={!sac.rollingOff} onChange={(e) => change({ rollingOff: !e.currentTarget.checked })} disabled={update.isPending} />
+          <Switch
+            mt="xs"
+            label="Roll this sac"
+            checked={!sac.rollingOff}
+            onChange={(e) => change({ rollingOff: !e.currentTarget.checked })}
+            disabled={update.isPending}
+          />
         )}
       </Card>
       {canEdit && sac.outcome === 'in-progress' && (
@@ -98,7 +108,13 @@ export function SacOverview({ sac, timeZone, canEdit }: { sac: SacResponse; time
             onChange={setFailure}
             w={220}
           />
-          <Button variant="light" color="clay" disabled={!failure} loading={update.isPending} onClick={() => change({ outcome: 'failed', failureReason: failure as SacFailureReason })}>
+          <Button
+            variant="light"
+            color="clay"
+            disabled={!failure}
+            loading={update.isPending}
+            onClick={() => change({ outcome: 'failed', failureReason: failure as SacFailureReason })}
+          >
             Record as failed
           </Button>
         </Group>

@@ -35,7 +35,9 @@ export function pullWindowSentence(sac: SacResponse): string {
     case 'open':
       return `Open since ${formatDate(w.opensOn)}; closes ${formatDate(w.closesOn)}, in ${days(w.daysUntilCloses ?? 0)}.`;
     case 'closing':
-      return w.daysUntilCloses === 0 ? `Closes today, ${formatDate(w.closesOn)}.` : `Closing: last day ${formatDate(w.closesOn)}, in ${days(w.daysUntilCloses ?? 0)}.`;
+      return w.daysUntilCloses === 0
+        ? `Closes today, ${formatDate(w.closesOn)}.`
+        : `Closing: last day ${formatDate(w.closesOn)}, in ${days(w.daysUntilCloses ?? 0)}.`;
     case 'past':
       return `Closed ${formatDate(w.closesOn)}, ${days(w.daysPastClose)} ago.`;
   }

@@ -25,7 +25,13 @@ export function PasswordForm() {
       )}
     >
       <Stack maw={480}>
-        <PasswordInput label="Current password" autoComplete="current-password" withAsterisk key={form.key('currentPassword')} {...form.getInputProps('currentPassword')} />
+        <PasswordInput
+          label="Current password"
+          autoComplete="current-password"
+          withAsterisk
+          key={form.key('currentPassword')}
+          {...form.getInputProps('currentPassword')}
+        />
         <PasswordInput label="New password" autoComplete="new-password" withAsterisk key={form.key('newPassword')} {...form.getInputProps('newPassword')} />
         <Button type="submit" variant="light" loading={change.isPending} w="fit-content">
           Change password

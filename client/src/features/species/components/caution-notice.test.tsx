@@ -11,7 +11,11 @@ describe('CautionNotice', () => {
     const pokie = speciesResponse({
       id: 'p',
       scientificName: 'Poecilotheria metallica',
-      cautions: { urticatingHairs: { value: false, source: cited }, medicallySignificantVenom: { value: true, source: cited }, cautionText: 'Fast and defensive.' },
+      cautions: {
+        urticatingHairs: { value: false, source: cited },
+        medicallySignificantVenom: { value: true, source: cited },
+        cautionText: 'Fast and defensive.',
+      },
       tradeListing: { value: 'CITES Appendix II', source: cited },
     });
     renderWithProviders(<CautionNotice species={pokie} />);

@@ -21,7 +21,9 @@ export function CautionNotice({ species }: { species: CautionSpecies }) {
   const { urticatingHairs, medicallySignificantVenom } = species.cautions;
   const venom = medicallySignificantVenom.value;
   const listing = species.tradeListing.value;
-  const title = [urticatingHairs.value && 'urticating hairs', venom && 'medically significant venom', listing && 'protected-trade listing'].filter(Boolean).join(', ');
+  const title = [urticatingHairs.value && 'urticating hairs', venom && 'medically significant venom', listing && 'protected-trade listing']
+    .filter(Boolean)
+    .join(', ');
   return (
     <Alert
       role="note"
@@ -37,20 +39,28 @@ export function CautionNotice({ species }: { species: CautionSpecies }) {
         <List size="sm" spacing={4}>
           {urticatingHairs.value && (
             <List.Item>
-              <b>Urticating hairs.</b> Wear eye protection when working in the enclosure, do not rub your eyes, and wash your hands afterwards. Hairs
-              in an eye need a doctor. <Text span size="xs" c="dimmed">(Source: {sourceLabel(urticatingHairs.source)})</Text>
+              <b>Urticating hairs.</b> Wear eye protection when working in the enclosure, do not rub your eyes, and wash your hands afterwards. Hairs in an eye
+              need a doctor.{' '}
+              <Text span size="xs" c="dimmed">
+                (Source: {sourceLabel(urticatingHairs.source)})
+              </Text>
             </List.Item>
           )}
           {venom && (
             <List.Item>
-              <b>Medically significant venom.</b> A bite can bring severe pain and muscle cramps lasting days. Work with tools rather than hands, keep
-              the enclosure escape-proof, and seek medical help after a bite. <Text span size="xs" c="dimmed">(Source: {sourceLabel(medicallySignificantVenom.source)})</Text>
+              <b>Medically significant venom.</b> A bite can bring severe pain and muscle cramps lasting days. Work with tools rather than hands, keep the
+              enclosure escape-proof, and seek medical help after a bite.{' '}
+              <Text span size="xs" c="dimmed">
+                (Source: {sourceLabel(medicallySignificantVenom.source)})
+              </Text>
             </List.Item>
           )}
           {listing && (
             <List.Item>
               <b>{listing}.</b> Selling, lending, shipping or breeding this species may need papers or permits; the rules of your country decide.{' '}
-              <Text span size="xs" c="dimmed">(Source: {sourceLabel(species.tradeListing.source)})</Text>
+              <Text span size="xs" c="dimmed">
+                (Source: {sourceLabel(species.tradeListing.source)})
+              </Text>
             </List.Item>
           )}
         </List>

@@ -126,7 +126,9 @@ export function SpeciesCatalogue() {
             {data?.total ?? 0} species
           </Text>
           <SimpleGrid cols={{ base: 1, sm: 2, lg: 3 }}>
-            {data?.items.map((s) => <SpeciesCard key={s.id} species={s} query={q} />)}
+            {data?.items.map((s) => (
+              <SpeciesCard key={s.id} species={s} query={q} />
+            ))}
           </SimpleGrid>
           {pages > 1 && <Pagination total={pages} value={page} onChange={setPage} size="lg" />}
         </>

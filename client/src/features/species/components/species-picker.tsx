@@ -21,9 +21,20 @@ export interface SpeciesPickerProps {
  * Picks a species from the catalogue by its current or a former name. A hit through a former
  * name says so ("formerly Brachypelma vagans"), since keepers still buy and sell under old names.
  */
-export function SpeciesPicker({ label = 'Species', defaultValue = null, defaultName = null, onChange, error, withAsterisk, description, size = 'sm' }: SpeciesPickerProps) {
+export function SpeciesPicker({
+  label = 'Species',
+  defaultValue = null,
+  defaultName = null,
+  onChange,
+  error,
+  withAsterisk,
+  description,
+  size = 'sm',
+}: SpeciesPickerProps) {
   const [value, setValue] = useState<string | null>(defaultValue);
-  const [picked, setPicked] = useState<{ value: string; label: string } | null>(defaultValue && defaultName ? { value: defaultValue, label: defaultName } : null);
+  const [picked, setPicked] = useState<{ value: string; label: string } | null>(
+    defaultValue && defaultName ? { value: defaultValue, label: defaultName } : null,
+  );
   const [search, setSearch] = useState(defaultName ?? '');
   const [debounced] = useDebouncedValue(search.trim(), 250);
   // Searching for the name already chosen would only list that species again.
