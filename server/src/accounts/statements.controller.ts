@@ -1,7 +1,7 @@
 import { Controller, Get, Header, Param, ParseUUIDPipe, Post, Res } from '@nestjs/common';
 import type { Response } from 'express';
 import type { StatementResponse } from '@broodsilk/shared';
-import { CurrentProject, ProjectRoles } from '../common/decorators/project-roles.decorator';
+import { CurrentProject, ProjectRoles } from '../projects/project-roles.decorator';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { StatementsService } from './statements.service';
 

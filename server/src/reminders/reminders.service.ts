@@ -8,7 +8,7 @@ import { Animal } from '../animals/animal.entity';
 import { maleClockOf } from '../animals/animals.mapper';
 import { Sac } from '../sacs/sac.entity';
 import { SAC_POPULATE, SacViewsService } from '../sacs/sac-views.service';
-import { Clock } from '../sacs/clock';
+import { Clock } from '../common/clock';
 import { Notification } from './notification.entity';
 import { sacCandidates, type Candidate } from './reminder-candidates';
 

@@ -1,8 +1,8 @@
 import { Body, Controller, Get, Param, ParseUUIDPipe, Post } from '@nestjs/common';
 import type { CareLogEntryResponse } from '@broodsilk/shared';
-import { AnyProjectMember, CurrentProject, ProjectFrom, ProjectRoles } from '../common/decorators/project-roles.decorator';
+import { AnyProjectMember, CurrentProject, ProjectFrom, ProjectRoles } from '../projects/project-roles.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { CareLogService } from './care-log.service';
 import { CareLogEntryDto } from './dto/care-log-entry.dto';
