@@ -1,5 +1,6 @@
 import { Alert, Anchor, Badge, Grid, Group, Stack, Text } from '@mantine/core';
 import type { QueryClient } from '@tanstack/react-query';
+import { isProjectOpen } from '@broodsilk/shared';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '@/components/ui/page-header';
 import { PageLoader } from '@/components/ui/page-loader';
@@ -36,7 +37,7 @@ export function Component() {
   if (project.isError) return <Alert color="clay">{project.error.message}</Alert>;
   const p = project.data;
   const isOwner = p.myRole === 'owner';
-  const live = p.stage.stage !== 'ended-early' && p.stage.stage !== 'closed';
+  const live = isProjectOpen(p.stage.stage);
 
   return (
     <Stack>
