@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { PROJECT_STAGE_LINE } from '../breeding/project-stage.js';
 import { ANIMAL_STATUSES } from '../collection/animals.types.js';
 import { PROJECT_ROLES } from './project.types.js';
-import { isProjectOpen, mayReadTerms, mayStartProject } from './project-rules.js';
+import { isProjectOpen, isDealParty, mayStartProject } from './project-rules.js';
 
 // Product rules (PRODUCT.md), not an outside source: the expected sets are written out by hand.
 describe('project rules', () => {
@@ -16,7 +16,7 @@ describe('project rules', () => {
     expect(ANIMAL_STATUSES.filter((status) => mayStartProject({ status }))).toEqual(['active', 'on-loan']);
   });
 
-  it('the owner and partners read the terms, a caretaker does not', () => {
-    expect(PROJECT_ROLES.filter(mayReadTerms)).toEqual(['owner', 'partner']);
+  it('the owner and partners are parties to the deal (terms, account), a caretaker is not', () => {
+    expect(PROJECT_ROLES.filter(isDealParty)).toEqual(['owner', 'partner']);
   });
 });

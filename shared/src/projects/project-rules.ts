@@ -15,9 +15,10 @@ export function mayStartProject(animal: { status: AnimalStatus }): boolean {
   return PROJECT_READY_STATUSES.includes(animal.status);
 }
 
-/** Roles that see the terms (the deal is between the owner and the partners; a caretaker is not party to it). */
-export const TERMS_READERS: readonly ProjectRole[] = ['owner', 'partner'];
+/** The deal (terms, shares, the account) is between the owner and the partners; a caretaker looks after the sacs but is no party to it. */
+export const DEAL_PARTY_ROLES: readonly ProjectRole[] = ['owner', 'partner'];
 
-export function mayReadTerms(role: ProjectRole): boolean {
-  return TERMS_READERS.includes(role);
+/** Whether this role reads the terms and the account of the project. */
+export function isDealParty(role: ProjectRole): boolean {
+  return DEAL_PARTY_ROLES.includes(role);
 }

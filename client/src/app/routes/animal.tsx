@@ -3,7 +3,7 @@ import { useMediaQuery } from '@mantine/hooks';
 import { notifications } from '@mantine/notifications';
 import type { QueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
-import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
 import { formatMoney } from '@broodsilk/shared';
 import { paths } from '@/config/paths';
 import { formatDate } from '@/lib/dates';

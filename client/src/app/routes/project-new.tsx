@@ -1,7 +1,7 @@
 import { Alert, Anchor } from '@mantine/core';
 import { notifications } from '@mantine/notifications';
 import { mayStartProject } from '@broodsilk/shared';
-import { Link, useNavigate } from 'react-router-dom';
+import { Link, useNavigate } from 'react-router';
 import { PageHeader } from '@/components/ui/page-header';
 import { PageLoader } from '@/components/ui/page-loader';
 import { paths } from '@/config/paths';
