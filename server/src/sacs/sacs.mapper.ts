@@ -61,6 +61,6 @@ export function toSacResponse(sac: Sac, c: SacViewContext): SacResponse {
 
 /** What the project stage derivation wants to know about a sac. */
 export function toSacFact(sac: Sac): SacFact {
-  const outcome = sac.outcome !== 'failed' ? 'developing' : sac.failureReason === 'eaten' ? 'eaten' : 'failed';
-  return { id: sac.id, layDate: sac.layDate, pulledOn: sac.pulledOn ?? null, outcome, broodStage: sac.broodStage };
+  const fate = sac.outcome !== 'failed' ? 'developing' : sac.failureReason === 'eaten' ? 'eaten' : 'failed';
+  return { id: sac.id, layDate: sac.layDate, pulledOn: sac.pulledOn ?? null, fate, broodStage: sac.broodStage };
 }

@@ -37,7 +37,7 @@ export interface DerivedProjectStage {
   sacId?: string;
 }
 
-const isLive = (s: SacFact) => s.outcome === 'developing';
+const isLive = (s: SacFact) => s.fate === 'developing';
 const hasBrood = (s: SacFact) => isLive(s) && !!s.broodStage && isBroodStageAtLeast(s.broodStage, 'first-instar');
 const latest = <T>(items: readonly T[], date: (t: T) => string): T | undefined =>
   [...items].sort((a, b) => (date(a) < date(b) ? -1 : date(a) > date(b) ? 1 : 0)).at(-1);
@@ -91,7 +91,7 @@ export function deriveProjectStage(facts: ProjectFacts): DerivedProjectStage {
     (p) => p.on,
   );
   if (!lastConnected) {
-    if (lastDead) return { ...withId('ended-early', lastDead), reason: lastDead.outcome === 'eaten' ? 'sac-eaten' : 'sac-failed' };
+    if (lastDead) return { ...withId('ended-early', lastDead), reason: lastDead.fate === 'eaten' ? 'sac-eaten' : 'sac-failed' };
     const lastPairing = latest(attempt, (p) => p.on);
     if (facts.maleDiedOn || lastPairing?.outcome === 'male-lost') return { stage: 'ended-early', reason: 'male-died' };
     return { stage: attempt.length > 0 ? 'paired' : 'planned' };

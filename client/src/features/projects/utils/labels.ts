@@ -29,12 +29,3 @@ export function stageText(stage: ProjectStage, reason?: EndedEarlyReason): strin
   if (stage === 'ended-early') return reason ? `Ended early: ${ENDED_EARLY_LABELS[reason]}` : 'Ended early';
   return STAGE_LABELS[stage];
 }
-
-/** Minor units to "€12.50" in the given currency. */
-export function formatMoney(minor: number, currency: string): string {
-  try {
-    return new Intl.NumberFormat('en-GB', { style: 'currency', currency }).format(minor / 100);
-  } catch {
-    return `${(minor / 100).toFixed(2)} ${currency}`;
-  }
-}
