@@ -1,15 +1,15 @@
-import { IsOptional } from 'class-validator';
 import type { AnimalSex, UpdateAnimalRequest } from '@broodsilk/shared';
 import { CreateAnimalDto } from './create-animal.dto';
+import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
 /** Every field of the create form, each optional; the same checks apply to what is sent. */
 export class UpdateAnimalDto extends CreateAnimalDto implements UpdateAnimalRequest {
-  @IsOptional()
+  @IsOptionalNonNull()
   declare speciesId: string;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   declare label: string;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   declare sex: AnimalSex;
 }

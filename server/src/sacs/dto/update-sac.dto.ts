@@ -1,13 +1,14 @@
 import { IsIn, IsOptional, ValidateIf } from 'class-validator';
 import { SAC_FAILURE_REASONS, SAC_OUTCOMES, type SacFailureReason, type SacOutcomeState, type UpdateSacRequest } from '@broodsilk/shared';
 import { CreateSacDto } from './create-sac.dto';
+import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
 /** Every create field, each optional (same checks), plus the outcome. */
 export class UpdateSacDto extends CreateSacDto implements UpdateSacRequest {
-  @IsOptional()
+  @IsOptionalNonNull()
   declare layDate: string;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsIn(SAC_OUTCOMES, { message: `The outcome must be one of: ${SAC_OUTCOMES.join(', ')}.` })
   outcome?: SacOutcomeState;
 
