@@ -1,5 +1,6 @@
 import { stringify } from 'csv-stringify/sync';
 import type { StatementResponse } from '@broodsilk/shared';
+import { neutraliseCell } from '../common/csv/formula-cells';
 import { formatMinor } from './money-format';
 
 export const STATEMENT_CSV_COLUMNS = [
@@ -23,7 +24,8 @@ export const STATEMENT_CSV_COLUMNS = [
 ] as const;
 
 /**
- * The statement as RFC 4180 CSV (CRLF, quoted where needed, one header row): the party's ledger
+ * The statement as RFC 4180 CSV (CRLF, quoted where needed, one header row; text that a spreadsheet
+ * would run as a formula starts with an apostrophe, see formula-cells): the party's ledger
  * lines, then summary lines (`kind` share, handed-over, sold, cashed-out, still-owed, debt) with
  * an empty `line`.
  */
@@ -68,5 +70,5 @@ export function statementCsv(s: StatementResponse): string {
       amount: formatMinor(d.amountMinor, d.currency),
       currency: d.currency || currency,
     });
-  return stringify(rows, { header: true, columns: [...STATEMENT_CSV_COLUMNS], record_delimiter: 'windows' });
+  return stringify(rows, { header: true, columns: [...STATEMENT_CSV_COLUMNS], record_delimiter: 'windows', cast: { string: neutraliseCell } });
 }
