@@ -4,8 +4,12 @@ import type { StatementResponse } from '@broodsilk/shared';
 import { CurrentProject, ProjectRoles } from '../common/decorators/project-roles.decorator';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { StatementsService } from './statements.service';
+import { PerUserLimit } from '../common/per-user-limit/per-user-limit';
 
 const send = (res: Response, type: string, f: { filename: string; body: string | Buffer }) => res.type(type).attachment(f.filename).send(f.body);
+
+/** Statements e-mailed per keeper per hour: one to each party of a few projects, not a mail cannon. */
+export const STATEMENT_EMAILS_PER_HOUR = 10;
 
 @Controller('projects/:projectId/statements')
 export class StatementsController {
@@ -33,6 +37,7 @@ export class StatementsController {
 
   @Post(':memberId/email')
   @ProjectRoles('owner', 'partner')
+  @PerUserLimit({ what: 'statement e-mails', limit: STATEMENT_EMAILS_PER_HOUR, windowMinutes: 60 })
   email(@CurrentProject() a: ProjectAccess, @Param('memberId', ParseUUIDPipe) id: string): Promise<{ sentTo: string }> {
     return this.statements.email(a, id);
   }
