@@ -7,7 +7,7 @@ import { validationExceptionFactory } from './common/filters/validation-exceptio
 import { CSRF } from './common/csrf/csrf.provider';
 import { bodyParsers } from './common/body/body-parsers';
 import { answerMiddlewareErrors } from './common/filters/middleware-errors';
-import { RefuseNulPipe } from './common/pipes/refuse-nul.pipe';
+import { RefuseUnstorableTextPipe } from './common/pipes/refuse-unstorable-text.pipe';
 import type { Csrf } from './common/csrf/csrf';
 
 /** Everything main.ts and the tests must share, so tests exercise the real app. */
@@ -29,7 +29,7 @@ export function configureApp(app: INestApplication): INestApplication {
   app.use(...bodyParsers());
   app.use(answerMiddlewareErrors);
   app.useGlobalPipes(
-    new RefuseNulPipe(),
+    new RefuseUnstorableTextPipe(),
     new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true, exceptionFactory: validationExceptionFactory }),
   );
   app.enableShutdownHooks();

@@ -68,6 +68,19 @@ describe('NUL characters (PostgreSQL text cannot hold U+0000)', () => {
   });
 });
 
+describe('lone UTF-16 surrogates (no UTF-8 form; PostgreSQL would get U+FFFD instead)', () => {
+  it('are refused, even in a field validated as an e-mail address', async () => {
+    const project = await createProject(t.app, t.orm, keeper);
+    const body = await refused(() =>
+      http()
+        .post(`/api/projects/${project.id}/members`)
+        .set('Authorization', keeper.bearer)
+        .send({ name: 'Lena', email: 'lena\ud800@example.test', role: 'partner' }),
+    );
+    expect(body.details).toEqual([{ field: 'email', message: expect.stringMatching(/broken character/) }]);
+  });
+});
+
 describe('null where null means nothing', () => {
   it('is refused for a field that cannot be empty, and the value stays', async () => {
     const body = await refused(() => http().patch('/api/users/me').set('Authorization', keeper.bearer).send({ displayName: null }));

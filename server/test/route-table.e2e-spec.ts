@@ -4,19 +4,14 @@
  * keeper's record gets 404, by Bearer token and by session cookie with its CSRF token alike.
  * Row counts per table before and after prove the refused requests wrote nothing.
  */
-import sharp from 'sharp';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CSRF_HEADER, addDays, todayIn } from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper, type SignedIn } from './support/users';
 import { registeredRoutes, type RegisteredRoute } from './support/route-list';
-import { createAnimal, speciesId } from './support/fixtures/collection';
-import { createProject } from './support/projects';
-import { createSac } from './support/sacs';
+import { ownedRecords, urlFor } from './support/owned-records';
 import { rowCounts } from './support/row-counts';
-import { Notification } from '../src/reminders/notification.entity';
-import { User } from '../src/users/user.entity';
 
 /** Routes anyone may call: signing in and up, password reset, health, and links that carry their own secret. */
 const PUBLIC = new Set([
@@ -43,7 +38,7 @@ const BY_TOKEN = new Set(['POST /api/invitations/:token/accept']);
 
 let t: TestApp;
 let owner: SignedIn;
-let stranger: SignedIn;
+let stranger: SignedIn & { password: string };
 let strangerCookie: { agent: ReturnType<typeof request.agent>; csrf: string };
 /** A record of `owner` for each kind of path parameter. */
 const ids: Record<string, string> = {};
@@ -58,78 +53,15 @@ beforeAll(async () => {
   const login = await agent.post('/api/auth/login').send({ email: stranger.user.email, password: stranger.password }).expect(200);
   strangerCookie = { agent, csrf: login.body.csrfToken as string };
 
-  const animal = await createAnimal(t.app, owner, {
-    speciesId: await speciesId(t.orm, 'Tliltocatl vagans'),
-    label: 'Table-1',
-    sex: 'female',
-    maturity: 'mature',
-  });
-  const molt = await request(t.app.getHttpServer())
-    .post(`/api/animals/${animal.id}/molts`)
-    .set('Authorization', owner.bearer)
-    .send({ moltedOn: addDays(todayIn('UTC', new Date()), -3) });
-  const png = await sharp({ create: { width: 8, height: 8, channels: 3, background: '#884422' } })
-    .png()
-    .toBuffer();
-  const photo = await request(t.app.getHttpServer()).post(`/api/animals/${animal.id}/photos`).set('Authorization', owner.bearer).attach('file', png, 'a.png');
-  const project = await createProject(t.app, t.orm, owner);
-  const sac = await createSac(t.app, owner, project.id, { layDate: addDays(todayIn('UTC', new Date()), -5) });
-  const em = t.orm.em.fork();
-  const note = em.create(Notification, {
-    user: em.getReference(User, owner.user.id),
-    kind: 'roll-due',
-    title: 'Roll',
-    body: 'Roll the sac.',
-    subjectType: 'sac',
-    subjectId: sac.id,
-  });
-  await em.flush();
-  Object.assign(ids, {
-    species: await speciesId(t.orm, 'Tliltocatl vagans'),
-    animal: animal.id,
-    molt: molt.body.id as string,
-    photo: photo.body.id as string,
-    project: project.id,
-    member: project.members[0].id,
-    sac: sac.id,
-    notification: note.id,
-    entry: '00000000-0000-4000-8000-000000000000',
-    version: '1',
-  });
-  expect(Object.values(ids).every(Boolean), JSON.stringify(ids)).toBe(true);
+  Object.assign(ids, await ownedRecords(t, owner));
   routes = registeredRoutes(t.app).filter((r) => r.path !== '/api' && !r.path.includes('{*'));
 });
 afterAll(async () => {
   await t.close();
 });
 
-/** The owner's record for each `:param`, chosen by the path segment before it. */
-function urlFor(r: RegisteredRoute): string {
-  return r.path.replace(/(\w+(?:-\w+)*)\/:(\w+)/g, (_, segment: string, param: string) => {
-    const kind: Record<string, string> = {
-      animals: 'animal',
-      molts: 'molt',
-      photos: 'photo',
-      projects: 'project',
-      members: 'member',
-      statements: 'member',
-      sacs: 'sac',
-      notifications: 'notification',
-      entries: 'entry',
-      terms: 'version',
-      species: 'species',
-      invitations: 'token',
-      calendar: 'token',
-    };
-    const k = kind[segment];
-    if (!k) throw new Error(`${key(r)}: no fixture for :${param} after "${segment}"; add one to urlFor`);
-    const value = k === 'token' ? '00000000-0000-4000-8000-000000000000' : ids[k];
-    return `${segment}/${encodeURIComponent(value)}`;
-  });
-}
-
 const call = (r: RegisteredRoute, http: ReturnType<typeof request> | ReturnType<typeof request.agent>) =>
-  http[r.method.toLowerCase() as 'get'](urlFor(r)).set('Content-Type', 'application/json');
+  http[r.method.toLowerCase() as 'get'](urlFor(r, ids)).set('Content-Type', 'application/json');
 
 describe('the route table', () => {
   it('has the routes this spec names (public and special cases exist)', () => {

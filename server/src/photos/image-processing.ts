@@ -1,5 +1,5 @@
 import { PayloadTooLargeException, UnsupportedMediaTypeException } from '@nestjs/common';
-import sharp from 'sharp';
+import sharp, { type Metadata } from 'sharp';
 
 /** Formats we take, as sharp reads them from the bytes (the file name and declared type are not trusted). */
 const ACCEPTED = new Set(['jpeg', 'png', 'webp', 'heif', 'avif', 'tiff']);
@@ -23,7 +23,7 @@ const refuse = () => new UnsupportedMediaTypeException({ message: 'That file is 
  * re-encoding writes no metadata at all, so GPS position, camera and times are gone.
  */
 export async function processImage(input: Buffer): Promise<ProcessedImage> {
-  let meta: sharp.Metadata;
+  let meta: Metadata;
   try {
     meta = await sharp(input).metadata();
   } catch {
