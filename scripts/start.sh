@@ -36,7 +36,7 @@ export SMTP_HOST=127.0.0.1 SMTP_PORT="${SMTP_PORT:-1025}" MAILDEV_WEB_PORT="${MA
 export S3_PORT="${S3_PORT:-4569}" S3RVER_DIR="$ROOT/.data/s3"
 export S3_ENDPOINT="http://127.0.0.1:$S3_PORT" S3_REGION=us-east-1 S3_BUCKET=broodsilk-photos S3_ACCESS_KEY_ID=S3RVER S3_SECRET_ACCESS_KEY=S3RVER S3_FORCE_PATH_STYLE=true
 export STRIPE_API_PORT="${STRIPE_API_PORT:-12111}" STRIPE_API_HOST=127.0.0.1 STRIPE_API_PROTOCOL=http
-export STRIPE_SECRET_KEY="${STRIPE_SECRET_KEY:-sk_test_broodsilk_local}" STRIPE_WEBHOOK_SECRET="${STRIPE_WEBHOOK_SECRET:-whsec_broodsilk_local}"
+export STRIPE_SECRET_KEY="${STRIPE_SECRET_KEY:-sk_test_broodsilk_local}" STRIPE_WEBHOOK_SECRET="${STRIPE_WEBHOOK_SECRET:-whsec_$(local_secret "$SECRETS/payment-webhook")}"
 export PAYMENT_WEBHOOK_URL="http://127.0.0.1:$PORT/api/webhooks/payments"
 export CLIENT_DIST="$ROOT/client/dist"
 
