@@ -14,7 +14,7 @@ PGPORT="$(free_port)"
 PG_FSYNC=off pg_start "$WORK/pg" "$PGPORT"
 pg_ensure_db "$WORK/pg" "$PGPORT" broodsilk_bench
 export DATABASE_URL="postgres://app@127.0.0.1:$PGPORT/broodsilk_bench"
-export JWT_SECRET="$(node -e "console.log(require('crypto').randomBytes(32).toString('hex'))")" CSRF_SECRET="$(node -e "console.log(require('crypto').randomBytes(32).toString('hex'))")"
+export JWT_SECRET="$(node -e "console.log(require('crypto').randomBytes(32).toString('hex'))")" CSRF_SECRET="$(node -e "console.log(require('crypto').randomBytes(32).toString('hex'))")" CALENDAR_SECRET="$(node -e "console.log(require('crypto').randomBytes(32).toString('hex'))")"
 export SMTP_PORT="$(free_port)" MAILDEV_WEB_PORT="$(free_port)" S3_PORT="$(free_port)" S3RVER_DIR="$WORK/s3" STRIPE_API_PORT="$(free_port)"
 export S3_ENDPOINT="http://127.0.0.1:$S3_PORT" S3_REGION=us-east-1 S3_BUCKET=broodsilk-photos S3_ACCESS_KEY_ID=S3RVER S3_SECRET_ACCESS_KEY=S3RVER S3_FORCE_PATH_STYLE=true
 export STRIPE_SECRET_KEY=sk_test_bench STRIPE_WEBHOOK_SECRET=whsec_bench STRIPE_API_HOST=127.0.0.1 STRIPE_API_PROTOCOL=http

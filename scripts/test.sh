@@ -32,6 +32,7 @@ pg_ensure_db "$WORK/pg" "$PGPORT" broodsilk_e2e_test
 export TEST_DATABASE_URL="postgres://app@127.0.0.1:$PGPORT/broodsilk_test"
 export JWT_SECRET="$(node -e "console.log(require('crypto').randomBytes(32).toString('hex'))")"
 export CSRF_SECRET="$(node -e "console.log(require('crypto').randomBytes(32).toString('hex'))")"
+export CALENDAR_SECRET="$(node -e "console.log(require('crypto').randomBytes(32).toString('hex'))")"
 export SMTP_HOST=127.0.0.1 SMTP_PORT="$(free_port)" MAILDEV_WEB_PORT="$(free_port)"
 export MAILDEV_API="http://127.0.0.1:$MAILDEV_WEB_PORT"
 export S3_PORT="$(free_port)" S3RVER_DIR="$WORK/s3"

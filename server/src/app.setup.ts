@@ -5,13 +5,14 @@ import helmet from 'helmet';
 import { Logger } from 'nestjs-pino';
 import { validationExceptionFactory } from './common/filters/validation-exception.factory';
 import { CSRF } from './common/csrf/csrf.provider';
+import { parseTrustProxy } from './config/trust-proxy';
 import type { Csrf } from './common/csrf/csrf';
 
 /** Everything main.ts and the tests must share, so tests exercise the real app. */
 export function configureApp(app: INestApplication): INestApplication {
   const express = app as NestExpressApplication;
   express.useLogger(app.get(Logger));
-  express.set('trust proxy', 'loopback');
+  express.set('trust proxy', parseTrustProxy(process.env.TRUST_PROXY));
   express.disable('x-powered-by');
   app.setGlobalPrefix('api');
   app.use(

@@ -13,6 +13,7 @@ import { RegisterDto } from './dto/register.dto';
 import { LoginDto } from './dto/login.dto';
 import { PasswordResetConfirmDto, PasswordResetDto } from './dto/password-reset.dto';
 import { clearSessionCookie, startSession } from './session-cookie';
+import { SignInRequestGuard } from './sign-in-request.guard';
 import type { AuthUser } from './auth-user';
 
 @Controller('auth')
@@ -24,14 +25,14 @@ export class AuthController {
   ) {}
 
   @Public()
-  @UseGuards(ThrottlerGuard)
+  @UseGuards(ThrottlerGuard, SignInRequestGuard)
   @Post('register')
   async register(@Body() dto: RegisterDto, @Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<LoginResponse> {
     return this.startSession(await this.auth.register(dto), req, res);
   }
 
   @Public()
-  @UseGuards(ThrottlerGuard)
+  @UseGuards(ThrottlerGuard, SignInRequestGuard)
   @HttpCode(200)
   @Post('login')
   async login(@Body() dto: LoginDto, @Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<LoginResponse> {
@@ -40,9 +41,9 @@ export class AuthController {
 
   @HttpCode(204)
   @Post('logout')
-  async logout(@CurrentUser() user: AuthUser, @Res({ passthrough: true }) res: Response): Promise<void> {
+  async logout(@CurrentUser() user: AuthUser, @Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<void> {
     await this.auth.logout(user.id);
-    clearSessionCookie(res, this.app.secureCookies);
+    clearSessionCookie(req, res, this.app.secureCookies);
   }
 
   @Get('me')

@@ -10,6 +10,7 @@ import { User } from '../users/user.entity';
 import { toMe } from '../users/users.mapper';
 import { dummyPasswordHash, hashPassword, verifyPassword } from './password-hasher';
 import { PasswordResetToken } from './password-reset-token.entity';
+import { revokeFeeds } from '../calendar/feed-token';
 import type { JwtPayload } from './auth-user';
 import type { RegisterDto } from './dto/register.dto';
 import type { LoginDto } from './dto/login.dto';
@@ -104,6 +105,8 @@ export class AuthService {
       const user = row.user.getEntity();
       user.passwordHash = await hashPassword(password);
       user.tokenVersion += 1;
+      // Whoever took over the account may have copied the feed URL too.
+      await revokeFeeds(em, user.id);
     });
   }
 
