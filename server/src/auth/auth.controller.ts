@@ -1,6 +1,5 @@
 import { Body, Controller, Get, HttpCode, Inject, Post, Req, Res, UseGuards } from '@nestjs/common';
 import { ConfigType } from '@nestjs/config';
-import { ThrottlerGuard } from '@nestjs/throttler';
 import type { Request, Response } from 'express';
 import type { CsrfResponse, LoginResponse, Me } from '@broodsilk/shared';
 import { appConfig } from '../config/app.config';
@@ -14,6 +13,7 @@ import { LoginDto } from './dto/login.dto';
 import { PasswordResetConfirmDto, PasswordResetDto } from './dto/password-reset.dto';
 import { clearSessionCookie, startSession } from './session-cookie';
 import { SignInRequestGuard } from './sign-in-request.guard';
+import { SignInAddressGuard } from './sign-in-address.guard';
 import type { AuthUser } from './auth-user';
 
 @Controller('auth')
@@ -25,18 +25,18 @@ export class AuthController {
   ) {}
 
   @Public()
-  @UseGuards(ThrottlerGuard, SignInRequestGuard)
+  @UseGuards(SignInAddressGuard, SignInRequestGuard)
   @Post('register')
   async register(@Body() dto: RegisterDto, @Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<LoginResponse> {
     return this.startSession(await this.auth.register(dto), req, res);
   }
 
   @Public()
-  @UseGuards(ThrottlerGuard, SignInRequestGuard)
+  @UseGuards(SignInAddressGuard, SignInRequestGuard)
   @HttpCode(200)
   @Post('login')
   async login(@Body() dto: LoginDto, @Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<LoginResponse> {
-    return this.startSession(await this.auth.login(dto), req, res);
+    return this.startSession(await this.auth.login(dto, req.ip ?? 'unknown'), req, res);
   }
 
   @HttpCode(204)
@@ -59,7 +59,7 @@ export class AuthController {
   }
 
   @Public()
-  @UseGuards(ThrottlerGuard)
+  @UseGuards(SignInAddressGuard)
   @HttpCode(202)
   @Post('password-reset')
   async requestReset(@Body() dto: PasswordResetDto): Promise<{ message: string }> {
@@ -68,7 +68,7 @@ export class AuthController {
   }
 
   @Public()
-  @UseGuards(ThrottlerGuard)
+  @UseGuards(SignInAddressGuard)
   @HttpCode(204)
   @Post('password-reset/confirm')
   async confirmReset(@Body() dto: PasswordResetConfirmDto): Promise<void> {
