@@ -33,3 +33,5 @@ export * from './dashboard/dashboard.types.js';
 export * from './dashboard/calendar.types.js';
 export * from './dashboard/notifications.types.js';
 export * from './vocabulary/labels.js';
+export * from './money/money.js';
+export * from './projects/project-rules.js';

@@ -1,7 +1,6 @@
 import { stringify } from 'csv-stringify/sync';
-import type { StatementResponse } from '@broodsilk/shared';
+import { formatMoneyCode, type StatementResponse } from '@broodsilk/shared';
 import { neutraliseCell } from '../common/csv/formula-cells';
-import { formatMinor } from './money-format';
 
 export const STATEMENT_CSV_COLUMNS = [
   'line',
@@ -41,7 +40,7 @@ export function statementCsv(s: StatementResponse): string {
     to: e.to?.name ?? '',
     count: e.count ?? (e.kind === 'arrival' ? `${e.arrivedAlive} alive, ${e.arrivedDead} dead` : ''),
     amount_minor: e.amountMinor ?? e.priceMinor ?? '',
-    amount: e.amountMinor != null ? formatMinor(e.amountMinor, e.currency!) : e.priceMinor != null ? formatMinor(e.priceMinor, e.currency!) : '',
+    amount: e.amountMinor != null ? formatMoneyCode(e.amountMinor, e.currency!) : e.priceMinor != null ? formatMoneyCode(e.priceMinor, e.currency!) : '',
     currency: e.currency ?? '',
     method: e.method ?? '',
     carrier: e.carrier ?? '',
@@ -67,7 +66,7 @@ export function statementCsv(s: StatementResponse): string {
       from: d.fromName,
       to: d.toName,
       amount_minor: d.amountMinor,
-      amount: formatMinor(d.amountMinor, d.currency),
+      amount: formatMoneyCode(d.amountMinor, d.currency),
       currency: d.currency || currency,
     });
   return stringify(rows, { header: true, columns: [...STATEMENT_CSV_COLUMNS], record_delimiter: 'windows', cast: { string: neutraliseCell } });

@@ -1,6 +1,6 @@
 import { IsInt, Max, Min } from 'class-validator';
 import type { ConfirmEntryRequest } from '@broodsilk/shared';
-import { IsCalendarDate } from '../../animals/dto/is-calendar-date.validator';
+import { IsCalendarDate } from '../../common/validators/is-calendar-date.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
 export class ConfirmEntryDto implements ConfirmEntryRequest {

@@ -13,7 +13,7 @@ import {
   type Maturity,
   type OwnerKind,
 } from '@broodsilk/shared';
-import { IsCalendarDate } from './is-calendar-date.validator';
+import { IsCalendarDate } from '../../common/validators/is-calendar-date.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
 const trim = ({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value);
