@@ -24,7 +24,7 @@ describe('isInstant', () => {
     ['0000-01-01T00:00:00Z', 'year 0 (PostgreSQL counts 1 BC, no year 0)'],
     ['2026-03-01', 'a date is not an instant'],
     [20260301, 'not a string'],
-  ])('refuses %s (%s)', (value) => {
+  ] as [unknown, string][])('refuses %s (%s)', (value) => {
     expect(isInstant(value)).toBe(false);
   });
 });
