@@ -15,6 +15,6 @@ export function hashToken(token: string): string {
 }
 
 /** Revokes every live feed of a user (their URLs then 404); a password reset does this, as it ends sessions. */
-export async function revokeFeeds(em: EntityManager, userId: string): Promise<void> {
-  await em.nativeUpdate(CalendarFeed, { user: userId, revokedAt: null }, { revokedAt: new Date() });
+export async function revokeFeeds(em: EntityManager, userId: string, at: Date): Promise<void> {
+  await em.nativeUpdate(CalendarFeed, { user: userId, revokedAt: null }, { revokedAt: at });
 }

@@ -7,6 +7,7 @@ import { EntriesService } from '../accounts/entries.service';
 import { Project } from '../projects/project.entity';
 import { PayoutAccountsService } from './payout-accounts.service';
 import { SettlementCheckout } from './settlement-checkout.entity';
+import { Clock } from '../common/clock';
 
 /** Event types that may mean a checkout session was paid; each is checked with the provider. */
 const SESSION_EVENTS = new Set(['checkout.session.completed', 'checkout.session.async_payment_succeeded']);
@@ -19,6 +20,7 @@ export class WebhookService {
 
   constructor(
     private readonly em: EntityManager,
+    private readonly clock: Clock,
     @Inject(STRIPE_CLIENT) private readonly stripe: Stripe,
     @Inject(paymentsConfig.KEY) private readonly config: PaymentsConfig,
     private readonly entries: EntriesService,
@@ -68,7 +70,7 @@ export class WebhookService {
       const mine = await tx.findOneOrFail(SettlementCheckout, checkout.id, { populate: ['fromParty', 'toParty'] });
       await this.entries.appendInTransaction(tx, await tx.findOneOrFail(Project, mine.project.id), {
         kind: 'money',
-        date: new Date().toISOString().slice(0, 10),
+        date: this.clock.now().toISOString().slice(0, 10),
         fromParty: mine.fromParty,
         toParty: mine.toParty,
         amountMinor: session.amount_total,

@@ -1,8 +1,9 @@
-import { IsEmail, IsNotEmpty, IsOptional, IsString, MaxLength } from 'class-validator';
+import { IsEmail, IsNotEmpty, IsString, MaxLength } from 'class-validator';
 import { IsAcceptablePassword } from './is-acceptable-password.validator';
 import { Transform } from 'class-transformer';
 import { type RegisterRequest } from '@broodsilk/shared';
 import { IsTimeZone } from '../../common/validators/is-time-zone.validator';
+import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
 export class RegisterDto implements RegisterRequest {
   @Transform(({ value }) => (typeof value === 'string' ? value.trim().toLowerCase() : value))
@@ -19,7 +20,7 @@ export class RegisterDto implements RegisterRequest {
   @MaxLength(80)
   displayName!: string;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsTimeZone()
   timeZone?: string;
 }
