@@ -13,13 +13,14 @@ import { AuthService } from './auth.service';
 import { JwtStrategy } from './strategies/jwt.strategy';
 import { PasswordResetToken } from './password-reset-token.entity';
 import { SignInLimits } from './sign-in-limits';
+import { RateLimitRow } from './rate-limit-row.entity';
 import { SignInAddressGuard } from './sign-in-address.guard';
 
 @Module({
   imports: [
     ConfigModule.forFeature(appConfig),
     ConfigModule.forFeature(databaseConfig),
-    MikroOrmModule.forFeature([User, PasswordResetToken]),
+    MikroOrmModule.forFeature([User, PasswordResetToken, RateLimitRow]),
     PassportModule,
     MailModule,
     JwtModule.registerAsync({

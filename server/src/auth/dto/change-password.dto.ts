@@ -1,5 +1,5 @@
 import { IsString, MaxLength } from 'class-validator';
-import { IsAcceptablePassword } from '../../auth/dto/is-acceptable-password.validator';
+import { IsAcceptablePassword } from './is-acceptable-password.validator';
 import { type ChangePasswordRequest } from '@broodsilk/shared';
 
 export class ChangePasswordDto implements ChangePasswordRequest {
