@@ -37,3 +37,14 @@ describe('architecture and client lint rules are on', { timeout: 30_000 }, () =>
     expect(await lint('client/src/lib/clean.ts')).toEqual([]);
   });
 });
+
+// The root configuration also guards the server's ground floor; its fixture sits beside the client's.
+describe('server architecture lint rules are on', () => {
+  it('common/ importing a server feature is an error', async () => {
+    expect(await lint('server/src/common/reads-feature.ts')).toContain('import-x/no-restricted-paths');
+  });
+
+  it('a server feature importing the ground floor passes', async () => {
+    expect(await lint('server/src/sacs/uses-ground-floor.ts')).toEqual([]);
+  });
+});

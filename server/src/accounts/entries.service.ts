@@ -1,7 +1,7 @@
 import { BadRequestException, ConflictException, ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
 import type { ConfirmEntryRequest, CreateEntryRequest, LedgerEntryResponse } from '@broodsilk/shared';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { ActivityService } from '../activity/activity.service';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { Project } from '../projects/project.entity';
@@ -13,11 +13,13 @@ import { toEntryResponses } from './accounts.mapper';
 import { draftEntry, type EntryDraft } from './entry-rules';
 import { LedgerEntryRow } from './ledger-entry.entity';
 import { describeEntry } from './entry-words';
+import { Clock } from '../common/clock';
 
 @Injectable()
 export class EntriesService {
   constructor(
     private readonly em: EntityManager,
+    private readonly clock: Clock,
     private readonly lock: AccountLock,
     private readonly activity: ActivityService,
   ) {}
@@ -33,7 +35,7 @@ export class EntriesService {
 
   /** The recipient confirms a hand-over (arrival counts) or the payee confirms a payment. */
   async confirm(access: ProjectAccess, user: AuthUser, entryId: string, dto: ConfirmEntryRequest): Promise<LedgerEntryResponse> {
-    return this.write(access, async (_tx, view) => confirmationDraft(view, access, user.id, entryId, dto), user);
+    return this.write(access, async (_tx, view) => confirmationDraft(view, access, user.id, entryId, dto, this.clock.now()), user);
   }
 
   /** Appends a row the payment provider reported (no user); used by the webhook inside its own transaction. */
@@ -103,10 +105,10 @@ function assertConfirmer(access: ProjectAccess, userId: string, party: NonNullab
   if (!mine) throw new ForbiddenException(`Only ${what} confirms this${party.user ? '' : ' (or the owner, for a party without an account)'}.`);
 }
 
-function confirmationDraft(view: AccountView, access: ProjectAccess, userId: string, entryId: string, dto: ConfirmEntryRequest): EntryDraft {
+function confirmationDraft(view: AccountView, access: ProjectAccess, userId: string, entryId: string, dto: ConfirmEntryRequest, now: Date): EntryDraft {
   const row = view.data.rows.find((r) => r.id === entryId);
   if (!row) throw new NotFoundException('There is no such entry in this project.');
-  const date = dto.date ?? new Date().toISOString().slice(0, 10);
+  const date = dto.date ?? now.toISOString().slice(0, 10);
   const inForce = new Set(view.balances.inForce);
   if (row.kind === 'hand-over') {
     assertConfirmer(access, userId, row.party!, 'the party who received the hand-over');

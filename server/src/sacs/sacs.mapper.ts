@@ -17,7 +17,7 @@ export interface SacViewContext {
   currentCount: number | null;
 }
 
-/** The roll state of a sac (null when rolling does not apply), by PRODUCT.md's roll rule. */
+/** The roll state of a sac (null when rolling does not apply), by the roll rule in docs/product.md, Data rules. */
 export function rollOf(sac: Sac, now: Date, lastRollAt: Date | null): SacResponse['roll'] {
   const pulled = !!sac.pulledAt && sac.outcome === 'in-progress';
   const state = rollState({

@@ -1,14 +1,15 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
 import { todayIn, type SacResponse } from '@broodsilk/shared';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { ActivityService } from '../activity/activity.service';
 import { User } from '../users/user.entity';
 import { Sac } from './sac.entity';
 import { SAC_POPULATE, SacViewsService } from './sac-views.service';
-import { Clock } from './clock';
-import { assertSacDates, fieldError } from './sac-rules';
+import { Clock } from '../common/clock';
+import { assertSacDates } from './sac-rules';
+import { fieldError } from '../common/field-errors';
 import type { CreateSacDto } from './dto/create-sac.dto';
 import type { UpdateSacDto } from './dto/update-sac.dto';
 

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import type { PairingFact, SacFact } from './pairing.types.js';
 import { PROJECT_STAGE_LINE, deriveProjectStage, type ProjectFacts } from './project-stage.js';
 
-// Rules are our own (PRODUCT.md project stages); the female-molt rule follows TRADE-FACTS §5:
+// Rules are our own (docs/product.md, Project stages); the female-molt rule follows docs/trade-facts.md §5:
 // stored sperm is shed with a molt (tarantulaspider.net; reptarach.de). Dates are an invented scenario.
 const facts = (over: Partial<ProjectFacts> = {}): ProjectFacts => ({ pairings: [], femaleMolts: [], sacs: [], ...over });
 const paired = (on: string, outcome: PairingFact['outcome'] = 'connected'): PairingFact => ({ on, outcome });

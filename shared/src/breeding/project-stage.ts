@@ -55,7 +55,7 @@ const latest = <T>(items: readonly T[], date: (t: T) => string): T | undefined =
  *    - the male died, or the last pairing ended with the male lost → `ended-early` `male-died`;
  *    - any pairing attempt → `paired`; none → `planned`.
  * 6. With a connected pairing: a female molt on or after the last connected pairing (sperm is shed with
- *    the molt, TRADE-FACTS §5) → `ended-early` `female-molted`; otherwise → `waiting-for-sac`.
+ *    the molt, docs/trade-facts.md §5) → `ended-early` `female-molted`; otherwise → `waiting-for-sac`.
  *    A molt on the pairing day counts as after it. The male dying after connecting changes nothing.
  * `no-sac` is never derived: how long to wait is the keeper's call (see pairing warnings).
  */

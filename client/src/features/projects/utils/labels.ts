@@ -1,7 +1,7 @@
 import { ENDED_EARLY_LABELS, PROJECT_STAGE_LABELS } from '@broodsilk/shared';
 import type { EndedEarlyReason, FailureClause, PairingOutcome, ProjectRole, ProjectStage, ShippingPayer, WarningSeverity } from '@broodsilk/shared';
 
-/** The progress line in our own words (PRODUCT.md); the words live in shared/ so every screen agrees. */
+/** The progress line in our own words (docs/product.md, Project stages); the words live in shared/ so every screen agrees. */
 export const STAGE_LABELS = PROJECT_STAGE_LABELS;
 export { ENDED_EARLY_LABELS };
 

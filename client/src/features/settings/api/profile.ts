@@ -18,7 +18,7 @@ export function useUpdateProfile() {
 export function useChangePassword() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (body: ChangePasswordRequest) => api.patch<LoginResponse>('/users/me/password', body),
+    mutationFn: (body: ChangePasswordRequest) => api.patch<LoginResponse>('/auth/password', body),
     meta: { handlesErrors: true },
     onSuccess: (res) => {
       setCsrfToken(res.csrfToken);
