@@ -1,5 +1,6 @@
 import { Alert, Anchor, Button, Group, Stack } from '@mantine/core';
 import type { QueryClient } from '@tanstack/react-query';
+import { isHandsOn } from '@broodsilk/shared';
 import { Link, type LoaderFunctionArgs } from 'react-router';
 import { PageHeader } from '@/components/ui/page-header';
 import { PageLoader } from '@/components/ui/page-loader';
@@ -64,7 +65,7 @@ export function Component() {
       />
       <SacOverview sac={s} timeZone={me.timeZone} canEdit={isOwner} />
       <SectionCard title="Care log">
-        <CareLogList sacId={s.id} timeZone={me.timeZone} temperatureUnit={me.temperatureUnit} canStrike={role === 'owner' || role === 'caretaker'} />
+        <CareLogList sacId={s.id} timeZone={me.timeZone} temperatureUnit={me.temperatureUnit} canStrike={!!role && isHandsOn(role)} />
       </SectionCard>
       {s.pulled && (
         <SectionCard title="Opening">
@@ -73,7 +74,7 @@ export function Component() {
       )}
       {s.opened && (
         <SectionCard title="Brood">
-          <BroodCounts sacId={s.id} timeZone={me.timeZone} canRecord={isOwner || role === 'caretaker'} stage={s.broodStage} />
+          <BroodCounts sacId={s.id} timeZone={me.timeZone} canRecord={!!role && isHandsOn(role)} stage={s.broodStage} />
         </SectionCard>
       )}
     </Stack>
