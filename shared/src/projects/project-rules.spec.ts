@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { PROJECT_STAGE_LINE } from '../breeding/project-stage.js';
 import { ANIMAL_STATUSES } from '../collection/animals.types.js';
 import { PROJECT_ROLES } from './project.types.js';
-import { isProjectOpen, isDealParty, mayStartProject } from './project-rules.js';
+import { isDealParty, isHandsOn, isProjectOpen, mayStartProject } from './project-rules.js';
 
 // Product rules (PRODUCT.md), not an outside source: the expected sets are written out by hand.
 describe('project rules', () => {
@@ -14,6 +14,10 @@ describe('project rules', () => {
 
   it('only an active animal or one on loan may start a project', () => {
     expect(ANIMAL_STATUSES.filter((status) => mayStartProject({ status }))).toEqual(['active', 'on-loan']);
+  });
+
+  it('the owner and a caretaker look after the sacs, a partner does not', () => {
+    expect(PROJECT_ROLES.filter(isHandsOn)).toEqual(['owner', 'caretaker']);
   });
 
   it('the owner and partners are parties to the deal (terms, account), a caretaker is not', () => {

@@ -15,6 +15,13 @@ export function mayStartProject(animal: { status: AnimalStatus }): boolean {
   return PROJECT_READY_STATUSES.includes(animal.status);
 }
 
+/** Roles that look after the sacs (rolls, care log, brood counts): the owner and a caretaker, not a partner. */
+export const HANDS_ON_ROLES: readonly ProjectRole[] = ['owner', 'caretaker'];
+
+export function isHandsOn(role: ProjectRole): boolean {
+  return HANDS_ON_ROLES.includes(role);
+}
+
 /** The deal (terms, shares, the account) is between the owner and the partners; a caretaker looks after the sacs but is no party to it. */
 export const DEAL_PARTY_ROLES: readonly ProjectRole[] = ['owner', 'partner'];
 

@@ -7,9 +7,8 @@ export type BroodLossReason = (typeof BROOD_LOSS_REASONS)[number];
 /** Upper bound on any one count: far above the largest sacs reported (about 2000, docs/trade-facts.md §6). */
 export const BROOD_COUNT_MAX = 5000;
 
-export interface OpeningRequest {
-  /** Instant the sac was opened; defaults to now. */
-  openedAt?: string;
+/** What the keeper counts when a sac is opened; the same numbers go in and come back. */
+export interface OpeningCounts {
   healthyEggs: number;
   eggsWithLegs: number;
   nymphs: number;
@@ -18,19 +17,18 @@ export interface OpeningRequest {
   spoiledEggs: number;
   /** How many of the viable ones (healthy eggs, eggs with legs, nymphs) go back into incubation. */
   keptBack: number;
+}
+
+export interface OpeningRequest extends OpeningCounts {
+  /** Instant the sac was opened; defaults to now. */
+  openedAt?: string;
   notes?: string | null;
 }
 
-export interface OpeningResponse {
+export interface OpeningResponse extends OpeningCounts {
   id: string;
   sacId: string;
   openedAt: string;
-  healthyEggs: number;
-  eggsWithLegs: number;
-  nymphs: number;
-  darkEggs: number;
-  spoiledEggs: number;
-  keptBack: number;
   /** Healthy eggs + eggs with legs + nymphs: the brood's first alive count. */
   viable: number;
   total: number;

@@ -12,7 +12,7 @@ describe('isInstant', () => {
     expect(isInstant(value)).toBe(true);
   });
 
-  it.each([
+  it.each<[unknown, string]>([
     ['2026-02-30T00:00Z', 'no 30 February (RFC 3339 §5.7)'],
     ['2023-02-29T00:00Z', '2023 is no leap year (RFC 3339 Appendix C)'],
     ['2026-03-01T24:00Z', 'time-hour is 00-23 (RFC 3339 §5.6)'],

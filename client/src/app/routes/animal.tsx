@@ -19,13 +19,14 @@ import { CUSTODY_LABELS, MATURITY_LABELS, SEX_LABELS, SEX_SIGNS, STATUS_LABELS }
 import { speciesQueries, useSpecies } from '@/features/species/api/species';
 import { CautionNotice } from '@/features/species/components/caution-notice';
 import { SpeciesPicker } from '@/features/species/components/species-picker';
+import { preloadPanels } from '../preload';
 
 export const clientLoader =
   (qc: QueryClient) =>
   async ({ params }: LoaderFunctionArgs) => {
     const id = params.animalId!;
     const animal = await qc.ensureQueryData(animalQueries.detail(id));
-    await Promise.all([qc.prefetchQuery(moltQueries.list(id)), qc.prefetchQuery(speciesQueries.detail(animal.species.id))]);
+    await preloadPanels(qc.ensureQueryData(moltQueries.list(id)), qc.ensureQueryData(speciesQueries.detail(animal.species.id)));
     return null;
   };
 

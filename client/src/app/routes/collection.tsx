@@ -15,6 +15,7 @@ import { MatureMales } from '@/features/collection/components/mature-males';
 import { PAGE_SIZES, filtersFromParams, filtersToParams, type CollectionFilters as Filters } from '@/features/collection/utils/animal-view';
 import { speciesQueries, useSpecies } from '@/features/species/api/species';
 import { SpeciesPicker } from '@/features/species/components/species-picker';
+import { preloadPanels } from '../preload';
 
 /** The whole catalogue is small (tens of species): one request gives every former name. */
 const ALL_SPECIES = { limit: 200 } as const;
@@ -23,11 +24,8 @@ export const clientLoader =
   (qc: QueryClient) =>
   async ({ request }: LoaderFunctionArgs) => {
     const filters = filtersFromParams(new URL(request.url).searchParams);
-    await Promise.all([
-      qc.ensureQueryData(animalQueries.list(filters)),
-      qc.prefetchQuery(animalQueries.males()),
-      qc.prefetchQuery(speciesQueries.list(ALL_SPECIES)),
-    ]);
+    const panels = preloadPanels(qc.ensureQueryData(animalQueries.males()), qc.ensureQueryData(speciesQueries.list(ALL_SPECIES)));
+    await Promise.all([qc.ensureQueryData(animalQueries.list(filters)), panels]);
     return null;
   };
 

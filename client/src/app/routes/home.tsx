@@ -7,12 +7,14 @@ import { paths } from '@/config/paths';
 import { todayLabel } from '@/lib/today';
 import { useMe } from '@/features/auth/api/me';
 import { dashboardQueries, useDashboard } from '@/features/dashboard/api/dashboard';
+import { calendarQueries } from '@/features/dashboard/api/calendar-feed';
 import { CalendarFeedCard } from '@/features/dashboard/components/calendar-feed-card';
 import { DashboardView } from '@/features/dashboard/components/dashboard-view';
+import { preloadPanels } from '../preload';
 
 export const clientLoader = (qc: QueryClient) => async () => {
-  // Start loading early; the page shows its own loader and error.
-  void qc.prefetchQuery(dashboardQueries.today());
+  // Start loading early without waiting; the page shows its own loader and error.
+  void preloadPanels(qc.ensureQueryData(dashboardQueries.today()), qc.ensureQueryData(calendarQueries.feed()));
   return null;
 };
 

@@ -1,14 +1,14 @@
 import { Alert, Anchor, Group } from '@mantine/core';
-import { useQuery, type QueryClient } from '@tanstack/react-query';
-import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
+import type { QueryClient } from '@tanstack/react-query';
+import { Link, type LoaderFunctionArgs } from 'react-router';
 import type { ProjectResponse } from '@broodsilk/shared';
 import { PageLoader } from '@/components/ui/page-loader';
 import { paths } from '@/config/paths';
-import { useMe } from '@/features/auth/api/me';
 import { projectQueries } from '@/features/projects/api/projects';
-import { sacQueries, useSac } from '@/features/sacs/api/sacs';
+import { sacQueries } from '@/features/sacs/api/sacs';
 import { IncubatorEntry } from '@/features/sacs/components/incubator-entry';
 import { preloadPanels } from '../preload';
+import { useSacPage } from './use-sac-page';
 
 export const clientLoader =
   (qc: QueryClient) =>
@@ -30,10 +30,7 @@ function speciesCautions(project: ProjectResponse | undefined): string[] {
 }
 
 export function Component() {
-  const { sacId } = useParams() as { sacId: string };
-  const { data: me } = useMe();
-  const sac = useSac(sacId);
-  const project = useQuery({ ...projectQueries.detail(sac.data?.projectId ?? ''), enabled: !!sac.data });
+  const { sacId, me, sac, project } = useSacPage();
   if (!me || sac.isPending) return <PageLoader />;
   if (sac.isError) return <Alert color="clay">{sac.error.message}</Alert>;
   return (

@@ -1,22 +1,33 @@
 import { Alert, Stack } from '@mantine/core';
-import { isProjectOpen } from '@broodsilk/shared';
+import type { QueryClient } from '@tanstack/react-query';
+import { isHandsOn, isProjectOpen, type ProjectSummary } from '@broodsilk/shared';
 import { PageHeader } from '@/components/ui/page-header';
 import { PageLoader } from '@/components/ui/page-loader';
 import { paths } from '@/config/paths';
 import { useMe } from '@/features/auth/api/me';
-import { useProjects } from '@/features/projects/api/projects';
+import { projectQueries, useProjects } from '@/features/projects/api/projects';
+import { sacQueries } from '@/features/sacs/api/sacs';
 import { IncubatorList } from '@/features/sacs/components/incubator-list';
+import { preloadPanels } from '../preload';
+
+/** Open projects whose sacs this viewer looks after. */
+const incubatorProjects = (projects: ProjectSummary[]) => projects.filter((p) => isProjectOpen(p.stage.stage) && isHandsOn(p.myRole));
+
+export const clientLoader = (qc: QueryClient) => async () => {
+  const projects = await qc.ensureQueryData(projectQueries.list());
+  await preloadPanels(...incubatorProjects(projects).map((p) => qc.ensureQueryData(sacQueries.ofProject(p.id))));
+  return null;
+};
 
 export function Component() {
   const { data: me } = useMe();
   const projects = useProjects();
   if (!me || projects.isPending) return <PageLoader />;
   if (projects.isError) return <Alert color="clay">{projects.error.message}</Alert>;
-  const open = projects.data.filter((p) => isProjectOpen(p.stage.stage) && p.myRole !== 'partner');
   return (
     <Stack maw={520} mx="auto">
       <PageHeader title="Incubator" description="Tap a sac to log a roll, a reading or a check." />
-      <IncubatorList projects={open} timeZone={me.timeZone} hrefFor={paths.incubatorSac.href} />
+      <IncubatorList projects={incubatorProjects(projects.data)} timeZone={me.timeZone} hrefFor={paths.incubatorSac.href} />
     </Stack>
   );
 }

@@ -1,22 +1,23 @@
 import { Alert, Anchor, Button, Group, Stack } from '@mantine/core';
-import { useQuery, type QueryClient } from '@tanstack/react-query';
-import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
+import type { QueryClient } from '@tanstack/react-query';
+import { isHandsOn } from '@broodsilk/shared';
+import { Link, type LoaderFunctionArgs } from 'react-router';
 import { PageHeader } from '@/components/ui/page-header';
 import { PageLoader } from '@/components/ui/page-loader';
 import { formatDate } from '@/lib/dates';
 import { paths } from '@/config/paths';
-import { useMe } from '@/features/auth/api/me';
 import { projectQueries } from '@/features/projects/api/projects';
 import { broodQueries } from '@/features/sacs/api/brood';
 import { careLogQueries } from '@/features/sacs/api/care-log';
 import { openingQueries } from '@/features/sacs/api/opening';
-import { sacQueries, useSac } from '@/features/sacs/api/sacs';
+import { sacQueries } from '@/features/sacs/api/sacs';
 import { BroodCounts } from '@/features/sacs/components/brood-counts';
 import { CareLogList } from '@/features/sacs/components/care-log-list';
 import { OpeningPanel } from '@/features/sacs/components/opening-panel';
 import { SacOverview } from '@/features/sacs/components/sac-overview';
 import { SectionCard } from '@/components/ui/section-card';
 import { preloadPanels } from '../preload';
+import { useSacPage } from './use-sac-page';
 
 /** The sac first (a 404 goes to the error boundary), then its project and panels together; the opening and brood only once it is opened. */
 export const clientLoader =
@@ -37,10 +38,7 @@ export const clientLoader =
   };
 
 export function Component() {
-  const { sacId } = useParams() as { sacId: string };
-  const { data: me } = useMe();
-  const sac = useSac(sacId);
-  const project = useQuery({ ...projectQueries.detail(sac.data?.projectId ?? ''), enabled: !!sac.data });
+  const { me, sac, project } = useSacPage();
   if (!me || sac.isPending) return <PageLoader />;
   if (sac.isError) return <Alert color="clay">{sac.error.message}</Alert>;
   const s = sac.data;
@@ -67,7 +65,7 @@ export function Component() {
       />
       <SacOverview sac={s} timeZone={me.timeZone} canEdit={isOwner} />
       <SectionCard title="Care log">
-        <CareLogList sacId={s.id} timeZone={me.timeZone} temperatureUnit={me.temperatureUnit} canStrike={role === 'owner' || role === 'caretaker'} />
+        <CareLogList sacId={s.id} timeZone={me.timeZone} temperatureUnit={me.temperatureUnit} canStrike={!!role && isHandsOn(role)} />
       </SectionCard>
       {s.pulled && (
         <SectionCard title="Opening">
@@ -76,7 +74,7 @@ export function Component() {
       )}
       {s.opened && (
         <SectionCard title="Brood">
-          <BroodCounts sacId={s.id} timeZone={me.timeZone} canRecord={isOwner || role === 'caretaker'} stage={s.broodStage} />
+          <BroodCounts sacId={s.id} timeZone={me.timeZone} canRecord={!!role && isHandsOn(role)} stage={s.broodStage} />
         </SectionCard>
       )}
     </Stack>
