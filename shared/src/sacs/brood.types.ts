@@ -1,5 +1,6 @@
 import type { BroodStage } from '../breeding/brood-stage.js';
 import type { PhotoRef } from '../collection/animals.types.js';
+import type { AcknowledgedWarnings } from '../errors/plausibility.js';
 
 export const BROOD_LOSS_REASONS = ['died', 'failed-molt', 'cannibalism', 'mould', 'escaped', 'other'] as const;
 export type BroodLossReason = (typeof BROOD_LOSS_REASONS)[number];
@@ -19,6 +20,9 @@ export interface OpeningRequest {
   /** How many of the viable ones (healthy eggs, eggs with legs, nymphs) go back into incubation. */
   keptBack: number;
   notes?: string | null;
+  /** Correcting a recorded opening: its id (it stays, struck) and why it was wrong. */
+  corrects?: string;
+  reason?: string;
 }
 
 export interface OpeningResponse {
@@ -37,15 +41,26 @@ export interface OpeningResponse {
   notes: string | null;
   photos: PhotoRef[];
   recordedBy: { id: string; name: string };
+  /** The opening this one corrects, and why. */
+  corrects: string | null;
+  reason: string | null;
+  /** Earlier versions this one (or its predecessors) struck, newest first. */
+  struck: Omit<OpeningResponse, 'struck' | 'photos'>[];
 }
 
-export interface BroodCountRequest {
+export interface BroodCountRequest extends AcknowledgedWarnings {
+  /** Defaults to now; a correction defaults to the instant of the count it corrects. */
   at?: string;
   stage: BroodStage;
   alive: number;
   lost?: number;
   lossReason?: BroodLossReason;
   note?: string | null;
+  /** An estimate, not a count one by one. */
+  estimated?: boolean;
+  /** The id of the count this one corrects (it stays, struck); needs `reason`. */
+  corrects?: string;
+  reason?: string;
 }
 
 export interface BroodCountResponse {
@@ -60,10 +75,18 @@ export interface BroodCountResponse {
   /** `opening` for the count the opening starts the brood with. */
   source: 'opening' | 'count';
   recordedBy: { id: string; name: string } | null;
+  estimated: boolean;
+  /** The count this one corrects, and why. */
+  corrects: string | null;
+  reason: string | null;
+  /** Set when a later count corrected this one: it no longer counts. */
+  struckBy: string | null;
+  /** Why an unusual count was saved despite a warning. */
+  warningReason: string | null;
 }
 
 export interface BroodCountsResponse {
-  /** Latest alive count: the sac's count of young in care, for shares. */
+  /** Latest alive count not struck: the sac's count of young in care, for shares. */
   current: number | null;
   counts: BroodCountResponse[];
 }
