@@ -29,6 +29,7 @@ import { RemindersModule } from './reminders/reminders.module';
 import { ProjectRoleGuard } from './common/guards/project-role.guard';
 import { AccountsModule } from './accounts/accounts.module';
 import { SettlementsModule } from './settlements/settlements.module';
+import { IdempotencyModule } from './idempotency/idempotency.module';
 
 /** Calendar-feed and invitation tokens travel in the path; they are secrets, so not logged. */
 function redactSecrets(url: string): string {
@@ -81,6 +82,7 @@ function staticClient(): DynamicModule[] {
     RemindersModule,
     AccountsModule,
     SettlementsModule,
+    IdempotencyModule,
   ],
   providers: [
     { provide: APP_FILTER, useClass: AllExceptionsFilter },
