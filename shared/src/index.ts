@@ -34,3 +34,5 @@ export * from './dashboard/calendar.types.js';
 export * from './dashboard/notifications.types.js';
 export * from './vocabulary/labels.js';
 export * from './sacs/brood-count-rules.js';
+export * from './sacs/sac-plausibility.js';
+export * from './projects/project-plausibility.js';

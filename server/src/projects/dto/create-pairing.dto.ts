@@ -1,7 +1,8 @@
-import { IsIn, IsInt, IsISO8601, IsOptional, IsString, Max, MaxLength, Min, ValidateIf } from 'class-validator';
+import { IsIn, IsInt, IsISO8601, IsOptional, IsString, IsUUID, Max, MaxLength, Min, ValidateIf } from 'class-validator';
 import { PAIRING_OUTCOMES, type CreatePairingRequest, type PairingOutcome } from '@broodsilk/shared';
+import { AcknowledgedWarningsDto } from '../../plausibility/acknowledged-warnings.dto';
 
-export class CreatePairingDto implements CreatePairingRequest {
+export class CreatePairingDto extends AcknowledgedWarningsDto implements CreatePairingRequest {
   @IsISO8601({ strict: true, strictSeparator: true }, { message: 'The start must be a date and time such as 2026-05-03T19:30:00+02:00.' })
   startedAt!: string;
 
@@ -18,4 +19,13 @@ export class CreatePairingDto implements CreatePairingRequest {
   @IsString()
   @MaxLength(2000, { message: 'The notes can be at most 2000 characters.' })
   notes?: string | null;
+
+  @IsOptional()
+  @IsUUID('all', { message: 'corrects must be the id of the pairing to correct.' })
+  corrects?: string;
+
+  @IsOptional()
+  @IsString()
+  @MaxLength(500, { message: 'Keep the reason under 500 characters.' })
+  reason?: string;
 }

@@ -2,10 +2,11 @@ import { IsBoolean, IsInt, IsOptional, IsString, Max, MaxLength, Min, ValidateIf
 import { PULL_DAY_MAX, ROLL_INTERVAL_LIMITS, type CreateSacRequest } from '@broodsilk/shared';
 import { IsCalendarDate } from '../../animals/dto/is-calendar-date.validator';
 import { IsInstant } from './is-instant.validator';
+import { AcknowledgedWarningsDto } from '../../plausibility/acknowledged-warnings.dto';
 
 const dayRule = (what: string) => ({ message: `The ${what} must be a whole day number from 0 to ${PULL_DAY_MAX}.` });
 
-export class CreateSacDto implements CreateSacRequest {
+export class CreateSacDto extends AcknowledgedWarningsDto implements CreateSacRequest {
   @IsCalendarDate({ message: 'The lay date must be a date written YYYY-MM-DD.' })
   layDate!: string;
 

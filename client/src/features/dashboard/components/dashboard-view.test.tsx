@@ -36,6 +36,7 @@ function sac(id: string, roll: { status: RollStatus; due: string } | null, state
     opened: false,
     currentCount: null,
     notes: null,
+    warningReason: null,
     incubatorCaution: null,
     createdAt: '2026-11-01T00:00:00Z',
     updatedAt: '2026-11-01T00:00:00Z',
