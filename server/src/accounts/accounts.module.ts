@@ -17,7 +17,7 @@ import { BalancesController } from './balances.controller';
 import { EntriesController } from './entries.controller';
 import { StatementsController } from './statements.controller';
 import { StatementsService } from './statements.service';
-import { loadAccount } from './account-loader';
+import { loadAccounts } from './account-loader';
 import { isSettled } from './balances.mapper';
 
 @Module({
@@ -33,9 +33,9 @@ export class AccountsModule implements OnModuleInit {
     // Stage `shares-settled`: nothing owed in young or money (see balances.mapper isSettled).
     this.facts.register(async (em, projectIds) => {
       const projects = await em.find(Project, { id: { $in: projectIds } });
-      const out = new Map<string, { sharesSettled: boolean }>();
-      for (const p of projects) out.set(p.id, { sharesSettled: isSettled(await loadAccount(em, p)) });
-      return out;
+      // One batch for all projects: the project list and the dashboard ask for many at once.
+      const views = await loadAccounts(em, projects);
+      return new Map([...views].map(([id, view]) => [id, { sharesSettled: isSettled(view) }]));
     });
   }
 }

@@ -18,16 +18,26 @@ export interface SacCountFact {
  * young handed over before the count (no longer in it) from those handed over after (still in it).
  */
 export async function sacCountsOf(em: EntityManager, projectId: string): Promise<SacCountFact[]> {
-  const sacs = await em.find(Sac, { project: projectId }, { orderBy: { layDate: 'asc', createdAt: 'asc' } });
-  if (!sacs.length) return [];
+  return (await sacCountsOfMany(em, [projectId])).get(projectId) ?? [];
+}
+
+/** The same for many projects in two queries (the dashboard). */
+export async function sacCountsOfMany(em: EntityManager, projectIds: string[]): Promise<Map<string, SacCountFact[]>> {
+  const out = new Map(projectIds.map((id) => [id, [] as SacCountFact[]]));
+  if (!projectIds.length) return out;
+  const sacs = await em.find(Sac, { project: { $in: projectIds } }, { orderBy: { layDate: 'asc', createdAt: 'asc' } });
+  if (!sacs.length) return out;
   const rows = await em.execute<{ sac_id: string; alive: number; at: Date }[]>(
     `select distinct on (c.sac_id) c.sac_id, c.alive, c.at from brood_counts c
       where c.sac_id = any(?::uuid[]) and ${NOT_STRUCK} order by c.sac_id, c.at desc, c.created_at desc`,
     [`{${sacs.map((s) => s.id).join(',')}}`], // a PostgreSQL array literal: knex would spread a JS array
   );
   const latest = new Map(rows.map((r) => [r.sac_id, r]));
-  return sacs.map((s) => {
+  for (const s of sacs) {
     const c = latest.get(s.id);
-    return { sacId: s.id, layDate: s.layDate, outcome: s.outcome, aliveAtCount: c ? Number(c.alive) : 0, countedAt: c ? new Date(c.at) : null };
-  });
+    out
+      .get(s.project.id)
+      ?.push({ sacId: s.id, layDate: s.layDate, outcome: s.outcome, aliveAtCount: c ? Number(c.alive) : 0, countedAt: c ? new Date(c.at) : null });
+  }
+  return out;
 }

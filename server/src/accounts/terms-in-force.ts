@@ -11,6 +11,11 @@ export async function termsInForce(em: EntityManager, projectId: string): Promis
     { project: projectId },
     { populate: ['lines', 'lines.member', 'lines.member.user', 'acceptances'], orderBy: { number: 'desc' } },
   );
+  return pickInForce(versions);
+}
+
+/** The newest of a project's versions (newest first, lines, members and acceptances loaded) that every partner accepted. */
+export function pickInForce(versions: readonly TermsVersion[]): TermsVersion | null {
   for (const v of versions) {
     const accepted = new Set(v.acceptances.getItems().map((a) => a.member.id));
     const waiting = v.lines.getItems().filter((l) => l.member.role === 'partner' && !accepted.has(l.member.id));
