@@ -32,10 +32,7 @@ export DATABASE_URL="postgres://app@127.0.0.1:$PGPORT/broodsilk"
 export JWT_SECRET="${JWT_SECRET:-$(local_secret "$SECRETS/jwt")}"
 export CSRF_SECRET="${CSRF_SECRET:-$(local_secret "$SECRETS/csrf")}"
 export PORT HOST=127.0.0.1 PUBLIC_URL="${PUBLIC_URL:-http://127.0.0.1:$PORT}"
-export SMTP_HOST=127.0.0.1 SMTP_PORT="${SMTP_PORT:-1025}" MAILDEV_WEB_PORT="${MAILDEV_WEB_PORT:-1080}"
-export S3_PORT="${S3_PORT:-4569}" S3RVER_DIR="$ROOT/.data/s3"
-export S3_ENDPOINT="http://127.0.0.1:$S3_PORT" S3_REGION=us-east-1 S3_BUCKET=broodsilk-photos S3_ACCESS_KEY_ID=S3RVER S3_SECRET_ACCESS_KEY=S3RVER S3_FORCE_PATH_STYLE=true
-export STRIPE_API_PORT="${STRIPE_API_PORT:-12111}" STRIPE_API_HOST=127.0.0.1 STRIPE_API_PROTOCOL=http
+service_env usual "$ROOT/.data/s3"
 export STRIPE_SECRET_KEY="${STRIPE_SECRET_KEY:-sk_test_broodsilk_local}" STRIPE_WEBHOOK_SECRET="${STRIPE_WEBHOOK_SECRET:-whsec_broodsilk_local}"
 export PAYMENT_WEBHOOK_URL="http://127.0.0.1:$PORT/api/webhooks/payments"
 export CLIENT_DIST="$ROOT/client/dist"
@@ -48,9 +45,8 @@ log "migrating"
 
 log "starting the local service stand-ins"
 SERVICES_LOG="$ROOT/.data/services.log"
-node "$ROOT/scripts/services.mjs" >"$SERVICES_LOG" 2>&1 &
-PIDS+=($!)
-for _ in $(seq 1 100); do grep -q 'services ready' "$SERVICES_LOG" 2>/dev/null && break; kill -0 "${PIDS[-1]}" 2>/dev/null || { cat "$SERVICES_LOG"; die "services failed"; }; sleep 0.2; done
+start_services "$SERVICES_LOG"
+PIDS+=("$SERVICES_PID")
 grep '^  ' "$SERVICES_LOG" || true
 
 (cd "$ROOT/server" && exec node dist/main.js) &

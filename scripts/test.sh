@@ -32,20 +32,14 @@ pg_ensure_db "$WORK/pg" "$PGPORT" broodsilk_e2e_test
 export TEST_DATABASE_URL="postgres://app@127.0.0.1:$PGPORT/broodsilk_test"
 export JWT_SECRET="$(node -e "console.log(require('crypto').randomBytes(32).toString('hex'))")"
 export CSRF_SECRET="$(node -e "console.log(require('crypto').randomBytes(32).toString('hex'))")"
-export SMTP_HOST=127.0.0.1 SMTP_PORT="$(free_port)" MAILDEV_WEB_PORT="$(free_port)"
-export MAILDEV_API="http://127.0.0.1:$MAILDEV_WEB_PORT"
-export S3_PORT="$(free_port)" S3RVER_DIR="$WORK/s3"
-export S3_ENDPOINT="http://127.0.0.1:$S3_PORT" S3_REGION=us-east-1 S3_BUCKET=broodsilk-photos S3_ACCESS_KEY_ID=S3RVER S3_SECRET_ACCESS_KEY=S3RVER S3_FORCE_PATH_STYLE=true
+service_env free "$WORK/s3"
 export APP_PORT="$(free_port)"
-export STRIPE_API_PORT="$(free_port)" STRIPE_API_HOST=127.0.0.1 STRIPE_API_PROTOCOL=http
 export STRIPE_SECRET_KEY="sk_test_$(node -e "console.log(require('crypto').randomBytes(12).toString('hex'))")" STRIPE_WEBHOOK_SECRET="whsec_test_$(node -e "console.log(require('crypto').randomBytes(12).toString('hex'))")"
 export PAYMENT_WEBHOOK_URL="http://127.0.0.1:$APP_PORT/api/webhooks/payments"
 export LOG_LEVEL=silent
 
-node "$ROOT/scripts/services.mjs" >"$WORK/services.log" 2>&1 &
-PIDS+=($!)
-for _ in $(seq 1 100); do grep -q 'services ready' "$WORK/services.log" && break; sleep 0.2; done
-grep -q 'services ready' "$WORK/services.log" || { cat "$WORK/services.log"; die "service stand-ins did not start"; }
+start_services "$WORK/services.log"
+PIDS+=("$SERVICES_PID")
 
 cd "$ROOT"
 step "build shared" npm run build --silent -w shared

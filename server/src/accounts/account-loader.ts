@@ -2,52 +2,46 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { ProjectMember } from '../projects/project-member.entity';
 import type { Project } from '../projects/project.entity';
 import { LedgerEntryRow } from './ledger-entry.entity';
-import { sacCountsOf, sacCountsOfMany } from './sac-counts';
-import { pickInForce, termsInForce } from './terms-in-force';
-import { TermsVersion } from '../projects/terms-version.entity';
+import { sacCountsByProject } from './sac-counts';
+import { termsInForceOf } from './terms-in-force';
 import { buildAccountView, type AccountView } from './account-view';
 
 /** Loads a project's members, terms in force, sac counts and ledger, and works out the account. */
 export async function loadAccount(em: EntityManager, project: Project): Promise<AccountView> {
-  // One after another: inside a transaction they share one connection.
-  const members = await em.find(ProjectMember, { project: project.id }, { populate: ['user'], orderBy: { createdAt: 'asc' } });
-  const terms = await termsInForce(em, project.id);
-  const sacs = await sacCountsOf(em, project.id);
-  const rows = await em.find(
-    LedgerEntryRow,
-    { project: project.id },
-    { populate: ['party', 'fromParty', 'toParty', 'target', 'recordedBy'], orderBy: { seq: 'asc' } },
-  );
-  return buildAccountView({ project, members, terms, sacs, rows });
+  return (await loadAccounts(em, [project])).get(project.id)!;
 }
 
-/** The same for many projects with a fixed number of queries (the dashboard), keyed by project id. */
-export async function loadAccounts(em: EntityManager, projects: readonly Project[]): Promise<Map<string, AccountView>> {
+/**
+ * The accounts of many projects in a fixed number of queries (lists ask for all of them at once).
+ * One after another: inside a transaction they share one connection.
+ */
+export async function loadAccounts(em: EntityManager, projects: Project[]): Promise<Map<string, AccountView>> {
   const ids = projects.map((p) => p.id);
-  if (!ids.length) return new Map();
   const members = await em.find(ProjectMember, { project: { $in: ids } }, { populate: ['user'], orderBy: { createdAt: 'asc' } });
-  const versions = await em.find(
-    TermsVersion,
-    { project: { $in: ids } },
-    { populate: ['lines', 'lines.member', 'lines.member.user', 'acceptances'], orderBy: { number: 'desc' } },
-  );
-  const sacs = await sacCountsOfMany(em, ids);
+  const terms = await termsInForceOf(em, ids);
+  const sacs = await sacCountsByProject(em, ids);
   const rows = await em.find(
     LedgerEntryRow,
     { project: { $in: ids } },
     { populate: ['party', 'fromParty', 'toParty', 'target', 'recordedBy'], orderBy: { seq: 'asc' } },
   );
-  const of = <T extends { project: { id: string } }>(items: T[], id: string) => items.filter((x) => x.project.id === id);
+  const membersOf = byProject(members);
+  const rowsOf = byProject(rows);
   return new Map(
-    projects.map((project) => [
-      project.id,
-      buildAccountView({
-        project,
-        members: of(members, project.id),
-        terms: pickInForce(of(versions, project.id)),
-        sacs: sacs.get(project.id) ?? [],
-        rows: of(rows, project.id),
-      }),
+    projects.map((p) => [
+      p.id,
+      buildAccountView({ project: p, members: membersOf.get(p.id) ?? [], terms: terms.get(p.id) ?? null, sacs: sacs.get(p.id)!, rows: rowsOf.get(p.id) ?? [] }),
     ]),
   );
+}
+
+/** Groups rows by project, keeping their order. */
+function byProject<T extends { project: { id: string } }>(list: T[]): Map<string, T[]> {
+  const out = new Map<string, T[]>();
+  for (const x of list) {
+    const group = out.get(x.project.id);
+    if (group) group.push(x);
+    else out.set(x.project.id, [x]);
+  }
+  return out;
 }

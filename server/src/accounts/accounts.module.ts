@@ -32,10 +32,8 @@ export class AccountsModule implements OnModuleInit {
   onModuleInit(): void {
     // Stage `shares-settled`: nothing owed in young or money (see balances.mapper isSettled).
     this.facts.register(async (em, projectIds) => {
-      const projects = await em.find(Project, { id: { $in: projectIds } });
-      // One batch for all projects: the project list and the dashboard ask for many at once.
-      const views = await loadAccounts(em, projects);
-      return new Map([...views].map(([id, view]) => [id, { sharesSettled: isSettled(view) }]));
+      const accounts = await loadAccounts(em, await em.find(Project, { id: { $in: projectIds } }));
+      return new Map([...accounts].map(([id, view]) => [id, { sharesSettled: isSettled(view) }]));
     });
   }
 }

@@ -1,7 +1,7 @@
 import { BadRequestException, ConflictException, ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
 import { todayIn, type ConfirmEntryRequest, type CreateEntryRequest, type LedgerEntryResponse } from '@broodsilk/shared';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { ActivityService } from '../activity/activity.service';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { Project } from '../projects/project.entity';
@@ -13,11 +13,13 @@ import { toEntryResponses } from './accounts.mapper';
 import { assertNotFutureDate, draftEntry, type EntryDraft } from './entry-rules';
 import { LedgerEntryRow } from './ledger-entry.entity';
 import { describeEntry } from './entry-words';
+import { Clock } from '../common/clock';
 
 @Injectable()
 export class EntriesService {
   constructor(
     private readonly em: EntityManager,
+    private readonly clock: Clock,
     private readonly lock: AccountLock,
     private readonly activity: ActivityService,
   ) {}
@@ -28,12 +30,12 @@ export class EntriesService {
 
   /** Checks and appends one entry under the account lock, with its activity record, in one transaction. */
   async create(access: ProjectAccess, user: AuthUser, dto: CreateEntryRequest): Promise<LedgerEntryResponse> {
-    return this.write(access, async (tx, view) => draftEntry(view, access, user.id, dto, todayIn(user.timeZone, new Date())), user);
+    return this.write(access, async (tx, view) => draftEntry(view, access, user.id, dto, todayIn(user.timeZone, this.clock.now())), user);
   }
 
   /** The recipient confirms a hand-over (arrival counts) or the payee confirms a payment. */
   async confirm(access: ProjectAccess, user: AuthUser, entryId: string, dto: ConfirmEntryRequest): Promise<LedgerEntryResponse> {
-    return this.write(access, async (_tx, view) => confirmationDraft(view, access, user.id, entryId, dto, todayIn(user.timeZone, new Date())), user);
+    return this.write(access, async (_tx, view) => confirmationDraft(view, access, user.id, entryId, dto, todayIn(user.timeZone, this.clock.now())), user);
   }
 
   /** Appends a row the payment provider reported (no user); used by the webhook inside its own transaction. */

@@ -18,13 +18,12 @@ export interface SacCountFact {
  * young handed over before the count (no longer in it) from those handed over after (still in it).
  */
 export async function sacCountsOf(em: EntityManager, projectId: string): Promise<SacCountFact[]> {
-  return (await sacCountsOfMany(em, [projectId])).get(projectId) ?? [];
+  return (await sacCountsByProject(em, [projectId])).get(projectId) ?? [];
 }
 
-/** The same for many projects in two queries (the dashboard). */
-export async function sacCountsOfMany(em: EntityManager, projectIds: string[]): Promise<Map<string, SacCountFact[]>> {
-  const out = new Map(projectIds.map((id) => [id, [] as SacCountFact[]]));
-  if (!projectIds.length) return out;
+/** The same for many projects in two queries, each project's sacs in lay order. */
+export async function sacCountsByProject(em: EntityManager, projectIds: string[]): Promise<Map<string, SacCountFact[]>> {
+  const out = new Map<string, SacCountFact[]>(projectIds.map((id) => [id, []]));
   const sacs = await em.find(Sac, { project: { $in: projectIds } }, { orderBy: { layDate: 'asc', createdAt: 'asc' } });
   if (!sacs.length) return out;
   const rows = await em.execute<{ sac_id: string; alive: number; at: Date }[]>(
@@ -36,8 +35,8 @@ export async function sacCountsOfMany(em: EntityManager, projectIds: string[]): 
   for (const s of sacs) {
     const c = latest.get(s.id);
     out
-      .get(s.project.id)
-      ?.push({ sacId: s.id, layDate: s.layDate, outcome: s.outcome, aliveAtCount: c ? Number(c.alive) : 0, countedAt: c ? new Date(c.at) : null });
+      .get(s.project.id)!
+      .push({ sacId: s.id, layDate: s.layDate, outcome: s.outcome, aliveAtCount: c ? Number(c.alive) : 0, countedAt: c ? new Date(c.at) : null });
   }
   return out;
 }

@@ -1,6 +1,5 @@
 import { stringify } from 'csv-stringify/sync';
-import type { StatementResponse } from '@broodsilk/shared';
-import { formatMinor } from './money-format';
+import { formatMoneyCode, type StatementResponse } from '@broodsilk/shared';
 
 export const STATEMENT_CSV_COLUMNS = [
   'line',
@@ -44,7 +43,7 @@ export function statementCsv(s: StatementResponse): string {
     arrived_alive: e.arrivedAlive ?? '',
     arrived_dead: e.arrivedDead ?? '',
     amount_minor: e.amountMinor ?? e.priceMinor ?? '',
-    amount: e.amountMinor != null ? formatMinor(e.amountMinor, e.currency!) : e.priceMinor != null ? formatMinor(e.priceMinor, e.currency!) : '',
+    amount: e.amountMinor != null ? formatMoneyCode(e.amountMinor, e.currency!) : e.priceMinor != null ? formatMoneyCode(e.priceMinor, e.currency!) : '',
     currency: e.currency ?? '',
     method: e.method ?? '',
     carrier: e.carrier ?? '',
@@ -70,7 +69,7 @@ export function statementCsv(s: StatementResponse): string {
       from: d.fromName,
       to: d.toName,
       amount_minor: d.amountMinor,
-      amount: formatMinor(d.amountMinor, d.currency),
+      amount: formatMoneyCode(d.amountMinor, d.currency),
       currency: d.currency || currency,
     });
   return stringify(rows, { header: true, columns: [...STATEMENT_CSV_COLUMNS], record_delimiter: 'windows' });

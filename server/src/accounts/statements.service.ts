@@ -12,6 +12,7 @@ import { failureNote, toSacSharesView, toTermsSummary } from './shares.mapper';
 import { SHIPPING_CAUTIONS } from './shipping-cautions';
 import { statementCsv } from './statement-csv';
 import { statementPdf } from './statement-pdf';
+import { Clock } from '../common/clock';
 
 /**
  * Whether a row concerns the party, made by or to them: it names them, they recorded it, it moves
@@ -29,6 +30,7 @@ function concerns(row: LedgerEntryRow, member: ProjectMember, ownerId: string, d
 export class StatementsService {
   constructor(
     private readonly em: EntityManager,
+    private readonly clock: Clock,
     private readonly mail: MailService,
   ) {}
 
@@ -88,7 +90,7 @@ export class StatementsService {
     return {
       project: { id: view.data.project.id, title: view.data.project.title },
       party: { memberId, name: memberName(member), role: member.role },
-      generatedAt: new Date().toISOString(),
+      generatedAt: this.clock.now().toISOString(),
       terms: view.data.terms ? toTermsSummary(view.data.terms) : null,
       sacs: view.sacs.map((s) => toSacSharesView(view, s, null)),
       entries,

@@ -2,7 +2,7 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import type { FieldError } from '@broodsilk/shared';
 import { Species } from '../species/species.entity';
 import { User } from '../users/user.entity';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { Animal } from './animal.entity';
 import type { CreateAnimalDto } from './dto/create-animal.dto';
 import { animalRuleErrors, type AnimalState } from './animal-rules';

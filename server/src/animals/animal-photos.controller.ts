@@ -1,7 +1,7 @@
 import { Controller, Param, ParseUUIDPipe, Post, UploadedFile, UseInterceptors } from '@nestjs/common';
 import type { PhotoRef } from '@broodsilk/shared';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { ImageUploadInterceptor } from '../photos/image-upload.interceptor';
 import { AnimalPhotosService } from './animal-photos.service';
 

@@ -3,7 +3,7 @@ import { FileInterceptor } from '@nestjs/platform-express';
 import type { Request } from 'express';
 import type { ImportResult } from '@broodsilk/shared';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { AnimalsCsvService } from './animals-csv.service';
 import { CSV_MAX_BYTES } from './animals-csv.columns';
 import { csvText } from './csv-text';

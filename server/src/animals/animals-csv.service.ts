@@ -5,7 +5,7 @@ import { validate, type ValidationError } from 'class-validator';
 import { parse } from 'csv-parse/sync';
 import { stringify } from 'csv-stringify/sync';
 import type { FieldError, ImportResult } from '@broodsilk/shared';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { User } from '../users/user.entity';
 import { Species } from '../species/species.entity';
 import { Animal } from './animal.entity';

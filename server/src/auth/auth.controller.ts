@@ -1,4 +1,4 @@
-import { Body, Controller, Get, HttpCode, Inject, Post, Req, Res, UseGuards } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Inject, Patch, Post, Req, Res, UseGuards } from '@nestjs/common';
 import { ConfigType } from '@nestjs/config';
 import { ThrottlerGuard } from '@nestjs/throttler';
 import type { Request, Response } from 'express';
@@ -12,8 +12,9 @@ import { AuthService, type IssuedSession } from './auth.service';
 import { RegisterDto } from './dto/register.dto';
 import { LoginDto } from './dto/login.dto';
 import { PasswordResetConfirmDto, PasswordResetDto } from './dto/password-reset.dto';
+import { ChangePasswordDto } from './dto/change-password.dto';
 import { clearSessionCookie, startSession } from './session-cookie';
-import type { AuthUser } from './auth-user';
+import type { AuthUser } from '../common/auth-user';
 
 @Controller('auth')
 export class AuthController {
@@ -48,6 +49,17 @@ export class AuthController {
   @Get('me')
   me(@CurrentUser() user: AuthUser): Promise<Me> {
     return this.auth.me(user.id);
+  }
+
+  /** Changing the password ends every other session; this one gets a fresh token. */
+  @Patch('password')
+  async changePassword(
+    @CurrentUser() user: AuthUser,
+    @Body() dto: ChangePasswordDto,
+    @Req() req: Request,
+    @Res({ passthrough: true }) res: Response,
+  ): Promise<LoginResponse> {
+    return this.startSession(await this.auth.changePassword(user.id, dto.currentPassword, dto.newPassword), req, res);
   }
 
   /** A fresh CSRF token for the current session (after a reload the client asks again). */

@@ -10,9 +10,10 @@ import { User } from '../users/user.entity';
 import { toMe } from '../users/users.mapper';
 import { dummyPasswordHash, hashPassword, verifyPassword } from './password-hasher';
 import { PasswordResetToken } from './password-reset-token.entity';
-import type { JwtPayload } from './auth-user';
+import type { JwtPayload } from '../common/auth-user';
 import type { RegisterDto } from './dto/register.dto';
 import type { LoginDto } from './dto/login.dto';
+import { Clock } from '../common/clock';
 
 export const RESET_LINK_MINUTES = 45;
 
@@ -30,6 +31,7 @@ function sha256(value: string): string {
 export class AuthService {
   constructor(
     private readonly em: EntityManager,
+    private readonly clock: Clock,
     private readonly jwt: JwtService,
     private readonly mail: MailService,
     @Inject(appConfig.KEY) private readonly app: ConfigType<typeof appConfig>,
@@ -73,7 +75,7 @@ export class AuthService {
   issue(user: User): IssuedSession {
     const payload: JwtPayload = { sub: user.id, ver: user.tokenVersion };
     const accessToken = this.jwt.sign(payload, { expiresIn: `${SESSION_HOURS}h` });
-    return { user: toMe(user), accessToken, expiresAt: new Date(Date.now() + SESSION_HOURS * 3600_000) };
+    return { user: toMe(user), accessToken, expiresAt: new Date(this.clock.now().getTime() + SESSION_HOURS * 3600_000) };
   }
 
   /** Always answers the same way, whether or not the e-mail belongs to an account. */
@@ -83,8 +85,8 @@ export class AuthService {
     const token = randomBytes(32).toString('base64url');
     await this.em.transactional(async (em) => {
       // A new link replaces any older one that is still open.
-      await em.nativeUpdate(PasswordResetToken, { user: user.id, usedAt: null }, { usedAt: new Date() });
-      em.create(PasswordResetToken, { user, tokenHash: sha256(token), expiresAt: new Date(Date.now() + RESET_LINK_MINUTES * 60_000) });
+      await em.nativeUpdate(PasswordResetToken, { user: user.id, usedAt: null }, { usedAt: this.clock.now() });
+      em.create(PasswordResetToken, { user, tokenHash: sha256(token), expiresAt: new Date(this.clock.now().getTime() + RESET_LINK_MINUTES * 60_000) });
     });
     const link = `${this.app.publicUrl}/reset-password?token=${token}`;
     await this.mail.send({
@@ -97,10 +99,10 @@ export class AuthService {
   async confirmPasswordReset(token: string, password: string): Promise<void> {
     await this.em.transactional(async (em) => {
       const row = await em.findOne(PasswordResetToken, { tokenHash: sha256(token) }, { populate: ['user'], lockMode: LockMode.PESSIMISTIC_WRITE });
-      if (!row || row.usedAt || row.expiresAt.getTime() < Date.now()) {
+      if (!row || row.usedAt || row.expiresAt.getTime() < this.clock.now().getTime()) {
         throw new BadRequestException('This reset link has expired or was already used. Ask for a new one.');
       }
-      row.usedAt = new Date();
+      row.usedAt = this.clock.now();
       const user = row.user.getEntity();
       user.passwordHash = await hashPassword(password);
       user.tokenVersion += 1;

@@ -4,7 +4,7 @@ import { EntityManager } from '@mikro-orm/postgresql';
 import ical from 'ical-generator';
 import type { CalendarFeedResponse } from '@broodsilk/shared';
 import { appConfig } from '../config/app.config';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { User } from '../users/user.entity';
 import { ProjectMember } from '../projects/project-member.entity';
 import { AnimalsService } from '../animals/animals.service';
@@ -13,6 +13,7 @@ import { SAC_POPULATE, SacViewsService } from '../sacs/sac-views.service';
 import { CalendarFeed } from './calendar-feed.entity';
 import { feedToken, hashToken } from './feed-token';
 import { maleClockEvents, sacEvents, type FeedEvent } from './feed-events';
+import { Clock } from '../common/clock';
 
 const NOT_FOUND = 'There is no such calendar feed. If you rotated its address, subscribe to the new one.';
 
@@ -20,6 +21,7 @@ const NOT_FOUND = 'There is no such calendar feed. If you rotated its address, s
 export class CalendarService {
   constructor(
     private readonly em: EntityManager,
+    private readonly clock: Clock,
     private readonly views: SacViewsService,
     private readonly animals: AnimalsService,
     @Inject(appConfig.KEY) private readonly config: ConfigType<typeof appConfig>,
@@ -47,7 +49,7 @@ export class CalendarService {
   /** Revokes every live feed of the user and issues a new one, in one transaction. */
   async rotate(viewer: AuthUser): Promise<CalendarFeedResponse> {
     const feed = await this.em.transactional(async (tx) => {
-      await tx.nativeUpdate(CalendarFeed, { user: viewer.id, revokedAt: null }, { revokedAt: new Date() });
+      await tx.nativeUpdate(CalendarFeed, { user: viewer.id, revokedAt: null }, { revokedAt: this.clock.now() });
       return this.create(tx, viewer.id);
     });
     return this.describe(feed);

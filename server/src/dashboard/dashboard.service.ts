@@ -10,7 +10,7 @@ import {
   type PullWindowEvent,
   type RollStatus,
 } from '@broodsilk/shared';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { ProjectMember } from '../projects/project-member.entity';
 import { Project } from '../projects/project.entity';
 import { ProjectStageService } from '../projects/project-stage.service';
@@ -20,7 +20,7 @@ import { AnimalsService } from '../animals/animals.service';
 import { ActivityService } from '../activity/activity.service';
 import { Sac } from '../sacs/sac.entity';
 import { SAC_POPULATE, SacViewsService } from '../sacs/sac-views.service';
-import { Clock } from '../sacs/clock';
+import { Clock } from '../common/clock';
 import { loadAccounts } from '../accounts/account-loader';
 import { accountTodos } from '../accounts/account-todos';
 import { termsAwaitingAcceptance } from '../projects/terms-todos';

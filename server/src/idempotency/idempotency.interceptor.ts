@@ -2,7 +2,7 @@ import { BadRequestException, Injectable, type CallHandler, type ExecutionContex
 import { createHash } from 'node:crypto';
 import type { Request, Response } from 'express';
 import { catchError, from, mergeMap, of, switchMap, type Observable } from 'rxjs';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { IdempotencyStore } from './idempotency.store';
 
 export const IDEMPOTENCY_HEADER = 'Idempotency-Key';

@@ -13,7 +13,7 @@ import { EntityManager } from '@mikro-orm/postgresql';
 import { LockMode } from '@mikro-orm/core';
 import type { AcceptInvitationResponse, InvitationPreview, InvitationResponse } from '@broodsilk/shared';
 import { appConfig } from '../config/app.config';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { MailService } from '../mail/mail.service';
 import { User } from '../users/user.entity';
 import { ActivityService } from '../activity/activity.service';
@@ -23,6 +23,7 @@ import { Invitation } from './invitation.entity';
 import { hashInvitationToken, INVITATION_DAYS, newInvitationToken } from './invitation-token';
 import { invitationProblem, toInvitationPreview, toInvitationResponse } from './invitations.mapper';
 import type { CreateInvitationDto } from './dto/create-invitation.dto';
+import { Clock } from '../common/clock';
 
 const INVALID_LINK = 'This invitation link is not valid. Check that you copied all of it.';
 
@@ -32,6 +33,7 @@ export class InvitationsService {
 
   constructor(
     private readonly em: EntityManager,
+    private readonly clock: Clock,
     private readonly mail: MailService,
     private readonly activity: ActivityService,
     @Inject(appConfig.KEY) private readonly app: ConfigType<typeof appConfig>,
@@ -64,7 +66,7 @@ export class InvitationsService {
             details: [{ field: 'role', message: `${member.name} is a ${member.role}.` }],
           });
       }
-      await tx.nativeUpdate(Invitation, { project: access.project.id, email, acceptedAt: null, replacedAt: null }, { replacedAt: new Date() });
+      await tx.nativeUpdate(Invitation, { project: access.project.id, email, acceptedAt: null, replacedAt: null }, { replacedAt: this.clock.now() });
       const inviter = await tx.findOneOrFail(User, viewer.id);
       const invitation = tx.create(Invitation, {
         project: access.project,
@@ -73,7 +75,7 @@ export class InvitationsService {
         member,
         tokenHash: hash,
         invitedBy: inviter,
-        expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000),
+        expiresAt: new Date(this.clock.now().getTime() + INVITATION_DAYS * 86_400_000),
       });
       this.activity.record(tx, {
         projectId: access.project.id,
@@ -117,14 +119,14 @@ export class InvitationsService {
   }
 
   async preview(token: string): Promise<InvitationPreview> {
-    return toInvitationPreview(await this.byToken(token, this.em));
+    return toInvitationPreview(await this.byToken(token, this.em), this.clock.now());
   }
 
   /** Joins the signed-in user to the project with the invitation's role; the link then stops working. */
   async accept(viewer: AuthUser, token: string): Promise<AcceptInvitationResponse> {
     return this.em.transactional(async (tx) => {
       const inv = await this.byToken(token, tx, true);
-      const problem = invitationProblem(inv);
+      const problem = invitationProblem(inv, this.clock.now());
       if (problem) throw new GoneException(problem);
       const projectId = inv.project.id;
       if (await tx.count(ProjectMember, { project: projectId, user: viewer.id })) {
@@ -140,7 +142,7 @@ export class InvitationsService {
       } else {
         member = tx.create(ProjectMember, { project: projectId, user, role: inv.role, name: user.displayName, email: user.email });
       }
-      inv.acceptedAt = new Date();
+      inv.acceptedAt = this.clock.now();
       inv.acceptedBy = user;
       this.activity.record(tx, {
         projectId,

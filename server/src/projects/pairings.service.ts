@@ -1,8 +1,8 @@
 import { ConflictException, Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
 import { pairingBeforeMaturingWarnings, todayIn, type PairingResponse } from '@broodsilk/shared';
-import type { AuthUser } from '../auth/auth-user';
-import { badRequest } from '../animals/animals.service';
+import type { AuthUser } from '../common/auth-user';
+import { badRequest } from '../common/field-errors';
 import { User } from '../users/user.entity';
 import { ActivityService } from '../activity/activity.service';
 import { acceptWarnings } from '../plausibility/plausibility';
@@ -11,6 +11,7 @@ import { Project } from './project.entity';
 import { Pairing } from './pairing.entity';
 import { struckPairings, toPairingResponse } from './pairings.mapper';
 import type { CreatePairingDto } from './dto/create-pairing.dto';
+import { Clock } from '../common/clock';
 
 // A clock a few minutes fast on the keeper's phone is not a pairing in the future.
 const FUTURE_SLACK_MS = 5 * 60_000;
@@ -20,6 +21,7 @@ export class PairingsService {
   constructor(
     private readonly em: EntityManager,
     private readonly activity: ActivityService,
+    private readonly clock: Clock,
   ) {}
 
   /** Newest first, corrected pairings included (flagged with the pairing that struck them). */
@@ -31,7 +33,7 @@ export class PairingsService {
 
   async create(viewer: AuthUser, access: ProjectAccess, dto: CreatePairingDto): Promise<PairingResponse> {
     const startedAt = new Date(dto.startedAt);
-    if (startedAt.getTime() > Date.now() + FUTURE_SLACK_MS)
+    if (startedAt.getTime() > this.clock.now().getTime() + FUTURE_SLACK_MS)
       throw badRequest([{ field: 'startedAt', message: 'The pairing start is in the future; record a pairing once it has happened.' }]);
     if (dto.corrects && !dto.reason?.trim()) throw badRequest([{ field: 'reason', message: 'Say briefly why the recorded pairing was wrong.' }]);
     if (!dto.corrects && dto.reason) throw badRequest([{ field: 'reason', message: 'A reason goes with a correction (corrects: the id of the pairing).' }]);

@@ -1,7 +1,7 @@
 import { BadRequestException, ConflictException, Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
 import { checkCount, todayIn, type BroodCountResponse, type BroodCountsResponse } from '@broodsilk/shared';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { ActivityService } from '../activity/activity.service';
 import { acceptWarnings } from '../plausibility/plausibility';
@@ -10,8 +10,9 @@ import { BroodCount } from './brood-count.entity';
 import { SacOpening } from './sac-opening.entity';
 import type { Sac } from './sac.entity';
 import { SacsService } from './sacs.service';
-import { Clock } from './clock';
-import { assertNotFuture, fieldError } from './sac-rules';
+import { Clock } from '../common/clock';
+import { assertNotFuture } from './sac-rules';
+import { fieldError } from '../common/field-errors';
 import { toBroodCountResponse } from './brood.mapper';
 import type { BroodCountDto } from './dto/brood-count.dto';
 

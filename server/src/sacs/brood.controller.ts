@@ -1,8 +1,8 @@
 import { Body, Controller, Get, Param, ParseUUIDPipe, Post, UploadedFile, UseInterceptors } from '@nestjs/common';
 import type { BroodCountResponse, BroodCountsResponse, OpeningResponse, PhotoRef } from '@broodsilk/shared';
-import { AnyProjectMember, CurrentProject, ProjectFrom, ProjectRoles } from '../common/decorators/project-roles.decorator';
+import { AnyProjectMember, CurrentProject, ProjectFrom, ProjectRoles } from '../projects/project-roles.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { ImageUploadInterceptor } from '../photos/image-upload.interceptor';
 import { OpeningService } from './opening.service';

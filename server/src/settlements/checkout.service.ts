@@ -2,13 +2,12 @@ import { ConflictException, Inject, Injectable, BadRequestException } from '@nes
 import { ConfigType } from '@nestjs/config';
 import { EntityManager } from '@mikro-orm/postgresql';
 import type Stripe from 'stripe';
-import type { CheckoutResponse, CreateCheckoutRequest } from '@broodsilk/shared';
-import type { AuthUser } from '../auth/auth-user';
+import { formatMoneyCode, type CheckoutResponse, type CreateCheckoutRequest } from '@broodsilk/shared';
+import type { AuthUser } from '../common/auth-user';
 import { appConfig } from '../config/app.config';
 import { STRIPE_CLIENT } from '../payments/stripe.client';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { loadAccount } from '../accounts/account-loader';
-import { formatMinor } from '../accounts/money-format';
 import { User } from '../users/user.entity';
 import { PayoutAccount } from './payout-account.entity';
 import { SettlementCheckout } from './settlement-checkout.entity';
@@ -37,7 +36,7 @@ export class CheckoutService {
     if (!debt) throw new ConflictException(`You owe ${view.nameOf(creditor.id)} nothing on this project's account.`);
     if (dto.amountMinor > debt.amountMinor) {
       throw new ConflictException(
-        `You owe ${view.nameOf(creditor.id)} ${formatMinor(debt.amountMinor, currency)}; ${formatMinor(dto.amountMinor, currency)} is ${formatMinor(dto.amountMinor - debt.amountMinor, currency)} more than that.`,
+        `You owe ${view.nameOf(creditor.id)} ${formatMoneyCode(debt.amountMinor, currency)}; ${formatMoneyCode(dto.amountMinor, currency)} is ${formatMoneyCode(dto.amountMinor - debt.amountMinor, currency)} more than that.`,
       );
     }
     const payout = creditor.user ? await this.em.findOne(PayoutAccount, { user: creditor.user.id }) : null;

@@ -3,7 +3,7 @@ import { ConfigType } from '@nestjs/config';
 import { EntityManager } from '@mikro-orm/postgresql';
 import type Stripe from 'stripe';
 import type { CreatePayoutAccountRequest, PayoutAccountResponse } from '@broodsilk/shared';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { appConfig } from '../config/app.config';
 import { STRIPE_CLIENT } from '../payments/stripe.client';
 import { User } from '../users/user.entity';

@@ -7,6 +7,7 @@ import { EntriesService } from '../accounts/entries.service';
 import { Project } from '../projects/project.entity';
 import { PayoutAccountsService } from './payout-accounts.service';
 import { SettlementCheckout } from './settlement-checkout.entity';
+import { Clock } from '../common/clock';
 
 @Injectable()
 export class WebhookService {
@@ -14,6 +15,7 @@ export class WebhookService {
 
   constructor(
     private readonly em: EntityManager,
+    private readonly clock: Clock,
     @Inject(STRIPE_CLIENT) private readonly stripe: Stripe,
     @Inject(paymentsConfig.KEY) private readonly config: PaymentsConfig,
     private readonly entries: EntriesService,
@@ -61,7 +63,7 @@ export class WebhookService {
     const project = await tx.findOneOrFail(Project, checkout.project.id);
     await this.entries.appendInTransaction(tx, project, {
       kind: 'money',
-      date: new Date().toISOString().slice(0, 10),
+      date: this.clock.now().toISOString().slice(0, 10),
       fromParty: checkout.fromParty,
       toParty: checkout.toParty,
       amountMinor: session.amount_total ?? checkout.amountMinor,

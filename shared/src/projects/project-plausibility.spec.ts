@@ -5,8 +5,8 @@ import { secondProjectWarnings } from './project-plausibility.js';
 describe('secondProjectWarnings', () => {
   it('warns only when an open project of the female has a developing sac', () => {
     expect(secondProjectWarnings('MO-7', [])).toEqual([]);
-    expect(secondProjectWarnings('MO-7', [{ title: 'Spring', sacs: [{ layDate: '2026-01-01', outcome: 'failed' }] }])).toEqual([]);
-    expect(secondProjectWarnings('MO-7', [{ title: 'Spring', sacs: [{ layDate: '2026-01-01', outcome: 'developing' }] }])).toEqual([
+    expect(secondProjectWarnings('MO-7', [{ title: 'Spring', sacs: [{ layDate: '2026-01-01', fate: 'failed' }] }])).toEqual([]);
+    expect(secondProjectWarnings('MO-7', [{ title: 'Spring', sacs: [{ layDate: '2026-01-01', fate: 'developing' }] }])).toEqual([
       { code: 'female-has-brood-in-progress', message: expect.stringContaining('MO-7 has a brood in progress in the open project "Spring"') },
     ]);
   });

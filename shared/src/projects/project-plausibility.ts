@@ -11,7 +11,7 @@ export interface OpenProjectOfFemale {
  * a second open project would start on her while a sac of hers is still developing (common practice).
  */
 export function secondProjectWarnings(femaleLabel: string, open: readonly OpenProjectOfFemale[]): PlausibilityWarning[] {
-  const busy = open.find((p) => p.sacs.some((s) => s.outcome === 'developing'));
+  const busy = open.find((p) => p.sacs.some((s) => s.fate === 'developing'));
   if (!busy) return [];
   return [
     {

@@ -1,6 +1,6 @@
 import { IsInt, IsOptional, Max, Min } from 'class-validator';
 import type { ConfirmEntryRequest } from '@broodsilk/shared';
-import { IsCalendarDate } from '../../animals/dto/is-calendar-date.validator';
+import { IsCalendarDate } from '../../common/validators/is-calendar-date.validator';
 
 export class ConfirmEntryDto implements ConfirmEntryRequest {
   @IsOptional()

@@ -1,6 +1,6 @@
 import { IsIn, IsInt, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, MinLength } from 'class-validator';
 import { HAND_OVER_METHODS, RECORDABLE_ENTRY_KINDS, type CreateEntryRequest, type HandOverMethod, type RecordableEntryKind } from '@broodsilk/shared';
-import { IsCalendarDate } from '../../animals/dto/is-calendar-date.validator';
+import { IsCalendarDate } from '../../common/validators/is-calendar-date.validator';
 
 const MAX_MINOR = 2_000_000_000; // fits the integer columns
 

@@ -13,7 +13,7 @@ import {
   type Maturity,
   type OwnerKind,
 } from '@broodsilk/shared';
-import { IsCalendarDate } from './is-calendar-date.validator';
+import { IsCalendarDate } from '../../common/validators/is-calendar-date.validator';
 
 const trim = ({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value);
 /** Blank text means "none": a form's empty box and a CSV's empty cell both arrive as "". */

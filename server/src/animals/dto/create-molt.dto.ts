@@ -1,7 +1,7 @@
 import { Type } from 'class-transformer';
 import { IsBoolean, IsIn, IsNumber, IsOptional, IsString, Max, MaxLength, Min, ValidateIf } from 'class-validator';
 import { EXUVIA_SEXES, type CreateMoltRequest, type ExuviaSex } from '@broodsilk/shared';
-import { IsCalendarDate } from './is-calendar-date.validator';
+import { IsCalendarDate } from '../../common/validators/is-calendar-date.validator';
 
 export class CreateMoltDto implements CreateMoltRequest {
   @IsCalendarDate({ message: 'The molt date must be a date written YYYY-MM-DD.' })

@@ -1,5 +1,6 @@
-import { BadRequestException, type ValidationError } from '@nestjs/common';
+import type { BadRequestException, ValidationError } from '@nestjs/common';
 import type { FieldError } from '@broodsilk/shared';
+import { badRequest } from '../field-errors';
 
 function flatten(errors: ValidationError[], prefix = ''): FieldError[] {
   return errors.flatMap((e) => {
@@ -16,7 +17,5 @@ function humanise(message: string, field: string): string {
 }
 
 export function validationExceptionFactory(errors: ValidationError[]): BadRequestException {
-  const details = flatten(errors);
-  const message = details.length === 1 ? details[0].message : `Please correct ${details.length} fields: ${details.map((d) => d.field).join(', ')}.`;
-  return new BadRequestException({ message, details });
+  return badRequest(flatten(errors));
 }

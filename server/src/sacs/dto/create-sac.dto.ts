@@ -1,6 +1,6 @@
 import { IsBoolean, IsInt, IsOptional, IsString, Max, MaxLength, Min, ValidateIf } from 'class-validator';
 import { PULL_DAY_MAX, ROLL_INTERVAL_LIMITS, type CreateSacRequest } from '@broodsilk/shared';
-import { IsCalendarDate } from '../../animals/dto/is-calendar-date.validator';
+import { IsCalendarDate } from '../../common/validators/is-calendar-date.validator';
 import { IsInstant } from './is-instant.validator';
 import { AcknowledgedWarningsDto } from '../../plausibility/acknowledged-warnings.dto';
 

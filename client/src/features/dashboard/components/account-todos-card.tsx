@@ -1,14 +1,11 @@
 import { Anchor, Group, Stack, Text } from '@mantine/core';
-import { Link } from 'react-router-dom';
-import type { DashboardResponse } from '@broodsilk/shared';
+import { Link } from 'react-router';
+import { formatMoney, type DashboardResponse } from '@broodsilk/shared';
 import { paths } from '@/config/paths';
 import { formatDate } from '@/lib/dates';
 import { SectionCard } from '@/components/ui/section-card';
 
 type Todos = Pick<DashboardResponse['dueToday'], 'termsToAccept' | 'handOversToConfirm' | 'payments'>;
-
-// Display only; the amounts themselves stay in minor units (ISO 4217 code) as the API sends them.
-const money = (minor: number, currency: string) => new Intl.NumberFormat('en-GB', { style: 'currency', currency }).format(minor / 100);
 
 function TodoLine({ projectId, title, text, to }: { projectId: string; title: string; text: string; to: string }) {
   return (
@@ -60,8 +57,8 @@ export function AccountTodosCard({ todos }: { todos: Todos }) {
           title={p.projectTitle}
           text={
             p.direction === 'owed-by-me'
-              ? `You owe ${p.otherName} ${money(p.amountMinor, p.currency)}`
-              : `${p.otherName} owes you ${money(p.amountMinor, p.currency)}`
+              ? `You owe ${p.otherName} ${formatMoney(p.amountMinor, p.currency)}`
+              : `${p.otherName} owes you ${formatMoney(p.amountMinor, p.currency)}`
           }
           to={paths.projectAccount.href(p.projectId)}
         />

@@ -1,5 +1,5 @@
 import { Anchor, Stack, Text } from '@mantine/core';
-import { Link } from 'react-router-dom';
+import { Link } from 'react-router';
 import type { ActivityEventResponse } from '@broodsilk/shared';
 import { paths } from '@/config/paths';
 import { formatInstant } from '@/lib/dates';

@@ -1,5 +1,5 @@
 import { Anchor, Badge, Table, Text } from '@mantine/core';
-import { Link } from 'react-router-dom';
+import { Link } from 'react-router';
 import { PROJECT_STAGE_LABELS, type ProjectSummary } from '@broodsilk/shared';
 import { paths } from '@/config/paths';
 import { SectionCard } from '@/components/ui/section-card';

@@ -1,6 +1,6 @@
 import { Anchor, Group, Stack, Text } from '@mantine/core';
 import type { ReactNode } from 'react';
-import { Link } from 'react-router-dom';
+import { Link } from 'react-router';
 import type { DashboardSac } from '@broodsilk/shared';
 import { paths } from '@/config/paths';
 import { formatDate } from '@/lib/dates';

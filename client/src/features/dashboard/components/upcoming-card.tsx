@@ -1,5 +1,5 @@
 import { Anchor, Table, Text } from '@mantine/core';
-import { Link } from 'react-router-dom';
+import { Link } from 'react-router';
 import type { DashboardSac } from '@broodsilk/shared';
 import { paths } from '@/config/paths';
 import { formatDate } from '@/lib/dates';
