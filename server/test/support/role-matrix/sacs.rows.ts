@@ -40,7 +40,12 @@ const openingSac = perRow(false);
 
 export const rows: MatrixRow[] = [
   { method: 'GET', path: '/api/projects/:projectId/sacs', expect: ANY_MEMBER },
-  { method: 'POST', path: '/api/projects/:projectId/sacs', expect: OWNER_ONLY, request: () => ({ body: { layDate: new Date().toISOString().slice(0, 10) } }) },
+  {
+    method: 'POST',
+    path: '/api/projects/:projectId/sacs',
+    expect: OWNER_ONLY,
+    request: () => ({ body: { layDate: new Date().toISOString().slice(0, 10), ...ANY_PAIRING } }),
+  },
   { method: 'GET', path: '/api/sacs/:id', expect: ANY_MEMBER, request: onSac(sharedSac) },
   { method: 'PATCH', path: '/api/sacs/:id', expect: OWNER_ONLY, request: onSac(sharedSac, { notes: 'Matrix note' }) },
   { method: 'GET', path: '/api/sacs/:id/log', expect: ANY_MEMBER, request: onSac(sharedSac) },
