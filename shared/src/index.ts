@@ -4,6 +4,7 @@ export * from './auth/auth.types.js';
 export * from './users/users.types.js';
 export * from './time/temperature.js';
 export * from './time/time-zone.js';
+export * from './time/instant.js';
 export const APP_NAME = 'Broodsilk';
 export * from './breeding/calendar-day.js';
 export * from './breeding/pull-window.js';

@@ -1,5 +1,6 @@
 import { stringify } from 'csv-stringify/sync';
 import { formatMoneyCode, type StatementResponse } from '@broodsilk/shared';
+import { neutraliseCell } from '../common/csv/formula-cells';
 
 export const STATEMENT_CSV_COLUMNS = [
   'line',
@@ -24,7 +25,8 @@ export const STATEMENT_CSV_COLUMNS = [
 ] as const;
 
 /**
- * The statement as RFC 4180 CSV (CRLF, quoted where needed, one header row): the party's ledger
+ * The statement as RFC 4180 CSV (CRLF, quoted where needed, one header row; text that a spreadsheet
+ * would run as a formula starts with an apostrophe, see formula-cells): the party's ledger
  * lines, then summary lines (`kind` share, handed-over, sold, cashed-out, still-owed, debt) with
  * an empty `line`. Counts and minor units are numbers (written unquoted); an arrival's `count` is
  * the young that travelled, split into `arrived_alive` and `arrived_dead`.
@@ -72,5 +74,5 @@ export function statementCsv(s: StatementResponse): string {
       amount: formatMoneyCode(d.amountMinor, d.currency),
       currency: d.currency || currency,
     });
-  return stringify(rows, { header: true, columns: [...STATEMENT_CSV_COLUMNS], record_delimiter: 'windows' });
+  return stringify(rows, { header: true, columns: [...STATEMENT_CSV_COLUMNS], record_delimiter: 'windows', cast: { string: neutraliseCell } });
 }

@@ -5,11 +5,13 @@ import { EntityManager, LockMode, raw } from '@mikro-orm/postgresql';
 import { createHash, randomBytes } from 'node:crypto';
 import { SESSION_HOURS, type Me } from '@broodsilk/shared';
 import { appConfig } from '../config/app.config';
-import { MailService } from '../mail/mail.service';
+import { MailOutbox } from '../mail/mail-outbox.service';
 import { User } from '../users/user.entity';
 import { toMe } from '../users/users.mapper';
 import { dummyPasswordHash, hashPassword, verifyPassword } from './password-hasher';
 import { PasswordResetToken } from './password-reset-token.entity';
+import { SignInLimits } from './sign-in-limits';
+import { revokeFeeds } from '../calendar/feed-token';
 import type { JwtPayload } from '../common/auth-user';
 import type { RegisterDto } from './dto/register.dto';
 import type { LoginDto } from './dto/login.dto';
@@ -33,7 +35,8 @@ export class AuthService {
     private readonly em: EntityManager,
     private readonly clock: Clock,
     private readonly jwt: JwtService,
-    private readonly mail: MailService,
+    private readonly outbox: MailOutbox,
+    private readonly limits: SignInLimits,
     @Inject(appConfig.KEY) private readonly app: ConfigType<typeof appConfig>,
   ) {}
 
@@ -51,11 +54,17 @@ export class AuthService {
     return this.issue(user);
   }
 
-  async login(dto: LoginDto): Promise<IssuedSession> {
+  /** Checks the password unless the account is locked; wrong ones count towards the lock, known address or not. */
+  async login(dto: LoginDto, ip: string): Promise<IssuedSession> {
+    await this.limits.assertAccountOpen(dto.email, ip);
     const user = await this.em.findOne(User, { email: dto.email }, { populate: ['passwordHash'] });
     // Verify against a dummy hash for unknown e-mails so the answer takes as long either way.
     const ok = await verifyPassword(user?.passwordHash ?? (await dummyPasswordHash()), dto.password);
-    if (!user || !ok) throw new UnauthorizedException('The e-mail or password is not right.');
+    if (!user || !ok) {
+      await this.limits.recordFailure(dto.email);
+      throw new UnauthorizedException('The e-mail or password is not right.');
+    }
+    await this.limits.recordSuccess(dto.email);
     return this.issue(user);
   }
 
@@ -83,16 +92,17 @@ export class AuthService {
     const user = await this.em.findOne(User, { email });
     if (!user) return;
     const token = randomBytes(32).toString('base64url');
+    const link = `${this.app.publicUrl}/reset-password?token=${token}`;
     await this.em.transactional(async (em) => {
       // A new link replaces any older one that is still open.
       await em.nativeUpdate(PasswordResetToken, { user: user.id, usedAt: null }, { usedAt: this.clock.now() });
       em.create(PasswordResetToken, { user, tokenHash: sha256(token), expiresAt: new Date(this.clock.now().getTime() + RESET_LINK_MINUTES * 60_000) });
-    });
-    const link = `${this.app.publicUrl}/reset-password?token=${token}`;
-    await this.mail.send({
-      to: user.email,
-      subject: 'Reset your Broodsilk password',
-      text: `Hello ${user.displayName},\n\nSomeone asked to reset the password of your Broodsilk account. If it was you, open this link within ${RESET_LINK_MINUTES} minutes:\n\n${link}\n\nThe link works once. If you did not ask for it, ignore this e-mail; your password stays as it is.\n`,
+      await em.flush();
+      await this.outbox.enqueue(em, {
+        to: user.email,
+        subject: 'Reset your Broodsilk password',
+        text: `Hello ${user.displayName},\n\nSomeone asked to reset the password of your Broodsilk account. If it was you, open this link within ${RESET_LINK_MINUTES} minutes:\n\n${link}\n\nThe link works once. If you did not ask for it, ignore this e-mail; your password stays as it is.\n`,
+      });
     });
   }
 
@@ -106,6 +116,8 @@ export class AuthService {
       const user = row.user.getEntity();
       user.passwordHash = await hashPassword(password);
       user.tokenVersion += 1;
+      // Whoever took over the account may have copied the feed URL too.
+      await revokeFeeds(em, user.id, this.clock.now());
     });
   }
 

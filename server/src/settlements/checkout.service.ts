@@ -6,6 +6,7 @@ import { formatMoneyCode, type CheckoutResponse, type CreateCheckoutRequest } fr
 import type { AuthUser } from '../common/auth-user';
 import { appConfig } from '../config/app.config';
 import { STRIPE_CLIENT } from '../payments/stripe.client';
+import { providerCall } from '../payments/provider-call';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { loadAccount } from '../accounts/account-loader';
 import { User } from '../users/user.entity';
@@ -47,24 +48,26 @@ export class CheckoutService {
     if (!payout.chargesEnabled) throw new ConflictException(`${view.nameOf(creditor.id)} has not finished setting up their payout account yet.`);
 
     const back = `${this.app.publicUrl}/projects/${access.project.id}/account`;
-    const session = await this.stripe.checkout.sessions.create({
-      mode: 'payment',
-      line_items: [
-        {
-          quantity: 1,
-          price_data: { currency: currency.toLowerCase(), unit_amount: dto.amountMinor, product_data: { name: `Settlement: ${access.project.title}` } },
+    const session = await providerCall(() =>
+      this.stripe.checkout.sessions.create({
+        mode: 'payment',
+        line_items: [
+          {
+            quantity: 1,
+            price_data: { currency: currency.toLowerCase(), unit_amount: dto.amountMinor, product_data: { name: `Settlement: ${access.project.title}` } },
+          },
+        ],
+        payment_intent_data: {
+          transfer_data: { destination: payout.providerAccountId },
+          metadata: { projectId: access.project.id, fromMemberId: me.id, toMemberId: creditor.id },
         },
-      ],
-      payment_intent_data: {
-        transfer_data: { destination: payout.providerAccountId },
+        success_url: `${back}?paid={CHECKOUT_SESSION_ID}`,
+        cancel_url: `${back}?cancelled=1`,
+        client_reference_id: access.project.id,
+        customer_email: user.email,
         metadata: { projectId: access.project.id, fromMemberId: me.id, toMemberId: creditor.id },
-      },
-      success_url: `${back}?paid={CHECKOUT_SESSION_ID}`,
-      cancel_url: `${back}?cancelled=1`,
-      client_reference_id: access.project.id,
-      customer_email: user.email,
-      metadata: { projectId: access.project.id, fromMemberId: me.id, toMemberId: creditor.id },
-    });
+      }),
+    );
     this.em.create(SettlementCheckout, {
       sessionId: session.id,
       project: access.project,
