@@ -36,7 +36,13 @@ async function ensureCountedBrood(page: Page): Promise<string> {
     const inCare = shares.sacs.reduce((n: number, s: { aliveInCare: number }) => n + s.aliveInCare, 0);
     if (inCare < 3 || !tomasz || tomasz.owedSpiderlings < 3) {
       const day = (n: number) => new Date(Date.now() - n * 86_400_000).toISOString();
-      const sac = await post(`/projects/${project.id}/sacs`, { layDate: day(60).slice(0, 10), pulledAt: day(36) });
+      const sac = await post(`/projects/${project.id}/sacs`, {
+        layDate: day(60).slice(0, 10),
+        pulledAt: day(36),
+        // The demo pairing is not what this spec is about.
+        acknowledgedWarnings: ['sac-without-pairing', 'sac-soon-after-pairing', 'sac-long-after-pairing'],
+        warningReason: 'Recorded for the hand-over check.',
+      });
       await post(`/sacs/${sac.id}/opening`, { openedAt: day(20), healthyEggs: 0, eggsWithLegs: 0, nymphs: 32, darkEggs: 2, spoiledEggs: 0, keptBack: 32 });
       await post(`/sacs/${sac.id}/counts`, { stage: 'second-instar', alive: 30, lost: 2, lossReason: 'other' });
     }

@@ -30,6 +30,7 @@ import { ProjectRoleGuard } from './projects/project-role.guard';
 import { ClockModule } from './common/clock.module';
 import { AccountsModule } from './accounts/accounts.module';
 import { SettlementsModule } from './settlements/settlements.module';
+import { IdempotencyModule } from './idempotency/idempotency.module';
 
 /** Calendar-feed and invitation tokens travel in the path; they are secrets, so not logged. */
 function redactSecrets(url: string): string {
@@ -83,6 +84,7 @@ function staticClient(): DynamicModule[] {
     RemindersModule,
     AccountsModule,
     SettlementsModule,
+    IdempotencyModule,
   ],
   providers: [
     { provide: APP_FILTER, useClass: AllExceptionsFilter },

@@ -28,24 +28,47 @@ const post = async (body: object, who = s.mira) => {
 };
 
 describe('stage shares-settled', () => {
-  it('stays at brood while young or money are owed, and reaches shares-settled when nothing is', async () => {
+  it('stays at brood while young or money are owed or a hand-over is unconfirmed, and reaches shares-settled when nothing is', async () => {
     const b = (await api(t.app).get(`/api/projects/${s.projectId}/balances`).set('Authorization', s.mira.bearer).expect(200)).body as BalancesResponse;
     expect(b.parties.map((p) => p.share)).toEqual([1, 3, 0]);
     expect(await stage()).toBe('brood');
 
-    await post({ kind: 'hand-over', date: D, memberId: s.tomaszId, count: 2, method: 'pick-up' });
+    const handOver = await post({ kind: 'hand-over', date: D, memberId: s.tomaszId, count: 2, method: 'pick-up' });
     await post({ kind: 'cash-out', date: D, memberId: s.tomaszId, count: 1 });
     expect(await stage()).toBe('brood'); // young all out, but Mira owes Tomasz EUR 5.00
 
     const paid = await post({ kind: 'money', date: D, fromMemberId: s.miraId, toMemberId: s.tomaszId, amountMinor: 500 });
     expect(await stage()).toBe('brood'); // waiting for Tomasz to confirm
     await api(t.app).post(`/api/projects/${s.projectId}/entries/${paid.id}/confirm`).set('Authorization', s.tomasz.bearer).send({}).expect(201);
+    expect(await stage()).toBe('brood'); // the hand-over is not settled before Tomasz confirms it arrived
+    const balances = async () =>
+      (await api(t.app).get(`/api/projects/${s.projectId}/balances`).set('Authorization', s.mira.bearer).expect(200)).body as BalancesResponse;
+    expect((await balances()).settled).toBe(false);
+    await api(t.app)
+      .post(`/api/projects/${s.projectId}/entries/${handOver.id}/confirm`)
+      .set('Authorization', s.tomasz.bearer)
+      .send({ arrivedAlive: 2, arrivedDead: 0 })
+      .expect(201);
     expect(await stage()).toBe('shares-settled');
-    expect(
-      ((await api(t.app).get(`/api/projects/${s.projectId}/balances`).set('Authorization', s.mira.bearer).expect(200)).body as BalancesResponse).settled,
-    ).toBe(true);
+    expect((await balances()).settled).toBe(true);
 
     await post({ kind: 'correction', date: D, reversesId: paid.id, reason: 'the transfer bounced' });
     expect(await stage()).toBe('brood');
+  });
+
+  it('refuses an entry or a confirmation dated after the recorder’s today (400), writing nothing', async () => {
+    const before = ((await api(t.app).get(`/api/projects/${s.projectId}/entries`).set('Authorization', s.mira.bearer).expect(200)).body as unknown[]).length;
+    const tomorrow = new Date(Date.now() + 2 * 86_400_000).toISOString().slice(0, 10);
+    const res = await api(t.app)
+      .post(`/api/projects/${s.projectId}/entries`)
+      .set('Authorization', s.mira.bearer)
+      .send({ kind: 'hand-over', date: tomorrow, memberId: s.tomaszId, count: 1, method: 'pick-up' })
+      .expect(400);
+    expect(res.body.message).toMatch(
+      new RegExp(`^The hand-over date ${tomorrow} is after today \\(\\d{4}-\\d{2}-\\d{2} where you are\\); record it once it has happened\\.$`),
+    );
+    expect(((await api(t.app).get(`/api/projects/${s.projectId}/entries`).set('Authorization', s.mira.bearer).expect(200)).body as unknown[]).length).toBe(
+      before,
+    );
   });
 });

@@ -96,7 +96,7 @@ describe('stage entries', () => {
     const instar = await log(caretaker, sac.id, { kind: 'stage', stage: 'first-instar', at: hoursBefore(1) }).expect(201);
     expect(await sacOf(sac.id)).toMatchObject({ broodStage: 'first-instar', roll: null });
     const project = await http().get(`/api/projects/${projectId}`).set('Authorization', owner.bearer).expect(200);
-    expect(project.body.stage).toEqual({ stage: 'brood', sacId: sac.id });
+    expect(project.body.stage).toEqual({ stage: 'brood', sacId: sac.id, unrecorded: ['paired'] }); // a fixture sac with no pairing recorded
     await log(owner, sac.id, { kind: 'strike', strikes: instar.body.id, reason: 'Still eggs with legs' }).expect(201);
     expect(await sacOf(sac.id)).toMatchObject({ broodStage: 'eggs-with-legs', roll: { status: 'overdue' } });
     const same = await log(owner, sac.id, { kind: 'stage', stage: 'eggs-with-legs' }).expect(400);

@@ -47,7 +47,14 @@ describe('dashboard', () => {
     expect(up).not.toContain(pulled.id);
     const s22 = mine.upcomingPullWindows.find((x) => x.sac.id === open22.id)!;
     expect(s22).toMatchObject({ projectTitle: 'Dashboard pair', myRole: 'owner', sac: { dayNumber: 22, pullWindow: { state: 'open', opensOn: daysAgo(1) } } });
-    expect(mine.dueToday.pullWindows.map((x) => [x.sac.id, x.event])).toEqual([[opensToday.id, 'opens-today']]);
+    // Every window open today is a to-do, not only the one opening today.
+    expect(mine.dueToday.pullWindows.map((x) => [x.sac.id, x.event])).toEqual(
+      expect.arrayContaining([
+        [opensToday.id, 'opens-today'],
+        [open22.id, 'open'],
+      ]),
+    );
+    expect(mine.dueToday.pullWindows.map((x) => x.sac.id)).not.toContain(farOff.id);
     expect(mine.dueToday.rolls.map((x) => [x.sac.id, x.sac.roll!.status])).toEqual([[pulled.id, 'due']]);
     expect(mine.openProjects.find((p) => p.id === projectId)!.stage.stage).toBe('in-incubator');
     // The caretaker's roll is "recent activity from others" for the owner, not for the caretaker.
@@ -59,11 +66,16 @@ describe('dashboard', () => {
     // A partner sees the project and its windows but has nothing to do today.
     const part = await dashboard(partner);
     expect(part.openProjects.map((p) => p.id)).toContain(projectId);
-    expect(part.dueToday).toEqual({ rolls: [], pullWindows: [] });
+    expect(part.dueToday).toEqual({ rolls: [], pullWindows: [], termsToAccept: [], handOversToConfirm: [], payments: [] });
     expect(part.upcomingPullWindows.map((x) => x.sac.id)).toContain(open22.id);
 
     const alone = await dashboard(loner);
-    expect(alone).toMatchObject({ openProjects: [], upcomingPullWindows: [], dueToday: { rolls: [], pullWindows: [] }, recentActivity: [] });
+    expect(alone).toMatchObject({
+      openProjects: [],
+      upcomingPullWindows: [],
+      dueToday: { rolls: [], pullWindows: [], termsToAccept: [], handOversToConfirm: [], payments: [] },
+      recentActivity: [],
+    });
   });
 
   it('lists the user’s own mature males by clock urgency', async () => {

@@ -52,7 +52,7 @@ describe('recording a sac', () => {
       await http().get(`/api/sacs/${sac.id}`).set('Authorization', who.bearer).expect(200);
     }
     const project = await http().get(`/api/projects/${projectId}`).set('Authorization', owner.bearer).expect(200);
-    expect(project.body.stage).toEqual({ stage: 'sac-laid', sacId: sac.id });
+    expect(project.body.stage).toEqual({ stage: 'sac-laid', sacId: sac.id, unrecorded: ['paired'] }); // no pairing recorded before it
     const timeline = await http().get(`/api/projects/${projectId}/activity`).set('Authorization', partner.bearer).expect(200);
     expect(timeline.body.filter((e: { subject: { id: string } }) => e.subject.id === sac.id).map((e: { kind: string }) => e.kind)).toEqual(['sac.laid']);
   });

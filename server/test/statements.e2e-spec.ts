@@ -86,6 +86,46 @@ describe('statement CSV', () => {
   });
 });
 
+describe('every entry that concerns the party, with numbers as numbers', () => {
+  it('the keeper’s own statement lists the hand-overs, cash-outs and sales he made, and the arrival he was told of', async () => {
+    const entries = (await api(t.app).get(`/api/projects/${s.projectId}/entries`).set('Authorization', s.mira.bearer).expect(200))
+      .body as StatementResponse['entries'];
+    const handOver = entries.find((e) => e.kind === 'hand-over')!;
+    await api(t.app)
+      .post(`/api/projects/${s.projectId}/entries/${handOver.id}/confirm`)
+      .set('Authorization', s.tomasz.bearer)
+      .send({ arrivedAlive: 9, arrivedDead: 1 })
+      .expect(201);
+    const own = (await api(t.app).get(`/api/projects/${s.projectId}/statements/${s.miraId}`).set('Authorization', s.mira.bearer).expect(200))
+      .body as StatementResponse;
+    expect(own.entries.map((e) => e.kind)).toEqual(['hand-over', 'cash-out', 'sale', 'arrival']);
+    expect(own.entries[0]).toMatchObject({ from: { memberId: s.miraId, name: 'Mira Keeper' }, to: { memberId: s.tomaszId, name: 'Tomasz Partner' } });
+    // Tomasz's statement gains the arrival he confirmed; Lena's sale is still not his.
+    const his = (await api(t.app).get(`/api/projects/${s.projectId}/statements/${s.tomaszId}`).set('Authorization', s.tomasz.bearer).expect(200))
+      .body as StatementResponse;
+    expect(his.entries.map((e) => e.kind)).toEqual(['hand-over', 'cash-out', 'arrival']);
+  });
+
+  // RFC 4180 §2: fields may be quoted; csv-stringify quotes only where needed, so numbers stay bare.
+  it('the CSV fills from and to, and writes counts as unquoted numbers (arrival: 10 = 9 alive + 1 dead)', async () => {
+    const res = await api(t.app).get(`/api/projects/${s.projectId}/statements/${s.miraId}.csv`).set('Authorization', s.mira.bearer).expect(200);
+    const rows = Papa.parse<string[]>(res.text.trimEnd(), { header: false }).data;
+    const col = (name: string) => rows[0]!.indexOf(name);
+    const arrival = rows.find((r) => r[col('kind')] === 'arrival')!;
+    expect([arrival[col('from')], arrival[col('to')], arrival[col('count')], arrival[col('arrived_alive')], arrival[col('arrived_dead')]]).toEqual([
+      'Mira Keeper',
+      'Tomasz Partner',
+      '10',
+      '9',
+      '1',
+    ]);
+    const raw = res.text.split('\r\n').find((line) => line.includes(',arrival,'))!;
+    expect(raw).toMatch(/,Mira Keeper,Tomasz Partner,10,9,1,/); // bare, not "10"
+    const typed = Papa.parse<Record<string, unknown>>(res.text.trimEnd(), { header: true, dynamicTyping: true }).data;
+    expect(typed.find((r) => r.kind === 'hand-over')).toMatchObject({ line: expect.any(Number), count: 10, from: 'Mira Keeper', to: 'Tomasz Partner' });
+  });
+});
+
 describe('statement CSV and formula-like text (OWASP CSV Injection)', () => {
   it('writes text that starts with = + - @ with a leading apostrophe; numbers stay numbers', async () => {
     const f = await accountScenario(t.app, t.orm);

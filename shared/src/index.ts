@@ -1,4 +1,5 @@
 export * from './errors/api-error.js';
+export * from './errors/plausibility.js';
 export * from './auth/auth.types.js';
 export * from './users/users.types.js';
 export * from './time/temperature.js';
@@ -33,5 +34,8 @@ export * from './dashboard/dashboard.types.js';
 export * from './dashboard/calendar.types.js';
 export * from './dashboard/notifications.types.js';
 export * from './vocabulary/labels.js';
+export * from './sacs/brood-count-rules.js';
+export * from './sacs/sac-plausibility.js';
+export * from './projects/project-plausibility.js';
 export * from './money/money.js';
 export * from './projects/project-rules.js';

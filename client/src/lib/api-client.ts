@@ -9,6 +9,8 @@ export interface RequestOptions {
   signal?: AbortSignal;
   /** Do not send the user to sign-in on a 401 (the session probe itself). */
   allowAnonymous?: boolean;
+  /** The write's Idempotency-Key; each POST gets a fresh one, kept across this client's own retry. */
+  idempotencyKey?: string;
 }
 
 let csrfToken: string | null = null;
@@ -56,6 +58,9 @@ async function send<T>(method: Method, path: string, options: RequestOptions = {
     body = JSON.stringify(options.body);
   }
   if (method !== 'GET') headers[CSRF_HEADER] = await ensureCsrfToken();
+  // A repeated tap or retry of the same write is then written once by the server.
+  const idempotencyKey = options.idempotencyKey ?? (method === 'POST' ? crypto.randomUUID() : undefined);
+  if (idempotencyKey) headers['Idempotency-Key'] = idempotencyKey;
   const res = await fetch(buildUrl(path, options.query), { method, headers, body, credentials: 'same-origin', signal: options.signal });
   if (res.ok) {
     if (res.status === 204) return undefined as T;
@@ -66,7 +71,7 @@ async function send<T>(method: Method, path: string, options: RequestOptions = {
   // A stale CSRF token (after a reload or a new session): fetch a fresh one once.
   if (res.status === 403 && method !== 'GET' && !retried && /out of date/.test(error.message)) {
     csrfToken = null;
-    return send<T>(method, path, options, true);
+    return send<T>(method, path, { ...options, idempotencyKey }, true);
   }
   if (res.status === 401 && !options.allowAnonymous) onUnauthorized();
   throw error;

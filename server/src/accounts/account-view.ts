@@ -162,3 +162,10 @@ export function buildAccountView(data: AccountData): AccountView {
   const balances = computeBalances(totals, entries, price, currency, owner.id);
   return { data, owner, nameOf, sacs, totals, entries, pending, balances };
 }
+
+/** Hand-overs in force whose recipient has not yet confirmed the arrival: young on their way, not yet settled. */
+export function handOversAwaitingArrival(view: AccountView): Set<string> {
+  const inForce = new Set(view.balances.inForce);
+  const arrived = new Set(view.data.rows.filter((r) => r.kind === 'arrival' && inForce.has(r.id)).map((r) => r.target!.id));
+  return new Set(view.data.rows.filter((r) => r.kind === 'hand-over' && inForce.has(r.id) && !arrived.has(r.id)).map((r) => r.id));
+}

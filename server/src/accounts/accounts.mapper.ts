@@ -3,6 +3,9 @@ import type { ProjectMember } from '../projects/project-member.entity';
 import type { LedgerEntryRow } from './ledger-entry.entity';
 import { acceptorOf, memberName, type AccountView } from './account-view';
 
+/** Young out of the owner's brood, counted against a party's share: from the owner, to that party. */
+export const FROM_OWNER = new Set(['hand-over', 'arrival', 'sale', 'cash-out']);
+
 const ref = (m: ProjectMember | null | undefined): PartyRef | null => (m ? { memberId: m.id, name: memberName(m) } : null);
 
 /** The ledger as the account page and statements show it, with each entry's status. */
@@ -37,8 +40,8 @@ function toEntryResponse(r: LedgerEntryRow, seq: number, view: AccountView, l: L
     date: r.date,
     sacId: r.sacId ?? null,
     party: ref(r.party),
-    from: ref(r.fromParty),
-    to: ref(r.toParty),
+    from: ref(r.fromParty) ?? (FROM_OWNER.has(r.kind) ? ref(view.owner) : null),
+    to: ref(r.toParty) ?? (FROM_OWNER.has(r.kind) ? ref(r.party) : null),
     count: r.count ?? null,
     method: r.method ?? null,
     carrier: r.carrier ?? null,

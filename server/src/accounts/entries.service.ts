@@ -1,6 +1,6 @@
 import { BadRequestException, ConflictException, ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
-import type { ConfirmEntryRequest, CreateEntryRequest, LedgerEntryResponse } from '@broodsilk/shared';
+import { todayIn, type ConfirmEntryRequest, type CreateEntryRequest, type LedgerEntryResponse } from '@broodsilk/shared';
 import type { AuthUser } from '../common/auth-user';
 import { ActivityService } from '../activity/activity.service';
 import type { ProjectAccess } from '../projects/project-access.service';
@@ -10,7 +10,7 @@ import { AccountLock } from './account-lock';
 import { loadAccount } from './account-loader';
 import { acceptorOf, type AccountView } from './account-view';
 import { toEntryResponses } from './accounts.mapper';
-import { assertWithdrawalFits, draftEntry, type EntryDraft } from './entry-rules';
+import { assertNotFutureDate, assertWithdrawalFits, draftEntry, type EntryDraft } from './entry-rules';
 import { LedgerEntryRow } from './ledger-entry.entity';
 import { describeEntry } from './entry-words';
 import { Clock } from '../common/clock';
@@ -30,12 +30,12 @@ export class EntriesService {
 
   /** Checks and appends one entry under the account lock, with its activity record, in one transaction. */
   async create(access: ProjectAccess, user: AuthUser, dto: CreateEntryRequest): Promise<LedgerEntryResponse> {
-    return this.write(access, async (tx, view) => draftEntry(view, access, user.id, dto), user);
+    return this.write(access, async (tx, view) => draftEntry(view, access, user.id, dto, todayIn(user.timeZone, this.clock.now())), user);
   }
 
   /** The recipient confirms a hand-over (arrival counts) or the payee confirms a payment. */
   async confirm(access: ProjectAccess, user: AuthUser, entryId: string, dto: ConfirmEntryRequest): Promise<LedgerEntryResponse> {
-    return this.write(access, async (_tx, view) => confirmationDraft(view, access, user.id, entryId, dto, this.clock.now()), user);
+    return this.write(access, async (_tx, view) => confirmationDraft(view, access, user.id, entryId, dto, todayIn(user.timeZone, this.clock.now())), user);
   }
 
   /** Appends a row the payment provider reported (no user); used by the webhook inside its own transaction. */
@@ -105,10 +105,11 @@ function assertConfirmer(access: ProjectAccess, userId: string, party: NonNullab
   if (!mine) throw new ForbiddenException(`Only ${what} confirms this${party.user ? '' : ' (or the owner, for a party without an account)'}.`);
 }
 
-function confirmationDraft(view: AccountView, access: ProjectAccess, userId: string, entryId: string, dto: ConfirmEntryRequest, now: Date): EntryDraft {
+function confirmationDraft(view: AccountView, access: ProjectAccess, userId: string, entryId: string, dto: ConfirmEntryRequest, today: string): EntryDraft {
   const row = view.data.rows.find((r) => r.id === entryId);
   if (!row) throw new NotFoundException('There is no such entry in this project.');
-  const date = dto.date ?? now.toISOString().slice(0, 10);
+  const date = dto.date ?? today;
+  assertNotFutureDate(date, today, 'confirmation');
   const inForce = new Set(view.balances.inForce);
   if (row.kind === 'hand-over') {
     assertConfirmer(access, userId, row.party!, 'the party who received the hand-over');

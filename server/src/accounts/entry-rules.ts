@@ -93,8 +93,18 @@ function assertMayRecord(view: AccountView, access: ProjectAccess, userId: strin
   throw new ForbiddenException('Only the owner of this project records hand-overs, sales and cash-outs; partners confirm hand-overs and record payments.');
 }
 
-export function draftEntry(view: AccountView, access: ProjectAccess, userId: string, dto: CreateEntryRequest): EntryDraft {
+/** An entry records what has happened: its date is the recorder's today or earlier. */
+export function assertNotFutureDate(date: string, today: string, what: string): void {
+  if (date > today)
+    throw new BadRequestException({
+      message: `The ${what} date ${date} is after today (${today} where you are); record it once it has happened.`,
+      details: [{ field: 'date', message: `The date ${date} is in the future.` }],
+    });
+}
+
+export function draftEntry(view: AccountView, access: ProjectAccess, userId: string, dto: CreateEntryRequest, today: string): EntryDraft {
   assertMayRecord(view, access, userId, dto);
+  assertNotFutureDate(dto.date, today, dto.kind);
   const base = { kind: dto.kind, date: dto.date, note: dto.note ?? null };
   if (dto.kind !== 'correction' && !view.data.terms) {
     throw new ConflictException(

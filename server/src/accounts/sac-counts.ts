@@ -1,6 +1,7 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import type { SacOutcomeState } from '@broodsilk/shared';
 import { Sac } from '../sacs/sac.entity';
+import { NOT_STRUCK } from '../sacs/sac-queries';
 
 export interface SacCountFact {
   sacId: string;
@@ -13,7 +14,7 @@ export interface SacCountFact {
 
 /**
  * A project's sacs with their latest brood count. The alive figure is the sacs module's
- * `currentCount` (latest brood_counts row); the instant is read with it so the account can tell
+ * `currentCount` (latest brood_counts row not struck by a correction); the instant is read with it so the account can tell
  * young handed over before the count (no longer in it) from those handed over after (still in it).
  */
 export async function sacCountsOf(em: EntityManager, projectId: string): Promise<SacCountFact[]> {
@@ -26,8 +27,8 @@ export async function sacCountsByProject(em: EntityManager, projectIds: string[]
   const sacs = await em.find(Sac, { project: { $in: projectIds } }, { orderBy: { layDate: 'asc', createdAt: 'asc' } });
   if (!sacs.length) return out;
   const rows = await em.execute<{ sac_id: string; alive: number; at: Date }[]>(
-    `select distinct on (sac_id) sac_id, alive, at from brood_counts
-      where sac_id = any(?::uuid[]) order by sac_id, at desc, created_at desc`,
+    `select distinct on (c.sac_id) c.sac_id, c.alive, c.at from brood_counts c
+      where c.sac_id = any(?::uuid[]) and ${NOT_STRUCK} order by c.sac_id, c.at desc, c.created_at desc`,
     [`{${sacs.map((s) => s.id).join(',')}}`], // a PostgreSQL array literal: knex would spread a JS array
   );
   const latest = new Map(rows.map((r) => [r.sac_id, r]));

@@ -11,6 +11,8 @@ export const STATEMENT_CSV_COLUMNS = [
   'from',
   'to',
   'count',
+  'arrived_alive',
+  'arrived_dead',
   'amount_minor',
   'amount',
   'currency',
@@ -26,7 +28,8 @@ export const STATEMENT_CSV_COLUMNS = [
  * The statement as RFC 4180 CSV (CRLF, quoted where needed, one header row; text that a spreadsheet
  * would run as a formula starts with an apostrophe, see formula-cells): the party's ledger
  * lines, then summary lines (`kind` share, handed-over, sold, cashed-out, still-owed, debt) with
- * an empty `line`.
+ * an empty `line`. Counts and minor units are numbers (written unquoted); an arrival's `count` is
+ * the young that travelled, split into `arrived_alive` and `arrived_dead`.
  */
 export function statementCsv(s: StatementResponse): string {
   const currency = s.terms?.currency ?? '';
@@ -38,7 +41,9 @@ export function statementCsv(s: StatementResponse): string {
     party: e.party?.name ?? '',
     from: e.from?.name ?? '',
     to: e.to?.name ?? '',
-    count: e.count ?? (e.kind === 'arrival' ? `${e.arrivedAlive} alive, ${e.arrivedDead} dead` : ''),
+    count: e.count ?? (e.arrivedAlive != null && e.arrivedDead != null ? e.arrivedAlive + e.arrivedDead : ''),
+    arrived_alive: e.arrivedAlive ?? '',
+    arrived_dead: e.arrivedDead ?? '',
     amount_minor: e.amountMinor ?? e.priceMinor ?? '',
     amount: e.amountMinor != null ? formatMoneyCode(e.amountMinor, e.currency!) : e.priceMinor != null ? formatMoneyCode(e.priceMinor, e.currency!) : '',
     currency: e.currency ?? '',

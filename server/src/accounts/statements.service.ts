@@ -5,7 +5,8 @@ import type { ProjectAccess } from '../projects/project-access.service';
 import { MailService } from '../mail/mail.service';
 import { loadAccount } from './account-loader';
 import { memberName, type AccountView } from './account-view';
-import { toEntryResponses } from './accounts.mapper';
+import { FROM_OWNER, toEntryResponses } from './accounts.mapper';
+import type { ProjectMember } from '../projects/project-member.entity';
 import type { LedgerEntryRow } from './ledger-entry.entity';
 import { failureNote, toSacSharesView, toTermsSummary } from './shares.mapper';
 import { SHIPPING_CAUTIONS } from './shipping-cautions';
@@ -13,10 +14,16 @@ import { statementCsv } from './statement-csv';
 import { statementPdf } from './statement-pdf';
 import { Clock } from '../common/clock';
 
-/** Whether a row is about the party: theirs, or an arrival/confirmation/correction of one that is. */
-function concerns(row: LedgerEntryRow, memberId: string, depth = 0): boolean {
-  if (row.party?.id === memberId || row.fromParty?.id === memberId || row.toParty?.id === memberId) return true;
-  return depth < 50 && !!row.target && concerns(row.target, memberId, depth + 1);
+/**
+ * Whether a row concerns the party, made by or to them: it names them, they recorded it, it moves
+ * young out of the owner's brood and they are the owner, or it confirms, counts or corrects such a row.
+ */
+function concerns(row: LedgerEntryRow, member: ProjectMember, ownerId: string, depth = 0): boolean {
+  const id = member.id;
+  if (row.party?.id === id || row.fromParty?.id === id || row.toParty?.id === id) return true;
+  if (member.user && row.recordedBy?.id === member.user.id) return true;
+  if (id === ownerId && FROM_OWNER.has(row.kind)) return true;
+  return depth < 50 && !!row.target && concerns(row.target, member, ownerId, depth + 1);
 }
 
 @Injectable()
@@ -77,7 +84,7 @@ export class StatementsService {
 
   private build(view: AccountView, memberId: string): StatementResponse {
     const member = view.data.members.find((m) => m.id === memberId)!;
-    const mine = new Set(view.data.rows.filter((r) => concerns(r, memberId)).map((r) => r.id));
+    const mine = new Set(view.data.rows.filter((r) => concerns(r, member, view.owner.id)).map((r) => r.id));
     const entries = toEntryResponses(view).filter((e) => mine.has(e.id));
     const balance = view.balances.parties.find((p) => p.partyId === memberId);
     return {

@@ -7,6 +7,7 @@ import {
   type DashboardResponse,
   type DashboardSac,
   type ProjectSummary,
+  type PullWindowEvent,
   type RollStatus,
 } from '@broodsilk/shared';
 import type { AuthUser } from '../common/auth-user';
@@ -20,9 +21,21 @@ import { ActivityService } from '../activity/activity.service';
 import { Sac } from '../sacs/sac.entity';
 import { SAC_POPULATE, SacViewsService } from '../sacs/sac-views.service';
 import { Clock } from '../common/clock';
+import { loadAccounts } from '../accounts/account-loader';
+import { accountTodos } from '../accounts/account-todos';
+import { termsAwaitingAcceptance } from '../projects/terms-todos';
 
 const ROLL_ORDER: Record<RollStatus, number> = { overdue: 0, due: 1, 'due-soon': 2, upcoming: 3 };
 const HANDS_ON = new Set(['owner', 'caretaker']);
+const MONEY = new Set(['owner', 'partner']);
+
+/** Opens today, closes today, or open in between: each a reason to look at the sac today. */
+function pullWindowEvents(x: DashboardSac, today: string): (DashboardSac & { event: PullWindowEvent })[] {
+  const w = x.sac.pullWindow;
+  if (w.opensOn === today) return [{ ...x, event: 'opens-today' }, ...(w.closesOn === today ? [{ ...x, event: 'closes-today' as const }] : [])];
+  if (w.closesOn === today) return [{ ...x, event: 'closes-today' }];
+  return w.opensOn < today && today < w.closesOn ? [{ ...x, event: 'open' }] : [];
+}
 
 @Injectable()
 export class DashboardService {
@@ -64,6 +77,12 @@ export class DashboardService {
     const handsOn = items.filter((x) => HANDS_ON.has(x.myRole));
     const withMother = (x: DashboardSac) => !x.sac.pulled;
     const horizon = addDays(today, DASHBOARD_PULL_WINDOW_DAYS);
+    // Money to-dos for owners and partners: every account loaded with a fixed number of queries.
+    const views = await loadAccounts(
+      this.em,
+      projects.filter((p) => MONEY.has(roleOf.get(p.id)!)),
+    );
+    const accounts = [...views.values()].map((v) => accountTodos(v, viewer.id));
 
     return {
       today,
@@ -71,12 +90,14 @@ export class DashboardService {
         rolls: handsOn
           .filter((x) => x.sac.roll && x.sac.roll.status !== 'upcoming')
           .sort((a, b) => ROLL_ORDER[a.sac.roll!.status] - ROLL_ORDER[b.sac.roll!.status] || a.sac.roll!.due.localeCompare(b.sac.roll!.due)),
-        pullWindows: handsOn
-          .filter(withMother)
-          .flatMap((x) => [
-            ...(x.sac.pullWindow.opensOn === today ? [{ ...x, event: 'opens-today' as const }] : []),
-            ...(x.sac.pullWindow.closesOn === today ? [{ ...x, event: 'closes-today' as const }] : []),
-          ]),
+        pullWindows: handsOn.filter(withMother).flatMap((x) => pullWindowEvents(x, today)),
+        termsToAccept: await termsAwaitingAcceptance(
+          this.em,
+          viewer.id,
+          projects.map((p) => p.id),
+        ),
+        handOversToConfirm: accounts.flatMap((a) => a.handOvers),
+        payments: accounts.flatMap((a) => a.payments),
       },
       openProjects: summaries.filter((s) => openIds.has(s.id)),
       upcomingPullWindows: items

@@ -4,7 +4,7 @@ import { BaseEntity } from '../database/base.entity';
 import { User } from '../users/user.entity';
 import { Project } from './project.entity';
 
-/** One pairing attempt: when the male went in, for how long, how it went. */
+/** One pairing attempt: when the male went in, for how long, how it went. Corrected by a new row that `corrects` it. */
 @Entity({ tableName: 'pairings' })
 @Index({ properties: ['project', 'startedAt'] })
 export class Pairing extends BaseEntity {
@@ -29,4 +29,15 @@ export class Pairing extends BaseEntity {
 
   @ManyToOne(() => User, { deleteRule: 'restrict' })
   recordedBy!: User;
+
+  /** The pairing this one corrects; that one stays, struck. */
+  @ManyToOne(() => Pairing, { nullable: true, deleteRule: 'cascade' })
+  corrects?: Pairing | null;
+
+  @Property({ type: 'text', nullable: true })
+  reason?: string | null;
+
+  /** Why an unusual pairing (an acknowledged plausibility warning) is right. */
+  @Property({ type: 'text', nullable: true })
+  warningReason?: string | null;
 }

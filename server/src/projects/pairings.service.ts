@@ -1,14 +1,15 @@
 import { ConflictException, Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
-import { todayIn, type PairingResponse } from '@broodsilk/shared';
+import { pairingBeforeMaturingWarnings, todayIn, type PairingResponse } from '@broodsilk/shared';
 import type { AuthUser } from '../common/auth-user';
 import { badRequest } from '../common/field-errors';
 import { User } from '../users/user.entity';
 import { ActivityService } from '../activity/activity.service';
+import { acceptWarnings } from '../plausibility/plausibility';
 import type { ProjectAccess } from './project-access.service';
 import { Project } from './project.entity';
 import { Pairing } from './pairing.entity';
-import { toPairingResponse } from './pairings.mapper';
+import { struckPairings, toPairingResponse } from './pairings.mapper';
 import type { CreatePairingDto } from './dto/create-pairing.dto';
 import { Clock } from '../common/clock';
 
@@ -23,20 +24,27 @@ export class PairingsService {
     private readonly clock: Clock,
   ) {}
 
+  /** Newest first, corrected pairings included (flagged with the pairing that struck them). */
   async list(access: ProjectAccess): Promise<PairingResponse[]> {
     const rows = await this.em.find(Pairing, { project: access.project.id }, { populate: ['recordedBy'], orderBy: { startedAt: 'desc', createdAt: 'desc' } });
-    return rows.map(toPairingResponse);
+    const struck = struckPairings(rows);
+    return rows.map((p) => toPairingResponse(p, struck.get(p.id) ?? null));
   }
 
   async create(viewer: AuthUser, access: ProjectAccess, dto: CreatePairingDto): Promise<PairingResponse> {
     const startedAt = new Date(dto.startedAt);
     if (startedAt.getTime() > this.clock.now().getTime() + FUTURE_SLACK_MS)
       throw badRequest([{ field: 'startedAt', message: 'The pairing start is in the future; record a pairing once it has happened.' }]);
+    if (dto.corrects && !dto.reason?.trim()) throw badRequest([{ field: 'reason', message: 'Say briefly why the recorded pairing was wrong.' }]);
+    if (!dto.corrects && dto.reason) throw badRequest([{ field: 'reason', message: 'A reason goes with a correction (corrects: the id of the pairing).' }]);
     const id = await this.em.transactional(async (tx) => {
       const p = await tx.findOneOrFail(Project, access.project.id, { populate: ['owner', 'male'] });
       if (p.endedEarlyReason || p.closedOn) throw new ConflictException({ message: 'This project has ended, so no more pairings can be recorded in it.' });
+      const target = dto.corrects ? await this.correctionTarget(tx, p, dto.corrects) : null;
       // The owner's calendar day, so every member sees the same stage and warnings.
       const startedOn = todayIn(p.owner.timeZone, startedAt);
+      const maturedOn = p.male.maturity === 'mature' ? (p.male.maturedOn ?? null) : null;
+      const warningReason = acceptWarnings(pairingBeforeMaturingWarnings(startedOn, maturedOn), dto);
       const pairing = tx.create(Pairing, {
         project: p,
         startedAt,
@@ -45,18 +53,32 @@ export class PairingsService {
         outcome: dto.outcome,
         notes: dto.notes ?? null,
         recordedBy: tx.getReference(User, viewer.id),
+        corrects: target,
+        reason: target ? dto.reason!.trim() : null,
+        warningReason,
       });
+      const what = `pairing on ${startedOn} (${dto.durationMinutes} min): ${dto.outcome}`;
       this.activity.record(tx, {
         projectId: p.id,
         actorId: viewer.id,
-        kind: 'pairing.recorded',
+        kind: target ? 'pairing.corrected' : 'pairing.recorded',
         subjectType: 'pairing',
         subjectId: pairing.id,
-        summary: `Pairing on ${startedOn} (${dto.durationMinutes} min): ${dto.outcome}.`,
-        data: { on: startedOn, outcome: dto.outcome, durationMinutes: dto.durationMinutes },
+        summary: target
+          ? `Pairing on ${target.startedOn} (${target.outcome}) corrected to a ${what} (${dto.reason!.trim()}).`
+          : `Pairing on ${startedOn} (${dto.durationMinutes} min): ${dto.outcome}.`,
+        data: { on: startedOn, outcome: dto.outcome, durationMinutes: dto.durationMinutes, ...(target ? { corrects: target.id } : {}) },
       });
       return pairing.id;
     });
     return toPairingResponse(await this.em.findOneOrFail(Pairing, id, { populate: ['recordedBy'] }));
+  }
+
+  private async correctionTarget(tx: EntityManager, project: Project, id: string): Promise<Pairing> {
+    const target = await tx.findOne(Pairing, { id, project });
+    if (!target) throw badRequest([{ field: 'corrects', message: 'There is no such pairing in this project.' }]);
+    if (await tx.count(Pairing, { corrects: target }))
+      throw new ConflictException({ message: 'That pairing has already been corrected; correct the correction instead.' });
+    return target;
   }
 }

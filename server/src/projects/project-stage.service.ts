@@ -1,10 +1,19 @@
 import { Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
-import { deriveProjectStage, pairingWarnings, type DerivedProjectStage, type FailureClause, type PairingWarning, type ProjectFacts } from '@broodsilk/shared';
+import {
+  deriveProjectStage,
+  pairingWarnings,
+  type DerivedProjectStage,
+  type FailureClause,
+  type PairingFact,
+  type PairingWarning,
+  type ProjectFacts,
+} from '@broodsilk/shared';
 import { Molt } from '../animals/molt.entity';
 import { effectiveBreeding } from '../species/effective-breeding';
 import { ownBreeding } from '../species/species.mapper';
 import { Pairing } from './pairing.entity';
+import { struckPairings } from './pairings.mapper';
 import type { Project } from './project.entity';
 import { ProjectFactsRegistry } from './project-facts.registry';
 
@@ -30,13 +39,14 @@ export class ProjectStageService {
     const out = new Map<string, ProjectStanding>();
     if (!ids.length) return out;
     const [pairings, molts, contributed] = await Promise.all([
-      this.em.find(Pairing, { project: { $in: ids } }, { fields: ['project', 'startedOn', 'outcome'] }),
+      this.em.find(Pairing, { project: { $in: ids } }, { fields: ['project', 'startedOn', 'outcome', 'corrects'] }),
       this.em.find(Molt, { animal: { $in: projects.map((p) => p.female.id) } }, { fields: ['animal', 'moltedOn'] }),
       this.registry.collect(this.em, ids),
     ]);
+    const struck = struckPairings(pairings);
     for (const p of projects) {
       const facts: ProjectFacts = {
-        pairings: pairings.filter((x) => x.project.id === p.id).map((x) => ({ on: x.startedOn, outcome: x.outcome })),
+        pairings: pairings.filter((x) => x.project.id === p.id && !struck.has(x.id)).map((x) => ({ on: x.startedOn, outcome: x.outcome })),
         femaleMolts: molts.filter((m) => m.animal.id === p.female.id).map((m) => m.moltedOn),
         sacs: contributed.get(p.id)?.sacs ?? [],
         sharesSettled: contributed.get(p.id)?.sharesSettled ?? false,
@@ -47,6 +57,13 @@ export class ProjectStageService {
       out.set(p.id, { stage: deriveProjectStage(facts), facts });
     }
     return out;
+  }
+
+  /** The project's pairings in force (corrected ones left out), e.g. to check a sac's lay date. */
+  async pairingsInForce(projectId: string, em: EntityManager = this.em): Promise<PairingFact[]> {
+    const rows = await em.find(Pairing, { project: projectId }, { fields: ['startedOn', 'outcome', 'corrects'] });
+    const struck = struckPairings(rows);
+    return rows.filter((x) => !struck.has(x.id)).map((x) => ({ on: x.startedOn, outcome: x.outcome }));
   }
 
   /**

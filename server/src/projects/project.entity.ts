@@ -40,4 +40,8 @@ export class Project extends BaseEntity {
 
   @Property({ type: 'date', nullable: true })
   closedOn?: string | null;
+
+  /** Why the project was started despite a plausibility warning. */
+  @Property({ type: 'text', nullable: true })
+  warningReason?: string | null;
 }

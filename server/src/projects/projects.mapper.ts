@@ -84,6 +84,7 @@ export function toProjectResponse(
     ...toProjectSummary(p, stage, myRole, members.filter((m) => m.role === 'partner').map(memberName)),
     notes: p.notes ?? null,
     endedEarlyNote: p.endedEarlyNote ?? null,
+    warningReason: p.warningReason ?? null,
     femaleAnimal: toProjectAnimal(p.female, today, viewerId),
     maleAnimal: toProjectAnimal(p.male, today, viewerId),
     warnings,

@@ -1,11 +1,13 @@
 import { ConflictException, Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
-import { todayIn, type FieldError, type ProjectResponse, type ProjectSummary } from '@broodsilk/shared';
+import { secondProjectWarnings, todayIn, type FieldError, type ProjectResponse, type ProjectSummary } from '@broodsilk/shared';
 import type { AuthUser } from '../common/auth-user';
 import { Animal } from '../animals/animal.entity';
 import { badRequest } from '../common/field-errors';
 import { User } from '../users/user.entity';
 import { ActivityService } from '../activity/activity.service';
+import { acceptWarnings } from '../plausibility/plausibility';
+import { ProjectFactsRegistry } from './project-facts.registry';
 import { Project } from './project.entity';
 import { ProjectMember } from './project-member.entity';
 import type { ProjectAccess } from './project-access.service';
@@ -29,6 +31,7 @@ export class ProjectsService {
     private readonly stages: ProjectStageService,
     private readonly terms: TermsService,
     private readonly activity: ActivityService,
+    private readonly registry: ProjectFactsRegistry,
   ) {}
 
   private today(viewer: AuthUser): string {
@@ -78,8 +81,9 @@ export class ProjectsService {
       check(female, 'femaleId', 'female');
       check(male, 'maleId', 'male');
       if (errors.length) throw badRequest(errors);
+      const warningReason = await this.femaleBusyWarnings(tx, female!, dto);
       const owner = await tx.findOneOrFail(User, viewer.id);
-      const p = tx.create(Project, { owner, female: female!, male: male!, title: dto.title.trim(), notes: dto.notes ?? null });
+      const p = tx.create(Project, { owner, female: female!, male: male!, title: dto.title.trim(), notes: dto.notes ?? null, warningReason });
       tx.create(ProjectMember, { project: p, user: owner, role: 'owner', name: owner.displayName, email: owner.email });
       this.activity.record(tx, {
         projectId: p.id,
@@ -93,6 +97,22 @@ export class ProjectsService {
       return p;
     });
     return this.get(viewer, { project, role: 'owner' } as ProjectAccess);
+  }
+
+  /** Other open projects of the female with a developing sac warn (see secondProjectWarnings); returns the acknowledged reason. */
+  private async femaleBusyWarnings(tx: EntityManager, female: Animal, dto: CreateProjectDto): Promise<string | null> {
+    const open = await tx.find(Project, { female, endedEarlyReason: null, closedOn: null }, { fields: ['title'] });
+    const facts = await this.registry.collect(
+      tx,
+      open.map((p) => p.id),
+    );
+    return acceptWarnings(
+      secondProjectWarnings(
+        female.label,
+        open.map((p) => ({ title: p.title, sacs: facts.get(p.id)?.sacs ?? [] })),
+      ),
+      dto,
+    );
   }
 
   async update(viewer: AuthUser, access: ProjectAccess, dto: UpdateProjectDto): Promise<ProjectResponse> {

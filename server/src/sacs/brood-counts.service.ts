@@ -1,18 +1,25 @@
-import { BadRequestException, Injectable } from '@nestjs/common';
+import { BadRequestException, ConflictException, Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
-import type { BroodCountResponse, BroodCountsResponse } from '@broodsilk/shared';
+import { checkCount, todayIn, type BroodCountResponse, type BroodCountsResponse } from '@broodsilk/shared';
 import type { AuthUser } from '../common/auth-user';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { ActivityService } from '../activity/activity.service';
+import { acceptWarnings } from '../plausibility/plausibility';
 import { User } from '../users/user.entity';
 import { BroodCount } from './brood-count.entity';
 import { SacOpening } from './sac-opening.entity';
+import type { Sac } from './sac.entity';
 import { SacsService } from './sacs.service';
 import { Clock } from '../common/clock';
 import { assertNotFuture } from './sac-rules';
 import { fieldError } from '../common/field-errors';
 import { toBroodCountResponse } from './brood.mapper';
 import type { BroodCountDto } from './dto/brood-count.dto';
+
+const byInstant = (a: BroodCount, b: BroodCount) => a.at.getTime() - b.at.getTime() || a.createdAt.getTime() - b.createdAt.getTime();
+
+/** Which count corrected which: struck count id → the correcting count's id. */
+export const struckCounts = (counts: readonly BroodCount[]) => new Map(counts.filter((c) => c.corrects).map((c) => [c.corrects!.id, c.id]));
 
 @Injectable()
 export class BroodCountsService {
@@ -23,25 +30,32 @@ export class BroodCountsService {
     private readonly clock: Clock,
   ) {}
 
-  /** Oldest first; `current` is the latest alive count (the count of young in care). */
+  /** Oldest first, struck counts included (flagged); `current` is the latest count not struck. */
   async list(access: ProjectAccess, sacId: string): Promise<BroodCountsResponse> {
     const sac = await this.sacs.find(access, sacId);
     const counts = await this.em.find(BroodCount, { sac }, { populate: ['recordedBy'], orderBy: { at: 'asc', createdAt: 'asc' } });
-    return { current: counts.at(-1)?.alive ?? null, counts: counts.map(toBroodCountResponse) };
+    const struck = struckCounts(counts);
+    const current = counts.filter((c) => !struck.has(c.id)).at(-1);
+    return { current: current?.alive ?? null, counts: counts.map((c) => toBroodCountResponse(c, struck.get(c.id) ?? null)) };
   }
 
   async add(access: ProjectAccess, viewer: AuthUser, sacId: string, dto: BroodCountDto): Promise<BroodCountResponse> {
     const now = this.clock.now();
-    const at = dto.at ? new Date(dto.at) : now;
-    assertNotFuture('at', 'time of the count', at, now);
     const lost = dto.lost ?? 0;
     if (lost > 0 && !dto.lossReason) throw fieldError('lossReason', 'Say why young were lost (died, failed-molt, cannibalism, mould, escaped or other).');
     if (lost === 0 && dto.lossReason) throw fieldError('lossReason', 'A loss reason goes with a number lost above 0.');
+    if (dto.corrects && !dto.reason?.trim()) throw fieldError('reason', 'Say briefly why the earlier count was wrong.');
+    if (!dto.corrects && dto.reason) throw fieldError('reason', 'A reason goes with a correction (corrects: the id of the count it corrects).');
     const id = await this.em.transactional(async (tx) => {
       const sac = await this.sacs.find(access, sacId, tx);
-      const opening = await tx.findOne(SacOpening, { sac });
+      const opening = await tx.findOne(SacOpening, { sac, corrects: null });
       if (!opening) throw new BadRequestException({ message: 'Record the opening first: it starts the brood and its first count.' });
+      const counts = await tx.find(BroodCount, { sac }, { orderBy: { at: 'asc', createdAt: 'asc' } });
+      const target = dto.corrects ? correctionTarget(counts, dto.corrects) : null;
+      const at = dto.at ? new Date(dto.at) : (target?.at ?? now);
+      assertNotFuture('at', 'time of the count', at, now);
       if (at < opening.openedAt) throw fieldError('at', `A count cannot come before the opening (${opening.openedAt.toISOString()}).`);
+      const warningReason = this.checkAgainstPrevious(counts, target, at, viewer.timeZone, dto);
       const c = tx.create(BroodCount, {
         sac,
         at,
@@ -51,20 +65,60 @@ export class BroodCountsService {
         lossReason: dto.lossReason ?? null,
         note: dto.note ?? null,
         source: 'count',
+        estimated: dto.estimated ?? false,
+        corrects: target,
+        reason: target ? dto.reason!.trim() : null,
+        warningReason,
         recordedBy: tx.getReference(User, viewer.id),
       });
       this.activity.record(tx, {
         projectId: access.project.id,
         actorId: viewer.id,
-        kind: 'brood.counted',
+        kind: target ? 'brood.corrected' : 'brood.counted',
         subjectType: 'sac',
         subjectId: sac.id,
-        at,
-        summary: `Brood of the sac laid ${sac.layDate}: ${dto.alive} alive at ${dto.stage}${lost ? `, ${lost} lost (${dto.lossReason})` : ''}.`,
-        data: { countId: c.id, stage: dto.stage, alive: dto.alive, lost },
+        at: target ? now : at,
+        summary: countSummary(sac, dto, lost, target),
+        data: { countId: c.id, stage: dto.stage, alive: dto.alive, lost, ...(target ? { corrects: target.id, was: target.alive } : {}) },
       });
       return c.id;
     });
     return toBroodCountResponse(await this.em.findOneOrFail(BroodCount, id, { populate: ['recordedBy'] }));
   }
+
+  /**
+   * The count may not exceed the latest count before it (struck ones and the corrected one aside):
+   * 400 after an exact count, a warning after an estimate. Returns the acknowledged warning's reason.
+   */
+  private checkAgainstPrevious(counts: BroodCount[], target: BroodCount | null, at: Date, timeZone: string, dto: BroodCountDto): string | null {
+    const struck = struckCounts(counts);
+    const previous = counts
+      .filter((c) => !struck.has(c.id) && c !== target && c.at <= at)
+      .sort(byInstant)
+      .at(-1);
+    // Kept-back young joining the brood are not recorded yet; when they are, their number since `previous` goes here.
+    const joinedSince = 0;
+    const check = checkCount(
+      dto.alive,
+      previous ? { alive: previous.alive, on: todayIn(timeZone, previous.at), estimated: previous.estimated } : null,
+      joinedSince,
+    );
+    if (check && 'refuse' in check) throw fieldError('alive', check.refuse);
+    return acceptWarnings(check ? [check.warn] : [], dto);
+  }
+}
+
+function correctionTarget(counts: BroodCount[], id: string): BroodCount {
+  const target = counts.find((c) => c.id === id);
+  if (!target) throw fieldError('corrects', 'There is no such count of this sac.');
+  if (target.source === 'opening') throw fieldError('corrects', 'The first count comes from the opening: correct the opening instead.');
+  if (counts.some((c) => c.corrects?.id === id))
+    throw new ConflictException({ message: 'That count has already been corrected; correct the correction instead.' });
+  return target;
+}
+
+function countSummary(sac: Sac, dto: BroodCountDto, lost: number, target: BroodCount | null): string {
+  const what = `${dto.estimated ? 'about ' : ''}${dto.alive} alive at ${dto.stage}${lost ? `, ${lost} lost (${dto.lossReason})` : ''}`;
+  if (target) return `Brood of the sac laid ${sac.layDate}: count of ${target.alive} corrected to ${what} (${dto.reason!.trim()}).`;
+  return `Brood of the sac laid ${sac.layDate}: ${what}.`;
 }

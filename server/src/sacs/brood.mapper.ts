@@ -4,8 +4,12 @@ import type { SacOpening } from './sac-opening.entity';
 
 export const viableOf = (o: Pick<SacOpening, 'healthyEggs' | 'eggsWithLegs' | 'nymphs'>) => o.healthyEggs + o.eggsWithLegs + o.nymphs;
 
-/** Needs `recordedBy` loaded. */
-export function toOpeningResponse(o: SacOpening, photos: PhotoRef[]): OpeningResponse {
+/** Needs `recordedBy` loaded on `o` and on each struck version (newest first). */
+export function toOpeningResponse(o: SacOpening, photos: PhotoRef[], struck: SacOpening[] = []): OpeningResponse {
+  return { ...openingFields(o), photos, struck: struck.map(openingFields) };
+}
+
+function openingFields(o: SacOpening): Omit<OpeningResponse, 'struck' | 'photos'> {
   const viable = viableOf(o);
   return {
     id: o.id,
@@ -20,13 +24,14 @@ export function toOpeningResponse(o: SacOpening, photos: PhotoRef[]): OpeningRes
     viable,
     total: viable + o.darkEggs + o.spoiledEggs,
     notes: o.notes ?? null,
-    photos,
     recordedBy: { id: o.recordedBy.id, name: o.recordedBy.displayName },
+    corrects: o.corrects?.id ?? null,
+    reason: o.reason ?? null,
   };
 }
 
-/** Needs `recordedBy` loaded. */
-export function toBroodCountResponse(c: BroodCount): BroodCountResponse {
+/** Needs `recordedBy` loaded; `struckBy` is the id of the count that corrected this one. */
+export function toBroodCountResponse(c: BroodCount, struckBy: string | null = null): BroodCountResponse {
   return {
     id: c.id,
     sacId: c.sac.id,
@@ -38,5 +43,10 @@ export function toBroodCountResponse(c: BroodCount): BroodCountResponse {
     note: c.note ?? null,
     source: c.source,
     recordedBy: c.recordedBy ? { id: c.recordedBy.id, name: c.recordedBy.displayName } : null,
+    estimated: c.estimated,
+    corrects: c.corrects?.id ?? null,
+    reason: c.reason ?? null,
+    struckBy,
+    warningReason: c.warningReason ?? null,
   };
 }

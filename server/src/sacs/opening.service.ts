@@ -7,6 +7,7 @@ import { ActivityService } from '../activity/activity.service';
 import { PhotosService } from '../photos/photos.service';
 import { User } from '../users/user.entity';
 import { SacOpening } from './sac-opening.entity';
+import type { Sac } from './sac.entity';
 import { BroodCount } from './brood-count.entity';
 import { SacsService } from './sacs.service';
 import { Clock } from '../common/clock';
@@ -30,16 +31,32 @@ export class OpeningService {
 
   async get(access: ProjectAccess, sacId: string): Promise<OpeningResponse> {
     const sac = await this.sacs.find(access, sacId);
-    const o = await this.em.findOne(SacOpening, { sac }, { populate: ['recordedBy'] });
-    if (!o) throw new NotFoundException({ message: 'This sac has not been opened yet.' });
-    return toOpeningResponse(o, (await this.photos.refsFor(OPENING_PHOTO, [o.id])).get(o.id) ?? []);
+    const versions = await this.versions(this.em, sac);
+    if (!versions.length) throw new NotFoundException({ message: 'This sac has not been opened yet.' });
+    const [current, ...struck] = versions;
+    const photos = await this.photos.refsFor(
+      OPENING_PHOTO,
+      versions.map((o) => o.id),
+    );
+    return toOpeningResponse(
+      current!,
+      versions.flatMap((o) => photos.get(o.id) ?? []),
+      struck,
+    );
+  }
+
+  /** The sac's openings, the one in force first, then those it struck (newest first). */
+  private async versions(em: EntityManager, sac: Sac): Promise<SacOpening[]> {
+    const all = await em.find(SacOpening, { sac }, { populate: ['recordedBy'], orderBy: { createdAt: 'desc' } });
+    const struck = new Set(all.map((o) => o.corrects?.id).filter(Boolean));
+    return [...all.filter((o) => !struck.has(o.id)), ...all.filter((o) => struck.has(o.id))];
   }
 
   /** Records the opening and starts the brood with its first count (the viable young), in one transaction. */
   async open(access: ProjectAccess, viewer: AuthUser, sacId: string, dto: OpeningDto): Promise<OpeningResponse> {
     const now = this.clock.now();
-    const openedAt = dto.openedAt ? new Date(dto.openedAt) : now;
-    assertNotFuture('openedAt', 'opening time', openedAt, now);
+    const given = dto.openedAt ? new Date(dto.openedAt) : null;
+    if (given) assertNotFuture('openedAt', 'opening time', given, now);
     const viable = viableOf(dto);
     if (dto.keptBack > viable) {
       throw badRequest([
@@ -50,13 +67,20 @@ export class OpeningService {
       ]);
     }
     if (viable + dto.darkEggs + dto.spoiledEggs === 0) throw fieldError('healthyEggs', 'Nothing was counted; an opening records at least one egg or nymph.');
+    if (dto.corrects && !dto.reason?.trim()) throw fieldError('reason', 'Say briefly why the recorded opening was wrong.');
+    if (!dto.corrects && dto.reason) throw fieldError('reason', 'A reason goes with a correction (corrects: the id of the opening it corrects).');
     await this.em.transactional(async (tx) => {
       const sac = await this.sacs.find(access, sacId, tx);
-      if (await tx.count(SacOpening, { sac }))
-        throw new ConflictException({ message: 'This sac has already been opened; record later changes as brood counts.' });
+      const [current] = await this.versions(tx, sac);
+      const target = dto.corrects ? this.correctionTarget(current, dto.corrects) : null;
+      if (current && !target)
+        throw new ConflictException({ message: 'This sac has already been opened; record later changes as brood counts, or correct the opening.' });
+      // A correction keeps the opening's time unless it gives another.
+      const openedAt = given ?? target?.openedAt ?? now;
       const on = todayIn(viewer.timeZone, openedAt);
       if (on < sac.layDate) throw fieldError('openedAt', `The opening (${on}) is dated before the sac was laid (${sac.layDate}).`);
       const recordedBy = tx.getReference(User, viewer.id);
+      const reason = target ? dto.reason!.trim() : null;
       const o = tx.create(SacOpening, {
         sac,
         openedAt,
@@ -68,25 +92,58 @@ export class OpeningService {
         keptBack: dto.keptBack,
         notes: dto.notes ?? null,
         recordedBy,
+        corrects: target,
+        reason,
       });
-      tx.create(BroodCount, { sac, at: openedAt, stage: sac.broodStage, alive: viable, source: 'opening', recordedBy, note: 'First count, at the opening.' });
+      // The brood's first count follows the opening; a corrected opening strikes the old first count.
+      const firstCount = target ? await tx.findOne(BroodCount, { sac, source: 'opening', at: target.openedAt }, { orderBy: { createdAt: 'desc' } }) : null;
+      if (target && firstCount && (await tx.count(BroodCount, { corrects: firstCount }))) {
+        throw new ConflictException({ message: 'The first count of this brood was already corrected.' });
+      }
+      tx.create(BroodCount, {
+        sac,
+        at: openedAt,
+        stage: firstCount?.stage ?? sac.broodStage,
+        alive: viable,
+        source: 'opening',
+        recordedBy,
+        note: 'First count, at the opening.',
+        corrects: firstCount,
+        reason,
+      });
+      const summary = `${viable} viable (${dto.keptBack} kept back in incubation), ${dto.darkEggs} dark and ${dto.spoiledEggs} spoiled eggs`;
       this.activity.record(tx, {
         projectId: access.project.id,
         actorId: viewer.id,
-        kind: 'sac.opened',
+        kind: target ? 'sac.opening-corrected' : 'sac.opened',
         subjectType: 'sac',
         subjectId: sac.id,
-        at: openedAt,
-        summary: `Sac laid ${sac.layDate} opened: ${viable} viable (${dto.keptBack} kept back in incubation), ${dto.darkEggs} dark and ${dto.spoiledEggs} spoiled eggs.`,
-        data: { openingId: o.id, viable, keptBack: dto.keptBack, darkEggs: dto.darkEggs, spoiledEggs: dto.spoiledEggs },
+        at: target ? now : openedAt,
+        summary: target
+          ? `Opening of the sac laid ${sac.layDate} corrected from ${viableOf(target)} to ${summary} (${reason}).`
+          : `Sac laid ${sac.layDate} opened: ${summary}.`,
+        data: {
+          openingId: o.id,
+          viable,
+          keptBack: dto.keptBack,
+          darkEggs: dto.darkEggs,
+          spoiledEggs: dto.spoiledEggs,
+          ...(target ? { corrects: target.id } : {}),
+        },
       });
     });
     return this.get(access, sacId);
   }
 
+  private correctionTarget(current: SacOpening | undefined, id: string): SacOpening {
+    if (!current) throw fieldError('corrects', 'This sac has not been opened yet; there is nothing to correct.');
+    if (current.id !== id) throw new ConflictException({ message: 'Only the opening in force can be corrected; that one was already corrected.' });
+    return current;
+  }
+
   async addPhoto(access: ProjectAccess, viewer: AuthUser, sacId: string, file: { buffer?: Buffer } | undefined): Promise<PhotoRef> {
     const sac = await this.sacs.find(access, sacId);
-    const o = await this.em.findOne(SacOpening, { sac });
+    const [o] = await this.versions(this.em, sac);
     if (!o) throw new NotFoundException({ message: 'Record the opening first; its photos belong to it.' });
     return this.photos.store(viewer, OPENING_PHOTO, o.id, file);
   }

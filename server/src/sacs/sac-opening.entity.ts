@@ -1,12 +1,16 @@
-import { Entity, ManyToOne, OneToOne, Property } from '@mikro-orm/core';
+import { Entity, Index, ManyToOne, Property } from '@mikro-orm/core';
 import { BaseEntity } from '../database/base.entity';
 import { User } from '../users/user.entity';
 import { Sac } from './sac.entity';
 
-/** The inspection when a sac is opened (one per sac); it starts the brood's counts. */
+/**
+ * The inspection when a sac is opened; it starts the brood's counts. One first opening per sac
+ * (a partial unique index); a correction is a further row that `corrects` (strikes) the one before.
+ */
 @Entity({ tableName: 'sac_openings' })
+@Index({ properties: ['sac'] })
 export class SacOpening extends BaseEntity {
-  @OneToOne(() => Sac, { owner: true, deleteRule: 'cascade', unique: 'sac_openings_sac_id_unique' })
+  @ManyToOne(() => Sac, { deleteRule: 'cascade' })
   sac!: Sac;
 
   @Property({ type: 'timestamptz' })
@@ -35,4 +39,11 @@ export class SacOpening extends BaseEntity {
 
   @ManyToOne(() => User, { deleteRule: 'restrict' })
   recordedBy!: User;
+
+  @ManyToOne(() => SacOpening, { nullable: true, deleteRule: 'cascade' })
+  corrects?: SacOpening | null;
+
+  /** Why the corrected opening was wrong. */
+  @Property({ type: 'text', nullable: true })
+  reason?: string | null;
 }

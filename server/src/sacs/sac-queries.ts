@@ -22,12 +22,16 @@ export async function lastRollsOf(em: EntityManager, sacIds: string[]): Promise<
   return new Map(rows.map((r) => [r.sac_id, new Date(r.at)]));
 }
 
-/** The latest count per sac (by instant, then by when it was written): alive, and when it was taken. */
+/** SQL condition: the brood count `c` was not corrected by a later one. */
+export const NOT_STRUCK = 'not exists (select 1 from brood_counts k where k.corrects_id = c.id)';
+
+/** The latest count per sac not struck (by instant, then by when it was written): alive, and when it was taken. */
 export async function latestCountsOf(em: EntityManager, sacIds: string[]): Promise<Map<string, { alive: number; at: Date }>> {
   if (!sacIds.length) return new Map();
   const rows = await em.getConnection().execute<{ sac_id: string; alive: number; at: Date }[]>(
-    `select distinct on (sac_id) sac_id, alive, at from brood_counts
-      where sac_id in ${marks(sacIds)} order by sac_id, at desc, created_at desc`,
+    `select distinct on (c.sac_id) c.sac_id, c.alive, c.at from brood_counts c
+      where c.sac_id in ${marks(sacIds)} and ${NOT_STRUCK}
+      order by c.sac_id, c.at desc, c.created_at desc`,
     sacIds,
   );
   return new Map(rows.map((r) => [r.sac_id, { alive: Number(r.alive), at: new Date(r.at) }]));

@@ -51,4 +51,8 @@ export class Sac extends BaseEntity<'outcome' | 'rollIntervalHours' | 'rollingOf
 
   @ManyToOne(() => User, { deleteRule: 'restrict' })
   recordedBy!: User;
+
+  /** Why an unusual lay date (an acknowledged plausibility warning) is right. */
+  @Property({ type: 'text', nullable: true })
+  warningReason?: string | null;
 }

@@ -53,6 +53,7 @@ export function toSacResponse(sac: Sac, c: SacViewContext): SacResponse {
     opened: c.opened,
     currentCount: c.currentCount,
     notes: sac.notes ?? null,
+    warningReason: sac.warningReason ?? null,
     incubatorCaution: sac.pulledAt ? INCUBATOR_CAUTION : null,
     createdAt: sac.createdAt.toISOString(),
     updatedAt: sac.updatedAt.toISOString(),

@@ -1,10 +1,15 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
-import { todayIn, type SacResponse } from '@broodsilk/shared';
+import { sacLayWarnings, todayIn, type SacResponse } from '@broodsilk/shared';
 import type { AuthUser } from '../common/auth-user';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { ActivityService } from '../activity/activity.service';
 import { User } from '../users/user.entity';
+import { Project } from '../projects/project.entity';
+import { ProjectStageService } from '../projects/project-stage.service';
+import { acceptWarnings } from '../plausibility/plausibility';
+import { effectiveBreeding } from '../species/effective-breeding';
+import { ownBreeding } from '../species/species.mapper';
 import { Sac } from './sac.entity';
 import { SAC_POPULATE, SacViewsService } from './sac-views.service';
 import { Clock } from '../common/clock';
@@ -22,6 +27,7 @@ export class SacsService {
     private readonly views: SacViewsService,
     private readonly activity: ActivityService,
     private readonly clock: Clock,
+    private readonly stages: ProjectStageService,
   ) {}
 
   async list(access: ProjectAccess, viewer: AuthUser): Promise<SacResponse[]> {
@@ -45,8 +51,10 @@ export class SacsService {
     const pulledAt = dto.pulledAt ? new Date(dto.pulledAt) : null;
     assertSacDates({ layDate: dto.layDate, pulledAt, pullFromDay: dto.pullFromDay ?? null, pullToDay: dto.pullToDay ?? null }, viewer.timeZone, now);
     const id = await this.em.transactional(async (tx) => {
+      const warningReason = await this.layDateWarnings(tx, access.project.id, dto);
       const sac = tx.create(Sac, {
         project: access.project.id,
+        warningReason,
         layDate: dto.layDate,
         pulledAt,
         pulledOn: pulledAt ? todayIn(viewer.timeZone, pulledAt) : null,
@@ -69,6 +77,15 @@ export class SacsService {
       return sac.id;
     });
     return this.get(access, viewer, id);
+  }
+
+  /** A sac follows a successful pairing by the species' usual time (see sacLayWarnings); returns the acknowledged reason. */
+  private async layDateWarnings(tx: EntityManager, projectId: string, dto: CreateSacDto): Promise<string | null> {
+    const project = await tx.findOneOrFail(Project, projectId, { populate: ['female.species'] });
+    const species = project.female.species;
+    const minDays = effectiveBreeding(species.group, ownBreeding(species)).pairingToSacDays.value.min;
+    const pairings = await this.stages.pairingsInForce(projectId, tx);
+    return acceptWarnings(sacLayWarnings({ layDate: dto.layDate, pairings, minDays }), dto);
   }
 
   async update(access: ProjectAccess, viewer: AuthUser, id: string, dto: UpdateSacDto): Promise<SacResponse> {

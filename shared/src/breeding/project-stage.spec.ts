@@ -13,6 +13,12 @@ describe('project stage', () => {
     expect(PROJECT_STAGE_LINE).toEqual(['planned', 'paired', 'waiting-for-sac', 'sac-laid', 'in-incubator', 'brood', 'shares-settled', 'closed']);
   });
 
+  it('marks "paired" unrecorded for a sac with no successful pairing recorded before it', () => {
+    expect(deriveProjectStage(facts({ sacs: [sac()] }))).toEqual({ stage: 'sac-laid', sacId: 's1', unrecorded: ['paired'] });
+    expect(deriveProjectStage(facts({ sacs: [sac({ pulledOn: '2026-03-20' })], pairings: [paired('2026-03-02')] }))).toMatchObject({ unrecorded: ['paired'] });
+    expect(deriveProjectStage(facts({ sacs: [sac()], pairings: [paired('2025-11-01')] }))).toEqual({ stage: 'sac-laid', sacId: 's1' });
+  });
+
   it('is planned with nothing recorded', () => {
     expect(deriveProjectStage(facts())).toEqual({ stage: 'planned' });
   });

@@ -35,6 +35,8 @@ export interface DerivedProjectStage {
   reason?: EndedEarlyReason;
   /** The sac the stage is about (sac-laid, in-incubator, brood, a failed sac). */
   sacId?: string;
+  /** Steps before the current one with nothing recorded (a sac with no successful pairing before it): not "done". */
+  unrecorded?: ProjectStage[];
 }
 
 const isLive = (s: SacFact) => s.fate === 'developing';
@@ -48,6 +50,7 @@ const latest = <T>(items: readonly T[], date: (t: T) => string): T | undefined =
  * 2. `closedOn` set → `closed`.
  * 3. A developing sac with young at first instar or later → `shares-settled` if shares are settled, else `brood`.
  * 4. Another developing sac → `in-incubator` if pulled, else `sac-laid` (left with the mother).
+ *    For 3 and 4, `unrecorded: ['paired']` when no connected pairing is recorded on or before the sac's lay date.
  * 5. The "current attempt" is everything after the lay date of the latest failed or eaten sac (or
  *    everything, if none). With no connected pairing in it:
  *    - a failed sac before it → `ended-early` `sac-eaten` or `sac-failed` (the latest one's outcome);
@@ -72,16 +75,21 @@ export function deriveProjectStage(facts: ProjectFacts): DerivedProjectStage {
   if (facts.closedOn) return { stage: 'closed' };
 
   const withId = (stage: ProjectStage, sac: SacFact | undefined): DerivedProjectStage => (sac?.id !== undefined ? { stage, sacId: sac.id } : { stage });
+  // A sac stage says the steps before it happened; "paired" only did if a successful pairing is recorded before the sac.
+  const sacStage = (stage: ProjectStage, sac: SacFact): DerivedProjectStage => {
+    const paired = facts.pairings.some((p) => p.outcome === 'connected' && p.on <= sac.layDate);
+    return paired ? withId(stage, sac) : { ...withId(stage, sac), unrecorded: ['paired'] };
+  };
   const brood = latest(facts.sacs.filter(hasBrood), (s) => s.layDate);
-  if (brood) return withId(facts.sharesSettled ? 'shares-settled' : 'brood', brood);
+  if (brood) return sacStage(facts.sharesSettled ? 'shares-settled' : 'brood', brood);
   const live = facts.sacs.filter(isLive);
   const pulled = latest(
     live.filter((s) => !!s.pulledOn),
     (s) => s.layDate,
   );
-  if (pulled) return withId('in-incubator', pulled);
+  if (pulled) return sacStage('in-incubator', pulled);
   const laid = latest(live, (s) => s.layDate);
-  if (laid) return withId('sac-laid', laid);
+  if (laid) return sacStage('sac-laid', laid);
 
   const lastDead = latest(facts.sacs, (s) => s.layDate);
   const since = lastDead?.layDate;

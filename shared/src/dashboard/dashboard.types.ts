@@ -15,7 +15,36 @@ export interface DashboardSac {
   sac: SacResponse;
 }
 
-export type PullWindowEvent = 'opens-today' | 'closes-today';
+/** `open`: the window is open now (between the day it opens and the day it closes). */
+export type PullWindowEvent = 'opens-today' | 'closes-today' | 'open';
+
+/** A to-do in one of the viewer's projects. */
+interface ProjectTodo {
+  projectId: string;
+  projectTitle: string;
+}
+
+/** A proposed terms version the viewer (a partner party) has not yet accepted. */
+export interface TermsTodo extends ProjectTodo {
+  version: number;
+}
+
+/** A hand-over whose arrival the viewer confirms (the recipient, or the owner for a party without an account). */
+export interface HandOverTodo extends ProjectTodo {
+  entryId: string;
+  date: CalendarDate;
+  count: number;
+  /** The party who received the young. */
+  partyName: string;
+}
+
+/** Money owed between the viewer and another party, netted (the account's debts). */
+export interface PaymentTodo extends ProjectTodo {
+  direction: 'owed-to-me' | 'owed-by-me';
+  otherName: string;
+  amountMinor: number;
+  currency: string;
+}
 
 export interface DashboardResponse {
   /** The viewer's date the dashboard was computed for (their time zone). */
@@ -23,8 +52,11 @@ export interface DashboardResponse {
   dueToday: {
     /** Rolls due soon, due or overdue in projects where the viewer is owner or caretaker; most late first. */
     rolls: DashboardSac[];
-    /** Sacs still with the mother whose pull window opens or closes today (owner or caretaker). */
+    /** Sacs still with the mother whose pull window is open: opens today, closes today, or open (owner or caretaker). */
     pullWindows: (DashboardSac & { event: PullWindowEvent })[];
+    termsToAccept: TermsTodo[];
+    handOversToConfirm: HandOverTodo[];
+    payments: PaymentTodo[];
   };
   /** Projects not closed or ended early, with their stage. */
   openProjects: ProjectSummary[];

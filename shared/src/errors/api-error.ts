@@ -1,7 +1,11 @@
+import type { PlausibilityWarningCode } from './plausibility.js';
+
 /** One field's problem, as the server's validation reports it. */
 export interface FieldError {
   field: string;
   message: string;
+  /** Set on plausibility warnings (422): which warning this row is, to acknowledge it. */
+  code?: PlausibilityWarningCode;
 }
 
 /** The single JSON shape of every error the API returns. */

@@ -1,12 +1,16 @@
 import type { CalendarDate } from '../breeding/calendar-day.js';
 import type { PairingOutcome } from '../breeding/pairing.types.js';
+import type { AcknowledgedWarnings } from '../errors/plausibility.js';
 
-export interface CreatePairingRequest {
+export interface CreatePairingRequest extends AcknowledgedWarnings {
   /** ISO 8601 instant the male was introduced. */
   startedAt: string;
   durationMinutes: number;
   outcome: PairingOutcome;
   notes?: string | null;
+  /** Correcting a recorded pairing: its id (it stays, struck) and why it was wrong. */
+  corrects?: string;
+  reason?: string;
 }
 
 export interface PairingResponse {
@@ -19,4 +23,10 @@ export interface PairingResponse {
   notes: string | null;
   recordedBy: { id: string; name: string };
   createdAt: string;
+  corrects: string | null;
+  reason: string | null;
+  /** Set when a later pairing corrected this one: it no longer counts. */
+  struckBy: string | null;
+  /** Why an unusual pairing was saved despite a warning. */
+  warningReason: string | null;
 }

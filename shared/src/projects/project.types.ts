@@ -1,3 +1,4 @@
+import type { AcknowledgedWarnings } from '../errors/plausibility.js';
 import type { CalendarDate } from '../breeding/calendar-day.js';
 import type { DerivedProjectStage, EndedEarlyReason } from '../breeding/project-stage.js';
 import type { PairingWarning } from '../breeding/pairing-warnings.js';
@@ -13,7 +14,7 @@ export type InvitableRole = (typeof INVITABLE_ROLES)[number];
 
 export const ENDED_EARLY_REASONS: readonly EndedEarlyReason[] = ['no-sac', 'female-molted', 'sac-failed', 'sac-eaten', 'male-died'];
 
-export interface CreateProjectRequest {
+export interface CreateProjectRequest extends AcknowledgedWarnings {
   title: string;
   femaleId: string;
   maleId: string;
@@ -58,6 +59,8 @@ export interface ProjectSummary {
 export interface ProjectResponse extends ProjectSummary {
   notes: string | null;
   endedEarlyNote: string | null;
+  /** Why the project was started despite a plausibility warning. */
+  warningReason: string | null;
   femaleAnimal: ProjectAnimal;
   maleAnimal: ProjectAnimal;
   warnings: PairingWarning[];

@@ -1,5 +1,6 @@
 import type { BroodStage } from '../breeding/brood-stage.js';
 import type { PhotoRef } from '../collection/animals.types.js';
+import type { AcknowledgedWarnings } from '../errors/plausibility.js';
 
 export const BROOD_LOSS_REASONS = ['died', 'failed-molt', 'cannibalism', 'mould', 'escaped', 'other'] as const;
 export type BroodLossReason = (typeof BROOD_LOSS_REASONS)[number];
@@ -23,6 +24,9 @@ export interface OpeningRequest extends OpeningCounts {
   /** Instant the sac was opened; defaults to now. */
   openedAt?: string;
   notes?: string | null;
+  /** Correcting a recorded opening: its id (it stays, struck) and why it was wrong. */
+  corrects?: string;
+  reason?: string;
 }
 
 export interface OpeningResponse extends OpeningCounts {
@@ -35,15 +39,26 @@ export interface OpeningResponse extends OpeningCounts {
   notes: string | null;
   photos: PhotoRef[];
   recordedBy: { id: string; name: string };
+  /** The opening this one corrects, and why. */
+  corrects: string | null;
+  reason: string | null;
+  /** Earlier versions this one (or its predecessors) struck, newest first. */
+  struck: Omit<OpeningResponse, 'struck' | 'photos'>[];
 }
 
-export interface BroodCountRequest {
+export interface BroodCountRequest extends AcknowledgedWarnings {
+  /** Defaults to now; a correction defaults to the instant of the count it corrects. */
   at?: string;
   stage: BroodStage;
   alive: number;
   lost?: number;
   lossReason?: BroodLossReason;
   note?: string | null;
+  /** An estimate, not a count one by one. */
+  estimated?: boolean;
+  /** The id of the count this one corrects (it stays, struck); needs `reason`. */
+  corrects?: string;
+  reason?: string;
 }
 
 export interface BroodCountResponse {
@@ -58,10 +73,18 @@ export interface BroodCountResponse {
   /** `opening` for the count the opening starts the brood with. */
   source: 'opening' | 'count';
   recordedBy: { id: string; name: string } | null;
+  estimated: boolean;
+  /** The count this one corrects, and why. */
+  corrects: string | null;
+  reason: string | null;
+  /** Set when a later count corrected this one: it no longer counts. */
+  struckBy: string | null;
+  /** Why an unusual count was saved despite a warning. */
+  warningReason: string | null;
 }
 
 export interface BroodCountsResponse {
-  /** Latest alive count: the sac's count of young in care, for shares. */
+  /** Latest alive count not struck: the sac's count of young in care, for shares. */
   current: number | null;
   counts: BroodCountResponse[];
 }

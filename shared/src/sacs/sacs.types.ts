@@ -1,3 +1,4 @@
+import type { AcknowledgedWarnings } from '../errors/plausibility.js';
 import type { CalendarDate } from '../breeding/calendar-day.js';
 import type { BroodStage } from '../breeding/brood-stage.js';
 import type { PullWindowView } from '../breeding/pull-window.js';
@@ -26,7 +27,7 @@ export const INCUBATOR_CAUTION =
   'unregulated heat mats and bulbs overheat eggs and can start fires. Check the setup daily. Where local law or a licensed ' +
   "keeper's practice says otherwise, follow them.";
 
-export interface CreateSacRequest {
+export interface CreateSacRequest extends AcknowledgedWarnings {
   /** Calendar date in the keeper's time zone; today or earlier. */
   layDate: CalendarDate;
   /** Set when the sac has already been taken from the mother (an instant, ISO 8601). */
@@ -87,6 +88,8 @@ export interface SacResponse {
   /** Latest alive count of the brood; null before the opening. */
   currentCount: number | null;
   notes: string | null;
+  /** Why an unusual lay date was saved despite a warning. */
+  warningReason: string | null;
   /** Present for a pulled sac: the heat-source caution the incubator view shows. */
   incubatorCaution: string | null;
   createdAt: string;

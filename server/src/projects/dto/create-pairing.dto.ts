@@ -1,8 +1,9 @@
-import { IsIn, IsInt, IsOptional, IsString, Max, MaxLength, Min, ValidateIf } from 'class-validator';
+import { IsIn, IsInt, IsOptional, IsString, IsUUID, Max, MaxLength, Min, ValidateIf } from 'class-validator';
 import { PAIRING_OUTCOMES, type CreatePairingRequest, type PairingOutcome } from '@broodsilk/shared';
 import { IsInstant } from '../../common/validators/is-instant.validator';
+import { AcknowledgedWarningsDto } from '../../plausibility/acknowledged-warnings.dto';
 
-export class CreatePairingDto implements CreatePairingRequest {
+export class CreatePairingDto extends AcknowledgedWarningsDto implements CreatePairingRequest {
   @IsInstant({ message: 'The start must be a date and time with its offset, such as 2026-05-03T19:30:00+02:00.' })
   startedAt!: string;
 
@@ -19,4 +20,13 @@ export class CreatePairingDto implements CreatePairingRequest {
   @IsString()
   @MaxLength(2000, { message: 'The notes can be at most 2000 characters.' })
   notes?: string | null;
+
+  @IsOptional()
+  @IsUUID('all', { message: 'corrects must be the id of the pairing to correct.' })
+  corrects?: string;
+
+  @IsOptional()
+  @IsString()
+  @MaxLength(500, { message: 'Keep the reason under 500 characters.' })
+  reason?: string;
 }

@@ -1,7 +1,8 @@
 import { IsOptional, IsString, IsUUID, MaxLength, MinLength, ValidateIf } from 'class-validator';
 import type { CreateProjectRequest } from '@broodsilk/shared';
+import { AcknowledgedWarningsDto } from '../../plausibility/acknowledged-warnings.dto';
 
-export class CreateProjectDto implements CreateProjectRequest {
+export class CreateProjectDto extends AcknowledgedWarningsDto implements CreateProjectRequest {
   @IsString({ message: 'The title must be text.' })
   @MinLength(1, { message: 'Give the project a title.' })
   @MaxLength(120, { message: 'The title can be at most 120 characters.' })

@@ -1,10 +1,11 @@
-import { IsIn, IsOptional, IsString, MaxLength, ValidateIf } from 'class-validator';
+import { IsBoolean, IsIn, IsOptional, IsString, IsUUID, MaxLength, ValidateIf } from 'class-validator';
 import { BROOD_LOSS_REASONS, BROOD_STAGES, type BroodCountRequest, type BroodLossReason, type BroodStage } from '@broodsilk/shared';
+import { AcknowledgedWarningsDto } from '../../plausibility/acknowledged-warnings.dto';
 import { IsInstant } from '../../common/validators/is-instant.validator';
 import { IsCount } from './opening.dto';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
-export class BroodCountDto implements BroodCountRequest {
+export class BroodCountDto extends AcknowledgedWarningsDto implements BroodCountRequest {
   @IsOptionalNonNull()
   @IsInstant({ message: 'The time of the count must be a date and time with its offset, e.g. 2026-03-08T07:30:00Z.' })
   at?: string;
@@ -25,4 +26,17 @@ export class BroodCountDto implements BroodCountRequest {
   @IsString()
   @MaxLength(2000)
   note?: string | null;
+
+  @IsOptional()
+  @IsBoolean({ message: 'estimated must be true or false.' })
+  estimated?: boolean;
+
+  @IsOptional()
+  @IsUUID('all', { message: 'corrects must be the id of the count to correct.' })
+  corrects?: string;
+
+  @IsOptional()
+  @IsString()
+  @MaxLength(500, { message: 'Keep the reason under 500 characters.' })
+  reason?: string;
 }

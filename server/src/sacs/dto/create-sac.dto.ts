@@ -3,10 +3,11 @@ import { PULL_DAY_MAX, ROLL_INTERVAL_LIMITS, type CreateSacRequest } from '@broo
 import { IsCalendarDate } from '../../common/validators/is-calendar-date.validator';
 import { IsInstant } from '../../common/validators/is-instant.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
+import { AcknowledgedWarningsDto } from '../../plausibility/acknowledged-warnings.dto';
 
 const dayRule = (what: string) => ({ message: `The ${what} must be a whole day number from 0 to ${PULL_DAY_MAX}.` });
 
-export class CreateSacDto implements CreateSacRequest {
+export class CreateSacDto extends AcknowledgedWarningsDto implements CreateSacRequest {
   @IsCalendarDate({ message: 'The lay date must be a date written YYYY-MM-DD.' })
   layDate!: string;
 

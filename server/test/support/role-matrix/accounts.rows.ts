@@ -3,6 +3,7 @@ import { addDays, todayIn } from '@broodsilk/shared';
 import { BroodCount } from '../../../src/sacs/brood-count.entity';
 import { Sac } from '../../../src/sacs/sac.entity';
 import { OWNER_AND_PARTNER, type Actor, type Expected, type MatrixFixture, type MatrixProject, type MatrixRequest, type MatrixRow } from './matrix.types';
+import { ANY_PAIRING } from '../sacs';
 
 const NOBODY = '00000000-0000-4000-8000-000000000000';
 const api = (fx: MatrixFixture) => request(fx.app.getHttpServer());
@@ -30,7 +31,7 @@ async function accountReady(fx: MatrixFixture): Promise<MatrixProject> {
   const sac = await api(fx)
     .post(`/api/projects/${p.id}/sacs`)
     .set('Authorization', fx.users.owner.bearer)
-    .send({ layDate: addDays(todayIn('UTC', new Date()), -60) });
+    .send({ layDate: addDays(todayIn('UTC', new Date()), -60), ...ANY_PAIRING });
   if (sac.status !== 201) throw new Error(`create sac answered ${sac.status}: ${JSON.stringify(sac.body)}`);
   const em = fx.orm.em.fork();
   const s = await em.findOneOrFail(Sac, sac.body.id);

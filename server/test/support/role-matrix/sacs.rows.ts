@@ -1,5 +1,6 @@
 import request from 'supertest';
 import { ANY_MEMBER, OWNER_ONLY, type Actor, type Expected, type MatrixFixture, type MatrixRequest, type MatrixRow } from './matrix.types';
+import { ANY_PAIRING } from '../sacs';
 
 /** The owner and caretakers write the care log and the counts; partners read them (docs/product.md, Roles). */
 const OWNER_AND_CARETAKER: Record<Actor, Expected> = { anonymous: 401, stranger: 404, caretaker: '2xx', partner: 403, owner: '2xx' };
@@ -10,7 +11,10 @@ async function newSac(fx: MatrixFixture, opened: boolean): Promise<string> {
   const http = request(fx.app.getHttpServer());
   const layDate = new Date(Date.now() - 30 * 86_400_000).toISOString().slice(0, 10);
   const pulledAt = new Date(Date.now() - 3 * 86_400_000).toISOString();
-  const res = await http.post(`/api/projects/${fx.project.id}/sacs`).set('Authorization', fx.users.owner.bearer).send({ layDate, pulledAt });
+  const res = await http
+    .post(`/api/projects/${fx.project.id}/sacs`)
+    .set('Authorization', fx.users.owner.bearer)
+    .send({ layDate, pulledAt, ...ANY_PAIRING });
   if (res.status !== 201) throw new Error(`create sac answered ${res.status}: ${JSON.stringify(res.body)}`);
   if (opened) {
     const o = await request(fx.app.getHttpServer()).post(`/api/sacs/${res.body.id}/opening`).set('Authorization', fx.users.owner.bearer).send(OPENING);
@@ -36,7 +40,12 @@ const openingSac = perRow(false);
 
 export const rows: MatrixRow[] = [
   { method: 'GET', path: '/api/projects/:projectId/sacs', expect: ANY_MEMBER },
-  { method: 'POST', path: '/api/projects/:projectId/sacs', expect: OWNER_ONLY, request: () => ({ body: { layDate: new Date().toISOString().slice(0, 10) } }) },
+  {
+    method: 'POST',
+    path: '/api/projects/:projectId/sacs',
+    expect: OWNER_ONLY,
+    request: () => ({ body: { layDate: new Date().toISOString().slice(0, 10), ...ANY_PAIRING } }),
+  },
   { method: 'GET', path: '/api/sacs/:id', expect: ANY_MEMBER, request: onSac(sharedSac) },
   { method: 'PATCH', path: '/api/sacs/:id', expect: OWNER_ONLY, request: onSac(sharedSac, { notes: 'Matrix note' }) },
   { method: 'GET', path: '/api/sacs/:id/log', expect: ANY_MEMBER, request: onSac(sharedSac) },

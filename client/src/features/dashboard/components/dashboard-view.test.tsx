@@ -36,6 +36,7 @@ function sac(id: string, roll: { status: RollStatus; due: string } | null, state
     opened: false,
     currentCount: null,
     notes: null,
+    warningReason: null,
     incubatorCaution: null,
     createdAt: '2026-11-01T00:00:00Z',
     updatedAt: '2026-11-01T00:00:00Z',
@@ -52,6 +53,9 @@ const data: DashboardResponse = {
       item('Versicolor pair', sac('b', { status: 'due', due: '2026-12-01T10:00:00Z' })),
     ],
     pullWindows: [{ ...item('Hamorii pair', sac('c', null)), event: 'closes-today' }],
+    termsToAccept: [],
+    handOversToConfirm: [],
+    payments: [],
   },
   openProjects: [],
   upcomingPullWindows: [item('Albopilosum pair', sac('d', null, 'not-yet'))],
@@ -83,9 +87,48 @@ describe('DashboardView', () => {
     expect(screen.queryByText('Nothing needs doing right now.')).not.toBeInTheDocument();
   });
 
+  const nothing = { rolls: [], pullWindows: [], termsToAccept: [], handOversToConfirm: [], payments: [] };
+
   it('says so when nothing is due', () => {
-    renderWithProviders(<DashboardView data={{ ...data, dueToday: { rolls: [], pullWindows: [] } }} timeZone="UTC" />);
+    renderWithProviders(<DashboardView data={{ ...data, dueToday: nothing }} timeZone="UTC" />);
     expect(within(screen.getByTestId('card-rolls')).getByText('No roll is due.')).toBeInTheDocument();
     expect(screen.getByText('Nothing needs doing right now.')).toBeInTheDocument();
+  });
+
+  it('names a window open now, not only one opening today', () => {
+    renderWithProviders(
+      <DashboardView data={{ ...data, dueToday: { ...nothing, pullWindows: [{ ...item('Open pair', sac('e', null)), event: 'open' }] } }} timeZone="UTC" />,
+    );
+    expect(within(screen.getByTestId('card-pull-today')).getByTestId('pull-event')).toHaveTextContent('Open now');
+    expect(screen.queryByText('Nothing needs doing right now.')).not.toBeInTheDocument();
+  });
+
+  it.each([
+    ['terms to accept', { termsToAccept: [{ projectId: 'p1', projectTitle: 'Regalis pair', version: 2 }] }, 'Terms version 2 waits for your acceptance'],
+    [
+      'a hand-over to confirm',
+      { handOversToConfirm: [{ projectId: 'p1', projectTitle: 'Regalis pair', entryId: 'e1', date: '2026-11-20', count: 5, partyName: 'Tomasz' }] },
+      'Confirm the arrival of 5 young handed over to Tomasz on 20 Nov 2026',
+    ],
+    [
+      'money owed by me',
+      {
+        payments: [
+          { projectId: 'p1', projectTitle: 'Regalis pair', direction: 'owed-by-me' as const, otherName: 'Tomasz', amountMinor: 1500, currency: 'EUR' },
+        ],
+      },
+      'You owe Tomasz €15.00',
+    ],
+    [
+      'money owed to me',
+      {
+        payments: [{ projectId: 'p1', projectTitle: 'Regalis pair', direction: 'owed-to-me' as const, otherName: 'Mira', amountMinor: 1500, currency: 'EUR' }],
+      },
+      'Mira owes you €15.00',
+    ],
+  ])('shows %s as a to-do, so Today is not "nothing"', (_kind, todo, text) => {
+    renderWithProviders(<DashboardView data={{ ...data, dueToday: { ...nothing, ...todo } }} timeZone="UTC" />);
+    expect(within(screen.getByTestId('card-account-todos')).getByText(text)).toBeInTheDocument();
+    expect(screen.queryByText('Nothing needs doing right now.')).not.toBeInTheDocument();
   });
 });

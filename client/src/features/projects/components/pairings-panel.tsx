@@ -3,12 +3,13 @@ import { DateInput, TimeInput } from '@mantine/dates';
 import { useForm } from '@mantine/form';
 import { useDisclosure } from '@mantine/hooks';
 import { useState } from 'react';
-import { PAIRING_OUTCOMES, todayIn, type PairingOutcome } from '@broodsilk/shared';
+import { PAIRING_OUTCOMES, todayIn, type CreatePairingRequest, type PairingOutcome } from '@broodsilk/shared';
 import { dayjs, formatInstant } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
 import { usePairings, useRecordPairing } from '../api/pairings';
 import { PAIRING_OUTCOME_LABELS } from '../utils/labels';
 import { FormActions } from '@/components/ui/form-actions';
+import { WarningConfirm, useWarnedSave } from '@/components/ui/warning-confirm';
 
 const outcomeOptions = PAIRING_OUTCOMES.map((o) => ({ value: o, label: PAIRING_OUTCOME_LABELS[o] }));
 
@@ -37,17 +38,19 @@ export function PairingsPanel({ projectId, timeZone, canRecord }: { projectId: s
     },
   });
 
-  const submit = form.onSubmit(async (v) => {
-    setMessage(null);
-    try {
-      // Day and wall-clock time are read in the keeper's own zone.
-      const startedAt = dayjs.tz(`${v.on}T${v.time}`, timeZone).toISOString();
-      await record.mutateAsync({ startedAt, durationMinutes: Number(v.durationMinutes), outcome: v.outcome, notes: v.notes.trim() || null });
+  const warned = useWarnedSave(
+    (body: CreatePairingRequest) => record.mutateAsync(body),
+    () => {
       form.reset();
       close();
-    } catch (e) {
-      setMessage(applyServerErrors(form, e));
-    }
+    },
+    (e) => setMessage(applyServerErrors(form, e)),
+  );
+  const submit = form.onSubmit((v) => {
+    setMessage(null);
+    // Day and wall-clock time are read in the keeper's own zone.
+    const startedAt = dayjs.tz(`${v.on}T${v.time}`, timeZone).toISOString();
+    return warned.save({ startedAt, durationMinutes: Number(v.durationMinutes), outcome: v.outcome, notes: v.notes.trim() || null });
   });
 
   return (
@@ -113,6 +116,9 @@ export function PairingsPanel({ projectId, timeZone, canRecord }: { projectId: s
                 />
                 <Select label="Outcome" data={outcomeOptions} allowDeselect={false} key={form.key('outcome')} {...form.getInputProps('outcome')} />
                 <Textarea label="Notes" autosize minRows={2} key={form.key('notes')} {...form.getInputProps('notes')} />
+                {warned.warnings && (
+                  <WarningConfirm warnings={warned.warnings} loading={record.isPending} onConfirm={warned.confirm} onCancel={warned.cancel} />
+                )}
                 <FormActions message={message} loading={record.isPending} submitLabel="Save pairing" />
               </Stack>
             </form>

@@ -22,6 +22,13 @@ describe('StageLine', () => {
     expect(screen.getByTestId('stage-current')).toHaveTextContent(`${NAMES[index]} · step ${index + 1} of 8`);
   });
 
+  it('does not call "Paired" done for a sac with no pairing recorded', () => {
+    renderWithProviders(<StageLine stage={{ stage: 'sac-laid', unrecorded: ['paired'] }} />);
+    const items = steps();
+    expect(items.map((i) => i.getAttribute('data-state'))).toEqual(['done', 'unrecorded', 'done', 'current', 'ahead', 'ahead', 'ahead', 'ahead']);
+    expect(items[1]).toHaveTextContent('Paired: not recorded');
+  });
+
   it.each([
     ['no-sac', 'Ended early: no sac'],
     ['female-molted', 'Ended early: the female molted'],

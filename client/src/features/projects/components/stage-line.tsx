@@ -3,6 +3,8 @@ import { PROJECT_STAGE_LINE, type DerivedProjectStage } from '@broodsilk/shared'
 import { ENDED_EARLY_LABELS, STAGE_LABELS, stageText } from '../utils/labels';
 import classes from './stage-line.module.css';
 
+const STATE_WORDS = { done: 'done', unrecorded: 'not recorded', current: 'now', ahead: 'ahead', ended: 'not reached' } as const;
+
 /**
  * The progress line of a project: eight short bars, done ones filled in moss, the current one
  * marked and named below. An ended project greys the line and names its reason in clay.
@@ -14,7 +16,7 @@ export function StageLine({ stage, note }: { stage: DerivedProjectStage; note?: 
     <Stack gap={6} data-testid="stage-line" aria-label="Project stage">
       <ol className={classes.line}>
         {PROJECT_STAGE_LINE.map((s, i) => {
-          const state = ended ? 'ended' : i < current ? 'done' : i === current ? 'current' : 'ahead';
+          const state = ended ? 'ended' : i < current ? (stage.unrecorded?.includes(s) ? 'unrecorded' : 'done') : i === current ? 'current' : 'ahead';
           return (
             <Tooltip key={s} label={STAGE_LABELS[s]} withinPortal>
               <li className={classes.step} data-state={state} aria-current={state === 'current' ? 'step' : undefined}>
@@ -23,7 +25,7 @@ export function StageLine({ stage, note }: { stage: DerivedProjectStage; note?: 
                   {STAGE_LABELS[s]}
                 </Text>
                 <VisuallyHidden>
-                  {STAGE_LABELS[s]}: {state === 'done' ? 'done' : state === 'current' ? 'now' : state === 'ahead' ? 'ahead' : 'not reached'}
+                  {STAGE_LABELS[s]}: {STATE_WORDS[state]}
                 </VisuallyHidden>
               </li>
             </Tooltip>

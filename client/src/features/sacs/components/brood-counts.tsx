@@ -1,13 +1,14 @@
-import { Alert, Button, Collapse, Group, NumberInput, Select, SimpleGrid, Stack, Table, Text, TextInput } from '@mantine/core';
+import { Alert, Button, Checkbox, Collapse, Group, NumberInput, Select, SimpleGrid, Stack, Table, Text, TextInput } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useDisclosure } from '@mantine/hooks';
 import { useState } from 'react';
-import { BROOD_LOSS_REASONS, BROOD_STAGES, type BroodLossReason, type BroodStage } from '@broodsilk/shared';
+import { BROOD_LOSS_REASONS, BROOD_STAGES, type BroodCountRequest, type BroodLossReason, type BroodStage } from '@broodsilk/shared';
 import { formatInstant } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useBroodCounts, useRecordBroodCount } from '../api/brood';
 import { broodLabel } from '../utils/sac-view';
 import { FormActions } from '@/components/ui/form-actions';
+import { WarningConfirm, useWarnedSave } from '@/components/ui/warning-confirm';
 
 const LOSS_LABELS: Record<BroodLossReason, string> = {
   died: 'Died',
@@ -24,6 +25,7 @@ const lossOptions = BROOD_LOSS_REASONS.map((r) => ({ value: r, label: LOSS_LABEL
 interface Values {
   stage: BroodStage;
   alive: number | string;
+  estimated: boolean;
   lost: number | string;
   lossReason: BroodLossReason | null;
   note: string;
@@ -37,27 +39,30 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
   const [message, setMessage] = useState<string | null>(null);
   const form = useForm<Values>({
     mode: 'uncontrolled',
-    initialValues: { stage, alive: '', lost: 0, lossReason: null, note: '' },
+    initialValues: { stage, alive: '', estimated: false, lost: 0, lossReason: null, note: '' },
     validate: {
       alive: (v) => (v === '' || Number(v) < 0 ? 'How many are alive?' : null),
       lossReason: (v, values) => (Number(values.lost) > 0 && !v ? 'Why were they lost?' : null),
     },
   });
-  const submit = form.onSubmit(async (v) => {
-    setMessage(null);
-    try {
-      await record.mutateAsync({
-        stage: v.stage,
-        alive: Number(v.alive),
-        lost: Number(v.lost) || 0,
-        ...(Number(v.lost) > 0 && v.lossReason ? { lossReason: v.lossReason } : {}),
-        note: v.note.trim() || null,
-      });
+  const warned = useWarnedSave(
+    (body: BroodCountRequest) => record.mutateAsync(body),
+    () => {
       form.reset();
       close();
-    } catch (e) {
-      setMessage(applyServerErrors(form, e));
-    }
+    },
+    (e) => setMessage(applyServerErrors(form, e)),
+  );
+  const submit = form.onSubmit((v) => {
+    setMessage(null);
+    return warned.save({
+      stage: v.stage,
+      alive: Number(v.alive),
+      estimated: v.estimated,
+      lost: Number(v.lost) || 0,
+      ...(Number(v.lost) > 0 && v.lossReason ? { lossReason: v.lossReason } : {}),
+      note: v.note.trim() || null,
+    });
   });
   return (
     <Stack>
@@ -85,7 +90,10 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
                     <Table.Tr key={c.id}>
                       <Table.Td>{formatInstant(c.at, timeZone)}</Table.Td>
                       <Table.Td>{broodLabel(c.stage)}</Table.Td>
-                      <Table.Td>{c.alive}</Table.Td>
+                      <Table.Td>
+                        {c.estimated ? `about ${c.alive}` : c.alive}
+                        {c.struckBy ? ' (corrected)' : ''}
+                      </Table.Td>
                       <Table.Td>
                         {c.lost > 0 ? (
                           <Text size="sm" className="tone-failed">
@@ -116,10 +124,18 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
                 <SimpleGrid cols={{ base: 2, sm: 4 }}>
                   <Select label="Stage" data={stageOptions} allowDeselect={false} key={form.key('stage')} {...form.getInputProps('stage')} />
                   <NumberInput label="Alive" min={0} allowDecimal={false} key={form.key('alive')} {...form.getInputProps('alive')} />
+                  <Checkbox
+                    label="An estimate, not counted one by one"
+                    key={form.key('estimated')}
+                    {...form.getInputProps('estimated', { type: 'checkbox' })}
+                  />
                   <NumberInput label="Lost" min={0} allowDecimal={false} key={form.key('lost')} {...form.getInputProps('lost')} />
                   <Select label="Lost because" data={lossOptions} key={form.key('lossReason')} {...form.getInputProps('lossReason')} />
                 </SimpleGrid>
                 <TextInput label="Note" key={form.key('note')} {...form.getInputProps('note')} />
+                {warned.warnings && (
+                  <WarningConfirm warnings={warned.warnings} loading={record.isPending} onConfirm={warned.confirm} onCancel={warned.cancel} />
+                )}
                 <FormActions message={message} loading={record.isPending} submitLabel="Save count" />
               </Stack>
             </form>

@@ -38,6 +38,7 @@ const sac: SacResponse = {
   opened: false,
   currentCount: null,
   notes: null,
+  warningReason: null,
   incubatorCaution: INCUBATOR_CAUTION,
   createdAt: '2026-11-01T10:00:00Z',
   updatedAt: '2026-11-30T19:00:00Z',

@@ -2,11 +2,12 @@ import { Group, SegmentedControl, Stack, Text, Textarea } from '@mantine/core';
 import { DateInput, TimeInput } from '@mantine/dates';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import { todayIn } from '@broodsilk/shared';
+import { todayIn, type CreateSacRequest } from '@broodsilk/shared';
 import { dayjs } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateSac } from '../api/sacs';
 import { FormActions } from '@/components/ui/form-actions';
+import { WarningConfirm, useWarnedSave } from '@/components/ui/warning-confirm';
 
 interface Values {
   layDate: string | null;
@@ -37,19 +38,21 @@ export function RecordSacForm({ projectId, timeZone, onDone }: { projectId: stri
   const [where, setWhere] = useState<Values['where']>('mother');
   form.watch('where', ({ value }) => setWhere(value));
 
-  const submit = form.onSubmit(async (v) => {
-    setMessage(null);
-    try {
-      await create.mutateAsync({
-        layDate: v.layDate!,
-        pulledAt: v.where === 'pulled' && v.pulledOn ? dayjs.tz(`${v.pulledOn}T${v.pulledTime || '08:00'}`, timeZone).toISOString() : null,
-        notes: v.notes.trim() || null,
-      });
+  const warned = useWarnedSave(
+    (body: CreateSacRequest) => create.mutateAsync(body),
+    () => {
       form.reset();
       onDone?.();
-    } catch (e) {
-      setMessage(applyServerErrors(form, e));
-    }
+    },
+    (e) => setMessage(applyServerErrors(form, e)),
+  );
+  const submit = form.onSubmit((v) => {
+    setMessage(null);
+    return warned.save({
+      layDate: v.layDate!,
+      pulledAt: v.where === 'pulled' && v.pulledOn ? dayjs.tz(`${v.pulledOn}T${v.pulledTime || '08:00'}`, timeZone).toISOString() : null,
+      notes: v.notes.trim() || null,
+    });
   });
 
   return (
@@ -91,6 +94,7 @@ export function RecordSacForm({ projectId, timeZone, onDone }: { projectId: stri
           </Group>
         )}
         <Textarea label="Notes" autosize minRows={2} key={form.key('notes')} {...form.getInputProps('notes')} />
+        {warned.warnings && <WarningConfirm warnings={warned.warnings} loading={create.isPending} onConfirm={warned.confirm} onCancel={warned.cancel} />}
         <FormActions message={message} loading={create.isPending} submitLabel="Save sac" />
       </Stack>
     </form>

@@ -1,0 +1,44 @@
+import { Anchor, Badge, Table, Text } from '@mantine/core';
+import { Link } from 'react-router';
+import { PROJECT_STAGE_LABELS, type ProjectSummary } from '@broodsilk/shared';
+import { paths } from '@/config/paths';
+import { SectionCard } from '@/components/ui/section-card';
+
+/** Projects not closed or ended early, with their stage. */
+export function ProjectsCard({ projects }: { projects: ProjectSummary[] }) {
+  return (
+    <SectionCard compact title="Open projects" testId="card-projects">
+      {projects.length === 0 ? (
+        <Text size="sm" c="dimmed">
+          No open project.{' '}
+          <Anchor component={Link} to={paths.newProject.href()}>
+            Start one
+          </Anchor>
+          .
+        </Text>
+      ) : (
+        <Table verticalSpacing={4} fz="sm">
+          <Table.Tbody>
+            {projects.map((p) => (
+              <Table.Tr key={p.id}>
+                <Table.Td>
+                  <Anchor component={Link} to={paths.project.href(p.id)} size="sm" fw={600}>
+                    {p.title}
+                  </Anchor>
+                  <Text size="xs" c="dimmed">
+                    {p.female.label} × {p.male.label}
+                  </Text>
+                </Table.Td>
+                <Table.Td style={{ width: '1%', whiteSpace: 'nowrap' }}>
+                  <Badge variant="light" tt="none" color={p.stage.stage === 'ended-early' ? 'clay' : 'moss'} styles={{ label: { overflow: 'visible' } }}>
+                    {PROJECT_STAGE_LABELS[p.stage.stage]}
+                  </Badge>
+                </Table.Td>
+              </Table.Tr>
+            ))}
+          </Table.Tbody>
+        </Table>
+      )}
+    </SectionCard>
+  );
+}

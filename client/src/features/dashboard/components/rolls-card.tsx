@@ -1,0 +1,47 @@
+import { Anchor, Stack, Text } from '@mantine/core';
+import { Link } from 'react-router';
+import type { DashboardSac, RollStatus } from '@broodsilk/shared';
+import { paths } from '@/config/paths';
+import { formatInstant } from '@/lib/dates';
+import { ROLL_STATUS_TONE } from '@/lib/tones';
+import { SectionCard } from '@/components/ui/section-card';
+import { SacLine } from './sac-line';
+
+const ROLL_LABEL: Record<RollStatus, string> = { overdue: 'Overdue', due: 'Due now', 'due-soon': 'Due within the hour', upcoming: 'Later' };
+
+/** Rolls due soon, due or overdue (owner and caretakers), most late first. */
+export function RollsCard({ rolls, timeZone }: { rolls: DashboardSac[]; timeZone: string }) {
+  const overdue = rolls.some((r) => r.sac.roll?.status === 'overdue');
+  return (
+    <SectionCard compact title="Rolls" testId="card-rolls" accent={overdue ? 'clay' : rolls.length ? 'amber' : undefined}>
+      {rolls.length === 0 ? (
+        <Text size="sm" c="dimmed">
+          No roll is due.
+        </Text>
+      ) : (
+        rolls.map((r) => {
+          const s = { label: ROLL_LABEL[r.sac.roll!.status], ...ROLL_STATUS_TONE[r.sac.roll!.status] };
+          return (
+            <SacLine
+              key={r.sac.id}
+              item={r}
+              right={
+                <Stack gap={0} align="flex-end">
+                  <Text size="sm" fw={700} className={s.tone} data-testid="roll-status">
+                    {s.label}
+                  </Text>
+                  <Text size="xs" c="dimmed">
+                    {formatInstant(r.sac.roll!.due, timeZone)}
+                  </Text>
+                  <Anchor component={Link} to={paths.incubatorSac.href(r.sac.id)} size="sm">
+                    Log a roll
+                  </Anchor>
+                </Stack>
+              }
+            />
+          );
+        })
+      )}
+    </SectionCard>
+  );
+}

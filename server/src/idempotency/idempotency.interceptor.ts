@@ -1,0 +1,52 @@
+import { BadRequestException, Injectable, type CallHandler, type ExecutionContext, type NestInterceptor } from '@nestjs/common';
+import { createHash } from 'node:crypto';
+import type { Request, Response } from 'express';
+import { catchError, from, mergeMap, of, switchMap, type Observable } from 'rxjs';
+import type { AuthUser } from '../common/auth-user';
+import { IdempotencyStore } from './idempotency.store';
+
+export const IDEMPOTENCY_HEADER = 'Idempotency-Key';
+// A UUID or any other opaque token a client makes up: printable ASCII, bounded.
+const KEY = /^[\x21-\x7e]{8,255}$/;
+
+/**
+ * A POST carrying `Idempotency-Key` is written once per user and key for 24 hours: a repeat gets
+ * the first answer again (status and body), a different request under the same key 422.
+ * Requests without the header, or without a session, pass through untouched.
+ */
+@Injectable()
+export class IdempotencyInterceptor implements NestInterceptor {
+  constructor(private readonly store: IdempotencyStore) {}
+
+  intercept(context: ExecutionContext, next: CallHandler): Observable<unknown> {
+    if (context.getType() !== 'http') return next.handle();
+    const req = context.switchToHttp().getRequest<Request>();
+    const res = context.switchToHttp().getResponse<Response>();
+    const key = req.header(IDEMPOTENCY_HEADER);
+    const user = req.user as AuthUser | undefined;
+    if (req.method !== 'POST' || key === undefined || !user) return next.handle();
+    if (!KEY.test(key)) throw new BadRequestException({ message: `${IDEMPOTENCY_HEADER} must be 8 to 255 visible characters, e.g. a UUID.` });
+    const path = req.originalUrl.split('?')[0]!;
+    const fingerprint = createHash('sha256')
+      .update(`${req.method} ${path}\n${JSON.stringify(req.body ?? null)}`)
+      .digest('hex');
+    return from(this.store.claim({ userId: user.id, key, method: req.method, path, fingerprint })).pipe(
+      switchMap((claim) => {
+        if ('replay' in claim) {
+          res.status(claim.replay.status).setHeader('Idempotent-Replayed', 'true');
+          return of(claim.replay.body);
+        }
+        return next.handle().pipe(
+          mergeMap(async (body: unknown) => {
+            await this.store.complete(claim.id, res.statusCode, body);
+            return body;
+          }),
+          catchError(async (e: unknown) => {
+            await this.store.release(claim.id);
+            throw e;
+          }),
+        );
+      }),
+    );
+  }
+}

@@ -1,0 +1,26 @@
+import { BadRequestException, UnprocessableEntityException } from '@nestjs/common';
+import { WARNINGS_FIELD, unacknowledged, type AcknowledgedWarnings, type PlausibilityWarning } from '@broodsilk/shared';
+
+/**
+ * Lets a write with plausibility warnings go ahead only once every warning is acknowledged with a
+ * reason: otherwise 422 with one `details` row per warning (nothing is written). Returns the reason
+ * to store with the record (null when nothing was unusual).
+ */
+export function acceptWarnings(found: readonly PlausibilityWarning[], request: AcknowledgedWarnings): string | null {
+  if (!found.length) return null;
+  const open = unacknowledged(found, request.acknowledgedWarnings);
+  if (open.length) {
+    throw new UnprocessableEntityException({
+      message: open.length === 1 ? open[0]!.message : `Please check ${open.length} things before saving: ${open.map((w) => w.message).join(' ')}`,
+      details: open.map((w) => ({ field: WARNINGS_FIELD, code: w.code, message: w.message })),
+    });
+  }
+  const reason = request.warningReason?.trim();
+  if (!reason) {
+    throw new BadRequestException({
+      message: 'Say briefly why the unusual value is right (warningReason); it is kept with the record.',
+      details: [{ field: 'warningReason', message: 'Say briefly why the unusual value is right.' }],
+    });
+  }
+  return reason;
+}

@@ -1,0 +1,42 @@
+/**
+ * Plausibility warnings: a value that is possible but unusual. The server answers 422 with one
+ * `details` row per warning (field `acknowledgedWarnings`, `code`, message) and writes nothing;
+ * the same request sent again with those codes in `acknowledgedWarnings` and a `warningReason`
+ * is stored with the reason.
+ */
+export const PLAUSIBILITY_WARNINGS = [
+  /** A pairing dated before the male's maturing molt. */
+  'pairing-before-male-matured',
+  /** A sac laid sooner after the last pairing than the species' minimum. */
+  'sac-soon-after-pairing',
+  /** A sac laid more than a year after the last pairing. */
+  'sac-long-after-pairing',
+  /** A sac with no pairing recorded before it. */
+  'sac-without-pairing',
+  /** A second open project on a female whose brood is still in progress. */
+  'female-has-brood-in-progress',
+  /** A count higher than the estimated count before it. */
+  'count-above-estimate',
+] as const;
+export type PlausibilityWarningCode = (typeof PLAUSIBILITY_WARNINGS)[number];
+
+export interface PlausibilityWarning {
+  code: PlausibilityWarningCode;
+  message: string;
+}
+
+/** What a request that can raise warnings carries to have them accepted. */
+export interface AcknowledgedWarnings {
+  acknowledgedWarnings?: PlausibilityWarningCode[];
+  /** Why the unusual value is right; stored on the record and shown with it. */
+  warningReason?: string;
+}
+
+/** The field a warning row of a 422 answer names. */
+export const WARNINGS_FIELD = 'acknowledgedWarnings';
+
+/** The warnings not yet acknowledged; empty means the write may go ahead. */
+export function unacknowledged(found: readonly PlausibilityWarning[], acknowledged: readonly string[] | undefined): PlausibilityWarning[] {
+  const ok = new Set(acknowledged ?? []);
+  return found.filter((w) => !ok.has(w.code));
+}

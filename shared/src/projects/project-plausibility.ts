@@ -1,0 +1,22 @@
+import type { SacFact } from '../breeding/pairing.types.js';
+import type { PlausibilityWarning } from '../errors/plausibility.js';
+
+export interface OpenProjectOfFemale {
+  title: string;
+  sacs: readonly SacFact[];
+}
+
+/**
+ * A female raising a brood in one open project is not usually paired again in another: warn when
+ * a second open project would start on her while a sac of hers is still developing (common practice).
+ */
+export function secondProjectWarnings(femaleLabel: string, open: readonly OpenProjectOfFemale[]): PlausibilityWarning[] {
+  const busy = open.find((p) => p.sacs.some((s) => s.fate === 'developing'));
+  if (!busy) return [];
+  return [
+    {
+      code: 'female-has-brood-in-progress',
+      message: `${femaleLabel} has a brood in progress in the open project "${busy.title}". Finish or end that project first, or save with a reason.`,
+    },
+  ];
+}
