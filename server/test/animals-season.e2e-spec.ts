@@ -284,6 +284,13 @@ describe('a male dies', () => {
     ]);
   });
 
+  it('two deaths sent at once: one is recorded, the other is a 409, one event', async () => {
+    const p = await createProject(t.app, t.orm, mira, { title: 'Race' });
+    const answers = await Promise.all([0, 1].map(() => as(mira).post(`/animals/${p.male.id}/death`, { on: today })));
+    expect(answers.map((r) => r.status).sort()).toEqual([200, 409]);
+    expect((await activity(mira, p.id)).filter((e) => e.kind === 'male.died')).toHaveLength(1);
+  });
+
   it('a death in the future is refused and nothing is written', async () => {
     const p = await createProject(t.app, t.orm, mira, { title: 'Future death' });
     const res = await as(mira)

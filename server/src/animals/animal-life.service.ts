@@ -4,7 +4,7 @@ import type { AnimalResponse, MaleDeparture } from '@broodsilk/shared';
 import type { AuthUser } from '../common/auth-user';
 import { fieldError } from '../common/field-errors';
 import type { Animal } from './animal.entity';
-import { AnimalsService } from './animals.service';
+import { AnimalsService, lockAnimal } from './animals.service';
 import { AnimalDepartureRegistry } from './animal-departure.registry';
 import { premoltSinceOf } from './animals.mapper';
 
@@ -30,6 +30,7 @@ export class AnimalLifeService {
 
   private async change(viewer: AuthUser, id: string, step: (tx: EntityManager, a: Animal) => Promise<void> | void): Promise<AnimalResponse> {
     await this.em.transactional(async (tx) => {
+      await lockAnimal(tx, id);
       const a = await this.animals.ownOrForbid(viewer, id, tx);
       await step(tx, a);
     });

@@ -1,6 +1,6 @@
 import { ConflictException, ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { EntityManager, type QueryBuilder } from '@mikro-orm/postgresql';
-import { ForeignKeyConstraintViolationException } from '@mikro-orm/core';
+import { ForeignKeyConstraintViolationException, LockMode } from '@mikro-orm/core';
 import { todayIn, type AnimalStatus, type MaleDeparture, type AnimalResponse, type MaleClockRow, type Paged, type AnimalSummary } from '@broodsilk/shared';
 import type { AuthUser } from '../common/auth-user';
 import { User } from '../users/user.entity';
@@ -34,6 +34,11 @@ const SORT_COLUMNS = {
 const DEPARTURES: Partial<Record<AnimalStatus, MaleDeparture>> = { deceased: 'died', returned: 'returned' };
 
 const CLOCK_URGENCY = { 'past-typical': 0, late: 1, prime: 2, fresh: 3 } as const;
+
+/** Row lock for a change that reads before it writes, so two requests at once see each other's result. */
+export async function lockAnimal(tx: EntityManager, id: string): Promise<void> {
+  await tx.createQueryBuilder(Animal).select('id').where({ id }).setLockMode(LockMode.PESSIMISTIC_WRITE).execute();
+}
 
 @Injectable()
 export class AnimalsService {
@@ -128,6 +133,7 @@ export class AnimalsService {
    */
   async update(viewer: AuthUser, id: string, dto: UpdateAnimalDto): Promise<AnimalResponse> {
     await this.em.transactional(async (tx) => {
+      await lockAnimal(tx, id);
       const animal = await this.own(viewer, id, tx);
       const before = animal.status;
       const { errors, values } = await resolveAnimalInput(tx, viewer, dto, animal, this.today(viewer));
