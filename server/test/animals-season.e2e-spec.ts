@@ -223,6 +223,29 @@ describe('a loaned male goes back to his owner', () => {
     expect(again.body.message).toMatch(/already went back/);
   });
 
+  it('an edit to "returned" fills the return date and writes the event; an edit back clears the date', async () => {
+    const male = await createAnimal(t.app, mira, {
+      speciesId: species,
+      label: 'LOAN-2',
+      sex: 'male',
+      ownerKind: 'party',
+      ownerName: 'Petra Vogt',
+      custody: 'loan-in',
+    });
+    const p = (
+      await as(mira)
+        .post('/projects', { title: 'Loan by edit', femaleId: (await newFemale('LOAN-F2')).id, maleId: male.id })
+        .expect(201)
+    ).body;
+    const edited = await as(mira)
+      .patch(`/animals/${male.id}`, { status: 'returned', statusOn: addDays(today, -4) })
+      .expect(200);
+    expect(edited.body).toMatchObject({ status: 'returned', returnedOn: addDays(today, -4) });
+    expect((await activity(mira, p.id)).filter((e) => e.kind === 'male.returned')).toHaveLength(1);
+    const undone = await as(mira).patch(`/animals/${male.id}`, { status: 'active', statusOn: null }).expect(200);
+    expect(undone.body).toMatchObject({ status: 'active', returnedOn: null });
+  });
+
   it('an animal not on loan cannot be returned (409)', async () => {
     const p = await createProject(t.app, t.orm, mira, { title: 'Own male' });
     const res = await as(mira).post(`/animals/${p.male.id}/return`, { on: today }).expect(409);
