@@ -221,6 +221,8 @@ describe('a loaned male goes back to his owner', () => {
     ]);
     const again = await as(mira).post(`/animals/${male.id}/return`, { on: today }).expect(409);
     expect(again.body.message).toMatch(/already went back/);
+    const newProject = await as(mira).post('/projects', { title: 'After the loan', femaleId: female.id, maleId: male.id }).expect(400);
+    expect(newProject.body.details).toEqual([{ field: 'maleId', message: 'LOAN-1 is marked returned to its owner, so it cannot start a project.' }]);
   });
 
   it('an edit to "returned" fills the return date and writes the event; an edit back clears the date', async () => {
