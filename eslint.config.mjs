@@ -10,6 +10,8 @@ import tseslint from 'typescript-eslint';
 import { importX } from 'eslint-plugin-import-x';
 import { createTypeScriptImportResolver } from 'eslint-import-resolver-typescript';
 import globals from 'globals';
+import reactHooks from 'eslint-plugin-react-hooks';
+import pluginQuery from '@tanstack/eslint-plugin-query';
 
 /** Zones that keep client features apart and imports one-way (after bulletproof-react). */
 function clientBoundaryZones(root) {
@@ -108,6 +110,9 @@ export function createConfig({ root }) {
       files: ['client/**/*.{ts,tsx}'],
       languageOptions: { globals: { ...globals.browser } },
     },
+    // React's rules of hooks (with the compiler-based checks of 7.x) and TanStack Query's rules, for the client only.
+    { files: ['client/**/*.{ts,tsx}'], ...reactHooks.configs.flat.recommended },
+    ...pluginQuery.configs['flat/recommended'].map((config) => ({ ...config, files: ['client/**/*.{ts,tsx}'] })),
   );
 }
 

@@ -5,6 +5,9 @@ import helmet from 'helmet';
 import { Logger } from 'nestjs-pino';
 import { validationExceptionFactory } from './common/filters/validation-exception.factory';
 import { CSRF } from './common/csrf/csrf.provider';
+import { bodyParsers } from './common/body/body-parsers';
+import { answerMiddlewareErrors } from './common/filters/middleware-errors';
+import { RefuseUnstorableTextPipe } from './common/pipes/refuse-unstorable-text.pipe';
 import type { Csrf } from './common/csrf/csrf';
 
 /** Everything main.ts and the tests must share, so tests exercise the real app. */
@@ -23,7 +26,12 @@ export function configureApp(app: INestApplication): INestApplication {
   );
   app.use(cookieParser());
   app.use(app.get<Csrf>(CSRF).doubleCsrfProtection);
-  app.useGlobalPipes(new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true, exceptionFactory: validationExceptionFactory }));
+  app.use(...bodyParsers());
+  app.use(answerMiddlewareErrors);
+  app.useGlobalPipes(
+    new RefuseUnstorableTextPipe(),
+    new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true, exceptionFactory: validationExceptionFactory }),
+  );
   app.enableShutdownHooks();
   return app;
 }

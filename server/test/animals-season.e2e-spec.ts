@@ -342,7 +342,7 @@ describe('her breeding record', () => {
         partnerLabel: p.male.label,
         stage: expect.objectContaining({ stage: expect.any(String) }),
         pairings: [{ on: addDays(today, -80), outcome: 'connected' }],
-        sacs: [{ id: expect.any(String), layDate: addDays(today, -20), pulledOn: null, outcome: 'developing', broodStage: 'eggs' }],
+        sacs: [{ id: expect.any(String), layDate: addDays(today, -20), pulledOn: null, fate: 'developing', broodStage: 'eggs' }],
       },
     ]);
     const his = (await as(mira).get(`/animals/${p.male.id}/breeding`).expect(200)).body;

@@ -188,7 +188,7 @@ describe('owner and custody', () => {
 
 describe('male clock in responses', () => {
   // State boundaries as shared/collection/male-clock.ts defines them; Poecilotheria uses the
-  // ow-arboreal group lifespan of 4–12 months (from memory, TRADE-FACTS §5).
+  // ow-arboreal group lifespan of 4–12 months (from memory, docs/trade-facts.md §5).
   it.each([
     [5, 'fresh'],
     [60, 'prime'],

@@ -107,7 +107,7 @@ describe('stage entries', () => {
 });
 
 describe('readings', () => {
-  it('stores temperatures in °C (°F converted: 77 °F = 25 °C, 80 °F = 26.67 °C, TRADE-FACTS check value 9) and refuses implausible ones', async () => {
+  it('stores temperatures in °C (°F converted: 77 °F = 25 °C, 80 °F = 26.67 °C, docs/trade-facts.md check value 9) and refuses implausible ones', async () => {
     pin(NOW);
     const sac = await pulledSac();
     const c = await log(caretaker, sac.id, { kind: 'temperature', temperature: { value: 26.5, unit: 'C' } }).expect(201);

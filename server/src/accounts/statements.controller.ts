@@ -3,10 +3,14 @@ import type { StatementResponse } from '@broodsilk/shared';
 import { CurrentProject, ProjectRoles } from '../projects/project-roles.decorator';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { StatementsService } from './statements.service';
+import { PerUserLimit } from '../common/per-user-limit/per-user-limit';
 
 /** A download with its name; Nest sets the headers, so the handler stays in Nest's response flow (interceptors, filters). */
 const download = (type: string, f: { filename: string; body: string | Buffer }) =>
   new StreamableFile(Buffer.isBuffer(f.body) ? f.body : Buffer.from(f.body, 'utf8'), { type, disposition: `attachment; filename="${f.filename}"` });
+
+/** Statements e-mailed per keeper per hour: one to each party of a few projects, not a mail cannon. */
+export const STATEMENT_EMAILS_PER_HOUR = 10;
 
 @Controller('projects/:projectId/statements')
 export class StatementsController {
@@ -34,6 +38,7 @@ export class StatementsController {
 
   @Post(':memberId/email')
   @ProjectRoles('owner', 'partner')
+  @PerUserLimit({ what: 'statement e-mails', limit: STATEMENT_EMAILS_PER_HOUR, windowMinutes: 60 })
   email(@CurrentProject() a: ProjectAccess, @Param('memberId', ParseUUIDPipe) id: string): Promise<{ sentTo: string }> {
     return this.statements.email(a, id);
   }

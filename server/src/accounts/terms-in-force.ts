@@ -2,8 +2,8 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { TermsVersion } from '../projects/terms-version.entity';
 
 /**
- * The version in force: the newest one every partner with a line has accepted (PRODUCT.md:
- * "a version is in force once every partner has accepted it"). The owner proposed it.
+ * The version in force: the newest one every partner with a line has accepted (docs/product.md,
+ * Data rules, Terms: proposed until every partner accepts, in force from then on). The owner proposed it.
  */
 export async function termsInForce(em: EntityManager, projectId: string): Promise<TermsVersion | null> {
   return (await termsInForceOf(em, [projectId])).get(projectId) ?? null;

@@ -5,7 +5,7 @@ import { EntityManager, LockMode, raw } from '@mikro-orm/postgresql';
 import { createHash, randomBytes } from 'node:crypto';
 import { SESSION_HOURS, type Me } from '@broodsilk/shared';
 import { appConfig } from '../config/app.config';
-import { MailService } from '../mail/mail.service';
+import { MailOutbox } from '../mail/mail-outbox.service';
 import { User } from '../users/user.entity';
 import { toMe } from '../users/users.mapper';
 import { dummyPasswordHash, hashPassword, verifyPassword } from './password-hasher';
@@ -33,7 +33,7 @@ export class AuthService {
     private readonly em: EntityManager,
     private readonly clock: Clock,
     private readonly jwt: JwtService,
-    private readonly mail: MailService,
+    private readonly outbox: MailOutbox,
     @Inject(appConfig.KEY) private readonly app: ConfigType<typeof appConfig>,
   ) {}
 
@@ -83,16 +83,17 @@ export class AuthService {
     const user = await this.em.findOne(User, { email });
     if (!user) return;
     const token = randomBytes(32).toString('base64url');
+    const link = `${this.app.publicUrl}/reset-password?token=${token}`;
     await this.em.transactional(async (em) => {
       // A new link replaces any older one that is still open.
       await em.nativeUpdate(PasswordResetToken, { user: user.id, usedAt: null }, { usedAt: this.clock.now() });
       em.create(PasswordResetToken, { user, tokenHash: sha256(token), expiresAt: new Date(this.clock.now().getTime() + RESET_LINK_MINUTES * 60_000) });
-    });
-    const link = `${this.app.publicUrl}/reset-password?token=${token}`;
-    await this.mail.send({
-      to: user.email,
-      subject: 'Reset your Broodsilk password',
-      text: `Hello ${user.displayName},\n\nSomeone asked to reset the password of your Broodsilk account. If it was you, open this link within ${RESET_LINK_MINUTES} minutes:\n\n${link}\n\nThe link works once. If you did not ask for it, ignore this e-mail; your password stays as it is.\n`,
+      await em.flush();
+      await this.outbox.enqueue(em, {
+        to: user.email,
+        subject: 'Reset your Broodsilk password',
+        text: `Hello ${user.displayName},\n\nSomeone asked to reset the password of your Broodsilk account. If it was you, open this link within ${RESET_LINK_MINUTES} minutes:\n\n${link}\n\nThe link works once. If you did not ask for it, ignore this e-mail; your password stays as it is.\n`,
+      });
     });
   }
 

@@ -5,8 +5,12 @@ import { Public } from '../common/decorators/public.decorator';
 import { CurrentProject, ProjectRoles } from '../projects/project-roles.decorator';
 import type { AuthUser } from '../common/auth-user';
 import type { ProjectAccess } from '../projects/project-access.service';
+import { PerUserLimit } from '../common/per-user-limit/per-user-limit';
 import { InvitationsService } from './invitations.service';
 import { CreateInvitationDto } from './dto/create-invitation.dto';
+
+/** Invitations sent per keeper per hour; each one e-mails an outside address. */
+export const INVITATIONS_PER_HOUR = 30;
 
 @Controller('projects/:projectId/invitations')
 export class ProjectInvitationsController {
@@ -14,6 +18,7 @@ export class ProjectInvitationsController {
 
   @Post()
   @ProjectRoles('owner')
+  @PerUserLimit({ what: 'invitations', limit: INVITATIONS_PER_HOUR, windowMinutes: 60 })
   create(@CurrentUser() user: AuthUser, @CurrentProject() access: ProjectAccess, @Body() dto: CreateInvitationDto): Promise<InvitationResponse> {
     return this.invitations.create(user, access, dto);
   }

@@ -1,20 +1,11 @@
-import {
-  BadRequestException,
-  ConflictException,
-  GoneException,
-  Inject,
-  Injectable,
-  Logger,
-  NotFoundException,
-  ServiceUnavailableException,
-} from '@nestjs/common';
+import { BadRequestException, ConflictException, GoneException, Inject, Injectable, NotFoundException } from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
 import { EntityManager } from '@mikro-orm/postgresql';
 import { LockMode } from '@mikro-orm/core';
 import type { AcceptInvitationResponse, InvitationPreview, InvitationResponse } from '@broodsilk/shared';
 import { appConfig } from '../config/app.config';
 import type { AuthUser } from '../common/auth-user';
-import { MailService } from '../mail/mail.service';
+import { MailOutbox } from '../mail/mail-outbox.service';
 import { User } from '../users/user.entity';
 import { ActivityService } from '../activity/activity.service';
 import type { ProjectAccess } from '../projects/project-access.service';
@@ -29,12 +20,10 @@ const INVALID_LINK = 'This invitation link is not valid. Check that you copied a
 
 @Injectable()
 export class InvitationsService {
-  private readonly logger = new Logger(InvitationsService.name);
-
   constructor(
     private readonly em: EntityManager,
     private readonly clock: Clock,
-    private readonly mail: MailService,
+    private readonly outbox: MailOutbox,
     private readonly activity: ActivityService,
     @Inject(appConfig.KEY) private readonly app: ConfigType<typeof appConfig>,
   ) {}
@@ -43,7 +32,7 @@ export class InvitationsService {
   async create(viewer: AuthUser, access: ProjectAccess, dto: CreateInvitationDto): Promise<InvitationResponse> {
     const email = dto.email.trim().toLowerCase();
     const { token, hash } = newInvitationToken();
-    const { invitation, inviter } = await this.em.transactional(async (tx) => {
+    const invitation = await this.em.transactional(async (tx) => {
       const members = await tx.find(ProjectMember, { project: access.project.id }, { populate: ['user'] });
       if (members.some((m) => m.user?.email.toLowerCase() === email))
         throw new ConflictException({ message: 'Someone with this e-mail address is already a member of the project.' });
@@ -86,11 +75,10 @@ export class InvitationsService {
         summary: `Invited ${email} as ${dto.role}.`,
         data: { email, role: dto.role },
       });
-      return { invitation, inviter };
-    });
-    const link = `${this.app.publicUrl}/invitations/${token}`;
-    try {
-      await this.mail.send({
+      await tx.flush();
+      // Goes out after commit from the mail queue; a refused invitation sends nothing.
+      const link = `${this.app.publicUrl}/invitations/${token}`;
+      await this.outbox.enqueue(tx, {
         to: email,
         subject: `${inviter.displayName} invites you to the breeding project "${access.project.title}"`,
         text:
@@ -98,10 +86,8 @@ export class InvitationsService {
           `Open this link within ${INVITATION_DAYS} days to accept (sign in or create an account first):\n\n${link}\n\n` +
           `The link works once. If you did not expect this e-mail, ignore it.\n`,
       });
-    } catch (e) {
-      this.logger.error(`invitation mail failed: ${e instanceof Error ? e.message : String(e)}`);
-      throw new ServiceUnavailableException('The invitation is saved but the e-mail could not be sent. Please send it again in a moment.');
-    }
+      return invitation;
+    });
     return toInvitationResponse(invitation);
   }
 

@@ -34,7 +34,7 @@ export class AnimalBreedingService {
         pairings: [...facts.pairings].sort((a, b) => a.on.localeCompare(b.on)),
         sacs: [...facts.sacs]
           .sort((a, b) => a.layDate.localeCompare(b.layDate))
-          .map((s) => ({ id: s.id ?? null, layDate: s.layDate, pulledOn: s.pulledOn ?? null, outcome: s.outcome, broodStage: s.broodStage ?? null })),
+          .map((s) => ({ id: s.id ?? null, layDate: s.layDate, pulledOn: s.pulledOn ?? null, fate: s.fate, broodStage: s.broodStage ?? null })),
       };
     });
   }

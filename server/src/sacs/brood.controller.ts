@@ -5,6 +5,7 @@ import { CurrentUser } from '../common/decorators/current-user.decorator';
 import type { AuthUser } from '../common/auth-user';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { ImageUploadInterceptor } from '../photos/image-upload.interceptor';
+import { PhotoUploadLimit } from '../photos/photo-upload-limit';
 import { OpeningService } from './opening.service';
 import { BroodCountsService } from './brood-counts.service';
 import { OpeningDto } from './dto/opening.dto';
@@ -39,6 +40,7 @@ export class BroodController {
   @Post('opening/photos')
   @ProjectRoles('owner')
   @ProjectFrom('sac')
+  @PhotoUploadLimit()
   @UseInterceptors(ImageUploadInterceptor)
   photo(
     @CurrentProject() a: ProjectAccess,

@@ -7,7 +7,7 @@ import type { ProjectAccess } from '../projects/project-access.service';
 import { CareLogService } from './care-log.service';
 import { CareLogEntryDto } from './dto/care-log-entry.dto';
 
-/** Partners read the log; the owner and caretakers write it (PRODUCT.md: caretakers add log entries). */
+/** Partners read the log; the owner and caretakers write it (docs/product.md, Roles: caretakers add log entries). */
 @Controller('sacs/:id/log')
 export class CareLogController {
   constructor(private readonly log: CareLogService) {}

@@ -122,6 +122,6 @@ function describeChange(sac: Sac, wasPulled: boolean, pulledChanged: boolean, ou
   if (outcomeChanged && sac.outcome === 'failed') return { kind: 'sac.failed', summary: `Sac laid ${sac.layDate} marked failed (${sac.failureReason}).` };
   if (pulledChanged && sac.pulledAt) return { kind: 'sac.pulled', summary: `Sac laid ${sac.layDate} pulled on ${sac.pulledOn} and moved to the incubator.` };
   if (pulledChanged && wasPulled) return { kind: 'sac.updated', summary: `Sac laid ${sac.layDate}: pull removed, it is with the mother.` };
-  if (outcomeChanged && sac.outcome === 'hatched') return { kind: 'sac.updated', summary: `Sac laid ${sac.layDate} marked hatched.` };
+  if (outcomeChanged && sac.outcome === 'emerged') return { kind: 'sac.updated', summary: `Sac laid ${sac.layDate}: the young have emerged.` };
   return { kind: 'sac.updated', summary: `Sac laid ${sac.layDate} updated.` };
 }

@@ -203,7 +203,7 @@ export const seedAccounts: FeatureSeeder = async (ctx) => {
     layDate: laid,
     pulledAt: eveningOf(addDays(laid, 28)),
     pulledOn: addDays(laid, 28),
-    outcome: 'hatched',
+    outcome: 'emerged',
     broodStage: 'second-instar',
     recordedBy: mira,
     createdAt: eveningOf(laid),

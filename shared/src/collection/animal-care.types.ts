@@ -1,5 +1,5 @@
 import type { BroodStage } from '../breeding/brood-stage.js';
-import type { PairingOutcome, SacOutcome } from '../breeding/pairing.types.js';
+import type { PairingOutcome, SacFate } from '../breeding/pairing.types.js';
 import type { DerivedProjectStage } from '../breeding/project-stage.js';
 
 /** ISO 8601 calendar date, `YYYY-MM-DD`. */
@@ -49,5 +49,5 @@ export interface AnimalBreedingRow {
   partnerLabel: string;
   stage: DerivedProjectStage;
   pairings: { on: DateString; outcome: PairingOutcome }[];
-  sacs: { id: string | null; layDate: DateString; pulledOn: DateString | null; outcome: SacOutcome; broodStage: BroodStage | null }[];
+  sacs: { id: string | null; layDate: DateString; pulledOn: DateString | null; fate: SacFate; broodStage: BroodStage | null }[];
 }

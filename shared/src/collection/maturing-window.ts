@@ -9,7 +9,12 @@ dayjs.extend(utc);
  * expect the last molt of a subadult male some 3 to 8 months after the one before; slow New World
  * terrestrials sit at the long end, fast Old World species at the short end. An editable default.
  */
-export const PENULTIMATE_INTERVAL_MONTHS = Object.freeze({ min: 3, max: 8 });
+export interface MonthInterval {
+  min: number;
+  max: number;
+}
+
+export const PENULTIMATE_INTERVAL_MONTHS: Readonly<MonthInterval> = Object.freeze({ min: 3, max: 8 });
 
 /**
  * - `not-yet`: before the window opens.
@@ -32,7 +37,7 @@ export interface MaturingWindow {
 const addMonths = (date: CalendarDate, months: number): CalendarDate => dayjs.utc(date).add(months, 'month').format('YYYY-MM-DD');
 
 /** When a penultimate male's maturing molt is expected, counted from his last molt. */
-export function maturingWindow(lastMoltOn: CalendarDate, today: CalendarDate, interval = PENULTIMATE_INTERVAL_MONTHS): MaturingWindow {
+export function maturingWindow(lastMoltOn: CalendarDate, today: CalendarDate, interval: Readonly<MonthInterval> = PENULTIMATE_INTERVAL_MONTHS): MaturingWindow {
   assertCalendarDate(lastMoltOn, 'last molt date');
   assertCalendarDate(today, 'date today');
   const from = addMonths(lastMoltOn, interval.min);

@@ -1,6 +1,7 @@
 import type { EndedEarlyReason, ProjectStage } from '../breeding/project-stage.js';
 import type { MaleClockState } from '../collection/male-clock.js';
-import type { PairingOutcome, SacOutcome } from '../breeding/pairing.types.js';
+import type { PairingOutcome, SacFate } from '../breeding/pairing.types.js';
+import type { SacOutcomeState } from '../sacs/sacs.types.js';
 
 /**
  * The interface's words for states several screens show, kept here once so the
@@ -26,6 +27,8 @@ export const ENDED_EARLY_LABELS: Record<EndedEarlyReason, string> = {
   'male-died': 'the male died before pairing',
 };
 
+export const SAC_OUTCOME_LABELS: Record<SacOutcomeState, string> = { 'in-progress': 'In progress', emerged: 'Young emerged', failed: 'Failed' };
+
 /** Male clock states in our own words, with the advice each one carries. */
 export const MALE_CLOCK_LABELS: Record<MaleClockState, { label: string; hint: string }> = {
   fresh: { label: 'Just matured', hint: 'Give him time to build his first sperm web before pairing.' },
@@ -42,5 +45,5 @@ export const PAIRING_OUTCOME_LABELS: Record<PairingOutcome, string> = {
   'male-lost': 'Male lost',
 };
 
-/** How a sac ended up, as the stage rules see it. */
-export const SAC_FACT_OUTCOME_LABELS: Record<SacOutcome, string> = { developing: 'Developing', failed: 'Failed', eaten: 'Eaten by the mother' };
+/** How a sac fares, as the stage rules see it. */
+export const SAC_FATE_LABELS: Record<SacFate, string> = { developing: 'Developing', failed: 'Failed', eaten: 'Eaten by the mother' };

@@ -3,7 +3,8 @@ import { useMediaQuery } from '@mantine/hooks';
 import { notifications } from '@mantine/notifications';
 import type { QueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
-import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
+import { formatMoney } from '@broodsilk/shared';
 import { paths } from '@/config/paths';
 import { formatDate } from '@/lib/dates';
 import { animalQueries, useAnimal } from '@/features/collection/api/animals';
@@ -17,7 +18,7 @@ import { ReadinessPanel } from '@/features/collection/components/readiness-panel
 import { LifeActions } from '@/features/collection/components/life-actions';
 import { FeedingLog } from '@/features/collection/components/feeding-log';
 import { BreedingRecord } from '@/features/collection/components/breeding-record';
-import { CUSTODY_LABELS, MATURITY_LABELS, SEX_LABELS, SEX_SIGNS, STATUS_LABELS, formatMoney } from '@/features/collection/utils/animal-view';
+import { CUSTODY_LABELS, MATURITY_LABELS, SEX_LABELS, SEX_SIGNS, STATUS_LABELS } from '@/features/collection/utils/animal-view';
 import { speciesQueries, useSpecies } from '@/features/species/api/species';
 import { CautionNotice } from '@/features/species/components/caution-notice';
 import { SpeciesPicker } from '@/features/species/components/species-picker';

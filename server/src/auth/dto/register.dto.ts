@@ -1,7 +1,8 @@
-import { IsEmail, IsNotEmpty, IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
+import { IsEmail, IsNotEmpty, IsString, MaxLength, MinLength } from 'class-validator';
 import { Transform } from 'class-transformer';
 import { MIN_PASSWORD_LENGTH, type RegisterRequest } from '@broodsilk/shared';
 import { IsTimeZone } from '../../common/validators/is-time-zone.validator';
+import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
 export class RegisterDto implements RegisterRequest {
   @Transform(({ value }) => (typeof value === 'string' ? value.trim().toLowerCase() : value))
@@ -20,7 +21,7 @@ export class RegisterDto implements RegisterRequest {
   @MaxLength(80)
   displayName!: string;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsTimeZone()
   timeZone?: string;
 }

@@ -5,7 +5,9 @@ import { badRequest } from '../field-errors';
 function flatten(errors: ValidationError[], prefix = ''): FieldError[] {
   return errors.flatMap((e) => {
     const field = prefix ? `${prefix}.${e.property}` : e.property;
-    const own = Object.values(e.constraints ?? {}).map((message) => ({ field, message: humanise(message, field) }));
+    // A null where a value is needed fails every check on the field; saying so once is enough.
+    const constraints = e.constraints?.isDefined ? { isDefined: e.constraints.isDefined } : (e.constraints ?? {});
+    const own = Object.values(constraints).map((message) => ({ field, message: humanise(message, field) }));
     return [...own, ...flatten(e.children ?? [], field)];
   });
 }

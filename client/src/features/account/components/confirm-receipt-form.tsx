@@ -1,11 +1,10 @@
 import { Alert, Button, Group, NumberInput, Stack, Text } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import type { LedgerEntryResponse } from '@broodsilk/shared';
+import { formatMoney, type LedgerEntryResponse } from '@broodsilk/shared';
 import { formatDate } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useConfirmEntry } from '../api/entries';
-import { formatMoney } from '../utils/money';
 import { FormActions } from '@/components/ui/form-actions';
 
 interface Values {

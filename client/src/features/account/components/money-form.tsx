@@ -1,10 +1,9 @@
 import { Alert, Button, Group, NativeSelect, NumberInput, Stack, TextInput } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import type { PartyRef } from '@broodsilk/shared';
+import { minorDigits, minorToMajor, parseMoney, toMinor, type PartyRef } from '@broodsilk/shared';
 import { useCreateEntry } from '../api/entries';
 import { applyEntryErrors } from '../utils/entry-errors';
-import { minorDigits, toMajor, toMinor } from '../utils/money';
 
 interface Values {
   fromMemberId: string;
@@ -36,14 +35,17 @@ export function MoneyForm({ projectId, parties, currency, today, fromMemberId, t
     initialValues: {
       fromMemberId: fromMemberId ?? '',
       toMemberId: toMemberId ?? '',
-      amount: amountMinor ? toMajor(amountMinor, currency) : '',
+      amount: amountMinor ? minorToMajor(amountMinor, currency) : '',
       date: today,
       note: '',
     },
     validate: {
       fromMemberId: (v) => (v ? null : 'Who paid?'),
       toMemberId: (v, all) => (!v ? 'Who was paid?' : v === all.fromMemberId ? 'The payer and the payee must be different parties.' : null),
-      amount: (v) => (toMinor(v, currency) > 0 ? null : 'The amount must be above 0.'),
+      amount: (v) => {
+        const amount = parseMoney(v, currency);
+        return !amount.ok ? amount.message : amount.minor > 0 ? null : 'The amount must be above 0.';
+      },
       date: (v) => (/^\d{4}-\d{2}-\d{2}$/.test(v) ? null : 'Give the date as YYYY-MM-DD.'),
     },
   });

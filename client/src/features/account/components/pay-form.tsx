@@ -3,7 +3,7 @@ import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateCheckout } from '../api/settlements';
-import { formatMoney, minorDigits, toMajor, toMinor } from '../utils/money';
+import { formatMoney, minorDigits, minorToMajor, parseMoney, toMinor } from '@broodsilk/shared';
 import { FormActions } from '@/components/ui/form-actions';
 
 interface Props {
@@ -23,12 +23,13 @@ export function PayForm({ projectId, toMemberId, toName, owedMinor, currency, go
   const digits = minorDigits(currency);
   const form = useForm<{ amount: number | string }>({
     mode: 'uncontrolled',
-    initialValues: { amount: toMajor(owedMinor, currency) },
+    initialValues: { amount: minorToMajor(owedMinor, currency) },
     validate: {
       amount: (v) => {
-        const minor = toMinor(v, currency);
-        if (!(minor > 0)) return 'The amount must be above 0.';
-        return minor > owedMinor ? `You owe ${toName} ${formatMoney(owedMinor, currency)}; the amount cannot be more than that.` : null;
+        const amount = parseMoney(v, currency);
+        if (!amount.ok) return amount.message;
+        if (amount.minor <= 0) return 'The amount must be above 0.';
+        return amount.minor > owedMinor ? `You owe ${toName} ${formatMoney(owedMinor, currency)}; the amount cannot be more than that.` : null;
       },
     },
   });

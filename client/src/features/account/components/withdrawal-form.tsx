@@ -1,12 +1,11 @@
 import { Alert, Button, Group, NativeSelect, NumberInput, Stack, Text, TextInput } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import type { PartyBalanceView, SacSharesView } from '@broodsilk/shared';
+import { minorDigits, parseMoney, toMinor, type PartyBalanceView, type SacSharesView } from '@broodsilk/shared';
 import { formatDate } from '@/lib/dates';
 import { useCreateEntry } from '../api/entries';
 import { applyEntryErrors } from '../utils/entry-errors';
 import { young } from '../utils/labels';
-import { minorDigits, toMinor } from '../utils/money';
 
 interface Values {
   memberId: string;
@@ -45,7 +44,8 @@ export function WithdrawalForm({ projectId, kind, parties, sacs, currency, terms
       sacId: (v) => (withYoung.length > 1 && !v ? 'Several sacs have young in care: which one?' : null),
       price: (v) => {
         if (v === '' || v === null) return sale ? 'What was the total price?' : null;
-        return toMinor(v, currency) >= 0 ? null : 'The price must be 0 or more.';
+        const price = parseMoney(v, currency);
+        return !price.ok ? price.message : price.minor >= 0 ? null : 'The price must be 0 or more.';
       },
     },
   });

@@ -1,7 +1,7 @@
 import { Alert, Anchor, Button, PasswordInput, Stack, Text, TextInput } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import { Link } from 'react-router-dom';
+import { Link } from 'react-router';
 import { applyServerErrors } from '@/lib/form-errors';
 import { paths } from '@/config/paths';
 import { useLogin } from '../api/session';

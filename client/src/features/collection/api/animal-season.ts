@@ -1,7 +1,8 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
 import type { AnimalBreedingRow, AnimalDateRequest, AnimalResponse, CreateFeedingRequest, FeedingResponse } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
-import { animalQueries } from './animals';
+import { queryRoots } from '@/lib/query-keys';
+import { AFTER_ANIMAL_CHANGE, animalQueries } from './animals';
 
 /** Under the animal's key, so invalidating the animal refreshes its feedings and breeding record too. */
 export const seasonQueries = {
@@ -26,11 +27,9 @@ export function useAnimalBreeding(animalId: string) {
 }
 
 export function useAddFeeding(animalId: string) {
-  const qc = useQueryClient();
   return useMutation({
     mutationFn: (body: CreateFeedingRequest) => api.post<FeedingResponse>(`/animals/${animalId}/feedings`, body),
-    meta: { handlesErrors: true },
-    onSuccess: () => qc.invalidateQueries({ queryKey: seasonQueries.feedings(animalId).queryKey }),
+    meta: { handlesErrors: true, invalidates: [seasonQueries.feedings(animalId).queryKey] },
   });
 }
 
@@ -38,18 +37,9 @@ export function useAddFeeding(animalId: string) {
 export type AnimalStep = 'premolt' | 'premolt/end' | 'sperm-web' | 'return' | 'death';
 
 export function useAnimalStep(animalId: string, step: AnimalStep) {
-  const qc = useQueryClient();
   return useMutation({
     mutationFn: (body: AnimalDateRequest) => api.post<AnimalResponse>(`/animals/${animalId}/${step}`, body),
-    meta: { handlesErrors: true },
     // Status, readiness and the males list all move; projects show the event on their timelines.
-    onSuccess: async () => {
-      await Promise.all([
-        qc.invalidateQueries({ queryKey: animalQueries.detail(animalId).queryKey }),
-        qc.invalidateQueries({ queryKey: animalQueries.lists() }),
-        qc.invalidateQueries({ queryKey: animalQueries.males().queryKey }),
-        qc.invalidateQueries({ queryKey: ['projects'] }),
-      ]);
-    },
+    meta: { handlesErrors: true, invalidates: [animalQueries.detail(animalId).queryKey, ...AFTER_ANIMAL_CHANGE, queryRoots.projects] },
   });
 }

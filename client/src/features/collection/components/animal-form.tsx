@@ -7,6 +7,7 @@ import {
   ANIMAL_STATUSES,
   CUSTODIES,
   MATURITIES,
+  minorDigits,
   OWNER_KINDS,
   type AnimalResponse,
   type AnimalSex,
@@ -18,7 +19,7 @@ import {
 } from '@broodsilk/shared';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateAnimal, useUpdateAnimal } from '../api/animals';
-import { CUSTODY_LABELS, MATURITY_LABELS, OWNER_LABELS, SEX_LABELS, STATUS_LABELS, currencyDigits } from '../utils/animal-view';
+import { CUSTODY_LABELS, MATURITY_LABELS, OWNER_LABELS, SEX_LABELS, STATUS_LABELS } from '../utils/animal-view';
 
 /** What the form hands to the species picker the app layer plugs in. */
 export interface SpeciesFieldProps {
@@ -55,7 +56,7 @@ export interface AnimalFormValues {
 const MATURE_MALE_NEEDS_DATE = 'A mature male needs the date of his maturing molt: his male clock counts from it.';
 
 function initialValues(a?: AnimalResponse): AnimalFormValues {
-  const digits = a?.priceCurrency ? currencyDigits(a.priceCurrency) : 2;
+  const digits = a?.priceCurrency ? minorDigits(a.priceCurrency) : 2;
   return {
     speciesId: a?.species.id ?? null,
     label: a?.label ?? '',
@@ -95,7 +96,7 @@ export function toAnimalRequest(v: AnimalFormValues): CreateAnimalRequest {
     maturedOn: v.maturity === 'mature' ? v.maturedOn || null : null,
     acquiredOn: v.acquiredOn || null,
     acquiredFrom: text(v.acquiredFrom),
-    pricePaidMinor: price === null || Number.isNaN(price) ? null : Math.round(price * 10 ** currencyDigits(currency ?? 'EUR')),
+    pricePaidMinor: price === null || Number.isNaN(price) ? null : Math.round(price * 10 ** minorDigits(currency ?? 'EUR')),
     priceCurrency: currency,
     ownerKind: v.ownerKind,
     // An edit of a keeper-owned animal may leave the e-mail empty: the owner stays as recorded.

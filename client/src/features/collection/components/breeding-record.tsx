@@ -1,6 +1,6 @@
 import { Anchor, Badge, Group, Stack, Text } from '@mantine/core';
-import { Link } from 'react-router-dom';
-import { PAIRING_OUTCOME_LABELS, PROJECT_STAGE_LABELS, SAC_FACT_OUTCOME_LABELS, broodStageLabel } from '@broodsilk/shared';
+import { Link } from 'react-router';
+import { PAIRING_OUTCOME_LABELS, PROJECT_STAGE_LABELS, SAC_FATE_LABELS, broodStageLabel } from '@broodsilk/shared';
 import { SectionCard } from '@/components/ui/section-card';
 import { paths } from '@/config/paths';
 import { formatDate } from '@/lib/dates';
@@ -39,8 +39,8 @@ export function BreedingRecord({ animalId }: { animalId: string }) {
               {r.sacs.map((s, i) => (
                 <Text key={s.id ?? `s${i}`} size="sm">
                   Sac laid {formatDate(s.layDate)}
-                  {s.pulledOn ? `, pulled ${formatDate(s.pulledOn)}` : ', with the mother'}: {SAC_FACT_OUTCOME_LABELS[s.outcome]}
-                  {s.outcome === 'developing' && s.broodStage ? ` (${broodStageLabel(s.broodStage)})` : ''}
+                  {s.pulledOn ? `, pulled ${formatDate(s.pulledOn)}` : ', with the mother'}: {SAC_FATE_LABELS[s.fate]}
+                  {s.fate === 'developing' && s.broodStage ? ` (${broodStageLabel(s.broodStage)})` : ''}
                 </Text>
               ))}
             </Stack>

@@ -1,6 +1,6 @@
 import { Alert, Button, Stack, Text } from '@mantine/core';
 import { useState } from 'react';
-import { Link } from 'react-router-dom';
+import { Link } from 'react-router';
 import type { AcceptInvitationResponse, InvitationPreview } from '@broodsilk/shared';
 import { isApiError } from '@/lib/api-error';
 import { useAcceptInvitation } from '../api/invitation';

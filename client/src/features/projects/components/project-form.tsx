@@ -17,9 +17,18 @@ import {
 } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import { DEFAULT_HAND_OVER_STAGE, type AnimalSummary, type BroodStage, type FailureClause, type InvitableRole, type ShippingPayer } from '@broodsilk/shared';
+import {
+  DEFAULT_HAND_OVER_STAGE,
+  toMinor,
+  type AnimalSummary,
+  type BroodStage,
+  type FailureClause,
+  type InvitableRole,
+  type ShippingPayer,
+} from '@broodsilk/shared';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateProject, type NewProjectResult } from '../hooks/use-create-project';
+import { priceError } from '../utils/price';
 import { CURRENCIES, failureOptions, handOverOptions, shippingOptions } from './propose-terms-form';
 import { FormActions } from '@/components/ui/form-actions';
 
@@ -105,6 +114,7 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
         },
       },
       currency: (v, values) => (!values.withTerms || /^[A-Z]{3}$/.test(v) ? null : 'A three-letter code, e.g. EUR.'),
+      price: (v, values) => (values.withTerms ? priceError(v, values.currency) : null),
     },
   });
   form.watch('parties', ({ value }) => setPartyCount(value.length));
@@ -127,7 +137,7 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
         terms: v.withTerms
           ? {
               ownerLine: { weight: Number(v.ownerWeight), fixedCount: Number(v.ownerFixedCount) || 0, pickOrder: Number(v.ownerPickOrder) },
-              pricePerSpiderlingMinor: Math.round(Number(v.price) * 100),
+              pricePerSpiderlingMinor: toMinor(v.price, v.currency),
               currency: v.currency,
               failureClause: v.failureClause,
               handOverStage: v.handOverStage,

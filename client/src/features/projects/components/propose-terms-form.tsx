@@ -7,7 +7,9 @@ import {
   BROOD_STAGE_LABEL_SETS,
   DEFAULT_HAND_OVER_STAGE,
   FAILURE_CLAUSES,
+  minorToMajor,
   SHIPPING_PAYERS,
+  toMinor,
   type BroodStage,
   type FailureClause,
   type ProjectMemberResponse,
@@ -17,6 +19,7 @@ import {
 import { applyServerErrors } from '@/lib/form-errors';
 import { useProposeTerms } from '../api/terms';
 import { FAILURE_CLAUSE_LABELS, SHIPPING_LABELS } from '../utils/labels';
+import { priceError } from '../utils/price';
 import { FormActions } from '@/components/ui/form-actions';
 
 export const CURRENCIES = ['EUR', 'USD', 'GBP', 'PLN', 'CHF', 'CZK', 'SEK', 'CAD', 'AUD'];
@@ -47,7 +50,7 @@ export function ProposeTermsForm({ projectId, members, base }: { projectId: stri
         const prev = base?.lines.find((l) => l.memberId === m.id);
         return { memberId: m.id, name: m.name, weight: prev?.weight ?? 1, fixedCount: prev?.fixedCount ?? 0, pickOrder: prev?.pickOrder ?? i + 1 };
       }),
-      price: base ? base.pricePerSpiderlingMinor / 100 : 0,
+      price: base ? minorToMajor(base.pricePerSpiderlingMinor, base.currency) : 0,
       currency: base?.currency ?? 'EUR',
       failureClause: base?.failureClause ?? 'nothing-owed',
       handOverStage: base?.handOverStage ?? DEFAULT_HAND_OVER_STAGE,
@@ -55,7 +58,7 @@ export function ProposeTermsForm({ projectId, members, base }: { projectId: stri
       note: '',
     },
     validate: {
-      price: (v) => (Number(v) < 0 ? 'The price cannot be negative.' : null),
+      price: (v, values) => priceError(v, values.currency),
       currency: (v) => (/^[A-Z]{3}$/.test(v) ? null : 'Use a three-letter currency code, e.g. EUR.'),
     },
   });
@@ -65,7 +68,7 @@ export function ProposeTermsForm({ projectId, members, base }: { projectId: stri
     try {
       await propose.mutateAsync({
         lines: v.lines.map((l) => ({ memberId: l.memberId, weight: Number(l.weight), fixedCount: Number(l.fixedCount) || 0, pickOrder: Number(l.pickOrder) })),
-        pricePerSpiderlingMinor: Math.round(Number(v.price) * 100),
+        pricePerSpiderlingMinor: toMinor(v.price, v.currency),
         currency: v.currency,
         failureClause: v.failureClause,
         handOverStage: v.handOverStage,

@@ -2,7 +2,7 @@ import { Alert, Image, NumberInput, SimpleGrid, Stack, Table, Text, Textarea } f
 import { Dropzone, IMAGE_MIME_TYPE } from '@mantine/dropzone';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import type { OpeningResponse } from '@broodsilk/shared';
+import type { OpeningResponse, SacResponse } from '@broodsilk/shared';
 import { formatInstant } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
 import { isApiError } from '@/lib/api-error';
@@ -85,8 +85,9 @@ function OpeningView({ opening, timeZone, sacId, canEdit }: { opening: OpeningRe
 }
 
 /** The opening of a sac: what was found, once; before that, the form to record it. */
-export function OpeningPanel({ sacId, timeZone, canEdit }: { sacId: string; timeZone: string; canEdit: boolean }) {
-  const opening = useOpening(sacId);
+export function OpeningPanel({ sac, timeZone, canEdit }: { sac: Pick<SacResponse, 'id' | 'opened'>; timeZone: string; canEdit: boolean }) {
+  const sacId = sac.id;
+  const opening = useOpening(sac);
   const record = useRecordOpening(sacId);
   const [message, setMessage] = useState<string | null>(null);
   const form = useForm<Values>({
@@ -99,7 +100,7 @@ export function OpeningPanel({ sacId, timeZone, canEdit }: { sacId: string; time
           : null,
     },
   });
-  if (opening.isPending) return <Text c="dimmed">Loading…</Text>;
+  if (sac.opened && opening.isPending) return <Text c="dimmed">Loading…</Text>;
   if (opening.isError) return <Alert color="clay">{opening.error.message}</Alert>;
   if (opening.data) return <OpeningView opening={opening.data} timeZone={timeZone} sacId={sacId} canEdit={canEdit} />;
   if (!canEdit) return <Text c="dimmed">Not opened yet.</Text>;

@@ -1,0 +1,13 @@
+import type { MikroORM } from '@mikro-orm/postgresql';
+
+/** Rows per table of the public schema (pg-boss keeps its own schema): a refused request must leave these equal. */
+export async function rowCounts(orm: MikroORM): Promise<Record<string, number>> {
+  const conn = orm.em.getConnection();
+  const tables = await conn.execute<{ tablename: string }[]>(
+    "select tablename from pg_tables where schemaname = 'public' and tablename <> 'mikro_orm_migrations' order by tablename",
+  );
+  if (tables.length === 0) return {};
+  const union = tables.map((r) => `select '${r.tablename}' as t, count(*)::int as n from "${r.tablename}"`).join(' union all ');
+  const rows = await conn.execute<{ t: string; n: number }[]>(union);
+  return Object.fromEntries(rows.map((r) => [r.t, r.n]));
+}
