@@ -14,26 +14,37 @@ PGDIR="$(pg_home_for "$ROOT/.data/pg")"
 SECRETS="$ROOT/.data/secrets"
 
 PIDS=()
+OWN_PG=0
 cleanup() {
   trap - INT TERM EXIT
   log "stopping"
   for pid in "${PIDS[@]}"; do kill "$pid" 2>/dev/null || true; done
   wait 2>/dev/null || true
-  pg_stop "$PGDIR"
+  [ "$OWN_PG" = 1 ] && pg_stop "$PGDIR"
 }
 trap cleanup INT TERM EXIT
 
-log "PostgreSQL on 127.0.0.1:$PGPORT (data in $PGDIR)"
-pg_start "$PGDIR" "$PGPORT"
-pg_ensure_db "$PGDIR" "$PGPORT" broodsilk
+# The operator's own DATABASE_URL means a real install: no local PostgreSQL, and never the demo
+# accounts (the seed CLI checks this itself too: src/seed/demo-gate.ts).
+if [ -n "${DATABASE_URL:-}" ]; then
+  OWN_PG=0
+  unset BROODSILK_DEMO
+  log "using the operator's DATABASE_URL; the demo is not seeded"
+else
+  OWN_PG=1
+  log "PostgreSQL on 127.0.0.1:$PGPORT (data in $PGDIR)"
+  pg_start "$PGDIR" "$PGPORT"
+  pg_ensure_db "$PGDIR" "$PGPORT" broodsilk
+  export DATABASE_URL="postgres://app@127.0.0.1:$PGPORT/broodsilk" BROODSILK_DEMO=1
+fi
 
 export NODE_ENV=production
-export DATABASE_URL="postgres://app@127.0.0.1:$PGPORT/broodsilk"
 export JWT_SECRET="${JWT_SECRET:-$(local_secret "$SECRETS/jwt")}"
 export CSRF_SECRET="${CSRF_SECRET:-$(local_secret "$SECRETS/csrf")}"
+export CALENDAR_SECRET="${CALENDAR_SECRET:-$(local_secret "$SECRETS/calendar")}"
 export PORT HOST=127.0.0.1 PUBLIC_URL="${PUBLIC_URL:-http://127.0.0.1:$PORT}"
 service_env usual "$ROOT/.data/s3"
-export STRIPE_SECRET_KEY="${STRIPE_SECRET_KEY:-sk_test_broodsilk_local}" STRIPE_WEBHOOK_SECRET="${STRIPE_WEBHOOK_SECRET:-whsec_broodsilk_local}"
+export STRIPE_SECRET_KEY="${STRIPE_SECRET_KEY:-sk_test_broodsilk_local}" STRIPE_WEBHOOK_SECRET="${STRIPE_WEBHOOK_SECRET:-whsec_$(local_secret "$SECRETS/payment-webhook")}"
 export PAYMENT_WEBHOOK_URL="http://127.0.0.1:$PORT/api/webhooks/payments"
 export CLIENT_DIST="$ROOT/client/dist"
 
@@ -56,5 +67,9 @@ if [ "$DEV" = 1 ]; then
   PIDS+=($!)
   log "dev server with hot reload: http://127.0.0.1:5173"
 fi
-log "Broodsilk: http://127.0.0.1:$PORT   (demo sign-in: keeper@broodsilk.test / broodsilk-demo; Ctrl-C stops)"
+if [ "${BROODSILK_DEMO:-}" = 1 ]; then
+  log "Broodsilk: $PUBLIC_URL   (demo sign-in: keeper@broodsilk.test / broodsilk-demo; Ctrl-C stops)"
+else
+  log "Broodsilk: $PUBLIC_URL   (first administrator: npm run create-admin -w server; see docs/operations.md; Ctrl-C stops)"
+fi
 wait -n "${PIDS[@]}" || true

@@ -8,13 +8,14 @@ import { CSRF } from './common/csrf/csrf.provider';
 import { bodyParsers } from './common/body/body-parsers';
 import { answerMiddlewareErrors } from './common/filters/middleware-errors';
 import { RefuseUnstorableTextPipe } from './common/pipes/refuse-unstorable-text.pipe';
+import { parseTrustProxy } from './config/trust-proxy';
 import type { Csrf } from './common/csrf/csrf';
 
 /** Everything main.ts and the tests must share, so tests exercise the real app. */
 export function configureApp(app: INestApplication): INestApplication {
   const express = app as NestExpressApplication;
   express.useLogger(app.get(Logger));
-  express.set('trust proxy', 'loopback');
+  express.set('trust proxy', parseTrustProxy(process.env.TRUST_PROXY));
   express.disable('x-powered-by');
   app.setGlobalPrefix('api');
   app.use(

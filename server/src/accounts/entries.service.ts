@@ -8,9 +8,9 @@ import { Project } from '../projects/project.entity';
 import { User } from '../users/user.entity';
 import { AccountLock } from './account-lock';
 import { loadAccount } from './account-loader';
-import type { AccountView } from './account-view';
+import { acceptorOf, type AccountView } from './account-view';
 import { toEntryResponses } from './accounts.mapper';
-import { draftEntry, type EntryDraft } from './entry-rules';
+import { assertWithdrawalFits, draftEntry, type EntryDraft } from './entry-rules';
 import { LedgerEntryRow } from './ledger-entry.entity';
 import { describeEntry } from './entry-words';
 import { Clock } from '../common/clock';
@@ -126,13 +126,17 @@ function confirmationDraft(view: AccountView, access: ProjectAccess, userId: str
     }
     return { kind: 'arrival', date, target: row, party: row.party!, arrivedAlive: dto.arrivedAlive, arrivedDead: dto.arrivedDead };
   }
-  if (row.kind === 'money') {
-    assertConfirmer(access, userId, row.toParty!, 'the party who received the payment');
-    if (!view.pending.has(row.id)) throw new ConflictException('This payment already counts; there is nothing to confirm.');
+  if (row.kind === 'money' || row.kind === 'cash-out' || row.kind === 'sale') {
+    const what = row.kind === 'money' ? 'payment' : row.kind;
+    const acceptor = acceptorOf(row, view.data.terms?.pricePerSpiderlingMinor ?? 0);
+    if (!acceptor) throw new ConflictException(`This ${what} already counts; there is nothing to confirm.`);
+    assertConfirmer(access, userId, acceptor, row.kind === 'money' ? 'the party who received the payment' : 'the party whose young these were');
+    if (!view.pending.has(row.id)) throw new ConflictException(`This ${what} already counts; there is nothing to confirm.`);
     if (view.data.rows.some((r) => r.kind === 'correction' && r.target?.id === row.id)) {
-      throw new ConflictException('This payment was reversed by a correction; there is nothing to confirm.');
+      throw new ConflictException(`This ${what} was reversed by a correction; there is nothing to confirm.`);
     }
-    return { kind: 'confirmation', date, target: row, party: row.toParty! };
+    if (row.kind !== 'money') assertWithdrawalFits(view, row);
+    return { kind: 'confirmation', date, target: row, party: acceptor };
   }
-  throw new BadRequestException('Only hand-overs and payments are confirmed.');
+  throw new BadRequestException('Only hand-overs, payments, and cash-outs or sales below the price in the terms are confirmed.');
 }

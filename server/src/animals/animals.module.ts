@@ -21,12 +21,23 @@ import { AnimalPhotosService } from './animal-photos.service';
 import { AnimalPhotosController } from './animal-photos.controller';
 import { AnimalsCsvService } from './animals-csv.service';
 import { AnimalsCsvController } from './animals-csv.controller';
+import { AnimalOwnershipController } from './animal-ownership.controller';
+import { AnimalOwnershipService } from './animal-ownership.service';
 
 @Module({
   imports: [ConfigModule.forFeature(storageConfig), MikroOrmModule.forFeature([Animal, Molt, FeedingEntry]), PhotosModule],
-  controllers: [AnimalsCsvController, AnimalsController, MoltsController, AnimalPhotosController, AnimalLifeController, FeedingsController],
+  controllers: [
+    AnimalsCsvController,
+    AnimalOwnershipController,
+    AnimalsController,
+    MoltsController,
+    AnimalPhotosController,
+    AnimalLifeController,
+    FeedingsController,
+  ],
   providers: [
     AnimalsService,
+    AnimalOwnershipService,
     AnimalsCsvService,
     AnimalUsageRegistry,
     AnimalDepartureRegistry,

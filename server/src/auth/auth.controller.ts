@@ -1,6 +1,5 @@
 import { Body, Controller, Get, HttpCode, Inject, Patch, Post, Req, Res, UseGuards } from '@nestjs/common';
 import { ConfigType } from '@nestjs/config';
-import { ThrottlerGuard } from '@nestjs/throttler';
 import type { Request, Response } from 'express';
 import type { CsrfResponse, LoginResponse, Me } from '@broodsilk/shared';
 import { appConfig } from '../config/app.config';
@@ -14,6 +13,8 @@ import { LoginDto } from './dto/login.dto';
 import { PasswordResetConfirmDto, PasswordResetDto } from './dto/password-reset.dto';
 import { ChangePasswordDto } from './dto/change-password.dto';
 import { clearSessionCookie, startSession } from './session-cookie';
+import { SignInRequestGuard } from './sign-in-request.guard';
+import { SignInAddressGuard } from './sign-in-address.guard';
 import type { AuthUser } from '../common/auth-user';
 
 @Controller('auth')
@@ -25,25 +26,25 @@ export class AuthController {
   ) {}
 
   @Public()
-  @UseGuards(ThrottlerGuard)
+  @UseGuards(SignInAddressGuard, SignInRequestGuard)
   @Post('register')
   async register(@Body() dto: RegisterDto, @Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<LoginResponse> {
     return this.startSession(await this.auth.register(dto), req, res);
   }
 
   @Public()
-  @UseGuards(ThrottlerGuard)
+  @UseGuards(SignInAddressGuard, SignInRequestGuard)
   @HttpCode(200)
   @Post('login')
   async login(@Body() dto: LoginDto, @Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<LoginResponse> {
-    return this.startSession(await this.auth.login(dto), req, res);
+    return this.startSession(await this.auth.login(dto, req.ip ?? 'unknown'), req, res);
   }
 
   @HttpCode(204)
   @Post('logout')
-  async logout(@CurrentUser() user: AuthUser, @Res({ passthrough: true }) res: Response): Promise<void> {
+  async logout(@CurrentUser() user: AuthUser, @Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<void> {
     await this.auth.logout(user.id);
-    clearSessionCookie(res, this.app.secureCookies);
+    clearSessionCookie(req, res, this.app.secureCookies);
   }
 
   @Get('me')
@@ -70,7 +71,7 @@ export class AuthController {
   }
 
   @Public()
-  @UseGuards(ThrottlerGuard)
+  @UseGuards(SignInAddressGuard)
   @HttpCode(202)
   @Post('password-reset')
   async requestReset(@Body() dto: PasswordResetDto): Promise<{ message: string }> {
@@ -79,7 +80,7 @@ export class AuthController {
   }
 
   @Public()
-  @UseGuards(ThrottlerGuard)
+  @UseGuards(SignInAddressGuard)
   @HttpCode(204)
   @Post('password-reset/confirm')
   async confirmReset(@Body() dto: PasswordResetConfirmDto): Promise<void> {

@@ -10,6 +10,8 @@ import { User } from '../users/user.entity';
 import { toMe } from '../users/users.mapper';
 import { dummyPasswordHash, hashPassword, verifyPassword } from './password-hasher';
 import { PasswordResetToken } from './password-reset-token.entity';
+import { SignInLimits } from './sign-in-limits';
+import { revokeFeeds } from '../calendar/feed-token';
 import type { JwtPayload } from '../common/auth-user';
 import type { RegisterDto } from './dto/register.dto';
 import type { LoginDto } from './dto/login.dto';
@@ -34,6 +36,7 @@ export class AuthService {
     private readonly clock: Clock,
     private readonly jwt: JwtService,
     private readonly outbox: MailOutbox,
+    private readonly limits: SignInLimits,
     @Inject(appConfig.KEY) private readonly app: ConfigType<typeof appConfig>,
   ) {}
 
@@ -51,11 +54,17 @@ export class AuthService {
     return this.issue(user);
   }
 
-  async login(dto: LoginDto): Promise<IssuedSession> {
+  /** Checks the password unless the account is locked; wrong ones count towards the lock, known address or not. */
+  async login(dto: LoginDto, ip: string): Promise<IssuedSession> {
+    await this.limits.assertAccountOpen(dto.email, ip);
     const user = await this.em.findOne(User, { email: dto.email }, { populate: ['passwordHash'] });
     // Verify against a dummy hash for unknown e-mails so the answer takes as long either way.
     const ok = await verifyPassword(user?.passwordHash ?? (await dummyPasswordHash()), dto.password);
-    if (!user || !ok) throw new UnauthorizedException('The e-mail or password is not right.');
+    if (!user || !ok) {
+      await this.limits.recordFailure(dto.email);
+      throw new UnauthorizedException('The e-mail or password is not right.');
+    }
+    await this.limits.recordSuccess(dto.email);
     return this.issue(user);
   }
 
@@ -107,6 +116,8 @@ export class AuthService {
       const user = row.user.getEntity();
       user.passwordHash = await hashPassword(password);
       user.tokenVersion += 1;
+      // Whoever took over the account may have copied the feed URL too.
+      await revokeFeeds(em, user.id, this.clock.now());
     });
   }
 

@@ -11,7 +11,7 @@ import { AnimalsService } from '../animals/animals.service';
 import { Sac } from '../sacs/sac.entity';
 import { SAC_POPULATE, SacViewsService } from '../sacs/sac-views.service';
 import { CalendarFeed } from './calendar-feed.entity';
-import { feedToken, hashToken } from './feed-token';
+import { feedToken, hashToken, revokeFeeds } from './feed-token';
 import { maleClockEvents, sacEvents, type FeedEvent } from './feed-events';
 import { Clock } from '../common/clock';
 
@@ -28,13 +28,13 @@ export class CalendarService {
   ) {}
 
   private describe(feed: CalendarFeed): CalendarFeedResponse {
-    const path = `/api/calendar/${feedToken(this.config.jwtSecret, feed.id)}.ics`;
+    const path = `/api/calendar/${feedToken(this.config.calendarSecret, feed.id)}.ics`;
     return { url: `${this.config.publicUrl.replace(/\/$/, '')}${path}`, path, createdAt: feed.createdAt.toISOString() };
   }
 
   private create(em: EntityManager, userId: string): CalendarFeed {
     const feed = em.create(CalendarFeed, { user: em.getReference(User, userId), tokenHash: '' });
-    feed.tokenHash = hashToken(feedToken(this.config.jwtSecret, feed.id));
+    feed.tokenHash = hashToken(feedToken(this.config.calendarSecret, feed.id));
     return feed;
   }
 
@@ -49,7 +49,7 @@ export class CalendarService {
   /** Revokes every live feed of the user and issues a new one, in one transaction. */
   async rotate(viewer: AuthUser): Promise<CalendarFeedResponse> {
     const feed = await this.em.transactional(async (tx) => {
-      await tx.nativeUpdate(CalendarFeed, { user: viewer.id, revokedAt: null }, { revokedAt: this.clock.now() });
+      await revokeFeeds(tx, viewer.id, this.clock.now());
       return this.create(tx, viewer.id);
     });
     return this.describe(feed);

@@ -1,4 +1,4 @@
-import { Body, Controller, Get, HttpCode, Param, Post } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, ParseUUIDPipe, Post } from '@nestjs/common';
 import type { AcceptInvitationResponse, InvitationPreview, InvitationResponse } from '@broodsilk/shared';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Public } from '../common/decorators/public.decorator';
@@ -21,6 +21,17 @@ export class ProjectInvitationsController {
   @PerUserLimit({ what: 'invitations', limit: INVITATIONS_PER_HOUR, windowMinutes: 60 })
   create(@CurrentUser() user: AuthUser, @CurrentProject() access: ProjectAccess, @Body() dto: CreateInvitationDto): Promise<InvitationResponse> {
     return this.invitations.create(user, access, dto);
+  }
+
+  @Post(':invitationId/approve')
+  @HttpCode(200)
+  @ProjectRoles('owner')
+  approve(
+    @CurrentUser() user: AuthUser,
+    @CurrentProject() access: ProjectAccess,
+    @Param('invitationId', ParseUUIDPipe) invitationId: string,
+  ): Promise<AcceptInvitationResponse> {
+    return this.invitations.approveClaim(user, access, invitationId);
   }
 }
 

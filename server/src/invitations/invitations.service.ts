@@ -108,38 +108,79 @@ export class InvitationsService {
     return toInvitationPreview(await this.byToken(token, this.em), this.clock.now());
   }
 
-  /** Joins the signed-in user to the project with the invitation's role; the link then stops working. */
+  /**
+   * Joins the signed-in user to the project with the invitation's role; the link then stops
+   * working. A link is a bearer secret that may be forwarded or intercepted, so an account with
+   * another address than the invited one only asks to join, and the owner approves it.
+   */
   async accept(viewer: AuthUser, token: string): Promise<AcceptInvitationResponse> {
     return this.em.transactional(async (tx) => {
       const inv = await this.byToken(token, tx, true);
       const problem = invitationProblem(inv, this.clock.now());
       if (problem) throw new GoneException(problem);
-      const projectId = inv.project.id;
-      if (await tx.count(ProjectMember, { project: projectId, user: viewer.id })) {
-        throw new ConflictException({ message: 'You are already a member of this project.' });
-      }
       const user = await tx.findOneOrFail(User, viewer.id);
-      let member: ProjectMember;
-      if (inv.member) {
-        if (inv.member.user) throw new ConflictException({ message: 'This party of the project is already linked to an account.' });
-        member = inv.member;
-        member.user = user;
-        member.role = inv.role;
-      } else {
-        member = tx.create(ProjectMember, { project: projectId, user, role: inv.role, name: user.displayName, email: user.email });
-      }
-      inv.acceptedAt = this.clock.now();
-      inv.acceptedBy = user;
+      if (user.email.toLowerCase() === inv.email) return this.join(tx, inv, user);
+      await this.assertNotMember(tx, inv, user);
+      inv.claimedBy = user;
+      inv.claimedAt = this.clock.now();
       this.activity.record(tx, {
-        projectId,
+        projectId: inv.project.id,
         actorId: viewer.id,
-        kind: 'member.joined',
-        subjectType: 'member',
-        subjectId: member.id,
-        summary: `${user.displayName} joined as ${inv.role}.`,
-        data: { role: inv.role, invitationId: inv.id },
+        kind: 'invitation.claimed',
+        subjectType: 'invitation',
+        subjectId: inv.id,
+        summary: `${user.displayName} (${user.email}) opened the invitation sent to ${inv.email} and waits for the owner's approval.`,
+        data: { invitationId: inv.id, email: inv.email, claimedByEmail: user.email },
       });
-      return { projectId, role: inv.role };
+      return { projectId: inv.project.id, role: inv.role, status: 'awaiting-owner' as const };
     });
+  }
+
+  /** The owner lets the account that opened the invitation from another address join. */
+  async approveClaim(viewer: AuthUser, access: ProjectAccess, invitationId: string): Promise<AcceptInvitationResponse> {
+    return this.em.transactional(async (tx) => {
+      const inv = await tx.findOne(
+        Invitation,
+        { id: invitationId, project: access.project.id },
+        { populate: ['project', 'member', 'claimedBy'], lockMode: LockMode.PESSIMISTIC_WRITE },
+      );
+      if (!inv) throw new NotFoundException('This project has no such invitation.');
+      const problem = invitationProblem(inv, this.clock.now());
+      if (problem) throw new GoneException(problem);
+      if (!inv.claimedBy) throw new ConflictException({ message: 'Nobody has asked to join with this invitation yet.' });
+      return this.join(tx, inv, inv.claimedBy, viewer.id);
+    });
+  }
+
+  private async assertNotMember(tx: EntityManager, inv: Invitation, user: User): Promise<void> {
+    if (await tx.count(ProjectMember, { project: inv.project.id, user: user.id })) {
+      throw new ConflictException({ message: 'You are already a member of this project.' });
+    }
+  }
+
+  private async join(tx: EntityManager, inv: Invitation, user: User, actorId = user.id): Promise<AcceptInvitationResponse> {
+    await this.assertNotMember(tx, inv, user);
+    const projectId = inv.project.id;
+    let member: ProjectMember;
+    if (inv.member) {
+      if (inv.member.user) throw new ConflictException({ message: 'This party of the project is already linked to an account.' });
+      member = inv.member;
+      member.user = user;
+      member.role = inv.role;
+    } else {
+      member = tx.create(ProjectMember, { project: projectId, user, role: inv.role, name: user.displayName, email: user.email });
+    }
+    inv.acceptedAt = this.clock.now();
+    inv.acceptedBy = user;
+    this.activity.record(tx, {
+      projectId,
+      actorId,
+      kind: 'member.joined',
+      subjectType: 'member',
+      subjectId: member.id,
+      summary: `${user.displayName} joined as ${inv.role}.`,
+      data: { role: inv.role, invitationId: inv.id },
+    });
+    return { projectId, role: inv.role, status: 'joined' };
   }
 }

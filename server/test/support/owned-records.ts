@@ -58,6 +58,7 @@ export async function ownedRecords(t: TestApp, owner: SignedIn): Promise<Record<
 /** The kind of record each `:param` names, by the path segment before it. */
 const KIND: Record<string, string> = {
   animals: 'animal',
+  'ownership-requests': 'animal',
   molts: 'molt',
   photos: 'photo',
   projects: 'project',

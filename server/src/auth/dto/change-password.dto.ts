@@ -1,13 +1,12 @@
-import { IsString, MaxLength, MinLength } from 'class-validator';
-import { MIN_PASSWORD_LENGTH, type ChangePasswordRequest } from '@broodsilk/shared';
+import { IsString, MaxLength } from 'class-validator';
+import { IsAcceptablePassword } from '../../auth/dto/is-acceptable-password.validator';
+import { type ChangePasswordRequest } from '@broodsilk/shared';
 
 export class ChangePasswordDto implements ChangePasswordRequest {
   @IsString()
   @MaxLength(200)
   currentPassword!: string;
 
-  @IsString()
-  @MinLength(MIN_PASSWORD_LENGTH, { message: `Use a password of at least ${MIN_PASSWORD_LENGTH} characters.` })
-  @MaxLength(200)
+  @IsAcceptablePassword()
   newPassword!: string;
 }

@@ -1,6 +1,6 @@
 import { applyDecorators, HttpException, HttpStatus, Injectable, SetMetadata, UseGuards, type CanActivate, type ExecutionContext } from '@nestjs/common';
 import { Reflector } from '@nestjs/core';
-import { ThrottlerStorageService } from '@nestjs/throttler';
+import { RateLimiterMemory, RateLimiterRes } from 'rate-limiter-flexible';
 
 export interface PerUserLimitOptions {
   /** Names the bucket and, in the refusal, what was limited: "statement e-mails". */
@@ -10,8 +10,14 @@ export interface PerUserLimitOptions {
 }
 
 const LIMIT = Symbol('per-user-limit');
-/** One counter store for the process (its sweep timer is unref'd); the product runs as one process. */
-const storage = new ThrottlerStorageService();
+/** One in-process counter per limited kind of work (rate-limiter-flexible's memory store). */
+const limiters = new Map<string, RateLimiterMemory>();
+const limiterFor = (o: PerUserLimitOptions) => {
+  const key = `${o.what}:${o.limit}:${o.windowMinutes}`;
+  let limiter = limiters.get(key);
+  if (!limiter) limiters.set(key, (limiter = new RateLimiterMemory({ keyPrefix: o.what, points: o.limit, duration: o.windowMinutes * 60 })));
+  return limiter;
+};
 
 @Injectable()
 export class PerUserLimitGuard implements CanActivate {
@@ -21,11 +27,15 @@ export class PerUserLimitGuard implements CanActivate {
     const options = this.reflector.get<PerUserLimitOptions | undefined>(LIMIT, ctx.getHandler());
     const userId = (ctx.switchToHttp().getRequest<{ user?: { id: string } }>().user ?? {}).id;
     if (!options || !userId) return true;
-    const ttl = options.windowMinutes * 60_000;
-    // Without a block duration the storage counts a sliding window: blocked while `limit` hits are younger than the window.
-    const { isBlocked, timeToBlockExpire } = await storage.increment(`${options.what}:${userId}`, ttl, options.limit, 0, 'per-user');
-    if (!isBlocked) return true;
-    const minutes = Math.max(1, Math.ceil(timeToBlockExpire / 60));
+    let refusal: RateLimiterRes;
+    try {
+      await limiterFor(options).consume(userId);
+      return true;
+    } catch (e) {
+      if (!(e instanceof RateLimiterRes)) throw e;
+      refusal = e;
+    }
+    const minutes = Math.max(1, Math.ceil(refusal.msBeforeNext / 60_000));
     throw new HttpException(
       `You have reached the limit of ${options.limit} ${options.what} per ${options.windowMinutes} minutes. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}.`,
       HttpStatus.TOO_MANY_REQUESTS,

@@ -49,6 +49,7 @@ function ConfirmHandOver({ projectId, entry }: { projectId: string; entry: Ledge
   );
 }
 
+/** A payment to the viewer, or a cash-out or sale of their young below the price in the terms: one press accepts it. */
 function ConfirmPayment({ projectId, entry }: { projectId: string; entry: LedgerEntryResponse }) {
   const confirm = useConfirmEntry(projectId);
   return (
@@ -60,14 +61,19 @@ function ConfirmPayment({ projectId, entry }: { projectId: string; entry: Ledger
       )}
       <Group>
         <Button loading={confirm.isPending} onClick={() => confirm.mutate({ entryId: entry.id, body: {} })}>
-          Confirm the payment arrived
+          {entry.kind === 'money' ? 'Confirm the payment arrived' : `Accept this ${entry.kind}`}
         </Button>
       </Group>
     </Stack>
   );
 }
 
-/** Entries waiting for the viewer's confirmation: hand-overs to them, payments to or from them. */
+const belowTermsPrice = (e: LedgerEntryResponse): string => {
+  if (e.kind === 'sale' && e.priceMinor !== null && e.currency) return `for ${formatMoney(e.priceMinor, e.currency)} in all`;
+  return e.pricePerSpiderlingMinor ? 'at a lower price per spiderling' : 'for nothing';
+};
+
+/** Entries waiting for the viewer's acceptance: hand-overs and payments to them, cash-outs and sales of their young below the terms' price. */
 export function AwaitingMe({ projectId, entries }: { projectId: string; entries: LedgerEntryResponse[] }) {
   return (
     <Stack gap="sm" data-testid="awaiting-me">
@@ -76,7 +82,9 @@ export function AwaitingMe({ projectId, entries }: { projectId: string; entries:
           <Text size="sm" fw={600} className="tone-due">
             {e.kind === 'hand-over'
               ? `#${e.seq}: ${e.count} spiderlings handed over to you on ${formatDate(e.date)}${e.method === 'shipment' ? ' by shipment' : ''}`
-              : `#${e.seq}: ${e.from?.name ?? '?'} paid ${e.to?.name ?? '?'} ${e.amountMinor !== null && e.currency ? formatMoney(e.amountMinor, e.currency) : ''} on ${formatDate(e.date)}`}
+              : e.kind === 'cash-out' || e.kind === 'sale'
+                ? `#${e.seq}: ${e.kind} of ${e.count} of your spiderlings on ${formatDate(e.date)} ${belowTermsPrice(e)}, below the price in the terms`
+                : `#${e.seq}: ${e.from?.name ?? '?'} paid ${e.to?.name ?? '?'} ${e.amountMinor !== null && e.currency ? formatMoney(e.amountMinor, e.currency) : ''} on ${formatDate(e.date)}`}
           </Text>
           {e.kind === 'hand-over' ? <ConfirmHandOver projectId={projectId} entry={e} /> : <ConfirmPayment projectId={projectId} entry={e} />}
         </Stack>
