@@ -30,6 +30,13 @@ const CATALOGUE: Record<string, number> = { 'GET /api/species/:id': 200, 'PATCH 
 /** Bodies that pass validation, so the refusal shown is the ownership check and not a missing field. */
 const VALID_BODY: Record<string, () => object> = {
   'POST /api/animals/:animalId/molts': () => ({ moltedOn: addDays(todayIn('UTC', new Date()), -1) }),
+  'POST /api/animals/:animalId/feedings': () => ({ fedOn: addDays(todayIn('UTC', new Date()), -1), prey: 'cricket', taken: true }),
+  ...Object.fromEntries(
+    ['premolt', 'premolt/end', 'sperm-web', 'return', 'death'].map((step) => [
+      `POST /api/animals/:id/${step}`,
+      () => ({ on: addDays(todayIn('UTC', new Date()), -1) }),
+    ]),
+  ),
 };
 /** The owner's GET answers 404 by design: no opening is recorded for the fixture sac yet. */
 const EMPTY_FOR_OWNER = new Set(['GET /api/sacs/:id/opening']);

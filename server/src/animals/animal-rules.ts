@@ -20,6 +20,8 @@ export interface AnimalState {
 
 const CURRENCIES = new Set(Intl.supportedValuesOf('currency'));
 
+const STATUS_DATE_WORDS = { sold: 'sold', deceased: 'found dead', returned: 'returned to its owner' } as const;
+
 /**
  * Rules across fields, shared by the create and edit routes and the CSV import.
  * `today` is the keeper's calendar date; ISO dates compare correctly as strings.
@@ -50,7 +52,8 @@ export function animalRuleErrors(a: AnimalState, today: string): FieldError[] {
   if (a.custody === 'loan-out' && !a.custodyParty) add('custodyParty', 'Say who holds the animal while it is lent out.');
   if (a.custody === 'with-owner' && a.dueBackOn) add('dueBackOn', 'A due-back date belongs to a loan; set the custody to a loan or clear the date.');
   if (a.status === 'on-loan' && a.custody !== 'loan-out') add('status', 'An animal on loan is lent out: set custody to loan-out and say who holds it.');
-  if ((a.status === 'sold' || a.status === 'deceased') && !a.statusOn)
-    add('statusOn', `Give the date the animal was ${a.status === 'sold' ? 'sold' : 'found dead'}.`);
+  if (a.status === 'returned' && a.custody !== 'loan-in') add('status', 'Only an animal on loan to you can be returned to its owner.');
+  if ((a.status === 'sold' || a.status === 'deceased' || a.status === 'returned') && !a.statusOn)
+    add('statusOn', `Give the date the animal was ${STATUS_DATE_WORDS[a.status]}.`);
   return e;
 }

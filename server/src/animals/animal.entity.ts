@@ -101,6 +101,22 @@ export class Animal extends BaseEntity<'maturity' | 'ownerKind' | 'custody' | 's
   @Property({ type: 'text', nullable: true })
   premoltNote?: string | null;
 
+  /** Premolt flagged by the keeper on this day; a later molt ends it (`premoltStands`), clearing sets null. */
+  @Property({ type: 'date', nullable: true })
+  premoltSince?: string | null;
+
+  /** The last day the keeper cleared a premolt flag. */
+  @Property({ type: 'date', nullable: true })
+  premoltEndedOn?: string | null;
+
+  /** The last day a sperm web was seen (males). */
+  @Property({ type: 'date', nullable: true })
+  spermWebOn?: string | null;
+
+  /** Day a loaned animal went back to its owner; set together with status `returned`. */
+  @Property({ type: 'date', nullable: true })
+  returnedOn?: string | null;
+
   /** Kept in step with the molt records (same transaction) so lists and readiness need no aggregate. */
   @Property({ type: 'date', nullable: true })
   lastMoltOn?: string | null;

@@ -1,6 +1,9 @@
 import {
   femaleReadiness,
   maleClock,
+  maturingWindow,
+  premoltStands,
+  type MaturingWindow,
   type AnimalOwner,
   type AnimalResponse,
   type PhotoRef,
@@ -46,10 +49,22 @@ export function maleClockOf(a: Animal, today: string): MaleClockView | null {
   return { ...clock, maturedOn: a.maturedOn, lifespanMonths: { ...life.value, from: life.from } };
 }
 
+/** The premolt flag while it stands: a molt on or after it has ended it. */
+export function premoltSinceOf(a: Animal): string | null {
+  return premoltStands(a.premoltSince, a.lastMoltOn) ? a.premoltSince! : null;
+}
+
 function readinessOf(a: Animal, today: string): FemaleReadinessView | null {
   if (a.sex !== 'female' || a.maturity !== 'mature') return null;
   const last = a.lastMoltOn && a.lastMoltOn <= today ? a.lastMoltOn : null;
-  return { ...femaleReadiness(last, today), lastMoltOn: last, premoltNote: a.premoltNote ?? null };
+  const premoltSince = premoltSinceOf(a);
+  return { ...femaleReadiness(last, today, premoltSince), lastMoltOn: last, premoltNote: a.premoltNote ?? null, premoltSince };
+}
+
+/** A penultimate male with a molt on record: when his maturing molt is expected. */
+function maturingWindowOf(a: Animal, today: string): MaturingWindow | null {
+  if (a.sex !== 'male' || a.maturity !== 'penultimate' || !a.lastMoltOn || a.lastMoltOn > today) return null;
+  return maturingWindow(a.lastMoltOn, today);
 }
 
 function ownerOf(a: Animal): AnimalOwner {
@@ -73,6 +88,11 @@ export function toAnimalResponse(a: Animal, today: string, viewerId: string, pho
     premoltNote: a.premoltNote ?? null,
     maleClock: maleClockOf(a, today),
     readiness: readinessOf(a, today),
+    premoltSince: premoltSinceOf(a),
+    premoltEndedOn: a.premoltEndedOn ?? null,
+    spermWebOn: a.spermWebOn ?? null,
+    returnedOn: a.returnedOn ?? null,
+    maturingWindow: maturingWindowOf(a, today),
     photos,
     editable: a.recordedBy.id === viewerId,
     updatedAt: a.updatedAt.toISOString(),

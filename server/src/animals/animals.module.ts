@@ -5,6 +5,13 @@ import { storageConfig } from '../config/storage.config';
 import { PhotosModule } from '../photos/photos.module';
 import { Animal } from './animal.entity';
 import { Molt } from './molt.entity';
+import { FeedingEntry } from './feeding-entry.entity';
+import { AnimalDepartureRegistry } from './animal-departure.registry';
+import { AnimalReadersRegistry } from './animal-readers.registry';
+import { AnimalLifeService } from './animal-life.service';
+import { AnimalLifeController } from './animal-life.controller';
+import { FeedingsService } from './feedings.service';
+import { FeedingsController } from './feedings.controller';
 import { AnimalsService } from './animals.service';
 import { AnimalsController } from './animals.controller';
 import { AnimalUsageRegistry } from './animal-usage.registry';
@@ -18,9 +25,28 @@ import { AnimalOwnershipController } from './animal-ownership.controller';
 import { AnimalOwnershipService } from './animal-ownership.service';
 
 @Module({
-  imports: [ConfigModule.forFeature(storageConfig), MikroOrmModule.forFeature([Animal, Molt]), PhotosModule],
-  controllers: [AnimalsCsvController, AnimalOwnershipController, AnimalsController, MoltsController, AnimalPhotosController],
-  providers: [AnimalsService, AnimalOwnershipService, AnimalsCsvService, AnimalUsageRegistry, MoltsService, AnimalPhotosService],
-  exports: [AnimalsService, AnimalUsageRegistry],
+  imports: [ConfigModule.forFeature(storageConfig), MikroOrmModule.forFeature([Animal, Molt, FeedingEntry]), PhotosModule],
+  controllers: [
+    AnimalsCsvController,
+    AnimalOwnershipController,
+    AnimalsController,
+    MoltsController,
+    AnimalPhotosController,
+    AnimalLifeController,
+    FeedingsController,
+  ],
+  providers: [
+    AnimalsService,
+    AnimalOwnershipService,
+    AnimalsCsvService,
+    AnimalUsageRegistry,
+    AnimalDepartureRegistry,
+    AnimalReadersRegistry,
+    MoltsService,
+    AnimalPhotosService,
+    AnimalLifeService,
+    FeedingsService,
+  ],
+  exports: [AnimalsService, AnimalUsageRegistry, AnimalDepartureRegistry, AnimalReadersRegistry],
 })
 export class AnimalsModule {}

@@ -1,7 +1,7 @@
-import { ConflictException, Injectable } from '@nestjs/common';
+import { ConflictException, ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { EntityManager, type QueryBuilder } from '@mikro-orm/postgresql';
-import { ForeignKeyConstraintViolationException } from '@mikro-orm/core';
-import { todayIn, type AnimalResponse, type MaleClockRow, type Paged, type AnimalSummary } from '@broodsilk/shared';
+import { ForeignKeyConstraintViolationException, LockMode } from '@mikro-orm/core';
+import { todayIn, type AnimalStatus, type MaleDeparture, type AnimalResponse, type MaleClockRow, type Paged, type AnimalSummary } from '@broodsilk/shared';
 import type { AuthUser } from '../common/auth-user';
 import { User } from '../users/user.entity';
 import { escapeLike } from '../species/species.service';
@@ -9,6 +9,8 @@ import { Animal } from './animal.entity';
 import { maleClockOf, toAnimalResponse, toAnimalSummary } from './animals.mapper';
 import { resolveAnimalInput } from './animal-input';
 import { AnimalUsageRegistry } from './animal-usage.registry';
+import { AnimalDepartureRegistry } from './animal-departure.registry';
+import { AnimalReadersRegistry } from './animal-readers.registry';
 import { PhotosService } from '../photos/photos.service';
 import { badRequest } from '../common/field-errors';
 
@@ -28,7 +30,15 @@ const SORT_COLUMNS = {
   createdAt: 'a.createdAt',
 } as const;
 
+/** Statuses an edit can move to that count as the animal leaving for good. */
+const DEPARTURES: Partial<Record<AnimalStatus, MaleDeparture>> = { deceased: 'died', returned: 'returned' };
+
 const CLOCK_URGENCY = { 'past-typical': 0, late: 1, prime: 2, fresh: 3 } as const;
+
+/** Row lock for a change that reads before it writes, so two requests at once see each other's result. */
+export async function lockAnimal(tx: EntityManager, id: string): Promise<void> {
+  await tx.createQueryBuilder(Animal).select('id').where({ id }).setLockMode(LockMode.PESSIMISTIC_WRITE).execute();
+}
 
 @Injectable()
 export class AnimalsService {
@@ -36,6 +46,8 @@ export class AnimalsService {
     private readonly em: EntityManager,
     private readonly clock: Clock,
     private readonly usage: AnimalUsageRegistry,
+    private readonly departures: AnimalDepartureRegistry,
+    private readonly readers: AnimalReadersRegistry,
     private readonly photos: PhotosService,
   ) {}
 
@@ -64,7 +76,7 @@ export class AnimalsService {
     if (q.speciesId) qb.andWhere({ species: q.speciesId });
     if (q.sex) qb.andWhere({ sex: q.sex });
     if (q.status) qb.andWhere({ status: q.status });
-    if (q.mature !== undefined) qb.andWhere({ maturity: q.mature ? 'mature' : 'immature' });
+    if (q.mature !== undefined) qb.andWhere({ maturity: q.mature ? 'mature' : { $ne: 'mature' } });
     const text = q.q?.trim().toLowerCase();
     if (text) {
       const like = `%${escapeLike(text)}%`;
@@ -78,6 +90,19 @@ export class AnimalsService {
   /** An animal the viewer recorded; anybody else's is a 404, so its existence is not revealed. */
   async own(viewer: AuthUser, id: string, em: EntityManager = this.em): Promise<Animal> {
     return em.findOneOrFail(Animal, { id, recordedBy: viewer.id }, { populate: ['species', 'recordedBy', 'ownerUser'] });
+  }
+
+  /**
+   * Like `own`, for the routes that only the recorder may use: someone who can read the animal
+   * through a project gets 403 (the animal is known to them), anybody else 404.
+   */
+  async ownOrForbid(viewer: AuthUser, id: string, em: EntityManager = this.em): Promise<Animal> {
+    const a = await em.findOne(Animal, { id, recordedBy: viewer.id }, { populate: ['species', 'recordedBy', 'ownerUser'] });
+    if (a) return a;
+    if (await this.readers.canRead(em, id, viewer.id)) {
+      throw new ForbiddenException({ message: 'Only the keeper who keeps this animal’s record may change it or read its logs.' });
+    }
+    throw new NotFoundException({ message: 'There is no such animal in your collection.' });
   }
 
   async get(viewer: AuthUser, id: string): Promise<AnimalResponse> {
@@ -102,13 +127,23 @@ export class AnimalsService {
     return this.get(viewer, (animal as Animal).id);
   }
 
+  /**
+   * An edit that sets the status to deceased or returned is a departure like the dedicated routes:
+   * the same transaction writes the events on the animal's projects.
+   */
   async update(viewer: AuthUser, id: string, dto: UpdateAnimalDto): Promise<AnimalResponse> {
-    const animal = await this.own(viewer, id);
-    const { errors, values } = await resolveAnimalInput(this.em, viewer, dto, animal, this.today(viewer));
-    if (errors.length) throw badRequest(errors);
-    this.em.assign(animal, values);
-    await this.em.flush();
-    return this.respond(animal, viewer);
+    await this.em.transactional(async (tx) => {
+      await lockAnimal(tx, id);
+      const animal = await this.own(viewer, id, tx);
+      const before = animal.status;
+      const { errors, values } = await resolveAnimalInput(tx, viewer, dto, animal, this.today(viewer));
+      if (errors.length) throw badRequest(errors);
+      tx.assign(animal, values);
+      if (animal.status !== 'returned') animal.returnedOn = null;
+      const departure = animal.status === before ? null : DEPARTURES[animal.status];
+      if (departure) await this.departures.depart(tx, { animal, departure, on: animal.statusOn!, actorId: viewer.id });
+    });
+    return this.get(viewer, id);
   }
 
   /** Only for mistakes: a sold or dead animal keeps its record (set its status instead). */

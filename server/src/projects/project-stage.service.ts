@@ -84,7 +84,7 @@ export class ProjectStageService {
         lifespan: { minMonths: life.min, maxMonths: life.max },
         diedOn: standing.facts.maleDiedOn ?? null,
         dueBackOn: m.custody === 'loan-in' ? (m.dueBackOn ?? null) : null,
-        returnedOn: null,
+        returnedOn: m.returnedOn ?? null,
       },
       failureClause,
     });

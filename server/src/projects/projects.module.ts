@@ -2,6 +2,8 @@ import { Module, type OnModuleInit } from '@nestjs/common';
 import { MikroOrmModule } from '@mikro-orm/nestjs';
 import { AnimalsModule } from '../animals/animals.module';
 import { AnimalUsageRegistry } from '../animals/animal-usage.registry';
+import { AnimalDepartureRegistry } from '../animals/animal-departure.registry';
+import { AnimalReadersRegistry } from '../animals/animal-readers.registry';
 import { ActivityModule } from '../activity/activity.module';
 import { Project } from './project.entity';
 import { ProjectMember } from './project-member.entity';
@@ -21,10 +23,13 @@ import { TermsService } from './terms.service';
 import { TermsController } from './terms.controller';
 import { PairingsService } from './pairings.service';
 import { PairingsController } from './pairings.controller';
+import { AnimalDepartureListener } from './animal-departure.listener';
+import { AnimalBreedingService } from './animal-breeding.service';
+import { AnimalBreedingController } from './animal-breeding.controller';
 
 @Module({
   imports: [MikroOrmModule.forFeature([Project, ProjectMember, Pairing, TermsVersion, TermsLine, TermsAcceptance]), AnimalsModule, ActivityModule],
-  controllers: [ProjectsController, MembersController, TermsController, PairingsController],
+  controllers: [ProjectsController, MembersController, TermsController, PairingsController, AnimalBreedingController],
   providers: [
     ProjectAccessService,
     ProjectResolverRegistry,
@@ -34,13 +39,25 @@ import { PairingsController } from './pairings.controller';
     MembersService,
     TermsService,
     PairingsService,
+    AnimalDepartureListener,
+    AnimalBreedingService,
   ],
   exports: [ProjectAccessService, ProjectResolverRegistry, ProjectFactsRegistry, ProjectStageService, TermsService],
 })
 export class ProjectsModule implements OnModuleInit {
-  constructor(private readonly usage: AnimalUsageRegistry) {}
+  constructor(
+    private readonly usage: AnimalUsageRegistry,
+    private readonly departures: AnimalDepartureRegistry,
+    private readonly departureListener: AnimalDepartureListener,
+    private readonly readers: AnimalReadersRegistry,
+  ) {}
 
   onModuleInit(): void {
+    this.departures.register((em, d) => this.departureListener.onDeparture(em, d));
+    // Members of a project see its two animals (read-only).
+    this.readers.register(
+      async (em, animalId, userId) => (await em.count(ProjectMember, { user: userId, project: { $or: [{ female: animalId }, { male: animalId }] } })) > 0,
+    );
     // An animal in a project keeps its record; the FK (restrict) is the safety net.
     this.usage.register(async (em, animalId) => {
       const p = await em.findOne(Project, { $or: [{ female: animalId }, { male: animalId }] }, { fields: ['title', 'female'] });

@@ -75,8 +75,11 @@ export class ProjectsService {
       const check = (a: Animal | null, field: 'femaleId' | 'maleId', sex: 'female' | 'male') => {
         if (!a) errors.push({ field, message: `There is no such animal in your collection; choose the ${sex} from the animals you recorded.` });
         else if (a.sex !== sex) errors.push({ field, message: `${a.label} is recorded as ${a.sex}, not ${sex}.` });
-        else if (a.status === 'sold' || a.status === 'deceased')
-          errors.push({ field, message: `${a.label} is marked ${a.status}, so it cannot start a project.` });
+        else if (a.status === 'sold' || a.status === 'deceased' || a.status === 'returned')
+          errors.push({
+            field,
+            message: `${a.label} is marked ${a.status === 'returned' ? 'returned to its owner' : a.status}, so it cannot start a project.`,
+          });
       };
       check(female, 'femaleId', 'female');
       check(male, 'maleId', 'male');

@@ -1,14 +1,17 @@
 import type { SpeciesGroup, ValueOrigin } from './species.types.js';
 import type { MaleClock } from './male-clock.js';
 import type { FemaleReadiness } from './female-readiness.js';
+import type { MaturingWindow } from './maturing-window.js';
 
 export const ANIMAL_SEXES = ['female', 'male', 'unsexed'] as const;
 export type AnimalSex = (typeof ANIMAL_SEXES)[number];
 
-export const MATURITIES = ['immature', 'mature'] as const;
+/** `penultimate`: one molt from mature (a subadult male whose next molt is expected to be his last). */
+export const MATURITIES = ['immature', 'penultimate', 'mature'] as const;
 export type Maturity = (typeof MATURITIES)[number];
 
-export const ANIMAL_STATUSES = ['active', 'on-loan', 'sold', 'deceased'] as const;
+/** `returned`: a loaned animal handed back to its owner (its `returnedOn` says when). */
+export const ANIMAL_STATUSES = ['active', 'on-loan', 'returned', 'sold', 'deceased'] as const;
 export type AnimalStatus = (typeof ANIMAL_STATUSES)[number];
 
 /** `self`: the keeper who records it; `keeper`: another keeper of this instance; `party`: someone outside. */
@@ -111,6 +114,8 @@ export interface MaleClockView extends MaleClock {
 export interface FemaleReadinessView extends FemaleReadiness {
   lastMoltOn: DateString | null;
   premoltNote: string | null;
+  /** Day the keeper flagged her as in premolt; null when not flagged (or a molt since ended it). */
+  premoltSince: DateString | null;
 }
 
 export interface AnimalSummary {
@@ -146,6 +151,16 @@ export interface AnimalResponse extends AnimalSummary {
   maleClock: MaleClockView | null;
   /** Only for mature females. */
   readiness: FemaleReadinessView | null;
+  /** Day the keeper flagged premolt, while the flag stands (any animal). */
+  premoltSince: DateString | null;
+  /** The last day the keeper cleared a premolt flag. */
+  premoltEndedOn: DateString | null;
+  /** Last day a sperm web was seen (males). */
+  spermWebOn: DateString | null;
+  /** Day a loaned animal went back to its owner (status `returned`). */
+  returnedOn: DateString | null;
+  /** Only for a penultimate male with a molt on record: when his maturing molt is expected. */
+  maturingWindow: MaturingWindow | null;
   /** Photos of the animal itself (molt photos come with the molts), oldest first. */
   photos: PhotoRef[];
   /** True when the viewer recorded it and may edit it. */

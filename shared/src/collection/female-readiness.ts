@@ -5,8 +5,10 @@ import { assertCalendarDate, diffDays, type CalendarDate } from '../breeding/cal
  * - `hardening`: less than 21 days since her last molt; her new skin and fangs are still soft
  *   (pairing is usually held off for a few weeks after a molt, common practice).
  * - `ready`: 21 days or more since her last molt.
+ * - `premolt`: the keeper flagged premolt and no molt is recorded since; not now, whatever the
+ *   days since her last molt say (a molt after pairing sheds the stored sperm, TRADE-FACTS §5).
  */
-export type FemaleReadinessState = 'no-molt-recorded' | 'hardening' | 'ready';
+export type FemaleReadinessState = 'no-molt-recorded' | 'hardening' | 'ready' | 'premolt';
 
 export const FEMALE_HARDENING_DAYS = 21;
 
@@ -18,8 +20,25 @@ export interface FemaleReadiness {
 
 const LOST_PAIRING_NOTE = 'If she molts again before she lays, the pairing is lost: the stored sperm is shed with the old skin.';
 
-export function femaleReadiness(lastMoltOn: CalendarDate | null, today: CalendarDate): FemaleReadiness {
+/**
+ * Whether a premolt flag set on `premoltSince` still stands: a molt on or after that day ends it
+ * (the molt the flag announced has happened).
+ */
+export function premoltStands(premoltSince: CalendarDate | null | undefined, lastMoltOn: CalendarDate | null | undefined): boolean {
+  return !!premoltSince && (!lastMoltOn || lastMoltOn < premoltSince);
+}
+
+export function femaleReadiness(lastMoltOn: CalendarDate | null, today: CalendarDate, premoltSince: CalendarDate | null = null): FemaleReadiness {
   assertCalendarDate(today, 'date today');
+  if (premoltSince !== null) assertCalendarDate(premoltSince, 'premolt date');
+  if (premoltStands(premoltSince, lastMoltOn)) {
+    const daysSinceMolt = lastMoltOn === null ? null : diffDays(lastMoltOn, today);
+    return {
+      daysSinceMolt,
+      state: 'premolt',
+      note: `Not now: in premolt since ${premoltSince}. Pairing her now would be lost with the coming molt; wait until she has molted and hardened (about ${FEMALE_HARDENING_DAYS} days).`,
+    };
+  }
   if (lastMoltOn === null) {
     return {
       daysSinceMolt: null,

@@ -1,5 +1,6 @@
 import type { EndedEarlyReason, ProjectStage } from '../breeding/project-stage.js';
 import type { MaleClockState } from '../collection/male-clock.js';
+import type { PairingOutcome, SacFate } from '../breeding/pairing.types.js';
 import type { SacOutcomeState } from '../sacs/sacs.types.js';
 
 /**
@@ -35,3 +36,14 @@ export const MALE_CLOCK_LABELS: Record<MaleClockState, { label: string; hint: st
   late: { label: 'Time running short', hint: 'He is into the range where males of his group usually die; pair him soon.' },
   'past-typical': { label: 'Beyond the usual span', hint: 'He has outlived the typical range for his group; any pairing now is a bonus.' },
 };
+
+export const PAIRING_OUTCOME_LABELS: Record<PairingOutcome, string> = {
+  connected: 'Connected',
+  'interest-only': 'Interest only',
+  'female-refused': 'Female refused',
+  aggression: 'Aggression, separated',
+  'male-lost': 'Male lost',
+};
+
+/** How a sac fares, as the stage rules see it. */
+export const SAC_FATE_LABELS: Record<SacFate, string> = { developing: 'Developing', failed: 'Failed', eaten: 'Eaten by the mother' };

@@ -15,6 +15,9 @@ import { MaleClockPanel } from '@/features/collection/components/male-clock-pane
 import { MoltTimeline } from '@/features/collection/components/molt-timeline';
 import { PhotoPanel } from '@/features/collection/components/photo-panel';
 import { ReadinessPanel } from '@/features/collection/components/readiness-panel';
+import { LifeActions } from '@/features/collection/components/life-actions';
+import { FeedingLog } from '@/features/collection/components/feeding-log';
+import { BreedingRecord } from '@/features/collection/components/breeding-record';
 import { CUSTODY_LABELS, MATURITY_LABELS, SEX_LABELS, SEX_SIGNS, STATUS_LABELS } from '@/features/collection/utils/animal-view';
 import { speciesQueries, useSpecies } from '@/features/species/api/species';
 import { CautionNotice } from '@/features/species/components/caution-notice';
@@ -99,6 +102,7 @@ export function Component() {
           <Stack>
             {animal.maleClock && <MaleClockPanel clock={animal.maleClock} />}
             {animal.readiness && <ReadinessPanel readiness={animal.readiness} />}
+            <LifeActions animal={animal} />
             <Stack gap={6}>
               <Fact label="Enclosure">{animal.enclosure ?? '—'}</Fact>
               <Fact label="Owner">{owner}</Fact>
@@ -126,6 +130,16 @@ export function Component() {
           <MoltTimeline animalId={animal.id} sex={animal.sex} editable={animal.editable} />
         </Grid.Col>
       </Grid>
+      {animal.editable && (
+        <Grid gap="lg">
+          <Grid.Col span={{ base: 12, md: 6 }}>
+            <FeedingLog animalId={animal.id} />
+          </Grid.Col>
+          <Grid.Col span={{ base: 12, md: 6 }}>
+            <BreedingRecord animalId={animal.id} />
+          </Grid.Col>
+        </Grid>
+      )}
       <PhotoPanel animalId={animal.id} photos={animal.photos} editable={animal.editable} label={animal.label} />
       <Drawer opened={editing} onClose={() => setEditing(false)} title={`Edit ${animal.label}`} position="right" size={phone ? '100%' : 'lg'}>
         {editing && (

@@ -18,8 +18,14 @@ import { MALE_CLOCK_TONE, type ToneStyle } from '@/lib/tones';
 
 export const SEX_LABELS: Record<AnimalSex, string> = { female: 'Female', male: 'Male', unsexed: 'Unsexed' };
 export const SEX_SIGNS: Record<AnimalSex, string> = { female: '♀', male: '♂', unsexed: '?' };
-export const MATURITY_LABELS: Record<Maturity, string> = { immature: 'Not yet mature', mature: 'Mature' };
-export const STATUS_LABELS: Record<AnimalStatus, string> = { active: 'In the collection', 'on-loan': 'Lent out', sold: 'Sold', deceased: 'Deceased' };
+export const MATURITY_LABELS: Record<Maturity, string> = { immature: 'Not yet mature', penultimate: 'One molt from mature', mature: 'Mature' };
+export const STATUS_LABELS: Record<AnimalStatus, string> = {
+  active: 'In the collection',
+  'on-loan': 'Lent out',
+  returned: 'Returned to owner',
+  sold: 'Sold',
+  deceased: 'Deceased',
+};
 export const CUSTODY_LABELS: Record<Custody, string> = { 'with-owner': 'With its owner', 'loan-in': 'On loan to me', 'loan-out': 'On loan out' };
 export const OWNER_LABELS: Record<OwnerKind, string> = { self: 'Me', keeper: 'Another keeper here', party: 'Someone outside Broodsilk' };
 export const EXUVIA_LABELS: Record<ExuviaSex, string> = { female: 'Female (spermathecae seen)', male: 'Male (no spermathecae)', 'not-sure': 'Could not tell' };
@@ -36,6 +42,7 @@ export const READINESS_STATES: Record<FemaleReadinessState, { label: string; ton
   'no-molt-recorded': { label: 'No molt on record', tone: 'tone-due' },
   hardening: { label: 'Still hardening', tone: 'tone-due' },
   ready: { label: 'Can be paired', tone: 'tone-ok' },
+  premolt: { label: 'Not now, premolt', tone: 'tone-failed' },
 };
 
 export const PAGE_SIZES = [25, 50, 100] as const;

@@ -1,17 +1,11 @@
 import { ENDED_EARLY_LABELS, PROJECT_STAGE_LABELS } from '@broodsilk/shared';
-import type { EndedEarlyReason, FailureClause, PairingOutcome, ProjectRole, ProjectStage, ShippingPayer, WarningSeverity } from '@broodsilk/shared';
+import type { EndedEarlyReason, FailureClause, ProjectRole, ProjectStage, ShippingPayer, WarningSeverity } from '@broodsilk/shared';
 
 /** The progress line in our own words (docs/product.md, Project stages); the words live in shared/ so every screen agrees. */
 export const STAGE_LABELS = PROJECT_STAGE_LABELS;
 export { ENDED_EARLY_LABELS };
 
-export const PAIRING_OUTCOME_LABELS: Record<PairingOutcome, string> = {
-  connected: 'Connected',
-  'interest-only': 'Interest only',
-  'female-refused': 'Female refused',
-  aggression: 'Aggression, separated',
-  'male-lost': 'Male lost',
-};
+export { PAIRING_OUTCOME_LABELS } from '@broodsilk/shared';
 
 export const ROLE_LABELS: Record<ProjectRole, string> = { owner: 'Keeper (runs it)', partner: 'Partner', caretaker: 'Caretaker' };
 

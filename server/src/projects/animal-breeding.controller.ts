@@ -1,0 +1,16 @@
+import { Controller, Get, Param, ParseUUIDPipe } from '@nestjs/common';
+import type { AnimalBreedingRow } from '@broodsilk/shared';
+import { CurrentUser } from '../common/decorators/current-user.decorator';
+import type { AuthUser } from '../common/auth-user';
+import { AnimalBreedingService } from './animal-breeding.service';
+
+/** Lives with the projects (which know pairings and sacs); the animal must be the viewer's own. */
+@Controller('animals/:id/breeding')
+export class AnimalBreedingController {
+  constructor(private readonly breeding: AnimalBreedingService) {}
+
+  @Get()
+  list(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<AnimalBreedingRow[]> {
+    return this.breeding.forAnimal(user, id);
+  }
+}
