@@ -9,6 +9,8 @@ import {
   type ProjectSummary,
   type PullWindowEvent,
   type RollStatus,
+  isHandsOn,
+  isProjectOpen,
 } from '@broodsilk/shared';
 import type { AuthUser } from '../common/auth-user';
 import { ProjectMember } from '../projects/project-member.entity';
@@ -26,7 +28,6 @@ import { accountTodos } from '../accounts/account-todos';
 import { termsAwaitingAcceptance } from '../projects/terms-todos';
 
 const ROLL_ORDER: Record<RollStatus, number> = { overdue: 0, due: 1, 'due-soon': 2, upcoming: 3 };
-const HANDS_ON = new Set(['owner', 'caretaker']);
 const MONEY = new Set(['owner', 'partner']);
 
 /** Opens today, closes today, or open in between: each a reason to look at the sac today. */
@@ -64,7 +65,7 @@ export class DashboardService {
       projects.map((p) => p.id),
     );
     const summaries: ProjectSummary[] = projects.map((p) => toProjectSummary(p, standings.get(p.id)!.stage, roleOf.get(p.id)!, partners.get(p.id) ?? []));
-    const openIds = new Set(summaries.filter((s) => s.stage.stage !== 'closed' && s.stage.stage !== 'ended-early').map((s) => s.id));
+    const openIds = new Set(summaries.filter((s) => isProjectOpen(s.stage.stage)).map((s) => s.id));
 
     const sacs = await this.em.find(Sac, { project: { $in: [...openIds] }, outcome: 'in-progress' }, { populate: SAC_POPULATE });
     const responses = await this.views.build(this.em, sacs, viewer.timeZone, now);
@@ -74,7 +75,7 @@ export class DashboardService {
       myRole: roleOf.get(s.project.id)!,
       sac: responses[i],
     }));
-    const handsOn = items.filter((x) => HANDS_ON.has(x.myRole));
+    const handsOn = items.filter((x) => isHandsOn(x.myRole));
     const withMother = (x: DashboardSac) => !x.sac.pulled;
     const horizon = addDays(today, DASHBOARD_PULL_WINDOW_DAYS);
     // Money to-dos for owners and partners: every account loaded with a fixed number of queries.

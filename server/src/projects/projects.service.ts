@@ -1,6 +1,6 @@
 import { ConflictException, Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
-import { secondProjectWarnings, todayIn, type FieldError, type ProjectResponse, type ProjectSummary } from '@broodsilk/shared';
+import { mayStartProject, secondProjectWarnings, todayIn, type FieldError, type ProjectResponse, type ProjectSummary } from '@broodsilk/shared';
 import type { AuthUser } from '../common/auth-user';
 import { Animal } from '../animals/animal.entity';
 import { badRequest } from '../common/field-errors';
@@ -75,7 +75,7 @@ export class ProjectsService {
       const check = (a: Animal | null, field: 'femaleId' | 'maleId', sex: 'female' | 'male') => {
         if (!a) errors.push({ field, message: `There is no such animal in your collection; choose the ${sex} from the animals you recorded.` });
         else if (a.sex !== sex) errors.push({ field, message: `${a.label} is recorded as ${a.sex}, not ${sex}.` });
-        else if (a.status === 'sold' || a.status === 'deceased' || a.status === 'returned')
+        else if (!mayStartProject(a))
           errors.push({
             field,
             message: `${a.label} is marked ${a.status === 'returned' ? 'returned to its owner' : a.status}, so it cannot start a project.`,
