@@ -32,3 +32,4 @@ export * from './dashboard/dashboard.types.js';
 export * from './dashboard/calendar.types.js';
 export * from './dashboard/notifications.types.js';
 export * from './vocabulary/labels.js';
+export * from './forms/text-limits.js';
