@@ -118,3 +118,8 @@ export function readDate(text: string): string | null {
   const read = readTypedDate(text);
   return read.kind === 'date' ? read.iso : null;
 }
+
+/** Today on this device's calendar, for forms that have no profile zone at hand. */
+export function deviceToday(now = new Date()): string {
+  return `${now.getFullYear()}-${String(now.getMonth() + 1).padStart(2, '0')}-${String(now.getDate()).padStart(2, '0')}`;
+}
