@@ -1,4 +1,6 @@
-import { NumberInput, Stack, Text } from '@mantine/core';
+import { Stack, Text } from '@mantine/core';
+import { NumberField } from '@/components/fields/number-field';
+import { checkNumber } from '@/components/fields/typed-number';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { applyServerErrors } from '@/lib/form-errors';
@@ -21,11 +23,14 @@ export function PayForm({ projectId, toMemberId, toName, owedMinor, currency, go
   const checkout = useCreateCheckout(projectId);
   const [message, setMessage] = useState<string | null>(null);
   const digits = minorDigits(currency);
-  const form = useForm<{ amount: number | string }>({
+  const form = useForm<{ amount: string }>({
     mode: 'uncontrolled',
-    initialValues: { amount: toMajor(owedMinor, currency) },
+    validateInputOnBlur: true,
+    initialValues: { amount: String(toMajor(owedMinor, currency)) },
     validate: {
       amount: (v) => {
+        const typed = checkNumber(v, { required: 'How much do you pay?', decimals: digits });
+        if (typed) return typed;
         const minor = toMinor(v, currency);
         if (!(minor > 0)) return 'The amount must be above 0.';
         return minor > owedMinor ? `You owe ${toName} ${formatMoney(owedMinor, currency)}; the amount cannot be more than that.` : null;
@@ -47,14 +52,7 @@ export function PayForm({ projectId, toMemberId, toName, owedMinor, currency, go
         <Text size="sm">
           You owe {toName} {formatMoney(owedMinor, currency)}.
         </Text>
-        <NumberInput
-          label={`Amount (${currency})`}
-          min={0}
-          decimalScale={digits}
-          allowDecimal={digits > 0}
-          key={form.key('amount')}
-          {...form.getInputProps('amount')}
-        />
+        <NumberField label={`Amount (${currency})`} key={form.key('amount')} {...form.getInputProps('amount')} />
         <FormActions message={message} loading={checkout.isPending} submitLabel="Pay what you owe" />
         <Text size="xs" c="dimmed">
           You will pay on the payment provider’s page and come back here afterwards.
