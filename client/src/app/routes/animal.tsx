@@ -4,6 +4,7 @@ import { notifications } from '@mantine/notifications';
 import type { QueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { DocumentTitle } from '@/components/ui/document-title';
 import { paths } from '@/config/paths';
 import { formatDate } from '@/lib/dates';
 import { animalQueries, useAnimal } from '@/features/collection/api/animals';
@@ -52,6 +53,7 @@ export function Component() {
   const owner = animal.owner.kind === 'self' ? 'You' : animal.owner.name;
   return (
     <Stack>
+      <DocumentTitle title={animal.label} />
       <Breadcrumbs>
         <Anchor component={Link} to={paths.collection.href()} size="sm">
           Collection

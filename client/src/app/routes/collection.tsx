@@ -1,4 +1,5 @@
-import { Anchor, Button, Drawer, Group, Pagination, Select, Stack, Tabs, Text } from '@mantine/core';
+import { Anchor, Button, Drawer, Group, Select, Stack, Tabs, Text } from '@mantine/core';
+import { Pager } from '@/components/ui/pager';
 import { useMediaQuery } from '@mantine/hooks';
 import { notifications } from '@mantine/notifications';
 import { useQuery, type QueryClient } from '@tanstack/react-query';
@@ -141,7 +142,7 @@ export function Component() {
                   size="md"
                 />
                 {pages > 1 && (
-                  <Pagination total={pages} value={page} onChange={(p) => update({ offset: (p - 1) * filters.limit })} size="lg" siblings={phone ? 0 : 1} />
+                  <Pager total={pages} value={page} onChange={(p) => update({ offset: (p - 1) * filters.limit })} size="lg" siblings={phone ? 0 : 1} />
                 )}
               </Group>
             </Group>

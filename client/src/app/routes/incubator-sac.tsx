@@ -3,6 +3,7 @@ import { useQuery, type QueryClient } from '@tanstack/react-query';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import type { ProjectResponse } from '@broodsilk/shared';
 import { PageLoader } from '@/components/ui/page-loader';
+import { DocumentTitle } from '@/components/ui/document-title';
 import { paths } from '@/config/paths';
 import { useMe } from '@/features/auth/api/me';
 import { projectQueries } from '@/features/projects/api/projects';
@@ -36,6 +37,7 @@ export function Component() {
   if (sac.isError) return <Alert color="clay">{sac.error.message}</Alert>;
   return (
     <>
+      <DocumentTitle title={`At the incubator: ${project.data?.title ?? `sac laid ${sac.data.layDate}`}`} />
       <Group justify="space-between" mb="xs">
         <Anchor component={Link} to={paths.incubator.href()} size="sm">
           All sacs in the incubator

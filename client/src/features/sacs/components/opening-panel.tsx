@@ -69,6 +69,7 @@ function OpeningView({ opening, timeZone, sacId, canEdit }: { opening: OpeningRe
             }
           }}
           onReject={() => setError('Only images up to 15 MB.')}
+          inputProps={{ 'aria-label': 'Choose photos of the opening' }}
         >
           <Text size="sm" ta="center" c="dimmed">
             Drop photos of the opening here, or tap to choose (location data is removed on upload).
