@@ -66,6 +66,14 @@ describe('accessibility (axe-core, WCAG 2.2 AA) in both colour schemes', () => {
     expect(new Set(titles.values()).size).toBe(PUBLIC_ROUTES.length);
   });
 
+  it('the usual guesses lead to sign-in: /login redirects and the register page links to it', async () => {
+    await b.page.goto(`${BASE_URL}/login`);
+    await b.page.waitForURL(/\/sign-in$/);
+    await b.page.goto(`${BASE_URL}/register`);
+    await b.page.getByRole('link', { name: 'Sign in' }).click();
+    await b.page.waitForURL(/\/sign-in$/);
+  });
+
   for (const account of ACCOUNTS) {
     it(`every page of ${account} passes and has its own title`, { timeout: 240_000 }, async () => {
       const page = b.page;

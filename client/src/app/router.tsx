@@ -1,5 +1,5 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { createBrowserRouter } from 'react-router-dom';
+import { createBrowserRouter, redirect } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { RouteError } from './routes/route-error';
 import { PageLoader } from '@/components/ui/page-loader';
@@ -85,6 +85,8 @@ export function createRouter(queryClient: QueryClient) {
       ],
     },
     { path: paths.signIn.path, lazy: () => import('./routes/sign-in'), ErrorBoundary: RouteError },
+    // The usual guess for the sign-in address leads there instead of to the 404 page.
+    { path: '/login', loader: () => redirect(paths.signIn.href()) },
     { path: paths.register.path, lazy: () => import('./routes/register'), ErrorBoundary: RouteError },
     { path: paths.forgotPassword.path, lazy: () => import('./routes/forgot-password'), ErrorBoundary: RouteError },
     { path: paths.resetPassword.path, lazy: () => import('./routes/reset-password'), ErrorBoundary: RouteError },

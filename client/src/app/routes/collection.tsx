@@ -13,7 +13,7 @@ import { AnimalTable } from '@/features/collection/components/animal-table';
 import { CollectionFilters } from '@/features/collection/components/collection-filters';
 import { CsvTools } from '@/features/collection/components/csv-import';
 import { MatureMales } from '@/features/collection/components/mature-males';
-import { PAGE_SIZES, filtersFromParams, filtersToParams, type CollectionFilters as Filters } from '@/features/collection/utils/animal-view';
+import { PAGE_SIZES, filtersFromParams, hasFilters, filtersToParams, type CollectionFilters as Filters } from '@/features/collection/utils/animal-view';
 import { speciesQueries, useSpecies } from '@/features/species/api/species';
 import { SpeciesPicker } from '@/features/species/components/species-picker';
 
@@ -125,6 +125,7 @@ export function Component() {
                 hrefOf={hrefOf}
                 clocks={clocks}
                 formerNames={formerNames}
+                filtered={hasFilters(filters)}
               />
             )}
             <Group justify="space-between" wrap="wrap">

@@ -5,6 +5,7 @@ import type { ProjectResponse } from '@broodsilk/shared';
 import { PageLoader } from '@/components/ui/page-loader';
 import { DocumentTitle } from '@/components/ui/document-title';
 import { paths } from '@/config/paths';
+import { formatDate } from '@/lib/dates';
 import { useMe } from '@/features/auth/api/me';
 import { projectQueries } from '@/features/projects/api/projects';
 import { sacQueries, useSac } from '@/features/sacs/api/sacs';
@@ -37,7 +38,7 @@ export function Component() {
   if (sac.isError) return <Alert color="clay">{sac.error.message}</Alert>;
   return (
     <>
-      <DocumentTitle title={`At the incubator: ${project.data?.title ?? `sac laid ${sac.data.layDate}`}`} />
+      <DocumentTitle title={`At the incubator: ${project.data?.title ?? `sac laid ${formatDate(sac.data.layDate)}`}`} />
       <Group justify="space-between" mb="xs">
         <Anchor component={Link} to={paths.incubator.href()} size="sm">
           All sacs in the incubator

@@ -1,4 +1,5 @@
 import { Alert, Button, Collapse, Group, NumberInput, Select, SimpleGrid, Stack, Table, Text, TextInput } from '@mantine/core';
+import { ScrollTable } from '@/components/ui/scroll-table';
 import { useForm } from '@mantine/form';
 import { useDisclosure } from '@mantine/hooks';
 import { useState } from 'react';
@@ -68,7 +69,7 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
           <Text size="sm">
             Alive now: <b>{counts.data.current ?? '—'}</b>
           </Text>
-          <Table.ScrollContainer minWidth={360}>
+          <ScrollTable minWidth={360} label="Brood counts">
             <Table verticalSpacing={4} fz="sm" data-testid="brood-counts">
               <Table.Thead>
                 <Table.Tr>
@@ -100,7 +101,7 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
                   ))}
               </Table.Tbody>
             </Table>
-          </Table.ScrollContainer>
+          </ScrollTable>
         </>
       )}
       {canRecord && (

@@ -1,4 +1,5 @@
 import { Alert, Badge, Button, Group, Popover, Stack, Table, Text, TextInput } from '@mantine/core';
+import { ScrollTable } from '@/components/ui/scroll-table';
 import { useState } from 'react';
 import { formatTemperature, type CareLogEntryResponse, type CareLogKind, type TemperatureUnit } from '@broodsilk/shared';
 import { formatInstant } from '@/lib/dates';
@@ -92,7 +93,7 @@ export function CareLogList({
   if (log.data.length === 0) return <Text c="dimmed">No entries yet.</Text>;
   const entries = [...log.data].sort((a, b) => (a.at < b.at ? 1 : -1));
   return (
-    <Table.ScrollContainer minWidth={360}>
+    <ScrollTable minWidth={360} label="Care log">
       <Table verticalSpacing={4} fz="sm" data-testid="care-log">
         <Table.Thead>
           <Table.Tr>
@@ -133,6 +134,6 @@ export function CareLogList({
           })}
         </Table.Tbody>
       </Table>
-    </Table.ScrollContainer>
+    </ScrollTable>
   );
 }
