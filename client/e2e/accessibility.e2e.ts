@@ -54,7 +54,7 @@ describe('accessibility (axe-core, WCAG 2.2 AA) in both colour schemes', () => {
     await b.close();
   });
 
-  it('public pages pass and each has its own title', { timeout: 120_000 }, async () => {
+  it('public pages pass and each has its own title', { timeout: 300_000 }, async () => {
     const findings: Finding[] = [];
     const titles = new Map<string, string>();
     await b.page.goto(`${BASE_URL}/sign-in`);
@@ -75,7 +75,7 @@ describe('accessibility (axe-core, WCAG 2.2 AA) in both colour schemes', () => {
   });
 
   for (const account of ACCOUNTS) {
-    it(`every page of ${account} passes and has its own title`, { timeout: 240_000 }, async () => {
+    it(`every page of ${account} passes and has its own title`, { timeout: 600_000 }, async () => {
       const page = b.page;
       await b.context.clearCookies();
       await signIn(page, account);

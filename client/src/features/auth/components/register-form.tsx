@@ -1,4 +1,4 @@
-import { Alert, Anchor, PasswordInput, Stack, Text } from '@mantine/core';
+import { Anchor, PasswordInput, Stack, Text } from '@mantine/core';
 import { Link } from 'react-router-dom';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
@@ -32,11 +32,6 @@ export function RegisterForm({ onRegistered, signInHref }: { onRegistered: () =>
       })}
     >
       <Stack>
-        {problem && (
-          <Alert color="clay" variant="light" role="alert">
-            {problem}
-          </Alert>
-        )}
         <TextField
           label="Your name"
           description="Shown to your partners"
@@ -62,7 +57,7 @@ export function RegisterForm({ onRegistered, signInHref }: { onRegistered: () =>
           key={form.key('password')}
           {...form.getInputProps('password')}
         />
-        <FormActions message={null} loading={register.isPending} submitLabel="Create account" />
+        <FormActions message={problem} loading={register.isPending} submitLabel="Create account" />
         <Text size="sm">
           Already have an account?{' '}
           <Anchor component={Link} to={signInHref}>
