@@ -87,7 +87,13 @@ describe('TermsPanel', () => {
     const button = within(proposed).getByRole('button', { name: 'Accept these terms' });
     expect(within(screen.getByTestId('terms-version-1')).queryByRole('button', { name: 'Accept these terms' })).not.toBeInTheDocument();
     await userEvent.click(button);
+    // Asked once, saying what accepting means; nothing is sent before the answer.
+    const dialog = await screen.findByRole('dialog', { name: 'Accept these terms' });
+    expect(dialog).toHaveTextContent('You agree to version 2');
+    expect(calls.some((c) => c.path.endsWith('/accept'))).toBe(false);
+    await userEvent.click(within(dialog).getByRole('button', { name: 'Yes, accept version 2' }));
     await waitFor(() => expect(calls.some((c) => c.method === 'POST' && c.path === '/api/projects/p1/terms/2/accept')).toBe(true));
+    expect(calls.filter((c) => c.path.endsWith('/accept'))).toHaveLength(1);
   });
 
   it('offers no accept button to a partner who already accepted', async () => {
