@@ -112,3 +112,19 @@ describe('TermsPanel', () => {
     expect(screen.queryByRole('button', { name: 'Accept these terms' })).not.toBeInTheDocument();
   });
 });
+
+describe('ProposeTermsForm in the panel', () => {
+  it('refuses a negative weight with a message instead of turning it into 0, and sends nothing', async () => {
+    const { fetchStub, calls } = stub(twoVersions);
+    vi.stubGlobal('fetch', fetchStub);
+    renderWithProviders(<TermsPanel projectId="p1" me={{ id: 'u-mira', timeZone: 'Europe/Berlin' }} myRole="owner" members={members} />);
+    await userEvent.click(await screen.findByRole('button', { name: 'Propose changed terms' }));
+    const weight = screen.getAllByLabelText(/^Weight of /)[0]!;
+    await userEvent.clear(weight);
+    await userEvent.type(weight, '-5');
+    await userEvent.click(screen.getByRole('button', { name: 'Propose this version' }));
+    await waitFor(() => expect(weight).toHaveAccessibleDescription('A weight is a whole number from 0 to 1,000,000.'));
+    expect(weight).toHaveValue('-5');
+    expect(calls.filter((c) => c.method === 'POST')).toHaveLength(0);
+  });
+});
