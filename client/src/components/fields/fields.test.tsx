@@ -42,7 +42,7 @@ function setup(language = 'en-GB') {
   return onSubmit;
 }
 
-describe('DateField', () => {
+describe('DateField', { timeout: 30_000 }, () => {
   it('keeps a typed day-first date exactly, says it in words and sends the ISO date', async () => {
     const onSubmit = setup('en-GB');
     const input = screen.getByLabelText('Molted on');
@@ -76,7 +76,7 @@ describe('DateField', () => {
   });
 });
 
-describe('NumberField', () => {
+describe('NumberField', { timeout: 30_000 }, () => {
   it('keeps a valid typed number exactly and sends it', async () => {
     const onSubmit = setup();
     await userEvent.type(screen.getByLabelText('Molted on'), '2025-03-14');
@@ -100,7 +100,7 @@ describe('NumberField', () => {
   });
 });
 
-describe('TextAreaField', () => {
+describe('TextAreaField', { timeout: 30_000 }, () => {
   it('shows a counter near the limit and keeps text within it', async () => {
     const onSubmit = setup();
     await userEvent.type(screen.getByLabelText('Molted on'), '2025-03-14');

@@ -23,7 +23,7 @@ function setup() {
   return { calls, onDone };
 }
 
-describe('MoltForm', () => {
+describe('MoltForm', { timeout: 30_000 }, () => {
   it('refuses a future molt date and a 900 cm leg span with messages, keeping both as typed', async () => {
     const { calls } = setup();
     const date = screen.getByLabelText(/Molted on/);

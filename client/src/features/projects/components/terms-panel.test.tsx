@@ -113,7 +113,7 @@ describe('TermsPanel', () => {
   });
 });
 
-describe('ProposeTermsForm in the panel', () => {
+describe('ProposeTermsForm in the panel', { timeout: 30_000 }, () => {
   it('refuses a negative weight with a message instead of turning it into 0, and sends nothing', async () => {
     const { fetchStub, calls } = stub(twoVersions);
     vi.stubGlobal('fetch', fetchStub);

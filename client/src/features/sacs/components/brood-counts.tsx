@@ -1,9 +1,13 @@
-import { Alert, Button, Collapse, Group, NumberInput, Select, SimpleGrid, Stack, Table, Text, TextInput } from '@mantine/core';
+import { Alert, Button, Collapse, Group, Select, SimpleGrid, Stack, Table, Text } from '@mantine/core';
+import { NumberField } from '@/components/fields/number-field';
+import { TextField } from '@/components/fields/text-field';
+import { textRule } from '@/components/fields/text-rule';
+import { numberRule, readNumber } from '@/components/fields/typed-number';
 import { ScrollTable } from '@/components/ui/scroll-table';
 import { useForm } from '@mantine/form';
 import { useDisclosure } from '@mantine/hooks';
 import { useState } from 'react';
-import { BROOD_LOSS_REASONS, BROOD_STAGES, type BroodLossReason, type BroodStage } from '@broodsilk/shared';
+import { BROOD_COUNT_MAX, BROOD_LOSS_REASONS, BROOD_STAGES, TEXT_LIMITS, type BroodLossReason, type BroodStage } from '@broodsilk/shared';
 import { formatInstant } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useBroodCounts, useRecordBroodCount } from '../api/brood';
@@ -19,13 +23,15 @@ const LOSS_LABELS: Record<BroodLossReason, string> = {
   other: 'Other',
 };
 
+const COUNT = { min: 0, max: BROOD_COUNT_MAX, decimals: 0, rangeMessage: `A whole number from 0 to ${BROOD_COUNT_MAX}.` };
+
 const stageOptions = BROOD_STAGES.map((s) => ({ value: s, label: broodLabel(s) }));
 const lossOptions = BROOD_LOSS_REASONS.map((r) => ({ value: r, label: LOSS_LABELS[r] }));
 
 interface Values {
   stage: BroodStage;
-  alive: number | string;
-  lost: number | string;
+  alive: string;
+  lost: string;
   lossReason: BroodLossReason | null;
   note: string;
 }
@@ -38,10 +44,13 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
   const [message, setMessage] = useState<string | null>(null);
   const form = useForm<Values>({
     mode: 'uncontrolled',
-    initialValues: { stage, alive: '', lost: 0, lossReason: null, note: '' },
+    validateInputOnBlur: true,
+    initialValues: { stage, alive: '', lost: '0', lossReason: null, note: '' },
     validate: {
-      alive: (v) => (v === '' || Number(v) < 0 ? 'How many are alive?' : null),
-      lossReason: (v, values) => (Number(values.lost) > 0 && !v ? 'Why were they lost?' : null),
+      alive: numberRule({ required: 'How many are alive?', ...COUNT }),
+      lost: numberRule(COUNT),
+      lossReason: (v, values) => ((readNumber(values.lost) ?? 0) > 0 && !v ? 'Why were they lost?' : null),
+      note: textRule({ maxLength: TEXT_LIMITS.note }),
     },
   });
   const submit = form.onSubmit(async (v) => {
@@ -49,9 +58,9 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
     try {
       await record.mutateAsync({
         stage: v.stage,
-        alive: Number(v.alive),
-        lost: Number(v.lost) || 0,
-        ...(Number(v.lost) > 0 && v.lossReason ? { lossReason: v.lossReason } : {}),
+        alive: readNumber(v.alive)!,
+        lost: readNumber(v.lost) ?? 0,
+        ...((readNumber(v.lost) ?? 0) > 0 && v.lossReason ? { lossReason: v.lossReason } : {}),
         note: v.note.trim() || null,
       });
       form.reset();
@@ -116,11 +125,11 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
               <Stack maw={520}>
                 <SimpleGrid cols={{ base: 2, sm: 4 }}>
                   <Select label="Stage" data={stageOptions} allowDeselect={false} key={form.key('stage')} {...form.getInputProps('stage')} />
-                  <NumberInput label="Alive" min={0} allowDecimal={false} key={form.key('alive')} {...form.getInputProps('alive')} />
-                  <NumberInput label="Lost" min={0} allowDecimal={false} key={form.key('lost')} {...form.getInputProps('lost')} />
+                  <NumberField label="Alive" whole key={form.key('alive')} {...form.getInputProps('alive')} />
+                  <NumberField label="Lost" whole key={form.key('lost')} {...form.getInputProps('lost')} />
                   <Select label="Lost because" data={lossOptions} key={form.key('lossReason')} {...form.getInputProps('lossReason')} />
                 </SimpleGrid>
-                <TextInput label="Note" key={form.key('note')} {...form.getInputProps('note')} />
+                <TextField label="Note" maxLength={TEXT_LIMITS.note} key={form.key('note')} {...form.getInputProps('note')} />
                 <FormActions message={message} loading={record.isPending} submitLabel="Save count" />
               </Stack>
             </form>

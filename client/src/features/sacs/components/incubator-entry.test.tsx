@@ -128,7 +128,8 @@ describe('IncubatorEntry', () => {
   });
 });
 
-describe('IncubatorEntry: typed readings and the pull', () => {
+// A loaded machine renders these slowly; nothing here is timed.
+describe('IncubatorEntry: typed readings and the pull', { timeout: 30_000 }, () => {
   it('refuses a humidity of 150 with a message instead of clamping it to 100, and sends nothing', async () => {
     const { fetchStub, calls } = stubFetch({});
     vi.stubGlobal('fetch', fetchStub);

@@ -10,7 +10,7 @@ afterEach(() => {
   vi.restoreAllMocks();
 });
 
-describe('OpeningPanel', () => {
+describe('OpeningPanel', { timeout: 30_000 }, () => {
   it('asks once before recording the opening and sends the earlier day and time given', async () => {
     vi.spyOn(navigator, 'language', 'get').mockReturnValue('en-GB');
     const { fetchStub, calls } = stubFetch({
