@@ -21,15 +21,9 @@ interface Values {
 
 const COUNT = { min: 0, max: 100_000, decimals: 0, rangeMessage: 'A whole number, 0 or more.' };
 
-/** The arrival day: on or after the entry's day, not after today. */
-const arrivalRule = (entry: LedgerEntryResponse, today: string) => (v: string) =>
-  checkDate(v, {
-    required: 'On which day did it arrive?',
-    latest: today,
-    latestMessage: 'This has happened, so it cannot be after today.',
-    earliest: entry.date,
-    earliestMessage: `It cannot have arrived before it was sent on ${formatDate(entry.date)}.`,
-  });
+/** The arrival day, not after today (the sender's day may be in another zone, so the server judges the order). */
+const arrivalRule = (today: string) => (v: string) =>
+  checkDate(v, { required: 'On which day did it arrive?', latest: today, latestMessage: 'This has happened, so it cannot be after today.' });
 
 /** The recipient confirms a hand-over with the arrival counts (losses after it are theirs), after one question. */
 function ConfirmHandOver({ projectId, entry, today }: { projectId: string; entry: LedgerEntryResponse; today: string }) {
@@ -46,7 +40,7 @@ function ConfirmHandOver({ projectId, entry, today }: { projectId: string; entry
         checkNumber(v, { ...COUNT, required: 'How many arrived alive?' }) ??
         ((readNumber(v) ?? 0) + (readNumber(all.arrivedDead) ?? 0) > count ? `Alive and dead together cannot be more than the ${count} handed over.` : null),
       arrivedDead: numberRule(COUNT),
-      date: arrivalRule(entry, today),
+      date: arrivalRule(today),
     },
   });
   const submit = form.onSubmit((v) => {
@@ -96,7 +90,7 @@ function ConfirmPayment({ projectId, entry, today }: { projectId: string; entry:
   const confirm = useConfirmEntry(projectId);
   const [asking, setAsking] = useState(false);
   const [date, setDate] = useState(today);
-  const dateError = arrivalRule(entry, today)(date);
+  const dateError = arrivalRule(today)(date);
   return (
     <Stack gap="xs">
       <Group>
