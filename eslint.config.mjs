@@ -1,6 +1,7 @@
 // Lint for every workspace. Beyond typescript-eslint's recommended rules it enforces
-// the architecture: no import cycles anywhere, and in the client one-way imports
-// (shared code → features → app) with no feature importing another feature.
+// the architecture: no import cycles anywhere; in the client one-way imports
+// (shared code → features → app) with no feature importing another feature; in the
+// server a ground floor (common/, config/, database/) that imports no feature.
 import { readdirSync, existsSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -9,6 +10,8 @@ import tseslint from 'typescript-eslint';
 import { importX } from 'eslint-plugin-import-x';
 import { createTypeScriptImportResolver } from 'eslint-import-resolver-typescript';
 import globals from 'globals';
+import reactHooks from 'eslint-plugin-react-hooks';
+import pluginQuery from '@tanstack/eslint-plugin-query';
 
 /** Zones that keep client features apart and imports one-way (after bulletproof-react). */
 function clientBoundaryZones(root) {
@@ -34,9 +37,40 @@ function clientBoundaryZones(root) {
   ];
 }
 
+/**
+ * Zones that keep the server's ground floor (common/, config/, database/) free of features,
+ * as in NestJS's samples where common/ imports only Nest: features build on it, never the reverse.
+ */
+function serverBoundaryZones(root) {
+  const src = path.join(root, 'server/src');
+  const groundFloor = ['common', 'config', 'database'];
+  const features = existsSync(src)
+    ? readdirSync(src, { withFileTypes: true })
+        .filter((d) => d.isDirectory() && !groundFloor.includes(d.name))
+        .map((d) => path.join(src, d.name))
+    : [];
+  if (!features.length) return [];
+  return groundFloor.map((floor) => ({
+    target: path.join(src, floor),
+    from: features,
+    message: `server/src/${floor} knows no feature; move the shared piece down into common/ or invert the dependency (a registry the feature fills).`,
+  }));
+}
+
 export function createConfig({ root }) {
   return tseslint.config(
-    { ignores: ['**/dist/**', '**/node_modules/**', '**/coverage/**', '.data/**', 'client/test/lint-fixture/**', '**/*.d.ts', '**/*.d.mts'] },
+    {
+      ignores: [
+        '**/dist/**',
+        '**/node_modules/**',
+        '**/coverage/**',
+        '.data/**',
+        'client/test/lint-fixture/**',
+        'server/test/lint-fixture/**',
+        '**/*.d.ts',
+        '**/*.d.mts',
+      ],
+    },
     js.configs.recommended,
     ...tseslint.configs.recommended,
     {
@@ -57,7 +91,7 @@ export function createConfig({ root }) {
       },
       rules: {
         'import-x/no-cycle': ['error', { ignoreExternal: true }],
-        'import-x/no-restricted-paths': ['error', { zones: clientBoundaryZones(root) }],
+        'import-x/no-restricted-paths': ['error', { zones: [...clientBoundaryZones(root), ...serverBoundaryZones(root)] }],
         '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_', destructuredArrayIgnorePattern: '^_' }],
         '@typescript-eslint/consistent-type-imports': 'off',
       },
@@ -76,6 +110,9 @@ export function createConfig({ root }) {
       files: ['client/**/*.{ts,tsx}'],
       languageOptions: { globals: { ...globals.browser } },
     },
+    // React's rules of hooks (with the compiler-based checks of 7.x) and TanStack Query's rules, for the client only.
+    { files: ['client/**/*.{ts,tsx}'], ...reactHooks.configs.flat.recommended },
+    ...pluginQuery.configs['flat/recommended'].map((config) => ({ ...config, files: ['client/**/*.{ts,tsx}'] })),
   );
 }
 

@@ -1,6 +1,8 @@
 #!/usr/bin/env bash
-# npm run bench: measures, on a throw-away PostgreSQL, the figures the targets in
-# docs/performance.md talk about, and prints them. It asserts nothing; read the numbers.
+# npm run bench: seeds the benchmark dataset into a throw-away PostgreSQL, serves the production
+# build, and measures the figures the targets in docs/performance.md talk about. It asserts
+# nothing; read the numbers. BENCH_SCALE (default 1) shrinks the dataset for a quick look,
+# BENCH_SECONDS (default 5) sets each run's length, BENCH_CONNECTIONS (default 1,10,50) the steps.
 source "$(dirname "${BASH_SOURCE[0]}")/lib.sh"
 ensure_node_modules
 ensure_postgres_installed
@@ -14,15 +16,15 @@ PGPORT="$(free_port)"
 PG_FSYNC=off pg_start "$WORK/pg" "$PGPORT"
 pg_ensure_db "$WORK/pg" "$PGPORT" broodsilk_bench
 export DATABASE_URL="postgres://app@127.0.0.1:$PGPORT/broodsilk_bench"
-export JWT_SECRET="$(node -e "console.log(require('crypto').randomBytes(32).toString('hex'))")" CSRF_SECRET="$(node -e "console.log(require('crypto').randomBytes(32).toString('hex'))")"
-export SMTP_PORT="$(free_port)" MAILDEV_WEB_PORT="$(free_port)" S3_PORT="$(free_port)" S3RVER_DIR="$WORK/s3" STRIPE_API_PORT="$(free_port)"
-export S3_ENDPOINT="http://127.0.0.1:$S3_PORT" S3_REGION=us-east-1 S3_BUCKET=broodsilk-photos S3_ACCESS_KEY_ID=S3RVER S3_SECRET_ACCESS_KEY=S3RVER S3_FORCE_PATH_STYLE=true
-export STRIPE_SECRET_KEY=sk_test_bench STRIPE_WEBHOOK_SECRET=whsec_bench STRIPE_API_HOST=127.0.0.1 STRIPE_API_PROTOCOL=http
-export APP_PORT="$(free_port)" LOG_LEVEL=silent
+export JWT_SECRET="$(node -e "console.log(require('crypto').randomBytes(32).toString('hex'))")" CSRF_SECRET="$(node -e "console.log(require('crypto').randomBytes(32).toString('hex'))")" CALENDAR_SECRET="$(node -e "console.log(require('crypto').randomBytes(32).toString('hex'))")"
+service_env free "$WORK/s3"
+export STRIPE_SECRET_KEY=sk_test_bench STRIPE_WEBHOOK_SECRET=whsec_bench
+export APP_PORT="$(free_port)" LOG_LEVEL=silent AUTH_RATE_LIMIT=1000000
 
-node "$ROOT/scripts/services.mjs" >"$WORK/services.log" 2>&1 & PIDS+=($!)
-(cd "$ROOT" && npm run build --silent -w shared && npm run build --silent -w server) >/dev/null
+start_services "$WORK/services.log"; PIDS+=("$SERVICES_PID")
+log "building"
+(cd "$ROOT" && npm run build --silent) >/dev/null
 (cd "$ROOT/server" && node dist/cli/migrate.js >/dev/null)
-(cd "$ROOT/server" && PORT="$APP_PORT" NODE_ENV=production exec node dist/main.js >"$WORK/app.log" 2>&1) & PIDS+=($!)
+(cd "$ROOT/server" && PORT="$APP_PORT" CLIENT_DIST="$ROOT/client/dist" PUBLIC_URL="http://127.0.0.1:$APP_PORT" NODE_ENV=production exec node dist/main.js >"$WORK/app.log" 2>&1) & PIDS+=($!)
 for _ in $(seq 1 150); do curl -sf "http://127.0.0.1:$APP_PORT/api/health" >/dev/null && break; sleep 0.2; done
 BASE_URL="http://127.0.0.1:$APP_PORT" node "$ROOT/scripts/bench.mjs"

@@ -103,3 +103,32 @@ local_secret() {
   [ -s "$file" ] || { mkdir -p "$(dirname "$file")"; node -e "console.log(require('crypto').randomBytes(32).toString('base64url'))" >"$file"; chmod 600 "$file"; }
   cat "$file"
 }
+
+# service_env PORTS S3DIR — exports the environment of the local stand-ins (mail sink, S3 fake,
+# payment fake) that scripts/services.mjs and the server both read. PORTS "usual": the fixed local
+# ports the README names (each overridable); "free": ports chosen by the kernel, so parallel runs
+# do not collide. Secrets stay with the caller.
+service_env() {
+  if [ "$1" = usual ]; then
+    SMTP_PORT="${SMTP_PORT:-1025}" MAILDEV_WEB_PORT="${MAILDEV_WEB_PORT:-1080}" S3_PORT="${S3_PORT:-4569}" STRIPE_API_PORT="${STRIPE_API_PORT:-12111}"
+  else
+    SMTP_PORT="$(free_port)" MAILDEV_WEB_PORT="$(free_port)" S3_PORT="$(free_port)" STRIPE_API_PORT="$(free_port)"
+  fi
+  export SMTP_HOST=127.0.0.1 SMTP_PORT MAILDEV_WEB_PORT MAILDEV_API="http://127.0.0.1:$MAILDEV_WEB_PORT"
+  export S3_PORT S3RVER_DIR="$2" S3_ENDPOINT="http://127.0.0.1:$S3_PORT" S3_REGION=us-east-1 S3_BUCKET=broodsilk-photos
+  export S3_ACCESS_KEY_ID=S3RVER S3_SECRET_ACCESS_KEY=S3RVER S3_FORCE_PATH_STYLE=true
+  export STRIPE_API_PORT STRIPE_API_HOST=127.0.0.1 STRIPE_API_PROTOCOL=http
+}
+
+# start_services LOG — runs the stand-ins in the background (pid in SERVICES_PID) and waits until they are ready.
+start_services() {
+  node "$ROOT/scripts/services.mjs" >"$1" 2>&1 &
+  SERVICES_PID=$!
+  for _ in $(seq 1 100); do
+    grep -q 'services ready' "$1" 2>/dev/null && return 0
+    kill -0 "$SERVICES_PID" 2>/dev/null || break
+    sleep 0.2
+  done
+  cat "$1"
+  die "the service stand-ins did not start"
+}

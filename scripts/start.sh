@@ -14,29 +14,37 @@ PGDIR="$(pg_home_for "$ROOT/.data/pg")"
 SECRETS="$ROOT/.data/secrets"
 
 PIDS=()
+OWN_PG=0
 cleanup() {
   trap - INT TERM EXIT
   log "stopping"
   for pid in "${PIDS[@]}"; do kill "$pid" 2>/dev/null || true; done
   wait 2>/dev/null || true
-  pg_stop "$PGDIR"
+  [ "$OWN_PG" = 1 ] && pg_stop "$PGDIR"
 }
 trap cleanup INT TERM EXIT
 
-log "PostgreSQL on 127.0.0.1:$PGPORT (data in $PGDIR)"
-pg_start "$PGDIR" "$PGPORT"
-pg_ensure_db "$PGDIR" "$PGPORT" broodsilk
+# The operator's own DATABASE_URL means a real install: no local PostgreSQL, and never the demo
+# accounts (the seed CLI checks this itself too: src/seed/demo-gate.ts).
+if [ -n "${DATABASE_URL:-}" ]; then
+  OWN_PG=0
+  unset BROODSILK_DEMO
+  log "using the operator's DATABASE_URL; the demo is not seeded"
+else
+  OWN_PG=1
+  log "PostgreSQL on 127.0.0.1:$PGPORT (data in $PGDIR)"
+  pg_start "$PGDIR" "$PGPORT"
+  pg_ensure_db "$PGDIR" "$PGPORT" broodsilk
+  export DATABASE_URL="postgres://app@127.0.0.1:$PGPORT/broodsilk" BROODSILK_DEMO=1
+fi
 
 export NODE_ENV=production
-export DATABASE_URL="postgres://app@127.0.0.1:$PGPORT/broodsilk"
 export JWT_SECRET="${JWT_SECRET:-$(local_secret "$SECRETS/jwt")}"
 export CSRF_SECRET="${CSRF_SECRET:-$(local_secret "$SECRETS/csrf")}"
+export CALENDAR_SECRET="${CALENDAR_SECRET:-$(local_secret "$SECRETS/calendar")}"
 export PORT HOST=127.0.0.1 PUBLIC_URL="${PUBLIC_URL:-http://127.0.0.1:$PORT}"
-export SMTP_HOST=127.0.0.1 SMTP_PORT="${SMTP_PORT:-1025}" MAILDEV_WEB_PORT="${MAILDEV_WEB_PORT:-1080}"
-export S3_PORT="${S3_PORT:-4569}" S3RVER_DIR="$ROOT/.data/s3"
-export S3_ENDPOINT="http://127.0.0.1:$S3_PORT" S3_REGION=us-east-1 S3_BUCKET=broodsilk-photos S3_ACCESS_KEY_ID=S3RVER S3_SECRET_ACCESS_KEY=S3RVER S3_FORCE_PATH_STYLE=true
-export STRIPE_API_PORT="${STRIPE_API_PORT:-12111}" STRIPE_API_HOST=127.0.0.1 STRIPE_API_PROTOCOL=http
-export STRIPE_SECRET_KEY="${STRIPE_SECRET_KEY:-sk_test_broodsilk_local}" STRIPE_WEBHOOK_SECRET="${STRIPE_WEBHOOK_SECRET:-whsec_broodsilk_local}"
+service_env usual "$ROOT/.data/s3"
+export STRIPE_SECRET_KEY="${STRIPE_SECRET_KEY:-sk_test_broodsilk_local}" STRIPE_WEBHOOK_SECRET="${STRIPE_WEBHOOK_SECRET:-whsec_$(local_secret "$SECRETS/payment-webhook")}"
 export PAYMENT_WEBHOOK_URL="http://127.0.0.1:$PORT/api/webhooks/payments"
 export CLIENT_DIST="$ROOT/client/dist"
 
@@ -48,9 +56,8 @@ log "migrating"
 
 log "starting the local service stand-ins"
 SERVICES_LOG="$ROOT/.data/services.log"
-node "$ROOT/scripts/services.mjs" >"$SERVICES_LOG" 2>&1 &
-PIDS+=($!)
-for _ in $(seq 1 100); do grep -q 'services ready' "$SERVICES_LOG" 2>/dev/null && break; kill -0 "${PIDS[-1]}" 2>/dev/null || { cat "$SERVICES_LOG"; die "services failed"; }; sleep 0.2; done
+start_services "$SERVICES_LOG"
+PIDS+=("$SERVICES_PID")
 grep '^  ' "$SERVICES_LOG" || true
 
 (cd "$ROOT/server" && exec node dist/main.js) &
@@ -60,5 +67,9 @@ if [ "$DEV" = 1 ]; then
   PIDS+=($!)
   log "dev server with hot reload: http://127.0.0.1:5173"
 fi
-log "Broodsilk: http://127.0.0.1:$PORT   (demo sign-in: keeper@broodsilk.test / broodsilk-demo; Ctrl-C stops)"
+if [ "${BROODSILK_DEMO:-}" = 1 ]; then
+  log "Broodsilk: $PUBLIC_URL   (demo sign-in: keeper@broodsilk.test / broodsilk-demo; Ctrl-C stops)"
+else
+  log "Broodsilk: $PUBLIC_URL   (first administrator: npm run create-admin -w server; see docs/operations.md; Ctrl-C stops)"
+fi
 wait -n "${PIDS[@]}" || true

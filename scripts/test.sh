@@ -32,20 +32,15 @@ pg_ensure_db "$WORK/pg" "$PGPORT" broodsilk_e2e_test
 export TEST_DATABASE_URL="postgres://app@127.0.0.1:$PGPORT/broodsilk_test"
 export JWT_SECRET="$(node -e "console.log(require('crypto').randomBytes(32).toString('hex'))")"
 export CSRF_SECRET="$(node -e "console.log(require('crypto').randomBytes(32).toString('hex'))")"
-export SMTP_HOST=127.0.0.1 SMTP_PORT="$(free_port)" MAILDEV_WEB_PORT="$(free_port)"
-export MAILDEV_API="http://127.0.0.1:$MAILDEV_WEB_PORT"
-export S3_PORT="$(free_port)" S3RVER_DIR="$WORK/s3"
-export S3_ENDPOINT="http://127.0.0.1:$S3_PORT" S3_REGION=us-east-1 S3_BUCKET=broodsilk-photos S3_ACCESS_KEY_ID=S3RVER S3_SECRET_ACCESS_KEY=S3RVER S3_FORCE_PATH_STYLE=true
+export CALENDAR_SECRET="$(node -e "console.log(require('crypto').randomBytes(32).toString('hex'))")"
+service_env free "$WORK/s3"
 export APP_PORT="$(free_port)"
-export STRIPE_API_PORT="$(free_port)" STRIPE_API_HOST=127.0.0.1 STRIPE_API_PROTOCOL=http
 export STRIPE_SECRET_KEY="sk_test_$(node -e "console.log(require('crypto').randomBytes(12).toString('hex'))")" STRIPE_WEBHOOK_SECRET="whsec_test_$(node -e "console.log(require('crypto').randomBytes(12).toString('hex'))")"
 export PAYMENT_WEBHOOK_URL="http://127.0.0.1:$APP_PORT/api/webhooks/payments"
 export LOG_LEVEL=silent
 
-node "$ROOT/scripts/services.mjs" >"$WORK/services.log" 2>&1 &
-PIDS+=($!)
-for _ in $(seq 1 100); do grep -q 'services ready' "$WORK/services.log" && break; sleep 0.2; done
-grep -q 'services ready' "$WORK/services.log" || { cat "$WORK/services.log"; die "service stand-ins did not start"; }
+start_services "$WORK/services.log"
+PIDS+=("$SERVICES_PID")
 
 cd "$ROOT"
 step "build shared" npm run build --silent -w shared
@@ -59,7 +54,7 @@ step "client tests" bash -c "cd client && npx vitest run --reporter=default --re
 # Browser tests: the built app, served as in production, against its own seeded database.
 step "build server and client" bash -c "npm run build --silent -w server && npm run build --silent -w client >/dev/null"
 export DATABASE_URL="postgres://app@127.0.0.1:$PGPORT/broodsilk_e2e_test"
-if (cd server && node dist/cli/migrate.js >/dev/null && node dist/cli/seed.js >/dev/null); then
+if (cd server && node dist/cli/migrate.js >/dev/null && BROODSILK_DEMO=1 node dist/cli/seed.js >/dev/null); then
   (cd server && PORT="$APP_PORT" CLIENT_DIST="$ROOT/client/dist" PUBLIC_URL="http://127.0.0.1:$APP_PORT" NODE_ENV=production exec node dist/main.js >"$WORK/app.log" 2>&1) &
   PIDS+=($!)
   for _ in $(seq 1 150); do curl -sf "http://127.0.0.1:$APP_PORT/api/health" >/dev/null && break; sleep 0.2; done

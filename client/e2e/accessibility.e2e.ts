@@ -22,7 +22,7 @@ interface Finding {
 }
 
 /** Sets the colour scheme the app keeps in localStorage (Mantine's colour scheme manager). */
-async function useScheme(page: Page, scheme: Scheme) {
+async function setScheme(page: Page, scheme: Scheme) {
   await page.evaluate((s) => localStorage.setItem('mantine-color-scheme-value', s), scheme);
 }
 
@@ -59,7 +59,7 @@ describe('accessibility (axe-core, WCAG 2.2 AA) in both colour schemes', () => {
     const titles = new Map<string, string>();
     await b.page.goto(`${BASE_URL}/sign-in`);
     for (const scheme of SCHEMES) {
-      await useScheme(b.page, scheme);
+      await setScheme(b.page, scheme);
       for (const route of PUBLIC_ROUTES) await audit(b.page, route, scheme, findings, titles);
     }
     expect(findings).toEqual([]);
@@ -83,7 +83,7 @@ describe('accessibility (axe-core, WCAG 2.2 AA) in both colour schemes', () => {
       const titles = new Map<string, string>();
       const routes = [...FIXED_ROUTES];
       for (const scheme of SCHEMES) {
-        await useScheme(page, scheme);
+        await setScheme(page, scheme);
         for (const route of routes) {
           await audit(page, route, scheme, findings, titles);
           if (scheme !== 'light') continue;

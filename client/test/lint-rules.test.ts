@@ -16,7 +16,7 @@ async function lint(file: string) {
   return result.messages.map((m) => m.ruleId);
 }
 
-describe('architecture lint rules are on', () => {
+describe('architecture and client lint rules are on', { timeout: 30_000 }, () => {
   it('an import across client features is an error', async () => {
     expect(await lint('client/src/features/alpha/alpha-card.ts')).toContain('import-x/no-restricted-paths');
   });
@@ -25,7 +25,26 @@ describe('architecture lint rules are on', () => {
     expect(await lint('client/src/lib/ping.ts')).toContain('import-x/no-cycle');
   });
 
+  it('a hook after an early return is an error (eslint-plugin-react-hooks)', async () => {
+    expect(await lint('client/src/lib/conditional-hook.tsx')).toContain('react-hooks/rules-of-hooks');
+  });
+
+  it('a query key that leaves out what the query function reads is an error (@tanstack/eslint-plugin-query)', async () => {
+    expect(await lint('client/src/lib/unkeyed-query.ts')).toContain('@tanstack/query/exhaustive-deps');
+  });
+
   it('a clean file passes', async () => {
     expect(await lint('client/src/lib/clean.ts')).toEqual([]);
+  });
+});
+
+// The root configuration also guards the server's ground floor; its fixture sits beside the client's.
+describe('server architecture lint rules are on', () => {
+  it('common/ importing a server feature is an error', async () => {
+    expect(await lint('server/src/common/reads-feature.ts')).toContain('import-x/no-restricted-paths');
+  });
+
+  it('a server feature importing the ground floor passes', async () => {
+    expect(await lint('server/src/sacs/uses-ground-floor.ts')).toEqual([]);
   });
 });

@@ -3,7 +3,7 @@
 /**
  * Runs the local payment provider fake as a process:
  *   node scripts/payment-fake/start.mjs
- * Environment: PAYMENT_FAKE_PORT (default 12180; 0 picks a free port),
+ * Environment: PAYMENT_FAKE_PORT (default 12111, the STRIPE_API_PORT the server expects; 0 picks a free port),
  * PAYMENT_FAKE_HOST (default 127.0.0.1), PAYMENT_FAKE_PUBLIC_URL (optional),
  * STRIPE_SECRET_KEY and STRIPE_WEBHOOK_SECRET (required),
  * PAYMENT_WEBHOOK_URL (optional; without it events are only logged).
@@ -12,7 +12,7 @@
 import { startPaymentFake } from './server.mjs';
 
 const env = process.env;
-const port = Number(env.PAYMENT_FAKE_PORT ?? 12180);
+const port = Number(env.PAYMENT_FAKE_PORT ?? 12111);
 if (!Number.isInteger(port) || port < 0 || port > 65535) {
   console.error(`payment fake: PAYMENT_FAKE_PORT must be a port number, not "${env.PAYMENT_FAKE_PORT}"`);
   process.exit(2);

@@ -26,7 +26,8 @@ import { SacsModule } from './sacs/sacs.module';
 import { DashboardModule } from './dashboard/dashboard.module';
 import { CalendarModule } from './calendar/calendar.module';
 import { RemindersModule } from './reminders/reminders.module';
-import { ProjectRoleGuard } from './common/guards/project-role.guard';
+import { ProjectRoleGuard } from './projects/project-role.guard';
+import { ClockModule } from './common/clock.module';
 import { AccountsModule } from './accounts/accounts.module';
 import { SettlementsModule } from './settlements/settlements.module';
 
@@ -66,6 +67,7 @@ function staticClient(): DynamicModule[] {
       driver: PostgreSqlDriver,
     }),
     ...staticClient(),
+    ClockModule,
     AuthModule,
     UsersModule,
     HealthModule,

@@ -5,13 +5,17 @@ import helmet from 'helmet';
 import { Logger } from 'nestjs-pino';
 import { validationExceptionFactory } from './common/filters/validation-exception.factory';
 import { CSRF } from './common/csrf/csrf.provider';
+import { bodyParsers } from './common/body/body-parsers';
+import { answerMiddlewareErrors } from './common/filters/middleware-errors';
+import { RefuseUnstorableTextPipe } from './common/pipes/refuse-unstorable-text.pipe';
+import { parseTrustProxy } from './config/trust-proxy';
 import type { Csrf } from './common/csrf/csrf';
 
 /** Everything main.ts and the tests must share, so tests exercise the real app. */
 export function configureApp(app: INestApplication): INestApplication {
   const express = app as NestExpressApplication;
   express.useLogger(app.get(Logger));
-  express.set('trust proxy', 'loopback');
+  express.set('trust proxy', parseTrustProxy(process.env.TRUST_PROXY));
   express.disable('x-powered-by');
   app.setGlobalPrefix('api');
   app.use(
@@ -23,7 +27,12 @@ export function configureApp(app: INestApplication): INestApplication {
   );
   app.use(cookieParser());
   app.use(app.get<Csrf>(CSRF).doubleCsrfProtection);
-  app.useGlobalPipes(new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true, exceptionFactory: validationExceptionFactory }));
+  app.use(...bodyParsers());
+  app.use(answerMiddlewareErrors);
+  app.useGlobalPipes(
+    new RefuseUnstorableTextPipe(),
+    new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true, exceptionFactory: validationExceptionFactory }),
+  );
   app.enableShutdownHooks();
   return app;
 }

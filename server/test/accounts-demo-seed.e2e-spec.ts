@@ -19,7 +19,7 @@ let t: TestApp;
 const broodIfMissing: FeatureSeeder = async (ctx) => {
   const p = await findDemoProject(ctx.em, ctx, 'versicolorBrood');
   if (await ctx.em.count(Sac, { project: p })) return;
-  const sac = ctx.em.create(Sac, { project: p, layDate: '2026-05-01', outcome: 'hatched', broodStage: 'second-instar', recordedBy: ctx.users.keeper });
+  const sac = ctx.em.create(Sac, { project: p, layDate: '2026-05-01', outcome: 'emerged', broodStage: 'second-instar', recordedBy: ctx.users.keeper });
   ctx.em.create(BroodCount, { sac, at: new Date('2026-06-01T18:00:00Z'), stage: 'second-instar', alive: 40, source: 'count', recordedBy: ctx.users.keeper });
 };
 

@@ -100,6 +100,44 @@ describe('CSV export (RFC 4180, checked with papaparse as an independent parser)
   });
 });
 
+describe('formula-like text (OWASP CSV Injection: = + - @ tab CR start a formula in a spreadsheet)', () => {
+  // Typed text is trimmed, so tab and CR only survive inside; they are covered by the unit spec of formula-cells.
+  const FORMULAS = ['=HYPERLINK("http://evil.test","click")', '+1+1', '-2+3', '@SUM(A1:A9)', "'=already quoted", '-12.50'];
+
+  it('is written with a leading apostrophe, plain numbers excepted, and imports back exactly', async () => {
+    const keeper = await registerKeeper(t.app, 'Formula Keeper');
+    for (const [i, notes] of FORMULAS.entries()) {
+      await createAnimal(t.app, keeper, {
+        speciesId: vagans,
+        label: i === 0 ? '=1+1' : `FX-${i}`,
+        sex: 'female',
+        maturity: 'immature',
+        notes,
+        enclosure: '@shelf',
+      });
+    }
+    const { text } = await exportCsv(keeper);
+    const rows = Papa.parse<Record<string, string>>(text.slice(1), { header: true, skipEmptyLines: true }).data;
+    const byLabel = new Map(rows.map((r) => [r.label, r]));
+    expect(byLabel.get("'=1+1")?.notes).toBe(`'${FORMULAS[0]}`);
+    expect(rows.map((r) => r.notes).sort()).toEqual(
+      ["'+1+1", "''=already quoted", "'-2+3", '\'=HYPERLINK("http://evil.test","click")', "'@SUM(A1:A9)", '-12.50'].sort(),
+    );
+    expect(rows.every((r) => r.enclosure === "'@shelf")).toBe(true);
+
+    const copy = await registerKeeper(t.app, 'Formula Copy');
+    await importCsv(copy, text).expect(201);
+    const list = (await http().get('/api/animals').query({ sort: 'label' }).set('Authorization', copy.bearer).expect(200)).body.items as AnimalSummary[];
+    expect(list.map((a) => a.label).sort()).toEqual(['=1+1', ...FORMULAS.slice(1).map((_, i) => `FX-${i + 1}`)].sort());
+    const notes = await Promise.all(
+      list.map(async (a) => (await http().get(`/api/animals/${a.id}`).set('Authorization', copy.bearer).expect(200)).body.notes as string),
+    );
+    expect(notes.sort()).toEqual([...FORMULAS].sort());
+    expect(list.every((a) => a.enclosure === '@shelf')).toBe(true);
+    expect((await exportCsv(copy)).text).toBe(text);
+  });
+});
+
 describe('CSV import', () => {
   it('reads RFC 4180 edge cases written by hand, with a BOM, and species by a former name', async () => {
     const keeper = await registerKeeper(t.app, 'Hand Written');

@@ -139,7 +139,7 @@ describe('clear 400s with field messages', () => {
 });
 
 describe('owner and custody', () => {
-  it('a male owned by another keeper, on loan to me, with a due-back date', async () => {
+  it('a male owned by another keeper, on loan to me: nothing about the keeper shows until they accept', async () => {
     const lender = await registerKeeper(t.app, 'Lender');
     const a = await createAnimal(t.app, mira, {
       speciesId: regalis,
@@ -152,29 +152,45 @@ describe('owner and custody', () => {
       custody: 'loan-in',
       dueBackOn: addDays(today, 60),
     });
-    expect(a).toMatchObject({
-      owner: { kind: 'keeper', userId: lender.user.id, name: 'Lender' },
-      custody: 'loan-in',
-      custodyParty: 'Lender',
-      dueBackOn: addDays(today, 60),
-    });
+    const email = lender.user.email.toLowerCase();
+    expect(a).toMatchObject({ owner: { kind: 'keeper', name: email, email, awaitingAcceptance: true }, custody: 'loan-in', custodyParty: email });
+    expect(a.owner.userId).toBeUndefined();
     // the owner does not see the record: it lives in the holder's collection
     await http().get(`/api/animals/${a.id}`).set('Authorization', lender.bearer).expect(404);
+
+    // Only the keeper with that address sees the request and accepts it.
+    const asked = await http().get('/api/animals/ownership-requests').set('Authorization', lender.bearer).expect(200);
+    expect(asked.body).toEqual([{ animalId: a.id, label: 'PR-LOAN', speciesName: expect.any(String), recordedBy: mira.user.displayName }]);
+    expect((await http().get('/api/animals/ownership-requests').set('Authorization', mira.bearer).expect(200)).body).toEqual([]);
+    await http().post(`/api/animals/ownership-requests/${a.id}/accept`).set('Authorization', mira.bearer).expect(404);
+    await http().post(`/api/animals/ownership-requests/${a.id}/accept`).expect(401);
+    await http().post(`/api/animals/ownership-requests/${a.id}/accept`).set('Authorization', lender.bearer).expect(204);
+    const after = await http().get(`/api/animals/${a.id}`).set('Authorization', mira.bearer).expect(200);
+    expect(after.body.owner).toEqual({ kind: 'keeper', userId: lender.user.id, name: 'Lender' });
+    await http().post(`/api/animals/ownership-requests/${a.id}/accept`).set('Authorization', lender.bearer).expect(404);
   });
 
-  it('refuses a loan-in owned by myself and an unknown keeper e-mail', async () => {
+  it('answers a known and an unknown keeper e-mail the same way (no account enumeration), and refuses my own', async () => {
+    const known = await registerKeeper(t.app, 'Known Keeper');
+    const save = (label: string, ownerEmail: string) =>
+      http().post('/api/animals').set('Authorization', mira.bearer).send({ speciesId: regalis, label, sex: 'male', ownerKind: 'keeper', ownerEmail });
+    const a = await save('PR-K1', known.user.email);
+    const b = await save('PR-K2', 'nobody.here@example.test');
+    expect([a.status, b.status]).toEqual([201, 201]);
+    const shape = (body: { owner: object }) => Object.keys(body.owner).sort();
+    expect(shape(a.body)).toEqual(shape(b.body));
+    expect(a.body.owner).toEqual({ kind: 'keeper', name: known.user.email.toLowerCase(), email: known.user.email.toLowerCase(), awaitingAcceptance: true });
+    const mine = await save('PR-K3', mira.user.email).expect(400);
+    expect(mine.body.details).toEqual([{ field: 'ownerEmail', message: 'That is your own e-mail: choose yourself as the owner instead.' }]);
+  });
+
+  it('refuses a loan-in owned by myself', async () => {
     const selfLoan = await http()
       .post('/api/animals')
       .set('Authorization', mira.bearer)
       .send({ speciesId: regalis, label: 'PR-X', sex: 'male', custody: 'loan-in' })
       .expect(400);
     expect(selfLoan.body.details).toContainEqual({ field: 'custody', message: expect.stringMatching(/belongs to someone else/) });
-    const unknown = await http()
-      .post('/api/animals')
-      .set('Authorization', mira.bearer)
-      .send({ speciesId: regalis, label: 'PR-X', sex: 'male', ownerKind: 'keeper', ownerEmail: 'nobody@example.test' })
-      .expect(400);
-    expect(unknown.body.details).toEqual([{ field: 'ownerEmail', message: expect.stringMatching(/No keeper of this instance/) }]);
   });
 
   it('sold and deceased need a date', async () => {
@@ -188,7 +204,7 @@ describe('owner and custody', () => {
 
 describe('male clock in responses', () => {
   // State boundaries as shared/collection/male-clock.ts defines them; Poecilotheria uses the
-  // ow-arboreal group lifespan of 4–12 months (from memory, TRADE-FACTS §5).
+  // ow-arboreal group lifespan of 4–12 months (from memory, docs/trade-facts.md §5).
   it.each([
     [5, 'fresh'],
     [60, 'prime'],

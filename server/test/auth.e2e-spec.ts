@@ -123,12 +123,12 @@ describe('password change and reset', () => {
   it('changing the password needs the current one and ends older sessions', async () => {
     const k = await registerKeeper(t.app);
     await http()
-      .patch('/api/users/me/password')
+      .patch('/api/auth/password')
       .set('Authorization', k.bearer)
       .send({ currentPassword: 'wrong wrong wrong', newPassword: 'brand new password' })
       .expect(400);
     const res = await http()
-      .patch('/api/users/me/password')
+      .patch('/api/auth/password')
       .set('Authorization', k.bearer)
       .send({ currentPassword: k.password, newPassword: 'brand new password' })
       .expect(200);

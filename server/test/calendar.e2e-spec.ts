@@ -7,7 +7,7 @@ import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper, type SignedIn } from './support/users';
 import { addMember, createProject } from './support/projects';
 import { createSac } from './support/sacs';
-import { Clock } from '../src/sacs/clock';
+import { Clock } from '../src/common/clock';
 
 let t: TestApp;
 let owner: SignedIn;
@@ -41,11 +41,16 @@ function parse(text: string): Parsed[] {
   });
 }
 
+const FEED_NOW = '2024-02-20T10:00:00Z';
+
 beforeAll(async () => {
   t = await createTestApp();
   owner = await registerKeeper(t.app, 'Ottilie');
   partner = await registerKeeper(t.app, 'Pim');
+  // The male matures 30 days before the feed's "now", on the app's one clock.
+  const pinned = vi.spyOn(t.app.get(Clock), 'now').mockReturnValue(new Date(FEED_NOW));
   projectId = (await createProject(t.app, t.orm, owner, { title: 'Feed pair', maleAgeDays: 30 })).id;
+  pinned.mockRestore();
   await addMember(t.orm, projectId, partner, 'partner');
 });
 afterEach(() => vi.restoreAllMocks());
@@ -55,7 +60,7 @@ afterAll(async () => {
 
 describe('calendar feed (RFC 5545)', () => {
   it('parses with ical.js; the pull window is an all-day event from opensOn with DTEND the day after closesOn (RFC 5545 §3.6.1)', async () => {
-    vi.spyOn(t.app.get(Clock), 'now').mockReturnValue(new Date('2024-02-20T10:00:00Z'));
+    vi.spyOn(t.app.get(Clock), 'now').mockReturnValue(new Date(FEED_NOW));
     // Laid 2024-02-05, window day 21–24: 26 Feb to 28 Feb… and 29 Feb (leap year), so DTEND is 1 March.
     const sac = await createSac(t.app, owner, projectId, { layDate: '2024-02-05', pullFromDay: 21, pullToDay: 24 });
     const feed = await feedOf(owner);
@@ -81,7 +86,7 @@ describe('calendar feed (RFC 5545)', () => {
     const young = events.find((e) => e.uid === `free-living-${sac.id}@broodsilk`)!;
     expect([young.start, young.end]).toEqual([42, 57].map((d) => DateTime.fromISO('2024-02-05').plus({ days: d }).toISODate())); // day 42 to day 56 inclusive
 
-    // The male matured 30 days before the real today; his later clock changes are in the feed, one day each.
+    // The male matured 30 days before the feed's now; his later clock changes are in the feed, one day each.
     const clock = events.filter((e) => e.uid.startsWith('male-clock-'));
     expect(clock.map((e) => e.uid.split('-').at(-1)!.replace('@broodsilk', ''))).toEqual(expect.arrayContaining(['prime', 'late']));
     for (const e of clock) expect(DateTime.fromISO(e.end).diff(DateTime.fromISO(e.start), 'days').days).toBe(1);

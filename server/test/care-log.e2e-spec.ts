@@ -6,7 +6,7 @@ import { createTestApp, type TestApp } from './support/test-app';
 import type { SignedIn } from './support/users';
 import { projectWithRoles } from './support/projects';
 import { createSac, setTimeZone } from './support/sacs';
-import { Clock } from '../src/sacs/clock';
+import { Clock } from '../src/common/clock';
 
 let t: TestApp;
 let owner: SignedIn;
@@ -107,7 +107,7 @@ describe('stage entries', () => {
 });
 
 describe('readings', () => {
-  it('stores temperatures in °C (°F converted: 77 °F = 25 °C, 80 °F = 26.67 °C, TRADE-FACTS check value 9) and refuses implausible ones', async () => {
+  it('stores temperatures in °C (°F converted: 77 °F = 25 °C, 80 °F = 26.67 °C, docs/trade-facts.md check value 9) and refuses implausible ones', async () => {
     pin(NOW);
     const sac = await pulledSac();
     const c = await log(caretaker, sac.id, { kind: 'temperature', temperature: { value: 26.5, unit: 'C' } }).expect(201);

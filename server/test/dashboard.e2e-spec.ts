@@ -6,7 +6,7 @@ import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper, type SignedIn } from './support/users';
 import { projectWithRoles } from './support/projects';
 import { createSac } from './support/sacs';
-import { Clock } from '../src/sacs/clock';
+import { Clock } from '../src/common/clock';
 
 let t: TestApp;
 let owner: SignedIn;

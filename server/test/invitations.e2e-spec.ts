@@ -59,7 +59,7 @@ describe('invitations', () => {
     await http().get(`/api/projects/${p.id}`).set('Authorization', tomasz.bearer).expect(404);
     await http().post(`/api/invitations/${token}/accept`).expect(401);
     const joined = await http().post(`/api/invitations/${token}/accept`).set('Authorization', tomasz.bearer).expect(200);
-    expect(joined.body).toEqual({ projectId: p.id, role: 'partner' });
+    expect(joined.body).toEqual({ projectId: p.id, role: 'partner', status: 'joined' });
     const seen = await http().get(`/api/projects/${p.id}`).set('Authorization', tomasz.bearer).expect(200);
     expect(seen.body.myRole).toBe('partner');
 
@@ -131,5 +131,42 @@ describe('invitations', () => {
     await http().post(`/api/projects/${p.id}/invitations`).set('Authorization', mira.bearer).send({ email: partner.user.email, role: 'partner' }).expect(409);
     const bad = await http().post(`/api/projects/${p.id}/invitations`).set('Authorization', mira.bearer).send({ email: 'nope', role: 'owner' }).expect(400);
     expect(bad.body.details.map((d: { field: string }) => d.field).sort()).toEqual(['email', 'role']);
+  });
+
+  it('another account than the invited address only asks to join; it joins once the owner approves', async () => {
+    const p = await createProject(t.app, t.orm, mira, { title: `Forwarded link ${Date.now()}` });
+    const invited = `invited.${Date.now()}@example.test`;
+    const sent = await http().post(`/api/projects/${p.id}/invitations`).set('Authorization', mira.bearer).send({ email: invited, role: 'partner' }).expect(201);
+    const token = await tokenFromMail(invited, p.title);
+    const other = await registerKeeper(t.app, 'Holder Of The Link');
+    const asked = await http().post(`/api/invitations/${token}/accept`).set('Authorization', other.bearer).expect(200);
+    expect(asked.body).toEqual({ projectId: p.id, role: 'partner', status: 'awaiting-owner' });
+    await http().get(`/api/projects/${p.id}`).set('Authorization', other.bearer).expect(404);
+
+    const approve = (who: SignedIn) => http().post(`/api/projects/${p.id}/invitations/${sent.body.id}/approve`).set('Authorization', who.bearer);
+    await approve(other).expect(404); // not a member
+    await http().post(`/api/projects/${p.id}/invitations/${sent.body.id}/approve`).expect(401);
+    const approved = await approve(mira).expect(200);
+    expect(approved.body).toEqual({ projectId: p.id, role: 'partner', status: 'joined' });
+    expect((await http().get(`/api/projects/${p.id}`).set('Authorization', other.bearer).expect(200)).body.myRole).toBe('partner');
+    expect((await approve(mira).expect(410)).body.message).toBe('This invitation has already been used.');
+  });
+
+  it('the owner approves only an invitation someone asked to join with, and only the owner', async () => {
+    const p = await createProject(t.app, t.orm, mira, { title: `Unclaimed ${Date.now()}` });
+    const partner = await registerKeeper(t.app, 'Partner Two');
+    await http().post(`/api/projects/${p.id}/invitations`).set('Authorization', mira.bearer).send({ email: partner.user.email, role: 'partner' }).expect(201);
+    await http()
+      .post(`/api/invitations/${await tokenFromMail(partner.user.email, p.title)}/accept`)
+      .set('Authorization', partner.bearer)
+      .expect(200);
+    const open = await http()
+      .post(`/api/projects/${p.id}/invitations`)
+      .set('Authorization', mira.bearer)
+      .send({ email: 'nobody.yet@example.test', role: 'caretaker' })
+      .expect(201);
+    const approve = (who: SignedIn) => http().post(`/api/projects/${p.id}/invitations/${open.body.id}/approve`).set('Authorization', who.bearer);
+    expect((await approve(partner).expect(403)).body.message).toMatch(/Only the owner/);
+    expect((await approve(mira).expect(409)).body.message).toBe('Nobody has asked to join with this invitation yet.');
   });
 });

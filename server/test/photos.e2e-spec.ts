@@ -1,3 +1,4 @@
+import { crc32, deflateSync } from 'node:zlib';
 import request from 'supertest';
 import sharp from 'sharp';
 import exifr from 'exifr';
@@ -27,6 +28,29 @@ const upload = (url: string, who: SignedIn, bytes: Buffer, filename: string) =>
     .post(url)
     .set('Authorization', who.bearer)
     .attach('file', bytes, { filename, contentType: filename.endsWith('.png') ? 'image/png' : 'image/jpeg' });
+
+/** PNG chunk (ISO/IEC 15948 §5.3): length, type, data, CRC-32 over type and data. */
+function chunk(type: string, data: Buffer): Buffer {
+  const len = Buffer.alloc(4);
+  len.writeUInt32BE(data.length);
+  const crc = Buffer.alloc(4);
+  crc.writeUInt32BE(crc32(Buffer.concat([Buffer.from(type, 'latin1'), data])));
+  return Buffer.concat([len, Buffer.from(type, 'latin1'), data, crc]);
+}
+
+/** A small file whose PNG header claims `width` × `height` pixels: what a decompression bomb looks like before decoding. */
+function pngClaiming(width: number, height: number): Buffer {
+  const ihdr = Buffer.alloc(13);
+  ihdr.writeUInt32BE(width, 0);
+  ihdr.writeUInt32BE(height, 4);
+  ihdr.set([8, 2, 0, 0, 0], 8); // 8-bit truecolour, no interlace
+  return Buffer.concat([
+    Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
+    chunk('IHDR', ihdr),
+    chunk('IDAT', deflateSync(Buffer.alloc(1 + width * 3))), // one row; the rest is never read
+    chunk('IEND', Buffer.alloc(0)),
+  ]);
+}
 
 /** A JPEG carrying a GPS position (51.5 N, 0.125 W) and a camera make, written by sharp's withExif. */
 async function jpegWithGps(): Promise<Buffer> {
@@ -103,6 +127,17 @@ describe('photo uploads', () => {
   it('a file over 15 MB is refused with 413 and a clear message', async () => {
     const res = await upload(`/api/animals/${animal.id}/photos`, mira, Buffer.alloc(15 * 1024 * 1024 + 1, 0xff), 'huge.jpg').expect(413);
     expect(res.body.message).toBe('The photo is larger than 15 MB. Send a smaller one.');
+  });
+
+  it('an image over 40 megapixels is refused from its header with 413, and nothing is stored', async () => {
+    const bomb = pngClaiming(8000, 5001); // 40.008 megapixels in a file of a few kilobytes
+    expect(bomb.length).toBeLessThan(100_000);
+    expect(await sharp(bomb).metadata()).toMatchObject({ format: 'png', width: 8000, height: 5001 });
+    const before = (await http().get(`/api/animals/${animal.id}`).set('Authorization', mira.bearer).expect(200)).body.photos.length;
+    const res = await upload(`/api/animals/${animal.id}/photos`, mira, bomb, 'bomb.png').expect(413);
+    expect(res.body.message).toBe('The photo has 40.0 megapixels (8000 × 5001); at most 40 are taken. Send a smaller one.');
+    const after = (await http().get(`/api/animals/${animal.id}`).set('Authorization', mira.bearer).expect(200)).body.photos.length;
+    expect(after).toBe(before);
   });
 
   it('no file is a 400 naming the field', async () => {

@@ -78,6 +78,12 @@ const payout = async (who = s.tomasz) =>
   (await api(t.app).get('/api/settlements/payout-account').set('Authorization', who.bearer).expect(200)).body as PayoutAccountResponse;
 const checkout = (amountMinor: number, who = s.mira, toMemberId = s.tomaszId) =>
   api(t.app).post(`/api/projects/${s.projectId}/settlements/checkout`).set('Authorization', who.bearer).send({ toMemberId, amountMinor });
+/** An event signed with our own webhook secret, as someone who learnt it could sign one. */
+const signedEvent = (id: string, object: Record<string, unknown>) => {
+  const payload = JSON.stringify({ id, object: 'event', type: 'checkout.session.completed', data: { object } });
+  const signature = stripe.webhooks.generateTestHeaderString({ payload, secret: WEBHOOK_SECRET });
+  return fetch(webhookUrl, { method: 'POST', headers: { 'content-type': 'application/json', 'stripe-signature': signature }, body: payload });
+};
 const moneyEntries = async () =>
   ((await api(t.app).get(`/api/projects/${s.projectId}/entries`).set('Authorization', s.mira.bearer).expect(200)).body as LedgerEntryResponse[]).filter(
     (e) => e.kind === 'money',
@@ -121,6 +127,17 @@ describe('checkout and webhook', () => {
     expect(reverse.status).toBe(409);
   });
 
+  it('a signed event claiming a payment the provider has not seen records nothing; an unknown session is acknowledged and ignored', async () => {
+    const unpaid = (await checkout(2000).expect(201)).body as CheckoutResponse;
+    // The provider's API is the source of truth (Stripe docs, "Fulfill orders": retrieve the Checkout Session).
+    let res = await signedEvent('evt_forged_unpaid', { id: unpaid.sessionId, payment_status: 'paid', amount_total: 2000, currency: 'eur' });
+    expect(res.status).toBe(200);
+    expect(await moneyEntries()).toEqual([]);
+    res = await signedEvent('evt_forged_unknown', { id: 'cs_test_not_ours', payment_status: 'paid', amount_total: 2000, currency: 'eur' });
+    expect(res.status).toBe(200);
+    expect(await moneyEntries()).toEqual([]);
+  });
+
   it('a destination charge to the creditor; paying it records one money entry from the webhook', async () => {
     const res = await checkout(2000);
     expect(res.status, JSON.stringify(res.body)).toBe(201);
@@ -161,6 +178,14 @@ describe('checkout and webhook', () => {
     const last = fake.state.deliveries.filter((d) => d.eventId === completed.id).at(-1)!;
     expect(last).toMatchObject({ redelivery: true, status: 200, ok: true });
     expect(await moneyEntries()).toHaveLength(1);
+  });
+
+  it('a signed event with another amount for a session already paid records nothing more', async () => {
+    const res = await signedEvent('evt_forged_amount', { id: session.sessionId, payment_status: 'paid', amount_total: 500000, currency: 'usd' });
+    expect(res.status).toBe(200);
+    const money = await moneyEntries();
+    expect(money).toHaveLength(1);
+    expect(money[0]).toMatchObject({ amountMinor: 2000, currency: 'EUR' });
   });
 
   it('a bad signature or a stale timestamp is refused with 400 and records nothing', async () => {

@@ -86,6 +86,30 @@ describe('statement CSV', () => {
   });
 });
 
+describe('statement CSV and formula-like text (OWASP CSV Injection)', () => {
+  it('writes text that starts with = + - @ with a leading apostrophe; numbers stay numbers', async () => {
+    const f = await accountScenario(t.app, t.orm);
+    await api(t.app)
+      .post(`/api/projects/${f.projectId}/entries`)
+      .set('Authorization', f.mira.bearer)
+      .send({
+        kind: 'hand-over',
+        date: D,
+        memberId: f.tomaszId,
+        count: 4,
+        method: 'shipment',
+        carrier: '=HYPERLINK("http://evil.test","open")',
+        tracking: '@TRK-9',
+      })
+      .expect(201);
+    const res = await api(t.app).get(`/api/projects/${f.projectId}/statements/${f.tomaszId}.csv`).set('Authorization', f.tomasz.bearer).expect(200);
+    const rows = Papa.parse<Record<string, string>>(res.text.trimEnd(), { header: true }).data;
+    const handOver = rows.find((r) => r.kind === 'hand-over')!;
+    expect(handOver).toMatchObject({ carrier: `'=HYPERLINK("http://evil.test","open")`, tracking: "'@TRK-9", count: '4' });
+    for (const row of rows) for (const cell of Object.values(row)) expect(cell, JSON.stringify(row)).not.toMatch(/^[=+@\t\r]|^-(?!\d+(\.\d+)?$)/);
+  });
+});
+
 describe('statement PDF', () => {
   it('holds the project, party, terms, shares, entries and the same balance figures as the route', async () => {
     const res = await api(t.app)

@@ -1,13 +1,15 @@
 import { MantineProvider } from '@mantine/core';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { QueryClientProvider } from '@tanstack/react-query';
 import { render } from '@testing-library/react';
 import type { ReactElement } from 'react';
-import { MemoryRouter } from 'react-router-dom';
+import { MemoryRouter } from 'react-router';
 import { theme } from '@/config/theme';
+import { createQueryClient } from '@/lib/query-client';
 
-/** Renders inside the app's providers with a fresh QueryClient (no retries) per test. */
+/** Renders inside the app's providers with a fresh query client (the app's, so meta invalidation works; no retries) per test. */
 export function renderWithProviders(ui: ReactElement, { route = '/' }: { route?: string } = {}) {
-  const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
+  const queryClient = createQueryClient();
+  queryClient.setDefaultOptions({ queries: { retry: false }, mutations: { retry: false } });
   const result = render(
     <MantineProvider theme={theme}>
       <QueryClientProvider client={queryClient}>

@@ -2,20 +2,46 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { ProjectMember } from '../projects/project-member.entity';
 import type { Project } from '../projects/project.entity';
 import { LedgerEntryRow } from './ledger-entry.entity';
-import { sacCountsOf } from './sac-counts';
-import { termsInForce } from './terms-in-force';
+import { sacCountsByProject } from './sac-counts';
+import { termsInForceOf } from './terms-in-force';
 import { buildAccountView, type AccountView } from './account-view';
 
 /** Loads a project's members, terms in force, sac counts and ledger, and works out the account. */
 export async function loadAccount(em: EntityManager, project: Project): Promise<AccountView> {
-  // One after another: inside a transaction they share one connection.
-  const members = await em.find(ProjectMember, { project: project.id }, { populate: ['user'], orderBy: { createdAt: 'asc' } });
-  const terms = await termsInForce(em, project.id);
-  const sacs = await sacCountsOf(em, project.id);
+  return (await loadAccounts(em, [project])).get(project.id)!;
+}
+
+/**
+ * The accounts of many projects in a fixed number of queries (lists ask for all of them at once).
+ * One after another: inside a transaction they share one connection.
+ */
+export async function loadAccounts(em: EntityManager, projects: Project[]): Promise<Map<string, AccountView>> {
+  const ids = projects.map((p) => p.id);
+  const members = await em.find(ProjectMember, { project: { $in: ids } }, { populate: ['user'], orderBy: { createdAt: 'asc' } });
+  const terms = await termsInForceOf(em, ids);
+  const sacs = await sacCountsByProject(em, ids);
   const rows = await em.find(
     LedgerEntryRow,
-    { project: project.id },
+    { project: { $in: ids } },
     { populate: ['party', 'fromParty', 'toParty', 'target', 'recordedBy'], orderBy: { seq: 'asc' } },
   );
-  return buildAccountView({ project, members, terms, sacs, rows });
+  const membersOf = byProject(members);
+  const rowsOf = byProject(rows);
+  return new Map(
+    projects.map((p) => [
+      p.id,
+      buildAccountView({ project: p, members: membersOf.get(p.id) ?? [], terms: terms.get(p.id) ?? null, sacs: sacs.get(p.id)!, rows: rowsOf.get(p.id) ?? [] }),
+    ]),
+  );
+}
+
+/** Groups rows by project, keeping their order. */
+function byProject<T extends { project: { id: string } }>(list: T[]): Map<string, T[]> {
+  const out = new Map<string, T[]>();
+  for (const x of list) {
+    const group = out.get(x.project.id);
+    if (group) group.push(x);
+    else out.set(x.project.id, [x]);
+  }
+  return out;
 }

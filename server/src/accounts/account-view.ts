@@ -33,7 +33,7 @@ export interface AccountView {
   totals: { partyId: string; count: number }[];
   /** The ledger as the shared rules read it (pending payments and confirmations left out). */
   entries: LedgerEntry[];
-  /** Money entries still waiting for the other party's confirmation. */
+  /** Entries still waiting for the affected party's acceptance (see pendingEntries). */
   pending: Set<string>;
   balances: AccountBalances;
 }
@@ -45,18 +45,30 @@ export const memberName = (m: ProjectMember): string => m.user?.displayName ?? m
 const WITHDRAWALS = new Set(['hand-over', 'sale', 'cash-out']);
 
 /**
- * A payment counts once the party who received it has said so: it came through the payment
- * provider, the payee recorded it, the payee confirmed it, or the payee has no account and the
- * owner recorded it for them.
+ * The party who must accept an entry before it counts, or null when it counts at once: the payee
+ * of a payment (unless it came through the payment provider), and the party whose young are
+ * cashed out or sold below the price in the terms in force (the owner alone cannot waive a claim).
  */
-export function pendingPayments(data: AccountData, owner: ProjectMember): Set<string> {
+export function acceptorOf(r: LedgerEntryRow, price: number): ProjectMember | null {
+  if (r.kind === 'money') return r.source === 'payment-provider' ? null : r.toParty!;
+  if (r.kind === 'cash-out' && (r.pricePerSpiderlingMinor ?? price) < price) return r.party!;
+  if (r.kind === 'sale' && r.priceMinor! < r.count! * price) return r.party!;
+  return null;
+}
+
+/**
+ * Entries that do not count yet: the acceptor has not recorded or confirmed them. For an acceptor
+ * without an account, the owner's record stands in for theirs.
+ */
+export function pendingEntries(data: AccountData, owner: ProjectMember): Set<string> {
   const confirmed = new Set(data.rows.filter((r) => r.kind === 'confirmation' && r.target).map((r) => r.target!.id));
+  const price = data.terms?.pricePerSpiderlingMinor ?? 0;
   const pending = new Set<string>();
   for (const r of data.rows) {
-    if (r.kind !== 'money' || r.source === 'payment-provider' || confirmed.has(r.id)) continue;
-    const payee = r.toParty!;
+    const acceptor = acceptorOf(r, price);
+    if (!acceptor || confirmed.has(r.id)) continue;
     const recorder = r.recordedBy?.id ?? null;
-    if (payee.user ? recorder === payee.user.id : recorder === owner.user?.id) continue;
+    if (acceptor.user ? recorder === acceptor.user.id : recorder === owner.user?.id) continue;
     pending.add(r.id);
   }
   return pending;
@@ -105,7 +117,7 @@ export function buildAccountView(data: AccountData): AccountView {
   if (!owner) throw new Error(`Project ${data.project.id} has no owner member.`);
   const names = new Map(data.members.map((m) => [m.id, memberName(m)]));
   const nameOf = (id: string) => names.get(id) ?? 'an unknown party';
-  const pending = pendingPayments(data, owner);
+  const pending = pendingEntries(data, owner);
   const excluded = new Set(pending);
   for (const r of data.rows) if (r.kind === 'correction' && r.target && excluded.has(r.target.id)) excluded.add(r.id);
   const entries = data.rows

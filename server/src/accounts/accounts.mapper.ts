@@ -1,7 +1,7 @@
 import type { LedgerEntryResponse, PartyRef } from '@broodsilk/shared';
 import type { ProjectMember } from '../projects/project-member.entity';
 import type { LedgerEntryRow } from './ledger-entry.entity';
-import { memberName, type AccountView } from './account-view';
+import { acceptorOf, memberName, type AccountView } from './account-view';
 
 const ref = (m: ProjectMember | null | undefined): PartyRef | null => (m ? { memberId: m.id, name: memberName(m) } : null);
 
@@ -29,7 +29,7 @@ function toEntryResponse(r: LedgerEntryRow, seq: number, view: AccountView, l: L
   else status = l.problems.has(r.id) ? 'left-out' : 'reversed';
   let awaiting: PartyRef | null = null;
   if (r.kind === 'hand-over' && status === 'in-force' && !l.arrivedFor.has(r.id)) awaiting = ref(r.party);
-  if (status === 'awaiting-confirmation') awaiting = ref(r.toParty);
+  if (status === 'awaiting-confirmation') awaiting = ref(acceptorOf(r, view.data.terms?.pricePerSpiderlingMinor ?? 0));
   return {
     id: r.id,
     seq,

@@ -17,7 +17,7 @@ import { BalancesController } from './balances.controller';
 import { EntriesController } from './entries.controller';
 import { StatementsController } from './statements.controller';
 import { StatementsService } from './statements.service';
-import { loadAccount } from './account-loader';
+import { loadAccounts } from './account-loader';
 import { isSettled } from './balances.mapper';
 
 @Module({
@@ -32,10 +32,8 @@ export class AccountsModule implements OnModuleInit {
   onModuleInit(): void {
     // Stage `shares-settled`: nothing owed in young or money (see balances.mapper isSettled).
     this.facts.register(async (em, projectIds) => {
-      const projects = await em.find(Project, { id: { $in: projectIds } });
-      const out = new Map<string, { sharesSettled: boolean }>();
-      for (const p of projects) out.set(p.id, { sharesSettled: isSettled(await loadAccount(em, p)) });
-      return out;
+      const accounts = await loadAccounts(em, await em.find(Project, { id: { $in: projectIds } }));
+      return new Map([...accounts].map(([id, view]) => [id, { sharesSettled: isSettled(view) }]));
     });
   }
 }

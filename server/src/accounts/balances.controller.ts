@@ -1,6 +1,6 @@
 import { Controller, Get } from '@nestjs/common';
 import type { BalancesResponse } from '@broodsilk/shared';
-import { CurrentProject, ProjectRoles } from '../common/decorators/project-roles.decorator';
+import { CurrentProject, ProjectRoles } from '../projects/project-roles.decorator';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { BalancesService } from './balances.service';
 

@@ -1,8 +1,8 @@
 import { Body, Controller, Get, Param, ParseUUIDPipe, Post } from '@nestjs/common';
 import type { HandOverFormResponse, LedgerEntryResponse } from '@broodsilk/shared';
-import { CurrentProject, ProjectRoles } from '../common/decorators/project-roles.decorator';
+import { CurrentProject, ProjectRoles } from '../projects/project-roles.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { EntriesService } from './entries.service';
 import { BalancesService } from './balances.service';

@@ -1,23 +1,25 @@
 import { BadRequestException, ConflictException, ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
 import type { ConfirmEntryRequest, CreateEntryRequest, LedgerEntryResponse } from '@broodsilk/shared';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { ActivityService } from '../activity/activity.service';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { Project } from '../projects/project.entity';
 import { User } from '../users/user.entity';
 import { AccountLock } from './account-lock';
 import { loadAccount } from './account-loader';
-import type { AccountView } from './account-view';
+import { acceptorOf, type AccountView } from './account-view';
 import { toEntryResponses } from './accounts.mapper';
-import { draftEntry, type EntryDraft } from './entry-rules';
+import { assertWithdrawalFits, draftEntry, type EntryDraft } from './entry-rules';
 import { LedgerEntryRow } from './ledger-entry.entity';
 import { describeEntry } from './entry-words';
+import { Clock } from '../common/clock';
 
 @Injectable()
 export class EntriesService {
   constructor(
     private readonly em: EntityManager,
+    private readonly clock: Clock,
     private readonly lock: AccountLock,
     private readonly activity: ActivityService,
   ) {}
@@ -33,7 +35,7 @@ export class EntriesService {
 
   /** The recipient confirms a hand-over (arrival counts) or the payee confirms a payment. */
   async confirm(access: ProjectAccess, user: AuthUser, entryId: string, dto: ConfirmEntryRequest): Promise<LedgerEntryResponse> {
-    return this.write(access, async (_tx, view) => confirmationDraft(view, access, user.id, entryId, dto), user);
+    return this.write(access, async (_tx, view) => confirmationDraft(view, access, user.id, entryId, dto, this.clock.now()), user);
   }
 
   /** Appends a row the payment provider reported (no user); used by the webhook inside its own transaction. */
@@ -103,10 +105,10 @@ function assertConfirmer(access: ProjectAccess, userId: string, party: NonNullab
   if (!mine) throw new ForbiddenException(`Only ${what} confirms this${party.user ? '' : ' (or the owner, for a party without an account)'}.`);
 }
 
-function confirmationDraft(view: AccountView, access: ProjectAccess, userId: string, entryId: string, dto: ConfirmEntryRequest): EntryDraft {
+function confirmationDraft(view: AccountView, access: ProjectAccess, userId: string, entryId: string, dto: ConfirmEntryRequest, now: Date): EntryDraft {
   const row = view.data.rows.find((r) => r.id === entryId);
   if (!row) throw new NotFoundException('There is no such entry in this project.');
-  const date = dto.date ?? new Date().toISOString().slice(0, 10);
+  const date = dto.date ?? now.toISOString().slice(0, 10);
   const inForce = new Set(view.balances.inForce);
   if (row.kind === 'hand-over') {
     assertConfirmer(access, userId, row.party!, 'the party who received the hand-over');
@@ -124,13 +126,17 @@ function confirmationDraft(view: AccountView, access: ProjectAccess, userId: str
     }
     return { kind: 'arrival', date, target: row, party: row.party!, arrivedAlive: dto.arrivedAlive, arrivedDead: dto.arrivedDead };
   }
-  if (row.kind === 'money') {
-    assertConfirmer(access, userId, row.toParty!, 'the party who received the payment');
-    if (!view.pending.has(row.id)) throw new ConflictException('This payment already counts; there is nothing to confirm.');
+  if (row.kind === 'money' || row.kind === 'cash-out' || row.kind === 'sale') {
+    const what = row.kind === 'money' ? 'payment' : row.kind;
+    const acceptor = acceptorOf(row, view.data.terms?.pricePerSpiderlingMinor ?? 0);
+    if (!acceptor) throw new ConflictException(`This ${what} already counts; there is nothing to confirm.`);
+    assertConfirmer(access, userId, acceptor, row.kind === 'money' ? 'the party who received the payment' : 'the party whose young these were');
+    if (!view.pending.has(row.id)) throw new ConflictException(`This ${what} already counts; there is nothing to confirm.`);
     if (view.data.rows.some((r) => r.kind === 'correction' && r.target?.id === row.id)) {
-      throw new ConflictException('This payment was reversed by a correction; there is nothing to confirm.');
+      throw new ConflictException(`This ${what} was reversed by a correction; there is nothing to confirm.`);
     }
-    return { kind: 'confirmation', date, target: row, party: row.toParty! };
+    if (row.kind !== 'money') assertWithdrawalFits(view, row);
+    return { kind: 'confirmation', date, target: row, party: acceptor };
   }
-  throw new BadRequestException('Only hand-overs and payments are confirmed.');
+  throw new BadRequestException('Only hand-overs, payments, and cash-outs or sales below the price in the terms are confirmed.');
 }

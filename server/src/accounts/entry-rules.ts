@@ -145,9 +145,14 @@ export function draftEntry(view: AccountView, access: ProjectAccess, userId: str
 /** Reversing a correction brings its target back; a hand-over, sale or cash-out coming back must still fit the share. */
 function assertReinstatementFits(view: AccountView, correction: LedgerEntryRow): void {
   const back = correction.kind === 'correction' ? correction.target : null;
-  if (!back || !['hand-over', 'sale', 'cash-out'].includes(back.kind) || !back.party) return;
-  const balance = view.balances.parties.find((p) => p.partyId === back.party!.id);
+  if (back) assertWithdrawalFits(view, back, `Reinstating that ${back.kind} would take too many young.`);
+}
+
+/** A withdrawal that starts to count (reinstated, or accepted by its party) must still fit the party's share. */
+export function assertWithdrawalFits(view: AccountView, row: LedgerEntryRow, lead = `This ${row.kind} no longer fits.`): void {
+  if (!['hand-over', 'sale', 'cash-out'].includes(row.kind) || !row.party) return;
+  const balance = view.balances.parties.find((p) => p.partyId === row.party!.id);
   if (!balance) return;
-  const check = checkWithdrawal(balance, back.count!);
-  if (check.message) throw new ConflictException(`Reinstating that ${back.kind} would take too many young. ${view.nameOf(back.party.id)}: ${check.message}`);
+  const check = checkWithdrawal(balance, row.count!);
+  if (check.message) throw new ConflictException(`${lead} ${view.nameOf(row.party.id)}: ${check.message}`);
 }

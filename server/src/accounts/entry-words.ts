@@ -1,4 +1,4 @@
-import { formatMinor as money } from './money-format';
+import { formatMoneyCode as money } from '@broodsilk/shared';
 import type { AccountView } from './account-view';
 import type { LedgerEntryRow } from './ledger-entry.entity';
 

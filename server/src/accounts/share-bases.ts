@@ -28,7 +28,7 @@ function describe(view: AccountView, before: BasisRow, after: { count: number; t
  * Keeps one `share_bases` row per change of a sac's basis (count or terms version) and says what
  * changed since the one before. Adding is `on conflict do nothing`, so two readers at once agree.
  */
-export async function trackShareBases(em: EntityManager, view: AccountView): Promise<Map<string, SacShareChange | null>> {
+export async function trackShareBases(em: EntityManager, view: AccountView, now: Date): Promise<Map<string, SacShareChange | null>> {
   const out = new Map<string, SacShareChange | null>();
   const termsNumber = view.data.terms?.number ?? null;
   const rows = await em.execute<BasisRow[]>(
@@ -41,7 +41,7 @@ export async function trackShareBases(em: EntityManager, view: AccountView): Pro
     const [last, previous] = mine;
     const current = { count: s.count, termsNumber, result: s.result };
     if (!last || last.count !== s.count || last.terms_number !== termsNumber) {
-      const at = new Date();
+      const at = now;
       await em.execute(
         `insert into share_bases (id, created_at, updated_at, project_id, sac_id, revision, count, terms_number, result)
          values (gen_random_uuid(), ?, ?, ?, ?, ?, ?, ?, ?) on conflict (sac_id, revision) do nothing`,

@@ -5,16 +5,20 @@ import type { ProjectAccess } from '../projects/project-access.service';
 import { loadAccount } from './account-loader';
 import { trackShareBases } from './share-bases';
 import { toSharesResponse } from './shares.mapper';
+import { Clock } from '../common/clock';
 
 @Injectable()
 export class SharesService {
-  constructor(private readonly em: EntityManager) {}
+  constructor(
+    private readonly em: EntityManager,
+    private readonly clock: Clock,
+  ) {}
 
   /** Shares per sac with their explanation, and what changed since the basis before. */
   async shares(access: ProjectAccess): Promise<SharesResponse> {
     return this.em.transactional(async (tx) => {
       const view = await loadAccount(tx, access.project);
-      return toSharesResponse(view, await trackShareBases(tx, view));
+      return toSharesResponse(view, await trackShareBases(tx, view, this.clock.now()));
     });
   }
 }

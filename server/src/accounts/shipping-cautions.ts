@@ -1,6 +1,6 @@
 /**
  * The usual cautions for shipping live invertebrates, shown on the hand-over form and in
- * statements with a shipment. Sources: TRADE-FACTS §9 (dealers' published shipping rules,
+ * statements with a shipment. Sources: docs/trade-facts.md §9 (dealers' published shipping rules,
  * jrsinverts.com and fanghubtarantulas.com; CITES notes). Local law and the carrier's rules come first.
  */
 export const SHIPPING_CAUTIONS: readonly string[] = [

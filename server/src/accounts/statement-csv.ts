@@ -1,6 +1,6 @@
 import { stringify } from 'csv-stringify/sync';
-import type { StatementResponse } from '@broodsilk/shared';
-import { formatMinor } from './money-format';
+import { formatMoneyCode, type StatementResponse } from '@broodsilk/shared';
+import { neutraliseCell } from '../common/csv/formula-cells';
 
 export const STATEMENT_CSV_COLUMNS = [
   'line',
@@ -23,7 +23,8 @@ export const STATEMENT_CSV_COLUMNS = [
 ] as const;
 
 /**
- * The statement as RFC 4180 CSV (CRLF, quoted where needed, one header row): the party's ledger
+ * The statement as RFC 4180 CSV (CRLF, quoted where needed, one header row; text that a spreadsheet
+ * would run as a formula starts with an apostrophe, see formula-cells): the party's ledger
  * lines, then summary lines (`kind` share, handed-over, sold, cashed-out, still-owed, debt) with
  * an empty `line`.
  */
@@ -39,7 +40,7 @@ export function statementCsv(s: StatementResponse): string {
     to: e.to?.name ?? '',
     count: e.count ?? (e.kind === 'arrival' ? `${e.arrivedAlive} alive, ${e.arrivedDead} dead` : ''),
     amount_minor: e.amountMinor ?? e.priceMinor ?? '',
-    amount: e.amountMinor != null ? formatMinor(e.amountMinor, e.currency!) : e.priceMinor != null ? formatMinor(e.priceMinor, e.currency!) : '',
+    amount: e.amountMinor != null ? formatMoneyCode(e.amountMinor, e.currency!) : e.priceMinor != null ? formatMoneyCode(e.priceMinor, e.currency!) : '',
     currency: e.currency ?? '',
     method: e.method ?? '',
     carrier: e.carrier ?? '',
@@ -65,8 +66,8 @@ export function statementCsv(s: StatementResponse): string {
       from: d.fromName,
       to: d.toName,
       amount_minor: d.amountMinor,
-      amount: formatMinor(d.amountMinor, d.currency),
+      amount: formatMoneyCode(d.amountMinor, d.currency),
       currency: d.currency || currency,
     });
-  return stringify(rows, { header: true, columns: [...STATEMENT_CSV_COLUMNS], record_delimiter: 'windows' });
+  return stringify(rows, { header: true, columns: [...STATEMENT_CSV_COLUMNS], record_delimiter: 'windows', cast: { string: neutraliseCell } });
 }

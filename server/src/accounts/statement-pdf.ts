@@ -1,6 +1,5 @@
 import PDFDocument from 'pdfkit';
-import type { StatementResponse } from '@broodsilk/shared';
-import { formatMinor } from './money-format';
+import { formatMoneyCode, type StatementResponse } from '@broodsilk/shared';
 
 // The built-in PDF fonts cover WinAnsi only; these few signs from the share explanations are not in it.
 const WIN_ANSI_FALLBACK: Record<string, string> = { '−': '-', '→': '->', '≈': '~', '≤': '<=', '≥': '>=' };
@@ -12,9 +11,9 @@ const entryLine = (e: StatementResponse['entries'][number]): string => {
     e.kind === 'arrival'
       ? `arrived ${e.arrivedAlive} alive, ${e.arrivedDead} dead`
       : e.kind === 'money'
-        ? formatMinor(e.amountMinor!, e.currency!)
+        ? formatMoneyCode(e.amountMinor!, e.currency!)
         : e.kind === 'sale'
-          ? `${e.count} young for ${formatMinor(e.priceMinor!, e.currency!)}`
+          ? `${e.count} young for ${formatMoneyCode(e.priceMinor!, e.currency!)}`
           : e.kind === 'correction'
             ? `reverses an earlier entry: ${e.reason}`
             : e.kind === 'confirmation'
@@ -44,7 +43,7 @@ export function statementPdf(s: StatementResponse): Promise<Buffer> {
   heading('Terms in force');
   if (!s.terms) line('No version of the terms is in force yet.');
   else {
-    line(`Version ${s.terms.number}. Price per spiderling for cash-outs: ${formatMinor(s.terms.pricePerSpiderlingMinor, s.terms.currency)}.`);
+    line(`Version ${s.terms.number}. Price per spiderling for cash-outs: ${formatMoneyCode(s.terms.pricePerSpiderlingMinor, s.terms.currency)}.`);
     for (const l of s.terms.lines) line(`${l.pickOrder}. ${l.name}: weight ${l.weight}${l.fixedCount ? `, ${l.fixedCount} fixed` : ''}`);
     line(`Failure clause: ${s.terms.failureClauseText}`);
     line(`Young are handed over at: ${s.terms.handOverStage}. Shipping paid by: ${s.terms.shippingPaidBy}.`);
@@ -74,7 +73,7 @@ export function statementPdf(s: StatementResponse): Promise<Buffer> {
     line(`Still owed: ${b.owedSpiderlings} young`);
   }
   if (!s.debts.length) line('Money: nothing owed between this party and the others.');
-  for (const d of s.debts) line(`Money: ${d.fromName} owes ${d.toName} ${formatMinor(d.amountMinor, d.currency)}`);
+  for (const d of s.debts) line(`Money: ${d.fromName} owes ${d.toName} ${formatMoneyCode(d.amountMinor, d.currency)}`);
 
   if (s.failureNotes.length) {
     heading('A sac failed');

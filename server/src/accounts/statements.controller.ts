@@ -1,11 +1,16 @@
-import { Controller, Get, Header, Param, ParseUUIDPipe, Post, Res } from '@nestjs/common';
-import type { Response } from 'express';
+import { Controller, Get, Header, Param, ParseUUIDPipe, Post, StreamableFile } from '@nestjs/common';
 import type { StatementResponse } from '@broodsilk/shared';
-import { CurrentProject, ProjectRoles } from '../common/decorators/project-roles.decorator';
+import { CurrentProject, ProjectRoles } from '../projects/project-roles.decorator';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { StatementsService } from './statements.service';
+import { PerUserLimit } from '../common/per-user-limit/per-user-limit';
 
-const send = (res: Response, type: string, f: { filename: string; body: string | Buffer }) => res.type(type).attachment(f.filename).send(f.body);
+/** A download with its name; Nest sets the headers, so the handler stays in Nest's response flow (interceptors, filters). */
+const download = (type: string, f: { filename: string; body: string | Buffer }) =>
+  new StreamableFile(Buffer.isBuffer(f.body) ? f.body : Buffer.from(f.body, 'utf8'), { type, disposition: `attachment; filename="${f.filename}"` });
+
+/** Statements e-mailed per keeper per hour: one to each party of a few projects, not a mail cannon. */
+export const STATEMENT_EMAILS_PER_HOUR = 10;
 
 @Controller('projects/:projectId/statements')
 export class StatementsController {
@@ -14,15 +19,15 @@ export class StatementsController {
   @Get(':memberId.csv')
   @ProjectRoles('owner', 'partner')
   @Header('Cache-Control', 'no-store')
-  async csv(@CurrentProject() a: ProjectAccess, @Param('memberId', ParseUUIDPipe) id: string, @Res() res: Response): Promise<void> {
-    send(res, 'text/csv; charset=utf-8', await this.statements.csv(a, id));
+  async csv(@CurrentProject() a: ProjectAccess, @Param('memberId', ParseUUIDPipe) id: string): Promise<StreamableFile> {
+    return download('text/csv; charset=utf-8', await this.statements.csv(a, id));
   }
 
   @Get(':memberId.pdf')
   @ProjectRoles('owner', 'partner')
   @Header('Cache-Control', 'no-store')
-  async pdf(@CurrentProject() a: ProjectAccess, @Param('memberId', ParseUUIDPipe) id: string, @Res() res: Response): Promise<void> {
-    send(res, 'application/pdf', await this.statements.pdf(a, id));
+  async pdf(@CurrentProject() a: ProjectAccess, @Param('memberId', ParseUUIDPipe) id: string): Promise<StreamableFile> {
+    return download('application/pdf', await this.statements.pdf(a, id));
   }
 
   @Get(':memberId')
@@ -33,6 +38,7 @@ export class StatementsController {
 
   @Post(':memberId/email')
   @ProjectRoles('owner', 'partner')
+  @PerUserLimit({ what: 'statement e-mails', limit: STATEMENT_EMAILS_PER_HOUR, windowMinutes: 60 })
   email(@CurrentProject() a: ProjectAccess, @Param('memberId', ParseUUIDPipe) id: string): Promise<{ sentTo: string }> {
     return this.statements.email(a, id);
   }

@@ -11,6 +11,7 @@ import { failureNote, toSacSharesView, toTermsSummary } from './shares.mapper';
 import { SHIPPING_CAUTIONS } from './shipping-cautions';
 import { statementCsv } from './statement-csv';
 import { statementPdf } from './statement-pdf';
+import { Clock } from '../common/clock';
 
 /** Whether a row is about the party: theirs, or an arrival/confirmation/correction of one that is. */
 function concerns(row: LedgerEntryRow, memberId: string, depth = 0): boolean {
@@ -22,6 +23,7 @@ function concerns(row: LedgerEntryRow, memberId: string, depth = 0): boolean {
 export class StatementsService {
   constructor(
     private readonly em: EntityManager,
+    private readonly clock: Clock,
     private readonly mail: MailService,
   ) {}
 
@@ -81,7 +83,7 @@ export class StatementsService {
     return {
       project: { id: view.data.project.id, title: view.data.project.title },
       party: { memberId, name: memberName(member), role: member.role },
-      generatedAt: new Date().toISOString(),
+      generatedAt: this.clock.now().toISOString(),
       terms: view.data.terms ? toTermsSummary(view.data.terms) : null,
       sacs: view.sacs.map((s) => toSacSharesView(view, s, null)),
       entries,

@@ -1,6 +1,6 @@
 import { Controller, Get } from '@nestjs/common';
 import type { ActivityEventResponse } from '@broodsilk/shared';
-import { AnyProjectMember, CurrentProject } from '../common/decorators/project-roles.decorator';
+import { AnyProjectMember, CurrentProject } from '../projects/project-roles.decorator';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { ActivityService } from './activity.service';
 

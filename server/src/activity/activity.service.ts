@@ -6,6 +6,7 @@ import { Project } from '../projects/project.entity';
 import { User } from '../users/user.entity';
 import { ProjectMember } from '../projects/project-member.entity';
 import { toActivityResponse } from './activity.mapper';
+import { Clock } from '../common/clock';
 
 export interface ActivityInput {
   projectId: string;
@@ -30,7 +31,10 @@ export function audiencesFor(role: ProjectRole): ActivityAudience[] {
 
 @Injectable()
 export class ActivityService {
-  constructor(private readonly em: EntityManager) {}
+  constructor(
+    private readonly em: EntityManager,
+    private readonly clock: Clock,
+  ) {}
 
   /**
    * Queues one event on `em`: pass the transaction's entity manager so the event is written in the
@@ -46,7 +50,7 @@ export class ActivityService {
       summary: e.summary,
       data: e.data ?? {},
       audience: e.audience ?? 'members',
-      at: e.at ?? new Date(),
+      at: e.at ?? this.clock.now(),
     });
   }
 

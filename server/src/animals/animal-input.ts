@@ -2,7 +2,7 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import type { FieldError } from '@broodsilk/shared';
 import { Species } from '../species/species.entity';
 import { User } from '../users/user.entity';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { Animal } from './animal.entity';
 import type { CreateAnimalDto } from './dto/create-animal.dto';
 import { animalRuleErrors, type AnimalState } from './animal-rules';
@@ -55,11 +55,13 @@ export async function resolveAnimalInput(
     values.ownerName = null;
     values.ownerEmail = null;
   } else if (merged.ownerKind === 'keeper' && merged.ownerEmail) {
-    const owner = await em.findOne(User, { email: merged.ownerEmail.toLowerCase() });
-    if (!owner) errors.push({ field: 'ownerEmail', message: 'No keeper of this instance has that e-mail; record the owner as an outside party instead.' });
-    else if (owner.id === viewer.id) errors.push({ field: 'ownerEmail', message: 'That is your own e-mail: choose yourself as the owner instead.' });
-    else values.ownerUser = owner;
-    values.ownerEmail = merged.ownerEmail.toLowerCase();
+    // Nothing is looked up: whether an account has this address, and its id and name, stay
+    // hidden until that keeper accepts (AnimalOwnershipService), so the form cannot probe addresses.
+    const email = merged.ownerEmail.toLowerCase();
+    if (email === viewer.email.toLowerCase()) errors.push({ field: 'ownerEmail', message: 'That is your own e-mail: choose yourself as the owner instead.' });
+    const unchanged = current?.ownerKind === 'keeper' && current.ownerEmail === email;
+    values.ownerUser = unchanged ? (current.ownerUser ?? null) : null;
+    values.ownerEmail = email;
     values.ownerName = null;
   } else if (merged.ownerKind === 'party') {
     values.ownerUser = null;
@@ -67,7 +69,8 @@ export async function resolveAnimalInput(
   if (merged.custody === 'with-owner') values.custodyParty = dto.custodyParty ?? null;
   // A loan-in comes from the owner unless the keeper names someone else.
   if (merged.custody === 'loan-in' && !merged.custodyParty) {
-    values.custodyParty = values.ownerUser && 'displayName' in values.ownerUser ? values.ownerUser.displayName : (merged.ownerName ?? null);
+    const accepted = values.ownerUser && 'displayName' in values.ownerUser ? values.ownerUser.displayName : null;
+    values.custodyParty = accepted ?? (merged.ownerKind === 'keeper' ? (values.ownerEmail ?? null) : (merged.ownerName ?? null));
   }
 
   const label = dto.label;

@@ -1,7 +1,7 @@
 import { Injectable, type OnModuleInit } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
 import type { PhotoRef } from '@broodsilk/shared';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { PhotosService } from '../photos/photos.service';
 import { PhotoAccessRegistry } from '../photos/photo-access.registry';
 import { ANIMAL_PHOTO, AnimalsService } from './animals.service';

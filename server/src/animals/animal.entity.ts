@@ -26,6 +26,12 @@ import { Species } from '../species/species.entity';
 @Index({ properties: ['recordedBy', 'species'] })
 @Index({ properties: ['recordedBy', 'status'] })
 @Index({ properties: ['recordedBy', 'sex', 'maturity'] })
+// Trigram indexes for the search box (created by a migration; declared here so the schema diff knows them).
+@Index({ name: 'animals_label_trgm_index', expression: 'create index "animals_label_trgm_index" on "animals" using gin (lower("label") gin_trgm_ops)' })
+@Index({
+  name: 'animals_enclosure_trgm_index',
+  expression: 'create index "animals_enclosure_trgm_index" on "animals" using gin (lower("enclosure") gin_trgm_ops)',
+})
 @Index({ properties: ['recordedBy', 'maturedOn'] })
 export class Animal extends BaseEntity<'maturity' | 'ownerKind' | 'custody' | 'status'> {
   @ManyToOne(() => User, { deleteRule: 'cascade' })

@@ -3,12 +3,16 @@ import { FileInterceptor } from '@nestjs/platform-express';
 import type { Request } from 'express';
 import type { ImportResult } from '@broodsilk/shared';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { AnimalsCsvService } from './animals-csv.service';
 import { CSV_MAX_BYTES } from './animals-csv.columns';
 import { csvText } from './csv-text';
+import { PerUserLimit } from '../common/per-user-limit/per-user-limit';
 
 /** Registered before AnimalsController so `export.csv` is not taken for an animal id. */
+/** Each import is checked row by row against the catalogue; this many per keeper per hour covers fixing and retrying a file. */
+export const CSV_IMPORTS_PER_HOUR = 20;
+
 @Controller('animals')
 export class AnimalsCsvController {
   constructor(private readonly csv: AnimalsCsvService) {}
@@ -22,6 +26,7 @@ export class AnimalsCsvController {
 
   @Post('import')
   @HttpCode(201)
+  @PerUserLimit({ what: 'CSV imports', limit: CSV_IMPORTS_PER_HOUR, windowMinutes: 60 })
   @UseInterceptors(FileInterceptor('file', { limits: { fileSize: CSV_MAX_BYTES, files: 1 } }))
   async import(@CurrentUser() user: AuthUser, @Req() req: Request, @UploadedFile() file?: { buffer?: Buffer }): Promise<ImportResult> {
     return this.csv.import(user, await csvText(req, file));

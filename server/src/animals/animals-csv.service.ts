@@ -5,13 +5,14 @@ import { validate, type ValidationError } from 'class-validator';
 import { parse } from 'csv-parse/sync';
 import { stringify } from 'csv-stringify/sync';
 import type { FieldError, ImportResult } from '@broodsilk/shared';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { User } from '../users/user.entity';
 import { Species } from '../species/species.entity';
 import { Animal } from './animal.entity';
 import { AnimalsService } from './animals.service';
 import { CreateAnimalDto } from './dto/create-animal.dto';
 import { resolveAnimalInput, type AnimalValues } from './animal-input';
+import { neutraliseCell, restoreCell } from '../common/csv/formula-cells';
 import { CSV_COLUMNS, CSV_FIELDS, CSV_MAX_BYTES, CSV_MAX_ROWS } from './animals-csv.columns';
 
 interface ParsedRow {
@@ -42,7 +43,10 @@ export class AnimalsCsvService {
     private readonly animals: AnimalsService,
   ) {}
 
-  /** RFC 4180: header row, CRLF line ends, quotes where needed; UTF-8 with a BOM so spreadsheets read accents. */
+  /**
+   * RFC 4180: header row, CRLF line ends, quotes where needed; UTF-8 with a BOM so spreadsheets read
+   * accents. Text a spreadsheet would run as a formula gets an apostrophe, which the import removes.
+   */
   async export(viewer: AuthUser): Promise<string> {
     const animals = await this.em.find(Animal, { recordedBy: viewer.id }, { populate: ['species'], orderBy: { label: 'asc' } });
     const rows = animals.map((a) => ({
@@ -50,7 +54,13 @@ export class AnimalsCsvService {
       species: a.species.scientificName,
       lastMoltOn: a.lastMoltOn ?? '',
     }));
-    return stringify(rows, { header: true, columns: [...CSV_COLUMNS], record_delimiter: 'windows', bom: true, cast: { number: String } });
+    return stringify(rows, {
+      header: true,
+      columns: [...CSV_COLUMNS],
+      record_delimiter: 'windows',
+      bom: true,
+      cast: { number: String, string: neutraliseCell },
+    });
   }
 
   /** Checks every row like the create route does, then imports all of them in one transaction, or none. */
@@ -108,6 +118,7 @@ export class AnimalsCsvService {
         skip_empty_lines: true,
         info: true,
         relax_column_count: false,
+        cast: (value, context) => (context.header ? value : restoreCell(value)),
       });
     } catch (e) {
       const err = e as { message?: string; lines?: number };

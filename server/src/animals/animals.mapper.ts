@@ -54,6 +54,7 @@ function readinessOf(a: Animal, today: string): FemaleReadinessView | null {
 
 function ownerOf(a: Animal): AnimalOwner {
   if (a.ownerKind === 'party') return { kind: 'party', name: a.ownerName ?? '', ...(a.ownerEmail ? { email: a.ownerEmail } : {}) };
+  if (a.ownerKind === 'keeper' && !a.ownerUser) return { kind: 'keeper', name: a.ownerEmail ?? '', email: a.ownerEmail ?? '', awaitingAcceptance: true };
   const user = a.ownerKind === 'self' ? a.recordedBy : a.ownerUser;
   return { kind: a.ownerKind, ...(user ? { userId: user.id } : {}), name: user?.displayName ?? a.ownerName ?? '' };
 }

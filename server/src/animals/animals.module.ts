@@ -14,11 +14,13 @@ import { AnimalPhotosService } from './animal-photos.service';
 import { AnimalPhotosController } from './animal-photos.controller';
 import { AnimalsCsvService } from './animals-csv.service';
 import { AnimalsCsvController } from './animals-csv.controller';
+import { AnimalOwnershipController } from './animal-ownership.controller';
+import { AnimalOwnershipService } from './animal-ownership.service';
 
 @Module({
   imports: [ConfigModule.forFeature(storageConfig), MikroOrmModule.forFeature([Animal, Molt]), PhotosModule],
-  controllers: [AnimalsCsvController, AnimalsController, MoltsController, AnimalPhotosController],
-  providers: [AnimalsService, AnimalsCsvService, AnimalUsageRegistry, MoltsService, AnimalPhotosService],
+  controllers: [AnimalsCsvController, AnimalOwnershipController, AnimalsController, MoltsController, AnimalPhotosController],
+  providers: [AnimalsService, AnimalOwnershipService, AnimalsCsvService, AnimalUsageRegistry, MoltsService, AnimalPhotosService],
   exports: [AnimalsService, AnimalUsageRegistry],
 })
 export class AnimalsModule {}

@@ -1,8 +1,8 @@
-import { BadRequestException, ConflictException, Injectable } from '@nestjs/common';
+import { ConflictException, Injectable } from '@nestjs/common';
 import { EntityManager, type QueryBuilder } from '@mikro-orm/postgresql';
 import { ForeignKeyConstraintViolationException } from '@mikro-orm/core';
-import { todayIn, type AnimalResponse, type FieldError, type MaleClockRow, type Paged, type AnimalSummary } from '@broodsilk/shared';
-import type { AuthUser } from '../auth/auth-user';
+import { todayIn, type AnimalResponse, type MaleClockRow, type Paged, type AnimalSummary } from '@broodsilk/shared';
+import type { AuthUser } from '../common/auth-user';
 import { User } from '../users/user.entity';
 import { escapeLike } from '../species/species.service';
 import { Animal } from './animal.entity';
@@ -10,12 +10,14 @@ import { maleClockOf, toAnimalResponse, toAnimalSummary } from './animals.mapper
 import { resolveAnimalInput } from './animal-input';
 import { AnimalUsageRegistry } from './animal-usage.registry';
 import { PhotosService } from '../photos/photos.service';
+import { badRequest } from '../common/field-errors';
 
 /** Photo subject type of an animal's own photos. */
 export const ANIMAL_PHOTO = 'animal';
 import type { CreateAnimalDto } from './dto/create-animal.dto';
 import type { UpdateAnimalDto } from './dto/update-animal.dto';
 import type { AnimalListQueryDto } from './dto/animal-list-query.dto';
+import { Clock } from '../common/clock';
 
 const SORT_COLUMNS = {
   label: 'a.label',
@@ -28,15 +30,11 @@ const SORT_COLUMNS = {
 
 const CLOCK_URGENCY = { 'past-typical': 0, late: 1, prime: 2, fresh: 3 } as const;
 
-export function badRequest(errors: FieldError[]): BadRequestException {
-  const message = errors.length === 1 ? errors[0].message : `Please correct ${errors.length} fields: ${errors.map((d) => d.field).join(', ')}.`;
-  return new BadRequestException({ message, details: errors });
-}
-
 @Injectable()
 export class AnimalsService {
   constructor(
     private readonly em: EntityManager,
+    private readonly clock: Clock,
     private readonly usage: AnimalUsageRegistry,
     private readonly photos: PhotosService,
   ) {}
@@ -47,7 +45,7 @@ export class AnimalsService {
   }
 
   today(viewer: AuthUser): string {
-    return todayIn(viewer.timeZone, new Date());
+    return todayIn(viewer.timeZone, this.clock.now());
   }
 
   async list(viewer: AuthUser, q: AnimalListQueryDto): Promise<Paged<AnimalSummary>> {

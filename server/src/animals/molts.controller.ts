@@ -1,7 +1,7 @@
 import { Body, Controller, Get, Param, ParseUUIDPipe, Post } from '@nestjs/common';
 import type { MoltResponse } from '@broodsilk/shared';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { MoltsService } from './molts.service';
 import { CreateMoltDto } from './dto/create-molt.dto';
 

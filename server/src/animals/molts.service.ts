@@ -1,9 +1,10 @@
 import { Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
 import type { FieldError, MoltResponse } from '@broodsilk/shared';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { PhotosService } from '../photos/photos.service';
-import { AnimalsService, badRequest } from './animals.service';
+import { AnimalsService } from './animals.service';
+import { badRequest } from '../common/field-errors';
 import { Molt } from './molt.entity';
 import { toMoltResponse } from './molts.mapper';
 import { MOLT_PHOTO } from './animal-photos.service';

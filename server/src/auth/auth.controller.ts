@@ -1,6 +1,5 @@
-import { Body, Controller, Get, HttpCode, Inject, Post, Req, Res, UseGuards } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Inject, Patch, Post, Req, Res, UseGuards } from '@nestjs/common';
 import { ConfigType } from '@nestjs/config';
-import { ThrottlerGuard } from '@nestjs/throttler';
 import type { Request, Response } from 'express';
 import type { CsrfResponse, LoginResponse, Me } from '@broodsilk/shared';
 import { appConfig } from '../config/app.config';
@@ -12,8 +11,11 @@ import { AuthService, type IssuedSession } from './auth.service';
 import { RegisterDto } from './dto/register.dto';
 import { LoginDto } from './dto/login.dto';
 import { PasswordResetConfirmDto, PasswordResetDto } from './dto/password-reset.dto';
+import { ChangePasswordDto } from './dto/change-password.dto';
 import { clearSessionCookie, startSession } from './session-cookie';
-import type { AuthUser } from './auth-user';
+import { SignInRequestGuard } from './sign-in-request.guard';
+import { SignInAddressGuard } from './sign-in-address.guard';
+import type { AuthUser } from '../common/auth-user';
 
 @Controller('auth')
 export class AuthController {
@@ -24,30 +26,41 @@ export class AuthController {
   ) {}
 
   @Public()
-  @UseGuards(ThrottlerGuard)
+  @UseGuards(SignInAddressGuard, SignInRequestGuard)
   @Post('register')
   async register(@Body() dto: RegisterDto, @Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<LoginResponse> {
     return this.startSession(await this.auth.register(dto), req, res);
   }
 
   @Public()
-  @UseGuards(ThrottlerGuard)
+  @UseGuards(SignInAddressGuard, SignInRequestGuard)
   @HttpCode(200)
   @Post('login')
   async login(@Body() dto: LoginDto, @Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<LoginResponse> {
-    return this.startSession(await this.auth.login(dto), req, res);
+    return this.startSession(await this.auth.login(dto, req.ip ?? 'unknown'), req, res);
   }
 
   @HttpCode(204)
   @Post('logout')
-  async logout(@CurrentUser() user: AuthUser, @Res({ passthrough: true }) res: Response): Promise<void> {
+  async logout(@CurrentUser() user: AuthUser, @Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<void> {
     await this.auth.logout(user.id);
-    clearSessionCookie(res, this.app.secureCookies);
+    clearSessionCookie(req, res, this.app.secureCookies);
   }
 
   @Get('me')
   me(@CurrentUser() user: AuthUser): Promise<Me> {
     return this.auth.me(user.id);
+  }
+
+  /** Changing the password ends every other session; this one gets a fresh token. */
+  @Patch('password')
+  async changePassword(
+    @CurrentUser() user: AuthUser,
+    @Body() dto: ChangePasswordDto,
+    @Req() req: Request,
+    @Res({ passthrough: true }) res: Response,
+  ): Promise<LoginResponse> {
+    return this.startSession(await this.auth.changePassword(user.id, dto.currentPassword, dto.newPassword), req, res);
   }
 
   /** A fresh CSRF token for the current session (after a reload the client asks again). */
@@ -58,7 +71,7 @@ export class AuthController {
   }
 
   @Public()
-  @UseGuards(ThrottlerGuard)
+  @UseGuards(SignInAddressGuard)
   @HttpCode(202)
   @Post('password-reset')
   async requestReset(@Body() dto: PasswordResetDto): Promise<{ message: string }> {
@@ -67,7 +80,7 @@ export class AuthController {
   }
 
   @Public()
-  @UseGuards(ThrottlerGuard)
+  @UseGuards(SignInAddressGuard)
   @HttpCode(204)
   @Post('password-reset/confirm')
   async confirmReset(@Body() dto: PasswordResetConfirmDto): Promise<void> {

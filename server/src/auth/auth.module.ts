@@ -3,8 +3,8 @@ import { ConfigModule, ConfigService } from '@nestjs/config';
 import { JwtModule } from '@nestjs/jwt';
 import { PassportModule } from '@nestjs/passport';
 import { MikroOrmModule } from '@mikro-orm/nestjs';
-import { ThrottlerModule } from '@nestjs/throttler';
 import { appConfig } from '../config/app.config';
+import { databaseConfig } from '../config/database.config';
 import { MailModule } from '../mail/mail.module';
 import { User } from '../users/user.entity';
 import { csrfProvider } from '../common/csrf/csrf.provider';
@@ -12,10 +12,13 @@ import { AuthController } from './auth.controller';
 import { AuthService } from './auth.service';
 import { JwtStrategy } from './strategies/jwt.strategy';
 import { PasswordResetToken } from './password-reset-token.entity';
+import { SignInLimits } from './sign-in-limits';
+import { SignInAddressGuard } from './sign-in-address.guard';
 
 @Module({
   imports: [
     ConfigModule.forFeature(appConfig),
+    ConfigModule.forFeature(databaseConfig),
     MikroOrmModule.forFeature([User, PasswordResetToken]),
     PassportModule,
     MailModule,
@@ -23,16 +26,9 @@ import { PasswordResetToken } from './password-reset-token.entity';
       inject: [ConfigService],
       useFactory: (config: ConfigService) => ({ secret: config.getOrThrow<string>('app.jwtSecret'), signOptions: { algorithm: 'HS256' } }),
     }),
-    // Sign-in, registration and reset are limited per client address.
-    ThrottlerModule.forRootAsync({
-      inject: [ConfigService],
-      useFactory: (config: ConfigService) => ({
-        throttlers: [{ name: 'auth', ttl: config.getOrThrow<number>('app.authRateWindowMs'), limit: config.getOrThrow<number>('app.authRateLimit') }],
-      }),
-    }),
   ],
   controllers: [AuthController],
-  providers: [AuthService, JwtStrategy, csrfProvider],
+  providers: [AuthService, JwtStrategy, csrfProvider, SignInLimits, SignInAddressGuard],
   exports: [AuthService, csrfProvider],
 })
 export class AuthModule {}

@@ -5,14 +5,17 @@ import { EntityManager, LockMode, raw } from '@mikro-orm/postgresql';
 import { createHash, randomBytes } from 'node:crypto';
 import { SESSION_HOURS, type Me } from '@broodsilk/shared';
 import { appConfig } from '../config/app.config';
-import { MailService } from '../mail/mail.service';
+import { MailOutbox } from '../mail/mail-outbox.service';
 import { User } from '../users/user.entity';
 import { toMe } from '../users/users.mapper';
 import { dummyPasswordHash, hashPassword, verifyPassword } from './password-hasher';
 import { PasswordResetToken } from './password-reset-token.entity';
-import type { JwtPayload } from './auth-user';
+import { SignInLimits } from './sign-in-limits';
+import { revokeFeeds } from '../calendar/feed-token';
+import type { JwtPayload } from '../common/auth-user';
 import type { RegisterDto } from './dto/register.dto';
 import type { LoginDto } from './dto/login.dto';
+import { Clock } from '../common/clock';
 
 export const RESET_LINK_MINUTES = 45;
 
@@ -30,8 +33,10 @@ function sha256(value: string): string {
 export class AuthService {
   constructor(
     private readonly em: EntityManager,
+    private readonly clock: Clock,
     private readonly jwt: JwtService,
-    private readonly mail: MailService,
+    private readonly outbox: MailOutbox,
+    private readonly limits: SignInLimits,
     @Inject(appConfig.KEY) private readonly app: ConfigType<typeof appConfig>,
   ) {}
 
@@ -49,11 +54,17 @@ export class AuthService {
     return this.issue(user);
   }
 
-  async login(dto: LoginDto): Promise<IssuedSession> {
+  /** Checks the password unless the account is locked; wrong ones count towards the lock, known address or not. */
+  async login(dto: LoginDto, ip: string): Promise<IssuedSession> {
+    await this.limits.assertAccountOpen(dto.email, ip);
     const user = await this.em.findOne(User, { email: dto.email }, { populate: ['passwordHash'] });
     // Verify against a dummy hash for unknown e-mails so the answer takes as long either way.
     const ok = await verifyPassword(user?.passwordHash ?? (await dummyPasswordHash()), dto.password);
-    if (!user || !ok) throw new UnauthorizedException('The e-mail or password is not right.');
+    if (!user || !ok) {
+      await this.limits.recordFailure(dto.email);
+      throw new UnauthorizedException('The e-mail or password is not right.');
+    }
+    await this.limits.recordSuccess(dto.email);
     return this.issue(user);
   }
 
@@ -73,7 +84,7 @@ export class AuthService {
   issue(user: User): IssuedSession {
     const payload: JwtPayload = { sub: user.id, ver: user.tokenVersion };
     const accessToken = this.jwt.sign(payload, { expiresIn: `${SESSION_HOURS}h` });
-    return { user: toMe(user), accessToken, expiresAt: new Date(Date.now() + SESSION_HOURS * 3600_000) };
+    return { user: toMe(user), accessToken, expiresAt: new Date(this.clock.now().getTime() + SESSION_HOURS * 3600_000) };
   }
 
   /** Always answers the same way, whether or not the e-mail belongs to an account. */
@@ -81,29 +92,32 @@ export class AuthService {
     const user = await this.em.findOne(User, { email });
     if (!user) return;
     const token = randomBytes(32).toString('base64url');
+    const link = `${this.app.publicUrl}/reset-password?token=${token}`;
     await this.em.transactional(async (em) => {
       // A new link replaces any older one that is still open.
-      await em.nativeUpdate(PasswordResetToken, { user: user.id, usedAt: null }, { usedAt: new Date() });
-      em.create(PasswordResetToken, { user, tokenHash: sha256(token), expiresAt: new Date(Date.now() + RESET_LINK_MINUTES * 60_000) });
-    });
-    const link = `${this.app.publicUrl}/reset-password?token=${token}`;
-    await this.mail.send({
-      to: user.email,
-      subject: 'Reset your Broodsilk password',
-      text: `Hello ${user.displayName},\n\nSomeone asked to reset the password of your Broodsilk account. If it was you, open this link within ${RESET_LINK_MINUTES} minutes:\n\n${link}\n\nThe link works once. If you did not ask for it, ignore this e-mail; your password stays as it is.\n`,
+      await em.nativeUpdate(PasswordResetToken, { user: user.id, usedAt: null }, { usedAt: this.clock.now() });
+      em.create(PasswordResetToken, { user, tokenHash: sha256(token), expiresAt: new Date(this.clock.now().getTime() + RESET_LINK_MINUTES * 60_000) });
+      await em.flush();
+      await this.outbox.enqueue(em, {
+        to: user.email,
+        subject: 'Reset your Broodsilk password',
+        text: `Hello ${user.displayName},\n\nSomeone asked to reset the password of your Broodsilk account. If it was you, open this link within ${RESET_LINK_MINUTES} minutes:\n\n${link}\n\nThe link works once. If you did not ask for it, ignore this e-mail; your password stays as it is.\n`,
+      });
     });
   }
 
   async confirmPasswordReset(token: string, password: string): Promise<void> {
     await this.em.transactional(async (em) => {
       const row = await em.findOne(PasswordResetToken, { tokenHash: sha256(token) }, { populate: ['user'], lockMode: LockMode.PESSIMISTIC_WRITE });
-      if (!row || row.usedAt || row.expiresAt.getTime() < Date.now()) {
+      if (!row || row.usedAt || row.expiresAt.getTime() < this.clock.now().getTime()) {
         throw new BadRequestException('This reset link has expired or was already used. Ask for a new one.');
       }
-      row.usedAt = new Date();
+      row.usedAt = this.clock.now();
       const user = row.user.getEntity();
       user.passwordHash = await hashPassword(password);
       user.tokenVersion += 1;
+      // Whoever took over the account may have copied the feed URL too.
+      await revokeFeeds(em, user.id, this.clock.now());
     });
   }
 

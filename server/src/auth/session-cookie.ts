@@ -7,18 +7,20 @@ export function sessionCookieOptions(secure: boolean): CookieOptions {
   return { httpOnly: true, sameSite: 'lax', secure, path: '/', maxAge: SESSION_HOURS * 3600_000 };
 }
 
-export function setSessionCookie(res: Response, token: string, secure: boolean): void {
-  res.cookie(SESSION_COOKIE, token, sessionCookieOptions(secure));
-}
+/**
+ * `Secure` whenever the request came over HTTPS, directly or through the trusted proxy
+ * (`req.secure` follows X-Forwarded-Proto only from TRUST_PROXY), or always with SECURE_COOKIES.
+ */
+const isSecure = (req: Request, alwaysSecure: boolean): boolean => alwaysSecure || req.secure;
 
-export function clearSessionCookie(res: Response, secure: boolean): void {
-  const { maxAge: _maxAge, ...rest } = sessionCookieOptions(secure);
+export function clearSessionCookie(req: Request, res: Response, alwaysSecure: boolean): void {
+  const { maxAge: _maxAge, ...rest } = sessionCookieOptions(isSecure(req, alwaysSecure));
   res.clearCookie(SESSION_COOKIE, rest);
 }
 
 /** Puts a new session on the response (cookie + CSRF token) and answers with it; used by sign-in and password change. */
-export function startSession(csrf: Csrf, session: IssuedSession, req: Request, res: Response, secure: boolean): LoginResponse {
-  setSessionCookie(res, session.accessToken, secure);
+export function startSession(csrf: Csrf, session: IssuedSession, req: Request, res: Response, alwaysSecure: boolean): LoginResponse {
+  res.cookie(SESSION_COOKIE, session.accessToken, sessionCookieOptions(isSecure(req, alwaysSecure)));
   const csrfToken = mintCsrfToken(csrf, req, res, session.accessToken);
   return { user: session.user, accessToken: session.accessToken, csrfToken, expiresAt: session.expiresAt.toISOString() };
 }

@@ -2,7 +2,7 @@ import { Controller, Get, Header, HttpCode, Param, Post, StreamableFile } from '
 import type { CalendarFeedResponse } from '@broodsilk/shared';
 import { Public } from '../common/decorators/public.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { CalendarService } from './calendar.service';
 
 @Controller('calendar')

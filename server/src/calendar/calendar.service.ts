@@ -4,15 +4,16 @@ import { EntityManager } from '@mikro-orm/postgresql';
 import ical from 'ical-generator';
 import type { CalendarFeedResponse } from '@broodsilk/shared';
 import { appConfig } from '../config/app.config';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { User } from '../users/user.entity';
 import { ProjectMember } from '../projects/project-member.entity';
 import { AnimalsService } from '../animals/animals.service';
 import { Sac } from '../sacs/sac.entity';
 import { SAC_POPULATE, SacViewsService } from '../sacs/sac-views.service';
 import { CalendarFeed } from './calendar-feed.entity';
-import { feedToken, hashToken } from './feed-token';
+import { feedToken, hashToken, revokeFeeds } from './feed-token';
 import { maleClockEvents, sacEvents, type FeedEvent } from './feed-events';
+import { Clock } from '../common/clock';
 
 const NOT_FOUND = 'There is no such calendar feed. If you rotated its address, subscribe to the new one.';
 
@@ -20,19 +21,20 @@ const NOT_FOUND = 'There is no such calendar feed. If you rotated its address, s
 export class CalendarService {
   constructor(
     private readonly em: EntityManager,
+    private readonly clock: Clock,
     private readonly views: SacViewsService,
     private readonly animals: AnimalsService,
     @Inject(appConfig.KEY) private readonly config: ConfigType<typeof appConfig>,
   ) {}
 
   private describe(feed: CalendarFeed): CalendarFeedResponse {
-    const path = `/api/calendar/${feedToken(this.config.jwtSecret, feed.id)}.ics`;
+    const path = `/api/calendar/${feedToken(this.config.calendarSecret, feed.id)}.ics`;
     return { url: `${this.config.publicUrl.replace(/\/$/, '')}${path}`, path, createdAt: feed.createdAt.toISOString() };
   }
 
   private create(em: EntityManager, userId: string): CalendarFeed {
     const feed = em.create(CalendarFeed, { user: em.getReference(User, userId), tokenHash: '' });
-    feed.tokenHash = hashToken(feedToken(this.config.jwtSecret, feed.id));
+    feed.tokenHash = hashToken(feedToken(this.config.calendarSecret, feed.id));
     return feed;
   }
 
@@ -47,7 +49,7 @@ export class CalendarService {
   /** Revokes every live feed of the user and issues a new one, in one transaction. */
   async rotate(viewer: AuthUser): Promise<CalendarFeedResponse> {
     const feed = await this.em.transactional(async (tx) => {
-      await tx.nativeUpdate(CalendarFeed, { user: viewer.id, revokedAt: null }, { revokedAt: new Date() });
+      await revokeFeeds(tx, viewer.id, this.clock.now());
       return this.create(tx, viewer.id);
     });
     return this.describe(feed);

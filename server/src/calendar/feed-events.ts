@@ -10,7 +10,7 @@ export interface FeedEvent {
 }
 
 /**
- * Expected stage dates and where the figures come from (TRADE-FACTS §1, §2; medium confidence):
+ * Expected stage dates and where the figures come from (docs/trade-facts.md §1, §2; medium confidence):
  * prelarvae ("eggs with legs") hatch about day 20 in B. smithi (brachypelma-smithi.de, after
  * Vachon 1957), up to day 25 and later in other genera (arachnoworld.de: 25–42);
  * free-living young about 6–8 weeks after laying (Theraphosa blondi, day 42–56; a sac left with

@@ -1,15 +1,13 @@
 import 'reflect-metadata';
 import { MikroORM } from '@mikro-orm/postgresql';
 import config from '../mikro-orm.config';
-import { seedDemo } from '../seed/demo-seed';
-import { DEMO_SEEDERS } from '../seed/demo-seeders';
+import { runDemoSeed } from '../seed/run-demo-seed';
 
-/** `npm run seed`: seeds the demo scenario when the database has no accounts yet. */
+/** `npm run seed`: seeds the demo scenario when the database has no accounts yet, on a local demo install only. */
 async function main(): Promise<void> {
   const orm = await MikroORM.init(config);
   try {
-    const seeded = await seedDemo(orm.em.fork(), DEMO_SEEDERS);
-    console.log(seeded ? 'Demo scenario seeded.' : 'Accounts exist already; demo seed skipped.');
+    console.log(await runDemoSeed(orm));
   } finally {
     await orm.close(true);
   }

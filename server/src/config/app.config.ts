@@ -7,6 +7,8 @@ export const appConfig = registerAs('app', () => ({
   publicUrl: process.env.PUBLIC_URL ?? `http://127.0.0.1:${process.env.PORT ?? 3000}`,
   jwtSecret: process.env.JWT_SECRET ?? '',
   csrfSecret: process.env.CSRF_SECRET ?? '',
+  /** Derives calendar feed tokens; its own key, not the session-signing one. */
+  calendarSecret: process.env.CALENDAR_SECRET ?? '',
   /** Folder of the built client, served at `/`. Empty disables static serving. */
   clientDist: process.env.CLIENT_DIST ?? '',
   secureCookies: process.env.SECURE_COOKIES === 'true',

@@ -1,7 +1,7 @@
 import { Controller, Get } from '@nestjs/common';
 import type { DashboardResponse } from '@broodsilk/shared';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { DashboardService } from './dashboard.service';
 
 /** Any signed-in user: it only ever shows the caller's own projects and animals. */

@@ -9,7 +9,7 @@ import {
   type ProjectSummary,
   type RollStatus,
 } from '@broodsilk/shared';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { ProjectMember } from '../projects/project-member.entity';
 import { Project } from '../projects/project.entity';
 import { ProjectStageService } from '../projects/project-stage.service';
@@ -19,7 +19,7 @@ import { AnimalsService } from '../animals/animals.service';
 import { ActivityService } from '../activity/activity.service';
 import { Sac } from '../sacs/sac.entity';
 import { SAC_POPULATE, SacViewsService } from '../sacs/sac-views.service';
-import { Clock } from '../sacs/clock';
+import { Clock } from '../common/clock';
 
 const ROLL_ORDER: Record<RollStatus, number> = { overdue: 0, due: 1, 'due-soon': 2, upcoming: 3 };
 const HANDS_ON = new Set(['owner', 'caretaker']);

@@ -38,6 +38,13 @@ export class Invitation extends BaseEntity {
   @ManyToOne(() => User, { nullable: true, deleteRule: 'set null' })
   acceptedBy?: User | null;
 
+  /** Another account than the invited address opened the link; it joins only once the owner approves. */
+  @ManyToOne(() => User, { nullable: true, deleteRule: 'set null' })
+  claimedBy?: User | null;
+
+  @Property({ type: 'timestamptz', nullable: true })
+  claimedAt?: Date | null;
+
   /** Set when a newer invitation to the same e-mail replaced this one. */
   @Property({ type: 'timestamptz', nullable: true })
   replacedAt?: Date | null;

@@ -1,12 +1,16 @@
-import { Body, Controller, Get, HttpCode, Param, Post } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, ParseUUIDPipe, Post } from '@nestjs/common';
 import type { AcceptInvitationResponse, InvitationPreview, InvitationResponse } from '@broodsilk/shared';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Public } from '../common/decorators/public.decorator';
-import { CurrentProject, ProjectRoles } from '../common/decorators/project-roles.decorator';
-import type { AuthUser } from '../auth/auth-user';
+import { CurrentProject, ProjectRoles } from '../projects/project-roles.decorator';
+import type { AuthUser } from '../common/auth-user';
 import type { ProjectAccess } from '../projects/project-access.service';
+import { PerUserLimit } from '../common/per-user-limit/per-user-limit';
 import { InvitationsService } from './invitations.service';
 import { CreateInvitationDto } from './dto/create-invitation.dto';
+
+/** Invitations sent per keeper per hour; each one e-mails an outside address. */
+export const INVITATIONS_PER_HOUR = 30;
 
 @Controller('projects/:projectId/invitations')
 export class ProjectInvitationsController {
@@ -14,8 +18,20 @@ export class ProjectInvitationsController {
 
   @Post()
   @ProjectRoles('owner')
+  @PerUserLimit({ what: 'invitations', limit: INVITATIONS_PER_HOUR, windowMinutes: 60 })
   create(@CurrentUser() user: AuthUser, @CurrentProject() access: ProjectAccess, @Body() dto: CreateInvitationDto): Promise<InvitationResponse> {
     return this.invitations.create(user, access, dto);
+  }
+
+  @Post(':invitationId/approve')
+  @HttpCode(200)
+  @ProjectRoles('owner')
+  approve(
+    @CurrentUser() user: AuthUser,
+    @CurrentProject() access: ProjectAccess,
+    @Param('invitationId', ParseUUIDPipe) invitationId: string,
+  ): Promise<AcceptInvitationResponse> {
+    return this.invitations.approveClaim(user, access, invitationId);
   }
 }
 

@@ -6,7 +6,7 @@ export function toInvitationResponse(i: Invitation): InvitationResponse {
 }
 
 /** Why a link no longer works, in words; null while it does. */
-export function invitationProblem(i: Invitation, now = new Date()): string | null {
+export function invitationProblem(i: Invitation, now: Date): string | null {
   if (i.acceptedAt) return 'This invitation has already been used.';
   if (i.replacedAt) return 'This invitation was replaced by a newer one; use the link in the latest e-mail.';
   if (i.expiresAt.getTime() <= now.getTime()) return 'This invitation has expired; ask the project owner to send a new one.';
@@ -14,8 +14,8 @@ export function invitationProblem(i: Invitation, now = new Date()): string | nul
 }
 
 /** Needs `project` and `invitedBy` loaded. */
-export function toInvitationPreview(i: Invitation): InvitationPreview {
-  const problem = invitationProblem(i);
+export function toInvitationPreview(i: Invitation, now: Date): InvitationPreview {
+  const problem = invitationProblem(i, now);
   return {
     projectTitle: i.project.title,
     inviterName: i.invitedBy.displayName,

@@ -1,20 +1,11 @@
-import {
-  BadRequestException,
-  ConflictException,
-  GoneException,
-  Inject,
-  Injectable,
-  Logger,
-  NotFoundException,
-  ServiceUnavailableException,
-} from '@nestjs/common';
+import { BadRequestException, ConflictException, GoneException, Inject, Injectable, NotFoundException } from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
 import { EntityManager } from '@mikro-orm/postgresql';
 import { LockMode } from '@mikro-orm/core';
 import type { AcceptInvitationResponse, InvitationPreview, InvitationResponse } from '@broodsilk/shared';
 import { appConfig } from '../config/app.config';
-import type { AuthUser } from '../auth/auth-user';
-import { MailService } from '../mail/mail.service';
+import type { AuthUser } from '../common/auth-user';
+import { MailOutbox } from '../mail/mail-outbox.service';
 import { User } from '../users/user.entity';
 import { ActivityService } from '../activity/activity.service';
 import type { ProjectAccess } from '../projects/project-access.service';
@@ -23,16 +14,16 @@ import { Invitation } from './invitation.entity';
 import { hashInvitationToken, INVITATION_DAYS, newInvitationToken } from './invitation-token';
 import { invitationProblem, toInvitationPreview, toInvitationResponse } from './invitations.mapper';
 import type { CreateInvitationDto } from './dto/create-invitation.dto';
+import { Clock } from '../common/clock';
 
 const INVALID_LINK = 'This invitation link is not valid. Check that you copied all of it.';
 
 @Injectable()
 export class InvitationsService {
-  private readonly logger = new Logger(InvitationsService.name);
-
   constructor(
     private readonly em: EntityManager,
-    private readonly mail: MailService,
+    private readonly clock: Clock,
+    private readonly outbox: MailOutbox,
     private readonly activity: ActivityService,
     @Inject(appConfig.KEY) private readonly app: ConfigType<typeof appConfig>,
   ) {}
@@ -41,7 +32,7 @@ export class InvitationsService {
   async create(viewer: AuthUser, access: ProjectAccess, dto: CreateInvitationDto): Promise<InvitationResponse> {
     const email = dto.email.trim().toLowerCase();
     const { token, hash } = newInvitationToken();
-    const { invitation, inviter } = await this.em.transactional(async (tx) => {
+    const invitation = await this.em.transactional(async (tx) => {
       const members = await tx.find(ProjectMember, { project: access.project.id }, { populate: ['user'] });
       if (members.some((m) => m.user?.email.toLowerCase() === email))
         throw new ConflictException({ message: 'Someone with this e-mail address is already a member of the project.' });
@@ -64,7 +55,7 @@ export class InvitationsService {
             details: [{ field: 'role', message: `${member.name} is a ${member.role}.` }],
           });
       }
-      await tx.nativeUpdate(Invitation, { project: access.project.id, email, acceptedAt: null, replacedAt: null }, { replacedAt: new Date() });
+      await tx.nativeUpdate(Invitation, { project: access.project.id, email, acceptedAt: null, replacedAt: null }, { replacedAt: this.clock.now() });
       const inviter = await tx.findOneOrFail(User, viewer.id);
       const invitation = tx.create(Invitation, {
         project: access.project,
@@ -73,7 +64,7 @@ export class InvitationsService {
         member,
         tokenHash: hash,
         invitedBy: inviter,
-        expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000),
+        expiresAt: new Date(this.clock.now().getTime() + INVITATION_DAYS * 86_400_000),
       });
       this.activity.record(tx, {
         projectId: access.project.id,
@@ -84,11 +75,10 @@ export class InvitationsService {
         summary: `Invited ${email} as ${dto.role}.`,
         data: { email, role: dto.role },
       });
-      return { invitation, inviter };
-    });
-    const link = `${this.app.publicUrl}/invitations/${token}`;
-    try {
-      await this.mail.send({
+      await tx.flush();
+      // Goes out after commit from the mail queue; a refused invitation sends nothing.
+      const link = `${this.app.publicUrl}/invitations/${token}`;
+      await this.outbox.enqueue(tx, {
         to: email,
         subject: `${inviter.displayName} invites you to the breeding project "${access.project.title}"`,
         text:
@@ -96,10 +86,8 @@ export class InvitationsService {
           `Open this link within ${INVITATION_DAYS} days to accept (sign in or create an account first):\n\n${link}\n\n` +
           `The link works once. If you did not expect this e-mail, ignore it.\n`,
       });
-    } catch (e) {
-      this.logger.error(`invitation mail failed: ${e instanceof Error ? e.message : String(e)}`);
-      throw new ServiceUnavailableException('The invitation is saved but the e-mail could not be sent. Please send it again in a moment.');
-    }
+      return invitation;
+    });
     return toInvitationResponse(invitation);
   }
 
@@ -117,41 +105,82 @@ export class InvitationsService {
   }
 
   async preview(token: string): Promise<InvitationPreview> {
-    return toInvitationPreview(await this.byToken(token, this.em));
+    return toInvitationPreview(await this.byToken(token, this.em), this.clock.now());
   }
 
-  /** Joins the signed-in user to the project with the invitation's role; the link then stops working. */
+  /**
+   * Joins the signed-in user to the project with the invitation's role; the link then stops
+   * working. A link is a bearer secret that may be forwarded or intercepted, so an account with
+   * another address than the invited one only asks to join, and the owner approves it.
+   */
   async accept(viewer: AuthUser, token: string): Promise<AcceptInvitationResponse> {
     return this.em.transactional(async (tx) => {
       const inv = await this.byToken(token, tx, true);
-      const problem = invitationProblem(inv);
+      const problem = invitationProblem(inv, this.clock.now());
       if (problem) throw new GoneException(problem);
-      const projectId = inv.project.id;
-      if (await tx.count(ProjectMember, { project: projectId, user: viewer.id })) {
-        throw new ConflictException({ message: 'You are already a member of this project.' });
-      }
       const user = await tx.findOneOrFail(User, viewer.id);
-      let member: ProjectMember;
-      if (inv.member) {
-        if (inv.member.user) throw new ConflictException({ message: 'This party of the project is already linked to an account.' });
-        member = inv.member;
-        member.user = user;
-        member.role = inv.role;
-      } else {
-        member = tx.create(ProjectMember, { project: projectId, user, role: inv.role, name: user.displayName, email: user.email });
-      }
-      inv.acceptedAt = new Date();
-      inv.acceptedBy = user;
+      if (user.email.toLowerCase() === inv.email) return this.join(tx, inv, user);
+      await this.assertNotMember(tx, inv, user);
+      inv.claimedBy = user;
+      inv.claimedAt = this.clock.now();
       this.activity.record(tx, {
-        projectId,
+        projectId: inv.project.id,
         actorId: viewer.id,
-        kind: 'member.joined',
-        subjectType: 'member',
-        subjectId: member.id,
-        summary: `${user.displayName} joined as ${inv.role}.`,
-        data: { role: inv.role, invitationId: inv.id },
+        kind: 'invitation.claimed',
+        subjectType: 'invitation',
+        subjectId: inv.id,
+        summary: `${user.displayName} (${user.email}) opened the invitation sent to ${inv.email} and waits for the owner's approval.`,
+        data: { invitationId: inv.id, email: inv.email, claimedByEmail: user.email },
       });
-      return { projectId, role: inv.role };
+      return { projectId: inv.project.id, role: inv.role, status: 'awaiting-owner' as const };
     });
+  }
+
+  /** The owner lets the account that opened the invitation from another address join. */
+  async approveClaim(viewer: AuthUser, access: ProjectAccess, invitationId: string): Promise<AcceptInvitationResponse> {
+    return this.em.transactional(async (tx) => {
+      const inv = await tx.findOne(
+        Invitation,
+        { id: invitationId, project: access.project.id },
+        { populate: ['project', 'member', 'claimedBy'], lockMode: LockMode.PESSIMISTIC_WRITE },
+      );
+      if (!inv) throw new NotFoundException('This project has no such invitation.');
+      const problem = invitationProblem(inv, this.clock.now());
+      if (problem) throw new GoneException(problem);
+      if (!inv.claimedBy) throw new ConflictException({ message: 'Nobody has asked to join with this invitation yet.' });
+      return this.join(tx, inv, inv.claimedBy, viewer.id);
+    });
+  }
+
+  private async assertNotMember(tx: EntityManager, inv: Invitation, user: User): Promise<void> {
+    if (await tx.count(ProjectMember, { project: inv.project.id, user: user.id })) {
+      throw new ConflictException({ message: 'You are already a member of this project.' });
+    }
+  }
+
+  private async join(tx: EntityManager, inv: Invitation, user: User, actorId = user.id): Promise<AcceptInvitationResponse> {
+    await this.assertNotMember(tx, inv, user);
+    const projectId = inv.project.id;
+    let member: ProjectMember;
+    if (inv.member) {
+      if (inv.member.user) throw new ConflictException({ message: 'This party of the project is already linked to an account.' });
+      member = inv.member;
+      member.user = user;
+      member.role = inv.role;
+    } else {
+      member = tx.create(ProjectMember, { project: projectId, user, role: inv.role, name: user.displayName, email: user.email });
+    }
+    inv.acceptedAt = this.clock.now();
+    inv.acceptedBy = user;
+    this.activity.record(tx, {
+      projectId,
+      actorId,
+      kind: 'member.joined',
+      subjectType: 'member',
+      subjectId: member.id,
+      summary: `${user.displayName} joined as ${inv.role}.`,
+      data: { role: inv.role, invitationId: inv.id },
+    });
+    return { projectId, role: inv.role, status: 'joined' };
   }
 }

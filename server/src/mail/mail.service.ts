@@ -1,4 +1,4 @@
-import { Inject, Injectable, Logger, OnModuleDestroy } from '@nestjs/common';
+import { BadGatewayException, Inject, Injectable, Logger, OnModuleDestroy, ServiceUnavailableException } from '@nestjs/common';
 import { ConfigType } from '@nestjs/config';
 import nodemailer, { type Transporter } from 'nodemailer';
 import { mailConfig } from '../config/mail.config';
@@ -27,8 +27,18 @@ export class MailService implements OnModuleDestroy {
     });
   }
 
+  /** Sends now. A refusal by the mail server is a 502, an unreachable server a 503; nothing is half-sent. */
   async send(mail: OutgoingMail): Promise<void> {
-    await this.transport.sendMail({ from: this.config.from, ...mail });
+    try {
+      await this.transport.sendMail({ from: this.config.from, ...mail });
+    } catch (e) {
+      const code = (e as { responseCode?: unknown }).responseCode;
+      this.logger.error(`mail "${mail.subject}" not sent: ${e instanceof Error ? e.message : String(e)}`);
+      if (typeof code === 'number' && code >= 500) {
+        throw new BadGatewayException(`The mail server refused the message to ${mail.to}. Check the address and try again.`);
+      }
+      throw new ServiceUnavailableException('The mail server cannot be reached just now. Nothing was sent; try again in a few minutes.');
+    }
     this.logger.log(`mail "${mail.subject}" sent`);
   }
 

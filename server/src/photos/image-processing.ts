@@ -1,10 +1,12 @@
-import { UnsupportedMediaTypeException } from '@nestjs/common';
-import sharp from 'sharp';
+import { PayloadTooLargeException, UnsupportedMediaTypeException } from '@nestjs/common';
+import sharp, { type Metadata } from 'sharp';
 
 /** Formats we take, as sharp reads them from the bytes (the file name and declared type are not trusted). */
 const ACCEPTED = new Set(['jpeg', 'png', 'webp', 'heif', 'avif', 'tiff']);
 const MAX_SIDE = 2560;
 const THUMB_SIDE = 320;
+/** Far above any phone camera's photo; a larger one is refused from its header, before it is decoded (a decompression bomb would fill memory). */
+export const MAX_PHOTO_PIXELS = 40_000_000;
 
 export interface ProcessedImage {
   full: Buffer;
@@ -21,15 +23,21 @@ const refuse = () => new UnsupportedMediaTypeException({ message: 'That file is 
  * re-encoding writes no metadata at all, so GPS position, camera and times are gone.
  */
 export async function processImage(input: Buffer): Promise<ProcessedImage> {
-  let format: string | undefined;
+  let meta: Metadata;
   try {
-    format = (await sharp(input).metadata()).format;
+    meta = await sharp(input).metadata();
   } catch {
     throw refuse();
   }
-  if (!format || !ACCEPTED.has(format)) throw refuse();
+  if (!meta.format || !ACCEPTED.has(meta.format)) throw refuse();
+  if (meta.width * meta.height > MAX_PHOTO_PIXELS) {
+    throw new PayloadTooLargeException({
+      message: `The photo has ${((meta.width * meta.height) / 1e6).toFixed(1)} megapixels (${meta.width} × ${meta.height}); at most ${MAX_PHOTO_PIXELS / 1e6} are taken. Send a smaller one.`,
+    });
+  }
   try {
-    const upright = sharp(input, { failOn: 'error' }).rotate().flatten({ background: '#ffffff' });
+    // The same bound inside the decoder too, should a header understate the size.
+    const upright = sharp(input, { failOn: 'error', limitInputPixels: MAX_PHOTO_PIXELS }).rotate().flatten({ background: '#ffffff' });
     const { data: full, info } = await upright
       .clone()
       .resize({ width: MAX_SIDE, height: MAX_SIDE, fit: 'inside', withoutEnlargement: true })

@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from '@mikro-orm/postgresql';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 
 /** May `viewer` see the photos of this subject (an animal, a molt, a sac opening…)? */
 export type PhotoAccessCheck = (em: EntityManager, viewer: AuthUser, subjectId: string) => Promise<boolean>;

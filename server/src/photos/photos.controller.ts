@@ -1,6 +1,6 @@
 import { Controller, Get, Header, Param, ParseUUIDPipe, StreamableFile } from '@nestjs/common';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { PhotosService } from './photos.service';
 
 @Controller('photos')

@@ -1,7 +1,7 @@
 import { BadRequestException, Injectable, NotFoundException, StreamableFile } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
 import type { PhotoRef } from '@broodsilk/shared';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { User } from '../users/user.entity';
 import { Photo } from './photo.entity';
 import { PhotoStorageService } from './photo-storage.service';

@@ -1,8 +1,8 @@
 import { Body, Controller, Delete, Get, HttpCode, Param, ParseUUIDPipe, Post } from '@nestjs/common';
 import type { ProjectMemberResponse } from '@broodsilk/shared';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
-import { AnyProjectMember, CurrentProject, ProjectRoles } from '../common/decorators/project-roles.decorator';
-import type { AuthUser } from '../auth/auth-user';
+import { AnyProjectMember, CurrentProject, ProjectRoles } from './project-roles.decorator';
+import type { AuthUser } from '../common/auth-user';
 import type { ProjectAccess } from './project-access.service';
 import { MembersService } from './members.service';
 import { AddMemberDto } from './dto/add-member.dto';

@@ -1,8 +1,8 @@
 import { Body, Controller, Get, Post } from '@nestjs/common';
 import type { PairingResponse } from '@broodsilk/shared';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
-import { AnyProjectMember, CurrentProject, ProjectRoles } from '../common/decorators/project-roles.decorator';
-import type { AuthUser } from '../auth/auth-user';
+import { AnyProjectMember, CurrentProject, ProjectRoles } from './project-roles.decorator';
+import type { AuthUser } from '../common/auth-user';
 import type { ProjectAccess } from './project-access.service';
 import { PairingsService } from './pairings.service';
 import { CreatePairingDto } from './dto/create-pairing.dto';

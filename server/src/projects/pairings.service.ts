@@ -1,8 +1,8 @@
 import { ConflictException, Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
 import { todayIn, type PairingResponse } from '@broodsilk/shared';
-import type { AuthUser } from '../auth/auth-user';
-import { badRequest } from '../animals/animals.service';
+import type { AuthUser } from '../common/auth-user';
+import { badRequest } from '../common/field-errors';
 import { User } from '../users/user.entity';
 import { ActivityService } from '../activity/activity.service';
 import type { ProjectAccess } from './project-access.service';
@@ -10,6 +10,7 @@ import { Project } from './project.entity';
 import { Pairing } from './pairing.entity';
 import { toPairingResponse } from './pairings.mapper';
 import type { CreatePairingDto } from './dto/create-pairing.dto';
+import { Clock } from '../common/clock';
 
 // A clock a few minutes fast on the keeper's phone is not a pairing in the future.
 const FUTURE_SLACK_MS = 5 * 60_000;
@@ -19,6 +20,7 @@ export class PairingsService {
   constructor(
     private readonly em: EntityManager,
     private readonly activity: ActivityService,
+    private readonly clock: Clock,
   ) {}
 
   async list(access: ProjectAccess): Promise<PairingResponse[]> {
@@ -28,7 +30,7 @@ export class PairingsService {
 
   async create(viewer: AuthUser, access: ProjectAccess, dto: CreatePairingDto): Promise<PairingResponse> {
     const startedAt = new Date(dto.startedAt);
-    if (startedAt.getTime() > Date.now() + FUTURE_SLACK_MS)
+    if (startedAt.getTime() > this.clock.now().getTime() + FUTURE_SLACK_MS)
       throw badRequest([{ field: 'startedAt', message: 'The pairing start is in the future; record a pairing once it has happened.' }]);
     const id = await this.em.transactional(async (tx) => {
       const p = await tx.findOneOrFail(Project, access.project.id, { populate: ['owner', 'male'] });

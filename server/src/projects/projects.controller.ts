@@ -1,8 +1,8 @@
 import { Body, Controller, Get, HttpCode, Patch, Post } from '@nestjs/common';
 import type { ProjectResponse, ProjectSummary } from '@broodsilk/shared';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
-import { AnyProjectMember, CurrentProject, ProjectRoles } from '../common/decorators/project-roles.decorator';
-import type { AuthUser } from '../auth/auth-user';
+import { AnyProjectMember, CurrentProject, ProjectRoles } from './project-roles.decorator';
+import type { AuthUser } from '../common/auth-user';
 import type { ProjectAccess } from './project-access.service';
 import { ProjectsService } from './projects.service';
 import { CreateProjectDto } from './dto/create-project.dto';

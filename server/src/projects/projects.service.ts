@@ -1,9 +1,9 @@
 import { ConflictException, Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
 import { todayIn, type FieldError, type ProjectResponse, type ProjectSummary } from '@broodsilk/shared';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { Animal } from '../animals/animal.entity';
-import { badRequest } from '../animals/animals.service';
+import { badRequest } from '../common/field-errors';
 import { User } from '../users/user.entity';
 import { ActivityService } from '../activity/activity.service';
 import { Project } from './project.entity';
@@ -16,6 +16,7 @@ import { partnerNamesOf } from './partner-names';
 import type { CreateProjectDto } from './dto/create-project.dto';
 import type { UpdateProjectDto } from './dto/update-project.dto';
 import type { EndProjectDto } from './dto/end-project.dto';
+import { Clock } from '../common/clock';
 
 const PROJECT_POPULATE = ['owner', 'female.species', 'male.species'] as const;
 const DETAIL_POPULATE = ['owner', 'female.species', 'female.recordedBy', 'female.ownerUser', 'male.species', 'male.recordedBy', 'male.ownerUser'] as const;
@@ -24,13 +25,14 @@ const DETAIL_POPULATE = ['owner', 'female.species', 'female.recordedBy', 'female
 export class ProjectsService {
   constructor(
     private readonly em: EntityManager,
+    private readonly clock: Clock,
     private readonly stages: ProjectStageService,
     private readonly terms: TermsService,
     private readonly activity: ActivityService,
   ) {}
 
   private today(viewer: AuthUser): string {
-    return todayIn(viewer.timeZone, new Date());
+    return todayIn(viewer.timeZone, this.clock.now());
   }
 
   /** Every project the viewer is a member of, newest first, with its stage. */

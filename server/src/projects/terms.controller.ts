@@ -1,8 +1,8 @@
 import { Body, Controller, Get, HttpCode, Param, ParseIntPipe, Post } from '@nestjs/common';
 import type { TermsListResponse, TermsVersionResponse } from '@broodsilk/shared';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
-import { CurrentProject, ProjectRoles } from '../common/decorators/project-roles.decorator';
-import type { AuthUser } from '../auth/auth-user';
+import { CurrentProject, ProjectRoles } from './project-roles.decorator';
+import type { AuthUser } from '../common/auth-user';
 import type { ProjectAccess } from './project-access.service';
 import { TermsService } from './terms.service';
 import { ProposeTermsDto } from './dto/propose-terms.dto';

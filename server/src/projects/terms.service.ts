@@ -8,8 +8,8 @@ import {
   type TermsListResponse,
   type TermsVersionResponse,
 } from '@broodsilk/shared';
-import type { AuthUser } from '../auth/auth-user';
-import { badRequest } from '../animals/animals.service';
+import type { AuthUser } from '../common/auth-user';
+import { badRequest } from '../common/field-errors';
 import { User } from '../users/user.entity';
 import { ActivityService } from '../activity/activity.service';
 import type { ProjectAccess } from './project-access.service';

@@ -1,13 +1,17 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
 import type { NotificationResponse } from '@broodsilk/shared';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { Notification } from './notification.entity';
 import { toNotificationResponse } from './reminders.service';
+import { Clock } from '../common/clock';
 
 @Injectable()
 export class NotificationsService {
-  constructor(private readonly em: EntityManager) {}
+  constructor(
+    private readonly em: EntityManager,
+    private readonly clock: Clock,
+  ) {}
 
   /** The caller's own reminders, newest first. */
   async list(viewer: AuthUser): Promise<NotificationResponse[]> {
@@ -18,7 +22,7 @@ export class NotificationsService {
   async markRead(viewer: AuthUser, id: string): Promise<NotificationResponse> {
     const n = await this.em.findOne(Notification, { id, user: viewer.id });
     if (!n) throw new NotFoundException({ message: 'There is no such notification.' });
-    n.readAt ??= new Date();
+    n.readAt ??= this.clock.now();
     await this.em.flush();
     return toNotificationResponse(n);
   }

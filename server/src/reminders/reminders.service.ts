@@ -1,5 +1,5 @@
 import { Injectable, Logger } from '@nestjs/common';
-import { MikroORM, type EntityManager } from '@mikro-orm/postgresql';
+import { CreateRequestContext, EntityManager, MikroORM } from '@mikro-orm/postgresql';
 import { todayIn, type NotificationResponse } from '@broodsilk/shared';
 import { MailService } from '../mail/mail.service';
 import { User } from '../users/user.entity';
@@ -8,7 +8,7 @@ import { Animal } from '../animals/animal.entity';
 import { maleClockOf } from '../animals/animals.mapper';
 import { Sac } from '../sacs/sac.entity';
 import { SAC_POPULATE, SacViewsService } from '../sacs/sac-views.service';
-import { Clock } from '../sacs/clock';
+import { Clock } from '../common/clock';
 import { Notification } from './notification.entity';
 import { sacCandidates, type Candidate } from './reminder-candidates';
 
@@ -24,7 +24,9 @@ export class RemindersService {
   private readonly logger = new Logger(RemindersService.name);
 
   constructor(
+    // @CreateRequestContext finds `orm` and gives `em` a context of its own for each run.
     private readonly orm: MikroORM,
+    private readonly em: EntityManager,
     private readonly views: SacViewsService,
     private readonly mail: MailService,
     private readonly clock: Clock,
@@ -32,20 +34,20 @@ export class RemindersService {
 
   /**
    * The periodic job: finds what is due for everyone and sends each reminder once per thing per
-   * person per day (by mail and in-app). Runs on a forked entity manager, never the global one.
+   * person per day (by mail and in-app). Runs in its own request context, never the global one.
    */
+  @CreateRequestContext()
   async runOnce(now: Date = this.clock.now()): Promise<ReminderRun> {
-    const em = this.orm.em.fork();
-    const candidates = [...(await this.sacReminders(em, now)), ...(await this.maleReminders(em, now))];
+    const candidates = [...(await this.sacReminders(now)), ...(await this.maleReminders(now))];
     let sent = 0;
     for (const c of candidates) if (await this.deliver(c)) sent += 1;
     return { sent, skipped: candidates.length - sent };
   }
 
-  private async sacReminders(em: EntityManager, now: Date): Promise<Candidate[]> {
-    const sacs = await em.find(Sac, { outcome: 'in-progress', project: { endedOn: null, closedOn: null } }, { populate: SAC_POPULATE });
+  private async sacReminders(now: Date): Promise<Candidate[]> {
+    const sacs = await this.em.find(Sac, { outcome: 'in-progress', project: { endedOn: null, closedOn: null } }, { populate: SAC_POPULATE });
     if (!sacs.length) return [];
-    const members = await em.find(
+    const members = await this.em.find(
       ProjectMember,
       { project: { $in: [...new Set(sacs.map((s) => s.project.id))] }, role: { $in: ['owner', 'caretaker'] }, user: { $ne: null } },
       { populate: ['user'] },
@@ -53,15 +55,15 @@ export class RemindersService {
     const out: Candidate[] = [];
     for (const m of members) {
       const own = sacs.filter((s) => s.project.id === m.project.id);
-      const views = await this.views.build(em, own, m.user!.timeZone, now);
+      const views = await this.views.build(this.em, own, m.user!.timeZone, now);
       own.forEach((s, i) => out.push(...sacCandidates({ id: m.user!.id, email: m.user!.email }, s.project.id, s.project.title, views[i])));
     }
     return out;
   }
 
   /** Males whose clock moves to its next state today, for the keeper who records them (the rule of the collection's males list). */
-  private async maleReminders(em: EntityManager, now: Date): Promise<Candidate[]> {
-    const males = await em.find(
+  private async maleReminders(now: Date): Promise<Candidate[]> {
+    const males = await this.em.find(
       Animal,
       { sex: 'male', maturity: 'mature', maturedOn: { $ne: null }, status: { $in: ['active', 'on-loan'] } },
       { populate: ['species', 'recordedBy'] },
@@ -90,7 +92,7 @@ export class RemindersService {
   /** Claims the key, stores the notification and sends the mail in one transaction: a failed mail rolls back and is retried next run. */
   private async deliver(c: Candidate): Promise<boolean> {
     try {
-      return await this.orm.em.fork().transactional(async (tx) => {
+      return await this.em.transactional(async (tx) => {
         const claimed = await tx
           .getConnection()
           .execute<{ key: string }[]>(

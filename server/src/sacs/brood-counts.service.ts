@@ -1,15 +1,16 @@
 import { BadRequestException, Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
 import type { BroodCountResponse, BroodCountsResponse } from '@broodsilk/shared';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { ActivityService } from '../activity/activity.service';
 import { User } from '../users/user.entity';
 import { BroodCount } from './brood-count.entity';
 import { SacOpening } from './sac-opening.entity';
 import { SacsService } from './sacs.service';
-import { Clock } from './clock';
-import { assertNotFuture, fieldError } from './sac-rules';
+import { Clock } from '../common/clock';
+import { assertNotFuture } from './sac-rules';
+import { fieldError } from '../common/field-errors';
 import { toBroodCountResponse } from './brood.mapper';
 import type { BroodCountDto } from './dto/brood-count.dto';
 

@@ -1,10 +1,11 @@
 import { Body, Controller, Get, Param, ParseUUIDPipe, Post, UploadedFile, UseInterceptors } from '@nestjs/common';
 import type { BroodCountResponse, BroodCountsResponse, OpeningResponse, PhotoRef } from '@broodsilk/shared';
-import { AnyProjectMember, CurrentProject, ProjectFrom, ProjectRoles } from '../common/decorators/project-roles.decorator';
+import { AnyProjectMember, CurrentProject, ProjectFrom, ProjectRoles } from '../projects/project-roles.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { ImageUploadInterceptor } from '../photos/image-upload.interceptor';
+import { PhotoUploadLimit } from '../photos/photo-upload-limit';
 import { OpeningService } from './opening.service';
 import { BroodCountsService } from './brood-counts.service';
 import { OpeningDto } from './dto/opening.dto';
@@ -39,6 +40,7 @@ export class BroodController {
   @Post('opening/photos')
   @ProjectRoles('owner')
   @ProjectFrom('sac')
+  @PhotoUploadLimit()
   @UseInterceptors(ImageUploadInterceptor)
   photo(
     @CurrentProject() a: ProjectAccess,

@@ -8,7 +8,7 @@ import {
   type BroodStage,
   type CareLogKind,
 } from '@broodsilk/shared';
-import { fieldError } from './sac-rules';
+import { fieldError } from '../common/field-errors';
 import type { CareLogEntryDto } from './dto/care-log-entry.dto';
 
 /** Which value fields each kind takes; any other value field is refused so nothing is silently dropped. */

@@ -1,13 +1,13 @@
 import { Body, Controller, Get, Param, ParseUUIDPipe, Post } from '@nestjs/common';
 import type { CareLogEntryResponse } from '@broodsilk/shared';
-import { AnyProjectMember, CurrentProject, ProjectFrom, ProjectRoles } from '../common/decorators/project-roles.decorator';
+import { AnyProjectMember, CurrentProject, ProjectFrom, ProjectRoles } from '../projects/project-roles.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { CareLogService } from './care-log.service';
 import { CareLogEntryDto } from './dto/care-log-entry.dto';
 
-/** Partners read the log; the owner and caretakers write it (PRODUCT.md: caretakers add log entries). */
+/** Partners read the log; the owner and caretakers write it (docs/product.md, Roles: caretakers add log entries). */
 @Controller('sacs/:id/log')
 export class CareLogController {
   constructor(private readonly log: CareLogService) {}

@@ -1,7 +1,7 @@
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
 import { todayIn, type OpeningResponse, type PhotoRef } from '@broodsilk/shared';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { ActivityService } from '../activity/activity.service';
 import { PhotosService } from '../photos/photos.service';
@@ -9,8 +9,9 @@ import { User } from '../users/user.entity';
 import { SacOpening } from './sac-opening.entity';
 import { BroodCount } from './brood-count.entity';
 import { SacsService } from './sacs.service';
-import { Clock } from './clock';
-import { assertNotFuture, badRequest, fieldError } from './sac-rules';
+import { Clock } from '../common/clock';
+import { assertNotFuture } from './sac-rules';
+import { badRequest, fieldError } from '../common/field-errors';
 import { toOpeningResponse, viableOf } from './brood.mapper';
 import type { OpeningDto } from './dto/opening.dto';
 

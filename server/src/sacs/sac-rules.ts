@@ -1,14 +1,5 @@
-import { BadRequestException } from '@nestjs/common';
-import { LOG_FUTURE_TOLERANCE_MS, assertPullWindow, todayIn, type FieldError } from '@broodsilk/shared';
-
-export function badRequest(errors: FieldError[]): BadRequestException {
-  const message = errors.length === 1 ? errors[0].message : `Please correct ${errors.length} fields: ${errors.map((d) => d.field).join(', ')}.`;
-  return new BadRequestException({ message, details: errors });
-}
-
-export function fieldError(field: string, message: string): BadRequestException {
-  return badRequest([{ field, message }]);
-}
+import { LOG_FUTURE_TOLERANCE_MS, assertPullWindow, todayIn } from '@broodsilk/shared';
+import { fieldError } from '../common/field-errors';
 
 /** An instant may be up to a minute ahead of the server's clock (phones and servers disagree a little). */
 export function assertNotFuture(field: string, what: string, at: Date, now: Date): void {

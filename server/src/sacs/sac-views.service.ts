@@ -6,7 +6,7 @@ import { ownBreeding } from '../species/species.mapper';
 import type { Sac } from './sac.entity';
 import { currentCountsOf, lastRollsOf, openedSacsOf } from './sac-queries';
 import { toSacResponse, type PullWindowInForce } from './sacs.mapper';
-import { Clock } from './clock';
+import { Clock } from '../common/clock';
 
 /** The pull window in force: the sac's own days, else the species' (else day 21–45, common practice). Needs `project.female.species` loaded. */
 export function windowOf(sac: Sac): PullWindowInForce {

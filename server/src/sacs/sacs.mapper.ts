@@ -17,7 +17,7 @@ export interface SacViewContext {
   currentCount: number | null;
 }
 
-/** The roll state of a sac (null when rolling does not apply), by PRODUCT.md's roll rule. */
+/** The roll state of a sac (null when rolling does not apply), by the roll rule in docs/product.md, Data rules. */
 export function rollOf(sac: Sac, now: Date, lastRollAt: Date | null): SacResponse['roll'] {
   const pulled = !!sac.pulledAt && sac.outcome === 'in-progress';
   const state = rollState({
@@ -61,6 +61,6 @@ export function toSacResponse(sac: Sac, c: SacViewContext): SacResponse {
 
 /** What the project stage derivation wants to know about a sac. */
 export function toSacFact(sac: Sac): SacFact {
-  const outcome = sac.outcome !== 'failed' ? 'developing' : sac.failureReason === 'eaten' ? 'eaten' : 'failed';
-  return { id: sac.id, layDate: sac.layDate, pulledOn: sac.pulledOn ?? null, outcome, broodStage: sac.broodStage };
+  const fate = sac.outcome !== 'failed' ? 'developing' : sac.failureReason === 'eaten' ? 'eaten' : 'failed';
+  return { id: sac.id, layDate: sac.layDate, pulledOn: sac.pulledOn ?? null, fate, broodStage: sac.broodStage };
 }

@@ -8,7 +8,6 @@ import { Sac } from './sac.entity';
 import { SacLogEntry } from './sac-log-entry.entity';
 import { SacOpening } from './sac-opening.entity';
 import { BroodCount } from './brood-count.entity';
-import { Clock } from './clock';
 import { SacViewsService } from './sac-views.service';
 import { SacsService } from './sacs.service';
 import { BroodService } from './brood.service';
@@ -28,8 +27,8 @@ const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 @Module({
   imports: [MikroOrmModule.forFeature([Sac, SacLogEntry, SacOpening, BroodCount]), ProjectsModule, ActivityModule, PhotosModule],
   controllers: [ProjectSacsController, SacsController, CareLogController, BroodController],
-  providers: [Clock, SacViewsService, SacsService, BroodService, CareLogService, OpeningService, BroodCountsService],
-  exports: [Clock, SacViewsService, SacsService, BroodService],
+  providers: [SacViewsService, SacsService, BroodService, CareLogService, OpeningService, BroodCountsService],
+  exports: [SacViewsService, SacsService, BroodService],
 })
 export class SacsModule implements OnModuleInit {
   constructor(

@@ -1,14 +1,15 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
 import { todayIn, type SacResponse } from '@broodsilk/shared';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { ActivityService } from '../activity/activity.service';
 import { User } from '../users/user.entity';
 import { Sac } from './sac.entity';
 import { SAC_POPULATE, SacViewsService } from './sac-views.service';
-import { Clock } from './clock';
-import { assertSacDates, fieldError } from './sac-rules';
+import { Clock } from '../common/clock';
+import { assertSacDates } from './sac-rules';
+import { fieldError } from '../common/field-errors';
 import type { CreateSacDto } from './dto/create-sac.dto';
 import type { UpdateSacDto } from './dto/update-sac.dto';
 
@@ -121,6 +122,6 @@ function describeChange(sac: Sac, wasPulled: boolean, pulledChanged: boolean, ou
   if (outcomeChanged && sac.outcome === 'failed') return { kind: 'sac.failed', summary: `Sac laid ${sac.layDate} marked failed (${sac.failureReason}).` };
   if (pulledChanged && sac.pulledAt) return { kind: 'sac.pulled', summary: `Sac laid ${sac.layDate} pulled on ${sac.pulledOn} and moved to the incubator.` };
   if (pulledChanged && wasPulled) return { kind: 'sac.updated', summary: `Sac laid ${sac.layDate}: pull removed, it is with the mother.` };
-  if (outcomeChanged && sac.outcome === 'hatched') return { kind: 'sac.updated', summary: `Sac laid ${sac.layDate} marked hatched.` };
+  if (outcomeChanged && sac.outcome === 'emerged') return { kind: 'sac.updated', summary: `Sac laid ${sac.layDate}: the young have emerged.` };
   return { kind: 'sac.updated', summary: `Sac laid ${sac.layDate} updated.` };
 }

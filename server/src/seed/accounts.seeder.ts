@@ -14,6 +14,7 @@ import { LedgerEntryRow } from '../accounts/ledger-entry.entity';
 import { sacCountsOf } from '../accounts/sac-counts';
 import { findDemoProject } from './projects.seeder';
 import type { FeatureSeeder } from './demo-seed';
+import { Clock } from '../common/clock';
 
 /**
  * The demo's partner accounts (an invented scenario). On "Versicolor shared brood" a third party,
@@ -37,7 +38,7 @@ export const seedAccounts: FeatureSeeder = async (ctx) => {
   const mira = users.keeper;
   const tomasz = users.partner;
   const today = todayIn(mira.timeZone, ctx.today);
-  const activity = new ActivityService(em);
+  const activity = new ActivityService(em, new Clock());
   const append = async (project: Project, r: Row, by: User, summary: string): Promise<LedgerEntryRow> => {
     const at = eveningOf(r.date);
     const row = em.create(LedgerEntryRow, { ...r, project, seq: await nextSeq(em), recordedBy: by, createdAt: at });
@@ -202,7 +203,7 @@ export const seedAccounts: FeatureSeeder = async (ctx) => {
     layDate: laid,
     pulledAt: eveningOf(addDays(laid, 28)),
     pulledOn: addDays(laid, 28),
-    outcome: 'hatched',
+    outcome: 'emerged',
     broodStage: 'second-instar',
     recordedBy: mira,
     createdAt: eveningOf(laid),

@@ -10,6 +10,7 @@ import { TermsVersion } from '../projects/terms-version.entity';
 import { TermsLine } from '../projects/terms-line.entity';
 import { TermsAcceptance } from '../projects/terms-acceptance.entity';
 import type { FeatureSeeder, SeedContext } from './demo-seed';
+import { Clock } from '../common/clock';
 
 /**
  * The demo's breeding projects (an invented scenario), keyed so later seeders find them:
@@ -137,7 +138,7 @@ export const seedProjects: FeatureSeeder = async (ctx) => {
   const tomasz = users.partner;
   const ines = users.caretaker;
   const today = todayIn(mira.timeZone, now);
-  const activity = new ActivityService(em);
+  const activity = new ActivityService(em, new Clock());
   const animals = new Map((await em.find(Animal, { recordedBy: mira })).map((a) => [a.label, a]));
 
   for (const s of PROJECTS) {

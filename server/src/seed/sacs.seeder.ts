@@ -9,6 +9,7 @@ import { SacOpening } from '../sacs/sac-opening.entity';
 import { BroodCount } from '../sacs/brood-count.entity';
 import { findDemoProject } from './projects.seeder';
 import type { FeatureSeeder } from './demo-seed';
+import { Clock } from '../common/clock';
 
 const HOUR = 3_600_000;
 
@@ -25,7 +26,7 @@ export const seedSacs: FeatureSeeder = async (ctx) => {
   const mira = users.keeper;
   const ines = users.caretaker;
   const today = todayIn(mira.timeZone, now);
-  const activity = new ActivityService(em);
+  const activity = new ActivityService(em, new Clock());
   const ago = (hours: number) => new Date(now.getTime() - hours * HOUR);
   const event = (p: Project, actor: User, at: Date, kind: string, sac: Sac, summary: string) =>
     activity.record(em, { projectId: p.id, actorId: actor.id, kind, subjectType: 'sac', subjectId: sac.id, summary, at });

@@ -2,13 +2,13 @@ import { ConflictException, Inject, Injectable, BadRequestException } from '@nes
 import { ConfigType } from '@nestjs/config';
 import { EntityManager } from '@mikro-orm/postgresql';
 import type Stripe from 'stripe';
-import type { CheckoutResponse, CreateCheckoutRequest } from '@broodsilk/shared';
-import type { AuthUser } from '../auth/auth-user';
+import { formatMoneyCode, type CheckoutResponse, type CreateCheckoutRequest } from '@broodsilk/shared';
+import type { AuthUser } from '../common/auth-user';
 import { appConfig } from '../config/app.config';
 import { STRIPE_CLIENT } from '../payments/stripe.client';
+import { providerCall } from '../payments/provider-call';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { loadAccount } from '../accounts/account-loader';
-import { formatMinor } from '../accounts/money-format';
 import { User } from '../users/user.entity';
 import { PayoutAccount } from './payout-account.entity';
 import { SettlementCheckout } from './settlement-checkout.entity';
@@ -37,7 +37,7 @@ export class CheckoutService {
     if (!debt) throw new ConflictException(`You owe ${view.nameOf(creditor.id)} nothing on this project's account.`);
     if (dto.amountMinor > debt.amountMinor) {
       throw new ConflictException(
-        `You owe ${view.nameOf(creditor.id)} ${formatMinor(debt.amountMinor, currency)}; ${formatMinor(dto.amountMinor, currency)} is ${formatMinor(dto.amountMinor - debt.amountMinor, currency)} more than that.`,
+        `You owe ${view.nameOf(creditor.id)} ${formatMoneyCode(debt.amountMinor, currency)}; ${formatMoneyCode(dto.amountMinor, currency)} is ${formatMoneyCode(dto.amountMinor - debt.amountMinor, currency)} more than that.`,
       );
     }
     const payout = creditor.user ? await this.em.findOne(PayoutAccount, { user: creditor.user.id }) : null;
@@ -48,24 +48,26 @@ export class CheckoutService {
     if (!payout.chargesEnabled) throw new ConflictException(`${view.nameOf(creditor.id)} has not finished setting up their payout account yet.`);
 
     const back = `${this.app.publicUrl}/projects/${access.project.id}/account`;
-    const session = await this.stripe.checkout.sessions.create({
-      mode: 'payment',
-      line_items: [
-        {
-          quantity: 1,
-          price_data: { currency: currency.toLowerCase(), unit_amount: dto.amountMinor, product_data: { name: `Settlement: ${access.project.title}` } },
+    const session = await providerCall(() =>
+      this.stripe.checkout.sessions.create({
+        mode: 'payment',
+        line_items: [
+          {
+            quantity: 1,
+            price_data: { currency: currency.toLowerCase(), unit_amount: dto.amountMinor, product_data: { name: `Settlement: ${access.project.title}` } },
+          },
+        ],
+        payment_intent_data: {
+          transfer_data: { destination: payout.providerAccountId },
+          metadata: { projectId: access.project.id, fromMemberId: me.id, toMemberId: creditor.id },
         },
-      ],
-      payment_intent_data: {
-        transfer_data: { destination: payout.providerAccountId },
+        success_url: `${back}?paid={CHECKOUT_SESSION_ID}`,
+        cancel_url: `${back}?cancelled=1`,
+        client_reference_id: access.project.id,
+        customer_email: user.email,
         metadata: { projectId: access.project.id, fromMemberId: me.id, toMemberId: creditor.id },
-      },
-      success_url: `${back}?paid={CHECKOUT_SESSION_ID}`,
-      cancel_url: `${back}?cancelled=1`,
-      client_reference_id: access.project.id,
-      customer_email: user.email,
-      metadata: { projectId: access.project.id, fromMemberId: me.id, toMemberId: creditor.id },
-    });
+      }),
+    );
     this.em.create(SettlementCheckout, {
       sessionId: session.id,
       project: access.project,

@@ -3,9 +3,10 @@ import { ConfigType } from '@nestjs/config';
 import { EntityManager } from '@mikro-orm/postgresql';
 import type Stripe from 'stripe';
 import type { CreatePayoutAccountRequest, PayoutAccountResponse } from '@broodsilk/shared';
-import type { AuthUser } from '../auth/auth-user';
+import type { AuthUser } from '../common/auth-user';
 import { appConfig } from '../config/app.config';
 import { STRIPE_CLIENT } from '../payments/stripe.client';
+import { providerCall } from '../payments/provider-call';
 import { User } from '../users/user.entity';
 import { PayoutAccount } from './payout-account.entity';
 import { toPayoutResponse } from './payout-accounts.mapper';
@@ -27,27 +28,34 @@ export class PayoutAccountsService {
    * onboarding link: the provider collects bank and identity details, never this product.
    */
   async link(user: AuthUser, dto: CreatePayoutAccountRequest): Promise<PayoutAccountResponse> {
-    let account = await this.em.findOne(PayoutAccount, { user: user.id });
-    if (!account) {
-      const created = await this.stripe.accounts.create(
-        {
-          type: 'express',
-          country: dto.country,
-          email: user.email,
-          capabilities: { card_payments: { requested: true }, transfers: { requested: true } },
-          metadata: { userId: user.id },
-        },
-        { idempotencyKey: `payout-account-${user.id}` },
-      );
-      account = this.em.create(PayoutAccount, { user: this.em.getReference(User, user.id), providerAccountId: created.id });
-      await this.em.flush();
-    }
-    const link = await this.stripe.accountLinks.create({
-      account: account.providerAccountId,
-      type: 'account_onboarding',
-      refresh_url: `${this.app.publicUrl}/settings/payouts?again=1`,
-      return_url: `${this.app.publicUrl}/settings/payouts?done=1`,
-    });
+    const existing = await this.em.findOne(PayoutAccount, { user: user.id });
+    // Both provider calls come first, so a refusal stores nothing; the idempotency key gives a retry the same account.
+    const providerAccountId =
+      existing?.providerAccountId ??
+      (
+        await providerCall(() =>
+          this.stripe.accounts.create(
+            {
+              type: 'express',
+              country: dto.country,
+              email: user.email,
+              capabilities: { card_payments: { requested: true }, transfers: { requested: true } },
+              metadata: { userId: user.id },
+            },
+            { idempotencyKey: `payout-account-${user.id}` },
+          ),
+        )
+      ).id;
+    const link = await providerCall(() =>
+      this.stripe.accountLinks.create({
+        account: providerAccountId,
+        type: 'account_onboarding',
+        refresh_url: `${this.app.publicUrl}/settings/payouts?again=1`,
+        return_url: `${this.app.publicUrl}/settings/payouts?done=1`,
+      }),
+    );
+    const account = existing ?? this.em.create(PayoutAccount, { user: this.em.getReference(User, user.id), providerAccountId });
+    await this.em.flush();
     return toPayoutResponse(account, link.url);
   }
 

@@ -1,8 +1,8 @@
 import { Body, Controller, Get, Post } from '@nestjs/common';
 import type { CheckoutResponse, PayoutAccountResponse } from '@broodsilk/shared';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
-import { CurrentProject, ProjectRoles } from '../common/decorators/project-roles.decorator';
-import type { AuthUser } from '../auth/auth-user';
+import { CurrentProject, ProjectRoles } from '../projects/project-roles.decorator';
+import type { AuthUser } from '../common/auth-user';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { PayoutAccountsService } from './payout-accounts.service';
 import { CheckoutService } from './checkout.service';

@@ -7,6 +7,12 @@ import { EntriesService } from '../accounts/entries.service';
 import { Project } from '../projects/project.entity';
 import { PayoutAccountsService } from './payout-accounts.service';
 import { SettlementCheckout } from './settlement-checkout.entity';
+import { Clock } from '../common/clock';
+
+/** Event types that may mean a checkout session was paid; each is checked with the provider. */
+const SESSION_EVENTS = new Set(['checkout.session.completed', 'checkout.session.async_payment_succeeded']);
+
+type Handled = { received: true; duplicate: boolean };
 
 @Injectable()
 export class WebhookService {
@@ -14,6 +20,7 @@ export class WebhookService {
 
   constructor(
     private readonly em: EntityManager,
+    private readonly clock: Clock,
     @Inject(STRIPE_CLIENT) private readonly stripe: Stripe,
     @Inject(paymentsConfig.KEY) private readonly config: PaymentsConfig,
     private readonly entries: EntriesService,
@@ -25,7 +32,7 @@ export class WebhookService {
    * event once: its id goes into `payment_events` in the same transaction as its effect, so a
    * redelivery finds it there and changes nothing.
    */
-  async handle(rawBody: Buffer | undefined, signature: string | undefined): Promise<{ received: true; duplicate: boolean }> {
+  async handle(rawBody: Buffer | undefined, signature: string | undefined): Promise<Handled> {
     if (!rawBody || !signature) throw new BadRequestException('A payment webhook needs its body and the Stripe-Signature header.');
     let event: Stripe.Event;
     try {
@@ -33,42 +40,59 @@ export class WebhookService {
     } catch (e) {
       throw new BadRequestException(`The webhook signature could not be verified: ${(e as Error).message}`);
     }
+    if (SESSION_EVENTS.has(event.type)) return this.sessionEvent(event, (event.data.object as { id: string }).id);
+    return this.once(event, async (tx) => {
+      if (event.type === 'account.updated') await this.payouts.applyAccountUpdate(tx, event.data.object);
+    });
+  }
+
+  /**
+   * A signed event is only a hint: anyone holding the webhook secret could sign one. What is
+   * recorded is the session as the provider's API reports it (status, amount, currency).
+   */
+  private async sessionEvent(event: Stripe.Event, sessionId: string): Promise<Handled> {
+    const checkout = await this.em.fork().findOne(SettlementCheckout, { sessionId });
+    if (!checkout) {
+      this.logger.warn(`${event.type} for unknown session ${sessionId}; ignored`);
+      return { received: true, duplicate: false };
+    }
+    const session = await this.stripe.checkout.sessions.retrieve(sessionId);
+
+    return this.once(event, async (tx) => {
+      if (session.payment_status !== 'paid' || session.amount_total === null || !session.currency) return;
+      const recorded = await tx.execute(`select 1 from ledger_entries where provider_ref = ?`, [session.id]);
+      if (recorded.length) return; // another event about the same payment
+      if (session.amount_total !== checkout.amountMinor || session.currency.toUpperCase() !== checkout.currency) {
+        this.logger.warn(
+          `session ${session.id} paid ${session.amount_total} ${session.currency}, expected ${checkout.amountMinor} ${checkout.currency}; recording what was paid`,
+        );
+      }
+      const mine = await tx.findOneOrFail(SettlementCheckout, checkout.id, { populate: ['fromParty', 'toParty'] });
+      await this.entries.appendInTransaction(tx, await tx.findOneOrFail(Project, mine.project.id), {
+        kind: 'money',
+        date: this.clock.now().toISOString().slice(0, 10),
+        fromParty: mine.fromParty,
+        toParty: mine.toParty,
+        amountMinor: session.amount_total,
+        currency: session.currency.toUpperCase(),
+        note: 'Paid through the payment provider.',
+        source: 'payment-provider',
+        providerRef: session.id,
+      });
+    });
+  }
+
+  /** Runs `effect` in the transaction that records the event's id, unless it was handled before. */
+  private once(event: Stripe.Event, effect: (tx: EntityManager) => Promise<void>): Promise<Handled> {
     return this.em.transactional(async (tx) => {
       const inserted = await tx.execute<{ id: string }[]>(
         `insert into payment_events (id, type, received_at) values (?, ?, now()) on conflict (id) do nothing returning id`,
         [event.id, event.type],
       );
       if (!inserted.length) return { received: true as const, duplicate: true };
-      if (event.type === 'checkout.session.completed') await this.sessionCompleted(tx, event.data.object);
-      if (event.type === 'account.updated') await this.payouts.applyAccountUpdate(tx, event.data.object);
+      await effect(tx);
       await tx.flush();
       return { received: true as const, duplicate: false };
-    });
-  }
-
-  private async sessionCompleted(tx: EntityManager, session: Stripe.Checkout.Session): Promise<void> {
-    const checkout = await tx.findOne(SettlementCheckout, { sessionId: session.id }, { populate: ['fromParty', 'toParty'] });
-    if (!checkout) {
-      this.logger.warn(`checkout.session.completed for unknown session ${session.id}; ignored`);
-      return;
-    }
-    if (session.payment_status !== 'paid') return;
-    if (session.amount_total !== checkout.amountMinor || session.currency?.toUpperCase() !== checkout.currency) {
-      this.logger.warn(
-        `session ${session.id} paid ${session.amount_total} ${session.currency}, expected ${checkout.amountMinor} ${checkout.currency}; recording what was paid`,
-      );
-    }
-    const project = await tx.findOneOrFail(Project, checkout.project.id);
-    await this.entries.appendInTransaction(tx, project, {
-      kind: 'money',
-      date: new Date().toISOString().slice(0, 10),
-      fromParty: checkout.fromParty,
-      toParty: checkout.toParty,
-      amountMinor: session.amount_total ?? checkout.amountMinor,
-      currency: (session.currency ?? checkout.currency).toUpperCase(),
-      note: 'Paid through the payment provider.',
-      source: 'payment-provider',
-      providerRef: session.id,
     });
   }
 }

@@ -1,6 +1,7 @@
 // Loaded before every test file (vitest setupFiles), before AppModule reads the environment.
 process.env.JWT_SECRET ??= 'test-jwt-secret-test-jwt-secret-0123456789';
 process.env.CSRF_SECRET ??= 'test-csrf-secret-test-csrf-secret-012345678';
+process.env.CALENDAR_SECRET ??= 'test-calendar-secret-test-calendar-secret-01';
 process.env.DATABASE_URL = process.env.TEST_DATABASE_URL ?? 'postgres://app@127.0.0.1:54329/broodsilk_test';
 process.env.LOG_LEVEL ??= 'silent';
 process.env.AUTH_RATE_LIMIT ??= '1000';

@@ -5,10 +5,11 @@ import { addDays, todayIn, type ProjectResponse, type ProjectRole } from '@brood
 import { ProjectMember } from '../../src/projects/project-member.entity';
 import { createAnimal, speciesId } from './fixtures/collection';
 import { registerKeeper, type SignedIn } from './users';
+import { Clock } from '../../src/common/clock';
 
 let n = 0;
 
-/** A project of `owner` with a fresh mature female and a mature male (matured `maleAgeDays` ago). */
+/** A project of `owner` with a fresh mature female and a mature male (matured `maleAgeDays` before the app's clock says today). */
 export async function createProject(
   app: INestApplication,
   orm: MikroORM,
@@ -16,7 +17,7 @@ export async function createProject(
   opts: { title?: string; maleAgeDays?: number } = {},
 ): Promise<ProjectResponse> {
   n += 1;
-  const today = todayIn('UTC', new Date());
+  const today = todayIn('UTC', app.get(Clock).now());
   const species = await speciesId(orm, 'Grammostola pulchripes');
   const female = await createAnimal(app, owner, { speciesId: species, label: `F-${n}-${Date.now()}`, sex: 'female', maturity: 'mature' });
   const male = await createAnimal(app, owner, {

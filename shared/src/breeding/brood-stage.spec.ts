@@ -9,8 +9,8 @@ import {
   isBroodStageAtLeast,
 } from './brood-stage.js';
 
-// Order of development: TRADE-FACTS §1 (egg → prelarva "eggs with legs" → … → free-living nymph),
-// after Vachon 1957 as applied on brachypelma-smithi.de. Label sets: TRADE-FACTS §1, from memory.
+// Order of development: docs/trade-facts.md §1 (egg → prelarva "eggs with legs" → … → free-living nymph),
+// after Vachon 1957 as applied on brachypelma-smithi.de. Label sets: docs/trade-facts.md §1, from memory.
 describe('brood stages', () => {
   it('orders the stages as they develop', () => {
     const shuffled = ['second-instar', 'eggs', 'first-instar', 'eggs-with-legs'] as const;

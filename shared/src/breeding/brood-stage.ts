@@ -6,7 +6,7 @@ export const BROOD_STAGES: readonly BroodStage[] = ['eggs', 'eggs-with-legs', 'f
 export type BroodStageLabels = Readonly<Record<BroodStage, string>>;
 
 /**
- * Instar numbering differs between sources (TRADE-FACTS §1), so labels are configurable.
+ * Instar numbering differs between sources (docs/trade-facts.md §1), so labels are configurable.
  * US-style: "1st instar" is the first free-living nymph.
  */
 export const US_BROOD_STAGE_LABELS: BroodStageLabels = Object.freeze({

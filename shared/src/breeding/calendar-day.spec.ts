@@ -69,6 +69,8 @@ describe('calendar days', () => {
     expect(isCalendarDate('2023-02-29')).toBe(false);
     expect(isCalendarDate('2024-02-29')).toBe(true);
     expect(isCalendarDate('2024-2-9')).toBe(false);
+    // ISO 8601 counts a year 0000, but PostgreSQL's date type goes from 4713 BC to 1 BC to AD 1 with no year 0.
+    expect(isCalendarDate('0000-01-01')).toBe(false);
     expect(() => addDays('2023-02-29', 1)).toThrow(/not a calendar date/);
     expect(() => addDays('2024-01-01', 1.5)).toThrow(/whole number/);
     expect(() => todayIn('Mars/Olympus_Mons', new Date())).toThrow(/time zone/);

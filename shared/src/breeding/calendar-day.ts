@@ -11,9 +11,9 @@ export type CalendarDate = string;
 const DATE_PATTERN = /^\d{4}-\d{2}-\d{2}$/;
 const DAY_MS = 86_400_000;
 
-/** True when `value` is a real `YYYY-MM-DD` date (2023-02-29 is not). */
+/** True when `value` is a real `YYYY-MM-DD` date (2023-02-29 is not, nor is year 0, which PostgreSQL does not have). */
 export function isCalendarDate(value: string): boolean {
-  if (!DATE_PATTERN.test(value)) return false;
+  if (!DATE_PATTERN.test(value) || value.startsWith('0000')) return false;
   // dayjs rolls 02-30 over into March, so a round trip tells a real date from a rolled one.
   return dayjs.utc(value).format('YYYY-MM-DD') === value;
 }

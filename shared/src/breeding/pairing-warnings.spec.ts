@@ -2,9 +2,9 @@ import { describe, expect, it } from 'vitest';
 import { GROUP_LIFESPAN_DEFAULTS } from '../collection/male-clock.js';
 import { pairingWarnings, type PairingWarningFacts } from './pairing-warnings.js';
 
-// Sperm shed with a molt: TRADE-FACTS §5 (tarantulaspider.net; reptarach.de; brachypelma-smithi.de).
-// Pairing to sac up to a year: TRADE-FACTS §3 (keepingexoticpets.com; spinnen-andre.jimdo.com).
-// Lifespan groups: TRADE-FACTS §5, from memory. First sperm web after 2–4 weeks: common practice.
+// Sperm shed with a molt: docs/trade-facts.md §5 (tarantulaspider.net; reptarach.de; brachypelma-smithi.de).
+// Pairing to sac up to a year: docs/trade-facts.md §3 (keepingexoticpets.com; spinnen-andre.jimdo.com).
+// Lifespan groups: docs/trade-facts.md §5, from memory. First sperm web after 2–4 weeks: common practice.
 const lifespan = GROUP_LIFESPAN_DEFAULTS['nw-terrestrial']; // 12–24 months
 const base = (over: Partial<PairingWarningFacts> = {}): PairingWarningFacts => ({
   today: '2026-06-01',

@@ -40,7 +40,7 @@ export interface PairingWarningFacts {
   failureClause: FailureClause;
 }
 
-/** Longest usual wait from pairing to sac before we say so: 365 days (TRADE-FACTS §3, up to a year). */
+/** Longest usual wait from pairing to sac before we say so: 365 days (docs/trade-facts.md §3, up to a year). */
 export const PAIRING_TO_SAC_MAX_DAYS = 365;
 
 const days = (n: number) => (n === 1 ? '1 day' : `${n} days`);

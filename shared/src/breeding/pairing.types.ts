@@ -11,15 +11,18 @@ export interface PairingFact {
   outcome: PairingOutcome;
 }
 
-/** `developing` until it fails; a sac whose young died or were eaten later is `failed` / `eaten` too. */
-export type SacOutcome = 'developing' | 'failed' | 'eaten';
+/**
+ * How a sac fares, as the stage derivation sees it: `developing` until it fails; a sac whose young died
+ * or were eaten later is `failed` / `eaten` too. (The stored state of a sac is `SacOutcomeState`.)
+ */
+export type SacFate = 'developing' | 'failed' | 'eaten';
 
 export interface SacFact {
   id?: string;
   layDate: CalendarDate;
   /** Day the sac was taken from the mother; null/absent while she keeps it. */
   pulledOn?: CalendarDate | null;
-  outcome: SacOutcome;
+  fate: SacFate;
   /** Most advanced stage recorded for its young. */
   broodStage?: BroodStage | null;
 }

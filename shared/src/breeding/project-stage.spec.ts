@@ -2,11 +2,11 @@ import { describe, expect, it } from 'vitest';
 import type { PairingFact, SacFact } from './pairing.types.js';
 import { PROJECT_STAGE_LINE, deriveProjectStage, type ProjectFacts } from './project-stage.js';
 
-// Rules are our own (PRODUCT.md project stages); the female-molt rule follows TRADE-FACTS §5:
+// Rules are our own (docs/product.md, Project stages); the female-molt rule follows docs/trade-facts.md §5:
 // stored sperm is shed with a molt (tarantulaspider.net; reptarach.de). Dates are an invented scenario.
 const facts = (over: Partial<ProjectFacts> = {}): ProjectFacts => ({ pairings: [], femaleMolts: [], sacs: [], ...over });
 const paired = (on: string, outcome: PairingFact['outcome'] = 'connected'): PairingFact => ({ on, outcome });
-const sac = (over: Partial<SacFact> = {}): SacFact => ({ id: 's1', layDate: '2026-03-01', outcome: 'developing', ...over });
+const sac = (over: Partial<SacFact> = {}): SacFact => ({ id: 's1', layDate: '2026-03-01', fate: 'developing', ...over });
 
 describe('project stage', () => {
   it('keeps the progress line in order', () => {
@@ -72,18 +72,19 @@ describe('project stage', () => {
 
   it('ends early when the sac fails or is eaten, unless she is paired again', () => {
     const pairings = [paired('2025-11-01')];
-    expect(deriveProjectStage(facts({ pairings, sacs: [sac({ outcome: 'failed' })] }))).toEqual({ stage: 'ended-early', reason: 'sac-failed', sacId: 's1' });
-    expect(deriveProjectStage(facts({ pairings, sacs: [sac({ outcome: 'eaten' })] }))).toEqual({ stage: 'ended-early', reason: 'sac-eaten', sacId: 's1' });
+    expect(deriveProjectStage(facts({ pairings, sacs: [sac({ fate: 'failed' })] }))).toEqual({ stage: 'ended-early', reason: 'sac-failed', sacId: 's1' });
+    expect(deriveProjectStage(facts({ pairings, sacs: [sac({ fate: 'eaten' })] }))).toEqual({ stage: 'ended-early', reason: 'sac-eaten', sacId: 's1' });
     // a failed brood after first instar is still a failed sac
-    expect(deriveProjectStage(facts({ pairings, sacs: [sac({ outcome: 'failed', broodStage: 'first-instar' })] }))).toMatchObject({ reason: 'sac-failed' });
+    expect(deriveProjectStage(facts({ pairings, sacs: [sac({ fate: 'failed', broodStage: 'first-instar' })] }))).toMatchObject({ reason: 'sac-failed' });
     // re-paired after the failure: waiting again; a molt after the new pairing ends it again
-    const again = { pairings: [...pairings, paired('2026-05-01')], sacs: [sac({ outcome: 'eaten' })] };
+    const again = { pairings: [...pairings, paired('2026-05-01')], sacs: [sac({ fate: 'eaten' })] };
     expect(deriveProjectStage(facts(again))).toEqual({ stage: 'waiting-for-sac' });
     expect(deriveProjectStage(facts({ ...again, femaleMolts: ['2026-07-01'] }))).toEqual({ stage: 'ended-early', reason: 'female-molted' });
     // a second sac after the failed one
-    expect(
-      deriveProjectStage(facts({ ...again, sacs: [sac({ outcome: 'eaten' }), sac({ id: 's2', layDate: '2026-08-01', pulledOn: '2026-08-25' })] })),
-    ).toEqual({ stage: 'in-incubator', sacId: 's2' });
+    expect(deriveProjectStage(facts({ ...again, sacs: [sac({ fate: 'eaten' }), sac({ id: 's2', layDate: '2026-08-01', pulledOn: '2026-08-25' })] }))).toEqual({
+      stage: 'in-incubator',
+      sacId: 's2',
+    });
   });
 
   it('prefers the sac furthest along when several are live', () => {

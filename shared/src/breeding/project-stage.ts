@@ -37,7 +37,7 @@ export interface DerivedProjectStage {
   sacId?: string;
 }
 
-const isLive = (s: SacFact) => s.outcome === 'developing';
+const isLive = (s: SacFact) => s.fate === 'developing';
 const hasBrood = (s: SacFact) => isLive(s) && !!s.broodStage && isBroodStageAtLeast(s.broodStage, 'first-instar');
 const latest = <T>(items: readonly T[], date: (t: T) => string): T | undefined =>
   [...items].sort((a, b) => (date(a) < date(b) ? -1 : date(a) > date(b) ? 1 : 0)).at(-1);
@@ -55,7 +55,7 @@ const latest = <T>(items: readonly T[], date: (t: T) => string): T | undefined =
  *    - the male died, or the last pairing ended with the male lost → `ended-early` `male-died`;
  *    - any pairing attempt → `paired`; none → `planned`.
  * 6. With a connected pairing: a female molt on or after the last connected pairing (sperm is shed with
- *    the molt, TRADE-FACTS §5) → `ended-early` `female-molted`; otherwise → `waiting-for-sac`.
+ *    the molt, docs/trade-facts.md §5) → `ended-early` `female-molted`; otherwise → `waiting-for-sac`.
  *    A molt on the pairing day counts as after it. The male dying after connecting changes nothing.
  * `no-sac` is never derived: how long to wait is the keeper's call (see pairing warnings).
  */
@@ -91,7 +91,7 @@ export function deriveProjectStage(facts: ProjectFacts): DerivedProjectStage {
     (p) => p.on,
   );
   if (!lastConnected) {
-    if (lastDead) return { ...withId('ended-early', lastDead), reason: lastDead.outcome === 'eaten' ? 'sac-eaten' : 'sac-failed' };
+    if (lastDead) return { ...withId('ended-early', lastDead), reason: lastDead.fate === 'eaten' ? 'sac-eaten' : 'sac-failed' };
     const lastPairing = latest(attempt, (p) => p.on);
     if (facts.maleDiedOn || lastPairing?.outcome === 'male-lost') return { stage: 'ended-early', reason: 'male-died' };
     return { stage: attempt.length > 0 ? 'paired' : 'planned' };

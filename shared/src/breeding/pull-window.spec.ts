@@ -4,8 +4,8 @@ import { describe, expect, it } from 'vitest';
 import { addDays } from './calendar-day.js';
 import { CLOSING_DAYS, DEFAULT_PULL_WINDOW, pullWindowDates, pullWindowState, pullWindowView } from './pull-window.js';
 
-// Default window day 21–45 is common practice (TRADE-FACTS §2: "most keepers pull between
-// lay+21 and lay+45 days"); dates are checked against luxon (independent date library).
+// Default window day 21–45 is common practice (docs/trade-facts.md §2: most keepers pull somewhere
+// between day 21 and day 45 after laying); dates are checked against luxon (independent date library).
 const luxonPlus = (date: string, days: number) => DateTime.fromISO(date, { zone: 'utc' }).plus({ days }).toISODate();
 
 describe('pull window', () => {

@@ -3,7 +3,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_ROLL_INTERVAL_HOURS, nextRollDue, rollingApplies, rollState, rollStatus } from './roll-schedule.js';
 
-// Interval 12 h: common practice (TRADE-FACTS §4, from memory). Local times across daylight-saving
+// Interval 12 h: common practice (docs/trade-facts.md §4, from memory). Local times across daylight-saving
 // changes are checked against luxon (independent library reading the IANA tz database via Intl);
 // the change dates are the EU rule (last Sunday of March/October) and the US rule (second Sunday
 // of March, first Sunday of November).

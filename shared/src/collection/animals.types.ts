@@ -79,8 +79,18 @@ export interface AnimalOwner {
   userId?: string;
   /** Display name of the keeper, or the party's name. */
   name: string;
-  /** Only for `party`. */
+  /** For `party`, and for a `keeper` who has not accepted yet (then also the shown `name`). */
   email?: string;
+  /** A keeper named by e-mail who has not accepted yet: no id or name is shown until they do. */
+  awaitingAcceptance?: boolean;
+}
+
+/** An animal another keeper recorded as owned by the viewer, waiting for the viewer to accept. */
+export interface OwnershipRequest {
+  animalId: string;
+  label: string;
+  speciesName: string;
+  recordedBy: string;
 }
 
 export interface AnimalSpeciesRef {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { femaleReadiness } from './female-readiness.js';
 
-// Hardening period of 21 days: common practice. Sperm lost with a molt: TRADE-FACTS §5
+// Hardening period of 21 days: common practice. Sperm lost with a molt: docs/trade-facts.md §5
 // (tarantulaspider.net; reptarach.de).
 describe('female readiness', () => {
   it('says when no molt is recorded', () => {

@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { GROUP_LIFESPAN_DEFAULTS, maleClock, maleClockUrgency, type MaleLifespan } from './male-clock.js';
 
 // Month arithmetic is checked against luxon (independent library; it also clamps to the month's
-// last day). Group defaults: TRADE-FACTS §5, from memory. Fresh = days 0–20: common practice.
+// last day). Group defaults: docs/trade-facts.md §5, from memory. Fresh = days 0–20: common practice.
 const lux = (d: string) => DateTime.fromISO(d, { zone: 'utc' });
 const plusMonths = (d: string, months: number) => lux(d).plus({ months }).toISODate()!;
 const plusDays = (d: string, days: number) => lux(d).plus({ days }).toISODate()!;
@@ -12,7 +12,7 @@ const plusDays = (d: string, days: number) => lux(d).plus({ days }).toISODate()!
 const nwt: MaleLifespan = GROUP_LIFESPAN_DEFAULTS['nw-terrestrial'];
 
 describe('male clock', () => {
-  it('holds the group defaults (from memory, TRADE-FACTS §5)', () => {
+  it('holds the group defaults (from memory, docs/trade-facts.md §5)', () => {
     expect(GROUP_LIFESPAN_DEFAULTS).toEqual({
       'nw-terrestrial': { minMonths: 12, maxMonths: 24 },
       'nw-arboreal': { minMonths: 6, maxMonths: 12 },

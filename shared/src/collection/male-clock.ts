@@ -14,7 +14,7 @@ export interface MaleLifespan {
 }
 
 /**
- * Defaults per group, from memory (TRADE-FACTS §5: New World terrestrial 12–24 months,
+ * Defaults per group, from memory (docs/trade-facts.md §5: New World terrestrial 12–24 months,
  * New World arboreal 6–12, Old World 4–12, dwarf species shorter; fossorial/dwarf 6–12 is our guess).
  * Species profiles and projects may override them.
  */

@@ -30,4 +30,9 @@ export interface InvitationPreview {
 export interface AcceptInvitationResponse {
   projectId: string;
   role: InvitableRole;
+  /**
+   * `joined`: the account is now a member. `awaiting-owner`: the link was sent to another address,
+   * so the project owner must approve this account first.
+   */
+  status: 'joined' | 'awaiting-owner';
 }

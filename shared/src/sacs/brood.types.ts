@@ -4,7 +4,7 @@ import type { PhotoRef } from '../collection/animals.types.js';
 export const BROOD_LOSS_REASONS = ['died', 'failed-molt', 'cannibalism', 'mould', 'escaped', 'other'] as const;
 export type BroodLossReason = (typeof BROOD_LOSS_REASONS)[number];
 
-/** Upper bound on any one count: far above the largest sacs reported (about 2000, TRADE-FACTS §6). */
+/** Upper bound on any one count: far above the largest sacs reported (about 2000, docs/trade-facts.md §6). */
 export const BROOD_COUNT_MAX = 5000;
 
 export interface OpeningRequest {

@@ -3,8 +3,11 @@ import type { BroodStage } from '../breeding/brood-stage.js';
 import type { PullWindowView } from '../breeding/pull-window.js';
 import type { RollStatus } from '../breeding/roll-schedule.js';
 
-/** How a sac ended up; `failed` carries a reason. */
-export const SAC_OUTCOMES = ['in-progress', 'hatched', 'failed'] as const;
+/**
+ * How a sac ended up; `failed` carries a reason. `emerged`: the young are out of the sac. (Not "hatched":
+ * the eggs hatch inside the sac weeks before the young leave it, so that word would name an earlier step.)
+ */
+export const SAC_OUTCOMES = ['in-progress', 'emerged', 'failed'] as const;
 export type SacOutcomeState = (typeof SAC_OUTCOMES)[number];
 
 export const SAC_FAILURE_REASONS = ['infertile', 'spoiled', 'eaten', 'other'] as const;

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { celsiusToFahrenheit, fahrenheitToCelsius, formatTemperature } from './temperature.js';
 
 // Check values: the shipping limits quoted by live-animal dealers (jrsinverts.com: 25–90 °F;
-// fanghubtarantulas.com: 40–80 °F) and their Celsius equivalents, as listed in TRADE-FACTS §9.
+// fanghubtarantulas.com: 40–80 °F) and their Celsius equivalents, as listed in docs/trade-facts.md §9.
 describe('temperature conversion', () => {
   it.each([
     [25, -3.89],

@@ -1,5 +1,6 @@
 import type { EndedEarlyReason, ProjectStage } from '../breeding/project-stage.js';
 import type { MaleClockState } from '../collection/male-clock.js';
+import type { SacOutcomeState } from '../sacs/sacs.types.js';
 
 /**
  * The interface's words for states several screens show, kept here once so the
@@ -24,6 +25,8 @@ export const ENDED_EARLY_LABELS: Record<EndedEarlyReason, string> = {
   'sac-eaten': 'the sac was eaten',
   'male-died': 'the male died before pairing',
 };
+
+export const SAC_OUTCOME_LABELS: Record<SacOutcomeState, string> = { 'in-progress': 'In progress', emerged: 'Young emerged', failed: 'Failed' };
 
 /** Male clock states in our own words, with the advice each one carries. */
 export const MALE_CLOCK_LABELS: Record<MaleClockState, { label: string; hint: string }> = {

@@ -3,7 +3,8 @@ import { useMediaQuery } from '@mantine/hooks';
 import { notifications } from '@mantine/notifications';
 import type { QueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
-import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
+import { formatMoney } from '@broodsilk/shared';
 import { DocumentTitle } from '@/components/ui/document-title';
 import { paths } from '@/config/paths';
 import { formatDate } from '@/lib/dates';
@@ -15,7 +16,7 @@ import { MaleClockPanel } from '@/features/collection/components/male-clock-pane
 import { MoltTimeline } from '@/features/collection/components/molt-timeline';
 import { PhotoPanel } from '@/features/collection/components/photo-panel';
 import { ReadinessPanel } from '@/features/collection/components/readiness-panel';
-import { CUSTODY_LABELS, MATURITY_LABELS, SEX_LABELS, SEX_SIGNS, STATUS_LABELS, formatMoney } from '@/features/collection/utils/animal-view';
+import { CUSTODY_LABELS, MATURITY_LABELS, SEX_LABELS, SEX_SIGNS, STATUS_LABELS } from '@/features/collection/utils/animal-view';
 import { speciesQueries, useSpecies } from '@/features/species/api/species';
 import { CautionNotice } from '@/features/species/components/caution-notice';
 import { SpeciesPicker } from '@/features/species/components/species-picker';

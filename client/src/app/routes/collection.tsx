@@ -4,7 +4,7 @@ import { useMediaQuery } from '@mantine/hooks';
 import { notifications } from '@mantine/notifications';
 import { useQuery, type QueryClient } from '@tanstack/react-query';
 import { useMemo, useState } from 'react';
-import { Link, useNavigate, useSearchParams, type LoaderFunctionArgs, type ShouldRevalidateFunctionArgs } from 'react-router-dom';
+import { Link, useNavigate, useSearchParams, type LoaderFunctionArgs, type ShouldRevalidateFunctionArgs } from 'react-router';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { animalQueries, useAnimals, useMalesByClock } from '@/features/collection/api/animals';

@@ -1,6 +1,6 @@
 import { Alert, Button, Group, Stack } from '@mantine/core';
 import type { QueryClient } from '@tanstack/react-query';
-import { Link } from 'react-router-dom';
+import { Link } from 'react-router';
 import { PageHeader } from '@/components/ui/page-header';
 import { PageLoader } from '@/components/ui/page-loader';
 import { paths } from '@/config/paths';

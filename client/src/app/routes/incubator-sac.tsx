@@ -1,6 +1,6 @@
 import { Alert, Anchor, Group } from '@mantine/core';
 import { useQuery, type QueryClient } from '@tanstack/react-query';
-import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
 import type { ProjectResponse } from '@broodsilk/shared';
 import { PageLoader } from '@/components/ui/page-loader';
 import { DocumentTitle } from '@/components/ui/document-title';
@@ -10,11 +10,13 @@ import { useMe } from '@/features/auth/api/me';
 import { projectQueries } from '@/features/projects/api/projects';
 import { sacQueries, useSac } from '@/features/sacs/api/sacs';
 import { IncubatorEntry } from '@/features/sacs/components/incubator-entry';
+import { preloadPanels } from '../preload';
 
 export const clientLoader =
   (qc: QueryClient) =>
   async ({ params }: LoaderFunctionArgs) => {
-    await qc.ensureQueryData(sacQueries.detail(params.sacId!));
+    const sac = await qc.ensureQueryData(sacQueries.detail(params.sacId!));
+    await preloadPanels(qc.ensureQueryData(projectQueries.detail(sac.projectId)));
     return null;
   };
 

@@ -1,4 +1,5 @@
 import { Alert, Stack } from '@mantine/core';
+import { isProjectOpen } from '@broodsilk/shared';
 import { PageHeader } from '@/components/ui/page-header';
 import { PageLoader } from '@/components/ui/page-loader';
 import { paths } from '@/config/paths';
@@ -11,7 +12,7 @@ export function Component() {
   const projects = useProjects();
   if (!me || projects.isPending) return <PageLoader />;
   if (projects.isError) return <Alert color="clay">{projects.error.message}</Alert>;
-  const open = projects.data.filter((p) => p.stage.stage !== 'ended-early' && p.stage.stage !== 'closed' && p.myRole !== 'partner');
+  const open = projects.data.filter((p) => isProjectOpen(p.stage.stage) && p.myRole !== 'partner');
   return (
     <Stack maw={520} mx="auto">
       <PageHeader title="Incubator" description="Tap a sac to log a roll, a reading or a check." />

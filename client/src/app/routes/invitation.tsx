@@ -1,5 +1,5 @@
 import { Alert } from '@mantine/core';
-import { useNavigate, useParams } from 'react-router-dom';
+import { useNavigate, useParams } from 'react-router';
 import { PublicLayout } from '@/components/layouts/public-layout';
 import { PageLoader } from '@/components/ui/page-loader';
 import { paths } from '@/config/paths';

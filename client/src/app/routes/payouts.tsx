@@ -1,5 +1,5 @@
 import { Alert, Card, Stack, Text } from '@mantine/core';
-import { useSearchParams } from 'react-router-dom';
+import { useSearchParams } from 'react-router';
 import { PageHeader } from '@/components/ui/page-header';
 import { PayoutSetup } from '@/features/account/components/payout-setup';
 

@@ -1,18 +1,31 @@
 import { Alert, Anchor, Group } from '@mantine/core';
+import { isDealParty } from '@broodsilk/shared';
 import type { QueryClient } from '@tanstack/react-query';
-import { Link, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Link, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { PageHeader } from '@/components/ui/page-header';
 import { PageLoader } from '@/components/ui/page-loader';
 import { paths } from '@/config/paths';
 import { useMe } from '@/features/auth/api/me';
 import { projectQueries, useProject } from '@/features/projects/api/projects';
+import { balancesQueries } from '@/features/account/api/balances';
+import { entriesQueries } from '@/features/account/api/entries';
+import { sharesQueries } from '@/features/account/api/shares';
 import { AccountPanel } from '@/features/account/components/account-panel';
+import { preloadPanels } from '../preload';
 
-/** A missing or foreign project throws its 404 into the route's error boundary. */
+/** A missing or foreign project throws its 404 into the route's error boundary; the account loads only for a party to the deal. */
 export const clientLoader =
   (qc: QueryClient) =>
   async ({ params }: LoaderFunctionArgs) => {
-    await qc.ensureQueryData(projectQueries.detail(params.projectId!));
+    const id = params.projectId!;
+    const project = await qc.ensureQueryData(projectQueries.detail(id));
+    if (isDealParty(project.myRole)) {
+      await preloadPanels(
+        qc.ensureQueryData(sharesQueries.detail(id)),
+        qc.ensureQueryData(balancesQueries.detail(id)),
+        qc.ensureQueryData(entriesQueries.list(id)),
+      );
+    }
     return null;
   };
 
@@ -49,10 +62,10 @@ export function Component() {
           The payment was cancelled; nothing was paid.
         </Alert>
       )}
-      {p.myRole === 'caretaker' ? (
-        <Alert color="gray">The account of this project is seen by its owner and partners only.</Alert>
-      ) : (
+      {isDealParty(p.myRole) ? (
         <AccountPanel projectId={p.id} me={me} myRole={p.myRole} myMemberId={myMemberId} />
+      ) : (
+        <Alert color="gray">The account of this project is seen by its owner and partners only.</Alert>
       )}
     </>
   );

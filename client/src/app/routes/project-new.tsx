@@ -1,13 +1,12 @@
 import { Alert, Anchor } from '@mantine/core';
 import { notifications } from '@mantine/notifications';
-import { Link, useNavigate } from 'react-router-dom';
+import { mayStartProject } from '@broodsilk/shared';
+import { Link, useNavigate } from 'react-router';
 import { PageHeader } from '@/components/ui/page-header';
 import { PageLoader } from '@/components/ui/page-loader';
 import { paths } from '@/config/paths';
 import { useAnimals } from '@/features/collection/api/animals';
 import { ProjectForm } from '@/features/projects/components/project-form';
-
-const usable = (status: string) => status === 'active' || status === 'on-loan';
 
 export function Component() {
   const navigate = useNavigate();
@@ -27,8 +26,8 @@ export function Component() {
         }
       />
       <ProjectForm
-        females={females.data.items.filter((a) => usable(a.status))}
-        males={males.data.items.filter((a) => usable(a.status) && a.custody !== 'loan-out')}
+        females={females.data.items.filter(mayStartProject)}
+        males={males.data.items.filter((a) => mayStartProject(a) && a.custody !== 'loan-out')}
         onCreated={({ project, problems }) => {
           for (const p of problems) notifications.show({ color: 'amber', title: 'Not everything was saved', message: p, autoClose: false });
           navigate(paths.project.href(project.id));

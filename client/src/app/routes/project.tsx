@@ -1,12 +1,15 @@
 import { Alert, Anchor, Badge, Grid, Group, Stack, Text } from '@mantine/core';
 import type { QueryClient } from '@tanstack/react-query';
-import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { isDealParty, isProjectOpen } from '@broodsilk/shared';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
 import { PageHeader } from '@/components/ui/page-header';
 import { PageLoader } from '@/components/ui/page-loader';
 import { paths } from '@/config/paths';
 import { formatDate } from '@/lib/dates';
 import { useMe } from '@/features/auth/api/me';
+import { pairingQueries } from '@/features/projects/api/pairings';
 import { projectQueries, useProject, useProjectActivity } from '@/features/projects/api/projects';
+import { termsQueries } from '@/features/projects/api/terms';
 import { ActivityTimeline } from '@/features/projects/components/activity-timeline';
 import { EndProjectForm } from '@/features/projects/components/end-project-form';
 import { PairingsPanel } from '@/features/projects/components/pairings-panel';
@@ -16,15 +19,29 @@ import { StageLine } from '@/features/projects/components/stage-line';
 import { TermsPanel } from '@/features/projects/components/terms-panel';
 import { WarningsList } from '@/features/projects/components/warnings-list';
 import { ROLE_LABELS } from '@/features/projects/utils/labels';
+import { sacQueries } from '@/features/sacs/api/sacs';
 import { ProjectSacs } from '@/features/sacs/components/project-sacs';
+import { calendarQueries } from '@/features/dashboard/api/calendar-feed';
 import { CalendarFeedCard } from '@/features/dashboard/components/calendar-feed-card';
 import { SectionCard } from '@/components/ui/section-card';
+import { preloadPanels } from '../preload';
 
-/** A missing or foreign project throws its 404 into the route's error boundary. */
+/**
+ * A missing or foreign project throws its 404 into the route's error boundary. The panels load
+ * alongside the project; the terms only for the parties to the deal (a caretaker would get 403).
+ */
 export const clientLoader =
   (qc: QueryClient) =>
   async ({ params }: LoaderFunctionArgs) => {
-    await qc.ensureQueryData(projectQueries.detail(params.projectId!));
+    const id = params.projectId!;
+    const panels = preloadPanels(
+      qc.ensureQueryData(projectQueries.activity(id)),
+      qc.ensureQueryData(sacQueries.ofProject(id)),
+      qc.ensureQueryData(pairingQueries.list(id)),
+      qc.ensureQueryData(calendarQueries.feed()),
+    );
+    const project = await qc.ensureQueryData(projectQueries.detail(id));
+    await Promise.all([panels, preloadPanels(isDealParty(project.myRole) && qc.ensureQueryData(termsQueries.list(id)))]);
     return null;
   };
 
@@ -37,7 +54,7 @@ export function Component() {
   if (project.isError) return <Alert color="clay">{project.error.message}</Alert>;
   const p = project.data;
   const isOwner = p.myRole === 'owner';
-  const live = p.stage.stage !== 'ended-early' && p.stage.stage !== 'closed';
+  const live = isProjectOpen(p.stage.stage);
 
   return (
     <Stack>
@@ -50,7 +67,7 @@ export function Component() {
         }
         actions={
           <Group gap="md">
-            {p.myRole !== 'caretaker' && (
+            {isDealParty(p.myRole) && (
               <Anchor component={Link} to={paths.projectAccount.href(p.id)} size="sm" fw={600}>
                 Account
               </Anchor>
@@ -79,7 +96,11 @@ export function Component() {
               <PairingsPanel projectId={p.id} timeZone={me.timeZone} canRecord={isOwner && live} />
             </SectionCard>
             <SectionCard title="Terms" testId="section-terms">
-              <TermsPanel projectId={p.id} me={me} myRole={p.myRole} members={p.members} />
+              {isDealParty(p.myRole) ? (
+                <TermsPanel projectId={p.id} me={me} myRole={p.myRole} members={p.members} />
+              ) : (
+                <Text c="dimmed">The terms are between the keeper and the partners.</Text>
+              )}
             </SectionCard>
           </Stack>
         </Grid.Col>

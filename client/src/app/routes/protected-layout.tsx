@@ -1,4 +1,4 @@
-import { Outlet, redirect, useNavigate, type LoaderFunctionArgs } from 'react-router-dom';
+import { Outlet, redirect, useNavigate, type LoaderFunctionArgs } from 'react-router';
 import type { QueryClient } from '@tanstack/react-query';
 import { AppLayout } from '@/components/layouts/app-layout';
 import { paths } from '@/config/paths';

@@ -1,4 +1,4 @@
-import { useNavigate, useSearchParams } from 'react-router-dom';
+import { useNavigate, useSearchParams } from 'react-router';
 import { PublicLayout } from '@/components/layouts/public-layout';
 import { RegisterForm } from '@/features/auth/components/register-form';
 import { paths } from '@/config/paths';

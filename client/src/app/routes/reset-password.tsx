@@ -1,4 +1,4 @@
-import { useNavigate, useSearchParams } from 'react-router-dom';
+import { useNavigate, useSearchParams } from 'react-router';
 import { notifications } from '@mantine/notifications';
 import { PublicLayout } from '@/components/layouts/public-layout';
 import { ResetPasswordForm } from '@/features/auth/components/reset-password-form';

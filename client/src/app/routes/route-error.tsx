@@ -1,4 +1,4 @@
-import { isRouteErrorResponse, useRouteError } from 'react-router-dom';
+import { isRouteErrorResponse, useRouteError } from 'react-router';
 import { ErrorPage } from '@/components/ui/error-page';
 import { isApiError } from '@/lib/api-error';
 

@@ -1,23 +1,38 @@
 import { Alert, Anchor, Button, Group, Stack } from '@mantine/core';
 import { useQuery, type QueryClient } from '@tanstack/react-query';
-import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
 import { PageHeader } from '@/components/ui/page-header';
 import { PageLoader } from '@/components/ui/page-loader';
 import { formatDate } from '@/lib/dates';
 import { paths } from '@/config/paths';
 import { useMe } from '@/features/auth/api/me';
 import { projectQueries } from '@/features/projects/api/projects';
+import { broodQueries } from '@/features/sacs/api/brood';
+import { careLogQueries } from '@/features/sacs/api/care-log';
+import { openingQueries } from '@/features/sacs/api/opening';
 import { sacQueries, useSac } from '@/features/sacs/api/sacs';
 import { BroodCounts } from '@/features/sacs/components/brood-counts';
 import { CareLogList } from '@/features/sacs/components/care-log-list';
 import { OpeningPanel } from '@/features/sacs/components/opening-panel';
 import { SacOverview } from '@/features/sacs/components/sac-overview';
 import { SectionCard } from '@/components/ui/section-card';
+import { preloadPanels } from '../preload';
 
+/** The sac first (a 404 goes to the error boundary), then its project and panels together; the opening and brood only once it is opened. */
 export const clientLoader =
   (qc: QueryClient) =>
   async ({ params }: LoaderFunctionArgs) => {
-    await qc.ensureQueryData(sacQueries.detail(params.sacId!));
+    const id = params.sacId!;
+    const log = preloadPanels(qc.ensureQueryData(careLogQueries.list(id)));
+    const sac = await qc.ensureQueryData(sacQueries.detail(id));
+    await Promise.all([
+      log,
+      preloadPanels(
+        qc.ensureQueryData(projectQueries.detail(sac.projectId)),
+        sac.opened && qc.ensureQueryData(openingQueries.detail(id)),
+        sac.opened && qc.ensureQueryData(broodQueries.counts(id)),
+      ),
+    ]);
     return null;
   };
 
@@ -56,7 +71,7 @@ export function Component() {
       </SectionCard>
       {s.pulled && (
         <SectionCard title="Opening">
-          <OpeningPanel sacId={s.id} timeZone={me.timeZone} canEdit={isOwner} />
+          <OpeningPanel sac={s} timeZone={me.timeZone} canEdit={isOwner} />
         </SectionCard>
       )}
       {s.opened && (

@@ -1,4 +1,4 @@
-import { useNavigate, useSearchParams } from 'react-router-dom';
+import { useNavigate, useSearchParams } from 'react-router';
 import { PublicLayout } from '@/components/layouts/public-layout';
 import { SignInForm } from '@/features/auth/components/sign-in-form';
 import { safeNext } from './safe-next';

@@ -15,7 +15,7 @@ export function useWhen(timeZone: string) {
   const dateError = checkDate(date, { required: 'On which day?', latest: today, latestMessage: 'This has happened, so it cannot be after today.' });
   const timeError = /^\d{2}:\d{2}$/.test(time) ? null : 'The time as HH:MM.';
   const instant = dateError || timeError ? null : dayjs.tz(`${readDate(date)}T${time}`, timeZone);
-  const future = instant !== null && instant.valueOf() > Date.now() + 60_000;
+  const future = instant !== null && instant.valueOf() > now.getTime() + 60_000;
   return {
     date,
     time,

@@ -1,7 +1,7 @@
 import { ActionIcon, AppShell, Burger, Group, Menu, NavLink, Text, Tooltip, useMantineColorScheme } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
 import type { ReactNode } from 'react';
-import { NavLink as RouterNavLink, useLocation } from 'react-router-dom';
+import { NavLink as RouterNavLink, useLocation } from 'react-router';
 import { BroodsilkLogo } from '../ui/logo';
 
 export interface NavItem {

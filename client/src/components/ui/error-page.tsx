@@ -1,5 +1,5 @@
 import { Button, Container, Stack, Text, Title } from '@mantine/core';
-import { Link } from 'react-router-dom';
+import { Link } from 'react-router';
 import { DocumentTitle } from './document-title';
 
 export function ErrorPage({ title, message, status }: { title: string; message: string; status?: number }) {

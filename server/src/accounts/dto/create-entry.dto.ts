@@ -1,6 +1,7 @@
-import { IsIn, IsInt, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, MinLength } from 'class-validator';
+import { IsIn, IsInt, IsString, IsUUID, Matches, Max, MaxLength, Min, MinLength } from 'class-validator';
 import { HAND_OVER_METHODS, RECORDABLE_ENTRY_KINDS, type CreateEntryRequest, type HandOverMethod, type RecordableEntryKind } from '@broodsilk/shared';
-import { IsCalendarDate } from '../../animals/dto/is-calendar-date.validator';
+import { IsCalendarDate } from '../../common/validators/is-calendar-date.validator';
+import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
 const MAX_MINOR = 2_000_000_000; // fits the integer columns
 
@@ -12,77 +13,77 @@ export class CreateEntryDto implements CreateEntryRequest {
   @IsCalendarDate()
   date!: string;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsUUID('all', { message: 'memberId must be the id of a party of this project.' })
   memberId?: string;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsUUID('all', { message: 'sacId must be the id of a sac of this project.' })
   sacId?: string;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsInt({ message: 'count must be a whole number.' })
   @Min(1, { message: 'count must be at least 1.' })
   @Max(100_000)
   count?: number;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsIn(HAND_OVER_METHODS, { message: 'method must be pick-up or shipment.' })
   method?: HandOverMethod;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsString()
   @MinLength(1)
   @MaxLength(100)
   carrier?: string;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsString()
   @MinLength(1)
   @MaxLength(100)
   tracking?: string;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsInt({ message: 'priceMinor must be a whole number of minor units (cents).' })
   @Min(0)
   @Max(MAX_MINOR)
   priceMinor?: number;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsInt({ message: 'pricePerSpiderlingMinor must be a whole number of minor units (cents).' })
   @Min(0)
   @Max(MAX_MINOR)
   pricePerSpiderlingMinor?: number;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsUUID('all', { message: 'fromMemberId must be the id of a party of this project.' })
   fromMemberId?: string;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsUUID('all', { message: 'toMemberId must be the id of a party of this project.' })
   toMemberId?: string;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsInt({ message: 'amountMinor must be a whole number of minor units (cents).' })
   @Min(1, { message: 'amountMinor must be above 0.' })
   @Max(MAX_MINOR)
   amountMinor?: number;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @Matches(/^[A-Z]{3}$/, { message: 'currency must be an ISO 4217 code such as EUR.' })
   currency?: string;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsUUID('all', { message: 'reversesId must be the id of an earlier entry.' })
   reversesId?: string;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsString()
   @MinLength(3, { message: 'reason must say in a few words why the entry is reversed.' })
   @MaxLength(500)
   reason?: string;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsString()
   @MaxLength(1000)
   note?: string;

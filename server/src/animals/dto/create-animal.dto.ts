@@ -1,5 +1,5 @@
 import { Transform } from 'class-transformer';
-import { IsEmail, IsIn, IsInt, IsNotEmpty, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, ValidateIf } from 'class-validator';
+import { IsEmail, IsIn, IsInt, IsNotEmpty, IsString, IsUUID, Matches, Max, MaxLength, Min, ValidateIf } from 'class-validator';
 import {
   ANIMAL_SEXES,
   ANIMAL_STATUSES,
@@ -13,7 +13,8 @@ import {
   type Maturity,
   type OwnerKind,
 } from '@broodsilk/shared';
-import { IsCalendarDate } from './is-calendar-date.validator';
+import { IsCalendarDate } from '../../common/validators/is-calendar-date.validator';
+import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
 const trim = ({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value);
 /** Blank text means "none": a form's empty box and a CSV's empty cell both arrive as "". */
@@ -35,7 +36,7 @@ export class CreateAnimalDto implements CreateAnimalRequest {
   @IsIn(ANIMAL_SEXES, oneOf('sex', ANIMAL_SEXES))
   sex!: AnimalSex;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsIn(MATURITIES, oneOf('maturity', MATURITIES))
   maturity?: Maturity;
 

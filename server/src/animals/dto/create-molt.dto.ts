@@ -1,7 +1,8 @@
 import { Type } from 'class-transformer';
 import { IsBoolean, IsIn, IsNumber, IsOptional, IsString, Max, MaxLength, Min, ValidateIf } from 'class-validator';
 import { EXUVIA_SEXES, type CreateMoltRequest, type ExuviaSex } from '@broodsilk/shared';
-import { IsCalendarDate } from './is-calendar-date.validator';
+import { IsCalendarDate } from '../../common/validators/is-calendar-date.validator';
+import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
 export class CreateMoltDto implements CreateMoltRequest {
   @IsCalendarDate({ message: 'The molt date must be a date written YYYY-MM-DD.' })
@@ -20,7 +21,7 @@ export class CreateMoltDto implements CreateMoltRequest {
   @Max(40, { message: 'The size cannot be more than 40 cm.' })
   sizeCm?: number | null;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsBoolean({ message: 'maturing must be true or false.' })
   maturing?: boolean;
 

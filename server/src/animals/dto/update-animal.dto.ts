@@ -1,15 +1,9 @@
-import { IsOptional } from 'class-validator';
-import type { AnimalSex, UpdateAnimalRequest } from '@broodsilk/shared';
+import { PartialType } from '@nestjs/mapped-types';
+import type { UpdateAnimalRequest } from '@broodsilk/shared';
 import { CreateAnimalDto } from './create-animal.dto';
 
-/** Every field of the create form, each optional; the same checks apply to what is sent. */
-export class UpdateAnimalDto extends CreateAnimalDto implements UpdateAnimalRequest {
-  @IsOptional()
-  declare speciesId: string;
-
-  @IsOptional()
-  declare label: string;
-
-  @IsOptional()
-  declare sex: AnimalSex;
-}
+/**
+ * Every field of the create form, each optional; the same checks apply to what is sent. With
+ * skipNullProperties false a null is checked (and refused) like any value; only absence skips.
+ */
+export class UpdateAnimalDto extends PartialType(CreateAnimalDto, { skipNullProperties: false }) implements UpdateAnimalRequest {}

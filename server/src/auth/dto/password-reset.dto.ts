@@ -1,6 +1,7 @@
-import { IsEmail, IsString, Length, MaxLength, MinLength } from 'class-validator';
+import { IsEmail, IsString, Length } from 'class-validator';
+import { IsAcceptablePassword } from './is-acceptable-password.validator';
 import { Transform } from 'class-transformer';
-import { MIN_PASSWORD_LENGTH, type PasswordResetConfirmRequest, type PasswordResetRequest } from '@broodsilk/shared';
+import { type PasswordResetConfirmRequest, type PasswordResetRequest } from '@broodsilk/shared';
 
 export class PasswordResetDto implements PasswordResetRequest {
   @Transform(({ value }) => (typeof value === 'string' ? value.trim().toLowerCase() : value))
@@ -13,8 +14,6 @@ export class PasswordResetConfirmDto implements PasswordResetConfirmRequest {
   @Length(20, 200, { message: 'This reset link is not valid.' })
   token!: string;
 
-  @IsString()
-  @MinLength(MIN_PASSWORD_LENGTH, { message: `Use a password of at least ${MIN_PASSWORD_LENGTH} characters.` })
-  @MaxLength(200)
+  @IsAcceptablePassword()
   password!: string;
 }

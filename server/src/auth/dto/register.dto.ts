@@ -1,7 +1,9 @@
-import { IsEmail, IsNotEmpty, IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
+import { IsEmail, IsNotEmpty, IsString, MaxLength } from 'class-validator';
+import { IsAcceptablePassword } from './is-acceptable-password.validator';
 import { Transform } from 'class-transformer';
-import { MIN_PASSWORD_LENGTH, type RegisterRequest } from '@broodsilk/shared';
+import { type RegisterRequest } from '@broodsilk/shared';
 import { IsTimeZone } from '../../common/validators/is-time-zone.validator';
+import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
 export class RegisterDto implements RegisterRequest {
   @Transform(({ value }) => (typeof value === 'string' ? value.trim().toLowerCase() : value))
@@ -9,9 +11,7 @@ export class RegisterDto implements RegisterRequest {
   @MaxLength(254)
   email!: string;
 
-  @IsString()
-  @MinLength(MIN_PASSWORD_LENGTH, { message: `Use a password of at least ${MIN_PASSWORD_LENGTH} characters.` })
-  @MaxLength(200, { message: 'Use a password of at most 200 characters.' })
+  @IsAcceptablePassword()
   password!: string;
 
   @Transform(({ value }) => (typeof value === 'string' ? value.trim() : value))
@@ -20,7 +20,7 @@ export class RegisterDto implements RegisterRequest {
   @MaxLength(80)
   displayName!: string;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsTimeZone()
   timeZone?: string;
 }

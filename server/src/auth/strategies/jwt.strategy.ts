@@ -6,7 +6,7 @@ import { ExtractJwt, Strategy } from 'passport-jwt';
 import type { Request } from 'express';
 import { SESSION_COOKIE } from '@broodsilk/shared';
 import { User } from '../../users/user.entity';
-import type { AuthUser, JwtPayload } from '../auth-user';
+import type { AuthUser, JwtPayload } from '../../common/auth-user';
 
 function fromSessionCookie(req: Request): string | null {
   const value = (req.cookies as Record<string, string> | undefined)?.[SESSION_COOKIE];

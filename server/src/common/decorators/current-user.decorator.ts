@@ -1,5 +1,5 @@
 import { createParamDecorator, type ExecutionContext } from '@nestjs/common';
-import type { AuthUser } from '../../auth/auth-user';
+import type { AuthUser } from '../auth-user';
 
 /** The authenticated caller, as the JWT strategy loaded it. */
 export const CurrentUser = createParamDecorator((_data: unknown, ctx: ExecutionContext): AuthUser => {

@@ -1,21 +1,6 @@
-import { ArgumentsHost, Catch, ExceptionFilter, HttpException, HttpStatus, Logger } from '@nestjs/common';
-import { NotFoundError, UniqueConstraintViolationException, ForeignKeyConstraintViolationException } from '@mikro-orm/core';
+import { ArgumentsHost, Catch, ExceptionFilter, Logger } from '@nestjs/common';
 import type { Response } from 'express';
-import type { ApiErrorBody, FieldError } from '@broodsilk/shared';
-
-const REASON: Record<number, string> = {
-  400: 'Bad Request',
-  401: 'Unauthorized',
-  403: 'Forbidden',
-  404: 'Not Found',
-  409: 'Conflict',
-  413: 'Payload Too Large',
-  415: 'Unsupported Media Type',
-  422: 'Unprocessable Entity',
-  429: 'Too Many Requests',
-  500: 'Internal Server Error',
-  503: 'Service Unavailable',
-};
+import { errorBody } from './error-body';
 
 /** Turns every error into the one `ApiErrorBody` shape; internals never leak. */
 @Catch()
@@ -24,49 +9,8 @@ export class AllExceptionsFilter implements ExceptionFilter {
 
   catch(exception: unknown, host: ArgumentsHost): void {
     const res = host.switchToHttp().getResponse<Response>();
-    const body = this.toBody(exception);
+    const body = errorBody(exception);
     if (body.statusCode >= 500) this.logger.error(exception instanceof Error ? exception.stack : String(exception));
     res.status(body.statusCode).json(body);
   }
-
-  private toBody(exception: unknown): ApiErrorBody {
-    if (exception instanceof HttpException) {
-      const status = exception.getStatus();
-      const raw = exception.getResponse();
-      let message = exception.message;
-      let details: FieldError[] | undefined;
-      if (typeof raw === 'object' && raw !== null) {
-        const r = raw as { message?: unknown; details?: FieldError[] };
-        if (typeof r.message === 'string') message = r.message;
-        else if (Array.isArray(r.message)) message = r.message.join('; ');
-        if (Array.isArray(r.details)) details = r.details;
-      }
-      if (status === 429 && message.startsWith('ThrottlerException')) {
-        message = 'Too many attempts. Wait a minute and try again.';
-      }
-      return { statusCode: status, error: REASON[status] ?? 'Error', message, ...(details ? { details } : {}) };
-    }
-    if (exception instanceof NotFoundError) {
-      return { statusCode: 404, error: REASON[404], message: 'That record does not exist or is not yours to see.' };
-    }
-    if (exception instanceof UniqueConstraintViolationException) {
-      return { statusCode: 409, error: REASON[409], message: 'A record with these details already exists.' };
-    }
-    if (exception instanceof ForeignKeyConstraintViolationException) {
-      return { statusCode: 409, error: REASON[409], message: 'This record is still used elsewhere and cannot be changed that way.' };
-    }
-    if (isExposedHttpError(exception)) {
-      // http-errors from Express middleware (body parser, CSRF): their messages are written for clients.
-      const status = exception.status;
-      const message =
-        exception.type === 'entity.parse.failed' ? 'The request body is not valid JSON.' : status === 413 ? 'The request is too large.' : exception.message;
-      return { statusCode: status, error: REASON[status] ?? 'Error', message };
-    }
-    return { statusCode: HttpStatus.INTERNAL_SERVER_ERROR, error: REASON[500], message: 'Something went wrong on our side. Please try again.' };
-  }
-}
-
-function isExposedHttpError(e: unknown): e is { status: number; type?: string; message: string } {
-  const x = e as { status?: unknown; expose?: unknown } | null;
-  return typeof x === 'object' && x !== null && typeof x.status === 'number' && x.status >= 400 && x.status < 500 && x.expose === true;
 }

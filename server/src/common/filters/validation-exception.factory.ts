@@ -1,10 +1,13 @@
-import { BadRequestException, type ValidationError } from '@nestjs/common';
+import type { BadRequestException, ValidationError } from '@nestjs/common';
 import type { FieldError } from '@broodsilk/shared';
+import { badRequest } from '../field-errors';
 
 function flatten(errors: ValidationError[], prefix = ''): FieldError[] {
   return errors.flatMap((e) => {
     const field = prefix ? `${prefix}.${e.property}` : e.property;
-    const own = Object.values(e.constraints ?? {}).map((message) => ({ field, message: humanise(message, field) }));
+    // A null where a value is needed fails every check on the field; saying so once is enough.
+    const constraints = e.constraints?.isDefined ? { isDefined: e.constraints.isDefined } : (e.constraints ?? {});
+    const own = Object.values(constraints).map((message) => ({ field, message: humanise(message, field) }));
     return [...own, ...flatten(e.children ?? [], field)];
   });
 }
@@ -16,7 +19,5 @@ function humanise(message: string, field: string): string {
 }
 
 export function validationExceptionFactory(errors: ValidationError[]): BadRequestException {
-  const details = flatten(errors);
-  const message = details.length === 1 ? details[0].message : `Please correct ${details.length} fields: ${details.map((d) => d.field).join(', ')}.`;
-  return new BadRequestException({ message, details });
+  return badRequest(flatten(errors));
 }

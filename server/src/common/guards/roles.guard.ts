@@ -2,7 +2,7 @@ import { CanActivate, ExecutionContext, ForbiddenException, Injectable } from '@
 import { Reflector } from '@nestjs/core';
 import type { AccountRole } from '@broodsilk/shared';
 import { ACCOUNT_ROLES_KEY } from '../decorators/roles.decorator';
-import type { AuthUser } from '../../auth/auth-user';
+import type { AuthUser } from '../auth-user';
 
 /** Global guard after authentication: checks @Roles(...) against the caller's account role. */
 @Injectable()

@@ -1,8 +1,9 @@
-import { IsIn, IsInt, IsISO8601, IsOptional, IsString, Max, MaxLength, Min, ValidateIf } from 'class-validator';
+import { IsIn, IsInt, IsOptional, IsString, Max, MaxLength, Min, ValidateIf } from 'class-validator';
 import { PAIRING_OUTCOMES, type CreatePairingRequest, type PairingOutcome } from '@broodsilk/shared';
+import { IsInstant } from '../../common/validators/is-instant.validator';
 
 export class CreatePairingDto implements CreatePairingRequest {
-  @IsISO8601({ strict: true, strictSeparator: true }, { message: 'The start must be a date and time such as 2026-05-03T19:30:00+02:00.' })
+  @IsInstant({ message: 'The start must be a date and time with its offset, such as 2026-05-03T19:30:00+02:00.' })
   startedAt!: string;
 
   @IsInt({ message: 'The duration is a whole number of minutes.' })

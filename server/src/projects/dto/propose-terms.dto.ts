@@ -10,6 +10,7 @@ import {
   type ShippingPayer,
   type TermsLineInput,
 } from '@broodsilk/shared';
+import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
 export class TermsLineDto implements TermsLineInput {
   @IsUUID('all', { message: 'Each line names a party of the project (memberId).' })
@@ -52,7 +53,7 @@ export class ProposeTermsDto implements ProposeTermsRequest {
   @IsIn(FAILURE_CLAUSES, { message: `The failure clause must be one of: ${FAILURE_CLAUSES.join(', ')}.` })
   failureClause!: FailureClause;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsIn(BROOD_STAGES, { message: `The hand-over stage must be one of: ${BROOD_STAGES.join(', ')}.` })
   handOverStage?: BroodStage;
 

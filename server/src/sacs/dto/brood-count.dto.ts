@@ -1,10 +1,11 @@
 import { IsIn, IsOptional, IsString, MaxLength, ValidateIf } from 'class-validator';
 import { BROOD_LOSS_REASONS, BROOD_STAGES, type BroodCountRequest, type BroodLossReason, type BroodStage } from '@broodsilk/shared';
-import { IsInstant } from './is-instant.validator';
+import { IsInstant } from '../../common/validators/is-instant.validator';
 import { IsCount } from './opening.dto';
+import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
 export class BroodCountDto implements BroodCountRequest {
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsInstant({ message: 'The time of the count must be a date and time with its offset, e.g. 2026-03-08T07:30:00Z.' })
   at?: string;
 
@@ -15,7 +16,7 @@ export class BroodCountDto implements BroodCountRequest {
 
   @IsOptional() @IsCount('young lost') lost?: number;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsIn(BROOD_LOSS_REASONS, { message: `The loss reason must be one of: ${BROOD_LOSS_REASONS.join(', ')}.` })
   lossReason?: BroodLossReason;
 

@@ -1,5 +1,5 @@
 import { Type } from 'class-transformer';
-import { IsDefined, IsIn, IsNumber, IsOptional, IsString, IsUUID, MaxLength, ValidateNested } from 'class-validator';
+import { IsDefined, IsIn, IsNumber, IsString, IsUUID, MaxLength, ValidateNested } from 'class-validator';
 import {
   BROOD_STAGES,
   CARE_LOG_KINDS,
@@ -9,7 +9,8 @@ import {
   type CareLogRequest,
   type TemperatureUnit,
 } from '@broodsilk/shared';
-import { IsInstant } from './is-instant.validator';
+import { IsInstant } from '../../common/validators/is-instant.validator';
+import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
 export class TemperatureReadingDto {
   @IsDefined({ message: 'Give the temperature value.' })
@@ -24,33 +25,33 @@ export class CareLogEntryDto implements CareLogRequest {
   @IsIn(CARE_LOG_KINDS, { message: `The kind of entry must be one of: ${CARE_LOG_KINDS.join(', ')}.` })
   kind!: CareLogKind;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsInstant({ message: 'The time of the entry must be a date and time with its offset, e.g. 2026-03-08T07:30:00Z.' })
   at?: string;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @ValidateNested()
   @Type(() => TemperatureReadingDto)
   temperature?: TemperatureReadingDto;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'The humidity must be a number of percent, e.g. 75.' })
   humidityPercent?: number;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsIn(BROOD_STAGES, { message: `The stage must be one of: ${BROOD_STAGES.join(', ')}.` })
   stage?: BroodStage;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsString()
   @MaxLength(2000, { message: 'Keep the text under 2000 characters.' })
   text?: string;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsUUID('all', { message: 'strikes must be the id of the entry to strike.' })
   strikes?: string;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsString()
   @MaxLength(500, { message: 'Keep the reason under 500 characters.' })
   reason?: string;

@@ -1,7 +1,8 @@
 import { IsBoolean, IsInt, IsOptional, IsString, Max, MaxLength, Min, ValidateIf } from 'class-validator';
 import { PULL_DAY_MAX, ROLL_INTERVAL_LIMITS, type CreateSacRequest } from '@broodsilk/shared';
-import { IsCalendarDate } from '../../animals/dto/is-calendar-date.validator';
-import { IsInstant } from './is-instant.validator';
+import { IsCalendarDate } from '../../common/validators/is-calendar-date.validator';
+import { IsInstant } from '../../common/validators/is-instant.validator';
+import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
 const dayRule = (what: string) => ({ message: `The ${what} must be a whole day number from 0 to ${PULL_DAY_MAX}.` });
 
@@ -28,13 +29,13 @@ export class CreateSacDto implements CreateSacRequest {
   @Max(PULL_DAY_MAX, dayRule('last pull day'))
   pullToDay?: number | null;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsInt({ message: 'The roll interval must be a whole number of hours.' })
   @Min(ROLL_INTERVAL_LIMITS.minHours, { message: `The roll interval must be at least ${ROLL_INTERVAL_LIMITS.minHours} hour.` })
   @Max(ROLL_INTERVAL_LIMITS.maxHours, { message: `The roll interval cannot be more than ${ROLL_INTERVAL_LIMITS.maxHours} hours.` })
   rollIntervalHours?: number;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsBoolean({ message: 'rollingOff must be true or false.' })
   rollingOff?: boolean;
 

@@ -1,6 +1,7 @@
 import { IsInt, IsOptional, IsString, Max, MaxLength, Min, ValidateIf } from 'class-validator';
 import { BROOD_COUNT_MAX, type OpeningRequest } from '@broodsilk/shared';
-import { IsInstant } from './is-instant.validator';
+import { IsInstant } from '../../common/validators/is-instant.validator';
+import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
 /** A count is a whole number from 0 to BROOD_COUNT_MAX. */
 export function IsCount(what: string): PropertyDecorator {
@@ -13,7 +14,7 @@ export function IsCount(what: string): PropertyDecorator {
 }
 
 export class OpeningDto implements OpeningRequest {
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsInstant({ message: 'The opening time must be a date and time with its offset, e.g. 2026-03-08T07:30:00Z.' })
   openedAt?: string;
 

@@ -1,13 +1,12 @@
 import { IsIn, IsOptional, ValidateIf } from 'class-validator';
 import { SAC_FAILURE_REASONS, SAC_OUTCOMES, type SacFailureReason, type SacOutcomeState, type UpdateSacRequest } from '@broodsilk/shared';
+import { PartialType } from '@nestjs/mapped-types';
 import { CreateSacDto } from './create-sac.dto';
+import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
 /** Every create field, each optional (same checks), plus the outcome. */
-export class UpdateSacDto extends CreateSacDto implements UpdateSacRequest {
-  @IsOptional()
-  declare layDate: string;
-
-  @IsOptional()
+export class UpdateSacDto extends PartialType(CreateSacDto, { skipNullProperties: false }) implements UpdateSacRequest {
+  @IsOptionalNonNull()
   @IsIn(SAC_OUTCOMES, { message: `The outcome must be one of: ${SAC_OUTCOMES.join(', ')}.` })
   outcome?: SacOutcomeState;
 

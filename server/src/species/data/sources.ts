@@ -6,7 +6,7 @@ export const WSC_VERSION =
 
 const pub = (citation: string): ValueSource => ({ kind: 'published', citation });
 
-/** Publications and catalogues named in shared/TRADE-FACTS.md; each value in the dataset names one of these or says it has none. */
+/** Publications and catalogues named in docs/trade-facts.md; each value in the dataset names one of these or says it has none. */
 export const SRC = {
   mendozaFrancke2020: pub(
     'Mendoza, J. & Francke, O. 2020. Systematic revision of Mexican threatened tarantulas Brachypelma, with a description of a new genus (Tliltocatl). Zool. J. Linn. Soc.',

@@ -10,7 +10,7 @@ export interface GroupProfile {
   cautionText: string;
 }
 
-/** The product's pull window where a species has none (PRODUCT.md data rules). */
+/** The product's pull window where a species has none (docs/product.md, Data rules). */
 export const DEFAULT_PULL_WINDOW: Sourced<{ fromDay: number; toDay: number }> = {
   value: { fromDay: 21, toDay: 45 },
   source: SRC.common,

@@ -33,7 +33,7 @@ describe('species dataset', () => {
         SPECIES_DATA.some((r) => r.group === g),
         g,
       ).toBe(true);
-    // New World and Old World both present (PRODUCT.md: commonly bred species of both)
+    // New World and Old World both present (docs/product.md, What it does: commonly bred species of both)
     expect(SPECIES_DATA.filter((r) => r.group.startsWith('ow')).length).toBeGreaterThanOrEqual(10);
   });
 
@@ -62,14 +62,14 @@ describe('species dataset', () => {
 
   it('old names resolve to the current name', () => {
     const resolve = (name: string) => SPECIES_DATA.find((r) => r.scientificName === name || r.formerNames.includes(name))?.scientificName;
-    // Mendoza & Francke 2020 (Tliltocatl); synonym chain as in TRADE-FACTS §8
+    // Mendoza & Francke 2020 (Tliltocatl); synonym chain as in docs/trade-facts.md §8
     expect(resolve('Brachypelma vagans')).toBe('Tliltocatl vagans');
     expect(resolve('Euathlus vagans')).toBe('Tliltocatl vagans');
     expect(resolve('Eurypelma vagans')).toBe('Tliltocatl vagans');
     expect(resolve('Brachypelma albopilosum')).toBe('Tliltocatl albopilosus');
     // Fukushima & Bertani 2017, ZooKeys 659
     expect(resolve('Avicularia versicolor')).toBe('Caribena versicolor');
-    // from memory (TRADE-FACTS §8 marks it so)
+    // from memory (docs/trade-facts.md §8 marks it so)
     expect(resolve('Citharischius crawshayi')).toBe('Pelinobius muticus');
   });
 
@@ -91,12 +91,12 @@ describe('species dataset', () => {
     expect(tally.published).toBeGreaterThan(0);
   });
 
-  it('states the World Spider Catalog version and DOI it follows (TRADE-FACTS §8)', () => {
+  it('states the World Spider Catalog version and DOI it follows (docs/trade-facts.md §8)', () => {
     expect(SPECIES_DATASET_VERSION).toContain('Version 26');
     expect(SPECIES_DATASET_VERSION).toContain('doi: 10.24436/2');
   });
 
-  describe('values found in TRADE-FACTS.md cite the source named there', () => {
+  describe('values found in docs/trade-facts.md cite the source named there', () => {
     it('Theraphosa blondi: at most 200 eggs (thezooreviewer 2024)', () => {
       const eggs = row('Theraphosa blondi').eggsPerSac!;
       expect(eggs.value.max).toBeLessThanOrEqual(200);
@@ -158,7 +158,7 @@ describe('species dataset', () => {
       expect(row('Grammostola rosea').urticatingHairs.value).toBe(true);
       expect(citation(row('Grammostola rosea').urticatingHairs.source)).toMatch(/Carrim/);
     });
-    it('pull windows sit inside day 21–45, the common-practice span (TRADE-FACTS §2)', () => {
+    it('pull windows sit inside day 21–45, the common-practice span (docs/trade-facts.md §2)', () => {
       for (const r of SPECIES_DATA) {
         if (!r.pullWindow) continue;
         expect(r.pullWindow.value.fromDay, r.key).toBeGreaterThanOrEqual(21);

@@ -55,7 +55,7 @@ function sp(scientificName: string, authority: string, group: SpeciesGroup, o: O
   };
 }
 
-// Genus pull windows recalled in TRADE-FACTS §2 (memory, editable defaults).
+// Genus pull windows recalled in docs/trade-facts.md §2 (memory, editable defaults).
 const pull = (fromDay: number, toDay: number, genus: string): Sourced<{ fromDay: number; toDay: number }> => ({
   value: { fromDay, toDay },
   source: memo(`usual pull days for ${genus}`),

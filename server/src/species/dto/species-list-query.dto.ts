@@ -1,27 +1,26 @@
 import { Type } from 'class-transformer';
-import { IsIn, IsInt, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
+import { IsIn, IsInt, IsString, Max, MaxLength, Min } from 'class-validator';
 import { SPECIES_GROUPS, type SpeciesGroup, type SpeciesListQuery } from '@broodsilk/shared';
+import { IsListOffset } from '../../common/validators/is-list-offset.validator';
+import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
 export class SpeciesListQueryDto implements SpeciesListQuery {
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsString()
   @MaxLength(100)
   q?: string;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsIn(SPECIES_GROUPS, { message: `group must be one of ${SPECIES_GROUPS.join(', ')}.` })
   group?: SpeciesGroup;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @Type(() => Number)
   @IsInt({ message: 'limit must be a whole number.' })
   @Min(1)
   @Max(200, { message: 'limit can be at most 200.' })
   limit?: number;
 
-  @IsOptional()
-  @Type(() => Number)
-  @IsInt({ message: 'offset must be a whole number.' })
-  @Min(0)
+  @IsListOffset()
   offset?: number;
 }

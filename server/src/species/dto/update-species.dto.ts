@@ -1,5 +1,6 @@
 import { ArrayMaxSize, IsArray, IsBoolean, IsIn, IsInt, IsNotEmpty, IsOptional, IsString, Max, MaxLength, Min, ValidateIf } from 'class-validator';
 import { SPECIES_GROUPS, type SpeciesGroup, type UpdateSpeciesRequest, type ValueSource } from '@broodsilk/shared';
+import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
 const SOURCE_KINDS: ValueSource['kind'][] = ['published', 'common-practice', 'memory'];
 
@@ -15,29 +16,29 @@ function Count(max: number): PropertyDecorator {
 }
 
 export class UpdateSpeciesDto implements UpdateSpeciesRequest {
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsArray()
   @ArrayMaxSize(20)
   @IsString({ each: true })
   @MaxLength(120, { each: true })
   commonNames?: string[];
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsArray()
   @ArrayMaxSize(20)
   @IsString({ each: true })
   @MaxLength(120, { each: true })
   formerNames?: string[];
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsIn(SPECIES_GROUPS, { message: `group must be one of ${SPECIES_GROUPS.join(', ')}.` })
   group?: SpeciesGroup;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsBoolean()
   urticatingHairs?: boolean;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsBoolean()
   medicallySignificantVenom?: boolean;
 
@@ -56,11 +57,11 @@ export class UpdateSpeciesDto implements UpdateSpeciesRequest {
   @Count(60) lifespanMinMonths?: number | null;
   @Count(60) lifespanMaxMonths?: number | null;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsIn(SOURCE_KINDS, { message: 'sourceKind must be published, common-practice or memory.' })
   sourceKind?: ValueSource['kind'];
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsString()
   @IsNotEmpty()
   @MaxLength(500)

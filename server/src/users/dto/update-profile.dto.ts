@@ -1,21 +1,22 @@
-import { IsIn, IsNotEmpty, IsOptional, IsString, MaxLength } from 'class-validator';
+import { IsIn, IsNotEmpty, IsString, MaxLength } from 'class-validator';
 import { Transform } from 'class-transformer';
 import { TEMPERATURE_UNITS, type TemperatureUnit, type UpdateProfileRequest } from '@broodsilk/shared';
 import { IsTimeZone } from '../../common/validators/is-time-zone.validator';
+import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
 export class UpdateProfileDto implements UpdateProfileRequest {
-  @IsOptional()
+  @IsOptionalNonNull()
   @Transform(({ value }) => (typeof value === 'string' ? value.trim() : value))
   @IsString()
   @IsNotEmpty({ message: 'Your display name cannot be empty.' })
   @MaxLength(80)
   displayName?: string;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsTimeZone()
   timeZone?: string;
 
-  @IsOptional()
+  @IsOptionalNonNull()
   @IsIn(TEMPERATURE_UNITS, { message: 'Choose °C or °F.' })
   temperatureUnit?: TemperatureUnit;
 }

@@ -6,10 +6,10 @@ import { OWNER_ONLY, type MatrixFixture, type MatrixRow } from './matrix.types';
 let n = 0;
 
 /** An open invitation into `projectId`, written straight to the database; returns its token. */
-async function invitation(fx: MatrixFixture, projectId: string): Promise<string> {
+async function invitation(fx: MatrixFixture, projectId: string, claimedBy?: string): Promise<{ token: string; id: string }> {
   const em = fx.orm.em.fork();
   const { token, hash } = newInvitationToken();
-  em.create(Invitation, {
+  const row = em.create(Invitation, {
     project: projectId,
     email: `matrix-invitee-${Date.now()}-${(n += 1)}@example.test`,
     role: 'caretaker',
@@ -17,9 +17,10 @@ async function invitation(fx: MatrixFixture, projectId: string): Promise<string>
     tokenHash: hash,
     invitedBy: em.getReference(User, fx.users.owner.user.id),
     expiresAt: new Date(Date.now() + 86_400_000),
+    ...(claimedBy ? { claimedBy: em.getReference(User, claimedBy), claimedAt: new Date() } : {}),
   });
   await em.flush();
-  return token;
+  return { token, id: row.id };
 }
 
 export const rows: MatrixRow[] = [
@@ -34,13 +35,22 @@ export const rows: MatrixRow[] = [
     path: '/api/invitations/:token',
     // Public: the page shows what the link is before anybody signs in.
     expect: { anonymous: '2xx', stranger: '2xx', caretaker: '2xx', partner: '2xx', owner: '2xx' },
-    request: async (fx) => ({ params: { token: await invitation(fx, fx.project.id) } }),
+    request: async (fx) => ({ params: { token: (await invitation(fx, fx.project.id)).token } }),
   },
   {
     method: 'POST',
     path: '/api/invitations/:token/accept',
-    // Anyone signed in holding the link joins; members already in the project get a 409.
+    // Anyone signed in holding the link asks to join (another address than the invited one waits for the owner); members get a 409.
     expect: { anonymous: 401, stranger: '2xx', caretaker: 409, partner: 409, owner: 409 },
-    request: async (fx) => ({ params: { token: await invitation(fx, (await fx.freshProject()).id) } }),
+    request: async (fx) => ({ params: { token: (await invitation(fx, (await fx.freshProject()).id)).token } }),
+  },
+  {
+    method: 'POST',
+    path: '/api/projects/:projectId/invitations/:invitationId/approve',
+    expect: OWNER_ONLY,
+    request: async (fx) => {
+      const project = await fx.freshProject();
+      return { params: { projectId: project.id, invitationId: (await invitation(fx, project.id, fx.users.stranger.user.id)).id } };
+    },
   },
 ];

@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { ANY_MEMBER, OWNER_ONLY, type Actor, type Expected, type MatrixFixture, type MatrixRequest, type MatrixRow } from './matrix.types';
 
-/** The owner and caretakers write the care log and the counts; partners read them (PRODUCT.md). */
+/** The owner and caretakers write the care log and the counts; partners read them (docs/product.md, Roles). */
 const OWNER_AND_CARETAKER: Record<Actor, Expected> = { anonymous: 401, stranger: 404, caretaker: '2xx', partner: 403, owner: '2xx' };
 
 const OPENING = { healthyEggs: 10, eggsWithLegs: 20, nymphs: 0, darkEggs: 2, spoiledEggs: 1, keptBack: 30 };

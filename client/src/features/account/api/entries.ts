@@ -1,4 +1,4 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
 import type { ConfirmEntryRequest, CreateEntryRequest, HandOverFormResponse, LedgerEntryResponse } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
 import { accountKeys } from './keys';
@@ -34,24 +34,16 @@ export function useHandOverForm(projectId: string) {
 
 /** Any entry moves shares, entries and balances: refresh the whole account of the project. */
 export function useCreateEntry(projectId: string) {
-  const qc = useQueryClient();
   return useMutation({
     mutationFn: (body: CreateEntryRequest) => api.post<LedgerEntryResponse>(`/projects/${projectId}/entries`, body),
-    meta: { handlesErrors: true },
-    onSuccess: async () => {
-      await qc.invalidateQueries({ queryKey: accountKeys.project(projectId) });
-    },
+    meta: { handlesErrors: true, invalidates: [accountKeys.project(projectId)] },
   });
 }
 
 export function useConfirmEntry(projectId: string) {
-  const qc = useQueryClient();
   return useMutation({
     mutationFn: ({ entryId, body }: { entryId: string; body: ConfirmEntryRequest }) =>
       api.post<LedgerEntryResponse>(`/projects/${projectId}/entries/${entryId}/confirm`, body),
-    meta: { handlesErrors: true },
-    onSuccess: async () => {
-      await qc.invalidateQueries({ queryKey: accountKeys.project(projectId) });
-    },
+    meta: { handlesErrors: true, invalidates: [accountKeys.project(projectId)] },
   });
 }

@@ -1,11 +1,13 @@
+import { queryRoots } from '@/lib/query-keys';
+
 /** Every query of one project's account sits under ['account', projectId], so one invalidation refreshes them all. */
 export const accountKeys = {
-  project: (projectId: string) => ['account', projectId] as const,
-  shares: (projectId: string) => ['account', projectId, 'shares'] as const,
-  entries: (projectId: string) => ['account', projectId, 'entries'] as const,
-  handOverForm: (projectId: string) => ['account', projectId, 'entries', 'hand-over-form'] as const,
-  balances: (projectId: string) => ['account', projectId, 'balances'] as const,
-  statement: (projectId: string, memberId: string) => ['account', projectId, 'statement', memberId] as const,
+  project: (projectId: string) => [...queryRoots.account, projectId] as const,
+  shares: (projectId: string) => [...accountKeys.project(projectId), 'shares'] as const,
+  entries: (projectId: string) => [...accountKeys.project(projectId), 'entries'] as const,
+  handOverForm: (projectId: string) => [...accountKeys.entries(projectId), 'hand-over-form'] as const,
+  balances: (projectId: string) => [...accountKeys.project(projectId), 'balances'] as const,
+  statement: (projectId: string, memberId: string) => [...accountKeys.project(projectId), 'statement', memberId] as const,
   /** The signed-in keeper's payout account (not tied to one project). */
-  payoutAccount: () => ['account', 'payout-account'] as const,
+  payoutAccount: () => [...queryRoots.account, 'payout-account'] as const,
 };

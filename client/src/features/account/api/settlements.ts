@@ -1,4 +1,4 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
 import type { CheckoutResponse, CreateCheckoutRequest, CreatePayoutAccountRequest, PayoutAccountResponse } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
 import { accountKeys } from './keys';
@@ -21,25 +21,16 @@ export function usePayoutAccount(enabled = true) {
 
 /** Links (or re-links) a payout account; the answer carries the onboarding link. */
 export function useCreatePayoutAccount() {
-  const qc = useQueryClient();
   return useMutation({
     mutationFn: (body: CreatePayoutAccountRequest) => api.post<PayoutAccountResponse>('/settlements/payout-account', body),
-    meta: { handlesErrors: true },
-    onSuccess: async (account) => {
-      qc.setQueryData(accountKeys.payoutAccount(), account);
-      await qc.invalidateQueries({ queryKey: accountKeys.payoutAccount() });
-    },
+    meta: { handlesErrors: true, invalidates: [accountKeys.payoutAccount()] },
   });
 }
 
 /** Starts a payment to another party; the browser is then sent to the payment page at `url`. */
 export function useCreateCheckout(projectId: string) {
-  const qc = useQueryClient();
   return useMutation({
     mutationFn: (body: CreateCheckoutRequest) => api.post<CheckoutResponse>(`/projects/${projectId}/settlements/checkout`, body),
-    meta: { handlesErrors: true },
-    onSuccess: async () => {
-      await qc.invalidateQueries({ queryKey: accountKeys.project(projectId) });
-    },
+    meta: { handlesErrors: true, invalidates: [accountKeys.project(projectId)] },
   });
 }

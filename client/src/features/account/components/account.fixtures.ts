@@ -57,7 +57,7 @@ export function shares(): SharesResponse {
       {
         sacId: '44444444-4444-4444-8444-444444444444',
         layDate: '2026-09-01',
-        outcome: 'hatched',
+        outcome: 'emerged',
         count: 20,
         aliveInCare: 17,
         withdrawn: 3,

@@ -1,7 +1,7 @@
 import { Alert, Badge, Group, Stack, Table, Text } from '@mantine/core';
 import { ScrollTable } from '@/components/ui/scroll-table';
 import { useBalances } from '../api/balances';
-import { formatMoney } from '../utils/money';
+import { formatMoney } from '@broodsilk/shared';
 
 /** Per party: share, what went out, what is still owed in spiderlings; then the netted money between parties. */
 export function BalancesPanel({ projectId }: { projectId: string }) {

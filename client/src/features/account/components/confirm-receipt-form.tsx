@@ -1,7 +1,7 @@
 import { Button, Group, Stack, Text } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import type { ConfirmEntryRequest, LedgerEntryResponse } from '@broodsilk/shared';
+import { formatMoney, type ConfirmEntryRequest, type LedgerEntryResponse } from '@broodsilk/shared';
 import { DateField } from '@/components/fields/date-field';
 import { NumberField } from '@/components/fields/number-field';
 import { checkDate, dateInWords, readDate } from '@/components/fields/typed-date';
@@ -11,7 +11,6 @@ import { FormActions } from '@/components/ui/form-actions';
 import { formatDate } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useConfirmEntry } from '../api/entries';
-import { formatMoney } from '../utils/money';
 
 interface Values {
   arrivedAlive: string;
@@ -85,7 +84,7 @@ function ConfirmHandOver({ projectId, entry, today }: { projectId: string; entry
   );
 }
 
-/** A payment confirmed once, with the day the money arrived. */
+/** A payment to the viewer, or a cash-out or sale of their young below the price in the terms: accepted once, with the day it arrived. */
 function ConfirmPayment({ projectId, entry, today }: { projectId: string; entry: LedgerEntryResponse; today: string }) {
   const confirm = useConfirmEntry(projectId);
   const [asking, setAsking] = useState(false);
@@ -95,7 +94,7 @@ function ConfirmPayment({ projectId, entry, today }: { projectId: string; entry:
     <Stack gap="xs">
       <Group>
         <Button onClick={() => setAsking(true)} disabled={confirm.isPending}>
-          Confirm the payment arrived
+          {entry.kind === 'money' ? 'Confirm the payment arrived' : `Accept this ${entry.kind}`}
         </Button>
       </Group>
       {asking && (
@@ -120,7 +119,12 @@ function ConfirmPayment({ projectId, entry, today }: { projectId: string; entry:
   );
 }
 
-/** Entries waiting for the viewer's confirmation: hand-overs to them, payments to or from them. */
+const belowTermsPrice = (e: LedgerEntryResponse): string => {
+  if (e.kind === 'sale' && e.priceMinor !== null && e.currency) return `for ${formatMoney(e.priceMinor, e.currency)} in all`;
+  return e.pricePerSpiderlingMinor ? 'at a lower price per spiderling' : 'for nothing';
+};
+
+/** Entries waiting for the viewer's acceptance: hand-overs and payments to them, cash-outs and sales of their young below the terms' price. */
 export function AwaitingMe({ projectId, entries, today }: { projectId: string; entries: LedgerEntryResponse[]; today: string }) {
   return (
     <Stack gap="sm" data-testid="awaiting-me">
@@ -129,7 +133,9 @@ export function AwaitingMe({ projectId, entries, today }: { projectId: string; e
           <Text size="sm" fw={600} className="tone-due">
             {e.kind === 'hand-over'
               ? `#${e.seq}: ${e.count} spiderlings handed over to you on ${formatDate(e.date)}${e.method === 'shipment' ? ' by shipment' : ''}`
-              : `#${e.seq}: ${e.from?.name ?? '?'} paid ${e.to?.name ?? '?'} ${e.amountMinor !== null && e.currency ? formatMoney(e.amountMinor, e.currency) : ''} on ${formatDate(e.date)}`}
+              : e.kind === 'cash-out' || e.kind === 'sale'
+                ? `#${e.seq}: ${e.kind} of ${e.count} of your spiderlings on ${formatDate(e.date)} ${belowTermsPrice(e)}, below the price in the terms`
+                : `#${e.seq}: ${e.from?.name ?? '?'} paid ${e.to?.name ?? '?'} ${e.amountMinor !== null && e.currency ? formatMoney(e.amountMinor, e.currency) : ''} on ${formatDate(e.date)}`}
           </Text>
           {e.kind === 'hand-over' ? (
             <ConfirmHandOver projectId={projectId} entry={e} today={today} />

@@ -1,10 +1,9 @@
 import { Alert, Anchor, Card, Group, Stack, Table, Text } from '@mantine/core';
 import type { ReactNode } from 'react';
-import type { LedgerEntryResponse } from '@broodsilk/shared';
+import { formatMoney, type LedgerEntryResponse } from '@broodsilk/shared';
 import { formatDate } from '@/lib/dates';
 import { useEntries } from '../api/entries';
 import { ENTRY_KIND_LABELS, METHOD_LABELS, STATUS_LABELS, young } from '../utils/labels';
-import { formatMoney } from '../utils/money';
 
 const rowId = (seq: number) => `account-entry-${seq}`;
 

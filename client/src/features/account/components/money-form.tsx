@@ -6,12 +6,10 @@ import { NumberField } from '@/components/fields/number-field';
 import { TextField } from '@/components/fields/text-field';
 import { textRule } from '@/components/fields/text-rule';
 import { dateRule, readDate } from '@/components/fields/typed-date';
-import { checkNumber } from '@/components/fields/typed-number';
 import { FormActions } from '@/components/ui/form-actions';
-import { TEXT_LIMITS, type PartyRef } from '@broodsilk/shared';
+import { TEXT_LIMITS, minorToMajor, parseMoney, toMinor, type PartyRef } from '@broodsilk/shared';
 import { useCreateEntry } from '../api/entries';
 import { applyEntryErrors } from '../utils/entry-errors';
-import { minorDigits, toMajor, toMinor } from '../utils/money';
 
 interface Values {
   fromMemberId: string;
@@ -44,16 +42,17 @@ export function MoneyForm({ projectId, parties, currency, today, fromMemberId, t
     initialValues: {
       fromMemberId: fromMemberId ?? '',
       toMemberId: toMemberId ?? '',
-      amount: amountMinor ? String(toMajor(amountMinor, currency)) : '',
+      amount: amountMinor ? String(minorToMajor(amountMinor, currency)) : '',
       date: today,
       note: '',
     },
     validate: {
       fromMemberId: (v) => (v ? null : 'Who paid?'),
       toMemberId: (v, all) => (!v ? 'Who was paid?' : v === all.fromMemberId ? 'The payer and the payee must be different parties.' : null),
-      amount: (v) =>
-        checkNumber(v, { required: 'How much was paid?', decimals: minorDigits(currency) }) ??
-        (toMinor(v, currency) > 0 ? null : 'The amount must be above 0.'),
+      amount: (v) => {
+        const amount = parseMoney(v, currency);
+        return !amount.ok ? amount.message : amount.minor > 0 ? null : 'The amount must be above 0.';
+      },
       note: textRule({ maxLength: TEXT_LIMITS.ledgerNote }),
       date: dateRule({ required: 'Give the date.', latest: today, latestMessage: 'This has happened, so it cannot be after today.' }),
     },

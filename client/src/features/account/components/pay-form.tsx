@@ -1,11 +1,10 @@
 import { Stack, Text } from '@mantine/core';
 import { NumberField } from '@/components/fields/number-field';
-import { checkNumber } from '@/components/fields/typed-number';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateCheckout } from '../api/settlements';
-import { formatMoney, minorDigits, toMajor, toMinor } from '../utils/money';
+import { formatMoney, minorToMajor, parseMoney, toMinor } from '@broodsilk/shared';
 import { FormActions } from '@/components/ui/form-actions';
 
 interface Props {
@@ -22,18 +21,16 @@ interface Props {
 export function PayForm({ projectId, toMemberId, toName, owedMinor, currency, goTo = (url) => window.location.assign(url) }: Props) {
   const checkout = useCreateCheckout(projectId);
   const [message, setMessage] = useState<string | null>(null);
-  const digits = minorDigits(currency);
   const form = useForm<{ amount: string }>({
     mode: 'uncontrolled',
     validateInputOnBlur: true,
-    initialValues: { amount: String(toMajor(owedMinor, currency)) },
+    initialValues: { amount: String(minorToMajor(owedMinor, currency)) },
     validate: {
       amount: (v) => {
-        const typed = checkNumber(v, { required: 'How much do you pay?', decimals: digits });
-        if (typed) return typed;
-        const minor = toMinor(v, currency);
-        if (!(minor > 0)) return 'The amount must be above 0.';
-        return minor > owedMinor ? `You owe ${toName} ${formatMoney(owedMinor, currency)}; the amount cannot be more than that.` : null;
+        const amount = parseMoney(v, currency);
+        if (!amount.ok) return amount.message;
+        if (amount.minor <= 0) return 'The amount must be above 0.';
+        return amount.minor > owedMinor ? `You owe ${toName} ${formatMoney(owedMinor, currency)}; the amount cannot be more than that.` : null;
       },
     },
   });

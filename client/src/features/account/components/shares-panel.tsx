@@ -1,9 +1,8 @@
 import { Alert, Badge, Card, Group, List, Stack, Table, Text } from '@mantine/core';
 import { ScrollTable } from '@/components/ui/scroll-table';
-import type { SacSharesView } from '@broodsilk/shared';
+import { formatMoney, type SacSharesView } from '@broodsilk/shared';
 import { formatDate, formatInstant } from '@/lib/dates';
 import { useShares } from '../api/shares';
-import { formatMoney } from '../utils/money';
 
 function SacShares({ sac, timeZone }: { sac: SacSharesView; timeZone: string }) {
   const failed = sac.outcome === 'failed';

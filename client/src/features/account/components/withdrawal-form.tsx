@@ -8,12 +8,11 @@ import { textRule } from '@/components/fields/text-rule';
 import { dateRule, readDate } from '@/components/fields/typed-date';
 import { numberRule, readNumber } from '@/components/fields/typed-number';
 import { FormActions } from '@/components/ui/form-actions';
-import { TEXT_LIMITS, type PartyBalanceView, type SacSharesView } from '@broodsilk/shared';
+import { TEXT_LIMITS, parseMoney, toMinor, type PartyBalanceView, type SacSharesView } from '@broodsilk/shared';
 import { formatDate } from '@/lib/dates';
 import { useCreateEntry } from '../api/entries';
 import { applyEntryErrors } from '../utils/entry-errors';
 import { young } from '../utils/labels';
-import { minorDigits, toMinor } from '../utils/money';
 
 interface Values {
   memberId: string;
@@ -51,12 +50,11 @@ export function WithdrawalForm({ projectId, kind, parties, sacs, currency, terms
       count: numberRule({ required: 'How many spiderlings?', min: 1, max: 100_000, decimals: 0, rangeMessage: 'A count is a whole number from 1 to 100,000.' }),
       date: dateRule({ required: 'Give the date.', latest: today, latestMessage: 'This has happened, so it cannot be after today.' }),
       sacId: (v) => (withYoung.length > 1 && !v ? 'Several sacs have young in care: which one?' : null),
-      price: numberRule({
-        required: sale ? 'What was the total price?' : undefined,
-        min: 0,
-        decimals: minorDigits(currency),
-        rangeMessage: 'The price must be 0 or more.',
-      }),
+      price: (v) => {
+        if (v.trim() === '') return sale ? 'What was the total price?' : null;
+        const price = parseMoney(v, currency);
+        return !price.ok ? price.message : price.minor >= 0 ? null : 'The price must be 0 or more.';
+      },
       note: textRule({ maxLength: TEXT_LIMITS.ledgerNote }),
     },
   });

@@ -2,8 +2,9 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { Me } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
 import { isApiError } from '@/lib/api-error';
+import { meQueryKey } from '@/lib/query-keys';
 
-export const authKeys = { me: ['auth', 'me'] as const };
+export const authKeys = { me: meQueryKey };
 
 /** The signed-in user, or null when there is no session. */
 export async function fetchMe(): Promise<Me | null> {

@@ -1,5 +1,5 @@
 import { Anchor, PasswordInput, Stack, Text } from '@mantine/core';
-import { Link } from 'react-router-dom';
+import { Link } from 'react-router';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { MIN_PASSWORD_LENGTH, TEXT_LIMITS } from '@broodsilk/shared';

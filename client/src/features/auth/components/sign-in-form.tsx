@@ -2,7 +2,7 @@ import { Anchor, PasswordInput, Stack, Text, TextInput } from '@mantine/core';
 import { FormActions } from '@/components/ui/form-actions';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import { Link } from 'react-router-dom';
+import { Link } from 'react-router';
 import { applyServerErrors } from '@/lib/form-errors';
 import { paths } from '@/config/paths';
 import { useLogin } from '../api/session';

@@ -1,6 +1,7 @@
-import { queryOptions, useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
+import { queryOptions, useMutation, useQuery, useQueryClient, type QueryClient, type QueryKey } from '@tanstack/react-query';
 import type { AnimalListQuery, AnimalResponse, AnimalSummary, CreateAnimalRequest, MaleClockRow, Paged, UpdateAnimalRequest } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
+import { queryRoots } from '@/lib/query-keys';
 
 export function fetchAnimals(query: AnimalListQuery, signal?: AbortSignal): Promise<Paged<AnimalSummary>> {
   return api.get<Paged<AnimalSummary>>('/animals', { query: { ...query }, signal });
@@ -16,7 +17,7 @@ export function fetchMalesByClock(signal?: AbortSignal): Promise<MaleClockRow[]>
 
 /** ['animals'] → ['animals','list',query] · ['animals','detail',id] · ['animals','males'] */
 export const animalQueries = {
-  all: () => ['animals'] as const,
+  all: () => queryRoots.animals,
   lists: () => [...animalQueries.all(), 'list'] as const,
   list: (query: AnimalListQuery) =>
     queryOptions({
@@ -36,6 +37,9 @@ export const animalQueries = {
     }),
 };
 
+/** Lists and the male clock show every animal: any change to one refreshes them (`meta.invalidates`). */
+export const AFTER_ANIMAL_CHANGE: readonly QueryKey[] = [animalQueries.lists(), animalQueries.males().queryKey];
+
 export function useAnimals(query: AnimalListQuery) {
   return useQuery({ ...animalQueries.list(query), placeholderData: (prev) => prev });
 }
@@ -52,11 +56,8 @@ export function useCreateAnimal() {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: (body: CreateAnimalRequest) => api.post<AnimalResponse>('/animals', body),
-    meta: { handlesErrors: true },
-    onSuccess: async (animal) => {
-      qc.setQueryData(animalQueries.detail(animal.id).queryKey, animal);
-      await Promise.all([qc.invalidateQueries({ queryKey: animalQueries.lists() }), qc.invalidateQueries({ queryKey: animalQueries.males().queryKey })]);
-    },
+    meta: { handlesErrors: true, invalidates: AFTER_ANIMAL_CHANGE },
+    onSuccess: (animal) => qc.setQueryData(animalQueries.detail(animal.id).queryKey, animal),
   });
 }
 
@@ -64,24 +65,17 @@ export function useUpdateAnimal(id: string) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: (body: UpdateAnimalRequest) => api.patch<AnimalResponse>(`/animals/${id}`, body),
-    meta: { handlesErrors: true },
-    onSuccess: async (animal) => {
-      qc.setQueryData(animalQueries.detail(id).queryKey, animal);
-      await Promise.all([qc.invalidateQueries({ queryKey: animalQueries.lists() }), qc.invalidateQueries({ queryKey: animalQueries.males().queryKey })]);
-    },
+    meta: { handlesErrors: true, invalidates: AFTER_ANIMAL_CHANGE },
+    onSuccess: (animal) => qc.setQueryData(animalQueries.detail(id).queryKey, animal),
   });
 }
 
 export function useDeleteAnimal(id: string) {
-  const qc = useQueryClient();
   return useMutation({
     mutationFn: () => api.delete<void>(`/animals/${id}`),
-    meta: { handlesErrors: true },
     // The detail stays cached while its page is still shown (removing it there would refetch a 404);
     // call forgetAnimal once the page has moved on.
-    onSuccess: async () => {
-      await Promise.all([qc.invalidateQueries({ queryKey: animalQueries.lists() }), qc.invalidateQueries({ queryKey: animalQueries.males().queryKey })]);
-    },
+    meta: { handlesErrors: true, invalidates: AFTER_ANIMAL_CHANGE },
   });
 }
 

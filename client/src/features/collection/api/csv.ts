@@ -1,7 +1,7 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import type { ImportResult } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
-import { animalQueries } from './animals';
+import { AFTER_ANIMAL_CHANGE } from './animals';
 
 /** A plain link downloads it: the browser sends the session cookie, the server names the file. */
 export const ANIMALS_CSV_EXPORT_URL = '/api/animals/export.csv';
@@ -13,12 +13,8 @@ export function importAnimalsCsv(file: File): Promise<ImportResult> {
 }
 
 export function useImportAnimalsCsv() {
-  const qc = useQueryClient();
   return useMutation({
     mutationFn: importAnimalsCsv,
-    meta: { handlesErrors: true },
-    onSuccess: async () => {
-      await Promise.all([qc.invalidateQueries({ queryKey: animalQueries.lists() }), qc.invalidateQueries({ queryKey: animalQueries.males().queryKey })]);
-    },
+    meta: { handlesErrors: true, invalidates: AFTER_ANIMAL_CHANGE },
   });
 }

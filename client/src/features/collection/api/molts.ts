@@ -1,7 +1,7 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
 import type { CreateMoltRequest, MoltResponse } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
-import { animalQueries } from './animals';
+import { AFTER_ANIMAL_CHANGE, animalQueries } from './animals';
 
 export function fetchMolts(animalId: string, signal?: AbortSignal): Promise<MoltResponse[]> {
   return api.get<MoltResponse[]>(`/animals/${animalId}/molts`, { signal });
@@ -21,17 +21,9 @@ export function useMolts(animalId: string) {
 }
 
 export function useRecordMolt(animalId: string) {
-  const qc = useQueryClient();
   return useMutation({
     mutationFn: (body: CreateMoltRequest) => api.post<MoltResponse>(`/animals/${animalId}/molts`, body),
-    meta: { handlesErrors: true },
     // A molt moves the last-molt date, readiness and (maturing) the male clock.
-    onSuccess: async () => {
-      await Promise.all([
-        qc.invalidateQueries({ queryKey: animalQueries.detail(animalId).queryKey }),
-        qc.invalidateQueries({ queryKey: animalQueries.lists() }),
-        qc.invalidateQueries({ queryKey: animalQueries.males().queryKey }),
-      ]);
-    },
+    meta: { handlesErrors: true, invalidates: [animalQueries.detail(animalId).queryKey, ...AFTER_ANIMAL_CHANGE] },
   });
 }

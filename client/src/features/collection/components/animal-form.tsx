@@ -1,7 +1,7 @@
 import { Fieldset, SegmentedControl, Select, SimpleGrid, Stack, Text } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { Fragment, useState, type ReactNode } from 'react';
-import { ANIMAL_SEXES, ANIMAL_STATUSES, CUSTODIES, MATURITIES, OWNER_KINDS, TEXT_LIMITS, type AnimalResponse } from '@broodsilk/shared';
+import { ANIMAL_SEXES, ANIMAL_STATUSES, CUSTODIES, MATURITIES, OWNER_KINDS, TEXT_LIMITS, minorDigits, type AnimalResponse } from '@broodsilk/shared';
 import { DateField } from '@/components/fields/date-field';
 import { NumberField } from '@/components/fields/number-field';
 import { TextAreaField, TextField } from '@/components/fields/text-field';
@@ -12,7 +12,7 @@ import { FormActions } from '@/components/ui/form-actions';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateAnimal, useUpdateAnimal } from '../api/animals';
 import { animalFormValues, toAnimalRequest, type AnimalFormValues } from '../utils/animal-form-values';
-import { CUSTODY_LABELS, MATURITY_LABELS, OWNER_LABELS, SEX_LABELS, STATUS_LABELS, currencyDigits } from '../utils/animal-view';
+import { CUSTODY_LABELS, MATURITY_LABELS, OWNER_LABELS, SEX_LABELS, STATUS_LABELS } from '../utils/animal-view';
 
 /** What the form hands to the species picker the app layer plugs in. */
 export interface SpeciesFieldProps {
@@ -80,7 +80,7 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
         checkNumber(v, {
           min: 0,
           max: 1_000_000,
-          decimals: currencyDigits(all.priceCurrency.trim().toUpperCase() || 'EUR'),
+          decimals: minorDigits(all.priceCurrency.trim().toUpperCase() || 'EUR'),
           rangeMessage: 'A price is from 0 to 1,000,000.',
         }),
       priceCurrency: (v, all) => (all.price.trim() !== '' && !v.trim() ? 'Say which currency the price is in (e.g. EUR).' : null),

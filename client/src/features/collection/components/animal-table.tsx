@@ -1,5 +1,5 @@
 import { Anchor, Badge, Group, Table, Text, Tooltip, UnstyledButton } from '@mantine/core';
-import { Link } from 'react-router-dom';
+import { Link } from 'react-router';
 import type { AnimalSort, AnimalSummary, MaleClock } from '@broodsilk/shared';
 import { formatDate } from '@/lib/dates';
 import { CUSTODY_LABELS, MATURITY_LABELS, SEX_LABELS, SEX_SIGNS, STATUS_LABELS } from '../utils/animal-view';

@@ -1,5 +1,5 @@
 import { Anchor, Card, Group, SimpleGrid, Stack, Text } from '@mantine/core';
-import { Link } from 'react-router-dom';
+import { Link } from 'react-router';
 import { maleClockUrgency, type MaleClockRow } from '@broodsilk/shared';
 import { formatDate } from '@/lib/dates';
 import { CLOCK_STATES } from '../utils/animal-view';

@@ -1,7 +1,15 @@
-import type { AnimalResponse, AnimalSex, AnimalStatus, CreateAnimalRequest, Custody, Maturity, OwnerKind } from '@broodsilk/shared';
+import {
+  minorDigits,
+  type AnimalResponse,
+  type AnimalSex,
+  type AnimalStatus,
+  type CreateAnimalRequest,
+  type Custody,
+  type Maturity,
+  type OwnerKind,
+} from '@broodsilk/shared';
 import { readDate } from '@/components/fields/typed-date';
 import { readNumber } from '@/components/fields/typed-number';
-import { currencyDigits } from './animal-view';
 
 /** The animal form's values: dates and numbers as the user typed them (see components/fields). */
 export interface AnimalFormValues {
@@ -29,7 +37,7 @@ export interface AnimalFormValues {
 
 /** The form's starting values: empty for a new animal, the saved ones for an edit. */
 export function animalFormValues(a?: AnimalResponse): AnimalFormValues {
-  const digits = a?.priceCurrency ? currencyDigits(a.priceCurrency) : 2;
+  const digits = a?.priceCurrency ? minorDigits(a.priceCurrency) : 2;
   return {
     speciesId: a?.species.id ?? null,
     label: a?.label ?? '',
@@ -69,7 +77,7 @@ export function toAnimalRequest(v: AnimalFormValues): CreateAnimalRequest {
     maturedOn: v.maturity === 'mature' ? readDate(v.maturedOn) : null,
     acquiredOn: readDate(v.acquiredOn),
     acquiredFrom: text(v.acquiredFrom),
-    pricePaidMinor: price === null ? null : Math.round(price * 10 ** currencyDigits(currency ?? 'EUR')),
+    pricePaidMinor: price === null ? null : Math.round(price * 10 ** minorDigits(currency ?? 'EUR')),
     priceCurrency: currency,
     ownerKind: v.ownerKind,
     // An edit of a keeper-owned animal may leave the e-mail empty: the owner stays as recorded.

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { currencyDigits, filtersFromParams, filtersToParams } from './animal-view';
+import { filtersFromParams, filtersToParams } from './animal-view';
 
 describe('collection filters in the URL', () => {
   it('reads known values and ignores unknown ones', () => {
@@ -15,12 +15,5 @@ describe('collection filters in the URL', () => {
     const p = filtersToParams({ q: 'rack b', sex: 'female', sort: 'label', order: 'asc', limit: 25, offset: 0 }, new URLSearchParams('view=males&sex=male'));
     expect(p.toString()).toBe('view=males&q=rack+b&sex=female');
     expect(filtersFromParams(p)).toMatchObject({ q: 'rack b', sex: 'female' });
-  });
-});
-
-describe('currencyDigits', () => {
-  it('knows currencies without minor units', () => {
-    expect(currencyDigits('EUR')).toBe(2);
-    expect(currencyDigits('JPY')).toBe(0);
   });
 });

@@ -94,21 +94,3 @@ export function filtersToParams(f: Partial<CollectionFilters>, base = new URLSea
   if (f.offset) p.set('offset', String(f.offset));
   return p;
 }
-
-/** Digits after the decimal point of a currency (EUR 2, JPY 0), for minor units. */
-export function currencyDigits(currency: string): number {
-  try {
-    return new Intl.NumberFormat('en', { style: 'currency', currency }).resolvedOptions().maximumFractionDigits ?? 2;
-  } catch {
-    return 2;
-  }
-}
-
-export function formatMoney(minor: number, currency: string): string {
-  const digits = currencyDigits(currency);
-  try {
-    return new Intl.NumberFormat('en-GB', { style: 'currency', currency }).format(minor / 10 ** digits);
-  } catch {
-    return `${(minor / 10 ** digits).toFixed(digits)} ${currency}`;
-  }
-}

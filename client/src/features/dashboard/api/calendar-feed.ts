@@ -1,6 +1,7 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
 import type { CalendarFeedResponse } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
+import { queryRoots } from '@/lib/query-keys';
 
 export function fetchCalendarFeed(signal?: AbortSignal): Promise<CalendarFeedResponse> {
   return api.get<CalendarFeedResponse>('/calendar/feed', { signal });
@@ -10,7 +11,7 @@ export function fetchCalendarFeed(signal?: AbortSignal): Promise<CalendarFeedRes
 export const calendarQueries = {
   feed: () =>
     queryOptions({
-      queryKey: ['calendar', 'feed'] as const,
+      queryKey: [...queryRoots.calendar, 'feed'] as const,
       queryFn: ({ signal }) => fetchCalendarFeed(signal),
       staleTime: 5 * 60_000,
     }),
@@ -22,12 +23,8 @@ export function useCalendarFeed() {
 
 /** A new secret address; the old one stops working. */
 export function useRotateCalendarFeed() {
-  const qc = useQueryClient();
   return useMutation({
     mutationFn: () => api.post<CalendarFeedResponse>('/calendar/feed/rotate'),
-    onSuccess: async (feed) => {
-      qc.setQueryData(calendarQueries.feed().queryKey, feed);
-      await qc.invalidateQueries({ queryKey: calendarQueries.feed().queryKey });
-    },
+    meta: { invalidates: [calendarQueries.feed().queryKey] },
   });
 }

@@ -1,6 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { DashboardResponse } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
+import { queryRoots } from '@/lib/query-keys';
 
 export function fetchDashboard(signal?: AbortSignal): Promise<DashboardResponse> {
   return api.get<DashboardResponse>('/dashboard', { signal });
@@ -10,7 +11,7 @@ export function fetchDashboard(signal?: AbortSignal): Promise<DashboardResponse>
 export const dashboardQueries = {
   today: () =>
     queryOptions({
-      queryKey: ['dashboard', 'today'] as const,
+      queryKey: [...queryRoots.dashboard, 'today'] as const,
       queryFn: ({ signal }) => fetchDashboard(signal),
       // Rolls fall due by the hour: refresh while the page stays open.
       refetchInterval: 5 * 60_000,

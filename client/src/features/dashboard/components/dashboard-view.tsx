@@ -1,6 +1,6 @@
 import { Anchor, Badge, Group, SimpleGrid, Stack, Table, Text } from '@mantine/core';
 import type { ReactNode } from 'react';
-import { Link } from 'react-router-dom';
+import { Link } from 'react-router';
 import { MALE_CLOCK_LABELS, PROJECT_STAGE_LABELS, type DashboardResponse, type DashboardSac, type RollStatus } from '@broodsilk/shared';
 import { paths } from '@/config/paths';
 import { formatDate, formatInstant } from '@/lib/dates';

@@ -1,6 +1,7 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
 import type { AcceptInvitationResponse, InvitationPreview } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
+import { queryRoots } from '@/lib/query-keys';
 
 /** Anyone with the link may see what it invites to, signed in or not. */
 export function fetchInvitationPreview(token: string, signal?: AbortSignal): Promise<InvitationPreview> {
@@ -11,7 +12,7 @@ export function fetchInvitationPreview(token: string, signal?: AbortSignal): Pro
 export const invitationQueries = {
   preview: (token: string) =>
     queryOptions({
-      queryKey: ['invitations', 'detail', token] as const,
+      queryKey: [...queryRoots.invitations, 'detail', token] as const,
       queryFn: ({ signal }) => fetchInvitationPreview(token, signal),
     }),
 };
@@ -21,12 +22,9 @@ export function useInvitationPreview(token: string) {
 }
 
 export function useAcceptInvitation(token: string) {
-  const qc = useQueryClient();
   return useMutation({
     mutationFn: () => api.post<AcceptInvitationResponse>(`/invitations/${encodeURIComponent(token)}/accept`),
-    meta: { handlesErrors: true },
-    onSuccess: async () => {
-      await Promise.all([qc.invalidateQueries({ queryKey: invitationQueries.preview(token).queryKey }), qc.invalidateQueries({ queryKey: ['projects'] })]);
-    },
+    // The new membership shows in the project list, which the projects feature owns.
+    meta: { handlesErrors: true, invalidates: [invitationQueries.preview(token).queryKey, queryRoots.projects] },
   });
 }

@@ -37,7 +37,7 @@ describe('InvitationCard', () => {
   it('joins for a signed-in user and hands back the project', async () => {
     const { fetchStub, calls } = stubFetch({
       'GET /api/auth/csrf': () => ({ status: 200, body: { csrfToken: 't' } }),
-      'POST /api/invitations/tok/accept': () => ({ status: 200, body: { projectId: 'p1', role: 'partner' } }),
+      'POST /api/invitations/tok/accept': () => ({ status: 200, body: { projectId: 'p1', role: 'partner', status: 'joined' } }),
     });
     vi.stubGlobal('fetch', fetchStub);
     const onJoined = vi.fn();
@@ -45,8 +45,23 @@ describe('InvitationCard', () => {
       <InvitationCard token="tok" preview={preview} signedInAs="Tomasz" signInHref="/sign-in" registerHref="/register" onJoined={onJoined} />,
     );
     await userEvent.click(screen.getByRole('button', { name: 'Join the project' }));
-    await waitFor(() => expect(onJoined).toHaveBeenCalledWith({ projectId: 'p1', role: 'partner' }));
+    await waitFor(() => expect(onJoined).toHaveBeenCalledWith({ projectId: 'p1', role: 'partner', status: 'joined' }));
     expect(calls.filter((c) => c.method === 'POST').map((c) => c.path)).toEqual(['/api/invitations/tok/accept']);
+  });
+
+  it('says the owner must approve when the signed-in account is not the invited address', async () => {
+    const { fetchStub } = stubFetch({
+      'GET /api/auth/csrf': () => ({ status: 200, body: { csrfToken: 't' } }),
+      'POST /api/invitations/tok/accept': () => ({ status: 200, body: { projectId: 'p1', role: 'partner', status: 'awaiting-owner' } }),
+    });
+    vi.stubGlobal('fetch', fetchStub);
+    const onJoined = vi.fn();
+    renderWithProviders(
+      <InvitationCard token="tok" preview={preview} signedInAs="Tomasz" signInHref="/sign-in" registerHref="/register" onJoined={onJoined} />,
+    );
+    await userEvent.click(screen.getByRole('button', { name: 'Join the project' }));
+    expect(await screen.findByTestId('invitation-waiting')).toHaveTextContent('the project owner must approve your account');
+    expect(onJoined).not.toHaveBeenCalled();
   });
 
   it('shows why an invitation no longer works, without a join button', () => {

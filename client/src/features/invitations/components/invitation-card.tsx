@@ -1,6 +1,6 @@
 import { Alert, Button, Stack, Text } from '@mantine/core';
 import { useState } from 'react';
-import { Link } from 'react-router-dom';
+import { Link } from 'react-router';
 import type { AcceptInvitationResponse, InvitationPreview } from '@broodsilk/shared';
 import { isApiError } from '@/lib/api-error';
 import { useAcceptInvitation } from '../api/invitation';
@@ -23,6 +23,7 @@ interface InvitationCardProps {
 export function InvitationCard({ token, preview, signedInAs, signInHref, registerHref, onJoined }: InvitationCardProps) {
   const accept = useAcceptInvitation(token);
   const [error, setError] = useState<string | null>(null);
+  const [waiting, setWaiting] = useState(false);
   return (
     <Stack data-testid="invitation">
       <Text>
@@ -31,6 +32,11 @@ export function InvitationCard({ token, preview, signedInAs, signInHref, registe
       {!preview.valid ? (
         <Alert color="clay" title="This invitation no longer works">
           {preview.problem ?? 'Ask the keeper to send a new one.'}
+        </Alert>
+      ) : waiting ? (
+        <Alert color="moss" title="Waiting for the owner" data-testid="invitation-waiting">
+          This invitation was sent to another e-mail address, so the project owner must approve your account before you join. You will see the project once they
+          have.
         </Alert>
       ) : signedInAs ? (
         <>
@@ -48,7 +54,9 @@ export function InvitationCard({ token, preview, signedInAs, signInHref, registe
             onClick={async () => {
               setError(null);
               try {
-                onJoined(await accept.mutateAsync());
+                const result = await accept.mutateAsync();
+                if (result.status === 'awaiting-owner') setWaiting(true);
+                else onJoined(result);
               } catch (e) {
                 setError(isApiError(e) ? e.message : 'Joining did not work. Try again.');
               }

@@ -1,7 +1,7 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import type { CreateInvitationRequest, InvitationResponse } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
-import { invalidateProject } from './projects';
+import { afterProjectChange } from './projects';
 
 export function sendInvitation(projectId: string, body: CreateInvitationRequest): Promise<InvitationResponse> {
   return api.post<InvitationResponse>(`/projects/${projectId}/invitations`, body);
@@ -9,9 +9,8 @@ export function sendInvitation(projectId: string, body: CreateInvitationRequest)
 
 /** Sends (or sends again: a new invitation to the same address replaces the old one). */
 export function useSendInvitation(projectId: string) {
-  const qc = useQueryClient();
   return useMutation({
     mutationFn: (body: CreateInvitationRequest) => sendInvitation(projectId, body),
-    onSuccess: () => invalidateProject(qc, projectId),
+    meta: { invalidates: afterProjectChange(projectId) },
   });
 }

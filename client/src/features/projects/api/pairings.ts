@@ -1,7 +1,7 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
 import type { CreatePairingRequest, PairingResponse } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
-import { invalidateProject, projectQueries } from './projects';
+import { afterProjectChange, projectQueries } from './projects';
 
 export function fetchPairings(projectId: string, signal?: AbortSignal): Promise<PairingResponse[]> {
   return api.get<PairingResponse[]>(`/projects/${projectId}/pairings`, { signal });
@@ -21,10 +21,8 @@ export function usePairings(projectId: string) {
 }
 
 export function useRecordPairing(projectId: string) {
-  const qc = useQueryClient();
   return useMutation({
     mutationFn: (body: CreatePairingRequest) => api.post<PairingResponse>(`/projects/${projectId}/pairings`, body),
-    meta: { handlesErrors: true },
-    onSuccess: () => invalidateProject(qc, projectId),
+    meta: { handlesErrors: true, invalidates: afterProjectChange(projectId) },
   });
 }

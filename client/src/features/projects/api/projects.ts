@@ -1,4 +1,4 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useMutation, useQuery, type QueryKey } from '@tanstack/react-query';
 import type {
   ActivityEventResponse,
   AddMemberRequest,
@@ -10,6 +10,7 @@ import type {
   UpdateProjectRequest,
 } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
+import { queryRoots } from '@/lib/query-keys';
 
 export function fetchProjects(signal?: AbortSignal): Promise<ProjectSummary[]> {
   return api.get<ProjectSummary[]>('/projects', { signal });
@@ -28,7 +29,7 @@ export function fetchProjectActivity(id: string, signal?: AbortSignal): Promise<
  * Everything about one project sits under its detail key, so invalidating the detail refreshes the page.
  */
 export const projectQueries = {
-  all: () => ['projects'] as const,
+  all: () => queryRoots.projects,
   list: () =>
     queryOptions({
       queryKey: [...projectQueries.all(), 'list'] as const,
@@ -59,12 +60,9 @@ export function useProjectActivity(id: string) {
   return useQuery(projectQueries.activity(id));
 }
 
-/** After any change to a project: its page (and everything under it) and the list. */
-export async function invalidateProject(qc: ReturnType<typeof useQueryClient>, id: string): Promise<void> {
-  await Promise.all([
-    qc.invalidateQueries({ queryKey: projectQueries.detail(id).queryKey }),
-    qc.invalidateQueries({ queryKey: projectQueries.list().queryKey }),
-  ]);
+/** After any change to a project: its page (and everything under it) and the list (`meta.invalidates`). */
+export function afterProjectChange(id: string): readonly QueryKey[] {
+  return [projectQueries.detail(id).queryKey, projectQueries.list().queryKey];
 }
 
 export function createProject(body: CreateProjectRequest): Promise<ProjectResponse> {
@@ -76,28 +74,22 @@ export function addProjectMember(projectId: string, body: AddMemberRequest): Pro
 }
 
 export function useUpdateProject(id: string) {
-  const qc = useQueryClient();
   return useMutation({
     mutationFn: (body: UpdateProjectRequest) => api.patch<ProjectResponse>(`/projects/${id}`, body),
-    meta: { handlesErrors: true },
-    onSuccess: () => invalidateProject(qc, id),
+    meta: { handlesErrors: true, invalidates: afterProjectChange(id) },
   });
 }
 
 export function useEndProject(id: string) {
-  const qc = useQueryClient();
   return useMutation({
     mutationFn: (body: EndProjectRequest) => api.post<ProjectResponse>(`/projects/${id}/end`, body),
-    meta: { handlesErrors: true },
-    onSuccess: () => invalidateProject(qc, id),
+    meta: { handlesErrors: true, invalidates: afterProjectChange(id) },
   });
 }
 
 export function useAddProjectMember(projectId: string) {
-  const qc = useQueryClient();
   return useMutation({
     mutationFn: (body: AddMemberRequest) => addProjectMember(projectId, body),
-    meta: { handlesErrors: true },
-    onSuccess: () => invalidateProject(qc, projectId),
+    meta: { handlesErrors: true, invalidates: afterProjectChange(projectId) },
   });
 }

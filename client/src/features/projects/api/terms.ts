@@ -1,7 +1,7 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
 import type { AcceptTermsRequest, ProposeTermsRequest, TermsListResponse, TermsVersionResponse } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
-import { invalidateProject, projectQueries } from './projects';
+import { afterProjectChange, projectQueries } from './projects';
 
 export function fetchTerms(projectId: string, signal?: AbortSignal): Promise<TermsListResponse> {
   return api.get<TermsListResponse>(`/projects/${projectId}/terms`, { signal });
@@ -25,19 +25,16 @@ export function useTerms(projectId: string) {
 }
 
 export function useProposeTerms(projectId: string) {
-  const qc = useQueryClient();
   return useMutation({
     mutationFn: (body: ProposeTermsRequest) => proposeTerms(projectId, body),
-    meta: { handlesErrors: true },
-    onSuccess: () => invalidateProject(qc, projectId),
+    meta: { handlesErrors: true, invalidates: afterProjectChange(projectId) },
   });
 }
 
 export function useAcceptTerms(projectId: string) {
-  const qc = useQueryClient();
   return useMutation({
     mutationFn: ({ version, body }: { version: number; body?: AcceptTermsRequest }) =>
       api.post<TermsVersionResponse>(`/projects/${projectId}/terms/${version}/accept`, body ?? {}),
-    onSuccess: () => invalidateProject(qc, projectId),
+    meta: { invalidates: afterProjectChange(projectId) },
   });
 }

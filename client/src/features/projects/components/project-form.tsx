@@ -4,6 +4,7 @@ import { useState } from 'react';
 import {
   DEFAULT_HAND_OVER_STAGE,
   TEXT_LIMITS,
+  toMinor,
   type AnimalSummary,
   type BroodStage,
   type FailureClause,
@@ -12,6 +13,7 @@ import {
 } from '@broodsilk/shared';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateProject, type NewProjectResult } from '../hooks/use-create-project';
+import { priceError } from '../utils/price';
 import { CURRENCIES, LINE_RULES, failureOptions, handOverOptions, shippingOptions } from './propose-terms-form';
 import { FormActions } from '@/components/ui/form-actions';
 import { NumberField } from '@/components/fields/number-field';
@@ -108,8 +110,8 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
       ownerWeight: (v, values) => (values.withTerms ? checkNumber(String(v), { required: 'Give your weight.', ...LINE_RULES.weight }) : null),
       ownerFixedCount: (v, values) => (values.withTerms ? checkNumber(String(v), LINE_RULES.fixedCount) : null),
       ownerPickOrder: (v, values) => (values.withTerms ? checkNumber(String(v), { required: 'Give your pick order.', ...LINE_RULES.pickOrder }) : null),
-      price: (v, values) => (values.withTerms ? checkNumber(String(v), { min: 0, decimals: 2, rangeMessage: 'The price cannot be negative.' }) : null),
       currency: (v, values) => (!values.withTerms || /^[A-Z]{3}$/.test(v) ? null : 'A three-letter code, e.g. EUR.'),
+      price: (v, values) => (values.withTerms ? priceError(v, values.currency) : null),
     },
   });
   form.watch('parties', ({ value }) => setPartyCount(value.length));
@@ -132,7 +134,7 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
         terms: v.withTerms
           ? {
               ownerLine: { weight: Number(v.ownerWeight), fixedCount: Number(v.ownerFixedCount) || 0, pickOrder: Number(v.ownerPickOrder) },
-              pricePerSpiderlingMinor: Math.round(Number(v.price) * 100),
+              pricePerSpiderlingMinor: toMinor(v.price, v.currency),
               currency: v.currency,
               failureClause: v.failureClause,
               handOverStage: v.handOverStage,

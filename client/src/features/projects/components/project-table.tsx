@@ -1,5 +1,5 @@
 import { Anchor, Table, Text } from '@mantine/core';
-import { Link } from 'react-router-dom';
+import { Link } from 'react-router';
 import type { ProjectSummary } from '@broodsilk/shared';
 import { formatDate } from '@/lib/dates';
 import { StageBadge } from './stage-line';

@@ -11,8 +11,10 @@ import {
   BROOD_STAGE_LABEL_SETS,
   DEFAULT_HAND_OVER_STAGE,
   FAILURE_CLAUSES,
+  minorToMajor,
   SHIPPING_PAYERS,
   TEXT_LIMITS,
+  toMinor,
   type BroodStage,
   type FailureClause,
   type ProjectMemberResponse,
@@ -22,6 +24,7 @@ import {
 import { applyServerErrors } from '@/lib/form-errors';
 import { useProposeTerms } from '../api/terms';
 import { FAILURE_CLAUSE_LABELS, SHIPPING_LABELS } from '../utils/labels';
+import { priceError } from '../utils/price';
 import { FormActions } from '@/components/ui/form-actions';
 
 export const CURRENCIES = ['EUR', 'USD', 'GBP', 'PLN', 'CHF', 'CZK', 'SEK', 'CAD', 'AUD'];
@@ -60,7 +63,7 @@ export function ProposeTermsForm({ projectId, members, base }: { projectId: stri
         const prev = base?.lines.find((l) => l.memberId === m.id);
         return { memberId: m.id, name: m.name, weight: prev?.weight ?? 1, fixedCount: prev?.fixedCount ?? 0, pickOrder: prev?.pickOrder ?? i + 1 };
       }),
-      price: base ? base.pricePerSpiderlingMinor / 100 : 0,
+      price: base ? minorToMajor(base.pricePerSpiderlingMinor, base.currency) : 0,
       currency: base?.currency ?? 'EUR',
       failureClause: base?.failureClause ?? 'nothing-owed',
       handOverStage: base?.handOverStage ?? DEFAULT_HAND_OVER_STAGE,
@@ -73,7 +76,7 @@ export function ProposeTermsForm({ projectId, members, base }: { projectId: stri
         fixedCount: (v) => checkNumber(String(v), LINE_RULES.fixedCount),
         pickOrder: (v) => checkNumber(String(v), { required: 'Give a pick order.', ...LINE_RULES.pickOrder }),
       },
-      price: (v) => checkNumber(String(v), { min: 0, decimals: 2, rangeMessage: 'The price cannot be negative.' }),
+      price: (v, values) => priceError(v, values.currency),
       note: (v) => checkText(v, { maxLength: TEXT_LIMITS.note }),
       currency: (v) => (/^[A-Z]{3}$/.test(v) ? null : 'Use a three-letter currency code, e.g. EUR.'),
     },
@@ -84,7 +87,7 @@ export function ProposeTermsForm({ projectId, members, base }: { projectId: stri
     try {
       await propose.mutateAsync({
         lines: v.lines.map((l) => ({ memberId: l.memberId, weight: Number(l.weight), fixedCount: Number(l.fixedCount) || 0, pickOrder: Number(l.pickOrder) })),
-        pricePerSpiderlingMinor: Math.round(Number(v.price) * 100),
+        pricePerSpiderlingMinor: toMinor(v.price, v.currency),
         currency: v.currency,
         failureClause: v.failureClause,
         handOverStage: v.handOverStage,

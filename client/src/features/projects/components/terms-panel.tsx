@@ -1,11 +1,11 @@
 import { Alert, Badge, Button, Card, Group, Stack, Table, Text, Title } from '@mantine/core';
 import type { Me, ProjectMemberResponse, ProjectRole, TermsVersionResponse } from '@broodsilk/shared';
-import { BROOD_STAGE_LABEL_SETS } from '@broodsilk/shared';
+import { BROOD_STAGE_LABEL_SETS, formatMoney } from '@broodsilk/shared';
 import { formatInstant } from '@/lib/dates';
 import { useState } from 'react';
 import { ConfirmAction } from '@/components/ui/confirm-action';
 import { useAcceptTerms, useTerms } from '../api/terms';
-import { FAILURE_CLAUSE_LABELS, formatMoney, SHIPPING_LABELS } from '../utils/labels';
+import { FAILURE_CLAUSE_LABELS, SHIPPING_LABELS } from '../utils/labels';
 import { ProposeTermsForm } from './propose-terms-form';
 
 interface TermsPanelProps {

@@ -1,4 +1,4 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import type { CreateProjectRequest, InvitableRole, ProjectResponse, ProposeTermsRequest, TermsLineInput } from '@broodsilk/shared';
 import { addProjectMember, createProject, projectQueries } from '../api/projects';
 import { sendInvitation } from '../api/invitations';
@@ -30,9 +30,9 @@ export interface NewProjectResult {
  * only step that can refuse the form; later failures are reported but keep the project.
  */
 export function useCreateProject() {
-  const qc = useQueryClient();
   return useMutation({
-    meta: { handlesErrors: true },
+    // The new project's own page is not cached yet; the list is.
+    meta: { handlesErrors: true, invalidates: [projectQueries.list().queryKey] },
     mutationFn: async (input: NewProjectInput): Promise<NewProjectResult> => {
       const project = await createProject(input.project);
       const problems: string[] = [];
@@ -63,12 +63,6 @@ export function useCreateProject() {
         }
       }
       return { project, problems };
-    },
-    onSuccess: async ({ project }) => {
-      await Promise.all([
-        qc.invalidateQueries({ queryKey: projectQueries.list().queryKey }),
-        qc.invalidateQueries({ queryKey: projectQueries.detail(project.id).queryKey }),
-      ]);
     },
   });
 }

@@ -1,7 +1,7 @@
 import { ENDED_EARLY_LABELS, PROJECT_STAGE_LABELS } from '@broodsilk/shared';
 import type { EndedEarlyReason, FailureClause, PairingOutcome, ProjectRole, ProjectStage, ShippingPayer, WarningSeverity } from '@broodsilk/shared';
 
-/** The progress line in our own words (PRODUCT.md); the words live in shared/ so every screen agrees. */
+/** The progress line in our own words (docs/product.md, Project stages); the words live in shared/ so every screen agrees. */
 export const STAGE_LABELS = PROJECT_STAGE_LABELS;
 export { ENDED_EARLY_LABELS };
 
@@ -28,13 +28,4 @@ export const SEVERITY_COLOURS: Record<WarningSeverity, string> = { danger: 'clay
 export function stageText(stage: ProjectStage, reason?: EndedEarlyReason): string {
   if (stage === 'ended-early') return reason ? `Ended early: ${ENDED_EARLY_LABELS[reason]}` : 'Ended early';
   return STAGE_LABELS[stage];
-}
-
-/** Minor units to "€12.50" in the given currency. */
-export function formatMoney(minor: number, currency: string): string {
-  try {
-    return new Intl.NumberFormat('en-GB', { style: 'currency', currency }).format(minor / 100);
-  } catch {
-    return `${(minor / 100).toFixed(2)} ${currency}`;
-  }
 }

@@ -1,7 +1,7 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
 import type { BroodCountRequest, BroodCountResponse, BroodCountsResponse } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
-import { invalidateAfterSacChange, sacQueries } from './sacs';
+import { AFTER_SAC_CHANGE, sacQueries } from './sacs';
 
 export function fetchBroodCounts(sacId: string, signal?: AbortSignal): Promise<BroodCountsResponse> {
   return api.get<BroodCountsResponse>(`/sacs/${sacId}/counts`, { signal });
@@ -21,10 +21,8 @@ export function useBroodCounts(sacId: string, enabled = true) {
 }
 
 export function useRecordBroodCount(sacId: string) {
-  const qc = useQueryClient();
   return useMutation({
     mutationFn: (body: BroodCountRequest) => api.post<BroodCountResponse>(`/sacs/${sacId}/counts`, body),
-    meta: { handlesErrors: true },
-    onSuccess: () => invalidateAfterSacChange(qc),
+    meta: { handlesErrors: true, invalidates: AFTER_SAC_CHANGE },
   });
 }

@@ -1,7 +1,7 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
 import type { CareLogEntryResponse, CareLogRequest } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
-import { invalidateAfterSacChange, sacQueries } from './sacs';
+import { AFTER_SAC_CHANGE, sacQueries } from './sacs';
 
 export function fetchCareLog(sacId: string, signal?: AbortSignal): Promise<CareLogEntryResponse[]> {
   return api.get<CareLogEntryResponse[]>(`/sacs/${sacId}/log`, { signal });
@@ -26,10 +26,8 @@ export function useCareLog(sacId: string) {
 
 /** Any log entry: a roll moves the next roll due, a stage entry may stop rolling, so the sac is refetched too. */
 export function useAddCareLogEntry(sacId: string) {
-  const qc = useQueryClient();
   return useMutation({
     mutationFn: (body: CareLogRequest) => addCareLogEntry(sacId, body),
-    meta: { handlesErrors: true },
-    onSuccess: () => invalidateAfterSacChange(qc),
+    meta: { handlesErrors: true, invalidates: AFTER_SAC_CHANGE },
   });
 }

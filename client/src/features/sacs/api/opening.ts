@@ -1,17 +1,11 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { OpeningRequest, OpeningResponse, PhotoRef } from '@broodsilk/shared';
+import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
+import type { OpeningRequest, OpeningResponse, PhotoRef, SacResponse } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
-import { isApiError } from '@/lib/api-error';
-import { invalidateAfterSacChange, sacQueries } from './sacs';
+import { AFTER_SAC_CHANGE, sacQueries } from './sacs';
 
-/** The opening of a sac, or null before it was opened. */
-export async function fetchOpening(sacId: string, signal?: AbortSignal): Promise<OpeningResponse | null> {
-  try {
-    return (await api.get<OpeningResponse | null>(`/sacs/${sacId}/opening`, { signal })) || null;
-  } catch (e) {
-    if (isApiError(e) && e.statusCode === 404) return null;
-    throw e;
-  }
+/** The opening of a sac; ask only for a sac whose `opened` is true (before that there is none: 404). */
+export function fetchOpening(sacId: string, signal?: AbortSignal): Promise<OpeningResponse> {
+  return api.get<OpeningResponse>(`/sacs/${sacId}/opening`, { signal });
 }
 
 /** ['sacs','opening',sacId] */
@@ -23,28 +17,26 @@ export const openingQueries = {
     }),
 };
 
-export function useOpening(sacId: string, enabled = true) {
-  return useQuery({ ...openingQueries.detail(sacId), enabled });
+/** Asks only once the sac is opened; before that the query stays idle with no data. */
+export function useOpening(sac: Pick<SacResponse, 'id' | 'opened'>) {
+  return useQuery({ ...openingQueries.detail(sac.id), enabled: sac.opened });
 }
 
 export function useRecordOpening(sacId: string) {
-  const qc = useQueryClient();
   return useMutation({
     mutationFn: (body: OpeningRequest) => api.post<OpeningResponse>(`/sacs/${sacId}/opening`, body),
-    meta: { handlesErrors: true },
-    onSuccess: () => invalidateAfterSacChange(qc),
+    meta: { handlesErrors: true, invalidates: AFTER_SAC_CHANGE },
   });
 }
 
 /** Photos of the opening, as multipart field `file`; re-encoded by the server without location data. */
 export function useUploadOpeningPhoto(sacId: string) {
-  const qc = useQueryClient();
   return useMutation({
     mutationFn: (file: File) => {
       const body = new FormData();
       body.append('file', file);
       return api.post<PhotoRef>(`/sacs/${sacId}/opening/photos`, body);
     },
-    onSuccess: () => qc.invalidateQueries({ queryKey: openingQueries.detail(sacId).queryKey }),
+    meta: { invalidates: [openingQueries.detail(sacId).queryKey] },
   });
 }

@@ -1,6 +1,7 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useMutation, useQuery, useQueryClient, type QueryKey } from '@tanstack/react-query';
 import type { CreateSacRequest, SacResponse, UpdateSacRequest } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
+import { queryRoots } from '@/lib/query-keys';
 
 export function fetchProjectSacs(projectId: string, signal?: AbortSignal): Promise<SacResponse[]> {
   return api.get<SacResponse[]>(`/projects/${projectId}/sacs`, { signal });
@@ -15,7 +16,7 @@ export function fetchSac(id: string, signal?: AbortSignal): Promise<SacResponse>
  * A project's sacs are listed under the sacs keys (not the project's) so this feature owns them.
  */
 export const sacQueries = {
-  all: () => ['sacs'] as const,
+  all: () => queryRoots.sacs,
   ofProject: (projectId: string) =>
     queryOptions({
       queryKey: [...sacQueries.all(), 'project', projectId] as const,
@@ -38,22 +39,14 @@ export function useSac(id: string) {
 
 /**
  * A sac changed: every sac query (day N, roll and window states are derived together) and the
- * project pages and dashboard, whose stage and due lists follow from it.
+ * project pages and dashboard, whose stage and due lists follow from it (`meta.invalidates`).
  */
-export async function invalidateAfterSacChange(qc: ReturnType<typeof useQueryClient>): Promise<void> {
-  await Promise.all([
-    qc.invalidateQueries({ queryKey: sacQueries.all() }),
-    qc.invalidateQueries({ queryKey: ['projects'] }),
-    qc.invalidateQueries({ queryKey: ['dashboard'] }),
-  ]);
-}
+export const AFTER_SAC_CHANGE: readonly QueryKey[] = [queryRoots.sacs, queryRoots.projects, queryRoots.dashboard];
 
 export function useCreateSac(projectId: string) {
-  const qc = useQueryClient();
   return useMutation({
     mutationFn: (body: CreateSacRequest) => api.post<SacResponse>(`/projects/${projectId}/sacs`, body),
-    meta: { handlesErrors: true },
-    onSuccess: () => invalidateAfterSacChange(qc),
+    meta: { handlesErrors: true, invalidates: AFTER_SAC_CHANGE },
   });
 }
 
@@ -61,10 +54,8 @@ export function useUpdateSac(id: string) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: (body: UpdateSacRequest) => api.patch<SacResponse>(`/sacs/${id}`, body),
-    meta: { handlesErrors: true },
-    onSuccess: async (sac) => {
-      qc.setQueryData(sacQueries.detail(id).queryKey, sac);
-      await invalidateAfterSacChange(qc);
-    },
+    meta: { handlesErrors: true, invalidates: AFTER_SAC_CHANGE },
+    // The refetch under AFTER_SAC_CHANGE has already run; the answer is the same sac.
+    onSuccess: (sac) => qc.setQueryData(sacQueries.detail(id).queryKey, sac),
   });
 }

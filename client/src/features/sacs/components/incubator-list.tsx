@@ -1,6 +1,6 @@
 import { Alert, Card, Stack, Text, UnstyledButton } from '@mantine/core';
 import { useQueries } from '@tanstack/react-query';
-import { Link } from 'react-router-dom';
+import { Link } from 'react-router';
 import type { SacResponse } from '@broodsilk/shared';
 import { formatInstant } from '@/lib/dates';
 import { sacQueries } from '../api/sacs';

@@ -19,7 +19,7 @@ describe('OpeningPanel', { timeout: 30_000 }, () => {
       'POST /api/sacs/s1/opening': () => ({ status: 201, body: null }),
     });
     vi.stubGlobal('fetch', fetchStub);
-    renderWithProviders(<OpeningPanel sacId="s1" timeZone="UTC" canEdit />);
+    renderWithProviders(<OpeningPanel sac={{ id: 's1', opened: false }} timeZone="UTC" canEdit />);
     const healthy = await screen.findByLabelText('Healthy eggs');
     await userEvent.clear(healthy);
     await userEvent.type(healthy, '120');
@@ -43,7 +43,7 @@ describe('OpeningPanel', { timeout: 30_000 }, () => {
   it('refuses a count over the limit with a message, keeping what was typed', async () => {
     const { fetchStub, calls } = stubFetch({ 'GET /api/sacs/s1/opening': () => ({ status: 200, body: null }) });
     vi.stubGlobal('fetch', fetchStub);
-    renderWithProviders(<OpeningPanel sacId="s1" timeZone="UTC" canEdit />);
+    renderWithProviders(<OpeningPanel sac={{ id: 's1', opened: false }} timeZone="UTC" canEdit />);
     const nymphs = await screen.findByLabelText('Nymphs');
     await userEvent.clear(nymphs);
     await userEvent.type(nymphs, '-4');

@@ -2,7 +2,7 @@ import { Alert, Image, SimpleGrid, Stack, Table, Text } from '@mantine/core';
 import { Dropzone, IMAGE_MIME_TYPE } from '@mantine/dropzone';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import { BROOD_COUNT_MAX, TEXT_LIMITS, type OpeningRequest, type OpeningResponse } from '@broodsilk/shared';
+import { BROOD_COUNT_MAX, TEXT_LIMITS, type OpeningRequest, type OpeningResponse, type SacResponse } from '@broodsilk/shared';
 import { NumberField } from '@/components/fields/number-field';
 import { TextAreaField } from '@/components/fields/text-field';
 import { textRule } from '@/components/fields/text-rule';
@@ -94,9 +94,10 @@ function OpeningView({ opening, timeZone, sacId, canEdit }: { opening: OpeningRe
 const COUNT = { min: 0, max: BROOD_COUNT_MAX, decimals: 0, rangeMessage: `A whole number from 0 to ${BROOD_COUNT_MAX}.` };
 
 /** The opening of a sac: what was found, once; before that, the form to record it. */
-export function OpeningPanel({ sacId, timeZone, canEdit }: { sacId: string; timeZone: string; canEdit: boolean }) {
-  const opening = useOpening(sacId);
-  if (opening.isPending) return <Text c="dimmed">Loading…</Text>;
+export function OpeningPanel({ sac, timeZone, canEdit }: { sac: Pick<SacResponse, 'id' | 'opened'>; timeZone: string; canEdit: boolean }) {
+  const sacId = sac.id;
+  const opening = useOpening(sac);
+  if (sac.opened && opening.isPending) return <Text c="dimmed">Loading…</Text>;
   if (opening.isError) return <Alert color="clay">{opening.error.message}</Alert>;
   if (opening.data) return <OpeningView opening={opening.data} timeZone={timeZone} sacId={sacId} canEdit={canEdit} />;
   if (!canEdit) return <Text c="dimmed">Not opened yet.</Text>;

@@ -1,5 +1,5 @@
 import { Anchor, Badge, Card, Group, Stack, Text } from '@mantine/core';
-import { Link } from 'react-router-dom';
+import { Link } from 'react-router';
 import type { SacResponse } from '@broodsilk/shared';
 import { formatDate } from '@/lib/dates';
 import { broodLabel, PULL_WINDOW_TEXT, pullWindowSentence, ROLL_TEXT, rollSentence, SAC_OUTCOME_TEXT } from '../utils/sac-view';

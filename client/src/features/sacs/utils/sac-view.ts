@@ -1,4 +1,4 @@
-import { BROOD_STAGE_LABEL_SETS, type BroodStage, type PullWindowState, type RollStatus, type SacResponse } from '@broodsilk/shared';
+import { BROOD_STAGE_LABEL_SETS, SAC_OUTCOME_LABELS, type BroodStage, type PullWindowState, type RollStatus, type SacResponse } from '@broodsilk/shared';
 import { formatDate, formatInstant } from '@/lib/dates';
 import { PULL_WINDOW_TONE, ROLL_STATUS_TONE, type ToneStyle } from '@/lib/tones';
 
@@ -49,4 +49,4 @@ export function rollSentence(sac: SacResponse, timeZone: string): string | null 
   return `${ROLL_TEXT[sac.roll.status].label} · due ${formatInstant(sac.roll.due, timeZone)}`;
 }
 
-export const SAC_OUTCOME_TEXT: Record<SacResponse['outcome'], string> = { 'in-progress': 'In progress', hatched: 'Hatched', failed: 'Failed' };
+export const SAC_OUTCOME_TEXT = SAC_OUTCOME_LABELS;

@@ -1,9 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ChangePasswordRequest, LoginResponse, Me, UpdateProfileRequest } from '@broodsilk/shared';
 import { api, setCsrfToken } from '@/lib/api-client';
-
-// The "me" key belongs to auth; settings only writes through it.
-const meKey = ['auth', 'me'] as const;
+import { meQueryKey } from '@/lib/query-keys';
 
 export function useUpdateProfile() {
   const qc = useQueryClient();
@@ -11,7 +9,7 @@ export function useUpdateProfile() {
     mutationFn: (body: UpdateProfileRequest) => api.patch<Me>('/users/me', body),
     meta: { handlesErrors: true },
     onSuccess: async (me) => {
-      qc.setQueryData(meKey, me);
+      qc.setQueryData(meQueryKey, me);
       await qc.invalidateQueries();
     },
   });
@@ -20,11 +18,11 @@ export function useUpdateProfile() {
 export function useChangePassword() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (body: ChangePasswordRequest) => api.patch<LoginResponse>('/users/me/password', body),
+    mutationFn: (body: ChangePasswordRequest) => api.patch<LoginResponse>('/auth/password', body),
     meta: { handlesErrors: true },
     onSuccess: (res) => {
       setCsrfToken(res.csrfToken);
-      qc.setQueryData(meKey, res.user);
+      qc.setQueryData(meQueryKey, res.user);
     },
   });
 }

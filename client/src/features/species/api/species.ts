@@ -1,6 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { Paged, SpeciesListQuery, SpeciesResponse } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
+import { queryRoots } from '@/lib/query-keys';
 
 export function fetchSpeciesList(query: SpeciesListQuery, signal?: AbortSignal): Promise<Paged<SpeciesResponse>> {
   return api.get<Paged<SpeciesResponse>>('/species', { query: { ...query }, signal });
@@ -12,7 +13,7 @@ export function fetchSpecies(id: string, signal?: AbortSignal): Promise<SpeciesR
 
 /** Keys from generic to specific: ['species'] → ['species','list',query] / ['species','detail',id]. */
 export const speciesQueries = {
-  all: () => ['species'] as const,
+  all: () => queryRoots.species,
   lists: () => [...speciesQueries.all(), 'list'] as const,
   list: (query: SpeciesListQuery) =>
     queryOptions({

@@ -3,10 +3,10 @@ import { Reflector } from '@nestjs/core';
 import { EntityManager } from '@mikro-orm/postgresql';
 import type { ProjectRole } from '@broodsilk/shared';
 import type { Request } from 'express';
-import type { AuthUser } from '../../auth/auth-user';
-import { PROJECT_FROM_KEY, PROJECT_ROLES_KEY, type ProjectFromSpec } from '../decorators/project-roles.decorator';
-import { NOT_FOUND_MESSAGE, ProjectAccessService } from '../../projects/project-access.service';
-import { ProjectResolverRegistry } from '../../projects/project-resolver.registry';
+import type { AuthUser } from '../common/auth-user';
+import { PROJECT_FROM_KEY, PROJECT_ROLES_KEY, type ProjectFromSpec } from './project-roles.decorator';
+import { NOT_FOUND_MESSAGE, ProjectAccessService } from './project-access.service';
+import { ProjectResolverRegistry } from './project-resolver.registry';
 
 /**
  * Global guard after authentication: on routes with `@ProjectRoles(...)` it finds the project,

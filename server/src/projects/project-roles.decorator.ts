@@ -1,6 +1,6 @@
 import { createParamDecorator, SetMetadata, type ExecutionContext } from '@nestjs/common';
 import type { ProjectRole } from '@broodsilk/shared';
-import type { ProjectAccess } from '../../projects/project-access.service';
+import type { ProjectAccess } from './project-access.service';
 
 export const PROJECT_ROLES_KEY = 'projectRoles';
 export const PROJECT_FROM_KEY = 'projectFrom';

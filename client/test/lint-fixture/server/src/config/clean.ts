@@ -1,0 +1,1 @@
+export const cleanConfig = { port: 3000 };

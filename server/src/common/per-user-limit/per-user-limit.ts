@@ -1,0 +1,53 @@
+import { applyDecorators, HttpException, HttpStatus, Injectable, SetMetadata, UseGuards, type CanActivate, type ExecutionContext } from '@nestjs/common';
+import { Reflector } from '@nestjs/core';
+import { RateLimiterMemory, RateLimiterRes } from 'rate-limiter-flexible';
+
+export interface PerUserLimitOptions {
+  /** Names the bucket and, in the refusal, what was limited: "statement e-mails". */
+  what: string;
+  limit: number;
+  windowMinutes: number;
+}
+
+const LIMIT = Symbol('per-user-limit');
+/** One in-process counter per limited kind of work (rate-limiter-flexible's memory store). */
+const limiters = new Map<string, RateLimiterMemory>();
+const limiterFor = (o: PerUserLimitOptions) => {
+  const key = `${o.what}:${o.limit}:${o.windowMinutes}`;
+  let limiter = limiters.get(key);
+  if (!limiter) limiters.set(key, (limiter = new RateLimiterMemory({ keyPrefix: o.what, points: o.limit, duration: o.windowMinutes * 60 })));
+  return limiter;
+};
+
+@Injectable()
+export class PerUserLimitGuard implements CanActivate {
+  constructor(private readonly reflector: Reflector) {}
+
+  async canActivate(ctx: ExecutionContext): Promise<boolean> {
+    const options = this.reflector.get<PerUserLimitOptions | undefined>(LIMIT, ctx.getHandler());
+    const userId = (ctx.switchToHttp().getRequest<{ user?: { id: string } }>().user ?? {}).id;
+    if (!options || !userId) return true;
+    let refusal: RateLimiterRes;
+    try {
+      await limiterFor(options).consume(userId);
+      return true;
+    } catch (e) {
+      if (!(e instanceof RateLimiterRes)) throw e;
+      refusal = e;
+    }
+    const minutes = Math.max(1, Math.ceil(refusal.msBeforeNext / 60_000));
+    throw new HttpException(
+      `You have reached the limit of ${options.limit} ${options.what} per ${options.windowMinutes} minutes. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}.`,
+      HttpStatus.TOO_MANY_REQUESTS,
+    );
+  }
+}
+
+/**
+ * At most `limit` calls of this route per signed-in keeper in a sliding window, for work that
+ * sends mail or takes heavy uploads. Runs after authentication and before the body is validated,
+ * so a refused call writes nothing.
+ */
+export function PerUserLimit(options: PerUserLimitOptions): MethodDecorator {
+  return applyDecorators(SetMetadata(LIMIT, options), UseGuards(PerUserLimitGuard));
+}

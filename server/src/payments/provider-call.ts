@@ -1,0 +1,20 @@
+import { BadGatewayException, ServiceUnavailableException } from '@nestjs/common';
+import Stripe from 'stripe';
+
+/**
+ * Runs one call to the payment provider. Its refusals become a 502 and an unreachable provider a
+ * 503, each saying that nothing was charged; callers write their rows only after the call returns.
+ */
+export async function providerCall<T>(call: () => Promise<T>): Promise<T> {
+  try {
+    return await call();
+  } catch (e) {
+    if (e instanceof Stripe.errors.StripeConnectionError) {
+      throw new ServiceUnavailableException('The payment provider cannot be reached just now. Nothing was charged or saved; try again in a few minutes.');
+    }
+    if (e instanceof Stripe.errors.StripeError) {
+      throw new BadGatewayException(`The payment provider refused the request (${e.message}). Nothing was charged or saved.`);
+    }
+    throw e;
+  }
+}
