@@ -119,6 +119,8 @@ describe('account', () => {
     await confirmForm.getByLabel('Arrived alive').fill('3');
     await confirmForm.getByLabel('Arrived dead').fill('0');
     await confirmForm.getByRole('button', { name: 'Confirm receipt' }).click();
+    // Asked once before it counts.
+    await p.getByRole('dialog', { name: 'Confirm receipt' }).getByRole('button', { name: 'Yes, confirm receipt' }).click();
     const partnerRow = p.getByRole('table', { name: 'Account entries' }).getByRole('row').filter({ hasText: 'Overnight courier' }).last();
     await poll(() => partnerRow.textContent()).not.toContain('Waiting for');
     expect(await partnerRow.textContent()).toContain('Counts');
@@ -174,6 +176,7 @@ describe('account', () => {
 
     await p.reload();
     await p.getByRole('button', { name: 'Confirm the payment arrived' }).last().click();
+    await p.getByRole('dialog', { name: 'Confirm the payment' }).getByRole('button', { name: 'Yes, it arrived' }).click();
     const debt = p.getByTestId('account-debts');
     await poll(() => debt.textContent()).toMatch(/Tomasz \S+ owes Mira \S+ €\d+\.\d\d/);
     const owedText = (await debt.textContent())!.match(/€(\d+\.\d\d)/)![1]!;

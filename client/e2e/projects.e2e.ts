@@ -119,6 +119,10 @@ describe('a breeding project from loaned male to the first roll', () => {
       await signIn(phone.page, 'keeper@broodsilk.test');
       await phone.page.goto(`${BASE_URL}/incubator/${sacId}`);
       await phone.page.getByRole('button', { name: 'Pulled now, into the incubator' }).click();
+      // Asked once, with the time of the pull (now unless changed); day 22 is inside the default window, so no warning.
+      const pull = phone.page.getByRole('dialog', { name: 'Record the pull' });
+      expect(await pull.getByTestId('confirm-warning').count()).toBe(0);
+      await pull.getByRole('button', { name: 'Record the pull' }).click();
       await eventually(() => phone.page.getByTestId('entry-done').textContent()).toContain('Pulled');
       await eventually(() => phone.page.getByTestId('next-roll').textContent()).toMatch(/Roll due now|Roll overdue/);
       await eventually(() => phone.page.getByTestId('heat-caution').textContent()).toContain('thermostat');
@@ -160,6 +164,10 @@ describe('a breeding project from loaned male to the first roll', () => {
       await eventually(() => partner.page.getByRole('heading', { name: TITLE }).count()).toBe(1);
       await eventually(() => partner.page.getByTestId('stage-current').textContent()).toContain('In incubator');
       await partner.page.getByRole('button', { name: 'Accept these terms' }).click();
+      await partner.page
+        .getByRole('dialog', { name: 'Accept these terms' })
+        .getByRole('button', { name: /^Yes, accept version/ })
+        .click();
       await eventually(() => partner.page.getByTestId('terms-version-1').textContent()).toContain('In force');
       await partner.page.goto(`${BASE_URL}/projects`);
       await eventually(() => partner.page.getByTestId('project-table').textContent()).toContain(TITLE);

@@ -7,6 +7,7 @@ import '@fontsource/inter/500.css';
 import '@fontsource/inter/600.css';
 import '@fontsource/inter/700.css';
 import './styles/tones.css';
+import './styles/a11y.css';
 import './lib/dates';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';

@@ -331,7 +331,7 @@ describe('her breeding record', () => {
   it('lists her projects with their pairings and sacs; 403 for a member, 404 for a stranger', async () => {
     const p = await sharedProject('Record');
     await as(mira)
-      .post(`/projects/${p.id}/pairings`, { startedAt: `${addDays(today, -80)}T18:00:00.000Z`, durationMinutes: 25, outcome: 'connected' })
+      .post(`/projects/${p.id}/pairings`, { startedAt: `${addDays(today, -50)}T18:00:00.000Z`, durationMinutes: 25, outcome: 'connected' })
       .expect(201);
     await createSac(t.app, mira, p.id, { layDate: addDays(today, -20) });
     const rows = (await as(mira).get(`/animals/${p.female.id}/breeding`).expect(200)).body;
@@ -341,7 +341,7 @@ describe('her breeding record', () => {
         role: 'female',
         partnerLabel: p.male.label,
         stage: expect.objectContaining({ stage: expect.any(String) }),
-        pairings: [{ on: addDays(today, -80), outcome: 'connected' }],
+        pairings: [{ on: addDays(today, -50), outcome: 'connected' }],
         sacs: [{ id: expect.any(String), layDate: addDays(today, -20), pulledOn: null, fate: 'developing', broodStage: 'eggs' }],
       },
     ]);

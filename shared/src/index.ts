@@ -40,5 +40,6 @@ export * from './vocabulary/labels.js';
 export * from './sacs/brood-count-rules.js';
 export * from './sacs/sac-plausibility.js';
 export * from './projects/project-plausibility.js';
+export * from './forms/text-limits.js';
 export * from './money/money.js';
 export * from './projects/project-rules.js';

@@ -1,4 +1,4 @@
-import { Entity, Enum, Index, ManyToOne, Property } from '@mikro-orm/core';
+import { Entity, Enum, Index, ManyToOne, Property, Unique } from '@mikro-orm/core';
 import { PAIRING_OUTCOMES, type PairingOutcome } from '@broodsilk/shared';
 import { BaseEntity } from '../database/base.entity';
 import { User } from '../users/user.entity';
@@ -32,6 +32,7 @@ export class Pairing extends BaseEntity {
 
   /** The pairing this one corrects; that one stays, struck. */
   @ManyToOne(() => Pairing, { nullable: true, deleteRule: 'cascade' })
+  @Unique({ name: 'pairings_corrects_id_unique' }) // struck once: one correction per row
   corrects?: Pairing | null;
 
   @Property({ type: 'text', nullable: true })

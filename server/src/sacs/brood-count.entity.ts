@@ -1,4 +1,4 @@
-import { Check, Entity, Enum, Index, ManyToOne, Property } from '@mikro-orm/core';
+import { Check, Entity, Enum, Index, ManyToOne, Property, Unique } from '@mikro-orm/core';
 import { BROOD_LOSS_REASONS, BROOD_STAGES, type BroodLossReason, type BroodStage } from '@broodsilk/shared';
 import { BaseEntity } from '../database/base.entity';
 import { User } from '../users/user.entity';
@@ -46,6 +46,7 @@ export class BroodCount extends BaseEntity<'lost' | 'source' | 'estimated'> {
 
   /** The count this one corrects; that one stays, struck. */
   @ManyToOne(() => BroodCount, { nullable: true, deleteRule: 'cascade' })
+  @Unique({ name: 'brood_counts_corrects_id_unique' }) // struck once: one correction per row
   corrects?: BroodCount | null;
 
   /** Why the corrected count was wrong. */

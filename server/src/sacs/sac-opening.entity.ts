@@ -1,4 +1,4 @@
-import { Entity, Index, ManyToOne, Property } from '@mikro-orm/core';
+import { Entity, Index, ManyToOne, Property, Unique } from '@mikro-orm/core';
 import { BaseEntity } from '../database/base.entity';
 import { User } from '../users/user.entity';
 import { Sac } from './sac.entity';
@@ -8,7 +8,10 @@ import { Sac } from './sac.entity';
  * (a partial unique index); a correction is a further row that `corrects` (strikes) the one before.
  */
 @Entity({ tableName: 'sac_openings' })
-@Index({ properties: ['sac'] })
+@Index({
+  name: 'sac_openings_first_per_sac_unique',
+  expression: 'create unique index "sac_openings_first_per_sac_unique" on "sac_openings" ("sac_id") where "corrects_id" is null',
+})
 export class SacOpening extends BaseEntity {
   @ManyToOne(() => Sac, { deleteRule: 'cascade' })
   sac!: Sac;
@@ -41,6 +44,7 @@ export class SacOpening extends BaseEntity {
   recordedBy!: User;
 
   @ManyToOne(() => SacOpening, { nullable: true, deleteRule: 'cascade' })
+  @Unique({ name: 'sac_openings_corrects_id_unique' }) // struck once: one correction per row
   corrects?: SacOpening | null;
 
   /** Why the corrected opening was wrong. */

@@ -5,6 +5,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Link, useNavigate, useParams, type LoaderFunctionArgs } from 'react-router';
 import { formatMoney } from '@broodsilk/shared';
+import { DocumentTitle } from '@/components/ui/document-title';
 import { paths } from '@/config/paths';
 import { formatDate } from '@/lib/dates';
 import { animalQueries, useAnimal } from '@/features/collection/api/animals';
@@ -57,6 +58,7 @@ export function Component() {
   const owner = animal.owner.kind === 'self' ? 'You' : animal.owner.name;
   return (
     <Stack>
+      <DocumentTitle title={animal.label} />
       <Breadcrumbs>
         <Anchor component={Link} to={paths.collection.href()} size="sm">
           Collection

@@ -1,4 +1,5 @@
-import { Anchor, Button, Drawer, Group, Pagination, Select, Stack, Tabs, Text } from '@mantine/core';
+import { Anchor, Button, Drawer, Group, Select, Stack, Tabs, Text } from '@mantine/core';
+import { Pager } from '@/components/ui/pager';
 import { useMediaQuery } from '@mantine/hooks';
 import { notifications } from '@mantine/notifications';
 import { useQuery, type QueryClient } from '@tanstack/react-query';
@@ -12,7 +13,7 @@ import { AnimalTable } from '@/features/collection/components/animal-table';
 import { CollectionFilters } from '@/features/collection/components/collection-filters';
 import { CsvTools } from '@/features/collection/components/csv-import';
 import { MatureMales } from '@/features/collection/components/mature-males';
-import { PAGE_SIZES, filtersFromParams, filtersToParams, type CollectionFilters as Filters } from '@/features/collection/utils/animal-view';
+import { PAGE_SIZES, filtersFromParams, hasFilters, filtersToParams, type CollectionFilters as Filters } from '@/features/collection/utils/animal-view';
 import { speciesQueries, useSpecies } from '@/features/species/api/species';
 import { SpeciesPicker } from '@/features/species/components/species-picker';
 import { preloadPanels } from '../preload';
@@ -122,6 +123,7 @@ export function Component() {
                 hrefOf={hrefOf}
                 clocks={clocks}
                 formerNames={formerNames}
+                filtered={hasFilters(filters)}
               />
             )}
             <Group justify="space-between" wrap="wrap">
@@ -139,7 +141,7 @@ export function Component() {
                   size="md"
                 />
                 {pages > 1 && (
-                  <Pagination total={pages} value={page} onChange={(p) => update({ offset: (p - 1) * filters.limit })} size="lg" siblings={phone ? 0 : 1} />
+                  <Pager total={pages} value={page} onChange={(p) => update({ offset: (p - 1) * filters.limit })} size="lg" siblings={phone ? 0 : 1} />
                 )}
               </Group>
             </Group>

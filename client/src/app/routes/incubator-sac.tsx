@@ -3,7 +3,9 @@ import type { QueryClient } from '@tanstack/react-query';
 import { Link, type LoaderFunctionArgs } from 'react-router';
 import type { ProjectResponse } from '@broodsilk/shared';
 import { PageLoader } from '@/components/ui/page-loader';
+import { DocumentTitle } from '@/components/ui/document-title';
 import { paths } from '@/config/paths';
+import { formatDate } from '@/lib/dates';
 import { projectQueries } from '@/features/projects/api/projects';
 import { sacQueries } from '@/features/sacs/api/sacs';
 import { IncubatorEntry } from '@/features/sacs/components/incubator-entry';
@@ -35,6 +37,7 @@ export function Component() {
   if (sac.isError) return <Alert color="clay">{sac.error.message}</Alert>;
   return (
     <>
+      <DocumentTitle title={`At the incubator: ${project.data?.title ?? `sac laid ${formatDate(sac.data.layDate)}`}`} />
       <Group justify="space-between" mb="xs">
         <Anchor component={Link} to={paths.incubator.href()} size="sm">
           All sacs in the incubator

@@ -5,6 +5,7 @@ import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
 import { PageHeader } from '@/components/ui/page-header';
 import { PageLoader } from '@/components/ui/page-loader';
 import { paths } from '@/config/paths';
+import { formatDate } from '@/lib/dates';
 import { useMe } from '@/features/auth/api/me';
 import { pairingQueries } from '@/features/projects/api/pairings';
 import { projectQueries, useProject, useProjectActivity } from '@/features/projects/api/projects';
@@ -132,7 +133,9 @@ export function Component() {
             {!live && (
               <Group>
                 <Badge color="gray" variant="light" tt="none">
-                  {p.stage.stage === 'closed' ? `Closed${p.closedOn ? ` ${p.closedOn}` : ''}` : `Ended${p.endedOn ? ` ${p.endedOn}` : ''}`}
+                  {p.stage.stage === 'closed'
+                    ? `Closed${p.closedOn ? ` ${formatDate(p.closedOn)}` : ''}`
+                    : `Ended${p.endedOn ? ` ${formatDate(p.endedOn)}` : ''}`}
                 </Badge>
               </Group>
             )}

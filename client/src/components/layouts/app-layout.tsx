@@ -25,57 +25,64 @@ export function AppLayout({ nav, userName, onSignOut, settingsHref, children }: 
   const location = useLocation();
 
   return (
-    <AppShell header={{ height: 56 }} navbar={{ width: 220, breakpoint: 'sm', collapsed: { mobile: !opened } }} padding="md">
-      <AppShell.Header>
-        <Group h="100%" px="md" justify="space-between" wrap="nowrap">
-          <Group gap="sm" wrap="nowrap">
-            <Burger opened={opened} onClick={toggle} hiddenFrom="sm" size="sm" aria-label="Open navigation" />
-            <BroodsilkLogo />
+    <>
+      <a href="#main" className="skip-link">
+        Skip to content
+      </a>
+      <AppShell header={{ height: 56 }} navbar={{ width: 220, breakpoint: 'sm', collapsed: { mobile: !opened } }} padding="md">
+        <AppShell.Header>
+          <Group h="100%" px="md" justify="space-between" wrap="nowrap">
+            <Group gap="sm" wrap="nowrap">
+              <Burger opened={opened} onClick={toggle} hiddenFrom="sm" size="sm" aria-label="Open navigation" />
+              <BroodsilkLogo />
+            </Group>
+            <Group gap="xs" wrap="nowrap">
+              <Tooltip label={colorScheme === 'dark' ? 'Light scheme' : 'Dark scheme'}>
+                <ActionIcon variant="subtle" color="gray" onClick={toggleColorScheme} aria-label="Switch colour scheme">
+                  {colorScheme === 'dark' ? '☀' : '☾'}
+                </ActionIcon>
+              </Tooltip>
+              <Menu position="bottom-end" withinPortal>
+                <Menu.Target>
+                  <Text
+                    component="button"
+                    fw={600}
+                    size="sm"
+                    data-testid="shell-user"
+                    style={{ background: 'none', border: 0, cursor: 'pointer', color: 'inherit' }}
+                  >
+                    {userName}
+                  </Text>
+                </Menu.Target>
+                <Menu.Dropdown>
+                  <Menu.Item component={RouterNavLink} to={settingsHref}>
+                    Settings
+                  </Menu.Item>
+                  <Menu.Item color="clay" onClick={onSignOut}>
+                    Sign out
+                  </Menu.Item>
+                </Menu.Dropdown>
+              </Menu>
+            </Group>
           </Group>
-          <Group gap="xs" wrap="nowrap">
-            <Tooltip label={colorScheme === 'dark' ? 'Light scheme' : 'Dark scheme'}>
-              <ActionIcon variant="subtle" color="gray" onClick={toggleColorScheme} aria-label="Switch colour scheme">
-                {colorScheme === 'dark' ? '☀' : '☾'}
-              </ActionIcon>
-            </Tooltip>
-            <Menu position="bottom-end" withinPortal>
-              <Menu.Target>
-                <Text
-                  component="button"
-                  fw={600}
-                  size="sm"
-                  data-testid="shell-user"
-                  style={{ background: 'none', border: 0, cursor: 'pointer', color: 'inherit' }}
-                >
-                  {userName}
-                </Text>
-              </Menu.Target>
-              <Menu.Dropdown>
-                <Menu.Item component={RouterNavLink} to={settingsHref}>
-                  Settings
-                </Menu.Item>
-                <Menu.Item color="clay" onClick={onSignOut}>
-                  Sign out
-                </Menu.Item>
-              </Menu.Dropdown>
-            </Menu>
-          </Group>
-        </Group>
-      </AppShell.Header>
-      <AppShell.Navbar p="xs">
-        {nav.map((item) => (
-          <NavLink
-            key={item.to}
-            component={RouterNavLink}
-            to={item.to}
-            label={item.label}
-            end={item.end}
-            active={item.end ? location.pathname === item.to : location.pathname.startsWith(item.to)}
-            onClick={close}
-          />
-        ))}
-      </AppShell.Navbar>
-      <AppShell.Main>{children}</AppShell.Main>
-    </AppShell>
+        </AppShell.Header>
+        <AppShell.Navbar p="xs">
+          {nav.map((item) => (
+            <NavLink
+              key={item.to}
+              component={RouterNavLink}
+              to={item.to}
+              label={item.label}
+              end={item.end}
+              active={item.end ? location.pathname === item.to : location.pathname.startsWith(item.to)}
+              onClick={close}
+            />
+          ))}
+        </AppShell.Navbar>
+        <AppShell.Main id="main" tabIndex={-1}>
+          {children}
+        </AppShell.Main>
+      </AppShell>
+    </>
   );
 }

@@ -1,11 +1,13 @@
 import { Center, Container, Paper, Stack, Text, Title } from '@mantine/core';
 import type { ReactNode } from 'react';
+import { DocumentTitle } from '../ui/document-title';
 import { BroodsilkMark } from '../ui/logo';
 
 /** Sign-in, registration and reset: one calm card. */
 export function PublicLayout({ title, subtitle, children }: { title: string; subtitle?: string; children: ReactNode }) {
   return (
-    <Container size={440} py={48}>
+    <Container size={440} py={48} component="main" id="main">
+      <DocumentTitle title={title} />
       <Stack gap="lg">
         <Center>
           <Stack gap={6} align="center">

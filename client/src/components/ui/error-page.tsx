@@ -1,9 +1,11 @@
 import { Button, Container, Stack, Text, Title } from '@mantine/core';
 import { Link } from 'react-router';
+import { DocumentTitle } from './document-title';
 
 export function ErrorPage({ title, message, status }: { title: string; message: string; status?: number }) {
   return (
-    <Container size={560} py={64}>
+    <Container size={560} py={64} component="main" id="main">
+      <DocumentTitle title={title} />
       <Stack align="flex-start">
         {status && (
           <Text className="tone-failed" fw={700}>

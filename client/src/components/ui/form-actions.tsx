@@ -1,7 +1,17 @@
 import { Alert, Button, Group } from '@mantine/core';
 
-/** The end of every form: the server's refusal, if any, then the submit button. */
-export function FormActions({ message, loading, submitLabel }: { message: string | null | undefined; loading: boolean; submitLabel: string }) {
+interface FormActionsProps {
+  /** The server's refusal, if any. */
+  message: string | null | undefined;
+  /** While the request is under way the button is disabled, so a double tap sends once. */
+  loading: boolean;
+  submitLabel: string;
+  onCancel?: () => void;
+  cancelLabel?: string;
+}
+
+/** The end of every form: the server's refusal, if any, then cancel and submit. */
+export function FormActions({ message, loading, submitLabel, onCancel, cancelLabel = 'Cancel' }: FormActionsProps) {
   return (
     <>
       {message && (
@@ -9,8 +19,13 @@ export function FormActions({ message, loading, submitLabel }: { message: string
           {message}
         </Alert>
       )}
-      <Group>
-        <Button type="submit" loading={loading}>
+      <Group justify={onCancel ? 'flex-end' : undefined}>
+        {onCancel && (
+          <Button variant="default" onClick={onCancel} disabled={loading}>
+            {cancelLabel}
+          </Button>
+        )}
+        <Button type="submit" loading={loading} disabled={loading}>
           {submitLabel}
         </Button>
       </Group>

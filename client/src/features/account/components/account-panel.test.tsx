@@ -1,7 +1,7 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import type { Me } from '@broodsilk/shared';
+import { todayIn, type Me } from '@broodsilk/shared';
 import { renderWithProviders, stubFetch } from '@/testing/render';
 import { AccountPanel } from './account-panel';
 import { balances, entry, MIRA, PROJECT_ID, shares, TOMASZ } from './account.fixtures';
@@ -59,8 +59,14 @@ describe('AccountPanel', { timeout: 30_000 }, () => {
     await userEvent.clear(dead);
     await userEvent.type(dead, '1');
     await userEvent.click(within(waiting).getByRole('button', { name: 'Confirm receipt' }));
+    // Asked once, saying what it does; nothing is sent before the answer.
+    const dialog = await screen.findByRole('dialog', { name: 'Confirm receipt' });
+    expect(dialog).toHaveTextContent('You confirm that 2 of the 3 spiderlings arrived alive and 1 dead');
+    expect(calls.some((c) => c.path.endsWith('/confirm'))).toBe(false);
+    await userEvent.click(within(dialog).getByRole('button', { name: 'Yes, confirm receipt' }));
     await waitFor(() => expect(calls.some((c) => c.method === 'POST' && c.path.endsWith('/confirm'))).toBe(true));
-    expect(calls.find((c) => c.path.endsWith('/confirm'))?.body).toEqual({ arrivedAlive: 2, arrivedDead: 1 });
+    expect(calls.filter((c) => c.path.endsWith('/confirm'))).toHaveLength(1);
+    expect(calls.find((c) => c.path.endsWith('/confirm'))?.body).toEqual({ arrivedAlive: 2, arrivedDead: 1, date: todayIn(me('Tomasz').timeZone, new Date()) });
     // The account is fetched again after the confirmation.
     await waitFor(() => expect(calls.filter((c) => c.method === 'GET' && c.path.endsWith('/balances')).length).toBeGreaterThan(1));
   });

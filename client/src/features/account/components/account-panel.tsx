@@ -63,7 +63,7 @@ export function AccountPanel({ projectId, me, myRole, myMemberId }: AccountPanel
     <Stack data-testid="account-panel">
       {awaiting.length > 0 && (
         <SectionCard title="Waiting for you" testId="section-awaiting">
-          <AwaitingMe projectId={projectId} entries={awaiting} />
+          <AwaitingMe projectId={projectId} entries={awaiting} today={today} />
         </SectionCard>
       )}
 

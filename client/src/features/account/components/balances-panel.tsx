@@ -1,4 +1,5 @@
 import { Alert, Badge, Group, Stack, Table, Text } from '@mantine/core';
+import { ScrollTable } from '@/components/ui/scroll-table';
 import { useBalances } from '../api/balances';
 import { formatMoney } from '@broodsilk/shared';
 
@@ -17,7 +18,7 @@ export function BalancesPanel({ projectId }: { projectId: string }) {
           </Badge>
         </Group>
       )}
-      <Table.ScrollContainer minWidth={520}>
+      <ScrollTable minWidth={520} label="Balances">
         <Table aria-label="Balances" striped verticalSpacing="xs">
           <Table.Thead>
             <Table.Tr>
@@ -72,7 +73,7 @@ export function BalancesPanel({ projectId }: { projectId: string }) {
             ))}
           </Table.Tbody>
         </Table>
-      </Table.ScrollContainer>
+      </ScrollTable>
       <Stack gap={4} data-testid="account-debts">
         <Text size="sm" fw={600}>
           Money between parties

@@ -1,6 +1,12 @@
-import { Alert, Button, Group, NativeSelect, Stack, Textarea, TextInput } from '@mantine/core';
+import { NativeSelect, Stack } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
+import { TEXT_LIMITS } from '@broodsilk/shared';
+import { DateField } from '@/components/fields/date-field';
+import { TextAreaField } from '@/components/fields/text-field';
+import { checkText } from '@/components/fields/text-rule';
+import { dateRule, readDate } from '@/components/fields/typed-date';
+import { FormActions } from '@/components/ui/form-actions';
 import { useCreateEntry, useEntries } from '../api/entries';
 import { applyEntryErrors } from '../utils/entry-errors';
 import { ENTRY_KIND_LABELS } from '../utils/labels';
@@ -19,16 +25,18 @@ export function CorrectionForm({ projectId, today, onDone }: { projectId: string
   const [message, setMessage] = useState<string | null>(null);
   const form = useForm<Values>({
     mode: 'uncontrolled',
+    validateInputOnBlur: true,
     initialValues: { reversesId: '', reason: '', date: today },
     validate: {
       reversesId: (v) => (v ? null : 'Which entry is wrong?'),
-      reason: (v) => (v.trim().length >= 3 ? null : 'Say in a few words why it is reversed.'),
+      reason: (v) => (v.trim().length >= 3 ? checkText(v, { maxLength: TEXT_LIMITS.correctionReason }) : 'Say in a few words why it is reversed.'),
+      date: dateRule({ required: 'Give the date.', latest: today, latestMessage: 'This has happened, so it cannot be after today.' }),
     },
   });
   const submit = form.onSubmit(async (v) => {
     setMessage(null);
     try {
-      await create.mutateAsync({ kind: 'correction', reversesId: v.reversesId, reason: v.reason.trim(), date: v.date });
+      await create.mutateAsync({ kind: 'correction', reversesId: v.reversesId, reason: v.reason.trim(), date: readDate(v.date)! });
       form.reset();
       onDone?.();
     } catch (e) {
@@ -52,18 +60,9 @@ export function CorrectionForm({ projectId, today, onDone }: { projectId: string
           key={form.key('reversesId')}
           {...form.getInputProps('reversesId')}
         />
-        <Textarea label="Why" autosize minRows={2} withAsterisk key={form.key('reason')} {...form.getInputProps('reason')} />
-        <TextInput label="Date" type="date" max={today} key={form.key('date')} {...form.getInputProps('date')} />
-        {message && (
-          <Alert color="clay" role="alert">
-            {message}
-          </Alert>
-        )}
-        <Group>
-          <Button type="submit" color="clay" loading={create.isPending}>
-            Record correction
-          </Button>
-        </Group>
+        <TextAreaField label="Why" maxLength={TEXT_LIMITS.correctionReason} withAsterisk key={form.key('reason')} {...form.getInputProps('reason')} />
+        <DateField label="Date" key={form.key('date')} {...form.getInputProps('date')} />
+        <FormActions message={message} loading={create.isPending} submitLabel="Record correction" />
       </Stack>
     </form>
   );

@@ -1,17 +1,23 @@
-import { Alert, Group, List, NativeSelect, NumberInput, SegmentedControl, Stack, Text, TextInput } from '@mantine/core';
+import { Alert, Group, List, NativeSelect, SegmentedControl, Stack, Text } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import type { HandOverMethod, SacSharesView } from '@broodsilk/shared';
+import { DateField } from '@/components/fields/date-field';
+import { NumberField } from '@/components/fields/number-field';
+import { TextField } from '@/components/fields/text-field';
+import { textRule } from '@/components/fields/text-rule';
+import { dateRule, readDate } from '@/components/fields/typed-date';
+import { numberRule, readNumber } from '@/components/fields/typed-number';
+import { FormActions } from '@/components/ui/form-actions';
+import { TEXT_LIMITS, type HandOverMethod, type SacSharesView } from '@broodsilk/shared';
 import { useCreateEntry, useHandOverForm } from '../api/entries';
 import { applyEntryErrors } from '../utils/entry-errors';
 import { METHOD_LABELS, young } from '../utils/labels';
 import { formatDate } from '@/lib/dates';
-import { FormActions } from '@/components/ui/form-actions';
 
 interface Values {
   memberId: string;
   sacId: string;
-  count: number | string;
+  count: string;
   date: string;
   method: HandOverMethod;
   carrier: string;
@@ -28,12 +34,16 @@ export function HandOverForm({ projectId, today, sacs, onDone }: { projectId: st
   const withYoung = sacs.filter((s) => s.aliveInCare > 0);
   const form = useForm<Values>({
     mode: 'uncontrolled',
+    validateInputOnBlur: true,
     initialValues: { memberId: '', sacId: '', count: '', date: today, method: 'pick-up', carrier: '', tracking: '', note: '' },
     validate: {
       memberId: (v) => (v ? null : 'Who receives the spiderlings?'),
-      count: (v) => (Number.isInteger(Number(v)) && Number(v) > 0 ? null : 'How many spiderlings? A whole number above 0.'),
-      date: (v) => (/^\d{4}-\d{2}-\d{2}$/.test(v) ? null : 'Give the date as YYYY-MM-DD.'),
+      count: numberRule({ required: 'How many spiderlings?', min: 1, max: 100_000, decimals: 0, rangeMessage: 'A count is a whole number from 1 to 100,000.' }),
+      date: dateRule({ required: 'Give the date.', latest: today, latestMessage: 'This has happened, so it cannot be after today.' }),
       sacId: (v) => (withYoung.length > 1 && !v ? 'Several sacs have young in care: which one?' : null),
+      carrier: textRule({ maxLength: TEXT_LIMITS.carrier }),
+      tracking: textRule({ maxLength: TEXT_LIMITS.tracking }),
+      note: textRule({ maxLength: TEXT_LIMITS.ledgerNote }),
     },
   });
   form.watch('method', ({ value }) => setMethod(value));
@@ -45,8 +55,8 @@ export function HandOverForm({ projectId, today, sacs, onDone }: { projectId: st
         kind: 'hand-over',
         memberId: v.memberId,
         sacId: v.sacId || undefined,
-        count: Number(v.count),
-        date: v.date,
+        count: readNumber(v.count)!,
+        date: readDate(v.date)!,
         method: v.method,
         carrier: v.method === 'shipment' && v.carrier.trim() ? v.carrier.trim() : undefined,
         tracking: v.method === 'shipment' && v.tracking.trim() ? v.tracking.trim() : undefined,
@@ -88,8 +98,8 @@ export function HandOverForm({ projectId, today, sacs, onDone }: { projectId: st
           />
         )}
         <Group grow align="flex-start">
-          <NumberInput label="Count" min={1} allowDecimal={false} withAsterisk key={form.key('count')} {...form.getInputProps('count')} />
-          <TextInput label="Date" type="date" max={today} withAsterisk key={form.key('date')} {...form.getInputProps('date')} />
+          <NumberField label="Count" whole withAsterisk key={form.key('count')} {...form.getInputProps('count')} />
+          <DateField label="Date" withAsterisk key={form.key('date')} {...form.getInputProps('date')} />
         </Group>
         <Stack gap={4}>
           <Text size="sm" fw={500} id="hand-over-method">
@@ -105,8 +115,8 @@ export function HandOverForm({ projectId, today, sacs, onDone }: { projectId: st
         {method === 'shipment' && (
           <>
             <Group grow align="flex-start">
-              <TextInput label="Carrier" key={form.key('carrier')} {...form.getInputProps('carrier')} />
-              <TextInput label="Tracking number" key={form.key('tracking')} {...form.getInputProps('tracking')} />
+              <TextField label="Carrier" maxLength={TEXT_LIMITS.carrier} key={form.key('carrier')} {...form.getInputProps('carrier')} />
+              <TextField label="Tracking number" maxLength={TEXT_LIMITS.tracking} key={form.key('tracking')} {...form.getInputProps('tracking')} />
             </Group>
             <Alert color="amber" variant="light" title="Before you ship live spiderlings" role="note" data-testid="shipping-cautions">
               <List size="sm" spacing={4}>
@@ -117,7 +127,7 @@ export function HandOverForm({ projectId, today, sacs, onDone }: { projectId: st
             </Alert>
           </>
         )}
-        <TextInput label="Note" key={form.key('note')} {...form.getInputProps('note')} />
+        <TextField label="Note" maxLength={TEXT_LIMITS.ledgerNote} key={form.key('note')} {...form.getInputProps('note')} />
         <FormActions message={message} loading={create.isPending} submitLabel="Record hand-over" />
       </Stack>
     </form>

@@ -1,14 +1,20 @@
-import { Alert, Button, Group, NativeSelect, NumberInput, Stack, TextInput } from '@mantine/core';
+import { Group, NativeSelect, Stack } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import { minorDigits, minorToMajor, parseMoney, toMinor, type PartyRef } from '@broodsilk/shared';
+import { DateField } from '@/components/fields/date-field';
+import { NumberField } from '@/components/fields/number-field';
+import { TextField } from '@/components/fields/text-field';
+import { textRule } from '@/components/fields/text-rule';
+import { dateRule, readDate } from '@/components/fields/typed-date';
+import { FormActions } from '@/components/ui/form-actions';
+import { TEXT_LIMITS, minorToMajor, parseMoney, toMinor, type PartyRef } from '@broodsilk/shared';
 import { useCreateEntry } from '../api/entries';
 import { applyEntryErrors } from '../utils/entry-errors';
 
 interface Values {
   fromMemberId: string;
   toMemberId: string;
-  amount: number | string;
+  amount: string;
   date: string;
   note: string;
 }
@@ -32,10 +38,11 @@ export function MoneyForm({ projectId, parties, currency, today, fromMemberId, t
   const [message, setMessage] = useState<string | null>(null);
   const form = useForm<Values>({
     mode: 'uncontrolled',
+    validateInputOnBlur: true,
     initialValues: {
       fromMemberId: fromMemberId ?? '',
       toMemberId: toMemberId ?? '',
-      amount: amountMinor ? minorToMajor(amountMinor, currency) : '',
+      amount: amountMinor ? String(minorToMajor(amountMinor, currency)) : '',
       date: today,
       note: '',
     },
@@ -46,7 +53,8 @@ export function MoneyForm({ projectId, parties, currency, today, fromMemberId, t
         const amount = parseMoney(v, currency);
         return !amount.ok ? amount.message : amount.minor > 0 ? null : 'The amount must be above 0.';
       },
-      date: (v) => (/^\d{4}-\d{2}-\d{2}$/.test(v) ? null : 'Give the date as YYYY-MM-DD.'),
+      note: textRule({ maxLength: TEXT_LIMITS.ledgerNote }),
+      date: dateRule({ required: 'Give the date.', latest: today, latestMessage: 'This has happened, so it cannot be after today.' }),
     },
   });
   const submit = form.onSubmit(async (v) => {
@@ -58,7 +66,7 @@ export function MoneyForm({ projectId, parties, currency, today, fromMemberId, t
         toMemberId: v.toMemberId,
         amountMinor: toMinor(v.amount, currency),
         currency,
-        date: v.date,
+        date: readDate(v.date)!,
         note: v.note.trim() || undefined,
       });
       form.reset();
@@ -68,7 +76,6 @@ export function MoneyForm({ projectId, parties, currency, today, fromMemberId, t
     }
   });
   const options = [{ value: '', label: 'Choose a party' }, ...parties.map((p) => ({ value: p.memberId, label: p.name }))];
-  const digits = minorDigits(currency);
   return (
     <form onSubmit={submit} noValidate aria-label="Record a payment">
       <Stack maw={520} gap="sm">
@@ -83,28 +90,11 @@ export function MoneyForm({ projectId, parties, currency, today, fromMemberId, t
           <NativeSelect label="Paid to" data={options} disabled={toMemberId !== undefined} key={form.key('toMemberId')} {...form.getInputProps('toMemberId')} />
         </Group>
         <Group grow align="flex-start">
-          <NumberInput
-            label={`Amount (${currency})`}
-            min={0}
-            decimalScale={digits}
-            allowDecimal={digits > 0}
-            withAsterisk
-            key={form.key('amount')}
-            {...form.getInputProps('amount')}
-          />
-          <TextInput label="Date" type="date" max={today} withAsterisk key={form.key('date')} {...form.getInputProps('date')} />
+          <NumberField label={`Amount (${currency})`} withAsterisk key={form.key('amount')} {...form.getInputProps('amount')} />
+          <DateField label="Date" withAsterisk key={form.key('date')} {...form.getInputProps('date')} />
         </Group>
-        <TextInput label="Note" placeholder="e.g. bank transfer" key={form.key('note')} {...form.getInputProps('note')} />
-        {message && (
-          <Alert color="clay" role="alert">
-            {message}
-          </Alert>
-        )}
-        <Group>
-          <Button type="submit" loading={create.isPending}>
-            {submitLabel}
-          </Button>
-        </Group>
+        <TextField label="Note" placeholder="e.g. bank transfer" maxLength={TEXT_LIMITS.ledgerNote} key={form.key('note')} {...form.getInputProps('note')} />
+        <FormActions message={message} loading={create.isPending} submitLabel={submitLabel} />
       </Stack>
     </form>
   );

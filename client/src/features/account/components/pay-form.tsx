@@ -1,9 +1,10 @@
-import { NumberInput, Stack, Text } from '@mantine/core';
+import { Stack, Text } from '@mantine/core';
+import { NumberField } from '@/components/fields/number-field';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateCheckout } from '../api/settlements';
-import { formatMoney, minorDigits, minorToMajor, parseMoney, toMinor } from '@broodsilk/shared';
+import { formatMoney, minorToMajor, parseMoney, toMinor } from '@broodsilk/shared';
 import { FormActions } from '@/components/ui/form-actions';
 
 interface Props {
@@ -20,10 +21,10 @@ interface Props {
 export function PayForm({ projectId, toMemberId, toName, owedMinor, currency, goTo = (url) => window.location.assign(url) }: Props) {
   const checkout = useCreateCheckout(projectId);
   const [message, setMessage] = useState<string | null>(null);
-  const digits = minorDigits(currency);
-  const form = useForm<{ amount: number | string }>({
+  const form = useForm<{ amount: string }>({
     mode: 'uncontrolled',
-    initialValues: { amount: minorToMajor(owedMinor, currency) },
+    validateInputOnBlur: true,
+    initialValues: { amount: String(minorToMajor(owedMinor, currency)) },
     validate: {
       amount: (v) => {
         const amount = parseMoney(v, currency);
@@ -48,14 +49,7 @@ export function PayForm({ projectId, toMemberId, toName, owedMinor, currency, go
         <Text size="sm">
           You owe {toName} {formatMoney(owedMinor, currency)}.
         </Text>
-        <NumberInput
-          label={`Amount (${currency})`}
-          min={0}
-          decimalScale={digits}
-          allowDecimal={digits > 0}
-          key={form.key('amount')}
-          {...form.getInputProps('amount')}
-        />
+        <NumberField label={`Amount (${currency})`} key={form.key('amount')} {...form.getInputProps('amount')} />
         <FormActions message={message} loading={checkout.isPending} submitLabel="Pay what you owe" />
         <Text size="xs" c="dimmed">
           You will pay on the payment provider’s page and come back here afterwards.

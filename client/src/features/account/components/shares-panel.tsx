@@ -1,4 +1,5 @@
 import { Alert, Badge, Card, Group, List, Stack, Table, Text } from '@mantine/core';
+import { ScrollTable } from '@/components/ui/scroll-table';
 import { formatMoney, type SacSharesView } from '@broodsilk/shared';
 import { formatDate, formatInstant } from '@/lib/dates';
 import { useShares } from '../api/shares';
@@ -25,7 +26,7 @@ function SacShares({ sac, timeZone }: { sac: SacSharesView; timeZone: string }) 
         </Text>
       )}
       {sac.parties.length > 0 && (
-        <Table.ScrollContainer minWidth={420}>
+        <ScrollTable minWidth={420} label={`Shares of the sac laid ${formatDate(sac.layDate)}`}>
           <Table aria-label={`Shares of the sac laid ${formatDate(sac.layDate)}`} verticalSpacing={4}>
             <Table.Thead>
               <Table.Tr>
@@ -58,7 +59,7 @@ function SacShares({ sac, timeZone }: { sac: SacSharesView; timeZone: string }) 
               ))}
             </Table.Tbody>
           </Table>
-        </Table.ScrollContainer>
+        </ScrollTable>
       )}
       {sac.explanation.length > 0 && (
         <Stack gap={2} mt="xs">

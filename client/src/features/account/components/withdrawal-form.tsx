@@ -1,7 +1,14 @@
-import { Alert, Button, Group, NativeSelect, NumberInput, Stack, Text, TextInput } from '@mantine/core';
+import { Group, NativeSelect, Stack, Text } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import { minorDigits, parseMoney, toMinor, type PartyBalanceView, type SacSharesView } from '@broodsilk/shared';
+import { DateField } from '@/components/fields/date-field';
+import { NumberField } from '@/components/fields/number-field';
+import { TextField } from '@/components/fields/text-field';
+import { textRule } from '@/components/fields/text-rule';
+import { dateRule, readDate } from '@/components/fields/typed-date';
+import { numberRule, readNumber } from '@/components/fields/typed-number';
+import { FormActions } from '@/components/ui/form-actions';
+import { TEXT_LIMITS, parseMoney, toMinor, type PartyBalanceView, type SacSharesView } from '@broodsilk/shared';
 import { formatDate } from '@/lib/dates';
 import { useCreateEntry } from '../api/entries';
 import { applyEntryErrors } from '../utils/entry-errors';
@@ -10,9 +17,9 @@ import { young } from '../utils/labels';
 interface Values {
   memberId: string;
   sacId: string;
-  count: number | string;
+  count: string;
   date: string;
-  price: number | string;
+  price: string;
   note: string;
 }
 
@@ -36,29 +43,31 @@ export function WithdrawalForm({ projectId, kind, parties, sacs, currency, terms
   const sale = kind === 'sale';
   const form = useForm<Values>({
     mode: 'uncontrolled',
+    validateInputOnBlur: true,
     initialValues: { memberId: '', sacId: '', count: '', date: today, price: '', note: '' },
     validate: {
       memberId: (v) => (v ? null : 'Whose share is this from?'),
-      count: (v) => (Number.isInteger(Number(v)) && Number(v) > 0 ? null : 'How many spiderlings? A whole number above 0.'),
-      date: (v) => (/^\d{4}-\d{2}-\d{2}$/.test(v) ? null : 'Give the date as YYYY-MM-DD.'),
+      count: numberRule({ required: 'How many spiderlings?', min: 1, max: 100_000, decimals: 0, rangeMessage: 'A count is a whole number from 1 to 100,000.' }),
+      date: dateRule({ required: 'Give the date.', latest: today, latestMessage: 'This has happened, so it cannot be after today.' }),
       sacId: (v) => (withYoung.length > 1 && !v ? 'Several sacs have young in care: which one?' : null),
       price: (v) => {
-        if (v === '' || v === null) return sale ? 'What was the total price?' : null;
+        if (v.trim() === '') return sale ? 'What was the total price?' : null;
         const price = parseMoney(v, currency);
         return !price.ok ? price.message : price.minor >= 0 ? null : 'The price must be 0 or more.';
       },
+      note: textRule({ maxLength: TEXT_LIMITS.ledgerNote }),
     },
   });
   const submit = form.onSubmit(async (v) => {
     setMessage(null);
-    const price = v.price === '' ? undefined : toMinor(v.price, currency);
+    const price = v.price.trim() === '' ? undefined : toMinor(v.price, currency);
     try {
       await create.mutateAsync({
         kind,
         memberId: v.memberId,
         sacId: v.sacId || undefined,
-        count: Number(v.count),
-        date: v.date,
+        count: readNumber(v.count)!,
+        date: readDate(v.date)!,
         ...(sale ? { priceMinor: price, currency } : { pricePerSpiderlingMinor: price }),
         note: v.note.trim() || undefined,
       });
@@ -68,7 +77,6 @@ export function WithdrawalForm({ projectId, kind, parties, sacs, currency, terms
       setMessage(applyEntryErrors(form, e));
     }
   });
-  const digits = minorDigits(currency);
   return (
     <form onSubmit={submit} noValidate aria-label={sale ? 'Record a sale' : 'Record a cash-out'}>
       <Stack maw={520} gap="sm">
@@ -94,30 +102,18 @@ export function WithdrawalForm({ projectId, kind, parties, sacs, currency, terms
           />
         )}
         <Group grow align="flex-start">
-          <NumberInput label="Count" min={1} allowDecimal={false} withAsterisk key={form.key('count')} {...form.getInputProps('count')} />
-          <TextInput label="Date" type="date" max={today} withAsterisk key={form.key('date')} {...form.getInputProps('date')} />
+          <NumberField label="Count" whole withAsterisk key={form.key('count')} {...form.getInputProps('count')} />
+          <DateField label="Date" withAsterisk key={form.key('date')} {...form.getInputProps('date')} />
         </Group>
-        <NumberInput
+        <NumberField
           label={sale ? `Total price (${currency})` : `Price per spiderling (${currency})`}
           description={!sale && termsPriceMinor !== null ? 'Leave empty to use the price in the terms.' : undefined}
-          min={0}
-          decimalScale={digits}
-          allowDecimal={digits > 0}
           withAsterisk={sale}
           key={form.key('price')}
           {...form.getInputProps('price')}
         />
-        <TextInput label="Note" key={form.key('note')} {...form.getInputProps('note')} />
-        {message && (
-          <Alert color="clay" role="alert">
-            {message}
-          </Alert>
-        )}
-        <Group>
-          <Button type="submit" loading={create.isPending}>
-            {sale ? 'Record sale' : 'Record cash-out'}
-          </Button>
-        </Group>
+        <TextField label="Note" maxLength={TEXT_LIMITS.ledgerNote} key={form.key('note')} {...form.getInputProps('note')} />
+        <FormActions message={message} loading={create.isPending} submitLabel={sale ? 'Record sale' : 'Record cash-out'} />
         {!sale && (
           <Text size="xs" c="dimmed">
             A cash-out makes the party running the project owe this party the count times the price.

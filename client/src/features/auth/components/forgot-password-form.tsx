@@ -1,4 +1,5 @@
-import { Alert, Button, Stack, TextInput } from '@mantine/core';
+import { Alert, Stack, TextInput } from '@mantine/core';
+import { FormActions } from '@/components/ui/form-actions';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { applyServerErrors } from '@/lib/form-errors';
@@ -18,15 +19,13 @@ export function ForgotPasswordForm() {
       )}
     >
       <Stack>
-        {answer && (
-          <Alert color={answer.ok ? 'moss' : 'clay'} variant="light" role="status">
+        {answer?.ok && (
+          <Alert color="moss" variant="light" role="status">
             {answer.text}
           </Alert>
         )}
         <TextInput label="E-mail" type="email" withAsterisk key={form.key('email')} {...form.getInputProps('email')} />
-        <Button type="submit" loading={request.isPending}>
-          Send me a reset link
-        </Button>
+        <FormActions message={answer && !answer.ok ? answer.text : null} loading={request.isPending} submitLabel="Send me a reset link" />
       </Stack>
     </form>
   );

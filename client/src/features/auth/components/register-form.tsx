@@ -1,20 +1,25 @@
-import { Alert, Button, PasswordInput, Stack, TextInput } from '@mantine/core';
+import { Anchor, PasswordInput, Stack, Text } from '@mantine/core';
+import { Link } from 'react-router';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import { MIN_PASSWORD_LENGTH } from '@broodsilk/shared';
+import { MIN_PASSWORD_LENGTH, TEXT_LIMITS } from '@broodsilk/shared';
+import { TextField } from '@/components/fields/text-field';
+import { textRule } from '@/components/fields/text-rule';
+import { FormActions } from '@/components/ui/form-actions';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useRegister } from '../api/session';
 
-export function RegisterForm({ onRegistered }: { onRegistered: () => void }) {
+export function RegisterForm({ onRegistered, signInHref }: { onRegistered: () => void; signInHref: string }) {
   const register = useRegister();
   const [problem, setProblem] = useState<string | null>(null);
   const form = useForm({
     mode: 'uncontrolled',
     initialValues: { displayName: '', email: '', password: '' },
     validate: {
-      displayName: (v) => (v.trim() ? null : 'Tell us the name to show to your partners.'),
+      displayName: textRule({ required: 'Tell us the name to show to your partners.', maxLength: TEXT_LIMITS.displayName }),
       email: (v) => (/^\S+@\S+\.\S+$/.test(v.trim()) ? null : 'Enter a valid e-mail address.'),
-      password: (v) => (v.length >= MIN_PASSWORD_LENGTH ? null : `Use a password of at least ${MIN_PASSWORD_LENGTH} characters.`),
+      password: (v) =>
+        v.length < MIN_PASSWORD_LENGTH ? `Use a password of at least ${MIN_PASSWORD_LENGTH} characters.` : textRule({ maxLength: TEXT_LIMITS.password })(v),
     },
   });
 
@@ -27,13 +32,23 @@ export function RegisterForm({ onRegistered }: { onRegistered: () => void }) {
       })}
     >
       <Stack>
-        {problem && (
-          <Alert color="clay" variant="light" role="alert">
-            {problem}
-          </Alert>
-        )}
-        <TextInput label="Your name" description="Shown to your partners" withAsterisk key={form.key('displayName')} {...form.getInputProps('displayName')} />
-        <TextInput label="E-mail" type="email" autoComplete="email" withAsterisk key={form.key('email')} {...form.getInputProps('email')} />
+        <TextField
+          label="Your name"
+          description="Shown to your partners"
+          maxLength={TEXT_LIMITS.displayName}
+          withAsterisk
+          key={form.key('displayName')}
+          {...form.getInputProps('displayName')}
+        />
+        <TextField
+          label="E-mail"
+          type="email"
+          autoComplete="email"
+          maxLength={TEXT_LIMITS.email}
+          withAsterisk
+          key={form.key('email')}
+          {...form.getInputProps('email')}
+        />
         <PasswordInput
           label="Password"
           description={`At least ${MIN_PASSWORD_LENGTH} characters`}
@@ -42,9 +57,13 @@ export function RegisterForm({ onRegistered }: { onRegistered: () => void }) {
           key={form.key('password')}
           {...form.getInputProps('password')}
         />
-        <Button type="submit" loading={register.isPending}>
-          Create account
-        </Button>
+        <FormActions message={problem} loading={register.isPending} submitLabel="Create account" />
+        <Text size="sm">
+          Already have an account?{' '}
+          <Anchor component={Link} to={signInHref}>
+            Sign in
+          </Anchor>
+        </Text>
       </Stack>
     </form>
   );

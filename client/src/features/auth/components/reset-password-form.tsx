@@ -1,4 +1,5 @@
-import { Alert, Button, PasswordInput, Stack } from '@mantine/core';
+import { PasswordInput, Stack } from '@mantine/core';
+import { FormActions } from '@/components/ui/form-actions';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { MIN_PASSWORD_LENGTH } from '@broodsilk/shared';
@@ -20,15 +21,8 @@ export function ResetPasswordForm({ token, onDone }: { token: string; onDone: ()
       )}
     >
       <Stack>
-        {problem && (
-          <Alert color="clay" variant="light" role="alert">
-            {problem}
-          </Alert>
-        )}
         <PasswordInput label="New password" autoComplete="new-password" withAsterisk key={form.key('password')} {...form.getInputProps('password')} />
-        <Button type="submit" loading={confirm.isPending}>
-          Set new password
-        </Button>
+        <FormActions message={problem} loading={confirm.isPending} submitLabel="Set new password" />
       </Stack>
     </form>
   );

@@ -1,4 +1,5 @@
-import { Alert, Anchor, Button, PasswordInput, Stack, Text, TextInput } from '@mantine/core';
+import { Anchor, PasswordInput, Stack, Text, TextInput } from '@mantine/core';
+import { FormActions } from '@/components/ui/form-actions';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { Link } from 'react-router';
@@ -27,16 +28,9 @@ export function SignInForm({ onSignedIn, registerHref = paths.register.href() }:
       })}
     >
       <Stack>
-        {problem && (
-          <Alert color="clay" variant="light" role="alert">
-            {problem}
-          </Alert>
-        )}
         <TextInput label="E-mail" type="email" autoComplete="email" withAsterisk key={form.key('email')} {...form.getInputProps('email')} />
         <PasswordInput label="Password" autoComplete="current-password" withAsterisk key={form.key('password')} {...form.getInputProps('password')} />
-        <Button type="submit" loading={login.isPending}>
-          Sign in
-        </Button>
+        <FormActions message={problem} loading={login.isPending} submitLabel="Sign in" />
         <Text size="sm">
           <Anchor component={Link} to={paths.forgotPassword.href()}>
             Forgot your password?

@@ -1,24 +1,17 @@
-import { Alert, Button, Fieldset, Group, NumberInput, SegmentedControl, Select, SimpleGrid, Stack, Text, TextInput, Textarea } from '@mantine/core';
-import { DateInput } from '@mantine/dates';
+import { Fieldset, SegmentedControl, Select, SimpleGrid, Stack, Text } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { Fragment, useState, type ReactNode } from 'react';
-import {
-  ANIMAL_SEXES,
-  ANIMAL_STATUSES,
-  CUSTODIES,
-  MATURITIES,
-  minorDigits,
-  OWNER_KINDS,
-  type AnimalResponse,
-  type AnimalSex,
-  type AnimalStatus,
-  type CreateAnimalRequest,
-  type Custody,
-  type Maturity,
-  type OwnerKind,
-} from '@broodsilk/shared';
+import { ANIMAL_SEXES, ANIMAL_STATUSES, CUSTODIES, MATURITIES, OWNER_KINDS, TEXT_LIMITS, minorDigits, type AnimalResponse } from '@broodsilk/shared';
+import { DateField } from '@/components/fields/date-field';
+import { NumberField } from '@/components/fields/number-field';
+import { TextAreaField, TextField } from '@/components/fields/text-field';
+import { textRule } from '@/components/fields/text-rule';
+import { checkDate, deviceToday } from '@/components/fields/typed-date';
+import { checkNumber } from '@/components/fields/typed-number';
+import { FormActions } from '@/components/ui/form-actions';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateAnimal, useUpdateAnimal } from '../api/animals';
+import { animalFormValues, toAnimalRequest, type AnimalFormValues } from '../utils/animal-form-values';
 import { CUSTODY_LABELS, MATURITY_LABELS, OWNER_LABELS, SEX_LABELS, STATUS_LABELS } from '../utils/animal-view';
 
 /** What the form hands to the species picker the app layer plugs in. */
@@ -30,88 +23,8 @@ export interface SpeciesFieldProps {
   withAsterisk?: boolean;
 }
 
-export interface AnimalFormValues {
-  speciesId: string | null;
-  label: string;
-  sex: AnimalSex;
-  maturity: Maturity;
-  maturedOn: string | null;
-  acquiredOn: string | null;
-  acquiredFrom: string;
-  price: number | string;
-  priceCurrency: string;
-  ownerKind: OwnerKind;
-  ownerEmail: string;
-  ownerName: string;
-  custody: Custody;
-  custodyParty: string;
-  dueBackOn: string | null;
-  status: AnimalStatus;
-  statusOn: string | null;
-  enclosure: string;
-  notes: string;
-  premoltNote: string;
-}
-
 const MATURE_MALE_NEEDS_DATE = 'A mature male needs the date of his maturing molt: his male clock counts from it.';
-
-function initialValues(a?: AnimalResponse): AnimalFormValues {
-  const digits = a?.priceCurrency ? minorDigits(a.priceCurrency) : 2;
-  return {
-    speciesId: a?.species.id ?? null,
-    label: a?.label ?? '',
-    sex: a?.sex ?? 'unsexed',
-    maturity: a?.maturity ?? 'immature',
-    maturedOn: a?.maturedOn ?? null,
-    acquiredOn: a?.acquiredOn ?? null,
-    acquiredFrom: a?.acquiredFrom ?? '',
-    price: a?.pricePaidMinor != null ? a.pricePaidMinor / 10 ** digits : '',
-    priceCurrency: a?.priceCurrency ?? '',
-    ownerKind: a?.owner.kind ?? 'self',
-    ownerEmail: a?.owner.kind === 'party' ? (a.owner.email ?? '') : a?.owner.kind === 'keeper' ? '' : '',
-    ownerName: a?.owner.kind === 'party' ? a.owner.name : '',
-    custody: a?.custody ?? 'with-owner',
-    custodyParty: a?.custodyParty ?? '',
-    dueBackOn: a?.dueBackOn ?? null,
-    status: a?.status ?? 'active',
-    statusOn: a?.statusOn ?? null,
-    enclosure: a?.enclosure ?? '',
-    notes: a?.notes ?? '',
-    premoltNote: a?.premoltNote ?? '',
-  };
-}
-
-const text = (s: string) => (s.trim() === '' ? null : s.trim());
-
-/** The form's values as the create/edit request; fields that do not apply are cleared. */
-export function toAnimalRequest(v: AnimalFormValues): CreateAnimalRequest {
-  const currency = text(v.priceCurrency)?.toUpperCase() ?? null;
-  const price = v.price === '' || v.price === null ? null : Number(v.price);
-  const loan = v.custody !== 'with-owner';
-  return {
-    speciesId: v.speciesId ?? '',
-    label: v.label.trim(),
-    sex: v.sex,
-    maturity: v.maturity,
-    maturedOn: v.maturity === 'mature' ? v.maturedOn || null : null,
-    acquiredOn: v.acquiredOn || null,
-    acquiredFrom: text(v.acquiredFrom),
-    pricePaidMinor: price === null || Number.isNaN(price) ? null : Math.round(price * 10 ** minorDigits(currency ?? 'EUR')),
-    priceCurrency: currency,
-    ownerKind: v.ownerKind,
-    // An edit of a keeper-owned animal may leave the e-mail empty: the owner stays as recorded.
-    ownerEmail: v.ownerKind === 'self' ? null : (text(v.ownerEmail) ?? (v.ownerKind === 'keeper' ? undefined : null)),
-    ownerName: v.ownerKind === 'party' ? text(v.ownerName) : null,
-    custody: v.custody,
-    custodyParty: loan ? text(v.custodyParty) : null,
-    dueBackOn: loan ? v.dueBackOn || null : null,
-    status: v.status,
-    statusOn: v.statusOn || null,
-    enclosure: text(v.enclosure),
-    notes: text(v.notes),
-    premoltNote: v.sex === 'female' ? text(v.premoltNote) : null,
-  };
-}
+const NOT_IN_FUTURE = 'This has happened, so it cannot be after today.';
 
 /** Server field names that differ from the form's. */
 const SERVER_FIELDS: Record<string, keyof AnimalFormValues> = { pricePaidMinor: 'price' };
@@ -131,7 +44,8 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
   const update = useUpdateAnimal(animal?.id ?? '');
   const save = animal ? update : create;
   const [message, setMessage] = useState<string | null>(null);
-  const start = initialValues(animal);
+  const start = animalFormValues(animal);
+  const today = deviceToday();
   const [shape, setShape] = useState<Shape>({
     sex: start.sex,
     maturity: start.maturity,
@@ -142,6 +56,7 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
 
   const form = useForm<AnimalFormValues>({
     mode: 'uncontrolled',
+    validateInputOnBlur: true,
     initialValues: start,
     onValuesChange: (v) =>
       setShape((s) =>
@@ -151,14 +66,38 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
       ),
     validate: {
       speciesId: (v) => (v ? null : 'Choose a species from the catalogue.'),
-      label: (v) => (v.trim() ? null : 'Give the animal a label (a name or a code on its enclosure).'),
-      maturedOn: (v, all) => (all.sex === 'male' && all.maturity === 'mature' && !v ? MATURE_MALE_NEEDS_DATE : null),
-      priceCurrency: (v, all) => (all.price !== '' && all.price !== null && !v.trim() ? 'Say which currency the price is in (e.g. EUR).' : null),
+      label: textRule({ required: 'Give the animal a label (a name or a code on its enclosure).', maxLength: TEXT_LIMITS.animalLabel }),
+      enclosure: textRule({ maxLength: TEXT_LIMITS.enclosure }),
+      maturedOn: (v, all) =>
+        checkDate(v, {
+          required: all.sex === 'male' && all.maturity === 'mature' ? MATURE_MALE_NEEDS_DATE : undefined,
+          latest: today,
+          latestMessage: NOT_IN_FUTURE,
+        }),
+      acquiredOn: (v) => checkDate(v, { latest: today, latestMessage: NOT_IN_FUTURE }),
+      acquiredFrom: textRule({ maxLength: TEXT_LIMITS.acquiredFrom }),
+      price: (v, all) =>
+        checkNumber(v, {
+          min: 0,
+          max: 1_000_000,
+          decimals: minorDigits(all.priceCurrency.trim().toUpperCase() || 'EUR'),
+          rangeMessage: 'A price is from 0 to 1,000,000.',
+        }),
+      priceCurrency: (v, all) => (all.price.trim() !== '' && !v.trim() ? 'Say which currency the price is in (e.g. EUR).' : null),
+      custodyParty: textRule({ maxLength: TEXT_LIMITS.personName }),
+      dueBackOn: (v) => checkDate(v),
+      notes: textRule({ maxLength: TEXT_LIMITS.animalNotes }),
+      premoltNote: textRule({ maxLength: TEXT_LIMITS.premoltNote }),
       ownerEmail: (v, all) =>
         all.ownerKind === 'keeper' && !v.trim() && animal?.owner.kind !== 'keeper' ? 'Give the e-mail of the keeper who owns the animal.' : null,
       ownerName: (v, all) => (all.ownerKind === 'party' && !v.trim() ? 'Give the name of the owner.' : null),
       statusOn: (v, all) =>
-        (all.status === 'sold' || all.status === 'deceased') && !v ? `Give the date the animal was ${all.status === 'sold' ? 'sold' : 'found dead'}.` : null,
+        checkDate(v, {
+          required:
+            all.status === 'sold' || all.status === 'deceased' ? `Give the date the animal was ${all.status === 'sold' ? 'sold' : 'found dead'}.` : undefined,
+          latest: today,
+          latestMessage: NOT_IN_FUTURE,
+        }),
     },
   });
 
@@ -180,19 +119,19 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
   return (
     <form onSubmit={submit} noValidate aria-label={animal ? 'Edit animal' : 'Add animal'}>
       <Stack>
-        {message && (
-          <Alert color="clay" role="alert" variant="light">
-            <Text size="sm" className="tone-failed">
-              {message}
-            </Text>
-          </Alert>
-        )}
         <Fragment key={form.key('speciesId')}>
           {renderSpeciesPicker({ ...form.getInputProps('speciesId'), defaultName: animal?.species.scientificName ?? null, withAsterisk: true })}
         </Fragment>
         <SimpleGrid cols={{ base: 1, sm: 2 }}>
-          <TextInput label="Label" description="A name or the code on its enclosure" withAsterisk key={form.key('label')} {...form.getInputProps('label')} />
-          <TextInput label="Enclosure" key={form.key('enclosure')} {...form.getInputProps('enclosure')} />
+          <TextField
+            label="Label"
+            description="A name or the code on its enclosure"
+            withAsterisk
+            maxLength={TEXT_LIMITS.animalLabel}
+            key={form.key('label')}
+            {...form.getInputProps('label')}
+          />
+          <TextField label="Enclosure" maxLength={TEXT_LIMITS.enclosure} key={form.key('enclosure')} {...form.getInputProps('enclosure')} />
         </SimpleGrid>
         <SimpleGrid cols={{ base: 1, sm: 2 }}>
           <Stack gap={4}>
@@ -221,20 +160,18 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
           </Stack>
         </SimpleGrid>
         {shape.maturity === 'mature' && (
-          <DateInput
+          <DateField
             label="Maturing molt"
             description={matureMale ? 'His male clock counts from this date.' : 'The molt at which she matured, if known.'}
             withAsterisk={matureMale}
-            valueFormat="YYYY-MM-DD"
-            placeholder="YYYY-MM-DD"
-            clearable
-            maxDate={new Date()}
+
             key={form.key('maturedOn')}
             {...form.getInputProps('maturedOn')}
           />
         )}
         {shape.sex === 'female' && (
-          <Textarea
+          <TextAreaField
+            maxLength={TEXT_LIMITS.premoltNote}
             label="Premolt note"
             description="Signs she may molt soon (off food, dark abdomen): a molt after pairing loses the pairing."
             rows={2}
@@ -245,18 +182,15 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
 
         <Fieldset legend="Acquisition">
           <SimpleGrid cols={{ base: 1, sm: 2 }}>
-            <DateInput
+            <DateField
               label="Acquired on"
-              valueFormat="YYYY-MM-DD"
-              placeholder="YYYY-MM-DD"
-              clearable
-              maxDate={new Date()}
+
               key={form.key('acquiredOn')}
               {...form.getInputProps('acquiredOn')}
             />
-            <TextInput label="Acquired from" key={form.key('acquiredFrom')} {...form.getInputProps('acquiredFrom')} />
-            <NumberInput label="Price paid" min={0} decimalScale={2} hideControls key={form.key('price')} {...form.getInputProps('price')} />
-            <TextInput label="Currency" placeholder="EUR" maxLength={3} key={form.key('priceCurrency')} {...form.getInputProps('priceCurrency')} />
+            <TextField label="Acquired from" maxLength={TEXT_LIMITS.acquiredFrom} key={form.key('acquiredFrom')} {...form.getInputProps('acquiredFrom')} />
+            <NumberField label="Price paid" key={form.key('price')} {...form.getInputProps('price')} />
+            <TextField label="Currency" placeholder="EUR" maxLength={3} key={form.key('priceCurrency')} {...form.getInputProps('priceCurrency')} />
           </SimpleGrid>
         </Fieldset>
 
@@ -270,8 +204,9 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
               {...form.getInputProps('ownerKind')}
             />
             {shape.ownerKind === 'keeper' && (
-              <TextInput
+              <TextField
                 label="Owner's e-mail"
+                maxLength={TEXT_LIMITS.email}
                 description={animal?.owner.kind === 'keeper' ? `Now ${animal.owner.name}; leave empty to keep` : 'The e-mail they sign in to Broodsilk with'}
                 type="email"
                 withAsterisk={animal?.owner.kind !== 'keeper'}
@@ -281,8 +216,20 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
             )}
             {shape.ownerKind === 'party' && (
               <SimpleGrid cols={{ base: 1, sm: 2 }}>
-                <TextInput label="Owner's name" withAsterisk key={form.key('ownerName')} {...form.getInputProps('ownerName')} />
-                <TextInput label="Owner's e-mail" type="email" key={form.key('ownerEmail')} {...form.getInputProps('ownerEmail')} />
+                <TextField
+                  label="Owner's name"
+                  withAsterisk
+                  maxLength={TEXT_LIMITS.personName}
+                  key={form.key('ownerName')}
+                  {...form.getInputProps('ownerName')}
+                />
+                <TextField
+                  label="Owner's e-mail"
+                  type="email"
+                  maxLength={TEXT_LIMITS.email}
+                  key={form.key('ownerEmail')}
+                  {...form.getInputProps('ownerEmail')}
+                />
               </SimpleGrid>
             )}
             <Select
@@ -294,18 +241,17 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
             />
             {loan && (
               <SimpleGrid cols={{ base: 1, sm: 2 }}>
-                <TextInput
+                <TextField
+                  maxLength={TEXT_LIMITS.personName}
                   label={shape.custody === 'loan-in' ? 'Lent to me by' : 'Held by'}
                   description={shape.custody === 'loan-in' ? 'Leave empty when it is the owner' : undefined}
                   withAsterisk={shape.custody === 'loan-out'}
                   key={form.key('custodyParty')}
                   {...form.getInputProps('custodyParty')}
                 />
-                <DateInput
+                <DateField
                   label="Due back on"
-                  valueFormat="YYYY-MM-DD"
-                  placeholder="YYYY-MM-DD"
-                  clearable
+
                   key={form.key('dueBackOn')}
                   {...form.getInputProps('dueBackOn')}
                 />
@@ -322,28 +268,16 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
             key={form.key('status')}
             {...form.getInputProps('status')}
           />
-          <DateInput
+          <DateField
             label="Status since"
             withAsterisk={shape.status === 'sold' || shape.status === 'deceased'}
-            valueFormat="YYYY-MM-DD"
-            placeholder="YYYY-MM-DD"
-            clearable
-            maxDate={new Date()}
+
             key={form.key('statusOn')}
             {...form.getInputProps('statusOn')}
           />
         </SimpleGrid>
-        <Textarea label="Notes" rows={3} key={form.key('notes')} {...form.getInputProps('notes')} />
-        <Group justify="flex-end">
-          {onCancel && (
-            <Button variant="default" onClick={onCancel} size="md">
-              Cancel
-            </Button>
-          )}
-          <Button type="submit" loading={save.isPending} size="md">
-            {animal ? 'Save changes' : 'Add to collection'}
-          </Button>
-        </Group>
+        <TextAreaField label="Notes" maxLength={TEXT_LIMITS.animalNotes} key={form.key('notes')} {...form.getInputProps('notes')} />
+        <FormActions message={message} loading={save.isPending} submitLabel={animal ? 'Save changes' : 'Add to collection'} onCancel={onCancel} />
       </Stack>
     </form>
   );

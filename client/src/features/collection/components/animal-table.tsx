@@ -11,6 +11,8 @@ interface AnimalTableProps {
   order: 'asc' | 'desc';
   onSort: (sort: AnimalSort, order: 'asc' | 'desc') => void;
   hrefOf: (id: string) => string;
+  /** Whether filters narrow the list: an empty list then means no match, not an empty collection. */
+  filtered: boolean;
   /** Male clocks by animal id (the list itself carries none). */
   clocks?: ReadonlyMap<string, MaleClock>;
   /** Former names by species id, for the hover on the species name. */
@@ -34,7 +36,7 @@ function SortHeader({ label, column, sort, order, onSort }: { label: string; col
 }
 
 /** The collection as a dense table; on a phone it scrolls sideways rather than squeezing. */
-export function AnimalTable({ items, sort, order, onSort, hrefOf, clocks, formerNames }: AnimalTableProps) {
+export function AnimalTable({ items, sort, order, onSort, hrefOf, clocks, formerNames, filtered }: AnimalTableProps) {
   const head = { sort, order, onSort };
   return (
     <Table.ScrollContainer minWidth={860}>
@@ -127,7 +129,7 @@ export function AnimalTable({ items, sort, order, onSort, hrefOf, clocks, former
       </Table>
       {items.length === 0 && (
         <Group justify="center" p="lg">
-          <Text c="dimmed">No animals match these filters.</Text>
+          <Text c="dimmed">{filtered ? 'No animals match these filters.' : 'Your collection is empty. Add your first animal to start.'}</Text>
         </Group>
       )}
     </Table.ScrollContainer>

@@ -2,7 +2,7 @@ import { Box, Button, Group, Select, TextInput } from '@mantine/core';
 import { useDebouncedCallback } from '@mantine/hooks';
 import type { ReactNode } from 'react';
 import { ANIMAL_SEXES, ANIMAL_STATUSES, type AnimalSex, type AnimalStatus } from '@broodsilk/shared';
-import { SEX_LABELS, STATUS_LABELS, type CollectionFilters as Filters } from '../utils/animal-view';
+import { SEX_LABELS, STATUS_LABELS, hasFilters, type CollectionFilters as Filters } from '../utils/animal-view';
 
 interface CollectionFiltersProps {
   filters: Filters;
@@ -14,7 +14,7 @@ interface CollectionFiltersProps {
 /** Text, species, sex and status filters; every change starts again at the first page. */
 export function CollectionFilters({ filters, onChange, speciesFilter }: CollectionFiltersProps) {
   const setText = useDebouncedCallback((q: string) => onChange({ q: q.trim() || undefined, offset: 0 }), 300);
-  const any = Boolean(filters.q || filters.sex || filters.status || filters.speciesId);
+  const any = hasFilters(filters);
   return (
     <Group align="flex-end" gap="sm" wrap="wrap">
       <TextInput

@@ -53,7 +53,7 @@ export function CsvTools() {
         <Button component="a" href={ANIMALS_CSV_EXPORT_URL} download variant="default" size="md">
           Export CSV
         </Button>
-        <FileButton accept=".csv,text/csv" onChange={(file) => file && importCsv.mutate(file)}>
+        <FileButton accept=".csv,text/csv" inputProps={{ 'aria-label': 'Choose a CSV file to import' }} onChange={(file) => file && importCsv.mutate(file)}>
           {(props) => (
             <Button {...props} variant="default" size="md" loading={importCsv.isPending}>
               Import CSV

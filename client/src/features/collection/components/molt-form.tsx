@@ -1,27 +1,39 @@
-import { Alert, Button, Checkbox, Group, NumberInput, Select, Stack, Text, Textarea } from '@mantine/core';
-import { DateInput } from '@mantine/dates';
+import { Checkbox, Select, Stack } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import { EXUVIA_SEXES, type AnimalSex, type ExuviaSex } from '@broodsilk/shared';
+import { EXUVIA_SEXES, TEXT_LIMITS, type AnimalSex, type ExuviaSex } from '@broodsilk/shared';
+import { DateField } from '@/components/fields/date-field';
+import { NumberField } from '@/components/fields/number-field';
+import { TextAreaField } from '@/components/fields/text-field';
+import { dateRule, deviceToday, readDate } from '@/components/fields/typed-date';
+import { numberRule, readNumber } from '@/components/fields/typed-number';
+import { textRule } from '@/components/fields/text-rule';
+import { FormActions } from '@/components/ui/form-actions';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useRecordMolt } from '../api/molts';
 import { EXUVIA_LABELS } from '../utils/animal-view';
 
 interface MoltFormValues {
-  moltedOn: string | null;
+  moltedOn: string;
   exuviaSex: ExuviaSex | null;
-  sizeCm: number | string;
+  sizeCm: string;
   maturing: boolean;
   notes: string;
 }
 
 export function MoltForm({ animalId, sex, onDone }: { animalId: string; sex: AnimalSex; onDone: () => void }) {
   const record = useRecordMolt(animalId);
+  const today = deviceToday();
   const [message, setMessage] = useState<string | null>(null);
   const form = useForm<MoltFormValues>({
     mode: 'uncontrolled',
-    initialValues: { moltedOn: null, exuviaSex: null, sizeCm: '', maturing: false, notes: '' },
-    validate: { moltedOn: (v) => (v ? null : 'Give the date of the molt.') },
+    validateInputOnBlur: true,
+    initialValues: { moltedOn: '', exuviaSex: null, sizeCm: '', maturing: false, notes: '' },
+    validate: {
+      moltedOn: dateRule({ required: 'Give the date of the molt.', latest: today, latestMessage: 'A molt that has happened cannot be in the future.' }),
+      sizeCm: numberRule({ min: 0.1, max: 40, decimals: 1, rangeMessage: 'The leg span is from 0.1 to 40 cm.' }),
+      notes: textRule({ maxLength: TEXT_LIMITS.note }),
+    },
   });
   return (
     <form
@@ -30,9 +42,9 @@ export function MoltForm({ animalId, sex, onDone }: { animalId: string; sex: Ani
         setMessage(null);
         record.mutate(
           {
-            moltedOn: v.moltedOn!,
+            moltedOn: readDate(v.moltedOn)!,
             exuviaSex: v.exuviaSex,
-            sizeCm: v.sizeCm === '' ? null : Number(v.sizeCm),
+            sizeCm: readNumber(v.sizeCm),
             maturing: sex === 'male' ? v.maturing : false,
             notes: v.notes.trim() || null,
           },
@@ -41,22 +53,7 @@ export function MoltForm({ animalId, sex, onDone }: { animalId: string; sex: Ani
       })}
     >
       <Stack>
-        {message && (
-          <Alert color="clay" variant="light" role="alert">
-            <Text size="sm" className="tone-failed">
-              {message}
-            </Text>
-          </Alert>
-        )}
-        <DateInput
-          label="Molted on"
-          withAsterisk
-          valueFormat="YYYY-MM-DD"
-          placeholder="YYYY-MM-DD"
-          maxDate={new Date()}
-          key={form.key('moltedOn')}
-          {...form.getInputProps('moltedOn')}
-        />
+        <DateField label="Molted on" withAsterisk key={form.key('moltedOn')} {...form.getInputProps('moltedOn')} />
         <Select
           label="Sexed from the exuvia"
           placeholder="Not checked"
@@ -65,7 +62,7 @@ export function MoltForm({ animalId, sex, onDone }: { animalId: string; sex: Ani
           key={form.key('exuviaSex')}
           {...form.getInputProps('exuviaSex')}
         />
-        <NumberInput label="Leg span (cm)" min={0} max={40} decimalScale={1} step={0.5} key={form.key('sizeCm')} {...form.getInputProps('sizeCm')} />
+        <NumberField label="Leg span (cm)" key={form.key('sizeCm')} {...form.getInputProps('sizeCm')} />
         {sex === 'male' && (
           <Checkbox
             label="This was his maturing molt"
@@ -75,15 +72,8 @@ export function MoltForm({ animalId, sex, onDone }: { animalId: string; sex: Ani
             {...form.getInputProps('maturing', { type: 'checkbox' })}
           />
         )}
-        <Textarea label="Notes" rows={2} key={form.key('notes')} {...form.getInputProps('notes')} />
-        <Group justify="flex-end">
-          <Button variant="default" onClick={onDone} size="md">
-            Cancel
-          </Button>
-          <Button type="submit" loading={record.isPending} size="md">
-            Save molt
-          </Button>
-        </Group>
+        <TextAreaField label="Notes" maxLength={TEXT_LIMITS.note} key={form.key('notes')} {...form.getInputProps('notes')} />
+        <FormActions message={message} loading={record.isPending} submitLabel="Save molt" onCancel={onDone} />
       </Stack>
     </form>
   );

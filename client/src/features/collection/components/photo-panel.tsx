@@ -36,6 +36,7 @@ export function PhotoPanel({ animalId, photos, editable, label }: { animalId: st
           }}
           onReject={(r) => setRefusal(rejectionMessage(r))}
           aria-label="Add a photo"
+          inputProps={{ 'aria-label': 'Choose a photo to add' }}
           data-testid="photo-dropzone"
         >
           <Stack gap={2} align="center" py="md" mih={88} justify="center">

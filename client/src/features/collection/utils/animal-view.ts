@@ -54,6 +54,11 @@ export interface CollectionFilters extends Required<Pick<AnimalListQuery, 'limit
   speciesId?: string;
 }
 
+/** Whether any filter narrows the list (paging and sorting do not). */
+export function hasFilters(f: Pick<CollectionFilters, 'q' | 'sex' | 'status' | 'speciesId'>): boolean {
+  return Boolean(f.q || f.sex || f.status || f.speciesId);
+}
+
 function oneOf<T extends string>(values: readonly T[], v: string | null): T | undefined {
   return v !== null && (values as readonly string[]).includes(v) ? (v as T) : undefined;
 }

@@ -1,8 +1,12 @@
-import { Alert, Button, Collapse, Group, Select, Stack, TextInput } from '@mantine/core';
+import { Button, Collapse, Group, Select, Stack } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useDisclosure } from '@mantine/hooks';
 import { useState } from 'react';
-import { ENDED_EARLY_REASONS, type EndedEarlyReason } from '@broodsilk/shared';
+import { ENDED_EARLY_REASONS, TEXT_LIMITS, type EndedEarlyReason } from '@broodsilk/shared';
+import { TextField } from '@/components/fields/text-field';
+import { textRule } from '@/components/fields/text-rule';
+import { FormActions } from '@/components/ui/form-actions';
+
 import { applyServerErrors } from '@/lib/form-errors';
 import { useEndProject } from '../api/projects';
 import { ENDED_EARLY_LABELS } from '../utils/labels';
@@ -17,7 +21,7 @@ export function EndProjectForm({ projectId }: { projectId: string }) {
   const form = useForm<{ reason: EndedEarlyReason | null; note: string }>({
     mode: 'uncontrolled',
     initialValues: { reason: null, note: '' },
-    validate: { reason: (v) => (v ? null : 'Why does it end?') },
+    validate: { reason: (v) => (v ? null : 'Why does it end?'), note: textRule({ maxLength: TEXT_LIMITS.note }) },
   });
   const submit = form.onSubmit(async (v) => {
     setMessage(null);
@@ -38,17 +42,8 @@ export function EndProjectForm({ projectId }: { projectId: string }) {
         <form onSubmit={submit} noValidate>
           <Stack maw={420}>
             <Select label="Reason" data={reasonOptions} key={form.key('reason')} {...form.getInputProps('reason')} />
-            <TextInput label="Note" key={form.key('note')} {...form.getInputProps('note')} />
-            {message && (
-              <Alert color="clay" role="alert">
-                {message}
-              </Alert>
-            )}
-            <Group>
-              <Button type="submit" color="clay" loading={end.isPending}>
-                End project
-              </Button>
-            </Group>
+            <TextField label="Note" maxLength={TEXT_LIMITS.note} key={form.key('note')} {...form.getInputProps('note')} />
+            <FormActions message={message} loading={end.isPending} submitLabel="End project" />
           </Stack>
         </form>
       </Collapse>

@@ -1,9 +1,15 @@
-import { Alert, Badge, Button, Collapse, Group, NumberInput, Select, Stack, Table, Text, Textarea } from '@mantine/core';
-import { DateInput, TimeInput } from '@mantine/dates';
+import { Alert, Badge, Button, Collapse, Group, Select, Stack, Table, Text } from '@mantine/core';
+import { TimeInput } from '@mantine/dates';
+import { DateField } from '@/components/fields/date-field';
+import { NumberField } from '@/components/fields/number-field';
+import { TextAreaField } from '@/components/fields/text-field';
+import { textRule } from '@/components/fields/text-rule';
+import { dateRule, readDate } from '@/components/fields/typed-date';
+import { numberRule, readNumber } from '@/components/fields/typed-number';
 import { useForm } from '@mantine/form';
 import { useDisclosure } from '@mantine/hooks';
 import { useState } from 'react';
-import { PAIRING_OUTCOMES, todayIn, type CreatePairingRequest, type PairingOutcome } from '@broodsilk/shared';
+import { PAIRING_OUTCOMES, TEXT_LIMITS, todayIn, type CreatePairingRequest, type PairingOutcome } from '@broodsilk/shared';
 import { dayjs, formatInstant } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
 import { usePairings, useRecordPairing } from '../api/pairings';
@@ -14,9 +20,9 @@ import { WarningConfirm, useWarnedSave } from '@/components/ui/warning-confirm';
 const outcomeOptions = PAIRING_OUTCOMES.map((o) => ({ value: o, label: PAIRING_OUTCOME_LABELS[o] }));
 
 interface Values {
-  on: string | null;
+  on: string;
   time: string;
-  durationMinutes: number | string;
+  durationMinutes: string;
   outcome: PairingOutcome;
   notes: string;
 }
@@ -30,11 +36,19 @@ export function PairingsPanel({ projectId, timeZone, canRecord }: { projectId: s
   const [message, setMessage] = useState<string | null>(null);
   const form = useForm<Values>({
     mode: 'uncontrolled',
-    initialValues: { on: null, time: '20:00', durationMinutes: 20, outcome: 'connected', notes: '' },
+    validateInputOnBlur: true,
+    initialValues: { on: '', time: '20:00', durationMinutes: '20', outcome: 'connected', notes: '' },
     validate: {
-      on: (v) => (v ? null : 'On which day was the male put in?'),
+      on: dateRule({ required: 'On which day was the male put in?', latest: today, latestMessage: 'A pairing that has happened cannot be in the future.' }),
       time: (v) => (/^\d{2}:\d{2}$/.test(v) ? null : 'The time as HH:MM.'),
-      durationMinutes: (v) => (Number(v) >= 0 && Number.isInteger(Number(v)) ? null : 'Minutes as a whole number.'),
+      durationMinutes: numberRule({
+        required: 'How many minutes?',
+        min: 1,
+        max: 20_160,
+        decimals: 0,
+        rangeMessage: 'From 1 minute to 14 days (20160 minutes).',
+      }),
+      notes: textRule({ maxLength: TEXT_LIMITS.note }),
     },
   });
 
@@ -49,8 +63,8 @@ export function PairingsPanel({ projectId, timeZone, canRecord }: { projectId: s
   const submit = form.onSubmit((v) => {
     setMessage(null);
     // Day and wall-clock time are read in the keeper's own zone.
-    const startedAt = dayjs.tz(`${v.on}T${v.time}`, timeZone).toISOString();
-    return warned.save({ startedAt, durationMinutes: Number(v.durationMinutes), outcome: v.outcome, notes: v.notes.trim() || null });
+    const startedAt = dayjs.tz(`${readDate(v.on)}T${v.time}`, timeZone).toISOString();
+    return warned.save({ startedAt, durationMinutes: readNumber(v.durationMinutes)!, outcome: v.outcome, notes: v.notes.trim() || null });
   });
 
   return (
@@ -96,26 +110,12 @@ export function PairingsPanel({ projectId, timeZone, canRecord }: { projectId: s
             <form onSubmit={submit} noValidate>
               <Stack maw={480}>
                 <Group grow align="flex-start">
-                  <DateInput
-                    label="Day the male went in"
-                    placeholder="YYYY-MM-DD"
-                    valueFormat="YYYY-MM-DD"
-                    withAsterisk
-                    maxDate={today}
-                    key={form.key('on')}
-                    {...form.getInputProps('on')}
-                  />
+                  <DateField label="Day the male went in" withAsterisk key={form.key('on')} {...form.getInputProps('on')} />
                   <TimeInput label="At" key={form.key('time')} {...form.getInputProps('time')} />
                 </Group>
-                <NumberInput
-                  label="How long (minutes)"
-                  min={0}
-                  allowDecimal={false}
-                  key={form.key('durationMinutes')}
-                  {...form.getInputProps('durationMinutes')}
-                />
+                <NumberField label="How long (minutes)" whole key={form.key('durationMinutes')} {...form.getInputProps('durationMinutes')} />
                 <Select label="Outcome" data={outcomeOptions} allowDeselect={false} key={form.key('outcome')} {...form.getInputProps('outcome')} />
-                <Textarea label="Notes" autosize minRows={2} key={form.key('notes')} {...form.getInputProps('notes')} />
+                <TextAreaField label="Notes" maxLength={TEXT_LIMITS.note} key={form.key('notes')} {...form.getInputProps('notes')} />
                 {warned.warnings && (
                   <WarningConfirm warnings={warned.warnings} loading={record.isPending} onConfirm={warned.confirm} onCancel={warned.cancel} />
                 )}

@@ -1,8 +1,10 @@
-import { Badge, Button, Checkbox, Collapse, Group, Select, Stack, Table, Text, TextInput } from '@mantine/core';
+import { Badge, Button, Checkbox, Collapse, Group, Select, Stack, Table, Text } from '@mantine/core';
+import { TextField } from '@/components/fields/text-field';
+import { textRule } from '@/components/fields/text-rule';
 import { useForm } from '@mantine/form';
 import { useDisclosure } from '@mantine/hooks';
 import { useState } from 'react';
-import type { InvitableRole, InvitationResponse, ProjectMemberResponse, ProjectRole } from '@broodsilk/shared';
+import { TEXT_LIMITS, type InvitableRole, type InvitationResponse, type ProjectMemberResponse, type ProjectRole } from '@broodsilk/shared';
 import { formatInstant } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useAddProjectMember } from '../api/projects';
@@ -121,7 +123,7 @@ function AddPartyForm({ projectId }: { projectId: string }) {
     mode: 'uncontrolled',
     initialValues: { name: '', email: '', role: 'partner', invite: true },
     validate: {
-      name: (v) => (v.trim() ? null : 'Give the party a name.'),
+      name: textRule({ required: 'Give the party a name.', maxLength: TEXT_LIMITS.personName }),
       email: (v, values) => (values.invite && !/^\S+@\S+\.\S+$/.test(v.trim()) ? 'An invitation needs an e-mail address.' : null),
     },
   });
@@ -146,8 +148,8 @@ function AddPartyForm({ projectId }: { projectId: string }) {
       <Collapse expanded={opened}>
         <form onSubmit={submit} noValidate>
           <Stack maw={480}>
-            <TextInput label="Name" withAsterisk key={form.key('name')} {...form.getInputProps('name')} />
-            <TextInput label="E-mail" type="email" key={form.key('email')} {...form.getInputProps('email')} />
+            <TextField label="Name" maxLength={TEXT_LIMITS.personName} withAsterisk key={form.key('name')} {...form.getInputProps('name')} />
+            <TextField label="E-mail" type="email" maxLength={TEXT_LIMITS.email} key={form.key('email')} {...form.getInputProps('email')} />
             <Select label="Role" data={roleOptions} allowDeselect={false} key={form.key('role')} {...form.getInputProps('role')} />
             <Checkbox
               label="E-mail an invitation to join this project in Broodsilk"

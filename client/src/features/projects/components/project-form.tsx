@@ -1,24 +1,9 @@
-import {
-  ActionIcon,
-  Alert,
-  Button,
-  Card,
-  Checkbox,
-  Group,
-  NumberInput,
-  Select,
-  SimpleGrid,
-  Stack,
-  Switch,
-  Text,
-  TextInput,
-  Textarea,
-  Title,
-} from '@mantine/core';
+import { ActionIcon, Alert, Button, Card, Checkbox, Group, Select, SimpleGrid, Stack, Switch, Text, Title } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import {
   DEFAULT_HAND_OVER_STAGE,
+  TEXT_LIMITS,
   toMinor,
   type AnimalSummary,
   type BroodStage,
@@ -29,8 +14,12 @@ import {
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateProject, type NewProjectResult } from '../hooks/use-create-project';
 import { priceError } from '../utils/price';
-import { CURRENCIES, failureOptions, handOverOptions, shippingOptions } from './propose-terms-form';
+import { CURRENCIES, LINE_RULES, failureOptions, handOverOptions, shippingOptions } from './propose-terms-form';
 import { FormActions } from '@/components/ui/form-actions';
+import { NumberField } from '@/components/fields/number-field';
+import { TextAreaField, TextField } from '@/components/fields/text-field';
+import { checkText } from '@/components/fields/text-rule';
+import { checkNumber } from '@/components/fields/typed-number';
 
 interface PartyValues {
   name: string;
@@ -86,6 +75,7 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
   const [maleId, setMaleId] = useState<string | null>(null);
   const form = useForm<Values>({
     mode: 'uncontrolled',
+    validateInputOnBlur: true,
     initialValues: {
       title: '',
       femaleId: null,
@@ -103,16 +93,23 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
       shippingPaidBy: 'recipient',
     },
     validate: {
-      title: (v) => (v.trim() ? null : 'Give the project a title.'),
       femaleId: (v) => (v ? null : 'Choose the female.'),
       maleId: (v) => (v ? null : 'Choose the male.'),
       parties: {
-        name: (v) => (v.trim() ? null : 'Give the party a name.'),
+        name: (v) => checkText(v, { required: 'Give the party a name.', maxLength: TEXT_LIMITS.personName }),
+        weight: (v) => checkNumber(String(v), { required: 'Give a weight.', ...LINE_RULES.weight }),
+        fixedCount: (v) => checkNumber(String(v), LINE_RULES.fixedCount),
+        pickOrder: (v) => checkNumber(String(v), { required: 'Give a pick order.', ...LINE_RULES.pickOrder }),
         email: (v, values, path) => {
           const i = Number(path.split('.')[1]);
           return values.parties[i]?.invite && !/^\S+@\S+\.\S+$/.test(v.trim()) ? 'An invitation needs an e-mail address.' : null;
         },
       },
+      title: (v) => checkText(v, { required: 'Give the project a title.', maxLength: TEXT_LIMITS.projectTitle }),
+      notes: (v) => checkText(v, { maxLength: TEXT_LIMITS.projectNotes }),
+      ownerWeight: (v, values) => (values.withTerms ? checkNumber(String(v), { required: 'Give your weight.', ...LINE_RULES.weight }) : null),
+      ownerFixedCount: (v, values) => (values.withTerms ? checkNumber(String(v), LINE_RULES.fixedCount) : null),
+      ownerPickOrder: (v, values) => (values.withTerms ? checkNumber(String(v), { required: 'Give your pick order.', ...LINE_RULES.pickOrder }) : null),
       currency: (v, values) => (!values.withTerms || /^[A-Z]{3}$/.test(v) ? null : 'A three-letter code, e.g. EUR.'),
       price: (v, values) => (values.withTerms ? priceError(v, values.currency) : null),
     },
@@ -154,7 +151,14 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
   return (
     <form onSubmit={submit} noValidate>
       <Stack maw={760}>
-        <TextInput label="Title" placeholder="e.g. Regalis 2027, MO-007 × MO-030" withAsterisk key={form.key('title')} {...form.getInputProps('title')} />
+        <TextField
+          label="Title"
+          placeholder="e.g. Regalis 2027, MO-007 × MO-030"
+          maxLength={TEXT_LIMITS.projectTitle}
+          withAsterisk
+          key={form.key('title')}
+          {...form.getInputProps('title')}
+        />
         <SimpleGrid cols={{ base: 1, sm: 2 }}>
           <Select
             label="Female"
@@ -182,7 +186,7 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
             {male.label} is on a breeding loan to you. Add his owner as a partner below so they can follow the project and agree the split.
           </Alert>
         )}
-        <Textarea label="Notes" autosize minRows={2} key={form.key('notes')} {...form.getInputProps('notes')} />
+        <TextAreaField label="Notes" maxLength={TEXT_LIMITS.projectNotes} key={form.key('notes')} {...form.getInputProps('notes')} />
 
         <Title order={3} size="h4" mt="sm">
           Parties
@@ -203,8 +207,20 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
                 </ActionIcon>
               </Group>
               <SimpleGrid cols={{ base: 1, sm: 3 }}>
-                <TextInput label="Name" withAsterisk key={form.key(`parties.${i}.name`)} {...form.getInputProps(`parties.${i}.name`)} />
-                <TextInput label="E-mail" type="email" key={form.key(`parties.${i}.email`)} {...form.getInputProps(`parties.${i}.email`)} />
+                <TextField
+                  label="Name"
+                  maxLength={TEXT_LIMITS.personName}
+                  withAsterisk
+                  key={form.key(`parties.${i}.name`)}
+                  {...form.getInputProps(`parties.${i}.name`)}
+                />
+                <TextField
+                  label="E-mail"
+                  type="email"
+                  maxLength={TEXT_LIMITS.email}
+                  key={form.key(`parties.${i}.email`)}
+                  {...form.getInputProps(`parties.${i}.email`)}
+                />
                 <Select
                   label="Role"
                   data={roleOptions}
@@ -220,27 +236,9 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
               />
               {withTerms && (
                 <SimpleGrid cols={3}>
-                  <NumberInput
-                    label="Weight"
-                    min={0}
-                    allowDecimal={false}
-                    key={form.key(`parties.${i}.weight`)}
-                    {...form.getInputProps(`parties.${i}.weight`)}
-                  />
-                  <NumberInput
-                    label="Fixed count"
-                    min={0}
-                    allowDecimal={false}
-                    key={form.key(`parties.${i}.fixedCount`)}
-                    {...form.getInputProps(`parties.${i}.fixedCount`)}
-                  />
-                  <NumberInput
-                    label="Pick order"
-                    min={1}
-                    allowDecimal={false}
-                    key={form.key(`parties.${i}.pickOrder`)}
-                    {...form.getInputProps(`parties.${i}.pickOrder`)}
-                  />
+                  <NumberField label="Weight" whole key={form.key(`parties.${i}.weight`)} {...form.getInputProps(`parties.${i}.weight`)} />
+                  <NumberField label="Fixed count" whole key={form.key(`parties.${i}.fixedCount`)} {...form.getInputProps(`parties.${i}.fixedCount`)} />
+                  <NumberField label="Pick order" whole key={form.key(`parties.${i}.pickOrder`)} {...form.getInputProps(`parties.${i}.pickOrder`)} />
                 </SimpleGrid>
               )}
             </Stack>
@@ -266,12 +264,12 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
               Shares are each party&apos;s weight over the sum of weights (partners only; caretakers take no share). A fixed count comes off the top first.
             </Text>
             <SimpleGrid cols={3}>
-              <NumberInput label="Your weight" min={0} allowDecimal={false} key={form.key('ownerWeight')} {...form.getInputProps('ownerWeight')} />
-              <NumberInput label="Your fixed count" min={0} allowDecimal={false} key={form.key('ownerFixedCount')} {...form.getInputProps('ownerFixedCount')} />
-              <NumberInput label="Your pick order" min={1} allowDecimal={false} key={form.key('ownerPickOrder')} {...form.getInputProps('ownerPickOrder')} />
+              <NumberField label="Your weight" whole key={form.key('ownerWeight')} {...form.getInputProps('ownerWeight')} />
+              <NumberField label="Your fixed count" whole key={form.key('ownerFixedCount')} {...form.getInputProps('ownerFixedCount')} />
+              <NumberField label="Your pick order" whole key={form.key('ownerPickOrder')} {...form.getInputProps('ownerPickOrder')} />
             </SimpleGrid>
             <SimpleGrid cols={{ base: 1, sm: 3 }}>
-              <NumberInput label="Price per spiderling" min={0} decimalScale={2} key={form.key('price')} {...form.getInputProps('price')} />
+              <NumberField label="Price per spiderling" key={form.key('price')} {...form.getInputProps('price')} />
               <Select label="Currency" data={CURRENCIES} searchable allowDeselect={false} key={form.key('currency')} {...form.getInputProps('currency')} />
               <Select
                 label="If the project fails"

@@ -1,4 +1,8 @@
-import { Button, Collapse, Group, NumberInput, Select, SimpleGrid, Stack, Table, Text, TextInput } from '@mantine/core';
+import { Button, Collapse, Group, Select, SimpleGrid, Stack, Table, Text } from '@mantine/core';
+import { NumberField } from '@/components/fields/number-field';
+import { TextField } from '@/components/fields/text-field';
+import { checkText } from '@/components/fields/text-rule';
+import { checkNumber } from '@/components/fields/typed-number';
 import { useForm } from '@mantine/form';
 import { useDisclosure } from '@mantine/hooks';
 import { useState } from 'react';
@@ -9,6 +13,7 @@ import {
   FAILURE_CLAUSES,
   minorToMajor,
   SHIPPING_PAYERS,
+  TEXT_LIMITS,
   toMinor,
   type BroodStage,
   type FailureClause,
@@ -25,6 +30,13 @@ import { FormActions } from '@/components/ui/form-actions';
 export const CURRENCIES = ['EUR', 'USD', 'GBP', 'PLN', 'CHF', 'CZK', 'SEK', 'CAD', 'AUD'];
 export const failureOptions = FAILURE_CLAUSES.map((c) => ({ value: c, label: FAILURE_CLAUSE_LABELS[c] }));
 export const shippingOptions = SHIPPING_PAYERS.map((s) => ({ value: s, label: SHIPPING_LABELS[s] }));
+/** The server's limits on a party's line of the terms. */
+export const LINE_RULES = {
+  weight: { min: 0, max: 1_000_000, decimals: 0, rangeMessage: 'A weight is a whole number from 0 to 1,000,000.' },
+  fixedCount: { min: 0, max: 100_000, decimals: 0, rangeMessage: 'A fixed count is a whole number from 0 to 100,000.' },
+  pickOrder: { min: 1, max: 1000, decimals: 0, rangeMessage: 'Pick orders are whole numbers from 1 (picks first) to 1000.' },
+} as const;
+
 export const handOverOptions = BROOD_STAGES.map((s) => ({ value: s, label: BROOD_STAGE_LABEL_SETS.us[s] }));
 
 interface Values {
@@ -45,6 +57,7 @@ export function ProposeTermsForm({ projectId, members, base }: { projectId: stri
   const parties = members.filter((m) => m.role === 'owner' || m.role === 'partner');
   const form = useForm<Values>({
     mode: 'uncontrolled',
+    validateInputOnBlur: true,
     initialValues: {
       lines: parties.map((m, i) => {
         const prev = base?.lines.find((l) => l.memberId === m.id);
@@ -58,7 +71,13 @@ export function ProposeTermsForm({ projectId, members, base }: { projectId: stri
       note: '',
     },
     validate: {
+      lines: {
+        weight: (v) => checkNumber(String(v), { required: 'Give a weight.', ...LINE_RULES.weight }),
+        fixedCount: (v) => checkNumber(String(v), LINE_RULES.fixedCount),
+        pickOrder: (v) => checkNumber(String(v), { required: 'Give a pick order.', ...LINE_RULES.pickOrder }),
+      },
       price: (v, values) => priceError(v, values.currency),
+      note: (v) => checkText(v, { maxLength: TEXT_LIMITS.note }),
       currency: (v) => (/^[A-Z]{3}$/.test(v) ? null : 'Use a three-letter currency code, e.g. EUR.'),
     },
   });
@@ -110,28 +129,25 @@ export function ProposeTermsForm({ projectId, members, base }: { projectId: stri
                     <Table.Tr key={l.memberId}>
                       <Table.Td>{l.name}</Table.Td>
                       <Table.Td>
-                        <NumberInput
+                        <NumberField
                           aria-label={`Weight of ${l.name}`}
-                          min={0}
-                          allowDecimal={false}
+                          whole
                           key={form.key(`lines.${i}.weight`)}
                           {...form.getInputProps(`lines.${i}.weight`)}
                         />
                       </Table.Td>
                       <Table.Td>
-                        <NumberInput
+                        <NumberField
                           aria-label={`Fixed count of ${l.name}`}
-                          min={0}
-                          allowDecimal={false}
+                          whole
                           key={form.key(`lines.${i}.fixedCount`)}
                           {...form.getInputProps(`lines.${i}.fixedCount`)}
                         />
                       </Table.Td>
                       <Table.Td>
-                        <NumberInput
+                        <NumberField
                           aria-label={`Pick order of ${l.name}`}
-                          min={1}
-                          allowDecimal={false}
+                          whole
                           key={form.key(`lines.${i}.pickOrder`)}
                           {...form.getInputProps(`lines.${i}.pickOrder`)}
                         />
@@ -142,7 +158,7 @@ export function ProposeTermsForm({ projectId, members, base }: { projectId: stri
               </Table>
             </Table.ScrollContainer>
             <SimpleGrid cols={{ base: 1, sm: 3 }}>
-              <NumberInput label="Price per spiderling" min={0} decimalScale={2} key={form.key('price')} {...form.getInputProps('price')} />
+              <NumberField label="Price per spiderling" key={form.key('price')} {...form.getInputProps('price')} />
               <Select label="Currency" data={CURRENCIES} searchable key={form.key('currency')} {...form.getInputProps('currency')} />
               <Select
                 label="If the project fails"
@@ -165,7 +181,7 @@ export function ProposeTermsForm({ projectId, members, base }: { projectId: stri
                 key={form.key('shippingPaidBy')}
                 {...form.getInputProps('shippingPaidBy')}
               />
-              <TextInput label="Note to partners" key={form.key('note')} {...form.getInputProps('note')} />
+              <TextField label="Note to partners" maxLength={TEXT_LIMITS.note} key={form.key('note')} {...form.getInputProps('note')} />
             </SimpleGrid>
             <FormActions message={message} loading={propose.isPending} submitLabel="Propose this version" />
           </Stack>

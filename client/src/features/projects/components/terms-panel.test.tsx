@@ -87,7 +87,13 @@ describe('TermsPanel', () => {
     const button = within(proposed).getByRole('button', { name: 'Accept these terms' });
     expect(within(screen.getByTestId('terms-version-1')).queryByRole('button', { name: 'Accept these terms' })).not.toBeInTheDocument();
     await userEvent.click(button);
+    // Asked once, saying what accepting means; nothing is sent before the answer.
+    const dialog = await screen.findByRole('dialog', { name: 'Accept these terms' });
+    expect(dialog).toHaveTextContent('You agree to version 2');
+    expect(calls.some((c) => c.path.endsWith('/accept'))).toBe(false);
+    await userEvent.click(within(dialog).getByRole('button', { name: 'Yes, accept version 2' }));
     await waitFor(() => expect(calls.some((c) => c.method === 'POST' && c.path === '/api/projects/p1/terms/2/accept')).toBe(true));
+    expect(calls.filter((c) => c.path.endsWith('/accept'))).toHaveLength(1);
   });
 
   it('offers no accept button to a partner who already accepted', async () => {
@@ -104,5 +110,21 @@ describe('TermsPanel', () => {
     renderWithProviders(<TermsPanel projectId="p1" me={{ id: 'u-ines', timeZone: 'UTC' }} myRole="caretaker" members={withCaretaker} />);
     expect(await screen.findByTestId('terms-version-2')).toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Accept these terms' })).not.toBeInTheDocument();
+  });
+});
+
+describe('ProposeTermsForm in the panel', { timeout: 30_000 }, () => {
+  it('refuses a negative weight with a message instead of turning it into 0, and sends nothing', async () => {
+    const { fetchStub, calls } = stub(twoVersions);
+    vi.stubGlobal('fetch', fetchStub);
+    renderWithProviders(<TermsPanel projectId="p1" me={{ id: 'u-mira', timeZone: 'Europe/Berlin' }} myRole="owner" members={members} />);
+    await userEvent.click(await screen.findByRole('button', { name: 'Propose changed terms' }));
+    const weight = screen.getAllByLabelText(/^Weight of /)[0]!;
+    await userEvent.clear(weight);
+    await userEvent.type(weight, '-5');
+    await userEvent.click(screen.getByRole('button', { name: 'Propose this version' }));
+    await waitFor(() => expect(weight).toHaveAccessibleDescription('A weight is a whole number from 0 to 1,000,000.'));
+    expect(weight).toHaveValue('-5');
+    expect(calls.filter((c) => c.method === 'POST')).toHaveLength(0);
   });
 });

@@ -2,6 +2,8 @@ import { Alert, Badge, Button, Card, Group, Stack, Table, Text, Title } from '@m
 import type { Me, ProjectMemberResponse, ProjectRole, TermsVersionResponse } from '@broodsilk/shared';
 import { BROOD_STAGE_LABEL_SETS, formatMoney } from '@broodsilk/shared';
 import { formatInstant } from '@/lib/dates';
+import { useState } from 'react';
+import { ConfirmAction } from '@/components/ui/confirm-action';
 import { useAcceptTerms, useTerms } from '../api/terms';
 import { FAILURE_CLAUSE_LABELS, SHIPPING_LABELS } from '../utils/labels';
 import { ProposeTermsForm } from './propose-terms-form';
@@ -17,6 +19,7 @@ interface TermsPanelProps {
 export function TermsPanel({ projectId, me, myRole, members }: TermsPanelProps) {
   const terms = useTerms(projectId);
   const accept = useAcceptTerms(projectId);
+  const [asking, setAsking] = useState<{ version: number; memberId?: string; name?: string } | null>(null);
   if (terms.isPending) return <Text c="dimmed">Loading the terms…</Text>;
   if (terms.isError) return <Alert color="clay">{terms.error.message}</Alert>;
 
@@ -120,7 +123,7 @@ export function TermsPanel({ projectId, me, myRole, members }: TermsPanelProps) 
             )}
             {mayAccept && (
               <Group mt="sm">
-                <Button loading={accept.isPending} onClick={() => accept.mutate({ version: v.number })}>
+                <Button loading={accept.isPending} disabled={accept.isPending} onClick={() => setAsking({ version: v.number })}>
                   Accept these terms
                 </Button>
               </Group>
@@ -131,7 +134,8 @@ export function TermsPanel({ projectId, me, myRole, members }: TermsPanelProps) 
                   variant="light"
                   size="xs"
                   loading={accept.isPending}
-                  onClick={() => accept.mutate({ version: v.number, body: { memberId: a.memberId, note: 'Recorded by the keeper on their behalf.' } })}
+                  disabled={accept.isPending}
+                  onClick={() => setAsking({ version: v.number, memberId: a.memberId, name: a.name })}
                 >
                   Record {a.name}&apos;s acceptance
                 </Button>
@@ -140,6 +144,29 @@ export function TermsPanel({ projectId, me, myRole, members }: TermsPanelProps) 
           </Card>
         );
       })}
+      {asking && (
+        <ConfirmAction
+          opened
+          onClose={() => setAsking(null)}
+          title={asking.name ? `Record ${asking.name}'s acceptance` : 'Accept these terms'}
+          confirmLabel={asking.name ? 'Record the acceptance' : 'Yes, accept version ' + asking.version}
+          pending={accept.isPending}
+          message={accept.isError ? accept.error.message : null}
+          onConfirm={() =>
+            accept.mutate(
+              asking.memberId
+                ? { version: asking.version, body: { memberId: asking.memberId, note: 'Recorded by the keeper on their behalf.' } }
+                : { version: asking.version },
+              { onSuccess: () => setAsking(null) },
+            )
+          }
+        >
+          <Text size="sm">
+            {asking.name ? `${asking.name} agrees` : 'You agree'} to version {asking.version}: the split and prices shown above. When every partner has
+            accepted, it replaces the terms in force. An acceptance cannot be withdrawn; a change needs a new version.
+          </Text>
+        </ConfirmAction>
+      )}
       {myRole === 'owner' && <ProposeTermsForm projectId={projectId} members={members} base={latest} />}
     </Stack>
   );

@@ -1,8 +1,21 @@
-import { Alert, Button, Checkbox, Collapse, Group, NumberInput, Select, SimpleGrid, Stack, Table, Text, TextInput } from '@mantine/core';
+import { Alert, Button, Checkbox, Collapse, Group, Select, SimpleGrid, Stack, Table, Text } from '@mantine/core';
+import { NumberField } from '@/components/fields/number-field';
+import { TextField } from '@/components/fields/text-field';
+import { textRule } from '@/components/fields/text-rule';
+import { numberRule, readNumber } from '@/components/fields/typed-number';
+import { ScrollTable } from '@/components/ui/scroll-table';
 import { useForm } from '@mantine/form';
 import { useDisclosure } from '@mantine/hooks';
 import { useState } from 'react';
-import { BROOD_LOSS_REASONS, BROOD_STAGES, type BroodCountRequest, type BroodLossReason, type BroodStage } from '@broodsilk/shared';
+import {
+  BROOD_COUNT_MAX,
+  BROOD_LOSS_REASONS,
+  BROOD_STAGES,
+  TEXT_LIMITS,
+  type BroodCountRequest,
+  type BroodLossReason,
+  type BroodStage,
+} from '@broodsilk/shared';
 import { formatInstant } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useBroodCounts, useRecordBroodCount } from '../api/brood';
@@ -19,14 +32,16 @@ const LOSS_LABELS: Record<BroodLossReason, string> = {
   other: 'Other',
 };
 
+const COUNT = { min: 0, max: BROOD_COUNT_MAX, decimals: 0, rangeMessage: `A whole number from 0 to ${BROOD_COUNT_MAX}.` };
+
 const stageOptions = BROOD_STAGES.map((s) => ({ value: s, label: broodLabel(s) }));
 const lossOptions = BROOD_LOSS_REASONS.map((r) => ({ value: r, label: LOSS_LABELS[r] }));
 
 interface Values {
   stage: BroodStage;
-  alive: number | string;
+  alive: string;
   estimated: boolean;
-  lost: number | string;
+  lost: string;
   lossReason: BroodLossReason | null;
   note: string;
 }
@@ -39,10 +54,13 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
   const [message, setMessage] = useState<string | null>(null);
   const form = useForm<Values>({
     mode: 'uncontrolled',
-    initialValues: { stage, alive: '', estimated: false, lost: 0, lossReason: null, note: '' },
+    validateInputOnBlur: true,
+    initialValues: { stage, alive: '', estimated: false, lost: '0', lossReason: null, note: '' },
     validate: {
-      alive: (v) => (v === '' || Number(v) < 0 ? 'How many are alive?' : null),
-      lossReason: (v, values) => (Number(values.lost) > 0 && !v ? 'Why were they lost?' : null),
+      alive: numberRule({ required: 'How many are alive?', ...COUNT }),
+      lost: numberRule(COUNT),
+      lossReason: (v, values) => ((readNumber(values.lost) ?? 0) > 0 && !v ? 'Why were they lost?' : null),
+      note: textRule({ maxLength: TEXT_LIMITS.note }),
     },
   });
   const warned = useWarnedSave(
@@ -57,10 +75,10 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
     setMessage(null);
     return warned.save({
       stage: v.stage,
-      alive: Number(v.alive),
+      alive: readNumber(v.alive)!,
       estimated: v.estimated,
-      lost: Number(v.lost) || 0,
-      ...(Number(v.lost) > 0 && v.lossReason ? { lossReason: v.lossReason } : {}),
+      lost: readNumber(v.lost) ?? 0,
+      ...((readNumber(v.lost) ?? 0) > 0 && v.lossReason ? { lossReason: v.lossReason } : {}),
       note: v.note.trim() || null,
     });
   });
@@ -73,7 +91,7 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
           <Text size="sm">
             Alive now: <b>{counts.data.current ?? '—'}</b>
           </Text>
-          <Table.ScrollContainer minWidth={360}>
+          <ScrollTable minWidth={360} label="Brood counts">
             <Table verticalSpacing={4} fz="sm" data-testid="brood-counts">
               <Table.Thead>
                 <Table.Tr>
@@ -108,7 +126,7 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
                   ))}
               </Table.Tbody>
             </Table>
-          </Table.ScrollContainer>
+          </ScrollTable>
         </>
       )}
       {canRecord && (
@@ -123,16 +141,16 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
               <Stack maw={520}>
                 <SimpleGrid cols={{ base: 2, sm: 4 }}>
                   <Select label="Stage" data={stageOptions} allowDeselect={false} key={form.key('stage')} {...form.getInputProps('stage')} />
-                  <NumberInput label="Alive" min={0} allowDecimal={false} key={form.key('alive')} {...form.getInputProps('alive')} />
+                  <NumberField label="Alive" whole key={form.key('alive')} {...form.getInputProps('alive')} />
                   <Checkbox
                     label="An estimate, not counted one by one"
                     key={form.key('estimated')}
                     {...form.getInputProps('estimated', { type: 'checkbox' })}
                   />
-                  <NumberInput label="Lost" min={0} allowDecimal={false} key={form.key('lost')} {...form.getInputProps('lost')} />
+                  <NumberField label="Lost" whole key={form.key('lost')} {...form.getInputProps('lost')} />
                   <Select label="Lost because" data={lossOptions} key={form.key('lossReason')} {...form.getInputProps('lossReason')} />
                 </SimpleGrid>
-                <TextInput label="Note" key={form.key('note')} {...form.getInputProps('note')} />
+                <TextField label="Note" maxLength={TEXT_LIMITS.note} key={form.key('note')} {...form.getInputProps('note')} />
                 {warned.warnings && (
                   <WarningConfirm warnings={warned.warnings} loading={record.isPending} onConfirm={warned.confirm} onCancel={warned.cancel} />
                 )}

@@ -1,6 +1,9 @@
-import { Alert, Badge, Button, Group, Popover, Stack, Table, Text, TextInput } from '@mantine/core';
+import { Alert, Badge, Button, Group, Popover, Stack, Table, Text } from '@mantine/core';
+import { TextField } from '@/components/fields/text-field';
+import { checkText } from '@/components/fields/text-rule';
+import { ScrollTable } from '@/components/ui/scroll-table';
 import { useState } from 'react';
-import { formatTemperature, type CareLogEntryResponse, type CareLogKind, type TemperatureUnit } from '@broodsilk/shared';
+import { TEXT_LIMITS, formatTemperature, type CareLogEntryResponse, type CareLogKind, type TemperatureUnit } from '@broodsilk/shared';
 import { formatInstant } from '@/lib/dates';
 import { isApiError } from '@/lib/api-error';
 import { useAddCareLogEntry, useCareLog } from '../api/care-log';
@@ -45,7 +48,14 @@ function StrikeButton({ sacId, entry }: { sacId: string; entry: CareLogEntryResp
       </Popover.Target>
       <Popover.Dropdown>
         <Stack gap="xs" w={260}>
-          <TextInput label="Why is this entry wrong?" value={reason} onChange={(e) => setReason(e.currentTarget.value)} data-autofocus />
+          <TextField
+            label="Why is this entry wrong?"
+            maxLength={TEXT_LIMITS.correctionReason}
+            value={reason}
+            onChange={(e) => setReason(e.currentTarget.value)}
+            error={checkText(reason, { maxLength: TEXT_LIMITS.correctionReason })}
+            data-autofocus
+          />
           {error && (
             <Text size="xs" className="tone-failed" role="alert">
               {error}
@@ -54,7 +64,7 @@ function StrikeButton({ sacId, entry }: { sacId: string; entry: CareLogEntryResp
           <Button
             size="xs"
             color="clay"
-            disabled={!reason.trim()}
+            disabled={!reason.trim() || reason.length > TEXT_LIMITS.correctionReason || add.isPending}
             loading={add.isPending}
             onClick={async () => {
               setError(null);
@@ -92,7 +102,7 @@ export function CareLogList({
   if (log.data.length === 0) return <Text c="dimmed">No entries yet.</Text>;
   const entries = [...log.data].sort((a, b) => (a.at < b.at ? 1 : -1));
   return (
-    <Table.ScrollContainer minWidth={360}>
+    <ScrollTable minWidth={360} label="Care log">
       <Table verticalSpacing={4} fz="sm" data-testid="care-log">
         <Table.Thead>
           <Table.Tr>
@@ -133,6 +143,6 @@ export function CareLogList({
           })}
         </Table.Tbody>
       </Table>
-    </Table.ScrollContainer>
+    </ScrollTable>
   );
 }

@@ -1,7 +1,7 @@
-import { screen, waitFor } from '@testing-library/react';
+import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { INCUBATOR_CAUTION, type SacResponse } from '@broodsilk/shared';
+import { INCUBATOR_CAUTION, addDays, todayIn, type SacResponse } from '@broodsilk/shared';
 import { renderWithProviders, stubFetch } from '@/testing/render';
 import { IncubatorEntry } from './incubator-entry';
 
@@ -126,5 +126,54 @@ describe('IncubatorEntry', () => {
     expect(screen.queryByRole('button', { name: 'Rolled now' })).not.toBeInTheDocument();
     expect(screen.getByRole('button', { name: 'Pulled now, into the incubator' })).toBeInTheDocument();
     expect(screen.getByTestId('heat-caution')).toHaveTextContent(/thermostat/);
+  });
+});
+
+// A loaded machine renders these slowly; nothing here is timed.
+describe('IncubatorEntry: typed readings and the pull', { timeout: 30_000 }, () => {
+  it('refuses a humidity of 150 with a message instead of clamping it to 100, and sends nothing', async () => {
+    const { fetchStub, calls } = stubFetch({});
+    vi.stubGlobal('fetch', fetchStub);
+    renderWithProviders(<IncubatorEntry sac={sac} timeZone="UTC" temperatureUnit="C" />);
+    const humidity = screen.getByLabelText('Humidity (%)');
+    await userEvent.type(humidity, '150');
+    expect(humidity).toHaveAccessibleDescription('150 is out of range: give a number from 0 to 100.');
+    await userEvent.click(screen.getByRole('button', { name: 'Save readings' }));
+    expect(humidity).toHaveValue('150');
+    expect(calls.filter((c) => c.method === 'POST')).toHaveLength(0);
+  });
+
+  it('asks before recording the pull, warns on a day before the window and sends the earlier time given', async () => {
+    const { fetchStub, calls } = stubFetch({
+      'GET /api/auth/csrf': () => ({ status: 200, body: { csrfToken: 't' } }),
+      'PATCH /api/sacs/s1': () => ({ status: 200, body: { ...sac } }),
+    });
+    vi.stubGlobal('fetch', fetchStub);
+    const layDate = addDays(todayIn('UTC', new Date()), -40);
+    const withMother = {
+      ...sac,
+      layDate,
+      pulled: false,
+      pulledAt: null,
+      pulledOn: null,
+      roll: null,
+      pullWindow: { ...sac.pullWindow, fromDay: 30, toDay: 45 },
+    };
+    renderWithProviders(<IncubatorEntry sac={withMother} timeZone="UTC" temperatureUnit="C" />);
+    await userEvent.click(screen.getByRole('button', { name: 'Pulled now, into the incubator' }));
+    const dialog = await screen.findByRole('dialog', { name: 'Record the pull' });
+    expect(calls.filter((c) => c.method === 'PATCH')).toHaveLength(0);
+
+    const day22 = addDays(layDate, 22);
+    const date = within(dialog).getByLabelText('Pulled on');
+    await userEvent.clear(date);
+    await userEvent.type(date, day22);
+    const time = within(dialog).getByLabelText('At');
+    await userEvent.clear(time);
+    await userEvent.type(time, '07:15');
+    expect(within(dialog).getByTestId('confirm-warning')).toHaveTextContent("That is day 22, before this sac's pull window (days 30–45)");
+    await userEvent.click(within(dialog).getByRole('button', { name: 'Record the pull' }));
+    await waitFor(() => expect(calls.filter((c) => c.method === 'PATCH')).toHaveLength(1));
+    expect(calls.find((c) => c.method === 'PATCH')?.body).toEqual({ pulledAt: `${day22}T07:15:00.000Z` });
   });
 });

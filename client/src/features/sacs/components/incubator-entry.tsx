@@ -1,7 +1,17 @@
-import { Alert, Box, Button, Group, NumberInput, Select, Stack, Text, TextInput } from '@mantine/core';
+import { Alert, Box, Button, Group, Select, Stack, Text } from '@mantine/core';
+import { useDisclosure } from '@mantine/hooks';
 import { useRef, useState } from 'react';
+import { NumberField } from '@/components/fields/number-field';
+import { TextField } from '@/components/fields/text-field';
+import { checkText } from '@/components/fields/text-rule';
+import { checkNumber, readNumber } from '@/components/fields/typed-number';
+import { PullConfirmation } from './pull-confirmation';
 import {
   BROOD_STAGES,
+  HUMIDITY_LIMITS,
+  TEMPERATURE_LIMITS_C,
+  TEXT_LIMITS,
+  celsiusToFahrenheit,
   fahrenheitToCelsius,
   formatTemperature,
   type BroodStage,
@@ -37,8 +47,9 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
   const update = useUpdateSac(sac.id);
   const [done, setDone] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
-  const [temperature, setTemperature] = useState<number | string>('');
-  const [humidity, setHumidity] = useState<number | string>('');
+  const [temperature, setTemperature] = useState('');
+  const [humidity, setHumidity] = useState('');
+  const [pullOpen, pull] = useDisclosure(false);
   const [note, setNote] = useState('');
   const [stage, setStage] = useState<string | null>(null);
 
@@ -65,10 +76,22 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
       return `${what} logged${last ? ` at ${formatInstant(last.at, timeZone)}` : ''}.`;
     }, 'The entry was not saved. Try again.');
 
+  const limits =
+    temperatureUnit === 'F' ? { min: celsiusToFahrenheit(TEMPERATURE_LIMITS_C.min), max: celsiusToFahrenheit(TEMPERATURE_LIMITS_C.max) } : TEMPERATURE_LIMITS_C;
+  const temperatureError = checkNumber(temperature, { ...limits, decimals: 1 });
+  const humidityError = checkNumber(humidity, { ...HUMIDITY_LIMITS, decimals: 0 });
+  const noteError = checkText(note, { maxLength: TEXT_LIMITS.note });
+
   async function saveReadings() {
+    if (temperatureError || humidityError) {
+      setError('Correct the reading marked above first.');
+      return;
+    }
     const entries: CareLogRequest[] = [];
-    if (temperature !== '') entries.push({ kind: 'temperature', temperature: { value: Number(temperature), unit: temperatureUnit } });
-    if (humidity !== '') entries.push({ kind: 'humidity', humidityPercent: Number(humidity) });
+    const t = readNumber(temperature);
+    const h = readNumber(humidity);
+    if (t !== null) entries.push({ kind: 'temperature', temperature: { value: t, unit: temperatureUnit } });
+    if (h !== null) entries.push({ kind: 'humidity', humidityPercent: h });
     if (entries.length === 0) {
       setError('Enter a temperature or a humidity first.');
       return;
@@ -81,7 +104,8 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
 
   const roll = sac.roll;
   const rollText = roll ? ROLL_TEXT[roll.status] : null;
-  const tempHint = temperature !== '' && temperatureUnit === 'F' ? formatTemperature(fahrenheitToCelsius(Number(temperature)), 'C') : null;
+  const tempValue = temperatureError ? null : readNumber(temperature);
+  const tempHint = tempValue !== null && temperatureUnit === 'F' ? formatTemperature(fahrenheitToCelsius(tempValue), 'C') : null;
 
   return (
     <Stack gap="md" className={classes.screen}>
@@ -126,23 +150,30 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
       </Alert>
 
       <Group grow align="flex-end">
-        <NumberInput
+        <NumberField
           label={`Temperature (°${temperatureUnit})`}
           size="lg"
-          decimalScale={1}
-          inputMode="decimal"
           value={temperature}
-          onChange={setTemperature}
+          onChange={(e) => setTemperature(e.currentTarget.value)}
           description={tempHint ? `= ${tempHint}` : undefined}
+          error={temperatureError}
         />
-        <NumberInput label="Humidity (%)" size="lg" min={0} max={100} allowDecimal={false} inputMode="numeric" value={humidity} onChange={setHumidity} />
+        <NumberField label="Humidity (%)" size="lg" whole value={humidity} onChange={(e) => setHumidity(e.currentTarget.value)} error={humidityError} />
       </Group>
-      <Button size="lg" variant="light" onClick={saveReadings} loading={add.isPending}>
+      <Button size="lg" variant="light" onClick={saveReadings} loading={add.isPending} disabled={add.isPending}>
         Save readings
       </Button>
 
       <Group grow align="flex-end">
-        <TextInput label="Note" size="lg" value={note} onChange={(e) => setNote(e.currentTarget.value)} placeholder="e.g. a little condensation" />
+        <TextField
+          label="Note"
+          size="lg"
+          maxLength={TEXT_LIMITS.note}
+          value={note}
+          onChange={(e) => setNote(e.currentTarget.value)}
+          error={noteError}
+          placeholder="e.g. a little condensation"
+        />
       </Group>
       <Group grow>
         <Button size="lg" variant="default" onClick={() => send([{ kind: 'check' }], 'Check')} loading={add.isPending}>
@@ -151,7 +182,7 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
         <Button
           size="lg"
           variant="default"
-          disabled={!note.trim()}
+          disabled={!note.trim() || !!noteError || add.isPending}
           onClick={async () => {
             if (await send([{ kind: 'note', text: note.trim() }], 'Note')) setNote('');
           }}
@@ -184,19 +215,7 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
           </Text>
         )}
         {!sac.pulled && sac.outcome === 'in-progress' ? (
-          <Button
-            fullWidth
-            size="xl"
-            h={76}
-            fz={22}
-            loading={update.isPending}
-            onClick={() =>
-              run(async () => {
-                await update.mutateAsync({ pulledAt: new Date().toISOString() });
-                return 'Pulled: the first roll is due now.';
-              }, 'The pull was not saved. Try again.')
-            }
-          >
+          <Button fullWidth size="xl" h={76} fz={22} loading={update.isPending} onClick={pull.open}>
             Pulled now, into the incubator
           </Button>
         ) : (
@@ -214,6 +233,22 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
           </Button>
         )}
       </Box>
+      {pullOpen && (
+        <PullConfirmation
+          opened
+          onClose={pull.close}
+          sac={sac}
+          timeZone={timeZone}
+          pending={update.isPending}
+          onConfirm={async (pulledAt) => {
+            pull.close();
+            await run(async () => {
+              await update.mutateAsync({ pulledAt });
+              return 'Pulled: the first roll is counted from the pull.';
+            }, 'The pull was not saved. Try again.');
+          }}
+        />
+      )}
     </Stack>
   );
 }

@@ -1,8 +1,14 @@
-import { Alert, Image, NumberInput, SimpleGrid, Stack, Table, Text, Textarea } from '@mantine/core';
+import { Alert, Image, SimpleGrid, Stack, Table, Text } from '@mantine/core';
 import { Dropzone, IMAGE_MIME_TYPE } from '@mantine/dropzone';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import type { OpeningResponse, SacResponse } from '@broodsilk/shared';
+import { BROOD_COUNT_MAX, TEXT_LIMITS, type OpeningRequest, type OpeningResponse, type SacResponse } from '@broodsilk/shared';
+import { NumberField } from '@/components/fields/number-field';
+import { TextAreaField } from '@/components/fields/text-field';
+import { textRule } from '@/components/fields/text-rule';
+import { checkNumber, numberRule, readNumber } from '@/components/fields/typed-number';
+import { useWhen, WhenFields } from '@/components/fields/when-fields';
+import { ConfirmAction } from '@/components/ui/confirm-action';
 import { formatInstant } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
 import { isApiError } from '@/lib/api-error';
@@ -19,7 +25,7 @@ const COUNT_FIELDS = [
 ] as const;
 
 type CountKey = (typeof COUNT_FIELDS)[number][0];
-type Values = Record<CountKey, number | string> & { notes: string };
+type Values = Record<CountKey, string> & { notes: string };
 
 function photoSrc(url: string) {
   return url.startsWith('/api/') || /^https?:/.test(url) ? url : `/api${url.startsWith('/') ? '' : '/'}${url}`;
@@ -69,6 +75,7 @@ function OpeningView({ opening, timeZone, sacId, canEdit }: { opening: OpeningRe
             }
           }}
           onReject={() => setError('Only images up to 15 MB.')}
+          inputProps={{ 'aria-label': 'Choose photos of the opening' }}
         >
           <Text size="sm" ta="center" c="dimmed">
             Drop photos of the opening here, or tap to choose (location data is removed on upload).
@@ -84,42 +91,42 @@ function OpeningView({ opening, timeZone, sacId, canEdit }: { opening: OpeningRe
   );
 }
 
+const COUNT = { min: 0, max: BROOD_COUNT_MAX, decimals: 0, rangeMessage: `A whole number from 0 to ${BROOD_COUNT_MAX}.` };
+
 /** The opening of a sac: what was found, once; before that, the form to record it. */
 export function OpeningPanel({ sac, timeZone, canEdit }: { sac: Pick<SacResponse, 'id' | 'opened'>; timeZone: string; canEdit: boolean }) {
   const sacId = sac.id;
   const opening = useOpening(sac);
-  const record = useRecordOpening(sacId);
-  const [message, setMessage] = useState<string | null>(null);
-  const form = useForm<Values>({
-    mode: 'uncontrolled',
-    initialValues: { healthyEggs: 0, eggsWithLegs: 0, nymphs: 0, darkEggs: 0, spoiledEggs: 0, keptBack: 0, notes: '' },
-    validate: {
-      keptBack: (v, values) =>
-        Number(v) > Number(values.healthyEggs) + Number(values.eggsWithLegs) + Number(values.nymphs)
-          ? 'No more than the viable ones (healthy eggs, eggs with legs, nymphs).'
-          : null,
-    },
-  });
   if (sac.opened && opening.isPending) return <Text c="dimmed">Loading…</Text>;
   if (opening.isError) return <Alert color="clay">{opening.error.message}</Alert>;
   if (opening.data) return <OpeningView opening={opening.data} timeZone={timeZone} sacId={sacId} canEdit={canEdit} />;
   if (!canEdit) return <Text c="dimmed">Not opened yet.</Text>;
+  return <OpeningForm sacId={sacId} timeZone={timeZone} />;
+}
 
-  const submit = form.onSubmit(async (v) => {
+/** Recorded once: the form is checked, then the keeper confirms what will be saved and when the sac was opened. */
+function OpeningForm({ sacId, timeZone }: { sacId: string; timeZone: string }) {
+  const record = useRecordOpening(sacId);
+  const [message, setMessage] = useState<string | null>(null);
+  const [asking, setAsking] = useState<OpeningRequest | null>(null);
+  const form = useForm<Values>({
+    mode: 'uncontrolled',
+    validateInputOnBlur: true,
+    initialValues: { healthyEggs: '0', eggsWithLegs: '0', nymphs: '0', darkEggs: '0', spoiledEggs: '0', keptBack: '0', notes: '' },
+    validate: {
+      ...Object.fromEntries(COUNT_FIELDS.map(([k]) => [k, numberRule(COUNT)])),
+      keptBack: (v, values) =>
+        checkNumber(v, COUNT) ??
+        ((readNumber(v) ?? 0) > (readNumber(values.healthyEggs) ?? 0) + (readNumber(values.eggsWithLegs) ?? 0) + (readNumber(values.nymphs) ?? 0)
+          ? 'No more than the viable ones (healthy eggs, eggs with legs, nymphs).'
+          : null),
+      notes: textRule({ maxLength: TEXT_LIMITS.note }),
+    },
+  });
+  const submit = form.onSubmit((v) => {
     setMessage(null);
-    try {
-      await record.mutateAsync({
-        healthyEggs: Number(v.healthyEggs) || 0,
-        eggsWithLegs: Number(v.eggsWithLegs) || 0,
-        nymphs: Number(v.nymphs) || 0,
-        darkEggs: Number(v.darkEggs) || 0,
-        spoiledEggs: Number(v.spoiledEggs) || 0,
-        keptBack: Number(v.keptBack) || 0,
-        notes: v.notes.trim() || null,
-      });
-    } catch (e) {
-      setMessage(applyServerErrors(form, e));
-    }
+    const counts = Object.fromEntries(COUNT_FIELDS.map(([k]) => [k, readNumber(v[k]) ?? 0])) as Record<CountKey, number>;
+    setAsking({ ...counts, notes: v.notes.trim() || null });
   });
   return (
     <form onSubmit={submit} noValidate>
@@ -129,12 +136,62 @@ export function OpeningPanel({ sac, timeZone, canEdit }: { sac: Pick<SacResponse
         </Text>
         <SimpleGrid cols={{ base: 2, sm: 3 }}>
           {COUNT_FIELDS.map(([k, label]) => (
-            <NumberInput key={form.key(k)} label={label} min={0} allowDecimal={false} inputMode="numeric" {...form.getInputProps(k)} />
+            <NumberField key={form.key(k)} label={label} whole {...form.getInputProps(k)} />
           ))}
         </SimpleGrid>
-        <Textarea label="Notes" autosize minRows={2} key={form.key('notes')} {...form.getInputProps('notes')} />
+        <TextAreaField label="Notes" maxLength={TEXT_LIMITS.note} key={form.key('notes')} {...form.getInputProps('notes')} />
         <FormActions message={message} loading={record.isPending} submitLabel="Save opening" />
       </Stack>
+      {asking && (
+        <ConfirmOpening
+          counts={asking}
+          timeZone={timeZone}
+          pending={record.isPending}
+          onClose={() => setAsking(null)}
+          onConfirm={async (openedAt) => {
+            try {
+              await record.mutateAsync({ ...asking, openedAt });
+            } catch (e) {
+              setMessage(applyServerErrors(form, e));
+            }
+            setAsking(null);
+          }}
+        />
+      )}
     </form>
+  );
+}
+
+function ConfirmOpening({
+  counts,
+  timeZone,
+  pending,
+  onClose,
+  onConfirm,
+}: {
+  counts: OpeningRequest;
+  timeZone: string;
+  pending: boolean;
+  onClose: () => void;
+  onConfirm: (openedAt: string) => void;
+}) {
+  const when = useWhen(timeZone);
+  const viable = counts.healthyEggs + counts.eggsWithLegs + counts.nymphs;
+  return (
+    <ConfirmAction
+      opened
+      onClose={onClose}
+      title="Record the opening"
+      confirmLabel="Record the opening"
+      pending={pending}
+      ready={when.instant !== null}
+      onConfirm={() => when.instant && onConfirm(when.instant)}
+    >
+      <Text size="sm">
+        A sac is opened once: this records {viable} viable of {viable + counts.darkEggs + counts.spoiledEggs}, and the viable ones start the brood&apos;s count.
+        Change the day or time if you opened it earlier.
+      </Text>
+      <WhenFields when={when} dateLabel="Opened on" />
+    </ConfirmAction>
   );
 }

@@ -1,8 +1,12 @@
-import { Group, SegmentedControl, Stack, Text, Textarea } from '@mantine/core';
-import { DateInput, TimeInput } from '@mantine/dates';
+import { Group, SegmentedControl, Stack, Text } from '@mantine/core';
+import { TimeInput } from '@mantine/dates';
+import { DateField } from '@/components/fields/date-field';
+import { TextAreaField } from '@/components/fields/text-field';
+import { textRule } from '@/components/fields/text-rule';
+import { checkDate, readDate } from '@/components/fields/typed-date';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import { todayIn, type CreateSacRequest } from '@broodsilk/shared';
+import { TEXT_LIMITS, todayIn, type CreateSacRequest } from '@broodsilk/shared';
 import { dayjs } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateSac } from '../api/sacs';
@@ -10,9 +14,9 @@ import { FormActions } from '@/components/ui/form-actions';
 import { WarningConfirm, useWarnedSave } from '@/components/ui/warning-confirm';
 
 interface Values {
-  layDate: string | null;
+  layDate: string;
   where: 'mother' | 'pulled';
-  pulledOn: string | null;
+  pulledOn: string;
   pulledTime: string;
   notes: string;
 }
@@ -24,15 +28,21 @@ export function RecordSacForm({ projectId, timeZone, onDone }: { projectId: stri
   const today = todayIn(timeZone, new Date());
   const form = useForm<Values>({
     mode: 'uncontrolled',
-    initialValues: { layDate: null, where: 'mother', pulledOn: null, pulledTime: '08:00', notes: '' },
+    validateInputOnBlur: true,
+    initialValues: { layDate: '', where: 'mother', pulledOn: '', pulledTime: '08:00', notes: '' },
     validate: {
-      layDate: (v) => (!v ? 'On which day was the sac laid?' : v > today ? 'The lay date cannot be in the future.' : null),
+      layDate: (v) => checkDate(v, { required: 'On which day was the sac laid?', latest: today, latestMessage: 'The lay date cannot be in the future.' }),
       pulledOn: (v, values) =>
-        values.where === 'pulled' && !v
-          ? 'On which day was it pulled?'
-          : v && values.layDate && v < values.layDate
-            ? 'The pull comes after the lay date.'
-            : null,
+        values.where === 'pulled'
+          ? checkDate(v, {
+              required: 'On which day was it pulled?',
+              latest: today,
+              latestMessage: 'A pull that has happened cannot be in the future.',
+              earliest: readDate(values.layDate) ?? undefined,
+              earliestMessage: 'The pull comes after the lay date.',
+            })
+          : null,
+      notes: textRule({ maxLength: TEXT_LIMITS.note }),
     },
   });
   const [where, setWhere] = useState<Values['where']>('mother');
@@ -49,8 +59,8 @@ export function RecordSacForm({ projectId, timeZone, onDone }: { projectId: stri
   const submit = form.onSubmit((v) => {
     setMessage(null);
     return warned.save({
-      layDate: v.layDate!,
-      pulledAt: v.where === 'pulled' && v.pulledOn ? dayjs.tz(`${v.pulledOn}T${v.pulledTime || '08:00'}`, timeZone).toISOString() : null,
+      layDate: readDate(v.layDate)!,
+      pulledAt: v.where === 'pulled' && v.pulledOn ? dayjs.tz(`${readDate(v.pulledOn)}T${v.pulledTime || '08:00'}`, timeZone).toISOString() : null,
       notes: v.notes.trim() || null,
     });
   });
@@ -58,15 +68,7 @@ export function RecordSacForm({ projectId, timeZone, onDone }: { projectId: stri
   return (
     <form onSubmit={submit} noValidate>
       <Stack maw={480}>
-        <DateInput
-          label="Lay date"
-          placeholder="YYYY-MM-DD"
-          valueFormat="YYYY-MM-DD"
-          maxDate={today}
-          withAsterisk
-          key={form.key('layDate')}
-          {...form.getInputProps('layDate')}
-        />
+        <DateField label="Lay date" withAsterisk key={form.key('layDate')} {...form.getInputProps('layDate')} />
         <Stack gap={4}>
           <Text size="sm" fw={500}>
             Where is the sac?
@@ -82,18 +84,11 @@ export function RecordSacForm({ projectId, timeZone, onDone }: { projectId: stri
         </Stack>
         {where === 'pulled' && (
           <Group grow align="flex-start">
-            <DateInput
-              label="Pulled on"
-              placeholder="YYYY-MM-DD"
-              valueFormat="YYYY-MM-DD"
-              maxDate={today}
-              key={form.key('pulledOn')}
-              {...form.getInputProps('pulledOn')}
-            />
+            <DateField label="Pulled on" key={form.key('pulledOn')} {...form.getInputProps('pulledOn')} />
             <TimeInput label="At" key={form.key('pulledTime')} {...form.getInputProps('pulledTime')} />
           </Group>
         )}
-        <Textarea label="Notes" autosize minRows={2} key={form.key('notes')} {...form.getInputProps('notes')} />
+        <TextAreaField label="Notes" maxLength={TEXT_LIMITS.note} key={form.key('notes')} {...form.getInputProps('notes')} />
         {warned.warnings && <WarningConfirm warnings={warned.warnings} loading={create.isPending} onConfirm={warned.confirm} onCancel={warned.cancel} />}
         <FormActions message={message} loading={create.isPending} submitLabel="Save sac" />
       </Stack>

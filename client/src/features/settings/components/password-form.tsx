@@ -1,4 +1,5 @@
-import { Button, PasswordInput, Stack } from '@mantine/core';
+import { PasswordInput, Stack } from '@mantine/core';
+import { FormActions } from '@/components/ui/form-actions';
 import { useForm } from '@mantine/form';
 import { notifications } from '@mantine/notifications';
 import { MIN_PASSWORD_LENGTH } from '@broodsilk/shared';
@@ -33,9 +34,7 @@ export function PasswordForm() {
           {...form.getInputProps('currentPassword')}
         />
         <PasswordInput label="New password" autoComplete="new-password" withAsterisk key={form.key('newPassword')} {...form.getInputProps('newPassword')} />
-        <Button type="submit" variant="light" loading={change.isPending} w="fit-content">
-          Change password
-        </Button>
+        <FormActions message={null} loading={change.isPending} submitLabel="Change password" />
       </Stack>
     </form>
   );

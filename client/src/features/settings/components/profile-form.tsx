@@ -1,7 +1,10 @@
-import { Button, Select, SegmentedControl, Stack, Text, TextInput } from '@mantine/core';
+import { Select, SegmentedControl, Stack, Text } from '@mantine/core';
+import { TextField } from '@/components/fields/text-field';
+import { textRule } from '@/components/fields/text-rule';
+import { FormActions } from '@/components/ui/form-actions';
 import { useForm } from '@mantine/form';
 import { notifications } from '@mantine/notifications';
-import type { Me, TemperatureUnit } from '@broodsilk/shared';
+import { TEXT_LIMITS, type Me, type TemperatureUnit } from '@broodsilk/shared';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useUpdateProfile } from '../api/profile';
 
@@ -12,6 +15,7 @@ export function ProfileForm({ me }: { me: Me }) {
   const form = useForm({
     mode: 'uncontrolled',
     initialValues: { displayName: me.displayName, timeZone: me.timeZone, temperatureUnit: me.temperatureUnit as TemperatureUnit },
+    validate: { displayName: textRule({ required: 'Give the name to show to your partners.', maxLength: TEXT_LIMITS.displayName }) },
   });
   return (
     <form
@@ -23,7 +27,7 @@ export function ProfileForm({ me }: { me: Me }) {
       )}
     >
       <Stack maw={480}>
-        <TextInput label="Display name" withAsterisk key={form.key('displayName')} {...form.getInputProps('displayName')} />
+        <TextField label="Display name" maxLength={TEXT_LIMITS.displayName} withAsterisk key={form.key('displayName')} {...form.getInputProps('displayName')} />
         <Select
           label="Time zone"
           description="Dates, day numbers and what is due today follow this zone."
@@ -45,9 +49,7 @@ export function ProfileForm({ me }: { me: Me }) {
             {...form.getInputProps('temperatureUnit')}
           />
         </div>
-        <Button type="submit" loading={update.isPending} w="fit-content">
-          Save settings
-        </Button>
+        <FormActions message={null} loading={update.isPending} submitLabel="Save settings" />
       </Stack>
     </form>
   );

@@ -41,7 +41,7 @@ export function CautionNotice({ species }: { species: CautionSpecies }) {
             <List.Item>
               <b>Urticating hairs.</b> Wear eye protection when working in the enclosure, do not rub your eyes, and wash your hands afterwards. Hairs in an eye
               need a doctor.{' '}
-              <Text span size="xs" c="dimmed">
+              <Text span size="xs" fs="italic">
                 (Source: {sourceLabel(urticatingHairs.source)})
               </Text>
             </List.Item>
@@ -50,7 +50,7 @@ export function CautionNotice({ species }: { species: CautionSpecies }) {
             <List.Item>
               <b>Medically significant venom.</b> A bite can bring severe pain and muscle cramps lasting days. Work with tools rather than hands, keep the
               enclosure escape-proof, and seek medical help after a bite.{' '}
-              <Text span size="xs" c="dimmed">
+              <Text span size="xs" fs="italic">
                 (Source: {sourceLabel(medicallySignificantVenom.source)})
               </Text>
             </List.Item>
@@ -58,7 +58,7 @@ export function CautionNotice({ species }: { species: CautionSpecies }) {
           {listing && (
             <List.Item>
               <b>{listing}.</b> Selling, lending, shipping or breeding this species may need papers or permits; the rules of your country decide.{' '}
-              <Text span size="xs" c="dimmed">
+              <Text span size="xs" fs="italic">
                 (Source: {sourceLabel(species.tradeListing.source)})
               </Text>
             </List.Item>

@@ -1,4 +1,5 @@
-import { Badge, Card, Group, Pagination, Select, SimpleGrid, Stack, Text, TextInput } from '@mantine/core';
+import { Badge, Card, Group, Select, SimpleGrid, Stack, Text, TextInput } from '@mantine/core';
+import { Pager } from '@/components/ui/pager';
 import { useDebouncedValue } from '@mantine/hooks';
 import { useState } from 'react';
 import { SPECIES_GROUPS, type SpeciesGroup, type SpeciesResponse, type Sourced } from '@broodsilk/shared';
@@ -130,7 +131,7 @@ export function SpeciesCatalogue() {
               <SpeciesCard key={s.id} species={s} query={q} />
             ))}
           </SimpleGrid>
-          {pages > 1 && <Pagination total={pages} value={page} onChange={setPage} size="lg" />}
+          {pages > 1 && <Pager total={pages} value={page} onChange={setPage} size="lg" />}
         </>
       )}
     </Stack>

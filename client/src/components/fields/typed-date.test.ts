@@ -1,0 +1,84 @@
+import dayjs from 'dayjs';
+import customParseFormat from 'dayjs/plugin/customParseFormat';
+import { describe, expect, it } from 'vitest';
+import { checkDate, dateInWords, localeDateFormat, readTypedDate } from './typed-date';
+
+dayjs.extend(customParseFormat);
+
+const GB = localeDateFormat('en-GB');
+const US = localeDateFormat('en-US');
+const DE = localeDateFormat('de-DE');
+
+describe('localeDateFormat', () => {
+  // CLDR date patterns (as shipped in Intl): en-GB dd/MM/y, en-US M/d/y, de dd.MM.y.
+  it('reads the numeric order from the locale', () => {
+    expect(GB).toEqual({ order: 'DMY', pattern: 'DD/MM/YYYY' });
+    expect(US).toEqual({ order: 'MDY', pattern: 'MM/DD/YYYY' });
+    expect(DE).toEqual({ order: 'DMY', pattern: 'DD.MM.YYYY' });
+  });
+});
+
+describe('readTypedDate', () => {
+  it('keeps an ISO 8601 calendar date exactly as meant, even far from today', () => {
+    // ISO 8601-1:2019 §5.2.2.1 extended calendar date format YYYY-MM-DD.
+    expect(readTypedDate('2031-05-05', GB)).toEqual({ kind: 'date', iso: '2031-05-05' });
+    expect(readTypedDate('2025-03-14', US)).toEqual({ kind: 'date', iso: '2025-03-14' });
+  });
+
+  it('reads the locale order and agrees with dayjs strict parsing of the same pattern', () => {
+    // Reference: dayjs customParseFormat in strict mode.
+    const cases: [string, typeof GB, string][] = [
+      ['14/03/2025', GB, 'DD/MM/YYYY'],
+      ['03/14/2025', US, 'MM/DD/YYYY'],
+      ['14.03.2025', DE, 'DD.MM.YYYY'],
+      ['29/02/2024', GB, 'DD/MM/YYYY'],
+    ];
+    for (const [text, format, pattern] of cases) {
+      const reference = dayjs(text, pattern, true);
+      expect(reference.isValid()).toBe(true);
+      expect(readTypedDate(text, format)).toEqual({ kind: 'date', iso: reference.format('YYYY-MM-DD') });
+    }
+  });
+
+  it('refuses dates that do not exist instead of rolling them over (dayjs strict agrees)', () => {
+    for (const [text, pattern] of [
+      ['29/02/2025', 'DD/MM/YYYY'],
+      ['31/04/2025', 'DD/MM/YYYY'],
+    ]) {
+      expect(dayjs(text, pattern, true).isValid()).toBe(false);
+      const read = readTypedDate(text, GB);
+      expect(read.kind).toBe('invalid');
+    }
+    expect(readTypedDate('2025-13-01', GB)).toMatchObject({ kind: 'invalid', message: expect.stringContaining('no month 13') });
+  });
+
+  it('refuses a day-first date in a month-first locale rather than guessing', () => {
+    expect(readTypedDate('14/03/2025', US)).toMatchObject({ kind: 'invalid', message: expect.stringContaining('no month 14') });
+  });
+
+  it('refuses two-digit years, mistyped years and words with a message saying how to type it', () => {
+    expect(readTypedDate('14/03/25', GB)).toMatchObject({ kind: 'invalid', message: expect.stringContaining('four digits') });
+    expect(readTypedDate('0203-01-01', GB)).toMatchObject({ kind: 'invalid', message: expect.stringContaining('0203 looks mistyped') });
+    expect(readTypedDate('yesterday', GB)).toMatchObject({ kind: 'invalid', message: expect.stringContaining('YYYY-MM-DD or DD/MM/YYYY') });
+  });
+
+  it('treats blank as empty', () => {
+    expect(readTypedDate('  ', GB)).toEqual({ kind: 'empty' });
+  });
+});
+
+describe('checkDate', () => {
+  it('refuses a future date with a message instead of moving it to today', () => {
+    expect(checkDate('2031-05-05', { latest: '2026-12-02' }, GB)).toBe('5 May 2031 is after 2 December 2026, the latest date this can be.');
+    expect(checkDate('2026-12-02', { latest: '2026-12-02' }, GB)).toBeNull();
+  });
+
+  it('asks for a required date and lets an optional one be empty', () => {
+    expect(checkDate('', { required: 'Give the date of the molt.' }, GB)).toBe('Give the date of the molt.');
+    expect(checkDate('', {}, GB)).toBeNull();
+  });
+});
+
+it('dateInWords says the day in words', () => {
+  expect(dateInWords('2025-03-14')).toBe('14 March 2025');
+});

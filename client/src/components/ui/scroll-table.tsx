@@ -1,0 +1,24 @@
+import { Table, Text } from '@mantine/core';
+import type { ReactNode } from 'react';
+
+/** Narrower than this, a phone (390 px less padding) cannot show the whole table. */
+const PHONE_WIDTH = 340;
+
+/**
+ * A table that scrolls sideways on a narrow screen and says so, instead of clipping columns.
+ * The scroll area is focusable and named, so it can be scrolled from the keyboard.
+ */
+export function ScrollTable({ minWidth, label, children }: { minWidth: number; label: string; children: ReactNode }) {
+  return (
+    <>
+      {minWidth > PHONE_WIDTH && (
+        <Text size="xs" c="dimmed" hiddenFrom="sm" aria-hidden>
+          Swipe the table sideways to see all its columns.
+        </Text>
+      )}
+      <Table.ScrollContainer minWidth={minWidth} tabIndex={0} role="region" aria-label={label}>
+        {children}
+      </Table.ScrollContainer>
+    </>
+  );
+}

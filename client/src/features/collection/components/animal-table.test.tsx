@@ -1,0 +1,19 @@
+import { screen } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import { renderWithProviders } from '@/testing/render';
+import { AnimalTable } from './animal-table';
+
+const props = { items: [], sort: 'label' as const, order: 'asc' as const, onSort: () => undefined, hrefOf: (id: string) => `/collection/${id}` };
+
+describe('AnimalTable when empty', () => {
+  it('says plainly that the collection is empty when nothing filters it', () => {
+    renderWithProviders(<AnimalTable {...props} filtered={false} />);
+    expect(screen.getByText(/Your collection is empty/)).toBeInTheDocument();
+    expect(screen.queryByText(/match these filters/)).not.toBeInTheDocument();
+  });
+
+  it('blames the filters only when filters are set', () => {
+    renderWithProviders(<AnimalTable {...props} filtered />);
+    expect(screen.getByText('No animals match these filters.')).toBeInTheDocument();
+  });
+});

@@ -1,0 +1,56 @@
+import { screen, waitFor, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { addDays, todayIn } from '@broodsilk/shared';
+import { renderWithProviders, stubFetch } from '@/testing/render';
+import { OpeningPanel } from './opening-panel';
+
+afterEach(() => {
+  vi.unstubAllGlobals();
+  vi.restoreAllMocks();
+});
+
+describe('OpeningPanel', { timeout: 30_000 }, () => {
+  it('asks once before recording the opening and sends the earlier day and time given', async () => {
+    vi.spyOn(navigator, 'language', 'get').mockReturnValue('en-GB');
+    const { fetchStub, calls } = stubFetch({
+      'GET /api/auth/csrf': () => ({ status: 200, body: { csrfToken: 't' } }),
+      'GET /api/sacs/s1/opening': () => ({ status: 200, body: null }),
+      'POST /api/sacs/s1/opening': () => ({ status: 201, body: null }),
+    });
+    vi.stubGlobal('fetch', fetchStub);
+    renderWithProviders(<OpeningPanel sac={{ id: 's1', opened: false }} timeZone="UTC" canEdit />);
+    const healthy = await screen.findByLabelText('Healthy eggs');
+    await userEvent.clear(healthy);
+    await userEvent.type(healthy, '120');
+    await userEvent.click(screen.getByRole('button', { name: 'Save opening' }));
+    const dialog = await screen.findByRole('dialog', { name: 'Record the opening' });
+    expect(dialog).toHaveTextContent('this records 120 viable of 120');
+    expect(calls.filter((c) => c.method === 'POST')).toHaveLength(0);
+
+    const yesterday = addDays(todayIn('UTC', new Date()), -1);
+    const date = within(dialog).getByLabelText('Opened on');
+    await userEvent.clear(date);
+    await userEvent.type(date, yesterday);
+    const time = within(dialog).getByLabelText('At');
+    await userEvent.clear(time);
+    await userEvent.type(time, '06:30');
+    await userEvent.click(within(dialog).getByRole('button', { name: 'Record the opening' }));
+    await waitFor(() => expect(calls.filter((c) => c.method === 'POST')).toHaveLength(1));
+    expect(calls.find((c) => c.method === 'POST')?.body).toMatchObject({ healthyEggs: 120, keptBack: 0, openedAt: `${yesterday}T06:30:00.000Z` });
+  });
+
+  it('refuses a count over the limit with a message, keeping what was typed', async () => {
+    const { fetchStub, calls } = stubFetch({ 'GET /api/sacs/s1/opening': () => ({ status: 200, body: null }) });
+    vi.stubGlobal('fetch', fetchStub);
+    renderWithProviders(<OpeningPanel sac={{ id: 's1', opened: false }} timeZone="UTC" canEdit />);
+    const nymphs = await screen.findByLabelText('Nymphs');
+    await userEvent.clear(nymphs);
+    await userEvent.type(nymphs, '-4');
+    await userEvent.click(screen.getByRole('button', { name: 'Save opening' }));
+    await waitFor(() => expect(nymphs).toHaveAccessibleDescription(/A whole number from 0 to/));
+    expect(nymphs).toHaveValue('-4');
+    expect(screen.queryByRole('dialog')).not.toBeInTheDocument();
+    expect(calls.filter((c) => c.method === 'POST')).toHaveLength(0);
+  });
+});

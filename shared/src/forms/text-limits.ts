@@ -1,0 +1,26 @@
+/**
+ * The longest text each field accepts, in characters. The client shows these beside its fields
+ * before the server refuses; the server's DTOs hold the same numbers (to move onto these constants).
+ */
+export const TEXT_LIMITS = Object.freeze({
+  /** An animal's label or enclosure. */
+  animalLabel: 60,
+  enclosure: 60,
+  acquiredFrom: 200,
+  email: 200,
+  personName: 120,
+  animalNotes: 4000,
+  premoltNote: 500,
+  /** Notes on a molt, sac, opening, pairing, brood count or care-log entry; notes to partners. */
+  note: 2000,
+  projectTitle: 120,
+  projectNotes: 5000,
+  correctionReason: 500,
+  ledgerNote: 1000,
+  carrier: 100,
+  tracking: 100,
+  displayName: 80,
+  password: 200,
+});
+
+export type TextLimitName = keyof typeof TEXT_LIMITS;
