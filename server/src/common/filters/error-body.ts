@@ -30,9 +30,6 @@ export function errorBody(exception: unknown): ApiErrorBody {
       else if (Array.isArray(r.message)) message = r.message.join('; ');
       if (Array.isArray(r.details)) details = r.details;
     }
-    if (status === 429 && message.startsWith('ThrottlerException')) {
-      message = 'Too many attempts. Wait a minute and try again.';
-    }
     return { statusCode: status, error: REASON[status] ?? 'Error', message, ...(details ? { details } : {}) };
   }
   if (exception instanceof NotFoundError) {

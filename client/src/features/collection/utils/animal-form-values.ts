@@ -1,5 +1,6 @@
 import {
-  minorDigits,
+  minorToMajor,
+  toMinor,
   type AnimalResponse,
   type AnimalSex,
   type AnimalStatus,
@@ -37,7 +38,6 @@ export interface AnimalFormValues {
 
 /** The form's starting values: empty for a new animal, the saved ones for an edit. */
 export function animalFormValues(a?: AnimalResponse): AnimalFormValues {
-  const digits = a?.priceCurrency ? minorDigits(a.priceCurrency) : 2;
   return {
     speciesId: a?.species.id ?? null,
     label: a?.label ?? '',
@@ -46,7 +46,7 @@ export function animalFormValues(a?: AnimalResponse): AnimalFormValues {
     maturedOn: a?.maturedOn ?? '',
     acquiredOn: a?.acquiredOn ?? '',
     acquiredFrom: a?.acquiredFrom ?? '',
-    price: a?.pricePaidMinor != null ? String(a.pricePaidMinor / 10 ** digits) : '',
+    price: a?.pricePaidMinor != null ? String(minorToMajor(a.pricePaidMinor, a.priceCurrency ?? 'EUR')) : '',
     priceCurrency: a?.priceCurrency ?? '',
     ownerKind: a?.owner.kind ?? 'self',
     ownerEmail: a?.owner.kind === 'party' ? (a.owner.email ?? '') : '',
@@ -77,7 +77,8 @@ export function toAnimalRequest(v: AnimalFormValues): CreateAnimalRequest {
     maturedOn: v.maturity === 'mature' ? readDate(v.maturedOn) : null,
     acquiredOn: readDate(v.acquiredOn),
     acquiredFrom: text(v.acquiredFrom),
-    pricePaidMinor: price === null ? null : Math.round(price * 10 ** minorDigits(currency ?? 'EUR')),
+    // The field allows no more decimals than the currency has, so the conversion is exact (shared money module).
+    pricePaidMinor: price === null ? null : toMinor(String(price), currency ?? 'EUR'),
     priceCurrency: currency,
     ownerKind: v.ownerKind,
     // An edit of a keeper-owned animal may leave the e-mail empty: the owner stays as recorded.
