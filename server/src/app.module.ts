@@ -1,9 +1,8 @@
-import { Module, type DynamicModule } from '@nestjs/common';
+import { Module } from '@nestjs/common';
 import { ConfigModule, ConfigService } from '@nestjs/config';
 import { APP_FILTER, APP_GUARD } from '@nestjs/core';
 import { MikroOrmModule } from '@mikro-orm/nestjs';
 import { PostgreSqlDriver } from '@mikro-orm/postgresql';
-import { ServeStaticModule } from '@nestjs/serve-static';
 import { LoggerModule } from 'nestjs-pino';
 import { appConfig } from './config/app.config';
 import { databaseConfig } from './config/database.config';
@@ -37,12 +36,6 @@ function redactSecrets(url: string): string {
   return url.split('?')[0].replace(/^(\/api\/(?:calendar|invitations)\/)[^/]+/, '$1[secret]');
 }
 
-function staticClient(): DynamicModule[] {
-  const dist = process.env.CLIENT_DIST;
-  if (!dist) return [];
-  return [ServeStaticModule.forRoot({ rootPath: dist, exclude: ['/api/{*path}'] })];
-}
-
 @Module({
   imports: [
     ConfigModule.forRoot({ isGlobal: true, cache: true, load: [appConfig, databaseConfig, mailConfig], validate: validateEnv }),
@@ -67,7 +60,6 @@ function staticClient(): DynamicModule[] {
       // Registers the PostgreSQL-typed EntityManager and MikroORM for injection too.
       driver: PostgreSqlDriver,
     }),
-    ...staticClient(),
     ClockModule,
     AuthModule,
     UsersModule,

@@ -1,5 +1,6 @@
 import { Alert, Image, SimpleGrid, Stack, Table, Text } from '@mantine/core';
 import { Dropzone, IMAGE_MIME_TYPE } from '@mantine/dropzone';
+import '@mantine/dropzone/styles.css';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { BROOD_COUNT_MAX, TEXT_LIMITS, type OpeningRequest, type OpeningResponse, type SacResponse } from '@broodsilk/shared';
