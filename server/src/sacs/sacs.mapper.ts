@@ -15,6 +15,7 @@ export interface SacViewContext {
   lastRollAt: Date | null;
   opened: boolean;
   currentCount: number | null;
+  currentCountEstimated: boolean;
 }
 
 /** The roll state of a sac (null when rolling does not apply), by the roll rule in docs/product.md, Data rules. */
@@ -52,6 +53,7 @@ export function toSacResponse(sac: Sac, c: SacViewContext): SacResponse {
     broodStage: sac.broodStage,
     opened: c.opened,
     currentCount: c.currentCount,
+    currentCountEstimated: c.currentCountEstimated,
     notes: sac.notes ?? null,
     warningReason: sac.warningReason ?? null,
     incubatorCaution: sac.pulledAt ? INCUBATOR_CAUTION : null,

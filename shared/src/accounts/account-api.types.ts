@@ -113,6 +113,8 @@ export interface SacSharesView {
   count: number;
   aliveInCare: number;
   withdrawn: number;
+  /** The count is an estimate: shown "about N", its shares provisional (no cash-out, not settled). */
+  estimated: boolean;
   parties: SacShareParty[];
   explanation: string[];
   change: SacShareChange | null;
@@ -172,6 +174,8 @@ export interface StatementResponse {
   sacs: SacSharesView[];
   entries: LedgerEntryResponse[];
   balance: PartyBalanceView | null;
+  /** A count behind the shares is an estimate: the share is provisional. */
+  provisional: boolean;
   debts: BalancesResponse['debts'];
   failureNotes: string[];
   shippingCautions: string[];

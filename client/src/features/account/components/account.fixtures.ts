@@ -60,6 +60,7 @@ export function shares(): SharesResponse {
         outcome: 'emerged',
         count: 20,
         aliveInCare: 17,
+        estimated: false,
         withdrawn: 3,
         parties: [
           { ...MIRA, count: 12, fixed: 0, proportional: 12, exactQuota: '12', roundedUp: false },
