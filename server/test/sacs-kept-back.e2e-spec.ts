@@ -190,7 +190,7 @@ describe('shares from an estimated count', () => {
     const layDate = shares.sacs[0]!.layDate;
     expect(refused.body.message).toBe(exactCountNeeded(layDate, 500));
     const balances = await http().get(`/api/projects/${s.projectId}/balances`).set('Authorization', s.mira.bearer).expect(200);
-    expect(balances.body.settled).toBe(false);
+    expect(balances.body).toMatchObject({ settled: false, provisional: true });
     // Statements say "about" and provisional, in the CSV and the PDF.
     const csv = await http().get(`/api/projects/${s.projectId}/statements/${s.tomaszId}.csv`).set('Authorization', s.tomasz.bearer).expect(200);
     const rows = Papa.parse<Record<string, string>>(csv.text.trimEnd(), { header: true }).data;

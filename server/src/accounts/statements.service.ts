@@ -9,6 +9,7 @@ import { FROM_OWNER, toEntryResponses } from './accounts.mapper';
 import type { ProjectMember } from '../projects/project-member.entity';
 import type { LedgerEntryRow } from './ledger-entry.entity';
 import { failureNote, toSacSharesView, toTermsSummary } from './shares.mapper';
+import { isProvisional } from './balances.mapper';
 import { SHIPPING_CAUTIONS } from './shipping-cautions';
 import { statementCsv } from './statement-csv';
 import { statementPdf } from './statement-pdf';
@@ -95,7 +96,7 @@ export class StatementsService {
       sacs: view.sacs.map((s) => toSacSharesView(view, s, null)),
       entries,
       balance: balance ? { ...balance, memberId, name: memberName(member) } : null,
-      provisional: view.sacs.some((s) => s.fact.estimated && s.count > 0),
+      provisional: isProvisional(view),
       debts: view.balances.debts
         .filter((d) => d.fromPartyId === memberId || d.toPartyId === memberId)
         .map((d) => ({ ...d, fromName: view.nameOf(d.fromPartyId), toName: view.nameOf(d.toPartyId) })),

@@ -49,7 +49,8 @@ export function toSacResponse(sac: Sac, c: SacViewContext): SacResponse {
     pullWindow: { ...view, fromDay: c.window.fromDay, toDay: c.window.toDay, origin: c.window.origin },
     rollIntervalHours: sac.rollIntervalHours,
     rollingOff: sac.rollingOff,
-    roll: rollOf(sac, c.now, c.lastRollAt),
+    // An opened sac is not rolled: its eggs are counted, and any kept back are a batch with its own log.
+    roll: c.opened ? null : rollOf(sac, c.now, c.lastRollAt),
     broodStage: sac.broodStage,
     opened: c.opened,
     currentCount: c.currentCount,

@@ -154,6 +154,8 @@ export interface BalancesResponse {
   problems: LedgerProblem[];
   /** Nothing owed in young or money, with at least one counted sac and terms in force. */
   settled: boolean;
+  /** A count behind the shares is an estimate: shares are "about" and provisional. */
+  provisional: boolean;
 }
 
 /** What the hand-over form shows before recording. */

@@ -28,7 +28,7 @@ describe('the kept-back batch in plain words', () => {
   });
 
   it('says a written-off batch did not develop and is not part of the brood, with the reason', () => {
-    expect(keptBackWords(batch({ state: 'written-off', endedAt: '2026-03-05T10:00:00Z', reason: 'all turned dark' }), day)).toBe(
+    expect(keptBackWords(batch({ state: 'written-off', endedAt: '2026-03-05T10:00:00Z', reason: 'all turned dark.' }), day)).toBe(
       'The 5 eggs kept back at the opening on 2026-03-01 for more incubation did not develop: written off on 2026-03-05 (all turned dark). They are not part of the brood.',
     );
   });

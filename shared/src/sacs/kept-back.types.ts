@@ -62,11 +62,12 @@ export interface KeptBackBatchResponse {
 
 /** The batch's story in plain words for every member; `day` formats an instant as the reader's date. */
 export function keptBackWords(b: KeptBackBatchResponse, day: (instant: string) => string): string {
+  const reason = b.reason?.replace(/[.!]+$/, ''); // the sentence gives its own full stop
   const eggs = b.eggs === 1 ? '1 egg' : `${b.eggs} eggs`;
   const kept = `${eggs} kept back at the opening on ${day(b.keptAt)} for more incubation`;
   const rolled = b.rolls ? `rolled ${b.rolls === 1 ? 'once' : `${b.rolls} times`}${b.lastRollAt ? `, last on ${day(b.lastRollAt)}` : ''}` : 'not rolled yet';
   if (b.state === 'incubating') return `${kept}: still incubating, ${rolled}.`;
-  if (b.state === 'written-off') return `The ${kept} did not develop: written off on ${day(b.endedAt!)} (${b.reason}). They are not part of the brood.`;
+  if (b.state === 'written-off') return `The ${kept} did not develop: written off on ${day(b.endedAt!)} (${reason}). They are not part of the brood.`;
   const lost = b.eggs - b.joined!;
-  return `Of the ${kept}, ${b.joined} joined the brood on ${day(b.endedAt!)}${lost ? ` and ${lost} did not develop` : ''} (${b.reason}).`;
+  return `Of the ${kept}, ${b.joined} joined the brood on ${day(b.endedAt!)}${lost ? ` and ${lost} did not develop` : ''} (${reason}).`;
 }

@@ -36,6 +36,7 @@ export function balances(over: Partial<BalancesResponse> = {}): BalancesResponse
     debts: [{ fromPartyId: TOMASZ.memberId, toPartyId: MIRA.memberId, amountMinor: 1200, currency: 'EUR', fromName: 'Tomasz', toName: 'Mira' }],
     problems: [],
     settled: false,
+    provisional: false,
     ...over,
   };
 }
