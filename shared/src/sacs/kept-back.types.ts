@@ -6,6 +6,13 @@
 export const KEPT_BACK_STATES = ['incubating', 'joined', 'written-off'] as const;
 export type KeptBackState = (typeof KEPT_BACK_STATES)[number];
 
+/** The words every screen shows for a batch's state. */
+export const KEPT_BACK_STATE_LABELS: Record<KeptBackState, string> = {
+  incubating: 'Still incubating',
+  joined: 'Joined the brood',
+  'written-off': 'Written off',
+};
+
 export const KEPT_BACK_LOG_KINDS = ['roll', 'check', 'strike'] as const;
 export type KeptBackLogKind = (typeof KEPT_BACK_LOG_KINDS)[number];
 

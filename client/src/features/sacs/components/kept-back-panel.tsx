@@ -1,7 +1,7 @@
 import { Alert, Badge, Group, SegmentedControl, Stack, Table, Text } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import { TEXT_LIMITS, keptBackWords, todayIn, type KeptBackBatchResponse, type KeptBackEndRequest } from '@broodsilk/shared';
+import { KEPT_BACK_STATE_LABELS, TEXT_LIMITS, keptBackWords, todayIn, type KeptBackBatchResponse, type KeptBackEndRequest } from '@broodsilk/shared';
 import { NumberField } from '@/components/fields/number-field';
 import { TextAreaField, TextField } from '@/components/fields/text-field';
 import { textRule } from '@/components/fields/text-rule';
@@ -31,7 +31,7 @@ export function KeptBackPanel({ sacId, timeZone, canLog, canEnd }: { sacId: stri
     <Stack data-testid="kept-back">
       <Group gap="xs">
         <Badge color={b.state === 'written-off' ? 'clay' : b.state === 'joined' ? 'moss' : 'amber'} variant="light" tt="none">
-          {b.state === 'incubating' ? 'Still incubating' : b.state === 'joined' ? 'Joined the brood' : 'Written off'}
+          {KEPT_BACK_STATE_LABELS[b.state]}
         </Badge>
       </Group>
       <Text size="sm" data-testid="kept-back-words">
@@ -153,8 +153,8 @@ function EndForm({ sacId, eggs, timeZone }: { sacId: string; eggs: number; timeZ
         <SegmentedControl
           aria-label="Outcome"
           data={[
-            { value: 'written-off', label: 'Written off' },
-            { value: 'joined', label: 'Joined the brood' },
+            { value: 'written-off', label: KEPT_BACK_STATE_LABELS['written-off'] },
+            { value: 'joined', label: KEPT_BACK_STATE_LABELS.joined },
           ]}
           key={form.key('outcome')}
           {...form.getInputProps('outcome')}
