@@ -1,5 +1,6 @@
 import { Alert, Button, Group, Image, SimpleGrid, Stack, Table, Text } from '@mantine/core';
 import { Dropzone, IMAGE_MIME_TYPE } from '@mantine/dropzone';
+import '@mantine/dropzone/styles.css';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { countWords, type OpeningRequest, type OpeningResponse, type SacResponse } from '@broodsilk/shared';
