@@ -1,8 +1,9 @@
-import { Controller, Get } from '@nestjs/common';
+import { Controller, Get, Query } from '@nestjs/common';
 import type { ActivityEventResponse } from '@broodsilk/shared';
 import { AnyProjectMember, CurrentProject } from '../projects/project-roles.decorator';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { ActivityService } from './activity.service';
+import { ActivityTimelineQueryDto } from './activity-timeline-query.dto';
 
 @Controller('projects/:projectId/activity')
 export class ActivityController {
@@ -10,7 +11,7 @@ export class ActivityController {
 
   @Get()
   @AnyProjectMember()
-  timeline(@CurrentProject() access: ProjectAccess): Promise<ActivityEventResponse[]> {
-    return this.activity.timeline(access.project.id, access.role);
+  timeline(@CurrentProject() access: ProjectAccess, @Query() query: ActivityTimelineQueryDto): Promise<ActivityEventResponse[]> {
+    return this.activity.timeline(access.project.id, access.role, query);
   }
 }

@@ -1,12 +1,13 @@
-import { Injectable } from '@nestjs/common';
+import { Injectable, NotFoundException } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
-import type { ActivityAudience, ActivityEventResponse, ProjectRole } from '@broodsilk/shared';
+import type { ActivityAudience, ActivityEventResponse, ActivityTimelineQuery, ProjectRole } from '@broodsilk/shared';
 import { ActivityEvent } from './activity-event.entity';
 import { Project } from '../projects/project.entity';
 import { User } from '../users/user.entity';
 import { ProjectMember } from '../projects/project-member.entity';
 import { toActivityResponse } from './activity.mapper';
 import { Clock } from '../common/clock';
+import { TIMELINE_PAGE } from './activity-timeline-query.dto';
 
 export interface ActivityInput {
   projectId: string;
@@ -54,12 +55,25 @@ export class ActivityService {
     });
   }
 
-  /** A project's timeline, newest first, as the viewer's role may see it. */
-  async timeline(projectId: string, role: ProjectRole, limit = 200): Promise<ActivityEventResponse[]> {
+  /**
+   * A project's timeline, newest first, as the viewer's role may see it, one page at a time by
+   * keyset (at, created_at, id): the next page starts after the event named by `before`, so a page
+   * costs the same however far back it is, and events added meanwhile neither repeat nor go missing.
+   */
+  async timeline(projectId: string, role: ProjectRole, page: ActivityTimelineQuery = {}): Promise<ActivityEventResponse[]> {
+    const audiences = audiencesFor(role);
+    let after = {};
+    if (page.before) {
+      const last = await this.em.findOne(ActivityEvent, { id: page.before, project: projectId, audience: { $in: audiences } }, { fields: ['at', 'createdAt'] });
+      if (!last) throw new NotFoundException({ message: 'That event is not in this project’s timeline.' });
+      after = {
+        $or: [{ at: { $lt: last.at } }, { at: last.at, createdAt: { $lt: last.createdAt } }, { at: last.at, createdAt: last.createdAt, id: { $lt: last.id } }],
+      };
+    }
     const rows = await this.em.find(
       ActivityEvent,
-      { project: projectId, audience: { $in: audiencesFor(role) } },
-      { populate: ['actor', 'project'], orderBy: { at: 'desc', createdAt: 'desc' }, limit },
+      { project: projectId, audience: { $in: audiences }, ...after },
+      { populate: ['actor', 'project'], orderBy: { at: 'desc', createdAt: 'desc', id: 'desc' }, limit: page.limit ?? TIMELINE_PAGE },
     );
     return rows.map(toActivityResponse);
   }

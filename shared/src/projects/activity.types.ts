@@ -15,3 +15,10 @@ export interface ActivityEventResponse {
   data: Record<string, unknown>;
   at: string;
 }
+
+/** Keyset paging of a project's timeline: the next page starts after the last event seen (`before` = its id). */
+export interface ActivityTimelineQuery {
+  before?: string;
+  /** 1–200; 200 when left out. */
+  limit?: number;
+}
