@@ -52,6 +52,11 @@ export class JobsService implements OnApplicationBootstrap, OnApplicationShutdow
   /** The queues whose workers run in this process. */
   readonly working = new Set<string>();
 
+  /** True when this process works the planned queues (so it may also catch up on planning at start). */
+  get plannedWorkersOn(): boolean {
+    return workersEnabled(true);
+  }
+
   async onApplicationBootstrap(): Promise<void> {
     const boss = new PgBoss({ connectionString: this.config.getOrThrow<string>('database.url'), schema: JOBS_SCHEMA, schedule: false });
     boss.on('error', (e) => this.logger.error(`pg-boss: ${e.message}`));

@@ -1,4 +1,4 @@
-import { Injectable, type OnModuleInit } from '@nestjs/common';
+import { Injectable, Logger, type OnApplicationBootstrap, type OnModuleInit } from '@nestjs/common';
 import { EntityManager, MikroORM } from '@mikro-orm/postgresql';
 import type { EventSubscriber, FlushEventArgs } from '@mikro-orm/core';
 import { JobsService } from '../jobs/jobs.service';
@@ -43,7 +43,9 @@ interface Changed {
  * and instant) or cancelled, in the same transaction as the write.
  */
 @Injectable()
-export class ReminderPlanner implements OnModuleInit, EventSubscriber {
+export class ReminderPlanner implements OnModuleInit, OnApplicationBootstrap, EventSubscriber {
+  private readonly logger = new Logger(ReminderPlanner.name);
+
   constructor(
     private readonly orm: MikroORM,
     private readonly jobs: JobsService,
@@ -52,6 +54,27 @@ export class ReminderPlanner implements OnModuleInit, EventSubscriber {
 
   onModuleInit(): void {
     this.orm.em.getEventManager().registerSubscriber(this);
+  }
+
+  /**
+   * Catches up at start: records written without the app (the demo seed, a restored backup) get
+   * their plan. Safe to repeat and to run on several instances: a plan already queued is kept.
+   */
+  async onApplicationBootstrap(): Promise<void> {
+    if (!this.jobs.plannedWorkersOn) return;
+    const planned = await this.planAll();
+    this.logger.log(`reminders planned at start: ${planned.sacs} sacs, ${planned.animals} animals, ${planned.users} digests`);
+  }
+
+  async planAll(batch = 200): Promise<{ sacs: number; animals: number; users: number }> {
+    const em = this.orm.em.fork();
+    const sacIds = (await em.find(Sac, { outcome: 'in-progress', project: { endedOn: null, closedOn: null } }, { fields: ['id'] })).map((s) => s.id);
+    const animalIds = (await em.find(Animal, { status: { $in: ['active', 'on-loan'] } }, { fields: ['id'] })).map((a) => a.id);
+    const userIds = (await em.find(ReminderSettings, { digestHour: { $ne: null } }, { fields: ['user'] })).map((s) => s.user.id);
+    for (let i = 0; i < sacIds.length; i += batch) await em.fork().transactional((tx) => this.replanSacs(tx, sacIds.slice(i, i + batch)));
+    for (let i = 0; i < animalIds.length; i += batch) await em.fork().transactional((tx) => this.replanAnimals(tx, animalIds.slice(i, i + batch)));
+    if (userIds.length) await em.fork().transactional((tx) => this.replanDigests(tx, userIds));
+    return { sacs: sacIds.length, animals: animalIds.length, users: userIds.length };
   }
 
   getSubscribedEntities() {
