@@ -4,6 +4,7 @@ import { AppLayout } from '@/components/layouts/app-layout';
 import { paths } from '@/config/paths';
 import { meQuery, useMe } from '@/features/auth/api/me';
 import { useLogout } from '@/features/auth/api/session';
+import { InboxLink } from '@/features/notifications/components/inbox-link';
 import { NAV_ITEMS } from '../nav-items';
 
 /** Every signed-in page goes through here: no session, no page. */
@@ -28,6 +29,7 @@ export function Component() {
       nav={NAV_ITEMS}
       userName={me.displayName}
       settingsHref={paths.settings.href()}
+      headerExtra={<InboxLink />}
       onSignOut={() => logout.mutate(undefined, { onSettled: () => navigate(paths.signIn.href()) })}
     >
       <Outlet />
