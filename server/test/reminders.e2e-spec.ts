@@ -196,6 +196,33 @@ describe('the handler: still true, once, by the chosen channels', () => {
   });
 });
 
+describe('animals: planned for their keeper at 08:00 local', () => {
+  it('a male’s clock reaching prime and a molt after pairing are planned for the keeper’s morning, and sent when due', async () => {
+    const who = await registerKeeper(t.app, 'Amos');
+    await setTimeZone(t.app, who, 'Australia/Sydney');
+    const p = await createProject(t.app, t.orm, who, { title: 'Animal pair', maleAgeDays: 21 }); // male-clock.ts: prime from day 21
+    const today = todayIn('Australia/Sydney', new Date());
+    const at8 = (date: string) => DateTime.fromISO(`${date}T08:00`, { zone: 'Australia/Sydney' }).toUTC().toISO();
+    const male = await waiting(`animal:${p.male.id}`);
+    // He matured 21 days before the UTC date the fixture used, so prime starts on that date.
+    expect(summary(male).filter(([k]) => k === 'male-clock')[0]).toEqual(['male-clock', who.user.id, at8(todayIn('UTC', new Date()))]);
+
+    await http()
+      .post(`/api/projects/${p.id}/pairings`)
+      .set('Authorization', who.bearer)
+      .send({ startedAt: new Date(Date.now() - 3 * 24 * HOUR).toISOString(), durationMinutes: 20, outcome: 'connected' })
+      .expect((r) => expect(r.body).toMatchObject({ outcome: 'connected' }));
+    await http().post(`/api/animals/${p.female.id}/molts`).set('Authorization', who.bearer).send({ moltedOn: today }).expect(201);
+    const female = await waiting(`animal:${p.female.id}`);
+    expect(summary(female)).toEqual([['female-molted', who.user.id, at8(today)]]);
+
+    vi.spyOn(t.app.get(Clock), 'now').mockReturnValue(new Date(Math.max(Date.now(), female[0].startAfter.getTime())));
+    expect(await deliver(female[0].data)).toBe('sent');
+    const mail = await waitForMail(who.user.email, /Molted after pairing/);
+    expect(mail.text).toMatch(/sheds the stored sperm/);
+  });
+});
+
 describe('preferences', () => {
   it('reads the defaults with the zone from settings, changes only what is sent, and re-plans with quiet hours', async () => {
     const who = await registerKeeper(t.app, 'Quinn');

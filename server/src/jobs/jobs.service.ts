@@ -92,12 +92,12 @@ export class JobsService implements OnApplicationBootstrap, OnApplicationShutdow
     if (ids.length) await this.started().cancel(queue, ids, { db: inTransaction(tx) });
   }
 
-  /** Waiting jobs of a queue whose data has `field` = `value` (read inside `tx`). */
-  async waiting(tx: EntityManager, queue: string, field: string, value: string): Promise<{ id: string; singletonKey: string | null }[]> {
+  /** Jobs of a queue not yet done (waiting, retrying or running) whose data has `field` = `value`, read inside `tx`. */
+  async pending(tx: EntityManager, queue: string, field: string, value: string): Promise<{ id: string; singletonKey: string | null; running: boolean }[]> {
     return tx
       .getConnection()
-      .execute<{ id: string; singletonKey: string | null }[]>(
-        `select id, singleton_key as "singletonKey" from ${JOBS_SCHEMA}.job where name = ? and state in ('created', 'retry') and data->>? = ?`,
+      .execute<{ id: string; singletonKey: string | null; running: boolean }[]>(
+        `select id, singleton_key as "singletonKey", state = 'active' as running from ${JOBS_SCHEMA}.job where name = ? and state in ('created', 'retry', 'active') and data->>? = ?`,
         [queue, field, value],
         'all',
         tx.getTransactionContext(),

@@ -141,8 +141,13 @@ export class ReminderPlanner implements OnModuleInit, OnApplicationBootstrap, Ev
     }
   }
 
-  /** Makes the waiting jobs of `plannedFor` match `plan`: what left it is cancelled, what is new is queued; what was sent stays sent. */
+  /**
+   * Makes the pending jobs of `plannedFor` match `plan`: waiting jobs that left it are cancelled,
+   * new reminders are queued; a running job is left to finish, and what was sent stays sent. The
+   * jobs are read before `reminder_sent`: a job that finishes in between has committed its key.
+   */
   private async schedule(tx: EntityManager, plannedFor: string, plan: PlannedReminder[]): Promise<void> {
+    const pending = await this.jobs.pending(tx, REMINDER_QUEUE, 'plannedFor', plannedFor);
     const sent = plan.length
       ? await sentKeys(
           tx,
@@ -150,15 +155,15 @@ export class ReminderPlanner implements OnModuleInit, OnApplicationBootstrap, Ev
         )
       : new Set<string>();
     const wanted = new Map(plan.filter((r) => !sent.has(r.key)).map((r) => [singletonKey(r), r]));
-    const waiting = await this.jobs.waiting(tx, REMINDER_QUEUE, 'plannedFor', plannedFor);
-    const keep = new Set(waiting.map((j) => j.singletonKey));
+    const obsolete = pending.filter((j) => !j.running && (!j.singletonKey || !wanted.has(j.singletonKey)));
     await this.jobs.cancel(
       tx,
       REMINDER_QUEUE,
-      waiting.filter((j) => !j.singletonKey || !wanted.has(j.singletonKey)).map((j) => j.id),
+      obsolete.map((j) => j.id),
     );
+    const queued = new Set(pending.map((j) => j.singletonKey));
     for (const [key, r] of wanted) {
-      if (keep.has(key)) continue;
+      if (queued.has(key)) continue;
       const job: ReminderJob = { plannedFor, key: r.key, sendAt: r.sendAt.toISOString() };
       await this.jobs.send(tx, REMINDER_QUEUE, job, { startAfter: r.sendAt, singletonKey: key });
     }
