@@ -17,6 +17,7 @@ import { JOBS_SCHEMA } from '../src/jobs/jobs.service';
 import { REMINDER_QUEUE, type ReminderJob } from '../src/reminders/reminder-planner.service';
 import { ReminderDelivery } from '../src/reminders/reminder-delivery.service';
 import { Clock } from '../src/common/clock';
+import { ProjectMember } from '../src/projects/project-member.entity';
 
 let t: TestApp;
 let owner: SignedIn;
@@ -126,6 +127,25 @@ describe('planning on each fact change (pg-boss start times)', () => {
 
     await http().post(`/api/sacs/${sac.id}/log`).set('Authorization', owner.bearer).send({ kind: 'note', text: 'Eggs look pale yellow.' }).expect(201);
     expect((await waiting(`sac:${sac.id}`)).map((j) => j.id)).toEqual(restored.map((j) => j.id));
+  });
+});
+
+describe('members', () => {
+  it('a caretaker who joins gets the open sacs’ reminders; one who leaves no longer does', async () => {
+    const who = await registerKeeper(t.app, 'Jonas');
+    const p = await createProject(t.app, t.orm, owner, { title: 'Member pair' });
+    const pulledAt = new Date(Date.now() - HOUR).toISOString();
+    const sac = await createSac(t.app, owner, p.id, { layDate: addDays(todayIn('UTC', new Date()), -30), pulledAt });
+    expect((await waiting(`sac:${sac.id}`)).some((j) => userOf(j) === who.user.id)).toBe(false);
+    const memberId = await addMember(t.orm, p.id, who, 'caretaker');
+    expect(summary(await waiting(`sac:${sac.id}`)).filter(([, u]) => u === who.user.id)).toEqual([
+      ['roll-due', who.user.id, pulledAt],
+      ['roll-overdue', who.user.id, new Date(Date.parse(pulledAt) + 3 * HOUR).toISOString()],
+    ]);
+    const em = t.orm.em.fork();
+    em.remove(await em.findOneOrFail(ProjectMember, memberId));
+    await em.flush();
+    expect((await waiting(`sac:${sac.id}`)).some((j) => userOf(j) === who.user.id)).toBe(false);
   });
 });
 

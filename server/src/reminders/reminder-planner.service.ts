@@ -38,7 +38,7 @@ interface Changed {
 
 /**
  * Plans reminders from the facts and keeps pg-boss in step: after every flush that touches a
- * sac, its care log, an animal, a molt, a project or someone's reminder settings, the subject's
+ * sac, its care log, an animal, a molt, a project, its members or someone's reminder settings, the subject's
  * plan is made afresh and its jobs are scheduled (`startAfter`, one singleton key per reminder
  * and instant) or cancelled, in the same transaction as the write.
  */
@@ -78,7 +78,7 @@ export class ReminderPlanner implements OnModuleInit, OnApplicationBootstrap, Ev
   }
 
   getSubscribedEntities() {
-    return [Sac, SacLogEntry, Animal, Molt, Project, ReminderSettings, User];
+    return [Sac, SacLogEntry, Animal, Molt, Project, ProjectMember, ReminderSettings, User];
   }
 
   async afterFlush({ em, uow }: FlushEventArgs): Promise<void> {
@@ -90,6 +90,7 @@ export class ReminderPlanner implements OnModuleInit, OnApplicationBootstrap, Ev
       else if (e instanceof Animal) changed.animals.add(e.id);
       else if (e instanceof Molt) changed.animals.add(e.animal.id);
       else if (e instanceof Project && cs.type === 'update') changed.projects.add(e.id);
+      else if (e instanceof ProjectMember && e.project) changed.projects.add(e.project.id);
       else if (e instanceof ReminderSettings) changed.users.add(e.user.id);
       else if (e instanceof User && cs.type === 'update' && 'timeZone' in (cs.payload as object)) changed.users.add(e.id);
     }
