@@ -6,6 +6,7 @@ import { ReminderPreferencesForm } from '@/features/settings/components/reminder
 import { reminderQueries, useReminderPreferences } from '@/features/settings/api/reminder-preferences';
 import type { QueryClient } from '@tanstack/react-query';
 import { preloadPanels } from '../preload';
+import { ExportCard } from '@/features/export/components/export-card';
 import { PageHeader } from '@/components/ui/page-header';
 
 export const clientLoader = (qc: QueryClient) => async () => {
@@ -31,6 +32,8 @@ export function Component() {
         Reminders
       </Title>
       {reminders && <ReminderPreferencesForm key={reminders.timeZone} preferences={reminders} />}
+      <Divider my="md" />
+      <ExportCard />
     </Stack>
   );
 }
