@@ -16,6 +16,7 @@ const MY_TERMS = `select id from terms_versions where project_id in (${MY_MONEY_
 export const EXPORT_QUERIES = {
   // Never the password hash or the session version.
   profile: `select id, email, display_name, role, time_zone, temperature_unit, created_at, updated_at from users where id = ?`,
+  'reminder-settings': `select * from reminder_settings where user_id = ?`,
   animals: `select * from animals where recorded_by_id = ?`,
   molts: `select * from molts where animal_id in (${MY_ANIMALS})`,
   feedings: `select * from feeding_entries where animal_id in (${MY_ANIMALS})`,
