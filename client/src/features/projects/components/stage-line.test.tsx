@@ -50,4 +50,10 @@ describe('StageLine', () => {
   it('covers every early-end reason the shared list knows', () => {
     expect([...ENDED_EARLY_REASONS].sort()).toEqual(['female-molted', 'male-died', 'no-sac', 'sac-eaten', 'sac-failed']);
   });
+  it('shows a setback as advice on an open stage, not as an end', () => {
+    renderWithProviders(<StageLine stage={{ stage: 'planned', setback: 'sac-eaten', sacId: 's1' }} />);
+    expect(screen.getByTestId('stage-current')).toHaveTextContent('Planned · step 1 of 8');
+    expect(screen.getByTestId('stage-setback')).toHaveTextContent('The mother ate the sac');
+    expect(screen.queryByText('Ended early')).not.toBeInTheDocument();
+  });
 });
