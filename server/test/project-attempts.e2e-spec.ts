@@ -9,6 +9,9 @@ import { createSac } from './support/sacs';
 import { Clock } from '../src/common/clock';
 import { Pairing } from '../src/projects/pairing.entity';
 import { accountScenario, api } from './accounts.fixtures';
+import { User } from '../src/users/user.entity';
+import type { SeedContext } from '../src/seed/demo-seed';
+import { UNHAPPY_SEASON_TITLE, seedUnhappySeason } from '../src/seed/unhappy-season.seeder';
 
 // Product rules (docs/product.md, Attempts, males and the end of a project); no outside source.
 // Scenario and names are invented.
@@ -242,5 +245,36 @@ describe('ending, closing and reopening', () => {
       status: string;
     }[];
     expect(list.find((e) => e.id === paid.id)!.status).toBe('reversed');
+  });
+});
+
+describe('the demo’s unhappy season', () => {
+  it('an eaten sac, a first male who died, a backup male paired after him and a second sac: open, at "sac laid"', async () => {
+    const keeper = await registerKeeper(t.app, 'Mira Unhappy');
+    const em = t.orm.em.fork();
+    const user = await em.findOneOrFail(User, keeper.user.id);
+    await seedUnhappySeason({ em, users: { keeper: user } as SeedContext['users'], today: t.app.get(Clock).now() });
+    await em.flush();
+    const summary = ((await http().get('/api/projects').set('Authorization', keeper.bearer).expect(200)).body as { id: string; title: string }[]).find(
+      (x) => x.title === UNHAPPY_SEASON_TITLE,
+    )!;
+    const p = await project(keeper, summary.id);
+    expect(p.stage).toMatchObject({ stage: 'sac-laid' });
+    expect(p.males.map((m) => [m.label, m.status])).toEqual([
+      ['MO-042', 'deceased'],
+      ['MO-043', 'active'],
+    ]);
+    const pairings = (await http().get(`/api/projects/${p.id}/pairings`).set('Authorization', keeper.bearer).expect(200)).body as PairingResponse[];
+    expect(pairings.map((x) => x.male.label)).toEqual(['MO-043', 'MO-042']);
+    const sacs = (await http().get(`/api/projects/${p.id}/sacs`).set('Authorization', keeper.bearer).expect(200)).body as {
+      outcome: string;
+      failureReason: string | null;
+    }[];
+    expect(sacs.map((x) => [x.outcome, x.failureReason]).sort()).toEqual([
+      ['failed', 'eaten'],
+      ['in-progress', null],
+    ]);
+    const kinds = (await activity(keeper, p.id)).map((e) => e.kind);
+    expect(kinds).toEqual(expect.arrayContaining(['sac.failed', 'male.died', 'pairing.recorded', 'sac.laid']));
   });
 });
