@@ -13,7 +13,8 @@ import type { FeatureSeeder } from './demo-seed';
 export const UNHAPPY_SEASON_TITLE = 'Pulchripes: second try with a backup male';
 
 /** Days before "today" of each step (an invented scenario). */
-const DAYS = { started: 210, firstPairing: 200, firstSac: 130, sacEaten: 126, firstMaleDied: 100, backupPairing: 70, secondSac: 8 } as const;
+// Pairing to sac: at least 120 days for this species (species-groups data); both sacs keep to it.
+const DAYS = { started: 420, firstPairing: 400, firstSac: 250, sacEaten: 246, firstMaleDied: 200, backupPairing: 140, secondSac: 8 } as const;
 
 /**
  * An unhappy season of Mira's (invented): her first sac is eaten by the mother, the first male dies
@@ -31,9 +32,9 @@ export const seedUnhappySeason: FeatureSeeder = async (ctx) => {
   const animal = (label: string, sex: 'female' | 'male', extra: Partial<Animal>) =>
     em.create(Animal, { recordedBy: mira, ownerUser: mira, species, label, sex, maturity: 'mature', enclosure: null, ...extra });
 
-  const female = animal('MO-041', 'female', { acquiredOn: on(700), notes: 'First season as a mother.' });
-  const first = animal('MO-042', 'male', { maturedOn: on(260), status: 'deceased', statusOn: on(DAYS.firstMaleDied), notes: 'Died after a bad molt attempt.' });
-  const backup = animal('MO-043', 'male', { maturedOn: on(150), acquiredOn: on(90), acquiredFrom: 'A club swap', notes: 'Bought as a backup male.' });
+  const female = animal('MO-041', 'female', { acquiredOn: on(900), notes: 'First season as a mother.' });
+  const first = animal('MO-042', 'male', { maturedOn: on(460), status: 'deceased', statusOn: on(DAYS.firstMaleDied), notes: 'Died after a bad molt attempt.' });
+  const backup = animal('MO-043', 'male', { maturedOn: on(220), acquiredOn: on(180), acquiredFrom: 'A club swap', notes: 'Bought as a backup male.' });
 
   const p = em.create(Project, {
     owner: mira,
