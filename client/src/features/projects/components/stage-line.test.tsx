@@ -2,7 +2,7 @@ import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { ENDED_EARLY_REASONS, PROJECT_STAGE_LINE } from '@broodsilk/shared';
 import { renderWithProviders } from '@/testing/render';
-import { StageLine } from './stage-line';
+import { StageBadge, StageLine } from './stage-line';
 
 const NAMES = ['Planned', 'Paired', 'Waiting for sac', 'Sac laid', 'In incubator', 'Brood', 'Shares settled', 'Closed'];
 
@@ -55,5 +55,9 @@ describe('StageLine', () => {
     expect(screen.getByTestId('stage-current')).toHaveTextContent('Planned · step 1 of 8');
     expect(screen.getByTestId('stage-setback')).toHaveTextContent('The mother ate the sac');
     expect(screen.queryByText('Ended early')).not.toBeInTheDocument();
+  });
+  it('names a setback on the badge of an open project', () => {
+    renderWithProviders(<StageBadge stage={{ stage: 'paired', setback: 'female-molted' }} />);
+    expect(screen.getByTestId('stage-badge')).toHaveTextContent('Paired · the female molted');
   });
 });

@@ -69,10 +69,12 @@ export function StageLine({ stage, note }: { stage: DerivedProjectStage; note?: 
 
 /** The stage as a small badge, for tables and cards. */
 export function StageBadge({ stage }: { stage: DerivedProjectStage }) {
-  const colour = stage.stage === 'ended-early' ? 'clay' : stage.stage === 'closed' || stage.stage === 'shares-settled' ? 'gray' : 'moss';
+  const colour =
+    stage.stage === 'ended-early' ? 'clay' : stage.setback ? 'amber' : stage.stage === 'closed' || stage.stage === 'shares-settled' ? 'gray' : 'moss';
   return (
     <Badge color={colour} variant="light" tt="none" data-testid="stage-badge" style={{ overflow: 'visible', maxWidth: 'none' }}>
       {stageText(stage.stage, stage.reason)}
+      {stage.setback && ` · ${ENDED_EARLY_LABELS[stage.setback]}`}
     </Badge>
   );
 }
