@@ -153,6 +153,20 @@ describe('a second male', () => {
     );
   });
 
+  it('a backup male’s death is written on the projects he was paired in, and when every male is dead the setback says so', async () => {
+    const { owner } = roles;
+    const p = await createProject(t.app, t.orm, owner, { title: 'Backup died too' });
+    const backup = await male(owner);
+    await pair(owner, p.id, { maleId: backup.id, outcome: 'interest-only' }).expect(201);
+    await http().post(`/api/animals/${backup.id}/death`).set('Authorization', owner.bearer).send({ on: today }).expect(200);
+    const died = (await activity(owner, p.id)).filter((e) => e.kind === 'male.died');
+    expect(died.map((e) => e.subject.id)).toEqual([backup.id]);
+    // The first male still lives: no setback yet.
+    expect((await project(owner, p.id)).stage).toEqual({ stage: 'paired' });
+    await http().post(`/api/animals/${p.male.id}/death`).set('Authorization', owner.bearer).send({ on: today }).expect(200);
+    expect((await project(owner, p.id)).stage).toEqual({ stage: 'paired', setback: 'male-died' });
+  });
+
   it('only the keeper records a pairing: partner and caretaker 403, an outsider 404', async () => {
     const backup = await male(roles.owner);
     await pair(roles.partner, roles.projectId, { maleId: backup.id }).expect(403);

@@ -24,7 +24,12 @@ function PairingRow({ p, timeZone, onCorrect }: { p: PairingResponse; timeZone: 
       <Table.Td>{p.male.label}</Table.Td>
       <Table.Td visibleFrom="sm">{p.durationMinutes}</Table.Td>
       <Table.Td>
-        <Badge variant="light" tt="none" color={p.outcome === 'connected' ? 'moss' : p.outcome === 'interest-only' ? 'gray' : 'clay'}>
+        <Badge
+          variant="light"
+          tt="none"
+          color={p.outcome === 'connected' ? 'moss' : p.outcome === 'interest-only' ? 'gray' : 'clay'}
+          styles={{ root: { maxWidth: 'none' }, label: { overflow: 'visible' } }}
+        >
           {PAIRING_OUTCOME_LABELS[p.outcome]}
         </Badge>
       </Table.Td>
@@ -65,7 +70,7 @@ export function PairingsPanel({ projectId, timeZone, canRecord, canCorrect, male
       {pairings.isError && <Alert color="clay">{pairings.error.message}</Alert>}
       {pairings.data && pairings.data.length === 0 && <Text c="dimmed">No pairing recorded yet.</Text>}
       {pairings.data && pairings.data.length > 0 && (
-        <Table.ScrollContainer minWidth={480}>
+        <Table.ScrollContainer minWidth={560}>
           <Table striped verticalSpacing={4} fz="sm" data-testid="pairings-table">
             <Table.Thead>
               <Table.Tr>
