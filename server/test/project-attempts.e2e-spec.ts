@@ -134,7 +134,13 @@ describe('a second male', () => {
     const lentOut = await male(owner, { custody: 'loan-out', custodyParty: 'A friend', dueBackOn: addDays(today, 30) });
     expect((await pair(owner, projectId, { maleId: lentOut.id }).expect(400)).body.details[0].message).toMatch(/out on loan to someone else/);
     const dead = await male(owner, { status: 'deceased', statusOn: addDays(today, -1) });
-    expect((await pair(owner, projectId, { maleId: dead.id }).expect(400)).body.details[0].message).toMatch(/is marked deceased/);
+    expect((await pair(owner, projectId, { maleId: dead.id }).expect(400)).body.details[0].message).toBe(
+      `${dead.label} died on ${addDays(today, -1)}, so a pairing on ${today} cannot be with him.`,
+    );
+    // A pairing before his death may be recorded late.
+    await pair(owner, projectId, { maleId: dead.id, startedAt: hoursAgo(24 * 3), outcome: 'interest-only' }).expect(201);
+    const sold = await male(owner, { status: 'sold', statusOn: addDays(today, -1) });
+    expect((await pair(owner, projectId, { maleId: sold.id }).expect(400)).body.details[0].message).toMatch(/is marked sold/);
     const female = (await project(owner, projectId)).femaleAnimal;
     expect((await pair(owner, projectId, { maleId: female.id }).expect(400)).body.details[0].message).toMatch(/recorded as female, not male/);
     const theirs = await male(stranger);

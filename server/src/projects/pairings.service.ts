@@ -48,9 +48,9 @@ export class PairingsService {
       // A correction mends the record of a pairing that happened, so it is taken after the end too.
       if (!dto.corrects) assertTakesNew(p, 'pairings');
       const target = dto.corrects ? await this.correctionTarget(tx, p, dto.corrects) : null;
-      const male = await pairingMale(tx, p, dto.maleId ?? target?.male.id ?? p.male.id);
       // The owner's calendar day, so every member sees the same stage and warnings.
       const startedOn = todayIn(p.owner.timeZone, startedAt);
+      const male = await pairingMale(tx, p, dto.maleId ?? target?.male.id ?? p.male.id, startedOn);
       const maturedOn = male.maturity === 'mature' ? (male.maturedOn ?? null) : null;
       const warningReason = acceptWarnings(pairingBeforeMaturingWarnings(startedOn, maturedOn), dto);
       const pairing = tx.create(Pairing, {
