@@ -4,11 +4,11 @@ import { addDays, todayIn, type ActivityEventResponse, type PairingResponse, typ
 import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper, type SignedIn } from './support/users';
 import { createAnimal, speciesId } from './support/fixtures/collection';
-import { createProject, projectWithRoles, type ProjectWithRoles } from './support/projects';
+import { addMember, createProject, projectWithRoles, type ProjectWithRoles } from './support/projects';
 import { createSac } from './support/sacs';
 import { Clock } from '../src/common/clock';
 import { Pairing } from '../src/projects/pairing.entity';
-import { accountScenario, api } from './accounts.fixtures';
+import { api, recordCount } from './accounts.fixtures';
 import { User } from '../src/users/user.entity';
 import type { SeedContext } from '../src/seed/demo-seed';
 import { UNHAPPY_SEASON_TITLE, seedUnhappySeason } from '../src/seed/unhappy-season.seeder';
@@ -242,7 +242,25 @@ describe('ending, closing and reopening', () => {
   });
 
   it('a closed project still takes payments, receipt confirmations and ledger corrections', async () => {
-    const s = await accountScenario(t.app, t.orm);
+    // The spec's own keepers, so no new sign-ups: Mira 2 : Tomasz 1, a sac counted at 20.
+    const p = await createProject(t.app, t.orm, roles.owner, { title: 'Closed, still settling' });
+    const s = {
+      projectId: p.id,
+      mira: roles.owner,
+      tomasz: roles.partner,
+      miraId: p.members[0]!.id,
+      tomaszId: await addMember(t.orm, p.id, roles.partner, 'partner'),
+    };
+    const lines = [
+      { memberId: s.miraId, weight: 2, pickOrder: 1 },
+      { memberId: s.tomaszId, weight: 1, pickOrder: 2 },
+    ];
+    const terms = { lines, pricePerSpiderlingMinor: 500, currency: 'EUR', failureClause: 'carries-over', shippingPaidBy: 'recipient' };
+    await api(t.app).post(`/api/projects/${p.id}/terms`).set('Authorization', s.mira.bearer).send(terms).expect(201);
+    const accepted = await api(t.app).post(`/api/projects/${p.id}/terms/1/accept`).set('Authorization', s.tomasz.bearer).send({});
+    expect(accepted.status).toBeLessThan(300);
+    const sac = await createSac(t.app, s.mira, p.id, { layDate: addDays(today, -70) });
+    await recordCount(t.orm, sac.id, 20, new Date(t.app.get(Clock).now().getTime() - 86_400_000));
     const entry = async (who: SignedIn, body: object) => {
       const res = await api(t.app).post(`/api/projects/${s.projectId}/entries`).set('Authorization', who.bearer).send(body);
       expect(res.status, JSON.stringify(res.body)).toBe(201);
