@@ -173,6 +173,15 @@ describe('a second male', () => {
     expect((await project(owner, p.id)).stage).toEqual({ stage: 'paired', setback: 'male-died' });
   });
 
+  it('a backup male is known to the members (403 to read his logs, not 404) and cannot be deleted while paired (409)', async () => {
+    const { owner, partner, projectId } = roles;
+    const backup = (await project(partner, projectId)).males[1]!;
+    await http().get(`/api/animals/${backup.id}/feedings`).set('Authorization', partner.bearer).expect(403);
+    await http().get(`/api/animals/${backup.id}/feedings`).set('Authorization', stranger.bearer).expect(404);
+    const res = await http().delete(`/api/animals/${backup.id}`).set('Authorization', owner.bearer).expect(409);
+    expect(res.body.message).toMatch(/a male paired in the project "Attempts"/);
+  });
+
   it('only the keeper records a pairing: partner and caretaker 403, an outsider 404', async () => {
     const backup = await male(roles.owner);
     await pair(roles.partner, roles.projectId, { maleId: backup.id }).expect(403);
