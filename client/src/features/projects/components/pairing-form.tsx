@@ -1,5 +1,6 @@
 import { Select, Stack, Group, Text } from '@mantine/core';
 import { TimeInput } from '@mantine/dates';
+import '@mantine/dates/styles.css';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { PAIRING_OUTCOMES, TEXT_LIMITS, todayIn, type CreatePairingRequest, type PairingOutcome, type PairingResponse } from '@broodsilk/shared';
