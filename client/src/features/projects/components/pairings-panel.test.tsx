@@ -72,7 +72,7 @@ describe('PairingsPanel', () => {
       durationMinutes: 20,
       outcome: 'interest-only',
     });
-  });
+  }, 20_000); // several typed and clicked steps; a shared 2-core machine needs more than the 5 s default
 
   it('offers neither recording nor correcting to a member who is not the keeper', async () => {
     vi.stubGlobal('fetch', stub([pairing({})]).fetchStub);
