@@ -119,7 +119,7 @@ describe('stage and warnings in responses', () => {
     expect(pairings.body.map((x: { outcome: string }) => x.outcome)).toEqual(['connected', 'interest-only']);
   });
 
-  it('a molt of the female after the pairing shows the warning and ends the stage as female-molted', async () => {
+  it('a molt of the female after the pairing shows the warning and a female-molted setback', async () => {
     const p = await createProject(t.app, t.orm, mira);
     await http()
       .post(`/api/projects/${p.id}/pairings`)
@@ -134,7 +134,7 @@ describe('stage and warnings in responses', () => {
       .send({ moltedOn: addDays(today, -4) })
       .expect(201);
     const res = await http().get(`/api/projects/${p.id}`).set('Authorization', mira.bearer).expect(200);
-    expect(res.body.stage).toEqual({ stage: 'ended-early', reason: 'female-molted' });
+    expect(res.body.stage).toEqual({ stage: 'paired', setback: 'female-molted' }); // advice, not an end: the keeper may pair her again
     expect(res.body.warnings[0]).toMatchObject({
       code: 'female-molted-after-pairing',
       severity: 'danger',
@@ -172,7 +172,7 @@ describe('stage and warnings in responses', () => {
       .send({ status: 'deceased', statusOn: addDays(today, -1) })
       .expect(200);
     const res = await http().get(`/api/projects/${p.id}`).set('Authorization', mira.bearer).expect(200);
-    expect(res.body.stage).toEqual({ stage: 'ended-early', reason: 'male-died' });
+    expect(res.body.stage).toEqual({ stage: 'planned', setback: 'male-died' });
     expect(res.body.warnings).toEqual([expect.objectContaining({ code: 'male-died-before-pairing', message: expect.stringContaining('nothing is owed') })]);
   });
 
@@ -197,7 +197,7 @@ describe('stage and warnings in responses', () => {
       .set('Authorization', mira.bearer)
       .send({ startedAt: daysAgoAt(0), durationMinutes: 10, outcome: 'connected' })
       .expect(409);
-    expect(late.body.message).toMatch(/has ended/);
+    expect(late.body.message).toMatch(/ended early, so no more pairings/);
   });
 
   it('a pairing counts on the owner’s calendar day, whoever looks', async () => {

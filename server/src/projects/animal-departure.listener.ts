@@ -4,10 +4,11 @@ import { MALE_DEPARTURE_KINDS, maleDepartureSummary } from '@broodsilk/shared';
 import type { AnimalDeparture } from '../animals/animal-departure.registry';
 import { ActivityService } from '../activity/activity.service';
 import { Project } from './project.entity';
+import { Pairing } from './pairing.entity';
 import { TermsService } from './terms.service';
 
 /**
- * Writes the male's departure on his projects' timelines: a return on each project he is in, a
+ * Writes the male's departure on his projects' timelines (as first or backup male): a return on each project he is in, a
  * death on each open one (not closed, not ended early) with the failure clause that now applies.
  * A death names the terms, so only the owner and partners see it, like other terms events.
  */
@@ -20,7 +21,9 @@ export class AnimalDepartureListener {
 
   async onDeparture(em: EntityManager, d: AnimalDeparture): Promise<void> {
     const open = d.departure === 'died' ? { closedOn: null, endedEarlyReason: null } : {};
-    const projects = await em.find(Project, { male: d.animal.id, ...open }, { fields: ['id'] });
+    // He is in a project as the male it started with, or as a backup male through a pairing.
+    const paired = await em.find(Pairing, { male: d.animal.id }, { fields: ['project'] });
+    const projects = await em.find(Project, { $or: [{ male: d.animal.id }, { id: { $in: paired.map((x) => x.project.id) } }], ...open }, { fields: ['id'] });
     for (const p of projects) {
       const clause = d.departure === 'died' ? ((await this.terms.inForce(p.id, em))?.failureClause ?? null) : null;
       this.activity.record(em, {

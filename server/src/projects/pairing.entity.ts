@@ -2,6 +2,7 @@ import { Entity, Enum, Index, ManyToOne, Property, Unique } from '@mikro-orm/cor
 import { PAIRING_OUTCOMES, type PairingOutcome } from '@broodsilk/shared';
 import { BaseEntity } from '../database/base.entity';
 import { User } from '../users/user.entity';
+import { Animal } from '../animals/animal.entity';
 import { Project } from './project.entity';
 
 /** One pairing attempt: when the male went in, for how long, how it went. Corrected by a new row that `corrects` it. */
@@ -10,6 +11,10 @@ import { Project } from './project.entity';
 export class Pairing extends BaseEntity {
   @ManyToOne(() => Project, { deleteRule: 'cascade' })
   project!: Project;
+
+  /** The male put in: the project's first male, a backup, or a replacement after a death. */
+  @ManyToOne(() => Animal, { deleteRule: 'restrict', index: 'pairings_male_id_index' })
+  male!: Animal;
 
   @Property({ type: 'timestamptz' })
   startedAt!: Date;

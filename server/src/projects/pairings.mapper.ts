@@ -1,12 +1,13 @@
 import type { PairingResponse } from '@broodsilk/shared';
 import type { Pairing } from './pairing.entity';
 
-/** Needs `recordedBy` loaded; `struckBy` is the id of the pairing that corrected this one. */
+/** Needs `recordedBy` and `male` loaded; `struckBy` is the id of the pairing that corrected this one. */
 export function toPairingResponse(p: Pairing, struckBy: string | null = null): PairingResponse {
   return {
     id: p.id,
     startedAt: p.startedAt.toISOString(),
     on: p.startedOn,
+    male: { id: p.male.id, label: p.male.label },
     durationMinutes: p.durationMinutes,
     outcome: p.outcome,
     notes: p.notes ?? null,

@@ -10,6 +10,8 @@ import type { ProjectAccess } from './project-access.service';
 import { Project } from './project.entity';
 import { Pairing } from './pairing.entity';
 import { struckPairings, toPairingResponse } from './pairings.mapper';
+import { pairingMale } from './pairing-male';
+import { assertTakesNew } from './project-open';
 import type { CreatePairingDto } from './dto/create-pairing.dto';
 import { Clock } from '../common/clock';
 
@@ -26,7 +28,11 @@ export class PairingsService {
 
   /** Newest first, corrected pairings included (flagged with the pairing that struck them). */
   async list(access: ProjectAccess): Promise<PairingResponse[]> {
-    const rows = await this.em.find(Pairing, { project: access.project.id }, { populate: ['recordedBy'], orderBy: { startedAt: 'desc', createdAt: 'desc' } });
+    const rows = await this.em.find(
+      Pairing,
+      { project: access.project.id },
+      { populate: ['recordedBy', 'male'], orderBy: { startedAt: 'desc', createdAt: 'desc' } },
+    );
     const struck = struckPairings(rows);
     return rows.map((p) => toPairingResponse(p, struck.get(p.id) ?? null));
   }
@@ -39,14 +45,17 @@ export class PairingsService {
     if (!dto.corrects && dto.reason) throw badRequest([{ field: 'reason', message: 'A reason goes with a correction (corrects: the id of the pairing).' }]);
     const id = await this.em.transactional(async (tx) => {
       const p = await tx.findOneOrFail(Project, access.project.id, { populate: ['owner', 'male'] });
-      if (p.endedEarlyReason || p.closedOn) throw new ConflictException({ message: 'This project has ended, so no more pairings can be recorded in it.' });
+      // A correction mends the record of a pairing that happened, so it is taken after the end too.
+      if (!dto.corrects) assertTakesNew(p, 'pairings');
       const target = dto.corrects ? await this.correctionTarget(tx, p, dto.corrects) : null;
       // The owner's calendar day, so every member sees the same stage and warnings.
       const startedOn = todayIn(p.owner.timeZone, startedAt);
-      const maturedOn = p.male.maturity === 'mature' ? (p.male.maturedOn ?? null) : null;
+      const male = await pairingMale(tx, p, dto.maleId ?? target?.male.id ?? p.male.id, startedOn);
+      const maturedOn = male.maturity === 'mature' ? (male.maturedOn ?? null) : null;
       const warningReason = acceptWarnings(pairingBeforeMaturingWarnings(startedOn, maturedOn), dto);
       const pairing = tx.create(Pairing, {
         project: p,
+        male,
         startedAt,
         startedOn,
         durationMinutes: dto.durationMinutes,
@@ -57,7 +66,7 @@ export class PairingsService {
         reason: target ? dto.reason!.trim() : null,
         warningReason,
       });
-      const what = `pairing on ${startedOn} (${dto.durationMinutes} min): ${dto.outcome}`;
+      const what = `pairing on ${startedOn} with ${male.label} (${dto.durationMinutes} min): ${dto.outcome}`;
       this.activity.record(tx, {
         projectId: p.id,
         actorId: viewer.id,
@@ -66,12 +75,12 @@ export class PairingsService {
         subjectId: pairing.id,
         summary: target
           ? `Pairing on ${target.startedOn} (${target.outcome}) corrected to a ${what} (${dto.reason!.trim()}).`
-          : `Pairing on ${startedOn} (${dto.durationMinutes} min): ${dto.outcome}.`,
-        data: { on: startedOn, outcome: dto.outcome, durationMinutes: dto.durationMinutes, ...(target ? { corrects: target.id } : {}) },
+          : `Pairing on ${startedOn} with ${male.label} (${dto.durationMinutes} min): ${dto.outcome}.`,
+        data: { on: startedOn, maleId: male.id, outcome: dto.outcome, durationMinutes: dto.durationMinutes, ...(target ? { corrects: target.id } : {}) },
       });
       return pairing.id;
     });
-    return toPairingResponse(await this.em.findOneOrFail(Pairing, id, { populate: ['recordedBy'] }));
+    return toPairingResponse(await this.em.findOneOrFail(Pairing, id, { populate: ['recordedBy', 'male'] }));
   }
 
   private async correctionTarget(tx: EntityManager, project: Project, id: string): Promise<Pairing> {

@@ -2,7 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
 import {
   deriveProjectStage,
-  pairingWarnings,
+  projectWarnings,
   type DerivedProjectStage,
   type FailureClause,
   type PairingFact,
@@ -16,14 +16,18 @@ import { Pairing } from './pairing.entity';
 import { struckPairings } from './pairings.mapper';
 import type { Project } from './project.entity';
 import { ProjectFactsRegistry } from './project-facts.registry';
+import type { Animal } from '../animals/animal.entity';
+import { diedOn, lastMaleDiedOn, projectMales } from './project-males';
 
 export interface ProjectStanding {
   stage: DerivedProjectStage;
   facts: ProjectFacts;
+  /** The first male, then each other male paired with her (with species, recorder and owner). */
+  males: Animal[];
 }
 
 /**
- * Gathers each project's facts (its pairings, the female's molts, the male's death, what the sacs
+ * Gathers each project's facts (its pairings, the female's molts, the males' deaths, what the sacs
  * and accounts modules register) and derives stage and warnings with the shared rules.
  */
 @Injectable()
@@ -33,28 +37,30 @@ export class ProjectStageService {
     private readonly registry: ProjectFactsRegistry,
   ) {}
 
-  /** Projects need `female` and `male` loaded (ids and status). */
+  /** Projects need `female` and `male` loaded (ids and status; `male.species` for warnings). */
   async standings(projects: readonly Project[]): Promise<Map<string, ProjectStanding>> {
     const ids = projects.map((p) => p.id);
     const out = new Map<string, ProjectStanding>();
     if (!ids.length) return out;
     const [pairings, molts, contributed] = await Promise.all([
-      this.em.find(Pairing, { project: { $in: ids } }, { fields: ['project', 'startedOn', 'outcome', 'corrects'] }),
+      this.em.find(Pairing, { project: { $in: ids } }, { fields: ['project', 'male', 'startedAt', 'startedOn', 'outcome', 'corrects'] }),
       this.em.find(Molt, { animal: { $in: projects.map((p) => p.female.id) } }, { fields: ['animal', 'moltedOn'] }),
       this.registry.collect(this.em, ids),
     ]);
     const struck = struckPairings(pairings);
+    const inForce = pairings.filter((x) => !struck.has(x.id));
+    const males = await projectMales(this.em, projects, inForce);
     for (const p of projects) {
       const facts: ProjectFacts = {
-        pairings: pairings.filter((x) => x.project.id === p.id && !struck.has(x.id)).map((x) => ({ on: x.startedOn, outcome: x.outcome })),
+        pairings: inForce.filter((x) => x.project.id === p.id).map((x) => ({ on: x.startedOn, outcome: x.outcome })),
         femaleMolts: molts.filter((m) => m.animal.id === p.female.id).map((m) => m.moltedOn),
         sacs: contributed.get(p.id)?.sacs ?? [],
         sharesSettled: contributed.get(p.id)?.sharesSettled ?? false,
         closedOn: p.closedOn ?? null,
         endedEarly: p.endedEarlyReason ?? null,
-        maleDiedOn: p.male.status === 'deceased' ? (p.male.statusOn ?? p.male.updatedAt.toISOString().slice(0, 10)) : null,
+        maleDiedOn: lastMaleDiedOn(males.get(p.id)!),
       };
-      out.set(p.id, { stage: deriveProjectStage(facts), facts });
+      out.set(p.id, { stage: deriveProjectStage(facts), facts, males: males.get(p.id)! });
     }
     return out;
   }
@@ -67,25 +73,27 @@ export class ProjectStageService {
   }
 
   /**
-   * Warnings while the project is open (not ended or closed by the keeper). Needs `male.species`
-   * loaded; `failureClause` comes from the terms in force.
+   * Warnings while the project is open (not ended or closed by the keeper), for each of its males.
+   * `failureClause` comes from the terms in force.
    */
   warnings(p: Project, standing: ProjectStanding, today: string, failureClause: FailureClause): PairingWarning[] {
     if (p.endedEarlyReason || p.closedOn) return [];
-    const m = p.male;
-    const life = effectiveBreeding(m.species.group, ownBreeding(m.species)).matureMaleLifespanMonths.value;
-    return pairingWarnings({
+    return projectWarnings({
       today,
       pairings: standing.facts.pairings,
       femaleMolts: standing.facts.femaleMolts.filter((d) => d <= today),
       sacLayDates: standing.facts.sacs.map((s) => s.layDate),
-      male: {
-        maturedOn: m.maturity === 'mature' ? (m.maturedOn ?? null) : null,
-        lifespan: { minMonths: life.min, maxMonths: life.max },
-        diedOn: standing.facts.maleDiedOn ?? null,
-        dueBackOn: m.custody === 'loan-in' ? (m.dueBackOn ?? null) : null,
-        returnedOn: m.returnedOn ?? null,
-      },
+      males: standing.males.map((m) => {
+        const life = effectiveBreeding(m.species.group, ownBreeding(m.species)).matureMaleLifespanMonths.value;
+        return {
+          label: m.label,
+          maturedOn: m.maturity === 'mature' ? (m.maturedOn ?? null) : null,
+          lifespan: { minMonths: life.min, maxMonths: life.max },
+          diedOn: diedOn(m),
+          dueBackOn: m.custody === 'loan-in' ? (m.dueBackOn ?? null) : null,
+          returnedOn: m.returnedOn ?? null,
+        };
+      }),
       failureClause,
     });
   }

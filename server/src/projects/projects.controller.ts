@@ -41,4 +41,18 @@ export class ProjectsController {
   end(@CurrentUser() user: AuthUser, @CurrentProject() access: ProjectAccess, @Body() dto: EndProjectDto): Promise<ProjectResponse> {
     return this.projects.end(user, access, dto);
   }
+
+  @Post(':id/close')
+  @HttpCode(200)
+  @ProjectRoles('owner')
+  close(@CurrentUser() user: AuthUser, @CurrentProject() access: ProjectAccess): Promise<ProjectResponse> {
+    return this.projects.close(user, access);
+  }
+
+  @Post(':id/reopen')
+  @HttpCode(200)
+  @ProjectRoles('owner')
+  reopen(@CurrentUser() user: AuthUser, @CurrentProject() access: ProjectAccess): Promise<ProjectResponse> {
+    return this.projects.reopen(user, access);
+  }
 }

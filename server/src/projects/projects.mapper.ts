@@ -79,6 +79,7 @@ export function toProjectResponse(
   viewerId: string,
   warnings: PairingWarning[],
   members: ProjectMember[],
+  males: readonly Animal[],
 ): ProjectResponse {
   return {
     ...toProjectSummary(p, stage, myRole, members.filter((m) => m.role === 'partner').map(memberName)),
@@ -87,6 +88,7 @@ export function toProjectResponse(
     warningReason: p.warningReason ?? null,
     femaleAnimal: toProjectAnimal(p.female, today, viewerId),
     maleAnimal: toProjectAnimal(p.male, today, viewerId),
+    males: males.map((m) => toProjectAnimal(m, today, viewerId)),
     warnings,
     members: members.map((m) => toMemberResponse(m, myRole)),
   };

@@ -54,15 +54,18 @@ export class ProjectsModule implements OnModuleInit {
 
   onModuleInit(): void {
     this.departures.register((em, d) => this.departureListener.onDeparture(em, d));
-    // Members of a project see its two animals (read-only).
-    this.readers.register(
-      async (em, animalId, userId) => (await em.count(ProjectMember, { user: userId, project: { $or: [{ female: animalId }, { male: animalId }] } })) > 0,
-    );
+    // Members of a project see its animals (read-only): the female, the first male and every male paired with her.
+    this.readers.register(async (em, animalId, userId) => {
+      const paired = await em.find(Pairing, { male: animalId }, { fields: ['project'] });
+      const inProject = { $or: [{ female: animalId }, { male: animalId }, { id: { $in: paired.map((x) => x.project.id) } }] };
+      return (await em.count(ProjectMember, { user: userId, project: inProject })) > 0;
+    });
     // An animal in a project keeps its record; the FK (restrict) is the safety net.
     this.usage.register(async (em, animalId) => {
       const p = await em.findOne(Project, { $or: [{ female: animalId }, { male: animalId }] }, { fields: ['title', 'female'] });
-      if (!p) return null;
-      return `It is the ${p.female.id === animalId ? 'female' : 'male'} of the project "${p.title}".`;
+      if (p) return `It is the ${p.female.id === animalId ? 'female' : 'male'} of the project "${p.title}".`;
+      const paired = await em.findOne(Pairing, { male: animalId }, { populate: ['project'] });
+      return paired ? `It is a male paired in the project "${paired.project.title}".` : null;
     });
   }
 }

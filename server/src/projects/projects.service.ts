@@ -1,5 +1,5 @@
 import { ConflictException, Injectable } from '@nestjs/common';
-import { EntityManager } from '@mikro-orm/postgresql';
+import { EntityManager, LockMode } from '@mikro-orm/postgresql';
 import { mayStartProject, secondProjectWarnings, todayIn, type FieldError, type ProjectResponse, type ProjectSummary } from '@broodsilk/shared';
 import type { AuthUser } from '../common/auth-user';
 import { Animal } from '../animals/animal.entity';
@@ -61,7 +61,7 @@ export class ProjectsService {
     const today = this.today(viewer);
     const clause = (await this.terms.inForceClause(p.id)) ?? 'nothing-owed';
     const members = await this.em.find(ProjectMember, { project: p.id }, { populate: ['user'], orderBy: { createdAt: 'asc' } });
-    return toProjectResponse(p, standing.stage, access.role, today, viewer.id, this.stages.warnings(p, standing, today, clause), members);
+    return toProjectResponse(p, standing.stage, access.role, today, viewer.id, this.stages.warnings(p, standing, today, clause), members, standing.males);
   }
 
   /** The owner must have recorded both animals; the owner becomes the first party, role `owner`. */
@@ -145,24 +145,53 @@ export class ProjectsService {
     return this.get(viewer, access);
   }
 
-  /** The owner calls the project off, with a reason; it cannot be undone here. */
-  async end(viewer: AuthUser, access: ProjectAccess, dto: EndProjectDto): Promise<ProjectResponse> {
-    await this.em.transactional(async (tx) => {
-      const p = await tx.findOneOrFail(Project, access.project.id);
-      if (p.endedEarlyReason) throw new ConflictException({ message: `This project already ended early on ${p.endedOn} (${p.endedEarlyReason}).` });
+  /** The owner calls the project off, with a reason; `reopen` undoes it, `close` makes it final. */
+  end(viewer: AuthUser, access: ProjectAccess, dto: EndProjectDto): Promise<ProjectResponse> {
+    return this.changeEnd(viewer, access, (p) => {
       if (p.closedOn) throw new ConflictException({ message: `This project was closed on ${p.closedOn}.` });
+      if (p.endedEarlyReason) throw new ConflictException({ message: `This project already ended early on ${p.endedOn} (${p.endedEarlyReason}).` });
       p.endedEarlyReason = dto.reason;
       p.endedEarlyNote = dto.note ?? null;
       p.endedOn = this.today(viewer);
-      this.activity.record(tx, {
-        projectId: p.id,
-        actorId: viewer.id,
-        kind: 'project.ended',
-        subjectType: 'project',
-        subjectId: p.id,
-        summary: `Ended the project early: ${dto.reason}.`,
-        data: { reason: dto.reason, note: dto.note ?? null },
-      });
+      return { kind: 'project.ended', summary: `Ended the project early: ${dto.reason}.`, data: { reason: dto.reason, note: dto.note ?? null } };
+    });
+  }
+
+  /** The owner closes the project when it is done (also after an early end). Final: a closed project is not reopened. */
+  close(viewer: AuthUser, access: ProjectAccess): Promise<ProjectResponse> {
+    return this.changeEnd(viewer, access, (p) => {
+      if (p.closedOn) throw new ConflictException({ message: `This project was already closed on ${p.closedOn}.` });
+      p.closedOn = this.today(viewer);
+      return { kind: 'project.closed', summary: 'Closed the project.', data: { on: p.closedOn } };
+    });
+  }
+
+  /** Undoes an early end (she laid after all, a backup male turned up); the project takes pairings and sacs again. */
+  reopen(viewer: AuthUser, access: ProjectAccess): Promise<ProjectResponse> {
+    return this.changeEnd(viewer, access, (p) => {
+      if (p.closedOn) throw new ConflictException({ message: `This project was closed on ${p.closedOn}; a closed project stays closed.` });
+      if (!p.endedEarlyReason) throw new ConflictException({ message: 'This project has not ended, so there is nothing to reopen.' });
+      const was = { reason: p.endedEarlyReason, on: p.endedOn ?? null };
+      p.endedEarlyReason = null;
+      p.endedEarlyNote = null;
+      p.endedOn = null;
+      return { kind: 'project.reopened', summary: `Reopened the project (it had ended early${was.on ? ` on ${was.on}` : ''}: ${was.reason}).`, data: was };
+    });
+  }
+
+  /**
+   * One change to how the project ends, with its event, in one transaction. The row is locked so two
+   * taps (or two tabs) cannot both pass the state check and write twice.
+   */
+  private async changeEnd(
+    viewer: AuthUser,
+    access: ProjectAccess,
+    change: (p: Project) => { kind: string; summary: string; data: Record<string, unknown> },
+  ): Promise<ProjectResponse> {
+    await this.em.transactional(async (tx) => {
+      const p = await tx.findOneOrFail(Project, access.project.id, { lockMode: LockMode.PESSIMISTIC_WRITE });
+      const event = change(p);
+      this.activity.record(tx, { projectId: p.id, actorId: viewer.id, subjectType: 'project', subjectId: p.id, ...event });
     });
     return this.get(viewer, access);
   }

@@ -17,6 +17,7 @@ import { assertSacDates } from './sac-rules';
 import { fieldError } from '../common/field-errors';
 import type { CreateSacDto } from './dto/create-sac.dto';
 import type { UpdateSacDto } from './dto/update-sac.dto';
+import { assertTakesNew } from '../projects/project-open';
 
 export const SAC_NOT_FOUND = 'There is no such sac in this project.';
 
@@ -50,6 +51,7 @@ export class SacsService {
     const now = this.clock.now();
     const pulledAt = dto.pulledAt ? new Date(dto.pulledAt) : null;
     assertSacDates({ layDate: dto.layDate, pulledAt, pullFromDay: dto.pullFromDay ?? null, pullToDay: dto.pullToDay ?? null }, viewer.timeZone, now);
+    assertTakesNew(access.project, 'sacs');
     const id = await this.em.transactional(async (tx) => {
       const warningReason = await this.layDateWarnings(tx, access.project.id, dto);
       const sac = tx.create(Sac, {

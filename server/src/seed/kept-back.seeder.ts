@@ -56,6 +56,7 @@ export const seedKeptBack: FeatureSeeder = async (ctx) => {
   const pairedOn = addDays(laid, -28);
   em.create(Pairing, {
     project,
+    male: project.male,
     startedAt: at(-28, 19),
     startedOn: pairedOn,
     durationMinutes: 20,

@@ -186,6 +186,7 @@ export const seedProjects: FeatureSeeder = async (ctx) => {
       const startedOn = addDays(today, -daysAgo);
       const pairing = em.create(Pairing, {
         project: p,
+        male: p.male,
         startedAt: eveningOf(startedOn),
         startedOn,
         durationMinutes: minutes,

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { GROUP_LIFESPAN_DEFAULTS } from '../collection/male-clock.js';
-import { pairingWarnings, type PairingWarningFacts } from './pairing-warnings.js';
+import { pairingWarnings, projectWarnings, type PairingWarningFacts } from './pairing-warnings.js';
 
 // Sperm shed with a molt: docs/trade-facts.md §5 (tarantulaspider.net; reptarach.de; brachypelma-smithi.de).
 // Pairing to sac up to a year: docs/trade-facts.md §3 (keepingexoticpets.com; spinnen-andre.jimdo.com).
@@ -73,6 +73,30 @@ describe('pairing warnings', () => {
     expect(pairingWarnings(base({ male: died, failureClause: 'carries-over' }))[0]!.message).toMatch(/carries over to the next sac or pairing/);
     const after = pairingWarnings(base({ male: died, pairings: [{ on: '2026-05-01', outcome: 'connected' }] }));
     expect(after.map((w) => [w.code, w.severity])).toEqual([['male-died-after-pairing', 'info']]);
+  });
+
+  it('names the male when the project has more than one (a backup male)', () => {
+    const male = { label: 'Backup', maturedOn: '2026-01-01', lifespan, dueBackOn: '2026-05-29' };
+    expect(pairingWarnings(base({ male }))[0]!.message).toBe('The loaned male Backup was due back on 2026-05-29, 3 days ago.');
+    expect(pairingWarnings(base({ male: { label: 'First', maturedOn: '2025-06-01', lifespan, diedOn: '2026-05-15' } }))[0]!.message).toMatch(
+      /^The male First died on 2026-05-15 before a successful pairing\./,
+    );
+  });
+
+  it('gives each male of a project his own clock and loan warnings, and drops a dead male once a backup lives', () => {
+    const facts = base({ pairings: [{ on: '2026-03-01', outcome: 'connected' }], femaleMolts: ['2026-05-10'] });
+    const first = { label: 'First', maturedOn: '2025-06-01', lifespan, diedOn: '2026-04-01' };
+    const backup = { label: 'Backup', maturedOn: '2026-05-20', lifespan, dueBackOn: '2026-05-30' };
+    const both = projectWarnings({ ...facts, males: [first, backup] });
+    expect(both.map((w) => w.code)).toEqual(['female-molted-after-pairing', 'loan-overdue', 'male-fresh']);
+    expect(both.filter((w) => w.code !== 'female-molted-after-pairing').every((w) => w.message.includes('Backup'))).toBe(true);
+    // the first male alone, dead: his death is said, unnamed, and her warning only once
+    const alone = projectWarnings({ ...facts, males: [first] });
+    expect(alone.map((w) => w.code)).toEqual(['female-molted-after-pairing', 'male-died-after-pairing']);
+    expect(alone[1]!.message).toMatch(/^The male died on 2026-04-01/);
+    // both dead: both deaths are said, each named
+    const dead = projectWarnings({ ...facts, males: [first, { ...backup, diedOn: '2026-05-31' }] });
+    expect(dead.filter((w) => w.code.startsWith('male-died')).map((w) => w.message.slice(0, 20))).toEqual(['The male First died ', 'The male Backup died']);
   });
 
   it('lists the most severe first', () => {

@@ -22,6 +22,8 @@ export interface PairingWarning {
 }
 
 export interface PairingWarningMale {
+  /** Names him in the messages when a project has had more than one male. */
+  label?: string;
   maturedOn?: CalendarDate | null;
   lifespan: MaleLifespan;
   diedOn?: CalendarDate | null;
@@ -54,6 +56,7 @@ const CLAUSE_TEXT: Record<FailureClause, string> = {
 export function pairingWarnings(facts: PairingWarningFacts): PairingWarning[] {
   const { today, male } = facts;
   assertCalendarDate(today, 'date today');
+  const him = male?.label ? `The male ${male.label}` : 'The male';
   const out: PairingWarning[] = [];
   const connected = facts.pairings
     .filter((p) => p.outcome === 'connected')
@@ -88,12 +91,12 @@ export function pairingWarnings(facts: PairingWarningFacts): PairingWarning[] {
         ? {
             code: 'male-died-after-pairing',
             severity: 'info',
-            message: `The male died on ${male.diedOn}, after a successful pairing on ${before}; the female can still lay from that pairing.`,
+            message: `${him} died on ${male.diedOn}, after a successful pairing on ${before}; the female can still lay from that pairing.`,
           }
         : {
             code: 'male-died-before-pairing',
             severity: 'danger',
-            message: `The male died on ${male.diedOn} before a successful pairing. ${CLAUSE_TEXT[facts.failureClause]}`,
+            message: `${him} died on ${male.diedOn} before a successful pairing. ${CLAUSE_TEXT[facts.failureClause]}`,
           },
     );
   } else if (male) {
@@ -101,7 +104,11 @@ export function pairingWarnings(facts: PairingWarningFacts): PairingWarning[] {
       assertCalendarDate(male.dueBackOn, 'due-back date');
       const late = diffDays(male.dueBackOn, today);
       if (late > 0) {
-        out.push({ code: 'loan-overdue', severity: 'warning', message: `The loaned male was due back on ${male.dueBackOn}, ${days(late)} ago.` });
+        out.push({
+          code: 'loan-overdue',
+          severity: 'warning',
+          message: `${male.label ? `The loaned male ${male.label}` : 'The loaned male'} was due back on ${male.dueBackOn}, ${days(late)} ago.`,
+        });
       }
     }
     if (male.maturedOn && !anySac && male.maturedOn <= today) {
@@ -111,26 +118,26 @@ export function pairingWarnings(facts: PairingWarningFacts): PairingWarning[] {
         out.push({
           code: 'male-fresh',
           severity: 'info',
-          message: `The male matured ${days(clock.daysSinceMaturing)} ago. Wait for his first sperm web (usually 2–4 weeks after the molt) before pairing.`,
+          message: `${him} matured ${days(clock.daysSinceMaturing)} ago. Wait for his first sperm web (usually 2–4 weeks after the molt) before pairing.`,
         });
       } else if (clock.state === 'late') {
         out.push({
           code: 'male-clock-late',
           severity: 'warning',
-          message: `The male matured ${days(clock.daysSinceMaturing)} ago and is in the late part of his usual lifespan, which ends around ${endsOn}.`,
+          message: `${him} matured ${days(clock.daysSinceMaturing)} ago and is in the late part of his usual lifespan, which ends around ${endsOn}.`,
         });
       } else if (clock.state === 'past-typical') {
         out.push({
           code: 'male-clock-past-typical',
           severity: 'warning',
-          message: `The male matured ${days(clock.daysSinceMaturing)} ago, past his usual lifespan (to around ${endsOn}). He may die any day.`,
+          message: `${him} matured ${days(clock.daysSinceMaturing)} ago, past his usual lifespan (to around ${endsOn}). He may die any day.`,
         });
       }
       if (!lastConnected && (clock.state === 'late' || clock.state === 'past-typical')) {
         out.push({
           code: 'no-pairing-male-late',
           severity: 'danger',
-          message: 'No successful pairing yet and the male is running out of time: pair him soon.',
+          message: `No successful pairing yet and ${him.replace(/^The/, 'the')} is running out of time: pair him soon.`,
         });
       }
     }
@@ -138,4 +145,29 @@ export function pairingWarnings(facts: PairingWarningFacts): PairingWarning[] {
 
   const rank: Record<WarningSeverity, number> = { danger: 0, warning: 1, info: 2 };
   return out.sort((a, b) => rank[a.severity] - rank[b.severity]);
+}
+
+/** Warnings about the female and the pairings, not about a male: said once per project. */
+const ABOUT_HER: ReadonlySet<PairingWarningCode> = new Set(['female-molted-after-pairing', 'no-sac-after-a-year']);
+
+export interface ProjectWarningFacts extends Omit<PairingWarningFacts, 'male'> {
+  /** Every male of the project, the first one first. */
+  males: readonly PairingWarningMale[];
+}
+
+/**
+ * Warnings for a project that may have had several males (a backup, a replacement after a death):
+ * the female's once, and the clock, loan and death warnings of each male, named when there are
+ * several. A dead male is left out once another male of the project lives: the living one carries
+ * the attempt on.
+ */
+export function projectWarnings(facts: ProjectWarningFacts): PairingWarning[] {
+  const { males, ...rest } = facts;
+  const several = males.length > 1;
+  const anyAlive = males.some((m) => !m.diedOn);
+  const perMale = males
+    .filter((m) => !(several && m.diedOn && anyAlive))
+    .flatMap((m) => pairingWarnings({ ...rest, male: several ? m : { ...m, label: undefined } }).filter((w) => !ABOUT_HER.has(w.code)));
+  const rank: Record<WarningSeverity, number> = { danger: 0, warning: 1, info: 2 };
+  return [...pairingWarnings({ ...rest, male: null }), ...perMale].sort((a, b) => rank[a.severity] - rank[b.severity]);
 }

@@ -37,22 +37,24 @@ describe('project stage', () => {
     expect(deriveProjectStage(facts({ pairings: [paired('2025-11-01')], femaleMolts: ['2025-08-01'] }))).toEqual({ stage: 'waiting-for-sac' });
   });
 
-  it('ends early when the female molts after the last connected pairing and before a sac', () => {
+  it('goes back to paired, open, when the female molts after the last connected pairing and before a sac', () => {
     const base = { pairings: [paired('2025-11-01')], femaleMolts: ['2026-01-15'] };
-    expect(deriveProjectStage(facts(base))).toEqual({ stage: 'ended-early', reason: 'female-molted' });
-    expect(deriveProjectStage(facts({ ...base, femaleMolts: ['2025-11-01'] }))).toEqual({ stage: 'ended-early', reason: 'female-molted' }); // same day counts as after
+    expect(deriveProjectStage(facts(base))).toEqual({ stage: 'paired', setback: 'female-molted' });
+    expect(deriveProjectStage(facts({ ...base, femaleMolts: ['2025-11-01'] }))).toEqual({ stage: 'paired', setback: 'female-molted' }); // same day counts as after
     // a later attempt that did not connect does not help
     expect(deriveProjectStage(facts({ ...base, pairings: [...base.pairings, paired('2026-03-01', 'interest-only')] }))).toMatchObject({
-      reason: 'female-molted',
+      setback: 'female-molted',
     });
     // a later connected pairing does
     expect(deriveProjectStage(facts({ ...base, pairings: [...base.pairings, paired('2026-03-01')] }))).toEqual({ stage: 'waiting-for-sac' });
   });
 
-  it('ends early when the male dies before any connected pairing', () => {
-    expect(deriveProjectStage(facts({ maleDiedOn: '2025-10-01' }))).toEqual({ stage: 'ended-early', reason: 'male-died' });
-    expect(deriveProjectStage(facts({ pairings: [paired('2025-11-01', 'male-lost')] }))).toEqual({ stage: 'ended-early', reason: 'male-died' });
-    expect(deriveProjectStage(facts({ pairings: [paired('2025-11-01', 'aggression')], maleDiedOn: '2025-11-20' }))).toMatchObject({ reason: 'male-died' });
+  it('stays open with a setback when the male dies before any connected pairing', () => {
+    expect(deriveProjectStage(facts({ maleDiedOn: '2025-10-01' }))).toEqual({ stage: 'planned', setback: 'male-died' });
+    expect(deriveProjectStage(facts({ pairings: [paired('2025-11-01', 'male-lost')] }))).toEqual({ stage: 'paired', setback: 'male-died' });
+    expect(deriveProjectStage(facts({ pairings: [paired('2025-11-01', 'aggression')], maleDiedOn: '2025-11-20' }))).toMatchObject({ setback: 'male-died' });
+    // a backup male connects after the first one was lost: waiting for a sac again
+    expect(deriveProjectStage(facts({ pairings: [paired('2025-11-01', 'male-lost'), paired('2025-12-01')] }))).toEqual({ stage: 'waiting-for-sac' });
   });
 
   it('follows a sac from laying to the incubator, the brood and settled shares', () => {
@@ -76,16 +78,22 @@ describe('project stage', () => {
     expect(deriveProjectStage(facts({ pairings: [paired('2025-11-01')], sacs: [sac()], femaleMolts: ['2026-05-01'] }))).toMatchObject({ stage: 'sac-laid' });
   });
 
-  it('ends early when the sac fails or is eaten, unless she is paired again', () => {
+  it('stays open with a setback when the sac fails or is eaten, until she is paired again', () => {
     const pairings = [paired('2025-11-01')];
-    expect(deriveProjectStage(facts({ pairings, sacs: [sac({ fate: 'failed' })] }))).toEqual({ stage: 'ended-early', reason: 'sac-failed', sacId: 's1' });
-    expect(deriveProjectStage(facts({ pairings, sacs: [sac({ fate: 'eaten' })] }))).toEqual({ stage: 'ended-early', reason: 'sac-eaten', sacId: 's1' });
+    expect(deriveProjectStage(facts({ pairings, sacs: [sac({ fate: 'failed' })] }))).toEqual({ stage: 'planned', setback: 'sac-failed', sacId: 's1' });
+    expect(deriveProjectStage(facts({ pairings, sacs: [sac({ fate: 'eaten' })] }))).toEqual({ stage: 'planned', setback: 'sac-eaten', sacId: 's1' });
     // a failed brood after first instar is still a failed sac
-    expect(deriveProjectStage(facts({ pairings, sacs: [sac({ fate: 'failed', broodStage: 'first-instar' })] }))).toMatchObject({ reason: 'sac-failed' });
-    // re-paired after the failure: waiting again; a molt after the new pairing ends it again
+    expect(deriveProjectStage(facts({ pairings, sacs: [sac({ fate: 'failed', broodStage: 'first-instar' })] }))).toMatchObject({ setback: 'sac-failed' });
+    // an attempt after the sac that did not connect: paired, the setback still stands
+    expect(deriveProjectStage(facts({ pairings: [...pairings, paired('2026-04-01', 'female-refused')], sacs: [sac({ fate: 'eaten' })] }))).toEqual({
+      stage: 'paired',
+      setback: 'sac-eaten',
+      sacId: 's1',
+    });
+    // re-paired after the failure: waiting again; a molt after the new pairing is a new setback
     const again = { pairings: [...pairings, paired('2026-05-01')], sacs: [sac({ fate: 'eaten' })] };
     expect(deriveProjectStage(facts(again))).toEqual({ stage: 'waiting-for-sac' });
-    expect(deriveProjectStage(facts({ ...again, femaleMolts: ['2026-07-01'] }))).toEqual({ stage: 'ended-early', reason: 'female-molted' });
+    expect(deriveProjectStage(facts({ ...again, femaleMolts: ['2026-07-01'] }))).toEqual({ stage: 'paired', setback: 'female-molted' });
     // a second sac after the failed one
     expect(deriveProjectStage(facts({ ...again, sacs: [sac({ fate: 'eaten' }), sac({ id: 's2', layDate: '2026-08-01', pulledOn: '2026-08-25' })] }))).toEqual({
       stage: 'in-incubator',
@@ -102,7 +110,12 @@ describe('project stage', () => {
     const brood = { pairings: [paired('2025-11-01')], sacs: [sac({ broodStage: 'second-instar' })], sharesSettled: true };
     expect(deriveProjectStage(facts({ ...brood, closedOn: '2026-09-01' }))).toEqual({ stage: 'closed' });
     expect(deriveProjectStage(facts({ pairings: [paired('2025-11-01')], endedEarly: 'no-sac' }))).toEqual({ stage: 'ended-early', reason: 'no-sac' });
-    expect(deriveProjectStage(facts({ ...brood, endedEarly: 'sac-failed', closedOn: '2026-09-01' }))).toEqual({ stage: 'ended-early', reason: 'sac-failed' });
+    // closing after an early end: closed wins
+    expect(deriveProjectStage(facts({ ...brood, endedEarly: 'sac-failed', closedOn: '2026-09-01' }))).toEqual({ stage: 'closed' });
+    // only the keeper ends a project: no fact alone gives ended-early
+    expect(
+      deriveProjectStage(facts({ pairings: [paired('2025-11-01', 'male-lost')], maleDiedOn: '2025-11-01', sacs: [sac({ fate: 'eaten' })] })).stage,
+    ).not.toBe('ended-early');
   });
 
   it('rejects impossible dates with a readable message', () => {

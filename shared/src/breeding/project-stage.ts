@@ -18,6 +18,9 @@ export const PROJECT_STAGE_LINE: readonly ProjectStage[] = [
 
 export type EndedEarlyReason = 'no-sac' | 'female-molted' | 'sac-failed' | 'sac-eaten' | 'male-died';
 
+/** What went wrong in the current attempt, read from the facts: advice to try again, never an end. */
+export type ProjectSetback = Exclude<EndedEarlyReason, 'no-sac'>;
+
 export interface ProjectFacts {
   pairings: readonly PairingFact[];
   /** Molts of the female (dates); only those after a pairing matter. */
@@ -27,12 +30,16 @@ export interface ProjectFacts {
   closedOn?: CalendarDate | null;
   /** Set by the keeper when calling the project off (e.g. 'no-sac' after waiting long enough). */
   endedEarly?: EndedEarlyReason | null;
+  /** When the last of the project's males died; null while one of them lives. */
   maleDiedOn?: CalendarDate | null;
 }
 
 export interface DerivedProjectStage {
   stage: ProjectStage;
+  /** Why the keeper ended it (stage `ended-early` only). */
   reason?: EndedEarlyReason;
+  /** What went wrong in the current attempt; the project stays open for the next pairing and sac. */
+  setback?: ProjectSetback;
   /** The sac the stage is about (sac-laid, in-incubator, brood, a failed sac). */
   sacId?: string;
   /** Steps before the current one with nothing recorded (a sac with no successful pairing before it): not "done". */
@@ -45,20 +52,20 @@ const latest = <T>(items: readonly T[], date: (t: T) => string): T | undefined =
   [...items].sort((a, b) => (date(a) < date(b) ? -1 : date(a) > date(b) ? 1 : 0)).at(-1);
 
 /**
- * A project's stage from its facts. Rules, first match wins:
- * 1. The keeper ended it early → `ended-early` with their reason.
- * 2. `closedOn` set → `closed`.
+ * A project's stage from its facts. Only the keeper ends or closes a project; what goes wrong is a
+ * `setback` on a stage that stays open for another attempt. Rules, first match wins:
+ * 1. `closedOn` set → `closed` (also after an early end).
+ * 2. The keeper ended it early → `ended-early` with their reason.
  * 3. A developing sac with young at first instar or later → `shares-settled` if shares are settled, else `brood`.
  * 4. Another developing sac → `in-incubator` if pulled, else `sac-laid` (left with the mother).
  *    For 3 and 4, `unrecorded: ['paired']` when no connected pairing is recorded on or before the sac's lay date.
  * 5. The "current attempt" is everything after the lay date of the latest failed or eaten sac (or
- *    everything, if none). With no connected pairing in it:
- *    - a failed sac before it → `ended-early` `sac-eaten` or `sac-failed` (the latest one's outcome);
- *      a new connected pairing later moves the project on again;
- *    - the male died, or the last pairing ended with the male lost → `ended-early` `male-died`;
- *    - any pairing attempt → `paired`; none → `planned`.
+ *    everything, if none). With no connected pairing in it the stage is `paired` after any attempt,
+ *    else `planned`, with a setback:
+ *    - a failed sac before it → `sac-eaten` or `sac-failed` (the latest one's fate);
+ *    - the last male died, or the last pairing ended with the male lost → `male-died`.
  * 6. With a connected pairing: a female molt on or after the last connected pairing (sperm is shed with
- *    the molt, docs/trade-facts.md §5) → `ended-early` `female-molted`; otherwise → `waiting-for-sac`.
+ *    the molt, docs/trade-facts.md §5) → `paired` with setback `female-molted`; otherwise → `waiting-for-sac`.
  *    A molt on the pairing day counts as after it. The male dying after connecting changes nothing.
  * `no-sac` is never derived: how long to wait is the keeper's call (see pairing warnings).
  */
@@ -71,8 +78,8 @@ export function deriveProjectStage(facts: ProjectFacts): DerivedProjectStage {
   }
   if (facts.maleDiedOn) assertCalendarDate(facts.maleDiedOn, 'date the male died');
 
-  if (facts.endedEarly) return { stage: 'ended-early', reason: facts.endedEarly };
   if (facts.closedOn) return { stage: 'closed' };
+  if (facts.endedEarly) return { stage: 'ended-early', reason: facts.endedEarly };
 
   const withId = (stage: ProjectStage, sac: SacFact | undefined): DerivedProjectStage => (sac?.id !== undefined ? { stage, sacId: sac.id } : { stage });
   // A sac stage says the steps before it happened; "paired" only did if a successful pairing is recorded before the sac.
@@ -99,11 +106,12 @@ export function deriveProjectStage(facts: ProjectFacts): DerivedProjectStage {
     (p) => p.on,
   );
   if (!lastConnected) {
-    if (lastDead) return { ...withId('ended-early', lastDead), reason: lastDead.fate === 'eaten' ? 'sac-eaten' : 'sac-failed' };
+    const stage: ProjectStage = attempt.length > 0 ? 'paired' : 'planned';
+    if (lastDead) return { ...withId(stage, lastDead), setback: lastDead.fate === 'eaten' ? 'sac-eaten' : 'sac-failed' };
     const lastPairing = latest(attempt, (p) => p.on);
-    if (facts.maleDiedOn || lastPairing?.outcome === 'male-lost') return { stage: 'ended-early', reason: 'male-died' };
-    return { stage: attempt.length > 0 ? 'paired' : 'planned' };
+    if (facts.maleDiedOn || lastPairing?.outcome === 'male-lost') return { stage, setback: 'male-died' };
+    return { stage };
   }
-  if (facts.femaleMolts.some((m) => m >= lastConnected.on)) return { stage: 'ended-early', reason: 'female-molted' };
+  if (facts.femaleMolts.some((m) => m >= lastConnected.on)) return { stage: 'paired', setback: 'female-molted' };
   return { stage: 'waiting-for-sac' };
 }

@@ -8,6 +8,11 @@ export interface CreatePairingRequest extends AcknowledgedWarnings {
   durationMinutes: number;
   outcome: PairingOutcome;
   notes?: string | null;
+  /**
+   * The male put in: the project's first male when left out. Another male must be mature and the
+   * keeper's own or on loan to them (a backup male, a replacement after a death).
+   */
+  maleId?: string;
   /** Correcting a recorded pairing: its id (it stays, struck) and why it was wrong. */
   corrects?: string;
   reason?: string;
@@ -18,6 +23,7 @@ export interface PairingResponse {
   startedAt: string;
   /** The calendar date in the project owner's time zone, as stages and warnings count it. */
   on: CalendarDate;
+  male: { id: string; label: string };
   durationMinutes: number;
   outcome: PairingOutcome;
   notes: string | null;

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { PROJECT_STAGE_LINE } from '../breeding/project-stage.js';
 import { ANIMAL_STATUSES } from '../collection/animals.types.js';
 import { PROJECT_ROLES } from './project.types.js';
-import { isDealParty, isHandsOn, isProjectOpen, mayStartProject } from './project-rules.js';
+import { isDealParty, isHandsOn, isProjectOpen, mayClose, mayReopen, mayStartProject } from './project-rules.js';
 
 // Product rules (PRODUCT.md), not an outside source: the expected sets are written out by hand.
 describe('project rules', () => {
@@ -10,6 +10,12 @@ describe('project rules', () => {
     const stages = [...PROJECT_STAGE_LINE, 'ended-early' as const];
     expect(stages.filter((stage) => !isProjectOpen(stage))).toEqual(['closed', 'ended-early']);
     expect(stages.filter(isProjectOpen)).toHaveLength(7);
+  });
+
+  it('only an early end can be reopened; a closed project is final, every other one can be closed', () => {
+    const stages = [...PROJECT_STAGE_LINE, 'ended-early' as const];
+    expect(stages.filter(mayReopen)).toEqual(['ended-early']);
+    expect(stages.filter((stage) => !mayClose(stage))).toEqual(['closed']);
   });
 
   it('only an active animal or one on loan may start a project', () => {

@@ -2,7 +2,10 @@ import type { ProjectStage } from '../breeding/project-stage.js';
 import type { AnimalStatus } from '../collection/animals.types.js';
 import type { ProjectRole } from './project.types.js';
 
-/** A project is open until it is closed or ends early; only an open project takes new sacs, pairings and rolls. */
+/**
+ * A project is open until its keeper closes it or ends it early; only an open project takes new sacs and
+ * pairings. A setback (a sac eaten, a molt after pairing, a dead male) leaves it open for another attempt.
+ */
 export function isProjectOpen(stage: ProjectStage): boolean {
   return stage !== 'closed' && stage !== 'ended-early';
 }
@@ -28,4 +31,14 @@ export const DEAL_PARTY_ROLES: readonly ProjectRole[] = ['owner', 'partner'];
 /** Whether this role reads the terms and the account of the project. */
 export function isDealParty(role: ProjectRole): boolean {
   return DEAL_PARTY_ROLES.includes(role);
+}
+
+/** Only an early end can be undone: a closed project stays closed. */
+export function mayReopen(stage: ProjectStage): boolean {
+  return stage === 'ended-early';
+}
+
+/** The keeper closes a project when it is done, also after an early end; closing is final. */
+export function mayClose(stage: ProjectStage): boolean {
+  return stage !== 'closed';
 }

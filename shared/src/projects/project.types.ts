@@ -31,7 +31,7 @@ export interface EndProjectRequest {
   note?: string | null;
 }
 
-/** One of the project's two animals as members see it: read-only, with clock and readiness. */
+/** One of the project's animals as members see it: read-only, with clock and readiness. */
 export interface ProjectAnimal extends AnimalSummary {
   owner: { name: string; userId?: string };
   dueBackOn: CalendarDate | null;
@@ -62,7 +62,10 @@ export interface ProjectResponse extends ProjectSummary {
   /** Why the project was started despite a plausibility warning. */
   warningReason: string | null;
   femaleAnimal: ProjectAnimal;
+  /** The male the project started with. */
   maleAnimal: ProjectAnimal;
+  /** Every male of the project: the first one, then each other male paired with her, in the order first paired. */
+  males: ProjectAnimal[];
   warnings: PairingWarning[];
   members: ProjectMemberResponse[];
 }

@@ -1,4 +1,4 @@
-import type { EndedEarlyReason, ProjectStage } from '../breeding/project-stage.js';
+import type { EndedEarlyReason, ProjectSetback, ProjectStage } from '../breeding/project-stage.js';
 import type { MaleClockState } from '../collection/male-clock.js';
 import type { PairingOutcome, SacFate } from '../breeding/pairing.types.js';
 import type { SacOutcomeState } from '../sacs/sacs.types.js';
@@ -27,6 +27,18 @@ export const ENDED_EARLY_LABELS: Record<EndedEarlyReason, string> = {
   'sac-failed': 'the sac failed',
   'sac-eaten': 'the sac was eaten',
   'male-died': 'the male died before pairing',
+};
+
+/**
+ * Advice for a setback in the current attempt (see deriveProjectStage): what happened and what to do
+ * next. The project stays open; ending it is the keeper's call. The molt rule follows
+ * docs/trade-facts.md §5; the rest is common practice.
+ */
+export const SETBACK_ADVICE: Record<ProjectSetback, string> = {
+  'female-molted': 'The female molted after the last pairing, so that pairing is lost: pair her again once she has hardened.',
+  'sac-eaten': 'The mother ate the sac. First-time mothers often do: let her feed up, then pair her again.',
+  'sac-failed': 'The last sac failed. Let her feed up and pair her again, or end the project if she is done for the season.',
+  'male-died': 'The male died before a successful pairing: pair her with a backup male, or end the project.',
 };
 
 export const SAC_OUTCOME_LABELS: Record<SacOutcomeState, string> = { 'in-progress': 'In progress', emerged: 'Young emerged', failed: 'Failed' };

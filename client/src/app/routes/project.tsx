@@ -1,6 +1,6 @@
 import { Alert, Anchor, Badge, Grid, Group, Stack, Text } from '@mantine/core';
 import type { QueryClient } from '@tanstack/react-query';
-import { isDealParty, isProjectOpen } from '@broodsilk/shared';
+import { isDealParty, isProjectOpen, type MaleClockRow, type ProjectResponse } from '@broodsilk/shared';
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
 import { PageHeader } from '@/components/ui/page-header';
 import { PageLoader } from '@/components/ui/page-loader';
@@ -13,6 +13,9 @@ import { termsQueries } from '@/features/projects/api/terms';
 import { ActivityTimeline } from '@/features/projects/components/activity-timeline';
 import { EndProjectForm } from '@/features/projects/components/end-project-form';
 import { PairingsPanel } from '@/features/projects/components/pairings-panel';
+import type { MaleOption } from '@/features/projects/components/pairing-form';
+import { ProjectEndActions } from '@/features/projects/components/project-end-actions';
+import { animalQueries, useMalesByClock } from '@/features/collection/api/animals';
 import { PartiesPanel } from '@/features/projects/components/parties-panel';
 import { ProjectAnimals } from '@/features/projects/components/project-animals';
 import { StageLine } from '@/features/projects/components/stage-line';
@@ -41,15 +44,34 @@ export const clientLoader =
       qc.ensureQueryData(calendarQueries.feed()),
     );
     const project = await qc.ensureQueryData(projectQueries.detail(id));
-    await Promise.all([panels, preloadPanels(isDealParty(project.myRole) && qc.ensureQueryData(termsQueries.list(id)))]);
+    const isOwner = project.myRole === 'owner';
+    await Promise.all([
+      panels,
+      preloadPanels(isDealParty(project.myRole) && qc.ensureQueryData(termsQueries.list(id)), isOwner && qc.ensureQueryData(animalQueries.males())),
+    ]);
     return null;
   };
+
+/**
+ * The males the keeper can name in a pairing: the project's own (the latest living one first, the
+ * usual choice for the next attempt), then the keeper's other mature males as backups.
+ */
+function maleOptions(p: ProjectResponse, mature: readonly MaleClockRow[]): MaleOption[] {
+  const own = [...p.males].reverse().sort((a, b) => Number(a.status === 'deceased') - Number(b.status === 'deceased'));
+  const ids = new Set(own.map((m) => m.id));
+  return [
+    ...own.map((m) => ({ value: m.id, label: m.status === 'deceased' ? `${m.label} (died)` : m.label })),
+    ...mature.filter((r) => !ids.has(r.animal.id)).map((r) => ({ value: r.animal.id, label: `${r.animal.label} (backup)` })),
+  ];
+}
 
 export function Component() {
   const { projectId } = useParams() as { projectId: string };
   const { data: me } = useMe();
   const project = useProject(projectId);
   const activity = useProjectActivity(projectId);
+  const isKeeper = project.data?.myRole === 'owner';
+  const mature = useMalesByClock(isKeeper);
   if (!me || project.isPending) return <PageLoader />;
   if (project.isError) return <Alert color="clay">{project.error.message}</Alert>;
   const p = project.data;
@@ -62,7 +84,7 @@ export function Component() {
         title={p.title}
         description={
           <>
-            {p.femaleAnimal.label} × {p.maleAnimal.label} · run by {p.owner.name} · you: {ROLE_LABELS[p.myRole].toLowerCase()}
+            {p.femaleAnimal.label} × {p.males.map((m) => m.label).join(' / ')} · run by {p.owner.name} · you: {ROLE_LABELS[p.myRole].toLowerCase()}
           </>
         }
         actions={
@@ -93,7 +115,13 @@ export function Component() {
               />
             </SectionCard>
             <SectionCard title="Pairings" testId="section-pairings">
-              <PairingsPanel projectId={p.id} timeZone={me.timeZone} canRecord={isOwner && live} />
+              <PairingsPanel
+                projectId={p.id}
+                timeZone={me.timeZone}
+                canRecord={isOwner && live}
+                canCorrect={isOwner}
+                males={maleOptions(p, mature.data ?? [])}
+              />
             </SectionCard>
             <SectionCard title="Terms" testId="section-terms">
               {isDealParty(p.myRole) ? (
@@ -106,8 +134,8 @@ export function Component() {
         </Grid.Col>
         <Grid.Col span={{ base: 12, md: 5 }}>
           <Stack>
-            <SectionCard title="The pair">
-              <ProjectAnimals female={p.femaleAnimal} male={p.maleAnimal} />
+            <SectionCard title={p.males.length > 1 ? 'The animals' : 'The pair'}>
+              <ProjectAnimals female={p.femaleAnimal} males={p.males} />
             </SectionCard>
             <SectionCard title="Parties" testId="section-parties">
               <PartiesPanel projectId={p.id} members={p.members} myRole={p.myRole} timeZone={me.timeZone} />
@@ -129,7 +157,8 @@ export function Component() {
                 </Text>
               </SectionCard>
             )}
-            {isOwner && live && <EndProjectForm projectId={p.id} />}
+            {isOwner && live && <EndProjectForm projectId={p.id} setback={p.stage.setback} />}
+            {isOwner && <ProjectEndActions projectId={p.id} stage={p.stage.stage} />}
             {!live && (
               <Group>
                 <Badge color="gray" variant="light" tt="none">

@@ -22,6 +22,10 @@ export class CreatePairingDto extends AcknowledgedWarningsDto implements CreateP
   notes?: string | null;
 
   @IsOptional()
+  @IsUUID('all', { message: 'maleId must be the id of a male in your collection.' })
+  maleId?: string;
+
+  @IsOptional()
   @IsUUID('all', { message: 'corrects must be the id of the pairing to correct.' })
   corrects?: string;
 

@@ -81,6 +81,25 @@ export const rows: MatrixRow[] = [
       body: { reason: 'no-sac' },
     }),
   },
+  {
+    method: 'POST',
+    path: '/api/projects/:id/close',
+    expect: OWNER_ONLY,
+    request: async (fx, actor): Promise<MatrixRequest> => ({ params: actor === 'owner' ? { id: (await fx.freshProject()).id } : {} }),
+  },
+  {
+    method: 'POST',
+    path: '/api/projects/:id/reopen',
+    expect: OWNER_ONLY,
+    // The owner reopens a fresh project it has just ended; the others are refused before the state is looked at.
+    request: async (fx, actor): Promise<MatrixRequest> => {
+      if (actor !== 'owner') return {};
+      const { id } = await fx.freshProject();
+      const res = await request(fx.app.getHttpServer()).post(`/api/projects/${id}/end`).set('Authorization', fx.users.owner.bearer).send({ reason: 'no-sac' });
+      if (res.status !== 200) throw new Error(`end answered ${res.status}: ${JSON.stringify(res.body)}`);
+      return { params: { id } };
+    },
+  },
   { method: 'GET', path: '/api/projects/:projectId/members', expect: ANY_MEMBER },
   { method: 'POST', path: '/api/projects/:projectId/members', expect: OWNER_ONLY, request: () => ({ body: { name: `Party ${unique()}`, role: 'partner' } }) },
   {

@@ -48,8 +48,9 @@ export function useAnimal(id: string) {
   return useQuery(animalQueries.detail(id));
 }
 
-export function useMalesByClock() {
-  return useQuery(animalQueries.males());
+/** `enabled` false skips the request (a viewer who may not pair them). */
+export function useMalesByClock(enabled = true) {
+  return useQuery({ ...animalQueries.males(), enabled });
 }
 
 export function useCreateAnimal() {

@@ -87,6 +87,14 @@ export function useEndProject(id: string) {
   });
 }
 
+/** `close` (final) or `reopen` (undoes an early end); neither takes a body. */
+export function useProjectEndStep(id: string, step: 'close' | 'reopen') {
+  return useMutation({
+    mutationFn: () => api.post<ProjectResponse>(`/projects/${id}/${step}`, {}),
+    meta: { handlesErrors: true, invalidates: afterProjectChange(id) },
+  });
+}
+
 export function useAddProjectMember(projectId: string) {
   return useMutation({
     mutationFn: (body: AddMemberRequest) => addProjectMember(projectId, body),

@@ -13,14 +13,14 @@ import { ENDED_EARLY_LABELS } from '../utils/labels';
 
 const reasonOptions = ENDED_EARLY_REASONS.map((r) => ({ value: r, label: ENDED_EARLY_LABELS[r].replace(/^./, (c) => c.toUpperCase()) }));
 
-/** The keeper calls a project off, with the reason the stage line will show. */
-export function EndProjectForm({ projectId }: { projectId: string }) {
+/** The keeper calls a project off, with the reason the stage line will show; a setback in the facts pre-fills it. */
+export function EndProjectForm({ projectId, setback }: { projectId: string; setback?: EndedEarlyReason }) {
   const [opened, { toggle }] = useDisclosure(false);
   const [message, setMessage] = useState<string | null>(null);
   const end = useEndProject(projectId);
   const form = useForm<{ reason: EndedEarlyReason | null; note: string }>({
     mode: 'uncontrolled',
-    initialValues: { reason: null, note: '' },
+    initialValues: { reason: setback ?? null, note: '' },
     validate: { reason: (v) => (v ? null : 'Why does it end?'), note: textRule({ maxLength: TEXT_LIMITS.note }) },
   });
   const submit = form.onSubmit(async (v) => {

@@ -4,7 +4,7 @@ import { formatDate } from '@/lib/dates';
 import { MALE_CLOCK_TONE } from '@/lib/tones';
 
 function AnimalLine({ role, animal }: { role: string; animal: ProjectAnimal }) {
-  const clock = animal.maleClock;
+  const clock = animal.status === 'deceased' ? null : animal.maleClock;
   return (
     <Card withBorder padding="sm">
       <Stack gap={2}>
@@ -22,6 +22,11 @@ function AnimalLine({ role, animal }: { role: string; animal: ProjectAnimal }) {
           {animal.custody === 'loan-in' && ' · on a breeding loan'}
           {animal.dueBackOn && ` · due back ${formatDate(animal.dueBackOn)}`}
         </Text>
+        {animal.status === 'deceased' && (
+          <Text size="sm" className="tone-failed">
+            Died{animal.statusOn ? ` ${formatDate(animal.statusOn)}` : ''}
+          </Text>
+        )}
         {clock && (
           <Text size="sm" className={MALE_CLOCK_TONE[clock.state].tone || undefined}>
             Male clock: day {clock.daysSinceMaturing} since maturing, {MALE_CLOCK_LABELS[clock.state].label.toLowerCase()}
@@ -33,12 +38,14 @@ function AnimalLine({ role, animal }: { role: string; animal: ProjectAnimal }) {
   );
 }
 
-/** The pair: the female and the male as members see them. */
-export function ProjectAnimals({ female, male }: { female: ProjectAnimal; male: ProjectAnimal }) {
+/** The female and every male of the project (the first one, then backups in the order paired), as members see them. */
+export function ProjectAnimals({ female, males }: { female: ProjectAnimal; males: ProjectAnimal[] }) {
   return (
-    <SimpleGrid cols={{ base: 1, sm: 2 }}>
+    <SimpleGrid cols={{ base: 1, sm: 2 }} data-testid="project-animals">
       <AnimalLine role="Female" animal={female} />
-      <AnimalLine role="Male" animal={male} />
+      {males.map((m, i) => (
+        <AnimalLine key={m.id} role={i === 0 ? 'Male' : 'Backup male'} animal={m} />
+      ))}
     </SimpleGrid>
   );
 }

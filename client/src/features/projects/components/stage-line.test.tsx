@@ -2,7 +2,7 @@ import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { ENDED_EARLY_REASONS, PROJECT_STAGE_LINE } from '@broodsilk/shared';
 import { renderWithProviders } from '@/testing/render';
-import { StageLine } from './stage-line';
+import { StageBadge, StageLine } from './stage-line';
 
 const NAMES = ['Planned', 'Paired', 'Waiting for sac', 'Sac laid', 'In incubator', 'Brood', 'Shares settled', 'Closed'];
 
@@ -49,5 +49,15 @@ describe('StageLine', () => {
 
   it('covers every early-end reason the shared list knows', () => {
     expect([...ENDED_EARLY_REASONS].sort()).toEqual(['female-molted', 'male-died', 'no-sac', 'sac-eaten', 'sac-failed']);
+  });
+  it('shows a setback as advice on an open stage, not as an end', () => {
+    renderWithProviders(<StageLine stage={{ stage: 'planned', setback: 'sac-eaten', sacId: 's1' }} />);
+    expect(screen.getByTestId('stage-current')).toHaveTextContent('Planned · step 1 of 8');
+    expect(screen.getByTestId('stage-setback')).toHaveTextContent('The mother ate the sac');
+    expect(screen.queryByText('Ended early')).not.toBeInTheDocument();
+  });
+  it('names a setback on the badge of an open project', () => {
+    renderWithProviders(<StageBadge stage={{ stage: 'paired', setback: 'female-molted' }} />);
+    expect(screen.getByTestId('stage-badge')).toHaveTextContent('Paired · the female molted');
   });
 });

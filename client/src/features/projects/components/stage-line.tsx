@@ -1,5 +1,5 @@
-import { Badge, Box, Group, Stack, Text, Tooltip, VisuallyHidden } from '@mantine/core';
-import { PROJECT_STAGE_LINE, type DerivedProjectStage } from '@broodsilk/shared';
+import { Alert, Badge, Box, Group, Stack, Text, Tooltip, VisuallyHidden } from '@mantine/core';
+import { PROJECT_STAGE_LINE, SETBACK_ADVICE, type DerivedProjectStage } from '@broodsilk/shared';
 import { ENDED_EARLY_LABELS, STAGE_LABELS, stageText } from '../utils/labels';
 import classes from './stage-line.module.css';
 
@@ -7,7 +7,8 @@ const STATE_WORDS = { done: 'done', unrecorded: 'not recorded', current: 'now', 
 
 /**
  * The progress line of a project: eight short bars, done ones filled in moss, the current one
- * marked and named below. An ended project greys the line and names its reason in clay.
+ * marked and named below. An ended project greys the line and names its reason in clay. A setback
+ * (a sac eaten, a molt after pairing) is advice under the line: the project stays open.
  */
 export function StageLine({ stage, note }: { stage: DerivedProjectStage; note?: string | null }) {
   const ended = stage.stage === 'ended-early';
@@ -57,16 +58,23 @@ export function StageLine({ stage, note }: { stage: DerivedProjectStage; note?: 
           </Text>
         </Box>
       )}
+      {stage.setback && (
+        <Alert color="amber" variant="light" title="Try again" data-testid="stage-setback">
+          {SETBACK_ADVICE[stage.setback]}
+        </Alert>
+      )}
     </Stack>
   );
 }
 
 /** The stage as a small badge, for tables and cards. */
 export function StageBadge({ stage }: { stage: DerivedProjectStage }) {
-  const colour = stage.stage === 'ended-early' ? 'clay' : stage.stage === 'closed' || stage.stage === 'shares-settled' ? 'gray' : 'moss';
+  const colour =
+    stage.stage === 'ended-early' ? 'clay' : stage.setback ? 'amber' : stage.stage === 'closed' || stage.stage === 'shares-settled' ? 'gray' : 'moss';
   return (
     <Badge color={colour} variant="light" tt="none" data-testid="stage-badge" style={{ overflow: 'visible', maxWidth: 'none' }}>
       {stageText(stage.stage, stage.reason)}
+      {stage.setback && ` · ${ENDED_EARLY_LABELS[stage.setback]}`}
     </Badge>
   );
 }
