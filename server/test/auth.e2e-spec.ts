@@ -50,6 +50,8 @@ describe('register → login → me → logout', () => {
       role: 'keeper',
       timeZone: 'Europe/Vienna',
       temperatureUnit: 'C',
+      secondFactorEnabled: false,
+      secondFactorRequired: false,
     });
 
     await http().post('/api/auth/logout').set('Authorization', `Bearer ${token}`).expect(204);
