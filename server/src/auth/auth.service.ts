@@ -24,6 +24,8 @@ import { assertPassword } from './wrong-password';
 export const RESET_LINK_MINUTES = 45;
 /** The composed mail behind every reset request: a link for a known address, nothing for an unknown one. */
 const RESET_MAIL = 'password-reset-link';
+/** The composed mail behind every registration: a notice to the owner of a taken address, nothing for a new one. */
+const REGISTRATION_MAIL = 'registration-attempt';
 
 export interface IssuedSession {
   user: Me;
@@ -47,20 +49,39 @@ export class AuthService {
     @Inject(appConfig.KEY) private readonly app: ConfigType<typeof appConfig>,
   ) {
     outbox.defineComposer(RESET_MAIL, ({ email }) => this.resetLinkMail(email));
+    outbox.defineComposer(REGISTRATION_MAIL, ({ email, attemptedId }) => this.registrationMail(email, attemptedId));
   }
 
+  /**
+   * Does the same work for a new and a taken address: one password hash, one
+   * `INSERT … ON CONFLICT DO NOTHING`, one queued job. The job mails the owner of a taken address
+   * that someone tried to register with it, and sends nothing for a new account. The answers
+   * still differ (a session, or 409): an equal answer needs an e-mail confirmation step first
+   * (docs/operations.md, "Enumeration").
+   */
   async register(dto: RegisterDto): Promise<IssuedSession> {
-    if (await this.em.count(User, { email: dto.email })) {
-      throw new ConflictException('An account with this e-mail already exists. Sign in or reset your password.');
-    }
-    const user = this.em.create(User, {
+    const user = Object.assign(new User(), {
       email: dto.email,
       displayName: dto.displayName,
       passwordHash: await hashPassword(dto.password),
       timeZone: dto.timeZone ?? 'UTC',
     });
-    await this.em.flush();
+    const created = await this.em.transactional(async (em) => {
+      const { id, createdAt, updatedAt, email, displayName, passwordHash, role, timeZone, temperatureUnit, tokenVersion } = user;
+      const row = { id, createdAt, updatedAt, email, displayName, passwordHash, role, timeZone, temperatureUnit, tokenVersion };
+      const rows = await em.createQueryBuilder(User).insert(row).onConflict('email').ignore().returning('id').execute('all');
+      await this.outbox.enqueueComposed(em, REGISTRATION_MAIL, { email: user.email, attemptedId: user.id });
+      return rows.length === 1;
+    });
+    if (!created) throw new ConflictException('An account with this e-mail already exists. Sign in or reset your password.');
     return this.issue(user);
+  }
+
+  /** Runs in the job: tells the owner of a taken address about the attempt; a new account gets nothing. */
+  private async registrationMail(email: string, attemptedId: string) {
+    const owner = await this.em.fork().findOne(User, { email });
+    if (!owner || owner.id === attemptedId) return null;
+    return securityNotice('registration-attempt', owner, this.app.publicUrl);
   }
 
   /**
