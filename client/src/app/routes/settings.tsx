@@ -1,8 +1,17 @@
 import { Divider, Stack, Title } from '@mantine/core';
+import type { QueryClient } from '@tanstack/react-query';
+import { secondFactorQuery } from '@/features/settings/api/second-factor';
+import { preloadPanels } from '../preload';
 import { useMe } from '@/features/auth/api/me';
 import { ProfileForm } from '@/features/settings/components/profile-form';
 import { PasswordForm } from '@/features/settings/components/password-form';
+import { SecondFactorSection } from '@/features/settings/components/second-factor-section';
 import { PageHeader } from '@/components/ui/page-header';
+
+export const clientLoader = (qc: QueryClient) => async () => {
+  void preloadPanels(qc.ensureQueryData(secondFactorQuery()));
+  return null;
+};
 
 export function Component() {
   const { data: me } = useMe();
@@ -16,6 +25,11 @@ export function Component() {
         Password
       </Title>
       <PasswordForm />
+      <Divider my="md" />
+      <Title order={3} size="h4" id="security">
+        Sign-in security
+      </Title>
+      <SecondFactorSection />
     </Stack>
   );
 }
