@@ -1,9 +1,8 @@
 import { IsNotEmpty, IsString, MaxLength } from 'class-validator';
-import type { SecondFactorRemovalRequest, SecondFactorSignInRequest, TotpConfirmRequest } from '@broodsilk/shared';
+import { TEXT_LIMITS, type SecondFactorRemovalRequest, type SecondFactorSignInRequest, type TotpConfirmRequest } from '@broodsilk/shared';
 import { MAX_PASSWORD_LENGTH } from '../../password-policy';
 
-/** Six digits or a recovery code (24 letters and digits, with its dashes): never longer than this. */
-const MAX_CODE_LENGTH = 40;
+const MAX_CODE_LENGTH = TEXT_LIMITS.secondFactorCode;
 
 export class TotpConfirmDto implements TotpConfirmRequest {
   @IsString()
