@@ -100,7 +100,11 @@ export class AuthService {
     }
     if (user.totpEnabledAt) {
       const expiresAt = new Date(this.clock.now().getTime() + PENDING_SIGN_IN_MINUTES * 60_000);
-      return { secondFactor: 'totp', pendingToken: signPendingSignIn(this.jwt, this.app.jwtSecret, user), expiresAt: expiresAt.toISOString() };
+      return {
+        secondFactor: 'totp',
+        pendingToken: signPendingSignIn(this.jwt, this.app.jwtSecret, user, this.clock.now()),
+        expiresAt: expiresAt.toISOString(),
+      };
     }
     await this.limits.recordSuccess(dto.email);
     return this.issue(user);
@@ -108,18 +112,21 @@ export class AuthService {
 
   /** The code step of sign-in: the pending token from the right password, and a code; wrong codes count towards the account's lock. */
   async completeSignIn(pendingToken: string, code: string, ip: string): Promise<IssuedSession> {
-    const pending = readPendingSignIn(this.jwt, this.app.jwtSecret, pendingToken);
+    const pending = readPendingSignIn(this.jwt, this.app.jwtSecret, pendingToken, this.clock.now());
     const user = pending && (await this.em.findOne(User, { id: pending.userId }));
     if (!pending || !user || user.tokenVersion !== pending.ver) {
       throw new UnauthorizedException('This sign-in has expired. Enter your e-mail and password again.');
     }
     await this.limits.assertAccountOpen(user.email, ip);
-    if (!(await this.secondFactor.takeCode(this.em, user, code))) {
+    const kind = await this.secondFactor.takeCode(this.em, user, code);
+    if (!kind) {
       await this.limits.recordFailure(user.email);
       const message = 'This code is not right. Enter the code your app shows now, or a recovery code.';
       throw new UnauthorizedException({ message, details: [{ field: 'code', message }] });
     }
     await this.limits.recordSuccess(user.email);
+    // A recovery code in someone else's hands would pass for the owner: tell them it was used.
+    if (kind === 'recovery') await this.em.transactional((em) => this.outbox.enqueue(em, securityNotice('recovery-code-used', user, this.app.publicUrl)));
     return this.issue(user);
   }
 

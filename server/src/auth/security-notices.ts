@@ -5,7 +5,8 @@ import type { OutgoingMail } from '../mail/mail.service';
  * the user after updates to authentication details). Each says what happened and what to do if
  * it was not them; none carries a link that signs in.
  */
-export type SecurityNotice = 'password-changed' | 'password-reset' | 'second-factor-added' | 'second-factor-removed' | 'registration-attempt';
+export type SecurityNotice =
+  'password-changed' | 'password-reset' | 'second-factor-added' | 'second-factor-removed' | 'recovery-code-used' | 'registration-attempt';
 
 const WHAT: Record<SecurityNotice, { subject: string; body: string }> = {
   'password-changed': {
@@ -23,6 +24,10 @@ const WHAT: Record<SecurityNotice, { subject: string; body: string }> = {
   'second-factor-removed': {
     subject: 'The second factor of your Broodsilk account was removed',
     body: 'Signing in to your Broodsilk account no longer asks for a code from an authenticator app.',
+  },
+  'recovery-code-used': {
+    subject: 'A recovery code was used to sign in to your Broodsilk account',
+    body: 'Someone signed in to your Broodsilk account with the password and one of its recovery codes. That code no longer works.',
   },
   'registration-attempt': {
     subject: 'Someone tried to register with your e-mail address',

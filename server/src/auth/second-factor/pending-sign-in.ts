@@ -17,15 +17,24 @@ interface PendingPayload {
  */
 const keyFor = (jwtSecret: string) => createHmac('sha256', jwtSecret).update(PURPOSE).digest('hex');
 
-export function signPendingSignIn(jwt: JwtService, jwtSecret: string, user: { id: string; tokenVersion: number }): string {
-  const payload: PendingPayload = { sub: user.id, ver: user.tokenVersion, typ: PURPOSE };
-  return jwt.sign(payload, { secret: keyFor(jwtSecret), expiresIn: `${PENDING_SIGN_IN_MINUTES}m`, algorithm: 'HS256' });
+const seconds = (at: Date) => Math.floor(at.getTime() / 1000);
+
+/** Issued and checked against the app's Clock (not the process clock), so tests can move time for it alone. */
+export function signPendingSignIn(jwt: JwtService, jwtSecret: string, user: { id: string; tokenVersion: number }, now: Date): string {
+  const payload: PendingPayload & { iat: number; exp: number } = {
+    sub: user.id,
+    ver: user.tokenVersion,
+    typ: PURPOSE,
+    iat: seconds(now),
+    exp: seconds(now) + PENDING_SIGN_IN_MINUTES * 60,
+  };
+  return jwt.sign(payload, { secret: keyFor(jwtSecret), algorithm: 'HS256' });
 }
 
 /** The user id and token version, or null when the token is forged, expired or of another kind. */
-export function readPendingSignIn(jwt: JwtService, jwtSecret: string, token: string): { userId: string; ver: number } | null {
+export function readPendingSignIn(jwt: JwtService, jwtSecret: string, token: string, now: Date): { userId: string; ver: number } | null {
   try {
-    const p = jwt.verify<PendingPayload>(token, { secret: keyFor(jwtSecret), algorithms: ['HS256'] });
+    const p = jwt.verify<PendingPayload>(token, { secret: keyFor(jwtSecret), algorithms: ['HS256'], clockTimestamp: seconds(now) });
     return p.typ === PURPOSE ? { userId: p.sub, ver: p.ver } : null;
   } catch {
     return null;

@@ -88,19 +88,21 @@ export class SecondFactorService {
   }
 
   /**
-   * True when `code` is the app's current code (not used before) or an unused recovery code; either
-   * is spent by one conditional UPDATE, so two requests with the same code cannot both pass.
+   * Which kind of code `code` is when it is the app's current code (not used before) or an unused
+   * recovery code, else null; either is spent by one conditional UPDATE, so two requests with the
+   * same code cannot both pass.
    */
-  async takeCode(em: EntityManager, user: User, code: string): Promise<boolean> {
+  async takeCode(em: EntityManager, user: User, code: string): Promise<'app' | 'recovery' | null> {
     await em.populate(user, ['totpSecret']);
-    if (!user.totpSecret || !user.totpEnabledAt) return false;
+    if (!user.totpSecret || !user.totpEnabledAt) return null;
     const step = acceptedTotpStep(openSecret(this.key, user.id, user.totpSecret), withoutBlanks(code), this.clock.now(), user.totpLastStep ?? null);
     if (step !== null) {
-      return (await em.nativeUpdate(User, { id: user.id, $or: [{ totpLastStep: null }, { totpLastStep: { $lt: step } }] }, { totpLastStep: step })) === 1;
+      const taken = await em.nativeUpdate(User, { id: user.id, $or: [{ totpLastStep: null }, { totpLastStep: { $lt: step } }] }, { totpLastStep: step });
+      return taken === 1 ? 'app' : null;
     }
     const hash = recoveryCodeHash(code);
-    if (!hash) return false;
-    return (await em.nativeUpdate(RecoveryCode, { user: user.id, codeHash: hash, usedAt: null }, { usedAt: this.clock.now() })) === 1;
+    if (!hash) return null;
+    return (await em.nativeUpdate(RecoveryCode, { user: user.id, codeHash: hash, usedAt: null }, { usedAt: this.clock.now() })) === 1 ? 'recovery' : null;
   }
 
   private lockedUser(em: EntityManager, userId: string): Promise<User> {
