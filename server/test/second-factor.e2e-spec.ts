@@ -13,6 +13,7 @@ import { registerKeeper, type SignedIn } from './support/users';
 import { waitForMail } from './support/mail-sink';
 import { Clock } from '../src/common/clock';
 import { User } from '../src/users/user.entity';
+import { clearSecondFactor } from '../src/auth/second-factor/clear-second-factor';
 
 let t: TestApp;
 const http = () => request(t.app.getHttpServer());
@@ -178,6 +179,18 @@ describe('removal', () => {
     expect(row.totpSecret).toBeNull();
     expect(await t.orm.em.getConnection().execute('select 1 from recovery_codes where user_id = ?', [k.user.id])).toHaveLength(0);
     await waitForMail(k.user.email, /second factor .* was removed/);
+  });
+});
+
+describe('a lost phone and lost recovery codes', () => {
+  it('the operator command removes the second factor and ends the sessions; the password alone signs in again', async () => {
+    const { k } = await enrolled('Phone Lost Keeper');
+    expect(await clearSecondFactor(t.orm.em.fork(), 'nobody@example.test')).toEqual({ ok: false, problem: expect.stringMatching(/No account/) });
+    expect(await clearSecondFactor(t.orm.em.fork(), ` ${k.user.email.toUpperCase()} `)).toEqual({ ok: true, email: k.user.email });
+    await http().get('/api/auth/me').set('Authorization', k.bearer).expect(401);
+    const plain = await signIn(k.user.email, k.password).expect(200);
+    expect(plain.body.user.secondFactorEnabled).toBe(false);
+    expect(await clearSecondFactor(t.orm.em.fork(), k.user.email)).toEqual({ ok: false, problem: expect.stringMatching(/has no second factor/) });
   });
 });
 
