@@ -47,7 +47,10 @@ afterAll(async () => {
 async function queuedFor(address: string): Promise<number> {
   const rows = await t.orm.em
     .getConnection()
-    .execute<{ n: number }[]>(`select count(*)::int as n from ${MAIL_JOBS_SCHEMA}.job where data->>'to' = ? or data->'data'->>'email' = ?`, [address, address]);
+    .execute<{ n: number }[]>(
+      `select count(*)::int as n from ${MAIL_JOBS_SCHEMA}.job where data->>'to' = ? or (data->>'kind' = 'password-reset-link' and data->'data'->>'email' = ?)`,
+      [address, address],
+    );
   return rows[0].n;
 }
 
