@@ -1,7 +1,7 @@
 import { ConflictException, Inject, Injectable, UnauthorizedException, BadRequestException } from '@nestjs/common';
 import { ConfigType } from '@nestjs/config';
 import { JwtService } from '@nestjs/jwt';
-import { EntityManager, LockMode, raw } from '@mikro-orm/postgresql';
+import { EntityManager, LockMode, raw, type RequiredEntityData } from '@mikro-orm/postgresql';
 import { createHash, randomBytes } from 'node:crypto';
 import { PENDING_SIGN_IN_MINUTES, SESSION_HOURS, type Me, type SecondFactorChallenge } from '@broodsilk/shared';
 import { appConfig } from '../config/app.config';
@@ -67,8 +67,8 @@ export class AuthService {
       timeZone: dto.timeZone ?? 'UTC',
     });
     const created = await this.em.transactional(async (em) => {
-      const { id, createdAt, updatedAt, email, displayName, passwordHash, role, timeZone, temperatureUnit, tokenVersion } = user;
-      const row = { id, createdAt, updatedAt, email, displayName, passwordHash, role, timeZone, temperatureUnit, tokenVersion };
+      // Every column the entity would write (its defaults included), in one statement that skips a taken address.
+      const row = em.getComparator().prepareEntity(user) as RequiredEntityData<User>;
       const rows = await em.createQueryBuilder(User).insert(row).onConflict('email').ignore().returning('id').execute('all');
       await this.outbox.enqueueComposed(em, REGISTRATION_MAIL, { email: user.email, attemptedId: user.id });
       return rows.length === 1;
