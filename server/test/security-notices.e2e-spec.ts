@@ -10,7 +10,8 @@ import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper } from './support/users';
 import { waitForMail, mailsTo } from './support/mail-sink';
 import { argon2Runs } from '../src/auth/password-hasher';
-import { COMPOSE_QUEUE, MAIL_JOBS_SCHEMA } from '../src/mail/mail-outbox.service';
+import { COMPOSE_QUEUE } from '../src/mail/mail-outbox.service';
+import { JOBS_SCHEMA } from '../src/jobs/jobs.service';
 
 /** The app whose statements are counted: its job workers are off, so only requests run SQL on it. */
 let t: TestApp;
@@ -42,7 +43,7 @@ const composedJobs = async (kind: string, email: string) =>
   (
     await t.orm.em
       .getConnection()
-      .execute<{ n: number }[]>(`select count(*)::int as n from ${MAIL_JOBS_SCHEMA}.job where name = ? and data->>'kind' = ? and data->'data'->>'email' = ?`, [
+      .execute<{ n: number }[]>(`select count(*)::int as n from ${JOBS_SCHEMA}.job where name = ? and data->>'kind' = ? and data->'data'->>'email' = ?`, [
         COMPOSE_QUEUE,
         kind,
         email,

@@ -2,11 +2,11 @@ import { Test } from '@nestjs/testing';
 import type { INestApplication } from '@nestjs/common';
 import { MIKRO_ORM_MODULE_OPTIONS } from '@mikro-orm/nestjs';
 import { MikroORM } from '@mikro-orm/postgresql';
-import { AbstractLoader, ExpressLoader } from '@nestjs/serve-static';
 import type { MigrationObject } from '@mikro-orm/core';
 import { AppModule } from '../../src/app.module';
 import { configureApp } from '../../src/app.setup';
 import { baseOrmOptions } from '../../src/mikro-orm.config';
+import { JOBS_SCHEMA } from '../../src/jobs/jobs.service';
 
 // Node cannot require .ts migrations, so the migrator gets them as a list.
 const modules = import.meta.glob<Record<string, new () => unknown>>('../../src/migrations/Migration*.ts', { eager: true });
@@ -29,10 +29,6 @@ export async function createTestApp(options: { fresh?: boolean } = { fresh: true
   const moduleRef = await Test.createTestingModule({ imports: [AppModule] })
     .overrideProvider(MIKRO_ORM_MODULE_OPTIONS)
     .useValue({ ...base, autoLoadEntities: true, registerRequestContext: true, migrations: { ...base.migrations, migrationsList } })
-    // A testing module has no HTTP adapter yet when ServeStaticModule picks its loader (it would pick none);
-    // production's NestFactory has one. Only active when CLIENT_DIST is set (see support/serve-client.ts).
-    .overrideProvider(AbstractLoader)
-    .useValue(new ExpressLoader())
     .compile();
   const app = moduleRef.createNestApplication({ rawBody: true });
   configureApp(app);
@@ -44,8 +40,10 @@ export async function createTestApp(options: { fresh?: boolean } = { fresh: true
   return { app, orm, close: () => app.close() };
 }
 
-/** Empties the test database completely (enum types included) and migrates it up from nothing. */
+/** Empties the test database completely (enum types and queued jobs included) and migrates it up from nothing. */
 export async function resetDatabase(orm: MikroORM): Promise<void> {
   await orm.em.getConnection().execute('drop schema if exists public cascade; create schema public;');
+  // Jobs left by an earlier file (pg-boss keeps its own schema) belong to records that are gone.
+  await orm.em.getConnection().execute(`delete from ${JOBS_SCHEMA}.job`);
   await orm.getMigrator().up();
 }

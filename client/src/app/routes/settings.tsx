@@ -1,20 +1,24 @@
 import { Divider, Stack, Title } from '@mantine/core';
-import type { QueryClient } from '@tanstack/react-query';
-import { secondFactorQuery } from '@/features/settings/api/second-factor';
-import { preloadPanels } from '../preload';
 import { useMe } from '@/features/auth/api/me';
 import { ProfileForm } from '@/features/settings/components/profile-form';
 import { PasswordForm } from '@/features/settings/components/password-form';
+import { ReminderPreferencesForm } from '@/features/settings/components/reminder-preferences-form';
+import { reminderQueries, useReminderPreferences } from '@/features/settings/api/reminder-preferences';
+import type { QueryClient } from '@tanstack/react-query';
+import { preloadPanels } from '../preload';
+import { secondFactorQuery } from '@/features/settings/api/second-factor';
 import { SecondFactorSection } from '@/features/settings/components/second-factor-section';
+import { ExportCard } from '@/features/export/components/export-card';
 import { PageHeader } from '@/components/ui/page-header';
 
 export const clientLoader = (qc: QueryClient) => async () => {
-  void preloadPanels(qc.ensureQueryData(secondFactorQuery()));
+  void preloadPanels(qc.ensureQueryData(reminderQueries.preferences()), qc.ensureQueryData(secondFactorQuery()));
   return null;
 };
 
 export function Component() {
   const { data: me } = useMe();
+  const { data: reminders } = useReminderPreferences();
   if (!me) return null;
   return (
     <Stack>
@@ -30,6 +34,13 @@ export function Component() {
         Sign-in security
       </Title>
       <SecondFactorSection />
+      <Divider my="md" />
+      <Title order={3} size="h4">
+        Reminders
+      </Title>
+      {reminders && <ReminderPreferencesForm key={reminders.timeZone} preferences={reminders} />}
+      <Divider my="md" />
+      <ExportCard />
     </Stack>
   );
 }
