@@ -17,6 +17,7 @@ PG_FSYNC=off pg_start "$WORK/pg" "$PGPORT"
 pg_ensure_db "$WORK/pg" "$PGPORT" broodsilk_bench
 export DATABASE_URL="postgres://app@127.0.0.1:$PGPORT/broodsilk_bench"
 export JWT_SECRET="$(node -e "console.log(require('crypto').randomBytes(32).toString('hex'))")" CSRF_SECRET="$(node -e "console.log(require('crypto').randomBytes(32).toString('hex'))")" CALENDAR_SECRET="$(node -e "console.log(require('crypto').randomBytes(32).toString('hex'))")"
+export TOTP_ENCRYPTION_KEY="$(node -e "console.log(require('crypto').randomBytes(32).toString('hex'))")"
 service_env free "$WORK/s3"
 export STRIPE_SECRET_KEY=sk_test_bench STRIPE_WEBHOOK_SECRET=whsec_bench
 export APP_PORT="$(free_port)" LOG_LEVEL=silent AUTH_RATE_LIMIT=1000000

@@ -42,6 +42,7 @@ export NODE_ENV=production
 export JWT_SECRET="${JWT_SECRET:-$(local_secret "$SECRETS/jwt")}"
 export CSRF_SECRET="${CSRF_SECRET:-$(local_secret "$SECRETS/csrf")}"
 export CALENDAR_SECRET="${CALENDAR_SECRET:-$(local_secret "$SECRETS/calendar")}"
+export TOTP_ENCRYPTION_KEY="${TOTP_ENCRYPTION_KEY:-$(local_secret "$SECRETS/totp")}"
 export PORT HOST=127.0.0.1 PUBLIC_URL="${PUBLIC_URL:-http://127.0.0.1:$PORT}"
 service_env usual "$ROOT/.data/s3"
 export STRIPE_SECRET_KEY="${STRIPE_SECRET_KEY:-sk_test_broodsilk_local}" STRIPE_WEBHOOK_SECRET="${STRIPE_WEBHOOK_SECRET:-whsec_$(local_secret "$SECRETS/payment-webhook")}"

@@ -3,8 +3,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CSRF_HEADER, SESSION_COOKIE, type ApiErrorBody } from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
 import { login, registerKeeper } from './support/users';
+import { makeAdmin } from './support/admins';
 import { waitForMail } from './support/mail-sink';
-import { User } from '../src/users/user.entity';
 
 let t: TestApp;
 const http = () => request(t.app.getHttpServer());
@@ -50,6 +50,8 @@ describe('register → login → me → logout', () => {
       role: 'keeper',
       timeZone: 'Europe/Vienna',
       temperatureUnit: 'C',
+      secondFactorEnabled: false,
+      secondFactorRequired: false,
     });
 
     await http().post('/api/auth/logout').set('Authorization', `Bearer ${token}`).expect(204);
@@ -112,7 +114,7 @@ describe('refusals', () => {
     expect(forbidden.body.message).toBe('Your account is not allowed to do this.');
 
     const a = await registerKeeper(t.app, 'Admin');
-    await t.orm.em.fork().nativeUpdate(User, { id: a.user.id }, { role: 'admin' });
+    await makeAdmin(t, a);
     const list = await http().get('/api/admin/users').set('Authorization', a.bearer).expect(200);
     expect(list.body.total).toBeGreaterThanOrEqual(2);
     expect(list.body.items[0]).not.toHaveProperty('passwordHash');

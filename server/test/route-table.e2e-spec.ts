@@ -17,6 +17,7 @@ import { rowCounts } from './support/row-counts';
 const PUBLIC = new Set([
   'POST /api/auth/register',
   'POST /api/auth/login',
+  'POST /api/auth/login/second-factor',
   'GET /api/auth/csrf',
   'POST /api/auth/password-reset',
   'POST /api/auth/password-reset/confirm',

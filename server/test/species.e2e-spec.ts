@@ -3,12 +3,12 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Paged, SpeciesResponse } from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper, type SignedIn } from './support/users';
-import { User } from '../src/users/user.entity';
+import { makeAdmin } from './support/admins';
 import { SPECIES_DATA } from '../src/species/data/species.data';
 
 let t: TestApp;
 let keeper: SignedIn;
-let admin: SignedIn;
+let admin: SignedIn & { password: string };
 const http = () => request(t.app.getHttpServer());
 
 async function search(q: string): Promise<Paged<SpeciesResponse>> {
@@ -20,7 +20,7 @@ beforeAll(async () => {
   t = await createTestApp();
   keeper = await registerKeeper(t.app, 'Catalogue Reader');
   admin = await registerKeeper(t.app, 'Catalogue Admin');
-  await t.orm.em.fork().nativeUpdate(User, { id: admin.user.id }, { role: 'admin' });
+  await makeAdmin(t, admin);
 });
 afterAll(async () => {
   await t.close();

@@ -1,6 +1,7 @@
 export * from './errors/api-error.js';
 export * from './errors/plausibility.js';
 export * from './auth/auth.types.js';
+export * from './auth/second-factor.types.js';
 export * from './users/users.types.js';
 export * from './time/temperature.js';
 export * from './time/time-zone.js';

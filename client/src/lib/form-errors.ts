@@ -6,9 +6,11 @@ interface FormLike {
 
 /** Puts the server's field errors next to the fields; returns the message for the rest. */
 export function applyServerErrors(form: FormLike, error: unknown): string {
-  if (isApiError(error)) {
-    if (error.details.length) form.setErrors(error.fieldErrors());
-    return error.message;
-  }
-  return 'Something went wrong. Please try again.';
+  if (isApiError(error) && error.details.length) form.setErrors(error.fieldErrors());
+  return errorMessage(error);
+}
+
+/** The server's message for a refused request without fields. */
+export function errorMessage(error: unknown): string {
+  return isApiError(error) ? error.message : 'Something went wrong. Please try again.';
 }

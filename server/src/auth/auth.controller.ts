@@ -1,7 +1,7 @@
 import { Body, Controller, Get, HttpCode, Inject, Patch, Post, Req, Res, UseGuards } from '@nestjs/common';
 import { ConfigType } from '@nestjs/config';
 import type { Request, Response } from 'express';
-import type { CsrfResponse, LoginResponse, Me } from '@broodsilk/shared';
+import { type CsrfResponse, type LoginResponse, type Me, type SignInResult } from '@broodsilk/shared';
 import { appConfig } from '../config/app.config';
 import { Public } from '../common/decorators/public.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
@@ -12,6 +12,7 @@ import { RegisterDto } from './dto/register.dto';
 import { LoginDto } from './dto/login.dto';
 import { PasswordResetConfirmDto, PasswordResetDto } from './dto/password-reset.dto';
 import { ChangePasswordDto } from './dto/change-password.dto';
+import { SecondFactorSignInDto } from './second-factor/dto/second-factor.dto';
 import { clearSessionCookie, startSession } from './session-cookie';
 import { SignInRequestGuard } from './sign-in-request.guard';
 import { SignInAddressGuard } from './sign-in-address.guard';
@@ -36,8 +37,18 @@ export class AuthController {
   @UseGuards(SignInAddressGuard, SignInRequestGuard)
   @HttpCode(200)
   @Post('login')
-  async login(@Body() dto: LoginDto, @Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<LoginResponse> {
-    return this.startSession(await this.auth.login(dto, req.ip ?? 'unknown'), req, res);
+  async login(@Body() dto: LoginDto, @Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<SignInResult> {
+    const result = await this.auth.login(dto, req.ip ?? 'unknown');
+    return 'pendingToken' in result ? result : this.startSession(result, req, res);
+  }
+
+  /** The second step of a sign-in with a second factor: the pending token and a code give the session. */
+  @Public()
+  @UseGuards(SignInAddressGuard, SignInRequestGuard)
+  @HttpCode(200)
+  @Post('login/second-factor')
+  async loginSecondFactor(@Body() dto: SecondFactorSignInDto, @Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<LoginResponse> {
+    return this.startSession(await this.auth.completeSignIn(dto.pendingToken, dto.code, req.ip ?? 'unknown'), req, res);
   }
 
   @HttpCode(204)

@@ -15,12 +15,15 @@ import { PasswordResetToken } from './password-reset-token.entity';
 import { SignInLimits } from './sign-in-limits';
 import { RateLimitRow } from './rate-limit-row.entity';
 import { SignInAddressGuard } from './sign-in-address.guard';
+import { RecoveryCode } from './second-factor/recovery-code.entity';
+import { SecondFactorController } from './second-factor/second-factor.controller';
+import { SecondFactorService } from './second-factor/second-factor.service';
 
 @Module({
   imports: [
     ConfigModule.forFeature(appConfig),
     ConfigModule.forFeature(databaseConfig),
-    MikroOrmModule.forFeature([User, PasswordResetToken, RateLimitRow]),
+    MikroOrmModule.forFeature([User, PasswordResetToken, RateLimitRow, RecoveryCode]),
     PassportModule,
     MailModule,
     JwtModule.registerAsync({
@@ -28,8 +31,8 @@ import { SignInAddressGuard } from './sign-in-address.guard';
       useFactory: (config: ConfigService) => ({ secret: config.getOrThrow<string>('app.jwtSecret'), signOptions: { algorithm: 'HS256' } }),
     }),
   ],
-  controllers: [AuthController],
-  providers: [AuthService, JwtStrategy, csrfProvider, SignInLimits, SignInAddressGuard],
+  controllers: [AuthController, SecondFactorController],
+  providers: [AuthService, SecondFactorService, JwtStrategy, csrfProvider, SignInLimits, SignInAddressGuard],
   exports: [AuthService, csrfProvider],
 })
 export class AuthModule {}

@@ -1,9 +1,9 @@
 import { ConflictException, Inject, Injectable, UnauthorizedException, BadRequestException } from '@nestjs/common';
 import { ConfigType } from '@nestjs/config';
 import { JwtService } from '@nestjs/jwt';
-import { EntityManager, LockMode, raw } from '@mikro-orm/postgresql';
+import { EntityManager, LockMode, raw, type RequiredEntityData } from '@mikro-orm/postgresql';
 import { createHash, randomBytes } from 'node:crypto';
-import { SESSION_HOURS, type Me } from '@broodsilk/shared';
+import { PENDING_SIGN_IN_MINUTES, SESSION_HOURS, type Me, type SecondFactorChallenge } from '@broodsilk/shared';
 import { appConfig } from '../config/app.config';
 import { MailOutbox } from '../mail/mail-outbox.service';
 import { User } from '../users/user.entity';
@@ -16,8 +16,16 @@ import type { JwtPayload } from '../common/auth-user';
 import type { RegisterDto } from './dto/register.dto';
 import type { LoginDto } from './dto/login.dto';
 import { Clock } from '../common/clock';
+import { SecondFactorService } from './second-factor/second-factor.service';
+import { readPendingSignIn, signPendingSignIn } from './second-factor/pending-sign-in';
+import { securityNotice } from './security-notices';
+import { assertPassword } from './wrong-password';
 
 export const RESET_LINK_MINUTES = 45;
+/** The composed mail behind every reset request: a link for a known address, nothing for an unknown one. */
+const RESET_MAIL = 'password-reset-link';
+/** The composed mail behind every registration: a notice to the owner of a taken address, nothing for a new one. */
+const REGISTRATION_MAIL = 'registration-attempt';
 
 export interface IssuedSession {
   user: Me;
@@ -37,25 +45,51 @@ export class AuthService {
     private readonly jwt: JwtService,
     private readonly outbox: MailOutbox,
     private readonly limits: SignInLimits,
+    private readonly secondFactor: SecondFactorService,
     @Inject(appConfig.KEY) private readonly app: ConfigType<typeof appConfig>,
-  ) {}
+  ) {
+    outbox.defineComposer(RESET_MAIL, ({ email }) => this.resetLinkMail(email));
+    outbox.defineComposer(REGISTRATION_MAIL, ({ email, attemptedId }) => this.registrationMail(email, attemptedId));
+  }
 
+  /**
+   * Does the same work for a new and a taken address: one password hash, one
+   * `INSERT … ON CONFLICT DO NOTHING`, one queued job. The job mails the owner of a taken address
+   * that someone tried to register with it, and sends nothing for a new account. The answers
+   * still differ (a session, or 409): an equal answer needs an e-mail confirmation step first
+   * (docs/operations.md, "Enumeration").
+   */
   async register(dto: RegisterDto): Promise<IssuedSession> {
-    if (await this.em.count(User, { email: dto.email })) {
-      throw new ConflictException('An account with this e-mail already exists. Sign in or reset your password.');
-    }
-    const user = this.em.create(User, {
+    const user = Object.assign(new User(), {
       email: dto.email,
       displayName: dto.displayName,
       passwordHash: await hashPassword(dto.password),
       timeZone: dto.timeZone ?? 'UTC',
     });
-    await this.em.flush();
+    const created = await this.em.transactional(async (em) => {
+      // Every column the entity would write (its defaults included), in one statement that skips a taken address.
+      const row = em.getComparator().prepareEntity(user) as RequiredEntityData<User>;
+      const rows = await em.createQueryBuilder(User).insert(row).onConflict('email').ignore().returning('id').execute('all');
+      await this.outbox.enqueueComposed(em, REGISTRATION_MAIL, { email: user.email, attemptedId: user.id });
+      return rows.length === 1;
+    });
+    if (!created) throw new ConflictException('An account with this e-mail already exists. Sign in or reset your password.');
     return this.issue(user);
   }
 
-  /** Checks the password unless the account is locked; wrong ones count towards the lock, known address or not. */
-  async login(dto: LoginDto, ip: string): Promise<IssuedSession> {
+  /** Runs in the job: tells the owner of a taken address about the attempt; a new account gets nothing. */
+  private async registrationMail(email: string, attemptedId: string) {
+    const owner = await this.em.fork().findOne(User, { email });
+    if (!owner || owner.id === attemptedId) return null;
+    return securityNotice('registration-attempt', owner, this.app.publicUrl);
+  }
+
+  /**
+   * Checks the password unless the account is locked; wrong ones count towards the lock, known
+   * address or not. With a second factor the right password gives only a short-lived pending
+   * token, and the run of failures goes on until the code is right too.
+   */
+  async login(dto: LoginDto, ip: string): Promise<IssuedSession | SecondFactorChallenge> {
     await this.limits.assertAccountOpen(dto.email, ip);
     const user = await this.em.findOne(User, { email: dto.email }, { populate: ['passwordHash'] });
     // Verify against a dummy hash for unknown e-mails so the answer takes as long either way.
@@ -64,7 +98,35 @@ export class AuthService {
       await this.limits.recordFailure(dto.email);
       throw new UnauthorizedException('The e-mail or password is not right.');
     }
+    if (user.totpEnabledAt) {
+      const expiresAt = new Date(this.clock.now().getTime() + PENDING_SIGN_IN_MINUTES * 60_000);
+      return {
+        secondFactor: 'totp',
+        pendingToken: signPendingSignIn(this.jwt, this.app.jwtSecret, user, this.clock.now()),
+        expiresAt: expiresAt.toISOString(),
+      };
+    }
     await this.limits.recordSuccess(dto.email);
+    return this.issue(user);
+  }
+
+  /** The code step of sign-in: the pending token from the right password, and a code; wrong codes count towards the account's lock. */
+  async completeSignIn(pendingToken: string, code: string, ip: string): Promise<IssuedSession> {
+    const pending = readPendingSignIn(this.jwt, this.app.jwtSecret, pendingToken, this.clock.now());
+    const user = pending && (await this.em.findOne(User, { id: pending.userId }));
+    if (!pending || !user || user.tokenVersion !== pending.ver) {
+      throw new UnauthorizedException('This sign-in has expired. Enter your e-mail and password again.');
+    }
+    await this.limits.assertAccountOpen(user.email, ip);
+    const kind = await this.secondFactor.takeCode(this.em, user, code);
+    if (!kind) {
+      await this.limits.recordFailure(user.email);
+      const message = 'This code is not right. Enter the code your app shows now, or a recovery code.';
+      throw new UnauthorizedException({ message, details: [{ field: 'code', message }] });
+    }
+    await this.limits.recordSuccess(user.email);
+    // A recovery code in someone else's hands would pass for the owner: tell them it was used.
+    if (kind === 'recovery') await this.em.transactional((em) => this.outbox.enqueue(em, securityNotice('recovery-code-used', user, this.app.publicUrl)));
     return this.issue(user);
   }
 
@@ -87,22 +149,30 @@ export class AuthService {
     return { user: toMe(user), accessToken, expiresAt: new Date(this.clock.now().getTime() + SESSION_HOURS * 3600_000) };
   }
 
-  /** Always answers the same way, whether or not the e-mail belongs to an account. */
+  /**
+   * Does the same work whether or not the e-mail belongs to an account: one queued job, no lookup.
+   * The job looks the address up after commit and mails a link to a known one; for an unknown
+   * address it sends nothing (mailing strangers would let anyone aim our mail at any inbox).
+   */
   async requestPasswordReset(email: string): Promise<void> {
-    const user = await this.em.findOne(User, { email });
-    if (!user) return;
-    const token = randomBytes(32).toString('base64url');
-    const link = `${this.app.publicUrl}/reset-password?token=${token}`;
-    await this.em.transactional(async (em) => {
-      // A new link replaces any older one that is still open.
+    await this.em.transactional((em) => this.outbox.enqueueComposed(em, RESET_MAIL, { email }));
+  }
+
+  /** Runs in the job: a new single-use link (replacing any older open one) and its mail, or null for an unknown address. */
+  private async resetLinkMail(email: string) {
+    return this.em.fork().transactional(async (em) => {
+      const user = await em.findOne(User, { email });
+      if (!user) return null;
+      const token = randomBytes(32).toString('base64url');
+      const link = `${this.app.publicUrl}/reset-password?token=${token}`;
       await em.nativeUpdate(PasswordResetToken, { user: user.id, usedAt: null }, { usedAt: this.clock.now() });
       em.create(PasswordResetToken, { user, tokenHash: sha256(token), expiresAt: new Date(this.clock.now().getTime() + RESET_LINK_MINUTES * 60_000) });
       await em.flush();
-      await this.outbox.enqueue(em, {
+      return {
         to: user.email,
         subject: 'Reset your Broodsilk password',
         text: `Hello ${user.displayName},\n\nSomeone asked to reset the password of your Broodsilk account. If it was you, open this link within ${RESET_LINK_MINUTES} minutes:\n\n${link}\n\nThe link works once. If you did not ask for it, ignore this e-mail; your password stays as it is.\n`,
-      });
+      };
     });
   }
 
@@ -118,20 +188,21 @@ export class AuthService {
       user.tokenVersion += 1;
       // Whoever took over the account may have copied the feed URL too.
       await revokeFeeds(em, user.id, this.clock.now());
+      await em.flush();
+      await this.outbox.enqueue(em, securityNotice('password-reset', user, this.app.publicUrl));
     });
   }
 
   async changePassword(userId: string, currentPassword: string, newPassword: string): Promise<IssuedSession> {
-    const user = await this.em.findOneOrFail(User, { id: userId }, { populate: ['passwordHash'] });
-    if (!(await verifyPassword(user.passwordHash, currentPassword))) {
-      throw new BadRequestException({
-        message: 'Your current password is not right.',
-        details: [{ field: 'currentPassword', message: 'This is not your current password.' }],
-      });
-    }
-    user.passwordHash = await hashPassword(newPassword);
-    user.tokenVersion += 1;
-    await this.em.flush();
+    const user = await this.em.transactional(async (em) => {
+      const found = await em.findOneOrFail(User, { id: userId }, { populate: ['passwordHash'], lockMode: LockMode.PESSIMISTIC_WRITE });
+      await assertPassword(found, currentPassword, 'currentPassword');
+      found.passwordHash = await hashPassword(newPassword);
+      found.tokenVersion += 1;
+      await em.flush();
+      await this.outbox.enqueue(em, securityNotice('password-changed', found, this.app.publicUrl));
+      return found;
+    });
     return this.issue(user);
   }
 }

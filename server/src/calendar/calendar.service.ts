@@ -66,7 +66,7 @@ export class CalendarService {
     const feed = await this.em.findOne(CalendarFeed, { tokenHash: hashToken(token), revokedAt: null }, { populate: ['user'] });
     if (!feed) throw new NotFoundException({ message: NOT_FOUND });
     const u = feed.user;
-    const viewer: AuthUser = { id: u.id, email: u.email, role: u.role, timeZone: u.timeZone };
+    const viewer: AuthUser = { id: u.id, email: u.email, role: u.role, timeZone: u.timeZone, mustEnrolSecondFactor: false };
     const events = [...(await this.sacEvents(viewer)), ...(await this.animals.malesByClock(viewer)).flatMap(maleClockEvents)];
     const cal = ical({ name: 'Broodsilk', prodId: { company: 'Broodsilk', product: 'breeding-calendar', language: 'EN' } });
     // Dates stay floating calendar dates (no time zone): all-day events, DTEND exclusive (RFC 5545 §3.6.1).

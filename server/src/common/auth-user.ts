@@ -6,6 +6,8 @@ export interface AuthUser {
   email: string;
   role: AccountRole;
   timeZone: string;
+  /** An administrator who must set up a second factor before using administrator routes. */
+  mustEnrolSecondFactor: boolean;
 }
 
 export interface JwtPayload {

@@ -9,6 +9,8 @@ export const appConfig = registerAs('app', () => ({
   csrfSecret: process.env.CSRF_SECRET ?? '',
   /** Derives calendar feed tokens; its own key, not the session-signing one. */
   calendarSecret: process.env.CALENDAR_SECRET ?? '',
+  /** Encrypts TOTP secrets at rest (AES-256-GCM): 64 hexadecimal digits. */
+  totpEncryptionKey: process.env.TOTP_ENCRYPTION_KEY ?? '',
   /** Folder of the built client, served at `/`. Empty disables static serving. */
   clientDist: process.env.CLIENT_DIST ?? '',
   secureCookies: process.env.SECURE_COOKIES === 'true',

@@ -1,4 +1,5 @@
 import { parseTrustProxy } from './trust-proxy';
+import { readTotpKey } from './totp-key';
 
 /**
  * Checked once at start so a misconfigured instance fails loudly instead of
@@ -11,6 +12,9 @@ export function validateEnv(env: Record<string, unknown>): Record<string, unknow
     if (typeof value !== 'string' || value.length < 32) {
       problems.push(`${key} must be set to a random string of at least 32 characters`);
     }
+  }
+  if (!readTotpKey(typeof env.TOTP_ENCRYPTION_KEY === 'string' ? env.TOTP_ENCRYPTION_KEY : undefined)) {
+    problems.push('TOTP_ENCRYPTION_KEY must be set to 32 random bytes (64 hexadecimal digits or 43 base64url characters)');
   }
   if (typeof env.DATABASE_URL !== 'string' || !env.DATABASE_URL.startsWith('postgres')) {
     problems.push('DATABASE_URL must be a postgres:// connection URL');

@@ -3,7 +3,9 @@ import type { AccountRole, TemperatureUnit } from '@broodsilk/shared';
 import { BaseEntity } from '../database/base.entity';
 
 @Entity({ tableName: 'users' })
-export class User extends BaseEntity<'role' | 'timeZone' | 'temperatureUnit' | 'tokenVersion'> {
+export class User extends BaseEntity<
+  'role' | 'timeZone' | 'temperatureUnit' | 'tokenVersion' | 'totpSecret' | 'totpPendingSecret' | 'totpEnabledAt' | 'totpLastStep'
+> {
   @Property({ type: 'text' })
   @Unique()
   email!: string;
@@ -26,4 +28,19 @@ export class User extends BaseEntity<'role' | 'timeZone' | 'temperatureUnit' | '
   /** Bumped on logout and password change: every JWT carries it, so older tokens stop working. */
   @Property({ type: 'integer' })
   tokenVersion: number = 0;
+
+  /** The TOTP secret once confirmed, AES-256-GCM-encrypted under TOTP_ENCRYPTION_KEY (see totp-secret-box.ts). */
+  @Property({ type: 'text', nullable: true, hidden: true, lazy: true })
+  totpSecret?: string | null = null;
+
+  /** A secret shown for enrolment but not yet confirmed with a code; encrypted the same way. */
+  @Property({ type: 'text', nullable: true, hidden: true, lazy: true })
+  totpPendingSecret?: string | null = null;
+
+  @Property({ type: 'timestamptz', nullable: true })
+  totpEnabledAt?: Date | null = null;
+
+  /** The last accepted 30-second step, so one code signs in once (OWASP ASVS 5.0 V6.5.1). */
+  @Property({ type: 'integer', nullable: true, hidden: true })
+  totpLastStep?: number | null = null;
 }

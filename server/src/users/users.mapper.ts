@@ -1,5 +1,6 @@
 import type { AdminUserRow, Me } from '@broodsilk/shared';
 import type { User } from './user.entity';
+import { secondFactorRequired } from '../auth/second-factor/second-factor-rule';
 
 export function toMe(user: User): Me {
   return {
@@ -9,6 +10,8 @@ export function toMe(user: User): Me {
     role: user.role,
     timeZone: user.timeZone,
     temperatureUnit: user.temperatureUnit,
+    secondFactorEnabled: !!user.totpEnabledAt,
+    secondFactorRequired: secondFactorRequired(user.role),
   };
 }
 

@@ -2,6 +2,7 @@
 process.env.JWT_SECRET ??= 'test-jwt-secret-test-jwt-secret-0123456789';
 process.env.CSRF_SECRET ??= 'test-csrf-secret-test-csrf-secret-012345678';
 process.env.CALENDAR_SECRET ??= 'test-calendar-secret-test-calendar-secret-01';
+process.env.TOTP_ENCRYPTION_KEY ??= '7f3c1e9a5b2d4f6081a3c5e7092b4d6f8a1c3e5f7092b4d6e8f0a2c4e6081a3c';
 process.env.DATABASE_URL = process.env.TEST_DATABASE_URL ?? 'postgres://app@127.0.0.1:54329/broodsilk_test';
 process.env.LOG_LEVEL ??= 'silent';
 process.env.AUTH_RATE_LIMIT ??= '1000';

@@ -35,6 +35,10 @@ export interface Me {
   role: AccountRole;
   timeZone: string;
   temperatureUnit: TemperatureUnit;
+  /** A TOTP second factor is set up. */
+  secondFactorEnabled: boolean;
+  /** The account must set one up before it may use administrator pages. */
+  secondFactorRequired: boolean;
 }
 
 export interface LoginResponse {

@@ -21,6 +21,8 @@ export const TEXT_LIMITS = Object.freeze({
   tracking: 100,
   displayName: 80,
   password: 200,
+  /** Six digits from an authenticator app, or a recovery code with its dashes. */
+  secondFactorCode: 40,
 });
 
 export type TextLimitName = keyof typeof TEXT_LIMITS;

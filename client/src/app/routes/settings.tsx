@@ -6,11 +6,13 @@ import { ReminderPreferencesForm } from '@/features/settings/components/reminder
 import { reminderQueries, useReminderPreferences } from '@/features/settings/api/reminder-preferences';
 import type { QueryClient } from '@tanstack/react-query';
 import { preloadPanels } from '../preload';
+import { secondFactorQuery } from '@/features/settings/api/second-factor';
+import { SecondFactorSection } from '@/features/settings/components/second-factor-section';
 import { ExportCard } from '@/features/export/components/export-card';
 import { PageHeader } from '@/components/ui/page-header';
 
 export const clientLoader = (qc: QueryClient) => async () => {
-  void preloadPanels(qc.ensureQueryData(reminderQueries.preferences()));
+  void preloadPanels(qc.ensureQueryData(reminderQueries.preferences()), qc.ensureQueryData(secondFactorQuery()));
   return null;
 };
 
@@ -27,6 +29,11 @@ export function Component() {
         Password
       </Title>
       <PasswordForm />
+      <Divider my="md" />
+      <Title order={3} size="h4" id="security">
+        Sign-in security
+      </Title>
+      <SecondFactorSection />
       <Divider my="md" />
       <Title order={3} size="h4">
         Reminders

@@ -1,16 +1,25 @@
 import { useNavigate, useSearchParams } from 'react-router';
+import { useQueryClient } from '@tanstack/react-query';
+import type { Me } from '@broodsilk/shared';
+import { meQueryKey } from '@/lib/query-keys';
 import { PublicLayout } from '@/components/layouts/public-layout';
 import { SignInForm } from '@/features/auth/components/sign-in-form';
 import { safeNext } from './safe-next';
 import { paths } from '@/config/paths';
 
+/** An administrator who must set up a second factor is sent to it before anything else. */
+const mustEnrol = (me: Me | null | undefined) => !!me && me.secondFactorRequired && !me.secondFactorEnabled;
+
 export function Component() {
   const navigate = useNavigate();
+  const qc = useQueryClient();
   const [params] = useSearchParams();
   return (
     <PublicLayout title="Sign in to Broodsilk" subtitle="Your pairings, sacs and partner accounts in one place.">
       <SignInForm
-        onSignedIn={() => navigate(safeNext(params.get('next')), { replace: true })}
+        onSignedIn={() =>
+          navigate(mustEnrol(qc.getQueryData<Me | null>(meQueryKey)) ? `${paths.settings.href()}#security` : safeNext(params.get('next')), { replace: true })
+        }
         registerHref={params.get('next') ? `${paths.register.href()}?next=${encodeURIComponent(safeNext(params.get('next')))}` : paths.register.href()}
       />
     </PublicLayout>

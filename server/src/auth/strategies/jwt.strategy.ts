@@ -7,6 +7,7 @@ import type { Request } from 'express';
 import { SESSION_COOKIE } from '@broodsilk/shared';
 import { User } from '../../users/user.entity';
 import type { AuthUser, JwtPayload } from '../../common/auth-user';
+import { secondFactorRequired } from '../second-factor/second-factor-rule';
 
 function fromSessionCookie(req: Request): string | null {
   const value = (req.cookies as Record<string, string> | undefined)?.[SESSION_COOKIE];
@@ -29,9 +30,15 @@ export class JwtStrategy extends PassportStrategy(Strategy) {
   }
 
   async validate(payload: JwtPayload): Promise<AuthUser | false> {
-    const user = await this.em.findOne(User, { id: payload.sub }, { fields: ['id', 'email', 'role', 'timeZone', 'tokenVersion'] });
+    const user = await this.em.findOne(User, { id: payload.sub }, { fields: ['id', 'email', 'role', 'timeZone', 'tokenVersion', 'totpEnabledAt'] });
     // A token issued before the last logout or password change no longer counts.
     if (!user || user.tokenVersion !== payload.ver) return false;
-    return { id: user.id, email: user.email, role: user.role, timeZone: user.timeZone };
+    return {
+      id: user.id,
+      email: user.email,
+      role: user.role,
+      timeZone: user.timeZone,
+      mustEnrolSecondFactor: !user.totpEnabledAt && secondFactorRequired(user.role),
+    };
   }
 }

@@ -14,6 +14,9 @@ export class RolesGuard implements CanActivate {
     if (!roles?.length) return true;
     const user = context.switchToHttp().getRequest().user as AuthUser | undefined;
     if (!user || !roles.includes(user.role)) throw new ForbiddenException('Your account is not allowed to do this.');
+    if (user.mustEnrolSecondFactor) {
+      throw new ForbiddenException('Set up a second factor (Settings, Sign-in security) before using administrator pages.');
+    }
     return true;
   }
 }

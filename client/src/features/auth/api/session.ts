@@ -1,14 +1,23 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { LoginRequest, LoginResponse, RegisterRequest } from '@broodsilk/shared';
+import {
+  needsSecondFactor,
+  type LoginRequest,
+  type LoginResponse,
+  type RegisterRequest,
+  type SecondFactorSignInRequest,
+  type SignInResult,
+} from '@broodsilk/shared';
 import { api, setCsrfToken } from '@/lib/api-client';
 import { authKeys } from './me';
 
-function useSessionMutation<T>(path: string) {
+function useSessionMutation<T, R extends SignInResult = LoginResponse>(path: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (body: T) => api.post<LoginResponse>(path, body),
+    mutationFn: (body: T) => api.post<R>(path, body),
     meta: { handlesErrors: true },
     onSuccess: async (res) => {
+      // A right password on an account with a second factor starts no session yet.
+      if (needsSecondFactor(res)) return;
       setCsrfToken(res.csrfToken);
       qc.clear();
       qc.setQueryData(authKeys.me, res.user);
@@ -16,7 +25,8 @@ function useSessionMutation<T>(path: string) {
   });
 }
 
-export const useLogin = () => useSessionMutation<LoginRequest>('/auth/login');
+export const useLogin = () => useSessionMutation<LoginRequest, SignInResult>('/auth/login');
+export const useSecondFactorSignIn = () => useSessionMutation<SecondFactorSignInRequest>('/auth/login/second-factor');
 export const useRegister = () => useSessionMutation<RegisterRequest>('/auth/register');
 
 export function useLogout() {

@@ -28,7 +28,16 @@ describe('SignInForm', () => {
       'POST /api/auth/login': () => ({
         status: 200,
         body: {
-          user: { id: '1', email: 'mira@example.test', displayName: 'Mira', role: 'keeper', timeZone: 'UTC', temperatureUnit: 'C' },
+          user: {
+            id: '1',
+            email: 'mira@example.test',
+            displayName: 'Mira',
+            role: 'keeper',
+            timeZone: 'UTC',
+            temperatureUnit: 'C',
+            secondFactorEnabled: false,
+            secondFactorRequired: false,
+          },
           accessToken: 'a',
           csrfToken: 'c',
           expiresAt: '',
@@ -43,6 +52,35 @@ describe('SignInForm', () => {
     await userEvent.click(screen.getByRole('button', { name: 'Sign in' }));
     await waitFor(() => expect(onSignedIn).toHaveBeenCalled());
     expect(calls.find((c) => c.path === '/api/auth/login')?.body).toEqual({ email: 'mira@example.test', password: 'right password' });
+  });
+
+  it('with a second factor, asks for the code and sends it with the pending token; only then is the user signed in', async () => {
+    const user = {
+      id: '1',
+      email: 'mira@example.test',
+      displayName: 'Mira',
+      role: 'keeper',
+      timeZone: 'UTC',
+      temperatureUnit: 'C',
+      secondFactorEnabled: true,
+      secondFactorRequired: false,
+    };
+    const { fetchStub, calls } = stubFetch({
+      'GET /api/auth/csrf': () => ({ status: 200, body: { csrfToken: 't' } }),
+      'POST /api/auth/login': () => ({ status: 200, body: { secondFactor: 'totp', pendingToken: 'pending-1', expiresAt: '' } }),
+      'POST /api/auth/login/second-factor': () => ({ status: 200, body: { user, accessToken: 'a', csrfToken: 'c', expiresAt: '' } }),
+    });
+    vi.stubGlobal('fetch', fetchStub);
+    const onSignedIn = vi.fn();
+    renderWithProviders(<SignInForm onSignedIn={onSignedIn} />);
+    await userEvent.type(screen.getByLabelText(/E-mail/), 'mira@example.test');
+    await userEvent.type(screen.getByLabelText(/Password/), 'right password');
+    await userEvent.click(screen.getByRole('button', { name: 'Sign in' }));
+    await userEvent.type(await screen.findByLabelText(/Code/), '123 456');
+    expect(onSignedIn).not.toHaveBeenCalled();
+    await userEvent.click(screen.getByRole('button', { name: 'Sign in' }));
+    await waitFor(() => expect(onSignedIn).toHaveBeenCalled());
+    expect(calls.find((c) => c.path === '/api/auth/login/second-factor')?.body).toEqual({ pendingToken: 'pending-1', code: '123 456' });
   });
 
   it('checks the fields before sending', async () => {

@@ -5,12 +5,15 @@ import { useState } from 'react';
 import { Link } from 'react-router';
 import { applyServerErrors } from '@/lib/form-errors';
 import { paths } from '@/config/paths';
+import { needsSecondFactor, type SecondFactorChallenge } from '@broodsilk/shared';
 import { useLogin } from '../api/session';
+import { SecondFactorStep } from './second-factor-step';
 
 /** `registerHref` lets the sign-in page keep where the user was going (e.g. an invitation) when they register instead. */
 export function SignInForm({ onSignedIn, registerHref = paths.register.href() }: { onSignedIn: () => void; registerHref?: string }) {
   const login = useLogin();
   const [problem, setProblem] = useState<string | null>(null);
+  const [challenge, setChallenge] = useState<SecondFactorChallenge | null>(null);
   const form = useForm({
     mode: 'uncontrolled',
     initialValues: { email: '', password: '' },
@@ -20,11 +23,16 @@ export function SignInForm({ onSignedIn, registerHref = paths.register.href() }:
     },
   });
 
+  if (challenge) return <SecondFactorStep challenge={challenge} onSignedIn={onSignedIn} onStartAgain={() => setChallenge(null)} />;
+
   return (
     <form
       onSubmit={form.onSubmit((values) => {
         setProblem(null);
-        login.mutate(values, { onSuccess: onSignedIn, onError: (e) => setProblem(applyServerErrors(form, e)) });
+        login.mutate(values, {
+          onSuccess: (res) => (needsSecondFactor(res) ? setChallenge(res) : onSignedIn()),
+          onError: (e) => setProblem(applyServerErrors(form, e)),
+        });
       })}
     >
       <Stack>

@@ -1,0 +1,41 @@
+import { IsNotEmpty, IsString, MaxLength } from 'class-validator';
+import { TEXT_LIMITS, type SecondFactorRemovalRequest, type SecondFactorSignInRequest, type TotpConfirmRequest } from '@broodsilk/shared';
+import { MAX_PASSWORD_LENGTH } from '../../password-policy';
+
+const MAX_CODE_LENGTH = TEXT_LIMITS.secondFactorCode;
+
+export class TotpConfirmDto implements TotpConfirmRequest {
+  @IsString()
+  @IsNotEmpty({ message: 'Enter the six digits your app shows.' })
+  @MaxLength(MAX_CODE_LENGTH)
+  code!: string;
+
+  @IsString()
+  @IsNotEmpty({ message: 'Enter your password.' })
+  @MaxLength(MAX_PASSWORD_LENGTH)
+  password!: string;
+}
+
+export class SecondFactorRemovalDto implements SecondFactorRemovalRequest {
+  @IsString()
+  @IsNotEmpty({ message: 'Enter your password.' })
+  @MaxLength(MAX_PASSWORD_LENGTH)
+  password!: string;
+
+  @IsString()
+  @IsNotEmpty({ message: 'Enter a code from your app or a recovery code.' })
+  @MaxLength(MAX_CODE_LENGTH)
+  code!: string;
+}
+
+export class SecondFactorSignInDto implements SecondFactorSignInRequest {
+  @IsString()
+  @IsNotEmpty()
+  @MaxLength(2000)
+  pendingToken!: string;
+
+  @IsString()
+  @IsNotEmpty({ message: 'Enter a code from your app or a recovery code.' })
+  @MaxLength(MAX_CODE_LENGTH)
+  code!: string;
+}
