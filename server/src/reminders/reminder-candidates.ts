@@ -32,7 +32,7 @@ export function sacCandidates(person: Person, projectId: string, projectTitle: s
       body: `${where}: the next roll was due at ${sac.roll.due} (UTC).`,
     });
   }
-  if (!sac.pulled && sac.pullWindow.opensOn === sac.today) {
+  if (!sac.pulled && !sac.leftWithMother && sac.pullWindow.opensOn === sac.today) {
     out.push({
       ...base,
       key: `pull-opens:${sac.id}:${person.id}:${sac.today}`,
@@ -41,7 +41,7 @@ export function sacCandidates(person: Person, projectId: string, projectTitle: s
       body: `${where}: the pull window opens today and closes on ${sac.pullWindow.closesOn}.`,
     });
   }
-  if (!sac.pulled && sac.pullWindow.closesOn === sac.today) {
+  if (!sac.pulled && !sac.leftWithMother && sac.pullWindow.closesOn === sac.today) {
     out.push({
       ...base,
       key: `pull-closes:${sac.id}:${person.id}:${sac.today}`,

@@ -13,6 +13,7 @@ import { assertNotFuture } from './sac-rules';
 import { fieldError } from '../common/field-errors';
 import { assertStageMove, entryValues } from './care-log-rules';
 import { careLogSummary, toCareLogResponse } from './care-log.mapper';
+import { bandOf } from './sac-band';
 import type { CareLogEntryDto } from './dto/care-log-entry.dto';
 
 @Injectable()
@@ -29,7 +30,8 @@ export class CareLogService {
     const sac = await this.sacs.find(access, sacId);
     const entries = await this.em.find(SacLogEntry, { sac }, { populate: ['author'], orderBy: { at: 'desc', createdAt: 'desc' } });
     const struckBy = new Map(entries.filter((e) => e.strikes).map((e) => [e.strikes!.id, e]));
-    return entries.map((e) => toCareLogResponse(e, struckBy.get(e.id)));
+    const band = bandOf(sac);
+    return entries.map((e) => toCareLogResponse(e, struckBy.get(e.id), band));
   }
 
   async add(access: ProjectAccess, viewer: AuthUser, sacId: string, dto: CareLogEntryDto): Promise<CareLogEntryResponse> {
@@ -69,8 +71,8 @@ export class CareLogService {
       });
       return entry.id;
     });
-    const saved = await this.em.findOneOrFail(SacLogEntry, id, { populate: ['author'] });
-    return toCareLogResponse(saved, undefined);
+    const saved = await this.em.findOneOrFail(SacLogEntry, id, { populate: ['author', 'sac'] });
+    return toCareLogResponse(saved, undefined, bandOf(saved.sac));
   }
 
   private async strikeTarget(tx: EntityManager, sac: Sac, dto: CareLogEntryDto): Promise<SacLogEntry> {

@@ -11,7 +11,7 @@ import { BroodCount } from './brood-count.entity';
 import { SacViewsService } from './sac-views.service';
 import { SacsService } from './sacs.service';
 import { BroodService } from './brood.service';
-import { ProjectSacsController, SacsController } from './sacs.controller';
+import { IncubatorRightsController, ProjectSacsController, SacsController } from './sacs.controller';
 import { toSacFact } from './sacs.mapper';
 import { CareLogService } from './care-log.service';
 import { CareLogController } from './care-log.controller';
@@ -26,7 +26,7 @@ const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 @Module({
   imports: [MikroOrmModule.forFeature([Sac, SacLogEntry, SacOpening, BroodCount]), ProjectsModule, ActivityModule, PhotosModule],
-  controllers: [ProjectSacsController, SacsController, CareLogController, BroodController],
+  controllers: [ProjectSacsController, IncubatorRightsController, SacsController, CareLogController, BroodController],
   providers: [SacViewsService, SacsService, BroodService, CareLogService, OpeningService, BroodCountsService],
   exports: [SacViewsService, SacsService, BroodService],
 })

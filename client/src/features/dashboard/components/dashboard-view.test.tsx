@@ -1,6 +1,7 @@
 import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import type { DashboardResponse, DashboardSac, RollStatus, SacResponse } from '@broodsilk/shared';
+import { SAC_INCUBATION_FIELDS } from '@/testing/sac-incubation-fields';
 import { renderWithProviders } from '@/testing/render';
 import { DashboardView } from './dashboard-view';
 
@@ -38,6 +39,8 @@ function sac(id: string, roll: { status: RollStatus; due: string } | null, state
     notes: null,
     warningReason: null,
     incubatorCaution: null,
+    ...SAC_INCUBATION_FIELDS,
+    inIncubator: !!roll,
     createdAt: '2026-11-01T00:00:00Z',
     updatedAt: '2026-11-01T00:00:00Z',
   };
@@ -53,6 +56,7 @@ const data: DashboardResponse = {
       item('Versicolor pair', sac('b', { status: 'due', due: '2026-12-01T10:00:00Z' })),
     ],
     pullWindows: [{ ...item('Hamorii pair', sac('c', null)), event: 'closes-today' }],
+    readings: [],
     termsToAccept: [],
     handOversToConfirm: [],
     payments: [],
@@ -87,12 +91,25 @@ describe('DashboardView', () => {
     expect(screen.queryByText('Nothing needs doing right now.')).not.toBeInTheDocument();
   });
 
-  const nothing = { rolls: [], pullWindows: [], termsToAccept: [], handOversToConfirm: [], payments: [] };
+  const nothing = { rolls: [], pullWindows: [], readings: [], termsToAccept: [], handOversToConfirm: [], payments: [] };
 
   it('says so when nothing is due', () => {
     renderWithProviders(<DashboardView data={{ ...data, dueToday: nothing }} timeZone="UTC" />);
     expect(within(screen.getByTestId('card-rolls')).getByText('No roll is due.')).toBeInTheDocument();
     expect(screen.getByText('Nothing needs doing right now.')).toBeInTheDocument();
+  });
+
+  it('shows a reading outside the band as a to-do, in the viewer’s unit', () => {
+    const hot = {
+      ...sac('h', { status: 'upcoming', due: '2026-12-01T20:00:00Z' }),
+      readingAlerts: [{ kind: 'temperature' as const, value: 30, at: '2026-12-01T06:00:00Z', side: 'above' as const }],
+    };
+    renderWithProviders(<DashboardView data={{ ...data, dueToday: { ...nothing, readings: [item('Hot pair', hot)] } }} timeZone="UTC" temperatureUnit="F" />);
+    // 30 °C = 86 °F, 24 °C = 75.2 °F, 28 °C = 82.4 °F (NIST SP 811: t/°F = 1.8·t/°C + 32); band docs/trade-facts.md §4.
+    expect(within(screen.getByTestId('card-readings')).getByTestId('reading-alert')).toHaveTextContent(
+      'Temperature 86.0 °F, above the band (75.2 °F to 82.4 °F)',
+    );
+    expect(screen.queryByText('Nothing needs doing right now.')).not.toBeInTheDocument();
   });
 
   it('names a window open now, not only one opening today', () => {
