@@ -32,7 +32,8 @@ export const seedMotherKeptBrood: FeatureSeeder = async (ctx) => {
   const emerged = addDays(laid, 64);
   const female = await em.findOneOrFail(Animal, { recordedBy: mira, label: 'MO-005' });
   const male = await em.findOneOrFail(Animal, { recordedBy: mira, label: 'MO-018' });
-  const started = eveningOf(addDays(laid, -75));
+  // G. pulchripes lays some 120 days or more after a pairing (species data): paired 130 days before the sac.
+  const started = eveningOf(addDays(laid, -135));
   const project = em.create(Project, {
     owner: mira,
     female,
@@ -58,7 +59,7 @@ export const seedMotherKeptBrood: FeatureSeeder = async (ctx) => {
   em.create(TermsLine, { version: terms, member: tomaszMember, weight: 1, fixedCount: 0, pickOrder: 2, createdAt: started });
   em.create(TermsAcceptance, { version: terms, member: miraMember, recordedBy: mira, createdAt: started });
   em.create(TermsAcceptance, { version: terms, member: tomaszMember, recordedBy: tomasz, createdAt: started });
-  const pairedOn = addDays(laid, -70);
+  const pairedOn = addDays(laid, -130);
   em.create(Pairing, { project, startedAt: eveningOf(pairedOn), startedOn: pairedOn, durationMinutes: 25, outcome: 'connected', recordedBy: mira });
   const sac = em.create(Sac, {
     project,
