@@ -57,7 +57,19 @@ describe('a sac left with the mother', () => {
       .expect(201);
     const counts = (await as(partner).get(`/sacs/${sac.id}/counts`).expect(200)).body as BroodCountsResponse;
     expect(counts.current).toBe(85);
-    expect(await sacOf(sac.id, partner)).toMatchObject({ opened: true, currentCount: 85, leftWithMother: true, outcome: 'emerged' });
+    // One stage fact: the count named first instar, so the sac is at first instar, with the entry in its log.
+    expect(await sacOf(sac.id, partner)).toMatchObject({
+      opened: true,
+      currentCount: 85,
+      leftWithMother: true,
+      outcome: 'emerged',
+      broodStage: 'first-instar',
+    });
+    const log = (await as(owner).get(`/sacs/${sac.id}/log`).expect(200)).body as CareLogEntryResponse[];
+    expect(log.filter((e) => e.kind === 'stage').map((e) => [e.stage, e.at])).toEqual([['first-instar', '2025-10-20T08:00:00.000Z']]);
+    // A later count naming an earlier stage is history at its instant; it does not move the stage back.
+    await as(caretaker).post(`/sacs/${sac.id}/counts`, { at: '2025-10-20T09:00:00Z', stage: 'eggs-with-legs', alive: 85 }).expect(201);
+    expect((await sacOf(sac.id)).broodStage).toBe('first-instar');
   });
 
   it('can be recorded so from the start, and a pull ends the choice; both at once is a 400', async () => {

@@ -1,6 +1,6 @@
 import { BadRequestException, ConflictException, Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
-import { todayIn, type CareLogEntryResponse } from '@broodsilk/shared';
+import { isBroodStageAtLeast, todayIn, type CareLogEntryResponse } from '@broodsilk/shared';
 import type { AuthUser } from '../common/auth-user';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { ActivityService } from '../activity/activity.service';
@@ -92,6 +92,17 @@ export class CareLogService {
         details: [{ field: 'kind', message: 'No rolls for a sac left with the mother.' }],
       });
     if (at < sac.pulledAt) throw fieldError('at', `A roll cannot come before the pull (${sac.pulledAt.toISOString()}).`);
+  }
+
+  /**
+   * A count at a later stage than the sac's moves the sac's stage with a stage entry at the count's
+   * instant: the brood stage stays one fact, whichever screen names it (incubator, count form).
+   */
+  async stageFromCount(tx: EntityManager, sac: Sac, stage: Sac['broodStage'], at: Date, viewerId: string): Promise<void> {
+    if (!isBroodStageAtLeast(stage, sac.broodStage) || stage === sac.broodStage) return;
+    tx.create(SacLogEntry, { sac, kind: 'stage', at, author: tx.getReference(User, viewerId), stage, text: 'Stage named with a brood count.' });
+    await tx.flush();
+    sac.broodStage = await this.stageFromLog(tx, sac);
   }
 
   /** The brood stage is the latest stage entry not struck (eggs when there is none). */

@@ -220,7 +220,15 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
         </Button>
       </Group>
       <Group grow align="flex-end">
-        <Select label="Stage now" size="lg" data={stageOptions} value={stage} onChange={setStage} placeholder={broodLabel(sac.broodStage)} />
+        <Select
+          label="Stage now"
+          description="The sac's one stage, also named by brood counts"
+          size="lg"
+          data={stageOptions}
+          value={stage}
+          onChange={setStage}
+          placeholder={broodLabel(sac.broodStage)}
+        />
         <Button
           size="lg"
           variant="default"
