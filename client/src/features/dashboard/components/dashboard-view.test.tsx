@@ -1,48 +1,22 @@
 import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import type { DashboardResponse, DashboardSac, RollStatus, SacResponse } from '@broodsilk/shared';
-import { SAC_INCUBATION_FIELDS } from '@/testing/sac-incubation-fields';
+import { PULLED_TEST_SAC } from '@/testing/sac-incubation-fields';
 import { renderWithProviders } from '@/testing/render';
 import { DashboardView } from './dashboard-view';
 
 function sac(id: string, roll: { status: RollStatus; due: string } | null, state: SacResponse['pullWindow']['state'] = 'open'): SacResponse {
   return {
+    ...PULLED_TEST_SAC,
     id,
     projectId: `p-${id}`,
-    layDate: '2026-11-01',
-    dayNumber: 30,
-    today: '2026-12-01',
     pulled: !!roll,
-    pulledAt: roll ? '2026-11-25T07:00:00Z' : null,
-    pulledOn: roll ? '2026-11-25' : null,
-    outcome: 'in-progress',
-    failureReason: null,
-    pullWindow: {
-      fromDay: 21,
-      toDay: 45,
-      origin: 'default',
-      opensOn: '2026-11-22',
-      closesOn: '2026-12-16',
-      closingFrom: '2026-12-14',
-      dayNumber: 30,
-      state,
-      daysUntilOpens: 0,
-      daysUntilCloses: 15,
-      daysPastClose: 0,
-    },
-    rollIntervalHours: 12,
-    rollingOff: false,
+    pulledAt: roll ? PULLED_TEST_SAC.pulledAt : null,
+    pulledOn: roll ? PULLED_TEST_SAC.pulledOn : null,
+    pullWindow: { ...PULLED_TEST_SAC.pullWindow, state },
     roll: roll ? { ...roll, lastRollAt: null } : null,
-    broodStage: 'eggs',
-    opened: false,
-    currentCount: null,
-    notes: null,
-    warningReason: null,
     incubatorCaution: null,
-    ...SAC_INCUBATION_FIELDS,
     inIncubator: !!roll,
-    createdAt: '2026-11-01T00:00:00Z',
-    updatedAt: '2026-11-01T00:00:00Z',
   };
 }
 

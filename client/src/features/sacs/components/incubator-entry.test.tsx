@@ -1,50 +1,14 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { INCUBATOR_CAUTION, addDays, todayIn, type SacResponse } from '@broodsilk/shared';
-import { SAC_INCUBATION_FIELDS } from '@/testing/sac-incubation-fields';
+import { addDays, todayIn } from '@broodsilk/shared';
+import { PULLED_TEST_SAC } from '@/testing/sac-incubation-fields';
 import { renderWithProviders, stubFetch } from '@/testing/render';
 import { IncubatorEntry } from './incubator-entry';
 
 afterEach(() => vi.unstubAllGlobals());
 
-const sac: SacResponse = {
-  id: 's1',
-  projectId: 'p1',
-  layDate: '2026-11-01',
-  dayNumber: 30,
-  today: '2026-12-01',
-  pulled: true,
-  pulledAt: '2026-11-25T07:00:00Z',
-  pulledOn: '2026-11-25',
-  outcome: 'in-progress',
-  failureReason: null,
-  pullWindow: {
-    fromDay: 21,
-    toDay: 45,
-    origin: 'default',
-    opensOn: '2026-11-22',
-    closesOn: '2026-12-16',
-    closingFrom: '2026-12-14',
-    dayNumber: 30,
-    state: 'open',
-    daysUntilOpens: 0,
-    daysUntilCloses: 15,
-    daysPastClose: 0,
-  },
-  rollIntervalHours: 12,
-  rollingOff: false,
-  roll: { due: '2026-12-01T07:00:00Z', status: 'overdue', lastRollAt: '2026-11-30T19:00:00Z' },
-  broodStage: 'eggs',
-  opened: false,
-  currentCount: null,
-  notes: null,
-  warningReason: null,
-  incubatorCaution: INCUBATOR_CAUTION,
-  ...SAC_INCUBATION_FIELDS,
-  createdAt: '2026-11-01T10:00:00Z',
-  updatedAt: '2026-11-30T19:00:00Z',
-};
+const sac = PULLED_TEST_SAC;
 
 const entry = (kind: string) => ({
   id: 'e1',
@@ -63,7 +27,8 @@ const entry = (kind: string) => ({
   createdAt: '2026-12-01T09:30:00Z',
 });
 
-describe('IncubatorEntry', () => {
+// A loaded machine renders these slowly; nothing here is timed.
+describe('IncubatorEntry', { timeout: 30_000 }, () => {
   it('sends a roll entry when "Rolled now" is tapped and says when it was logged', async () => {
     const { fetchStub, calls } = stubFetch({
       'GET /api/auth/csrf': () => ({ status: 200, body: { csrfToken: 't' } }),
