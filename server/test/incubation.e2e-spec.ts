@@ -22,7 +22,18 @@ const as = (who: SignedIn) => ({
   patch: (url: string, body: object) => http().patch(`/api${url}`).set('Authorization', who.bearer).send(body),
   put: (url: string, body: object) => http().put(`/api${url}`).set('Authorization', who.bearer).send(body),
 });
-const OPENING = { openedAt: '2025-10-19T09:00:00Z', healthyEggs: 0, eggsWithLegs: 0, nymphs: 90, darkEggs: 4, spoiledEggs: 1, keptBack: 0 };
+// 95 eggs is below the fixture species' usual range: the opening's plausibility warning, acknowledged.
+const OPENING = {
+  openedAt: '2025-10-19T09:00:00Z',
+  healthyEggs: 0,
+  eggsWithLegs: 0,
+  nymphs: 90,
+  darkEggs: 4,
+  spoiledEggs: 1,
+  keptBack: 0,
+  acknowledgedWarnings: ['eggs-outside-species-range'],
+  warningReason: 'A small first sac.',
+};
 const withMother = () => createSac(t.app, owner, projectId, { layDate: '2025-09-01' });
 const pulled = () => createSac(t.app, owner, projectId, { layDate: '2025-09-20', pulledAt: '2025-10-18T08:00:00Z' });
 const sacOf = async (id: string, who = owner) => (await as(who).get(`/sacs/${id}`).expect(200)).body as SacResponse;

@@ -47,6 +47,7 @@ export const PULLED_TEST_SAC: SacResponse = {
   broodStage: 'eggs',
   opened: false,
   currentCount: null,
+  currentCountEstimated: false,
   notes: null,
   warningReason: null,
   incubatorCaution: INCUBATOR_CAUTION,

@@ -4,7 +4,7 @@ import { todayIn, type ProjectRole, type SacResponse } from '@broodsilk/shared';
 import { effectiveBreeding } from '../species/effective-breeding';
 import { ownBreeding } from '../species/species.mapper';
 import type { Sac } from './sac.entity';
-import { currentCountsOf, latestCareOf, openedSacsOf } from './sac-queries';
+import { latestCountsOf, latestCareOf, openedSacsOf } from './sac-queries';
 import { toSacResponse, type PullWindowInForce } from './sacs.mapper';
 import { Clock } from '../common/clock';
 
@@ -34,7 +34,7 @@ export class SacViewsService {
     roleOf: (projectId: string) => ProjectRole = READ_ONLY,
   ): Promise<SacResponse[]> {
     const ids = sacs.map((s) => s.id);
-    const [care, counts, opened] = await Promise.all([latestCareOf(em, ids), currentCountsOf(em, ids), openedSacsOf(em, ids)]);
+    const [care, counts, opened] = await Promise.all([latestCareOf(em, ids), latestCountsOf(em, ids), openedSacsOf(em, ids)]);
     const today = todayIn(timeZone, now);
     return sacs.map((s) =>
       toSacResponse(s, {
@@ -44,7 +44,8 @@ export class SacViewsService {
         care: care.get(s.id) ?? {},
         role: roleOf(s.project.id),
         opened: opened.has(s.id),
-        currentCount: counts.get(s.id) ?? null,
+        currentCount: counts.get(s.id)?.alive ?? null,
+        currentCountEstimated: counts.get(s.id)?.estimated ?? false,
       }),
     );
   }

@@ -1,6 +1,7 @@
-import { Outlet, redirect, useNavigate, type LoaderFunctionArgs } from 'react-router';
+import { redirect, useNavigate, type LoaderFunctionArgs } from 'react-router';
 import type { QueryClient } from '@tanstack/react-query';
 import { AppLayout } from '@/components/layouts/app-layout';
+import { PendingOutlet } from '@/components/layouts/pending-outlet';
 import { paths } from '@/config/paths';
 import { meQuery, useMe } from '@/features/auth/api/me';
 import { useLogout } from '@/features/auth/api/session';
@@ -30,7 +31,7 @@ export function Component() {
       settingsHref={paths.settings.href()}
       onSignOut={() => logout.mutate(undefined, { onSettled: () => navigate(paths.signIn.href()) })}
     >
-      <Outlet />
+      <PendingOutlet />
     </AppLayout>
   );
 }

@@ -13,6 +13,8 @@ import { sacQueries } from '@/features/sacs/api/sacs';
 import { BroodCounts } from '@/features/sacs/components/brood-counts';
 import { CareLogList } from '@/features/sacs/components/care-log-list';
 import { OpeningPanel } from '@/features/sacs/components/opening-panel';
+import { KeptBackPanel } from '@/features/sacs/components/kept-back-panel';
+import { useOpening } from '@/features/sacs/api/opening';
 import { SacOverview } from '@/features/sacs/components/sac-overview';
 import { IncubatorRightsSwitch, SacSettingsForm } from '@/features/sacs/components/sac-settings-form';
 import { SectionCard } from '@/components/ui/section-card';
@@ -39,6 +41,7 @@ export const clientLoader =
 
 export function Component() {
   const { me, sac, project } = useSacPage();
+  const opening = useOpening(sac.data ?? { id: '', opened: false });
   if (!me || sac.isPending) return <PageLoader />;
   if (sac.isError) return <Alert color="clay">{sac.error.message}</Alert>;
   const s = sac.data;
@@ -70,6 +73,11 @@ export function Component() {
       {openable && (
         <SectionCard title="Opening">
           <OpeningPanel sac={s} timeZone={me.timeZone} canEdit={s.may.pullAndOpen} />
+        </SectionCard>
+      )}
+      {(opening.data?.keptBack ?? 0) > 0 && (
+        <SectionCard title="Eggs kept back" testId="kept-back-card">
+          <KeptBackPanel sacId={s.id} timeZone={me.timeZone} canLog={s.may.log} canEnd={s.may.edit} />
         </SectionCard>
       )}
       {s.opened && (
