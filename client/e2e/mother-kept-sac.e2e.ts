@@ -53,19 +53,19 @@ describe('a sac left with the mother', () => {
     // The young have left the sac: the keeper counts them where they are.
     await page.getByRole('button', { name: 'The young have emerged' }).click();
     await eventually(() => page.getByText('Young emerged').first().isVisible()).toBe(true);
-    await fill(page, 'Nymphs', '60');
+    await fill(page, 'Nymphs', '600');
     await fill(page, 'Dark (non-viable)', '3');
     await page.getByRole('button', { name: 'Save opening' }).click();
     const confirm = page.getByRole('dialog', { name: 'Record the opening' });
     await confirm.getByRole('button', { name: 'Record the opening' }).click();
-    await eventually(() => page.getByTestId('opening').textContent()).toContain('60 viable of 63');
+    await eventually(() => page.getByTestId('opening').textContent()).toContain('600 viable of 603');
 
     await page.goto(`${projectUrl}/account`);
     const shares = page.getByTestId(`shares-sac-${sacId}`);
-    await eventually(() => shares.textContent()).toContain('60 young counted');
-    // Weights 2 : 1 of 60 young (the demo terms): 40 and 20, exact thirds.
+    await eventually(() => shares.textContent()).toContain('600 young counted');
+    // Weights 2 : 1 of 600 young (the demo terms): 400 and 200, exact thirds.
     const row = (name: string) => shares.getByRole('row').filter({ hasText: name }).getByRole('cell').nth(1).textContent();
-    await eventually(() => row('Mira Okonkwo')).toBe('40');
-    await eventually(() => row('Tomasz Wierzba')).toBe('20');
+    await eventually(() => row('Mira Okonkwo')).toBe('400');
+    await eventually(() => row('Tomasz Wierzba')).toBe('200');
   });
 });
