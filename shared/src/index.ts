@@ -36,6 +36,7 @@ export * from './accounts/account-api.types.js';
 export * from './dashboard/dashboard.types.js';
 export * from './dashboard/calendar.types.js';
 export * from './dashboard/notifications.types.js';
+export * from './reminders/reminder-preferences.types.js';
 export * from './vocabulary/labels.js';
 export * from './sacs/brood-count-rules.js';
 export * from './sacs/sac-plausibility.js';

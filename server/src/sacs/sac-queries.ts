@@ -27,6 +27,8 @@ export async function latestCareOf(em: EntityManager, sacIds: string[]): Promise
         and not exists (select 1 from sac_log_entries k where k.strikes_id = e.id)
       order by e.sac_id, e.kind, e.at desc, e.created_at desc`,
     sacIds,
+    'all',
+    em.getTransactionContext(), // inside a transaction, see its own writes (the reminder planner re-plans before commit)
   );
   const out = new Map<string, LatestCare>();
   for (const r of rows) {
