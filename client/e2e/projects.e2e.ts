@@ -2,20 +2,13 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { existsSync } from 'node:fs';
 import type { Page } from 'playwright-core';
 import { BASE_URL, DEMO_PASSWORD, openBrowser, screenshot, signIn, type Browser } from './support/browser';
+import { daysAgo } from './support/dates';
 
 /** Waits for a page to settle (the server answers in its own time); it does not measure anything. */
 const eventually = <T>(read: () => Promise<T> | T) => expect.poll(read, { timeout: 15_000, interval: 100 });
 
 const MAIL_API = process.env.MAILDEV_API ?? 'http://127.0.0.1:1080';
 const TITLE = `Regalis loan ${Date.now().toString(36)}`;
-
-/** A calendar date `days` before today as Mira (Europe/Berlin) sees it. */
-function daysAgo(days: number): string {
-  const today = new Intl.DateTimeFormat('en-CA', { timeZone: 'Europe/Berlin', year: 'numeric', month: '2-digit', day: '2-digit' }).format(new Date());
-  const d = new Date(`${today}T00:00:00Z`);
-  d.setUTCDate(d.getUTCDate() - days);
-  return d.toISOString().slice(0, 10);
-}
 
 async function pick(page: Page, label: string, search: string) {
   const input = page.getByLabel(new RegExp(`^${label}`)).first();
@@ -118,7 +111,7 @@ describe('a breeding project from loaned male to the first roll', () => {
     try {
       await signIn(phone.page, 'keeper@broodsilk.test');
       await phone.page.goto(`${BASE_URL}/incubator/${sacId}`);
-      await phone.page.getByRole('button', { name: 'Pulled now, into the incubator' }).click();
+      await phone.page.getByRole('button', { name: 'Pulled, into the incubator' }).click();
       // Asked once, with the time of the pull (now unless changed); day 22 is inside the default window, so no warning.
       const pull = phone.page.getByRole('dialog', { name: 'Record the pull' });
       expect(await pull.getByTestId('confirm-warning').count()).toBe(0);

@@ -88,10 +88,13 @@ describe('roll schedule through the API (interval 12 h; overdue after a quarter 
 });
 
 describe('stage entries', () => {
-  it('move the brood stage, stop rolls at first instar (project → brood), and striking the entry undoes it', async () => {
+  it('move the brood stage, stop rolls at eggs with legs (project → brood at first instar), and striking the entry undoes it', async () => {
     pin(NOW);
     const sac = await pulledSac();
     await log(caretaker, sac.id, { kind: 'stage', stage: 'eggs-with-legs', at: hoursBefore(5) }).expect(201);
+    // docs/trade-facts.md §4: rolled "until the legs have formed, then left alone".
+    expect(await sacOf(sac.id)).toMatchObject({ broodStage: 'eggs-with-legs', roll: null });
+    await http().patch(`/api/sacs/${sac.id}`).set('Authorization', owner.bearer).send({ rollPastLegs: true }).expect(200);
     expect(await sacOf(sac.id)).toMatchObject({ broodStage: 'eggs-with-legs', roll: { status: 'overdue' } });
     const instar = await log(caretaker, sac.id, { kind: 'stage', stage: 'first-instar', at: hoursBefore(1) }).expect(201);
     expect(await sacOf(sac.id)).toMatchObject({ broodStage: 'first-instar', roll: null });

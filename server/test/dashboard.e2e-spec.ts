@@ -66,14 +66,14 @@ describe('dashboard', () => {
     // A partner sees the project and its windows but has nothing to do today.
     const part = await dashboard(partner);
     expect(part.openProjects.map((p) => p.id)).toContain(projectId);
-    expect(part.dueToday).toEqual({ rolls: [], pullWindows: [], termsToAccept: [], handOversToConfirm: [], payments: [] });
+    expect(part.dueToday).toEqual({ rolls: [], pullWindows: [], readings: [], termsToAccept: [], handOversToConfirm: [], payments: [] });
     expect(part.upcomingPullWindows.map((x) => x.sac.id)).toContain(open22.id);
 
     const alone = await dashboard(loner);
     expect(alone).toMatchObject({
       openProjects: [],
       upcomingPullWindows: [],
-      dueToday: { rolls: [], pullWindows: [], termsToAccept: [], handOversToConfirm: [], payments: [] },
+      dueToday: { rolls: [], pullWindows: [], readings: [], termsToAccept: [], handOversToConfirm: [], payments: [] },
       recentActivity: [],
     });
   });

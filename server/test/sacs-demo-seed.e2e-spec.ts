@@ -1,10 +1,11 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { dayNumber, todayIn, type DashboardResponse, type ProjectSummary, type SacResponse } from '@broodsilk/shared';
+import { dayNumber, todayIn, type DashboardResponse, type ProjectSummary, type SacResponse, type SharesResponse } from '@broodsilk/shared';
 import { seedDemo } from '../src/seed/demo-seed';
 import { seedCollection } from '../src/seed/collection.seeder';
 import { DEMO_PROJECTS, seedProjects } from '../src/seed/projects.seeder';
 import { seedSacs } from '../src/seed/sacs.seeder';
+import { MOTHER_KEPT_TITLE, seedMotherKeptBrood } from '../src/seed/mother-kept-brood.seeder';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../src/seed/demo-accounts';
 import { createTestApp, type TestApp } from './support/test-app';
 import { login, type SignedIn } from './support/users';
@@ -26,7 +27,7 @@ const sacsOf = async (title: string): Promise<SacResponse[]> =>
 
 beforeAll(async () => {
   t = await createTestApp();
-  expect(await seedDemo(t.orm.em.fork(), [seedCollection, seedProjects, seedSacs])).toBe(true);
+  expect(await seedDemo(t.orm.em.fork(), [seedCollection, seedProjects, seedSacs, seedMotherKeptBrood])).toBe(true);
   mira = await login(t.app, account('keeper'), DEMO_PASSWORD);
   ines = await login(t.app, account('caretaker'), DEMO_PASSWORD);
   list = (await http().get('/api/projects').set('Authorization', mira.bearer).expect(200)).body;
@@ -36,6 +37,22 @@ afterAll(async () => {
 });
 
 describe('demo sacs', () => {
+  it('include a sac left with the mother, counted at emergence, whose shares follow from that count', async () => {
+    const [m] = await sacsOf(MOTHER_KEPT_TITLE);
+    expect(m).toMatchObject({ leftWithMother: true, pulled: false, outcome: 'emerged', opened: true, currentCount: 138, roll: null });
+    const shares = (
+      await http()
+        .get(`/api/projects/${byTitle(MOTHER_KEPT_TITLE).id}/shares`)
+        .set('Authorization', mira.bearer)
+        .expect(200)
+    ).body as SharesResponse;
+    // Weights 2 : 1 of 138 young: 92 and 46 (138 × 2/3 and 138 × 1/3, exact).
+    expect(shares.totals.map((p) => [p.name, p.count])).toEqual([
+      ['Mira Okonkwo', 92],
+      ['Tomasz Wierzba', 46],
+    ]);
+  });
+
   it('put three projects in the stages sac laid, in incubator and brood', async () => {
     expect(byTitle(DEMO_PROJECTS.vagansSac).stage.stage).toBe('sac-laid');
     expect(byTitle(DEMO_PROJECTS.hamoriiIncubator).stage.stage).toBe('in-incubator');

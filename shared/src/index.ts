@@ -48,3 +48,5 @@ export * from './projects/project-plausibility.js';
 export * from './forms/text-limits.js';
 export * from './money/money.js';
 export * from './projects/project-rules.js';
+export * from './sacs/incubation-band.js';
+export * from './sacs/sac-permissions.js';

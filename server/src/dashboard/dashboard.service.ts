@@ -68,7 +68,7 @@ export class DashboardService {
     const openIds = new Set(summaries.filter((s) => isProjectOpen(s.stage.stage)).map((s) => s.id));
 
     const sacs = await this.em.find(Sac, { project: { $in: [...openIds] }, outcome: 'in-progress' }, { populate: SAC_POPULATE });
-    const responses = await this.views.build(this.em, sacs, viewer.timeZone, now);
+    const responses = await this.views.build(this.em, sacs, viewer.timeZone, now, (projectId) => roleOf.get(projectId)!);
     const items: DashboardSac[] = sacs.map((s, i) => ({
       projectId: s.project.id,
       projectTitle: s.project.title,
@@ -76,7 +76,8 @@ export class DashboardService {
       sac: responses[i],
     }));
     const handsOn = items.filter((x) => isHandsOn(x.myRole));
-    const withMother = (x: DashboardSac) => !x.sac.pulled;
+    // A sac the keeper chose to leave with the mother has no pull window to watch.
+    const withMother = (x: DashboardSac) => !x.sac.pulled && !x.sac.leftWithMother;
     const horizon = addDays(today, DASHBOARD_PULL_WINDOW_DAYS);
     // Money to-dos for owners and partners: every account loaded with a fixed number of queries.
     const views = await loadAccounts(
@@ -92,6 +93,7 @@ export class DashboardService {
           .filter((x) => x.sac.roll && x.sac.roll.status !== 'upcoming')
           .sort((a, b) => ROLL_ORDER[a.sac.roll!.status] - ROLL_ORDER[b.sac.roll!.status] || a.sac.roll!.due.localeCompare(b.sac.roll!.due)),
         pullWindows: handsOn.filter(withMother).flatMap((x) => pullWindowEvents(x, today)),
+        readings: handsOn.filter((x) => x.sac.readingAlerts.length > 0),
         termsToAccept: await termsAwaitingAcceptance(
           this.em,
           viewer.id,

@@ -11,7 +11,7 @@ import { Animal } from '../animals/animal.entity';
 @Entity({ tableName: 'projects' })
 @Index({ properties: ['owner', 'createdAt'] })
 @Check({ name: 'projects_two_animals_check', expression: 'female_id <> male_id' })
-export class Project extends BaseEntity {
+export class Project extends BaseEntity<'caretakersMayPullAndOpen'> {
   /** The keeper who runs it; also a member with role `owner`. */
   @ManyToOne(() => User, { deleteRule: 'cascade' })
   owner!: User;
@@ -40,6 +40,10 @@ export class Project extends BaseEntity {
 
   @Property({ type: 'date', nullable: true })
   closedOn?: string | null;
+
+  /** The owner lets caretakers record the pull and the opening of the project's sacs. */
+  @Property({ type: 'boolean' })
+  caretakersMayPullAndOpen: boolean = false;
 
   /** Why the project was started despite a plausibility warning. */
   @Property({ type: 'text', nullable: true })

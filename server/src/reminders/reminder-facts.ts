@@ -9,7 +9,7 @@ import { effectiveBreeding } from '../species/effective-breeding';
 import { ownBreeding } from '../species/species.mapper';
 import { Sac } from '../sacs/sac.entity';
 import { SAC_POPULATE, windowOf } from '../sacs/sac-views.service';
-import { lastRollsOf } from '../sacs/sac-queries';
+import { latestCareOf } from '../sacs/sac-queries';
 import { ReminderSettings } from './reminder-settings.entity';
 import type { AnimalFacts, Recipient, SacFacts } from './planning/reminder-plan.types';
 
@@ -45,7 +45,7 @@ export async function sacFactsOf(em: EntityManager, sacIds: string[]): Promise<S
   const projectIds = [...new Set(sacs.map((s) => s.project.id))];
   const [members, rolls] = await Promise.all([
     em.find(ProjectMember, { project: { $in: projectIds }, role: { $in: ['owner', 'caretaker'] }, user: { $ne: null } }, { populate: ['user'] }),
-    lastRollsOf(
+    latestCareOf(
       em,
       sacs.map((s) => s.id),
     ),
@@ -62,7 +62,7 @@ export async function sacFactsOf(em: EntityManager, sacIds: string[]): Promise<S
     rollIntervalHours: s.rollIntervalHours,
     rollingOff: s.rollingOff,
     stage: s.broodStage,
-    lastRollAt: rolls.get(s.id) ?? null,
+    lastRollAt: rolls.get(s.id)?.lastRollAt ?? null,
     // Sacs carry no target band yet; the planner reminds a reading outside one once they do.
     latestReading: null,
     band: null,

@@ -10,6 +10,7 @@ import { BroodCount } from './brood-count.entity';
 import { SacOpening } from './sac-opening.entity';
 import type { Sac } from './sac.entity';
 import { SacsService } from './sacs.service';
+import { CareLogService } from './care-log.service';
 import { Clock } from '../common/clock';
 import { assertNotFuture } from './sac-rules';
 import { fieldError } from '../common/field-errors';
@@ -29,6 +30,7 @@ export class BroodCountsService {
     private readonly sacs: SacsService,
     private readonly activity: ActivityService,
     private readonly clock: Clock,
+    private readonly careLog: CareLogService,
   ) {}
 
   /** Oldest first, struck counts included (flagged); `current` is the latest count not struck. */
@@ -77,6 +79,7 @@ export class BroodCountsService {
         warningReason,
         recordedBy: tx.getReference(User, viewer.id),
       });
+      await this.careLog.stageFromCount(tx, sac, dto.stage, at, viewer.id);
       this.activity.record(tx, {
         projectId: access.project.id,
         actorId: viewer.id,

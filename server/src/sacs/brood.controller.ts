@@ -25,8 +25,9 @@ export class BroodController {
     return this.openings.get(a, id);
   }
 
+  /** Caretakers reach the service, which refuses them unless the project allows it. */
   @Post('opening')
-  @ProjectRoles('owner')
+  @ProjectRoles('owner', 'caretaker')
   @ProjectFrom('sac')
   open(
     @CurrentProject() a: ProjectAccess,
@@ -38,7 +39,7 @@ export class BroodController {
   }
 
   @Post('opening/photos')
-  @ProjectRoles('owner')
+  @ProjectRoles('owner', 'caretaker')
   @ProjectFrom('sac')
   @PhotoUploadLimit()
   @UseInterceptors(ImageUploadInterceptor)

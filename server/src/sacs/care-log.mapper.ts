@@ -1,8 +1,9 @@
-import type { CareLogEntryResponse } from '@broodsilk/shared';
+import type { CareLogEntryResponse, SacResponse } from '@broodsilk/shared';
 import type { SacLogEntry } from './sac-log-entry.entity';
+import { readingSide } from './sac-band';
 
-/** Needs `author` loaded; `struckBy` is the strike entry that corrects this one, if any. */
-export function toCareLogResponse(e: SacLogEntry, struckBy: SacLogEntry | undefined): CareLogEntryResponse {
+/** Needs `author` loaded; `struckBy` is the strike entry that corrects this one, if any; `band` the sac's band in force. */
+export function toCareLogResponse(e: SacLogEntry, struckBy: SacLogEntry | undefined, band: SacResponse['band']): CareLogEntryResponse {
   return {
     id: e.id,
     sacId: e.sac.id,
@@ -12,6 +13,7 @@ export function toCareLogResponse(e: SacLogEntry, struckBy: SacLogEntry | undefi
     temperatureC: e.temperatureC ?? null,
     entered: e.enteredValue != null && e.enteredUnit ? { value: e.enteredValue, unit: e.enteredUnit } : null,
     humidityPercent: e.humidityPercent ?? null,
+    outsideBand: readingSide(band, e),
     stage: e.stage ?? null,
     text: e.text ?? null,
     strikes: e.strikes?.id ?? null,

@@ -1,6 +1,6 @@
 import { BadRequestException, ConflictException, Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
-import { todayIn, type CareLogEntryResponse } from '@broodsilk/shared';
+import { isBroodStageAtLeast, todayIn, type CareLogEntryResponse } from '@broodsilk/shared';
 import type { AuthUser } from '../common/auth-user';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { ActivityService } from '../activity/activity.service';
@@ -13,6 +13,7 @@ import { assertNotFuture } from './sac-rules';
 import { fieldError } from '../common/field-errors';
 import { assertStageMove, entryValues } from './care-log-rules';
 import { careLogSummary, toCareLogResponse } from './care-log.mapper';
+import { bandOf } from './sac-band';
 import type { CareLogEntryDto } from './dto/care-log-entry.dto';
 
 @Injectable()
@@ -29,7 +30,8 @@ export class CareLogService {
     const sac = await this.sacs.find(access, sacId);
     const entries = await this.em.find(SacLogEntry, { sac }, { populate: ['author'], orderBy: { at: 'desc', createdAt: 'desc' } });
     const struckBy = new Map(entries.filter((e) => e.strikes).map((e) => [e.strikes!.id, e]));
-    return entries.map((e) => toCareLogResponse(e, struckBy.get(e.id)));
+    const band = bandOf(sac);
+    return entries.map((e) => toCareLogResponse(e, struckBy.get(e.id), band));
   }
 
   async add(access: ProjectAccess, viewer: AuthUser, sacId: string, dto: CareLogEntryDto): Promise<CareLogEntryResponse> {
@@ -69,8 +71,8 @@ export class CareLogService {
       });
       return entry.id;
     });
-    const saved = await this.em.findOneOrFail(SacLogEntry, id, { populate: ['author'] });
-    return toCareLogResponse(saved, undefined);
+    const saved = await this.em.findOneOrFail(SacLogEntry, id, { populate: ['author', 'sac'] });
+    return toCareLogResponse(saved, undefined, bandOf(saved.sac));
   }
 
   private async strikeTarget(tx: EntityManager, sac: Sac, dto: CareLogEntryDto): Promise<SacLogEntry> {
@@ -90,6 +92,17 @@ export class CareLogService {
         details: [{ field: 'kind', message: 'No rolls for a sac left with the mother.' }],
       });
     if (at < sac.pulledAt) throw fieldError('at', `A roll cannot come before the pull (${sac.pulledAt.toISOString()}).`);
+  }
+
+  /**
+   * A count at a later stage than the sac's moves the sac's stage with a stage entry at the count's
+   * instant: the brood stage stays one fact, whichever screen names it (incubator, count form).
+   */
+  async stageFromCount(tx: EntityManager, sac: Sac, stage: Sac['broodStage'], at: Date, viewerId: string): Promise<void> {
+    if (!isBroodStageAtLeast(stage, sac.broodStage) || stage === sac.broodStage) return;
+    tx.create(SacLogEntry, { sac, kind: 'stage', at, author: tx.getReference(User, viewerId), stage, text: 'Stage named with a brood count.' });
+    await tx.flush();
+    sac.broodStage = await this.stageFromLog(tx, sac);
   }
 
   /** The brood stage is the latest stage entry not struck (eggs when there is none). */

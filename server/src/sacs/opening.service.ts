@@ -56,6 +56,7 @@ export class OpeningService {
 
   /** Records the opening and starts the brood with its first count (the viable young), in one transaction. */
   async open(access: ProjectAccess, viewer: AuthUser, sacId: string, dto: OpeningDto): Promise<OpeningResponse> {
+    this.sacs.assertMayPullAndOpen(access);
     const now = this.clock.now();
     const given = dto.openedAt ? new Date(dto.openedAt) : null;
     if (given) assertNotFuture('openedAt', 'opening time', given, now);
@@ -168,6 +169,7 @@ export class OpeningService {
   }
 
   async addPhoto(access: ProjectAccess, viewer: AuthUser, sacId: string, file: { buffer?: Buffer } | undefined): Promise<PhotoRef> {
+    this.sacs.assertMayPullAndOpen(access);
     const sac = await this.sacs.find(access, sacId);
     const [o] = await this.versions(this.em, sac);
     if (!o) throw new NotFoundException({ message: 'Record the opening first; its photos belong to it.' });

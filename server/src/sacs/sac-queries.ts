@@ -8,20 +8,38 @@ const marks = (ids: string[]) => `(${ids.map(() => '?').join(', ')})`;
  * Raw SQL because "latest row per sac" is one DISTINCT ON in PostgreSQL.
  */
 
-/** The last roll per sac that still counts: not struck, and not before the pull. */
-export async function lastRollsOf(em: EntityManager, sacIds: string[]): Promise<Map<string, Date>> {
+export interface LatestCare {
+  /** The last roll that still counts: not struck, and not before the pull. */
+  lastRollAt?: Date;
+  /** The latest readings not struck. */
+  temperature?: { value: number; at: Date };
+  humidity?: { value: number; at: Date };
+}
+
+/** The latest roll, temperature and humidity entry per sac, in one statement (the dashboard counts them). */
+export async function latestCareOf(em: EntityManager, sacIds: string[]): Promise<Map<string, LatestCare>> {
   if (!sacIds.length) return new Map();
-  const rows = await em.getConnection().execute<{ sac_id: string; at: Date }[]>(
-    `select distinct on (e.sac_id) e.sac_id, e.at
+  const rows = await em.getConnection().execute<{ sac_id: string; kind: string; at: Date; temperature_c: number | null; humidity_percent: number | null }[]>(
+    `select distinct on (e.sac_id, e.kind) e.sac_id, e.kind, e.at, e.temperature_c, e.humidity_percent
        from sac_log_entries e join sacs s on s.id = e.sac_id
-      where e.sac_id in ${marks(sacIds)} and e.kind = 'roll' and s.pulled_at is not null and e.at >= s.pulled_at
+      where e.sac_id in ${marks(sacIds)} and e.kind in ('roll', 'temperature', 'humidity')
+        and (e.kind <> 'roll' or (s.pulled_at is not null and e.at >= s.pulled_at))
         and not exists (select 1 from sac_log_entries k where k.strikes_id = e.id)
-      order by e.sac_id, e.at desc, e.created_at desc`,
+      order by e.sac_id, e.kind, e.at desc, e.created_at desc`,
     sacIds,
     'all',
     em.getTransactionContext(), // inside a transaction, see its own writes (the reminder planner re-plans before commit)
   );
-  return new Map(rows.map((r) => [r.sac_id, new Date(r.at)]));
+  const out = new Map<string, LatestCare>();
+  for (const r of rows) {
+    const care = out.get(r.sac_id) ?? {};
+    const at = new Date(r.at);
+    if (r.kind === 'roll') care.lastRollAt = at;
+    if (r.kind === 'temperature' && r.temperature_c != null) care.temperature = { value: Number(r.temperature_c), at };
+    if (r.kind === 'humidity' && r.humidity_percent != null) care.humidity = { value: Number(r.humidity_percent), at };
+    out.set(r.sac_id, care);
+  }
+  return out;
 }
 
 /** SQL condition: the brood count `c` was not corrected by a later one. */

@@ -1,4 +1,4 @@
-import { LOG_FUTURE_TOLERANCE_MS, assertPullWindow, todayIn } from '@broodsilk/shared';
+import { LOG_FUTURE_TOLERANCE_MS, assertPullWindow, bandProblem, todayIn, type Range } from '@broodsilk/shared';
 import { fieldError } from '../common/field-errors';
 
 /** An instant may be up to a minute ahead of the server's clock (phones and servers disagree a little). */
@@ -34,4 +34,22 @@ export function assertSacDates(s: SacDates, timeZone: string, now: Date): void {
       throw fieldError('pullToDay', (e as Error).message);
     }
   }
+}
+
+export interface SacChoices {
+  pulledAt: Date | null;
+  leftWithMother: boolean;
+  temperatureBand: Range | null;
+  humidityBand: Range | null;
+}
+
+/** A sac is either pulled or left with the mother; each band is one the readings could hold. */
+export function assertSacChoices(c: SacChoices): void {
+  if (c.leftWithMother && c.pulledAt) {
+    throw fieldError('leftWithMother', 'This sac is recorded as pulled; remove the pull first if it went back to the mother.');
+  }
+  const t = c.temperatureBand && bandProblem('temperature', c.temperatureBand);
+  if (t) throw fieldError('temperatureBand', t);
+  const h = c.humidityBand && bandProblem('humidity', c.humidityBand);
+  if (h) throw fieldError('humidityBand', h);
 }

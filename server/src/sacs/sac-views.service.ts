@@ -1,10 +1,10 @@
 import { Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
-import { todayIn, type SacResponse } from '@broodsilk/shared';
+import { todayIn, type ProjectRole, type SacResponse } from '@broodsilk/shared';
 import { effectiveBreeding } from '../species/effective-breeding';
 import { ownBreeding } from '../species/species.mapper';
 import type { Sac } from './sac.entity';
-import { lastRollsOf, latestCountsOf, openedSacsOf } from './sac-queries';
+import { latestCountsOf, latestCareOf, openedSacsOf } from './sac-queries';
 import { toSacResponse, type PullWindowInForce } from './sacs.mapper';
 import { Clock } from '../common/clock';
 
@@ -16,6 +16,8 @@ export function windowOf(sac: Sac): PullWindowInForce {
   return { fromDay: w.value.fromDay, toDay: w.value.toDay, origin: w.from === 'species' ? 'species' : 'default' };
 }
 
+const READ_ONLY = (): ProjectRole => 'partner';
+
 export const SAC_POPULATE = ['project.female.species'] as const;
 
 /** Builds sac responses for one viewer, many sacs at once (a few queries, not a few per sac). */
@@ -23,16 +25,24 @@ export const SAC_POPULATE = ['project.female.species'] as const;
 export class SacViewsService {
   constructor(private readonly clock: Clock) {}
 
-  async build(em: EntityManager, sacs: Sac[], timeZone: string, now = this.clock.now()): Promise<SacResponse[]> {
+  /** `roleOf` gives the viewer's role per project for `may`; without it the viewer may only read. */
+  async build(
+    em: EntityManager,
+    sacs: Sac[],
+    timeZone: string,
+    now = this.clock.now(),
+    roleOf: (projectId: string) => ProjectRole = READ_ONLY,
+  ): Promise<SacResponse[]> {
     const ids = sacs.map((s) => s.id);
-    const [rolls, counts, opened] = await Promise.all([lastRollsOf(em, ids), latestCountsOf(em, ids), openedSacsOf(em, ids)]);
+    const [care, counts, opened] = await Promise.all([latestCareOf(em, ids), latestCountsOf(em, ids), openedSacsOf(em, ids)]);
     const today = todayIn(timeZone, now);
     return sacs.map((s) =>
       toSacResponse(s, {
         today,
         now,
         window: windowOf(s),
-        lastRollAt: rolls.get(s.id) ?? null,
+        care: care.get(s.id) ?? {},
+        role: roleOf(s.project.id),
         opened: opened.has(s.id),
         currentCount: counts.get(s.id)?.alive ?? null,
         currentCountEstimated: counts.get(s.id)?.estimated ?? false,
@@ -40,7 +50,7 @@ export class SacViewsService {
     );
   }
 
-  async one(em: EntityManager, sac: Sac, timeZone: string): Promise<SacResponse> {
-    return (await this.build(em, [sac], timeZone))[0];
+  async one(em: EntityManager, sac: Sac, timeZone: string, role: ProjectRole): Promise<SacResponse> {
+    return (await this.build(em, [sac], timeZone, this.clock.now(), () => role))[0];
   }
 }

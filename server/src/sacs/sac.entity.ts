@@ -7,7 +7,7 @@ import { Project } from '../projects/project.entity';
 /** One egg sac of a project, from its lay date to the end of incubation. */
 @Entity({ tableName: 'sacs' })
 @Index({ properties: ['project', 'layDate'] })
-export class Sac extends BaseEntity<'outcome' | 'rollIntervalHours' | 'rollingOff' | 'broodStage'> {
+export class Sac extends BaseEntity<'outcome' | 'rollIntervalHours' | 'rollingOff' | 'broodStage' | 'leftWithMother' | 'rollPastLegs'> {
   @ManyToOne(() => Project, { deleteRule: 'cascade' })
   project!: Project;
 
@@ -41,6 +41,31 @@ export class Sac extends BaseEntity<'outcome' | 'rollIntervalHours' | 'rollingOf
 
   @Property({ type: 'boolean' })
   rollingOff: boolean = false;
+
+  /** The keeper left the sac with the mother on purpose (never set together with a pull). */
+  @Property({ type: 'boolean' })
+  leftWithMother: boolean = false;
+
+  /** Keep rolling after the legs have formed (the default stops there, docs/trade-facts.md §4). */
+  @Property({ type: 'boolean' })
+  rollPastLegs: boolean = false;
+
+  /** The incubator or container, in the keeper's words. */
+  @Property({ type: 'text', nullable: true })
+  container?: string | null;
+
+  /** The sac's own target band; each pair both or neither (neither: the default band). */
+  @Property({ type: 'double', nullable: true })
+  bandTemperatureMinC?: number | null;
+
+  @Property({ type: 'double', nullable: true })
+  bandTemperatureMaxC?: number | null;
+
+  @Property({ type: 'double', nullable: true })
+  bandHumidityMin?: number | null;
+
+  @Property({ type: 'double', nullable: true })
+  bandHumidityMax?: number | null;
 
   /** Follows the care log's stage entries (the latest one not struck); `eggs` until then. */
   @Enum({ items: [...BROOD_STAGES], nativeEnumName: 'brood_stage' })

@@ -1,5 +1,20 @@
-import { INCUBATOR_CAUTION, dayNumber, pullWindowView, rollState, type PullWindowOrigin, type SacFact, type SacResponse } from '@broodsilk/shared';
+import {
+  INCUBATOR_CAUTION,
+  dayNumber,
+  outsideRange,
+  pullWindowView,
+  rollState,
+  rollingStopsAt,
+  sacPermissions,
+  type ProjectRole,
+  type PullWindowOrigin,
+  type ReadingAlert,
+  type SacFact,
+  type SacResponse,
+} from '@broodsilk/shared';
 import type { Sac } from './sac.entity';
+import type { LatestCare } from './sac-queries';
+import { bandOf } from './sac-band';
 
 export interface PullWindowInForce {
   fromDay: number;
@@ -12,7 +27,8 @@ export interface SacViewContext {
   today: string;
   now: Date;
   window: PullWindowInForce;
-  lastRollAt: Date | null;
+  care: LatestCare;
+  role: ProjectRole;
   opened: boolean;
   currentCount: number | null;
   currentCountEstimated: boolean;
@@ -25,6 +41,7 @@ export function rollOf(sac: Sac, now: Date, lastRollAt: Date | null): SacRespons
     pulled,
     stage: sac.broodStage,
     rollingOff: sac.rollingOff,
+    rollPastLegs: sac.rollPastLegs,
     pulledAt: sac.pulledAt ?? now,
     lastRollAt,
     intervalHours: sac.rollIntervalHours,
@@ -33,8 +50,23 @@ export function rollOf(sac: Sac, now: Date, lastRollAt: Date | null): SacRespons
   return state ? { due: state.due.toISOString(), status: state.status, lastRollAt: lastRollAt?.toISOString() ?? null } : null;
 }
 
+/** The latest temperature and humidity readings that lie outside the band. */
+function readingAlerts(band: SacResponse['band'], care: LatestCare): ReadingAlert[] {
+  const alerts: ReadingAlert[] = [];
+  for (const [kind, reading, range] of [
+    ['temperature', care.temperature, band.temperatureC],
+    ['humidity', care.humidity, band.humidityPercent],
+  ] as const) {
+    const side = reading ? outsideRange(reading.value, range) : null;
+    if (reading && side) alerts.push({ kind, value: reading.value, at: reading.at.toISOString(), side });
+  }
+  return alerts;
+}
+
 export function toSacResponse(sac: Sac, c: SacViewContext): SacResponse {
   const view = pullWindowView(sac.layDate, c.today, c.window);
+  const band = bandOf(sac);
+  const inIncubator = !!sac.pulledAt && sac.outcome === 'in-progress';
   return {
     id: sac.id,
     projectId: sac.project.id,
@@ -50,7 +82,16 @@ export function toSacResponse(sac: Sac, c: SacViewContext): SacResponse {
     rollIntervalHours: sac.rollIntervalHours,
     rollingOff: sac.rollingOff,
     // An opened sac is not rolled: its eggs are counted, and any kept back are a batch with its own log.
-    roll: c.opened ? null : rollOf(sac, c.now, c.lastRollAt),
+    roll: c.opened ? null : rollOf(sac, c.now, c.care.lastRollAt ?? null),
+    leftWithMother: sac.leftWithMother,
+    rollPastLegs: sac.rollPastLegs,
+    rollingStopsAt: rollingStopsAt(sac.rollPastLegs),
+    container: sac.container ?? null,
+    band,
+    readingAlerts: inIncubator ? readingAlerts(band, c.care) : [],
+    inIncubator,
+    may: sacPermissions(c.role, sac.project.caretakersMayPullAndOpen),
+    caretakersMayPullAndOpen: sac.project.caretakersMayPullAndOpen,
     broodStage: sac.broodStage,
     opened: c.opened,
     currentCount: c.currentCount,

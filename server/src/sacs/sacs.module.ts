@@ -11,7 +11,7 @@ import { BroodCount } from './brood-count.entity';
 import { SacViewsService } from './sac-views.service';
 import { SacsService } from './sacs.service';
 import { BroodService } from './brood.service';
-import { ProjectSacsController, SacsController } from './sacs.controller';
+import { IncubatorRightsController, ProjectSacsController, SacsController } from './sacs.controller';
 import { toSacFact } from './sacs.mapper';
 import { CareLogService } from './care-log.service';
 import { CareLogController } from './care-log.controller';
@@ -35,7 +35,7 @@ const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
     ActivityModule,
     PhotosModule,
   ],
-  controllers: [ProjectSacsController, SacsController, CareLogController, BroodController, KeptBackController],
+  controllers: [ProjectSacsController, IncubatorRightsController, SacsController, CareLogController, BroodController, KeptBackController],
   providers: [SacViewsService, SacsService, BroodService, CareLogService, OpeningService, BroodCountsService, KeptBackService],
   exports: [SacViewsService, SacsService, BroodService],
 })

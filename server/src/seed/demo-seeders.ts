@@ -5,7 +5,16 @@ import { seedSacs } from './sacs.seeder';
 import { seedAccounts } from './accounts.seeder';
 import { seedKeptBack } from './kept-back.seeder';
 import { seedUnhappySeason } from './unhappy-season.seeder';
+import { seedMotherKeptBrood } from './mother-kept-brood.seeder';
 
 /** The scenario's parts, in dependency order; each feature adds its seeder here. */
-// seedAccounts stays last: it reads the counted broods the sacs seeder lays.
-export const DEMO_SEEDERS: FeatureSeeder[] = [seedCollection, seedProjects, seedSacs, seedKeptBack, seedUnhappySeason, seedAccounts];
+// seedAccounts reads the counted broods the sacs seeders lay; the mother-kept brood brings its own terms.
+export const DEMO_SEEDERS: FeatureSeeder[] = [
+  seedCollection,
+  seedProjects,
+  seedSacs,
+  seedKeptBack,
+  seedUnhappySeason,
+  seedAccounts,
+  seedMotherKeptBrood,
+];

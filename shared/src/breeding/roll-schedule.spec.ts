@@ -81,11 +81,17 @@ describe('roll status', () => {
 });
 
 describe('rolling applies', () => {
-  it('applies to a pulled sac until first instar or until turned off', () => {
+  // docs/trade-facts.md §4: rolled about every 12 hours "until the legs have formed, then left alone" (from memory).
+  it('applies to a pulled sac until the legs have formed, by default', () => {
     expect(rollingApplies({ pulled: true })).toBe(true);
     expect(rollingApplies({ pulled: true, stage: 'eggs' })).toBe(true);
-    expect(rollingApplies({ pulled: true, stage: 'eggs-with-legs' })).toBe(true);
+    expect(rollingApplies({ pulled: true, stage: 'eggs-with-legs' })).toBe(false);
     expect(rollingApplies({ pulled: true, stage: 'first-instar' })).toBe(false);
+  });
+
+  it('keeps applying until first instar when the keeper chooses to keep rolling, or until turned off', () => {
+    expect(rollingApplies({ pulled: true, stage: 'eggs-with-legs', rollPastLegs: true })).toBe(true);
+    expect(rollingApplies({ pulled: true, stage: 'first-instar', rollPastLegs: true })).toBe(false);
     expect(rollingApplies({ pulled: true, stage: 'second-instar' })).toBe(false);
     expect(rollingApplies({ pulled: true, stage: 'eggs', rollingOff: true })).toBe(false);
   });

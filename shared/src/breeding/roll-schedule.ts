@@ -66,12 +66,23 @@ export interface RollingFacts {
   stage?: BroodStage | null;
   /** The keeper has turned rolling off for this sac. */
   rollingOff?: boolean;
+  /** The keeper keeps rolling after the legs have formed (until first instar). */
+  rollPastLegs?: boolean;
 }
 
-/** Rolling applies to a pulled sac until the brood reaches first instar or the keeper turns it off. */
-export function rollingApplies({ pulled, stage, rollingOff }: RollingFacts): boolean {
+/**
+ * Rolling applies to a pulled sac until the legs have formed (docs/trade-facts.md §4: rolled "until
+ * the legs have formed, then left alone"), or until first instar where the keeper chose to keep
+ * rolling, and never once the keeper turns it off.
+ */
+export function rollingApplies({ pulled, stage, rollingOff, rollPastLegs }: RollingFacts): boolean {
   if (!pulled || rollingOff) return false;
-  return !stage || !isBroodStageAtLeast(stage, 'first-instar');
+  return !stage || !isBroodStageAtLeast(stage, rollingStopsAt(rollPastLegs));
+}
+
+/** The stage at which rolling stops: eggs with legs by default, first instar when the keeper keeps rolling. */
+export function rollingStopsAt(rollPastLegs = false): BroodStage {
+  return rollPastLegs ? 'first-instar' : 'eggs-with-legs';
 }
 
 export interface RollState {

@@ -54,6 +54,8 @@ export interface DashboardResponse {
     rolls: DashboardSac[];
     /** Sacs still with the mother whose pull window is open: opens today, closes today, or open (owner or caretaker). */
     pullWindows: (DashboardSac & { event: PullWindowEvent })[];
+    /** Sacs in an incubator whose latest temperature or humidity lies outside their band (owner or caretaker). */
+    readings: DashboardSac[];
     termsToAccept: TermsTodo[];
     handOversToConfirm: HandOverTodo[];
     payments: PaymentTodo[];

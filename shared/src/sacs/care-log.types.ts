@@ -37,6 +37,8 @@ export interface CareLogEntryResponse {
   humidityPercent: number | null;
   stage: BroodStage | null;
   text: string | null;
+  /** A temperature or humidity reading outside the sac's band in force: which side; null inside or for other kinds. */
+  outsideBand: 'below' | 'above' | null;
   /** For a strike: the entry it strikes. */
   strikes: string | null;
   /** Set when a later strike entry corrected this one; the entry stays visible. */

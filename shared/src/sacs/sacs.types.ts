@@ -3,6 +3,7 @@ import type { CalendarDate } from '../breeding/calendar-day.js';
 import type { BroodStage } from '../breeding/brood-stage.js';
 import type { PullWindowView } from '../breeding/pull-window.js';
 import type { RollStatus } from '../breeding/roll-schedule.js';
+import type { BandSide, IncubationBand, Range } from './incubation-band.js';
 
 /**
  * How a sac ended up; `failed` carries a reason. `emerged`: the young are out of the sac. (Not "hatched":
@@ -37,6 +38,31 @@ export interface CreateSacRequest extends AcknowledgedWarnings {
   rollIntervalHours?: number;
   rollingOff?: boolean;
   notes?: string | null;
+  /** The keeper leaves the sac with the mother on purpose: no pull window warnings; opened or emerged there. */
+  leftWithMother?: boolean;
+  /** Keep rolling after the legs have formed, until first instar. */
+  rollPastLegs?: boolean;
+  /** The incubator or container the sac sits in, in the keeper's words. */
+  container?: string | null;
+  /** The sac's own target band (°C); null falls back to the default band. */
+  temperatureBand?: Range | null;
+  /** The sac's own target band (% relative humidity); null falls back to the default band. */
+  humidityBand?: Range | null;
+}
+
+/** Records the pull (now, or at an earlier instant); owner, or caretaker where the project allows it. */
+export interface PullSacRequest {
+  pulledAt?: string;
+}
+
+/** The project's switch: may caretakers record the pull and the opening? Owner only. */
+export interface IncubatorRightsRequest {
+  caretakersMayPullAndOpen: boolean;
+}
+
+export interface IncubatorRightsResponse {
+  projectId: string;
+  caretakersMayPullAndOpen: boolean;
 }
 
 export interface UpdateSacRequest {
@@ -51,6 +77,32 @@ export interface UpdateSacRequest {
   rollIntervalHours?: number;
   rollingOff?: boolean;
   notes?: string | null;
+  leftWithMother?: boolean;
+  rollPastLegs?: boolean;
+  container?: string | null;
+  temperatureBand?: Range | null;
+  humidityBand?: Range | null;
+}
+
+/** The latest reading of a kind (not struck) when it lies outside the sac's band. */
+export interface ReadingAlert {
+  kind: 'temperature' | 'humidity';
+  /** °C or % relative humidity. */
+  value: number;
+  at: string;
+  side: BandSide;
+}
+
+/** What the viewer may do with this sac; the interface offers nothing else. */
+export interface SacPermissions {
+  /** Change the sac's settings, outcome and choices (owner). */
+  edit: boolean;
+  /** Record the pull and the opening (owner; caretakers where the project allows it). */
+  pullAndOpen: boolean;
+  /** Add care log entries and brood counts (owner, caretakers). */
+  log: boolean;
+  /** Set the project's switch for caretakers (owner). */
+  setIncubatorRights: boolean;
 }
 
 /** Where the pull window in force comes from. */
@@ -81,7 +133,23 @@ export interface SacResponse {
   pullWindow: PullWindowView & { fromDay: number; toDay: number; origin: PullWindowOrigin };
   rollIntervalHours: number;
   rollingOff: boolean;
-  /** Null when rolling does not apply (left with the mother, first instar reached, or turned off). */
+  /** Left with the mother by the keeper's choice (not pulled; no pull window warnings). */
+  leftWithMother: boolean;
+  /** Rolling goes on past eggs with legs, until first instar. */
+  rollPastLegs: boolean;
+  /** The stage at which rolling stops for this sac. */
+  rollingStopsAt: BroodStage;
+  container: string | null;
+  /** The band in force; `origin` says whether the sac set it or the default applies (with its source). */
+  band: IncubationBand & { origin: 'sac' | 'default'; source: string };
+  /** The latest temperature and humidity readings that lie outside the band. */
+  readingAlerts: ReadingAlert[];
+  /** True while the sac sits in an incubator: pulled and neither failed nor emerged. */
+  inIncubator: boolean;
+  may: SacPermissions;
+  /** The project's switch (see IncubatorRightsRequest). */
+  caretakersMayPullAndOpen: boolean;
+  /** Null when rolling does not apply (left with the mother, the legs formed, or turned off). */
   roll: SacRollView | null;
   broodStage: BroodStage;
   opened: boolean;

@@ -43,7 +43,7 @@ export function Component() {
       ) : dashboard.isError ? (
         <Alert color="clay">{dashboard.error.message}</Alert>
       ) : (
-        <DashboardView data={dashboard.data} timeZone={me.timeZone} />
+        <DashboardView data={dashboard.data} timeZone={me.timeZone} temperatureUnit={me.temperatureUnit} />
       )}
       <CalendarFeedCard />
     </Stack>

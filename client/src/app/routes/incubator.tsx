@@ -26,8 +26,13 @@ export function Component() {
   if (projects.isError) return <Alert color="clay">{projects.error.message}</Alert>;
   return (
     <Stack maw={520} mx="auto">
-      <PageHeader title="Incubator" description="Tap a sac to log a roll, a reading or a check." />
-      <IncubatorList projects={incubatorProjects(projects.data)} timeZone={me.timeZone} hrefFor={paths.incubatorSac.href} />
+      <PageHeader title="Incubator" description="Every sac in an incubator. Tap one to log a roll, a reading or a check." />
+      <IncubatorList
+        projects={incubatorProjects(projects.data)}
+        timeZone={me.timeZone}
+        temperatureUnit={me.temperatureUnit}
+        hrefFor={paths.incubatorSac.href}
+      />
     </Stack>
   );
 }

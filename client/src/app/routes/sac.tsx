@@ -1,6 +1,5 @@
 import { Alert, Anchor, Button, Group, Stack } from '@mantine/core';
 import type { QueryClient } from '@tanstack/react-query';
-import { isHandsOn } from '@broodsilk/shared';
 import { Link, type LoaderFunctionArgs } from 'react-router';
 import { PageHeader } from '@/components/ui/page-header';
 import { PageLoader } from '@/components/ui/page-loader';
@@ -17,6 +16,7 @@ import { OpeningPanel } from '@/features/sacs/components/opening-panel';
 import { KeptBackPanel } from '@/features/sacs/components/kept-back-panel';
 import { useOpening } from '@/features/sacs/api/opening';
 import { SacOverview } from '@/features/sacs/components/sac-overview';
+import { IncubatorRightsSwitch, SacSettingsForm } from '@/features/sacs/components/sac-settings-form';
 import { SectionCard } from '@/components/ui/section-card';
 import { preloadPanels } from '../preload';
 import { useSacPage } from './use-sac-page';
@@ -45,8 +45,8 @@ export function Component() {
   if (!me || sac.isPending) return <PageLoader />;
   if (sac.isError) return <Alert color="clay">{sac.error.message}</Alert>;
   const s = sac.data;
-  const role = project.data?.myRole;
-  const isOwner = role === 'owner';
+  // A sac left with the mother is opened (or counted at emergence) where it lies, like a pulled one.
+  const openable = s.pulled || s.leftWithMother || s.outcome === 'emerged';
 
   return (
     <Stack>
@@ -55,7 +55,7 @@ export function Component() {
         description={project.data ? `${project.data.title} · ${project.data.femaleAnimal.label} × ${project.data.maleAnimal.label}` : undefined}
         actions={
           <Group>
-            {s.roll && (
+            {s.inIncubator && (
               <Button component={Link} to={paths.incubatorSac.href(s.id)}>
                 Incubator screen
               </Button>
@@ -66,23 +66,31 @@ export function Component() {
           </Group>
         }
       />
-      <SacOverview sac={s} timeZone={me.timeZone} canEdit={isOwner} />
+      <SacOverview sac={s} timeZone={me.timeZone} temperatureUnit={me.temperatureUnit} />
       <SectionCard title="Care log">
-        <CareLogList sacId={s.id} timeZone={me.timeZone} temperatureUnit={me.temperatureUnit} canStrike={!!role && isHandsOn(role)} />
+        <CareLogList sacId={s.id} timeZone={me.timeZone} temperatureUnit={me.temperatureUnit} canStrike={s.may.log} />
       </SectionCard>
-      {s.pulled && (
+      {openable && (
         <SectionCard title="Opening">
-          <OpeningPanel sac={s} timeZone={me.timeZone} canEdit={isOwner} />
+          <OpeningPanel sac={s} timeZone={me.timeZone} canEdit={s.may.pullAndOpen} />
         </SectionCard>
       )}
       {(opening.data?.keptBack ?? 0) > 0 && (
         <SectionCard title="Eggs kept back" testId="kept-back-card">
-          <KeptBackPanel sacId={s.id} timeZone={me.timeZone} canLog={!!role && isHandsOn(role)} canEnd={isOwner} />
+          <KeptBackPanel sacId={s.id} timeZone={me.timeZone} canLog={s.may.log} canEnd={s.may.edit} />
         </SectionCard>
       )}
       {s.opened && (
         <SectionCard title="Brood">
-          <BroodCounts sacId={s.id} timeZone={me.timeZone} canRecord={!!role && isHandsOn(role)} stage={s.broodStage} />
+          <BroodCounts sacId={s.id} timeZone={me.timeZone} canRecord={s.may.log} stage={s.broodStage} />
+        </SectionCard>
+      )}
+      {s.may.edit && (
+        <SectionCard title="Incubation settings">
+          <Stack>
+            <SacSettingsForm sac={s} temperatureUnit={me.temperatureUnit} />
+            {s.may.setIncubatorRights && <IncubatorRightsSwitch sac={s} />}
+          </Stack>
         </SectionCard>
       )}
     </Stack>

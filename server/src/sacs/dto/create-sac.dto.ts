@@ -1,11 +1,23 @@
-import { IsBoolean, IsInt, IsOptional, IsString, Max, MaxLength, Min, ValidateIf } from 'class-validator';
-import { PULL_DAY_MAX, ROLL_INTERVAL_LIMITS, type CreateSacRequest } from '@broodsilk/shared';
+import { Type } from 'class-transformer';
+import { IsBoolean, IsDefined, IsInt, IsNumber, IsOptional, IsString, Max, MaxLength, Min, ValidateIf, ValidateNested } from 'class-validator';
+import { PULL_DAY_MAX, ROLL_INTERVAL_LIMITS, TEXT_LIMITS, type CreateSacRequest, type Range } from '@broodsilk/shared';
 import { IsCalendarDate } from '../../common/validators/is-calendar-date.validator';
 import { IsInstant } from '../../common/validators/is-instant.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 import { AcknowledgedWarningsDto } from '../../plausibility/acknowledged-warnings.dto';
 
 const dayRule = (what: string) => ({ message: `The ${what} must be a whole day number from 0 to ${PULL_DAY_MAX}.` });
+
+/** A band's two ends; whether they make a band is checked by the shared `bandProblem`. */
+export class RangeDto implements Range {
+  @IsDefined({ message: 'Give the lowest value of the band.' })
+  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'The lowest value of the band must be a number.' })
+  min!: number;
+
+  @IsDefined({ message: 'Give the highest value of the band.' })
+  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'The highest value of the band must be a number.' })
+  max!: number;
+}
 
 export class CreateSacDto extends AcknowledgedWarningsDto implements CreateSacRequest {
   @IsCalendarDate({ message: 'The lay date must be a date written YYYY-MM-DD.' })
@@ -45,4 +57,30 @@ export class CreateSacDto extends AcknowledgedWarningsDto implements CreateSacRe
   @IsString()
   @MaxLength(2000)
   notes?: string | null;
+
+  @IsOptionalNonNull()
+  @IsBoolean({ message: 'leftWithMother must be true or false.' })
+  leftWithMother?: boolean;
+
+  @IsOptionalNonNull()
+  @IsBoolean({ message: 'rollPastLegs must be true or false.' })
+  rollPastLegs?: boolean;
+
+  @IsOptional()
+  @ValidateIf((_, v) => v !== null)
+  @IsString({ message: 'The incubator or container must be text.' })
+  @MaxLength(TEXT_LIMITS.enclosure, { message: `Name the incubator or container in at most ${TEXT_LIMITS.enclosure} characters.` })
+  container?: string | null;
+
+  @IsOptional()
+  @ValidateIf((_, v) => v !== null)
+  @ValidateNested()
+  @Type(() => RangeDto)
+  temperatureBand?: RangeDto | null;
+
+  @IsOptional()
+  @ValidateIf((_, v) => v !== null)
+  @ValidateNested()
+  @Type(() => RangeDto)
+  humidityBand?: RangeDto | null;
 }

@@ -49,6 +49,18 @@ const onSac =
 const openingSac = perRow(false);
 const endingSac = perRow(true);
 
+/** A sac still with the mother, for the pull row. */
+let unpulled: Promise<string> | null = null;
+const withMotherSac = (fx: MatrixFixture) =>
+  (unpulled ??= request(fx.app.getHttpServer())
+    .post(`/api/projects/${fx.project.id}/sacs`)
+    .set('Authorization', fx.users.owner.bearer)
+    .send({ layDate: new Date(Date.now() - 25 * 86_400_000).toISOString().slice(0, 10), ...ANY_PAIRING })
+    .then((res) => {
+      if (res.status !== 201) throw new Error(`create sac answered ${res.status}: ${JSON.stringify(res.body)}`);
+      return res.body.id as string;
+    }));
+
 export const rows: MatrixRow[] = [
   { method: 'GET', path: '/api/projects/:projectId/sacs', expect: ANY_MEMBER },
   {
@@ -59,6 +71,14 @@ export const rows: MatrixRow[] = [
   },
   { method: 'GET', path: '/api/sacs/:id', expect: ANY_MEMBER, request: onSac(sharedSac) },
   { method: 'PATCH', path: '/api/sacs/:id', expect: OWNER_ONLY, request: onSac(sharedSac, { notes: 'Matrix note' }) },
+  // Caretakers pull and open only where the owner switched that on; the matrix project has it off.
+  { method: 'POST', path: '/api/sacs/:id/pull', expect: OWNER_ONLY, request: onSac(withMotherSac, {}) },
+  {
+    method: 'PUT',
+    path: '/api/projects/:projectId/incubator-rights',
+    expect: OWNER_ONLY,
+    request: () => ({ body: { caretakersMayPullAndOpen: false } }),
+  },
   { method: 'GET', path: '/api/sacs/:id/log', expect: ANY_MEMBER, request: onSac(sharedSac) },
   { method: 'POST', path: '/api/sacs/:id/log', expect: OWNER_AND_CARETAKER, request: onSac(sharedSac, { kind: 'check', text: 'Matrix check' }) },
   { method: 'GET', path: '/api/sacs/:id/opening', expect: ANY_MEMBER, request: onSac(sharedSac) },

@@ -1,46 +1,22 @@
 import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import type { DashboardResponse, DashboardSac, RollStatus, SacResponse } from '@broodsilk/shared';
+import { PULLED_TEST_SAC } from '@/testing/sac-incubation-fields';
 import { renderWithProviders } from '@/testing/render';
 import { DashboardView } from './dashboard-view';
 
 function sac(id: string, roll: { status: RollStatus; due: string } | null, state: SacResponse['pullWindow']['state'] = 'open'): SacResponse {
   return {
+    ...PULLED_TEST_SAC,
     id,
     projectId: `p-${id}`,
-    layDate: '2026-11-01',
-    dayNumber: 30,
-    today: '2026-12-01',
     pulled: !!roll,
-    pulledAt: roll ? '2026-11-25T07:00:00Z' : null,
-    pulledOn: roll ? '2026-11-25' : null,
-    outcome: 'in-progress',
-    failureReason: null,
-    pullWindow: {
-      fromDay: 21,
-      toDay: 45,
-      origin: 'default',
-      opensOn: '2026-11-22',
-      closesOn: '2026-12-16',
-      closingFrom: '2026-12-14',
-      dayNumber: 30,
-      state,
-      daysUntilOpens: 0,
-      daysUntilCloses: 15,
-      daysPastClose: 0,
-    },
-    rollIntervalHours: 12,
-    rollingOff: false,
+    pulledAt: roll ? PULLED_TEST_SAC.pulledAt : null,
+    pulledOn: roll ? PULLED_TEST_SAC.pulledOn : null,
+    pullWindow: { ...PULLED_TEST_SAC.pullWindow, state },
     roll: roll ? { ...roll, lastRollAt: null } : null,
-    broodStage: 'eggs',
-    opened: false,
-    currentCount: null,
-    currentCountEstimated: false,
-    notes: null,
-    warningReason: null,
     incubatorCaution: null,
-    createdAt: '2026-11-01T00:00:00Z',
-    updatedAt: '2026-11-01T00:00:00Z',
+    inIncubator: !!roll,
   };
 }
 
@@ -54,6 +30,7 @@ const data: DashboardResponse = {
       item('Versicolor pair', sac('b', { status: 'due', due: '2026-12-01T10:00:00Z' })),
     ],
     pullWindows: [{ ...item('Hamorii pair', sac('c', null)), event: 'closes-today' }],
+    readings: [],
     termsToAccept: [],
     handOversToConfirm: [],
     payments: [],
@@ -88,12 +65,25 @@ describe('DashboardView', () => {
     expect(screen.queryByText('Nothing needs doing right now.')).not.toBeInTheDocument();
   });
 
-  const nothing = { rolls: [], pullWindows: [], termsToAccept: [], handOversToConfirm: [], payments: [] };
+  const nothing = { rolls: [], pullWindows: [], readings: [], termsToAccept: [], handOversToConfirm: [], payments: [] };
 
   it('says so when nothing is due', () => {
     renderWithProviders(<DashboardView data={{ ...data, dueToday: nothing }} timeZone="UTC" />);
     expect(within(screen.getByTestId('card-rolls')).getByText('No roll is due.')).toBeInTheDocument();
     expect(screen.getByText('Nothing needs doing right now.')).toBeInTheDocument();
+  });
+
+  it('shows a reading outside the band as a to-do, in the viewer’s unit', () => {
+    const hot = {
+      ...sac('h', { status: 'upcoming', due: '2026-12-01T20:00:00Z' }),
+      readingAlerts: [{ kind: 'temperature' as const, value: 30, at: '2026-12-01T06:00:00Z', side: 'above' as const }],
+    };
+    renderWithProviders(<DashboardView data={{ ...data, dueToday: { ...nothing, readings: [item('Hot pair', hot)] } }} timeZone="UTC" temperatureUnit="F" />);
+    // 30 °C = 86 °F, 24 °C = 75.2 °F, 28 °C = 82.4 °F (NIST SP 811: t/°F = 1.8·t/°C + 32); band docs/trade-facts.md §4.
+    expect(within(screen.getByTestId('card-readings')).getByTestId('reading-alert')).toHaveTextContent(
+      'Temperature 86.0 °F, above the band (75.2 °F to 82.4 °F)',
+    );
+    expect(screen.queryByText('Nothing needs doing right now.')).not.toBeInTheDocument();
   });
 
   it('names a window open now, not only one opening today', () => {

@@ -1,5 +1,5 @@
 import { queryOptions, useMutation, useQuery, useQueryClient, type QueryKey } from '@tanstack/react-query';
-import type { CreateSacRequest, SacResponse, UpdateSacRequest } from '@broodsilk/shared';
+import type { CreateSacRequest, IncubatorRightsRequest, IncubatorRightsResponse, PullSacRequest, SacResponse, UpdateSacRequest } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
 import { queryRoots } from '@/lib/query-keys';
 
@@ -57,5 +57,23 @@ export function useUpdateSac(id: string) {
     meta: { handlesErrors: true, invalidates: AFTER_SAC_CHANGE },
     // The refetch under AFTER_SAC_CHANGE has already run; the answer is the same sac.
     onSuccess: (sac) => qc.setQueryData(sacQueries.detail(id).queryKey, sac),
+  });
+}
+
+/** Records the pull (now or earlier); the answer is the sac. */
+export function usePullSac(id: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (body: PullSacRequest) => api.post<SacResponse>(`/sacs/${id}/pull`, body),
+    meta: { handlesErrors: true, invalidates: AFTER_SAC_CHANGE },
+    onSuccess: (sac) => qc.setQueryData(sacQueries.detail(id).queryKey, sac),
+  });
+}
+
+/** The owner's switch letting caretakers record the pull and the opening; every sac answer carries it. */
+export function useSetIncubatorRights(projectId: string) {
+  return useMutation({
+    mutationFn: (body: IncubatorRightsRequest) => api.put<IncubatorRightsResponse>(`/projects/${projectId}/incubator-rights`, body),
+    meta: { handlesErrors: true, invalidates: [queryRoots.sacs] },
   });
 }

@@ -174,7 +174,14 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
             <form onSubmit={submit} noValidate>
               <Stack maw={520}>
                 <SimpleGrid cols={{ base: 2, sm: 4 }}>
-                  <Select label="Stage" data={stageOptions} allowDeselect={false} key={form.key('stage')} {...form.getInputProps('stage')} />
+                  <Select
+                    label="Stage"
+                    description="The sac's stage; a later one moves it"
+                    data={stageOptions}
+                    allowDeselect={false}
+                    key={form.key('stage')}
+                    {...form.getInputProps('stage')}
+                  />
                   <NumberField label="Alive" whole key={form.key('alive')} {...form.getInputProps('alive')} />
                   <Checkbox
                     label="An estimate, not counted one by one"

@@ -7,7 +7,7 @@ import { TEXT_LIMITS, formatTemperature, type CareLogEntryResponse, type CareLog
 import { formatInstant } from '@/lib/dates';
 import { isApiError } from '@/lib/api-error';
 import { useAddCareLogEntry, useCareLog } from '../api/care-log';
-import { broodLabel } from '../utils/sac-view';
+import { bandFlag, broodLabel } from '../utils/sac-view';
 
 const KIND_LABELS: Record<CareLogKind, string> = {
   roll: 'Rolled',
@@ -126,6 +126,11 @@ export function CareLogList({
                     <Text size="sm" td={struck ? 'line-through' : undefined} c={struck ? 'dimmed' : undefined}>
                       {what(e, temperatureUnit)}
                     </Text>
+                    {bandFlag(e.outsideBand) && (
+                      <Badge size="sm" variant="light" color="clay" tt="none" data-testid="outside-band">
+                        {bandFlag(e.outsideBand)}
+                      </Badge>
+                    )}
                   </Group>
                   {e.struck && (
                     <Text size="xs" className="tone-failed">

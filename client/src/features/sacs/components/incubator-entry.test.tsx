@@ -1,49 +1,14 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { INCUBATOR_CAUTION, addDays, todayIn, type SacResponse } from '@broodsilk/shared';
+import { addDays, todayIn } from '@broodsilk/shared';
+import { PULLED_TEST_SAC } from '@/testing/sac-incubation-fields';
 import { renderWithProviders, stubFetch } from '@/testing/render';
 import { IncubatorEntry } from './incubator-entry';
 
 afterEach(() => vi.unstubAllGlobals());
 
-const sac: SacResponse = {
-  id: 's1',
-  projectId: 'p1',
-  layDate: '2026-11-01',
-  dayNumber: 30,
-  today: '2026-12-01',
-  pulled: true,
-  pulledAt: '2026-11-25T07:00:00Z',
-  pulledOn: '2026-11-25',
-  outcome: 'in-progress',
-  failureReason: null,
-  pullWindow: {
-    fromDay: 21,
-    toDay: 45,
-    origin: 'default',
-    opensOn: '2026-11-22',
-    closesOn: '2026-12-16',
-    closingFrom: '2026-12-14',
-    dayNumber: 30,
-    state: 'open',
-    daysUntilOpens: 0,
-    daysUntilCloses: 15,
-    daysPastClose: 0,
-  },
-  rollIntervalHours: 12,
-  rollingOff: false,
-  roll: { due: '2026-12-01T07:00:00Z', status: 'overdue', lastRollAt: '2026-11-30T19:00:00Z' },
-  broodStage: 'eggs',
-  opened: false,
-  currentCount: null,
-  currentCountEstimated: false,
-  notes: null,
-  warningReason: null,
-  incubatorCaution: INCUBATOR_CAUTION,
-  createdAt: '2026-11-01T10:00:00Z',
-  updatedAt: '2026-11-30T19:00:00Z',
-};
+const sac = PULLED_TEST_SAC;
 
 const entry = (kind: string) => ({
   id: 'e1',
@@ -54,6 +19,7 @@ const entry = (kind: string) => ({
   temperatureC: null,
   entered: null,
   humidityPercent: null,
+  outsideBand: null,
   stage: null,
   text: null,
   strikes: null,
@@ -61,7 +27,8 @@ const entry = (kind: string) => ({
   createdAt: '2026-12-01T09:30:00Z',
 });
 
-describe('IncubatorEntry', () => {
+// A loaded machine renders these slowly; nothing here is timed.
+describe('IncubatorEntry', { timeout: 30_000 }, () => {
   it('sends a roll entry when "Rolled now" is tapped and says when it was logged', async () => {
     const { fetchStub, calls } = stubFetch({
       'GET /api/auth/csrf': () => ({ status: 200, body: { csrfToken: 't' } }),
@@ -125,8 +92,33 @@ describe('IncubatorEntry', () => {
       <IncubatorEntry sac={{ ...sac, pulled: false, pulledAt: null, pulledOn: null, roll: null, incubatorCaution: null }} timeZone="UTC" temperatureUnit="C" />,
     );
     expect(screen.queryByRole('button', { name: 'Rolled now' })).not.toBeInTheDocument();
-    expect(screen.getByRole('button', { name: 'Pulled now, into the incubator' })).toBeInTheDocument();
+    expect(screen.getByRole('button', { name: 'Pulled, into the incubator' })).toBeInTheDocument();
     expect(screen.getByTestId('heat-caution')).toHaveTextContent(/thermostat/);
+  });
+
+  it('offers a caretaker no pull the server would refuse', () => {
+    vi.stubGlobal('fetch', stubFetch({}).fetchStub);
+    const caretakerView = { ...sac.may, edit: false, pullAndOpen: false, setIncubatorRights: false };
+    renderWithProviders(
+      <IncubatorEntry sac={{ ...sac, pulled: false, pulledAt: null, pulledOn: null, roll: null, may: caretakerView }} timeZone="UTC" temperatureUnit="C" />,
+    );
+    expect(screen.queryByRole('button', { name: /Pulled/ })).not.toBeInTheDocument();
+    expect(screen.getByTestId('pull-not-mine')).toHaveTextContent('The keeper records the pull of this sac.');
+  });
+
+  it('says when the legs have formed that rolls are over and readings go on, and flags a reading outside the band', () => {
+    vi.stubGlobal('fetch', stubFetch({}).fetchStub);
+    const legs = {
+      ...sac,
+      broodStage: 'eggs-with-legs' as const,
+      roll: null,
+      readingAlerts: [{ kind: 'temperature' as const, value: 30, at: '2026-12-01T06:00:00Z', side: 'above' as const }],
+    };
+    renderWithProviders(<IncubatorEntry sac={legs} timeZone="UTC" temperatureUnit="C" />);
+    expect(screen.getByTestId('next-roll')).toHaveTextContent('No more rolls: eggs with legs reached; checks and readings go on.');
+    // Default band 24–28 °C: docs/trade-facts.md §4 (from memory).
+    expect(screen.getByTestId('reading-alert')).toHaveTextContent('Temperature 30.0 °C, above the band (24.0 °C to 28.0 °C)');
+    expect(screen.getByRole('button', { name: 'Save readings' })).toBeEnabled();
   });
 });
 
@@ -138,7 +130,7 @@ describe('IncubatorEntry: typed readings and the pull', { timeout: 30_000 }, () 
     renderWithProviders(<IncubatorEntry sac={sac} timeZone="UTC" temperatureUnit="C" />);
     const humidity = screen.getByLabelText('Humidity (%)');
     await userEvent.type(humidity, '150');
-    expect(humidity).toHaveAccessibleDescription('150 is out of range: give a number from 0 to 100.');
+    expect(humidity).toHaveAccessibleDescription(/150 is out of range: give a number from 0 to 100\./);
     await userEvent.click(screen.getByRole('button', { name: 'Save readings' }));
     expect(humidity).toHaveValue('150');
     expect(calls.filter((c) => c.method === 'POST')).toHaveLength(0);
@@ -147,7 +139,7 @@ describe('IncubatorEntry: typed readings and the pull', { timeout: 30_000 }, () 
   it('asks before recording the pull, warns on a day before the window and sends the earlier time given', async () => {
     const { fetchStub, calls } = stubFetch({
       'GET /api/auth/csrf': () => ({ status: 200, body: { csrfToken: 't' } }),
-      'PATCH /api/sacs/s1': () => ({ status: 200, body: { ...sac } }),
+      'POST /api/sacs/s1/pull': () => ({ status: 201, body: { ...sac } }),
     });
     vi.stubGlobal('fetch', fetchStub);
     const layDate = addDays(todayIn('UTC', new Date()), -40);
@@ -161,9 +153,9 @@ describe('IncubatorEntry: typed readings and the pull', { timeout: 30_000 }, () 
       pullWindow: { ...sac.pullWindow, fromDay: 30, toDay: 45 },
     };
     renderWithProviders(<IncubatorEntry sac={withMother} timeZone="UTC" temperatureUnit="C" />);
-    await userEvent.click(screen.getByRole('button', { name: 'Pulled now, into the incubator' }));
+    await userEvent.click(screen.getByRole('button', { name: 'Pulled, into the incubator' }));
     const dialog = await screen.findByRole('dialog', { name: 'Record the pull' });
-    expect(calls.filter((c) => c.method === 'PATCH')).toHaveLength(0);
+    expect(calls.filter((c) => c.method === 'POST')).toHaveLength(0);
 
     const day22 = addDays(layDate, 22);
     const date = within(dialog).getByLabelText('Pulled on');
@@ -174,7 +166,7 @@ describe('IncubatorEntry: typed readings and the pull', { timeout: 30_000 }, () 
     await userEvent.type(time, '07:15');
     expect(within(dialog).getByTestId('confirm-warning')).toHaveTextContent("That is day 22, before this sac's pull window (days 30–45)");
     await userEvent.click(within(dialog).getByRole('button', { name: 'Record the pull' }));
-    await waitFor(() => expect(calls.filter((c) => c.method === 'PATCH')).toHaveLength(1));
-    expect(calls.find((c) => c.method === 'PATCH')?.body).toEqual({ pulledAt: `${day22}T07:15:00.000Z` });
+    await waitFor(() => expect(calls.filter((c) => c.path === '/api/sacs/s1/pull')).toHaveLength(1));
+    expect(calls.find((c) => c.path === '/api/sacs/s1/pull')?.body).toEqual({ pulledAt: `${day22}T07:15:00.000Z` });
   });
 });

@@ -22,8 +22,8 @@ import {
 import { formatInstant } from '@/lib/dates';
 import { isApiError } from '@/lib/api-error';
 import { useAddCareLogEntry } from '../api/care-log';
-import { useUpdateSac } from '../api/sacs';
-import { broodLabel, ROLL_TEXT } from '../utils/sac-view';
+import { usePullSac } from '../api/sacs';
+import { bandFlag, broodLabel, rangeText, readingAlertText, ROLL_TEXT } from '../utils/sac-view';
 import classes from './incubator-entry.module.css';
 
 interface IncubatorEntryProps {
@@ -44,7 +44,7 @@ const stageOptions = BROOD_STAGES.map((s) => ({ value: s, label: broodLabel(s) }
  */
 export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions = [], title }: IncubatorEntryProps) {
   const add = useAddCareLogEntry(sac.id);
-  const update = useUpdateSac(sac.id);
+  const pullSac = usePullSac(sac.id);
   const [done, setDone] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [temperature, setTemperature] = useState('');
@@ -72,8 +72,15 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
   const send = (entries: CareLogRequest[], what: string) =>
     run(async () => {
       let last: { at: string } | undefined;
-      for (const entry of entries) last = await add.mutateAsync(entry);
-      return `${what} logged${last ? ` at ${formatInstant(last.at, timeZone)}` : ''}.`;
+      const flags: string[] = [];
+      for (const entry of entries) {
+        const saved = await add.mutateAsync(entry);
+        const flag = bandFlag(saved.outsideBand);
+        if (flag) flags.push(`${saved.kind === 'temperature' ? 'temperature' : 'humidity'} ${flag}`);
+        last = saved;
+      }
+      // A reading outside the band is kept, and said so at once.
+      return `${what} logged${last ? ` at ${formatInstant(last.at, timeZone)}` : ''}${flags.length ? `: ${flags.join(', ')}` : ''}.`;
     }, 'The entry was not saved. Try again.');
 
   const limits =
@@ -132,9 +139,23 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
           </Box>
         ) : (
           <Text size="md" c="dimmed" data-testid="next-roll">
-            No rolls for this sac {sac.pulled ? '(rolling is off or the young are free-living)' : '(still with the mother)'}.
+            {!sac.pulled
+              ? 'No rolls for this sac (still with the mother).'
+              : sac.rollingOff
+                ? 'No rolls for this sac (rolling is off); checks and readings go on.'
+                : `No more rolls: ${broodLabel(sac.rollingStopsAt).toLowerCase()} reached; checks and readings go on.`}
           </Text>
         )}
+        {sac.container && (
+          <Text size="sm" c="dimmed">
+            In {sac.container}
+          </Text>
+        )}
+        {sac.readingAlerts.map((a) => (
+          <Text key={a.kind} size="sm" fw={700} className="tone-failed" data-testid="reading-alert">
+            {readingAlertText(a, sac.band, temperatureUnit)}
+          </Text>
+        ))}
       </Stack>
 
       <Alert color="amber" variant="light" title="Heat sources" data-testid="heat-caution" role="note">
@@ -155,10 +176,18 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
           size="lg"
           value={temperature}
           onChange={(e) => setTemperature(e.currentTarget.value)}
-          description={tempHint ? `= ${tempHint}` : undefined}
+          description={`${tempHint ? `= ${tempHint} · ` : ''}band ${rangeText('temperature', sac.band.temperatureC, temperatureUnit)}`}
           error={temperatureError}
         />
-        <NumberField label="Humidity (%)" size="lg" whole value={humidity} onChange={(e) => setHumidity(e.currentTarget.value)} error={humidityError} />
+        <NumberField
+          label="Humidity (%)"
+          size="lg"
+          whole
+          value={humidity}
+          onChange={(e) => setHumidity(e.currentTarget.value)}
+          error={humidityError}
+          description={`band ${rangeText('humidity', sac.band.humidityPercent, temperatureUnit)}`}
+        />
       </Group>
       <Button size="lg" variant="light" onClick={saveReadings} loading={add.isPending} disabled={add.isPending}>
         Save readings
@@ -191,7 +220,15 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
         </Button>
       </Group>
       <Group grow align="flex-end">
-        <Select label="Stage now" size="lg" data={stageOptions} value={stage} onChange={setStage} placeholder={broodLabel(sac.broodStage)} />
+        <Select
+          label="Stage now"
+          description="The sac's one stage, also named by brood counts"
+          size="lg"
+          data={stageOptions}
+          value={stage}
+          onChange={setStage}
+          placeholder={broodLabel(sac.broodStage)}
+        />
         <Button
           size="lg"
           variant="default"
@@ -215,9 +252,16 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
           </Text>
         )}
         {!sac.pulled && sac.outcome === 'in-progress' ? (
-          <Button fullWidth size="xl" h={76} fz={22} loading={update.isPending} onClick={pull.open}>
-            Pulled now, into the incubator
-          </Button>
+          // Offered only where the server will take it (sac.may, the server's own rule).
+          sac.may.pullAndOpen ? (
+            <Button fullWidth size="xl" h={76} fz={22} loading={pullSac.isPending} onClick={pull.open}>
+              Pulled, into the incubator
+            </Button>
+          ) : (
+            <Text c="dimmed" data-testid="pull-not-mine">
+              The keeper records the pull of this sac.
+            </Text>
+          )
         ) : (
           <Button
             fullWidth
@@ -239,11 +283,11 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
           onClose={pull.close}
           sac={sac}
           timeZone={timeZone}
-          pending={update.isPending}
+          pending={pullSac.isPending}
           onConfirm={async (pulledAt) => {
             pull.close();
             await run(async () => {
-              await update.mutateAsync({ pulledAt });
+              await pullSac.mutateAsync({ pulledAt });
               return 'Pulled: the first roll is counted from the pull.';
             }, 'The pull was not saved. Try again.');
           }}

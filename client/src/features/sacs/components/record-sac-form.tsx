@@ -16,7 +16,8 @@ import { WarningConfirm, useWarnedSave } from '@/components/ui/warning-confirm';
 
 interface Values {
   layDate: string;
-  where: 'mother' | 'pulled';
+  /** `mother`: to be pulled in its window; `kept`: left with the mother on purpose; `pulled`: already in the incubator. */
+  where: 'mother' | 'kept' | 'pulled';
   pulledOn: string;
   pulledTime: string;
   notes: string;
@@ -62,6 +63,7 @@ export function RecordSacForm({ projectId, timeZone, onDone }: { projectId: stri
     return warned.save({
       layDate: readDate(v.layDate)!,
       pulledAt: v.where === 'pulled' && v.pulledOn ? dayjs.tz(`${readDate(v.pulledOn)}T${v.pulledTime || '08:00'}`, timeZone).toISOString() : null,
+      leftWithMother: v.where === 'kept',
       notes: v.notes.trim() || null,
     });
   });
@@ -76,13 +78,19 @@ export function RecordSacForm({ projectId, timeZone, onDone }: { projectId: stri
           </Text>
           <SegmentedControl
             data={[
-              { value: 'mother', label: 'Left with the mother' },
-              { value: 'pulled', label: 'Pulled to the incubator' },
+              { value: 'mother', label: 'With the mother, to pull' },
+              { value: 'kept', label: 'Stays with the mother' },
+              { value: 'pulled', label: 'Pulled' },
             ]}
             key={form.key('where')}
             {...form.getInputProps('where')}
           />
         </Stack>
+        {where === 'kept' && (
+          <Text size="sm" c="dimmed">
+            She keeps and turns the sac herself: no pull window to watch. Record the opening when the young emerge.
+          </Text>
+        )}
         {where === 'pulled' && (
           <Group grow align="flex-start">
             <DateField label="Pulled on" key={form.key('pulledOn')} {...form.getInputProps('pulledOn')} />

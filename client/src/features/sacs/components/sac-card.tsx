@@ -2,7 +2,7 @@ import { Anchor, Badge, Card, Group, Stack, Text } from '@mantine/core';
 import { Link } from 'react-router';
 import { countWords, type SacResponse } from '@broodsilk/shared';
 import { formatDate } from '@/lib/dates';
-import { broodLabel, PULL_WINDOW_TEXT, pullWindowSentence, ROLL_TEXT, rollSentence, SAC_OUTCOME_TEXT } from '../utils/sac-view';
+import { broodLabel, PULL_WINDOW_TEXT, pullWindowSentence, ROLL_TEXT, rollSentence, SAC_OUTCOME_TEXT, whereSacIs } from '../utils/sac-view';
 
 /** One sac at a glance: day N, pull window with dates, next roll due. */
 export function SacCard({ sac, timeZone, href, incubatorHref }: { sac: SacResponse; timeZone: string; href: string; incubatorHref?: string }) {
@@ -19,7 +19,7 @@ export function SacCard({ sac, timeZone, href, incubatorHref }: { sac: SacRespon
             <Text span fw={700} data-testid="sac-day">
               Day {sac.dayNumber}
             </Text>{' '}
-            · {sac.pulled ? 'in the incubator' : 'with the mother'} · {broodLabel(sac.broodStage)}
+            · {whereSacIs(sac)} · {broodLabel(sac.broodStage)}
             {sac.currentCount !== null && ` · ${countWords(sac.currentCount, sac.currentCountEstimated)} alive`}
           </Text>
         </Stack>
@@ -28,14 +28,15 @@ export function SacCard({ sac, timeZone, href, incubatorHref }: { sac: SacRespon
             {SAC_OUTCOME_TEXT[sac.outcome]}
           </Badge>
         ) : (
-          !sac.pulled && (
+          !sac.pulled &&
+          !sac.leftWithMother && (
             <Badge color={window.color} variant="light" tt="none" data-testid="pull-window-badge">
               {window.label}
             </Badge>
           )
         )}
       </Group>
-      <Text size="sm" mt={4} className={sac.pulled ? undefined : window.tone}>
+      <Text size="sm" mt={4} className={sac.pulled || sac.leftWithMother ? undefined : window.tone}>
         {pullWindowSentence(sac)}
       </Text>
       {roll && sac.roll && (

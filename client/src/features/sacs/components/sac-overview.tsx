@@ -1,16 +1,32 @@
 import { Alert, Badge, Button, Card, Group, Select, SimpleGrid, Switch, Text } from '@mantine/core';
+import { useDisclosure } from '@mantine/hooks';
 import { useState } from 'react';
-import { SAC_FAILURE_REASONS, type SacFailureReason, type SacResponse } from '@broodsilk/shared';
+import { SAC_FAILURE_REASONS, type SacFailureReason, type SacResponse, type TemperatureUnit } from '@broodsilk/shared';
 import { formatDate, formatInstant } from '@/lib/dates';
 import { isApiError } from '@/lib/api-error';
-import { useUpdateSac } from '../api/sacs';
-import { broodLabel, PULL_WINDOW_TEXT, pullWindowSentence, ROLL_TEXT, SAC_OUTCOME_TEXT } from '../utils/sac-view';
+import { usePullSac, useUpdateSac } from '../api/sacs';
+import { PullConfirmation } from './pull-confirmation';
+import { broodLabel, PULL_WINDOW_TEXT, pullWindowSentence, readingAlertText, ROLL_TEXT, SAC_OUTCOME_TEXT } from '../utils/sac-view';
 
 const FAILURE_LABELS: Record<SacFailureReason, string> = { infertile: 'Infertile', spoiled: 'Spoiled', eaten: 'Eaten by the mother', other: 'Other' };
 
-/** Day N, the pull window with its dates, the roll state, and the keeper's pull and outcome actions. */
-export function SacOverview({ sac, timeZone, canEdit }: { sac: SacResponse; timeZone: string; canEdit: boolean }) {
+/** Why no roll is due, in words. */
+function noRollText(sac: SacResponse): string {
+  if (!sac.pulled) return 'No rolls while the sac is with the mother: she turns it herself.';
+  if (sac.rollingOff) return 'Rolling is turned off.';
+  if (sac.outcome !== 'in-progress') return 'The sac has ended; no more rolls.';
+  return sac.rollPastLegs ? 'The young are free-living; no more rolls.' : 'The legs have formed: rolling has stopped, checks and readings go on.';
+}
+
+/**
+ * Day N, the pull window with its dates, the roll state, readings outside the band, and the actions
+ * the viewer may take (`sac.may`, the server's own rule): the pull, leaving the sac with the mother, the outcome.
+ */
+export function SacOverview({ sac, timeZone, temperatureUnit }: { sac: SacResponse; timeZone: string; temperatureUnit: TemperatureUnit }) {
+  const canEdit = sac.may.edit;
   const update = useUpdateSac(sac.id);
+  const pull = usePullSac(sac.id);
+  const [pulling, pullDialog] = useDisclosure(false);
   const [error, setError] = useState<string | null>(null);
   const [failure, setFailure] = useState<string | null>(null);
   const w = sac.pullWindow;
@@ -24,6 +40,7 @@ export function SacOverview({ sac, timeZone, canEdit }: { sac: SacResponse; time
       setError(isApiError(e) ? e.message : 'Not saved. Try again.');
     }
   }
+  const waiting = !sac.pulled && sac.outcome === 'in-progress';
 
   return (
     <SimpleGrid cols={{ base: 1, sm: 3 }}>
@@ -53,16 +70,30 @@ export function SacOverview({ sac, timeZone, canEdit }: { sac: SacResponse; time
             day {w.fromDay}–{w.toDay} ({w.origin === 'sac' ? 'set for this sac' : w.origin === 'species' ? 'species' : 'usual'})
           </Text>
         </Group>
-        {!sac.pulled && (
-          <Text fw={700} className={windowText.tone} data-testid="pull-window-state">
-            {windowText.label}
-          </Text>
-        )}
+        {!sac.pulled &&
+          (sac.leftWithMother ? (
+            <Text fw={700} data-testid="pull-window-state">
+              Left with the mother
+            </Text>
+          ) : (
+            <Text fw={700} className={windowText.tone} data-testid="pull-window-state">
+              {windowText.label}
+            </Text>
+          ))}
         <Text size="sm">{pullWindowSentence(sac)}</Text>
-        {canEdit && !sac.pulled && sac.outcome === 'in-progress' && (
-          <Button mt="xs" loading={update.isPending} onClick={() => change({ pulledAt: new Date().toISOString() })}>
-            Pulled now
-          </Button>
+        {waiting && (sac.may.pullAndOpen || canEdit) && (
+          <Group mt="xs" gap="xs">
+            {sac.may.pullAndOpen && (
+              <Button size="compact-md" loading={pull.isPending} onClick={pullDialog.open}>
+                Record the pull
+              </Button>
+            )}
+            {canEdit && (
+              <Button size="compact-md" variant="light" loading={update.isPending} onClick={() => change({ leftWithMother: !sac.leftWithMother })}>
+                {sac.leftWithMother ? 'Watch the pull window again' : 'Leave it with the mother'}
+              </Button>
+            )}
+          </Group>
         )}
       </Card>
       <Card withBorder padding="sm">
@@ -81,25 +112,43 @@ export function SacOverview({ sac, timeZone, canEdit }: { sac: SacResponse; time
           </>
         ) : (
           <Text size="sm" c="dimmed" data-testid="roll-state">
-            {!sac.pulled
-              ? 'No rolls while the sac is with the mother.'
-              : sac.rollingOff
-                ? 'Rolling is turned off.'
-                : 'The young are free-living; no more rolls.'}
+            {noRollText(sac)}
           </Text>
         )}
         {canEdit && sac.pulled && (
-          <Switch
-            mt="xs"
-            label="Roll this sac"
-            checked={!sac.rollingOff}
-            onChange={(e) => change({ rollingOff: !e.currentTarget.checked })}
-            disabled={update.isPending}
-          />
+          <>
+            <Switch
+              mt="xs"
+              label="Roll this sac"
+              checked={!sac.rollingOff}
+              onChange={(e) => change({ rollingOff: !e.currentTarget.checked })}
+              disabled={update.isPending}
+            />
+            <Switch
+              mt="xs"
+              label="Keep rolling after the legs form"
+              description="Usual practice stops at eggs with legs (trade facts §4)."
+              checked={sac.rollPastLegs}
+              onChange={(e) => change({ rollPastLegs: e.currentTarget.checked })}
+              disabled={update.isPending}
+            />
+          </>
         )}
       </Card>
+      {sac.readingAlerts.length > 0 && (
+        <Alert color="clay" title="Reading outside the band" style={{ gridColumn: '1 / -1' }} data-testid="reading-alerts">
+          {sac.readingAlerts.map((a) => (
+            <Text size="sm" key={a.kind}>
+              {readingAlertText(a, sac.band, temperatureUnit)}, logged {formatInstant(a.at, timeZone)}.
+            </Text>
+          ))}
+        </Alert>
+      )}
       {canEdit && sac.outcome === 'in-progress' && (
         <Group align="flex-end" style={{ gridColumn: '1 / -1' }}>
+          <Button variant="light" loading={update.isPending} onClick={() => change({ outcome: 'emerged' })}>
+            The young have emerged
+          </Button>
           <Select
             label="The sac failed"
             placeholder="Reason"
@@ -123,6 +172,24 @@ export function SacOverview({ sac, timeZone, canEdit }: { sac: SacResponse; time
         <Alert color="clay" role="alert" style={{ gridColumn: '1 / -1' }}>
           {error}
         </Alert>
+      )}
+      {pulling && (
+        <PullConfirmation
+          opened
+          onClose={pullDialog.close}
+          sac={sac}
+          timeZone={timeZone}
+          pending={pull.isPending}
+          onConfirm={async (pulledAt) => {
+            pullDialog.close();
+            setError(null);
+            try {
+              await pull.mutateAsync({ pulledAt });
+            } catch (e) {
+              setError(isApiError(e) ? e.message : 'The pull was not saved. Try again.');
+            }
+          }}
+        />
       )}
     </SimpleGrid>
   );

@@ -1,4 +1,12 @@
-import { BROOD_STAGE_LABEL_SETS, SAC_OUTCOME_LABELS, type BroodStage, type PullWindowState, type RollStatus, type SacResponse } from '@broodsilk/shared';
+import {
+  BROOD_STAGE_LABEL_SETS,
+  SAC_OUTCOME_LABELS,
+  type BandSide,
+  type BroodStage,
+  type PullWindowState,
+  type RollStatus,
+  type SacResponse,
+} from '@broodsilk/shared';
 import { formatDate, formatInstant } from '@/lib/dates';
 import { PULL_WINDOW_TONE, ROLL_STATUS_TONE, type ToneStyle } from '@/lib/tones';
 
@@ -28,6 +36,7 @@ const days = (n: number) => (n === 1 ? '1 day' : `${n} days`);
 /** One sentence about the pull window, e.g. "Opens in 3 days (12 Dec 2026), closes 5 Jan 2027". */
 export function pullWindowSentence(sac: SacResponse): string {
   const w = sac.pullWindow;
+  if (sac.leftWithMother && !sac.pulled) return `Left with the mother by choice: she keeps and turns it herself (day ${sac.dayNumber}).`;
   if (sac.pulled) return `Pulled${sac.pulledOn ? ` on ${formatDate(sac.pulledOn)}` : ''} (window was day ${w.fromDay}–${w.toDay}).`;
   switch (w.state) {
     case 'not-yet':
@@ -50,3 +59,16 @@ export function rollSentence(sac: SacResponse, timeZone: string): string | null 
 }
 
 export const SAC_OUTCOME_TEXT = SAC_OUTCOME_LABELS;
+
+/** Where a sac is, in words. */
+export function whereSacIs(sac: SacResponse): string {
+  if (sac.pulled) return sac.container ? `in ${sac.container}` : 'in the incubator';
+  return sac.leftWithMother ? 'left with the mother' : 'with the mother';
+}
+
+export { bandRangeWords as rangeText, readingAlertWords as readingAlertText } from '@broodsilk/shared';
+
+/** The flag beside a logged reading outside the band. */
+export function bandFlag(side: BandSide | null): string | null {
+  return side ? `${side} the band` : null;
+}
