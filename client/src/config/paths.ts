@@ -2,7 +2,7 @@
 export const paths = {
   home: { path: '/', href: () => '/' },
   signIn: { path: '/sign-in', href: (next?: string) => (next && next !== '/' ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in') },
-  register: { path: '/register', href: () => '/register' },
+  register: { path: '/register', href: (next?: string) => (next && next !== '/' ? `/register?next=${encodeURIComponent(next)}` : '/register') },
   forgotPassword: { path: '/forgot-password', href: () => '/forgot-password' },
   resetPassword: { path: '/reset-password', href: () => '/reset-password' },
   settings: { path: '/settings', href: () => '/settings' },

@@ -11,7 +11,7 @@ export function Component() {
     <PublicLayout title="Sign in to Broodsilk" subtitle="Your pairings, sacs and partner accounts in one place.">
       <SignInForm
         onSignedIn={() => navigate(safeNext(params.get('next')), { replace: true })}
-        registerHref={params.get('next') ? `${paths.register.href()}?next=${encodeURIComponent(safeNext(params.get('next')))}` : paths.register.href()}
+        registerHref={paths.register.href(params.get('next') ? safeNext(params.get('next')) : undefined)}
       />
     </PublicLayout>
   );
