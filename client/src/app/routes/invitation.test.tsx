@@ -1,20 +1,11 @@
 import { screen } from '@testing-library/react';
 import { Route, Routes } from 'react-router';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import type { InvitationPreview } from '@broodsilk/shared';
 import { renderWithProviders, stubFetch } from '@/testing/render';
+import { invitationPreview as preview } from '@/features/invitations/components/invitation-fixtures.test-data';
 import { Component as InvitationPage } from './invitation';
 
 afterEach(() => vi.unstubAllGlobals());
-
-const preview: InvitationPreview = {
-  projectTitle: 'Regalis 2027',
-  inviterName: 'Mira',
-  role: 'partner',
-  valid: true,
-  problem: null,
-  expiresAt: '2026-12-15T00:00:00Z',
-};
 
 describe('the invitation page for a visitor', () => {
   it('keeps the invitation through sign-in and through creating an account', async () => {
