@@ -7,7 +7,7 @@ const logger = new Logger('Errors');
 /**
  * Answers errors raised by Express middleware (CSRF refusal, malformed or oversized body) right
  * where they happen. Registered after the body parsers so no later error handler sees them: the
- * one `@nestjs/serve-static` adds turns every error on an excluded path into a 404.
+ * client-app module's page handlers would answer them with the client's 404 page.
  */
 export function answerMiddlewareErrors(err: unknown, _req: Request, res: Response, next: NextFunction): void {
   if (res.headersSent) return next(err);
