@@ -36,7 +36,7 @@ export function toAnimalSummary(a: Animal): AnimalSummary {
     custodyParty: a.custodyParty ?? null,
     dueBackOn: a.dueBackOn ?? null,
     enclosure: a.enclosure ?? null,
-    lastMoltOn: a.lastMoltOn ?? null,
+    lastMoltOn: lastMoltOf(a),
     createdAt: a.createdAt.toISOString(),
   };
 }
@@ -49,14 +49,21 @@ export function maleClockOf(a: Animal, today: string): MaleClockView | null {
   return { ...clock, maturedOn: a.maturedOn, lifespanMonths: { ...life.value, from: life.from } };
 }
 
+/** The last molt on record: a maturing molt is a molt too, even when only its day was entered with the animal. */
+export function lastMoltOf(a: Pick<Animal, 'lastMoltOn' | 'maturedOn'>): string | null {
+  const days = [a.lastMoltOn, a.maturedOn].filter((d): d is string => !!d);
+  return days.length ? days.reduce((x, y) => (y > x ? y : x)) : null;
+}
+
 /** The premolt flag while it stands: a molt on or after it has ended it. */
 export function premoltSinceOf(a: Animal): string | null {
-  return premoltStands(a.premoltSince, a.lastMoltOn) ? a.premoltSince! : null;
+  return premoltStands(a.premoltSince, lastMoltOf(a)) ? a.premoltSince! : null;
 }
 
 function readinessOf(a: Animal, today: string): FemaleReadinessView | null {
   if (a.sex !== 'female' || a.maturity !== 'mature') return null;
-  const last = a.lastMoltOn && a.lastMoltOn <= today ? a.lastMoltOn : null;
+  const molted = lastMoltOf(a);
+  const last = molted && molted <= today ? molted : null;
   const premoltSince = premoltSinceOf(a);
   return { ...femaleReadiness(last, today, premoltSince), lastMoltOn: last, premoltNote: a.premoltNote ?? null, premoltSince };
 }
