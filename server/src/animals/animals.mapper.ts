@@ -15,7 +15,8 @@ import type { Animal } from './animal.entity';
 import { effectiveBreeding } from '../species/effective-breeding';
 import { ownBreeding } from '../species/species.mapper';
 
-export function toAnimalSummary(a: Animal): AnimalSummary {
+/** Needs `species` loaded; `recordedBy` and `ownerUser` too where they can be someone else. */
+export function toAnimalSummary(a: Animal, viewerId: string): AnimalSummary {
   const s = a.species;
   return {
     id: a.id,
@@ -38,6 +39,8 @@ export function toAnimalSummary(a: Animal): AnimalSummary {
     enclosure: a.enclosure ?? null,
     lastMoltOn: lastMoltOf(a),
     createdAt: a.createdAt.toISOString(),
+    heldBy: a.recordedBy.id === viewerId ? null : { id: a.recordedBy.id, name: a.recordedBy.displayName },
+    lender: a.custody === 'loan-in' && a.ownerKind !== 'self' ? { name: ownerOf(a).name, email: a.ownerEmail ?? null } : null,
   };
 }
 
@@ -84,7 +87,7 @@ function ownerOf(a: Animal): AnimalOwner {
 /** Needs `species`, `recordedBy` and `ownerUser` loaded. */
 export function toAnimalResponse(a: Animal, today: string, viewerId: string, photos: PhotoRef[] = []): AnimalResponse {
   return {
-    ...toAnimalSummary(a),
+    ...toAnimalSummary(a, viewerId),
     recordedBy: { id: a.recordedBy.id, name: a.recordedBy.displayName },
     acquiredOn: a.acquiredOn ?? null,
     acquiredFrom: a.acquiredFrom ?? null,

@@ -183,7 +183,18 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
         </SimpleGrid>
         {male?.custody === 'loan-in' && (
           <Alert color="moss" variant="light">
-            {male.label} is on a breeding loan to you. Add his owner as a partner below so they can follow the project and agree the split.
+            <Stack gap="xs" align="flex-start">
+              <Text size="sm">{male.label} is on a breeding loan to you. Add his owner as a partner so they can follow the project and agree the split.</Text>
+              {male.lender && !form.getValues().parties.some((p) => p.name === male.lender!.name) && (
+                <Button
+                  size="xs"
+                  variant="light"
+                  onClick={() => form.insertListItem('parties', { ...emptyParty(partyCount + 2), name: male.lender!.name, email: male.lender!.email ?? '' })}
+                >
+                  Add {male.lender.name} as a partner
+                </Button>
+              )}
+            </Stack>
           </Alert>
         )}
         <TextAreaField label="Notes" maxLength={TEXT_LIMITS.projectNotes} key={form.key('notes')} {...form.getInputProps('notes')} />
