@@ -1,5 +1,5 @@
 import { IsBoolean, IsInt, IsOptional, IsString, Max, MaxLength, Min, ValidateIf } from 'class-validator';
-import { PULL_DAY_MAX, ROLL_INTERVAL_LIMITS, type CreateSacRequest } from '@broodsilk/shared';
+import { PULL_DAY_MAX, ROLL_INTERVAL_LIMITS, type CreateSacRequest, TEXT_LIMITS } from '@broodsilk/shared';
 import { IsCalendarDate } from '../../common/validators/is-calendar-date.validator';
 import { IsInstant } from '../../common/validators/is-instant.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
@@ -43,6 +43,6 @@ export class CreateSacDto extends AcknowledgedWarningsDto implements CreateSacRe
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
   @IsString()
-  @MaxLength(2000)
+  @MaxLength(TEXT_LIMITS.note)
   notes?: string | null;
 }
