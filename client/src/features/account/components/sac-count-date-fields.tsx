@@ -1,12 +1,9 @@
 import { Group, NativeSelect } from '@mantine/core';
-import type { GetInputPropsReturnType } from '@mantine/form';
 import type { SacSharesView } from '@broodsilk/shared';
+import type { BoundField } from '@/components/fields/bound-field';
 import { DateField } from '@/components/fields/date-field';
 import { NumberField } from '@/components/fields/number-field';
 import { formatDate } from '@/lib/dates';
-
-/** One form field's key and input props, as `{ key: form.key(path), ...form.getInputProps(path) }`. */
-export type BoundField = { key: string } & GetInputPropsReturnType;
 
 /** Which sac the young leave (asked only when more than one has young in care), how many, and on which day. */
 export function SacCountDateFields({ withYoung, sac, count, date }: { withYoung: SacSharesView[]; sac: BoundField; count: BoundField; date: BoundField }) {

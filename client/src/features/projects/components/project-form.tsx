@@ -14,7 +14,8 @@ import {
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateProject, type NewProjectResult } from '../hooks/use-create-project';
 import { priceError } from '../utils/price';
-import { CURRENCIES, LINE_RULES, failureOptions, handOverOptions, shippingOptions } from './propose-terms-form';
+import { LINE_RULES } from './propose-terms-form';
+import { DealFields } from './deal-fields';
 import { FormActions } from '@/components/ui/form-actions';
 import { NumberField } from '@/components/fields/number-field';
 import { TextAreaField, TextField } from '@/components/fields/text-field';
@@ -279,31 +280,7 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
               <NumberField label="Your fixed count" whole key={form.key('ownerFixedCount')} {...form.getInputProps('ownerFixedCount')} />
               <NumberField label="Your pick order" whole key={form.key('ownerPickOrder')} {...form.getInputProps('ownerPickOrder')} />
             </SimpleGrid>
-            <SimpleGrid cols={{ base: 1, sm: 3 }}>
-              <NumberField label="Price per spiderling" key={form.key('price')} {...form.getInputProps('price')} />
-              <Select label="Currency" data={CURRENCIES} searchable allowDeselect={false} key={form.key('currency')} {...form.getInputProps('currency')} />
-              <Select
-                label="If the project fails"
-                data={failureOptions}
-                allowDeselect={false}
-                key={form.key('failureClause')}
-                {...form.getInputProps('failureClause')}
-              />
-              <Select
-                label="Handed over at"
-                data={handOverOptions}
-                allowDeselect={false}
-                key={form.key('handOverStage')}
-                {...form.getInputProps('handOverStage')}
-              />
-              <Select
-                label="Shipping"
-                data={shippingOptions}
-                allowDeselect={false}
-                key={form.key('shippingPaidBy')}
-                {...form.getInputProps('shippingPaidBy')}
-              />
-            </SimpleGrid>
+            <DealFields field={(name) => ({ key: form.key(name), ...form.getInputProps(name) })} />
           </Stack>
         )}
         <FormActions message={message} loading={create.isPending} submitLabel="Create project" />
