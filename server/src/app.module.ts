@@ -30,7 +30,7 @@ import { ClockModule } from './common/clock.module';
 import { AccountsModule } from './accounts/accounts.module';
 import { SettlementsModule } from './settlements/settlements.module';
 import { IdempotencyModule } from './idempotency/idempotency.module';
-import { ClientAppModule } from './client-app/client-app.module';
+import { ExportModule } from './export/export.module';
 
 /** Calendar-feed and invitation tokens travel in the path; they are secrets, so not logged. */
 function redactSecrets(url: string): string {
@@ -61,7 +61,6 @@ function redactSecrets(url: string): string {
       // Registers the PostgreSQL-typed EntityManager and MikroORM for injection too.
       driver: PostgreSqlDriver,
     }),
-    ClientAppModule.forRoot(process.env.CLIENT_DIST ?? ''),
     ClockModule,
     AuthModule,
     UsersModule,
@@ -79,6 +78,7 @@ function redactSecrets(url: string): string {
     AccountsModule,
     SettlementsModule,
     IdempotencyModule,
+    ExportModule,
   ],
   providers: [
     { provide: APP_FILTER, useClass: AllExceptionsFilter },

@@ -23,12 +23,13 @@ describe('the client pages and the 404 rule', () => {
   });
 
   it('answers any other path outside the API with the client (its not-found page) and 404', async () => {
-    for (const path of ['/nope', '/wp-login.php', '/projects/p1/terms', '/collection/a/b', '/assets/missing.js'])
+    for (const path of ['/nope', '/wp-login.php', '/projects/p1/terms', '/collection/a/b'])
       expect((await http().get(path).expect(404)).text, path).toContain('<title>Broodsilk</title>');
   });
 
-  it('serves the built files as they are', async () => {
+  it('serves the built files as they are; a missing one is a plain 404', async () => {
     expect((await http().get('/assets/app.js').expect(200)).text).toBe('console.log(1)');
+    await http().get('/assets/missing.js').expect(404);
   });
 
   it('sends /login on to the sign-in page', async () => {

@@ -24,6 +24,8 @@ const PUBLIC = new Set([
   'GET /api/invitations/:token',
   'GET /api/calendar/:token.ics',
   'POST /api/webhooks/payments',
+  'GET /api/unsubscribe/:token',
+  'POST /api/unsubscribe/:token',
 ]);
 /** The shared species catalogue: every keeper reads it, only an admin edits it. */
 const CATALOGUE: Record<string, number> = { 'GET /api/species/:id': 200, 'PATCH /api/species/:id': 403 };
@@ -38,8 +40,8 @@ const VALID_BODY: Record<string, () => object> = {
     ]),
   ),
 };
-/** The owner's GET answers 404 by design: no opening is recorded for the fixture sac yet. */
-const EMPTY_FOR_OWNER = new Set(['GET /api/sacs/:id/opening']);
+/** The owner's GET answers 404 by design: no opening (so no kept-back batch) is recorded for the fixture sac yet. */
+const EMPTY_FOR_OWNER = new Set(['GET /api/sacs/:id/opening', 'GET /api/sacs/:id/kept-back']);
 /** Accepting an invitation: the token in the link is the permission, whoever holds it (see invitations spec). */
 const BY_TOKEN = new Set(['POST /api/invitations/:token/accept']);
 

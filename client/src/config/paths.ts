@@ -8,6 +8,7 @@ export const paths = {
   forgotPassword: { path: APP_PAGES.forgotPassword, href: () => '/forgot-password' },
   resetPassword: { path: APP_PAGES.resetPassword, href: () => '/reset-password' },
   settings: { path: APP_PAGES.settings, href: () => '/settings' },
+  notifications: { path: APP_PAGES.notifications, href: () => '/notifications' },
   collection: { path: APP_PAGES.collection, href: () => '/collection' },
   animal: { path: APP_PAGES.animal, href: (animalId: string) => `/collection/${animalId}` },
   species: { path: APP_PAGES.species, href: () => '/species' },

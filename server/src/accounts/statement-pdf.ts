@@ -1,5 +1,5 @@
 import PDFDocument from 'pdfkit';
-import { formatMoneyCode, type StatementResponse } from '@broodsilk/shared';
+import { formatMoneyCode, sacCountLine, shareLine, type StatementResponse } from '@broodsilk/shared';
 
 // The built-in PDF fonts cover WinAnsi only; these few signs from the share explanations are not in it.
 const WIN_ANSI_FALLBACK: Record<string, string> = { '−': '-', '→': '->', '≈': '~', '≤': '<=', '≥': '>=' };
@@ -52,7 +52,7 @@ export function statementPdf(s: StatementResponse): Promise<Buffer> {
   heading('Shares per sac');
   if (!s.sacs.length) line('No sac yet.');
   for (const sac of s.sacs) {
-    line(`Sac laid ${sac.layDate} (${sac.outcome}): ${sac.count} young counted.`);
+    line(sacCountLine(sac));
     for (const p of sac.parties) line(`   ${p.name}: ${p.count}`);
     for (const e of sac.explanation) line(`   ${e}`);
     if (sac.failure) line(`   ${sac.failure}`);
@@ -66,7 +66,7 @@ export function statementPdf(s: StatementResponse): Promise<Buffer> {
   const b = s.balance;
   if (!b) line('No share in the terms in force.');
   else {
-    line(`Share: ${b.share} young`);
+    line(shareLine(b.share, s.provisional));
     line(`Handed over: ${b.handedOver} young`);
     line(`Sold: ${b.sold} young`);
     line(`Cashed out: ${b.cashedOut} young`);

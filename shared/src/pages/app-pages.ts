@@ -9,6 +9,7 @@ export const APP_PAGES = {
   forgotPassword: '/forgot-password',
   resetPassword: '/reset-password',
   settings: '/settings',
+  notifications: '/notifications',
   collection: '/collection',
   animal: '/collection/:animalId',
   species: '/species',

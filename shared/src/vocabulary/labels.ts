@@ -2,6 +2,8 @@ import type { EndedEarlyReason, ProjectStage } from '../breeding/project-stage.j
 import type { MaleClockState } from '../collection/male-clock.js';
 import type { PairingOutcome, SacFate } from '../breeding/pairing.types.js';
 import type { SacOutcomeState } from '../sacs/sacs.types.js';
+import type { NotificationKind } from '../dashboard/notifications.types.js';
+import type { ReminderChannel } from '../reminders/reminder-preferences.types.js';
 
 /**
  * The interface's words for states several screens show, kept here once so the
@@ -47,3 +49,23 @@ export const PAIRING_OUTCOME_LABELS: Record<PairingOutcome, string> = {
 
 /** How a sac fares, as the stage rules see it. */
 export const SAC_FATE_LABELS: Record<SacFate, string> = { developing: 'Developing', failed: 'Failed', eaten: 'Eaten by the mother' };
+
+/** Reminder kinds as the settings and the inbox name them. */
+export const NOTIFICATION_KIND_LABELS: Record<NotificationKind, string> = {
+  'roll-due': 'A roll falls due',
+  'roll-overdue': 'A roll is overdue',
+  'pull-window-opens': 'A pull window opens',
+  'pull-window-closes': 'A pull window closes in 2 days',
+  'male-clock': 'A male’s clock moves on',
+  'reading-out-of-band': 'A reading is outside the target band',
+  'female-molted': 'A female molted after pairing',
+  'loan-due-back': 'A loaned animal is due back in 7 days',
+  'daily-digest': 'The daily digest',
+};
+
+export const REMINDER_CHANNEL_LABELS: Record<ReminderChannel, string> = {
+  both: 'E-mail and in-app',
+  email: 'E-mail only',
+  'in-app': 'In-app only',
+  off: 'Off',
+};

@@ -1,9 +1,11 @@
-import { Outlet, redirect, useNavigate, type LoaderFunctionArgs } from 'react-router';
+import { redirect, useNavigate, type LoaderFunctionArgs } from 'react-router';
 import type { QueryClient } from '@tanstack/react-query';
 import { AppLayout } from '@/components/layouts/app-layout';
+import { PendingOutlet } from '@/components/layouts/pending-outlet';
 import { paths } from '@/config/paths';
 import { meQuery, useMe } from '@/features/auth/api/me';
 import { useLogout } from '@/features/auth/api/session';
+import { InboxLink } from '@/features/notifications/components/inbox-link';
 import { NAV_ITEMS } from '../nav-items';
 
 /** Every signed-in page goes through here: no session, no page. */
@@ -28,9 +30,10 @@ export function Component() {
       nav={NAV_ITEMS}
       userName={me.displayName}
       settingsHref={paths.settings.href()}
+      headerExtra={<InboxLink />}
       onSignOut={() => logout.mutate(undefined, { onSettled: () => navigate(paths.signIn.href()) })}
     >
-      <Outlet />
+      <PendingOutlet />
     </AppLayout>
   );
 }
