@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { BASE_URL, openBrowser, signIn, type Browser } from './support/browser';
-import { daysAgo } from './support/dates';
+import { daysAgo } from './support/api';
 
 /** Waits for a page to settle (the server answers in its own time); it does not measure anything. */
 const eventually = <T>(read: () => Promise<T> | T) => expect.poll(read, { timeout: 15_000, interval: 100 });

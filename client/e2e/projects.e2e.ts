@@ -2,12 +2,12 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { existsSync } from 'node:fs';
 import type { Page } from 'playwright-core';
 import { BASE_URL, DEMO_PASSWORD, openBrowser, screenshot, signIn, type Browser } from './support/browser';
-import { daysAgo } from './support/dates';
+import { invitationLink } from './support/mail';
+import { daysAgo } from './support/api';
 
 /** Waits for a page to settle (the server answers in its own time); it does not measure anything. */
 const eventually = <T>(read: () => Promise<T> | T) => expect.poll(read, { timeout: 15_000, interval: 100 });
 
-const MAIL_API = process.env.MAILDEV_API ?? 'http://127.0.0.1:1080';
 const TITLE = `Regalis loan ${Date.now().toString(36)}`;
 
 async function pick(page: Page, label: string, search: string) {
@@ -25,20 +25,6 @@ async function typeDate(page: Page, label: string, date: string) {
   await input.click();
   await input.fill(date);
   await input.press('Tab');
-}
-
-/** The invitation link e-mailed to `address` for our project, from the local mail sink. */
-async function invitationLink(address: string): Promise<string> {
-  for (let attempt = 0; attempt < 50; attempt++) {
-    const res = await fetch(`${MAIL_API}/api/email`);
-    const mails = (await res.json()) as { to: { address: string }[]; subject: string; text?: string; html?: string }[];
-    const mine = mails.filter((m) => m.to.some((t) => t.address === address) && `${m.subject} ${m.text ?? ''}`.includes(TITLE));
-    const body = mine.at(-1);
-    const match = body && `${body.text ?? ''} ${body.html ?? ''}`.match(/\/invitations\/([A-Za-z0-9_\-.~%]+)/);
-    if (match) return `${BASE_URL}/invitations/${match[1]}`;
-    await new Promise((r) => setTimeout(r, 200));
-  }
-  throw new Error(`no invitation for ${TITLE} to ${address}`);
 }
 
 let keeper: Browser;
@@ -138,7 +124,7 @@ describe('a breeding project from loaned male to the first roll', () => {
   });
 
   it('Tomasz joins through his invitation, sees the project and accepts the terms', async () => {
-    const link = await invitationLink('partner@broodsilk.test');
+    const link = await invitationLink('partner@broodsilk.test', TITLE);
     const partner = await openBrowser();
     try {
       await partner.page.goto(link);

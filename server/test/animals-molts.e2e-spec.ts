@@ -25,6 +25,17 @@ afterAll(async () => {
 });
 
 describe('molts', () => {
+  it('a maturing molt entered only as the day she or he matured counts as the last molt (readiness, list)', async () => {
+    const f = await createAnimal(t.app, mira, { speciesId: species, label: 'MAT-F', sex: 'female', maturity: 'mature', maturedOn: addDays(today, -40) });
+    expect(f).toMatchObject({ lastMoltOn: addDays(today, -40), readiness: { state: 'ready', lastMoltOn: addDays(today, -40), daysSinceMolt: 40 } });
+    const m = await createAnimal(t.app, mira, { speciesId: species, label: 'MAT-M', sex: 'male', maturity: 'mature', maturedOn: addDays(today, -5) });
+    const list = await http().get('/api/animals?q=MAT-').set('Authorization', mira.bearer).expect(200);
+    expect(list.body.items.map((a: { id: string; lastMoltOn: string }) => [a.id, a.lastMoltOn])).toEqual([
+      [f.id, addDays(today, -40)],
+      [m.id, addDays(today, -5)],
+    ]);
+  });
+
   it('a maturing molt on a male sets his maturity date and starts his clock', async () => {
     const m = await createAnimal(t.app, mira, { speciesId: species, label: 'GP-M1', sex: 'male' });
     const res = await molt(mira, m.id, {

@@ -167,6 +167,17 @@ describe('owner and custody', () => {
     await http().post(`/api/animals/ownership-requests/${a.id}/accept`).set('Authorization', lender.bearer).expect(204);
     const after = await http().get(`/api/animals/${a.id}`).set('Authorization', mira.bearer).expect(200);
     expect(after.body.owner).toEqual({ kind: 'keeper', userId: lender.user.id, name: 'Lender' });
+    const held = (await http().get('/api/animals?q=PR-LOAN').set('Authorization', mira.bearer).expect(200)).body.items;
+    expect(held).toMatchObject([{ id: a.id, heldBy: null, lender: { name: 'Lender', email } }]);
+
+    // Once accepted, the owner sees him in her own collection, on loan to Mira, read-only.
+    const hers = (await http().get('/api/animals').set('Authorization', lender.bearer).expect(200)).body;
+    expect(hers.items).toMatchObject([{ id: a.id, label: 'PR-LOAN', heldBy: { id: mira.user.id, name: mira.user.displayName } }]);
+    const read = await http().get(`/api/animals/${a.id}`).set('Authorization', lender.bearer).expect(200);
+    expect(read.body).toMatchObject({ editable: false, recordedBy: { id: mira.user.id } });
+    await http().get(`/api/animals/${a.id}/molts`).set('Authorization', lender.bearer).expect(200);
+    await http().patch(`/api/animals/${a.id}`).set('Authorization', lender.bearer).send({ enclosure: 'Mine' }).expect(404);
+    await http().delete(`/api/animals/${a.id}`).set('Authorization', lender.bearer).expect(404);
     await http().post(`/api/animals/ownership-requests/${a.id}/accept`).set('Authorization', lender.bearer).expect(404);
   });
 

@@ -5,6 +5,8 @@ import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper, type SignedIn } from './support/users';
 import { makeAdmin } from './support/admins';
 import { SPECIES_DATA } from '../src/species/data/species.data';
+import { COMMON_NAMES } from '../src/species/data/common-names.data';
+import { commonNamesFillSql } from '../src/species/catalogue-sql';
 
 let t: TestApp;
 let keeper: SignedIn;
@@ -57,6 +59,23 @@ describe('species catalogue', () => {
     expect((await search('vagan')).items.map((s) => s.scientificName)).toEqual(['Tliltocatl vagans']);
     // a wildcard typed by a person is a letter, not "anything"
     expect((await search('%')).total).toBe(0);
+  });
+
+  it('searches by common name, by any word of it (names from memory, src/species/data/common-names.data.ts)', async () => {
+    expect((await search('red-knee')).items.map((s) => s.scientificName)).toEqual(['Brachypelma hamorii', 'Brachypelma smithi']);
+    expect((await search('chilean ro')).items.map((s) => s.scientificName)).toEqual(['Grammostola rosea']);
+    expect((await search('birdeater')).items.map((s) => s.scientificName)).toEqual(['Theraphosa blondi']);
+  });
+
+  it('fills common names into a catalogue that had none, leaving a row an admin named alone', async () => {
+    const conn = t.orm.em.getConnection();
+    await conn.execute(`update "species" set "common_names" = '{}'`);
+    await conn.execute(`update "species" set "common_names" = array['rosy']::text[] where "key" = 'grammostola-rosea'`);
+    for (const sql of commonNamesFillSql(SPECIES_DATA)) await conn.execute(sql);
+    expect((await search('chilean')).total).toBe(0);
+    expect((await search('rosy')).items.map((s) => s.scientificName)).toEqual(['Grammostola rosea']);
+    expect((await search('goliath')).items.map((s) => s.scientificName)).toEqual(['Theraphosa blondi']);
+    expect(SPECIES_DATA.filter((r) => r.commonNames.length).length).toBe(Object.keys(COMMON_NAMES).length);
   });
 
   it('a species response carries cautions, sources and effective values', async () => {

@@ -7,6 +7,7 @@ export * from './time/temperature.js';
 export * from './time/time-zone.js';
 export * from './time/instant.js';
 export const APP_NAME = 'Broodsilk';
+export * from './pages/app-pages.js';
 export * from './breeding/calendar-day.js';
 export * from './breeding/pull-window.js';
 export * from './collection/male-clock.js';

@@ -1,5 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { createBrowserRouter, redirect } from 'react-router';
+import { APP_PAGE_ALIASES } from '@broodsilk/shared';
 import { paths } from '@/config/paths';
 import { PageLoader } from '@/components/ui/page-loader';
 import { lazyRoutes } from './lazy-route';
@@ -32,8 +33,8 @@ export function createRouter(queryClient: QueryClient) {
       ],
     },
     { path: paths.signIn.path, ErrorBoundary: RouteError, lazy: lazy(() => import('./routes/sign-in')) },
-    // The usual guess for the sign-in address leads there instead of to the 404 page.
-    { path: '/login', loader: () => redirect(paths.signIn.href()) },
+    // Addresses people guess (/login) lead to the page they mean instead of to the 404 page.
+    ...Object.entries(APP_PAGE_ALIASES).map(([path, to]) => ({ path, loader: () => redirect(to) })),
     { path: paths.register.path, ErrorBoundary: RouteError, lazy: lazy(() => import('./routes/register')) },
     { path: paths.forgotPassword.path, ErrorBoundary: RouteError, lazy: lazy(() => import('./routes/forgot-password')) },
     { path: paths.resetPassword.path, ErrorBoundary: RouteError, lazy: lazy(() => import('./routes/reset-password')) },

@@ -6,7 +6,7 @@ import { fieldError } from '../common/field-errors';
 import type { Animal } from './animal.entity';
 import { AnimalsService, lockAnimal } from './animals.service';
 import { AnimalDepartureRegistry } from './animal-departure.registry';
-import { premoltSinceOf } from './animals.mapper';
+import { lastMoltOf, premoltSinceOf } from './animals.mapper';
 
 const conflict = (message: string) => new ConflictException({ message });
 
@@ -42,7 +42,8 @@ export class AnimalLifeService {
       const since = premoltSinceOf(a);
       if (since) throw conflict(`${a.label} is already flagged as in premolt since ${since}.`);
       this.assertPast(viewer, a, on, 'premolt');
-      if (a.lastMoltOn && on <= a.lastMoltOn) throw fieldError('on', `${a.label} molted on ${a.lastMoltOn}; premolt can only start after her last molt.`);
+      const molted = lastMoltOf(a);
+      if (molted && on <= molted) throw fieldError('on', `${a.label} molted on ${molted}; premolt can only start after her last molt.`);
       a.premoltSince = on;
     });
   }

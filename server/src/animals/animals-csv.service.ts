@@ -9,6 +9,7 @@ import type { AuthUser } from '../common/auth-user';
 import { User } from '../users/user.entity';
 import { Species } from '../species/species.entity';
 import { Animal } from './animal.entity';
+import { lastMoltOf } from './animals.mapper';
 import { AnimalsService } from './animals.service';
 import { CreateAnimalDto } from './dto/create-animal.dto';
 import { resolveAnimalInput, type AnimalValues } from './animal-input';
@@ -52,7 +53,7 @@ export class AnimalsCsvService {
     const rows = animals.map((a) => ({
       ...Object.fromEntries(CSV_FIELDS.map((f) => [f, f === 'speciesId' ? a.species.id : (a[f as keyof Animal] ?? '')])),
       species: a.species.scientificName,
-      lastMoltOn: a.lastMoltOn ?? '',
+      lastMoltOn: lastMoltOf(a) ?? '',
     }));
     return stringify(rows, {
       header: true,

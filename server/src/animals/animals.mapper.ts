@@ -15,7 +15,8 @@ import type { Animal } from './animal.entity';
 import { effectiveBreeding } from '../species/effective-breeding';
 import { ownBreeding } from '../species/species.mapper';
 
-export function toAnimalSummary(a: Animal): AnimalSummary {
+/** Needs `species` loaded; `recordedBy` and `ownerUser` too where they can be someone else. */
+export function toAnimalSummary(a: Animal, viewerId: string): AnimalSummary {
   const s = a.species;
   return {
     id: a.id,
@@ -36,8 +37,10 @@ export function toAnimalSummary(a: Animal): AnimalSummary {
     custodyParty: a.custodyParty ?? null,
     dueBackOn: a.dueBackOn ?? null,
     enclosure: a.enclosure ?? null,
-    lastMoltOn: a.lastMoltOn ?? null,
+    lastMoltOn: lastMoltOf(a),
     createdAt: a.createdAt.toISOString(),
+    heldBy: a.recordedBy.id === viewerId ? null : { id: a.recordedBy.id, name: a.recordedBy.displayName },
+    lender: a.custody === 'loan-in' && a.ownerKind !== 'self' ? { name: ownerOf(a).name, email: a.ownerEmail ?? null } : null,
   };
 }
 
@@ -49,14 +52,21 @@ export function maleClockOf(a: Animal, today: string): MaleClockView | null {
   return { ...clock, maturedOn: a.maturedOn, lifespanMonths: { ...life.value, from: life.from } };
 }
 
+/** The last molt on record: a maturing molt is a molt too, even when only its day was entered with the animal. */
+export function lastMoltOf(a: Pick<Animal, 'lastMoltOn' | 'maturedOn'>): string | null {
+  const days = [a.lastMoltOn, a.maturedOn].filter((d): d is string => !!d);
+  return days.length ? days.reduce((x, y) => (y > x ? y : x)) : null;
+}
+
 /** The premolt flag while it stands: a molt on or after it has ended it. */
 export function premoltSinceOf(a: Animal): string | null {
-  return premoltStands(a.premoltSince, a.lastMoltOn) ? a.premoltSince! : null;
+  return premoltStands(a.premoltSince, lastMoltOf(a)) ? a.premoltSince! : null;
 }
 
 function readinessOf(a: Animal, today: string): FemaleReadinessView | null {
   if (a.sex !== 'female' || a.maturity !== 'mature') return null;
-  const last = a.lastMoltOn && a.lastMoltOn <= today ? a.lastMoltOn : null;
+  const molted = lastMoltOf(a);
+  const last = molted && molted <= today ? molted : null;
   const premoltSince = premoltSinceOf(a);
   return { ...femaleReadiness(last, today, premoltSince), lastMoltOn: last, premoltNote: a.premoltNote ?? null, premoltSince };
 }
@@ -77,7 +87,7 @@ function ownerOf(a: Animal): AnimalOwner {
 /** Needs `species`, `recordedBy` and `ownerUser` loaded. */
 export function toAnimalResponse(a: Animal, today: string, viewerId: string, photos: PhotoRef[] = []): AnimalResponse {
   return {
-    ...toAnimalSummary(a),
+    ...toAnimalSummary(a, viewerId),
     recordedBy: { id: a.recordedBy.id, name: a.recordedBy.displayName },
     acquiredOn: a.acquiredOn ?? null,
     acquiredFrom: a.acquiredFrom ?? null,

@@ -61,7 +61,13 @@ export class AnimalsService {
   }
 
   async list(viewer: AuthUser, q: AnimalListQueryDto): Promise<Paged<AnimalSummary>> {
-    const qb = this.em.createQueryBuilder(Animal, 'a').joinAndSelect('a.species', 's').where({ recordedBy: viewer.id });
+    // Her own records, and animals she owns that another keeper holds (a male on loan), read-only.
+    const qb = this.em
+      .createQueryBuilder(Animal, 'a')
+      .joinAndSelect('a.species', 's')
+      .joinAndSelect('a.recordedBy', 'r')
+      .leftJoinAndSelect('a.ownerUser', 'o')
+      .where({ $or: [{ recordedBy: viewer.id }, { ownerUser: viewer.id }] });
     this.applyFilters(qb, q);
     const dir = q.order === 'desc' ? 'desc' : 'asc';
     const column = SORT_COLUMNS[q.sort ?? 'createdAt'];
@@ -69,7 +75,7 @@ export class AnimalsService {
     qb.orderBy([{ [column]: `${dir} nulls last` } as never, { id: 'asc' }]);
     qb.limit(q.limit ?? 50).offset(q.offset ?? 0);
     const [rows, total] = await qb.getResultAndCount();
-    return { items: rows.map(toAnimalSummary), total };
+    return { items: rows.map((a) => toAnimalSummary(a, viewer.id)), total };
   }
 
   private applyFilters(qb: QueryBuilder<Animal>, q: AnimalListQueryDto): void {
@@ -105,8 +111,17 @@ export class AnimalsService {
     throw new NotFoundException({ message: 'There is no such animal in your collection.' });
   }
 
+  /** An animal the viewer recorded or owns (held by another keeper: read-only); anybody else's is a 404. */
+  async readable(viewer: AuthUser, id: string): Promise<Animal> {
+    return this.em.findOneOrFail(
+      Animal,
+      { id, $or: [{ recordedBy: viewer.id }, { ownerUser: viewer.id }] },
+      { populate: ['species', 'recordedBy', 'ownerUser'] },
+    );
+  }
+
   async get(viewer: AuthUser, id: string): Promise<AnimalResponse> {
-    return this.respond(await this.own(viewer, id), viewer);
+    return this.respond(await this.readable(viewer, id), viewer);
   }
 
   /**
@@ -170,7 +185,7 @@ export class AnimalsService {
     );
     const today = this.today(viewer);
     return males
-      .map((a) => ({ animal: toAnimalSummary(a), clock: maleClockOf(a, today) }))
+      .map((a) => ({ animal: toAnimalSummary(a, viewer.id), clock: maleClockOf(a, today) }))
       .filter((r): r is MaleClockRow => r.clock !== null)
       .sort(
         (x, y) =>

@@ -19,7 +19,7 @@ export class MoltsService {
   ) {}
 
   async list(viewer: AuthUser, animalId: string): Promise<MoltResponse[]> {
-    const animal = await this.animals.own(viewer, animalId);
+    const animal = await this.animals.readable(viewer, animalId);
     const molts = await this.em.find(Molt, { animal }, { orderBy: { moltedOn: 'desc', createdAt: 'desc' } });
     const photos = await this.photos.refsFor(
       MOLT_PHOTO,

@@ -1,5 +1,5 @@
 import { ArrayMaxSize, IsArray, IsIn, IsOptional, IsString, MaxLength } from 'class-validator';
-import { PLAUSIBILITY_WARNINGS, type AcknowledgedWarnings, type PlausibilityWarningCode } from '@broodsilk/shared';
+import { PLAUSIBILITY_WARNINGS, type AcknowledgedWarnings, type PlausibilityWarningCode, TEXT_LIMITS } from '@broodsilk/shared';
 
 /** The two fields a request carries to save despite plausibility warnings; DTOs extend it. */
 export class AcknowledgedWarningsDto implements AcknowledgedWarnings {
@@ -11,6 +11,6 @@ export class AcknowledgedWarningsDto implements AcknowledgedWarnings {
 
   @IsOptional()
   @IsString()
-  @MaxLength(500, { message: 'Keep the reason under 500 characters.' })
+  @MaxLength(TEXT_LIMITS.warningReason, { message: `Keep the reason under ${TEXT_LIMITS.warningReason} characters.` })
   warningReason?: string;
 }

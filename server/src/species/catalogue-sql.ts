@@ -51,3 +51,10 @@ export function catalogueInsertSql(rows: SpeciesDataRow[]): string {
   );
   return `insert into "species" ("id", "created_at", "updated_at", "key", "scientific_name", "genus", "authority", "former_names", "common_names", "group", "urticating_hairs", "medically_significant_venom", "trade_listing", "pull_from_day", "pull_to_day", "pairing_to_sac_min_days", "pairing_to_sac_max_days", "eggs_min", "eggs_max", "lifespan_min_months", "lifespan_max_months", "sources") values\n(${values.join('),\n(')})\non conflict ("key") do nothing;`;
 }
+
+/** Fills in the common names of catalogue rows that have none yet (an admin's own list stays). */
+export function commonNamesFillSql(rows: Pick<SpeciesDataRow, 'key' | 'commonNames'>[]): string[] {
+  return rows
+    .filter((r) => r.commonNames.length > 0)
+    .map((r) => `update "species" set "common_names" = ${arr(r.commonNames)} where "key" = ${lit(r.key)} and "common_names" = '{}';`);
+}

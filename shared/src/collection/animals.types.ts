@@ -134,6 +134,10 @@ export interface AnimalSummary {
   enclosure: string | null;
   lastMoltOn: DateString | null;
   createdAt: string;
+  /** The keeper who keeps this record, when it is not the viewer (an owner sees her male on loan to them); read-only then. */
+  heldBy: { id: string; name: string } | null;
+  /** Who lent an animal on loan to the viewer (custody `loan-in`), to offer them as a project partner. */
+  lender: { name: string; email: string | null } | null;
 }
 
 export interface AnimalResponse extends AnimalSummary {

@@ -1,6 +1,6 @@
 /**
  * The longest text each field accepts, in characters. The client shows these beside its fields
- * before the server refuses; the server's DTOs hold the same numbers (to move onto these constants).
+ * before the server refuses; the server's DTOs take their @MaxLength from here, so both sides hold one number.
  */
 export const TEXT_LIMITS = Object.freeze({
   /** An animal's label or enclosure. */
@@ -16,6 +16,10 @@ export const TEXT_LIMITS = Object.freeze({
   projectTitle: 120,
   projectNotes: 5000,
   correctionReason: 500,
+  /** Why an unusual entry (a plausibility warning) is right. */
+  warningReason: 500,
+  /** What an animal was fed. */
+  prey: 200,
   ledgerNote: 1000,
   carrier: 100,
   tracking: 100,

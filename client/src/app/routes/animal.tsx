@@ -129,7 +129,7 @@ export function Component() {
           </Stack>
         </Grid.Col>
         <Grid.Col span={{ base: 12, md: 6 }}>
-          <MoltTimeline animalId={animal.id} sex={animal.sex} editable={animal.editable} />
+          <MoltTimeline animalId={animal.id} sex={animal.sex} editable={animal.editable} maturedOn={animal.maturedOn} />
         </Grid.Col>
       </Grid>
       {animal.editable && (

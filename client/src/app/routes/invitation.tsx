@@ -25,7 +25,7 @@ export function Component() {
           preview={preview.data}
           signedInAs={me.data ? `${me.data.displayName} (${me.data.email})` : null}
           signInHref={paths.signIn.href(here)}
-          registerHref={paths.register.href()}
+          registerHref={paths.register.href(here)}
           onJoined={(r) => navigate(paths.project.href(r.projectId), { replace: true })}
         />
       )}

@@ -20,7 +20,7 @@ export function Component() {
         onSignedIn={() =>
           navigate(mustEnrol(qc.getQueryData<Me | null>(meQueryKey)) ? `${paths.settings.href()}#security` : safeNext(params.get('next')), { replace: true })
         }
-        registerHref={params.get('next') ? `${paths.register.href()}?next=${encodeURIComponent(safeNext(params.get('next')))}` : paths.register.href()}
+        registerHref={paths.register.href(params.get('next') ? safeNext(params.get('next')) : undefined)}
       />
     </PublicLayout>
   );

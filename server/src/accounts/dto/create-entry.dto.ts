@@ -1,5 +1,12 @@
 import { IsIn, IsInt, IsString, IsUUID, Matches, Max, MaxLength, Min, MinLength } from 'class-validator';
-import { HAND_OVER_METHODS, RECORDABLE_ENTRY_KINDS, type CreateEntryRequest, type HandOverMethod, type RecordableEntryKind } from '@broodsilk/shared';
+import {
+  HAND_OVER_METHODS,
+  RECORDABLE_ENTRY_KINDS,
+  type CreateEntryRequest,
+  type HandOverMethod,
+  type RecordableEntryKind,
+  TEXT_LIMITS,
+} from '@broodsilk/shared';
 import { IsCalendarDate } from '../../common/validators/is-calendar-date.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
@@ -34,13 +41,13 @@ export class CreateEntryDto implements CreateEntryRequest {
   @IsOptionalNonNull()
   @IsString()
   @MinLength(1)
-  @MaxLength(100)
+  @MaxLength(TEXT_LIMITS.carrier)
   carrier?: string;
 
   @IsOptionalNonNull()
   @IsString()
   @MinLength(1)
-  @MaxLength(100)
+  @MaxLength(TEXT_LIMITS.tracking)
   tracking?: string;
 
   @IsOptionalNonNull()
@@ -80,11 +87,11 @@ export class CreateEntryDto implements CreateEntryRequest {
   @IsOptionalNonNull()
   @IsString()
   @MinLength(3, { message: 'reason must say in a few words why the entry is reversed.' })
-  @MaxLength(500)
+  @MaxLength(TEXT_LIMITS.correctionReason)
   reason?: string;
 
   @IsOptionalNonNull()
   @IsString()
-  @MaxLength(1000)
+  @MaxLength(TEXT_LIMITS.ledgerNote)
   note?: string;
 }

@@ -12,6 +12,7 @@ import {
   type Custody,
   type Maturity,
   type OwnerKind,
+  TEXT_LIMITS,
 } from '@broodsilk/shared';
 import { IsCalendarDate } from '../../common/validators/is-calendar-date.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
@@ -30,7 +31,7 @@ export class CreateAnimalDto implements CreateAnimalRequest {
   @Transform(trim)
   @IsString()
   @IsNotEmpty({ message: 'Give the animal a label or code.' })
-  @MaxLength(60, { message: 'A label can be at most 60 characters.' })
+  @MaxLength(TEXT_LIMITS.animalLabel, { message: `A label can be at most ${TEXT_LIMITS.animalLabel} characters.` })
   label!: string;
 
   @IsIn(ANIMAL_SEXES, oneOf('sex', ANIMAL_SEXES))
@@ -53,7 +54,7 @@ export class CreateAnimalDto implements CreateAnimalRequest {
   @Transform(blankToNull)
   @ValidateIf(notNull)
   @IsString()
-  @MaxLength(200)
+  @MaxLength(TEXT_LIMITS.acquiredFrom)
   acquiredFrom?: string | null;
 
   @Transform(({ value }) => (value === '' ? null : typeof value === 'string' && /^-?\d+$/.test(value.trim()) ? Number(value) : value))
@@ -76,13 +77,13 @@ export class CreateAnimalDto implements CreateAnimalRequest {
   @Transform(({ value }) => (typeof value === 'string' ? (value.trim() === '' ? null : value.trim().toLowerCase()) : value))
   @ValidateIf(notNull)
   @IsEmail({}, { message: 'The owner’s e-mail does not look like an e-mail address.' })
-  @MaxLength(200)
+  @MaxLength(TEXT_LIMITS.email)
   ownerEmail?: string | null;
 
   @Transform(blankToNull)
   @ValidateIf(notNull)
   @IsString()
-  @MaxLength(120)
+  @MaxLength(TEXT_LIMITS.personName)
   ownerName?: string | null;
 
   @Transform(blankToNull)
@@ -93,7 +94,7 @@ export class CreateAnimalDto implements CreateAnimalRequest {
   @Transform(blankToNull)
   @ValidateIf(notNull)
   @IsString()
-  @MaxLength(120)
+  @MaxLength(TEXT_LIMITS.personName)
   custodyParty?: string | null;
 
   @Transform(blankToNull)
@@ -114,18 +115,18 @@ export class CreateAnimalDto implements CreateAnimalRequest {
   @Transform(blankToNull)
   @ValidateIf(notNull)
   @IsString()
-  @MaxLength(60)
+  @MaxLength(TEXT_LIMITS.enclosure)
   enclosure?: string | null;
 
   @Transform(blankToNull)
   @ValidateIf(notNull)
   @IsString()
-  @MaxLength(4000)
+  @MaxLength(TEXT_LIMITS.animalNotes)
   notes?: string | null;
 
   @Transform(blankToNull)
   @ValidateIf(notNull)
   @IsString()
-  @MaxLength(500)
+  @MaxLength(TEXT_LIMITS.premoltNote)
   premoltNote?: string | null;
 }

@@ -1,4 +1,5 @@
 import { IsBoolean, IsNotEmpty, IsOptional, IsString, IsUUID, MaxLength, ValidateIf } from 'class-validator';
+import { TEXT_LIMITS } from '@broodsilk/shared';
 import type { CreateFeedingRequest } from '@broodsilk/shared';
 import { IsCalendarDate } from '../../common/validators/is-calendar-date.validator';
 
@@ -8,7 +9,7 @@ export class CreateFeedingDto implements CreateFeedingRequest {
 
   @IsString({ message: 'Say what prey was offered, e.g. "2 adult crickets".' })
   @IsNotEmpty({ message: 'Say what prey was offered, e.g. "2 adult crickets".' })
-  @MaxLength(200, { message: 'The prey is at most 200 characters.' })
+  @MaxLength(TEXT_LIMITS.prey, { message: `The prey is at most ${TEXT_LIMITS.prey} characters.` })
   prey!: string;
 
   @IsBoolean({ message: 'Say whether the prey was taken (true) or refused (false).' })
@@ -17,7 +18,7 @@ export class CreateFeedingDto implements CreateFeedingRequest {
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
   @IsString()
-  @MaxLength(2000, { message: 'The note is at most 2000 characters.' })
+  @MaxLength(TEXT_LIMITS.note, { message: `The note is at most ${TEXT_LIMITS.note} characters.` })
   note?: string | null;
 
   @IsOptional()
@@ -28,6 +29,6 @@ export class CreateFeedingDto implements CreateFeedingRequest {
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
   @IsString()
-  @MaxLength(500, { message: 'The reason is at most 500 characters.' })
+  @MaxLength(TEXT_LIMITS.correctionReason, { message: `The reason is at most ${TEXT_LIMITS.correctionReason} characters.` })
   reason?: string | null;
 }

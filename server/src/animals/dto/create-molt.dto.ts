@@ -1,6 +1,6 @@
 import { Type } from 'class-transformer';
 import { IsBoolean, IsIn, IsNumber, IsOptional, IsString, Max, MaxLength, Min, ValidateIf } from 'class-validator';
-import { EXUVIA_SEXES, type CreateMoltRequest, type ExuviaSex } from '@broodsilk/shared';
+import { EXUVIA_SEXES, type CreateMoltRequest, type ExuviaSex, TEXT_LIMITS } from '@broodsilk/shared';
 import { IsCalendarDate } from '../../common/validators/is-calendar-date.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
@@ -28,6 +28,6 @@ export class CreateMoltDto implements CreateMoltRequest {
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
   @IsString()
-  @MaxLength(2000)
+  @MaxLength(TEXT_LIMITS.note)
   notes?: string | null;
 }

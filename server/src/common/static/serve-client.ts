@@ -2,6 +2,7 @@ import { sep } from 'node:path';
 import type { INestApplication } from '@nestjs/common';
 import type { NextFunction, Request, Response } from 'express';
 import expressStaticGzip from 'express-static-gzip';
+import { APP_PAGE_ALIASES, isAppPage } from '@broodsilk/shared';
 
 /** Vite names every file under assets/ after a hash of its content, so a new build is a new address. */
 const HASHED_ASSETS = `${sep}assets${sep}`;
@@ -30,6 +31,9 @@ export function serveClient(app: INestApplication, dist: string): void {
     const isPage = (req.method === 'GET' || req.method === 'HEAD') && !req.path.startsWith('/api/') && req.path !== '/api';
     // A missing hashed file is a stale page asking for an old build: a 404, not the app's HTML.
     if (!isPage || req.path.startsWith('/assets/')) return next();
+    const alias = APP_PAGE_ALIASES[req.path];
+    if (alias) return res.redirect(302, alias);
+    if (!isAppPage(req.path)) res.status(404);
     req.url = '/index.html';
     files(req, res, next);
   });

@@ -1,4 +1,5 @@
 import { IsOptional, IsString, IsUUID, MaxLength, ValidateIf } from 'class-validator';
+import { TEXT_LIMITS } from '@broodsilk/shared';
 import type { AcceptTermsRequest } from '@broodsilk/shared';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
@@ -11,6 +12,6 @@ export class AcceptTermsDto implements AcceptTermsRequest {
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
   @IsString()
-  @MaxLength(2000, { message: 'The note can be at most 2000 characters.' })
+  @MaxLength(TEXT_LIMITS.note, { message: `The note can be at most ${TEXT_LIMITS.note} characters.` })
   note?: string | null;
 }

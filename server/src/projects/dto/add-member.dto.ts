@@ -1,10 +1,10 @@
 import { IsEmail, IsIn, IsOptional, IsString, MaxLength, MinLength, ValidateIf } from 'class-validator';
-import { INVITABLE_ROLES, type AddMemberRequest, type InvitableRole } from '@broodsilk/shared';
+import { INVITABLE_ROLES, type AddMemberRequest, type InvitableRole, TEXT_LIMITS } from '@broodsilk/shared';
 
 export class AddMemberDto implements AddMemberRequest {
   @IsString({ message: 'The name must be text.' })
   @MinLength(1, { message: 'Give the party a name.' })
-  @MaxLength(120, { message: 'The name can be at most 120 characters.' })
+  @MaxLength(TEXT_LIMITS.personName, { message: `The name can be at most ${TEXT_LIMITS.personName} characters.` })
   name!: string;
 
   @IsOptional()

@@ -1,5 +1,5 @@
 import { IsIn, IsInt, IsOptional, IsString, IsUUID, Max, MaxLength, Min, ValidateIf } from 'class-validator';
-import { PAIRING_OUTCOMES, type CreatePairingRequest, type PairingOutcome } from '@broodsilk/shared';
+import { PAIRING_OUTCOMES, type CreatePairingRequest, type PairingOutcome, TEXT_LIMITS } from '@broodsilk/shared';
 import { IsInstant } from '../../common/validators/is-instant.validator';
 import { AcknowledgedWarningsDto } from '../../plausibility/acknowledged-warnings.dto';
 
@@ -18,7 +18,7 @@ export class CreatePairingDto extends AcknowledgedWarningsDto implements CreateP
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
   @IsString()
-  @MaxLength(2000, { message: 'The notes can be at most 2000 characters.' })
+  @MaxLength(TEXT_LIMITS.note, { message: `The notes can be at most ${TEXT_LIMITS.note} characters.` })
   notes?: string | null;
 
   @IsOptional()
@@ -31,6 +31,6 @@ export class CreatePairingDto extends AcknowledgedWarningsDto implements CreateP
 
   @IsOptional()
   @IsString()
-  @MaxLength(500, { message: 'Keep the reason under 500 characters.' })
+  @MaxLength(TEXT_LIMITS.correctionReason, { message: `Keep the reason under ${TEXT_LIMITS.correctionReason} characters.` })
   reason?: string;
 }

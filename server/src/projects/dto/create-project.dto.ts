@@ -1,11 +1,12 @@
 import { IsOptional, IsString, IsUUID, MaxLength, MinLength, ValidateIf } from 'class-validator';
+import { TEXT_LIMITS } from '@broodsilk/shared';
 import type { CreateProjectRequest } from '@broodsilk/shared';
 import { AcknowledgedWarningsDto } from '../../plausibility/acknowledged-warnings.dto';
 
 export class CreateProjectDto extends AcknowledgedWarningsDto implements CreateProjectRequest {
   @IsString({ message: 'The title must be text.' })
   @MinLength(1, { message: 'Give the project a title.' })
-  @MaxLength(120, { message: 'The title can be at most 120 characters.' })
+  @MaxLength(TEXT_LIMITS.projectTitle, { message: `The title can be at most ${TEXT_LIMITS.projectTitle} characters.` })
   title!: string;
 
   @IsUUID('all', { message: 'Choose the female from your collection.' })
@@ -17,6 +18,6 @@ export class CreateProjectDto extends AcknowledgedWarningsDto implements CreateP
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
   @IsString({ message: 'The notes must be text.' })
-  @MaxLength(5000, { message: 'The notes can be at most 5000 characters.' })
+  @MaxLength(TEXT_LIMITS.projectNotes, { message: `The notes can be at most ${TEXT_LIMITS.projectNotes} characters.` })
   notes?: string | null;
 }

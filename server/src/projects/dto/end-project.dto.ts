@@ -1,5 +1,5 @@
 import { IsIn, IsOptional, IsString, MaxLength, ValidateIf } from 'class-validator';
-import { ENDED_EARLY_REASONS, type EndedEarlyReason, type EndProjectRequest } from '@broodsilk/shared';
+import { ENDED_EARLY_REASONS, type EndedEarlyReason, type EndProjectRequest, TEXT_LIMITS } from '@broodsilk/shared';
 
 export class EndProjectDto implements EndProjectRequest {
   @IsIn(ENDED_EARLY_REASONS, { message: `The reason must be one of: ${ENDED_EARLY_REASONS.join(', ')}.` })
@@ -8,6 +8,6 @@ export class EndProjectDto implements EndProjectRequest {
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
   @IsString({ message: 'The note must be text.' })
-  @MaxLength(2000, { message: 'The note can be at most 2000 characters.' })
+  @MaxLength(TEXT_LIMITS.note, { message: `The note can be at most ${TEXT_LIMITS.note} characters.` })
   note?: string | null;
 }

@@ -9,6 +9,7 @@ import {
   type ProposeTermsRequest,
   type ShippingPayer,
   type TermsLineInput,
+  TEXT_LIMITS,
 } from '@broodsilk/shared';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
@@ -63,6 +64,6 @@ export class ProposeTermsDto implements ProposeTermsRequest {
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
   @IsString()
-  @MaxLength(2000, { message: 'The note can be at most 2000 characters.' })
+  @MaxLength(TEXT_LIMITS.note, { message: `The note can be at most ${TEXT_LIMITS.note} characters.` })
   note?: string | null;
 }

@@ -1,4 +1,5 @@
 import { IsOptional, IsString, MaxLength, MinLength, ValidateIf } from 'class-validator';
+import { TEXT_LIMITS } from '@broodsilk/shared';
 import type { UpdateProjectRequest } from '@broodsilk/shared';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
@@ -7,12 +8,12 @@ export class UpdateProjectDto implements UpdateProjectRequest {
   @IsOptionalNonNull()
   @IsString({ message: 'The title must be text.' })
   @MinLength(1, { message: 'Give the project a title.' })
-  @MaxLength(120, { message: 'The title can be at most 120 characters.' })
+  @MaxLength(TEXT_LIMITS.projectTitle, { message: `The title can be at most ${TEXT_LIMITS.projectTitle} characters.` })
   title?: string;
 
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
   @IsString({ message: 'The notes must be text.' })
-  @MaxLength(5000, { message: 'The notes can be at most 5000 characters.' })
+  @MaxLength(TEXT_LIMITS.projectNotes, { message: `The notes can be at most ${TEXT_LIMITS.projectNotes} characters.` })
   notes?: string | null;
 }

@@ -1,5 +1,5 @@
 import { IsBoolean, IsIn, IsOptional, IsString, IsUUID, MaxLength, ValidateIf } from 'class-validator';
-import { BROOD_LOSS_REASONS, BROOD_STAGES, type BroodCountRequest, type BroodLossReason, type BroodStage } from '@broodsilk/shared';
+import { BROOD_LOSS_REASONS, BROOD_STAGES, type BroodCountRequest, type BroodLossReason, type BroodStage, TEXT_LIMITS } from '@broodsilk/shared';
 import { AcknowledgedWarningsDto } from '../../plausibility/acknowledged-warnings.dto';
 import { IsInstant } from '../../common/validators/is-instant.validator';
 import { IsCount } from './opening.dto';
@@ -24,7 +24,7 @@ export class BroodCountDto extends AcknowledgedWarningsDto implements BroodCount
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
   @IsString()
-  @MaxLength(2000)
+  @MaxLength(TEXT_LIMITS.note)
   note?: string | null;
 
   @IsOptional()
@@ -37,6 +37,6 @@ export class BroodCountDto extends AcknowledgedWarningsDto implements BroodCount
 
   @IsOptional()
   @IsString()
-  @MaxLength(500, { message: 'Keep the reason under 500 characters.' })
+  @MaxLength(TEXT_LIMITS.correctionReason, { message: `Keep the reason under ${TEXT_LIMITS.correctionReason} characters.` })
   reason?: string;
 }

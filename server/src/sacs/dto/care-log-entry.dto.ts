@@ -8,6 +8,7 @@ import {
   type CareLogKind,
   type CareLogRequest,
   type TemperatureUnit,
+  TEXT_LIMITS,
 } from '@broodsilk/shared';
 import { IsInstant } from '../../common/validators/is-instant.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
@@ -44,7 +45,7 @@ export class CareLogEntryDto implements CareLogRequest {
 
   @IsOptionalNonNull()
   @IsString()
-  @MaxLength(2000, { message: 'Keep the text under 2000 characters.' })
+  @MaxLength(TEXT_LIMITS.note, { message: `Keep the text under ${TEXT_LIMITS.note} characters.` })
   text?: string;
 
   @IsOptionalNonNull()
@@ -53,6 +54,6 @@ export class CareLogEntryDto implements CareLogRequest {
 
   @IsOptionalNonNull()
   @IsString()
-  @MaxLength(500, { message: 'Keep the reason under 500 characters.' })
+  @MaxLength(TEXT_LIMITS.correctionReason, { message: `Keep the reason under ${TEXT_LIMITS.correctionReason} characters.` })
   reason?: string;
 }

@@ -55,7 +55,7 @@ export class CreateSacDto extends AcknowledgedWarningsDto implements CreateSacRe
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
   @IsString()
-  @MaxLength(2000)
+  @MaxLength(TEXT_LIMITS.note)
   notes?: string | null;
 
   @IsOptionalNonNull()

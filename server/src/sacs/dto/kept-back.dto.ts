@@ -1,5 +1,5 @@
 import { IsIn, IsNotEmpty, IsOptional, IsString, IsUUID, MaxLength, ValidateIf } from 'class-validator';
-import { KEPT_BACK_LOG_KINDS, type KeptBackEndRequest, type KeptBackLogKind, type KeptBackLogRequest } from '@broodsilk/shared';
+import { KEPT_BACK_LOG_KINDS, type KeptBackEndRequest, type KeptBackLogKind, type KeptBackLogRequest, TEXT_LIMITS } from '@broodsilk/shared';
 import { IsInstant } from '../../common/validators/is-instant.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 import { IsCount } from './opening.dto';
@@ -17,7 +17,7 @@ export class KeptBackLogDto implements KeptBackLogRequest {
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
   @IsString()
-  @MaxLength(2000, { message: 'Keep the note under 2000 characters.' })
+  @MaxLength(TEXT_LIMITS.note, { message: `Keep the note under ${TEXT_LIMITS.note} characters.` })
   note?: string | null;
 
   @IsOptionalNonNull()
@@ -26,7 +26,7 @@ export class KeptBackLogDto implements KeptBackLogRequest {
 
   @IsOptionalNonNull()
   @IsString()
-  @MaxLength(500, { message: 'Keep the reason under 500 characters.' })
+  @MaxLength(TEXT_LIMITS.correctionReason, { message: `Keep the reason under ${TEXT_LIMITS.correctionReason} characters.` })
   reason?: string;
 }
 
@@ -44,6 +44,6 @@ export class KeptBackEndDto implements KeptBackEndRequest {
 
   @IsString({ message: 'Say briefly why the batch ended so.' })
   @IsNotEmpty({ message: 'Say briefly why the batch ended so.' })
-  @MaxLength(500, { message: 'Keep the reason under 500 characters.' })
+  @MaxLength(TEXT_LIMITS.correctionReason, { message: `Keep the reason under ${TEXT_LIMITS.correctionReason} characters.` })
   reason!: string;
 }

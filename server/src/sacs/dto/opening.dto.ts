@@ -1,5 +1,5 @@
 import { IsBoolean, IsInt, IsOptional, IsString, IsUUID, Max, MaxLength, Min, ValidateIf } from 'class-validator';
-import { BROOD_COUNT_MAX, type OpeningRequest } from '@broodsilk/shared';
+import { BROOD_COUNT_MAX, type OpeningRequest, TEXT_LIMITS } from '@broodsilk/shared';
 import { IsInstant } from '../../common/validators/is-instant.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 import { AcknowledgedWarningsDto } from '../../plausibility/acknowledged-warnings.dto';
@@ -33,7 +33,7 @@ export class OpeningDto extends AcknowledgedWarningsDto implements OpeningReques
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
   @IsString()
-  @MaxLength(2000)
+  @MaxLength(TEXT_LIMITS.note)
   notes?: string | null;
 
   @IsOptional()
@@ -42,6 +42,6 @@ export class OpeningDto extends AcknowledgedWarningsDto implements OpeningReques
 
   @IsOptional()
   @IsString()
-  @MaxLength(500, { message: 'Keep the reason under 500 characters.' })
+  @MaxLength(TEXT_LIMITS.correctionReason, { message: `Keep the reason under ${TEXT_LIMITS.correctionReason} characters.` })
   reason?: string;
 }

@@ -1,5 +1,6 @@
 import type { NumberRange, SpeciesGroup, Sourced, ValueSource } from '@broodsilk/shared';
 import { SRC, WSC_VERSION, memo } from './sources';
+import { COMMON_NAMES } from './common-names.data';
 
 /**
  * The checked-in species catalogue. Names follow the World Spider Catalog, version 26 (2025),
@@ -35,15 +36,18 @@ const NO_VENOM_NOTE = memo('no published case of severe systemic effects known t
 const NOT_LISTED = memo('not in the CITES appendices as far as we know');
 const CITES_II = 'CITES Appendix II';
 
+/** The catalogue key of a scientific name: lower case, words joined by hyphens. */
+export const speciesKey = (scientificName: string): string => scientificName.toLowerCase().replace(/\s+/g, '-');
+
 function sp(scientificName: string, authority: string, group: SpeciesGroup, o: Options = {}): SpeciesDataRow {
   const nw = group.startsWith('nw');
   return {
-    key: scientificName.toLowerCase().replace(/\s+/g, '-'),
+    key: speciesKey(scientificName),
     scientificName,
     authority,
     group,
     formerNames: o.formerNames ?? [],
-    commonNames: o.commonNames ?? [],
+    commonNames: o.commonNames ?? COMMON_NAMES[scientificName] ?? [],
     nameSource: o.nameSource ?? NAME_FROM_WSC,
     urticatingHairs: o.urticatingHairs ?? { value: nw, source: nw ? HAIRS_NW : NO_HAIRS_OW },
     medicallySignificantVenom: o.medicallySignificantVenom ?? { value: false, source: NO_VENOM_NOTE },

@@ -1,6 +1,6 @@
 import { IsIn, IsNotEmpty, IsString, MaxLength } from 'class-validator';
 import { Transform } from 'class-transformer';
-import { TEMPERATURE_UNITS, type TemperatureUnit, type UpdateProfileRequest } from '@broodsilk/shared';
+import { TEMPERATURE_UNITS, type TemperatureUnit, type UpdateProfileRequest, TEXT_LIMITS } from '@broodsilk/shared';
 import { IsTimeZone } from '../../common/validators/is-time-zone.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
@@ -9,7 +9,7 @@ export class UpdateProfileDto implements UpdateProfileRequest {
   @Transform(({ value }) => (typeof value === 'string' ? value.trim() : value))
   @IsString()
   @IsNotEmpty({ message: 'Your display name cannot be empty.' })
-  @MaxLength(80)
+  @MaxLength(TEXT_LIMITS.displayName)
   displayName?: string;
 
   @IsOptionalNonNull()

@@ -1,8 +1,6 @@
 import { Alert, Group, List, NativeSelect, SegmentedControl, Stack, Text } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import { DateField } from '@/components/fields/date-field';
-import { NumberField } from '@/components/fields/number-field';
 import { TextField } from '@/components/fields/text-field';
 import { textRule } from '@/components/fields/text-rule';
 import { dateRule, readDate } from '@/components/fields/typed-date';
@@ -10,9 +8,9 @@ import { numberRule, readNumber } from '@/components/fields/typed-number';
 import { FormActions } from '@/components/ui/form-actions';
 import { TEXT_LIMITS, type HandOverMethod, type SacSharesView } from '@broodsilk/shared';
 import { useCreateEntry, useHandOverForm } from '../api/entries';
+import { SacCountDateFields } from './sac-count-date-fields';
 import { applyEntryErrors } from '../utils/entry-errors';
 import { METHOD_LABELS, young } from '../utils/labels';
-import { formatDate } from '@/lib/dates';
 
 interface Values {
   memberId: string;
@@ -86,21 +84,12 @@ export function HandOverForm({ projectId, today, sacs, onDone }: { projectId: st
           </Text>
         )}
         <NativeSelect label="To" data={partyOptions} withAsterisk key={form.key('memberId')} {...form.getInputProps('memberId')} />
-        {withYoung.length > 1 && (
-          <NativeSelect
-            label="From the sac"
-            data={[
-              { value: '', label: 'Choose a sac' },
-              ...withYoung.map((s) => ({ value: s.sacId, label: `Laid ${formatDate(s.layDate)} (${s.aliveInCare} in care)` })),
-            ]}
-            key={form.key('sacId')}
-            {...form.getInputProps('sacId')}
-          />
-        )}
-        <Group grow align="flex-start">
-          <NumberField label="Count" whole withAsterisk key={form.key('count')} {...form.getInputProps('count')} />
-          <DateField label="Date" withAsterisk key={form.key('date')} {...form.getInputProps('date')} />
-        </Group>
+        <SacCountDateFields
+          withYoung={withYoung}
+          sac={{ key: form.key('sacId'), ...form.getInputProps('sacId') }}
+          count={{ key: form.key('count'), ...form.getInputProps('count') }}
+          date={{ key: form.key('date'), ...form.getInputProps('date') }}
+        />
         <Stack gap={4}>
           <Text size="sm" fw={500} id="hand-over-method">
             How

@@ -1,7 +1,6 @@
-import { Group, NativeSelect, Stack, Text } from '@mantine/core';
+import { NativeSelect, Stack, Text } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import { DateField } from '@/components/fields/date-field';
 import { NumberField } from '@/components/fields/number-field';
 import { TextField } from '@/components/fields/text-field';
 import { textRule } from '@/components/fields/text-rule';
@@ -9,8 +8,8 @@ import { dateRule, readDate } from '@/components/fields/typed-date';
 import { numberRule, readNumber } from '@/components/fields/typed-number';
 import { FormActions } from '@/components/ui/form-actions';
 import { TEXT_LIMITS, parseMoney, toMinor, type PartyBalanceView, type SacSharesView } from '@broodsilk/shared';
-import { formatDate } from '@/lib/dates';
 import { useCreateEntry } from '../api/entries';
+import { SacCountDateFields } from './sac-count-date-fields';
 import { applyEntryErrors } from '../utils/entry-errors';
 import { young } from '../utils/labels';
 
@@ -90,21 +89,12 @@ export function WithdrawalForm({ projectId, kind, parties, sacs, currency, terms
           key={form.key('memberId')}
           {...form.getInputProps('memberId')}
         />
-        {withYoung.length > 1 && (
-          <NativeSelect
-            label="From the sac"
-            data={[
-              { value: '', label: 'Choose a sac' },
-              ...withYoung.map((s) => ({ value: s.sacId, label: `Laid ${formatDate(s.layDate)} (${s.aliveInCare} in care)` })),
-            ]}
-            key={form.key('sacId')}
-            {...form.getInputProps('sacId')}
-          />
-        )}
-        <Group grow align="flex-start">
-          <NumberField label="Count" whole withAsterisk key={form.key('count')} {...form.getInputProps('count')} />
-          <DateField label="Date" withAsterisk key={form.key('date')} {...form.getInputProps('date')} />
-        </Group>
+        <SacCountDateFields
+          withYoung={withYoung}
+          sac={{ key: form.key('sacId'), ...form.getInputProps('sacId') }}
+          count={{ key: form.key('count'), ...form.getInputProps('count') }}
+          date={{ key: form.key('date'), ...form.getInputProps('date') }}
+        />
         <NumberField
           label={sale ? `Total price (${currency})` : `Price per spiderling (${currency})`}
           description={!sale && termsPriceMinor !== null ? 'Leave empty to use the price in the terms.' : undefined}

@@ -4,6 +4,7 @@ import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { MIN_PASSWORD_LENGTH, TEXT_LIMITS } from '@broodsilk/shared';
 import { TextField } from '@/components/fields/text-field';
+import { browserTimeZone, TimeZoneField } from '@/components/fields/time-zone-field';
 import { textRule } from '@/components/fields/text-rule';
 import { FormActions } from '@/components/ui/form-actions';
 import { applyServerErrors } from '@/lib/form-errors';
@@ -14,7 +15,7 @@ export function RegisterForm({ onRegistered, signInHref }: { onRegistered: () =>
   const [problem, setProblem] = useState<string | null>(null);
   const form = useForm({
     mode: 'uncontrolled',
-    initialValues: { displayName: '', email: '', password: '' },
+    initialValues: { displayName: '', email: '', password: '', timeZone: browserTimeZone() },
     validate: {
       displayName: textRule({ required: 'Tell us the name to show to your partners.', maxLength: TEXT_LIMITS.displayName }),
       email: (v) => (/^\S+@\S+\.\S+$/.test(v.trim()) ? null : 'Enter a valid e-mail address.'),
@@ -27,8 +28,7 @@ export function RegisterForm({ onRegistered, signInHref }: { onRegistered: () =>
     <form
       onSubmit={form.onSubmit((values) => {
         setProblem(null);
-        const timeZone = Intl.DateTimeFormat().resolvedOptions().timeZone;
-        register.mutate({ ...values, timeZone }, { onSuccess: onRegistered, onError: (e) => setProblem(applyServerErrors(form, e)) });
+        register.mutate(values, { onSuccess: onRegistered, onError: (e) => setProblem(applyServerErrors(form, e)) });
       })}
     >
       <Stack>
@@ -56,6 +56,12 @@ export function RegisterForm({ onRegistered, signInHref }: { onRegistered: () =>
           required
           key={form.key('password')}
           {...form.getInputProps('password')}
+        />
+        <TimeZoneField
+          current={form.getValues().timeZone}
+          description="Taken from this browser. Dates and what is due today follow it; change it here or later in Settings."
+          key={form.key('timeZone')}
+          {...form.getInputProps('timeZone')}
         />
         <FormActions message={problem} loading={register.isPending} submitLabel="Create account" />
         <Text size="sm">

@@ -2,6 +2,7 @@ import { screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { renderWithProviders } from '@/testing/render';
 import { AnimalTable } from './animal-table';
+import { animalSummary } from '@/testing/animal-summary';
 
 const props = { items: [], sort: 'label' as const, order: 'asc' as const, onSort: () => undefined, hrefOf: (id: string) => `/collection/${id}` };
 
@@ -15,5 +16,13 @@ describe('AnimalTable when empty', () => {
   it('blames the filters only when filters are set', () => {
     renderWithProviders(<AnimalTable {...props} filtered />);
     expect(screen.getByText('No animals match these filters.')).toBeInTheDocument();
+  });
+});
+
+describe('AnimalTable with an animal held by another keeper', () => {
+  it('shows the owner her male as on loan to the keeper, read-only', () => {
+    const male = animalSummary({ id: 'm1', label: 'MO-030', sex: 'male', custody: 'loan-in', heldBy: { id: 'u1', name: 'Mira Okonkwo' } });
+    renderWithProviders(<AnimalTable {...props} items={[male]} filtered={false} />);
+    expect(screen.getByTestId('held-by')).toHaveTextContent('On loan to Mira Okonkworead-only');
   });
 });

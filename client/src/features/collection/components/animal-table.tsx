@@ -99,7 +99,17 @@ export function AnimalTable({ items, sort, order, onSort, hrefOf, clocks, former
                   </Text>
                 </Table.Td>
                 <Table.Td>
-                  {a.custody === 'with-owner' ? (
+                  {a.heldBy ? (
+                    // Hers, kept on another keeper's record: shown from her side, and only that keeper edits it.
+                    <Group gap={4} wrap="nowrap" data-testid="held-by">
+                      <Badge variant="outline" color="amber" size="sm" style={{ textTransform: 'none' }}>
+                        On loan to {a.heldBy.name}
+                      </Badge>
+                      <Text size="xs" c="dimmed">
+                        read-only
+                      </Text>
+                    </Group>
+                  ) : a.custody === 'with-owner' ? (
                     <Text size="sm" c="dimmed">
                       {CUSTODY_LABELS[a.custody]}
                     </Text>

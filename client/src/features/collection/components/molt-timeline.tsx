@@ -7,7 +7,17 @@ import { EXUVIA_LABELS } from '../utils/animal-view';
 import { MoltForm } from './molt-form';
 
 /** Molt history, newest first, with the command to record another. */
-export function MoltTimeline({ animalId, sex, editable }: { animalId: string; sex: AnimalSex; editable: boolean }) {
+export function MoltTimeline({
+  animalId,
+  sex,
+  editable,
+  maturedOn = null,
+}: {
+  animalId: string;
+  sex: AnimalSex;
+  editable: boolean;
+  maturedOn?: string | null;
+}) {
   const { data, isPending, isError, error } = useMolts(animalId);
   const [opened, { open, close }] = useDisclosure();
   const molts = [...(data ?? [])].sort((a, b) => (a.moltedOn < b.moltedOn ? 1 : a.moltedOn > b.moltedOn ? -1 : 0));
@@ -25,7 +35,11 @@ export function MoltTimeline({ animalId, sex, editable }: { animalId: string; se
       </Group>
       {isPending && <Text c="dimmed">Loading…</Text>}
       {isError && <Text className="tone-failed">{error.message}</Text>}
-      {data && molts.length === 0 && <Text c="dimmed">No molts recorded yet.</Text>}
+      {data && molts.length === 0 && (
+        <Text c="dimmed" data-testid="no-molts">
+          {maturedOn ? `Maturing molt on ${formatDate(maturedOn)}, entered with the animal; no other molt recorded.` : 'No molts recorded yet.'}
+        </Text>
+      )}
       {molts.length > 0 && (
         <Timeline active={0} bulletSize={18} lineWidth={2} color="moss" aria-label="Molt history">
           {molts.map((m, i) => (

@@ -1,20 +1,11 @@
 import { screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import type { InvitationPreview } from '@broodsilk/shared';
 import { renderWithProviders, stubFetch } from '@/testing/render';
+import { invitationPreview as preview } from './invitation-fixtures.test-data';
 import { InvitationCard } from './invitation-card';
 
 afterEach(() => vi.unstubAllGlobals());
-
-const preview: InvitationPreview = {
-  projectTitle: 'Regalis 2027',
-  inviterName: 'Mira',
-  role: 'partner',
-  valid: true,
-  problem: null,
-  expiresAt: '2026-12-15T00:00:00Z',
-};
 
 describe('InvitationCard', () => {
   it('sends a visitor to sign in with the invitation kept as the next page', () => {

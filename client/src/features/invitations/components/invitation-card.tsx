@@ -67,7 +67,7 @@ export function InvitationCard({ token, preview, signedInAs, signInHref, registe
         </>
       ) : (
         <>
-          <Text size="sm">Sign in to join. New to Broodsilk? Create an account with the address the invitation went to, then come back to this link.</Text>
+          <Text size="sm">Sign in to join. New to Broodsilk? Create an account with the address the invitation went to; you come back here to join.</Text>
           <Button component={Link} to={signInHref} size="md">
             Sign in to join
           </Button>

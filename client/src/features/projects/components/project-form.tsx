@@ -14,7 +14,8 @@ import {
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateProject, type NewProjectResult } from '../hooks/use-create-project';
 import { priceError } from '../utils/price';
-import { CURRENCIES, LINE_RULES, failureOptions, handOverOptions, shippingOptions } from './propose-terms-form';
+import { LINE_RULES } from './propose-terms-form';
+import { DealFields } from './deal-fields';
 import { FormActions } from '@/components/ui/form-actions';
 import { NumberField } from '@/components/fields/number-field';
 import { TextAreaField, TextField } from '@/components/fields/text-field';
@@ -183,7 +184,18 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
         </SimpleGrid>
         {male?.custody === 'loan-in' && (
           <Alert color="moss" variant="light">
-            {male.label} is on a breeding loan to you. Add his owner as a partner below so they can follow the project and agree the split.
+            <Stack gap="xs" align="flex-start">
+              <Text size="sm">{male.label} is on a breeding loan to you. Add his owner as a partner so they can follow the project and agree the split.</Text>
+              {male.lender && !form.getValues().parties.some((p) => p.name === male.lender!.name) && (
+                <Button
+                  size="xs"
+                  variant="light"
+                  onClick={() => form.insertListItem('parties', { ...emptyParty(partyCount + 2), name: male.lender!.name, email: male.lender!.email ?? '' })}
+                >
+                  Add {male.lender.name} as a partner
+                </Button>
+              )}
+            </Stack>
           </Alert>
         )}
         <TextAreaField label="Notes" maxLength={TEXT_LIMITS.projectNotes} key={form.key('notes')} {...form.getInputProps('notes')} />
@@ -268,31 +280,7 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
               <NumberField label="Your fixed count" whole key={form.key('ownerFixedCount')} {...form.getInputProps('ownerFixedCount')} />
               <NumberField label="Your pick order" whole key={form.key('ownerPickOrder')} {...form.getInputProps('ownerPickOrder')} />
             </SimpleGrid>
-            <SimpleGrid cols={{ base: 1, sm: 3 }}>
-              <NumberField label="Price per spiderling" key={form.key('price')} {...form.getInputProps('price')} />
-              <Select label="Currency" data={CURRENCIES} searchable allowDeselect={false} key={form.key('currency')} {...form.getInputProps('currency')} />
-              <Select
-                label="If the project fails"
-                data={failureOptions}
-                allowDeselect={false}
-                key={form.key('failureClause')}
-                {...form.getInputProps('failureClause')}
-              />
-              <Select
-                label="Handed over at"
-                data={handOverOptions}
-                allowDeselect={false}
-                key={form.key('handOverStage')}
-                {...form.getInputProps('handOverStage')}
-              />
-              <Select
-                label="Shipping"
-                data={shippingOptions}
-                allowDeselect={false}
-                key={form.key('shippingPaidBy')}
-                {...form.getInputProps('shippingPaidBy')}
-              />
-            </SimpleGrid>
+            <DealFields field={(name) => ({ key: form.key(name), ...form.getInputProps(name) })} />
           </Stack>
         )}
         <FormActions message={message} loading={create.isPending} submitLabel="Create project" />

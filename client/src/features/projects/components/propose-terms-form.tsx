@@ -1,4 +1,4 @@
-import { Button, Collapse, Group, Select, SimpleGrid, Stack, Table, Text } from '@mantine/core';
+import { Button, Collapse, Group, Stack, Table, Text } from '@mantine/core';
 import { NumberField } from '@/components/fields/number-field';
 import { TextField } from '@/components/fields/text-field';
 import { checkText } from '@/components/fields/text-rule';
@@ -7,12 +7,8 @@ import { useForm } from '@mantine/form';
 import { useDisclosure } from '@mantine/hooks';
 import { useState } from 'react';
 import {
-  BROOD_STAGES,
-  BROOD_STAGE_LABEL_SETS,
   DEFAULT_HAND_OVER_STAGE,
-  FAILURE_CLAUSES,
   minorToMajor,
-  SHIPPING_PAYERS,
   TEXT_LIMITS,
   toMinor,
   type BroodStage,
@@ -23,21 +19,16 @@ import {
 } from '@broodsilk/shared';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useProposeTerms } from '../api/terms';
-import { FAILURE_CLAUSE_LABELS, SHIPPING_LABELS } from '../utils/labels';
 import { priceError } from '../utils/price';
 import { FormActions } from '@/components/ui/form-actions';
+import { DealFields } from './deal-fields';
 
-export const CURRENCIES = ['EUR', 'USD', 'GBP', 'PLN', 'CHF', 'CZK', 'SEK', 'CAD', 'AUD'];
-export const failureOptions = FAILURE_CLAUSES.map((c) => ({ value: c, label: FAILURE_CLAUSE_LABELS[c] }));
-export const shippingOptions = SHIPPING_PAYERS.map((s) => ({ value: s, label: SHIPPING_LABELS[s] }));
 /** The server's limits on a party's line of the terms. */
 export const LINE_RULES = {
   weight: { min: 0, max: 1_000_000, decimals: 0, rangeMessage: 'A weight is a whole number from 0 to 1,000,000.' },
   fixedCount: { min: 0, max: 100_000, decimals: 0, rangeMessage: 'A fixed count is a whole number from 0 to 100,000.' },
   pickOrder: { min: 1, max: 1000, decimals: 0, rangeMessage: 'Pick orders are whole numbers from 1 (picks first) to 1000.' },
 } as const;
-
-export const handOverOptions = BROOD_STAGES.map((s) => ({ value: s, label: BROOD_STAGE_LABEL_SETS.us[s] }));
 
 interface Values {
   lines: { memberId: string; name: string; weight: number | string; fixedCount: number | string; pickOrder: number | string }[];
@@ -157,32 +148,9 @@ export function ProposeTermsForm({ projectId, members, base }: { projectId: stri
                 </Table.Tbody>
               </Table>
             </Table.ScrollContainer>
-            <SimpleGrid cols={{ base: 1, sm: 3 }}>
-              <NumberField label="Price per spiderling" key={form.key('price')} {...form.getInputProps('price')} />
-              <Select label="Currency" data={CURRENCIES} searchable key={form.key('currency')} {...form.getInputProps('currency')} />
-              <Select
-                label="If the project fails"
-                data={failureOptions}
-                allowDeselect={false}
-                key={form.key('failureClause')}
-                {...form.getInputProps('failureClause')}
-              />
-              <Select
-                label="Handed over at"
-                data={handOverOptions}
-                allowDeselect={false}
-                key={form.key('handOverStage')}
-                {...form.getInputProps('handOverStage')}
-              />
-              <Select
-                label="Shipping"
-                data={shippingOptions}
-                allowDeselect={false}
-                key={form.key('shippingPaidBy')}
-                {...form.getInputProps('shippingPaidBy')}
-              />
+            <DealFields field={(name) => ({ key: form.key(name), ...form.getInputProps(name) })}>
               <TextField label="Note to partners" maxLength={TEXT_LIMITS.note} key={form.key('note')} {...form.getInputProps('note')} />
-            </SimpleGrid>
+            </DealFields>
             <FormActions message={message} loading={propose.isPending} submitLabel="Propose this version" />
           </Stack>
         </form>

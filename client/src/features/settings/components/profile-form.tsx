@@ -1,5 +1,6 @@
-import { Select, SegmentedControl, Stack, Text } from '@mantine/core';
+import { SegmentedControl, Stack, Text } from '@mantine/core';
 import { TextField } from '@/components/fields/text-field';
+import { TimeZoneField } from '@/components/fields/time-zone-field';
 import { textRule } from '@/components/fields/text-rule';
 import { FormActions } from '@/components/ui/form-actions';
 import { useForm } from '@mantine/form';
@@ -7,8 +8,6 @@ import { notifications } from '@mantine/notifications';
 import { TEXT_LIMITS, type Me, type TemperatureUnit } from '@broodsilk/shared';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useUpdateProfile } from '../api/profile';
-
-const zones = typeof Intl.supportedValuesOf === 'function' ? Intl.supportedValuesOf('timeZone') : ['UTC'];
 
 export function ProfileForm({ me }: { me: Me }) {
   const update = useUpdateProfile();
@@ -28,11 +27,9 @@ export function ProfileForm({ me }: { me: Me }) {
     >
       <Stack maw={480}>
         <TextField label="Display name" maxLength={TEXT_LIMITS.displayName} withAsterisk key={form.key('displayName')} {...form.getInputProps('displayName')} />
-        <Select
-          label="Time zone"
+        <TimeZoneField
+          current={me.timeZone}
           description="Dates, day numbers and what is due today follow this zone."
-          searchable
-          data={zones.includes(me.timeZone) ? zones : [me.timeZone, ...zones]}
           key={form.key('timeZone')}
           {...form.getInputProps('timeZone')}
         />

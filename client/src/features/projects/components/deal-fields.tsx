@@ -1,0 +1,39 @@
+import { Select, SimpleGrid } from '@mantine/core';
+import type { ReactNode } from 'react';
+import type { BoundField } from '@/components/fields/bound-field';
+import { NumberField } from '@/components/fields/number-field';
+import { BROOD_STAGES, BROOD_STAGE_LABEL_SETS, FAILURE_CLAUSES, SHIPPING_PAYERS } from '@broodsilk/shared';
+import { FAILURE_CLAUSE_LABELS, SHIPPING_LABELS } from '../utils/labels';
+
+export const CURRENCIES = ['EUR', 'USD', 'GBP', 'PLN', 'CHF', 'CZK', 'SEK', 'CAD', 'AUD'];
+export const failureOptions = FAILURE_CLAUSES.map((c) => ({ value: c, label: FAILURE_CLAUSE_LABELS[c] }));
+export const shippingOptions = SHIPPING_PAYERS.map((s) => ({ value: s, label: SHIPPING_LABELS[s] }));
+export const handOverOptions = BROOD_STAGES.map((s) => ({ value: s, label: BROOD_STAGE_LABEL_SETS.us[s] }));
+
+export type DealFieldName = 'price' | 'currency' | 'failureClause' | 'handOverStage' | 'shippingPaidBy';
+
+export interface DealFieldsProps {
+  /** The form's binding of each field: `(name) => ({ key: form.key(name), ...form.getInputProps(name) })`. */
+  field: (name: DealFieldName) => BoundField;
+  /** Further fields in the same grid (a note to partners). */
+  children?: ReactNode;
+}
+
+/** The project-wide part of the terms: price and currency, the failure clause, the hand-over stage and who pays shipping. */
+export function DealFields({ field, children }: DealFieldsProps) {
+  const select = ({ key, ...props }: BoundField, label: string, data: { value: string; label: string }[] | string[]) => (
+    <Select label={label} data={data} allowDeselect={false} key={key} {...props} />
+  );
+  const { key: priceKey, ...priceProps } = field('price');
+  const { key: currencyKey, ...currencyProps } = field('currency');
+  return (
+    <SimpleGrid cols={{ base: 1, sm: 3 }}>
+      <NumberField label="Price per spiderling" key={priceKey} {...priceProps} />
+      <Select label="Currency" data={CURRENCIES} searchable allowDeselect={false} key={currencyKey} {...currencyProps} />
+      {select(field('failureClause'), 'If the project fails', failureOptions)}
+      {select(field('handOverStage'), 'Handed over at', handOverOptions)}
+      {select(field('shippingPaidBy'), 'Shipping', shippingOptions)}
+      {children}
+    </SimpleGrid>
+  );
+}

@@ -1,0 +1,35 @@
+/**
+ * Common (vernacular) names keepers search by, per scientific name. From memory: trade and hobby
+ * usage varies by country, so these are search aids only, never the name a record is kept under.
+ */
+export const COMMON_NAMES: Readonly<Record<string, string[]>> = {
+  'Tliltocatl vagans': ['Mexican red-rump'],
+  'Tliltocatl albopilosus': ['curly hair'],
+  'Brachypelma hamorii': ['Mexican red-knee'],
+  'Brachypelma smithi': ['Mexican red-knee'],
+  'Brachypelma emilia': ['Mexican red-leg'],
+  'Brachypelma boehmei': ['Mexican fireleg'],
+  'Brachypelma auratum': ['Mexican flame-knee'],
+  'Grammostola rosea': ['Chilean rose'],
+  'Grammostola pulchripes': ['Chaco golden-knee'],
+  'Grammostola pulchra': ['Brazilian black'],
+  'Lasiodora parahybana': ['Brazilian salmon pink'],
+  'Acanthoscurria geniculata': ['Brazilian white-knee'],
+  'Nhandu chromatus': ['Brazilian red and white'],
+  'Aphonopelma chalcodes': ['desert blonde'],
+  'Aphonopelma hentzi': ['Texas brown'],
+  'Chromatopelma cyaneopubescens': ['green bottle blue'],
+  'Theraphosa blondi': ['Goliath birdeater'],
+  'Eupalaestrus campestratus': ['pink zebra beauty'],
+  'Caribena versicolor': ['Antilles pinktoe'],
+  'Avicularia avicularia': ['pinktoe'],
+  'Psalmopoeus irminia': ['Venezuelan suntiger'],
+  'Psalmopoeus cambridgei': ['Trinidad chevron'],
+  'Pterinochilus murinus': ['orange baboon'],
+  'Monocentropus balfouri': ['Socotra Island blue baboon'],
+  'Heteroscodra maculata': ['Togo starburst baboon'],
+  'Poecilotheria regalis': ['Indian ornamental'],
+  'Poecilotheria metallica': ['Gooty sapphire ornamental'],
+  'Pelinobius muticus': ['king baboon'],
+  'Chilobrachys fimbriatus': ['Indian violet'],
+};
