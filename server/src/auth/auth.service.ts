@@ -49,6 +49,7 @@ export class AuthService {
       displayName: dto.displayName,
       passwordHash: await hashPassword(dto.password),
       timeZone: dto.timeZone ?? 'UTC',
+      language: dto.language ?? 'en',
     });
     await this.em.flush();
     return this.issue(user);

@@ -12,6 +12,7 @@ import { Pairing } from './pairing.entity';
 import { struckPairings, toPairingResponse } from './pairings.mapper';
 import type { CreatePairingDto } from './dto/create-pairing.dto';
 import { Clock } from '../common/clock';
+import { label, wordsFor } from '@broodsilk/shared';
 
 // A clock a few minutes fast on the keeper's phone is not a pairing in the future.
 const FUTURE_SLACK_MS = 5 * 60_000;
@@ -57,7 +58,8 @@ export class PairingsService {
         reason: target ? dto.reason!.trim() : null,
         warningReason,
       });
-      const what = `pairing on ${startedOn} (${dto.durationMinutes} min): ${dto.outcome}`;
+      const t = wordsFor('en');
+      const outcome = label(t, 'pairingOutcome', dto.outcome);
       this.activity.record(tx, {
         projectId: p.id,
         actorId: viewer.id,
@@ -65,8 +67,15 @@ export class PairingsService {
         subjectType: 'pairing',
         subjectId: pairing.id,
         summary: target
-          ? `Pairing on ${target.startedOn} (${target.outcome}) corrected to a ${what} (${dto.reason!.trim()}).`
-          : `Pairing on ${startedOn} (${dto.durationMinutes} min): ${dto.outcome}.`,
+          ? t('text.pairingCorrected', {
+              date: target.startedOn,
+              was: label(t, 'pairingOutcome', target.outcome),
+              newDate: startedOn,
+              minutes: dto.durationMinutes,
+              outcome,
+              reason: dto.reason!.trim(),
+            })
+          : t('text.pairingOn', { date: startedOn, minutes: dto.durationMinutes, outcome }),
         data: { on: startedOn, outcome: dto.outcome, durationMinutes: dto.durationMinutes, ...(target ? { corrects: target.id } : {}) },
       });
       return pairing.id;

@@ -19,6 +19,7 @@ import type { CreateProjectDto } from './dto/create-project.dto';
 import type { UpdateProjectDto } from './dto/update-project.dto';
 import type { EndProjectDto } from './dto/end-project.dto';
 import { Clock } from '../common/clock';
+import { label, wordsFor } from '@broodsilk/shared';
 
 const PROJECT_POPULATE = ['owner', 'female.species', 'male.species'] as const;
 const DETAIL_POPULATE = ['owner', 'female.species', 'female.recordedBy', 'female.ownerUser', 'male.species', 'male.recordedBy', 'male.ownerUser'] as const;
@@ -149,7 +150,10 @@ export class ProjectsService {
   async end(viewer: AuthUser, access: ProjectAccess, dto: EndProjectDto): Promise<ProjectResponse> {
     await this.em.transactional(async (tx) => {
       const p = await tx.findOneOrFail(Project, access.project.id);
-      if (p.endedEarlyReason) throw new ConflictException({ message: `This project already ended early on ${p.endedOn} (${p.endedEarlyReason}).` });
+      if (p.endedEarlyReason)
+        throw new ConflictException({
+          message: wordsFor('en')('text.alreadyEnded', { date: p.endedOn, reason: label(wordsFor('en'), 'endedEarly', p.endedEarlyReason) }),
+        });
       if (p.closedOn) throw new ConflictException({ message: `This project was closed on ${p.closedOn}.` });
       p.endedEarlyReason = dto.reason;
       p.endedEarlyNote = dto.note ?? null;
@@ -160,7 +164,7 @@ export class ProjectsService {
         kind: 'project.ended',
         subjectType: 'project',
         subjectId: p.id,
-        summary: `Ended the project early: ${dto.reason}.`,
+        summary: wordsFor('en')('text.endedEarly', { reason: label(wordsFor('en'), 'endedEarly', dto.reason) }),
         data: { reason: dto.reason, note: dto.note ?? null },
       });
     });

@@ -17,6 +17,7 @@ import { assertSacDates } from './sac-rules';
 import { fieldError } from '../common/field-errors';
 import type { CreateSacDto } from './dto/create-sac.dto';
 import type { UpdateSacDto } from './dto/update-sac.dto';
+import { label, wordsFor } from '@broodsilk/shared';
 
 export const SAC_NOT_FOUND = 'There is no such sac in this project.';
 
@@ -134,9 +135,12 @@ export class SacsService {
   }
 }
 
+const failureWords = (sac: Sac): string => (sac.failureReason ? label(wordsFor('en'), 'sacFailure', sac.failureReason).toLowerCase() : '');
+
 /** One activity kind per write: the most telling change wins. */
 function describeChange(sac: Sac, wasPulled: boolean, pulledChanged: boolean, outcomeChanged: boolean): { kind: string; summary: string } {
-  if (outcomeChanged && sac.outcome === 'failed') return { kind: 'sac.failed', summary: `Sac laid ${sac.layDate} marked failed (${sac.failureReason}).` };
+  if (outcomeChanged && sac.outcome === 'failed')
+    return { kind: 'sac.failed', summary: wordsFor('en')('text.sacFailed', { layDate: sac.layDate, reason: failureWords(sac) }) };
   if (pulledChanged && sac.pulledAt) return { kind: 'sac.pulled', summary: `Sac laid ${sac.layDate} pulled on ${sac.pulledOn} and moved to the incubator.` };
   if (pulledChanged && wasPulled) return { kind: 'sac.updated', summary: `Sac laid ${sac.layDate}: pull removed, it is with the mother.` };
   if (outcomeChanged && sac.outcome === 'emerged') return { kind: 'sac.updated', summary: `Sac laid ${sac.layDate}: the young have emerged.` };

@@ -9,6 +9,8 @@ export function toMe(user: User): Me {
     role: user.role,
     timeZone: user.timeZone,
     temperatureUnit: user.temperatureUnit,
+    language: user.language,
+    stageNumbering: user.stageNumbering,
   };
 }
 

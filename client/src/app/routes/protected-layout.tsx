@@ -5,6 +5,7 @@ import { paths } from '@/config/paths';
 import { meQuery, useMe } from '@/features/auth/api/me';
 import { useLogout } from '@/features/auth/api/session';
 import { NAV_ITEMS } from '../nav-items';
+import { useReaderSettings } from '@/lib/i18n';
 
 /** Every signed-in page goes through here: no session, no page. */
 export const clientLoader =
@@ -22,6 +23,7 @@ export function Component() {
   const { data: me } = useMe();
   const logout = useLogout();
   const navigate = useNavigate();
+  const language = useReaderSettings(me);
   if (!me) return null;
   return (
     <AppLayout
@@ -30,7 +32,8 @@ export function Component() {
       settingsHref={paths.settings.href()}
       onSignOut={() => logout.mutate(undefined, { onSettled: () => navigate(paths.signIn.href()) })}
     >
-      <Outlet />
+      {/* Keyed by language so every page re-renders its words when the setting changes. */}
+      <Outlet key={language} />
     </AppLayout>
   );
 }

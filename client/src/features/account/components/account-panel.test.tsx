@@ -15,6 +15,8 @@ const me = (displayName: string): Me => ({
   role: 'keeper',
   timeZone: 'Europe/Berlin',
   temperatureUnit: 'C',
+  language: 'en',
+  stageNumbering: 'us',
 });
 const HAND_OVER = entry({});
 

@@ -273,21 +273,21 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
               <Select label="Currency" data={CURRENCIES} searchable allowDeselect={false} key={form.key('currency')} {...form.getInputProps('currency')} />
               <Select
                 label="If the project fails"
-                data={failureOptions}
+                data={failureOptions()}
                 allowDeselect={false}
                 key={form.key('failureClause')}
                 {...form.getInputProps('failureClause')}
               />
               <Select
                 label="Handed over at"
-                data={handOverOptions}
+                data={handOverOptions()}
                 allowDeselect={false}
                 key={form.key('handOverStage')}
                 {...form.getInputProps('handOverStage')}
               />
               <Select
                 label="Shipping"
-                data={shippingOptions}
+                data={shippingOptions()}
                 allowDeselect={false}
                 key={form.key('shippingPaidBy')}
                 {...form.getInputProps('shippingPaidBy')}

@@ -8,7 +8,7 @@ import { useDisclosure } from '@mantine/hooks';
 import { useState } from 'react';
 import {
   BROOD_STAGES,
-  BROOD_STAGE_LABEL_SETS,
+  broodStageLabel,
   DEFAULT_HAND_OVER_STAGE,
   FAILURE_CLAUSES,
   minorToMajor,
@@ -21,6 +21,7 @@ import {
   type ShippingPayer,
   type TermsVersionResponse,
 } from '@broodsilk/shared';
+import { currentNumbering, words } from '@/lib/i18n';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useProposeTerms } from '../api/terms';
 import { FAILURE_CLAUSE_LABELS, SHIPPING_LABELS } from '../utils/labels';
@@ -28,8 +29,8 @@ import { priceError } from '../utils/price';
 import { FormActions } from '@/components/ui/form-actions';
 
 export const CURRENCIES = ['EUR', 'USD', 'GBP', 'PLN', 'CHF', 'CZK', 'SEK', 'CAD', 'AUD'];
-export const failureOptions = FAILURE_CLAUSES.map((c) => ({ value: c, label: FAILURE_CLAUSE_LABELS[c] }));
-export const shippingOptions = SHIPPING_PAYERS.map((s) => ({ value: s, label: SHIPPING_LABELS[s] }));
+export const failureOptions = () => FAILURE_CLAUSES.map((c) => ({ value: c, label: FAILURE_CLAUSE_LABELS[c] }));
+export const shippingOptions = () => SHIPPING_PAYERS.map((s) => ({ value: s, label: SHIPPING_LABELS[s] }));
 /** The server's limits on a party's line of the terms. */
 export const LINE_RULES = {
   weight: { min: 0, max: 1_000_000, decimals: 0, rangeMessage: 'A weight is a whole number from 0 to 1,000,000.' },
@@ -37,7 +38,7 @@ export const LINE_RULES = {
   pickOrder: { min: 1, max: 1000, decimals: 0, rangeMessage: 'Pick orders are whole numbers from 1 (picks first) to 1000.' },
 } as const;
 
-export const handOverOptions = BROOD_STAGES.map((s) => ({ value: s, label: BROOD_STAGE_LABEL_SETS.us[s] }));
+export const handOverOptions = () => BROOD_STAGES.map((s) => ({ value: s, label: broodStageLabel(words, s, currentNumbering()) }));
 
 interface Values {
   lines: { memberId: string; name: string; weight: number | string; fixedCount: number | string; pickOrder: number | string }[];
@@ -162,21 +163,21 @@ export function ProposeTermsForm({ projectId, members, base }: { projectId: stri
               <Select label="Currency" data={CURRENCIES} searchable key={form.key('currency')} {...form.getInputProps('currency')} />
               <Select
                 label="If the project fails"
-                data={failureOptions}
+                data={failureOptions()}
                 allowDeselect={false}
                 key={form.key('failureClause')}
                 {...form.getInputProps('failureClause')}
               />
               <Select
                 label="Handed over at"
-                data={handOverOptions}
+                data={handOverOptions()}
                 allowDeselect={false}
                 key={form.key('handOverStage')}
                 {...form.getInputProps('handOverStage')}
               />
               <Select
                 label="Shipping"
-                data={shippingOptions}
+                data={shippingOptions()}
                 allowDeselect={false}
                 key={form.key('shippingPaidBy')}
                 {...form.getInputProps('shippingPaidBy')}

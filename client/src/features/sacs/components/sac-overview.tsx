@@ -5,8 +5,9 @@ import { formatDate, formatInstant } from '@/lib/dates';
 import { isApiError } from '@/lib/api-error';
 import { useUpdateSac } from '../api/sacs';
 import { broodLabel, PULL_WINDOW_TEXT, pullWindowSentence, ROLL_TEXT, SAC_OUTCOME_TEXT } from '../utils/sac-view';
+import { catalogueLabels } from '@/lib/i18n';
 
-const FAILURE_LABELS: Record<SacFailureReason, string> = { infertile: 'Infertile', spoiled: 'Spoiled', eaten: 'Eaten by the mother', other: 'Other' };
+const FAILURE_LABELS = catalogueLabels('sacFailure');
 
 /** Day N, the pull window with its dates, the roll state, and the keeper's pull and outcome actions. */
 export function SacOverview({ sac, timeZone, canEdit }: { sac: SacResponse; timeZone: string; canEdit: boolean }) {
