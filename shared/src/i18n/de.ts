@@ -167,6 +167,7 @@ export const de: Catalogue = {
       'Das Männchen ist seit {{count}} Tagen adult, über seine übliche Lebensspanne hinaus (bis etwa {{endsOn}}). Er kann jeden Tag sterben.',
     'no-pairing-male-late': 'Noch keine erfolgreiche Verpaarung und dem Männchen läuft die Zeit davon: verpaare ihn bald.',
   },
+  safetyTitle: 'Vorsicht',
   safety: {
     law: 'Regeln für Haltung, Handel und Versand unterscheiden sich von Ort zu Ort: Halte dich an dein örtliches Recht und frage bei einem Biss oder Haaren im Auge einen Arzt.',
     heatSource:

@@ -147,6 +147,7 @@ export const en = {
     'no-pairing-male-late': 'No successful pairing yet and the male is running out of time: pair him soon.',
   },
   /** Every safety text (our own wording); each defers to local law and licensed practice. */
+  safetyTitle: 'Take care',
   safety: {
     law: 'Keeping, trading and shipping rules differ by place: follow your local law, and for a bite or an eye exposure ask a licensed physician.',
     heatSource:

@@ -15,6 +15,7 @@ import { applyServerErrors } from '@/lib/form-errors';
 import { usePairings, useRecordPairing } from '../api/pairings';
 import { PAIRING_OUTCOME_LABELS } from '../utils/labels';
 import { FormActions } from '@/components/ui/form-actions';
+import { SafetyNote } from '@/components/ui/safety-note';
 import { WarningConfirm, useWarnedSave } from '@/components/ui/warning-confirm';
 
 const outcomeOptions = PAIRING_OUTCOMES.map((o) => ({ value: o, label: PAIRING_OUTCOME_LABELS[o] }));
@@ -119,6 +120,7 @@ export function PairingsPanel({ projectId, timeZone, canRecord }: { projectId: s
                 {warned.warnings && (
                   <WarningConfirm warnings={warned.warnings} loading={record.isPending} onConfirm={warned.confirm} onCancel={warned.cancel} />
                 )}
+                <SafetyNote text="pairing" />
                 <FormActions message={message} loading={record.isPending} submitLabel="Save pairing" />
               </Stack>
             </form>

@@ -14,6 +14,7 @@ import { applyServerErrors } from '@/lib/form-errors';
 import { isApiError } from '@/lib/api-error';
 import { useOpening, useRecordOpening, useUploadOpeningPhoto } from '../api/opening';
 import { FormActions } from '@/components/ui/form-actions';
+import { SafetyNote } from '@/components/ui/safety-note';
 
 const COUNT_FIELDS = [
   ['healthyEggs', 'Healthy eggs'],
@@ -140,6 +141,7 @@ function OpeningForm({ sacId, timeZone }: { sacId: string; timeZone: string }) {
           ))}
         </SimpleGrid>
         <TextAreaField label="Notes" maxLength={TEXT_LIMITS.note} key={form.key('notes')} {...form.getInputProps('notes')} />
+        <SafetyNote text="opening" />
         <FormActions message={message} loading={record.isPending} submitLabel="Save opening" />
       </Stack>
       {asking && (
