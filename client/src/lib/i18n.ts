@@ -10,6 +10,7 @@ import {
   type Language,
   type MaleClockState,
   type StageNumbering,
+  type TemperatureUnit,
   type Words,
 } from '@broodsilk/shared';
 
@@ -36,16 +37,20 @@ export function useWords(): Words {
 let numbering: StageNumbering = 'us';
 /** The stage-numbering set of the signed-in user (settings); `us` before sign-in. */
 export const currentNumbering = (): StageNumbering => numbering;
-const applyNumbering = (n: StageNumbering) => {
+let unit: TemperatureUnit = 'C';
+/** The signed-in user's temperature unit; °C before sign-in. */
+export const currentUnit = (): TemperatureUnit => unit;
+const applyNumbering = (n: StageNumbering, u: TemperatureUnit) => {
   numbering = n;
+  unit = u;
 };
 
 /** Switches the interface to the user's language and numbering set (settings), once they are known. */
-export function useReaderSettings(me: { language: Language; stageNumbering: StageNumbering } | null | undefined): string {
+export function useReaderSettings(me: { language: Language; stageNumbering: StageNumbering; temperatureUnit: TemperatureUnit } | null | undefined): string {
   const { i18n } = useTranslation();
-  if (me) applyNumbering(me.stageNumbering);
+  if (me) applyNumbering(me.stageNumbering, me.temperatureUnit);
   if (me && i18n.language !== me.language) void i18n.changeLanguage(me.language);
-  return `${i18n.language}-${numbering}`;
+  return `${i18n.language}-${numbering}-${unit}`;
 }
 
 /**

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { createWords, LANGUAGES, wordsOf, type Language } from './words.js';
 import { en } from './en.js';
 import { de } from './de.js';
-import { ACTIVITY_KINDS, activityKindLabel } from './vocabulary.js';
+import { ACTIVITY_KINDS, activityKindLabel, activitySentence } from './vocabulary.js';
 import { shippingCautions } from './safety.js';
 import { PROJECT_STAGE_LINE, type EndedEarlyReason, type ProjectStage } from '../breeding/project-stage.js';
 import { BROOD_STAGES, STAGE_NUMBERINGS } from '../breeding/brood-stage.js';
@@ -129,6 +129,16 @@ describe('the catalogue (i18next, en and de)', () => {
     expect(strict('en')('warning.loan-overdue', { dueBack: 'D', count: 5 })).toMatch(/5 days ago/);
     expect(strict('de')('warning.loan-overdue', { dueBack: 'D', count: 1 })).toMatch(/vor 1 Tag\./);
     expect(strict('de')('warning.loan-overdue', { dueBack: 'D', count: 5 })).toMatch(/vor 5 Tagen\./);
+  });
+
+  it("says a logged temperature again in the reader's unit and language, and a stage in their numbering", () => {
+    const temp = { kind: 'care.temperature', summary: 'stored', data: { temperatureC: 25, layDate: '2026-01-01' } };
+    // 25 °C = 77 °F (°F = °C × 9/5 + 32, NIST SP 811 appendix B)
+    expect(activitySentence(strict('de'), temp, { unit: 'F', numbering: 'us' })).toBe('Temperatur 77.0 °F (Kokon vom 2026-01-01).');
+    expect(activitySentence(strict('en'), temp, { unit: 'C', numbering: 'us' })).toBe('Temperature 25.0 °C (sac laid 2026-01-01).');
+    const stage = { kind: 'care.stage', summary: 'stored', data: { stage: 'first-instar', layDate: '2026-01-01' } };
+    expect(activitySentence(strict('de'), stage, { unit: 'C', numbering: 'de' })).toBe('Jetzt im Stadium N1 (1. Nymphe) (Kokon vom 2026-01-01).');
+    expect(activitySentence(strict('en'), { kind: 'sac.laid', summary: 'stored', data: {} }, { unit: 'C', numbering: 'us' })).toBe('stored');
   });
 
   it('gives an unknown activity kind a plain word, never its code', () => {
