@@ -138,7 +138,7 @@ for (const c of connectionSteps) {
 // 4. The client: first page's JavaScript (gzip) and the Today page's largest contentful paint.
 const scripts = firstPageScripts(path.join(root, 'client/dist'));
 rows.push({
-  measurement: `first page JavaScript, gzip (${scripts.files} files)`,
+  measurement: `first page JavaScript, gzip (${scripts.files.length} files)`,
   conns: '',
   'req/s': '',
   p50: `${(scripts.gzipBytes / 1024).toFixed(0)} KB`,

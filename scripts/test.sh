@@ -48,11 +48,12 @@ step "type-check" npm run typecheck --silent
 step "lint" npx eslint . --max-warnings 0
 step "format" npx prettier --check . --log-level warn
 step "shared unit tests" npx vitest run --root shared --reporter=default --reporter=json --outputFile="$REPORTS/shared.json"
+# Built before the server suites: the delivery spec reads client/dist, the crash spec runs server/dist.
+step "build server and client" bash -c "npm run build --silent -w server && npm run build --silent -w client >/dev/null"
 step "server unit and integration tests" bash -c "cd server && npx vitest run --reporter=default --reporter=json --outputFile='$REPORTS/server.json'"
 step "client tests" bash -c "cd client && npx vitest run --reporter=default --reporter=json --outputFile='$REPORTS/client.json'"
 
 # Browser tests: the built app, served as in production, against its own seeded database.
-step "build server and client" bash -c "npm run build --silent -w server && npm run build --silent -w client >/dev/null"
 export DATABASE_URL="postgres://app@127.0.0.1:$PGPORT/broodsilk_e2e_test"
 if (cd server && node dist/cli/migrate.js >/dev/null && BROODSILK_DEMO=1 node dist/cli/seed.js >/dev/null); then
   (cd server && PORT="$APP_PORT" CLIENT_DIST="$ROOT/client/dist" PUBLIC_URL="http://127.0.0.1:$APP_PORT" NODE_ENV=production exec node dist/main.js >"$WORK/app.log" 2>&1) &

@@ -43,7 +43,17 @@ async function ensureCountedBrood(page: Page): Promise<string> {
         acknowledgedWarnings: ['sac-without-pairing', 'sac-soon-after-pairing', 'sac-long-after-pairing'],
         warningReason: 'Recorded for the hand-over check.',
       });
-      await post(`/sacs/${sac.id}/opening`, { openedAt: day(20), healthyEggs: 0, eggsWithLegs: 0, nymphs: 32, darkEggs: 2, spoiledEggs: 0, keptBack: 32 });
+      await post(`/sacs/${sac.id}/opening`, {
+        openedAt: day(20),
+        healthyEggs: 0,
+        eggsWithLegs: 0,
+        nymphs: 32,
+        darkEggs: 2,
+        spoiledEggs: 0,
+        keptBack: 0,
+        acknowledgedWarnings: ['eggs-outside-species-range'],
+        warningReason: 'Recorded for the hand-over check.',
+      });
       await post(`/sacs/${sac.id}/counts`, { stage: 'second-instar', alive: 30, lost: 2, lossReason: 'other' });
     }
     return project.id as string;

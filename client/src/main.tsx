@@ -1,7 +1,5 @@
 import '@mantine/core/styles.css';
 import '@mantine/notifications/styles.css';
-import '@mantine/dates/styles.css';
-import '@mantine/dropzone/styles.css';
 import '@fontsource/inter/400.css';
 import '@fontsource/inter/500.css';
 import '@fontsource/inter/600.css';

@@ -1,9 +1,8 @@
-import { Module, type DynamicModule } from '@nestjs/common';
+import { Module } from '@nestjs/common';
 import { ConfigModule, ConfigService } from '@nestjs/config';
 import { APP_FILTER, APP_GUARD } from '@nestjs/core';
 import { MikroOrmModule } from '@mikro-orm/nestjs';
 import { PostgreSqlDriver } from '@mikro-orm/postgresql';
-import { ServeStaticModule } from '@nestjs/serve-static';
 import { LoggerModule } from 'nestjs-pino';
 import { appConfig } from './config/app.config';
 import { databaseConfig } from './config/database.config';
@@ -31,16 +30,11 @@ import { ClockModule } from './common/clock.module';
 import { AccountsModule } from './accounts/accounts.module';
 import { SettlementsModule } from './settlements/settlements.module';
 import { IdempotencyModule } from './idempotency/idempotency.module';
+import { ExportModule } from './export/export.module';
 
 /** Calendar-feed and invitation tokens travel in the path; they are secrets, so not logged. */
 function redactSecrets(url: string): string {
   return url.split('?')[0].replace(/^(\/api\/(?:calendar|invitations)\/)[^/]+/, '$1[secret]');
-}
-
-function staticClient(): DynamicModule[] {
-  const dist = process.env.CLIENT_DIST;
-  if (!dist) return [];
-  return [ServeStaticModule.forRoot({ rootPath: dist, exclude: ['/api/{*path}'] })];
 }
 
 @Module({
@@ -67,7 +61,6 @@ function staticClient(): DynamicModule[] {
       // Registers the PostgreSQL-typed EntityManager and MikroORM for injection too.
       driver: PostgreSqlDriver,
     }),
-    ...staticClient(),
     ClockModule,
     AuthModule,
     UsersModule,
@@ -85,6 +78,7 @@ function staticClient(): DynamicModule[] {
     AccountsModule,
     SettlementsModule,
     IdempotencyModule,
+    ExportModule,
   ],
   providers: [
     { provide: APP_FILTER, useClass: AllExceptionsFilter },

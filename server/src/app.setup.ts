@@ -1,5 +1,6 @@
 import { ValidationPipe, type INestApplication } from '@nestjs/common';
 import type { NestExpressApplication } from '@nestjs/platform-express';
+import { ConfigService } from '@nestjs/config';
 import cookieParser from 'cookie-parser';
 import helmet from 'helmet';
 import { Logger } from 'nestjs-pino';
@@ -9,6 +10,7 @@ import { bodyParsers } from './common/body/body-parsers';
 import { answerMiddlewareErrors } from './common/filters/middleware-errors';
 import { RefuseUnstorableTextPipe } from './common/pipes/refuse-unstorable-text.pipe';
 import { parseTrustProxy } from './config/trust-proxy';
+import { serveClient } from './common/static/serve-client';
 import type { Csrf } from './common/csrf/csrf';
 
 /** Everything main.ts and the tests must share, so tests exercise the real app. */
@@ -25,6 +27,8 @@ export function configureApp(app: INestApplication): INestApplication {
       },
     }),
   );
+  const clientDist = app.get(ConfigService).get<string>('app.clientDist');
+  if (clientDist) serveClient(app, clientDist);
   app.use(cookieParser());
   app.use(app.get<Csrf>(CSRF).doubleCsrfProtection);
   app.use(...bodyParsers());

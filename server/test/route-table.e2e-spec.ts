@@ -38,8 +38,8 @@ const VALID_BODY: Record<string, () => object> = {
     ]),
   ),
 };
-/** The owner's GET answers 404 by design: no opening is recorded for the fixture sac yet. */
-const EMPTY_FOR_OWNER = new Set(['GET /api/sacs/:id/opening']);
+/** The owner's GET answers 404 by design: no opening (so no kept-back batch) is recorded for the fixture sac yet. */
+const EMPTY_FOR_OWNER = new Set(['GET /api/sacs/:id/opening', 'GET /api/sacs/:id/kept-back']);
 /** Accepting an invitation: the token in the link is the permission, whoever holds it (see invitations spec). */
 const BY_TOKEN = new Set(['POST /api/invitations/:token/accept']);
 

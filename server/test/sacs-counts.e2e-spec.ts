@@ -22,7 +22,18 @@ const counts = async (sacId: string) =>
   (await http().get(`/api/sacs/${sacId}/counts`).set('Authorization', partner.bearer).expect(200)).body as BroodCountsResponse;
 const activity = async () =>
   (await http().get(`/api/projects/${projectId}/activity`).set('Authorization', partner.bearer).expect(200)).body as { kind: string; summary: string }[];
-const OPENING = { openedAt: '2025-10-18T09:00:00Z', healthyEggs: 20, eggsWithLegs: 200, nymphs: 0, darkEggs: 5, spoiledEggs: 0, keptBack: 0 };
+const OPENING = {
+  openedAt: '2025-10-18T09:00:00Z',
+  healthyEggs: 20,
+  eggsWithLegs: 200,
+  nymphs: 0,
+  darkEggs: 5,
+  spoiledEggs: 0,
+  keptBack: 0,
+  // Fewer eggs than Grammostola pulchripes usually lays (400–1000, docs/trade-facts.md §6): acknowledged.
+  acknowledgedWarnings: ['eggs-outside-species-range'],
+  warningReason: 'A small first sac.',
+};
 const opened = async () => {
   const sac = await createSac(t.app, owner, projectId, { layDate: '2025-09-10', pulledAt: '2025-10-05T10:00:00Z' });
   await open(owner, sac.id, OPENING).expect(201);

@@ -27,8 +27,11 @@ const GOOD = {
   nymphs: 0,
   darkEggs: 12,
   spoiledEggs: 3,
-  keptBack: 160,
+  keptBack: 0,
   notes: 'Two dented eggs removed',
+  // Fewer eggs than Grammostola pulchripes usually lays (400–1000, docs/trade-facts.md §6): acknowledged.
+  acknowledgedWarnings: ['eggs-outside-species-range'],
+  warningReason: 'A small first sac.',
 };
 const newSac = () => createSac(t.app, owner, projectId, { layDate: '2025-09-10', pulledAt: '2025-10-05T10:00:00Z' });
 
@@ -47,7 +50,16 @@ describe('the opening', () => {
     pin();
     const sac = await newSac();
     const res = await open(owner, sac.id, GOOD).expect(201);
-    expect(res.body).toMatchObject({ sacId: sac.id, viable: 160, total: 175, keptBack: 160, darkEggs: 12, photos: [], recordedBy: { id: owner.user.id } });
+    expect(res.body).toMatchObject({
+      sacId: sac.id,
+      viable: 160,
+      total: 175,
+      keptBack: 0,
+      darkEggs: 12,
+      warningReason: 'A small first sac.',
+      photos: [],
+      recordedBy: { id: owner.user.id },
+    });
     const counts = (await http().get(`/api/sacs/${sac.id}/counts`).set('Authorization', partner.bearer).expect(200)).body as BroodCountsResponse;
     expect(counts.current).toBe(160);
     expect(counts.counts).toEqual([expect.objectContaining({ source: 'opening', alive: 160, lost: 0, at: '2025-10-18T09:00:00.000Z', stage: 'eggs' })]);
@@ -80,7 +92,11 @@ describe('the opening', () => {
     const future = await open(owner, sac.id, { ...GOOD, openedAt: '2025-10-21T09:00:00Z' }).expect(400);
     expect(future.body.details[0].field).toBe('openedAt');
     // Nothing was written by the refused attempts.
-    expect((await http().get(`/api/sacs/${sac.id}/counts`).set('Authorization', owner.bearer)).body).toEqual({ current: null, counts: [] });
+    expect((await http().get(`/api/sacs/${sac.id}/counts`).set('Authorization', owner.bearer)).body).toEqual({
+      current: null,
+      currentEstimated: false,
+      counts: [],
+    });
   });
 
   it('only the owner opens; a photo of the opening is seen by members and hidden from strangers', async () => {

@@ -4,7 +4,6 @@
  * mailparser. Every figure is compared with what the balances route says.
  */
 import Papa from 'papaparse';
-import { PDFParse } from 'pdf-parse';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BalancesResponse, StatementResponse } from '@broodsilk/shared';
 import { STATEMENT_CSV_COLUMNS } from '../src/accounts/statement-csv';
@@ -12,20 +11,13 @@ import { createTestApp, type TestApp } from './support/test-app';
 import { waitForMail } from './support/mail-sink';
 import { createSac } from './support/sacs';
 import { accountScenario, api, type AccountScenario } from './accounts.fixtures';
+import { binary, pdfText } from './support/pdf';
 
 let t: TestApp;
 let s: AccountScenario;
 let balances: BalancesResponse;
 
 const D = '2026-11-20';
-const pdfText = async (data: Buffer): Promise<string> => {
-  const parser = new PDFParse({ data });
-  try {
-    return (await parser.getText()).text;
-  } finally {
-    await parser.destroy();
-  }
-};
 
 beforeAll(async () => {
   t = await createTestApp();
@@ -156,11 +148,7 @@ describe('statement PDF', () => {
       .get(`/api/projects/${s.projectId}/statements/${s.tomaszId}.pdf`)
       .set('Authorization', s.tomasz.bearer)
       .buffer(true)
-      .parse((r, cb) => {
-        const chunks: Buffer[] = [];
-        r.on('data', (c: Buffer) => chunks.push(c));
-        r.on('end', () => cb(null, Buffer.concat(chunks)));
-      })
+      .parse(binary)
       .expect(200);
     expect(res.headers['content-type']).toBe('application/pdf');
     const text = await pdfText(res.body as Buffer);

@@ -77,6 +77,32 @@ async function send<T>(method: Method, path: string, options: RequestOptions = {
   throw error;
 }
 
+export interface Download {
+  blob: Blob;
+  /** The name the server gave the file (Content-Disposition), if any. */
+  filename: string | null;
+}
+
+/** A GET of a file that may be large and whose length may be unknown: reports the bytes received so far. */
+async function download(path: string, onBytes: (received: number) => void, signal?: AbortSignal): Promise<Download> {
+  const res = await fetch(buildUrl(path), { credentials: 'same-origin', signal });
+  if (!res.ok || !res.body) {
+    const error = await toError(res);
+    if (res.status === 401) onUnauthorized();
+    throw error;
+  }
+  const chunks: Uint8Array<ArrayBuffer>[] = [];
+  let received = 0;
+  const reader = res.body.getReader();
+  for (let step = await reader.read(); !step.done; step = await reader.read()) {
+    chunks.push(step.value);
+    received += step.value.length;
+    onBytes(received);
+  }
+  const filename = /filename="([^"]+)"/.exec(res.headers.get('content-disposition') ?? '')?.[1] ?? null;
+  return { blob: new Blob(chunks, { type: res.headers.get('content-type') ?? 'application/octet-stream' }), filename };
+}
+
 /** The one API client: unwraps JSON, turns failures into ApiError, sends a 401 to sign-in. */
 export const api = {
   get: <T>(path: string, options?: RequestOptions) => send<T>('GET', path, options),
@@ -84,4 +110,5 @@ export const api = {
   patch: <T>(path: string, body?: unknown, options?: RequestOptions) => send<T>('PATCH', path, { ...options, body }),
   put: <T>(path: string, body?: unknown, options?: RequestOptions) => send<T>('PUT', path, { ...options, body }),
   delete: <T>(path: string, options?: RequestOptions) => send<T>('DELETE', path, options),
+  download,
 };

@@ -1,5 +1,5 @@
 import { BadRequestException, ConflictException, ForbiddenException, NotFoundException } from '@nestjs/common';
-import { checkWithdrawal, type CreateEntryRequest } from '@broodsilk/shared';
+import { checkWithdrawal, exactCountNeeded, type CreateEntryRequest } from '@broodsilk/shared';
 import type { ProjectMember } from '../projects/project-member.entity';
 import type { ProjectAccess } from '../projects/project-access.service';
 import type { AccountView, SacShareState } from './account-view';
@@ -128,7 +128,10 @@ export function draftEntry(view: AccountView, access: ProjectAccess, userId: str
     case 'cash-out': {
       const party = partyOf(view, dto.memberId, 'memberId');
       if (party.id === view.owner.id) throw new BadRequestException('The project owner cannot cash out to themselves; cash-outs are paid by the owner.');
-      return { ...base, party, pricePerSpiderlingMinor: dto.pricePerSpiderlingMinor ?? null, ...withdrawal(view, dto, party) };
+      const out = withdrawal(view, dto, party);
+      const sac = view.sacs.find((s) => s.fact.sacId === out.sacId)!;
+      if (sac.fact.estimated) throw new ConflictException(exactCountNeeded(sac.fact.layDate, sac.fact.aliveAtCount));
+      return { ...base, party, pricePerSpiderlingMinor: dto.pricePerSpiderlingMinor ?? null, ...out };
     }
     case 'money': {
       need(dto.amountMinor, 'amountMinor is required: the amount in minor units (cents).');

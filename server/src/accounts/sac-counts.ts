@@ -10,6 +10,8 @@ export interface SacCountFact {
   /** Alive at the sac's latest brood count (0 before the opening), and when that count was taken. */
   aliveAtCount: number;
   countedAt: Date | null;
+  /** That count is an estimate: its shares are provisional. */
+  estimated: boolean;
 }
 
 /**
@@ -26,17 +28,22 @@ export async function sacCountsByProject(em: EntityManager, projectIds: string[]
   const out = new Map<string, SacCountFact[]>(projectIds.map((id) => [id, []]));
   const sacs = await em.find(Sac, { project: { $in: projectIds } }, { orderBy: { layDate: 'asc', createdAt: 'asc' } });
   if (!sacs.length) return out;
-  const rows = await em.execute<{ sac_id: string; alive: number; at: Date }[]>(
-    `select distinct on (c.sac_id) c.sac_id, c.alive, c.at from brood_counts c
+  const rows = await em.execute<{ sac_id: string; alive: number; at: Date; estimated: boolean }[]>(
+    `select distinct on (c.sac_id) c.sac_id, c.alive, c.at, c.estimated from brood_counts c
       where c.sac_id = any(?::uuid[]) and ${NOT_STRUCK} order by c.sac_id, c.at desc, c.created_at desc`,
     [`{${sacs.map((s) => s.id).join(',')}}`], // a PostgreSQL array literal: knex would spread a JS array
   );
   const latest = new Map(rows.map((r) => [r.sac_id, r]));
   for (const s of sacs) {
     const c = latest.get(s.id);
-    out
-      .get(s.project.id)!
-      .push({ sacId: s.id, layDate: s.layDate, outcome: s.outcome, aliveAtCount: c ? Number(c.alive) : 0, countedAt: c ? new Date(c.at) : null });
+    out.get(s.project.id)!.push({
+      sacId: s.id,
+      layDate: s.layDate,
+      outcome: s.outcome,
+      aliveAtCount: c ? Number(c.alive) : 0,
+      countedAt: c ? new Date(c.at) : null,
+      estimated: c?.estimated ?? false,
+    });
   }
   return out;
 }

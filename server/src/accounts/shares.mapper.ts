@@ -43,6 +43,7 @@ export function toSacSharesView(view: AccountView, s: SacShareState, change: Sac
     count: s.count,
     aliveInCare: s.aliveInCare,
     withdrawn: s.withdrawn,
+    estimated: s.fact.estimated,
     parties: (s.result?.parties ?? []).map((p) => ({
       memberId: p.partyId,
       name: view.nameOf(p.partyId),
@@ -52,7 +53,7 @@ export function toSacSharesView(view: AccountView, s: SacShareState, change: Sac
       exactQuota: p.exactQuota,
       roundedUp: p.roundedUp,
     })),
-    explanation: s.result ? explainShares(s.result, view.nameOf) : [],
+    explanation: s.result ? explainShares(s.result, view.nameOf, s.fact.estimated) : [],
     change,
     failure: failureNote(view, s),
   };

@@ -22,6 +22,7 @@ export const STATEMENT_CSV_COLUMNS = [
   'reason',
   'recorded_by',
   'recorded_at',
+  'estimated',
 ] as const;
 
 /**
@@ -29,7 +30,9 @@ export const STATEMENT_CSV_COLUMNS = [
  * would run as a formula starts with an apostrophe, see formula-cells): the party's ledger
  * lines, then summary lines (`kind` share, handed-over, sold, cashed-out, still-owed, debt) with
  * an empty `line`. Counts and minor units are numbers (written unquoted); an arrival's `count` is
- * the young that travelled, split into `arrived_alive` and `arrived_dead`.
+ * the young that travelled, split into `arrived_alive` and `arrived_dead`. Each sac's count is a
+ * `sac` line; `estimated` says `yes` on a sac counted by estimate and on a share resting on one
+ * (provisional), `no` on exact ones, and stays empty on ledger lines.
  */
 export function statementCsv(s: StatementResponse): string {
   const currency = s.terms?.currency ?? '';
@@ -58,13 +61,15 @@ export function statementCsv(s: StatementResponse): string {
   if (b) {
     const summary = (kind: string, count: number) => ({ kind, party: s.party.name, count });
     rows.push(
-      summary('share', b.share),
+      { ...summary('share', b.share), estimated: s.provisional ? 'yes' : 'no' },
       summary('handed-over', b.handedOver),
       summary('sold', b.sold),
       summary('cashed-out', b.cashedOut),
       summary('still-owed', b.owedSpiderlings),
     );
   }
+  for (const sac of s.sacs)
+    rows.push({ kind: 'sac', date: sac.layDate, count: sac.count, estimated: sac.estimated ? 'yes' : 'no', reason: `Sac laid ${sac.layDate}` });
   for (const d of s.debts)
     rows.push({
       kind: 'debt',

@@ -78,7 +78,13 @@ export function statementPdf(s: StatementResponse, reader: Reader): Promise<Buff
   heading(t('statement.sharesHeading'));
   if (!s.sacs.length) line(t('statement.noSac'));
   for (const sac of s.sacs) {
-    line(t('statement.sacLine', { layDate: sac.layDate, outcome: label(t, 'sacOutcome', sac.outcome), count: sac.count }));
+    line(
+      t(sac.estimated ? 'statement.sacLineEstimated' : 'statement.sacLine', {
+        layDate: sac.layDate,
+        outcome: label(t, 'sacOutcome', sac.outcome),
+        count: sac.count,
+      }),
+    );
     for (const p of sac.parties) line(`   ${p.name}: ${p.count}`);
     for (const e of sac.explanation) line(`   ${e}`);
     if (sac.failure) line(`   ${sac.failure}`);
@@ -92,7 +98,7 @@ export function statementPdf(s: StatementResponse, reader: Reader): Promise<Buff
   const b = s.balance;
   if (!b) line(t('statement.noShare'));
   else {
-    line(t('statement.share', { count: b.share }));
+    line(t(s.provisional ? 'statement.shareProvisional' : 'statement.share', { count: b.share }));
     line(t('statement.handedOver', { count: b.handedOver }));
     line(t('statement.soldCount', { count: b.sold }));
     line(t('statement.cashedOut', { count: b.cashedOut }));

@@ -1,6 +1,6 @@
 import { ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
-import type { StatementResponse } from '@broodsilk/shared';
+import { shareLine, type StatementResponse } from '@broodsilk/shared';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { MailService } from '../mail/mail.service';
 import { loadAccount } from './account-loader';
@@ -9,6 +9,7 @@ import { FROM_OWNER, toEntryResponses } from './accounts.mapper';
 import type { ProjectMember } from '../projects/project-member.entity';
 import type { LedgerEntryRow } from './ledger-entry.entity';
 import { failureNote, toSacSharesView, toTermsSummary } from './shares.mapper';
+import { isProvisional } from './balances.mapper';
 import { SHIPPING_CAUTIONS } from './shipping-cautions';
 import { statementCsv } from './statement-csv';
 import { statementPdf } from './statement-pdf';
@@ -65,7 +66,7 @@ export class StatementsService {
         `Hello ${s.party.name},`,
         '',
         `attached is your account statement for the breeding project "${s.project.title}".`,
-        b ? `Share: ${b.share} young. Still owed: ${b.owedSpiderlings} young.` : 'No terms are in force yet.',
+        b ? `${shareLine(b.share, s.provisional)}. Still owed: ${b.owedSpiderlings} young.` : 'No terms are in force yet.',
         '',
         'Broodsilk',
       ].join('\n'),
@@ -97,6 +98,7 @@ export class StatementsService {
       sacs: view.sacs.map((s) => toSacSharesView(view, s, null)),
       entries,
       balance: balance ? { ...balance, memberId, name: memberName(member) } : null,
+      provisional: isProvisional(view),
       debts: view.balances.debts
         .filter((d) => d.fromPartyId === memberId || d.toPartyId === memberId)
         .map((d) => ({ ...d, fromName: view.nameOf(d.fromPartyId), toName: view.nameOf(d.toPartyId) })),

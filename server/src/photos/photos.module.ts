@@ -13,6 +13,6 @@ import { ImageUploadInterceptor } from './image-upload.interceptor';
   imports: [ConfigModule.forFeature(storageConfig), MikroOrmModule.forFeature([Photo])],
   controllers: [PhotosController],
   providers: [PhotosService, PhotoStorageService, PhotoAccessRegistry, ImageUploadInterceptor],
-  exports: [PhotosService, PhotoAccessRegistry, ImageUploadInterceptor, ConfigModule],
+  exports: [PhotosService, PhotoStorageService, PhotoAccessRegistry, ImageUploadInterceptor, ConfigModule],
 })
 export class PhotosModule {}

@@ -16,6 +16,7 @@ import { fieldError } from '../common/field-errors';
 import { toBroodCountResponse } from './brood.mapper';
 import type { BroodCountDto } from './dto/brood-count.dto';
 import { broodStageLabel, label, wordsFor } from '@broodsilk/shared';
+import { KeptBackBatch } from './kept-back-batch.entity';
 
 const byInstant = (a: BroodCount, b: BroodCount) => a.at.getTime() - b.at.getTime() || a.createdAt.getTime() - b.createdAt.getTime();
 
@@ -37,7 +38,11 @@ export class BroodCountsService {
     const counts = await this.em.find(BroodCount, { sac }, { populate: ['recordedBy'], orderBy: { at: 'asc', createdAt: 'asc' } });
     const struck = struckCounts(counts);
     const current = counts.filter((c) => !struck.has(c.id)).at(-1);
-    return { current: current?.alive ?? null, counts: counts.map((c) => toBroodCountResponse(c, struck.get(c.id) ?? null)) };
+    return {
+      current: current?.alive ?? null,
+      currentEstimated: current?.estimated ?? false,
+      counts: counts.map((c) => toBroodCountResponse(c, struck.get(c.id) ?? null)),
+    };
   }
 
   async add(access: ProjectAccess, viewer: AuthUser, sacId: string, dto: BroodCountDto): Promise<BroodCountResponse> {
@@ -56,7 +61,8 @@ export class BroodCountsService {
       const at = dto.at ? new Date(dto.at) : (target?.at ?? now);
       assertNotFuture('at', 'time of the count', at, now);
       if (at < opening.openedAt) throw fieldError('at', `A count cannot come before the opening (${opening.openedAt.toISOString()}).`);
-      const warningReason = this.checkAgainstPrevious(counts, target, at, viewer.timeZone, dto);
+      const batch = await tx.findOne(KeptBackBatch, { sac, state: 'joined' });
+      const warningReason = this.checkAgainstPrevious(counts, target, at, viewer.timeZone, dto, batch);
       const c = tx.create(BroodCount, {
         sac,
         at,
@@ -88,17 +94,26 @@ export class BroodCountsService {
   }
 
   /**
-   * The count may not exceed the latest count before it (struck ones and the corrected one aside):
-   * 400 after an exact count, a warning after an estimate. Returns the acknowledged warning's reason.
+   * The count may not exceed the latest count before it (struck ones and the corrected one aside)
+   * plus a kept-back batch that joined the brood since: 400 after an exact count, a warning after
+   * an estimate. Returns the acknowledged warning's reason.
    */
-  private checkAgainstPrevious(counts: BroodCount[], target: BroodCount | null, at: Date, timeZone: string, dto: BroodCountDto): string | null {
+  private checkAgainstPrevious(
+    counts: BroodCount[],
+    target: BroodCount | null,
+    at: Date,
+    timeZone: string,
+    dto: BroodCountDto,
+    joinedBatch: KeptBackBatch | null,
+  ): string | null {
     const struck = struckCounts(counts);
     const previous = counts
       .filter((c) => !struck.has(c.id) && c !== target && c.at <= at)
       .sort(byInstant)
       .at(-1);
-    // Kept-back young joining the brood are not recorded yet; when they are, their number since `previous` goes here.
-    const joinedSince = 0;
+    // A kept-back batch that joined the brood after `previous` (and by the time of this count) adds its young.
+    const joinedAt = joinedBatch?.endedAt;
+    const joinedSince = joinedAt && joinedAt <= at && (!previous || joinedAt > previous.at) ? joinedBatch.joined! : 0;
     const check = checkCount(
       dto.alive,
       previous ? { alive: previous.alive, on: todayIn(timeZone, previous.at), estimated: previous.estimated } : null,

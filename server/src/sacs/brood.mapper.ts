@@ -24,6 +24,8 @@ function openingFields(o: SacOpening): Omit<OpeningResponse, 'struck' | 'photos'
     viable,
     total: viable + o.darkEggs + o.spoiledEggs,
     notes: o.notes ?? null,
+    estimated: o.estimated,
+    warningReason: o.warningReason ?? null,
     recordedBy: { id: o.recordedBy.id, name: o.recordedBy.displayName },
     corrects: o.corrects?.id ?? null,
     reason: o.reason ?? null,

@@ -15,6 +15,8 @@ import { assertNotFuture } from './sac-rules';
 import { badRequest, fieldError } from '../common/field-errors';
 import { toOpeningResponse, viableOf } from './brood.mapper';
 import type { OpeningDto } from './dto/opening.dto';
+import { KeptBackBatch } from './kept-back-batch.entity';
+import { checkOpeningAgainstSpecies } from './opening-plausibility';
 
 /** Photo subject type of an opening's photos; members of the sac's project see them. */
 export const OPENING_PHOTO = 'opening';
@@ -79,6 +81,8 @@ export class OpeningService {
       const openedAt = given ?? target?.openedAt ?? now;
       const on = todayIn(viewer.timeZone, openedAt);
       if (on < sac.layDate) throw fieldError('openedAt', `The opening (${on}) is dated before the sac was laid (${sac.layDate}).`);
+      const warningReason = await checkOpeningAgainstSpecies(tx, sac, dto);
+      const batch = await this.keepBack(tx, sac, dto.keptBack);
       const recordedBy = tx.getReference(User, viewer.id);
       const reason = target ? dto.reason!.trim() : null;
       const o = tx.create(SacOpening, {
@@ -91,6 +95,8 @@ export class OpeningService {
         spoiledEggs: dto.spoiledEggs,
         keptBack: dto.keptBack,
         notes: dto.notes ?? null,
+        estimated: dto.estimated ?? false,
+        warningReason,
         recordedBy,
         corrects: target,
         reason,
@@ -100,18 +106,23 @@ export class OpeningService {
       if (target && firstCount && (await tx.count(BroodCount, { corrects: firstCount }))) {
         throw new ConflictException({ message: 'The first count of this brood was already corrected.' });
       }
+      // The kept-back eggs are their own batch: they join the brood's count only when the batch does.
+      const alive = viable - dto.keptBack;
       tx.create(BroodCount, {
         sac,
         at: openedAt,
         stage: firstCount?.stage ?? sac.broodStage,
-        alive: viable,
+        alive,
+        estimated: dto.estimated ?? false,
         source: 'opening',
         recordedBy,
         note: 'First count, at the opening.',
         corrects: firstCount,
         reason,
       });
-      const summary = `${viable} viable (${dto.keptBack} kept back in incubation), ${dto.darkEggs} dark and ${dto.spoiledEggs} spoiled eggs`;
+      const about = dto.estimated ? 'about ' : '';
+      const kept = dto.keptBack ? ` and ${dto.keptBack} kept back for more incubation` : '';
+      const summary = `${about}${alive} viable young${kept}, ${about}${dto.darkEggs} dark and ${dto.spoiledEggs} spoiled eggs`;
       this.activity.record(tx, {
         projectId: access.project.id,
         actorId: viewer.id,
@@ -125,6 +136,8 @@ export class OpeningService {
         data: {
           openingId: o.id,
           viable,
+          estimated: dto.estimated ?? false,
+          ...(batch ? { keptBackBatchId: batch.id } : {}),
           keptBack: dto.keptBack,
           darkEggs: dto.darkEggs,
           spoiledEggs: dto.spoiledEggs,
@@ -133,6 +146,19 @@ export class OpeningService {
       });
     });
     return this.get(access, sacId);
+  }
+
+  /**
+   * Eggs kept back start the sac's batch (one per sac, its size read from the opening in force).
+   * A correction may not keep back fewer than already joined the brood from it.
+   */
+  private async keepBack(tx: EntityManager, sac: Sac, keptBack: number): Promise<KeptBackBatch | null> {
+    const batch = await tx.findOne(KeptBackBatch, { sac });
+    if (batch?.state === 'joined' && keptBack < batch.joined!) {
+      throw fieldError('keptBack', `${batch.joined} of the kept-back eggs already joined the brood; the opening cannot have kept back fewer (${keptBack}).`);
+    }
+    if (batch || keptBack === 0) return batch;
+    return tx.create(KeptBackBatch, { sac });
   }
 
   private correctionTarget(current: SacOpening | undefined, id: string): SacOpening {

@@ -12,7 +12,7 @@ import { Sac } from './sac.entity';
   name: 'sac_openings_first_per_sac_unique',
   expression: 'create unique index "sac_openings_first_per_sac_unique" on "sac_openings" ("sac_id") where "corrects_id" is null',
 })
-export class SacOpening extends BaseEntity {
+export class SacOpening extends BaseEntity<'estimated'> {
   @ManyToOne(() => Sac, { deleteRule: 'cascade' })
   sac!: Sac;
 
@@ -39,6 +39,14 @@ export class SacOpening extends BaseEntity {
 
   @Property({ type: 'text', nullable: true })
   notes?: string | null;
+
+  /** The numbers are an estimate, not counted one by one; the first brood count is then one too. */
+  @Property({ type: 'boolean' })
+  estimated: boolean = false;
+
+  /** Why counts outside the species' usual range are right (an acknowledged plausibility warning). */
+  @Property({ type: 'text', nullable: true })
+  warningReason?: string | null;
 
   @ManyToOne(() => User, { deleteRule: 'restrict' })
   recordedBy!: User;

@@ -26,15 +26,15 @@ export async function lastRollsOf(em: EntityManager, sacIds: string[]): Promise<
 export const NOT_STRUCK = 'not exists (select 1 from brood_counts k where k.corrects_id = c.id)';
 
 /** The latest count per sac not struck (by instant, then by when it was written): alive, and when it was taken. */
-export async function latestCountsOf(em: EntityManager, sacIds: string[]): Promise<Map<string, { alive: number; at: Date }>> {
+export async function latestCountsOf(em: EntityManager, sacIds: string[]): Promise<Map<string, { alive: number; at: Date; estimated: boolean }>> {
   if (!sacIds.length) return new Map();
-  const rows = await em.getConnection().execute<{ sac_id: string; alive: number; at: Date }[]>(
-    `select distinct on (c.sac_id) c.sac_id, c.alive, c.at from brood_counts c
+  const rows = await em.getConnection().execute<{ sac_id: string; alive: number; at: Date; estimated: boolean }[]>(
+    `select distinct on (c.sac_id) c.sac_id, c.alive, c.at, c.estimated from brood_counts c
       where c.sac_id in ${marks(sacIds)} and ${NOT_STRUCK}
       order by c.sac_id, c.at desc, c.created_at desc`,
     sacIds,
   );
-  return new Map(rows.map((r) => [r.sac_id, { alive: Number(r.alive), at: new Date(r.at) }]));
+  return new Map(rows.map((r) => [r.sac_id, { alive: Number(r.alive), at: new Date(r.at), estimated: r.estimated }]));
 }
 
 export async function currentCountsOf(em: EntityManager, sacIds: string[]): Promise<Map<string, number>> {

@@ -4,7 +4,7 @@ import { todayIn, type SacResponse } from '@broodsilk/shared';
 import { effectiveBreeding } from '../species/effective-breeding';
 import { ownBreeding } from '../species/species.mapper';
 import type { Sac } from './sac.entity';
-import { currentCountsOf, lastRollsOf, openedSacsOf } from './sac-queries';
+import { lastRollsOf, latestCountsOf, openedSacsOf } from './sac-queries';
 import { toSacResponse, type PullWindowInForce } from './sacs.mapper';
 import { Clock } from '../common/clock';
 
@@ -25,7 +25,7 @@ export class SacViewsService {
 
   async build(em: EntityManager, sacs: Sac[], timeZone: string, now = this.clock.now()): Promise<SacResponse[]> {
     const ids = sacs.map((s) => s.id);
-    const [rolls, counts, opened] = await Promise.all([lastRollsOf(em, ids), currentCountsOf(em, ids), openedSacsOf(em, ids)]);
+    const [rolls, counts, opened] = await Promise.all([lastRollsOf(em, ids), latestCountsOf(em, ids), openedSacsOf(em, ids)]);
     const today = todayIn(timeZone, now);
     return sacs.map((s) =>
       toSacResponse(s, {
@@ -34,7 +34,8 @@ export class SacViewsService {
         window: windowOf(s),
         lastRollAt: rolls.get(s.id) ?? null,
         opened: opened.has(s.id),
-        currentCount: counts.get(s.id) ?? null,
+        currentCount: counts.get(s.id)?.alive ?? null,
+        currentCountEstimated: counts.get(s.id)?.estimated ?? false,
       }),
     );
   }

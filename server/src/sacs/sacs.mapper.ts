@@ -15,6 +15,7 @@ export interface SacViewContext {
   lastRollAt: Date | null;
   opened: boolean;
   currentCount: number | null;
+  currentCountEstimated: boolean;
 }
 
 /** The roll state of a sac (null when rolling does not apply), by the roll rule in docs/product.md, Data rules. */
@@ -48,10 +49,12 @@ export function toSacResponse(sac: Sac, c: SacViewContext): SacResponse {
     pullWindow: { ...view, fromDay: c.window.fromDay, toDay: c.window.toDay, origin: c.window.origin },
     rollIntervalHours: sac.rollIntervalHours,
     rollingOff: sac.rollingOff,
-    roll: rollOf(sac, c.now, c.lastRollAt),
+    // An opened sac is not rolled: its eggs are counted, and any kept back are a batch with its own log.
+    roll: c.opened ? null : rollOf(sac, c.now, c.lastRollAt),
     broodStage: sac.broodStage,
     opened: c.opened,
     currentCount: c.currentCount,
+    currentCountEstimated: c.currentCountEstimated,
     notes: sac.notes ?? null,
     warningReason: sac.warningReason ?? null,
     incubatorCaution: sac.pulledAt ? INCUBATOR_CAUTION : null,

@@ -21,13 +21,22 @@ import { BroodController } from './brood.controller';
 import { PhotosModule } from '../photos/photos.module';
 import { PhotoAccessRegistry } from '../photos/photo-access.registry';
 import { ProjectMember } from '../projects/project-member.entity';
+import { KeptBackBatch } from './kept-back-batch.entity';
+import { KeptBackLogEntry } from './kept-back-log-entry.entity';
+import { KeptBackService } from './kept-back.service';
+import { KeptBackController } from './kept-back.controller';
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 @Module({
-  imports: [MikroOrmModule.forFeature([Sac, SacLogEntry, SacOpening, BroodCount]), ProjectsModule, ActivityModule, PhotosModule],
-  controllers: [ProjectSacsController, SacsController, CareLogController, BroodController],
-  providers: [SacViewsService, SacsService, BroodService, CareLogService, OpeningService, BroodCountsService],
+  imports: [
+    MikroOrmModule.forFeature([Sac, SacLogEntry, SacOpening, BroodCount, KeptBackBatch, KeptBackLogEntry]),
+    ProjectsModule,
+    ActivityModule,
+    PhotosModule,
+  ],
+  controllers: [ProjectSacsController, SacsController, CareLogController, BroodController, KeptBackController],
+  providers: [SacViewsService, SacsService, BroodService, CareLogService, OpeningService, BroodCountsService, KeptBackService],
   exports: [SacViewsService, SacsService, BroodService],
 })
 export class SacsModule implements OnModuleInit {

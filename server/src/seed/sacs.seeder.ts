@@ -117,7 +117,7 @@ export const seedSacs: FeatureSeeder = async (ctx) => {
     [58, 'second-instar'],
   ];
   for (const [d, stage] of stages) entry(versicolor, bSac, d === 45 ? mira : ines, day(d, 8), 'stage', { stage });
-  const opening = { healthyEggs: 9, eggsWithLegs: 96, nymphs: 0, darkEggs: 7, spoiledEggs: 2, keptBack: 105 };
+  const opening = { healthyEggs: 9, eggsWithLegs: 96, nymphs: 0, darkEggs: 7, spoiledEggs: 2, keptBack: 0 };
   const openedAt = day(40, 9);
   em.create(SacOpening, {
     sac: bSac,
@@ -127,7 +127,7 @@ export const seedSacs: FeatureSeeder = async (ctx) => {
     recordedBy: mira,
     createdAt: openedAt,
   });
-  event(versicolor, mira, openedAt, 'sac.opened', bSac, `Sac laid ${bLaid} opened: 105 viable (105 kept back in incubation), 7 dark and 2 spoiled eggs.`);
+  event(versicolor, mira, openedAt, 'sac.opened', bSac, `Sac laid ${bLaid} opened: 105 viable young, 7 dark and 2 spoiled eggs.`);
   em.create(BroodCount, {
     sac: bSac,
     at: openedAt,

@@ -2,7 +2,6 @@ import { Test } from '@nestjs/testing';
 import type { INestApplication } from '@nestjs/common';
 import { MIKRO_ORM_MODULE_OPTIONS } from '@mikro-orm/nestjs';
 import { MikroORM } from '@mikro-orm/postgresql';
-import { AbstractLoader, ExpressLoader } from '@nestjs/serve-static';
 import type { MigrationObject } from '@mikro-orm/core';
 import { AppModule } from '../../src/app.module';
 import { configureApp } from '../../src/app.setup';
@@ -29,10 +28,6 @@ export async function createTestApp(options: { fresh?: boolean } = { fresh: true
   const moduleRef = await Test.createTestingModule({ imports: [AppModule] })
     .overrideProvider(MIKRO_ORM_MODULE_OPTIONS)
     .useValue({ ...base, autoLoadEntities: true, registerRequestContext: true, migrations: { ...base.migrations, migrationsList } })
-    // A testing module has no HTTP adapter yet when ServeStaticModule picks its loader (it would pick none);
-    // production's NestFactory has one. Only active when CLIENT_DIST is set (see support/serve-client.ts).
-    .overrideProvider(AbstractLoader)
-    .useValue(new ExpressLoader())
     .compile();
   const app = moduleRef.createNestApplication({ rawBody: true });
   configureApp(app);

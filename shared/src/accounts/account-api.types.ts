@@ -113,6 +113,8 @@ export interface SacSharesView {
   count: number;
   aliveInCare: number;
   withdrawn: number;
+  /** The count is an estimate: shown "about N", its shares provisional (no cash-out, not settled). */
+  estimated: boolean;
   parties: SacShareParty[];
   explanation: string[];
   change: SacShareChange | null;
@@ -152,6 +154,8 @@ export interface BalancesResponse {
   problems: LedgerProblem[];
   /** Nothing owed in young or money, with at least one counted sac and terms in force. */
   settled: boolean;
+  /** A count behind the shares is an estimate: shares are "about" and provisional. */
+  provisional: boolean;
 }
 
 /** What the hand-over form shows before recording. */
@@ -172,6 +176,8 @@ export interface StatementResponse {
   sacs: SacSharesView[];
   entries: LedgerEntryResponse[];
   balance: PartyBalanceView | null;
+  /** A count behind the shares is an estimate: the share is provisional. */
+  provisional: boolean;
   debts: BalancesResponse['debts'];
   failureNotes: string[];
   shippingCautions: string[];

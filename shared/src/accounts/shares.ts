@@ -1,3 +1,4 @@
+import { PROVISIONAL_SHARES } from './estimated-counts.js';
 import { approxFraction, formatFraction } from './fraction.js';
 
 /** One party of the terms, as the share rule needs it. */
@@ -139,11 +140,14 @@ function namer(names?: PartyNames): (id: string) => string {
 
 const young = (n: number) => (n === 1 ? '1 young' : `${n} young`);
 
-/** The share calculation in plain words, one sentence per line, for the account page. */
-export function explainShares(result: ShareResult, names?: PartyNames): string[] {
+/**
+ * The share calculation in plain words, one sentence per line, for the account page. From an
+ * estimated count the total reads "about N" and a last line says the shares are provisional.
+ */
+export function explainShares(result: ShareResult, names?: PartyNames, estimated = false): string[] {
   const name = namer(names);
   const byPick = [...result.parties].sort((a, b) => a.pickOrder - b.pickOrder);
-  const lines = [`The sac counts ${young(result.total)}.`];
+  const lines = [`The sac counts ${estimated ? 'about ' : ''}${young(result.total)}.`];
 
   const withFixed = byPick.filter((p) => p.fixedAsked > 0);
   if (withFixed.length > 0) {
@@ -180,6 +184,7 @@ export function explainShares(result: ShareResult, names?: PartyNames): string[]
     }
   }
   lines.push(`In all: ${result.parties.map((p) => `${name(p.partyId)} ${p.count}`).join(', ')}.`);
+  if (estimated) lines.push(PROVISIONAL_SHARES);
   return lines;
 }
 

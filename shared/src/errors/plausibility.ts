@@ -17,6 +17,8 @@ export const PLAUSIBILITY_WARNINGS = [
   'female-has-brood-in-progress',
   /** A count higher than the estimated count before it. */
   'count-above-estimate',
+  /** An opening whose eggs are outside the species' usual eggs per sac. */
+  'eggs-outside-species-range',
 ] as const;
 export type PlausibilityWarningCode = (typeof PLAUSIBILITY_WARNINGS)[number];
 

@@ -16,11 +16,16 @@ export interface OpeningCounts {
   /** Dark, non-viable eggs. */
   darkEggs: number;
   spoiledEggs: number;
-  /** How many of the viable ones (healthy eggs, eggs with legs, nymphs) go back into incubation. */
+  /**
+   * How many of the viable ones (healthy eggs, eggs with legs, nymphs) are kept back as their own
+   * batch for more incubation (doubtful eggs); they join the brood's count only when the batch does.
+   */
   keptBack: number;
 }
 
-export interface OpeningRequest extends OpeningCounts {
+export interface OpeningRequest extends OpeningCounts, AcknowledgedWarnings {
+  /** The numbers are an estimate (not counted one by one): the brood's first count is "about". */
+  estimated?: boolean;
   /** Instant the sac was opened; defaults to now. */
   openedAt?: string;
   notes?: string | null;
@@ -33,8 +38,11 @@ export interface OpeningResponse extends OpeningCounts {
   id: string;
   sacId: string;
   openedAt: string;
-  /** Healthy eggs + eggs with legs + nymphs: the brood's first alive count. */
+  /** Healthy eggs + eggs with legs + nymphs; less `keptBack`, the brood's first alive count. */
   viable: number;
+  estimated: boolean;
+  /** Why counts outside the species' usual range were saved. */
+  warningReason: string | null;
   total: number;
   notes: string | null;
   photos: PhotoRef[];
@@ -86,5 +94,7 @@ export interface BroodCountResponse {
 export interface BroodCountsResponse {
   /** Latest alive count not struck: the sac's count of young in care, for shares. */
   current: number | null;
+  /** Whether that count is an estimate (shown "about N"; shares from it are provisional). */
+  currentEstimated: boolean;
   counts: BroodCountResponse[];
 }

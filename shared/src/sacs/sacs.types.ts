@@ -78,6 +78,8 @@ export interface SacResponse {
   opened: boolean;
   /** Latest alive count of the brood; null before the opening. */
   currentCount: number | null;
+  /** The latest count is an estimate: show "about N". */
+  currentCountEstimated: boolean;
   notes: string | null;
   /** Why an unusual lay date was saved despite a warning. */
   warningReason: string | null;

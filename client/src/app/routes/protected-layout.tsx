@@ -1,6 +1,7 @@
-import { Outlet, redirect, useNavigate, type LoaderFunctionArgs } from 'react-router';
+import { redirect, useNavigate, type LoaderFunctionArgs } from 'react-router';
 import type { QueryClient } from '@tanstack/react-query';
 import { AppLayout } from '@/components/layouts/app-layout';
+import { PendingOutlet } from '@/components/layouts/pending-outlet';
 import { paths } from '@/config/paths';
 import { meQuery, useMe } from '@/features/auth/api/me';
 import { useLogout } from '@/features/auth/api/session';
@@ -33,7 +34,7 @@ export function Component() {
       onSignOut={() => logout.mutate(undefined, { onSettled: () => navigate(paths.signIn.href()) })}
     >
       {/* Keyed by language so every page re-renders its words when the setting changes. */}
-      <Outlet key={language} />
+      <PendingOutlet key={language} />
     </AppLayout>
   );
 }

@@ -14,6 +14,8 @@ import { sacQueries } from '@/features/sacs/api/sacs';
 import { BroodCounts } from '@/features/sacs/components/brood-counts';
 import { CareLogList } from '@/features/sacs/components/care-log-list';
 import { OpeningPanel } from '@/features/sacs/components/opening-panel';
+import { KeptBackPanel } from '@/features/sacs/components/kept-back-panel';
+import { useOpening } from '@/features/sacs/api/opening';
 import { SacOverview } from '@/features/sacs/components/sac-overview';
 import { SectionCard } from '@/components/ui/section-card';
 import { preloadPanels } from '../preload';
@@ -39,6 +41,7 @@ export const clientLoader =
 
 export function Component() {
   const { me, sac, project } = useSacPage();
+  const opening = useOpening(sac.data ?? { id: '', opened: false });
   if (!me || sac.isPending) return <PageLoader />;
   if (sac.isError) return <Alert color="clay">{sac.error.message}</Alert>;
   const s = sac.data;
@@ -70,6 +73,11 @@ export function Component() {
       {s.pulled && (
         <SectionCard title="Opening">
           <OpeningPanel sac={s} timeZone={me.timeZone} canEdit={isOwner} />
+        </SectionCard>
+      )}
+      {(opening.data?.keptBack ?? 0) > 0 && (
+        <SectionCard title="Eggs kept back" testId="kept-back-card">
+          <KeptBackPanel sacId={s.id} timeZone={me.timeZone} canLog={!!role && isHandsOn(role)} canEnd={isOwner} />
         </SectionCard>
       )}
       {s.opened && (

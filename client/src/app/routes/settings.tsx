@@ -2,6 +2,7 @@ import { Divider, Stack, Title } from '@mantine/core';
 import { useMe } from '@/features/auth/api/me';
 import { ProfileForm } from '@/features/settings/components/profile-form';
 import { PasswordForm } from '@/features/settings/components/password-form';
+import { ExportCard } from '@/features/export/components/export-card';
 import { PageHeader } from '@/components/ui/page-header';
 
 export function Component() {
@@ -16,6 +17,8 @@ export function Component() {
         Password
       </Title>
       <PasswordForm />
+      <Divider my="md" />
+      <ExportCard />
     </Stack>
   );
 }

@@ -1,5 +1,6 @@
 import { Group } from '@mantine/core';
 import { TimeInput } from '@mantine/dates';
+import '@mantine/dates/styles.css';
 import { useState } from 'react';
 import { todayIn } from '@broodsilk/shared';
 import { dayjs } from '@/lib/dates';

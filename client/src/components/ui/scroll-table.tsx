@@ -6,7 +6,9 @@ const PHONE_WIDTH = 340;
 
 /**
  * A table that scrolls sideways on a narrow screen and says so, instead of clipping columns.
- * The scroll area is focusable and named, so it can be scrolled from the keyboard.
+ * The scroll area is focusable and named, so it can be scrolled from the keyboard; it scrolls
+ * natively, as Mantine's ScrollArea would scroll an inner element that cannot take focus (axe
+ * "scrollable-region-focusable" on a phone).
  */
 export function ScrollTable({ minWidth, label, children }: { minWidth: number; label: string; children: ReactNode }) {
   return (
@@ -16,7 +18,7 @@ export function ScrollTable({ minWidth, label, children }: { minWidth: number; l
           Swipe the table sideways to see all its columns.
         </Text>
       )}
-      <Table.ScrollContainer minWidth={minWidth} tabIndex={0} role="region" aria-label={label}>
+      <Table.ScrollContainer type="native" minWidth={minWidth} tabIndex={0} role="region" aria-label={label}>
         {children}
       </Table.ScrollContainer>
     </>

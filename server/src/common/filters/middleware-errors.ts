@@ -6,8 +6,8 @@ const logger = new Logger('Errors');
 
 /**
  * Answers errors raised by Express middleware (CSRF refusal, malformed or oversized body) right
- * where they happen. Registered after the body parsers so no later error handler sees them: the
- * one `@nestjs/serve-static` adds turns every error on an excluded path into a 404.
+ * where they happen. Registered after the body parsers so no later error handler can answer them
+ * with another status (a static-file handler once turned them all into 404s).
  */
 export function answerMiddlewareErrors(err: unknown, _req: Request, res: Response, next: NextFunction): void {
   if (res.headersSent) return next(err);

@@ -1,7 +1,8 @@
-import { IsInt, IsOptional, IsString, IsUUID, Max, MaxLength, Min, ValidateIf } from 'class-validator';
+import { IsBoolean, IsInt, IsOptional, IsString, IsUUID, Max, MaxLength, Min, ValidateIf } from 'class-validator';
 import { BROOD_COUNT_MAX, type OpeningRequest } from '@broodsilk/shared';
 import { IsInstant } from '../../common/validators/is-instant.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
+import { AcknowledgedWarningsDto } from '../../plausibility/acknowledged-warnings.dto';
 
 /** A count is a whole number from 0 to BROOD_COUNT_MAX. */
 export function IsCount(what: string): PropertyDecorator {
@@ -13,7 +14,7 @@ export function IsCount(what: string): PropertyDecorator {
   };
 }
 
-export class OpeningDto implements OpeningRequest {
+export class OpeningDto extends AcknowledgedWarningsDto implements OpeningRequest {
   @IsOptionalNonNull()
   @IsInstant({ message: 'The opening time must be a date and time with its offset, e.g. 2026-03-08T07:30:00Z.' })
   openedAt?: string;
@@ -23,7 +24,11 @@ export class OpeningDto implements OpeningRequest {
   @IsCount('nymphs') nymphs!: number;
   @IsCount('dark eggs') darkEggs!: number;
   @IsCount('spoiled eggs') spoiledEggs!: number;
-  @IsCount('kept-back young') keptBack!: number;
+  @IsCount('kept-back eggs') keptBack!: number;
+
+  @IsOptional()
+  @IsBoolean({ message: 'estimated must be true or false.' })
+  estimated?: boolean;
 
   @IsOptional()
   @ValidateIf((_, v) => v !== null)

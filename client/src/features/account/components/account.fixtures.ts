@@ -36,6 +36,7 @@ export function balances(over: Partial<BalancesResponse> = {}): BalancesResponse
     debts: [{ fromPartyId: TOMASZ.memberId, toPartyId: MIRA.memberId, amountMinor: 1200, currency: 'EUR', fromName: 'Tomasz', toName: 'Mira' }],
     problems: [],
     settled: false,
+    provisional: false,
     ...over,
   };
 }
@@ -60,6 +61,7 @@ export function shares(): SharesResponse {
         outcome: 'emerged',
         count: 20,
         aliveInCare: 17,
+        estimated: false,
         withdrawn: 3,
         parties: [
           { ...MIRA, count: 12, fixed: 0, proportional: 12, exactQuota: '12', roundedUp: false },

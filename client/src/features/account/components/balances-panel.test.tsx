@@ -41,4 +41,16 @@ describe('BalancesPanel', () => {
     expect(await screen.findByText('No money is owed between parties.')).toBeInTheDocument();
     expect(screen.getByTestId(`owed-${TOMASZ.memberId}`)).toHaveTextContent('1 over the share');
   });
+
+  // docs/product.md, Shares and balances: shares from an estimated count say "about" and are provisional.
+  it('says "about" for each share and that the shares are provisional when a count behind them is an estimate', async () => {
+    vi.stubGlobal(
+      'fetch',
+      stubFetch({ [`GET /api/projects/${PROJECT_ID}/balances`]: () => ({ status: 200, body: balances({ provisional: true }) }) }).fetchStub,
+    );
+    renderWithProviders(<BalancesPanel projectId={PROJECT_ID} />);
+    const tomasz = within(await screen.findByRole('table', { name: 'Balances' })).getByRole('row', { name: /Tomasz/ });
+    expect(within(tomasz).getAllByRole('cell')[2]).toHaveTextContent('about 8');
+    expect(screen.getByText(/these shares are provisional/)).toBeInTheDocument();
+  });
 });

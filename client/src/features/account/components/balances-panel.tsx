@@ -1,7 +1,7 @@
 import { Alert, Badge, Group, Stack, Table, Text } from '@mantine/core';
 import { ScrollTable } from '@/components/ui/scroll-table';
 import { useBalances } from '../api/balances';
-import { formatMoney } from '@broodsilk/shared';
+import { PROVISIONAL_SHARES, countWords, formatMoney } from '@broodsilk/shared';
 
 /** Per party: share, what went out, what is still owed in spiderlings; then the netted money between parties. */
 export function BalancesPanel({ projectId }: { projectId: string }) {
@@ -11,6 +11,11 @@ export function BalancesPanel({ projectId }: { projectId: string }) {
   const b = balances.data;
   return (
     <Stack gap="sm" data-testid="account-balances">
+      {b.provisional && (
+        <Text size="sm" className="tone-due">
+          {PROVISIONAL_SHARES}
+        </Text>
+      )}
       {b.settled && (
         <Group>
           <Badge color="moss" variant="light" tt="none">
@@ -57,7 +62,7 @@ export function BalancesPanel({ projectId }: { projectId: string }) {
                     </Text>
                   )}
                 </Table.Td>
-                <Table.Td ta="right">{p.share}</Table.Td>
+                <Table.Td ta="right">{countWords(p.share, b.provisional)}</Table.Td>
                 <Table.Td ta="right">
                   {p.handedOver}
                   {p.unconfirmedHandOvers > 0 && (

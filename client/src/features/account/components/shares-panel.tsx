@@ -1,6 +1,6 @@
 import { Alert, Badge, Card, Group, List, Stack, Table, Text } from '@mantine/core';
 import { ScrollTable } from '@/components/ui/scroll-table';
-import { formatMoney, type SacSharesView } from '@broodsilk/shared';
+import { countWords, formatMoney, type SacSharesView } from '@broodsilk/shared';
 import { formatDate, formatInstant } from '@/lib/dates';
 import { useShares } from '../api/shares';
 
@@ -16,10 +16,16 @@ function SacShares({ sac, timeZone }: { sac: SacSharesView; timeZone: string }) 
           </Badge>
         ) : (
           <Text size="sm" c="dimmed">
-            {sac.count} young counted ({sac.aliveInCare} in care, {sac.withdrawn} handed over, sold or cashed out)
+            {countWords(sac.count, sac.estimated)} young counted ({countWords(sac.aliveInCare, sac.estimated)} in care, {sac.withdrawn} handed over, sold or
+            cashed out)
           </Text>
         )}
       </Group>
+      {sac.estimated && (
+        <Badge color="amber" variant="light" tt="none" mb="xs">
+          Provisional: the count is an estimate
+        </Badge>
+      )}
       {sac.failure && (
         <Text size="sm" className="tone-failed" mb="xs">
           {sac.failure}

@@ -1,5 +1,6 @@
 import { Stack, Text } from '@mantine/core';
 import { DateInput } from '@mantine/dates';
+import '@mantine/dates/styles.css';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { dayjs } from '@/lib/dates';

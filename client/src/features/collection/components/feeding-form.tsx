@@ -1,5 +1,6 @@
 import { SegmentedControl, Stack, TextInput, Textarea } from '@mantine/core';
 import { DateInput } from '@mantine/dates';
+import '@mantine/dates/styles.css';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import type { FeedingResponse } from '@broodsilk/shared';

@@ -1,5 +1,6 @@
 import { Alert, Image, Modal, SimpleGrid, Stack, Text, Title, UnstyledButton } from '@mantine/core';
 import { Dropzone, IMAGE_MIME_TYPE, type FileRejection } from '@mantine/dropzone';
+import '@mantine/dropzone/styles.css';
 import { useState } from 'react';
 import type { PhotoRef } from '@broodsilk/shared';
 import { isApiError } from '@/lib/api-error';

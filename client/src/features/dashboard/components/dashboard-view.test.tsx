@@ -35,6 +35,7 @@ function sac(id: string, roll: { status: RollStatus; due: string } | null, state
     broodStage: 'eggs',
     opened: false,
     currentCount: null,
+    currentCountEstimated: false,
     notes: null,
     warningReason: null,
     incubatorCaution: null,

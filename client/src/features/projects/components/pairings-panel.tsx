@@ -1,5 +1,6 @@
 import { Alert, Badge, Button, Collapse, Group, Select, Stack, Table, Text } from '@mantine/core';
 import { TimeInput } from '@mantine/dates';
+import '@mantine/dates/styles.css';
 import { DateField } from '@/components/fields/date-field';
 import { NumberField } from '@/components/fields/number-field';
 import { TextAreaField } from '@/components/fields/text-field';

@@ -1,6 +1,7 @@
 import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
 import type { BroodCountRequest, BroodCountResponse, BroodCountsResponse } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
+import { queryRoots } from '@/lib/query-keys';
 import { AFTER_SAC_CHANGE, sacQueries } from './sacs';
 
 export function fetchBroodCounts(sacId: string, signal?: AbortSignal): Promise<BroodCountsResponse> {
@@ -23,6 +24,7 @@ export function useBroodCounts(sacId: string, enabled = true) {
 export function useRecordBroodCount(sacId: string) {
   return useMutation({
     mutationFn: (body: BroodCountRequest) => api.post<BroodCountResponse>(`/sacs/${sacId}/counts`, body),
-    meta: { handlesErrors: true, invalidates: AFTER_SAC_CHANGE },
+    // A count (or its correction) changes the shares of the project's account.
+    meta: { handlesErrors: true, invalidates: [...AFTER_SAC_CHANGE, queryRoots.account] },
   });
 }

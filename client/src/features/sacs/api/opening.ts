@@ -1,6 +1,7 @@
 import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
 import type { OpeningRequest, OpeningResponse, PhotoRef, SacResponse } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
+import { queryRoots } from '@/lib/query-keys';
 import { AFTER_SAC_CHANGE, sacQueries } from './sacs';
 
 /** The opening of a sac; ask only for a sac whose `opened` is true (before that there is none: 404). */
@@ -25,7 +26,8 @@ export function useOpening(sac: Pick<SacResponse, 'id' | 'opened'>) {
 export function useRecordOpening(sacId: string) {
   return useMutation({
     mutationFn: (body: OpeningRequest) => api.post<OpeningResponse>(`/sacs/${sacId}/opening`, body),
-    meta: { handlesErrors: true, invalidates: AFTER_SAC_CHANGE },
+    // The opening (or its correction) sets the brood's first count, so the account's shares follow.
+    meta: { handlesErrors: true, invalidates: [...AFTER_SAC_CHANGE, queryRoots.account] },
   });
 }
 

@@ -12,6 +12,7 @@ import {
   BROOD_LOSS_REASONS,
   BROOD_STAGES,
   TEXT_LIMITS,
+  countWords,
   type BroodCountRequest,
   type BroodLossReason,
   type BroodStage,
@@ -23,6 +24,7 @@ import { broodLabel } from '../utils/sac-view';
 import { catalogueLabels } from '@/lib/i18n';
 import { FormActions } from '@/components/ui/form-actions';
 import { WarningConfirm, useWarnedSave } from '@/components/ui/warning-confirm';
+import { CountCorrection } from './count-correction';
 
 const LOSS_LABELS = catalogueLabels('broodLoss');
 
@@ -46,6 +48,7 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
   const record = useRecordBroodCount(sacId);
   const [opened, { toggle, close }] = useDisclosure(false);
   const [message, setMessage] = useState<string | null>(null);
+  const [correcting, setCorrecting] = useState<string | null>(null);
   const form = useForm<Values>({
     mode: 'uncontrolled',
     validateInputOnBlur: true,
@@ -83,7 +86,8 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
       {counts.data && counts.data.counts.length > 0 && (
         <>
           <Text size="sm">
-            Alive now: <b>{counts.data.current ?? '—'}</b>
+            Alive now: <b>{counts.data.current === null ? '—' : countWords(counts.data.current, counts.data.currentEstimated)}</b>
+            {counts.data.currentEstimated && ' (an estimate: shares from it are provisional)'}
           </Text>
           <ScrollTable minWidth={360} label="Brood counts">
             <Table verticalSpacing={4} fz="sm" data-testid="brood-counts">
@@ -93,18 +97,26 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
                   <Table.Th>Stage</Table.Th>
                   <Table.Th>Alive</Table.Th>
                   <Table.Th>Lost</Table.Th>
+                  {canRecord && <Table.Th>Correct</Table.Th>}
                 </Table.Tr>
               </Table.Thead>
               <Table.Tbody>
                 {[...counts.data.counts]
                   .sort((a, b) => (a.at < b.at ? 1 : -1))
                   .map((c) => (
-                    <Table.Tr key={c.id}>
-                      <Table.Td>{formatInstant(c.at, timeZone)}</Table.Td>
+                    <Table.Tr key={c.id} data-testid={c.struckBy ? 'count-struck' : 'count'}>
+                      <Table.Td style={c.struckBy ? { textDecoration: 'line-through' } : undefined}>{formatInstant(c.at, timeZone)}</Table.Td>
                       <Table.Td>{broodLabel(c.stage)}</Table.Td>
                       <Table.Td>
-                        {c.estimated ? `about ${c.alive}` : c.alive}
-                        {c.struckBy ? ' (corrected)' : ''}
+                        <Text span size="sm" style={c.struckBy ? { textDecoration: 'line-through' } : undefined}>
+                          {countWords(c.alive, c.estimated)}
+                        </Text>
+                        {c.struckBy ? ' (struck: corrected)' : ''}
+                        {c.reason && (
+                          <Text size="xs" c="dimmed">
+                            Correction: {c.reason}
+                          </Text>
+                        )}
                       </Table.Td>
                       <Table.Td>
                         {c.lost > 0 ? (
@@ -116,11 +128,33 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
                           '—'
                         )}
                       </Table.Td>
+                      {canRecord && (
+                        <Table.Td>
+                          {!c.struckBy && c.source === 'count' && (
+                            <Button
+                              variant="subtle"
+                              size="compact-xs"
+                              onClick={() => setCorrecting(c.id)}
+                              aria-label={`Correct the count of ${formatInstant(c.at, timeZone)}`}
+                            >
+                              Correct
+                            </Button>
+                          )}
+                          {!c.struckBy && c.source === 'opening' && (
+                            <Text size="xs" c="dimmed">
+                              Correct the opening
+                            </Text>
+                          )}
+                        </Table.Td>
+                      )}
                     </Table.Tr>
                   ))}
               </Table.Tbody>
             </Table>
           </ScrollTable>
+          {correcting && counts.data.counts.some((c) => c.id === correcting) && (
+            <CountCorrection count={counts.data.counts.find((c) => c.id === correcting)!} timeZone={timeZone} onDone={() => setCorrecting(null)} />
+          )}
         </>
       )}
       {canRecord && (

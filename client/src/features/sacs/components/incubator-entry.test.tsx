@@ -37,6 +37,7 @@ const sac: SacResponse = {
   broodStage: 'eggs',
   opened: false,
   currentCount: null,
+  currentCountEstimated: false,
   notes: null,
   warningReason: null,
   incubatorCaution: INCUBATOR_CAUTION,

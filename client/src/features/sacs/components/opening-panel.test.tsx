@@ -53,4 +53,47 @@ describe('OpeningPanel', { timeout: 30_000 }, () => {
     expect(screen.queryByRole('dialog')).not.toBeInTheDocument();
     expect(calls.filter((c) => c.method === 'POST')).toHaveLength(0);
   });
+
+  // docs/trade-facts.md check value 8: outside the species' eggs per sac is a warning, never a refusal.
+  it('sends an estimate, and on the species-range warning saves it with the reason given', async () => {
+    let posts = 0;
+    const warning = 'About 2400 eggs and nymphs is more than this species usually lays (100–300 a sac). Check the count, or save it with a reason.';
+    const { fetchStub, calls } = stubFetch({
+      'GET /api/auth/csrf': () => ({ status: 200, body: { csrfToken: 't' } }),
+      'GET /api/sacs/s1/opening': () => ({ status: 200, body: null }),
+      'POST /api/sacs/s1/opening': () =>
+        (posts += 1) === 1
+          ? {
+              status: 422,
+              body: {
+                statusCode: 422,
+                error: 'Unprocessable Entity',
+                message: warning,
+                details: [{ field: 'acknowledgedWarnings', code: 'eggs-outside-species-range', message: warning }],
+              },
+            }
+          : { status: 201, body: null },
+    });
+    vi.stubGlobal('fetch', fetchStub);
+    renderWithProviders(<OpeningPanel sac={{ id: 's1', opened: false }} timeZone="UTC" canEdit />);
+    const healthy = await screen.findByLabelText('Healthy eggs');
+    await userEvent.clear(healthy);
+    await userEvent.type(healthy, '2400');
+    await userEvent.click(screen.getByLabelText('These numbers are estimates, not counted one by one'));
+    await userEvent.click(screen.getByRole('button', { name: 'Save opening' }));
+    const dialog = await screen.findByRole('dialog', { name: 'Record the opening' });
+    expect(dialog).toHaveTextContent('this records about 2400 viable of about 2400');
+    await userEvent.click(within(dialog).getByRole('button', { name: 'Record the opening' }));
+    const check = await screen.findByTestId('warning-confirm');
+    expect(check).toHaveTextContent(warning);
+    await userEvent.type(within(check).getByLabelText('Why is it right?'), 'Counted a quarter and multiplied');
+    await userEvent.click(within(check).getByRole('button', { name: 'Save anyway' }));
+    await waitFor(() => expect(calls.filter((c) => c.method === 'POST')).toHaveLength(2));
+    expect(calls.filter((c) => c.method === 'POST')[1]?.body).toMatchObject({
+      healthyEggs: 2400,
+      estimated: true,
+      acknowledgedWarnings: ['eggs-outside-species-range'],
+      warningReason: 'Counted a quarter and multiplied',
+    });
+  });
 });

@@ -1,57 +1,75 @@
-import { Alert, Image, SimpleGrid, Stack, Table, Text } from '@mantine/core';
+import { Alert, Button, Group, Image, SimpleGrid, Stack, Table, Text } from '@mantine/core';
 import { Dropzone, IMAGE_MIME_TYPE } from '@mantine/dropzone';
+import '@mantine/dropzone/styles.css';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import { BROOD_COUNT_MAX, TEXT_LIMITS, type OpeningRequest, type OpeningResponse, type SacResponse } from '@broodsilk/shared';
-import { NumberField } from '@/components/fields/number-field';
-import { TextAreaField } from '@/components/fields/text-field';
-import { textRule } from '@/components/fields/text-rule';
-import { checkNumber, numberRule, readNumber } from '@/components/fields/typed-number';
+import { countWords, type OpeningRequest, type OpeningResponse, type SacResponse } from '@broodsilk/shared';
 import { useWhen, WhenFields } from '@/components/fields/when-fields';
 import { ConfirmAction } from '@/components/ui/confirm-action';
+import { WarningConfirm, useWarnedSave } from '@/components/ui/warning-confirm';
 import { formatInstant } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
 import { isApiError } from '@/lib/api-error';
 import { useOpening, useRecordOpening, useUploadOpeningPhoto } from '../api/opening';
 import { FormActions } from '@/components/ui/form-actions';
 import { SafetyNote } from '@/components/ui/safety-note';
-
-const COUNT_FIELDS = [
-  ['healthyEggs', 'Healthy eggs'],
-  ['eggsWithLegs', 'Eggs with legs'],
-  ['nymphs', 'Nymphs'],
-  ['darkEggs', 'Dark (non-viable)'],
-  ['spoiledEggs', 'Spoiled'],
-  ['keptBack', 'Back into incubation'],
-] as const;
-
-type CountKey = (typeof COUNT_FIELDS)[number][0];
-type Values = Record<CountKey, string> & { notes: string };
+import { COUNT_FIELDS, openingRules, openingValues, toOpeningCounts, type OpeningValues } from '../utils/opening-values';
+import { OpeningCountFields } from './opening-count-fields';
+import { OpeningCorrection } from './opening-correction';
 
 function photoSrc(url: string) {
   return url.startsWith('/api/') || /^https?:/.test(url) ? url : `/api${url.startsWith('/') ? '' : '/'}${url}`;
 }
 
-function OpeningView({ opening, timeZone, sacId, canEdit }: { opening: OpeningResponse; timeZone: string; sacId: string; canEdit: boolean }) {
-  const upload = useUploadOpeningPhoto(sacId);
-  const [error, setError] = useState<string | null>(null);
+type OpeningVersion = Omit<OpeningResponse, 'struck' | 'photos'>;
+
+/** What one version of the opening found; a struck version is drawn struck through and says so. */
+function OpeningCounts({ opening, timeZone, struck }: { opening: OpeningVersion; timeZone: string; struck?: boolean }) {
+  const about = (n: number) => countWords(n, opening.estimated);
   return (
-    <Stack gap="xs" data-testid="opening">
+    <Stack gap={4} style={struck ? { textDecoration: 'line-through' } : undefined} data-testid={struck ? 'opening-struck' : 'opening-in-force'}>
       <Text size="sm" c="dimmed">
-        Opened {formatInstant(opening.openedAt, timeZone)} by {opening.recordedBy.name}: {opening.viable} viable of {opening.total}.
+        {struck ? 'Struck: ' : ''}Opened {formatInstant(opening.openedAt, timeZone)} by {opening.recordedBy.name}: {about(opening.viable)} viable of{' '}
+        {about(opening.total)}
+        {opening.keptBack > 0 ? `, ${opening.keptBack} of them kept back for more incubation` : ''}
+        {opening.estimated ? ' (estimated)' : ''}.
       </Text>
-      <Table verticalSpacing={2} fz="sm" maw={420}>
+      {opening.reason && <Text size="sm">Corrected because: {opening.reason}</Text>}
+      {opening.warningReason && <Text size="sm">Unusual count, saved because: {opening.warningReason}</Text>}
+      <Table verticalSpacing={2} fz="sm" maw={420} aria-label={struck ? 'Struck opening counts' : 'Opening counts'}>
         <Table.Tbody>
           {COUNT_FIELDS.map(([k, label]) => (
             <Table.Tr key={k}>
               <Table.Td>{label}</Table.Td>
               <Table.Td ta="right" fw={600}>
-                {opening[k]}
+                {k === 'keptBack' ? opening[k] : about(opening[k])}
               </Table.Td>
             </Table.Tr>
           ))}
         </Table.Tbody>
       </Table>
+    </Stack>
+  );
+}
+
+function OpeningView({ opening, timeZone, sacId, canEdit }: { opening: OpeningResponse; timeZone: string; sacId: string; canEdit: boolean }) {
+  const upload = useUploadOpeningPhoto(sacId);
+  const [error, setError] = useState<string | null>(null);
+  const [correcting, setCorrecting] = useState(false);
+  return (
+    <Stack gap="xs" data-testid="opening">
+      <OpeningCounts opening={opening} timeZone={timeZone} />
+      {canEdit && !correcting && (
+        <Group>
+          <Button variant="light" size="xs" onClick={() => setCorrecting(true)}>
+            Correct the opening
+          </Button>
+        </Group>
+      )}
+      {correcting && <OpeningCorrection opening={opening} onDone={() => setCorrecting(false)} />}
+      {opening.struck.map((o) => (
+        <OpeningCounts key={o.id} opening={o} timeZone={timeZone} struck />
+      ))}
       {opening.notes && <Text size="sm">{opening.notes}</Text>}
       {opening.photos.length > 0 && (
         <SimpleGrid cols={{ base: 3, sm: 5 }}>
@@ -92,8 +110,6 @@ function OpeningView({ opening, timeZone, sacId, canEdit }: { opening: OpeningRe
   );
 }
 
-const COUNT = { min: 0, max: BROOD_COUNT_MAX, decimals: 0, rangeMessage: `A whole number from 0 to ${BROOD_COUNT_MAX}.` };
-
 /** The opening of a sac: what was found, once; before that, the form to record it. */
 export function OpeningPanel({ sac, timeZone, canEdit }: { sac: Pick<SacResponse, 'id' | 'opened'>; timeZone: string; canEdit: boolean }) {
   const sacId = sac.id;
@@ -110,37 +126,25 @@ function OpeningForm({ sacId, timeZone }: { sacId: string; timeZone: string }) {
   const record = useRecordOpening(sacId);
   const [message, setMessage] = useState<string | null>(null);
   const [asking, setAsking] = useState<OpeningRequest | null>(null);
-  const form = useForm<Values>({
-    mode: 'uncontrolled',
-    validateInputOnBlur: true,
-    initialValues: { healthyEggs: '0', eggsWithLegs: '0', nymphs: '0', darkEggs: '0', spoiledEggs: '0', keptBack: '0', notes: '' },
-    validate: {
-      ...Object.fromEntries(COUNT_FIELDS.map(([k]) => [k, numberRule(COUNT)])),
-      keptBack: (v, values) =>
-        checkNumber(v, COUNT) ??
-        ((readNumber(v) ?? 0) > (readNumber(values.healthyEggs) ?? 0) + (readNumber(values.eggsWithLegs) ?? 0) + (readNumber(values.nymphs) ?? 0)
-          ? 'No more than the viable ones (healthy eggs, eggs with legs, nymphs).'
-          : null),
-      notes: textRule({ maxLength: TEXT_LIMITS.note }),
-    },
-  });
+  const form = useForm<OpeningValues>({ mode: 'uncontrolled', validateInputOnBlur: true, initialValues: openingValues(), validate: openingRules });
+  const warned = useWarnedSave(
+    (body: OpeningRequest) => record.mutateAsync(body),
+    () => undefined,
+    (e) => setMessage(applyServerErrors(form, e)),
+  );
   const submit = form.onSubmit((v) => {
     setMessage(null);
-    const counts = Object.fromEntries(COUNT_FIELDS.map(([k]) => [k, readNumber(v[k]) ?? 0])) as Record<CountKey, number>;
-    setAsking({ ...counts, notes: v.notes.trim() || null });
+    setAsking(toOpeningCounts(v));
   });
   return (
     <form onSubmit={submit} noValidate>
       <Stack>
         <Text size="sm" c="dimmed">
-          Count what the sac holds when you open it. The viable ones start the brood&apos;s count.
+          Count what the sac holds when you open it. The viable ones start the brood&apos;s count; doubtful eggs you keep back for more incubation are followed
+          as their own batch and join the count only if they develop.
         </Text>
-        <SimpleGrid cols={{ base: 2, sm: 3 }}>
-          {COUNT_FIELDS.map(([k, label]) => (
-            <NumberField key={form.key(k)} label={label} whole {...form.getInputProps(k)} />
-          ))}
-        </SimpleGrid>
-        <TextAreaField label="Notes" maxLength={TEXT_LIMITS.note} key={form.key('notes')} {...form.getInputProps('notes')} />
+        <OpeningCountFields form={form} />
+        {warned.warnings && <WarningConfirm warnings={warned.warnings} loading={record.isPending} onConfirm={warned.confirm} onCancel={warned.cancel} />}
         <SafetyNote text="opening" />
         <FormActions message={message} loading={record.isPending} submitLabel="Save opening" />
       </Stack>
@@ -151,11 +155,7 @@ function OpeningForm({ sacId, timeZone }: { sacId: string; timeZone: string }) {
           pending={record.isPending}
           onClose={() => setAsking(null)}
           onConfirm={async (openedAt) => {
-            try {
-              await record.mutateAsync({ ...asking, openedAt });
-            } catch (e) {
-              setMessage(applyServerErrors(form, e));
-            }
+            await warned.save({ ...asking, openedAt });
             setAsking(null);
           }}
         />
@@ -190,8 +190,9 @@ function ConfirmOpening({
       onConfirm={() => when.instant && onConfirm(when.instant)}
     >
       <Text size="sm">
-        A sac is opened once: this records {viable} viable of {viable + counts.darkEggs + counts.spoiledEggs}, and the viable ones start the brood&apos;s count.
-        Change the day or time if you opened it earlier.
+        A sac is opened once: this records {countWords(viable, !!counts.estimated)} viable of{' '}
+        {countWords(viable + counts.darkEggs + counts.spoiledEggs, !!counts.estimated)}, and the viable ones
+        {counts.keptBack ? ` except the ${counts.keptBack} kept back` : ''} start the brood&apos;s count. Change the day or time if you opened it earlier.
       </Text>
       <WhenFields when={when} dateLabel="Opened on" />
     </ConfirmAction>

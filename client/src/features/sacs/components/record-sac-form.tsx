@@ -1,5 +1,6 @@
 import { Group, SegmentedControl, Stack, Text } from '@mantine/core';
 import { TimeInput } from '@mantine/dates';
+import '@mantine/dates/styles.css';
 import { DateField } from '@/components/fields/date-field';
 import { TextAreaField } from '@/components/fields/text-field';
 import { textRule } from '@/components/fields/text-rule';

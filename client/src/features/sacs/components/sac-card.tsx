@@ -1,6 +1,6 @@
 import { Anchor, Badge, Card, Group, Stack, Text } from '@mantine/core';
 import { Link } from 'react-router';
-import type { SacResponse } from '@broodsilk/shared';
+import { countWords, type SacResponse } from '@broodsilk/shared';
 import { formatDate } from '@/lib/dates';
 import { broodLabel, PULL_WINDOW_TEXT, pullWindowSentence, ROLL_TEXT, rollSentence, SAC_OUTCOME_TEXT } from '../utils/sac-view';
 
@@ -20,7 +20,7 @@ export function SacCard({ sac, timeZone, href, incubatorHref }: { sac: SacRespon
               Day {sac.dayNumber}
             </Text>{' '}
             · {sac.pulled ? 'in the incubator' : 'with the mother'} · {broodLabel(sac.broodStage)}
-            {sac.currentCount !== null && ` · ${sac.currentCount} alive`}
+            {sac.currentCount !== null && ` · ${countWords(sac.currentCount, sac.currentCountEstimated)} alive`}
           </Text>
         </Stack>
         {sac.outcome !== 'in-progress' ? (
