@@ -155,7 +155,7 @@ describe('statement PDF', () => {
     const b = tomasz();
     expect(text).toContain('Project: Account test project');
     expect(text).toContain('Party: Tomasz Partner (Partner)');
-    expect(text).not.toMatch(/\[in-force\]|\(in-progress\)|hand-over  /);
+    expect(text).not.toMatch(/\[in-force\]|\(in-progress\)|hand-over {2}/);
     expect(text).toContain('Version 1. Price per spiderling for cash-outs: EUR 5.00.');
     expect(text).toContain(`Share: ${b.share} young`);
     expect(text).toContain(`Handed over: ${b.handedOver} young`);
