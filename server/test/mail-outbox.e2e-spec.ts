@@ -12,7 +12,8 @@ import { createProject } from './support/projects';
 import { startFakeSmtp, type FakeSmtp } from './support/fake-smtp';
 import { rowCounts } from './support/row-counts';
 import { accountScenario, type AccountScenario } from './accounts.fixtures';
-import { MailOutbox, MAIL_JOBS_SCHEMA } from '../src/mail/mail-outbox.service';
+import { MailOutbox, MAIL_QUEUE } from '../src/mail/mail-outbox.service';
+import { JOBS_SCHEMA } from '../src/jobs/jobs.service';
 import { PasswordResetToken } from '../src/auth/password-reset-token.entity';
 import { Invitation } from '../src/invitations/invitation.entity';
 
@@ -47,7 +48,7 @@ afterAll(async () => {
 async function queuedFor(address: string): Promise<number> {
   const rows = await t.orm.em
     .getConnection()
-    .execute<{ n: number }[]>(`select count(*)::int as n from ${MAIL_JOBS_SCHEMA}.job where data->>'to' = ?`, [address]);
+    .execute<{ n: number }[]>(`select count(*)::int as n from ${JOBS_SCHEMA}.job where name = ? and data->>'to' = ?`, [MAIL_QUEUE, address]);
   return rows[0].n;
 }
 

@@ -24,6 +24,8 @@ const PUBLIC = new Set([
   'GET /api/invitations/:token',
   'GET /api/calendar/:token.ics',
   'POST /api/webhooks/payments',
+  'GET /api/unsubscribe/:token',
+  'POST /api/unsubscribe/:token',
 ]);
 /** The shared species catalogue: every keeper reads it, only an admin edits it. */
 const CATALOGUE: Record<string, number> = { 'GET /api/species/:id': 200, 'PATCH /api/species/:id': 403 };

@@ -17,6 +17,7 @@ export function createRouter(queryClient: QueryClient) {
       children: [
         { index: true, lazy: lazy(() => import('./routes/home')) },
         { path: paths.settings.path, lazy: lazy(() => import('./routes/settings')) },
+        { path: paths.notifications.path, lazy: lazy(() => import('./routes/notifications')) },
         { path: paths.collection.path, lazy: lazy(() => import('./routes/collection')) },
         { path: paths.animal.path, ErrorBoundary: RouteError, lazy: lazy(() => import('./routes/animal')) },
         { path: paths.species.path, lazy: lazy(() => import('./routes/species')) },

@@ -6,6 +6,7 @@ export const paths = {
   forgotPassword: { path: '/forgot-password', href: () => '/forgot-password' },
   resetPassword: { path: '/reset-password', href: () => '/reset-password' },
   settings: { path: '/settings', href: () => '/settings' },
+  notifications: { path: '/notifications', href: () => '/notifications' },
   collection: { path: '/collection', href: () => '/collection' },
   animal: { path: '/collection/:animalId', href: (animalId: string) => `/collection/${animalId}` },
   species: { path: '/species', href: () => '/species' },

@@ -15,6 +15,8 @@ export const queryRoots = {
   dashboard: ['dashboard'],
   calendar: ['calendar'],
   invitations: ['invitations'],
+  reminders: ['reminders'],
+  notifications: ['notifications'],
 } as const satisfies Record<string, QueryKey>;
 
 /** The signed-in user: auth reads it, settings and the 401 handler write it. */

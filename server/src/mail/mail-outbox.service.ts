@@ -1,64 +1,37 @@
-import { Injectable, Logger, type OnApplicationBootstrap, type OnApplicationShutdown } from '@nestjs/common';
-import { ConfigService } from '@nestjs/config';
+import { Injectable, type OnModuleInit } from '@nestjs/common';
 import type { EntityManager } from '@mikro-orm/postgresql';
-import PgBoss from 'pg-boss';
+import { JobsService } from '../jobs/jobs.service';
 import { MailService, type OutgoingMail } from './mail.service';
 
 export const MAIL_QUEUE = 'mail-out';
-/** pg-boss keeps its tables in a schema of its own, away from the migrations' `public`. */
-export const MAIL_JOBS_SCHEMA = 'pgboss_mail';
 
-/** pg-boss writes `$1`-style SQL; a MikroORM transaction runs knex's `?` style. Each `$n` becomes a `?` with its value. */
-function inTransaction(tx: EntityManager): PgBoss.Db {
-  return {
-    executeSql: async (text, values) => {
-      const ordered: unknown[] = [];
-      const sql = text.replace(/\$(\d+)/g, (_, n: string) => {
-        ordered.push(values[Number(n) - 1]);
-        return '?';
-      });
-      const rows = await tx.getConnection().execute(sql, ordered, 'all', tx.getTransactionContext());
-      return { rows: rows as unknown[] };
-    },
-  };
-}
+/** What the outbox carries: everything but attachments (a job's data is JSON). */
+export type QueuedMail = Omit<OutgoingMail, 'attachments'>;
 
 /**
- * Mail that belongs to a write (a reset link, an invitation) is queued in the write's own
- * transaction and sent by a pg-boss worker after commit: a refused write sends nothing, and a
- * mail server that is down delays the mail (retried with backoff) instead of failing the request.
- * The worker runs unless JOBS_ENABLED=false.
+ * Mail that belongs to a write (a reset link, an invitation, a reminder) is queued in the write's
+ * own transaction and sent by a worker after commit: a refused write sends nothing, and a mail
+ * server that is down delays the mail (retried with backoff) instead of failing the request.
  */
 @Injectable()
-export class MailOutbox implements OnApplicationBootstrap, OnApplicationShutdown {
-  private readonly logger = new Logger(MailOutbox.name);
-  private boss: PgBoss | null = null;
-
+export class MailOutbox implements OnModuleInit {
   constructor(
-    private readonly config: ConfigService,
+    private readonly jobs: JobsService,
     private readonly mail: MailService,
   ) {}
 
-  async onApplicationBootstrap(): Promise<void> {
-    const boss = new PgBoss({ connectionString: this.config.getOrThrow<string>('database.url'), schema: MAIL_JOBS_SCHEMA, schedule: false });
-    boss.on('error', (e) => this.logger.error(`pg-boss: ${e.message}`));
-    await boss.start();
-    await boss.createQueue(MAIL_QUEUE, { name: MAIL_QUEUE, retryLimit: 8, retryDelay: 30, retryBackoff: true });
-    if (process.env.JOBS_ENABLED !== 'false') {
-      await boss.work<OutgoingMail>(MAIL_QUEUE, { pollingIntervalSeconds: 0.5 }, async ([job]) => this.mail.send(job.data));
-    }
-    this.boss = boss;
-  }
-
-  async onApplicationShutdown(): Promise<void> {
-    const boss = this.boss;
-    this.boss = null;
-    if (boss) await boss.stop({ graceful: true, wait: true, timeout: 5_000 });
+  onModuleInit(): void {
+    this.jobs.define<QueuedMail>({
+      queue: MAIL_QUEUE,
+      settings: { retryLimit: 8, retryDelay: 30, retryBackoff: true },
+      planned: false,
+      pollingIntervalSeconds: 0.5,
+      handle: (job) => this.mail.send(job.data),
+    });
   }
 
   /** Queues `mail` inside the transaction `tx`; it goes out once `tx` commits. */
-  async enqueue(tx: EntityManager, mail: Omit<OutgoingMail, 'attachments'>): Promise<void> {
-    if (!this.boss) throw new Error('The mail queue is not running yet.');
-    await this.boss.send(MAIL_QUEUE, mail, { db: inTransaction(tx) });
+  async enqueue(tx: EntityManager, mail: QueuedMail): Promise<void> {
+    await this.jobs.send(tx, MAIL_QUEUE, mail);
   }
 }

@@ -9,6 +9,8 @@ export interface OutgoingMail {
   text: string;
   html?: string;
   attachments?: { filename: string; content: Buffer; contentType: string }[];
+  /** Extra headers, e.g. RFC 8058 one-click unsubscribe. */
+  headers?: Record<string, string>;
 }
 
 /** Real SMTP through nodemailer; locally it points at the mail sink. */

@@ -3,7 +3,7 @@ import { NOTIFICATION_KINDS, type NotificationKind } from '@broodsilk/shared';
 import { BaseEntity } from '../database/base.entity';
 import { User } from '../users/user.entity';
 
-/** An in-app reminder for one user (the same text goes out by e-mail). */
+/** An in-app reminder for one user (the same words go out by e-mail when chosen). */
 @Entity({ tableName: 'notifications' })
 @Index({ properties: ['user', 'createdAt'] })
 export class Notification extends BaseEntity {
@@ -19,11 +19,12 @@ export class Notification extends BaseEntity {
   @Property({ type: 'text' })
   body!: string;
 
-  @Enum({ items: ['sac', 'animal'], nativeEnumName: 'notification_subject' })
-  subjectType!: 'sac' | 'animal';
+  /** What it is about (for a link); none for a daily digest. */
+  @Enum({ items: ['sac', 'animal'], nativeEnumName: 'notification_subject', nullable: true })
+  subjectType?: 'sac' | 'animal' | null;
 
-  @Property({ type: 'uuid' })
-  subjectId!: string;
+  @Property({ type: 'uuid', nullable: true })
+  subjectId?: string | null;
 
   @Property({ type: 'uuid', nullable: true })
   projectId?: string | null;

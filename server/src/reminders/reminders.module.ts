@@ -1,18 +1,22 @@
 import { Module } from '@nestjs/common';
 import { MikroOrmModule } from '@mikro-orm/nestjs';
-import { SacsModule } from '../sacs/sacs.module';
+import { JobsModule } from '../jobs/jobs.module';
 import { MailModule } from '../mail/mail.module';
 import { ReminderSent } from './reminder-sent.entity';
 import { Notification } from './notification.entity';
-import { RemindersService } from './reminders.service';
-import { ReminderJobsService } from './reminder-jobs.service';
+import { ReminderSettings } from './reminder-settings.entity';
+import { ReminderPlanner } from './reminder-planner.service';
+import { ReminderDelivery } from './reminder-delivery.service';
+import { ReminderPreferencesService } from './reminder-preferences.service';
+import { ReminderPreferencesController } from './reminder-preferences.controller';
+import { UnsubscribeController } from './unsubscribe.controller';
 import { NotificationsService } from './notifications.service';
 import { NotificationsController } from './notifications.controller';
 
 @Module({
-  imports: [MikroOrmModule.forFeature([ReminderSent, Notification]), SacsModule, MailModule],
-  controllers: [NotificationsController],
-  providers: [RemindersService, ReminderJobsService, NotificationsService],
-  exports: [RemindersService],
+  imports: [MikroOrmModule.forFeature([ReminderSent, Notification, ReminderSettings]), JobsModule, MailModule],
+  controllers: [NotificationsController, ReminderPreferencesController, UnsubscribeController],
+  providers: [ReminderPlanner, ReminderDelivery, ReminderPreferencesService, NotificationsService],
+  exports: [ReminderPlanner],
 })
 export class RemindersModule {}

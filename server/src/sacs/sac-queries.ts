@@ -18,6 +18,8 @@ export async function lastRollsOf(em: EntityManager, sacIds: string[]): Promise<
         and not exists (select 1 from sac_log_entries k where k.strikes_id = e.id)
       order by e.sac_id, e.at desc, e.created_at desc`,
     sacIds,
+    'all',
+    em.getTransactionContext(), // inside a transaction, see its own writes (the reminder planner re-plans before commit)
   );
   return new Map(rows.map((r) => [r.sac_id, new Date(r.at)]));
 }

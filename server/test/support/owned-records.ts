@@ -71,6 +71,7 @@ const KIND: Record<string, string> = {
   species: 'species',
   invitations: 'token',
   calendar: 'token',
+  unsubscribe: 'token',
 };
 
 /** The route's path with each `:param` filled from `ids`. */

@@ -112,11 +112,15 @@ export const en = {
   },
   activityKindOther: 'Activity',
   notificationKind: {
-    'roll-due': 'Roll due',
-    'roll-overdue': 'Roll overdue',
-    'pull-window-opens': 'Pull window opens',
-    'pull-window-closes': 'Pull window closes',
-    'male-clock': 'Male clock',
+    'roll-due': 'A roll falls due',
+    'roll-overdue': 'A roll is overdue',
+    'pull-window-opens': 'A pull window opens',
+    'pull-window-closes': 'A pull window closes in 2 days',
+    'male-clock': 'A male’s clock moves on',
+    'reading-out-of-band': 'A reading is outside the target band',
+    'female-molted': 'A female molted after pairing',
+    'loan-due-back': 'A loaned animal is due back in 7 days',
+    'daily-digest': 'The daily digest',
   },
   /** Stage names in the chosen numbering set (docs/rules.md, Stage numbering). */
   broodStage: {

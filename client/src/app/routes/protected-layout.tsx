@@ -5,6 +5,7 @@ import { PendingOutlet } from '@/components/layouts/pending-outlet';
 import { paths } from '@/config/paths';
 import { meQuery, useMe } from '@/features/auth/api/me';
 import { useLogout } from '@/features/auth/api/session';
+import { InboxLink } from '@/features/notifications/components/inbox-link';
 import { NAV_ITEMS } from '../nav-items';
 import { useReaderSettings } from '@/lib/i18n';
 
@@ -31,6 +32,7 @@ export function Component() {
       nav={NAV_ITEMS}
       userName={me.displayName}
       settingsHref={paths.settings.href()}
+      headerExtra={<InboxLink />}
       onSignOut={() => logout.mutate(undefined, { onSettled: () => navigate(paths.signIn.href()) })}
     >
       {/* Keyed by language so every page re-renders its words when the setting changes. */}

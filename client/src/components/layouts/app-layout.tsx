@@ -15,11 +15,13 @@ interface AppLayoutProps {
   userName: string;
   onSignOut: () => void;
   settingsHref: string;
+  /** What the app puts in the header before the colour scheme switch (the inbox link). */
+  headerExtra?: ReactNode;
   children: ReactNode;
 }
 
 /** The signed-in shell: a header with the mark and the user, a navbar that folds away on a phone. */
-export function AppLayout({ nav, userName, onSignOut, settingsHref, children }: AppLayoutProps) {
+export function AppLayout({ nav, userName, onSignOut, settingsHref, headerExtra, children }: AppLayoutProps) {
   const [opened, { toggle, close }] = useDisclosure();
   const { toggleColorScheme, colorScheme } = useMantineColorScheme();
   const location = useLocation();
@@ -37,6 +39,7 @@ export function AppLayout({ nav, userName, onSignOut, settingsHref, children }: 
               <BroodsilkLogo />
             </Group>
             <Group gap="xs" wrap="nowrap">
+              {headerExtra}
               <Tooltip label={colorScheme === 'dark' ? 'Light scheme' : 'Dark scheme'}>
                 <ActionIcon variant="subtle" color="gray" onClick={toggleColorScheme} aria-label="Switch colour scheme">
                   {colorScheme === 'dark' ? '☀' : '☾'}

@@ -4,8 +4,8 @@ import { CSRF_HEADER, SESSION_COOKIE } from '@broodsilk/shared';
 
 export const CSRF_COOKIE = 'broodsilk_csrf';
 
-/** Paths that are called by machines with their own proof (signed webhooks, token feeds). */
-const EXEMPT_PREFIXES = ['/api/webhooks/'];
+/** Paths that are called by machines with their own proof (signed webhooks, token feeds, signed unsubscribe links). */
+const EXEMPT_PREFIXES = ['/api/webhooks/', '/api/unsubscribe/'];
 
 function sessionCookie(req: Request): string {
   return (req.cookies as Record<string, string> | undefined)?.[SESSION_COOKIE] ?? '';

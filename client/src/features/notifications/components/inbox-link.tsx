@@ -1,0 +1,28 @@
+import { Badge, Button } from '@mantine/core';
+import { NavLink as RouterNavLink } from 'react-router';
+import { paths } from '@/config/paths';
+import { useUnreadCount } from '../api/notifications';
+
+/** The shell's way to the inbox, with the unread count (refreshed by itself). */
+export function InboxLink() {
+  const { data: unread = 0 } = useUnreadCount();
+  return (
+    <Button
+      component={RouterNavLink}
+      to={paths.notifications.href()}
+      variant="subtle"
+      color="gray"
+      size="compact-sm"
+      aria-label={unread ? `Inbox, ${unread} unread` : 'Inbox, nothing unread'}
+      rightSection={
+        unread ? (
+          <Badge size="sm" circle={unread < 10} data-testid="unread-count">
+            {unread}
+          </Badge>
+        ) : null
+      }
+    >
+      Inbox
+    </Button>
+  );
+}

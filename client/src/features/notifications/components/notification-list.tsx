@@ -1,0 +1,43 @@
+import { Anchor, Button, Card, Group, Stack, Text } from '@mantine/core';
+import { Link } from 'react-router';
+import { NOTIFICATION_KIND_LABELS, NOTIFICATION_PAGE_SIZE } from '@broodsilk/shared';
+import { Pager } from '@/components/ui/pager';
+import { formatInstant } from '@/lib/dates';
+import { useMarkAllRead, useMarkRead, useNotificationPage } from '../api/notifications';
+import { subjectHref } from '../utils/subject-href';
+
+/** One's own notifications, newest first: each leads to what it is about; following it marks it read. */
+export function NotificationList({ page, onPage, timeZone }: { page: number; onPage: (p: number) => void; timeZone: string }) {
+  const { data } = useNotificationPage(page);
+  const markRead = useMarkRead();
+  const markAll = useMarkAllRead();
+  if (!data) return null;
+  const pages = Math.max(1, Math.ceil(data.total / NOTIFICATION_PAGE_SIZE));
+  return (
+    <Stack>
+      <Group justify="space-between">
+        <Text size="sm">{data.unread ? `${data.unread} unread` : 'Everything is read.'}</Text>
+        {data.unread > 0 && (
+          <Button variant="default" size="compact-sm" loading={markAll.isPending} disabled={markAll.isPending} onClick={() => markAll.mutate()}>
+            Mark all as read
+          </Button>
+        )}
+      </Group>
+      {data.items.length === 0 && <Text c="dimmed">No notifications yet. Reminders you choose in your settings will arrive here.</Text>}
+      {data.items.map((n) => (
+        <Card key={n.id} withBorder padding="sm" data-unread={n.readAt ? undefined : 'true'}>
+          <Text size="xs" c="dimmed">
+            {NOTIFICATION_KIND_LABELS[n.kind]} · {formatInstant(n.createdAt, timeZone)}
+          </Text>
+          <Anchor component={Link} to={subjectHref(n)} fw={n.readAt ? 400 : 700} onClick={() => !n.readAt && markRead.mutate(n.id)}>
+            {n.title}
+          </Anchor>
+          <Text size="sm" style={{ whiteSpace: 'pre-line' }}>
+            {n.body}
+          </Text>
+        </Card>
+      ))}
+      {pages > 1 && <Pager total={pages} value={page} onChange={onPage} size="lg" />}
+    </Stack>
+  );
+}

@@ -1,0 +1,8 @@
+import type { NotificationResponse } from '@broodsilk/shared';
+import { paths } from '@/config/paths';
+
+/** Where a notification leads: its sac or animal, or the day's overview for a digest. */
+export function subjectHref(n: Pick<NotificationResponse, 'subject'>): string {
+  if (!n.subject) return paths.home.href();
+  return n.subject.type === 'sac' ? paths.sac.href(n.subject.id) : paths.animal.href(n.subject.id);
+}

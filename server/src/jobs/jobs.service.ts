@@ -1,0 +1,106 @@
+import { Injectable, Logger, type OnApplicationBootstrap, type OnApplicationShutdown } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import type { EntityManager } from '@mikro-orm/postgresql';
+import PgBoss from 'pg-boss';
+import { inTransaction } from './transaction-db';
+import { workersEnabled } from './jobs-enabled';
+
+/** pg-boss keeps its tables in a schema of its own, away from the migrations' `public`. */
+export const JOBS_SCHEMA = 'pgboss';
+
+/** One kind of job: its queue, how pg-boss keeps it, and who works it. */
+export interface JobKind<T> {
+  queue: string;
+  /** pg-boss queue settings (policy, retries, retention). */
+  settings?: Omit<PgBoss.Queue, 'name'>;
+  /** Planned ahead from facts (reminders): its worker stays off under vitest unless JOBS_ENABLED=true. */
+  planned: boolean;
+  pollingIntervalSeconds?: number;
+  handle(job: PgBoss.Job<T>): Promise<void>;
+}
+
+export interface SendJob {
+  startAfter?: Date;
+  /** With a `short` queue policy: one waiting job per key; a second send with the key is dropped (null). */
+  singletonKey?: string;
+}
+
+/**
+ * The one pg-boss instance of the app: feature modules declare their job kinds (in
+ * `onModuleInit`), this starts pg-boss with the app, creates their queues, starts their workers
+ * and stops them on shutdown. Jobs sent with a transaction are queued only if it commits.
+ */
+@Injectable()
+export class JobsService implements OnApplicationBootstrap, OnApplicationShutdown {
+  private readonly logger = new Logger(JobsService.name);
+  private readonly kinds = new Map<string, JobKind<never>>();
+  private boss: PgBoss | null = null;
+
+  constructor(private readonly config: ConfigService) {}
+
+  /** Declares a job kind; call before the app has started (from a provider's `onModuleInit`). */
+  define<T>(kind: JobKind<T>): void {
+    if (this.boss) throw new Error(`The job kind ${kind.queue} is declared after the jobs started.`);
+    if (this.kinds.has(kind.queue)) throw new Error(`The job kind ${kind.queue} is declared twice.`);
+    this.kinds.set(kind.queue, kind as unknown as JobKind<never>);
+  }
+
+  get running(): boolean {
+    return this.boss !== null;
+  }
+
+  /** The queues whose workers run in this process. */
+  readonly working = new Set<string>();
+
+  /** True when this process works the planned queues (so it may also catch up on planning at start). */
+  get plannedWorkersOn(): boolean {
+    return workersEnabled(true);
+  }
+
+  async onApplicationBootstrap(): Promise<void> {
+    const boss = new PgBoss({ connectionString: this.config.getOrThrow<string>('database.url'), schema: JOBS_SCHEMA, schedule: false });
+    boss.on('error', (e) => this.logger.error(`pg-boss: ${e.message}`));
+    await boss.start();
+    for (const kind of this.kinds.values()) {
+      await boss.createQueue(kind.queue, { name: kind.queue, ...kind.settings });
+      if (!workersEnabled(kind.planned)) continue;
+      await boss.work<never>(kind.queue, { pollingIntervalSeconds: kind.pollingIntervalSeconds ?? 2, batchSize: 1 }, async ([job]) => kind.handle(job));
+      this.working.add(kind.queue);
+    }
+    this.boss = boss;
+  }
+
+  async onApplicationShutdown(): Promise<void> {
+    const boss = this.boss;
+    this.boss = null;
+    this.working.clear();
+    if (boss) await boss.stop({ graceful: true, wait: true, timeout: 5_000 });
+  }
+
+  private started(): PgBoss {
+    if (!this.boss) throw new Error('The job queue is not running yet.');
+    return this.boss;
+  }
+
+  /** Queues a job inside `tx` (it exists once `tx` commits); null when a waiting job has the same singleton key. */
+  async send<T extends object>(tx: EntityManager, queue: string, data: T, options: SendJob = {}): Promise<string | null> {
+    return this.started().send(queue, data, { ...options, db: inTransaction(tx) });
+  }
+
+  /** Cancels waiting jobs inside `tx`. */
+  async cancel(tx: EntityManager, queue: string, ids: string[]): Promise<void> {
+    if (ids.length) await this.started().cancel(queue, ids, { db: inTransaction(tx) });
+  }
+
+  /** Jobs of a queue not yet done (waiting, retrying or running) whose data has `field` = `value`, read inside `tx`. */
+  async pending(tx: EntityManager, queue: string, field: string, value: string): Promise<{ id: string; singletonKey: string | null; running: boolean }[]> {
+    return tx
+      .getConnection()
+      .execute<{ id: string; singletonKey: string | null; running: boolean }[]>(
+        `select id, singleton_key as "singletonKey", state = 'active' as running from ${JOBS_SCHEMA}.job where name = ? and state in ('created', 'retry', 'active') and data->>? = ?`,
+        [queue, field, value],
+        'all',
+        tx.getTransactionContext(),
+      );
+  }
+}
