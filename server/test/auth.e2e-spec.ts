@@ -33,6 +33,8 @@ describe('register → login → me → logout', () => {
       role: 'keeper',
       timeZone: 'Europe/Vienna',
       temperatureUnit: 'C',
+      language: 'en',
+      stageNumbering: 'us',
     });
 
     const res = await http().post('/api/auth/login').send({ email: 'ada.keeper@example.test', password: 'long enough pass' }).expect(200);
@@ -52,11 +54,48 @@ describe('register → login → me → logout', () => {
       temperatureUnit: 'C',
       secondFactorEnabled: false,
       secondFactorRequired: false,
+      language: 'en',
+      stageNumbering: 'us',
     });
 
     await http().post('/api/auth/logout').set('Authorization', `Bearer ${token}`).expect(204);
     const after = await http().get('/api/auth/me').set('Authorization', `Bearer ${token}`).expect(401);
     expect((after.body as ApiErrorBody).message).toBe('Please sign in to continue.');
+  });
+
+  it('keeps the language given at registration and lets the user change language, unit and stage numbering; unknown values are 400 with the allowed ones', async () => {
+    const reg = await http()
+      .post('/api/auth/register')
+      .send({ email: 'de.keeper@example.test', password: 'long enough pass', displayName: 'Dora', language: 'de' })
+      .expect(201);
+    expect(reg.body.user).toMatchObject({ language: 'de', stageNumbering: 'us' });
+    const bad = await http()
+      .post('/api/auth/register')
+      .send({ email: 'x.keeper@example.test', password: 'long enough pass', displayName: 'X', language: 'fr' })
+      .expect(400);
+    expect(JSON.stringify(bad.body)).toContain('Choose one of the languages en, de.');
+
+    const bearer = `Bearer ${reg.body.accessToken as string}`;
+    const ok = await http()
+      .patch('/api/users/me')
+      .set('Authorization', bearer)
+      .send({ language: 'en', temperatureUnit: 'F', stageNumbering: 'de' })
+      .expect(200);
+    expect(ok.body).toMatchObject({ language: 'en', temperatureUnit: 'F', stageNumbering: 'de' });
+    for (const [field, value, allowed] of [
+      ['language', 'fr', 'en, de'],
+      ['temperatureUnit', 'K', 'C, F'],
+      ['stageNumbering', 'uk', 'us, de'],
+    ] as const) {
+      const refused = await http()
+        .patch('/api/users/me')
+        .set('Authorization', bearer)
+        .send({ [field]: value })
+        .expect(400);
+      expect(JSON.stringify(refused.body)).toContain(allowed);
+    }
+    const me = await http().get('/api/auth/me').set('Authorization', bearer).expect(200);
+    expect(me.body).toMatchObject({ language: 'en', temperatureUnit: 'F', stageNumbering: 'de' });
   });
 
   it('a session cookie works on its own, and a cookie write needs the CSRF header', async () => {

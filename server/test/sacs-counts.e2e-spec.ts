@@ -128,7 +128,7 @@ describe('corrections', () => {
     // A correction obeys the count rule against the count before the corrected one (the opening's 220).
     await count(owner, sacId, { stage: 'first-instar', alive: 221, corrects: fixed.id, reason: 'too many' }).expect(400);
     const event = (await activity()).find((e) => e.kind === 'brood.corrected');
-    expect(event?.summary).toBe(`Brood of the sac laid 2025-09-10: count of 120 corrected to 210 alive at first-instar (Miscounted one tray).`);
+    expect(event?.summary).toBe(`Brood of the sac laid 2025-09-10: count of 120 corrected to 210 alive at 1st instar (Miscounted one tray).`);
   });
 
   it('the opening is corrected by a new opening with a reason; its first count follows, the old one stays struck', async () => {

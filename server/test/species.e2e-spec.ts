@@ -46,9 +46,15 @@ describe('species catalogue', () => {
     ['Avicularia versicolor', 'Caribena versicolor'],
     ['citharischius', 'Pelinobius muticus'],
     ['crawshayi', 'Pelinobius muticus'],
+    // Mendoza & Francke 2017, doi:10.1071/IS16023 (World Spider Catalog): a synonym of B. smithi
+    ['annitha', 'Brachypelma smithi'],
   ])('an old name "%s" finds %s', async (q, expected) => {
     const found = await search(q);
     expect(found.items.map((s) => s.scientificName)).toContain(expected);
+  });
+
+  it('finds B. smithi, not B. hamorii, for the old name annitha (Mendoza & Francke 2017)', async () => {
+    expect((await search('annitha')).items.map((s) => s.scientificName)).toEqual(['Brachypelma smithi']);
   });
 
   it('searches by genus prefix and by epithet prefix, case-insensitively', async () => {

@@ -154,7 +154,8 @@ describe('statement PDF', () => {
     const text = await pdfText(res.body as Buffer);
     const b = tomasz();
     expect(text).toContain('Project: Account test project');
-    expect(text).toContain('Party: Tomasz Partner (partner)');
+    expect(text).toContain('Party: Tomasz Partner (Partner)');
+    expect(text).not.toMatch(/\[in-force\]|\(in-progress\)|hand-over {2}/);
     expect(text).toContain('Version 1. Price per spiderling for cash-outs: EUR 5.00.');
     expect(text).toContain(`Share: ${b.share} young`);
     expect(text).toContain(`Handed over: ${b.handedOver} young`);
@@ -165,6 +166,32 @@ describe('statement PDF', () => {
     expect(text).toMatch(/The terms say the deal carries over/);
     expect(text).toMatch(/Overnight courier, tracking TRK-88/);
     expect(text).toMatch(/overnight service/i);
+  });
+
+  it("speaks the reader's language: German words, no codes, for a partner who chose German", async () => {
+    await api(t.app).patch('/api/users/me').set('Authorization', s.tomasz.bearer).send({ language: 'de' }).expect(200);
+    try {
+      const res = await api(t.app)
+        .get(`/api/projects/${s.projectId}/statements/${s.tomaszId}.pdf`)
+        .set('Authorization', s.tomasz.bearer)
+        .buffer(true)
+        .parse((r, cb) => {
+          const chunks: Buffer[] = [];
+          r.on('data', (c: Buffer) => chunks.push(c));
+          r.on('end', () => cb(null, Buffer.concat(chunks)));
+        })
+        .expect(200);
+      const text = await pdfText(res.body as Buffer);
+      const b = tomasz();
+      expect(text).toContain('Broodsilk-Kontoauszug');
+      expect(text).toContain('Projekt: Account test project');
+      expect(text).toContain('Beteiligter: Tomasz Partner (Partner)');
+      expect(text).toContain(`Noch geschuldet: ${b.owedSpiderlings} Jungtiere`);
+      expect(text).toContain('Versand lebender Wirbelloser');
+      expect(text).not.toMatch(/\[in-force\]|\(in-progress\)|Still owed/);
+    } finally {
+      await api(t.app).patch('/api/users/me').set('Authorization', s.tomasz.bearer).send({ language: 'en' }).expect(200);
+    }
   });
 });
 

@@ -1,87 +1,119 @@
 import PDFDocument from 'pdfkit';
-import { formatMoneyCode, sacCountLine, shareLine, type StatementResponse } from '@broodsilk/shared';
+import {
+  broodStageLabel,
+  formatMoneyCode,
+  label,
+  shippingCautions,
+  type BroodStage,
+  type ProjectRole,
+  type ShippingPayer,
+  type StatementResponse,
+} from '@broodsilk/shared';
+import type { Reader } from '../users/reader-words';
 
 // The built-in PDF fonts cover WinAnsi only; these few signs from the share explanations are not in it.
 const WIN_ANSI_FALLBACK: Record<string, string> = { '−': '-', '→': '->', '≈': '~', '≤': '<=', '≥': '>=' };
 export const pdfSafe = (text: string): string => text.replace(/[−→≈≤≥]/g, (c) => WIN_ANSI_FALLBACK[c] ?? c);
 
-const entryLine = (e: StatementResponse['entries'][number]): string => {
-  const who = e.party?.name ?? (e.from && e.to ? `${e.from.name} to ${e.to.name}` : '');
+const entryLine = (e: StatementResponse['entries'][number], { t }: Reader): string => {
+  const who = e.party?.name ?? (e.from && e.to ? t('statement.fromTo', { from: e.from.name, to: e.to.name }) : '');
   const what =
     e.kind === 'arrival'
-      ? `arrived ${e.arrivedAlive} alive, ${e.arrivedDead} dead`
+      ? t('statement.arrived', { alive: e.arrivedAlive, dead: e.arrivedDead })
       : e.kind === 'money'
         ? formatMoneyCode(e.amountMinor!, e.currency!)
         : e.kind === 'sale'
-          ? `${e.count} young for ${formatMoneyCode(e.priceMinor!, e.currency!)}`
+          ? t('statement.sold', { count: e.count, price: formatMoneyCode(e.priceMinor!, e.currency!) })
           : e.kind === 'correction'
-            ? `reverses an earlier entry: ${e.reason}`
+            ? t('statement.reverses', { reason: e.reason })
             : e.kind === 'confirmation'
-              ? 'payment confirmed'
-              : `${e.count} young${e.method === 'shipment' ? ` by ${e.carrier}, tracking ${e.tracking}` : e.method ? ', picked up' : ''}`;
-  return `#${e.seq}  ${e.date}  ${e.kind}  ${who}: ${what}  [${e.status}]`;
+              ? t('statement.paymentConfirmed')
+              : e.method === 'shipment'
+                ? t('statement.shipped', { count: e.count, carrier: e.carrier, tracking: e.tracking })
+                : e.method
+                  ? t('statement.pickedUp', { count: e.count })
+                  : t('statement.young', { count: e.count });
+  return `#${e.seq}  ${e.date}  ${label(t, 'entryKind', e.kind)}  ${who}: ${what}  [${label(t, 'entryStatus', e.status)}]`;
 };
 
-/** The statement as a PDF (pdfkit): project, party, terms in force, shares per sac, entries, balance. */
-export function statementPdf(s: StatementResponse): Promise<Buffer> {
-  const doc = new PDFDocument({ size: 'A4', margin: 50, info: { Title: `Statement: ${s.project.title} (${s.party.name})`, Author: 'Broodsilk' } });
+/** The statement as a PDF (pdfkit) in the reader's language: project, party, terms in force, shares per sac, entries, balance. */
+export function statementPdf(s: StatementResponse, reader: Reader): Promise<Buffer> {
+  const { t } = reader;
+  const doc = new PDFDocument({
+    size: 'A4',
+    margin: 50,
+    lang: reader.lng,
+    info: { Title: t('statement.docTitle', { project: s.project.title, party: s.party.name }), Author: 'Broodsilk' },
+  });
   const chunks: Buffer[] = [];
   doc.on('data', (c: Buffer) => chunks.push(c));
   const done = new Promise<Buffer>((resolve, reject) => {
     doc.on('end', () => resolve(Buffer.concat(chunks)));
     doc.on('error', reject);
   });
-  const heading = (t: string) => doc.moveDown(0.8).font('Helvetica-Bold').fontSize(12).text(pdfSafe(t)).font('Helvetica').fontSize(10);
-  const line = (t: string) => doc.text(pdfSafe(t));
+  const heading = (text: string) => doc.moveDown(0.8).font('Helvetica-Bold').fontSize(12).text(pdfSafe(text)).font('Helvetica').fontSize(10);
+  const line = (text: string) => doc.text(pdfSafe(text));
 
-  doc.font('Helvetica-Bold').fontSize(16).text('Broodsilk account statement');
+  doc.font('Helvetica-Bold').fontSize(16).text(t('statement.title'));
   doc.font('Helvetica').fontSize(10);
-  line(`Project: ${s.project.title}`);
-  line(`Party: ${s.party.name} (${s.party.role})`);
-  line(`Made on: ${s.generatedAt.slice(0, 10)}`);
+  line(t('statement.project', { title: s.project.title }));
+  line(t('statement.party', { name: s.party.name, role: label(t, 'role', s.party.role as ProjectRole) }));
+  line(t('statement.madeOn', { date: s.generatedAt.slice(0, 10) }));
 
-  heading('Terms in force');
-  if (!s.terms) line('No version of the terms is in force yet.');
+  heading(t('statement.termsHeading'));
+  if (!s.terms) line(t('statement.noTerms'));
   else {
-    line(`Version ${s.terms.number}. Price per spiderling for cash-outs: ${formatMoneyCode(s.terms.pricePerSpiderlingMinor, s.terms.currency)}.`);
-    for (const l of s.terms.lines) line(`${l.pickOrder}. ${l.name}: weight ${l.weight}${l.fixedCount ? `, ${l.fixedCount} fixed` : ''}`);
-    line(`Failure clause: ${s.terms.failureClauseText}`);
-    line(`Young are handed over at: ${s.terms.handOverStage}. Shipping paid by: ${s.terms.shippingPaidBy}.`);
+    line(t('statement.termsVersion', { number: s.terms.number, price: formatMoneyCode(s.terms.pricePerSpiderlingMinor, s.terms.currency) }));
+    for (const l of s.terms.lines)
+      line(t(l.fixedCount ? 'statement.termsLineFixed' : 'statement.termsLine', { order: l.pickOrder, name: l.name, weight: l.weight, fixed: l.fixedCount }));
+    line(t('statement.failureClause', { text: label(t, 'failureClauseText', s.terms.failureClause) }));
+    line(
+      t('statement.handOver', {
+        stage: broodStageLabel(t, s.terms.handOverStage as BroodStage, reader.numbering),
+        payer: label(t, 'shippingPayer', s.terms.shippingPaidBy as ShippingPayer),
+      }),
+    );
   }
 
-  heading('Shares per sac');
-  if (!s.sacs.length) line('No sac yet.');
+  heading(t('statement.sharesHeading'));
+  if (!s.sacs.length) line(t('statement.noSac'));
   for (const sac of s.sacs) {
-    line(sacCountLine(sac));
+    line(
+      t(sac.estimated ? 'statement.sacLineEstimated' : 'statement.sacLine', {
+        layDate: sac.layDate,
+        outcome: label(t, 'sacOutcome', sac.outcome),
+        count: sac.count,
+      }),
+    );
     for (const p of sac.parties) line(`   ${p.name}: ${p.count}`);
     for (const e of sac.explanation) line(`   ${e}`);
     if (sac.failure) line(`   ${sac.failure}`);
   }
 
-  heading('Entries');
-  if (!s.entries.length) line('No entries yet.');
-  for (const e of s.entries) line(entryLine(e));
+  heading(t('statement.entriesHeading'));
+  if (!s.entries.length) line(t('statement.noEntries'));
+  for (const e of s.entries) line(entryLine(e, reader));
 
-  heading('Balance');
+  heading(t('statement.balanceHeading'));
   const b = s.balance;
-  if (!b) line('No share in the terms in force.');
+  if (!b) line(t('statement.noShare'));
   else {
-    line(shareLine(b.share, s.provisional));
-    line(`Handed over: ${b.handedOver} young`);
-    line(`Sold: ${b.sold} young`);
-    line(`Cashed out: ${b.cashedOut} young`);
-    line(`Still owed: ${b.owedSpiderlings} young`);
+    line(t(s.provisional ? 'statement.shareProvisional' : 'statement.share', { count: b.share }));
+    line(t('statement.handedOver', { count: b.handedOver }));
+    line(t('statement.soldCount', { count: b.sold }));
+    line(t('statement.cashedOut', { count: b.cashedOut }));
+    line(t('statement.stillOwed', { count: b.owedSpiderlings }));
   }
-  if (!s.debts.length) line('Money: nothing owed between this party and the others.');
-  for (const d of s.debts) line(`Money: ${d.fromName} owes ${d.toName} ${formatMoneyCode(d.amountMinor, d.currency)}`);
+  if (!s.debts.length) line(t('statement.noDebts'));
+  for (const d of s.debts) line(t('statement.debt', { from: d.fromName, to: d.toName, amount: formatMoneyCode(d.amountMinor, d.currency) }));
 
   if (s.failureNotes.length) {
-    heading('A sac failed');
+    heading(t('statement.failedHeading'));
     for (const n of s.failureNotes) line(n);
   }
   if (s.shippingCautions.length) {
-    heading('Shipping live invertebrates');
-    for (const c of s.shippingCautions) line(`- ${c}`);
+    heading(t('statement.shippingHeading'));
+    for (const c of shippingCautions(t)) line(`- ${c}`);
   }
   doc.end();
   return done;

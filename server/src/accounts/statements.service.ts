@@ -14,6 +14,7 @@ import { SHIPPING_CAUTIONS } from './shipping-cautions';
 import { statementCsv } from './statement-csv';
 import { statementPdf } from './statement-pdf';
 import { Clock } from '../common/clock';
+import { loadReader } from '../users/reader-words';
 
 /**
  * Whether a row concerns the party, made by or to them: it names them, they recorded it, it moves
@@ -44,9 +45,10 @@ export class StatementsService {
     return { filename: fileName(s, 'csv'), body: statementCsv(s) };
   }
 
+  /** The PDF in the language and stage numbering of the member who asks for it. */
   async pdf(access: ProjectAccess, memberId: string): Promise<{ filename: string; body: Buffer }> {
     const s = await this.statement(access, memberId);
-    return { filename: fileName(s, 'pdf'), body: await statementPdf(s) };
+    return { filename: fileName(s, 'pdf'), body: await statementPdf(s, await loadReader(this.em, access.member.user)) };
   }
 
   /** E-mails the statement (PDF attached) to the party's address: their account's, else the one the owner noted. */
@@ -68,7 +70,7 @@ export class StatementsService {
         '',
         'Broodsilk',
       ].join('\n'),
-      attachments: [{ filename: fileName(s, 'pdf'), content: await statementPdf(s), contentType: 'application/pdf' }],
+      attachments: [{ filename: fileName(s, 'pdf'), content: await statementPdf(s, await loadReader(this.em, member.user)), contentType: 'application/pdf' }],
     });
     return { sentTo: to };
   }

@@ -65,6 +65,7 @@ export class AuthService {
       displayName: dto.displayName,
       passwordHash: await hashPassword(dto.password),
       timeZone: dto.timeZone ?? 'UTC',
+      language: dto.language ?? 'en',
     });
     const created = await this.em.transactional(async (em) => {
       // Every column the entity would write (its defaults included), in one statement that skips a taken address.

@@ -6,6 +6,7 @@ import type { CalendarFeedResponse } from '@broodsilk/shared';
 import { appConfig } from '../config/app.config';
 import type { AuthUser } from '../common/auth-user';
 import { User } from '../users/user.entity';
+import { readerFrom, type Reader } from '../users/reader-words';
 import { ProjectMember } from '../projects/project-member.entity';
 import { AnimalsService } from '../animals/animals.service';
 import { Sac } from '../sacs/sac.entity';
@@ -67,7 +68,8 @@ export class CalendarService {
     if (!feed) throw new NotFoundException({ message: NOT_FOUND });
     const u = feed.user;
     const viewer: AuthUser = { id: u.id, email: u.email, role: u.role, timeZone: u.timeZone, mustEnrolSecondFactor: false };
-    const events = [...(await this.sacEvents(viewer)), ...(await this.animals.malesByClock(viewer)).flatMap(maleClockEvents)];
+    const reader = readerFrom(u);
+    const events = [...(await this.sacEvents(viewer, reader)), ...(await this.animals.malesByClock(viewer)).flatMap((m) => maleClockEvents(m, reader))];
     const cal = ical({ name: 'Broodsilk', prodId: { company: 'Broodsilk', product: 'breeding-calendar', language: 'EN' } });
     // Dates stay floating calendar dates (no time zone): all-day events, DTEND exclusive (RFC 5545 §3.6.1).
     for (const e of events)
@@ -75,7 +77,7 @@ export class CalendarService {
     return cal.toString();
   }
 
-  private async sacEvents(viewer: AuthUser): Promise<FeedEvent[]> {
+  private async sacEvents(viewer: AuthUser, reader: Reader): Promise<FeedEvent[]> {
     const memberships = await this.em.find(ProjectMember, { user: viewer.id });
     const sacs = await this.em.find(
       Sac,
@@ -83,6 +85,6 @@ export class CalendarService {
       { populate: SAC_POPULATE, orderBy: { layDate: 'asc' } },
     );
     const responses = await this.views.build(this.em, sacs, viewer.timeZone);
-    return sacs.flatMap((s, i) => sacEvents(s.project.title, responses[i]));
+    return sacs.flatMap((s, i) => sacEvents(s.project.title, responses[i], reader));
   }
 }

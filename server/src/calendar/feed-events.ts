@@ -1,4 +1,7 @@
-import { addDays, isBroodStageAtLeast, type CalendarDate, type MaleClockRow, type SacResponse } from '@broodsilk/shared';
+import { addDays, broodStageLabel, isBroodStageAtLeast, wordsFor, type CalendarDate, type MaleClockRow, type SacResponse } from '@broodsilk/shared';
+import type { Reader } from '../users/reader-words';
+
+const ENGLISH: Reader = { t: wordsFor('en'), lng: 'en', numbering: 'us', unit: 'C' };
 
 /** One all-day event: `end` is exclusive (the day after the last day), as RFC 5545 §3.6.1 has it. */
 export interface FeedEvent {
@@ -22,7 +25,6 @@ export const EXPECTED_STAGES = [
     stage: 'eggs-with-legs',
     fromDay: 20,
     toDay: 25,
-    title: 'Eggs with legs expected',
     source:
       'Guide only, medium confidence: prelarvae hatch about day 20 (B. smithi; brachypelma-smithi.de after Vachon 1957), later in some genera (arachnoworld.de: day 25–42).',
   },
@@ -31,7 +33,6 @@ export const EXPECTED_STAGES = [
     stage: 'first-instar',
     fromDay: 42,
     toDay: 56,
-    title: 'Free-living young expected',
     source:
       'Guide only, medium confidence: young leave the sac about 6–8 weeks after laying (Theraphosa blondi, day 42–56; with the mother about week 6, tarantulaspider.net).',
   },
@@ -39,16 +40,22 @@ export const EXPECTED_STAGES = [
 
 const DOMAIN = 'broodsilk';
 
-export function sacEvents(projectTitle: string, sac: SacResponse): FeedEvent[] {
+export function sacEvents(projectTitle: string, sac: SacResponse, { t, numbering }: Reader = ENGLISH): FeedEvent[] {
   const out: FeedEvent[] = [];
-  const where = `${projectTitle}, sac laid ${sac.layDate}`;
+  const where = t('calendar.where', { project: projectTitle, layDate: sac.layDate });
   if (!sac.pulled) {
     out.push({
       uid: `pull-window-${sac.id}@${DOMAIN}`,
       start: sac.pullWindow.opensOn,
       end: addDays(sac.pullWindow.closesOn, 1),
-      summary: `Pull window: ${projectTitle}`,
-      description: `${where}. Pull between day ${sac.pullWindow.fromDay} and day ${sac.pullWindow.toDay} (${sac.pullWindow.opensOn} to ${sac.pullWindow.closesOn}).`,
+      summary: t('calendar.pullWindow', { project: projectTitle }),
+      description: t('calendar.pullBetween', {
+        where,
+        from: sac.pullWindow.fromDay,
+        to: sac.pullWindow.toDay,
+        opens: sac.pullWindow.opensOn,
+        closes: sac.pullWindow.closesOn,
+      }),
     });
   }
   for (const e of EXPECTED_STAGES) {
@@ -57,24 +64,27 @@ export function sacEvents(projectTitle: string, sac: SacResponse): FeedEvent[] {
       uid: `${e.key}-${sac.id}@${DOMAIN}`,
       start: addDays(sac.layDate, e.fromDay),
       end: addDays(sac.layDate, e.toDay + 1),
-      summary: `${e.title}: ${projectTitle}`,
-      description: `${where}. Day ${e.fromDay}–${e.toDay}. ${e.source}`,
+      summary: t('calendar.stageExpected', { stage: broodStageLabel(t, e.stage, numbering), project: projectTitle }),
+      description: t('calendar.stageDays', { where, from: e.fromDay, to: e.toDay, source: e.source }),
     });
   }
   return out;
 }
 
-const CLOCK_WORDS = { fresh: 'fresh', prime: 'in his prime', late: 'late in his time', 'past-typical': 'past the typical lifespan' } as const;
-
 /** The days a male's clock moves to its next state (the maturing day itself is not an event). */
-export function maleClockEvents(row: MaleClockRow): FeedEvent[] {
+export function maleClockEvents(row: MaleClockRow, { t }: Reader = ENGLISH): FeedEvent[] {
   return row.clock.changes
     .filter((c) => c.state !== 'fresh')
     .map((c) => ({
       uid: `male-clock-${row.animal.id}-${c.state}@${DOMAIN}`,
       start: c.from,
       end: addDays(c.from, 1),
-      summary: `${row.animal.label}: ${CLOCK_WORDS[c.state]}`,
-      description: `Male clock of ${row.animal.label}: from ${c.from} he is ${CLOCK_WORDS[c.state]} (typical lifespan after the maturing molt, from memory; species differ).`,
+      summary: t('calendar.maleClock', { animal: row.animal.label, state: t(`maleClock.${c.state}.label`) }),
+      description: t('calendar.maleClockFrom', {
+        animal: row.animal.label,
+        from: c.from,
+        state: t(`maleClock.${c.state}.label`),
+        hint: t(`maleClock.${c.state}.hint`),
+      }),
     }));
 }

@@ -8,6 +8,7 @@ import { ProjectMember } from './project-member.entity';
 import { TermsLine } from './terms-line.entity';
 import { toMemberResponse } from './projects.mapper';
 import type { AddMemberDto } from './dto/add-member.dto';
+import { label, wordsFor } from '@broodsilk/shared';
 
 @Injectable()
 export class MembersService {
@@ -62,7 +63,7 @@ export class MembersService {
         kind: 'member.removed',
         subjectType: 'member',
         subjectId: m.id,
-        summary: `Removed ${m.user?.displayName ?? m.name} (${m.role}).`,
+        summary: wordsFor('en')('text.memberRemoved', { name: m.user?.displayName ?? m.name, role: label(wordsFor('en'), 'role', m.role) }),
         data: { role: m.role },
       });
       tx.remove(m);

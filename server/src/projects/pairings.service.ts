@@ -14,6 +14,7 @@ import { pairingMale } from './pairing-male';
 import { assertTakesNew } from './project-open';
 import type { CreatePairingDto } from './dto/create-pairing.dto';
 import { Clock } from '../common/clock';
+import { label, wordsFor } from '@broodsilk/shared';
 
 // A clock a few minutes fast on the keeper's phone is not a pairing in the future.
 const FUTURE_SLACK_MS = 5 * 60_000;
@@ -66,7 +67,8 @@ export class PairingsService {
         reason: target ? dto.reason!.trim() : null,
         warningReason,
       });
-      const what = `pairing on ${startedOn} with ${male.label} (${dto.durationMinutes} min): ${dto.outcome}`;
+      const t = wordsFor('en');
+      const outcome = label(t, 'pairingOutcome', dto.outcome);
       this.activity.record(tx, {
         projectId: p.id,
         actorId: viewer.id,
@@ -74,9 +76,23 @@ export class PairingsService {
         subjectType: 'pairing',
         subjectId: pairing.id,
         summary: target
-          ? `Pairing on ${target.startedOn} (${target.outcome}) corrected to a ${what} (${dto.reason!.trim()}).`
-          : `Pairing on ${startedOn} with ${male.label} (${dto.durationMinutes} min): ${dto.outcome}.`,
-        data: { on: startedOn, maleId: male.id, outcome: dto.outcome, durationMinutes: dto.durationMinutes, ...(target ? { corrects: target.id } : {}) },
+          ? t('text.pairingCorrected', {
+              date: target.startedOn,
+              was: label(t, 'pairingOutcome', target.outcome),
+              newDate: startedOn,
+              minutes: dto.durationMinutes,
+              outcome,
+              reason: dto.reason!.trim(),
+            })
+          : t('text.pairingOnWith', { date: startedOn, male: male.label, minutes: dto.durationMinutes, outcome }),
+        data: {
+          on: startedOn,
+          maleId: male.id,
+          male: male.label,
+          outcome: dto.outcome,
+          durationMinutes: dto.durationMinutes,
+          ...(target ? { corrects: target.id } : {}),
+        },
       });
       return pairing.id;
     });

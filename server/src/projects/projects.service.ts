@@ -19,6 +19,7 @@ import type { CreateProjectDto } from './dto/create-project.dto';
 import type { UpdateProjectDto } from './dto/update-project.dto';
 import type { EndProjectDto } from './dto/end-project.dto';
 import { Clock } from '../common/clock';
+import { label, wordsFor } from '@broodsilk/shared';
 
 const PROJECT_POPULATE = ['owner', 'female.species', 'male.species'] as const;
 const DETAIL_POPULATE = ['owner', 'female.species', 'female.recordedBy', 'female.ownerUser', 'male.species', 'male.recordedBy', 'male.ownerUser'] as const;
@@ -149,11 +150,18 @@ export class ProjectsService {
   end(viewer: AuthUser, access: ProjectAccess, dto: EndProjectDto): Promise<ProjectResponse> {
     return this.changeEnd(viewer, access, (p) => {
       if (p.closedOn) throw new ConflictException({ message: `This project was closed on ${p.closedOn}.` });
-      if (p.endedEarlyReason) throw new ConflictException({ message: `This project already ended early on ${p.endedOn} (${p.endedEarlyReason}).` });
+      if (p.endedEarlyReason)
+        throw new ConflictException({
+          message: wordsFor('en')('text.alreadyEnded', { date: p.endedOn, reason: label(wordsFor('en'), 'endedEarly', p.endedEarlyReason) }),
+        });
       p.endedEarlyReason = dto.reason;
       p.endedEarlyNote = dto.note ?? null;
       p.endedOn = this.today(viewer);
-      return { kind: 'project.ended', summary: `Ended the project early: ${dto.reason}.`, data: { reason: dto.reason, note: dto.note ?? null } };
+      return {
+        kind: 'project.ended',
+        summary: wordsFor('en')('text.endedEarly', { reason: label(wordsFor('en'), 'endedEarly', dto.reason) }),
+        data: { reason: dto.reason, note: dto.note ?? null },
+      };
     });
   }
 
@@ -175,7 +183,11 @@ export class ProjectsService {
       p.endedEarlyReason = null;
       p.endedEarlyNote = null;
       p.endedOn = null;
-      return { kind: 'project.reopened', summary: `Reopened the project (it had ended early${was.on ? ` on ${was.on}` : ''}: ${was.reason}).`, data: was };
+      return {
+        kind: 'project.reopened',
+        summary: `Reopened the project (it had ended early${was.on ? ` on ${was.on}` : ''}: ${label(wordsFor('en'), 'endedEarly', was.reason)}).`,
+        data: was,
+      };
     });
   }
 

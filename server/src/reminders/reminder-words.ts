@@ -1,4 +1,4 @@
-import { MALE_CLOCK_LABELS, NOTIFICATION_KIND_LABELS, type MaleClockState, type NotificationKind } from '@broodsilk/shared';
+import { NOTIFICATION_KIND_LABELS, wordsFor, type MaleClockState, type NotificationKind } from '@broodsilk/shared';
 
 /**
  * The words of every reminder, in one place (to move to the message catalogue with the rest of
@@ -53,7 +53,9 @@ const WORDS: Record<NotificationKind, (d: Details, c: WordsContext) => ReminderW
     body: `The reading at ${formatInstantIn(String(d.readAt), c.timeZone)} (${d.temperatureC === '' ? '' : `${d.temperatureC} °C`}${d.humidityPercent === '' ? '' : ` ${d.humidityPercent} %`}) is outside the band set for the sac laid ${c.layDate}. Check the incubator and its heat source.`,
   }),
   'male-clock': (d, c) => {
-    const state = MALE_CLOCK_LABELS[d.state as Exclude<MaleClockState, 'fresh'>];
+    const key = d.state as Exclude<MaleClockState, 'fresh'>;
+    const t = wordsFor('en');
+    const state = { label: t(`maleClock.${key}.label`), hint: t(`maleClock.${key}.hint`) };
     return { title: `Male clock: ${c.about} — ${state.label}`, body: `From ${formatDay(String(d.from))}: ${state.hint}` };
   },
   'female-molted': (d, c) => ({

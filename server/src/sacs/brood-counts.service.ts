@@ -16,6 +16,7 @@ import { assertNotFuture } from './sac-rules';
 import { fieldError } from '../common/field-errors';
 import { toBroodCountResponse } from './brood.mapper';
 import type { BroodCountDto } from './dto/brood-count.dto';
+import { broodStageLabel, label, wordsFor } from '@broodsilk/shared';
 import { KeptBackBatch } from './kept-back-batch.entity';
 
 const byInstant = (a: BroodCount, b: BroodCount) => a.at.getTime() - b.at.getTime() || a.createdAt.getTime() - b.createdAt.getTime();
@@ -136,7 +137,11 @@ function correctionTarget(counts: BroodCount[], id: string): BroodCount {
 }
 
 function countSummary(sac: Sac, dto: BroodCountDto, lost: number, target: BroodCount | null): string {
-  const what = `${dto.estimated ? 'about ' : ''}${dto.alive} alive at ${dto.stage}${lost ? `, ${lost} lost (${dto.lossReason})` : ''}`;
+  const t = wordsFor('en');
+  const values = { about: dto.estimated ? t('text.about') : '', alive: dto.alive, stage: broodStageLabel(t, dto.stage), lost };
+  const what = lost
+    ? t('text.broodCountLost', { ...values, reason: dto.lossReason ? label(t, 'broodLoss', dto.lossReason).toLowerCase() : '' })
+    : t('text.broodCount', values);
   if (target) return `Brood of the sac laid ${sac.layDate}: count of ${target.alive} corrected to ${what} (${dto.reason!.trim()}).`;
   return `Brood of the sac laid ${sac.layDate}: ${what}.`;
 }

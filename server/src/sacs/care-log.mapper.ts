@@ -1,4 +1,4 @@
-import type { CareLogEntryResponse, SacResponse } from '@broodsilk/shared';
+import { broodStageLabel, formatTemperature, label, wordsFor, type CareLogEntryResponse, type SacResponse, type Words } from '@broodsilk/shared';
 import type { SacLogEntry } from './sac-log-entry.entity';
 import { readingSide } from './sac-band';
 
@@ -22,26 +22,19 @@ export function toCareLogResponse(e: SacLogEntry, struckBy: SacLogEntry | undefi
   };
 }
 
-const KIND_WORDS: Record<SacLogEntry['kind'], string> = {
-  roll: 'Roll',
-  temperature: 'Temperature',
-  humidity: 'Humidity',
-  check: 'Check',
-  stage: 'Stage change',
-  note: 'Note',
-  strike: 'Correction',
-};
-
-export function careLogSummary(e: SacLogEntry, layDate: string): string {
+/** The timeline sentence for a care-log entry, in the catalogue's words (stored in English; readers re-render from `data`). */
+export function careLogSummary(e: SacLogEntry, layDate: string, t: Words = wordsFor('en')): string {
   const what =
     e.kind === 'temperature'
-      ? `Temperature ${e.temperatureC!.toFixed(1)} °C`
+      ? t('text.temperatureNow', { temperature: formatTemperature(e.temperatureC!, 'C') })
       : e.kind === 'humidity'
-        ? `Humidity ${e.humidityPercent} %`
+        ? t('text.humidityNow', { percent: e.humidityPercent })
         : e.kind === 'stage'
-          ? `Stage now ${e.stage}`
+          ? t('text.stageNow', { stage: broodStageLabel(t, e.stage!) })
           : e.kind === 'strike'
-            ? `Entry struck${e.text ? `: ${e.text}` : ''}`
-            : KIND_WORDS[e.kind];
-  return `${what} (sac laid ${layDate}).`;
+            ? e.text
+              ? t('text.entryStruckBecause', { reason: e.text })
+              : t('text.entryStruck')
+            : label(t, 'careLogKind', e.kind);
+  return t('text.ofSac', { what, layDate });
 }

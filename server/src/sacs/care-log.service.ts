@@ -66,7 +66,14 @@ export class CareLogService {
         subjectType: 'sac',
         subjectId: sac.id,
         summary: careLogSummary(entry, sac.layDate),
-        data: { entryId: entry.id, at: at.toISOString(), ...(strikes ? { strikes: strikes.id } : {}) },
+        data: {
+          entryId: entry.id,
+          at: at.toISOString(),
+          layDate: sac.layDate,
+          ...(entry.temperatureC != null ? { temperatureC: entry.temperatureC } : {}),
+          ...(entry.stage ? { stage: entry.stage } : {}),
+          ...(strikes ? { strikes: strikes.id } : {}),
+        },
         at,
       });
       return entry.id;

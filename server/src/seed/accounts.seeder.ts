@@ -138,11 +138,13 @@ export const seedAccounts: FeatureSeeder = async (ctx) => {
           party: tomaszM,
           count: handOver,
           method: 'shipment',
-          carrier: 'Overnight courier',
+          // Berlin to Chicago: an international live-animal shipment, with the permits it needs
+          // (docs/trade-facts.md §9), not a plain parcel.
+          carrier: 'Live-animal air freight, export permit and US import declaration filed',
           tracking: 'BRS-DEMO-0412',
         },
         mira,
-        `${handOver} young handed over to ${tomaszM.name} (shipped with Overnight courier, tracking BRS-DEMO-0412).`,
+        `${handOver} young handed over to ${tomaszM.name} (shipped with live-animal air freight, export permit and US import declaration filed, tracking BRS-DEMO-0412).`,
       );
       await append(
         brood,
@@ -153,7 +155,7 @@ export const seedAccounts: FeatureSeeder = async (ctx) => {
           toParty: tomaszM,
           amountMinor: 1450,
           currency: 'EUR',
-          note: 'Courier fee for Tomasz’s parcel, paid by Mira; the terms say the recipient pays shipping.',
+          note: 'Freight and permit fees for Tomasz’s shipment, paid by Mira; the terms say the recipient pays shipping.',
         },
         tomasz,
         `${miraM.name} paid ${tomaszM.name} EUR 14.50.`,

@@ -9,12 +9,4 @@ import { seedMotherKeptBrood } from './mother-kept-brood.seeder';
 
 /** The scenario's parts, in dependency order; each feature adds its seeder here. */
 // seedAccounts reads the counted broods the sacs seeders lay; the mother-kept brood brings its own terms.
-export const DEMO_SEEDERS: FeatureSeeder[] = [
-  seedCollection,
-  seedProjects,
-  seedSacs,
-  seedKeptBack,
-  seedUnhappySeason,
-  seedAccounts,
-  seedMotherKeptBrood,
-];
+export const DEMO_SEEDERS: FeatureSeeder[] = [seedCollection, seedProjects, seedSacs, seedKeptBack, seedUnhappySeason, seedAccounts, seedMotherKeptBrood];

@@ -60,7 +60,7 @@ export const seedMotherKeptBrood: FeatureSeeder = async (ctx) => {
   em.create(TermsAcceptance, { version: terms, member: miraMember, recordedBy: mira, createdAt: started });
   em.create(TermsAcceptance, { version: terms, member: tomaszMember, recordedBy: tomasz, createdAt: started });
   const pairedOn = addDays(laid, -130);
-  em.create(Pairing, { project, startedAt: eveningOf(pairedOn), startedOn: pairedOn, durationMinutes: 25, outcome: 'connected', recordedBy: mira });
+  em.create(Pairing, { project, male, startedAt: eveningOf(pairedOn), startedOn: pairedOn, durationMinutes: 25, outcome: 'connected', recordedBy: mira });
   const sac = em.create(Sac, {
     project,
     layDate: laid,

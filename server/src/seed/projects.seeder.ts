@@ -1,4 +1,4 @@
-import { addDays, todayIn, type EndedEarlyReason, type PairingOutcome, type ProjectRole } from '@broodsilk/shared';
+import { addDays, label, todayIn, wordsFor, type EndedEarlyReason, type PairingOutcome, type ProjectRole } from '@broodsilk/shared';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { Animal } from '../animals/animal.entity';
 import { User } from '../users/user.entity';
@@ -195,11 +195,17 @@ export const seedProjects: FeatureSeeder = async (ctx) => {
         recordedBy: mira,
         createdAt: eveningOf(startedOn),
       });
-      log(mira, eveningOf(startedOn), 'pairing.recorded', `Pairing on ${startedOn} (${minutes} min): ${outcome}.`, {
-        subjectType: 'pairing',
-        subjectId: pairing.id,
-        data: { on: startedOn, outcome },
-      });
+      log(
+        mira,
+        eveningOf(startedOn),
+        'pairing.recorded',
+        wordsFor('en')('text.pairingOn', { date: startedOn, minutes, outcome: label(wordsFor('en'), 'pairingOutcome', outcome) }),
+        {
+          subjectType: 'pairing',
+          subjectId: pairing.id,
+          data: { on: startedOn, outcome, durationMinutes: minutes },
+        },
+      );
     }
 
     for (const [i, t] of (s.terms ?? []).entries()) {
@@ -260,7 +266,9 @@ export const seedProjects: FeatureSeeder = async (ctx) => {
       p.endedEarlyReason = s.ended.reason;
       p.endedEarlyNote = s.ended.note;
       p.endedOn = on;
-      log(mira, eveningOf(on), 'project.ended', `Ended the project early: ${s.ended.reason}.`, { data: { reason: s.ended.reason } });
+      log(mira, eveningOf(on), 'project.ended', wordsFor('en')('text.endedEarly', { reason: label(wordsFor('en'), 'endedEarly', s.ended.reason) }), {
+        data: { reason: s.ended.reason },
+      });
     }
   }
 };

@@ -1,4 +1,5 @@
-import { addDays, todayIn, type BroodStage } from '@broodsilk/shared';
+import { addDays, broodStageLabel, label, todayIn, wordsFor, type BroodStage } from '@broodsilk/shared';
+import { careLogSummary } from '../sacs/care-log.mapper';
 import type { User } from '../users/user.entity';
 import { ActivityService } from '../activity/activity.service';
 import { ProjectMember } from '../projects/project-member.entity';
@@ -21,6 +22,8 @@ const HOUR = 3_600_000;
  * - "Versicolor shared brood": laid 70 days ago, opened on day 40, counted at first and second
  *   instar with a few losses (brood); the accounts seeder shares out its latest count.
  */
+const en = wordsFor('en');
+
 export const seedSacs: FeatureSeeder = async (ctx) => {
   const { em, users, today: now } = ctx;
   const mira = users.keeper;
@@ -28,11 +31,13 @@ export const seedSacs: FeatureSeeder = async (ctx) => {
   const today = todayIn(mira.timeZone, now);
   const activity = new ActivityService(em, new Clock());
   const ago = (hours: number) => new Date(now.getTime() - hours * HOUR);
-  const event = (p: Project, actor: User, at: Date, kind: string, sac: Sac, summary: string) =>
-    activity.record(em, { projectId: p.id, actorId: actor.id, kind, subjectType: 'sac', subjectId: sac.id, summary, at });
-  const entry = (p: Project, sac: Sac, author: User, at: Date, kind: SacLogEntry['kind'], values: Partial<SacLogEntry> = {}, summary?: string) => {
-    em.create(SacLogEntry, { sac, kind, at, author, createdAt: at, ...values });
-    event(p, author, at, `care.${kind}`, sac, summary ?? `${kind[0].toUpperCase()}${kind.slice(1)} (sac laid ${sac.layDate}).`);
+  const event = (p: Project, actor: User, at: Date, kind: string, sac: Sac, summary: string, data: Record<string, unknown> = {}) =>
+    activity.record(em, { projectId: p.id, actorId: actor.id, kind, subjectType: 'sac', subjectId: sac.id, summary, at, data });
+  // The same sentence and data the care log writes (care-log.mapper, care-log.service).
+  const entry = (p: Project, sac: Sac, author: User, at: Date, kind: SacLogEntry['kind'], values: Partial<SacLogEntry> = {}) => {
+    const e = em.create(SacLogEntry, { sac, kind, at, author, createdAt: at, ...values });
+    const data = { layDate: sac.layDate, ...(e.temperatureC != null ? { temperatureC: e.temperatureC } : {}), ...(e.stage ? { stage: e.stage } : {}) };
+    event(p, author, at, `care.${kind}`, sac, careLogSummary(e, sac.layDate), data);
   };
 
   // --- sac laid, with the mother ---
@@ -85,18 +90,10 @@ export const seedSacs: FeatureSeeder = async (ctx) => {
     [42, 27, 76],
     [18, 26.5, 79],
   ] as const) {
-    entry(
-      hamorii,
-      hSac,
-      ines,
-      ago(h),
-      'temperature',
-      { temperatureC: c, enteredValue: c, enteredUnit: 'C' },
-      `Temperature ${c.toFixed(1)} °C (sac laid ${hLaid}).`,
-    );
-    entry(hamorii, hSac, ines, ago(h - 0.1), 'humidity', { humidityPercent: rh }, `Humidity ${rh} % (sac laid ${hLaid}).`);
+    entry(hamorii, hSac, ines, ago(h), 'temperature', { temperatureC: c, enteredValue: c, enteredUnit: 'C' });
+    entry(hamorii, hSac, ines, ago(h - 0.1), 'humidity', { humidityPercent: rh });
   }
-  entry(hamorii, hSac, ines, ago(30), 'note', { text: 'Two eggs look darker than the rest; watching them.' }, `Note (sac laid ${hLaid}).`);
+  entry(hamorii, hSac, ines, ago(30), 'note', { text: 'Two eggs look darker than the rest; watching them.' });
 
   // --- brood: opened, counted at first and second instar ---
   const versicolor = await findDemoProject(em, ctx, 'versicolorBrood');
@@ -119,7 +116,7 @@ export const seedSacs: FeatureSeeder = async (ctx) => {
     [45, 'first-instar'],
     [58, 'second-instar'],
   ];
-  for (const [d, stage] of stages) entry(versicolor, bSac, d === 45 ? mira : ines, day(d, 8), 'stage', { stage }, `Stage now ${stage} (sac laid ${bLaid}).`);
+  for (const [d, stage] of stages) entry(versicolor, bSac, d === 45 ? mira : ines, day(d, 8), 'stage', { stage });
   const opening = { healthyEggs: 9, eggsWithLegs: 96, nymphs: 0, darkEggs: 7, spoiledEggs: 2, keptBack: 0 };
   const openedAt = day(40, 9);
   em.create(SacOpening, {
@@ -166,7 +163,16 @@ export const seedSacs: FeatureSeeder = async (ctx) => {
       at,
       'brood.counted',
       bSac,
-      `Brood of the sac laid ${bLaid}: ${alive} alive at ${stage}, ${lost} lost (${reason}).`,
+      en('text.ofSac', {
+        what: en('text.broodCountLost', {
+          about: '',
+          alive,
+          stage: broodStageLabel(en, stage),
+          lost,
+          reason: reason ? label(en, 'broodLoss', reason).toLowerCase() : '',
+        }),
+        layDate: bLaid,
+      }),
     );
   }
 };

@@ -1,6 +1,5 @@
-import type { SpeciesBreedingValues, SpeciesResponse, Sourced, ValueSource } from '@broodsilk/shared';
+import { groupCaution, wordsFor, type SpeciesBreedingValues, type SpeciesResponse, type Sourced, type ValueSource } from '@broodsilk/shared';
 import type { Species, SpeciesSourceKey } from './species.entity';
-import { GROUP_PROFILES } from './data/species-groups.data';
 import { effectiveBreeding } from './effective-breeding';
 
 const UNSOURCED: ValueSource = { kind: 'memory', note: 'no source recorded' };
@@ -45,7 +44,7 @@ export function toSpeciesResponse(s: Species): SpeciesResponse {
     cautions: {
       urticatingHairs: { value: s.urticatingHairs, source: src(s, 'urticatingHairs') },
       medicallySignificantVenom: { value: s.medicallySignificantVenom, source: src(s, 'venom') },
-      cautionText: GROUP_PROFILES[s.group].cautionText,
+      cautionText: groupCaution(wordsFor('en'), s.group),
     },
     tradeListing: { value: s.tradeListing, source: src(s, 'tradeListing') },
     breeding,

@@ -1,10 +1,19 @@
 import { Entity, Enum, Property, Unique } from '@mikro-orm/core';
-import type { AccountRole, TemperatureUnit } from '@broodsilk/shared';
+import { LANGUAGES, STAGE_NUMBERINGS, type AccountRole, type Language, type StageNumbering, type TemperatureUnit } from '@broodsilk/shared';
 import { BaseEntity } from '../database/base.entity';
 
 @Entity({ tableName: 'users' })
 export class User extends BaseEntity<
-  'role' | 'timeZone' | 'temperatureUnit' | 'tokenVersion' | 'totpSecret' | 'totpPendingSecret' | 'totpEnabledAt' | 'totpLastStep'
+  | 'role'
+  | 'timeZone'
+  | 'temperatureUnit'
+  | 'language'
+  | 'stageNumbering'
+  | 'tokenVersion'
+  | 'totpSecret'
+  | 'totpPendingSecret'
+  | 'totpEnabledAt'
+  | 'totpLastStep'
 > {
   @Property({ type: 'text' })
   @Unique()
@@ -24,6 +33,14 @@ export class User extends BaseEntity<
 
   @Enum({ items: ['C', 'F'] })
   temperatureUnit: TemperatureUnit = 'C';
+
+  /** The language of the interface, e-mails, statements and the calendar feed. */
+  @Enum({ items: [...LANGUAGES] })
+  language: Language = 'en';
+
+  /** The stage-numbering set the user reads brood stages in (docs/rules.md, Stage numbering). */
+  @Enum({ items: [...STAGE_NUMBERINGS] })
+  stageNumbering: StageNumbering = 'us';
 
   /** Bumped on logout and password change: every JWT carries it, so older tokens stop working. */
   @Property({ type: 'integer' })

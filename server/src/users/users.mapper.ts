@@ -12,6 +12,8 @@ export function toMe(user: User): Me {
     temperatureUnit: user.temperatureUnit,
     secondFactorEnabled: !!user.totpEnabledAt,
     secondFactorRequired: secondFactorRequired(user.role),
+    language: user.language,
+    stageNumbering: user.stageNumbering,
   };
 }
 

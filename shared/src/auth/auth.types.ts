@@ -1,3 +1,5 @@
+import type { Language } from '../i18n/words.js';
+import type { StageNumbering } from '../breeding/brood-stage.js';
 export const ACCOUNT_ROLES = ['keeper', 'admin'] as const;
 export type AccountRole = (typeof ACCOUNT_ROLES)[number];
 
@@ -11,6 +13,8 @@ export interface RegisterRequest {
   password: string;
   displayName: string;
   timeZone?: string;
+  /** The browser's language at registration, when Broodsilk speaks it. */
+  language?: Language;
 }
 
 export interface LoginRequest {
@@ -39,6 +43,10 @@ export interface Me {
   secondFactorEnabled: boolean;
   /** The account must set one up before it may use administrator pages. */
   secondFactorRequired: boolean;
+  /** Interface language, e-mails, statements and the calendar feed. */
+  language: Language;
+  /** Which stage-numbering set names the brood stages (docs/rules.md, Stage numbering). */
+  stageNumbering: StageNumbering;
 }
 
 export interface LoginResponse {

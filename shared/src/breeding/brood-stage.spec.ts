@@ -1,13 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import {
-  BROOD_STAGES,
-  GERMAN_BROOD_STAGE_LABELS,
-  US_BROOD_STAGE_LABELS,
-  broodStageLabel,
-  compareBroodStages,
-  isBroodStage,
-  isBroodStageAtLeast,
-} from './brood-stage.js';
+import { BROOD_STAGES, broodStageLabel, compareBroodStages, isBroodStage, isBroodStageAtLeast } from './brood-stage.js';
+import { wordsFor } from '../i18n/words.js';
 
 // Order of development: docs/trade-facts.md §1 (egg → prelarva "eggs with legs" → … → free-living nymph),
 // after Vachon 1957 as applied on brachypelma-smithi.de. Label sets: docs/trade-facts.md §1, from memory.
@@ -20,14 +13,12 @@ describe('brood stages', () => {
     expect(isBroodStageAtLeast('second-instar', 'eggs')).toBe(true);
   });
 
-  it('labels every stage in both label sets', () => {
-    for (const stage of BROOD_STAGES) {
-      expect(US_BROOD_STAGE_LABELS[stage]).toBeTruthy();
-      expect(GERMAN_BROOD_STAGE_LABELS[stage]).toBeTruthy();
-    }
-    expect(broodStageLabel('first-instar')).toBe('1st instar');
-    expect(broodStageLabel('first-instar', GERMAN_BROOD_STAGE_LABELS)).toBe('N1');
-    expect(broodStageLabel('eggs-with-legs', GERMAN_BROOD_STAGE_LABELS)).toMatch(/Prälarve/);
+  it('names every stage in both numbering sets (docs/rules.md, Stage numbering; from memory)', () => {
+    const t = wordsFor('en');
+    expect(broodStageLabel(t, 'first-instar')).toBe('1st instar');
+    expect(broodStageLabel(t, 'first-instar', 'de')).toBe('N1 (1st nymph)');
+    expect(broodStageLabel(wordsFor('de'), 'eggs-with-legs', 'de')).toMatch(/Prälarve/);
+    expect(() => broodStageLabel(t, 'larva' as never)).toThrow(RangeError);
   });
 
   it('tells stages from other strings', () => {

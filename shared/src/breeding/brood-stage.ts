@@ -1,31 +1,17 @@
+import type { Words } from '../i18n/words.js';
+
 /** Stages of a brood, in the order they happen. */
 export type BroodStage = 'eggs' | 'eggs-with-legs' | 'first-instar' | 'second-instar';
 
 export const BROOD_STAGES: readonly BroodStage[] = ['eggs', 'eggs-with-legs', 'first-instar', 'second-instar'];
 
-export type BroodStageLabels = Readonly<Record<BroodStage, string>>;
-
 /**
- * Instar numbering differs between sources (docs/trade-facts.md §1), so labels are configurable.
- * US-style: "1st instar" is the first free-living nymph.
+ * The stage-numbering sets the trade uses (docs/rules.md, Stage numbering; docs/trade-facts.md §1):
+ * `us` calls the first free-living young "1st instar", `de` counts nymphs N1, N2 after the prelarva.
+ * One stage enum underneath; the set only changes the words (catalogue section `broodStage`).
  */
-export const US_BROOD_STAGE_LABELS: BroodStageLabels = Object.freeze({
-  eggs: 'Eggs',
-  'eggs-with-legs': 'Eggs with legs',
-  'first-instar': '1st instar',
-  'second-instar': '2nd instar',
-});
-
-/** German-style: Eier → Prälarve ("Eier mit Beinen") → N1 → N2 (the larval stage in the sac is not tracked). */
-export const GERMAN_BROOD_STAGE_LABELS: BroodStageLabels = Object.freeze({
-  eggs: 'Eier',
-  'eggs-with-legs': 'Prälarve (Eier mit Beinen)',
-  'first-instar': 'N1',
-  'second-instar': 'N2',
-});
-
-export const BROOD_STAGE_LABEL_SETS = Object.freeze({ us: US_BROOD_STAGE_LABELS, de: GERMAN_BROOD_STAGE_LABELS });
-export type BroodStageLabelSet = keyof typeof BROOD_STAGE_LABEL_SETS;
+export const STAGE_NUMBERINGS = ['us', 'de'] as const;
+export type StageNumbering = (typeof STAGE_NUMBERINGS)[number];
 
 export function isBroodStage(value: unknown): value is BroodStage {
   return typeof value === 'string' && (BROOD_STAGES as readonly string[]).includes(value);
@@ -48,7 +34,8 @@ export function isBroodStageAtLeast(stage: BroodStage, target: BroodStage): bool
   return compareBroodStages(stage, target) >= 0;
 }
 
-export function broodStageLabel(stage: BroodStage, labels: BroodStageLabels = US_BROOD_STAGE_LABELS): string {
+/** A stage's words in the reader's language and numbering set. */
+export function broodStageLabel(t: Words, stage: BroodStage, numbering: StageNumbering = 'us'): string {
   broodStageIndex(stage);
-  return labels[stage];
+  return t(`broodStage.${numbering}.${stage}`);
 }

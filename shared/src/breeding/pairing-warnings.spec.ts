@@ -55,7 +55,12 @@ describe('pairing warnings', () => {
   it('warns about a loaned male past his due-back date', () => {
     const male = { maturedOn: '2026-01-01', lifespan, dueBackOn: '2026-05-29' };
     const [w] = pairingWarnings(base({ male }));
-    expect(w).toEqual({ code: 'loan-overdue', severity: 'warning', message: 'The loaned male was due back on 2026-05-29, 3 days ago.' });
+    expect(w).toEqual({
+      code: 'loan-overdue',
+      severity: 'warning',
+      params: { dueBack: '2026-05-29', count: 3 },
+      message: 'The loaned male was due back on 2026-05-29, 3 days ago.',
+    });
     expect(codes(base({ male: { ...male, dueBackOn: '2026-06-01' } }))).toEqual([]);
     expect(codes(base({ male: { ...male, returnedOn: '2026-05-30' } }))).toEqual([]);
   });
@@ -63,7 +68,7 @@ describe('pairing warnings', () => {
   it("says what the terms' failure clause means when the male dies before a successful pairing", () => {
     const died = { maturedOn: '2025-06-01', lifespan, diedOn: '2026-05-15' };
     const nothing = pairingWarnings(base({ male: died, pairings: [{ on: '2026-05-01', outcome: 'aggression' }] }));
-    expect(nothing).toEqual([
+    expect(nothing).toMatchObject([
       {
         code: 'male-died-before-pairing',
         severity: 'danger',

@@ -1,6 +1,7 @@
 import { addDays, assertCalendarDate, diffDays, type CalendarDate } from './calendar-day.js';
 import { maleClock, type MaleLifespan } from '../collection/male-clock.js';
 import type { FailureClause, PairingFact } from './pairing.types.js';
+import { wordsFor } from '../i18n/words.js';
 
 export type WarningSeverity = 'info' | 'warning' | 'danger';
 
@@ -18,7 +19,15 @@ export type PairingWarningCode =
 export interface PairingWarning {
   code: PairingWarningCode;
   severity: WarningSeverity;
+  /** The values the catalogue's `warning.<code>` sentence takes (`count` picks the plural). */
+  params: Record<string, string | number>;
+  /** The sentence in English; a reader's language renders `warning.<code>` with `params`. */
   message: string;
+}
+
+/** Sentences and values in, the warning out (English message kept for mail and older readers). */
+function warning(code: PairingWarningCode, severity: WarningSeverity, params: Record<string, string | number> = {}): PairingWarning {
+  return { code, severity, params, message: wordsFor('en')(`warning.${code}`, params) };
 }
 
 export interface PairingWarningMale {
@@ -45,18 +54,12 @@ export interface PairingWarningFacts {
 /** Longest usual wait from pairing to sac before we say so: 365 days (docs/trade-facts.md §3, up to a year). */
 export const PAIRING_TO_SAC_MAX_DAYS = 365;
 
-const days = (n: number) => (n === 1 ? '1 day' : `${n} days`);
-
-const CLAUSE_TEXT: Record<FailureClause, string> = {
-  'nothing-owed': 'Under these terms nothing is owed when a project fails.',
-  'carries-over': 'Under these terms the deal carries over to the next sac or pairing.',
-};
-
 /** Warnings for a project's pairing page and dashboard, most severe first. */
 export function pairingWarnings(facts: PairingWarningFacts): PairingWarning[] {
   const { today, male } = facts;
   assertCalendarDate(today, 'date today');
-  const him = male?.label ? `The male ${male.label}` : 'The male';
+  // Names him (" MO-042") after the catalogue's "the male" when the project has had more than one.
+  const named = male?.label ? ` ${male.label}` : '';
   const out: PairingWarning[] = [];
   const connected = facts.pairings
     .filter((p) => p.outcome === 'connected')
@@ -69,17 +72,9 @@ export function pairingWarnings(facts: PairingWarningFacts): PairingWarning[] {
   if (lastConnected && !sacSince(lastConnected)) {
     const molt = facts.femaleMolts.filter((m) => m >= lastConnected).sort()[0];
     if (molt) {
-      out.push({
-        code: 'female-molted-after-pairing',
-        severity: 'danger',
-        message: `The female molted on ${molt}, after the last successful pairing (${lastConnected}) and before laying. Stored sperm is shed with the molt, so that pairing is lost; pair her again once her new skin has hardened.`,
-      });
+      out.push(warning('female-molted-after-pairing', 'danger', { molt, paired: lastConnected }));
     } else if (diffDays(lastConnected, today) > PAIRING_TO_SAC_MAX_DAYS) {
-      out.push({
-        code: 'no-sac-after-a-year',
-        severity: 'warning',
-        message: `No sac ${diffDays(lastConnected, today)} days after the last successful pairing (${lastConnected}). Most females lay within weeks to months, rarely after more than a year; consider pairing again or ending the project.`,
-      });
+      out.push(warning('no-sac-after-a-year', 'warning', { days: diffDays(lastConnected, today), paired: lastConnected }));
     }
   }
 
@@ -88,57 +83,29 @@ export function pairingWarnings(facts: PairingWarningFacts): PairingWarning[] {
     const before = connected.filter((d) => d <= male.diedOn!).at(-1);
     out.push(
       before
-        ? {
-            code: 'male-died-after-pairing',
-            severity: 'info',
-            message: `${him} died on ${male.diedOn}, after a successful pairing on ${before}; the female can still lay from that pairing.`,
-          }
-        : {
-            code: 'male-died-before-pairing',
-            severity: 'danger',
-            message: `${him} died on ${male.diedOn} before a successful pairing. ${CLAUSE_TEXT[facts.failureClause]}`,
-          },
+        ? warning('male-died-after-pairing', 'info', { named, died: male.diedOn, paired: before })
+        : warning('male-died-before-pairing', 'danger', { named, died: male.diedOn, clause: wordsFor('en')(`failureClauseText.${facts.failureClause}`) }),
     );
   } else if (male) {
     if (male.dueBackOn && !male.returnedOn) {
       assertCalendarDate(male.dueBackOn, 'due-back date');
       const late = diffDays(male.dueBackOn, today);
       if (late > 0) {
-        out.push({
-          code: 'loan-overdue',
-          severity: 'warning',
-          message: `${male.label ? `The loaned male ${male.label}` : 'The loaned male'} was due back on ${male.dueBackOn}, ${days(late)} ago.`,
-        });
+        out.push(warning('loan-overdue', 'warning', { named, dueBack: male.dueBackOn, count: late }));
       }
     }
     if (male.maturedOn && !anySac && male.maturedOn <= today) {
       const clock = maleClock(male.maturedOn, today, male.lifespan);
       const endsOn = addDays(clock.changes[3]!.from, -1);
       if (clock.state === 'fresh') {
-        out.push({
-          code: 'male-fresh',
-          severity: 'info',
-          message: `${him} matured ${days(clock.daysSinceMaturing)} ago. Wait for his first sperm web (usually 2–4 weeks after the molt) before pairing.`,
-        });
+        out.push(warning('male-fresh', 'info', { named, count: clock.daysSinceMaturing }));
       } else if (clock.state === 'late') {
-        out.push({
-          code: 'male-clock-late',
-          severity: 'warning',
-          message: `${him} matured ${days(clock.daysSinceMaturing)} ago and is in the late part of his usual lifespan, which ends around ${endsOn}.`,
-        });
+        out.push(warning('male-clock-late', 'warning', { named, count: clock.daysSinceMaturing, endsOn }));
       } else if (clock.state === 'past-typical') {
-        out.push({
-          code: 'male-clock-past-typical',
-          severity: 'warning',
-          message: `${him} matured ${days(clock.daysSinceMaturing)} ago, past his usual lifespan (to around ${endsOn}). He may die any day.`,
-        });
+        out.push(warning('male-clock-past-typical', 'warning', { named, count: clock.daysSinceMaturing, endsOn }));
       }
       if (!lastConnected && (clock.state === 'late' || clock.state === 'past-typical')) {
-        out.push({
-          code: 'no-pairing-male-late',
-          severity: 'danger',
-          message: `No successful pairing yet and ${him.replace(/^The/, 'the')} is running out of time: pair him soon.`,
-        });
+        out.push(warning('no-pairing-male-late', 'danger', { named }));
       }
     }
   }

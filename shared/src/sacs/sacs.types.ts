@@ -19,15 +19,6 @@ export type SacFailureReason = (typeof SAC_FAILURE_REASONS)[number];
 export const ROLL_INTERVAL_LIMITS = Object.freeze({ minHours: 1, maxHours: 72 });
 export const PULL_DAY_MAX = 120;
 
-/**
- * Shown next to incubator settings. Our own wording of the usual advice: heat sources need a
- * thermostat and can start fires; local law and licensed practice take precedence.
- */
-export const INCUBATOR_CAUTION =
-  'Any heat source for an incubator belongs behind a thermostat and out of reach of bedding, paper and cables: ' +
-  'unregulated heat mats and bulbs overheat eggs and can start fires. Check the setup daily. Where local law or a licensed ' +
-  "keeper's practice says otherwise, follow them.";
-
 export interface CreateSacRequest extends AcknowledgedWarnings {
   /** Calendar date in the keeper's time zone; today or earlier. */
   layDate: CalendarDate;

@@ -1,33 +1,9 @@
-import type { EndedEarlyReason, ProjectSetback, ProjectStage } from '../breeding/project-stage.js';
-import type { MaleClockState } from '../collection/male-clock.js';
-import type { PairingOutcome, SacFate } from '../breeding/pairing.types.js';
-import type { SacOutcomeState } from '../sacs/sacs.types.js';
+import type { ProjectSetback } from '../breeding/project-stage.js';
 import type { NotificationKind } from '../dashboard/notifications.types.js';
 import type { ReminderChannel } from '../reminders/reminder-preferences.types.js';
 
-/**
- * The interface's words for states several screens show, kept here once so the
- * dashboard, the project pages and the collection never disagree.
- */
-export const PROJECT_STAGE_LABELS: Record<ProjectStage, string> = {
-  planned: 'Planned',
-  paired: 'Paired',
-  'waiting-for-sac': 'Waiting for sac',
-  'sac-laid': 'Sac laid',
-  'in-incubator': 'In incubator',
-  brood: 'Brood',
-  'shares-settled': 'Shares settled',
-  closed: 'Closed',
-  'ended-early': 'Ended early',
-};
-
-export const ENDED_EARLY_LABELS: Record<EndedEarlyReason, string> = {
-  'no-sac': 'no sac',
-  'female-molted': 'the female molted',
-  'sac-failed': 'the sac failed',
-  'sac-eaten': 'the sac was eaten',
-  'male-died': 'the male died before pairing',
-};
+// Still to move into the catalogue (shared/src/i18n) with the reminder settings; the other
+// label maps that lived here are catalogue sections now.
 
 /**
  * Advice for a setback in the current attempt (see deriveProjectStage): what happened and what to do
@@ -40,27 +16,6 @@ export const SETBACK_ADVICE: Record<ProjectSetback, string> = {
   'sac-failed': 'The last sac failed. Let her feed up and pair her again, or end the project if she is done for the season.',
   'male-died': 'The male died before a successful pairing: pair her with a backup male, or end the project.',
 };
-
-export const SAC_OUTCOME_LABELS: Record<SacOutcomeState, string> = { 'in-progress': 'In progress', emerged: 'Young emerged', failed: 'Failed' };
-
-/** Male clock states in our own words, with the advice each one carries. */
-export const MALE_CLOCK_LABELS: Record<MaleClockState, { label: string; hint: string }> = {
-  fresh: { label: 'Just matured', hint: 'Give him time to build his first sperm web before pairing.' },
-  prime: { label: 'Ready to pair', hint: 'His best time for pairings.' },
-  late: { label: 'Time running short', hint: 'He is into the range where males of his group usually die; pair him soon.' },
-  'past-typical': { label: 'Beyond the usual span', hint: 'He has outlived the typical range for his group; any pairing now is a bonus.' },
-};
-
-export const PAIRING_OUTCOME_LABELS: Record<PairingOutcome, string> = {
-  connected: 'Connected',
-  'interest-only': 'Interest only',
-  'female-refused': 'Female refused',
-  aggression: 'Aggression, separated',
-  'male-lost': 'Male lost',
-};
-
-/** How a sac fares, as the stage rules see it. */
-export const SAC_FATE_LABELS: Record<SacFate, string> = { developing: 'Developing', failed: 'Failed', eaten: 'Eaten by the mother' };
 
 /** Reminder kinds as the settings and the inbox name them. */
 export const NOTIFICATION_KIND_LABELS: Record<NotificationKind, string> = {

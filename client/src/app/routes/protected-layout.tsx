@@ -7,6 +7,7 @@ import { meQuery, useMe } from '@/features/auth/api/me';
 import { useLogout } from '@/features/auth/api/session';
 import { InboxLink } from '@/features/notifications/components/inbox-link';
 import { NAV_ITEMS } from '../nav-items';
+import { useReaderSettings } from '@/lib/i18n';
 
 /** Every signed-in page goes through here: no session, no page. */
 export const clientLoader =
@@ -24,6 +25,7 @@ export function Component() {
   const { data: me } = useMe();
   const logout = useLogout();
   const navigate = useNavigate();
+  const language = useReaderSettings(me);
   if (!me) return null;
   return (
     <AppLayout
@@ -33,7 +35,8 @@ export function Component() {
       headerExtra={<InboxLink />}
       onSignOut={() => logout.mutate(undefined, { onSettled: () => navigate(paths.signIn.href()) })}
     >
-      <PendingOutlet />
+      {/* Keyed by language so every page re-renders its words when the setting changes. */}
+      <PendingOutlet key={language} />
     </AppLayout>
   );
 }

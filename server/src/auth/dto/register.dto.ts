@@ -1,7 +1,7 @@
-import { IsEmail, IsNotEmpty, IsString, MaxLength } from 'class-validator';
+import { IsEmail, IsIn, IsNotEmpty, IsString, MaxLength } from 'class-validator';
 import { IsAcceptablePassword } from './is-acceptable-password.validator';
 import { Transform } from 'class-transformer';
-import { type RegisterRequest } from '@broodsilk/shared';
+import { LANGUAGES, type Language, type RegisterRequest } from '@broodsilk/shared';
 import { IsTimeZone } from '../../common/validators/is-time-zone.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
@@ -23,4 +23,8 @@ export class RegisterDto implements RegisterRequest {
   @IsOptionalNonNull()
   @IsTimeZone()
   timeZone?: string;
+
+  @IsOptionalNonNull()
+  @IsIn(LANGUAGES, { message: `Choose one of the languages ${LANGUAGES.join(', ')}.` })
+  language?: Language;
 }

@@ -6,8 +6,6 @@ export interface GroupProfile {
   pairingToSacDays: Sourced<NumberRange>;
   eggsPerSac: Sourced<NumberRange>;
   matureMaleLifespanMonths: Sourced<NumberRange>;
-  /** Shown with the species' flags; never a substitute for local law or licensed advice. */
-  cautionText: string;
 }
 
 /** The product's pull window where a species has none (docs/product.md, Data rules). */
@@ -21,42 +19,35 @@ const lifespan = (g: SpeciesGroup): Sourced<NumberRange> => ({
   source: memo('group default of shared/collection/male-clock.ts'),
 });
 
-const LAW = 'Keeping and trading rules differ by place: follow your local law, and for a bite or an eye exposure ask a licensed physician.';
-
 export const GROUP_PROFILES: Record<SpeciesGroup, GroupProfile> = {
   'nw-terrestrial': {
     label: 'New World terrestrial',
     pairingToSacDays: { value: { min: 120, max: 300 }, source: memo('4–10 months: paired in autumn, cooled in winter, sac in spring or summer') },
     eggsPerSac: { value: { min: 200, max: 800 }, source: SRC.arachnoworld },
     matureMaleLifespanMonths: lifespan('nw-terrestrial'),
-    cautionText: `Most species flick urticating hairs that can lodge in skin and eyes; wear eye protection when working in the enclosure. ${LAW}`,
   },
   'nw-arboreal': {
     label: 'New World arboreal',
     pairingToSacDays: { value: { min: 45, max: 120 }, source: memo('about 1.5–4 months') },
     eggsPerSac: { value: { min: 50, max: 200 }, source: memo('Avicularia range') },
     matureMaleLifespanMonths: lifespan('nw-arboreal'),
-    cautionText: `Fast climbers; several genera carry contact urticating hairs, others none but a stronger bite. ${LAW}`,
   },
   'ow-terrestrial': {
     label: 'Old World terrestrial',
     pairingToSacDays: { value: { min: 45, max: 120 }, source: memo('about 1.5–4 months') },
     eggsPerSac: { value: { min: 100, max: 300 }, source: memo('Pterinochilus range') },
     matureMaleLifespanMonths: lifespan('ow-terrestrial'),
-    cautionText: `No urticating hairs, but defensive and fast; bites of several Old World genera have caused severe, long-lasting muscle cramps. ${LAW}`,
   },
   'ow-arboreal': {
     label: 'Old World arboreal',
     pairingToSacDays: { value: { min: 45, max: 120 }, source: memo('about 1.5–4 months') },
     eggsPerSac: { value: { min: 50, max: 150 }, source: memo('Poecilotheria range') },
     matureMaleLifespanMonths: lifespan('ow-arboreal'),
-    cautionText: `Very fast and defensive; bites of Poecilotheria and related genera have caused severe cramps lasting days. ${LAW}`,
   },
   fossorial: {
     label: 'Fossorial (burrowing)',
     pairingToSacDays: { value: { min: 28, max: 70 }, source: SRC.spinnenAndre },
     eggsPerSac: { value: { min: 100, max: 500 }, source: memo('burrowing genera vary widely') },
     matureMaleLifespanMonths: lifespan('fossorial'),
-    cautionText: `Rarely seen and defensive when disturbed in the burrow; Old World burrowers have potent bites. ${LAW}`,
   },
 };

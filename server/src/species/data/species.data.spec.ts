@@ -69,6 +69,8 @@ describe('species dataset', () => {
     expect(resolve('Brachypelma albopilosum')).toBe('Tliltocatl albopilosus');
     // Fukushima & Bertani 2017, ZooKeys 659
     expect(resolve('Avicularia versicolor')).toBe('Caribena versicolor');
+    // Mendoza & Francke 2017, Invertebrate Systematics 31(2), doi:10.1071/IS16023: a synonym of B. smithi, not B. hamorii
+    expect(resolve('Brachypelma annitha')).toBe('Brachypelma smithi');
     // from memory (docs/trade-facts.md §8 marks it so)
     expect(resolve('Citharischius crawshayi')).toBe('Pelinobius muticus');
   });

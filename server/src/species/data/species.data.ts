@@ -127,11 +127,12 @@ export const SPECIES_DATA: SpeciesDataRow[] = [
     '(F. O. Pickard-Cambridge, 1897)',
     'nw-terrestrial',
     brachy({
-      formerNames: ['Eurypelma smithi'],
+      // B. annitha is a synonym of B. smithi, not of B. hamorii (Mendoza & Francke 2017, doi:10.1071/IS16023; docs/trade-facts.md §8).
+      formerNames: ['Eurypelma smithi', 'Brachypelma annitha'],
       eggsPerSac: range(100, 600, { ...SRC.brachypelmaSmithiDe, note: 'up to 600 for B. smithi; lower bound is the genus range' } as ValueSource),
     }),
   ),
-  sp('Brachypelma hamorii', 'Tesmoingt, Cleton & Verdez, 1997', 'nw-terrestrial', brachy({ formerNames: ['Brachypelma annitha'] })),
+  sp('Brachypelma hamorii', 'Tesmoingt, Cleton & Verdez, 1997', 'nw-terrestrial', brachy()),
   sp('Brachypelma auratum', 'Schmidt, 1992', 'nw-terrestrial', brachy()),
   sp('Brachypelma boehmei', 'Schmidt & Klaas, 1993', 'nw-terrestrial', brachy()),
   sp('Brachypelma emilia', '(White, 1856)', 'nw-terrestrial', brachy({ formerNames: ['Mygale emilia'] })),

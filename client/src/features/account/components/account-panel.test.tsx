@@ -17,6 +17,8 @@ const me = (displayName: string): Me => ({
   temperatureUnit: 'C',
   secondFactorEnabled: false,
   secondFactorRequired: false,
+  language: 'en',
+  stageNumbering: 'us',
 });
 const HAND_OVER = entry({});
 

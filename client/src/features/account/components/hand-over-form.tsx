@@ -6,6 +6,7 @@ import { textRule } from '@/components/fields/text-rule';
 import { dateRule, readDate } from '@/components/fields/typed-date';
 import { numberRule, readNumber } from '@/components/fields/typed-number';
 import { FormActions } from '@/components/ui/form-actions';
+import { SafetyNote } from '@/components/ui/safety-note';
 import { TEXT_LIMITS, type HandOverMethod, type SacSharesView } from '@broodsilk/shared';
 import { useCreateEntry, useHandOverForm } from '../api/entries';
 import { SacCountDateFields } from './sac-count-date-fields';
@@ -117,6 +118,7 @@ export function HandOverForm({ projectId, today, sacs, onDone }: { projectId: st
           </>
         )}
         <TextField label="Note" maxLength={TEXT_LIMITS.ledgerNote} key={form.key('note')} {...form.getInputProps('note')} />
+        <SafetyNote text="crossBorder" />
         <FormActions message={message} loading={create.isPending} submitLabel="Record hand-over" />
       </Stack>
     </form>

@@ -7,6 +7,7 @@ import { textRule } from '@/components/fields/text-rule';
 import { dateRule, readDate } from '@/components/fields/typed-date';
 import { numberRule, readNumber } from '@/components/fields/typed-number';
 import { FormActions } from '@/components/ui/form-actions';
+import { SafetyNote } from '@/components/ui/safety-note';
 import { TEXT_LIMITS, parseMoney, toMinor, type PartyBalanceView, type SacSharesView } from '@broodsilk/shared';
 import { useCreateEntry } from '../api/entries';
 import { SacCountDateFields } from './sac-count-date-fields';
@@ -103,6 +104,7 @@ export function WithdrawalForm({ projectId, kind, parties, sacs, currency, terms
           {...form.getInputProps('price')}
         />
         <TextField label="Note" maxLength={TEXT_LIMITS.ledgerNote} key={form.key('note')} {...form.getInputProps('note')} />
+        {sale && <SafetyNote text="sale" />}
         <FormActions message={message} loading={create.isPending} submitLabel={sale ? 'Record sale' : 'Record cash-out'} />
         {!sale && (
           <Text size="xs" c="dimmed">

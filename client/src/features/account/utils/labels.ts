@@ -1,23 +1,18 @@
-import type { EntryStatus, HandOverMethod, LedgerEntryResponse } from '@broodsilk/shared';
+import type { EntryStatus } from '@broodsilk/shared';
+import { catalogueLabels, words } from '@/lib/i18n';
 
-export const ENTRY_KIND_LABELS: Record<LedgerEntryResponse['kind'], string> = {
-  'hand-over': 'Hand-over',
-  arrival: 'Arrival count',
-  sale: 'Sale',
-  'cash-out': 'Cash-out',
-  money: 'Payment',
-  correction: 'Correction',
-  confirmation: 'Payment confirmed',
+export const ENTRY_KIND_LABELS = catalogueLabels('entryKind');
+export const METHOD_LABELS = catalogueLabels('handOverMethod');
+
+const STATUS_TONES: Record<EntryStatus, string> = {
+  'in-force': 'tone-ok',
+  reversed: 'tone-failed',
+  'awaiting-confirmation': 'tone-due',
+  'left-out': 'tone-failed',
 };
-
-export const METHOD_LABELS: Record<HandOverMethod, string> = { 'pick-up': 'Pick-up', shipment: 'Shipment' };
-
-export const STATUS_LABELS: Record<EntryStatus, { label: string; tone: string }> = {
-  'in-force': { label: 'Counts', tone: 'tone-ok' },
-  reversed: { label: 'Reversed', tone: 'tone-failed' },
-  'awaiting-confirmation': { label: 'Waiting for confirmation', tone: 'tone-due' },
-  'left-out': { label: 'Left out', tone: 'tone-failed' },
-};
+export const STATUS_LABELS = new Proxy({} as Record<EntryStatus, { label: string; tone: string }>, {
+  get: (_t, key: string) => ({ label: words(`entryStatus.${key}`), tone: STATUS_TONES[key as EntryStatus] }),
+});
 
 /** "12 young" / "1 young". */
 export const young = (n: number) => `${n} ${n === 1 ? 'spiderling' : 'spiderlings'}`;

@@ -1,6 +1,11 @@
 import { Anchor, Badge, Group, Stack, Text } from '@mantine/core';
 import { Link } from 'react-router';
-import { PAIRING_OUTCOME_LABELS, PROJECT_STAGE_LABELS, SAC_FATE_LABELS, broodStageLabel } from '@broodsilk/shared';
+import { catalogueLabels, currentNumbering, words } from '@/lib/i18n';
+import { broodStageLabel } from '@broodsilk/shared';
+
+const PROJECT_STAGE_LABELS = catalogueLabels('projectStage');
+const PAIRING_OUTCOME_LABELS = catalogueLabels('pairingOutcome');
+const SAC_FATE_LABELS = catalogueLabels('sacFate');
 import { SectionCard } from '@/components/ui/section-card';
 import { paths } from '@/config/paths';
 import { formatDate } from '@/lib/dates';
@@ -40,7 +45,7 @@ export function BreedingRecord({ animalId }: { animalId: string }) {
                 <Text key={s.id ?? `s${i}`} size="sm">
                   Sac laid {formatDate(s.layDate)}
                   {s.pulledOn ? `, pulled ${formatDate(s.pulledOn)}` : ', with the mother'}: {SAC_FATE_LABELS[s.fate]}
-                  {s.fate === 'developing' && s.broodStage ? ` (${broodStageLabel(s.broodStage)})` : ''}
+                  {s.fate === 'developing' && s.broodStage ? ` (${broodStageLabel(words, s.broodStage, currentNumbering())})` : ''}
                 </Text>
               ))}
             </Stack>

@@ -1,13 +1,10 @@
 import { Card, Group, Stack, Table, Text, Title } from '@mantine/core';
 import type { MaleClockView } from '@broodsilk/shared';
 import { formatDate } from '@/lib/dates';
+import { catalogueLabels } from '@/lib/i18n';
 import { CLOCK_STATES } from '../utils/animal-view';
 
-const ORIGIN: Record<MaleClockView['lifespanMonths']['from'], string> = {
-  species: 'this species’ own value',
-  group: 'the default for its group',
-  default: 'the Broodsilk default',
-};
+const ORIGIN = catalogueLabels('lifespanFrom');
 
 /** A mature male's clock: where he stands, the dates it changes and what it runs against. */
 export function MaleClockPanel({ clock }: { clock: MaleClockView }) {

@@ -2,48 +2,38 @@ import {
   ANIMAL_SEXES,
   ANIMAL_SORTS,
   ANIMAL_STATUSES,
-  MALE_CLOCK_LABELS,
   type AnimalListQuery,
   type AnimalSex,
   type AnimalSort,
   type AnimalStatus,
-  type Custody,
-  type ExuviaSex,
   type FemaleReadinessState,
   type MaleClockState,
-  type Maturity,
-  type OwnerKind,
 } from '@broodsilk/shared';
 import { MALE_CLOCK_TONE, type ToneStyle } from '@/lib/tones';
+import { MALE_CLOCK_LABELS, catalogueLabels, words } from '@/lib/i18n';
 
-export const SEX_LABELS: Record<AnimalSex, string> = { female: 'Female', male: 'Male', unsexed: 'Unsexed' };
+export const SEX_LABELS = catalogueLabels('sex');
 export const SEX_SIGNS: Record<AnimalSex, string> = { female: '♀', male: '♂', unsexed: '?' };
-export const MATURITY_LABELS: Record<Maturity, string> = { immature: 'Not yet mature', penultimate: 'One molt from mature', mature: 'Mature' };
-export const STATUS_LABELS: Record<AnimalStatus, string> = {
-  active: 'In the collection',
-  'on-loan': 'Lent out',
-  returned: 'Returned to owner',
-  sold: 'Sold',
-  deceased: 'Deceased',
-};
-export const CUSTODY_LABELS: Record<Custody, string> = { 'with-owner': 'With its owner', 'loan-in': 'On loan to me', 'loan-out': 'On loan out' };
-export const OWNER_LABELS: Record<OwnerKind, string> = { self: 'Me', keeper: 'Another keeper here', party: 'Someone outside Broodsilk' };
-export const EXUVIA_LABELS: Record<ExuviaSex, string> = { female: 'Female (spermathecae seen)', male: 'Male (no spermathecae)', 'not-sure': 'Could not tell' };
+export const MATURITY_LABELS = catalogueLabels('maturity');
+export const STATUS_LABELS = catalogueLabels('animalStatus');
+export const CUSTODY_LABELS = catalogueLabels('custody');
+export const OWNER_LABELS = catalogueLabels('owner');
+export const EXUVIA_LABELS = catalogueLabels('exuvia');
 
-/** Our own words for the male clock; the tone class keeps text contrast in both schemes. */
-export const CLOCK_STATES: Record<MaleClockState, { label: string; hint: string } & ToneStyle> = {
-  fresh: { ...MALE_CLOCK_LABELS.fresh, ...MALE_CLOCK_TONE.fresh },
-  prime: { ...MALE_CLOCK_LABELS.prime, ...MALE_CLOCK_TONE.prime },
-  late: { ...MALE_CLOCK_LABELS.late, ...MALE_CLOCK_TONE.late },
-  'past-typical': { ...MALE_CLOCK_LABELS['past-typical'], ...MALE_CLOCK_TONE['past-typical'] },
-};
+/** The male clock's words (catalogue) with its tone class, which keeps text contrast in both schemes. */
+export const CLOCK_STATES = new Proxy({} as Record<MaleClockState, { label: string; hint: string } & ToneStyle>, {
+  get: (_t, key: string) => ({ ...MALE_CLOCK_LABELS[key as MaleClockState], ...MALE_CLOCK_TONE[key as MaleClockState] }),
+});
 
-export const READINESS_STATES: Record<FemaleReadinessState, { label: string; tone: 'tone-ok' | 'tone-due' | 'tone-failed' }> = {
-  'no-molt-recorded': { label: 'No molt on record', tone: 'tone-due' },
-  hardening: { label: 'Still hardening', tone: 'tone-due' },
-  ready: { label: 'Can be paired', tone: 'tone-ok' },
-  premolt: { label: 'Not now, premolt', tone: 'tone-failed' },
+const READINESS_TONES: Record<FemaleReadinessState, 'tone-ok' | 'tone-due' | 'tone-failed'> = {
+  'no-molt-recorded': 'tone-due',
+  hardening: 'tone-due',
+  ready: 'tone-ok',
+  premolt: 'tone-failed',
 };
+export const READINESS_STATES = new Proxy({} as Record<FemaleReadinessState, { label: string; tone: 'tone-ok' | 'tone-due' | 'tone-failed' }>, {
+  get: (_t, key: string) => ({ label: words(`readiness.${key}`), tone: READINESS_TONES[key as FemaleReadinessState] }),
+});
 
 export const PAGE_SIZES = [25, 50, 100] as const;
 

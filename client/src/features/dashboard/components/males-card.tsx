@@ -1,5 +1,6 @@
 import { Table, Text } from '@mantine/core';
-import { MALE_CLOCK_LABELS, type MaleClockRow } from '@broodsilk/shared';
+import type { MaleClockRow } from '@broodsilk/shared';
+import { MALE_CLOCK_LABELS } from '@/lib/i18n';
 import { MALE_CLOCK_TONE } from '@/lib/tones';
 import { SectionCard } from '@/components/ui/section-card';
 

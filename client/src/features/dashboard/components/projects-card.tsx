@@ -1,6 +1,9 @@
 import { Anchor, Badge, Table, Text } from '@mantine/core';
 import { Link } from 'react-router';
-import { PROJECT_STAGE_LABELS, type ProjectSummary } from '@broodsilk/shared';
+import type { ProjectSummary } from '@broodsilk/shared';
+import { catalogueLabels } from '@/lib/i18n';
+
+const PROJECT_STAGE_LABELS = catalogueLabels('projectStage');
 import { paths } from '@/config/paths';
 import { SectionCard } from '@/components/ui/section-card';
 

@@ -1,13 +1,14 @@
 import { Anchor, Stack, Text } from '@mantine/core';
 import { Link } from 'react-router';
-import type { DashboardSac, RollStatus } from '@broodsilk/shared';
+import type { DashboardSac } from '@broodsilk/shared';
 import { paths } from '@/config/paths';
 import { formatInstant } from '@/lib/dates';
 import { ROLL_STATUS_TONE } from '@/lib/tones';
 import { SectionCard } from '@/components/ui/section-card';
 import { SacLine } from './sac-line';
+import { catalogueLabels } from '@/lib/i18n';
 
-const ROLL_LABEL: Record<RollStatus, string> = { overdue: 'Overdue', due: 'Due now', 'due-soon': 'Due within the hour', upcoming: 'Later' };
+const ROLL_LABEL = catalogueLabels('rollShort');
 
 /** Rolls due soon, due or overdue (owner and caretakers), most late first. */
 export function RollsCard({ rolls, timeZone }: { rolls: DashboardSac[]; timeZone: string }) {

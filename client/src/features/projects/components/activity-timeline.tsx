@@ -1,6 +1,7 @@
 import { Button, Text, Timeline } from '@mantine/core';
 import { useState } from 'react';
-import type { ActivityEventResponse } from '@broodsilk/shared';
+import { activitySentence, type ActivityEventResponse } from '@broodsilk/shared';
+import { currentNumbering, currentUnit, useWords } from '@/lib/i18n';
 import { formatInstant } from '@/lib/dates';
 
 /** How many events show before "Show all": a pulled sac logs two rolls a day. */
@@ -9,6 +10,7 @@ const FIRST_EVENTS = 15;
 /** A project's life, newest first: one line per recorded event. */
 export function ActivityTimeline({ events, timeZone, showProject = false }: { events: ActivityEventResponse[]; timeZone: string; showProject?: boolean }) {
   const [all, setAll] = useState(false);
+  const t = useWords();
   if (events.length === 0) return <Text c="dimmed">Nothing has happened yet.</Text>;
   const sorted = [...events].sort((a, b) => (a.at < b.at ? 1 : -1));
   const shown = all ? sorted : sorted.slice(0, FIRST_EVENTS);
@@ -17,7 +19,7 @@ export function ActivityTimeline({ events, timeZone, showProject = false }: { ev
       <Timeline bulletSize={12} lineWidth={2} data-testid="activity-timeline">
         {shown.map((e) => (
           <Timeline.Item key={e.id} color={e.kind.includes('fail') || e.kind.includes('end') ? 'clay' : 'moss'}>
-            <Text size="sm">{e.summary}</Text>
+            <Text size="sm">{activitySentence(t, e, { unit: currentUnit(), numbering: currentNumbering() })}</Text>
             <Text size="xs" c="dimmed">
               {e.actor?.name ?? 'Broodsilk'} · {formatInstant(e.at, timeZone)}
               {showProject && ` · ${e.projectTitle}`}

@@ -2,13 +2,15 @@ import { Select, SimpleGrid } from '@mantine/core';
 import type { ReactNode } from 'react';
 import type { BoundField } from '@/components/fields/bound-field';
 import { NumberField } from '@/components/fields/number-field';
-import { BROOD_STAGES, BROOD_STAGE_LABEL_SETS, FAILURE_CLAUSES, SHIPPING_PAYERS } from '@broodsilk/shared';
+import { BROOD_STAGES, broodStageLabel, FAILURE_CLAUSES, SHIPPING_PAYERS } from '@broodsilk/shared';
+import { currentNumbering, words } from '@/lib/i18n';
 import { FAILURE_CLAUSE_LABELS, SHIPPING_LABELS } from '../utils/labels';
 
 export const CURRENCIES = ['EUR', 'USD', 'GBP', 'PLN', 'CHF', 'CZK', 'SEK', 'CAD', 'AUD'];
-export const failureOptions = FAILURE_CLAUSES.map((c) => ({ value: c, label: FAILURE_CLAUSE_LABELS[c] }));
-export const shippingOptions = SHIPPING_PAYERS.map((s) => ({ value: s, label: SHIPPING_LABELS[s] }));
-export const handOverOptions = BROOD_STAGES.map((s) => ({ value: s, label: BROOD_STAGE_LABEL_SETS.us[s] }));
+// Functions, not constants: the words follow the reader's language and stage numbering.
+export const failureOptions = () => FAILURE_CLAUSES.map((c) => ({ value: c, label: FAILURE_CLAUSE_LABELS[c] }));
+export const shippingOptions = () => SHIPPING_PAYERS.map((s) => ({ value: s, label: SHIPPING_LABELS[s] }));
+export const handOverOptions = () => BROOD_STAGES.map((s) => ({ value: s, label: broodStageLabel(words, s, currentNumbering()) }));
 
 export type DealFieldName = 'price' | 'currency' | 'failureClause' | 'handOverStage' | 'shippingPaidBy';
 
@@ -30,9 +32,9 @@ export function DealFields({ field, children }: DealFieldsProps) {
     <SimpleGrid cols={{ base: 1, sm: 3 }}>
       <NumberField label="Price per spiderling" key={priceKey} {...priceProps} />
       <Select label="Currency" data={CURRENCIES} searchable allowDeselect={false} key={currencyKey} {...currencyProps} />
-      {select(field('failureClause'), 'If the project fails', failureOptions)}
-      {select(field('handOverStage'), 'Handed over at', handOverOptions)}
-      {select(field('shippingPaidBy'), 'Shipping', shippingOptions)}
+      {select(field('failureClause'), 'If the project fails', failureOptions())}
+      {select(field('handOverStage'), 'Handed over at', handOverOptions())}
+      {select(field('shippingPaidBy'), 'Shipping', shippingOptions())}
       {children}
     </SimpleGrid>
   );

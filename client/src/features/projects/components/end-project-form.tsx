@@ -11,7 +11,7 @@ import { applyServerErrors } from '@/lib/form-errors';
 import { useEndProject } from '../api/projects';
 import { ENDED_EARLY_LABELS } from '../utils/labels';
 
-const reasonOptions = ENDED_EARLY_REASONS.map((r) => ({ value: r, label: ENDED_EARLY_LABELS[r].replace(/^./, (c) => c.toUpperCase()) }));
+const reasonOptions = ENDED_EARLY_REASONS.map((r) => ({ value: r, label: ENDED_EARLY_LABELS[r].replace(/^./, (c: string) => c.toUpperCase()) }));
 
 /** The keeper calls a project off, with the reason the stage line will show; a setback in the facts pre-fills it. */
 export function EndProjectForm({ projectId, setback }: { projectId: string; setback?: EndedEarlyReason }) {

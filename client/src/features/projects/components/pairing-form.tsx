@@ -11,6 +11,7 @@ import { textRule } from '@/components/fields/text-rule';
 import { dateRule, readDate } from '@/components/fields/typed-date';
 import { numberRule, readNumber } from '@/components/fields/typed-number';
 import { FormActions } from '@/components/ui/form-actions';
+import { SafetyNote } from '@/components/ui/safety-note';
 import { WarningConfirm, useWarnedSave } from '@/components/ui/warning-confirm';
 import { dayjs } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
@@ -128,6 +129,7 @@ export function PairingForm({ projectId, timeZone, males, correcting, onDone }: 
           />
         )}
         {warned.warnings && <WarningConfirm warnings={warned.warnings} loading={record.isPending} onConfirm={warned.confirm} onCancel={warned.cancel} />}
+        <SafetyNote text="pairing" />
         <FormActions message={message} loading={record.isPending} submitLabel={correcting ? 'Save correction' : 'Save pairing'} onCancel={onDone} />
       </Stack>
     </form>

@@ -1,5 +1,6 @@
 import { Card, SimpleGrid, Stack, Text } from '@mantine/core';
-import { MALE_CLOCK_LABELS, type ProjectAnimal } from '@broodsilk/shared';
+import type { ProjectAnimal } from '@broodsilk/shared';
+import { MALE_CLOCK_LABELS } from '@/lib/i18n';
 import { formatDate } from '@/lib/dates';
 import { MALE_CLOCK_TONE } from '@/lib/tones';
 

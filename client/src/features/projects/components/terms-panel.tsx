@@ -1,6 +1,7 @@
 import { Alert, Badge, Button, Card, Group, Stack, Table, Text, Title } from '@mantine/core';
 import type { Me, ProjectMemberResponse, ProjectRole, TermsVersionResponse } from '@broodsilk/shared';
-import { BROOD_STAGE_LABEL_SETS, formatMoney } from '@broodsilk/shared';
+import { broodStageLabel, formatMoney } from '@broodsilk/shared';
+import { currentNumbering, words } from '@/lib/i18n';
 import { formatInstant } from '@/lib/dates';
 import { useState } from 'react';
 import { ConfirmAction } from '@/components/ui/confirm-action';
@@ -109,7 +110,7 @@ export function TermsPanel({ projectId, me, myRole, members }: TermsPanelProps) 
             </Table.ScrollContainer>
             <Text size="sm" mt="xs">
               {formatMoney(v.pricePerSpiderlingMinor, v.currency)} per spiderling · {FAILURE_CLAUSE_LABELS[v.failureClause]} · handed over at{' '}
-              {BROOD_STAGE_LABEL_SETS.us[v.handOverStage].toLowerCase()} · shipping: {SHIPPING_LABELS[v.shippingPaidBy].toLowerCase()}
+              {broodStageLabel(words, v.handOverStage, currentNumbering()).toLowerCase()} · shipping: {SHIPPING_LABELS[v.shippingPaidBy].toLowerCase()}
             </Text>
             {v.note && (
               <Text size="sm" c="dimmed">

@@ -1,8 +1,9 @@
 import { Alert, Stack } from '@mantine/core';
 import type { PairingWarning } from '@broodsilk/shared';
 import { SEVERITY_COLOURS } from '../utils/labels';
+import { catalogueLabels, words } from '@/lib/i18n';
 
-const TITLES: Record<PairingWarning['severity'], string> = { danger: 'Needs a decision', warning: 'Keep an eye on this', info: 'Good to know' };
+const TITLES = catalogueLabels('severity');
 
 /** Pairing warnings (molt after pairing, male clock, loan due back), most severe first as the server sends them. */
 export function WarningsList({ warnings }: { warnings: PairingWarning[] }) {
@@ -11,7 +12,7 @@ export function WarningsList({ warnings }: { warnings: PairingWarning[] }) {
     <Stack gap="xs" data-testid="project-warnings">
       {warnings.map((w) => (
         <Alert key={w.code} color={SEVERITY_COLOURS[w.severity]} title={TITLES[w.severity]} variant="light">
-          {w.message}
+          {w.params ? words(`warning.${w.code}`, w.params) : w.message}
         </Alert>
       ))}
     </Stack>

@@ -21,23 +21,17 @@ import { formatInstant } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useBroodCounts, useRecordBroodCount } from '../api/brood';
 import { broodLabel } from '../utils/sac-view';
+import { catalogueLabels } from '@/lib/i18n';
 import { FormActions } from '@/components/ui/form-actions';
 import { WarningConfirm, useWarnedSave } from '@/components/ui/warning-confirm';
 import { CountCorrection } from './count-correction';
 
-const LOSS_LABELS: Record<BroodLossReason, string> = {
-  died: 'Died',
-  'failed-molt': 'Failed molt',
-  cannibalism: 'Eaten by siblings',
-  mould: 'Mould',
-  escaped: 'Escaped',
-  other: 'Other',
-};
+const LOSS_LABELS = catalogueLabels('broodLoss');
 
 const COUNT = { min: 0, max: BROOD_COUNT_MAX, decimals: 0, rangeMessage: `A whole number from 0 to ${BROOD_COUNT_MAX}.` };
 
-const stageOptions = BROOD_STAGES.map((s) => ({ value: s, label: broodLabel(s) }));
-const lossOptions = BROOD_LOSS_REASONS.map((r) => ({ value: r, label: LOSS_LABELS[r] }));
+const stageOptions = () => BROOD_STAGES.map((s) => ({ value: s, label: broodLabel(s) }));
+const lossOptions = () => BROOD_LOSS_REASONS.map((r) => ({ value: r, label: LOSS_LABELS[r] }));
 
 interface Values {
   stage: BroodStage;
@@ -177,7 +171,7 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
                   <Select
                     label="Stage"
                     description="The sac's stage; a later one moves it"
-                    data={stageOptions}
+                    data={stageOptions()}
                     allowDeselect={false}
                     key={form.key('stage')}
                     {...form.getInputProps('stage')}
@@ -189,7 +183,7 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
                     {...form.getInputProps('estimated', { type: 'checkbox' })}
                   />
                   <NumberField label="Lost" whole key={form.key('lost')} {...form.getInputProps('lost')} />
-                  <Select label="Lost because" data={lossOptions} key={form.key('lossReason')} {...form.getInputProps('lossReason')} />
+                  <Select label="Lost because" data={lossOptions()} key={form.key('lossReason')} {...form.getInputProps('lossReason')} />
                 </SimpleGrid>
                 <TextField label="Note" maxLength={TEXT_LIMITS.note} key={form.key('note')} {...form.getInputProps('note')} />
                 {warned.warnings && (

@@ -3,21 +3,14 @@ import { TextField } from '@/components/fields/text-field';
 import { checkText } from '@/components/fields/text-rule';
 import { ScrollTable } from '@/components/ui/scroll-table';
 import { useState } from 'react';
-import { TEXT_LIMITS, formatTemperature, type CareLogEntryResponse, type CareLogKind, type TemperatureUnit } from '@broodsilk/shared';
+import { TEXT_LIMITS, formatTemperature, type CareLogEntryResponse, type TemperatureUnit } from '@broodsilk/shared';
 import { formatInstant } from '@/lib/dates';
 import { isApiError } from '@/lib/api-error';
 import { useAddCareLogEntry, useCareLog } from '../api/care-log';
 import { bandFlag, broodLabel } from '../utils/sac-view';
+import { catalogueLabels } from '@/lib/i18n';
 
-const KIND_LABELS: Record<CareLogKind, string> = {
-  roll: 'Rolled',
-  temperature: 'Temperature',
-  humidity: 'Humidity',
-  check: 'Checked',
-  stage: 'Stage',
-  note: 'Note',
-  strike: 'Correction',
-};
+const KIND_LABELS = catalogueLabels('careLogKind');
 
 function what(e: CareLogEntryResponse, unit: TemperatureUnit): string {
   switch (e.kind) {

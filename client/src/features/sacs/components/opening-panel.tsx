@@ -12,6 +12,7 @@ import { applyServerErrors } from '@/lib/form-errors';
 import { isApiError } from '@/lib/api-error';
 import { useOpening, useRecordOpening, useUploadOpeningPhoto } from '../api/opening';
 import { FormActions } from '@/components/ui/form-actions';
+import { SafetyNote } from '@/components/ui/safety-note';
 import { COUNT_FIELDS, openingRules, openingValues, toOpeningCounts, type OpeningValues } from '../utils/opening-values';
 import { OpeningCountFields } from './opening-count-fields';
 import { OpeningCorrection } from './opening-correction';
@@ -144,6 +145,7 @@ function OpeningForm({ sacId, timeZone }: { sacId: string; timeZone: string }) {
         </Text>
         <OpeningCountFields form={form} />
         {warned.warnings && <WarningConfirm warnings={warned.warnings} loading={record.isPending} onConfirm={warned.confirm} onCancel={warned.cancel} />}
+        <SafetyNote text="opening" />
         <FormActions message={message} loading={record.isPending} submitLabel="Save opening" />
       </Stack>
       {asking && (

@@ -7,8 +7,9 @@ import { isApiError } from '@/lib/api-error';
 import { usePullSac, useUpdateSac } from '../api/sacs';
 import { PullConfirmation } from './pull-confirmation';
 import { broodLabel, PULL_WINDOW_TEXT, pullWindowSentence, readingAlertText, ROLL_TEXT, SAC_OUTCOME_TEXT } from '../utils/sac-view';
+import { catalogueLabels } from '@/lib/i18n';
 
-const FAILURE_LABELS: Record<SacFailureReason, string> = { infertile: 'Infertile', spoiled: 'Spoiled', eaten: 'Eaten by the mother', other: 'Other' };
+const FAILURE_LABELS = catalogueLabels('sacFailure');
 
 /** Why no roll is due, in words. */
 function noRollText(sac: SacResponse): string {

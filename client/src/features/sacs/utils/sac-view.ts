@@ -1,35 +1,29 @@
 import {
-  BROOD_STAGE_LABEL_SETS,
-  SAC_OUTCOME_LABELS,
+  broodStageLabel,
   type BandSide,
   type BroodStage,
   type PullWindowState,
   type RollStatus,
   type SacResponse,
+  type StageNumbering,
 } from '@broodsilk/shared';
+import { catalogueLabels, currentNumbering, words } from '@/lib/i18n';
 import { formatDate, formatInstant } from '@/lib/dates';
 import { PULL_WINDOW_TONE, ROLL_STATUS_TONE, type ToneStyle } from '@/lib/tones';
 
-export const BROOD_LABELS = BROOD_STAGE_LABEL_SETS.us;
-
-export function broodLabel(stage: BroodStage): string {
-  return BROOD_LABELS[stage];
+/** A brood stage in the reader's language and numbering set (settings). */
+export function broodLabel(stage: BroodStage, numbering: StageNumbering = currentNumbering()): string {
+  return broodStageLabel(words, stage, numbering);
 }
 
 /** Tone class and words for a pull window state. */
-export const PULL_WINDOW_TEXT: Record<PullWindowState, { label: string } & ToneStyle> = {
-  'not-yet': { label: 'Not yet', ...PULL_WINDOW_TONE['not-yet'] },
-  open: { label: 'Pull window open', ...PULL_WINDOW_TONE.open },
-  closing: { label: 'Pull window closing', ...PULL_WINDOW_TONE.closing },
-  past: { label: 'Pull window past', ...PULL_WINDOW_TONE.past },
-};
+export const PULL_WINDOW_TEXT = new Proxy({} as Record<PullWindowState, { label: string } & ToneStyle>, {
+  get: (_t, key: string) => ({ label: words(`pullWindow.${key}`), ...PULL_WINDOW_TONE[key as PullWindowState] }),
+});
 
-export const ROLL_TEXT: Record<RollStatus, { label: string } & ToneStyle> = {
-  upcoming: { label: 'Next roll', ...ROLL_STATUS_TONE.upcoming },
-  'due-soon': { label: 'Roll due soon', ...ROLL_STATUS_TONE['due-soon'] },
-  due: { label: 'Roll due now', ...ROLL_STATUS_TONE.due },
-  overdue: { label: 'Roll overdue', ...ROLL_STATUS_TONE.overdue },
-};
+export const ROLL_TEXT = new Proxy({} as Record<RollStatus, { label: string } & ToneStyle>, {
+  get: (_t, key: string) => ({ label: words(`roll.${key}`), ...ROLL_STATUS_TONE[key as RollStatus] }),
+});
 
 const days = (n: number) => (n === 1 ? '1 day' : `${n} days`);
 
@@ -58,7 +52,7 @@ export function rollSentence(sac: SacResponse, timeZone: string): string | null 
   return `${ROLL_TEXT[sac.roll.status].label} · due ${formatInstant(sac.roll.due, timeZone)}`;
 }
 
-export const SAC_OUTCOME_TEXT = SAC_OUTCOME_LABELS;
+export const SAC_OUTCOME_TEXT = catalogueLabels('sacOutcome');
 
 /** Where a sac is, in words. */
 export function whereSacIs(sac: SacResponse): string {
