@@ -58,7 +58,7 @@ describe('pairing warnings', () => {
     expect(w).toEqual({
       code: 'loan-overdue',
       severity: 'warning',
-      params: { dueBack: '2026-05-29', count: 3 },
+      params: { named: '', dueBack: '2026-05-29', count: 3 },
       message: 'The loaned male was due back on 2026-05-29, 3 days ago.',
     });
     expect(codes(base({ male: { ...male, dueBackOn: '2026-06-01' } }))).toEqual([]);
