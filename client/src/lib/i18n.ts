@@ -1,6 +1,7 @@
 import i18next from 'i18next';
 import { initReactI18next, useTranslation } from 'react-i18next';
 import { useMemo } from 'react';
+import { formatDate } from './dates';
 import {
   I18N_OPTIONS,
   languageFromTags,
@@ -24,14 +25,24 @@ void i18next.use(initReactI18next).init({
 
 export { i18next };
 
+const CALENDAR_DATE = /^\d{4}-\d{2}-\d{2}$/;
+/** Sentences carry calendar dates as ISO 8601 values; the reader sees them in the one date format of the interface. */
+function readableValues(values: Parameters<Words>[1]): Parameters<Words>[1] {
+  if (!values) return values;
+  return Object.fromEntries(Object.entries(values).map(([k, v]) => [k, typeof v === 'string' && CALENDAR_DATE.test(v) ? formatDate(v) : v]));
+}
+
 /** Words of the current language, for code outside components (utilities, option lists built on render). */
-export const words: Words = (key, values) => String(i18next.t(key, values ?? {}));
+export const words: Words = (key, values) => String(i18next.t(key, readableValues(values) ?? {}));
 
 /** The reader's words in a component; re-renders when the language changes. */
 export function useWords(): Words {
   const { i18n } = useTranslation();
   const lng = i18n.language;
-  return useMemo(() => (lng ? wordsOf(i18n) : wordsOf(i18n)), [i18n, lng]);
+  return useMemo(() => {
+    const t = wordsOf(i18n);
+    return ((key, values) => t(key, readableValues(values))) as Words;
+  }, [i18n, lng]);
 }
 
 let numbering: StageNumbering = 'us';

@@ -10,8 +10,9 @@ export function WarningsList({ warnings }: { warnings: PairingWarning[] }) {
   if (warnings.length === 0) return null;
   return (
     <Stack gap="xs" data-testid="project-warnings">
-      {warnings.map((w) => (
-        <Alert key={w.code} color={SEVERITY_COLOURS[w.severity]} title={TITLES[w.severity]} variant="light">
+      {warnings.map((w, i) => (
+        // a project with several males can carry the same warning once per male
+        <Alert key={`${w.code}-${i}`} color={SEVERITY_COLOURS[w.severity]} title={TITLES[w.severity]} variant="light">
           {w.params ? words(`warning.${w.code}`, w.params) : w.message}
         </Alert>
       ))}
