@@ -9,7 +9,8 @@ import { effectiveBreeding } from '../species/effective-breeding';
 import { ownBreeding } from '../species/species.mapper';
 import { Sac } from '../sacs/sac.entity';
 import { SAC_POPULATE, windowOf } from '../sacs/sac-views.service';
-import { latestCareOf } from '../sacs/sac-queries';
+import { latestCareOf, type LatestCare } from '../sacs/sac-queries';
+import { bandOf } from '../sacs/sac-band';
 import { ReminderSettings } from './reminder-settings.entity';
 import type { AnimalFacts, Recipient, SacFacts } from './planning/reminder-plan.types';
 
@@ -61,13 +62,27 @@ export async function sacFactsOf(em: EntityManager, sacIds: string[]): Promise<S
     pulledAt: s.pulledAt ?? null,
     rollIntervalHours: s.rollIntervalHours,
     rollingOff: s.rollingOff,
+    rollPastLegs: s.rollPastLegs,
+    leftWithMother: s.leftWithMother,
     stage: s.broodStage,
     lastRollAt: rolls.get(s.id)?.lastRollAt ?? null,
-    // Sacs carry no target band yet; the planner reminds a reading outside one once they do.
-    latestReading: null,
-    band: null,
+    latestReading: latestReadingOf(s.id, rolls.get(s.id)),
+    band: (({ temperatureC, humidityPercent }) => ({ temperatureC, humidityPercent }))(bandOf(s)),
     recipients: members.filter((m) => m.project.id === s.project.id).map((m) => recipients.get(m.user!.id)!),
   }));
+}
+
+/** The newest temperature or humidity reading; its sac and instant name the reminder, so each reading is told once. */
+function latestReadingOf(sacId: string, care: LatestCare | undefined): SacFacts['latestReading'] {
+  const t = care?.temperature;
+  const h = care?.humidity;
+  const newest =
+    t && (!h || t.at >= h.at)
+      ? { at: t.at, temperatureC: t.value, humidityPercent: null }
+      : h
+        ? { at: h.at, temperatureC: null, humidityPercent: h.value }
+        : null;
+  return newest ? { id: `${sacId}@${newest.at.toISOString()}`, ...newest } : null;
 }
 
 export async function animalFactsOf(em: EntityManager, animalIds: string[], now: Date): Promise<AnimalFacts[]> {

@@ -24,6 +24,8 @@ function sac(over: Partial<SacFacts> = {}): SacFacts {
     pulledAt: null,
     rollIntervalHours: 12,
     rollingOff: false,
+    rollPastLegs: false,
+    leftWithMother: false,
     stage: 'eggs',
     lastRollAt: null,
     latestReading: null,
@@ -67,6 +69,11 @@ describe('pull window reminders in the recipient’s zone, across the daylight-s
       ['u-helper', '04/04/2026, 14:00', '04/04/2026, 08:00'],
     ]);
     expect(new Set(plan.map((r) => r.key)).size).toBe(2);
+  });
+
+  it('a sac left with the mother on purpose gets no pull-window reminders', () => {
+    vi.setSystemTime(new Date('2026-03-20T12:00:00Z'));
+    expect(planSacReminders(sac({ leftWithMother: true }), new Date()).filter((r) => r.kind.startsWith('pull-window'))).toEqual([]);
   });
 
   it('once the pull is recorded, no window reminder remains', () => {
@@ -142,11 +149,19 @@ describe('rolls', () => {
     expect(rolls[0].key).not.toBe(rolls[1].key);
   });
 
-  it('no roll is reminded once the brood is first instar, rolling is off, or the sac is over', () => {
+  it('no roll is reminded once the legs have formed, rolling is off, or the sac is over', () => {
     vi.setSystemTime(pulledAt);
-    for (const over of [{ stage: 'first-instar' as const }, { rollingOff: true }, { active: false }]) {
+    // docs/trade-facts.md §4: rolling stops once the eggs have legs (docs/rules.md, Rolls)
+    for (const over of [{ stage: 'eggs-with-legs' as const }, { stage: 'first-instar' as const }, { rollingOff: true }, { active: false }]) {
       expect(planSacReminders(pulled(over), new Date()).filter((r) => r.kind.startsWith('roll'))).toEqual([]);
     }
+  });
+
+  it('a sac the keeper keeps rolling past the legs is reminded at eggs with legs, and not at first instar', () => {
+    vi.setSystemTime(pulledAt);
+    const rolls = (over: Partial<SacFacts>) => byKind(planSacReminders(pulled({ rollPastLegs: true, ...over }), new Date()), 'roll-due');
+    expect(rolls({ stage: 'eggs-with-legs' })).toHaveLength(1);
+    expect(rolls({ stage: 'first-instar' })).toEqual([]);
   });
 });
 

@@ -55,7 +55,7 @@ function outsideBand(value: number | null, band: { min: number; max: number } | 
 function sacFacts(s: SacFacts, r: Recipient): Fact[] {
   if (!s.active) return [];
   const out: Fact[] = [];
-  if (!s.pulledAt) {
+  if (!s.pulledAt && !s.leftWithMother) {
     const w = pullWindowDates(s.layDate, s.pullWindow);
     const warnOn = addDays(w.closesOn, -PULL_CLOSES_NOTICE_DAYS);
     out.push({
@@ -65,7 +65,7 @@ function sacFacts(s: SacFacts, r: Recipient): Fact[] {
       details: { opensOn: w.opensOn, closesOn: w.closesOn },
     });
     out.push({ kind: 'pull-window-closes', id: w.closesOn, at: atLocalHour(warnOn, DAY_REMINDER_HOUR, r.timeZone), details: { closesOn: w.closesOn } });
-  } else if (rollingApplies({ pulled: true, stage: s.stage, rollingOff: s.rollingOff })) {
+  } else if (s.pulledAt && rollingApplies({ pulled: true, stage: s.stage, rollingOff: s.rollingOff, rollPastLegs: s.rollPastLegs })) {
     const due = nextRollDue({ pulledAt: s.pulledAt, lastRollAt: s.lastRollAt, intervalHours: s.rollIntervalHours });
     const overdueAt = new Date(due.getTime() + s.rollIntervalHours * HOUR_MS * ROLL_OVERDUE_FRACTION);
     const details = { due: due.toISOString(), intervalHours: s.rollIntervalHours };

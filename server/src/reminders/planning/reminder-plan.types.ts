@@ -18,7 +18,7 @@ export interface Reading {
   humidityPercent: number | null;
 }
 
-/** Target band for a sac's readings (both ends inclusive); none until sacs carry one. */
+/** Target band for a sac's readings (both ends inclusive): the sac's own, else the default band. */
 export interface ReadingBand {
   temperatureC?: { min: number; max: number };
   humidityPercent?: { min: number; max: number };
@@ -36,6 +36,10 @@ export interface SacFacts {
   pulledAt: Date | null;
   rollIntervalHours: number;
   rollingOff: boolean;
+  /** The keeper keeps rolling past eggs with legs (to first instar). */
+  rollPastLegs: boolean;
+  /** Left with the mother on purpose: no pull-window reminders. */
+  leftWithMother: boolean;
   stage: BroodStage;
   lastRollAt: Date | null;
   latestReading: Reading | null;
