@@ -32,3 +32,8 @@ export function formatDate(date: string): string {
 }
 
 export { dayjs };
+
+/** A stored sentence (an activity summary) with its ISO 8601 calendar dates shown in the interface's one date format. */
+export function withReadableDates(text: string): string {
+  return text.replace(/\b(\d{4})-(\d{2})-(\d{2})\b/g, (iso) => formatDate(iso));
+}

@@ -30,3 +30,12 @@ describe('sentences from the catalogue', () => {
     expect(words('warning.loan-overdue', { named: ' MO-042', dueBack: '2026-05-29', count: 3 })).toContain('MO-042');
   });
 });
+
+describe('stored sentences', () => {
+  it('show their ISO 8601 dates in the interface’s date format and keep the rest', async () => {
+    const { withReadableDates } = await import('./dates');
+    const gb = new Intl.DateTimeFormat('en-GB', { timeZone: 'UTC', day: 'numeric', month: 'short', year: 'numeric' }).format(new Date(Date.UTC(2026, 10, 6)));
+    expect(withReadableDates('Roll (sac laid 2026-11-06).')).toBe(`Roll (sac laid ${gb}).`);
+    expect(withReadableDates('Counted 120 alive.')).toBe('Counted 120 alive.');
+  });
+});

@@ -2,7 +2,7 @@ import { Anchor, Stack, Text } from '@mantine/core';
 import { Link } from 'react-router';
 import type { ActivityEventResponse } from '@broodsilk/shared';
 import { paths } from '@/config/paths';
-import { formatInstant } from '@/lib/dates';
+import { formatInstant, withReadableDates } from '@/lib/dates';
 import { SectionCard } from '@/components/ui/section-card';
 
 /** What others did lately in the viewer's projects. */
@@ -18,7 +18,7 @@ export function ActivityCard({ events, timeZone }: { events: ActivityEventRespon
           {events.slice(0, 8).map((e) => (
             <div key={e.id}>
               <Text size="sm">
-                <b>{e.actor?.name ?? 'Broodsilk'}</b>: {e.summary}
+                <b>{e.actor?.name ?? 'Broodsilk'}</b>: {withReadableDates(e.summary)}
               </Text>
               <Text size="xs" c="dimmed">
                 <Anchor component={Link} to={paths.project.href(e.projectId)} size="xs">

@@ -2,7 +2,7 @@ import { Button, Text, Timeline } from '@mantine/core';
 import { useState } from 'react';
 import { activitySentence, type ActivityEventResponse } from '@broodsilk/shared';
 import { currentNumbering, currentUnit, useWords } from '@/lib/i18n';
-import { formatInstant } from '@/lib/dates';
+import { formatInstant, withReadableDates } from '@/lib/dates';
 
 /** How many events show before "Show all": a pulled sac logs two rolls a day. */
 const FIRST_EVENTS = 15;
@@ -19,7 +19,7 @@ export function ActivityTimeline({ events, timeZone, showProject = false }: { ev
       <Timeline bulletSize={12} lineWidth={2} data-testid="activity-timeline">
         {shown.map((e) => (
           <Timeline.Item key={e.id} color={e.kind.includes('fail') || e.kind.includes('end') ? 'clay' : 'moss'}>
-            <Text size="sm">{activitySentence(t, e, { unit: currentUnit(), numbering: currentNumbering() })}</Text>
+            <Text size="sm">{withReadableDates(activitySentence(t, e, { unit: currentUnit(), numbering: currentNumbering() }))}</Text>
             <Text size="xs" c="dimmed">
               {e.actor?.name ?? 'Broodsilk'} · {formatInstant(e.at, timeZone)}
               {showProject && ` · ${e.projectTitle}`}
