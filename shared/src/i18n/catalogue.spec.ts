@@ -104,7 +104,16 @@ describe('the catalogue (i18next, en and de)', () => {
         'male-died-after-pairing',
         'no-sac-after-a-year',
       ]);
-      const values = { named: ' MO-042', molt: '2026-01-02', paired: '2025-12-01', days: 400, died: '2026-02-01', clause: 'X.', dueBack: '2026-01-01', endsOn: '2026-06-01' };
+      const values = {
+        named: ' MO-042',
+        molt: '2026-01-02',
+        paired: '2025-12-01',
+        days: 400,
+        died: '2026-02-01',
+        clause: 'X.',
+        dueBack: '2026-01-01',
+        endsOn: '2026-06-01',
+      };
       for (const code of codes) {
         const one = t(`warning.${code}`, { ...values, count: 1 });
         const many = t(`warning.${code}`, { ...values, count: 5 });
