@@ -100,7 +100,7 @@ describe('a season of attempts', () => {
     }[];
     expect(record.map((r) => r.project.id)).toContain(projectId);
     expect((await activity(roles.partner, projectId)).map((e) => e.summary)).toContainEqual(
-      expect.stringContaining(`with ${backup.label} (30 min): connected`),
+      expect.stringContaining(`with ${backup.label} (30 min): Connected.`),
     );
   });
 
@@ -224,7 +224,7 @@ describe('ending, closing and reopening', () => {
     const kinds = (await activity(owner, p.id)).map((e) => e.kind);
     expect(kinds).toEqual(expect.arrayContaining(['project.ended', 'project.reopened', 'pairing.recorded']));
     const reopenEvent = (await activity(owner, p.id)).find((e) => e.kind === 'project.reopened')!;
-    expect(reopenEvent.summary).toBe(`Reopened the project (it had ended early on ${today}: sac-eaten).`);
+    expect(reopenEvent.summary).toBe(`Reopened the project (it had ended early on ${today}: the sac was eaten).`);
   });
 
   it('closing is final: no new pairing, no second close, no reopening (409); a correction still goes in', async () => {
