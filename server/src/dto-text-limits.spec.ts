@@ -4,7 +4,14 @@ import { describe, expect, it } from 'vitest';
 
 const SRC = new URL('.', import.meta.url).pathname;
 /** Limits that are not a form field's text: search boxes, the species catalogue's admin values, sign-in (its own rules). */
-const OWN_LIMITS = ['animals/dto/animal-list-query.dto.ts', 'species/dto/species-list-query.dto.ts', 'species/dto/update-species.dto.ts', 'auth/dto/'];
+// Search boxes, the admin's species values and sign-in (its tokens and codes are not typed text a form counts) keep their own limits.
+const OWN_LIMITS = [
+  'animals/dto/animal-list-query.dto.ts',
+  'species/dto/species-list-query.dto.ts',
+  'species/dto/update-species.dto.ts',
+  'auth/dto/',
+  'auth/second-factor/dto/',
+];
 
 const dtoFiles = (dir: string): string[] =>
   readdirSync(dir, { withFileTypes: true }).flatMap((e) =>

@@ -10,6 +10,7 @@ import { addMember, createProject } from './support/projects';
 import { createSac } from './support/sacs';
 import { mailsTo, waitForMail } from './support/mail-sink';
 import { JOBS_SCHEMA, JobsService } from '../src/jobs/jobs.service';
+import { COMPOSE_QUEUE } from '../src/mail/mail-outbox.service';
 import { REMINDER_QUEUE } from '../src/reminders/reminder-planner.service';
 import { Notification } from '../src/reminders/notification.entity';
 
@@ -40,7 +41,7 @@ afterAll(async () => {
 
 describe('reminder workers', () => {
   it('two instances work the queue in schema pgboss', () => {
-    for (const i of instances) expect([...i.app.get(JobsService).working].sort()).toEqual(['mail-out', REMINDER_QUEUE]);
+    for (const i of instances) expect([...i.app.get(JobsService).working].sort()).toEqual([COMPOSE_QUEUE, 'mail-out', REMINDER_QUEUE].sort());
   });
 
   it('after the restart, each planned roll reminder is sent exactly once to the owner and the caretaker', async () => {
