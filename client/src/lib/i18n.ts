@@ -40,7 +40,8 @@ export function useWords(): Words {
   const { i18n } = useTranslation();
   const lng = i18n.language;
   return useMemo(() => {
-    const t = wordsOf(i18n);
+    // fixed to the language of this render, so a new language gives new words (and a re-render)
+    const t = wordsOf({ t: i18n.getFixedT(lng) } as Pick<typeof i18n, 't'>);
     return ((key, values) => t(key, readableValues(values))) as Words;
   }, [i18n, lng]);
 }
