@@ -4,6 +4,7 @@ import type { PairingResponse } from '@broodsilk/shared';
 import { formatInstant } from '@/lib/dates';
 import { usePairings } from '../api/pairings';
 import { PAIRING_OUTCOME_LABELS } from '../utils/labels';
+import { ScrollTable } from '@/components/ui/scroll-table';
 import { PairingForm, type MaleOption } from './pairing-form';
 
 interface PairingsPanelProps {
@@ -70,7 +71,7 @@ export function PairingsPanel({ projectId, timeZone, canRecord, canCorrect, male
       {pairings.isError && <Alert color="clay">{pairings.error.message}</Alert>}
       {pairings.data && pairings.data.length === 0 && <Text c="dimmed">No pairing recorded yet.</Text>}
       {pairings.data && pairings.data.length > 0 && (
-        <Table.ScrollContainer minWidth={560}>
+        <ScrollTable minWidth={560} label="Pairings">
           <Table striped verticalSpacing={4} fz="sm" data-testid="pairings-table">
             <Table.Thead>
               <Table.Tr>
@@ -102,7 +103,7 @@ export function PairingsPanel({ projectId, timeZone, canRecord, canCorrect, male
               ))}
             </Table.Tbody>
           </Table>
-        </Table.ScrollContainer>
+        </ScrollTable>
       )}
       {correcting && (
         <PairingForm key={correcting.id} projectId={projectId} timeZone={timeZone} males={males} correcting={correcting} onDone={() => setCorrecting(null)} />
