@@ -1,4 +1,5 @@
 import type { Catalogue } from './en.js';
+import { pagesDe } from './pages/index.js';
 
 /** Every word for a shared state, in German; the `Catalogue` type makes a missing key a compile error. */
 export const de: Catalogue = {
@@ -264,6 +265,7 @@ export const de: Catalogue = {
     failedHeading: 'Ein Kokon ist verdorben',
     shippingHeading: 'Versand lebender Wirbelloser',
   },
+  page: pagesDe,
   calendar: {
     pullWindow: 'Entnahmefenster: {{project}}',
     where: '{{project}}, Kokon vom {{layDate}}',

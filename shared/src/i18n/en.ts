@@ -1,3 +1,6 @@
+import type { Widen } from './catalogue-shape.js';
+import { pagesEn } from './pages/index.js';
+
 /**
  * Every word for a shared state, in English. Keys are the shared enums' own values, so a new value
  * fails to compile here until it has words; `de.ts` must have the same shape (its type says so).
@@ -243,6 +246,7 @@ export const en = {
     failedHeading: 'A sac failed',
     shippingHeading: 'Shipping live invertebrates',
   },
+  page: pagesEn,
   calendar: {
     pullWindow: 'Pull window: {{project}}',
     where: '{{project}}, sac laid {{layDate}}',
@@ -254,6 +258,5 @@ export const en = {
   },
 } as const;
 
-type Widen<T> = { -readonly [K in keyof T]: T[K] extends string ? string : Widen<T[K]> };
 /** The shape every language's catalogue has. */
 export type Catalogue = Widen<typeof en>;
