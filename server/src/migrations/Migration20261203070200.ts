@@ -1,7 +1,7 @@
 import { Migration } from '@mikro-orm/migrations';
 
 /** Progress links: read-only pages for outside parties; only the SHA-256 of each token is stored. */
-export class Migration20261203070000 extends Migration {
+export class Migration20261203070200 extends Migration {
   override async up(): Promise<void> {
     this.addSql(
       `create table "progress_links" ("id" uuid not null, "created_at" timestamptz not null, "updated_at" timestamptz not null, "member_id" uuid not null, "token_hash" text not null, "created_by_id" uuid null, "revoked_at" timestamptz null, constraint "progress_links_pkey" primary key ("id"));`,
