@@ -47,7 +47,6 @@ export const progressEn = {
     'Copy this address and send it to {{name}} now: it is shown only once. It shows the project’s progress and their share, nothing of the other parties.',
   copy: 'Copy address',
   copied: 'Copied',
-  addressLabel: 'Progress page address for {{name}}',
 } as const;
 
 export const progressDe: Widen<typeof progressEn> = {
@@ -96,5 +95,4 @@ export const progressDe: Widen<typeof progressEn> = {
     'Kopiere diese Adresse und schick sie jetzt an {{name}}: Sie wird nur einmal angezeigt. Sie zeigt den Fortschritt des Projekts und den eigenen Anteil, nichts von den anderen Beteiligten.',
   copy: 'Adresse kopieren',
   copied: 'Kopiert',
-  addressLabel: 'Adresse der Fortschrittsseite für {{name}}',
 };

@@ -62,9 +62,7 @@ export function ProgressLinkActions({ projectId, member }: { projectId: string; 
       {url && (
         <Stack gap={4}>
           <Text size="xs">{t('page.progress.shownOnce', { name: member.name })}</Text>
-          <Code block aria-label={t('page.progress.addressLabel', { name: member.name })}>
-            {url}
-          </Code>
+          <Code block>{url}</Code>
           <CopyButton value={url}>
             {({ copied, copy }) => (
               <Button size="compact-xs" variant="default" onClick={copy}>
