@@ -94,7 +94,13 @@ export const de: Catalogue = {
   handOverMethod: { 'pick-up': 'Abholung', shipment: 'Versand' },
   entryStatus: { 'in-force': 'Zählt', reversed: 'Storniert', 'awaiting-confirmation': 'Wartet auf Bestätigung', 'left-out': 'Nicht berücksichtigt' },
   activityKind: {
-    project: { created: 'Projekt begonnen', updated: 'Projekt geändert', ended: 'Projekt vorzeitig beendet' },
+    project: {
+      created: 'Projekt begonnen',
+      updated: 'Projekt geändert',
+      ended: 'Projekt vorzeitig beendet',
+      reopened: 'Projekt wieder aufgenommen',
+      closed: 'Projekt abgeschlossen',
+    },
     member: { added: 'Mitglied hinzugefügt', joined: 'Mitglied beigetreten', removed: 'Mitglied entfernt' },
     invitation: { sent: 'Einladung verschickt', claimed: 'Einladung angenommen' },
     pairing: { recorded: 'Verpaarung eingetragen', corrected: 'Verpaarung korrigiert' },
@@ -105,6 +111,7 @@ export const de: Catalogue = {
       updated: 'Kokon geändert',
       failed: 'Kokon verdorben',
       opened: 'Kokon geöffnet',
+      'left-with-mother': 'Kokon bleibt beim Muttertier',
       'opening-corrected': 'Öffnung korrigiert',
     },
     brood: { counted: 'Jungtiere gezählt', corrected: 'Zählung korrigiert' },
@@ -127,6 +134,7 @@ export const de: Catalogue = {
       confirmation: 'Zahlung bestätigt',
     },
     male: { returned: 'Männchen zurückgegeben', died: 'Männchen gestorben' },
+    'progress-link': { issued: 'Fortschrittslink verschickt', revoked: 'Fortschrittslink widerrufen' },
   },
   activityKindOther: 'Ereignis',
   notificationKind: {
@@ -224,6 +232,8 @@ export const de: Catalogue = {
     broodCountLost: '{{about}}{{alive}} lebend im Stadium {{stage}}, {{lost}} verloren ({{reason}})',
     about: 'etwa ',
     memberRemoved: '{{name}} entfernt ({{role}}).',
+    progressLinkIssued: 'Neuen Fortschrittslink für {{name}} erstellt; frühere Links öffnen nicht mehr.',
+    progressLinkRevoked: 'Fortschrittslink von {{name}} widerrufen.',
   },
   statement: {
     title: 'Broodsilk-Kontoauszug',
