@@ -15,7 +15,7 @@ export const partnerUpdatesEn = {
   sacOpenedEstimated: 'The sac laid {{layDate}} was opened: about {{viable}} viable young (an estimate).',
   broodCounted: '{{alive}} young alive at {{stage}} in the sac laid {{layDate}}.',
   broodCountedLost: '{{alive}} young alive at {{stage}} in the sac laid {{layDate}}; {{lost}} lost.',
-  sacFailed: 'The sac laid {{layDate}} failed: {{reason}}.',
+  sacFailed: 'The sac laid {{layDate}} failed. Reason: {{reason}}.',
   projectEnded: 'The project ended early: {{reason}}.',
   maleDied: 'The male {{male}} died on {{on}}.',
   femaleMolted:
@@ -27,7 +27,7 @@ export const partnerUpdatesEn = {
   countsOpening: 'At the opening: {{viable}} viable young, {{dark}} dark and {{spoiled}} spoiled eggs.',
   countsLatest: 'Last count: {{alive}} alive at {{stage}}.',
   countsNone: 'No count was recorded for this sac.',
-  termsHeading: 'What the terms in force (version {{number}}) mean for each partner:',
+  termsHeading: 'What the terms in force (version {{number}}) mean for each party:',
   clauseFor: {
     'nothing-owed': '{{name}} (weight {{weight}}): nothing is owed for this; the share ends here.',
     'carries-over': '{{name}} (weight {{weight}}): the share carries over to the next sac or pairing of this deal.',
@@ -51,7 +51,7 @@ export const partnerUpdatesDe: Widen<typeof partnerUpdatesEn> = {
   sacOpenedEstimated: 'Der Kokon vom {{layDate}} wurde geöffnet: etwa {{viable}} lebensfähige Jungtiere (geschätzt).',
   broodCounted: '{{alive}} Jungtiere leben im Stadium {{stage}} (Kokon vom {{layDate}}).',
   broodCountedLost: '{{alive}} Jungtiere leben im Stadium {{stage}} (Kokon vom {{layDate}}); {{lost}} verloren.',
-  sacFailed: 'Der Kokon vom {{layDate}} ist verdorben: {{reason}}.',
+  sacFailed: 'Der Kokon vom {{layDate}} ist verdorben. Grund: {{reason}}.',
   projectEnded: 'Das Projekt wurde vorzeitig beendet: {{reason}}.',
   maleDied: 'Das Männchen {{male}} ist am {{on}} gestorben.',
   femaleMolted:
@@ -63,7 +63,7 @@ export const partnerUpdatesDe: Widen<typeof partnerUpdatesEn> = {
   countsOpening: 'Bei der Öffnung: {{viable}} lebensfähige Jungtiere, {{dark}} dunkle und {{spoiled}} verdorbene Eier.',
   countsLatest: 'Letzte Zählung: {{alive}} lebend im Stadium {{stage}}.',
   countsNone: 'Für diesen Kokon wurde nichts gezählt.',
-  termsHeading: 'Was die geltenden Bedingungen (Fassung {{number}}) für jeden Partner bedeuten:',
+  termsHeading: 'Was die geltenden Bedingungen (Fassung {{number}}) für jeden Beteiligten bedeuten:',
   clauseFor: {
     'nothing-owed': '{{name}} (Gewicht {{weight}}): Dafür wird nichts geschuldet; der Anteil endet hier.',
     'carries-over': '{{name}} (Gewicht {{weight}}): Der Anteil gilt für den nächsten Kokon oder die nächste Verpaarung dieser Abmachung weiter.',
