@@ -13,7 +13,7 @@ const OLD_KINDS = [
 ];
 
 /** Partner updates: a notification kind of their own, and notifications about a whole project. */
-export class Migration20261203070000 extends Migration {
+export class Migration20261203070300 extends Migration {
   override async up(): Promise<void> {
     this.addSql(`alter type "notification_kind" add value if not exists 'partner-update' after 'daily-digest';`);
     this.addSql(`alter type "notification_subject" add value if not exists 'project' after 'animal';`);
