@@ -1,30 +1,18 @@
-import type { SpeciesGroup, SpeciesResponse, ValueOrigin, ValueSource } from '@broodsilk/shared';
+import { useCallback } from 'react';
+import type { SpeciesResponse, ValueSource } from '@broodsilk/shared';
+import { useWords } from '@/lib/i18n';
+import type { Words } from '@broodsilk/shared';
 
-export const GROUP_LABELS: Record<SpeciesGroup, string> = {
-  'nw-terrestrial': 'New World, ground-dwelling',
-  'nw-arboreal': 'New World, tree-dwelling',
-  'ow-terrestrial': 'Old World, ground-dwelling',
-  'ow-arboreal': 'Old World, tree-dwelling',
-  fossorial: 'Burrowing',
-};
-
-/** A short, plain label for where a value comes from. */
-export function sourceLabel(source: ValueSource): string {
-  switch (source.kind) {
-    case 'published':
-      return source.citation;
-    case 'common-practice':
-      return 'common practice';
-    case 'memory':
-      return 'from memory';
-  }
+/** A short, plain label for where a value comes from, in the reader's language. */
+export function sourceLabel(t: Words, source: ValueSource): string {
+  return source.kind === 'published' ? source.citation : t(`page.species.source.${source.kind}`);
 }
 
-export const ORIGIN_LABELS: Record<ValueOrigin, string> = {
-  species: 'this species',
-  group: 'group default',
-  default: 'Broodsilk default',
-};
+/** `sourceLabel` with the reader's words. */
+export function useSourceLabel(): (source: ValueSource) => string {
+  const t = useWords();
+  return useCallback((source: ValueSource) => sourceLabel(t, source), [t]);
+}
 
 function normalise(s: string): string {
   return s.trim().toLowerCase().replace(/\s+/g, ' ');
