@@ -102,6 +102,14 @@ describe('species catalogue', () => {
     for (const r of SPECIES_DATA) expect(byName.get(r.scientificName)?.cautions.venom, r.key).toEqual(r.venom);
   });
 
+  it('T. vagans eggs per sac says it rests on two sacs (Dor & Hénaut 2012; docs/trade-facts.md check value 3)', async () => {
+    const [vagans] = (await search('Tliltocatl vagans')).items;
+    expect(vagans.breeding.eggsPerSac).toEqual({
+      value: { min: 200, max: 200 },
+      source: { kind: 'published', citation: expect.stringMatching(/^Dor, A\. & Hénaut, Y\. 2012/), sampleSize: { count: 2, unit: 'sacs' } },
+    });
+  });
+
   it('an Old World species with no published bite is "not known" and still carries its group caution', async () => {
     const [balfouri] = (await search('Monocentropus balfouri')).items;
     expect(balfouri.cautions.venom).toMatchObject({ value: 'not-known', source: { kind: 'memory' } });

@@ -23,8 +23,26 @@ export const groupCautionAlwaysShown = (group: SpeciesGroup): boolean => ALWAYS_
  * Where a value comes from: a named publication or catalogue, keeper practice
  * with no written source, or recalled by the author of the dataset.
  */
-export type ValueSource =
-  { kind: 'published'; citation: string; note?: string } | { kind: 'common-practice'; note?: string } | { kind: 'memory'; note?: string };
+export type ValueSource = (
+  { kind: 'published'; citation: string; note?: string } | { kind: 'common-practice'; note?: string } | { kind: 'memory'; note?: string }
+) & {
+  /** How many observations the figure rests on, where they are few (e.g. 200 eggs a sac from n = 2 sacs). */
+  sampleSize?: SampleSize;
+};
+
+/** What a figure was counted over: "n = 2 sacs". */
+export const SAMPLE_UNITS = ['sacs', 'females', 'bites'] as const;
+export type SampleUnit = (typeof SAMPLE_UNITS)[number];
+export interface SampleSize {
+  count: number;
+  unit: SampleUnit;
+}
+
+/** Fewer observations than this and a figure is a hint, not a range to check counts against. */
+export const FEW_OBSERVATIONS = 10;
+
+/** True when a value rests on only a few observations (it says so beside the figure). */
+export const restsOnFew = (source: ValueSource): boolean => source.sampleSize !== undefined && source.sampleSize.count < FEW_OBSERVATIONS;
 
 /** An inclusive whole-number range, e.g. eggs per sac 100–600. */
 export interface NumberRange {

@@ -68,6 +68,8 @@ const pull = (fromDay: number, toDay: number, genus: string): Sourced<{ fromDay:
   value: { fromDay, toDay },
   source: memo(`usual pull days for ${genus}`),
 });
+/** Dor & Hénaut 2012 counted 200 young in each of two sacs (docs/trade-facts.md §6, check value 3). */
+export const TLIL_VAGANS_EGGS_SOURCE: ValueSource = { ...SRC.dorHenaut2012, sampleSize: { count: 2, unit: 'sacs' } };
 const range = (min: number, max: number, source: ValueSource): Sourced<NumberRange> => ({ value: { min, max }, source });
 
 const tlil = (o: Options): Options => ({
@@ -111,7 +113,8 @@ export const SPECIES_DATA: SpeciesDataRow[] = [
     'nw-terrestrial',
     tlil({
       formerNames: ['Eurypelma vagans', 'Brachypelma vagans', 'Euathlus vagans'],
-      eggsPerSac: range(200, 200, SRC.dorHenaut2012),
+      // One figure from two lab-reared sacs: shown as "about 200, n = 2 sacs", never as a range.
+      eggsPerSac: range(200, 200, TLIL_VAGANS_EGGS_SOURCE),
     }),
   ),
   sp(

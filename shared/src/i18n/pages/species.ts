@@ -26,7 +26,7 @@ export const speciesEn = {
     months: '{{range}} months',
     /** A figure resting on few observations says so (docs/trade-facts.md §6). */
     aboutSample: 'about {{value}}, n = {{count}} {{unit}}',
-    sampleUnit: { sacs: 'sacs', females: 'females', bites: 'bites' },
+    sampleUnit: { sacs_one: 'sac', sacs_other: 'sacs', females_one: 'female', females_other: 'females', bites_one: 'bite', bites_other: 'bites' },
   },
   catalogue: {
     search: 'Search names',
@@ -87,7 +87,7 @@ export const speciesDe: Widen<typeof speciesEn> = {
     lifespan: 'Lebenszeit des Männchens nach der Reifehäutung',
     months: '{{range}} Monate',
     aboutSample: 'etwa {{value}}, n = {{count}} {{unit}}',
-    sampleUnit: { sacs: 'Kokons', females: 'Weibchen', bites: 'Bisse' },
+    sampleUnit: { sacs_one: 'Kokon', sacs_other: 'Kokons', females_one: 'Weibchen', females_other: 'Weibchen', bites_one: 'Biss', bites_other: 'Bisse' },
   },
   catalogue: {
     search: 'Namen suchen',

@@ -5,7 +5,7 @@ import { useState } from 'react';
 import { SPECIES_GROUPS, type SpeciesGroup, type SpeciesResponse, type Sourced, type ValueOrigin } from '@broodsilk/shared';
 import { useWords } from '@/lib/i18n';
 import { useSpeciesList } from '../api/species';
-import { formatRange, matchedFormerName, useSourceLabel } from '../utils/species-view';
+import { formatRange, matchedFormerName, sampledRange, useSourceLabel } from '../utils/species-view';
 
 const PAGE = 24;
 
@@ -90,7 +90,7 @@ function SpeciesCard({ species, query }: { species: SpeciesResponse; query: stri
           text={t('page.species.value.days', { range: formatRange(e.pairingToSacDays.value.min, e.pairingToSacDays.value.max) })}
           value={e.pairingToSacDays}
         />
-        <Value label={t('page.species.value.eggsPerSac')} text={formatRange(e.eggsPerSac.value.min, e.eggsPerSac.value.max)} value={e.eggsPerSac} />
+        <Value label={t('page.species.value.eggsPerSac')} text={sampledRange(t, e.eggsPerSac)} value={e.eggsPerSac} />
         <Value
           label={t('page.species.value.lifespan')}
           text={t('page.species.value.months', { range: formatRange(e.matureMaleLifespanMonths.value.min, e.matureMaleLifespanMonths.value.max) })}

@@ -1,7 +1,6 @@
 import { useCallback } from 'react';
-import type { SpeciesResponse, ValueSource } from '@broodsilk/shared';
+import { restsOnFew, type NumberRange, type Sourced, type SpeciesResponse, type ValueSource, type Words } from '@broodsilk/shared';
 import { useWords } from '@/lib/i18n';
-import type { Words } from '@broodsilk/shared';
 
 /** A short, plain label for where a value comes from, in the reader's language. */
 export function sourceLabel(t: Words, source: ValueSource): string {
@@ -35,4 +34,15 @@ export function matchedFormerName(species: Pick<SpeciesResponse, 'scientificName
 
 export function formatRange(min: number, max: number): string {
   return min === max ? String(min) : `${min}–${max}`;
+}
+
+/**
+ * A range in words; a figure resting on few observations says so instead of passing for a range:
+ * "about 200, n = 2 sacs" (docs/trade-facts.md §6).
+ */
+export function sampledRange(t: Words, { value, source }: Sourced<NumberRange>): string {
+  const text = formatRange(value.min, value.max);
+  if (!restsOnFew(source) || !source.sampleSize) return text;
+  const { count, unit } = source.sampleSize;
+  return t('page.species.value.aboutSample', { value: text, count, unit: t(`page.species.value.sampleUnit.${unit}`, { count }) });
 }
