@@ -20,7 +20,7 @@ const json = (v: unknown) => `'${JSON.stringify(v).replace(/'/g, "''")}'::jsonb`
  * whose bites nobody has published either way; other false values with a recorded source →
  * no-cases-known; anything without a source → not-known.
  */
-export class Migration20261203070000 extends Migration {
+export class Migration20261203070400 extends Migration {
   override async up(): Promise<void> {
     this.addSql(`alter table "species" add column "venom" text check ("venom" in ('medically-significant', 'no-cases-known', 'not-known')) null;`);
     this.addSql(
