@@ -20,7 +20,7 @@ function sources(r: SpeciesDataRow): Partial<Record<SpeciesSourceKey, unknown>> 
 
 /**
  * How the venom flag is stored: a boolean `medically_significant_venom` until the three-valued
- * `venom` column replaced it (Migration20261203070000); the first catalogue migration writes the former.
+ * `venom` column replaced it (Migration20261203070400); the first catalogue migration writes the former.
  */
 export type VenomColumn = 'boolean' | 'three-valued';
 
