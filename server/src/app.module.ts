@@ -25,6 +25,7 @@ import { SacsModule } from './sacs/sacs.module';
 import { DashboardModule } from './dashboard/dashboard.module';
 import { CalendarModule } from './calendar/calendar.module';
 import { RemindersModule } from './reminders/reminders.module';
+import { PartnerUpdatesModule } from './partner-updates/partner-updates.module';
 import { ProjectRoleGuard } from './projects/project-role.guard';
 import { ClockModule } from './common/clock.module';
 import { AccountsModule } from './accounts/accounts.module';
@@ -76,6 +77,7 @@ function redactSecrets(url: string): string {
     DashboardModule,
     CalendarModule,
     RemindersModule,
+    PartnerUpdatesModule,
     AccountsModule,
     SettlementsModule,
     IdempotencyModule,

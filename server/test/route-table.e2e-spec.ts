@@ -21,6 +21,8 @@ const PUBLIC = new Set([
   'GET /api/auth/csrf',
   'POST /api/auth/password-reset',
   'POST /api/auth/password-reset/confirm',
+  'POST /api/auth/confirm-email',
+  'POST /api/auth/confirm-email/resend',
   'GET /api/health',
   'GET /api/invitations/:token',
   'GET /api/calendar/:token.ics',

@@ -56,3 +56,4 @@ export * from './money/money.js';
 export * from './projects/project-rules.js';
 export * from './sacs/incubation-band.js';
 export * from './sacs/sac-permissions.js';
+export * from './paging/keyset.js';

@@ -55,6 +55,7 @@ export const NOT_EXPORTED: Record<string, string> = {
   calendar_feeds: 'a secret feed token',
   progress_links: 'links for outside parties carrying secrets (stored hashed)',
   password_reset_tokens: 'secrets',
+  email_confirmation_tokens: 'single-use links (hashed secrets) of the address confirmation',
   recovery_codes: 'second-factor recovery codes (hashed secrets)',
   rate_limits: 'counters of the sign-in limit',
   idempotency_keys: 'stored answers for client retries, kept one day',

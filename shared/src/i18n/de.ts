@@ -1,5 +1,6 @@
 import type { Catalogue } from './en.js';
 import { pagesDe } from './pages/index.js';
+import { partnerUpdatesDe } from './partner-updates.js';
 
 /** Every word for a shared state, in German; the `Catalogue` type makes a missing key a compile error. */
 export const de: Catalogue = {
@@ -135,6 +136,7 @@ export const de: Catalogue = {
     },
     male: { returned: 'Männchen zurückgegeben', died: 'Männchen gestorben' },
     'progress-link': { issued: 'Fortschrittslink verschickt', revoked: 'Fortschrittslink widerrufen' },
+    female: { molted: 'Weibchen nach der Verpaarung gehäutet' },
   },
   activityKindOther: 'Ereignis',
   notificationKind: {
@@ -147,6 +149,7 @@ export const de: Catalogue = {
     'female-molted': 'Ein Weibchen hat sich nach der Verpaarung gehäutet',
     'loan-due-back': 'Ein geliehenes Tier muss in 7 Tagen zurück',
     'daily-digest': 'Die tägliche Zusammenfassung',
+    'partner-update': 'Neuigkeiten aus einem Projekt, an dem du beteiligt bist',
   },
   broodStage: {
     us: { eggs: 'Eier', 'eggs-with-legs': 'Eier mit Beinen', 'first-instar': '1. Instar', 'second-instar': '2. Instar' },
@@ -276,6 +279,7 @@ export const de: Catalogue = {
     shippingHeading: 'Versand lebender Wirbelloser',
   },
   page: pagesDe,
+  partnerUpdate: partnerUpdatesDe,
   calendar: {
     pullWindow: 'Entnahmefenster: {{project}}',
     where: '{{project}}, Kokon vom {{layDate}}',

@@ -1,5 +1,6 @@
 import type { Widen } from './catalogue-shape.js';
 import { pagesEn } from './pages/index.js';
+import { partnerUpdatesEn } from './partner-updates.js';
 
 /**
  * Every word for a shared state, in English. Keys are the shared enums' own values, so a new value
@@ -120,6 +121,7 @@ export const en = {
     },
     male: { returned: 'Male returned', died: 'Male died' },
     'progress-link': { issued: 'Progress link sent', revoked: 'Progress link revoked' },
+    female: { molted: 'Female molted after pairing' },
   },
   activityKindOther: 'Activity',
   notificationKind: {
@@ -132,6 +134,7 @@ export const en = {
     'female-molted': 'A female molted after pairing',
     'loan-due-back': 'A loaned animal is due back in 7 days',
     'daily-digest': 'The daily digest',
+    'partner-update': 'News from a project you are a partner in',
   },
   /** Stage names in the chosen numbering set (docs/rules.md, Stage numbering). */
   broodStage: {
@@ -257,6 +260,8 @@ export const en = {
     shippingHeading: 'Shipping live invertebrates',
   },
   page: pagesEn,
+  /** What partners read when something is recorded in their project (in-app and e-mail). */
+  partnerUpdate: partnerUpdatesEn,
   calendar: {
     pullWindow: 'Pull window: {{project}}',
     where: '{{project}}, sac laid {{layDate}}',

@@ -11,6 +11,7 @@ import { accountEn, accountDe } from './account.js';
 import { collectionEn, collectionDe } from './collection.js';
 import { speciesEn, speciesDe } from './species.js';
 import { progressEn, progressDe } from './progress.js';
+import { failureNoticeEn, failureNoticeDe } from './failureNotice.js';
 
 /** Text of the pages, one section per area of the client; each area keeps English and German side by side. */
 export const pagesEn = {
@@ -27,6 +28,7 @@ export const pagesEn = {
   collection: collectionEn,
   species: speciesEn,
   progress: progressEn,
+  failureNotice: failureNoticeEn,
 } as const;
 
 export const pagesDe = {
@@ -43,4 +45,5 @@ export const pagesDe = {
   collection: collectionDe,
   species: speciesDe,
   progress: progressDe,
+  failureNotice: failureNoticeDe,
 };
