@@ -272,6 +272,9 @@ export const de: Catalogue = {
     pullBetween: '{{where}}. Entnahme zwischen Tag {{from}} und Tag {{to}} ({{opens}} bis {{closes}}).',
     stageExpected: '{{stage}} erwartet: {{project}}',
     stageDays: '{{where}}. Tag {{from}}–{{to}}. {{source}}',
+    stageGuide: 'Nur ein Anhaltspunkt, Arten unterscheiden sich: {{from}}; Quelle: {{source}}.',
+    stageFrom: { species: 'der Wert dieser Art', group: 'der Wert ihrer Gruppe', default: 'die Vorgabe von Broodsilk' },
+    stageMark: { 'common-practice': 'gängige Praxis', memory: 'aus dem Gedächtnis' },
     maleClock: '{{animal}}: {{state}}',
     maleClockFrom:
       'Uhr des Männchens {{animal}}: ab {{from}}, {{state}}. {{hint}} (Übliche Lebensspanne nach der Reifehäutung, aus dem Gedächtnis; Arten unterscheiden sich.)',
