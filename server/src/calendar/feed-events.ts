@@ -7,6 +7,7 @@ import {
   type ExpectedStageDays,
   type MaleClockRow,
   type SacResponse,
+  valueSourceLabel,
 } from '@broodsilk/shared';
 import type { Reader } from '../users/reader-words';
 
@@ -30,9 +31,7 @@ const EXPECTED_STAGES = [
 /** Where a stage figure comes from, in the reader's words: a guide only, with its source or mark. */
 function stageSource(t: Reader['t'], days: ExpectedStageDays[keyof ExpectedStageDays]): string {
   const from = t(`calendar.stageFrom.${days.from}`);
-  const s = days.source;
-  const source = s.kind === 'published' ? s.citation : t(`calendar.stageMark.${s.kind}`);
-  return t('calendar.stageGuide', { from, source });
+  return t('calendar.stageGuide', { from, source: valueSourceLabel(t, days.source) });
 }
 
 const DOMAIN = 'broodsilk';
