@@ -102,6 +102,18 @@ describe('species catalogue', () => {
     for (const r of SPECIES_DATA) expect(byName.get(r.scientificName)?.cautions.venom, r.key).toEqual(r.venom);
   });
 
+  it('tropical New World ground dwellers have their own pairing-to-sac days; the group value (seasonal genera) stays for the rest (docs/trade-facts.md §3)', async () => {
+    const all = (await http().get('/api/species').query({ limit: 200 }).set('Authorization', keeper.bearer).expect(200)).body as Paged<SpeciesResponse>;
+    const byName = new Map(all.items.map((s) => [s.scientificName, s]));
+    for (const r of SPECIES_DATA) expect(byName.get(r.scientificName)?.breeding.pairingToSacDays, r.key).toEqual(r.pairingToSacDays);
+    const lasiodora = byName.get('Lasiodora parahybana')!.effective.pairingToSacDays;
+    expect(lasiodora).toMatchObject({ value: { min: 45, max: 180 }, from: 'species', source: { kind: 'memory' } });
+    const smithi = byName.get('Brachypelma smithi')!.effective.pairingToSacDays;
+    expect(smithi).toMatchObject({ value: { min: 120, max: 300 }, from: 'group', source: { kind: 'memory', note: expect.stringMatching(/^seasonal genera/) } });
+    // the burrowers' figure has no source about burrowers: common practice, not a citation
+    expect(byName.get('Pelinobius muticus')!.effective.pairingToSacDays).toMatchObject({ from: 'group', source: { kind: 'common-practice' } });
+  });
+
   it('T. vagans eggs per sac says it rests on two sacs (Dor & Hénaut 2012; docs/trade-facts.md check value 3)', async () => {
     const [vagans] = (await search('Tliltocatl vagans')).items;
     expect(vagans.breeding.eggsPerSac).toEqual({

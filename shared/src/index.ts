@@ -41,6 +41,7 @@ export * from './dashboard/calendar.types.js';
 export * from './dashboard/notifications.types.js';
 export * from './i18n/words.js';
 export * from './i18n/safety.js';
+export * from './i18n/value-source.js';
 export * from './i18n/vocabulary.js';
 export type { Catalogue } from './i18n/en.js';
 export * from './reminders/reminder-preferences.types.js';

@@ -8,7 +8,7 @@ import { viableOf } from './brood.mapper';
 import type { Sac } from './sac.entity';
 
 /**
- * Every egg and nymph of the opening against the species' usual eggs per sac (its group's when it
+ * Every egg and young spider of the opening against the species' usual eggs per sac (its group's when it
  * has none, or both where its own rests on few sacs; docs/trade-facts.md check value 8): outside
  * it, 422 until acknowledged with a reason.
  * Returns the acknowledged reason (null when the count is usual).

@@ -66,6 +66,23 @@ export interface SpeciesBreedingValues {
   matureMaleLifespanMonths?: Sourced<NumberRange>;
 }
 
+/** Days after laying, both ends inclusive. */
+export interface DayRange {
+  fromDay: number;
+  toDay: number;
+}
+
+/**
+ * When a sac's stages are expected, in days after laying: the species' own figure, else its group's
+ * (docs/trade-facts.md §1, §2). A guide for the calendar, never a rule.
+ */
+export interface ExpectedStageDays {
+  /** Prelarvae ("eggs with legs") hatch. */
+  eggsWithLegs: Sourced<DayRange> & { from: ValueOrigin };
+  /** Free-living young (first instar) leave the sac. */
+  freeLiving: Sourced<DayRange> & { from: ValueOrigin };
+}
+
 /** The values in force for a species, after falling back to its group and the product default. */
 export interface EffectiveBreedingValues {
   pullWindow: Sourced<{ fromDay: number; toDay: number }> & { from: ValueOrigin };

@@ -50,6 +50,13 @@ export const en = {
   careLogKind: { roll: 'Rolled', temperature: 'Temperature', humidity: 'Humidity', check: 'Checked', stage: 'Stage', note: 'Note', strike: 'Correction' },
   pullWindow: { 'not-yet': 'Not yet', open: 'Pull window open', closing: 'Pull window closing', past: 'Pull window past' },
   pullWindowEvent: { 'opens-today': 'Opens today', open: 'Open now', 'closes-today': 'Closes today' },
+  /** Whose pull window a sac follows (shown on the sac card with its source). */
+  pullWindowOrigin: { sac: 'your own window for this sac', species: 'the figure for this species', default: 'the usual window for any species' },
+  pullWindowFrom: 'Day {{from}}–{{to}}: {{origin}}',
+  valueMark: { 'common-practice': 'common practice', memory: 'from memory' },
+  valueSource: 'Source: {{source}}',
+  /** The opening's counts; the young are named by their stage (`broodStage`), not as "nymphs". */
+  openingCount: { healthyEggs: 'Healthy eggs', darkEggs: 'Dark (non-viable)', spoiledEggs: 'Spoiled', keptBack: 'Kept back for more incubation' },
   roll: { upcoming: 'Next roll', 'due-soon': 'Roll due soon', due: 'Roll due now', overdue: 'Roll overdue' },
   rollShort: { overdue: 'Overdue', due: 'Due now', 'due-soon': 'Due within the hour', upcoming: 'Later' },
   sex: { female: 'Female', male: 'Male', unsexed: 'Unsexed' },
@@ -268,6 +275,8 @@ export const en = {
     pullBetween: '{{where}}. Pull between day {{from}} and day {{to}} ({{opens}} to {{closes}}).',
     stageExpected: '{{stage}} expected: {{project}}',
     stageDays: '{{where}}. Day {{from}}–{{to}}. {{source}}',
+    stageGuide: 'A guide only, species differ: {{from}}; source: {{source}}.',
+    stageFrom: { species: 'the figure for this species', group: 'the figure for its group', default: 'the Broodsilk default' },
     maleClock: '{{animal}}: {{state}}',
     maleClockFrom: 'Male clock of {{animal}}: from {{from}}, {{state}}. {{hint}} (Typical lifespan after the maturing molt, from memory; species differ.)',
   },

@@ -1,3 +1,4 @@
+import type { ValueSource } from '../collection/species.types.js';
 import type { AcknowledgedWarnings } from '../errors/plausibility.js';
 import type { CalendarDate } from '../breeding/calendar-day.js';
 import type { BroodStage } from '../breeding/brood-stage.js';
@@ -123,7 +124,8 @@ export interface SacResponse {
   pulledOn: CalendarDate | null;
   outcome: SacOutcomeState;
   failureReason: SacFailureReason | null;
-  pullWindow: PullWindowView & { fromDay: number; toDay: number; origin: PullWindowOrigin };
+  /** The window in force; `origin` says whose it is (the keeper's for this sac, the species', the usual default) and `source` where a species or default figure comes from. */
+  pullWindow: PullWindowView & { fromDay: number; toDay: number; origin: PullWindowOrigin; source: ValueSource | null };
   rollIntervalHours: number;
   rollingOff: boolean;
   /** Left with the mother by the keeper's choice (not pulled; no pull window warnings). */

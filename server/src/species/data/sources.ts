@@ -34,6 +34,7 @@ export const SRC = {
   brachypelmaSmithiDe: pub('brachypelma-smithi.de, "Vermehrung: Entwicklung und Aufzucht" (B. smithi up to 600 eggs; genus Brachypelma 100–600)'),
   tarantulaspiderNet: pub('tarantulaspider.net, "How to Take Care of Tarantula Eggs" (Theraphosa under 100; Citharischius more than 1000 eggs)'),
   theraphosaClutch: pub('thezooreviewer.blogspot.com (2024), Theraphosa blondi: 50–200 eggs per sac'),
+  theraphosaTiming: pub('Wikipedia, "Goliath birdeater" (mirror); thezooreviewer.blogspot.com (2024): Theraphosa blondi spiderlings 6–8 weeks after laying'),
   lasiodoraZoo: pub('Zoo species page, Brazilian salmon pink bird-eating tarantula (app-czn-prod-uks-frontend.azurewebsites.net): up to 2000 eggs'),
   arachnoworld: pub(
     'arachnoworld.de, "Vom Schlüpfen bis zum Tod" (about 200 eggs in Grammostola mollicoma and Lasiodora klugi, about 800 in Pamphobeteus and Acanthoscurria)',

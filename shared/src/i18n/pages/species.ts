@@ -11,8 +11,6 @@ export const speciesEn = {
   },
   /** Where a value in force comes from (species, group, product default). */
   origin: { species: 'this species', group: 'group default', default: 'Broodsilk default' },
-  source: { 'common-practice': 'common practice', memory: 'from memory' },
-  sourceIs: 'Source: {{source}}',
   sourceInBrackets: '(Source: {{source}})',
   formerly: 'formerly',
   badge: { hairs: 'urticating hairs', venom: 'strong venom', venomNotKnown: 'venom not known' },
@@ -73,8 +71,6 @@ export const speciesDe: Widen<typeof speciesEn> = {
     fossorial: 'Grabend',
   },
   origin: { species: 'diese Art', group: 'Vorgabe der Gruppe', default: 'Vorgabe von Broodsilk' },
-  source: { 'common-practice': 'gängige Praxis', memory: 'aus dem Gedächtnis' },
-  sourceIs: 'Quelle: {{source}}',
   sourceInBrackets: '(Quelle: {{source}})',
   formerly: 'früher',
   badge: { hairs: 'Brennhaare', venom: 'starkes Gift', venomNotKnown: 'Gift nicht bekannt' },

@@ -1,14 +1,14 @@
 import { Alert, Badge, Button, Card, Group, SimpleGrid, Switch, Text } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
 import { useState } from 'react';
-import type { SacResponse, TemperatureUnit } from '@broodsilk/shared';
+import { valueSourceLabel, type SacResponse, type TemperatureUnit } from '@broodsilk/shared';
 import { formatDate, formatInstant } from '@/lib/dates';
 import { isApiError } from '@/lib/api-error';
 import { usePullSac, useUpdateSac } from '../api/sacs';
 import { PullConfirmation } from './pull-confirmation';
 import { FailureForm } from './failure-form';
 import { broodLabel, PULL_WINDOW_TEXT, pullWindowSentence, readingAlertText, ROLL_TEXT, SAC_OUTCOME_TEXT } from '../utils/sac-view';
-import { catalogueLabels } from '@/lib/i18n';
+import { catalogueLabels, useWords } from '@/lib/i18n';
 
 const FAILURE_LABELS = catalogueLabels('sacFailure');
 
@@ -25,6 +25,7 @@ function noRollText(sac: SacResponse): string {
  * the viewer may take (`sac.may`, the server's own rule): the pull, leaving the sac with the mother, the outcome.
  */
 export function SacOverview({ sac, timeZone, temperatureUnit }: { sac: SacResponse; timeZone: string; temperatureUnit: TemperatureUnit }) {
+  const t = useWords();
   const canEdit = sac.may.edit;
   const update = useUpdateSac(sac.id);
   const pull = usePullSac(sac.id);
@@ -67,10 +68,15 @@ export function SacOverview({ sac, timeZone, temperatureUnit }: { sac: SacRespon
           <Text size="xs" c="dimmed" tt="uppercase" fw={600}>
             Pull window
           </Text>
-          <Text size="xs" c="dimmed">
-            day {w.fromDay}–{w.toDay} ({w.origin === 'sac' ? 'set for this sac' : w.origin === 'species' ? 'species' : 'usual'})
+          <Text size="xs" c="dimmed" data-testid="pull-window-origin">
+            {t('pullWindowFrom', { from: w.fromDay, to: w.toDay, origin: t(`pullWindowOrigin.${w.origin}`) })}
           </Text>
         </Group>
+        {w.source && (
+          <Text size="xs" c="dimmed" fs="italic" data-testid="pull-window-source">
+            {t('valueSource', { source: valueSourceLabel(t, w.source) })}
+          </Text>
+        )}
         {!sac.pulled &&
           (sac.leftWithMother ? (
             <Text fw={700} data-testid="pull-window-state">

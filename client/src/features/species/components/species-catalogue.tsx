@@ -24,7 +24,7 @@ function Value({ label, text, value }: { label: string; text: string; value: Sou
         </Text>
       </Group>
       <Text size="xs" c="dimmed" lineClamp={2} title={source}>
-        {t('page.species.sourceIs', { source })}
+        {t('valueSource', { source })}
       </Text>
     </div>
   );

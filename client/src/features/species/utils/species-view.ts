@@ -1,11 +1,9 @@
 import { useCallback } from 'react';
-import { restsOnFew, type NumberRange, type Sourced, type SpeciesResponse, type ValueSource, type Words } from '@broodsilk/shared';
+import { restsOnFew, valueSourceLabel, type NumberRange, type Sourced, type SpeciesResponse, type ValueSource, type Words } from '@broodsilk/shared';
 import { useWords } from '@/lib/i18n';
 
 /** A short, plain label for where a value comes from, in the reader's language. */
-export function sourceLabel(t: Words, source: ValueSource): string {
-  return source.kind === 'published' ? source.citation : t(`page.species.source.${source.kind}`);
-}
+export const sourceLabel = valueSourceLabel;
 
 /** `sourceLabel` with the reader's words. */
 export function useSourceLabel(): (source: ValueSource) => string {
