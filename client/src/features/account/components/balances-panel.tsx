@@ -1,7 +1,28 @@
-import { Alert, Badge, Group, Stack, Table, Text } from '@mantine/core';
-import { ScrollTable } from '@/components/ui/scroll-table';
+import { Alert, Badge, Group, Stack, Text } from '@mantine/core';
+import { PartyTable } from '@/components/ui/party-table';
 import { useBalances } from '../api/balances';
 import { PROVISIONAL_SHARES, countWords, formatMoney } from '@broodsilk/shared';
+
+/** Spiderlings still owed to a party; a negative count is more than the share. */
+function Owed({ count }: { count: number }) {
+  if (count > 0)
+    return (
+      <Text span fw={600} className="tone-due">
+        {count}
+      </Text>
+    );
+  if (count < 0)
+    return (
+      <Text span className="tone-failed">
+        {-count} over the share
+      </Text>
+    );
+  return (
+    <Text span className="tone-ok">
+      0
+    </Text>
+  );
+}
 
 /** Per party: share, what went out, what is still owed in spiderlings; then the netted money between parties. */
 export function BalancesPanel({ projectId }: { projectId: string }) {
@@ -23,62 +44,48 @@ export function BalancesPanel({ projectId }: { projectId: string }) {
           </Badge>
         </Group>
       )}
-      <ScrollTable minWidth={520} label="Balances">
-        <Table aria-label="Balances" striped verticalSpacing="xs">
-          <Table.Thead>
-            <Table.Tr>
-              <Table.Th>Party</Table.Th>
-              <Table.Th ta="right">Still owed</Table.Th>
-              <Table.Th ta="right">Share</Table.Th>
-              <Table.Th ta="right">Handed over</Table.Th>
-              <Table.Th ta="right">Sold</Table.Th>
-              <Table.Th ta="right">Cashed out</Table.Th>
-            </Table.Tr>
-          </Table.Thead>
-          <Table.Tbody>
-            {b.parties.map((p) => (
-              <Table.Tr key={p.memberId}>
-                <Table.Td>
-                  {p.name}
-                  {p.memberId === b.ownerMemberId && (
-                    <Text span size="xs" c="dimmed">
-                      {' '}
-                      (runs the project)
-                    </Text>
-                  )}
-                </Table.Td>
-                <Table.Td ta="right" data-testid={`owed-${p.memberId}`}>
-                  {p.owedSpiderlings > 0 ? (
-                    <Text span fw={600} className="tone-due">
-                      {p.owedSpiderlings}
-                    </Text>
-                  ) : p.owedSpiderlings < 0 ? (
-                    <Text span className="tone-failed">
-                      {-p.owedSpiderlings} over the share
-                    </Text>
-                  ) : (
-                    <Text span className="tone-ok">
-                      0
-                    </Text>
-                  )}
-                </Table.Td>
-                <Table.Td ta="right">{countWords(p.share, b.provisional)}</Table.Td>
-                <Table.Td ta="right">
-                  {p.handedOver}
-                  {p.unconfirmedHandOvers > 0 && (
-                    <Text span size="xs" className="tone-due">
-                      {' '}
-                      ({p.unconfirmedHandOvers} not confirmed)
-                    </Text>
-                  )}
-                </Table.Td>
-                <Table.Td ta="right">{p.sold}</Table.Td>
-                <Table.Td ta="right">{p.cashedOut}</Table.Td>
-              </Table.Tr>
-            ))}
-          </Table.Tbody>
-        </Table>
-      </ScrollTable>
+      <PartyTable
+        label="Balances"
+        minWidth={520}
+        striped
+        rows={b.parties}
+        rowKey={(p) => p.memberId}
+        columns={[
+          {
+            header: 'Party',
+            cell: (p) => (
+              <>
+                {p.name}
+                {p.memberId === b.ownerMemberId && (
+                  <Text span size="xs" c="dimmed">
+                    {' '}
+                    (runs the project)
+                  </Text>
+                )}
+              </>
+            ),
+          },
+          { header: 'Still owed', numeric: true, testId: (p) => `owed-${p.memberId}`, cell: (p) => <Owed count={p.owedSpiderlings} /> },
+          { header: 'Share', numeric: true, cell: (p) => countWords(p.share, b.provisional) },
+          {
+            header: 'Handed over',
+            numeric: true,
+            cell: (p) => (
+              <>
+                {p.handedOver}
+                {p.unconfirmedHandOvers > 0 && (
+                  <Text span size="xs" className="tone-due">
+                    {' '}
+                    ({p.unconfirmedHandOvers} not confirmed)
+                  </Text>
+                )}
+              </>
+            ),
+          },
+          { header: 'Sold', numeric: true, cell: (p) => p.sold },
+          { header: 'Cashed out', numeric: true, cell: (p) => p.cashedOut },
+        ]}
+      />
       <Stack gap={4} data-testid="account-debts">
         <Text size="sm" fw={600}>
           Money between parties

@@ -1,5 +1,5 @@
-import { Alert, Badge, Card, Group, List, Stack, Table, Text } from '@mantine/core';
-import { ScrollTable } from '@/components/ui/scroll-table';
+import { Alert, Badge, Card, Group, List, Stack, Text } from '@mantine/core';
+import { PartyTable } from '@/components/ui/party-table';
 import { countWords, formatMoney, type SacSharesView } from '@broodsilk/shared';
 import { formatDate, formatInstant } from '@/lib/dates';
 import { useShares } from '../api/shares';
@@ -32,40 +32,34 @@ function SacShares({ sac, timeZone }: { sac: SacSharesView; timeZone: string }) 
         </Text>
       )}
       {sac.parties.length > 0 && (
-        <ScrollTable minWidth={420} label={`Shares of the sac laid ${formatDate(sac.layDate)}`}>
-          <Table aria-label={`Shares of the sac laid ${formatDate(sac.layDate)}`} verticalSpacing={4}>
-            <Table.Thead>
-              <Table.Tr>
-                <Table.Th>Party</Table.Th>
-                <Table.Th ta="right">Share</Table.Th>
-                <Table.Th ta="right">Fixed</Table.Th>
-                <Table.Th ta="right">Proportional</Table.Th>
-                <Table.Th ta="right">Exact quota</Table.Th>
-              </Table.Tr>
-            </Table.Thead>
-            <Table.Tbody>
-              {sac.parties.map((p) => (
-                <Table.Tr key={p.memberId}>
-                  <Table.Td>{p.name}</Table.Td>
-                  <Table.Td ta="right" fw={600}>
-                    {p.count}
-                  </Table.Td>
-                  <Table.Td ta="right">{p.fixed}</Table.Td>
-                  <Table.Td ta="right">{p.proportional}</Table.Td>
-                  <Table.Td ta="right">
-                    {p.exactQuota}
-                    {p.roundedUp && (
-                      <Text span size="xs" c="dimmed">
-                        {' '}
-                        (rounded up)
-                      </Text>
-                    )}
-                  </Table.Td>
-                </Table.Tr>
-              ))}
-            </Table.Tbody>
-          </Table>
-        </ScrollTable>
+        <PartyTable
+          label={`Shares of the sac laid ${formatDate(sac.layDate)}`}
+          minWidth={420}
+          small
+          rows={sac.parties}
+          rowKey={(p) => p.memberId}
+          columns={[
+            { header: 'Party', cell: (p) => p.name },
+            { header: 'Share', numeric: true, bold: true, cell: (p) => p.count },
+            { header: 'Fixed', numeric: true, cell: (p) => p.fixed },
+            { header: 'Proportional', numeric: true, cell: (p) => p.proportional },
+            {
+              header: 'Exact quota',
+              numeric: true,
+              cell: (p) => (
+                <>
+                  {p.exactQuota}
+                  {p.roundedUp && (
+                    <Text span size="xs" c="dimmed">
+                      {' '}
+                      (rounded up)
+                    </Text>
+                  )}
+                </>
+              ),
+            },
+          ]}
+        />
       )}
       {sac.explanation.length > 0 && (
         <Stack gap={2} mt="xs">

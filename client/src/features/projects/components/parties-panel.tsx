@@ -1,4 +1,4 @@
-import { Badge, Button, Checkbox, Collapse, Group, Select, Stack, Table, Text } from '@mantine/core';
+import { Badge, Button, Checkbox, Collapse, Group, Select, Stack, Text } from '@mantine/core';
 import { TextField } from '@/components/fields/text-field';
 import { textRule } from '@/components/fields/text-rule';
 import { useForm } from '@mantine/form';
@@ -11,6 +11,7 @@ import { useAddProjectMember } from '../api/projects';
 import { useSendInvitation } from '../api/invitations';
 import { ROLE_LABELS } from '../utils/labels';
 import { FormActions } from '@/components/ui/form-actions';
+import { PartyTable } from '@/components/ui/party-table';
 
 interface PartiesPanelProps {
   projectId: string;
@@ -24,6 +25,48 @@ const roleOptions = [
   { value: 'caretaker', label: 'Caretaker (rolls and logs)' },
 ];
 
+interface MemberAccountProps {
+  member: ProjectMemberResponse;
+  invitation: InvitationResponse | undefined;
+  timeZone: string;
+  sending: boolean;
+  onInvite: () => void;
+}
+
+/** For the keeper: whether a party has joined, or an invitation to send them. */
+function MemberAccount({ member: m, invitation, timeZone, sending, onInvite }: MemberAccountProps) {
+  if (m.role === 'owner')
+    return (
+      <Text size="xs" c="dimmed">
+        you
+      </Text>
+    );
+  if (m.hasAccount)
+    return (
+      <Badge variant="light" color="moss" tt="none">
+        joined
+      </Badge>
+    );
+  if (!m.email)
+    return (
+      <Text size="xs" c="dimmed">
+        no e-mail, kept on record only
+      </Text>
+    );
+  return (
+    <Group gap={6} wrap="nowrap">
+      {invitation && (
+        <Text size="xs" className="tone-due">
+          sent, valid until {formatInstant(invitation.expiresAt, timeZone)}
+        </Text>
+      )}
+      <Button size="compact-xs" variant={invitation ? 'subtle' : 'light'} loading={sending} onClick={onInvite}>
+        {invitation ? 'Send again' : 'Send invitation'}
+      </Button>
+    </Group>
+  );
+}
+
 /** The parties with their roles; the keeper adds one and invites them by e-mail. */
 export function PartiesPanel({ projectId, members, myRole, timeZone }: PartiesPanelProps) {
   const isOwner = myRole === 'owner';
@@ -35,73 +78,51 @@ export function PartiesPanel({ projectId, members, myRole, timeZone }: PartiesPa
 
   return (
     <Stack>
-      <Table.ScrollContainer minWidth={300}>
-        <Table verticalSpacing={4} fz="sm" data-testid="parties-table">
-          <Table.Thead>
-            <Table.Tr>
-              <Table.Th>Party</Table.Th>
-              <Table.Th visibleFrom="sm">Role</Table.Th>
-              {isOwner && <Table.Th>Account</Table.Th>}
-            </Table.Tr>
-          </Table.Thead>
-          <Table.Tbody>
-            {members.map((m) => {
-              const invitation = sent[m.id];
-              return (
-                <Table.Tr key={m.id}>
-                  <Table.Td>
-                    <Text size="sm" fw={500}>
-                      {m.name}
-                    </Text>
-                    {m.email && (
-                      <Text size="xs" c="dimmed">
-                        {m.email}
-                      </Text>
-                    )}
-                    <Text size="xs" c="dimmed" hiddenFrom="sm">
-                      {ROLE_LABELS[m.role]}
-                    </Text>
-                  </Table.Td>
-                  <Table.Td visibleFrom="sm">{ROLE_LABELS[m.role]}</Table.Td>
-                  {isOwner && (
-                    <Table.Td>
-                      {m.role === 'owner' ? (
-                        <Text size="xs" c="dimmed">
-                          you
-                        </Text>
-                      ) : m.hasAccount ? (
-                        <Badge variant="light" color="moss" tt="none">
-                          joined
-                        </Badge>
-                      ) : m.email ? (
-                        <Group gap={6} wrap="nowrap">
-                          {invitation && (
-                            <Text size="xs" className="tone-due">
-                              sent, valid until {formatInstant(invitation.expiresAt, timeZone)}
-                            </Text>
-                          )}
-                          <Button
-                            size="compact-xs"
-                            variant={invitation ? 'subtle' : 'light'}
-                            loading={send.isPending && send.variables?.memberId === m.id}
-                            onClick={() => invite(m)}
-                          >
-                            {invitation ? 'Send again' : 'Send invitation'}
-                          </Button>
-                        </Group>
-                      ) : (
-                        <Text size="xs" c="dimmed">
-                          no e-mail, kept on record only
-                        </Text>
-                      )}
-                    </Table.Td>
-                  )}
-                </Table.Tr>
-              );
-            })}
-          </Table.Tbody>
-        </Table>
-      </Table.ScrollContainer>
+      <PartyTable
+        label="Parties"
+        minWidth={300}
+        small
+        testId="parties-table"
+        rows={members}
+        rowKey={(m) => m.id}
+        columns={[
+          {
+            header: 'Party',
+            cell: (m) => (
+              <>
+                <Text size="sm" fw={500}>
+                  {m.name}
+                </Text>
+                {m.email && (
+                  <Text size="xs" c="dimmed">
+                    {m.email}
+                  </Text>
+                )}
+                <Text size="xs" c="dimmed" hiddenFrom="sm">
+                  {ROLE_LABELS[m.role]}
+                </Text>
+              </>
+            ),
+          },
+          { header: 'Role', wide: true, cell: (m) => ROLE_LABELS[m.role] },
+          ...(isOwner
+            ? [
+                {
+                  header: 'Account',
+                  cell: (m: ProjectMemberResponse) => (
+                    <MemberAccount
+                      member={m}
+                      invitation={sent[m.id]}
+                      timeZone={timeZone}
+                      sending={send.isPending && send.variables?.memberId === m.id}
+                      onInvite={() => invite(m)}
+                    />
+                  ),
+                },
+              ]
+            : []),
+        ]}
+      />
       {isOwner && <AddPartyForm projectId={projectId} />}
     </Stack>
   );

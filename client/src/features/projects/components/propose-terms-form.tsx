@@ -1,4 +1,4 @@
-import { Button, Collapse, Group, Stack, Table, Text } from '@mantine/core';
+import { Button, Collapse, Group, Stack, Text } from '@mantine/core';
 import { NumberField } from '@/components/fields/number-field';
 import { TextField } from '@/components/fields/text-field';
 import { checkText } from '@/components/fields/text-rule';
@@ -21,6 +21,7 @@ import { applyServerErrors } from '@/lib/form-errors';
 import { useProposeTerms } from '../api/terms';
 import { priceError } from '../utils/price';
 import { FormActions } from '@/components/ui/form-actions';
+import { PartyTable } from '@/components/ui/party-table';
 import { DealFields } from './deal-fields';
 
 /** The server's limits on a party's line of the terms. */
@@ -29,6 +30,13 @@ export const LINE_RULES = {
   fixedCount: { min: 0, max: 100_000, decimals: 0, rangeMessage: 'A fixed count is a whole number from 0 to 100,000.' },
   pickOrder: { min: 1, max: 1000, decimals: 0, rangeMessage: 'Pick orders are whole numbers from 1 (picks first) to 1000.' },
 } as const;
+
+/** The numbers a party's line holds, as the form asks for them. */
+const LINE_FIELDS = [
+  { field: 'weight', header: 'Weight', name: (party: string) => `Weight of ${party}` },
+  { field: 'fixedCount', header: 'Fixed count', name: (party: string) => `Fixed count of ${party}` },
+  { field: 'pickOrder', header: 'Pick order', name: (party: string) => `Pick order of ${party}` },
+] as const;
 
 interface Values {
   lines: { memberId: string; name: string; weight: number | string; fixedCount: number | string; pickOrder: number | string }[];
@@ -105,49 +113,22 @@ export function ProposeTermsForm({ projectId, members, base }: { projectId: stri
               Shares are each party&apos;s weight over the sum of weights. A fixed count is taken off the top before the split. Partners must accept a new
               version before it is in force.
             </Text>
-            <Table.ScrollContainer minWidth={420}>
-              <Table verticalSpacing={4}>
-                <Table.Thead>
-                  <Table.Tr>
-                    <Table.Th>Party</Table.Th>
-                    <Table.Th>Weight</Table.Th>
-                    <Table.Th>Fixed count</Table.Th>
-                    <Table.Th>Pick order</Table.Th>
-                  </Table.Tr>
-                </Table.Thead>
-                <Table.Tbody>
-                  {form.getValues().lines.map((l, i) => (
-                    <Table.Tr key={l.memberId}>
-                      <Table.Td>{l.name}</Table.Td>
-                      <Table.Td>
-                        <NumberField
-                          aria-label={`Weight of ${l.name}`}
-                          whole
-                          key={form.key(`lines.${i}.weight`)}
-                          {...form.getInputProps(`lines.${i}.weight`)}
-                        />
-                      </Table.Td>
-                      <Table.Td>
-                        <NumberField
-                          aria-label={`Fixed count of ${l.name}`}
-                          whole
-                          key={form.key(`lines.${i}.fixedCount`)}
-                          {...form.getInputProps(`lines.${i}.fixedCount`)}
-                        />
-                      </Table.Td>
-                      <Table.Td>
-                        <NumberField
-                          aria-label={`Pick order of ${l.name}`}
-                          whole
-                          key={form.key(`lines.${i}.pickOrder`)}
-                          {...form.getInputProps(`lines.${i}.pickOrder`)}
-                        />
-                      </Table.Td>
-                    </Table.Tr>
-                  ))}
-                </Table.Tbody>
-              </Table>
-            </Table.ScrollContainer>
+            <PartyTable
+              label="Shares of the parties"
+              minWidth={420}
+              small
+              rows={form.getValues().lines.map((l, i) => ({ ...l, i }))}
+              rowKey={(l) => l.memberId}
+              columns={[
+                { header: 'Party', cell: (l) => l.name },
+                ...LINE_FIELDS.map(({ field, header, name }) => ({
+                  header,
+                  cell: (l: Values['lines'][number] & { i: number }) => (
+                    <NumberField aria-label={name(l.name)} whole key={form.key(`lines.${l.i}.${field}`)} {...form.getInputProps(`lines.${l.i}.${field}`)} />
+                  ),
+                })),
+              ]}
+            />
             <DealFields field={(name) => ({ key: form.key(name), ...form.getInputProps(name) })}>
               <TextField label="Note to partners" maxLength={TEXT_LIMITS.note} key={form.key('note')} {...form.getInputProps('note')} />
             </DealFields>

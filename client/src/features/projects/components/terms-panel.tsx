@@ -1,10 +1,11 @@
-import { Alert, Badge, Button, Card, Group, Stack, Table, Text, Title } from '@mantine/core';
-import type { Me, ProjectMemberResponse, ProjectRole, TermsVersionResponse } from '@broodsilk/shared';
+import { Alert, Badge, Button, Card, Group, Stack, Text, Title } from '@mantine/core';
+import type { Me, ProjectMemberResponse, ProjectRole, TermsLineResponse, TermsVersionResponse } from '@broodsilk/shared';
 import { broodStageLabel, formatMoney } from '@broodsilk/shared';
 import { currentNumbering, words } from '@/lib/i18n';
 import { formatInstant } from '@/lib/dates';
 import { useState } from 'react';
 import { ConfirmAction } from '@/components/ui/confirm-action';
+import { PartyTable } from '@/components/ui/party-table';
 import { useAcceptTerms, useTerms } from '../api/terms';
 import { FAILURE_CLAUSE_LABELS, SHIPPING_LABELS } from '../utils/labels';
 import { ProposeTermsForm } from './propose-terms-form';
@@ -14,6 +15,25 @@ interface TermsPanelProps {
   me: Pick<Me, 'id' | 'timeZone'>;
   myRole: ProjectRole;
   members: ProjectMemberResponse[];
+}
+
+/** Whether a party has accepted a version: the proposer needs not. */
+function Acceptance({ line }: { line: TermsLineResponse }) {
+  if (!line.mustAccept)
+    return (
+      <Text size="sm" c="dimmed">
+        proposer
+      </Text>
+    );
+  return line.accepted ? (
+    <Text size="sm" className="tone-ok">
+      yes
+    </Text>
+  ) : (
+    <Text size="sm" className="tone-due">
+      not yet
+    </Text>
+  );
 }
 
 /** The terms of a project: the version in force, a newer proposed one (with accept), and a form to propose changes. */
@@ -57,57 +77,42 @@ export function TermsPanel({ projectId, me, myRole, members }: TermsPanelProps) 
                 by {v.createdBy.name}, {formatInstant(v.createdAt, me.timeZone)}
               </Text>
             </Group>
-            <Table.ScrollContainer minWidth={300}>
-              <Table striped verticalSpacing={4} fz="sm">
-                <Table.Thead>
-                  <Table.Tr>
-                    <Table.Th>Party</Table.Th>
-                    <Table.Th>Share</Table.Th>
-                    <Table.Th visibleFrom="sm">Taken first</Table.Th>
-                    <Table.Th visibleFrom="sm">Picks</Table.Th>
-                    <Table.Th>Accepted</Table.Th>
-                  </Table.Tr>
-                </Table.Thead>
-                <Table.Tbody>
-                  {[...v.lines]
-                    .sort((a, b) => a.pickOrder - b.pickOrder)
-                    .map((l) => (
-                      <Table.Tr key={l.memberId}>
-                        <Table.Td>
-                          {l.memberName}
-                          <Text size="xs" c="dimmed" hiddenFrom="sm">
-                            picks #{l.pickOrder}
-                            {l.fixedCount > 0 ? ` · ${l.fixedCount} first` : ''}
-                          </Text>
-                        </Table.Td>
-                        <Table.Td>
-                          {l.share}{' '}
-                          <Text span size="xs" c="dimmed">
-                            (weight {l.weight})
-                          </Text>
-                        </Table.Td>
-                        <Table.Td visibleFrom="sm">{l.fixedCount > 0 ? l.fixedCount : '—'}</Table.Td>
-                        <Table.Td visibleFrom="sm">#{l.pickOrder}</Table.Td>
-                        <Table.Td>
-                          {!l.mustAccept ? (
-                            <Text size="sm" c="dimmed">
-                              proposer
-                            </Text>
-                          ) : l.accepted ? (
-                            <Text size="sm" className="tone-ok">
-                              yes
-                            </Text>
-                          ) : (
-                            <Text size="sm" className="tone-due">
-                              not yet
-                            </Text>
-                          )}
-                        </Table.Td>
-                      </Table.Tr>
-                    ))}
-                </Table.Tbody>
-              </Table>
-            </Table.ScrollContainer>
+            <PartyTable
+              label={`Parties of version ${v.number}`}
+              minWidth={300}
+              striped
+              small
+              rows={[...v.lines].sort((a, b) => a.pickOrder - b.pickOrder)}
+              rowKey={(l) => l.memberId}
+              columns={[
+                {
+                  header: 'Party',
+                  cell: (l) => (
+                    <>
+                      {l.memberName}
+                      <Text size="xs" c="dimmed" hiddenFrom="sm">
+                        picks #{l.pickOrder}
+                        {l.fixedCount > 0 ? ` · ${l.fixedCount} first` : ''}
+                      </Text>
+                    </>
+                  ),
+                },
+                {
+                  header: 'Share',
+                  cell: (l) => (
+                    <>
+                      {l.share}{' '}
+                      <Text span size="xs" c="dimmed">
+                        (weight {l.weight})
+                      </Text>
+                    </>
+                  ),
+                },
+                { header: 'Taken first', wide: true, cell: (l) => (l.fixedCount > 0 ? l.fixedCount : '—') },
+                { header: 'Picks', wide: true, cell: (l) => `#${l.pickOrder}` },
+                { header: 'Accepted', cell: (l) => <Acceptance line={l} /> },
+              ]}
+            />
             <Text size="sm" mt="xs">
               {formatMoney(v.pricePerSpiderlingMinor, v.currency)} per spiderling · {FAILURE_CLAUSE_LABELS[v.failureClause]} · handed over at{' '}
               {broodStageLabel(words, v.handOverStage, currentNumbering()).toLowerCase()} · shipping: {SHIPPING_LABELS[v.shippingPaidBy].toLowerCase()}
