@@ -4,7 +4,7 @@ import { en } from './en.js';
 import { de } from './de.js';
 import { ACTIVITY_KINDS, activityKindLabel, activitySentence } from './vocabulary.js';
 import { shippingCautions } from './safety.js';
-import { PROJECT_STAGE_LINE, type EndedEarlyReason, type ProjectStage } from '../breeding/project-stage.js';
+import { PROJECT_STAGE_LINE, type EndedEarlyReason, type ProjectSetback, type ProjectStage } from '../breeding/project-stage.js';
 import { BROOD_STAGES, STAGE_NUMBERINGS } from '../breeding/brood-stage.js';
 import type { PairingOutcome, SacFate, FailureClause } from '../breeding/pairing.types.js';
 import type { PairingWarningCode, WarningSeverity } from '../breeding/pairing-warnings.js';
@@ -21,6 +21,7 @@ import { PROJECT_ROLES } from '../projects/project.types.js';
 import { SHIPPING_PAYERS } from '../projects/terms.types.js';
 import { TEMPERATURE_UNITS } from '../auth/auth.types.js';
 import { NOTIFICATION_KINDS } from '../dashboard/notifications.types.js';
+import { REMINDER_CHANNELS } from '../reminders/reminder-preferences.types.js';
 import type { PullWindowEvent } from '../dashboard/dashboard.types.js';
 import type { EntryStatus, LedgerEntryResponse } from '../accounts/account-api.types.js';
 import type { HandOverMethod } from '../accounts/ledger.types.js';
@@ -61,6 +62,8 @@ const ENUMS: Record<string, readonly string[]> = {
   handOverMethod: complete<HandOverMethod>()(['pick-up', 'shipment']),
   entryStatus: complete<EntryStatus>()(['in-force', 'reversed', 'awaiting-confirmation', 'left-out']),
   notificationKind: NOTIFICATION_KINDS,
+  reminderChannel: REMINDER_CHANNELS,
+  setback: complete<ProjectSetback>()(['female-molted', 'sac-eaten', 'sac-failed', 'male-died']),
   temperatureUnit: TEMPERATURE_UNITS,
   language: LANGUAGES,
   activityKind: ACTIVITY_KINDS,

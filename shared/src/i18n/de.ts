@@ -140,6 +140,15 @@ export const de: Catalogue = {
     'loan-due-back': 'Ein geliehenes Tier muss in 7 Tagen zurück',
     'daily-digest': 'Die tägliche Zusammenfassung',
   },
+  reminderChannel: { both: 'E-Mail und in der App', email: 'Nur E-Mail', 'in-app': 'Nur in der App', off: 'Aus' },
+  setback: {
+    'female-molted':
+      'Das Weibchen hat sich nach der letzten Verpaarung gehäutet, diese Verpaarung ist damit verloren: Verpaare es erneut, sobald es ausgehärtet ist.',
+    'sac-eaten': 'Die Mutter hat den Kokon gefressen. Bei Erstgebärenden kommt das oft vor: Lass sie sich satt fressen und verpaare sie dann erneut.',
+    'sac-failed':
+      'Der letzte Kokon ist verdorben. Lass sie sich satt fressen und verpaare sie erneut, oder beende das Projekt, wenn sie für diese Saison fertig ist.',
+    'male-died': 'Das Männchen ist vor einer erfolgreichen Verpaarung gestorben: Verpaare sie mit einem Ersatzmännchen oder beende das Projekt.',
+  },
   broodStage: {
     us: { eggs: 'Eier', 'eggs-with-legs': 'Eier mit Beinen', 'first-instar': '1. Instar', 'second-instar': '2. Instar' },
     de: { eggs: 'Eier', 'eggs-with-legs': 'Prälarve (Eier mit Beinen)', 'first-instar': 'N1 (1. Nymphe)', 'second-instar': 'N2 (2. Nymphe)' },

@@ -125,6 +125,18 @@ export const en = {
     'loan-due-back': 'A loaned animal is due back in 7 days',
     'daily-digest': 'The daily digest',
   },
+  reminderChannel: { both: 'E-mail and in-app', email: 'E-mail only', 'in-app': 'In-app only', off: 'Off' },
+  /**
+   * Advice for a setback in the current attempt (see deriveProjectStage): what happened and what to do
+   * next. The project stays open; ending it is the keeper's call. The molt rule follows
+   * docs/trade-facts.md §5; the rest is common practice.
+   */
+  setback: {
+    'female-molted': 'The female molted after the last pairing, so that pairing is lost: pair her again once she has hardened.',
+    'sac-eaten': 'The mother ate the sac. First-time mothers often do: let her feed up, then pair her again.',
+    'sac-failed': 'The last sac failed. Let her feed up and pair her again, or end the project if she is done for the season.',
+    'male-died': 'The male died before a successful pairing: pair her with a backup male, or end the project.',
+  },
   /** Stage names in the chosen numbering set (docs/rules.md, Stage numbering). */
   broodStage: {
     us: { eggs: 'Eggs', 'eggs-with-legs': 'Eggs with legs', 'first-instar': '1st instar', 'second-instar': '2nd instar' },

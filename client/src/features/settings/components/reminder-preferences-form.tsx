@@ -2,25 +2,19 @@ import { useState } from 'react';
 import { Checkbox, Group, Select, Stack, Text } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { notifications } from '@mantine/notifications';
-import {
-  NOTIFICATION_KIND_LABELS,
-  NOTIFICATION_KINDS,
-  REMINDER_CHANNEL_LABELS,
-  REMINDER_CHANNELS,
-  REMINDER_HOURS,
-  type ReminderPreferences,
-} from '@broodsilk/shared';
+import { label, NOTIFICATION_KINDS, REMINDER_CHANNELS, REMINDER_HOURS, type ReminderPreferences } from '@broodsilk/shared';
+import { words } from '@/lib/i18n';
 import { FormActions } from '@/components/ui/form-actions';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useUpdateReminderPreferences } from '../api/reminder-preferences';
 import { hourLabel, toReminderFormValues, toReminderRequest } from '../utils/reminder-form-values';
 
-const channelOptions = REMINDER_CHANNELS.map((c) => ({ value: c, label: REMINDER_CHANNEL_LABELS[c] }));
 const hourOptions = REMINDER_HOURS.map((h) => ({ value: String(h), label: hourLabel(h) }));
 
 /** How each kind of reminder reaches the user, quiet hours and the daily digest. */
 export function ReminderPreferencesForm({ preferences }: { preferences: ReminderPreferences }) {
   const update = useUpdateReminderPreferences();
+  const channelOptions = REMINDER_CHANNELS.map((c) => ({ value: c, label: label(words, 'reminderChannel', c) }));
   const form = useForm({ mode: 'uncontrolled', initialValues: toReminderFormValues(preferences) });
   const [quiet, setQuiet] = useState(preferences.quietHours !== null);
   form.watch('quiet', ({ value }) => setQuiet(value));
@@ -40,7 +34,7 @@ export function ReminderPreferencesForm({ preferences }: { preferences: Reminder
         {NOTIFICATION_KINDS.map((kind) => (
           <Select
             key={form.key(`channels.${kind}`)}
-            label={NOTIFICATION_KIND_LABELS[kind]}
+            label={label(words, 'notificationKind', kind)}
             data={channelOptions}
             allowDeselect={false}
             {...form.getInputProps(`channels.${kind}`)}
