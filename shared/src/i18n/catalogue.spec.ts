@@ -153,6 +153,23 @@ describe('the catalogue (i18next, en and de)', () => {
     expect(activitySentence(strict('en'), { kind: 'sac.laid', summary: 'stored', data: {} }, { unit: 'C', numbering: 'us' })).toBe('stored');
   });
 
+  it('says a hand-over to-do to the one who confirms it: the recipient as "you", never by his own name', () => {
+    for (const lng of LANGUAGES) {
+      const t = strict(lng);
+      const values = { party: 'Tomasz', date: '2026-11-20' };
+      for (const count of [1, 5]) {
+        const mine = t('page.account.todo.handOverMine', { ...values, count });
+        expect(mine).not.toContain('Tomasz');
+        expect(mine).not.toContain('{{');
+        expect(mine).toMatch(lng === 'en' ? /you received/ : /du .* erhalten hast/);
+        expect(t('page.account.todo.handOverFor', { ...values, count })).toMatch(lng === 'en' ? /that Tomasz received/ : /dass Tomasz .* erhalten hat/);
+      }
+    }
+    // plural by Intl.PluralRules (CLDR): en and de both say one / other
+    expect(strict('en')('page.account.todo.handOverMine', { date: 'D', count: 5 })).toMatch(/the 5 spiderlings/);
+    expect(strict('de')('page.account.todo.handOverMine', { date: 'D', count: 1 })).toMatch(/das Jungtier erhalten hast, das dir/);
+  });
+
   it('gives an unknown activity kind a plain word, never its code', () => {
     expect(activityKindLabel(strict('en'), 'pairing.recorded')).toBe('Pairing recorded');
     expect(activityKindLabel(strict('de'), 'made.up-kind')).toBe('Ereignis');
