@@ -63,6 +63,8 @@ const ENUMS: Record<string, readonly string[]> = {
   entryStatus: complete<EntryStatus>()(['in-force', 'reversed', 'awaiting-confirmation', 'left-out']),
   notificationKind: NOTIFICATION_KINDS,
   reminderChannel: REMINDER_CHANNELS,
+  'statementCsv.column': Object.keys(en.statementCsv.column),
+  'statementCsv.line': Object.keys(en.statementCsv.line),
   setback: complete<ProjectSetback>()(['female-molted', 'sac-eaten', 'sac-failed', 'male-died']),
   temperatureUnit: TEMPERATURE_UNITS,
   language: LANGUAGES,
