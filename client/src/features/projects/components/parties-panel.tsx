@@ -6,6 +6,7 @@ import { useDisclosure } from '@mantine/hooks';
 import { useState } from 'react';
 import { TEXT_LIMITS, type InvitableRole, type InvitationResponse, type ProjectMemberResponse, type ProjectRole } from '@broodsilk/shared';
 import { formatInstant } from '@/lib/dates';
+import { useWords } from '@/lib/i18n';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useAddProjectMember } from '../api/projects';
 import { useSendInvitation } from '../api/invitations';
@@ -20,11 +21,6 @@ interface PartiesPanelProps {
   timeZone: string;
 }
 
-const roleOptions = [
-  { value: 'partner', label: 'Partner (shares in the brood)' },
-  { value: 'caretaker', label: 'Caretaker (rolls and logs)' },
-];
-
 interface MemberAccountProps {
   member: ProjectMemberResponse;
   invitation: InvitationResponse | undefined;
@@ -35,33 +31,34 @@ interface MemberAccountProps {
 
 /** For the keeper: whether a party has joined, or an invitation to send them. */
 function MemberAccount({ member: m, invitation, timeZone, sending, onInvite }: MemberAccountProps) {
+  const t = useWords();
   if (m.role === 'owner')
     return (
       <Text size="xs" c="dimmed">
-        you
+        {t('page.projects.parties.you')}
       </Text>
     );
   if (m.hasAccount)
     return (
       <Badge variant="light" color="moss" tt="none">
-        joined
+        {t('page.projects.parties.joined')}
       </Badge>
     );
   if (!m.email)
     return (
       <Text size="xs" c="dimmed">
-        no e-mail, kept on record only
+        {t('page.projects.parties.noEmail')}
       </Text>
     );
   return (
     <Group gap={6} wrap="nowrap">
       {invitation && (
         <Text size="xs" className="tone-due">
-          sent, valid until {formatInstant(invitation.expiresAt, timeZone)}
+          {t('page.projects.parties.sentUntil', { when: formatInstant(invitation.expiresAt, timeZone) })}
         </Text>
       )}
       <Button size="compact-xs" variant={invitation ? 'subtle' : 'light'} loading={sending} onClick={onInvite}>
-        {invitation ? 'Send again' : 'Send invitation'}
+        {t(invitation ? 'page.projects.parties.sendAgain' : 'page.projects.parties.send')}
       </Button>
     </Group>
   );
@@ -69,6 +66,7 @@ function MemberAccount({ member: m, invitation, timeZone, sending, onInvite }: M
 
 /** The parties with their roles; the keeper adds one and invites them by e-mail. */
 export function PartiesPanel({ projectId, members, myRole, timeZone }: PartiesPanelProps) {
+  const t = useWords();
   const isOwner = myRole === 'owner';
   const send = useSendInvitation(projectId);
   // The server keeps no list of invitations for the page; what was sent from here is shown until reload.
@@ -79,7 +77,7 @@ export function PartiesPanel({ projectId, members, myRole, timeZone }: PartiesPa
   return (
     <Stack>
       <PartyTable
-        label="Parties"
+        label={t('page.projects.parties.label')}
         minWidth={300}
         small
         testId="parties-table"
@@ -87,7 +85,7 @@ export function PartiesPanel({ projectId, members, myRole, timeZone }: PartiesPa
         rowKey={(m) => m.id}
         columns={[
           {
-            header: 'Party',
+            header: t('page.projects.party'),
             cell: (m) => (
               <>
                 <Text size="sm" fw={500}>
@@ -104,11 +102,11 @@ export function PartiesPanel({ projectId, members, myRole, timeZone }: PartiesPa
               </>
             ),
           },
-          { header: 'Role', wide: true, cell: (m) => ROLE_LABELS[m.role] },
+          { header: t('page.projects.parties.role'), wide: true, cell: (m) => ROLE_LABELS[m.role] },
           ...(isOwner
             ? [
                 {
-                  header: 'Account',
+                  header: t('page.projects.parties.account'),
                   cell: (m: ProjectMemberResponse) => (
                     <MemberAccount
                       member={m}
@@ -136,6 +134,7 @@ interface PartyValues {
 }
 
 function AddPartyForm({ projectId }: { projectId: string }) {
+  const t = useWords();
   const [opened, { toggle, close }] = useDisclosure(false);
   const [message, setMessage] = useState<string | null>(null);
   const add = useAddProjectMember(projectId);
@@ -144,8 +143,8 @@ function AddPartyForm({ projectId }: { projectId: string }) {
     mode: 'uncontrolled',
     initialValues: { name: '', email: '', role: 'partner', invite: true },
     validate: {
-      name: textRule({ required: 'Give the party a name.', maxLength: TEXT_LIMITS.personName }),
-      email: (v, values) => (values.invite && !/^\S+@\S+\.\S+$/.test(v.trim()) ? 'An invitation needs an e-mail address.' : null),
+      name: textRule({ required: t('page.projects.parties.nameRequired'), maxLength: TEXT_LIMITS.personName }),
+      email: (v, values) => (values.invite && !/^\S+@\S+\.\S+$/.test(v.trim()) ? t('page.projects.parties.emailForInvitation') : null),
     },
   });
   const submit = form.onSubmit(async (v) => {
@@ -163,21 +162,38 @@ function AddPartyForm({ projectId }: { projectId: string }) {
     <Stack gap="xs">
       <Group>
         <Button variant="light" onClick={toggle}>
-          {opened ? 'Close' : 'Add a party'}
+          {t(opened ? 'page.projects.parties.close' : 'page.projects.parties.add')}
         </Button>
       </Group>
       <Collapse expanded={opened}>
         <form onSubmit={submit} noValidate>
           <Stack maw={480}>
-            <TextField label="Name" maxLength={TEXT_LIMITS.personName} withAsterisk key={form.key('name')} {...form.getInputProps('name')} />
-            <TextField label="E-mail" type="email" maxLength={TEXT_LIMITS.email} key={form.key('email')} {...form.getInputProps('email')} />
-            <Select label="Role" data={roleOptions} allowDeselect={false} key={form.key('role')} {...form.getInputProps('role')} />
-            <Checkbox
-              label="E-mail an invitation to join this project in Broodsilk"
-              key={form.key('invite')}
-              {...form.getInputProps('invite', { type: 'checkbox' })}
+            <TextField
+              label={t('page.projects.parties.name')}
+              maxLength={TEXT_LIMITS.personName}
+              withAsterisk
+              key={form.key('name')}
+              {...form.getInputProps('name')}
             />
-            <FormActions message={message} loading={add.isPending || send.isPending} submitLabel="Add party" />
+            <TextField
+              label={t('page.projects.parties.email')}
+              type="email"
+              maxLength={TEXT_LIMITS.email}
+              key={form.key('email')}
+              {...form.getInputProps('email')}
+            />
+            <Select
+              label={t('page.projects.parties.role')}
+              data={[
+                { value: 'partner', label: t('page.projects.parties.partnerOption') },
+                { value: 'caretaker', label: t('page.projects.parties.caretakerOption') },
+              ]}
+              allowDeselect={false}
+              key={form.key('role')}
+              {...form.getInputProps('role')}
+            />
+            <Checkbox label={t('page.projects.parties.invite')} key={form.key('invite')} {...form.getInputProps('invite', { type: 'checkbox' })} />
+            <FormActions message={message} loading={add.isPending || send.isPending} submitLabel={t('page.projects.parties.submit')} />
           </Stack>
         </form>
       </Collapse>
