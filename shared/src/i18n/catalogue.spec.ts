@@ -13,7 +13,7 @@ import type { RollStatus } from '../breeding/roll-schedule.js';
 import type { MaleClockState } from '../collection/male-clock.js';
 import type { FemaleReadinessState } from '../collection/female-readiness.js';
 import { ANIMAL_SEXES, ANIMAL_STATUSES, CUSTODIES, EXUVIA_SEXES, MATURITIES, OWNER_KINDS } from '../collection/animals.types.js';
-import { SPECIES_GROUPS } from '../collection/species.types.js';
+import { SPECIES_GROUPS, VENOM_FLAGS } from '../collection/species.types.js';
 import { SAC_FAILURE_REASONS, SAC_OUTCOMES } from '../sacs/sacs.types.js';
 import { BROOD_LOSS_REASONS } from '../sacs/brood.types.js';
 import { CARE_LOG_KINDS } from '../sacs/care-log.types.js';
@@ -21,7 +21,6 @@ import { PROJECT_ROLES } from '../projects/project.types.js';
 import { SHIPPING_PAYERS } from '../projects/terms.types.js';
 import { TEMPERATURE_UNITS } from '../auth/auth.types.js';
 import { NOTIFICATION_KINDS } from '../dashboard/notifications.types.js';
-import { REMINDER_CHANNELS } from '../reminders/reminder-preferences.types.js';
 import type { PullWindowEvent } from '../dashboard/dashboard.types.js';
 import type { EntryStatus, LedgerEntryResponse } from '../accounts/account-api.types.js';
 import type { HandOverMethod } from '../accounts/ledger.types.js';
@@ -62,7 +61,6 @@ const ENUMS: Record<string, readonly string[]> = {
   handOverMethod: complete<HandOverMethod>()(['pick-up', 'shipment']),
   entryStatus: complete<EntryStatus>()(['in-force', 'reversed', 'awaiting-confirmation', 'left-out']),
   notificationKind: NOTIFICATION_KINDS,
-  reminderChannel: REMINDER_CHANNELS,
   'statementCsv.column': Object.keys(en.statementCsv.column),
   'statementCsv.line': Object.keys(en.statementCsv.line),
   setback: complete<ProjectSetback>()(['female-molted', 'sac-eaten', 'sac-failed', 'male-died']),
@@ -70,7 +68,8 @@ const ENUMS: Record<string, readonly string[]> = {
   language: LANGUAGES,
   activityKind: ACTIVITY_KINDS,
   'safety.groupCaution': SPECIES_GROUPS,
-  venom: ['medically-significant', 'no-cases-known', 'not-known'],
+  'page.species.group': SPECIES_GROUPS,
+  venom: VENOM_FLAGS,
   ...Object.fromEntries(STAGE_NUMBERINGS.map((n) => [`broodStage.${n}`, BROOD_STAGES])),
   maleClock: complete<MaleClockState>()(['fresh', 'prime', 'late', 'past-typical']),
 };

@@ -49,6 +49,8 @@ export const accountEn = {
     noSac: 'No sac has been counted yet.',
     wholeAccount: 'Whole account:',
   },
+  entriesLater: 'Show later entries',
+  entriesNotAllShown: 'Only the entries shown below are offered here; show later entries to reach the newer ones.',
 } as const;
 
 export const accountDe: Widen<typeof accountEn> = {
@@ -97,4 +99,6 @@ export const accountDe: Widen<typeof accountEn> = {
     noSac: 'Noch wurde kein Kokon gezählt.',
     wholeAccount: 'Ganzes Konto:',
   },
+  entriesLater: 'Spätere Einträge anzeigen',
+  entriesNotAllShown: 'Hier stehen nur die unten angezeigten Einträge zur Wahl; zeige spätere Einträge an, um die neueren zu erreichen.',
 };

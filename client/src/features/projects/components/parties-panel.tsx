@@ -13,6 +13,7 @@ import { useSendInvitation } from '../api/invitations';
 import { ROLE_LABELS } from '../utils/labels';
 import { FormActions } from '@/components/ui/form-actions';
 import { PartyTable } from '@/components/ui/party-table';
+import { ProgressLinkActions } from './progress-link-actions';
 
 interface PartiesPanelProps {
   projectId: string;
@@ -108,13 +109,16 @@ export function PartiesPanel({ projectId, members, myRole, timeZone }: PartiesPa
                 {
                   header: t('page.projects.parties.account'),
                   cell: (m: ProjectMemberResponse) => (
-                    <MemberAccount
-                      member={m}
-                      invitation={sent[m.id]}
-                      timeZone={timeZone}
-                      sending={send.isPending && send.variables?.memberId === m.id}
-                      onInvite={() => invite(m)}
-                    />
+                    <Stack gap={6}>
+                      <MemberAccount
+                        member={m}
+                        invitation={sent[m.id]}
+                        timeZone={timeZone}
+                        sending={send.isPending && send.variables?.memberId === m.id}
+                        onInvite={() => invite(m)}
+                      />
+                      {m.role !== 'owner' && !m.hasAccount && <ProgressLinkActions projectId={projectId} member={m} />}
+                    </Stack>
                   ),
                 },
               ]
