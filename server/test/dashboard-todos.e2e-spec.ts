@@ -41,9 +41,9 @@ describe('to-dos on Today, per role', () => {
     const toTomasz = (await post({ kind: 'hand-over', date: D, memberId: s.tomaszId, count: 5, method: 'pick-up' })).body as { id: string };
     const toLena = (await post({ kind: 'hand-over', date: D, memberId: s.lenaId, count: 2, method: 'pick-up' })).body as { id: string };
     expect((await today(s.tomasz)).handOversToConfirm).toEqual([
-      { projectId: s.projectId, projectTitle: 'Account test project', entryId: toTomasz.id, date: D, count: 5, partyName: 'Tomasz Partner' },
+      { projectId: s.projectId, projectTitle: 'Account test project', entryId: toTomasz.id, date: D, count: 5, partyName: 'Tomasz Partner', mine: true },
     ]);
-    expect((await today(s.mira)).handOversToConfirm.map((h) => [h.entryId, h.partyName])).toEqual([[toLena.id, 'Lena Outside']]);
+    expect((await today(s.mira)).handOversToConfirm.map((h) => [h.entryId, h.partyName, h.mine])).toEqual([[toLena.id, 'Lena Outside', false]]);
     expect((await today(s.caretaker)).handOversToConfirm).toEqual([]);
     await api(t.app)
       .post(`/api/projects/${s.projectId}/entries/${toTomasz.id}/confirm`)

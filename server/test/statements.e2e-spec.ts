@@ -5,7 +5,7 @@
  */
 import Papa from 'papaparse';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { BalancesResponse, StatementResponse } from '@broodsilk/shared';
+import { wordsFor, type BalancesResponse, type Language, type StatementResponse } from '@broodsilk/shared';
 import { STATEMENT_CSV_COLUMNS } from '../src/accounts/statement-csv';
 import { createTestApp, type TestApp } from './support/test-app';
 import { waitForMail } from './support/mail-sink';
@@ -35,6 +35,20 @@ afterAll(async () => t?.close());
 
 const tomasz = () => balances.parties.find((p) => p.memberId === s.tomaszId)!;
 
+/** The header row a reader of this language gets, from the catalogue (statementCsv.column). */
+const headerRow = (lng: Language) => STATEMENT_CSV_COLUMNS.map((c) => wordsFor(lng)(`statementCsv.column.${c}`));
+const en = wordsFor('en');
+/** Reads a statement CSV back with papaparse, each cell under its column's code (the header row is in the reader's words). */
+function readCsv<T = string>(text: string, lng: Language = 'en', dynamicTyping = false): { fields: string[]; rows: Record<string, T>[]; errors: unknown[] } {
+  const headers = headerRow(lng);
+  const parsed = Papa.parse<Record<string, T>>(text.trimEnd(), {
+    header: true,
+    dynamicTyping,
+    transformHeader: (h) => STATEMENT_CSV_COLUMNS[headers.indexOf(h)] ?? `unknown: ${h}`,
+  });
+  return { fields: parsed.meta.fields ?? [], rows: parsed.data, errors: parsed.errors };
+}
+
 describe('statement page data', () => {
   it('shows the party its own entries and balance, equal to the balances route', async () => {
     const res = await api(t.app).get(`/api/projects/${s.projectId}/statements/${s.tomaszId}`).set('Authorization', s.tomasz.bearer).expect(200);
@@ -62,19 +76,43 @@ describe('statement CSV', () => {
     expect(res.headers['content-type']).toMatch(/^text\/csv/);
     expect(res.headers['content-disposition']).toMatch(/attachment; filename="statement-account-test-project-tomasz-partner\.csv"/);
     expect(res.text).toContain('\r\n'); // RFC 4180 line breaks
-    const parsed = Papa.parse<Record<string, string>>(res.text.trimEnd(), { header: true });
+    expect(res.text.split('\r\n')[0]).toBe(headerRow('en').join(','));
+    const parsed = readCsv(res.text);
     expect(parsed.errors).toEqual([]);
-    expect(parsed.meta.fields).toEqual([...STATEMENT_CSV_COLUMNS]);
-    const handOver = parsed.data.find((r) => r.kind === 'hand-over')!;
-    expect(handOver).toMatchObject({ party: 'Tomasz Partner', count: '10', method: 'shipment', tracking: 'TRK-88, "fragile"' }); // comma and quotes survive
-    const summary = (kind: string) => Number(parsed.data.find((r) => r.kind === kind)!.count);
+    expect(parsed.fields).toEqual([...STATEMENT_CSV_COLUMNS]);
+    const handOver = parsed.rows.find((r) => r.kind === en('entryKind.hand-over'))!;
+    expect(handOver).toMatchObject({ party: 'Tomasz Partner', count: '10', method: en('handOverMethod.shipment'), tracking: 'TRK-88, "fragile"' }); // comma and quotes survive
+    const summary = (kind: string) => Number(parsed.rows.find((r) => r.kind === en(`statementCsv.line.${kind}`))!.count);
     expect(summary('share')).toBe(tomasz().share);
     expect(summary('handed-over')).toBe(tomasz().handedOver);
     expect(summary('cashed-out')).toBe(tomasz().cashedOut);
     expect(summary('still-owed')).toBe(tomasz().owedSpiderlings);
-    const debt = parsed.data.find((r) => r.kind === 'debt')!;
+    const debt = parsed.rows.find((r) => r.kind === en('statementCsv.line.debt'))!;
     expect(Number(debt.amount_minor)).toBe(balances.debts.find((d) => d.toPartyId === s.tomaszId)!.amountMinor);
     expect(debt.amount).toBe('EUR 15.00');
+  });
+
+  it("is written in the reader's language: a German reader gets the German header row and words in the cells", async () => {
+    await api(t.app).patch('/api/users/me').set('Authorization', s.tomasz.bearer).send({ language: 'de' }).expect(200);
+    try {
+      const res = await api(t.app).get(`/api/projects/${s.projectId}/statements/${s.tomaszId}.csv`).set('Authorization', s.tomasz.bearer).expect(200);
+      const de = wordsFor('de');
+      expect(res.text.split('\r\n')[0]).toBe(headerRow('de').join(','));
+      expect(res.text.split('\r\n')[0]).not.toBe(headerRow('en').join(','));
+      const { rows, errors } = readCsv(res.text, 'de');
+      expect(errors).toEqual([]);
+      expect(rows.find((r) => r.kind === de('entryKind.hand-over'))).toMatchObject({
+        method: de('handOverMethod.shipment'),
+        status: de('entryStatus.in-force'),
+      });
+      expect(Number(rows.find((r) => r.kind === de('statementCsv.line.still-owed'))!.count)).toBe(tomasz().owedSpiderlings);
+      expect(rows.find((r) => r.kind === de('statementCsv.line.share'))!.estimated).toBe(de('statementCsv.no'));
+      // no English word or raw code in a cell the catalogue writes
+      expect(rows.map((r) => r.kind)).not.toContain('hand-over');
+      expect(rows.map((r) => r.kind)).not.toContain(en('entryKind.hand-over'));
+    } finally {
+      await api(t.app).patch('/api/users/me').set('Authorization', s.tomasz.bearer).send({ language: 'en' }).expect(200);
+    }
   });
 });
 
@@ -105,8 +143,8 @@ describe('every entry that concerns the party, with numbers as numbers', () => {
   it('the CSV fills from and to, and writes counts as unquoted numbers (arrival: 10 = 9 alive + 1 dead)', async () => {
     const res = await api(t.app).get(`/api/projects/${s.projectId}/statements/${s.miraId}.csv`).set('Authorization', s.mira.bearer).expect(200);
     const rows = Papa.parse<string[]>(res.text.trimEnd(), { header: false }).data;
-    const col = (name: string) => rows[0]!.indexOf(name);
-    const arrival = rows.find((r) => r[col('kind')] === 'arrival')!;
+    const col = (name: (typeof STATEMENT_CSV_COLUMNS)[number]) => rows[0]!.indexOf(en(`statementCsv.column.${name}`));
+    const arrival = rows.find((r) => r[col('kind')] === en('entryKind.arrival'))!;
     expect([arrival[col('from')], arrival[col('to')], arrival[col('count')], arrival[col('arrived_alive')], arrival[col('arrived_dead')]]).toEqual([
       'Mira Keeper',
       'Tomasz Partner',
@@ -114,10 +152,15 @@ describe('every entry that concerns the party, with numbers as numbers', () => {
       '9',
       '1',
     ]);
-    const raw = res.text.split('\r\n').find((line) => line.includes(',arrival,'))!;
+    const raw = res.text.split('\r\n').find((line) => line.includes(`,${en('entryKind.arrival')},`))!;
     expect(raw).toMatch(/,Mira Keeper,Tomasz Partner,10,9,1,/); // bare, not "10"
-    const typed = Papa.parse<Record<string, unknown>>(res.text.trimEnd(), { header: true, dynamicTyping: true }).data;
-    expect(typed.find((r) => r.kind === 'hand-over')).toMatchObject({ line: expect.any(Number), count: 10, from: 'Mira Keeper', to: 'Tomasz Partner' });
+    const typed = readCsv<unknown>(res.text, 'en', true).rows;
+    expect(typed.find((r) => r.kind === en('entryKind.hand-over'))).toMatchObject({
+      line: expect.any(Number),
+      count: 10,
+      from: 'Mira Keeper',
+      to: 'Tomasz Partner',
+    });
   });
 });
 
@@ -138,8 +181,8 @@ describe('statement CSV and formula-like text (OWASP CSV Injection)', () => {
       })
       .expect(201);
     const res = await api(t.app).get(`/api/projects/${f.projectId}/statements/${f.tomaszId}.csv`).set('Authorization', f.tomasz.bearer).expect(200);
-    const rows = Papa.parse<Record<string, string>>(res.text.trimEnd(), { header: true }).data;
-    const handOver = rows.find((r) => r.kind === 'hand-over')!;
+    const { rows } = readCsv(res.text);
+    const handOver = rows.find((r) => r.kind === en('entryKind.hand-over'))!;
     expect(handOver).toMatchObject({ carrier: `'=HYPERLINK("http://evil.test","open")`, tracking: "'@TRK-9", count: '4' });
     for (const row of rows) for (const cell of Object.values(row)) expect(cell, JSON.stringify(row)).not.toMatch(/^[=+@\t\r]|^-(?!\d+(\.\d+)?$)/);
   });
@@ -209,6 +252,23 @@ describe('statement e-mail', () => {
     expect(pdf!.contentType).toBe('application/pdf');
     expect(pdf!.filename).toBe('statement-account-test-project-tomasz-partner.pdf');
     expect(await pdfText(pdf!.content)).toContain(`Still owed: ${tomasz().owedSpiderlings} young`);
+  });
+
+  it("is written in the recipient's language: German subject and text for a partner who chose German", async () => {
+    await api(t.app).patch('/api/users/me').set('Authorization', s.tomasz.bearer).send({ language: 'de' }).expect(200);
+    try {
+      await api(t.app).post(`/api/projects/${s.projectId}/statements/${s.tomaszId}/email`).set('Authorization', s.mira.bearer).expect(201);
+      const de = wordsFor('de');
+      const subject = de('statement.mailSubject', { project: 'Account test project', party: 'Tomasz Partner' });
+      expect(subject).toBe('Broodsilk-Kontoauszug: Account test project (Tomasz Partner)');
+      const mail = await waitForMail(s.tomasz.user.email, new RegExp(subject.replace(/[()]/g, '\\$&')));
+      expect(mail.subject).toBe(subject);
+      expect(mail.text).toContain(de('statement.mailHello', { name: 'Tomasz Partner' }));
+      expect(mail.text).toContain(`${de('statement.stillOwed', { count: tomasz().owedSpiderlings })}.`);
+      expect(mail.text).not.toMatch(/Still owed|Hello/);
+    } finally {
+      await api(t.app).patch('/api/users/me').set('Authorization', s.tomasz.bearer).send({ language: 'en' }).expect(200);
+    }
   });
 
   it('says so when the party has no e-mail address', async () => {

@@ -45,7 +45,6 @@ export * from './i18n/value-source.js';
 export * from './i18n/vocabulary.js';
 export type { Catalogue } from './i18n/en.js';
 export * from './reminders/reminder-preferences.types.js';
-export * from './vocabulary/labels.js';
 export * from './sacs/brood-count-rules.js';
 export * from './sacs/sac-plausibility.js';
 export * from './sacs/opening-plausibility.js';

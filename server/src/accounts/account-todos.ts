@@ -8,7 +8,7 @@ export function accountTodos(view: AccountView, userId: string): { handOvers: Ha
   const awaiting = handOversAwaitingArrival(view);
   const handOvers = view.data.rows
     .filter((r) => awaiting.has(r.id) && (r.party!.user ? r.party!.user.id === userId : isOwner))
-    .map((r) => ({ ...project, entryId: r.id, date: r.date, count: r.count!, partyName: view.nameOf(r.party!.id) }));
+    .map((r) => ({ ...project, entryId: r.id, date: r.date, count: r.count!, partyName: view.nameOf(r.party!.id), mine: r.party!.user?.id === userId }));
   const userOf = new Map(view.data.members.map((m) => [m.id, m.user?.id ?? null]));
   const payments = view.balances.debts.flatMap((d): PaymentTodo[] => {
     const base = { ...project, amountMinor: d.amountMinor, currency: d.currency };

@@ -1,6 +1,6 @@
 import { ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
-import { shareLine, type StatementResponse } from '@broodsilk/shared';
+import type { StatementResponse } from '@broodsilk/shared';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { MailService } from '../mail/mail.service';
 import { loadAccount } from './account-loader';
@@ -40,9 +40,10 @@ export class StatementsService {
     return this.build(await this.viewFor(access, memberId), memberId);
   }
 
+  /** The CSV with its header row and words in the language of the member who asks for it. */
   async csv(access: ProjectAccess, memberId: string): Promise<{ filename: string; body: string }> {
     const s = await this.statement(access, memberId);
-    return { filename: fileName(s, 'csv'), body: statementCsv(s) };
+    return { filename: fileName(s, 'csv'), body: statementCsv(s, await loadReader(this.em, access.member.user)) };
   }
 
   /** The PDF in the language and stage numbering of the member who asks for it. */
@@ -51,7 +52,10 @@ export class StatementsService {
     return { filename: fileName(s, 'pdf'), body: await statementPdf(s, await loadReader(this.em, access.member.user)) };
   }
 
-  /** E-mails the statement (PDF attached) to the party's address: their account's, else the one the owner noted. */
+  /**
+   * E-mails the statement (PDF attached) to the party's address: their account's, else the one the
+   * owner noted; written in the recipient's language (English for a party without an account).
+   */
   async email(access: ProjectAccess, memberId: string): Promise<{ sentTo: string }> {
     const view = await this.viewFor(access, memberId);
     const member = view.data.members.find((m) => m.id === memberId)!;
@@ -59,18 +63,25 @@ export class StatementsService {
     if (!to) throw new NotFoundException(`${memberName(member)} has no e-mail address on this project; add one to e-mail the statement.`);
     const s = this.build(view, memberId);
     const b = s.balance;
+    const reader = await loadReader(this.em, member.user);
+    const { t } = reader;
     await this.mail.send({
       to,
-      subject: `Broodsilk statement: ${s.project.title} (${s.party.name})`,
+      subject: t('statement.mailSubject', { project: s.project.title, party: s.party.name }),
       text: [
-        `Hello ${s.party.name},`,
+        t('statement.mailHello', { name: s.party.name }),
         '',
-        `attached is your account statement for the breeding project "${s.project.title}".`,
-        b ? `${shareLine(b.share, s.provisional)}. Still owed: ${b.owedSpiderlings} young.` : 'No terms are in force yet.',
+        t('statement.mailAttached', { project: s.project.title }),
+        b
+          ? t('statement.mailBalance', {
+              share: t(s.provisional ? 'statement.shareProvisional' : 'statement.share', { count: b.share }),
+              owed: t('statement.stillOwed', { count: b.owedSpiderlings }),
+            })
+          : t('statement.noTerms'),
         '',
         'Broodsilk',
       ].join('\n'),
-      attachments: [{ filename: fileName(s, 'pdf'), content: await statementPdf(s, await loadReader(this.em, member.user)), contentType: 'application/pdf' }],
+      attachments: [{ filename: fileName(s, 'pdf'), content: await statementPdf(s, reader), contentType: 'application/pdf' }],
     });
     return { sentTo: to };
   }

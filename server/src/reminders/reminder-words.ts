@@ -1,5 +1,5 @@
 import type { ReminderKind } from './planning/reminder-plan.types';
-import { NOTIFICATION_KIND_LABELS, wordsFor, type MaleClockState, type NotificationKind } from '@broodsilk/shared';
+import { label, wordsFor, type MaleClockState, type NotificationKind } from '@broodsilk/shared';
 
 /**
  * The words of every reminder, in one place (to move to the message catalogue with the rest of
@@ -74,16 +74,19 @@ export function reminderWords(kind: ReminderKind, details: Details, c: WordsCont
   return WORDS[kind](details, c);
 }
 
+/** A reminder kind's name, as the settings page shows it (the reminder e-mails are written in English). */
+const kindName = (kind: NotificationKind) => label(wordsFor('en'), 'notificationKind', kind);
+
 export const MAIL_WORDS = {
   subjectPrefix: 'Broodsilk: ',
   open: 'Open in Broodsilk',
-  why: (kind: NotificationKind) => `You get this because “${NOTIFICATION_KIND_LABELS[kind]}” is on in your reminder settings.`,
-  unsubscribe: (kind: NotificationKind) => `Stop e-mails for “${NOTIFICATION_KIND_LABELS[kind]}”`,
+  why: (kind: NotificationKind) => `You get this because “${kindName(kind)}” is on in your reminder settings.`,
+  unsubscribe: (kind: NotificationKind) => `Stop e-mails for “${kindName(kind)}”`,
   digestNothing: 'Nothing is planned for the next 24 hours.',
   digestUnread: (n: number) => `${n} unread in your inbox.`,
   unsubscribed: (kind: NotificationKind) =>
-    `You will get no more e-mails for “${NOTIFICATION_KIND_LABELS[kind]}”. In-app reminders stay as they were; change either in your settings.`,
-  unsubscribeConfirm: (kind: NotificationKind) => `Stop e-mails for “${NOTIFICATION_KIND_LABELS[kind]}”?`,
+    `You will get no more e-mails for “${kindName(kind)}”. In-app reminders stay as they were; change either in your settings.`,
+  unsubscribeConfirm: (kind: NotificationKind) => `Stop e-mails for “${kindName(kind)}”?`,
   unsubscribeButton: 'Stop these e-mails',
   badLink: 'This unsubscribe link is not valid (it may have been cut short or changed). Nothing was changed.',
 } as const;

@@ -36,6 +36,8 @@ export interface HandOverTodo extends ProjectTodo {
   count: number;
   /** The party who received the young. */
   partyName: string;
+  /** The viewer received them (else the owner confirms for a party without an account); the words speak to the reader. */
+  mine: boolean;
 }
 
 /** Money owed between the viewer and another party, netted (the account's debts). */

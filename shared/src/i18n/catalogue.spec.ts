@@ -4,7 +4,7 @@ import { en } from './en.js';
 import { de } from './de.js';
 import { ACTIVITY_KINDS, activityKindLabel, activitySentence } from './vocabulary.js';
 import { shippingCautions } from './safety.js';
-import { PROJECT_STAGE_LINE, type EndedEarlyReason, type ProjectStage } from '../breeding/project-stage.js';
+import { PROJECT_STAGE_LINE, type EndedEarlyReason, type ProjectSetback, type ProjectStage } from '../breeding/project-stage.js';
 import { BROOD_STAGES, STAGE_NUMBERINGS } from '../breeding/brood-stage.js';
 import type { PairingOutcome, SacFate, FailureClause } from '../breeding/pairing.types.js';
 import type { PairingWarningCode, WarningSeverity } from '../breeding/pairing-warnings.js';
@@ -61,6 +61,9 @@ const ENUMS: Record<string, readonly string[]> = {
   handOverMethod: complete<HandOverMethod>()(['pick-up', 'shipment']),
   entryStatus: complete<EntryStatus>()(['in-force', 'reversed', 'awaiting-confirmation', 'left-out']),
   notificationKind: NOTIFICATION_KINDS,
+  'statementCsv.column': Object.keys(en.statementCsv.column),
+  'statementCsv.line': Object.keys(en.statementCsv.line),
+  setback: complete<ProjectSetback>()(['female-molted', 'sac-eaten', 'sac-failed', 'male-died']),
   temperatureUnit: TEMPERATURE_UNITS,
   language: LANGUAGES,
   activityKind: ACTIVITY_KINDS,
@@ -150,6 +153,23 @@ describe('the catalogue (i18next, en and de)', () => {
     const stage = { kind: 'care.stage', summary: 'stored', data: { stage: 'first-instar', layDate: '2026-01-01' } };
     expect(activitySentence(strict('de'), stage, { unit: 'C', numbering: 'de' })).toBe('Jetzt im Stadium N1 (1. Nymphe) (Kokon vom 2026-01-01).');
     expect(activitySentence(strict('en'), { kind: 'sac.laid', summary: 'stored', data: {} }, { unit: 'C', numbering: 'us' })).toBe('stored');
+  });
+
+  it('says a hand-over to-do to the one who confirms it: the recipient as "you", never by his own name', () => {
+    for (const lng of LANGUAGES) {
+      const t = strict(lng);
+      const values = { party: 'Tomasz', date: '2026-11-20' };
+      for (const count of [1, 5]) {
+        const mine = t('page.account.todo.handOverMine', { ...values, count });
+        expect(mine).not.toContain('Tomasz');
+        expect(mine).not.toContain('{{');
+        expect(mine).toMatch(lng === 'en' ? /you received/ : /du .* erhalten hast/);
+        expect(t('page.account.todo.handOverFor', { ...values, count })).toMatch(lng === 'en' ? /that Tomasz received/ : /dass Tomasz .* erhalten hat/);
+      }
+    }
+    // plural by Intl.PluralRules (CLDR): en and de both say one / other
+    expect(strict('en')('page.account.todo.handOverMine', { date: 'D', count: 5 })).toMatch(/the 5 spiderlings/);
+    expect(strict('de')('page.account.todo.handOverMine', { date: 'D', count: 1 })).toMatch(/das Jungtier erhalten hast, das dir/);
   });
 
   it('gives an unknown activity kind a plain word, never its code', () => {

@@ -143,6 +143,17 @@ export const en = {
     'daily-digest': 'The daily digest',
     'partner-update': 'News from a project you are a partner in',
   },
+  /**
+   * Advice for a setback in the current attempt (see deriveProjectStage): what happened and what to do
+   * next. The project stays open; ending it is the keeper's call. The molt rule follows
+   * docs/trade-facts.md §5; the rest is common practice.
+   */
+  setback: {
+    'female-molted': 'The female molted after the last pairing, so that pairing is lost: pair her again once she has hardened.',
+    'sac-eaten': 'The mother ate the sac. First-time mothers often do: let her feed up, then pair her again.',
+    'sac-failed': 'The last sac failed. Let her feed up and pair her again, or end the project if she is done for the season.',
+    'male-died': 'The male died before a successful pairing: pair her with a backup male, or end the project.',
+  },
   /** Stage names in the chosen numbering set (docs/rules.md, Stage numbering). */
   broodStage: {
     us: { eggs: 'Eggs', 'eggs-with-legs': 'Eggs with legs', 'first-instar': '1st instar', 'second-instar': '2nd instar' },
@@ -265,6 +276,49 @@ export const en = {
     debt: 'Money: {{from}} owes {{to}} {{amount}}',
     failedHeading: 'A sac failed',
     shippingHeading: 'Shipping live invertebrates',
+    mailSubject: 'Broodsilk statement: {{project}} ({{party}})',
+    mailHello: 'Hello {{name}},',
+    mailAttached: 'attached is your account statement for the breeding project “{{project}}”.',
+    mailBalance: '{{share}}. {{owed}}.',
+  },
+  /** The statement CSV (RFC 4180): its header row, keyed by the column, and the words in its cells. */
+  statementCsv: {
+    column: {
+      line: 'Line',
+      date: 'Date',
+      kind: 'Kind',
+      status: 'Status',
+      party: 'Party',
+      from: 'From',
+      to: 'To',
+      count: 'Count',
+      arrived_alive: 'Arrived alive',
+      arrived_dead: 'Arrived dead',
+      amount_minor: 'Amount in minor units',
+      amount: 'Amount',
+      currency: 'Currency',
+      method: 'Method',
+      carrier: 'Carrier',
+      tracking: 'Tracking number',
+      reason: 'Reason or note',
+      recorded_by: 'Recorded by',
+      recorded_at: 'Recorded at',
+      estimated: 'Estimated',
+    },
+    /** The kind of a summary line after the entries. */
+    line: {
+      share: 'Share',
+      'handed-over': 'Handed over',
+      sold: 'Sold',
+      'cashed-out': 'Cashed out',
+      'still-owed': 'Still owed',
+      sac: 'Sac',
+      debt: 'Money owed',
+    },
+    yes: 'yes',
+    no: 'no',
+    sacLaid: 'Sac laid {{layDate}}',
+    paymentProvider: 'payment provider',
   },
   page: pagesEn,
   /** What partners read when something is recorded in their project (in-app and e-mail). */

@@ -1,29 +1,31 @@
-import { Alert, Badge, Card, Group, List, Stack, Table, Text } from '@mantine/core';
-import { ScrollTable } from '@/components/ui/scroll-table';
-import { countWords, formatMoney, type SacSharesView } from '@broodsilk/shared';
-import { formatDate, formatInstant } from '@/lib/dates';
+import { Alert, Badge, Card, Group, List, Stack, Text } from '@mantine/core';
+import { PartyTable } from '@/components/ui/party-table';
+import { formatMoney, type SacSharesView } from '@broodsilk/shared';
+import { formatInstant } from '@/lib/dates';
+import { useWords } from '@/lib/i18n';
 import { useShares } from '../api/shares';
 
 function SacShares({ sac, timeZone }: { sac: SacSharesView; timeZone: string }) {
+  const t = useWords();
+  const about = (n: number) => (sac.estimated ? t('page.account.about', { count: n }) : n);
   const failed = sac.outcome === 'failed';
   return (
     <Card withBorder padding="sm" data-testid={`shares-sac-${sac.sacId}`}>
       <Group justify="space-between" mb="xs" wrap="wrap">
-        <Text fw={600}>Sac laid {formatDate(sac.layDate)}</Text>
+        <Text fw={600}>{t('page.account.shares.sacLaid', { date: sac.layDate })}</Text>
         {failed ? (
           <Badge color="clay" variant="light" tt="none">
-            Failed
+            {t('page.account.shares.failed')}
           </Badge>
         ) : (
           <Text size="sm" c="dimmed">
-            {countWords(sac.count, sac.estimated)} young counted ({countWords(sac.aliveInCare, sac.estimated)} in care, {sac.withdrawn} handed over, sold or
-            cashed out)
+            {t('page.account.shares.counted', { count: about(sac.count), inCare: about(sac.aliveInCare), withdrawn: sac.withdrawn })}
           </Text>
         )}
       </Group>
       {sac.estimated && (
         <Badge color="amber" variant="light" tt="none" mb="xs">
-          Provisional: the count is an estimate
+          {t('page.account.shares.estimated')}
         </Badge>
       )}
       {sac.failure && (
@@ -32,45 +34,39 @@ function SacShares({ sac, timeZone }: { sac: SacSharesView; timeZone: string }) 
         </Text>
       )}
       {sac.parties.length > 0 && (
-        <ScrollTable minWidth={420} label={`Shares of the sac laid ${formatDate(sac.layDate)}`}>
-          <Table aria-label={`Shares of the sac laid ${formatDate(sac.layDate)}`} verticalSpacing={4}>
-            <Table.Thead>
-              <Table.Tr>
-                <Table.Th>Party</Table.Th>
-                <Table.Th ta="right">Share</Table.Th>
-                <Table.Th ta="right">Fixed</Table.Th>
-                <Table.Th ta="right">Proportional</Table.Th>
-                <Table.Th ta="right">Exact quota</Table.Th>
-              </Table.Tr>
-            </Table.Thead>
-            <Table.Tbody>
-              {sac.parties.map((p) => (
-                <Table.Tr key={p.memberId}>
-                  <Table.Td>{p.name}</Table.Td>
-                  <Table.Td ta="right" fw={600}>
-                    {p.count}
-                  </Table.Td>
-                  <Table.Td ta="right">{p.fixed}</Table.Td>
-                  <Table.Td ta="right">{p.proportional}</Table.Td>
-                  <Table.Td ta="right">
-                    {p.exactQuota}
-                    {p.roundedUp && (
-                      <Text span size="xs" c="dimmed">
-                        {' '}
-                        (rounded up)
-                      </Text>
-                    )}
-                  </Table.Td>
-                </Table.Tr>
-              ))}
-            </Table.Tbody>
-          </Table>
-        </ScrollTable>
+        <PartyTable
+          label={t('page.account.shares.tableLabel', { date: sac.layDate })}
+          minWidth={420}
+          small
+          rows={sac.parties}
+          rowKey={(p) => p.memberId}
+          columns={[
+            { header: t('page.account.party'), cell: (p) => p.name },
+            { header: t('page.account.share'), numeric: true, bold: true, cell: (p) => p.count },
+            { header: t('page.account.shares.fixed'), numeric: true, cell: (p) => p.fixed },
+            { header: t('page.account.shares.proportional'), numeric: true, cell: (p) => p.proportional },
+            {
+              header: t('page.account.shares.exactQuota'),
+              numeric: true,
+              cell: (p) => (
+                <>
+                  {p.exactQuota}
+                  {p.roundedUp && (
+                    <Text span size="xs" c="dimmed">
+                      {' '}
+                      {t('page.account.shares.roundedUp')}
+                    </Text>
+                  )}
+                </>
+              ),
+            },
+          ]}
+        />
       )}
       {sac.explanation.length > 0 && (
         <Stack gap={2} mt="xs">
           <Text size="sm" fw={500}>
-            How the shares are worked out
+            {t('page.account.shares.howHeading')}
           </Text>
           <List size="sm" spacing={2}>
             {sac.explanation.map((line) => (
@@ -82,7 +78,7 @@ function SacShares({ sac, timeZone }: { sac: SacSharesView; timeZone: string }) 
       {sac.change && (
         <Stack gap={2} mt="xs" data-testid="share-change">
           <Text size="sm" fw={500} className="tone-due">
-            What changed and why · {formatInstant(sac.change.changedAt, timeZone)}
+            {t('page.account.shares.changeHeading', { when: formatInstant(sac.change.changedAt, timeZone) })}
           </Text>
           {sac.change.reasons.map((r) => (
             <Text key={r} size="sm">
@@ -102,33 +98,37 @@ function SacShares({ sac, timeZone }: { sac: SacSharesView; timeZone: string }) 
 
 /** Shares per sac with the rule in plain words, and the project's totals. */
 export function SharesPanel({ projectId, timeZone }: { projectId: string; timeZone: string }) {
+  const t = useWords();
   const shares = useShares(projectId);
-  if (shares.isPending) return <Text c="dimmed">Loading shares…</Text>;
+  if (shares.isPending) return <Text c="dimmed">{t('page.account.shares.loading')}</Text>;
   if (shares.isError) return <Alert color="clay">{shares.error.message}</Alert>;
   const s = shares.data;
   return (
     <Stack gap="sm" data-testid="account-shares">
       {s.terms ? (
         <Text size="sm" c="dimmed">
-          Terms version {s.terms.number} in force · {formatMoney(s.terms.pricePerSpiderlingMinor, s.terms.currency)} per spiderling for a cash-out ·{' '}
-          {s.terms.failureClauseText}
+          {t('page.account.shares.terms', {
+            number: s.terms.number,
+            price: formatMoney(s.terms.pricePerSpiderlingMinor, s.terms.currency),
+            clause: s.terms.failureClauseText,
+          })}
         </Text>
       ) : (
-        <Alert color="amber">No version of the terms is in force yet, so there are no shares. Every partner must accept the terms first.</Alert>
+        <Alert color="amber">{t('page.account.shares.noTerms')}</Alert>
       )}
       {s.notices.map((n) => (
         <Text key={n} size="sm" className="tone-due">
           {n}
         </Text>
       ))}
-      {s.sacs.length === 0 && s.terms && <Text c="dimmed">No sac has been counted yet.</Text>}
+      {s.sacs.length === 0 && s.terms && <Text c="dimmed">{t('page.account.shares.noSac')}</Text>}
       {s.sacs.map((sac) => (
         <SacShares key={sac.sacId} sac={sac} timeZone={timeZone} />
       ))}
       {s.totals.length > 0 && (
         <Text size="sm">
           <Text span fw={600}>
-            Whole account:{' '}
+            {t('page.account.shares.wholeAccount')}{' '}
           </Text>
           {s.totals.map((t) => `${t.name} ${t.count}`).join(' · ')}
         </Text>

@@ -98,7 +98,9 @@ describe('DashboardView', () => {
     ['terms to accept', { termsToAccept: [{ projectId: 'p1', projectTitle: 'Regalis pair', version: 2 }] }, 'Terms version 2 waits for your acceptance'],
     [
       'a hand-over to confirm',
-      { handOversToConfirm: [{ projectId: 'p1', projectTitle: 'Regalis pair', entryId: 'e1', date: '2026-11-20', count: 5, partyName: 'Tomasz' }] },
+      {
+        handOversToConfirm: [{ projectId: 'p1', projectTitle: 'Regalis pair', entryId: 'e1', date: '2026-11-20', count: 5, partyName: 'Tomasz', mine: false }],
+      },
       'Confirm the arrival of 5 young handed over to Tomasz on 20 Nov 2026',
     ],
     [

@@ -1,6 +1,7 @@
 import { Anchor, Button, Card, Group, Stack, Text } from '@mantine/core';
 import { Link } from 'react-router';
-import { NOTIFICATION_KIND_LABELS, NOTIFICATION_PAGE_SIZE } from '@broodsilk/shared';
+import { label, NOTIFICATION_PAGE_SIZE } from '@broodsilk/shared';
+import { words } from '@/lib/i18n';
 import { Pager } from '@/components/ui/pager';
 import { formatInstant } from '@/lib/dates';
 import { useMarkAllRead, useMarkRead, useNotificationPage } from '../api/notifications';
@@ -27,7 +28,7 @@ export function NotificationList({ page, onPage, timeZone }: { page: number; onP
       {data.items.map((n) => (
         <Card key={n.id} withBorder padding="sm" data-unread={n.readAt ? undefined : 'true'}>
           <Text size="xs" c="dimmed">
-            {NOTIFICATION_KIND_LABELS[n.kind]} · {formatInstant(n.createdAt, timeZone)}
+            {label(words, 'notificationKind', n.kind)} · {formatInstant(n.createdAt, timeZone)}
           </Text>
           <Anchor component={Link} to={subjectHref(n)} fw={n.readAt ? 400 : 700} onClick={() => !n.readAt && markRead.mutate(n.id)}>
             {n.title}

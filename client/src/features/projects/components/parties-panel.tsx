@@ -1,4 +1,4 @@
-import { Badge, Button, Checkbox, Collapse, Group, Select, Stack, Table, Text } from '@mantine/core';
+import { Badge, Button, Checkbox, Collapse, Group, Select, Stack, Text } from '@mantine/core';
 import { TextField } from '@/components/fields/text-field';
 import { textRule } from '@/components/fields/text-rule';
 import { useForm } from '@mantine/form';
@@ -6,11 +6,13 @@ import { useDisclosure } from '@mantine/hooks';
 import { useState } from 'react';
 import { TEXT_LIMITS, type InvitableRole, type InvitationResponse, type ProjectMemberResponse, type ProjectRole } from '@broodsilk/shared';
 import { formatInstant } from '@/lib/dates';
+import { useWords } from '@/lib/i18n';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useAddProjectMember } from '../api/projects';
 import { useSendInvitation } from '../api/invitations';
 import { ROLE_LABELS } from '../utils/labels';
 import { FormActions } from '@/components/ui/form-actions';
+import { PartyTable } from '@/components/ui/party-table';
 import { ProgressLinkActions } from './progress-link-actions';
 
 interface PartiesPanelProps {
@@ -20,13 +22,52 @@ interface PartiesPanelProps {
   timeZone: string;
 }
 
-const roleOptions = [
-  { value: 'partner', label: 'Partner (shares in the brood)' },
-  { value: 'caretaker', label: 'Caretaker (rolls and logs)' },
-];
+interface MemberAccountProps {
+  member: ProjectMemberResponse;
+  invitation: InvitationResponse | undefined;
+  timeZone: string;
+  sending: boolean;
+  onInvite: () => void;
+}
+
+/** For the keeper: whether a party has joined, or an invitation to send them. */
+function MemberAccount({ member: m, invitation, timeZone, sending, onInvite }: MemberAccountProps) {
+  const t = useWords();
+  if (m.role === 'owner')
+    return (
+      <Text size="xs" c="dimmed">
+        {t('page.projects.parties.you')}
+      </Text>
+    );
+  if (m.hasAccount)
+    return (
+      <Badge variant="light" color="moss" tt="none">
+        {t('page.projects.parties.joined')}
+      </Badge>
+    );
+  if (!m.email)
+    return (
+      <Text size="xs" c="dimmed">
+        {t('page.projects.parties.noEmail')}
+      </Text>
+    );
+  return (
+    <Group gap={6} wrap="nowrap">
+      {invitation && (
+        <Text size="xs" className="tone-due">
+          {t('page.projects.parties.sentUntil', { when: formatInstant(invitation.expiresAt, timeZone) })}
+        </Text>
+      )}
+      <Button size="compact-xs" variant={invitation ? 'subtle' : 'light'} loading={sending} onClick={onInvite}>
+        {t(invitation ? 'page.projects.parties.sendAgain' : 'page.projects.parties.send')}
+      </Button>
+    </Group>
+  );
+}
 
 /** The parties with their roles; the keeper adds one and invites them by e-mail. */
 export function PartiesPanel({ projectId, members, myRole, timeZone }: PartiesPanelProps) {
+  const t = useWords();
   const isOwner = myRole === 'owner';
   const send = useSendInvitation(projectId);
   // The server keeps no list of invitations for the page; what was sent from here is shown until reload.
@@ -36,76 +77,54 @@ export function PartiesPanel({ projectId, members, myRole, timeZone }: PartiesPa
 
   return (
     <Stack>
-      <Table.ScrollContainer minWidth={300}>
-        <Table verticalSpacing={4} fz="sm" data-testid="parties-table">
-          <Table.Thead>
-            <Table.Tr>
-              <Table.Th>Party</Table.Th>
-              <Table.Th visibleFrom="sm">Role</Table.Th>
-              {isOwner && <Table.Th>Account</Table.Th>}
-            </Table.Tr>
-          </Table.Thead>
-          <Table.Tbody>
-            {members.map((m) => {
-              const invitation = sent[m.id];
-              return (
-                <Table.Tr key={m.id}>
-                  <Table.Td>
-                    <Text size="sm" fw={500}>
-                      {m.name}
-                    </Text>
-                    {m.email && (
-                      <Text size="xs" c="dimmed">
-                        {m.email}
-                      </Text>
-                    )}
-                    <Text size="xs" c="dimmed" hiddenFrom="sm">
-                      {ROLE_LABELS[m.role]}
-                    </Text>
-                  </Table.Td>
-                  <Table.Td visibleFrom="sm">{ROLE_LABELS[m.role]}</Table.Td>
-                  {isOwner && (
-                    <Table.Td>
-                      <Stack gap={6}>
-                        {m.role === 'owner' ? (
-                          <Text size="xs" c="dimmed">
-                            you
-                          </Text>
-                        ) : m.hasAccount ? (
-                          <Badge variant="light" color="moss" tt="none">
-                            joined
-                          </Badge>
-                        ) : m.email ? (
-                          <Group gap={6} wrap="nowrap">
-                            {invitation && (
-                              <Text size="xs" className="tone-due">
-                                sent, valid until {formatInstant(invitation.expiresAt, timeZone)}
-                              </Text>
-                            )}
-                            <Button
-                              size="compact-xs"
-                              variant={invitation ? 'subtle' : 'light'}
-                              loading={send.isPending && send.variables?.memberId === m.id}
-                              onClick={() => invite(m)}
-                            >
-                              {invitation ? 'Send again' : 'Send invitation'}
-                            </Button>
-                          </Group>
-                        ) : (
-                          <Text size="xs" c="dimmed">
-                            no e-mail, kept on record only
-                          </Text>
-                        )}
-                        {m.role !== 'owner' && !m.hasAccount && <ProgressLinkActions projectId={projectId} member={m} />}
-                      </Stack>
-                    </Table.Td>
-                  )}
-                </Table.Tr>
-              );
-            })}
-          </Table.Tbody>
-        </Table>
-      </Table.ScrollContainer>
+      <PartyTable
+        label={t('page.projects.parties.label')}
+        minWidth={300}
+        small
+        testId="parties-table"
+        rows={members}
+        rowKey={(m) => m.id}
+        columns={[
+          {
+            header: t('page.projects.party'),
+            cell: (m) => (
+              <>
+                <Text size="sm" fw={500}>
+                  {m.name}
+                </Text>
+                {m.email && (
+                  <Text size="xs" c="dimmed">
+                    {m.email}
+                  </Text>
+                )}
+                <Text size="xs" c="dimmed" hiddenFrom="sm">
+                  {ROLE_LABELS[m.role]}
+                </Text>
+              </>
+            ),
+          },
+          { header: t('page.projects.parties.role'), wide: true, cell: (m) => ROLE_LABELS[m.role] },
+          ...(isOwner
+            ? [
+                {
+                  header: t('page.projects.parties.account'),
+                  cell: (m: ProjectMemberResponse) => (
+                    <Stack gap={6}>
+                      <MemberAccount
+                        member={m}
+                        invitation={sent[m.id]}
+                        timeZone={timeZone}
+                        sending={send.isPending && send.variables?.memberId === m.id}
+                        onInvite={() => invite(m)}
+                      />
+                      {m.role !== 'owner' && !m.hasAccount && <ProgressLinkActions projectId={projectId} member={m} />}
+                    </Stack>
+                  ),
+                },
+              ]
+            : []),
+        ]}
+      />
       {isOwner && <AddPartyForm projectId={projectId} />}
     </Stack>
   );
@@ -119,6 +138,7 @@ interface PartyValues {
 }
 
 function AddPartyForm({ projectId }: { projectId: string }) {
+  const t = useWords();
   const [opened, { toggle, close }] = useDisclosure(false);
   const [message, setMessage] = useState<string | null>(null);
   const add = useAddProjectMember(projectId);
@@ -127,8 +147,8 @@ function AddPartyForm({ projectId }: { projectId: string }) {
     mode: 'uncontrolled',
     initialValues: { name: '', email: '', role: 'partner', invite: true },
     validate: {
-      name: textRule({ required: 'Give the party a name.', maxLength: TEXT_LIMITS.personName }),
-      email: (v, values) => (values.invite && !/^\S+@\S+\.\S+$/.test(v.trim()) ? 'An invitation needs an e-mail address.' : null),
+      name: textRule({ required: t('page.projects.parties.nameRequired'), maxLength: TEXT_LIMITS.personName }),
+      email: (v, values) => (values.invite && !/^\S+@\S+\.\S+$/.test(v.trim()) ? t('page.projects.parties.emailForInvitation') : null),
     },
   });
   const submit = form.onSubmit(async (v) => {
@@ -146,21 +166,38 @@ function AddPartyForm({ projectId }: { projectId: string }) {
     <Stack gap="xs">
       <Group>
         <Button variant="light" onClick={toggle}>
-          {opened ? 'Close' : 'Add a party'}
+          {t(opened ? 'page.projects.parties.close' : 'page.projects.parties.add')}
         </Button>
       </Group>
       <Collapse expanded={opened}>
         <form onSubmit={submit} noValidate>
           <Stack maw={480}>
-            <TextField label="Name" maxLength={TEXT_LIMITS.personName} withAsterisk key={form.key('name')} {...form.getInputProps('name')} />
-            <TextField label="E-mail" type="email" maxLength={TEXT_LIMITS.email} key={form.key('email')} {...form.getInputProps('email')} />
-            <Select label="Role" data={roleOptions} allowDeselect={false} key={form.key('role')} {...form.getInputProps('role')} />
-            <Checkbox
-              label="E-mail an invitation to join this project in Broodsilk"
-              key={form.key('invite')}
-              {...form.getInputProps('invite', { type: 'checkbox' })}
+            <TextField
+              label={t('page.projects.parties.name')}
+              maxLength={TEXT_LIMITS.personName}
+              withAsterisk
+              key={form.key('name')}
+              {...form.getInputProps('name')}
             />
-            <FormActions message={message} loading={add.isPending || send.isPending} submitLabel="Add party" />
+            <TextField
+              label={t('page.projects.parties.email')}
+              type="email"
+              maxLength={TEXT_LIMITS.email}
+              key={form.key('email')}
+              {...form.getInputProps('email')}
+            />
+            <Select
+              label={t('page.projects.parties.role')}
+              data={[
+                { value: 'partner', label: t('page.projects.parties.partnerOption') },
+                { value: 'caretaker', label: t('page.projects.parties.caretakerOption') },
+              ]}
+              allowDeselect={false}
+              key={form.key('role')}
+              {...form.getInputProps('role')}
+            />
+            <Checkbox label={t('page.projects.parties.invite')} key={form.key('invite')} {...form.getInputProps('invite', { type: 'checkbox' })} />
+            <FormActions message={message} loading={add.isPending || send.isPending} submitLabel={t('page.projects.parties.submit')} />
           </Stack>
         </form>
       </Collapse>

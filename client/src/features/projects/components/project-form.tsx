@@ -14,7 +14,8 @@ import {
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateProject, type NewProjectResult } from '../hooks/use-create-project';
 import { priceError } from '../utils/price';
-import { LINE_RULES } from './propose-terms-form';
+import { lineRules } from './propose-terms-form';
+import { words } from '@/lib/i18n';
 import { DealFields } from './deal-fields';
 import { FormActions } from '@/components/ui/form-actions';
 import { NumberField } from '@/components/fields/number-field';
@@ -74,6 +75,7 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
   const [partyCount, setPartyCount] = useState(0);
   const [withTerms, setWithTerms] = useState(true);
   const [maleId, setMaleId] = useState<string | null>(null);
+  const LINE_RULES = lineRules(words);
   const form = useForm<Values>({
     mode: 'uncontrolled',
     validateInputOnBlur: true,

@@ -1,4 +1,4 @@
-import { Button, Collapse, Group, Stack, Table, Text } from '@mantine/core';
+import { Button, Collapse, Group, Stack, Text } from '@mantine/core';
 import { NumberField } from '@/components/fields/number-field';
 import { TextField } from '@/components/fields/text-field';
 import { checkText } from '@/components/fields/text-rule';
@@ -16,19 +16,26 @@ import {
   type ProjectMemberResponse,
   type ShippingPayer,
   type TermsVersionResponse,
+  type Words,
 } from '@broodsilk/shared';
+import { useWords } from '@/lib/i18n';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useProposeTerms } from '../api/terms';
 import { priceError } from '../utils/price';
 import { FormActions } from '@/components/ui/form-actions';
+import { PartyTable } from '@/components/ui/party-table';
 import { DealFields } from './deal-fields';
 
-/** The server's limits on a party's line of the terms. */
-export const LINE_RULES = {
-  weight: { min: 0, max: 1_000_000, decimals: 0, rangeMessage: 'A weight is a whole number from 0 to 1,000,000.' },
-  fixedCount: { min: 0, max: 100_000, decimals: 0, rangeMessage: 'A fixed count is a whole number from 0 to 100,000.' },
-  pickOrder: { min: 1, max: 1000, decimals: 0, rangeMessage: 'Pick orders are whole numbers from 1 (picks first) to 1000.' },
-} as const;
+/** The server's limits on a party's line of the terms, with the refusal in the reader's words. */
+export const lineRules = (t: Words) =>
+  ({
+    weight: { min: 0, max: 1_000_000, decimals: 0, rangeMessage: t('page.projects.proposeTerms.weightRange') },
+    fixedCount: { min: 0, max: 100_000, decimals: 0, rangeMessage: t('page.projects.proposeTerms.fixedCountRange') },
+    pickOrder: { min: 1, max: 1000, decimals: 0, rangeMessage: t('page.projects.proposeTerms.pickOrderRange') },
+  }) as const;
+
+/** The numbers a party's line holds, as the form asks for them (catalogue keys page.projects.proposeTerms.<field> and <field>Of). */
+const LINE_FIELDS = ['weight', 'fixedCount', 'pickOrder'] as const;
 
 interface Values {
   lines: { memberId: string; name: string; weight: number | string; fixedCount: number | string; pickOrder: number | string }[];
@@ -42,6 +49,8 @@ interface Values {
 
 /** The owner proposes a new version of the terms; it starts from the latest one. */
 export function ProposeTermsForm({ projectId, members, base }: { projectId: string; members: ProjectMemberResponse[]; base?: TermsVersionResponse }) {
+  const t = useWords();
+  const rules = lineRules(t);
   const [opened, { toggle, close }] = useDisclosure(false);
   const [message, setMessage] = useState<string | null>(null);
   const propose = useProposeTerms(projectId);
@@ -63,13 +72,13 @@ export function ProposeTermsForm({ projectId, members, base }: { projectId: stri
     },
     validate: {
       lines: {
-        weight: (v) => checkNumber(String(v), { required: 'Give a weight.', ...LINE_RULES.weight }),
-        fixedCount: (v) => checkNumber(String(v), LINE_RULES.fixedCount),
-        pickOrder: (v) => checkNumber(String(v), { required: 'Give a pick order.', ...LINE_RULES.pickOrder }),
+        weight: (v) => checkNumber(String(v), { required: t('page.projects.proposeTerms.weightRequired'), ...rules.weight }),
+        fixedCount: (v) => checkNumber(String(v), rules.fixedCount),
+        pickOrder: (v) => checkNumber(String(v), { required: t('page.projects.proposeTerms.pickOrderRequired'), ...rules.pickOrder }),
       },
       price: (v, values) => priceError(v, values.currency),
       note: (v) => checkText(v, { maxLength: TEXT_LIMITS.note }),
-      currency: (v) => (/^[A-Z]{3}$/.test(v) ? null : 'Use a three-letter currency code, e.g. EUR.'),
+      currency: (v) => (/^[A-Z]{3}$/.test(v) ? null : t('page.projects.proposeTerms.currency')),
     },
   });
 
@@ -95,63 +104,40 @@ export function ProposeTermsForm({ projectId, members, base }: { projectId: stri
     <Stack gap="xs">
       <Group>
         <Button variant="light" onClick={toggle}>
-          {opened ? 'Close' : base ? 'Propose changed terms' : 'Propose terms'}
+          {t(opened ? 'page.projects.proposeTerms.close' : base ? 'page.projects.proposeTerms.proposeChanged' : 'page.projects.proposeTerms.propose')}
         </Button>
       </Group>
       <Collapse expanded={opened}>
         <form onSubmit={submit} noValidate>
           <Stack>
             <Text size="sm" c="dimmed">
-              Shares are each party&apos;s weight over the sum of weights. A fixed count is taken off the top before the split. Partners must accept a new
-              version before it is in force.
+              {t('page.projects.proposeTerms.explain')}
             </Text>
-            <Table.ScrollContainer minWidth={420}>
-              <Table verticalSpacing={4}>
-                <Table.Thead>
-                  <Table.Tr>
-                    <Table.Th>Party</Table.Th>
-                    <Table.Th>Weight</Table.Th>
-                    <Table.Th>Fixed count</Table.Th>
-                    <Table.Th>Pick order</Table.Th>
-                  </Table.Tr>
-                </Table.Thead>
-                <Table.Tbody>
-                  {form.getValues().lines.map((l, i) => (
-                    <Table.Tr key={l.memberId}>
-                      <Table.Td>{l.name}</Table.Td>
-                      <Table.Td>
-                        <NumberField
-                          aria-label={`Weight of ${l.name}`}
-                          whole
-                          key={form.key(`lines.${i}.weight`)}
-                          {...form.getInputProps(`lines.${i}.weight`)}
-                        />
-                      </Table.Td>
-                      <Table.Td>
-                        <NumberField
-                          aria-label={`Fixed count of ${l.name}`}
-                          whole
-                          key={form.key(`lines.${i}.fixedCount`)}
-                          {...form.getInputProps(`lines.${i}.fixedCount`)}
-                        />
-                      </Table.Td>
-                      <Table.Td>
-                        <NumberField
-                          aria-label={`Pick order of ${l.name}`}
-                          whole
-                          key={form.key(`lines.${i}.pickOrder`)}
-                          {...form.getInputProps(`lines.${i}.pickOrder`)}
-                        />
-                      </Table.Td>
-                    </Table.Tr>
-                  ))}
-                </Table.Tbody>
-              </Table>
-            </Table.ScrollContainer>
+            <PartyTable
+              label={t('page.projects.proposeTerms.tableLabel')}
+              minWidth={420}
+              small
+              rows={form.getValues().lines.map((l, i) => ({ ...l, i }))}
+              rowKey={(l) => l.memberId}
+              columns={[
+                { header: t('page.projects.party'), cell: (l) => l.name },
+                ...LINE_FIELDS.map((field) => ({
+                  header: t(`page.projects.proposeTerms.${field}`),
+                  cell: (l: Values['lines'][number] & { i: number }) => (
+                    <NumberField
+                      aria-label={t(`page.projects.proposeTerms.${field}Of`, { party: l.name })}
+                      whole
+                      key={form.key(`lines.${l.i}.${field}`)}
+                      {...form.getInputProps(`lines.${l.i}.${field}`)}
+                    />
+                  ),
+                })),
+              ]}
+            />
             <DealFields field={(name) => ({ key: form.key(name), ...form.getInputProps(name) })}>
-              <TextField label="Note to partners" maxLength={TEXT_LIMITS.note} key={form.key('note')} {...form.getInputProps('note')} />
+              <TextField label={t('page.projects.proposeTerms.note')} maxLength={TEXT_LIMITS.note} key={form.key('note')} {...form.getInputProps('note')} />
             </DealFields>
-            <FormActions message={message} loading={propose.isPending} submitLabel="Propose this version" />
+            <FormActions message={message} loading={propose.isPending} submitLabel={t('page.projects.proposeTerms.submit')} />
           </Stack>
         </form>
       </Collapse>

@@ -1,5 +1,6 @@
 import { Alert, Badge, Box, Group, Stack, Text, Tooltip, VisuallyHidden } from '@mantine/core';
-import { PROJECT_STAGE_LINE, SETBACK_ADVICE, type DerivedProjectStage } from '@broodsilk/shared';
+import { label, PROJECT_STAGE_LINE, type DerivedProjectStage } from '@broodsilk/shared';
+import { words } from '@/lib/i18n';
 import { ENDED_EARLY_LABELS, STAGE_LABELS, stageText } from '../utils/labels';
 import classes from './stage-line.module.css';
 
@@ -60,7 +61,7 @@ export function StageLine({ stage, note }: { stage: DerivedProjectStage; note?: 
       )}
       {stage.setback && (
         <Alert color="amber" variant="light" title="Try again" data-testid="stage-setback">
-          {SETBACK_ADVICE[stage.setback]}
+          {label(words, 'setback', stage.setback)}
         </Alert>
       )}
     </Stack>

@@ -1,10 +1,11 @@
-import { Alert, Badge, Button, Card, Group, Stack, Table, Text, Title } from '@mantine/core';
-import type { Me, ProjectMemberResponse, ProjectRole, TermsVersionResponse } from '@broodsilk/shared';
+import { Alert, Badge, Button, Card, Group, Stack, Text, Title } from '@mantine/core';
+import type { Me, ProjectMemberResponse, ProjectRole, TermsLineResponse, TermsVersionResponse } from '@broodsilk/shared';
 import { broodStageLabel, formatMoney } from '@broodsilk/shared';
-import { currentNumbering, words } from '@/lib/i18n';
+import { currentNumbering, useWords } from '@/lib/i18n';
 import { formatInstant } from '@/lib/dates';
 import { useState } from 'react';
 import { ConfirmAction } from '@/components/ui/confirm-action';
+import { PartyTable } from '@/components/ui/party-table';
 import { useAcceptTerms, useTerms } from '../api/terms';
 import { FAILURE_CLAUSE_LABELS, SHIPPING_LABELS } from '../utils/labels';
 import { ProposeTermsForm } from './propose-terms-form';
@@ -16,12 +17,33 @@ interface TermsPanelProps {
   members: ProjectMemberResponse[];
 }
 
+/** Whether a party has accepted a version: the proposer needs not. */
+function Acceptance({ line }: { line: TermsLineResponse }) {
+  const t = useWords();
+  if (!line.mustAccept)
+    return (
+      <Text size="sm" c="dimmed">
+        {t('page.projects.terms.proposer')}
+      </Text>
+    );
+  return line.accepted ? (
+    <Text size="sm" className="tone-ok">
+      {t('page.projects.terms.yes')}
+    </Text>
+  ) : (
+    <Text size="sm" className="tone-due">
+      {t('page.projects.terms.notYet')}
+    </Text>
+  );
+}
+
 /** The terms of a project: the version in force, a newer proposed one (with accept), and a form to propose changes. */
 export function TermsPanel({ projectId, me, myRole, members }: TermsPanelProps) {
+  const t = useWords();
   const terms = useTerms(projectId);
   const accept = useAcceptTerms(projectId);
   const [asking, setAsking] = useState<{ version: number; memberId?: string; name?: string } | null>(null);
-  if (terms.isPending) return <Text c="dimmed">Loading the terms…</Text>;
+  if (terms.isPending) return <Text c="dimmed">{t('page.projects.terms.loading')}</Text>;
   if (terms.isError) return <Alert color="clay">{terms.error.message}</Alert>;
 
   const shown = terms.data.versions.filter((v) => v.status !== 'superseded').sort((a, b) => b.number - a.number);
@@ -30,9 +52,7 @@ export function TermsPanel({ projectId, me, myRole, members }: TermsPanelProps) 
 
   return (
     <Stack data-testid="terms-panel">
-      {shown.length === 0 && (
-        <Text c="dimmed">No terms yet. {myRole === 'owner' ? 'Propose how the brood is split below.' : 'The keeper has not proposed any.'}</Text>
-      )}
+      {shown.length === 0 && <Text c="dimmed">{t(myRole === 'owner' ? 'page.projects.terms.noneOwner' : 'page.projects.terms.noneOther')}</Text>}
       {shown.map((v) => {
         const myLine = v.lines.find((l) => l.memberId === myMember?.id);
         const mayAccept = v.status === 'proposed' && myRole === 'partner' && !!myLine && myLine.mustAccept && !myLine.accepted;
@@ -43,74 +63,63 @@ export function TermsPanel({ projectId, me, myRole, members }: TermsPanelProps) 
             <Group justify="space-between" mb="xs" wrap="wrap">
               <Group gap="xs">
                 <Title order={4} size="h5">
-                  Version {v.number}
+                  {t('page.projects.terms.version', { number: v.number })}
                 </Title>
                 {v.status === 'in-force' ? (
-                  <Badge color="moss">In force</Badge>
+                  <Badge color="moss">{t('page.projects.terms.inForce')}</Badge>
                 ) : (
                   <Badge color="amber" variant="light">
-                    Proposed
+                    {t('page.projects.terms.proposed')}
                   </Badge>
                 )}
               </Group>
               <Text size="xs" c="dimmed">
-                by {v.createdBy.name}, {formatInstant(v.createdAt, me.timeZone)}
+                {t('page.projects.terms.by', { name: v.createdBy.name, when: formatInstant(v.createdAt, me.timeZone) })}
               </Text>
             </Group>
-            <Table.ScrollContainer minWidth={300}>
-              <Table striped verticalSpacing={4} fz="sm">
-                <Table.Thead>
-                  <Table.Tr>
-                    <Table.Th>Party</Table.Th>
-                    <Table.Th>Share</Table.Th>
-                    <Table.Th visibleFrom="sm">Taken first</Table.Th>
-                    <Table.Th visibleFrom="sm">Picks</Table.Th>
-                    <Table.Th>Accepted</Table.Th>
-                  </Table.Tr>
-                </Table.Thead>
-                <Table.Tbody>
-                  {[...v.lines]
-                    .sort((a, b) => a.pickOrder - b.pickOrder)
-                    .map((l) => (
-                      <Table.Tr key={l.memberId}>
-                        <Table.Td>
-                          {l.memberName}
-                          <Text size="xs" c="dimmed" hiddenFrom="sm">
-                            picks #{l.pickOrder}
-                            {l.fixedCount > 0 ? ` · ${l.fixedCount} first` : ''}
-                          </Text>
-                        </Table.Td>
-                        <Table.Td>
-                          {l.share}{' '}
-                          <Text span size="xs" c="dimmed">
-                            (weight {l.weight})
-                          </Text>
-                        </Table.Td>
-                        <Table.Td visibleFrom="sm">{l.fixedCount > 0 ? l.fixedCount : '—'}</Table.Td>
-                        <Table.Td visibleFrom="sm">#{l.pickOrder}</Table.Td>
-                        <Table.Td>
-                          {!l.mustAccept ? (
-                            <Text size="sm" c="dimmed">
-                              proposer
-                            </Text>
-                          ) : l.accepted ? (
-                            <Text size="sm" className="tone-ok">
-                              yes
-                            </Text>
-                          ) : (
-                            <Text size="sm" className="tone-due">
-                              not yet
-                            </Text>
-                          )}
-                        </Table.Td>
-                      </Table.Tr>
-                    ))}
-                </Table.Tbody>
-              </Table>
-            </Table.ScrollContainer>
+            <PartyTable
+              label={t('page.projects.terms.tableLabel', { number: v.number })}
+              minWidth={300}
+              striped
+              small
+              rows={[...v.lines].sort((a, b) => a.pickOrder - b.pickOrder)}
+              rowKey={(l) => l.memberId}
+              columns={[
+                {
+                  header: t('page.projects.party'),
+                  cell: (l) => (
+                    <>
+                      {l.memberName}
+                      <Text size="xs" c="dimmed" hiddenFrom="sm">
+                        {t('page.projects.terms.picks', { order: l.pickOrder })}
+                        {l.fixedCount > 0 ? t('page.projects.terms.takenFirstShort', { count: l.fixedCount }) : ''}
+                      </Text>
+                    </>
+                  ),
+                },
+                {
+                  header: t('page.projects.terms.share'),
+                  cell: (l) => (
+                    <>
+                      {l.share}{' '}
+                      <Text span size="xs" c="dimmed">
+                        {t('page.projects.terms.weight', { weight: l.weight })}
+                      </Text>
+                    </>
+                  ),
+                },
+                { header: t('page.projects.terms.takenFirst'), wide: true, cell: (l) => (l.fixedCount > 0 ? l.fixedCount : '—') },
+                { header: t('page.projects.terms.picksHeader'), wide: true, cell: (l) => `#${l.pickOrder}` },
+                { header: t('page.projects.terms.accepted'), cell: (l) => <Acceptance line={l} /> },
+              ]}
+            />
             <Text size="sm" mt="xs">
-              {formatMoney(v.pricePerSpiderlingMinor, v.currency)} per spiderling · {FAILURE_CLAUSE_LABELS[v.failureClause]} · handed over at{' '}
-              {broodStageLabel(words, v.handOverStage, currentNumbering()).toLowerCase()} · shipping: {SHIPPING_LABELS[v.shippingPaidBy].toLowerCase()}
+              {t('page.projects.terms.deal', {
+                price: formatMoney(v.pricePerSpiderlingMinor, v.currency),
+                clause: FAILURE_CLAUSE_LABELS[v.failureClause],
+                stage: broodStageLabel(t, v.handOverStage, currentNumbering()),
+                shipping: SHIPPING_LABELS[v.shippingPaidBy],
+              })}
             </Text>
             {v.note && (
               <Text size="sm" c="dimmed">
@@ -119,13 +128,13 @@ export function TermsPanel({ projectId, me, myRole, members }: TermsPanelProps) 
             )}
             {v.status === 'proposed' && v.awaiting.length > 0 && (
               <Text size="sm" className="tone-due" mt={4}>
-                Waiting for {v.awaiting.map((a) => a.name).join(', ')} to accept.
+                {t('page.projects.terms.waiting', { names: v.awaiting.map((a) => a.name).join(', ') })}
               </Text>
             )}
             {mayAccept && (
               <Group mt="sm">
                 <Button loading={accept.isPending} disabled={accept.isPending} onClick={() => setAsking({ version: v.number })}>
-                  Accept these terms
+                  {t('page.projects.terms.accept')}
                 </Button>
               </Group>
             )}
@@ -138,7 +147,7 @@ export function TermsPanel({ projectId, me, myRole, members }: TermsPanelProps) 
                   disabled={accept.isPending}
                   onClick={() => setAsking({ version: v.number, memberId: a.memberId, name: a.name })}
                 >
-                  Record {a.name}&apos;s acceptance
+                  {t('page.projects.terms.recordFor', { name: a.name })}
                 </Button>
               </Group>
             ))}
@@ -149,22 +158,23 @@ export function TermsPanel({ projectId, me, myRole, members }: TermsPanelProps) 
         <ConfirmAction
           opened
           onClose={() => setAsking(null)}
-          title={asking.name ? `Record ${asking.name}'s acceptance` : 'Accept these terms'}
-          confirmLabel={asking.name ? 'Record the acceptance' : 'Yes, accept version ' + asking.version}
+          title={asking.name ? t('page.projects.terms.recordFor', { name: asking.name }) : t('page.projects.terms.accept')}
+          confirmLabel={asking.name ? t('page.projects.terms.recordConfirm') : t('page.projects.terms.acceptConfirm', { number: asking.version })}
           pending={accept.isPending}
           message={accept.isError ? accept.error.message : null}
           onConfirm={() =>
             accept.mutate(
               asking.memberId
-                ? { version: asking.version, body: { memberId: asking.memberId, note: 'Recorded by the keeper on their behalf.' } }
+                ? { version: asking.version, body: { memberId: asking.memberId, note: t('page.projects.terms.recordedNote') } }
                 : { version: asking.version },
               { onSuccess: () => setAsking(null) },
             )
           }
         >
           <Text size="sm">
-            {asking.name ? `${asking.name} agrees` : 'You agree'} to version {asking.version}: the split and prices shown above. When every partner has
-            accepted, it replaces the terms in force. An acceptance cannot be withdrawn; a change needs a new version.
+            {asking.name
+              ? t('page.projects.terms.theyAgree', { name: asking.name, number: asking.version })
+              : t('page.projects.terms.youAgree', { number: asking.version })}
           </Text>
         </ConfirmAction>
       )}
