@@ -31,6 +31,7 @@ export * from './projects/terms.types.js';
 export * from './projects/pairings.types.js';
 export * from './projects/invitations.types.js';
 export * from './projects/activity.types.js';
+export * from './projects/progress.types.js';
 export * from './sacs/sacs.types.js';
 export * from './sacs/care-log.types.js';
 export * from './sacs/brood.types.js';

@@ -10,6 +10,7 @@ import { projectsEn, projectsDe } from './projects.js';
 import { accountEn, accountDe } from './account.js';
 import { collectionEn, collectionDe } from './collection.js';
 import { speciesEn, speciesDe } from './species.js';
+import { failureNoticeEn, failureNoticeDe } from './failureNotice.js';
 
 /** Text of the pages, one section per area of the client; each area keeps English and German side by side. */
 export const pagesEn = {
@@ -25,6 +26,7 @@ export const pagesEn = {
   account: accountEn,
   collection: collectionEn,
   species: speciesEn,
+  failureNotice: failureNoticeEn,
 } as const;
 
 export const pagesDe = {
@@ -40,4 +42,5 @@ export const pagesDe = {
   account: accountDe,
   collection: collectionDe,
   species: speciesDe,
+  failureNotice: failureNoticeDe,
 };
