@@ -182,6 +182,15 @@ describe('progress links', () => {
     expect(events.at(-1)!.summary).toBe('Revoked the progress link of Aurelia Outside.');
   });
 
+  it('removing the party removes their links', async () => {
+    const gone = await outsideParty('Kurt Shortstay');
+    const token = tokenOf((await issue(owner, gone).expect(201)).body.url);
+    await page(token).expect(200);
+    await http().delete(`/api/projects/${projectId}/members/${gone}`).set('Authorization', owner.bearer).expect(204);
+    await page(token).expect(404);
+    expect(await t.orm.em.fork().count(ProgressLink, { member: gone })).toBe(0);
+  });
+
   it('a link reaches only the opening photos of its own project', async () => {
     const token = tokenOf((await issue(owner, memberIds.outA).expect(201)).body.url);
     await http().get(`/api/progress/${token}/photos/${otherPhotoId}`).expect(404);
