@@ -14,6 +14,8 @@ import { datasetSizes, seedDataset } from './bench/dataset.mjs';
 import { drive, driveSql } from './bench/load.mjs';
 import { CARE_LOG_WRITE, READS } from './bench/reads.mjs';
 import { firstPageScripts, todayLargestPaint } from './bench/client.mjs';
+import { writePlans } from './bench/plans.mjs';
+import { timeSacPlanning, workerThroughput } from './bench/jobs.mjs';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const base = /** @type {string} */ (process.env.BASE_URL);
@@ -21,6 +23,7 @@ const databaseUrl = /** @type {string} */ (process.env.DATABASE_URL);
 const scale = Number(process.env.BENCH_SCALE ?? 1);
 const seconds = Number(process.env.BENCH_SECONDS ?? 5);
 const connectionSteps = (process.env.BENCH_CONNECTIONS ?? '1,10,50').split(',').map(Number);
+const bases = (process.env.BASE_URLS ?? base).split(',');
 const shared = await import('../shared/dist/index.js');
 
 /** @type {Record<string, unknown>[]} */
@@ -88,6 +91,11 @@ ids.sac = (await db.query('select id from sacs where project_id = $1 order by la
 ids.partnerMember = (await db.query(`select id from project_members where project_id = $1 and role = 'partner'`, [ids.project])).rows[0].id;
 await db.end();
 
+// 3a. The query plans of the main reads on this dataset, for docs/performance.md.
+const plansDir = path.join(root, '.bench/plans');
+const plans = await writePlans({ databaseUrl, dir: plansDir, ids, reads: READS });
+console.log(`${plans.length} query plans (EXPLAIN ANALYZE, BUFFERS) written to ${path.relative(root, plansDir)}/`);
+
 // 3. Reads beside bare SQL, then the write beside a bare insert.
 /** @param {string} name @param {number} c @param {{ rps: number, p50: number, p95: number, p99: number, errors: number }} api @param {{ rps: number, p50: number, p95: number }} sql */
 function pairRow(name, c, api, sql) {
@@ -116,6 +124,54 @@ for (const c of connectionSteps) {
   const sql = await driveSql({ databaseUrl, connections: c, seconds, sql: CARE_LOG_WRITE.sql, params: () => CARE_LOG_WRITE.params(ids) });
   pairRow(CARE_LOG_WRITE.name, c, api, sql);
 }
+// 3b. With several API instances on the one database: the same reads driven across all of them.
+if (bases.length > 1) {
+  for (const read of READS.filter((r) => r.name === 'dashboard' || r.name.startsWith('projects list'))) {
+    for (const c of connectionSteps.filter((n) => n >= bases.length)) {
+      const parts = await Promise.all(
+        bases.map((b, i) =>
+          drive({ url: b + read.path(ids), connections: Math.floor(c / bases.length) + (i < c % bases.length ? 1 : 0), seconds, headers: auth }),
+        ),
+      );
+      const p = (/** @type {'p50' | 'p95' | 'p99'} */ k) => Math.max(...parts.map((x) => x[k]));
+      rows.push({
+        measurement: `GET ${read.name}, across ${bases.length} instances (slowest instance's percentiles)`,
+        conns: c,
+        'req/s': parts.reduce((n, x) => n + x.rps, 0).toFixed(0),
+        p50: ms(p('p50')),
+        p95: ms(p('p95')),
+        p99: ms(p('p99')),
+        errors: parts.reduce((n, x) => n + x.errors, 0),
+      });
+    }
+  }
+}
+
+// 3c. Background work: reminder planning of up to 5 000 open sacs, and one worker's throughput.
+{
+  const planning = await timeSacPlanning({ root, limit: 5000 });
+  rows.push({
+    measurement: `plan reminders of ${planning.sacs} open sacs (one transaction)`,
+    conns: '',
+    'req/s': '',
+    p50: `${(planning.ms / 1000).toFixed(2)} s`,
+    p95: '',
+  });
+  for (const w of [
+    { batchSize: 1, pollingIntervalSeconds: 2, jobs: 10 },
+    { batchSize: 100, pollingIntervalSeconds: 2, jobs: Math.max(200, Math.round(2000 * Math.min(1, scale * 10))) },
+  ]) {
+    const jobs = await workerThroughput({ databaseUrl, ...w });
+    rows.push({
+      measurement: `one pg-boss worker, batch of ${w.batchSize} every ${w.pollingIntervalSeconds} s${w.batchSize === 1 ? ' (as the app)' : ''}, ${jobs.jobs} no-op jobs`,
+      conns: '',
+      'req/s': `${jobs.perSecond.toFixed(1)} jobs/s`,
+      p50: '',
+      p95: '',
+    });
+  }
+}
+
 {
   const login = await drive({
     url: `${base}/api/auth/login`,
