@@ -32,10 +32,11 @@ import { AccountsModule } from './accounts/accounts.module';
 import { SettlementsModule } from './settlements/settlements.module';
 import { IdempotencyModule } from './idempotency/idempotency.module';
 import { ExportModule } from './export/export.module';
+import { ProgressLinksModule } from './progress-links/progress-links.module';
 
-/** Calendar-feed and invitation tokens travel in the path; they are secrets, so not logged. */
+/** Calendar-feed, invitation and progress-link tokens travel in the path; they are secrets, so not logged. */
 function redactSecrets(url: string): string {
-  return url.split('?')[0].replace(/^(\/api\/(?:calendar|invitations)\/)[^/]+/, '$1[secret]');
+  return url.split('?')[0].replace(/^(\/(?:api\/(?:calendar|invitations|progress)|progress)\/)[^/]+/, '$1[secret]');
 }
 
 @Module({
@@ -81,6 +82,7 @@ function redactSecrets(url: string): string {
     SettlementsModule,
     IdempotencyModule,
     ExportModule,
+    ProgressLinksModule,
   ],
   providers: [
     { provide: APP_FILTER, useClass: AllExceptionsFilter },

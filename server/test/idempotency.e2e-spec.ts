@@ -1,6 +1,6 @@
 import request from 'supertest';
 import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
-import type { CareLogEntryResponse } from '@broodsilk/shared';
+import type { CareLogEntryResponse, KeysetPage } from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
 import type { SignedIn } from './support/users';
 import { projectWithRoles } from './support/projects';
@@ -19,7 +19,9 @@ const roll = (who: SignedIn, sacId: string, key: string | null, body: object = {
   return (key ? r.set('Idempotency-Key', key) : r).send(body);
 };
 const rollsOf = async (sacId: string) =>
-  ((await http().get(`/api/sacs/${sacId}/log`).set('Authorization', owner.bearer).expect(200)).body as CareLogEntryResponse[]).filter((e) => e.kind === 'roll');
+  ((await http().get(`/api/sacs/${sacId}/log`).set('Authorization', owner.bearer).expect(200)).body as KeysetPage<CareLogEntryResponse>).items.filter(
+    (e) => e.kind === 'roll',
+  );
 const pulledSac = () => createSac(t.app, owner, projectId, { layDate: '2025-08-20', pulledAt: '2025-09-14T08:00:00Z' });
 const keyRows = async (key: string) =>
   t.orm.em.getConnection().execute<{ status: number | null }[]>(`select status from idempotency_keys where key = ?`, [key]);

@@ -80,7 +80,13 @@ export const en = {
   entryStatus: { 'in-force': 'Counts', reversed: 'Reversed', 'awaiting-confirmation': 'Waiting for confirmation', 'left-out': 'Left out' },
   /** Timeline headings, by the event kind's dotted name (`pairing.recorded` → pairing.recorded). */
   activityKind: {
-    project: { created: 'Project started', updated: 'Project changed', ended: 'Project ended early' },
+    project: {
+      created: 'Project started',
+      updated: 'Project changed',
+      ended: 'Project ended early',
+      reopened: 'Project reopened',
+      closed: 'Project closed',
+    },
     member: { added: 'Member added', joined: 'Member joined', removed: 'Member removed' },
     invitation: { sent: 'Invitation sent', claimed: 'Invitation accepted' },
     pairing: { recorded: 'Pairing recorded', corrected: 'Pairing corrected' },
@@ -91,6 +97,7 @@ export const en = {
       updated: 'Sac changed',
       failed: 'Sac failed',
       opened: 'Sac opened',
+      'left-with-mother': 'Sac left with the mother',
       'opening-corrected': 'Opening corrected',
     },
     brood: { counted: 'Young counted', corrected: 'Count corrected' },
@@ -113,6 +120,7 @@ export const en = {
       confirmation: 'Payment confirmed',
     },
     male: { returned: 'Male returned', died: 'Male died' },
+    'progress-link': { issued: 'Progress link sent', revoked: 'Progress link revoked' },
     female: { molted: 'Female molted after pairing' },
   },
   activityKindOther: 'Activity',
@@ -208,6 +216,8 @@ export const en = {
     broodCountLost: '{{about}}{{alive}} alive at {{stage}}, {{lost}} lost ({{reason}})',
     about: 'about ',
     memberRemoved: 'Removed {{name}} ({{role}}).',
+    progressLinkIssued: 'Made a new progress link for {{name}}; earlier links no longer open.',
+    progressLinkRevoked: 'Revoked the progress link of {{name}}.',
   },
   statement: {
     title: 'Broodsilk account statement',
