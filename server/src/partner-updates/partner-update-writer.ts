@@ -29,9 +29,8 @@ export interface UpdateMailer {
   toMember(tx: EntityManager, to: { userId: string; email: string; lng: Language; projectTitle: string }, words: UpdateWords, link: UpdateLink): Promise<void>;
   toOutsideParty(
     tx: EntityManager,
-    to: { member: ProjectMember; lng: Language; projectTitle: string; ownerName: string },
+    to: { member: ProjectMember; lng: Language; projectTitle: string; ownerName: string; ownerId: string },
     words: UpdateWords,
-    link: UpdateLink,
     actorId: string | null,
   ): Promise<void>;
 }
@@ -97,9 +96,8 @@ export async function writePartnerUpdates(tx: EntityManager, eventIds: string[],
         if (!(await claimSent(tx, `partner-update:${e.id}:member:${m.id}`))) continue;
         await o.mailer!.toOutsideParty(
           tx,
-          { member: m, lng: owner.language, projectTitle: project.title, ownerName: owner.displayName },
+          { member: m, lng: owner.language, projectTitle: project.title, ownerName: owner.displayName, ownerId: owner.id },
           words,
-          link,
           e.actor?.id ?? null,
         );
         written++;
