@@ -1,6 +1,6 @@
 /** The accounts demo: three parties with money owed both ways on the shared brood, and an older project settled. */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { BalancesResponse, LedgerEntryResponse, ProjectSummary, KeysetPage } from '@broodsilk/shared';
+import type { BalancesResponse, LedgerEntryResponse, NotificationPage, ProjectSummary, KeysetPage } from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
 import { login } from './support/users';
 import { seedDemo } from '../src/seed/demo-seed';
@@ -12,6 +12,7 @@ import type { FeatureSeeder } from '../src/seed/demo-seed';
 import { Sac } from '../src/sacs/sac.entity';
 import { BroodCount } from '../src/sacs/brood-count.entity';
 import { api } from './accounts.fixtures';
+import { DEMO_PARTNER_UPDATES } from '../src/seed/partner-updates.seeder';
 
 let t: TestApp;
 
@@ -29,6 +30,20 @@ beforeAll(async () => {
   expect(await seedDemo(t.orm.em.fork(), seeders, new Date('2026-06-15T10:00:00Z'))).toBe(true);
 }, 90_000);
 afterAll(async () => t?.close());
+
+describe('partner updates in the demo', () => {
+  it('the demo partner’s inbox holds updates of the latest events of his projects, each with a link; the keeper has none of her own doing', async () => {
+    const tomasz = await login(t.app, 'partner@broodsilk.test', DEMO_PASSWORD);
+    const mira = await login(t.app, 'keeper@broodsilk.test', DEMO_PASSWORD);
+    const inbox = (await api(t.app).get('/api/notifications').set('Authorization', tomasz.bearer).expect(200)).body as NotificationPage;
+    const updates = inbox.items.filter((n) => n.kind === 'partner-update');
+    expect(updates).toHaveLength(DEMO_PARTNER_UPDATES);
+    expect(inbox.unread).toBeGreaterThanOrEqual(DEMO_PARTNER_UPDATES);
+    expect(updates.every((n) => n.subject !== null && n.projectId !== null && n.body.length > 0)).toBe(true);
+    const hers = (await api(t.app).get('/api/notifications').set('Authorization', mira.bearer).expect(200)).body as NotificationPage;
+    expect(hers.items.filter((n) => n.kind === 'partner-update')).toEqual([]);
+  });
+});
 
 describe('accounts demo seeder', () => {
   it('seeds the shared brood with three parties, a hand-over awaiting confirmation and money owed both ways; the older project is settled', async () => {

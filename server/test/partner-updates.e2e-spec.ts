@@ -169,6 +169,12 @@ describe('partner updates', () => {
   it('an outside party (no account, an e-mail address) gets the bad news by e-mail with the keeper’s message', async () => {
     const mail = await waitForMail(OUTSIDE.email, /Sac failed/);
     expect(mail.text).toContain(MESSAGE);
+    // With a working link to their progress page (no account needed).
+    const url = new URL(/https?:\/\/\S+\/progress\/\S+/.exec(mail.text ?? '')![0]);
+    const page = await http()
+      .get(`/api/progress/${url.pathname.split('/').pop()}`)
+      .expect(200);
+    expect(JSON.stringify(page.body)).toContain('Update pair');
     expect(mail.text).toContain('Oona named you as a partner in “Update pair”');
     expect(mail.headerLines.find((h) => h.key === 'list-unsubscribe')).toBeUndefined();
   });

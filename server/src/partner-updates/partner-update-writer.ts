@@ -7,6 +7,7 @@ import { User } from '../users/user.entity';
 import { readerFrom } from '../users/reader-words';
 import { Notification } from '../reminders/notification.entity';
 import { ReminderSettings } from '../reminders/reminder-settings.entity';
+import { claimSent } from '../reminders/claim-sent';
 import { isBadNews, isPartnerUpdateKind, partnerUpdateWords } from './partner-update-words';
 import { updateFactsOf } from './partner-update-facts';
 
@@ -28,9 +29,8 @@ export interface UpdateMailer {
   toMember(tx: EntityManager, to: { userId: string; email: string; lng: Language; projectTitle: string }, words: UpdateWords, link: UpdateLink): Promise<void>;
   toOutsideParty(
     tx: EntityManager,
-    to: { member: ProjectMember; lng: Language; projectTitle: string; ownerName: string },
+    to: { member: ProjectMember; lng: Language; projectTitle: string; ownerName: string; ownerId: string },
     words: UpdateWords,
-    link: UpdateLink,
     actorId: string | null,
   ): Promise<void>;
 }
@@ -40,22 +40,6 @@ export interface WriteOptions {
   mailer: UpdateMailer | null;
   /** Writes updates for events of any age (the demo seed tells its partner about its recent past). */
   anyAge?: boolean;
-}
-
-/**
- * Claims one update for one recipient (`reminder_sent`, unique key): false when it was written
- * already, so an event handled twice (a retry, the seed and the live path) tells nobody twice.
- */
-async function claim(tx: EntityManager, key: string): Promise<boolean> {
-  const rows = await tx
-    .getConnection()
-    .execute<{ key: string }[]>(
-      `insert into reminder_sent (id, created_at, updated_at, key) values (gen_random_uuid(), now(), now(), ?) on conflict (key) do nothing returning key`,
-      [key],
-      'all',
-      tx.getTransactionContext(),
-    );
-  return rows.length > 0;
 }
 
 /** Where an update leads: its sac, else its project. */
@@ -86,7 +70,7 @@ export async function writePartnerUpdates(tx: EntityManager, eventIds: string[],
     const settings = new Map((await tx.find(ReminderSettings, { user: { $in: userIds } })).map((s) => [s.user.id, s]));
     for (const m of members) {
       const user = m.user as User;
-      if (!(await claim(tx, `partner-update:${e.id}:${user.id}`))) continue;
+      if (!(await claimSent(tx, `partner-update:${e.id}:${user.id}`))) continue;
       const channel = settings.get(user.id)?.channels['partner-update'] ?? DEFAULT_REMINDER_CHANNEL;
       const words = partnerUpdateWords(readerFrom(user), facts);
       if (channelSendsInApp(channel)) {
@@ -109,12 +93,11 @@ export async function writePartnerUpdates(tx: EntityManager, eventIds: string[],
       const owner = await tx.findOneOrFail(User, project.owner.id);
       const words = partnerUpdateWords(readerFrom(owner), facts);
       for (const m of outside) {
-        if (!(await claim(tx, `partner-update:${e.id}:member:${m.id}`))) continue;
+        if (!(await claimSent(tx, `partner-update:${e.id}:member:${m.id}`))) continue;
         await o.mailer!.toOutsideParty(
           tx,
-          { member: m, lng: owner.language, projectTitle: project.title, ownerName: owner.displayName },
+          { member: m, lng: owner.language, projectTitle: project.title, ownerName: owner.displayName, ownerId: owner.id },
           words,
-          link,
           e.actor?.id ?? null,
         );
         written++;

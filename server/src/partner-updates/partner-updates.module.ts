@@ -1,11 +1,12 @@
 import { Module } from '@nestjs/common';
 import { MailModule } from '../mail/mail.module';
+import { ProgressLinksModule } from '../progress-links/progress-links.module';
 import { PartnerUpdates } from './partner-updates.service';
 import { FailureNoticeController } from './partner-updates.controller';
 
 /** Partner updates: news of a shared project for its partners, written from the activity events. */
 @Module({
-  imports: [MailModule],
+  imports: [MailModule, ProgressLinksModule],
   controllers: [FailureNoticeController],
   providers: [PartnerUpdates],
   exports: [PartnerUpdates],

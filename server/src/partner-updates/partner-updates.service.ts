@@ -16,6 +16,7 @@ import { User } from '../users/user.entity';
 import { readerFrom } from '../users/reader-words';
 import { isPartnerUpdateKind, partnerUpdateWords } from './partner-update-words';
 import { badNewsFacts } from './partner-update-facts';
+import { ProgressLinksService } from '../progress-links/progress-links.service';
 import { writePartnerUpdates, type UpdateLink, type UpdateMailer, type UpdateWords } from './partner-update-writer';
 import type { FailureNoticePreviewDto } from './dto/failure-notice-preview.dto';
 
@@ -31,6 +32,7 @@ export class PartnerUpdates implements OnModuleInit, EventSubscriber, UpdateMail
     private readonly em: EntityManager,
     private readonly outbox: MailOutbox,
     private readonly clock: Clock,
+    private readonly progressLinks: ProgressLinksService,
     @Inject(appConfig.KEY) private readonly app: ConfigType<typeof appConfig>,
   ) {}
 
@@ -87,18 +89,23 @@ export class PartnerUpdates implements OnModuleInit, EventSubscriber, UpdateMail
     });
   }
 
-  /** Bad news to a partner without an account: no settings to honour, so no unsubscribe link; the keeper is named instead. */
+  /**
+   * Bad news to a partner without an account, with a fresh link to their progress page (issuing one
+   * revokes their earlier links). No settings to honour, so no unsubscribe link: the keeper is named instead.
+   */
   async toOutsideParty(
     tx: EntityManager,
-    to: { member: ProjectMember; lng: Language; projectTitle: string; ownerName: string },
+    to: { member: ProjectMember; lng: Language; projectTitle: string; ownerName: string; ownerId: string },
     words: UpdateWords,
+    actorId: string | null,
   ): Promise<void> {
     const t = wordsFor(to.lng);
+    const progress = await this.progressLinks.issue(tx, to.member, { id: actorId ?? to.ownerId });
     const { html, text } = renderNoticeMail({
       lang: to.lng,
       title: words.title,
       paragraphs: words.paragraphs,
-      link: null,
+      link: { url: progress.url, label: t('partnerUpdate.mailProgress') },
       why: t('partnerUpdate.mailWhyOutside', { owner: to.ownerName, project: to.projectTitle }),
       unsubscribe: null,
     });

@@ -11,6 +11,7 @@ import { User } from '../users/user.entity';
 import { Notification } from './notification.entity';
 import { REMINDER_QUEUE, ReminderPlanner, type ReminderJob } from './reminder-planner.service';
 import { currentPlan } from './current-plan';
+import { claimSent } from './claim-sent';
 import { MAIL_WORDS, reminderWords } from './reminder-words';
 import { unsubscribeToken } from './unsubscribe-token';
 import type { PlannedReminder, Recipient } from './planning/reminder-plan.types';
@@ -59,7 +60,7 @@ export class ReminderDelivery implements OnModuleInit {
       const r = plan.find((x) => x.key === job.key);
       if (!r) return 'no-longer-true';
       if (r.sendAt.getTime() > now.getTime() + EARLY_MS) return 'moved';
-      if (!(await claim(tx, r.key))) return 'already-sent';
+      if (!(await claimSent(tx, r.key))) return 'already-sent';
       const to = recipients.get(r.userId)!;
       const words = reminderWords(r.kind, r.details, { timeZone: to.timeZone, ...about });
       if (channelSendsInApp(r.channel)) {
@@ -100,17 +101,4 @@ export class ReminderDelivery implements OnModuleInit {
       headers: unsubscribeHeaders(unsubscribeUrl),
     });
   }
-}
-
-/** Claims a reminder's key; false when another worker (or an earlier run) has it. */
-async function claim(tx: EntityManager, key: string): Promise<boolean> {
-  const rows = await tx
-    .getConnection()
-    .execute<{ key: string }[]>(
-      `insert into reminder_sent (id, created_at, updated_at, key) values (gen_random_uuid(), now(), now(), ?) on conflict (key) do nothing returning key`,
-      [key],
-      'all',
-      tx.getTransactionContext(),
-    );
-  return rows.length > 0;
 }

@@ -71,6 +71,13 @@ export const rows: MatrixRow[] = [
   },
   { method: 'GET', path: '/api/sacs/:id', expect: ANY_MEMBER, request: onSac(sharedSac) },
   { method: 'PATCH', path: '/api/sacs/:id', expect: OWNER_ONLY, request: onSac(sharedSac, { notes: 'Matrix note' }) },
+  // The bad-news preview writes nothing; only the keeper writes to the partners (docs/product.md, Partner updates).
+  {
+    method: 'POST',
+    path: '/api/sacs/:id/failure-notice-preview',
+    expect: OWNER_ONLY,
+    request: onSac(sharedSac, { failureReason: 'spoiled', partnerMessage: 'Matrix message' }),
+  },
   // Caretakers pull and open only where the owner switched that on; the matrix project has it off.
   { method: 'POST', path: '/api/sacs/:id/pull', expect: OWNER_ONLY, request: onSac(withMotherSac, {}) },
   {

@@ -3,11 +3,12 @@ import { useForm } from '@mantine/form';
 import { useDisclosure } from '@mantine/hooks';
 import { useState } from 'react';
 import { ENDED_EARLY_REASONS, TEXT_LIMITS, type EndedEarlyReason } from '@broodsilk/shared';
-import { TextField } from '@/components/fields/text-field';
+import { TextAreaField, TextField } from '@/components/fields/text-field';
 import { textRule } from '@/components/fields/text-rule';
 import { FormActions } from '@/components/ui/form-actions';
 
 import { applyServerErrors } from '@/lib/form-errors';
+import { useWords } from '@/lib/i18n';
 import { useEndProject } from '../api/projects';
 import { ENDED_EARLY_LABELS } from '../utils/labels';
 
@@ -18,15 +19,21 @@ export function EndProjectForm({ projectId, setback }: { projectId: string; setb
   const [opened, { toggle }] = useDisclosure(false);
   const [message, setMessage] = useState<string | null>(null);
   const end = useEndProject(projectId);
-  const form = useForm<{ reason: EndedEarlyReason | null; note: string }>({
+  const t = useWords();
+  const form = useForm<{ reason: EndedEarlyReason | null; note: string; partnerMessage: string }>({
     mode: 'uncontrolled',
-    initialValues: { reason: setback ?? null, note: '' },
-    validate: { reason: (v) => (v ? null : 'Why does it end?'), note: textRule({ maxLength: TEXT_LIMITS.note }) },
+    initialValues: { reason: setback ?? null, note: '', partnerMessage: '' },
+    validate: {
+      reason: (v) => (v ? null : 'Why does it end?'),
+      note: textRule({ maxLength: TEXT_LIMITS.note }),
+      partnerMessage: textRule({ maxLength: TEXT_LIMITS.partnerMessage }),
+    },
   });
   const submit = form.onSubmit(async (v) => {
     setMessage(null);
     try {
-      await end.mutateAsync({ reason: v.reason!, note: v.note.trim() || null });
+      // The message to the partners is sent as typed, and only when something was written.
+      await end.mutateAsync({ reason: v.reason!, note: v.note.trim() || null, ...(v.partnerMessage.trim() ? { partnerMessage: v.partnerMessage } : {}) });
     } catch (e) {
       setMessage(applyServerErrors(form, e));
     }
@@ -43,6 +50,14 @@ export function EndProjectForm({ projectId, setback }: { projectId: string; setb
           <Stack maw={420}>
             <Select label="Reason" data={reasonOptions} key={form.key('reason')} {...form.getInputProps('reason')} />
             <TextField label="Note" maxLength={TEXT_LIMITS.note} key={form.key('note')} {...form.getInputProps('note')} />
+            <TextAreaField
+              label={t('page.failureNotice.messageLabel')}
+              description={t('page.failureNotice.endMessageHint')}
+              maxLength={TEXT_LIMITS.partnerMessage}
+              minRows={3}
+              key={form.key('partnerMessage')}
+              {...form.getInputProps('partnerMessage')}
+            />
             <FormActions message={message} loading={end.isPending} submitLabel="End project" />
           </Stack>
         </form>
