@@ -159,11 +159,12 @@ if (bases.length > 1) {
   });
   for (const w of [
     { batchSize: 1, pollingIntervalSeconds: 2, jobs: 10 },
+    { batchSize: 20, pollingIntervalSeconds: 2, jobs: 200 },
     { batchSize: 100, pollingIntervalSeconds: 2, jobs: Math.max(200, Math.round(2000 * Math.min(1, scale * 10))) },
   ]) {
     const jobs = await workerThroughput({ databaseUrl, ...w });
     rows.push({
-      measurement: `one pg-boss worker, batch of ${w.batchSize} every ${w.pollingIntervalSeconds} s${w.batchSize === 1 ? ' (as the app)' : ''}, ${jobs.jobs} no-op jobs`,
+      measurement: `one pg-boss worker, batch of ${w.batchSize} every ${w.pollingIntervalSeconds} s${w.batchSize === 20 ? ' (as the app)' : ''}, ${jobs.jobs} no-op jobs`,
       conns: '',
       'req/s': `${jobs.perSecond.toFixed(1)} jobs/s`,
       p50: '',

@@ -1,7 +1,7 @@
 // @ts-check
 // Two measurements of the background work: planning the reminders of up to 5 000 open sacs (the
 // work a process with workers does at start, through the built server's own planner), and how many
-// jobs one pg-boss worker, set up as the app sets up its workers (batch of 1), completes per second.
+// jobs one pg-boss worker, set up as the app sets up its workers (batch of 20), completes per second.
 import { createRequire } from 'node:module';
 import path from 'node:path';
 import { performance } from 'node:perf_hooks';
@@ -36,7 +36,7 @@ export async function timeSacPlanning(o) {
 
 /**
  * Queues `jobs` no-op jobs on a queue of its own and lets one worker work them with the given
- * batch size and polling interval (the app's workers: batch of 1, every 2 s, `server/src/jobs/jobs.service.ts`).
+ * batch size and polling interval (the app's workers: batch of 20, every 2 s, `server/src/jobs/jobs.service.ts`).
  * pg-boss 10 fetches one batch per polling interval, so this shows the queue's ceiling per worker.
  * @param {{ databaseUrl: string, jobs: number, batchSize: number, pollingIntervalSeconds: number }} o
  * @returns {Promise<{ jobs: number, perSecond: number }>}
