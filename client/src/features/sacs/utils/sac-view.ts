@@ -2,9 +2,6 @@ import {
   broodStageLabel,
   type BandSide,
   type BroodStage,
-  type IncubationBand,
-  type Range,
-  type TemperatureUnit,
   type PullWindowState,
   type RollStatus,
   type SacResponse,
@@ -12,7 +9,6 @@ import {
 } from '@broodsilk/shared';
 import { catalogueLabels, currentNumbering, i18next, words } from '@/lib/i18n';
 import { formatInstant } from '@/lib/dates';
-import { formatPercent, formatTemperature } from '@/lib/numbers';
 import { PULL_WINDOW_TONE, ROLL_STATUS_TONE, type ToneStyle } from '@/lib/tones';
 
 /** A brood stage in the reader's language and numbering set (settings). */
@@ -66,25 +62,7 @@ export function whereSacIs(sac: SacResponse): string {
   return sac.leftWithMother ? words('page.sacs.where.leftWithMother') : words('page.sacs.where.withMother');
 }
 
-/** "24.0 °C to 28.0 °C" in the reader's unit and language, or "70 to 85 %". */
-export function rangeText(kind: 'temperature' | 'humidity', range: Range, unit: TemperatureUnit): string {
-  return kind === 'temperature'
-    ? words('page.sacs.band.range', { min: formatTemperature(range.min, unit), max: formatTemperature(range.max, unit) })
-    : words('page.sacs.band.range', { min: formatPercent(range.min), max: formatPercent(range.max) });
-}
-
-/** "Temperature 30.0 °C, above the band (24.0 °C to 28.0 °C)": a reading outside the band, in words. */
-export function readingAlertText(
-  alert: { kind: 'temperature' | 'humidity'; value: number; side: BandSide },
-  band: IncubationBand,
-  unit: TemperatureUnit,
-): string {
-  const temperature = alert.kind === 'temperature';
-  return words(`page.sacs.band.alert.${alert.kind}.${alert.side}`, {
-    value: temperature ? formatTemperature(alert.value, unit) : formatPercent(alert.value),
-    range: rangeText(alert.kind, temperature ? band.temperatureC : band.humidityPercent, unit),
-  });
-}
+export { rangeText, readingAlertText } from '@/lib/band';
 
 /** The flag beside a logged reading outside the band. */
 export function bandFlag(side: BandSide | null): string | null {
