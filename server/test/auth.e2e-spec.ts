@@ -2,7 +2,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CSRF_HEADER, SESSION_COOKIE, type ApiErrorBody } from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
-import { login, registerKeeper } from './support/users';
+import { confirmationToken, confirmEmail, login, registerAndConfirm, registerKeeper } from './support/users';
 import { makeAdmin } from './support/admins';
 import { waitForMail } from './support/mail-sink';
 
@@ -26,8 +26,10 @@ describe('register → login → me → logout', () => {
     const reg = await http()
       .post('/api/auth/register')
       .send({ email: '  Ada.Keeper@Example.test ', password: 'long enough pass', displayName: 'Ada', timeZone: 'Europe/Vienna' })
-      .expect(201);
-    expect(reg.body.user).toMatchObject({
+      .expect(202);
+    expect(cookieFrom(reg, SESSION_COOKIE)).toBeUndefined();
+    const { session } = await confirmEmail(t.app, await confirmationToken(t.app, 'ada.keeper@example.test'));
+    expect(session!.user).toMatchObject({
       email: 'ada.keeper@example.test',
       displayName: 'Ada',
       role: 'keeper',
@@ -46,7 +48,7 @@ describe('register → login → me → logout', () => {
 
     const me = await http().get('/api/auth/me').set('Authorization', `Bearer ${token}`).expect(200);
     expect(me.body).toEqual({
-      id: reg.body.user.id,
+      id: session!.user.id,
       email: 'ada.keeper@example.test',
       displayName: 'Ada',
       role: 'keeper',
@@ -64,18 +66,15 @@ describe('register → login → me → logout', () => {
   });
 
   it('keeps the language given at registration and lets the user change language, unit and stage numbering; unknown values are 400 with the allowed ones', async () => {
-    const reg = await http()
-      .post('/api/auth/register')
-      .send({ email: 'de.keeper@example.test', password: 'long enough pass', displayName: 'Dora', language: 'de' })
-      .expect(201);
-    expect(reg.body.user).toMatchObject({ language: 'de', stageNumbering: 'us' });
+    const reg = await registerAndConfirm(t.app, { email: 'de.keeper@example.test', password: 'long enough pass', displayName: 'Dora', language: 'de' });
+    expect(reg.user).toMatchObject({ language: 'de', stageNumbering: 'us' });
     const bad = await http()
       .post('/api/auth/register')
       .send({ email: 'x.keeper@example.test', password: 'long enough pass', displayName: 'X', language: 'fr' })
       .expect(400);
     expect(JSON.stringify(bad.body)).toContain('Choose one of the languages en, de.');
 
-    const bearer = `Bearer ${reg.body.accessToken as string}`;
+    const bearer = reg.bearer;
     const ok = await http()
       .patch('/api/users/me')
       .set('Authorization', bearer)
@@ -120,13 +119,21 @@ describe('refusals', () => {
     expect(wrong.body).toEqual({ statusCode: 401, error: 'Unauthorized', message: 'The e-mail or password is not right.' });
   });
 
-  it('a duplicate e-mail is 409', async () => {
+  it('a taken address gets the same 202 and body as a new one, and neither signs in (fails on a 201 session or a 409)', async () => {
+    // OWASP ASVS 5.0 V6.3.8 and the OWASP Authentication Cheat Sheet ("Authentication and Error Messages"): registration must not tell whether an address has an account.
     const k = await registerKeeper(t.app);
-    const res = await http()
+    const body = (email: string) => ({ email, password: 'another long one', displayName: 'Twin' });
+    const taken = await http().post('/api/auth/register').send(body(k.user.email.toUpperCase()));
+    const fresh = await http()
       .post('/api/auth/register')
-      .send({ email: k.user.email.toUpperCase(), password: 'another long one', displayName: 'Twin' })
-      .expect(409);
-    expect(res.body.message).toMatch(/already exists/);
+      .send(body(`fresh.${Date.now()}@example.test`));
+    expect([taken.status, fresh.status]).toEqual([202, 202]);
+    expect(taken.body).toEqual(fresh.body);
+    expect(taken.body).toEqual({ message: 'Check your e-mail: we have sent a message to this address with the next step.' });
+    expect(cookieFrom(taken, SESSION_COOKIE)).toBeUndefined();
+    expect(cookieFrom(fresh, SESSION_COOKIE)).toBeUndefined();
+    // The owner's password still works, and the attempt changed nothing of theirs.
+    await login(t.app, k.user.email, k.password);
   });
 
   it('a weak password is 400 with a field message', async () => {

@@ -6,6 +6,7 @@ import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper, type SignedIn } from './support/users';
 import { mailsTo, waitForMail } from './support/mail-sink';
 import { createProject } from './support/projects';
+import { JOBS_SCHEMA } from '../src/jobs/jobs.service';
 
 let t: TestApp;
 let mira: SignedIn;
@@ -67,6 +68,35 @@ describe('invitations', () => {
     expect(again.body.message).toBe('This invitation has already been used.');
     expect((await http().get(`/api/invitations/${token}`).expect(200)).body).toMatchObject({ valid: false, problem: 'This invitation has already been used.' });
     await http().get('/api/invitations/not-a-real-token').expect(404);
+  });
+
+  it('a link used to register is carried through the e-mail confirmation: confirming joins the new account (fails while registration ignores the invitation)', async () => {
+    const p = await createProject(t.app, t.orm, mira, { title: `Carried invite ${Date.now()}` });
+    const newcomer = `newcomer.${Date.now()}@example.test`;
+    await http().post(`/api/projects/${p.id}/invitations`).set('Authorization', mira.bearer).send({ email: newcomer, role: 'partner' }).expect(201);
+    const invitation = await tokenFromMail(newcomer, p.title);
+    await http()
+      .post('/api/auth/register')
+      .send({ email: newcomer, password: 'joining by invitation', displayName: 'Newcomer', invitationToken: invitation })
+      .expect(202);
+    const mail = await waitForMail(newcomer, /Confirm your e-mail address/);
+    const confirmation = /\/confirm-email\?token=([A-Za-z0-9_-]{43})\b/.exec(mail.text ?? '')![1];
+    // The job's data carries only the invitation token's hash, never the token itself.
+    const jobs = await t.orm.em
+      .getConnection()
+      .execute<{ data: string }[]>(`select data::text from ${JOBS_SCHEMA}.job where data::text like ?`, [`%${newcomer}%`]);
+    expect(jobs.length).toBeGreaterThan(0);
+    expect(jobs.every((j) => !j.data.includes(invitation))).toBe(true);
+
+    const res = await http().post('/api/auth/confirm-email').send({ token: confirmation }).expect(200);
+    expect(res.body.invitation).toEqual({ projectId: p.id, role: 'partner', status: 'joined' });
+    const seen = await http()
+      .get(`/api/projects/${p.id}`)
+      .set('Authorization', `Bearer ${res.body.session.accessToken as string}`)
+      .expect(200);
+    expect(seen.body.myRole).toBe('partner');
+    const used = await http().get(`/api/invitations/${invitation}`).expect(200);
+    expect(used.body).toMatchObject({ valid: false, problem: 'This invitation has already been used.' });
   });
 
   it('an expired link is refused with a clear message', async () => {

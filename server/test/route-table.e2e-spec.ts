@@ -21,12 +21,17 @@ const PUBLIC = new Set([
   'GET /api/auth/csrf',
   'POST /api/auth/password-reset',
   'POST /api/auth/password-reset/confirm',
+  'POST /api/auth/confirm-email',
+  'POST /api/auth/confirm-email/resend',
   'GET /api/health',
   'GET /api/invitations/:token',
   'GET /api/calendar/:token.ics',
   'POST /api/webhooks/payments',
   'GET /api/unsubscribe/:token',
   'POST /api/unsubscribe/:token',
+  'GET /api/progress/:token',
+  'GET /api/progress/:token/photos/:photoId',
+  'GET /api/progress/:token/photos/:photoId/thumb',
 ]);
 /** The shared species catalogue: every keeper reads it, only an admin edits it. */
 const CATALOGUE: Record<string, number> = { 'GET /api/species/:id': 200, 'PATCH /api/species/:id': 403 };

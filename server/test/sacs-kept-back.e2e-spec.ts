@@ -125,7 +125,7 @@ describe('the kept-back batch', () => {
       ['roll', false],
     ]);
     // The sac's own care log is untouched: the batch keeps its own.
-    expect((await get(owner, `/${sacId}/log`).expect(200)).body).toEqual([]);
+    expect((await get(owner, `/${sacId}/log`).expect(200)).body).toEqual({ items: [], nextCursor: null });
   });
 
   it('written off once, with a date and a reason: only the owner ends it; counting or logging it afterwards is 409', async () => {

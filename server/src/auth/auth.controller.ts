@@ -1,7 +1,7 @@
 import { Body, Controller, Get, HttpCode, Inject, Patch, Post, Req, Res, UseGuards } from '@nestjs/common';
 import { ConfigType } from '@nestjs/config';
 import type { Request, Response } from 'express';
-import { type CsrfResponse, type LoginResponse, type Me, type SignInResult } from '@broodsilk/shared';
+import { type CsrfResponse, type EmailConfirmationResult, type LoginResponse, type Me, type RegisterResponse, type SignInResult } from '@broodsilk/shared';
 import { appConfig } from '../config/app.config';
 import { Public } from '../common/decorators/public.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
@@ -12,6 +12,8 @@ import { RegisterDto } from './dto/register.dto';
 import { LoginDto } from './dto/login.dto';
 import { PasswordResetConfirmDto, PasswordResetDto } from './dto/password-reset.dto';
 import { ChangePasswordDto } from './dto/change-password.dto';
+import { EmailConfirmationDto, EmailConfirmationResendDto } from './dto/email-confirmation.dto';
+import { EmailConfirmations } from './email-confirmations.service';
 import { SecondFactorSignInDto } from './second-factor/dto/second-factor.dto';
 import { clearSessionCookie, startSession } from './session-cookie';
 import { SignInRequestGuard } from './sign-in-request.guard';
@@ -22,15 +24,39 @@ import type { AuthUser } from '../common/auth-user';
 export class AuthController {
   constructor(
     private readonly auth: AuthService,
+    private readonly confirmations: EmailConfirmations,
     @Inject(CSRF) private readonly csrf: Csrf,
     @Inject(appConfig.KEY) private readonly app: ConfigType<typeof appConfig>,
   ) {}
 
+  /** The same answer for a new and a taken address; the e-mail tells them apart. */
   @Public()
   @UseGuards(SignInAddressGuard, SignInRequestGuard)
+  @HttpCode(202)
   @Post('register')
-  async register(@Body() dto: RegisterDto, @Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<LoginResponse> {
-    return this.startSession(await this.auth.register(dto), req, res);
+  async register(@Body() dto: RegisterDto): Promise<RegisterResponse> {
+    await this.auth.register(dto);
+    return { message: 'Check your e-mail: we have sent a message to this address with the next step.' };
+  }
+
+  /** The link from the confirmation e-mail: confirms the address, accepts the invitation it carries, and signs in unless a second factor is set up. */
+  @Public()
+  @UseGuards(SignInAddressGuard, SignInRequestGuard)
+  @HttpCode(200)
+  @Post('confirm-email')
+  async confirmEmail(@Body() dto: EmailConfirmationDto, @Req() req: Request, @Res({ passthrough: true }) res: Response): Promise<EmailConfirmationResult> {
+    const { user, invitation, invitationProblem } = await this.confirmations.confirm(dto.token);
+    const session = user.totpEnabledAt ? null : this.startSession(this.auth.issue(user), req, res);
+    return { session, invitation, ...(invitationProblem ? { invitationProblem } : {}) };
+  }
+
+  @Public()
+  @UseGuards(SignInAddressGuard)
+  @HttpCode(202)
+  @Post('confirm-email/resend')
+  async resendConfirmation(@Body() dto: EmailConfirmationResendDto): Promise<{ message: string }> {
+    await this.confirmations.requestAgain(dto.email);
+    return { message: 'If this address has an account waiting for confirmation, a new link is on its way. It works once, within 24 hours.' };
   }
 
   @Public()

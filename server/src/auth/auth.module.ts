@@ -18,12 +18,16 @@ import { SignInAddressGuard } from './sign-in-address.guard';
 import { RecoveryCode } from './second-factor/recovery-code.entity';
 import { SecondFactorController } from './second-factor/second-factor.controller';
 import { SecondFactorService } from './second-factor/second-factor.service';
+import { EmailConfirmationToken } from './email-confirmation-token.entity';
+import { EmailConfirmations } from './email-confirmations.service';
+import { InvitationsModule } from '../invitations/invitations.module';
 
 @Module({
   imports: [
     ConfigModule.forFeature(appConfig),
     ConfigModule.forFeature(databaseConfig),
-    MikroOrmModule.forFeature([User, PasswordResetToken, RateLimitRow, RecoveryCode]),
+    MikroOrmModule.forFeature([User, PasswordResetToken, RateLimitRow, RecoveryCode, EmailConfirmationToken]),
+    InvitationsModule,
     PassportModule,
     MailModule,
     JwtModule.registerAsync({
@@ -32,7 +36,7 @@ import { SecondFactorService } from './second-factor/second-factor.service';
     }),
   ],
   controllers: [AuthController, SecondFactorController],
-  providers: [AuthService, SecondFactorService, JwtStrategy, csrfProvider, SignInLimits, SignInAddressGuard],
-  exports: [AuthService, csrfProvider],
+  providers: [AuthService, SecondFactorService, EmailConfirmations, JwtStrategy, csrfProvider, SignInLimits, SignInAddressGuard],
+  exports: [AuthService, EmailConfirmations, csrfProvider],
 })
 export class AuthModule {}

@@ -1,9 +1,9 @@
-import { ConflictException, Inject, Injectable, UnauthorizedException, BadRequestException } from '@nestjs/common';
+import { ForbiddenException, Inject, Injectable, UnauthorizedException, BadRequestException } from '@nestjs/common';
 import { ConfigType } from '@nestjs/config';
 import { JwtService } from '@nestjs/jwt';
 import { EntityManager, LockMode, raw, type RequiredEntityData } from '@mikro-orm/postgresql';
 import { createHash, randomBytes } from 'node:crypto';
-import { PENDING_SIGN_IN_MINUTES, SESSION_HOURS, type Me, type SecondFactorChallenge } from '@broodsilk/shared';
+import { EMAIL_NOT_CONFIRMED, PENDING_SIGN_IN_MINUTES, SESSION_HOURS, type Me, type SecondFactorChallenge } from '@broodsilk/shared';
 import { appConfig } from '../config/app.config';
 import { MailOutbox } from '../mail/mail-outbox.service';
 import { User } from '../users/user.entity';
@@ -20,11 +20,13 @@ import { SecondFactorService } from './second-factor/second-factor.service';
 import { readPendingSignIn, signPendingSignIn } from './second-factor/pending-sign-in';
 import { securityNotice } from './security-notices';
 import { assertPassword } from './wrong-password';
+import { EmailConfirmations } from './email-confirmations.service';
+import { hashInvitationToken } from '../invitations/invitation-token';
 
 export const RESET_LINK_MINUTES = 45;
 /** The composed mail behind every reset request: a link for a known address, nothing for an unknown one. */
 const RESET_MAIL = 'password-reset-link';
-/** The composed mail behind every registration: a notice to the owner of a taken address, nothing for a new one. */
+/** The composed mail behind every registration: a notice to the owner of a taken address, the confirmation link for a new one. */
 const REGISTRATION_MAIL = 'registration-attempt';
 
 export interface IssuedSession {
@@ -46,20 +48,20 @@ export class AuthService {
     private readonly outbox: MailOutbox,
     private readonly limits: SignInLimits,
     private readonly secondFactor: SecondFactorService,
+    private readonly confirmations: EmailConfirmations,
     @Inject(appConfig.KEY) private readonly app: ConfigType<typeof appConfig>,
   ) {
     outbox.defineComposer(RESET_MAIL, ({ email }) => this.resetLinkMail(email));
-    outbox.defineComposer(REGISTRATION_MAIL, ({ email, attemptedId }) => this.registrationMail(email, attemptedId));
+    outbox.defineComposer(REGISTRATION_MAIL, ({ email, attemptedId, invitationHash }) => this.registrationMail(email, attemptedId, invitationHash));
   }
 
   /**
-   * Does the same work for a new and a taken address: one password hash, one
-   * `INSERT … ON CONFLICT DO NOTHING`, one queued job. The job mails the owner of a taken address
-   * that someone tried to register with it, and sends nothing for a new account. The answers
-   * still differ (a session, or 409): an equal answer needs an e-mail confirmation step first
-   * (docs/operations.md, "Enumeration").
+   * Does the same work and gives the same answer for a new and a taken address: one password
+   * hash, one `INSERT … ON CONFLICT DO NOTHING`, one queued job, and nobody is signed in. The job
+   * mails a new account its confirmation link and the owner of a taken address a notice that
+   * someone tried to register with it (docs/operations.md, "Sign-up").
    */
-  async register(dto: RegisterDto): Promise<IssuedSession> {
+  async register(dto: RegisterDto): Promise<void> {
     const user = Object.assign(new User(), {
       email: dto.email,
       displayName: dto.displayName,
@@ -67,21 +69,21 @@ export class AuthService {
       timeZone: dto.timeZone ?? 'UTC',
       language: dto.language ?? 'en',
     });
-    const created = await this.em.transactional(async (em) => {
+    await this.em.transactional(async (em) => {
       // Every column the entity would write (its defaults included), in one statement that skips a taken address.
       const row = em.getComparator().prepareEntity(user) as RequiredEntityData<User>;
-      const rows = await em.createQueryBuilder(User).insert(row).onConflict('email').ignore().returning('id').execute('all');
-      await this.outbox.enqueueComposed(em, REGISTRATION_MAIL, { email: user.email, attemptedId: user.id });
-      return rows.length === 1;
+      await em.createQueryBuilder(User).insert(row).onConflict('email').ignore().execute();
+      // Only the invitation token's hash goes into the job's data, as the invitations table keeps it.
+      const invitation: Record<string, string> = dto.invitationToken ? { invitationHash: hashInvitationToken(dto.invitationToken) } : {};
+      await this.outbox.enqueueComposed(em, REGISTRATION_MAIL, { email: user.email, attemptedId: user.id, ...invitation });
     });
-    if (!created) throw new ConflictException('An account with this e-mail already exists. Sign in or reset your password.');
-    return this.issue(user);
   }
 
-  /** Runs in the job: tells the owner of a taken address about the attempt; a new account gets nothing. */
-  private async registrationMail(email: string, attemptedId: string) {
+  /** Runs in the job: the confirmation link for a new account, a notice to the owner of a taken address. */
+  private async registrationMail(email: string, attemptedId: string, invitationHash: string | undefined) {
     const owner = await this.em.fork().findOne(User, { email });
-    if (!owner || owner.id === attemptedId) return null;
+    if (!owner) return null;
+    if (owner.id === attemptedId) return this.confirmations.firstMail(owner, invitationHash);
     return securityNotice('registration-attempt', owner, this.app.publicUrl);
   }
 
@@ -98,6 +100,14 @@ export class AuthService {
     if (!user || !ok) {
       await this.limits.recordFailure(dto.email);
       throw new UnauthorizedException('The e-mail or password is not right.');
+    }
+    if (!user.emailConfirmedAt) {
+      // Only a right password learns this: the address's owner has not opened the link yet.
+      await this.limits.recordSuccess(dto.email);
+      throw new ForbiddenException({
+        message: 'Confirm your e-mail address first: open the link we sent when you registered. No e-mail? Send it again.',
+        reason: EMAIL_NOT_CONFIRMED,
+      });
     }
     if (user.totpEnabledAt) {
       const expiresAt = new Date(this.clock.now().getTime() + PENDING_SIGN_IN_MINUTES * 60_000);

@@ -10,5 +10,6 @@ import { InvitationsController, ProjectInvitationsController } from './invitatio
   imports: [MikroOrmModule.forFeature([Invitation]), MailModule, ActivityModule],
   controllers: [ProjectInvitationsController, InvitationsController],
   providers: [InvitationsService],
+  exports: [InvitationsService],
 })
 export class InvitationsModule {}

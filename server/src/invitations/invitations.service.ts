@@ -118,22 +118,43 @@ export class InvitationsService {
       const inv = await this.byToken(token, tx, true);
       const problem = invitationProblem(inv, this.clock.now());
       if (problem) throw new GoneException(problem);
-      const user = await tx.findOneOrFail(User, viewer.id);
-      if (user.email.toLowerCase() === inv.email) return this.join(tx, inv, user);
-      await this.assertNotMember(tx, inv, user);
-      inv.claimedBy = user;
-      inv.claimedAt = this.clock.now();
-      this.activity.record(tx, {
-        projectId: inv.project.id,
-        actorId: viewer.id,
-        kind: 'invitation.claimed',
-        subjectType: 'invitation',
-        subjectId: inv.id,
-        summary: `${user.displayName} (${user.email}) opened the invitation sent to ${inv.email} and waits for the owner's approval.`,
-        data: { invitationId: inv.id, email: inv.email, claimedByEmail: user.email },
-      });
-      return { projectId: inv.project.id, role: inv.role, status: 'awaiting-owner' as const };
+      return this.acceptAs(tx, inv, await tx.findOneOrFail(User, viewer.id));
     });
+  }
+
+  /**
+   * Accepts the invitation whose link led to a registration, once that account has confirmed its
+   * address (inside the confirmation's transaction `tx`); a link that no longer works gives its
+   * reason instead, and the account stays as it is.
+   */
+  async acceptAfterConfirmation(tx: EntityManager, invitationId: string, user: User): Promise<AcceptInvitationResponse | { problem: string }> {
+    const inv = await tx.findOne(Invitation, { id: invitationId }, { populate: ['project', 'invitedBy', 'member'], lockMode: LockMode.PESSIMISTIC_WRITE });
+    if (!inv) return { problem: INVALID_LINK };
+    const problem = invitationProblem(inv, this.clock.now());
+    if (problem) return { problem };
+    try {
+      return await this.acceptAs(tx, inv, user);
+    } catch (e) {
+      if (e instanceof ConflictException) return { problem: e.message };
+      throw e;
+    }
+  }
+
+  private async acceptAs(tx: EntityManager, inv: Invitation, user: User): Promise<AcceptInvitationResponse> {
+    if (user.email.toLowerCase() === inv.email) return this.join(tx, inv, user);
+    await this.assertNotMember(tx, inv, user);
+    inv.claimedBy = user;
+    inv.claimedAt = this.clock.now();
+    this.activity.record(tx, {
+      projectId: inv.project.id,
+      actorId: user.id,
+      kind: 'invitation.claimed',
+      subjectType: 'invitation',
+      subjectId: inv.id,
+      summary: `${user.displayName} (${user.email}) opened the invitation sent to ${inv.email} and waits for the owner's approval.`,
+      data: { invitationId: inv.id, email: inv.email, claimedByEmail: user.email },
+    });
+    return { projectId: inv.project.id, role: inv.role, status: 'awaiting-owner' as const };
   }
 
   /** The owner lets the account that opened the invitation from another address join. */

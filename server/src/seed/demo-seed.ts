@@ -24,7 +24,15 @@ export async function seedDemo(em: EntityManager, seeders: FeatureSeeder[] = [],
     const users = Object.fromEntries(
       DEMO_ACCOUNTS.map((a) => [
         a.key,
-        tx.create(User, { email: a.email, displayName: a.displayName, role: a.role, timeZone: a.timeZone, temperatureUnit: a.temperatureUnit, passwordHash }),
+        tx.create(User, {
+          email: a.email,
+          displayName: a.displayName,
+          role: a.role,
+          timeZone: a.timeZone,
+          temperatureUnit: a.temperatureUnit,
+          passwordHash,
+          emailConfirmedAt: today,
+        }),
       ]),
     ) as SeedContext['users'];
     await tx.flush();

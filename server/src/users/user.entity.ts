@@ -14,6 +14,7 @@ export class User extends BaseEntity<
   | 'totpPendingSecret'
   | 'totpEnabledAt'
   | 'totpLastStep'
+  | 'emailConfirmedAt'
 > {
   @Property({ type: 'text' })
   @Unique()
@@ -41,6 +42,10 @@ export class User extends BaseEntity<
   /** The stage-numbering set the user reads brood stages in (docs/rules.md, Stage numbering). */
   @Enum({ items: [...STAGE_NUMBERINGS] })
   stageNumbering: StageNumbering = 'us';
+
+  /** When the owner of the address opened the confirmation link; an account without it cannot sign in yet. */
+  @Property({ type: 'timestamptz', nullable: true })
+  emailConfirmedAt?: Date | null = null;
 
   /** Bumped on logout and password change: every JWT carries it, so older tokens stop working. */
   @Property({ type: 'integer' })

@@ -1,5 +1,6 @@
 import type { Language } from '../i18n/words.js';
 import type { StageNumbering } from '../breeding/brood-stage.js';
+import type { AcceptInvitationResponse } from '../projects/invitations.types.js';
 export const ACCOUNT_ROLES = ['keeper', 'admin'] as const;
 export type AccountRole = (typeof ACCOUNT_ROLES)[number];
 
@@ -15,7 +16,36 @@ export interface RegisterRequest {
   timeZone?: string;
   /** The browser's language at registration, when Broodsilk speaks it. */
   language?: Language;
+  /** The token of the invitation link that led here; confirming the address accepts it. */
+  invitationToken?: string;
 }
+
+/** `POST /auth/register` answers 202 with this, the same for a new and a taken address; nobody is signed in. */
+export interface RegisterResponse {
+  message: string;
+}
+
+/** How long the link in the confirmation e-mail works. */
+export const EMAIL_CONFIRMATION_HOURS = 24;
+
+export interface EmailConfirmationRequest {
+  token: string;
+}
+
+export interface EmailConfirmationResendRequest {
+  email: string;
+}
+
+/** What confirming the address did: a session (none when the account also needs a second factor), and the invitation it carried. */
+export interface EmailConfirmationResult {
+  session: LoginResponse | null;
+  invitation: AcceptInvitationResponse | null;
+  /** Why the carried invitation could not be used (expired, replaced, already accepted). */
+  invitationProblem?: string;
+}
+
+/** `reason` of the 403 a right password gets before the address is confirmed. */
+export const EMAIL_NOT_CONFIRMED = 'email-not-confirmed';
 
 export interface LoginRequest {
   email: string;

@@ -14,4 +14,6 @@ export interface ApiErrorBody {
   error: string;
   message: string;
   details?: FieldError[];
+  /** A machine-readable reason where the client offers a next step (e.g. `EMAIL_NOT_CONFIRMED`). */
+  reason?: string;
 }

@@ -1,5 +1,6 @@
 import type { Widen } from './catalogue-shape.js';
 import { pagesEn } from './pages/index.js';
+import { partnerUpdatesEn } from './partner-updates.js';
 
 /**
  * Every word for a shared state, in English. Keys are the shared enums' own values, so a new value
@@ -79,7 +80,13 @@ export const en = {
   entryStatus: { 'in-force': 'Counts', reversed: 'Reversed', 'awaiting-confirmation': 'Waiting for confirmation', 'left-out': 'Left out' },
   /** Timeline headings, by the event kind's dotted name (`pairing.recorded` → pairing.recorded). */
   activityKind: {
-    project: { created: 'Project started', updated: 'Project changed', ended: 'Project ended early' },
+    project: {
+      created: 'Project started',
+      updated: 'Project changed',
+      ended: 'Project ended early',
+      reopened: 'Project reopened',
+      closed: 'Project closed',
+    },
     member: { added: 'Member added', joined: 'Member joined', removed: 'Member removed' },
     invitation: { sent: 'Invitation sent', claimed: 'Invitation accepted' },
     pairing: { recorded: 'Pairing recorded', corrected: 'Pairing corrected' },
@@ -90,6 +97,7 @@ export const en = {
       updated: 'Sac changed',
       failed: 'Sac failed',
       opened: 'Sac opened',
+      'left-with-mother': 'Sac left with the mother',
       'opening-corrected': 'Opening corrected',
     },
     brood: { counted: 'Young counted', corrected: 'Count corrected' },
@@ -112,6 +120,8 @@ export const en = {
       confirmation: 'Payment confirmed',
     },
     male: { returned: 'Male returned', died: 'Male died' },
+    'progress-link': { issued: 'Progress link sent', revoked: 'Progress link revoked' },
+    female: { molted: 'Female molted after pairing' },
   },
   activityKindOther: 'Activity',
   notificationKind: {
@@ -124,6 +134,7 @@ export const en = {
     'female-molted': 'A female molted after pairing',
     'loan-due-back': 'A loaned animal is due back in 7 days',
     'daily-digest': 'The daily digest',
+    'partner-update': 'News from a project you are a partner in',
   },
   /** Stage names in the chosen numbering set (docs/rules.md, Stage numbering). */
   broodStage: {
@@ -205,6 +216,8 @@ export const en = {
     broodCountLost: '{{about}}{{alive}} alive at {{stage}}, {{lost}} lost ({{reason}})',
     about: 'about ',
     memberRemoved: 'Removed {{name}} ({{role}}).',
+    progressLinkIssued: 'Made a new progress link for {{name}}; earlier links no longer open.',
+    progressLinkRevoked: 'Revoked the progress link of {{name}}.',
   },
   statement: {
     title: 'Broodsilk account statement',
@@ -247,6 +260,8 @@ export const en = {
     shippingHeading: 'Shipping live invertebrates',
   },
   page: pagesEn,
+  /** What partners read when something is recorded in their project (in-app and e-mail). */
+  partnerUpdate: partnerUpdatesEn,
   calendar: {
     pullWindow: 'Pull window: {{project}}',
     where: '{{project}}, sac laid {{layDate}}',

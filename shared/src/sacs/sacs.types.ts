@@ -62,6 +62,8 @@ export interface UpdateSacRequest {
   pulledAt?: string | null;
   outcome?: SacOutcomeState;
   failureReason?: SacFailureReason | null;
+  /** Only with the outcome `failed`: the keeper's own words, sent to every partner with the facts. */
+  partnerMessage?: string;
   /** Both set, or both null to fall back to the species / default window. */
   pullFromDay?: number | null;
   pullToDay?: number | null;
@@ -155,4 +157,20 @@ export interface SacResponse {
   incubatorCaution: string | null;
   createdAt: string;
   updatedAt: string;
+}
+
+/** Asks what the partners will read if the sac is recorded as failed now (nothing is written). */
+export interface FailureNoticePreviewRequest {
+  failureReason: SacFailureReason;
+  partnerMessage?: string;
+}
+
+/** The update as a partner reads it, in the keeper's language, and how many will get it. */
+export interface FailureNoticePreview {
+  title: string;
+  body: string;
+  /** Partners with an account (in-app and e-mail as they chose). */
+  members: number;
+  /** Partners without an account who have an e-mail address (e-mail only). */
+  outsideParties: number;
 }

@@ -1,4 +1,4 @@
-import { IsEmail, IsIn, IsNotEmpty, IsString, MaxLength } from 'class-validator';
+import { IsEmail, IsIn, IsNotEmpty, IsString, Length, MaxLength } from 'class-validator';
 import { IsAcceptablePassword } from './is-acceptable-password.validator';
 import { Transform } from 'class-transformer';
 import { LANGUAGES, type Language, type RegisterRequest } from '@broodsilk/shared';
@@ -27,4 +27,9 @@ export class RegisterDto implements RegisterRequest {
   @IsOptionalNonNull()
   @IsIn(LANGUAGES, { message: `Choose one of the languages ${LANGUAGES.join(', ')}.` })
   language?: Language;
+
+  @IsOptionalNonNull()
+  @IsString()
+  @Length(20, 200, { message: 'This invitation link is not valid. Check that you copied all of it.' })
+  invitationToken?: string;
 }

@@ -24,13 +24,15 @@ export function errorBody(exception: unknown): ApiErrorBody {
     const raw = exception.getResponse();
     let message = exception.message;
     let details: FieldError[] | undefined;
+    let reason: string | undefined;
     if (typeof raw === 'object' && raw !== null) {
-      const r = raw as { message?: unknown; details?: FieldError[] };
+      const r = raw as { message?: unknown; details?: FieldError[]; reason?: unknown };
       if (typeof r.message === 'string') message = r.message;
       else if (Array.isArray(r.message)) message = r.message.join('; ');
       if (Array.isArray(r.details)) details = r.details;
+      if (typeof r.reason === 'string') reason = r.reason;
     }
-    return { statusCode: status, error: REASON[status] ?? 'Error', message, ...(details ? { details } : {}) };
+    return { statusCode: status, error: REASON[status] ?? 'Error', message, ...(details ? { details } : {}), ...(reason ? { reason } : {}) };
   }
   if (exception instanceof NotFoundError) {
     return { statusCode: 404, error: REASON[404], message: 'That record does not exist or is not yours to see.' };

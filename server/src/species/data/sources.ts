@@ -24,6 +24,9 @@ export const SRC = {
   haukeHerzig2020: pub(
     'Hauke, T.J. & Herzig, V. 2020. Preprint doi:10.20944/preprints202012.0145.v1 (cramps most frequent after bites of Poecilotheriinae, Harpactirinae and Stromatopelminae)',
   ),
+  handwikiPsalmopoeus: pub(
+    'HandWiki, "Psalmopoeus irminia" (Psalmopoeus described as having stronger venom than other New World tarantulas; no medically significant case given)',
+  ),
   carrim2010: pub('Carrim, Z.I. et al. 2010. Case report, The Lancet (urticating hairs of Grammostola in the cornea)'),
   dorHenaut2012: pub(
     'Dor, A. & Hénaut, Y. 2012. Silk use and spiderling behavior in the tarantula Brachypelma vagans. Acta Zoológica Mexicana 28(1) (200 young per sac, n = 2)',

@@ -1,4 +1,4 @@
-import type { NumberRange, SpeciesGroup, Sourced, ValueSource } from '@broodsilk/shared';
+import type { NumberRange, SpeciesGroup, Sourced, ValueSource, VenomFlag } from '@broodsilk/shared';
 import { SRC, WSC_VERSION, memo } from './sources';
 import { COMMON_NAMES } from './common-names.data';
 
@@ -17,7 +17,8 @@ export interface SpeciesDataRow {
   commonNames: string[];
   nameSource: ValueSource;
   urticatingHairs: Sourced<boolean>;
-  medicallySignificantVenom: Sourced<boolean>;
+  /** What is known about its bite: three values, never a guess (docs/trade-facts.md §9). */
+  venom: Sourced<VenomFlag>;
   tradeListing: Sourced<string | null>;
   pullWindow?: Sourced<{ fromDay: number; toDay: number }>;
   pairingToSacDays?: Sourced<NumberRange>;
@@ -33,6 +34,9 @@ const NAME_FROM_WSC = memo('name and authority as given by World Spider Catalog 
 const HAIRS_NW = memo('New World theraphosines flick urticating hairs');
 const NO_HAIRS_OW = memo('Old World theraphosids have no urticating hairs');
 const NO_VENOM_NOTE = memo('no published case of severe systemic effects known to us');
+/** Old World species with no published bite account: nobody knows, so the group's caution applies. */
+export const OW_NOT_KNOWN_NOTE = 'no published bite account found for this species; several Old World genera caused severe cramps';
+const OW_NOT_KNOWN = memo(OW_NOT_KNOWN_NOTE);
 const NOT_LISTED = memo('not in the CITES appendices as far as we know');
 const CITES_II = 'CITES Appendix II';
 
@@ -50,7 +54,7 @@ function sp(scientificName: string, authority: string, group: SpeciesGroup, o: O
     commonNames: o.commonNames ?? COMMON_NAMES[scientificName] ?? [],
     nameSource: o.nameSource ?? NAME_FROM_WSC,
     urticatingHairs: o.urticatingHairs ?? { value: nw, source: nw ? HAIRS_NW : NO_HAIRS_OW },
-    medicallySignificantVenom: o.medicallySignificantVenom ?? { value: false, source: NO_VENOM_NOTE },
+    venom: o.venom ?? (group.startsWith('ow') ? { value: 'not-known', source: OW_NOT_KNOWN } : { value: 'no-cases-known', source: NO_VENOM_NOTE }),
     tradeListing: o.tradeListing ?? { value: null, source: NOT_LISTED },
     ...(o.pullWindow ? { pullWindow: o.pullWindow } : {}),
     ...(o.pairingToSacDays ? { pairingToSacDays: o.pairingToSacDays } : {}),
@@ -64,6 +68,8 @@ const pull = (fromDay: number, toDay: number, genus: string): Sourced<{ fromDay:
   value: { fromDay, toDay },
   source: memo(`usual pull days for ${genus}`),
 });
+/** Dor & Hénaut 2012 counted 200 young in each of two sacs (docs/trade-facts.md §6, check value 3). */
+export const TLIL_VAGANS_EGGS_SOURCE: ValueSource = { ...SRC.dorHenaut2012, sampleSize: { count: 2, unit: 'sacs' } };
 const range = (min: number, max: number, source: ValueSource): Sourced<NumberRange> => ({ value: { min, max }, source });
 
 const tlil = (o: Options): Options => ({
@@ -80,7 +86,7 @@ const brachy = (o: Options = {}): Options => ({
 });
 const grammo = (o: Options = {}): Options => ({ pullWindow: pull(30, 45, 'Grammostola'), ...o });
 const poeci = (o: Options = {}): Options => ({
-  medicallySignificantVenom: { value: true, source: SRC.fuchs2014 },
+  venom: { value: 'medically-significant', source: SRC.fuchs2014 },
   tradeListing: { value: CITES_II, source: memo('proposed in CITES CoP18 Prop. 46 (2019); its adoption is recalled, not checked') },
   pullWindow: pull(21, 30, 'Poecilotheria'),
   eggsPerSac: range(50, 150, memo('Poecilotheria range')),
@@ -89,12 +95,15 @@ const poeci = (o: Options = {}): Options => ({
 const aviculariine = (o: Options = {}): Options => ({ pullWindow: pull(21, 30, 'Avicularia and Caribena'), ...o });
 const psalmo = (o: Options = {}): Options => ({
   urticatingHairs: { value: false, source: memo('Psalmopoeus has no urticating hairs') },
+  venom: { value: 'not-known', source: SRC.handwikiPsalmopoeus },
   pullWindow: pull(21, 30, 'Psalmopoeus'),
   eggsPerSac: range(80, 200, memo('Psalmopoeus range')),
   ...o,
 });
 // Bites of harpactirines and stromatopelmines most often caused pronounced cramps (Hauke & Herzig 2020).
-const cramps = (source: ValueSource = SRC.haukeHerzig2020): Options => ({ medicallySignificantVenom: { value: true, source } });
+const cramps = (source: ValueSource = SRC.haukeHerzig2020): Options => ({ venom: { value: 'medically-significant', source } });
+// Old World burrowers in the fossorial group: no published bite account, so not known (the group default is for New World ones).
+const owBurrower: Options = { venom: { value: 'not-known', source: OW_NOT_KNOWN } };
 
 export const SPECIES_DATA: SpeciesDataRow[] = [
   // New World terrestrial
@@ -104,7 +113,8 @@ export const SPECIES_DATA: SpeciesDataRow[] = [
     'nw-terrestrial',
     tlil({
       formerNames: ['Eurypelma vagans', 'Brachypelma vagans', 'Euathlus vagans'],
-      eggsPerSac: range(200, 200, SRC.dorHenaut2012),
+      // One figure from two lab-reared sacs: shown as "about 200, n = 2 sacs", never as a range.
+      eggsPerSac: range(200, 200, TLIL_VAGANS_EGGS_SOURCE),
     }),
   ),
   sp(
@@ -259,13 +269,14 @@ export const SPECIES_DATA: SpeciesDataRow[] = [
 
   // Fossorial
   sp('Pelinobius muticus', 'Karsch, 1885', 'fossorial', {
+    ...owBurrower,
     formerNames: ['Citharischius crawshayi'],
     eggsPerSac: range(1000, 2000, {
       ...SRC.tarantulaspiderNet,
       note: 'more than 1000 per the source; 2000 is the family-wide maximum (vogelspinnen-seite.de)',
     } as ValueSource),
   }),
-  sp('Cyriopagopus lividus', '(Smith, 1996)', 'fossorial', { formerNames: ['Haplopelma lividum'] }),
+  sp('Cyriopagopus lividus', '(Smith, 1996)', 'fossorial', { ...owBurrower, formerNames: ['Haplopelma lividum'] }),
   sp('Idiothele mira', 'Gallon, 2010', 'fossorial', cramps()),
   sp('Ephebopus murinus', '(Walckenaer, 1837)', 'fossorial', {
     urticatingHairs: { value: true, source: memo('Ephebopus carries urticating hairs on the palps') },

@@ -2,6 +2,7 @@ import type { Widen } from '../catalogue-shape.js';
 
 /** Page text: sac pages, incubator, opening, counts (client/src/features/sacs). English first; German must fill the same keys. */
 export const sacsEn = {
+  careLogOlder: 'Show older entries',
   laidOn: 'Sac laid {{date}}',
   dayN: 'Day {{day}}',
   noSacYet: 'No sac yet.',
@@ -59,9 +60,6 @@ export const sacsEn = {
     readingOutside: 'Reading outside the band',
     alertLogged: '{{alert}}, logged {{at}}.',
     emerged: 'The young have emerged',
-    failed: 'The sac failed',
-    reason: 'Reason',
-    recordFailed: 'Record as failed',
     pullNotSaved: 'The pull was not saved. Try again.',
   },
   incubator: {
@@ -124,6 +122,7 @@ export const sacsEn = {
 } as const;
 
 export const sacsDe: Widen<typeof sacsEn> = {
+  careLogOlder: 'Ältere Einträge anzeigen',
   laidOn: 'Kokon vom {{date}}',
   dayN: 'Tag {{day}}',
   noSacYet: 'Noch kein Kokon.',
@@ -185,9 +184,6 @@ export const sacsDe: Widen<typeof sacsEn> = {
     readingOutside: 'Messwert außerhalb des Zielbereichs',
     alertLogged: '{{alert}}, eingetragen {{at}}.',
     emerged: 'Die Jungtiere sind geschlüpft',
-    failed: 'Der Kokon ist verdorben',
-    reason: 'Grund',
-    recordFailed: 'Als verdorben eintragen',
     pullNotSaved: 'Die Entnahme wurde nicht gespeichert. Bitte noch einmal versuchen.',
   },
   incubator: {

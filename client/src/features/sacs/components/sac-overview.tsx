@@ -1,11 +1,12 @@
-import { Alert, Badge, Button, Card, Group, Select, SimpleGrid, Switch, Text } from '@mantine/core';
+import { Alert, Badge, Button, Card, Group, SimpleGrid, Switch, Text } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
 import { useState } from 'react';
-import { SAC_FAILURE_REASONS, type SacFailureReason, type SacResponse, type TemperatureUnit } from '@broodsilk/shared';
+import type { SacResponse, TemperatureUnit } from '@broodsilk/shared';
 import { formatInstant } from '@/lib/dates';
 import { isApiError } from '@/lib/api-error';
 import { usePullSac, useUpdateSac } from '../api/sacs';
 import { PullConfirmation } from './pull-confirmation';
+import { FailureForm } from './failure-form';
 import { broodLabel, midSentence, PULL_WINDOW_TEXT, pullWindowSentence, readingAlertText, ROLL_TEXT, SAC_OUTCOME_TEXT } from '../utils/sac-view';
 import { catalogueLabels, useWords, words } from '@/lib/i18n';
 
@@ -30,7 +31,6 @@ export function SacOverview({ sac, timeZone, temperatureUnit }: { sac: SacRespon
   const pull = usePullSac(sac.id);
   const [pulling, pullDialog] = useDisclosure(false);
   const [error, setError] = useState<string | null>(null);
-  const [failure, setFailure] = useState<string | null>(null);
   const w = sac.pullWindow;
   const windowText = PULL_WINDOW_TEXT[w.state];
 
@@ -153,25 +153,9 @@ export function SacOverview({ sac, timeZone, temperatureUnit }: { sac: SacRespon
           <Button variant="light" loading={update.isPending} onClick={() => change({ outcome: 'emerged' })}>
             {t('page.sacs.overview.emerged')}
           </Button>
-          <Select
-            label={t('page.sacs.overview.failed')}
-            placeholder={t('page.sacs.overview.reason')}
-            data={SAC_FAILURE_REASONS.map((r) => ({ value: r, label: FAILURE_LABELS[r] }))}
-            value={failure}
-            onChange={setFailure}
-            w={220}
-          />
-          <Button
-            variant="light"
-            color="clay"
-            disabled={!failure}
-            loading={update.isPending}
-            onClick={() => change({ outcome: 'failed', failureReason: failure as SacFailureReason })}
-          >
-            {t('page.sacs.overview.recordFailed')}
-          </Button>
         </Group>
       )}
+      {canEdit && sac.outcome === 'in-progress' && <FailureForm sacId={sac.id} />}
       {error && (
         <Alert color="clay" role="alert" style={{ gridColumn: '1 / -1' }}>
           {error}
