@@ -1,9 +1,11 @@
 import { PublicLayout } from '@/components/layouts/public-layout';
 import { ForgotPasswordForm } from '@/features/auth/components/forgot-password-form';
+import { useWords } from '@/lib/i18n';
 
 export function Component() {
+  const t = useWords();
   return (
-    <PublicLayout title="Reset your password" subtitle="We e-mail you a link that works once, within 45 minutes.">
+    <PublicLayout title={t('page.auth.forgotTitle')} subtitle={t('page.auth.forgotSubtitle')}>
       <ForgotPasswordForm />
     </PublicLayout>
   );

@@ -11,6 +11,7 @@ import { calendarQueries } from '@/features/dashboard/api/calendar-feed';
 import { CalendarFeedCard } from '@/features/dashboard/components/calendar-feed-card';
 import { DashboardView } from '@/features/dashboard/components/dashboard-view';
 import { preloadPanels } from '../preload';
+import { useWords } from '@/lib/i18n';
 
 export const clientLoader = (qc: QueryClient) => async () => {
   // Start loading early without waiting; the page shows its own loader and error.
@@ -19,21 +20,22 @@ export const clientLoader = (qc: QueryClient) => async () => {
 };
 
 export function Component() {
+  const t = useWords();
   const { data: me } = useMe();
   const dashboard = useDashboard();
   if (!me) return null;
   return (
     <Stack>
       <PageHeader
-        title="Today"
+        title={t('page.dashboard.title')}
         description={todayLabel(me.timeZone)}
         actions={
           <Group gap="xs">
             <Button component={Link} to={paths.incubator.href()} variant="light">
-              Incubator
+              {t('page.dashboard.incubator')}
             </Button>
             <Button component={Link} to={paths.newProject.href()}>
-              New project
+              {t('page.dashboard.newProject')}
             </Button>
           </Group>
         }

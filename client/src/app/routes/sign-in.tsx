@@ -6,16 +6,18 @@ import { PublicLayout } from '@/components/layouts/public-layout';
 import { SignInForm } from '@/features/auth/components/sign-in-form';
 import { safeNext } from './safe-next';
 import { paths } from '@/config/paths';
+import { useWords } from '@/lib/i18n';
 
 /** An administrator who must set up a second factor is sent to it before anything else. */
 const mustEnrol = (me: Me | null | undefined) => !!me && me.secondFactorRequired && !me.secondFactorEnabled;
 
 export function Component() {
+  const t = useWords();
   const navigate = useNavigate();
   const qc = useQueryClient();
   const [params] = useSearchParams();
   return (
-    <PublicLayout title="Sign in to Broodsilk" subtitle="Your pairings, sacs and partner accounts in one place.">
+    <PublicLayout title={t('page.auth.signInTitle')} subtitle={t('page.auth.signInSubtitle')}>
       <SignInForm
         onSignedIn={() =>
           navigate(mustEnrol(qc.getQueryData<Me | null>(meQueryKey)) ? `${paths.settings.href()}#security` : safeNext(params.get('next')), { replace: true })

@@ -1,6 +1,80 @@
 import type { Widen } from '../catalogue-shape.js';
 
-/** Page text: Today and the dashboard cards (client/src/features/dashboard). English first; German must fill the same keys. */
-export const dashboardEn = {} as const;
+/** Page text: the Today page and its cards (client/src/features/dashboard, app/routes/home). English first; German must fill the same keys. */
+export const dashboardEn = {
+  title: 'Today',
+  incubator: 'Incubator',
+  newProject: 'New project',
+  nothingToDo: 'Nothing needs doing right now.',
+  sacLine: 'Day {{day}} · laid {{date}}',
+  todos: {
+    title: 'Terms, hand-overs and money',
+    none: 'Nothing to accept, confirm or pay.',
+    terms: 'Terms version {{version}} waits for your acceptance',
+    arrival: 'Confirm the arrival of {{count}} young handed over to {{party}} on {{date}}',
+    youOwe: 'You owe {{other}} {{amount}}',
+    owesYou: '{{other}} owes you {{amount}}',
+  },
+  activity: { title: 'From your partners', none: 'Nothing new from others.' },
+  feed: {
+    title: 'Calendar feed',
+    text: 'Pull windows and rolls in your phone’s calendar. Keep this address to yourself: anyone who has it can read your dates.',
+    notLoaded: 'The feed address could not be loaded: {{reason}}',
+    address: 'Calendar feed address',
+    copied: 'Copied',
+    copy: 'Copy',
+    replace: 'Replace the address',
+  },
+  males: { title: 'Mature males', none: 'No mature male in your collection.', day: 'day {{day}}', dayLeft: 'day {{day}} · {{left}} d left' },
+  projects: { title: 'Open projects', none: 'No open project.', start: 'Start one.' },
+  pull: { title: 'Pull windows open', none: 'No pull window is open today.' },
+  readings: { title: 'Readings outside the band' },
+  rolls: { title: 'Rolls', none: 'No roll is due.', log: 'Log a roll' },
+  upcoming: {
+    title: 'Upcoming pull windows (30 days)',
+    none: 'None in the next 30 days.',
+    day: 'day {{day}}',
+    closing: 'Closing',
+    open: 'Open now',
+    opensIn: 'Opens in {{days}} d',
+  },
+} as const;
 
-export const dashboardDe: Widen<typeof dashboardEn> = {};
+export const dashboardDe: Widen<typeof dashboardEn> = {
+  title: 'Heute',
+  incubator: 'Inkubator',
+  newProject: 'Neues Projekt',
+  nothingToDo: 'Gerade ist nichts zu tun.',
+  sacLine: 'Tag {{day}} · gebaut am {{date}}',
+  todos: {
+    title: 'Bedingungen, Übergaben und Geld',
+    none: 'Nichts anzunehmen, zu bestätigen oder zu bezahlen.',
+    terms: 'Version {{version}} der Bedingungen wartet auf deine Zustimmung',
+    arrival: 'Bestätige die Ankunft von {{count}} Jungtieren, übergeben an {{party}} am {{date}}',
+    youOwe: 'Du schuldest {{other}} {{amount}}',
+    owesYou: '{{other}} schuldet dir {{amount}}',
+  },
+  activity: { title: 'Von deinen Partnern', none: 'Nichts Neues von anderen.' },
+  feed: {
+    title: 'Kalender-Abo',
+    text: 'Entnahmefenster und Drehtermine im Kalender deines Handys. Behalte diese Adresse für dich: Wer sie hat, kann deine Termine lesen.',
+    notLoaded: 'Die Adresse des Kalender-Abos konnte nicht geladen werden: {{reason}}',
+    address: 'Adresse des Kalender-Abos',
+    copied: 'Kopiert',
+    copy: 'Kopieren',
+    replace: 'Adresse ersetzen',
+  },
+  males: { title: 'Adulte Männchen', none: 'Kein adultes Männchen in deiner Sammlung.', day: 'Tag {{day}}', dayLeft: 'Tag {{day}} · noch {{left}} T.' },
+  projects: { title: 'Offene Projekte', none: 'Kein offenes Projekt.', start: 'Starte eins.' },
+  pull: { title: 'Offene Entnahmefenster', none: 'Heute ist kein Entnahmefenster offen.' },
+  readings: { title: 'Messwerte außerhalb des Zielbereichs' },
+  rolls: { title: 'Drehen', none: 'Kein Drehen fällig.', log: 'Drehen eintragen' },
+  upcoming: {
+    title: 'Kommende Entnahmefenster (30 Tage)',
+    none: 'Keins in den nächsten 30 Tagen.',
+    day: 'Tag {{day}}',
+    closing: 'Schließt bald',
+    open: 'Jetzt offen',
+    opensIn: 'Öffnet in {{days}} T.',
+  },
+};

@@ -4,8 +4,10 @@ import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useRequestPasswordReset } from '../api/password-reset';
+import { useWords } from '@/lib/i18n';
 
 export function ForgotPasswordForm() {
+  const t = useWords();
   const request = useRequestPasswordReset();
   const [answer, setAnswer] = useState<{ ok: boolean; text: string } | null>(null);
   const form = useForm({ mode: 'uncontrolled', initialValues: { email: '' } });
@@ -24,8 +26,8 @@ export function ForgotPasswordForm() {
             {answer.text}
           </Alert>
         )}
-        <TextInput label="E-mail" type="email" withAsterisk key={form.key('email')} {...form.getInputProps('email')} />
-        <FormActions message={answer && !answer.ok ? answer.text : null} loading={request.isPending} submitLabel="Send me a reset link" />
+        <TextInput label={t('page.auth.email')} type="email" withAsterisk key={form.key('email')} {...form.getInputProps('email')} />
+        <FormActions message={answer && !answer.ok ? answer.text : null} loading={request.isPending} submitLabel={t('page.auth.sendLink')} />
       </Stack>
     </form>
   );

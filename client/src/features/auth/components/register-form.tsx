@@ -9,18 +9,22 @@ import { textRule } from '@/components/fields/text-rule';
 import { FormActions } from '@/components/ui/form-actions';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useRegister } from '../api/session';
+import { useWords } from '@/lib/i18n';
 
 export function RegisterForm({ onRegistered, signInHref }: { onRegistered: () => void; signInHref: string }) {
+  const t = useWords();
   const register = useRegister();
   const [problem, setProblem] = useState<string | null>(null);
   const form = useForm({
     mode: 'uncontrolled',
     initialValues: { displayName: '', email: '', password: '', timeZone: browserTimeZone() },
     validate: {
-      displayName: textRule({ required: 'Tell us the name to show to your partners.', maxLength: TEXT_LIMITS.displayName }),
-      email: (v) => (/^\S+@\S+\.\S+$/.test(v.trim()) ? null : 'Enter a valid e-mail address.'),
+      displayName: textRule({ required: t('page.auth.nameRequired'), maxLength: TEXT_LIMITS.displayName }),
+      email: (v) => (/^\S+@\S+\.\S+$/.test(v.trim()) ? null : t('page.auth.validEmail')),
       password: (v) =>
-        v.length < MIN_PASSWORD_LENGTH ? `Use a password of at least ${MIN_PASSWORD_LENGTH} characters.` : textRule({ maxLength: TEXT_LIMITS.password })(v),
+        v.length < MIN_PASSWORD_LENGTH
+          ? t('page.settings.password.tooShort', { count: MIN_PASSWORD_LENGTH })
+          : textRule({ maxLength: TEXT_LIMITS.password })(v),
     },
   });
 
@@ -33,15 +37,15 @@ export function RegisterForm({ onRegistered, signInHref }: { onRegistered: () =>
     >
       <Stack>
         <TextField
-          label="Your name"
-          description="Shown to your partners"
+          label={t('page.auth.yourName')}
+          description={t('page.auth.yourNameHint')}
           maxLength={TEXT_LIMITS.displayName}
           withAsterisk
           key={form.key('displayName')}
           {...form.getInputProps('displayName')}
         />
         <TextField
-          label="E-mail"
+          label={t('page.auth.email')}
           type="email"
           autoComplete="email"
           maxLength={TEXT_LIMITS.email}
@@ -50,8 +54,8 @@ export function RegisterForm({ onRegistered, signInHref }: { onRegistered: () =>
           {...form.getInputProps('email')}
         />
         <PasswordInput
-          label="Password"
-          description={`At least ${MIN_PASSWORD_LENGTH} characters`}
+          label={t('page.auth.password')}
+          description={t('page.auth.atLeast', { count: MIN_PASSWORD_LENGTH })}
           autoComplete="new-password"
           required
           key={form.key('password')}
@@ -59,15 +63,15 @@ export function RegisterForm({ onRegistered, signInHref }: { onRegistered: () =>
         />
         <TimeZoneField
           current={form.getValues().timeZone}
-          description="Taken from this browser. Dates and what is due today follow it; change it here or later in Settings."
+          description={t('page.auth.zoneHint')}
           key={form.key('timeZone')}
           {...form.getInputProps('timeZone')}
         />
-        <FormActions message={problem} loading={register.isPending} submitLabel="Create account" />
+        <FormActions message={problem} loading={register.isPending} submitLabel={t('page.auth.createAccountButton')} />
         <Text size="sm">
-          Already have an account?{' '}
+          {t('page.auth.haveAccount')}{' '}
           <Anchor component={Link} to={signInHref}>
-            Sign in
+            {t('page.auth.signIn')}
           </Anchor>
         </Text>
       </Stack>

@@ -5,14 +5,16 @@ import { useState } from 'react';
 import { MIN_PASSWORD_LENGTH } from '@broodsilk/shared';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useConfirmPasswordReset } from '../api/password-reset';
+import { useWords } from '@/lib/i18n';
 
 export function ResetPasswordForm({ token, onDone }: { token: string; onDone: () => void }) {
+  const t = useWords();
   const confirm = useConfirmPasswordReset();
   const [problem, setProblem] = useState<string | null>(null);
   const form = useForm({
     mode: 'uncontrolled',
     initialValues: { password: '' },
-    validate: { password: (v) => (v.length >= MIN_PASSWORD_LENGTH ? null : `Use a password of at least ${MIN_PASSWORD_LENGTH} characters.`) },
+    validate: { password: (v) => (v.length >= MIN_PASSWORD_LENGTH ? null : t('page.settings.password.tooShort', { count: MIN_PASSWORD_LENGTH })) },
   });
   return (
     <form
@@ -21,8 +23,14 @@ export function ResetPasswordForm({ token, onDone }: { token: string; onDone: ()
       )}
     >
       <Stack>
-        <PasswordInput label="New password" autoComplete="new-password" withAsterisk key={form.key('password')} {...form.getInputProps('password')} />
-        <FormActions message={problem} loading={confirm.isPending} submitLabel="Set new password" />
+        <PasswordInput
+          label={t('page.settings.password.new')}
+          autoComplete="new-password"
+          withAsterisk
+          key={form.key('password')}
+          {...form.getInputProps('password')}
+        />
+        <FormActions message={problem} loading={confirm.isPending} submitLabel={t('page.auth.setPassword')} />
       </Stack>
     </form>
   );

@@ -7,6 +7,7 @@ import { textRule } from '@/components/fields/text-rule';
 import { FormActions } from '@/components/ui/form-actions';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useSecondFactorSignIn } from '../api/session';
+import { useWords } from '@/lib/i18n';
 
 /** The second step of signing in: the code from the authenticator app, or one recovery code. */
 export function SecondFactorStep({
@@ -18,13 +19,14 @@ export function SecondFactorStep({
   onSignedIn: () => void;
   onStartAgain: () => void;
 }) {
+  const t = useWords();
   const complete = useSecondFactorSignIn();
   const [problem, setProblem] = useState<string | null>(null);
   const form = useForm({
     mode: 'uncontrolled',
     validateInputOnBlur: true,
     initialValues: { code: '' },
-    validate: { code: textRule({ required: 'Enter the code your app shows, or a recovery code.', maxLength: TEXT_LIMITS.secondFactorCode }) },
+    validate: { code: textRule({ required: t('page.auth.codeRequired'), maxLength: TEXT_LIMITS.secondFactorCode }) },
   });
   return (
     <form
@@ -34,10 +36,10 @@ export function SecondFactorStep({
       })}
     >
       <Stack>
-        <Text>Your password is right. Now enter the six-digit code your authenticator app shows for Broodsilk.</Text>
+        <Text>{t('page.auth.codeText')}</Text>
         <TextField
-          label="Code"
-          description="Lost your phone? Enter one of your recovery codes instead."
+          label={t('page.auth.code')}
+          description={t('page.auth.codeHint')}
           autoComplete="one-time-code"
           withAsterisk
           data-autofocus
@@ -45,10 +47,10 @@ export function SecondFactorStep({
           key={form.key('code')}
           {...form.getInputProps('code')}
         />
-        <FormActions message={problem} loading={complete.isPending} submitLabel="Sign in" />
+        <FormActions message={problem} loading={complete.isPending} submitLabel={t('page.auth.signIn')} />
         <Text size="sm">
           <Anchor component="button" type="button" onClick={onStartAgain}>
-            Start again with your e-mail and password
+            {t('page.auth.startAgain')}
           </Anchor>
         </Text>
       </Stack>

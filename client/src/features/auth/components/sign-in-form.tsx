@@ -8,9 +8,11 @@ import { paths } from '@/config/paths';
 import { needsSecondFactor, type SecondFactorChallenge } from '@broodsilk/shared';
 import { useLogin } from '../api/session';
 import { SecondFactorStep } from './second-factor-step';
+import { useWords } from '@/lib/i18n';
 
 /** `registerHref` lets the sign-in page keep where the user was going (e.g. an invitation) when they register instead. */
 export function SignInForm({ onSignedIn, registerHref = paths.register.href() }: { onSignedIn: () => void; registerHref?: string }) {
+  const t = useWords();
   const login = useLogin();
   const [problem, setProblem] = useState<string | null>(null);
   const [challenge, setChallenge] = useState<SecondFactorChallenge | null>(null);
@@ -18,8 +20,8 @@ export function SignInForm({ onSignedIn, registerHref = paths.register.href() }:
     mode: 'uncontrolled',
     initialValues: { email: '', password: '' },
     validate: {
-      email: (v) => (/^\S+@\S+\.\S+$/.test(v.trim()) ? null : 'Enter your e-mail address.'),
-      password: (v) => (v ? null : 'Enter your password.'),
+      email: (v) => (/^\S+@\S+\.\S+$/.test(v.trim()) ? null : t('page.auth.enterEmail')),
+      password: (v) => (v ? null : t('page.auth.enterPassword')),
     },
   });
 
@@ -36,16 +38,22 @@ export function SignInForm({ onSignedIn, registerHref = paths.register.href() }:
       })}
     >
       <Stack>
-        <TextInput label="E-mail" type="email" autoComplete="email" withAsterisk key={form.key('email')} {...form.getInputProps('email')} />
-        <PasswordInput label="Password" autoComplete="current-password" withAsterisk key={form.key('password')} {...form.getInputProps('password')} />
-        <FormActions message={problem} loading={login.isPending} submitLabel="Sign in" />
+        <TextInput label={t('page.auth.email')} type="email" autoComplete="email" withAsterisk key={form.key('email')} {...form.getInputProps('email')} />
+        <PasswordInput
+          label={t('page.auth.password')}
+          autoComplete="current-password"
+          withAsterisk
+          key={form.key('password')}
+          {...form.getInputProps('password')}
+        />
+        <FormActions message={problem} loading={login.isPending} submitLabel={t('page.auth.signIn')} />
         <Text size="sm">
           <Anchor component={Link} to={paths.forgotPassword.href()}>
-            Forgot your password?
+            {t('page.auth.forgot')}
           </Anchor>{' '}
-          · New here?{' '}
+          · {t('page.auth.newHere')}{' '}
           <Anchor component={Link} to={registerHref}>
-            Create an account
+            {t('page.auth.createAccount')}
           </Anchor>
         </Text>
       </Stack>

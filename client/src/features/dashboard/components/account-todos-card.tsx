@@ -2,8 +2,8 @@ import { Anchor, Group, Stack, Text } from '@mantine/core';
 import { Link } from 'react-router';
 import { formatMoney, type DashboardResponse } from '@broodsilk/shared';
 import { paths } from '@/config/paths';
-import { formatDate } from '@/lib/dates';
 import { SectionCard } from '@/components/ui/section-card';
+import { useWords } from '@/lib/i18n';
 
 type Todos = Pick<DashboardResponse['dueToday'], 'termsToAccept' | 'handOversToConfirm' | 'payments'>;
 
@@ -24,21 +24,22 @@ function TodoLine({ projectId, title, text, to }: { projectId: string; title: st
 
 /** Terms waiting for my acceptance, hand-overs waiting for my confirmation, money owed to me or by me. */
 export function AccountTodosCard({ todos }: { todos: Todos }) {
+  const t = useWords();
   const count = todos.termsToAccept.length + todos.handOversToConfirm.length + todos.payments.length;
   return (
-    <SectionCard compact title="Terms, hand-overs and money" testId="card-account-todos" accent={count ? 'amber' : undefined}>
+    <SectionCard compact title={t('page.dashboard.todos.title')} testId="card-account-todos" accent={count ? 'amber' : undefined}>
       {count === 0 && (
         <Text size="sm" c="dimmed">
-          Nothing to accept, confirm or pay.
+          {t('page.dashboard.todos.none')}
         </Text>
       )}
-      {todos.termsToAccept.map((t) => (
+      {todos.termsToAccept.map((terms) => (
         <TodoLine
-          key={`terms-${t.projectId}-${t.version}`}
-          projectId={t.projectId}
-          title={t.projectTitle}
-          text={`Terms version ${t.version} waits for your acceptance`}
-          to={paths.project.href(t.projectId)}
+          key={`terms-${terms.projectId}-${terms.version}`}
+          projectId={terms.projectId}
+          title={terms.projectTitle}
+          text={t('page.dashboard.todos.terms', { version: terms.version })}
+          to={paths.project.href(terms.projectId)}
         />
       ))}
       {todos.handOversToConfirm.map((h) => (
@@ -46,7 +47,7 @@ export function AccountTodosCard({ todos }: { todos: Todos }) {
           key={h.entryId}
           projectId={h.projectId}
           title={h.projectTitle}
-          text={`Confirm the arrival of ${h.count} young handed over to ${h.partyName} on ${formatDate(h.date)}`}
+          text={t('page.dashboard.todos.arrival', { count: h.count, party: h.partyName, date: h.date })}
           to={paths.projectAccount.href(h.projectId)}
         />
       ))}
@@ -57,8 +58,8 @@ export function AccountTodosCard({ todos }: { todos: Todos }) {
           title={p.projectTitle}
           text={
             p.direction === 'owed-by-me'
-              ? `You owe ${p.otherName} ${formatMoney(p.amountMinor, p.currency)}`
-              : `${p.otherName} owes you ${formatMoney(p.amountMinor, p.currency)}`
+              ? t('page.dashboard.todos.youOwe', { other: p.otherName, amount: formatMoney(p.amountMinor, p.currency) })
+              : t('page.dashboard.todos.owesYou', { other: p.otherName, amount: formatMoney(p.amountMinor, p.currency) })
           }
           to={paths.projectAccount.href(p.projectId)}
         />

@@ -1,9 +1,10 @@
 import { screen, within } from '@testing-library/react';
-import { describe, expect, it } from 'vitest';
+import { afterEach, describe, expect, it } from 'vitest';
 import type { DashboardResponse, DashboardSac, RollStatus, SacResponse } from '@broodsilk/shared';
 import { PULLED_TEST_SAC } from '@/testing/sac-incubation-fields';
 import { renderWithProviders } from '@/testing/render';
 import { DashboardView } from './dashboard-view';
+import { i18next } from '@/lib/i18n';
 
 function sac(id: string, roll: { status: RollStatus; due: string } | null, state: SacResponse['pullWindow']['state'] = 'open'): SacResponse {
   return {
@@ -123,5 +124,27 @@ describe('DashboardView', () => {
     renderWithProviders(<DashboardView data={{ ...data, dueToday: { ...nothing, ...todo } }} timeZone="UTC" />);
     expect(within(screen.getByTestId('card-account-todos')).getByText(text)).toBeInTheDocument();
     expect(screen.queryByText('Nothing needs doing right now.')).not.toBeInTheDocument();
+  });
+
+  describe('for a German reader', () => {
+    afterEach(async () => {
+      await i18next.changeLanguage('en');
+    });
+
+    it('says Today in German, with a decimal comma in the reading', async () => {
+      await i18next.changeLanguage('de');
+      const hot = {
+        ...sac('h', { status: 'upcoming', due: '2026-12-01T20:00:00Z' }),
+        readingAlerts: [{ kind: 'temperature' as const, value: 30.5, at: '2026-12-01T06:00:00Z', side: 'above' as const }],
+      };
+      renderWithProviders(<DashboardView data={{ ...data, dueToday: { ...nothing, readings: [item('Hot pair', hot)] } }} timeZone="UTC" />);
+      // Decimal comma: Intl.NumberFormat('de-DE') (CLDR de); band 24–28 °C, docs/trade-facts.md §4.
+      const de = (n: number) => new Intl.NumberFormat('de-DE', { minimumFractionDigits: 1, maximumFractionDigits: 1 }).format(n);
+      expect(within(screen.getByTestId('card-readings')).getByTestId('reading-alert')).toHaveTextContent(
+        `Temperatur ${de(30.5)} °C, über dem Zielbereich (${de(24)} °C bis ${de(28)} °C)`,
+      );
+      expect(within(screen.getByTestId('card-readings')).getByTestId('reading-alert')).toHaveTextContent('Temperatur 30,5 °C');
+      expect(within(screen.getByTestId('card-rolls')).getByText('Kein Drehen fällig.')).toBeInTheDocument();
+    });
   });
 });

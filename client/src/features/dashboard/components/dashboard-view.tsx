@@ -8,6 +8,7 @@ import { ProjectsCard } from './projects-card';
 import { MalesCard } from './males-card';
 import { ActivityCard } from './activity-card';
 import { ReadingsCard } from './readings-card';
+import { useWords } from '@/lib/i18n';
 
 /** Whether Today has anything to do for the viewer: every kind of to-do counts. */
 export function nothingToDo(due: DashboardResponse['dueToday']): boolean {
@@ -16,6 +17,7 @@ export function nothingToDo(due: DashboardResponse['dueToday']): boolean {
 
 /** The home page's cards: what needs doing now first, then what is coming and what others did. */
 export function DashboardView({ data, timeZone, temperatureUnit = 'C' }: { data: DashboardResponse; timeZone: string; temperatureUnit?: TemperatureUnit }) {
+  const t = useWords();
   return (
     <Stack>
       <ReadingsCard readings={data.dueToday.readings} temperatureUnit={temperatureUnit} />
@@ -26,7 +28,7 @@ export function DashboardView({ data, timeZone, temperatureUnit = 'C' }: { data:
       </SimpleGrid>
       {nothingToDo(data.dueToday) && (
         <Text size="sm" className="tone-ok">
-          Nothing needs doing right now.
+          {t('page.dashboard.nothingToDo')}
         </Text>
       )}
       <SimpleGrid cols={{ base: 1, md: 2 }}>

@@ -3,14 +3,16 @@ import type { MaleClockRow } from '@broodsilk/shared';
 import { MALE_CLOCK_LABELS } from '@/lib/i18n';
 import { MALE_CLOCK_TONE } from '@/lib/tones';
 import { SectionCard } from '@/components/ui/section-card';
+import { useWords } from '@/lib/i18n';
 
 /** The viewer's own mature males, most urgent clock first. */
 export function MalesCard({ males }: { males: MaleClockRow[] }) {
+  const t = useWords();
   return (
-    <SectionCard compact title="Mature males" testId="card-males">
+    <SectionCard compact title={t('page.dashboard.males.title')} testId="card-males">
       {males.length === 0 ? (
         <Text size="sm" c="dimmed">
-          No mature male in your collection.
+          {t('page.dashboard.males.none')}
         </Text>
       ) : (
         <Table verticalSpacing={4} fz="sm">
@@ -34,8 +36,9 @@ export function MalesCard({ males }: { males: MaleClockRow[] }) {
                   </Table.Td>
                   <Table.Td>
                     <Text size="xs" c="dimmed">
-                      day {m.clock.daysSinceMaturing}
-                      {m.clock.daysUntilPastTypical > 0 ? ` · ${m.clock.daysUntilPastTypical} d left` : ''}
+                      {m.clock.daysUntilPastTypical > 0
+                        ? t('page.dashboard.males.dayLeft', { day: m.clock.daysSinceMaturing, left: m.clock.daysUntilPastTypical })
+                        : t('page.dashboard.males.day', { day: m.clock.daysSinceMaturing })}
                     </Text>
                   </Table.Td>
                 </Table.Tr>

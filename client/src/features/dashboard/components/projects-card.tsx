@@ -6,18 +6,19 @@ import { catalogueLabels } from '@/lib/i18n';
 const PROJECT_STAGE_LABELS = catalogueLabels('projectStage');
 import { paths } from '@/config/paths';
 import { SectionCard } from '@/components/ui/section-card';
+import { useWords } from '@/lib/i18n';
 
 /** Projects not closed or ended early, with their stage. */
 export function ProjectsCard({ projects }: { projects: ProjectSummary[] }) {
+  const t = useWords();
   return (
-    <SectionCard compact title="Open projects" testId="card-projects">
+    <SectionCard compact title={t('page.dashboard.projects.title')} testId="card-projects">
       {projects.length === 0 ? (
         <Text size="sm" c="dimmed">
-          No open project.{' '}
+          {t('page.dashboard.projects.none')}{' '}
           <Anchor component={Link} to={paths.newProject.href()}>
-            Start one
+            {t('page.dashboard.projects.start')}
           </Anchor>
-          .
         </Text>
       ) : (
         <Table verticalSpacing={4} fz="sm">

@@ -2,25 +2,23 @@ import { Text } from '@mantine/core';
 import type { DashboardResponse, PullWindowEvent } from '@broodsilk/shared';
 import { SectionCard } from '@/components/ui/section-card';
 import { SacLine } from './sac-line';
+import { useWords } from '@/lib/i18n';
 
-const EVENT: Record<PullWindowEvent, { label: string; tone: string }> = {
-  'opens-today': { label: 'Opens today', tone: 'tone-due' },
-  open: { label: 'Open now', tone: 'tone-ok' },
-  'closes-today': { label: 'Closes today', tone: 'tone-failed' },
-};
+const EVENT_TONE: Record<PullWindowEvent, string> = { 'opens-today': 'tone-due', open: 'tone-ok', 'closes-today': 'tone-failed' };
 
 /** Sacs with the mother whose pull window is open: opening today, closing today, or open now. */
 export function PullTodayCard({ pullWindows }: { pullWindows: DashboardResponse['dueToday']['pullWindows'] }) {
+  const t = useWords();
   return (
     <SectionCard
       compact
-      title="Pull windows open"
+      title={t('page.dashboard.pull.title')}
       testId="card-pull-today"
       accent={pullWindows.some((p) => p.event === 'closes-today') ? 'clay' : pullWindows.length ? 'amber' : undefined}
     >
       {pullWindows.length === 0 ? (
         <Text size="sm" c="dimmed">
-          No pull window is open today.
+          {t('page.dashboard.pull.none')}
         </Text>
       ) : (
         pullWindows.map((p) => (
@@ -28,8 +26,8 @@ export function PullTodayCard({ pullWindows }: { pullWindows: DashboardResponse[
             key={`${p.sac.id}-${p.event}`}
             item={p}
             right={
-              <Text size="sm" fw={700} className={EVENT[p.event].tone} data-testid="pull-event">
-                {EVENT[p.event].label}
+              <Text size="sm" fw={700} className={EVENT_TONE[p.event]} data-testid="pull-event">
+                {t(`pullWindowEvent.${p.event}`)}
               </Text>
             }
           />

@@ -7,17 +7,19 @@ import { ROLL_STATUS_TONE } from '@/lib/tones';
 import { SectionCard } from '@/components/ui/section-card';
 import { SacLine } from './sac-line';
 import { catalogueLabels } from '@/lib/i18n';
+import { useWords } from '@/lib/i18n';
 
 const ROLL_LABEL = catalogueLabels('rollShort');
 
 /** Rolls due soon, due or overdue (owner and caretakers), most late first. */
 export function RollsCard({ rolls, timeZone }: { rolls: DashboardSac[]; timeZone: string }) {
+  const t = useWords();
   const overdue = rolls.some((r) => r.sac.roll?.status === 'overdue');
   return (
-    <SectionCard compact title="Rolls" testId="card-rolls" accent={overdue ? 'clay' : rolls.length ? 'amber' : undefined}>
+    <SectionCard compact title={t('page.dashboard.rolls.title')} testId="card-rolls" accent={overdue ? 'clay' : rolls.length ? 'amber' : undefined}>
       {rolls.length === 0 ? (
         <Text size="sm" c="dimmed">
-          No roll is due.
+          {t('page.dashboard.rolls.none')}
         </Text>
       ) : (
         rolls.map((r) => {
@@ -35,7 +37,7 @@ export function RollsCard({ rolls, timeZone }: { rolls: DashboardSac[]; timeZone
                     {formatInstant(r.sac.roll!.due, timeZone)}
                   </Text>
                   <Anchor component={Link} to={paths.incubatorSac.href(r.sac.id)} size="sm">
-                    Log a roll
+                    {t('page.dashboard.rolls.log')}
                   </Anchor>
                 </Stack>
               }

@@ -3,10 +3,11 @@ import type { ReactNode } from 'react';
 import { Link } from 'react-router';
 import type { DashboardSac } from '@broodsilk/shared';
 import { paths } from '@/config/paths';
-import { formatDate } from '@/lib/dates';
+import { useWords } from '@/lib/i18n';
 
 /** One sac on a Today card: its project, day and lay date, and what to do on the right. */
 export function SacLine({ item, right }: { item: DashboardSac; right: ReactNode }) {
+  const t = useWords();
   return (
     <Group justify="space-between" wrap="nowrap" gap="xs" py={4}>
       <Stack gap={0}>
@@ -14,7 +15,7 @@ export function SacLine({ item, right }: { item: DashboardSac; right: ReactNode 
           {item.projectTitle}
         </Anchor>
         <Text size="xs" c="dimmed">
-          Day {item.sac.dayNumber} · laid {formatDate(item.sac.layDate)}
+          {t('page.dashboard.sacLine', { day: item.sac.dayNumber, date: item.sac.layDate })}
         </Text>
       </Stack>
       {right}

@@ -4,14 +4,16 @@ import type { DashboardSac } from '@broodsilk/shared';
 import { paths } from '@/config/paths';
 import { formatDate } from '@/lib/dates';
 import { SectionCard } from '@/components/ui/section-card';
+import { useWords } from '@/lib/i18n';
 
 /** Sacs with the mother whose window is open or opens within 30 days. */
 export function UpcomingCard({ upcoming }: { upcoming: DashboardSac[] }) {
+  const t = useWords();
   return (
-    <SectionCard compact title="Upcoming pull windows (30 days)" testId="card-upcoming">
+    <SectionCard compact title={t('page.dashboard.upcoming.title')} testId="card-upcoming">
       {upcoming.length === 0 ? (
         <Text size="sm" c="dimmed">
-          None in the next 30 days.
+          {t('page.dashboard.upcoming.none')}
         </Text>
       ) : (
         <Table verticalSpacing={4} fz="sm">
@@ -26,12 +28,16 @@ export function UpcomingCard({ upcoming }: { upcoming: DashboardSac[] }) {
                       {u.projectTitle}
                     </Anchor>
                     <Text size="xs" c="dimmed">
-                      day {u.sac.dayNumber}
+                      {t('page.dashboard.upcoming.day', { day: u.sac.dayNumber })}
                     </Text>
                   </Table.Td>
                   <Table.Td>
                     <Text size="sm" className={w.state === 'closing' ? 'tone-due' : open ? 'tone-ok' : undefined} data-testid="upcoming-state">
-                      {w.state === 'closing' ? 'Closing' : open ? 'Open now' : `Opens in ${w.daysUntilOpens} d`}
+                      {w.state === 'closing'
+                        ? t('page.dashboard.upcoming.closing')
+                        : open
+                          ? t('page.dashboard.upcoming.open')
+                          : t('page.dashboard.upcoming.opensIn', { days: w.daysUntilOpens })}
                     </Text>
                   </Table.Td>
                   <Table.Td>

@@ -3,13 +3,15 @@ import { useRef, useState } from 'react';
 import { ApiError } from '@/lib/api-error';
 import { SectionCard } from '@/components/ui/section-card';
 import { downloadExport, saveFile } from '../api/download-export';
+import { useWords, words } from '@/lib/i18n';
+import { numberLocale } from '@/lib/numbers';
 
 type State = { step: 'idle' } | { step: 'receiving'; bytes: number } | { step: 'saved'; bytes: number; name: string } | { step: 'failed'; message: string };
 
-const size = new Intl.NumberFormat(undefined, { maximumFractionDigits: 1 });
 /** 1 KB = 1000 bytes, as file managers on most systems now count (IEC 80000-13 decimal prefixes). */
 export function formatBytes(bytes: number): string {
-  if (bytes < 1000) return `${bytes} bytes`;
+  const size = new Intl.NumberFormat(numberLocale(), { maximumFractionDigits: 1 });
+  if (bytes < 1000) return words('page.exportData.bytes', { count: bytes });
   if (bytes < 1_000_000) return `${size.format(bytes / 1000)} KB`;
   return `${size.format(bytes / 1_000_000)} MB`;
 }
@@ -19,6 +21,7 @@ export function formatBytes(bytes: number): string {
  * unknown until the end; the card shows the bytes received so far and lets the keeper stop.
  */
 export function ExportCard() {
+  const t = useWords();
   const [state, setState] = useState<State>({ step: 'idle' });
   const abort = useRef<AbortController | null>(null);
 
@@ -32,41 +35,38 @@ export function ExportCard() {
       setState({ step: 'saved', bytes: file.blob.size, name });
     } catch (e) {
       if (e instanceof DOMException && e.name === 'AbortError') return setState({ step: 'idle' });
-      setState({ step: 'failed', message: e instanceof ApiError ? e.message : 'The download broke off. Check your connection and try again.' });
+      setState({ step: 'failed', message: e instanceof ApiError ? e.message : t('page.exportData.brokeOff') });
     }
   };
 
   return (
-    <SectionCard title="Your data">
+    <SectionCard title={t('page.exportData.title')}>
       <Stack gap="sm">
-        <Text size="sm">
-          One zip file with everything you keep here: your collection with its molts, feedings and photos, and for each project you belong to its pairings,
-          sacs, care log, openings and counts, and the ledger entries your role lets you see. Each kind is a JSON file; dates are ISO 8601.
-        </Text>
+        <Text size="sm">{t('page.exportData.text')}</Text>
         {state.step === 'receiving' ? (
           <Stack gap={4}>
-            <Progress value={100} animated striped aria-label="Preparing your data" />
+            <Progress value={100} animated striped aria-label={t('page.exportData.preparing')} />
             <Group justify="space-between">
               <Text size="sm" role="status" aria-live="polite">
-                {formatBytes(state.bytes)} received
+                {t('page.exportData.received', { size: formatBytes(state.bytes) })}
               </Text>
               <Button variant="subtle" size="xs" onClick={() => abort.current?.abort()}>
-                Stop
+                {t('page.exportData.stop')}
               </Button>
             </Group>
           </Stack>
         ) : (
           <Group>
-            <Button onClick={() => void start()}>Download my data</Button>
+            <Button onClick={() => void start()}>{t('page.exportData.download')}</Button>
           </Group>
         )}
         {state.step === 'saved' && (
           <Text size="sm" role="status">
-            Saved {state.name} ({formatBytes(state.bytes)}).
+            {t('page.exportData.saved', { name: state.name, size: formatBytes(state.bytes) })}
           </Text>
         )}
         {state.step === 'failed' && (
-          <Alert color="clay" title="The download did not finish">
+          <Alert color="clay" title={t('page.exportData.failed')}>
             {state.message}
           </Alert>
         )}

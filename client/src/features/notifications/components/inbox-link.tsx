@@ -2,9 +2,11 @@ import { Badge, Button } from '@mantine/core';
 import { NavLink as RouterNavLink } from 'react-router';
 import { paths } from '@/config/paths';
 import { useUnreadCount } from '../api/notifications';
+import { useWords } from '@/lib/i18n';
 
 /** The shell's way to the inbox, with the unread count (refreshed by itself). */
 export function InboxLink() {
+  const t = useWords();
   const { data: unread = 0 } = useUnreadCount();
   return (
     <Button
@@ -13,7 +15,7 @@ export function InboxLink() {
       variant="subtle"
       color="gray"
       size="compact-sm"
-      aria-label={unread ? `Inbox, ${unread} unread` : 'Inbox, nothing unread'}
+      aria-label={unread ? t('page.notifications.linkUnread', { count: unread }) : t('page.notifications.linkNothing')}
       rightSection={
         unread ? (
           <Badge size="sm" circle={unread < 10} data-testid="unread-count">
@@ -22,7 +24,7 @@ export function InboxLink() {
         ) : null
       }
     >
-      Inbox
+      {t('page.notifications.inbox')}
     </Button>
   );
 }

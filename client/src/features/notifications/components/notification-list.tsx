@@ -6,9 +6,11 @@ import { Pager } from '@/components/ui/pager';
 import { formatInstant } from '@/lib/dates';
 import { useMarkAllRead, useMarkRead, useNotificationPage } from '../api/notifications';
 import { subjectHref } from '../utils/subject-href';
+import { useWords } from '@/lib/i18n';
 
 /** One's own notifications, newest first: each leads to what it is about; following it marks it read. */
 export function NotificationList({ page, onPage, timeZone }: { page: number; onPage: (p: number) => void; timeZone: string }) {
+  const t = useWords();
   const { data } = useNotificationPage(page);
   const markRead = useMarkRead();
   const markAll = useMarkAllRead();
@@ -17,14 +19,14 @@ export function NotificationList({ page, onPage, timeZone }: { page: number; onP
   return (
     <Stack>
       <Group justify="space-between">
-        <Text size="sm">{data.unread ? `${data.unread} unread` : 'Everything is read.'}</Text>
+        <Text size="sm">{data.unread ? t('page.notifications.unread', { count: data.unread }) : t('page.notifications.allRead')}</Text>
         {data.unread > 0 && (
           <Button variant="default" size="compact-sm" loading={markAll.isPending} disabled={markAll.isPending} onClick={() => markAll.mutate()}>
-            Mark all as read
+            {t('page.notifications.markAll')}
           </Button>
         )}
       </Group>
-      {data.items.length === 0 && <Text c="dimmed">No notifications yet. Reminders you choose in your settings will arrive here.</Text>}
+      {data.items.length === 0 && <Text c="dimmed">{t('page.notifications.none')}</Text>}
       {data.items.map((n) => (
         <Card key={n.id} withBorder padding="sm" data-unread={n.readAt ? undefined : 'true'}>
           <Text size="xs" c="dimmed">

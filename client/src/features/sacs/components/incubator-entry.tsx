@@ -13,7 +13,6 @@ import {
   TEXT_LIMITS,
   celsiusToFahrenheit,
   fahrenheitToCelsius,
-  formatTemperature,
   type BroodStage,
   type CareLogRequest,
   type SacResponse,
@@ -23,8 +22,13 @@ import { formatInstant } from '@/lib/dates';
 import { isApiError } from '@/lib/api-error';
 import { useAddCareLogEntry } from '../api/care-log';
 import { usePullSac } from '../api/sacs';
-import { bandFlag, broodLabel, rangeText, readingAlertText, ROLL_TEXT } from '../utils/sac-view';
+import { bandFlag, broodLabel, midSentence, rangeText, readingAlertText, ROLL_TEXT } from '../utils/sac-view';
 import classes from './incubator-entry.module.css';
+import { useWords } from '@/lib/i18n';
+import { formatTemperature } from '@/lib/numbers';
+
+/** What a log action saved, for the sentence that confirms it. */
+type LoggedWhat = 'temperature' | 'humidity' | 'both' | 'check' | 'note' | 'stage' | 'roll';
 
 interface IncubatorEntryProps {
   sac: SacResponse;
@@ -36,13 +40,13 @@ interface IncubatorEntryProps {
   title?: string;
 }
 
-const stageOptions = BROOD_STAGES.map((s) => ({ value: s, label: broodLabel(s) }));
-
 /**
  * The one-handed screen at the incubator: the next roll due at the top, readings and notes in the
  * middle, the big "Rolled now" at the bottom where the thumb is.
  */
 export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions = [], title }: IncubatorEntryProps) {
+  const t = useWords();
+  const stageOptions = BROOD_STAGES.map((s) => ({ value: s, label: broodLabel(s) }));
   const add = useAddCareLogEntry(sac.id);
   const pullSac = usePullSac(sac.id);
   const [done, setDone] = useState<string | null>(null);
@@ -69,19 +73,20 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
     }
   }
 
-  const send = (entries: CareLogRequest[], what: string) =>
+  const send = (entries: CareLogRequest[], what: LoggedWhat) =>
     run(async () => {
       let last: { at: string } | undefined;
       const flags: string[] = [];
       for (const entry of entries) {
         const saved = await add.mutateAsync(entry);
         const flag = bandFlag(saved.outsideBand);
-        if (flag) flags.push(`${saved.kind === 'temperature' ? 'temperature' : 'humidity'} ${flag}`);
+        if (flag && saved.outsideBand) flags.push(t(`page.sacs.entry.flag.${saved.kind === 'temperature' ? 'temperature' : 'humidity'}.${saved.outsideBand}`));
         last = saved;
       }
       // A reading outside the band is kept, and said so at once.
-      return `${what} logged${last ? ` at ${formatInstant(last.at, timeZone)}` : ''}${flags.length ? `: ${flags.join(', ')}` : ''}.`;
-    }, 'The entry was not saved. Try again.');
+      const values = { what: t(`page.sacs.entry.what.${what}`), at: last ? formatInstant(last.at, timeZone) : '', flags: flags.join(', ') };
+      return t(`page.sacs.entry.${last ? 'loggedAt' : 'logged'}${flags.length ? 'Flags' : ''}`, values);
+    }, t('page.sacs.entry.notSaved'));
 
   const limits =
     temperatureUnit === 'F' ? { min: celsiusToFahrenheit(TEMPERATURE_LIMITS_C.min), max: celsiusToFahrenheit(TEMPERATURE_LIMITS_C.max) } : TEMPERATURE_LIMITS_C;
@@ -91,19 +96,19 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
 
   async function saveReadings() {
     if (temperatureError || humidityError) {
-      setError('Correct the reading marked above first.');
+      setError(t('page.sacs.entry.correctFirst'));
       return;
     }
     const entries: CareLogRequest[] = [];
-    const t = readNumber(temperature);
+    const typedT = readNumber(temperature);
     const h = readNumber(humidity);
-    if (t !== null) entries.push({ kind: 'temperature', temperature: { value: t, unit: temperatureUnit } });
+    if (typedT !== null) entries.push({ kind: 'temperature', temperature: { value: typedT, unit: temperatureUnit } });
     if (h !== null) entries.push({ kind: 'humidity', humidityPercent: h });
     if (entries.length === 0) {
-      setError('Enter a temperature or a humidity first.');
+      setError(t('page.sacs.entry.enterFirst'));
       return;
     }
-    if (await send(entries, entries.length === 2 ? 'Temperature and humidity' : entries[0]!.kind === 'temperature' ? 'Temperature' : 'Humidity')) {
+    if (await send(entries, entries.length === 2 ? 'both' : entries[0]!.kind === 'temperature' ? 'temperature' : 'humidity')) {
       setTemperature('');
       setHumidity('');
     }
@@ -123,32 +128,32 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
           </Text>
         )}
         <Text size="sm" c="dimmed">
-          Day {sac.dayNumber} · {broodLabel(sac.broodStage)}
+          {t('page.sacs.incubator.dayStage', { day: sac.dayNumber, stage: broodLabel(sac.broodStage) })}
         </Text>
         {roll && rollText ? (
           <Box data-testid="next-roll">
             <Text size="xl" fw={800} className={rollText.tone}>
               {rollText.label}
             </Text>
-            <Text size="md">due {formatInstant(roll.due, timeZone)}</Text>
+            <Text size="md">{t('page.sacs.overview.due', { due: formatInstant(roll.due, timeZone) })}</Text>
             {roll.lastRollAt && (
               <Text size="sm" c="dimmed">
-                last roll {formatInstant(roll.lastRollAt, timeZone)}
+                {t('page.sacs.entry.lastRoll', { at: formatInstant(roll.lastRollAt, timeZone) })}
               </Text>
             )}
           </Box>
         ) : (
           <Text size="md" c="dimmed" data-testid="next-roll">
             {!sac.pulled
-              ? 'No rolls for this sac (still with the mother).'
+              ? t('page.sacs.entry.noRollsWithMother')
               : sac.rollingOff
-                ? 'No rolls for this sac (rolling is off); checks and readings go on.'
-                : `No more rolls: ${broodLabel(sac.rollingStopsAt).toLowerCase()} reached; checks and readings go on.`}
+                ? t('page.sacs.entry.noRollsOff')
+                : t('page.sacs.entry.noMoreRolls', { stage: midSentence(broodLabel(sac.rollingStopsAt)) })}
           </Text>
         )}
         {sac.container && (
           <Text size="sm" c="dimmed">
-            In {sac.container}
+            {t('page.sacs.entry.inContainer', { container: sac.container })}
           </Text>
         )}
         {sac.readingAlerts.map((a) => (
@@ -158,11 +163,8 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
         ))}
       </Stack>
 
-      <Alert color="amber" variant="light" title="Heat sources" data-testid="heat-caution" role="note">
-        <Text size="sm">
-          {sac.incubatorCaution ??
-            'Heat only behind a thermostat, away from bedding and cables, and never left running unattended without checks: unregulated heat can cook eggs and start fires. Local law and licensed practice come first.'}
-        </Text>
+      <Alert color="amber" variant="light" title={t('page.sacs.entry.heatSources')} data-testid="heat-caution" role="note">
+        <Text size="sm">{sac.incubatorCaution ?? t('safety.heatSource')}</Text>
         {speciesCautions.map((c) => (
           <Text size="sm" mt={4} key={c} fw={600}>
             {c}
@@ -172,57 +174,61 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
 
       <Group grow align="flex-end">
         <NumberField
-          label={`Temperature (°${temperatureUnit})`}
+          label={t('page.sacs.entry.temperature', { unit: temperatureUnit })}
           size="lg"
           value={temperature}
           onChange={(e) => setTemperature(e.currentTarget.value)}
-          description={`${tempHint ? `= ${tempHint} · ` : ''}band ${rangeText('temperature', sac.band.temperatureC, temperatureUnit)}`}
+          description={
+            tempHint
+              ? t('page.sacs.entry.bandWithHint', { hint: tempHint, range: rangeText('temperature', sac.band.temperatureC, temperatureUnit) })
+              : t('page.sacs.entry.band', { range: rangeText('temperature', sac.band.temperatureC, temperatureUnit) })
+          }
           error={temperatureError}
         />
         <NumberField
-          label="Humidity (%)"
+          label={t('page.sacs.entry.humidity')}
           size="lg"
           whole
           value={humidity}
           onChange={(e) => setHumidity(e.currentTarget.value)}
           error={humidityError}
-          description={`band ${rangeText('humidity', sac.band.humidityPercent, temperatureUnit)}`}
+          description={t('page.sacs.entry.band', { range: rangeText('humidity', sac.band.humidityPercent, temperatureUnit) })}
         />
       </Group>
       <Button size="lg" variant="light" onClick={saveReadings} loading={add.isPending} disabled={add.isPending}>
-        Save readings
+        {t('page.sacs.entry.saveReadings')}
       </Button>
 
       <Group grow align="flex-end">
         <TextField
-          label="Note"
+          label={t('page.sacs.entry.note')}
           size="lg"
           maxLength={TEXT_LIMITS.note}
           value={note}
           onChange={(e) => setNote(e.currentTarget.value)}
           error={noteError}
-          placeholder="e.g. a little condensation"
+          placeholder={t('page.sacs.entry.notePlaceholder')}
         />
       </Group>
       <Group grow>
-        <Button size="lg" variant="default" onClick={() => send([{ kind: 'check' }], 'Check')} loading={add.isPending}>
-          Checked, all well
+        <Button size="lg" variant="default" onClick={() => send([{ kind: 'check' }], 'check')} loading={add.isPending}>
+          {t('page.sacs.entry.checked')}
         </Button>
         <Button
           size="lg"
           variant="default"
           disabled={!note.trim() || !!noteError || add.isPending}
           onClick={async () => {
-            if (await send([{ kind: 'note', text: note.trim() }], 'Note')) setNote('');
+            if (await send([{ kind: 'note', text: note.trim() }], 'note')) setNote('');
           }}
         >
-          Add note
+          {t('page.sacs.entry.addNote')}
         </Button>
       </Group>
       <Group grow align="flex-end">
         <Select
-          label="Stage now"
-          description="The sac's one stage, also named by brood counts"
+          label={t('page.sacs.entry.stageNow')}
+          description={t('page.sacs.entry.stageNowHint')}
           size="lg"
           data={stageOptions}
           value={stage}
@@ -233,10 +239,10 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
           size="lg"
           variant="default"
           disabled={!stage}
-          onClick={() => send([{ kind: 'stage', stage: stage as BroodStage }], 'Stage')}
+          onClick={() => send([{ kind: 'stage', stage: stage as BroodStage }], 'stage')}
           loading={add.isPending}
         >
-          Set stage
+          {t('page.sacs.entry.setStage')}
         </Button>
       </Group>
 
@@ -255,11 +261,11 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
           // Offered only where the server will take it (sac.may, the server's own rule).
           sac.may.pullAndOpen ? (
             <Button fullWidth size="xl" h={76} fz={22} loading={pullSac.isPending} onClick={pull.open}>
-              Pulled, into the incubator
+              {t('page.sacs.entry.pulledInto')}
             </Button>
           ) : (
             <Text c="dimmed" data-testid="pull-not-mine">
-              The keeper records the pull of this sac.
+              {t('page.sacs.entry.pullNotMine')}
             </Text>
           )
         ) : (
@@ -268,12 +274,12 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
             size="xl"
             h={76}
             fz={24}
-            onClick={() => send([{ kind: 'roll' }], 'Roll')}
+            onClick={() => send([{ kind: 'roll' }], 'roll')}
             loading={add.isPending}
             disabled={!roll}
             data-testid="rolled-now"
           >
-            Rolled now
+            {t('page.sacs.entry.rolledNow')}
           </Button>
         )}
       </Box>
@@ -288,8 +294,8 @@ export function IncubatorEntry({ sac, timeZone, temperatureUnit, speciesCautions
             pull.close();
             await run(async () => {
               await pullSac.mutateAsync({ pulledAt });
-              return 'Pulled: the first roll is counted from the pull.';
-            }, 'The pull was not saved. Try again.');
+              return t('page.sacs.entry.pulledDone');
+            }, t('page.sacs.overview.pullNotSaved'));
           }}
         />
       )}

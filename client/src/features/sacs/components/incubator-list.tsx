@@ -6,6 +6,7 @@ import { formatInstant } from '@/lib/dates';
 import { sacQueries } from '../api/sacs';
 import { broodLabel, readingAlertText, ROLL_TEXT } from '../utils/sac-view';
 import classes from './incubator-list.module.css';
+import { useWords } from '@/lib/i18n';
 
 const URGENCY = { overdue: 0, due: 1, 'due-soon': 2, upcoming: 3 } as const;
 /** Sacs no longer rolled come after those that are; checks and readings go on for them. */
@@ -23,6 +24,7 @@ export function IncubatorList({
   temperatureUnit: TemperatureUnit;
   hrefFor: (sacId: string) => string;
 }) {
+  const t = useWords();
   const results = useQueries({ queries: projects.map((p) => sacQueries.ofProject(p.id)) });
   const failed = results.find((r) => r.isError);
   const pending = results.some((r) => r.isPending);
@@ -32,12 +34,12 @@ export function IncubatorList({
   rows.sort((a, b) => urgency(a.sac) - urgency(b.sac) || (a.sac.roll?.due ?? a.sac.layDate).localeCompare(b.sac.roll?.due ?? b.sac.layDate));
 
   if (failed?.error) return <Alert color="clay">{failed.error.message}</Alert>;
-  if (pending && rows.length === 0) return <Text c="dimmed">Looking for sacs…</Text>;
-  if (rows.length === 0) return <Text c="dimmed">No sac is in an incubator right now. A sac shows up here once it is pulled.</Text>;
+  if (pending && rows.length === 0) return <Text c="dimmed">{t('page.sacs.incubator.looking')}</Text>;
+  if (rows.length === 0) return <Text c="dimmed">{t('page.sacs.incubator.none')}</Text>;
   return (
     <Stack gap="sm" data-testid="incubator-list">
       {rows.map(({ sac, title }) => {
-        const t = sac.roll ? ROLL_TEXT[sac.roll.status] : null;
+        const roll = sac.roll ? ROLL_TEXT[sac.roll.status] : null;
         return (
           <UnstyledButton key={sac.id} component={Link} to={hrefFor(sac.id)} className={classes.row}>
             <Card withBorder padding="md" data-status={sac.roll?.status ?? 'not-rolled'}>
@@ -45,15 +47,16 @@ export function IncubatorList({
                 {title}
               </Text>
               <Text size="sm" c="dimmed">
-                Day {sac.dayNumber} · {broodLabel(sac.broodStage)}
-                {sac.container ? ` · ${sac.container}` : ''}
+                {sac.container
+                  ? t('page.sacs.incubator.dayStageIn', { day: sac.dayNumber, stage: broodLabel(sac.broodStage), container: sac.container })
+                  : t('page.sacs.incubator.dayStage', { day: sac.dayNumber, stage: broodLabel(sac.broodStage) })}
               </Text>
-              {t && sac.roll ? (
-                <Text fw={700} className={t.tone}>
-                  {t.label} · {formatInstant(sac.roll.due, timeZone)}
+              {roll && sac.roll ? (
+                <Text fw={700} className={roll.tone}>
+                  {roll.label} · {formatInstant(sac.roll.due, timeZone)}
                 </Text>
               ) : (
-                <Text size="sm">No rolls now; checks and readings go on.</Text>
+                <Text size="sm">{t('page.sacs.incubator.noRolls')}</Text>
               )}
               {sac.readingAlerts.map((a) => (
                 <Text key={a.kind} size="sm" fw={700} className="tone-failed">

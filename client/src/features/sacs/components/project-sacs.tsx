@@ -3,6 +3,7 @@ import { useDisclosure } from '@mantine/hooks';
 import { useProjectSacs } from '../api/sacs';
 import { RecordSacForm } from './record-sac-form';
 import { SacCard } from './sac-card';
+import { useWords } from '@/lib/i18n';
 
 interface ProjectSacsProps {
   projectId: string;
@@ -14,12 +15,13 @@ interface ProjectSacsProps {
 
 /** The sacs of one project, newest first, and the keeper's form to record a new one. */
 export function ProjectSacs({ projectId, timeZone, canRecord, sacHref, incubatorHref }: ProjectSacsProps) {
+  const t = useWords();
   const sacs = useProjectSacs(projectId);
   const [opened, { toggle, close }] = useDisclosure(false);
   return (
     <Stack>
       {sacs.isError && <Alert color="clay">{sacs.error.message}</Alert>}
-      {sacs.data && sacs.data.length === 0 && <Text c="dimmed">No sac yet.</Text>}
+      {sacs.data && sacs.data.length === 0 && <Text c="dimmed">{t('page.sacs.noSacYet')}</Text>}
       {sacs.data && sacs.data.length > 0 && (
         <SimpleGrid cols={{ base: 1, md: 2 }}>
           {[...sacs.data]
@@ -33,7 +35,7 @@ export function ProjectSacs({ projectId, timeZone, canRecord, sacHref, incubator
         <>
           <Group>
             <Button variant="light" onClick={toggle}>
-              {opened ? 'Close' : 'Record a sac'}
+              {opened ? t('page.sacs.close') : t('page.sacs.recordSac')}
             </Button>
           </Group>
           <Collapse expanded={opened}>

@@ -1,11 +1,12 @@
 import { Anchor, Badge, Card, Group, Stack, Text } from '@mantine/core';
 import { Link } from 'react-router';
-import { countWords, type SacResponse } from '@broodsilk/shared';
-import { formatDate } from '@/lib/dates';
+import type { SacResponse } from '@broodsilk/shared';
 import { broodLabel, PULL_WINDOW_TEXT, pullWindowSentence, ROLL_TEXT, rollSentence, SAC_OUTCOME_TEXT, whereSacIs } from '../utils/sac-view';
+import { useWords } from '@/lib/i18n';
 
 /** One sac at a glance: day N, pull window with dates, next roll due. */
 export function SacCard({ sac, timeZone, href, incubatorHref }: { sac: SacResponse; timeZone: string; href: string; incubatorHref?: string }) {
+  const t = useWords();
   const window = PULL_WINDOW_TEXT[sac.pullWindow.state];
   const roll = rollSentence(sac, timeZone);
   return (
@@ -13,14 +14,15 @@ export function SacCard({ sac, timeZone, href, incubatorHref }: { sac: SacRespon
       <Group justify="space-between" wrap="wrap" align="flex-start" gap="xs">
         <Stack gap={2}>
           <Anchor component={Link} to={href} fw={700}>
-            Sac laid {formatDate(sac.layDate)}
+            {t('page.sacs.laidOn', { date: sac.layDate })}
           </Anchor>
           <Text size="sm">
             <Text span fw={700} data-testid="sac-day">
-              Day {sac.dayNumber}
+              {t('page.sacs.dayN', { day: sac.dayNumber })}
             </Text>{' '}
             · {whereSacIs(sac)} · {broodLabel(sac.broodStage)}
-            {sac.currentCount !== null && ` · ${countWords(sac.currentCount, sac.currentCountEstimated)} alive`}
+            {sac.currentCount !== null &&
+              ` · ${t(sac.currentCountEstimated ? 'page.sacs.card.aliveAbout' : 'page.sacs.card.alive', { count: sac.currentCount })}`}
           </Text>
         </Stack>
         {sac.outcome !== 'in-progress' ? (
@@ -46,7 +48,7 @@ export function SacCard({ sac, timeZone, href, incubatorHref }: { sac: SacRespon
           </Text>
           {incubatorHref && (
             <Anchor component={Link} to={incubatorHref} size="sm">
-              Log at the incubator
+              {t('page.sacs.card.logAtIncubator')}
             </Anchor>
           )}
         </Group>

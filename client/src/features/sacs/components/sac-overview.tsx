@@ -2,22 +2,22 @@ import { Alert, Badge, Button, Card, Group, SimpleGrid, Switch, Text } from '@ma
 import { useDisclosure } from '@mantine/hooks';
 import { useState } from 'react';
 import { valueSourceLabel, type SacResponse, type TemperatureUnit } from '@broodsilk/shared';
-import { formatDate, formatInstant } from '@/lib/dates';
+import { formatInstant } from '@/lib/dates';
 import { isApiError } from '@/lib/api-error';
 import { usePullSac, useUpdateSac } from '../api/sacs';
 import { PullConfirmation } from './pull-confirmation';
 import { FailureForm } from './failure-form';
-import { broodLabel, PULL_WINDOW_TEXT, pullWindowSentence, readingAlertText, ROLL_TEXT, SAC_OUTCOME_TEXT } from '../utils/sac-view';
-import { catalogueLabels, useWords } from '@/lib/i18n';
+import { broodLabel, midSentence, PULL_WINDOW_TEXT, pullWindowSentence, readingAlertText, ROLL_TEXT, SAC_OUTCOME_TEXT } from '../utils/sac-view';
+import { catalogueLabels, useWords, words } from '@/lib/i18n';
 
 const FAILURE_LABELS = catalogueLabels('sacFailure');
 
 /** Why no roll is due, in words. */
 function noRollText(sac: SacResponse): string {
-  if (!sac.pulled) return 'No rolls while the sac is with the mother: she turns it herself.';
-  if (sac.rollingOff) return 'Rolling is turned off.';
-  if (sac.outcome !== 'in-progress') return 'The sac has ended; no more rolls.';
-  return sac.rollPastLegs ? 'The young are free-living; no more rolls.' : 'The legs have formed: rolling has stopped, checks and readings go on.';
+  if (!sac.pulled) return words('page.sacs.noRoll.withMother');
+  if (sac.rollingOff) return words('page.sacs.noRoll.off');
+  if (sac.outcome !== 'in-progress') return words('page.sacs.noRoll.ended');
+  return sac.rollPastLegs ? words('page.sacs.noRoll.freeLiving') : words('page.sacs.noRoll.legs');
 }
 
 /**
@@ -39,7 +39,7 @@ export function SacOverview({ sac, timeZone, temperatureUnit }: { sac: SacRespon
     try {
       await update.mutateAsync(body);
     } catch (e) {
-      setError(isApiError(e) ? e.message : 'Not saved. Try again.');
+      setError(isApiError(e) ? e.message : t('page.sacs.notSaved'));
     }
   }
   const waiting = !sac.pulled && sac.outcome === 'in-progress';
@@ -48,25 +48,25 @@ export function SacOverview({ sac, timeZone, temperatureUnit }: { sac: SacRespon
     <SimpleGrid cols={{ base: 1, sm: 3 }}>
       <Card withBorder padding="sm">
         <Text size="xs" c="dimmed" tt="uppercase" fw={600}>
-          Day
+          {t('page.sacs.overview.day')}
         </Text>
         <Text fz={40} fw={800} lh={1.1} data-testid="sac-day-number">
           {sac.dayNumber}
         </Text>
         <Text size="sm" c="dimmed">
-          laid {formatDate(sac.layDate)} (day 0) · {broodLabel(sac.broodStage)}
+          {t('page.sacs.overview.laid', { date: sac.layDate, stage: broodLabel(sac.broodStage) })}
         </Text>
         {sac.outcome !== 'in-progress' && (
           <Badge mt={4} color={sac.outcome === 'failed' ? 'clay' : 'moss'} variant="light" tt="none">
             {SAC_OUTCOME_TEXT[sac.outcome]}
-            {sac.failureReason ? `: ${FAILURE_LABELS[sac.failureReason].toLowerCase()}` : ''}
+            {sac.failureReason ? t('page.sacs.overview.failureReason', { reason: midSentence(FAILURE_LABELS[sac.failureReason]) }) : ''}
           </Badge>
         )}
       </Card>
       <Card withBorder padding="sm">
         <Group justify="space-between">
           <Text size="xs" c="dimmed" tt="uppercase" fw={600}>
-            Pull window
+            {t('page.sacs.overview.pullWindow')}
           </Text>
           <Text size="xs" c="dimmed" data-testid="pull-window-origin">
             {t('pullWindowFrom', { from: w.fromDay, to: w.toDay, origin: t(`pullWindowOrigin.${w.origin}`) })}
@@ -80,7 +80,7 @@ export function SacOverview({ sac, timeZone, temperatureUnit }: { sac: SacRespon
         {!sac.pulled &&
           (sac.leftWithMother ? (
             <Text fw={700} data-testid="pull-window-state">
-              Left with the mother
+              {t('page.sacs.overview.leftWithMother')}
             </Text>
           ) : (
             <Text fw={700} className={windowText.tone} data-testid="pull-window-state">
@@ -92,12 +92,12 @@ export function SacOverview({ sac, timeZone, temperatureUnit }: { sac: SacRespon
           <Group mt="xs" gap="xs">
             {sac.may.pullAndOpen && (
               <Button size="compact-md" loading={pull.isPending} onClick={pullDialog.open}>
-                Record the pull
+                {t('page.sacs.overview.recordPull')}
               </Button>
             )}
             {canEdit && (
               <Button size="compact-md" variant="light" loading={update.isPending} onClick={() => change({ leftWithMother: !sac.leftWithMother })}>
-                {sac.leftWithMother ? 'Watch the pull window again' : 'Leave it with the mother'}
+                {sac.leftWithMother ? t('page.sacs.overview.watchAgain') : t('page.sacs.overview.leaveWithMother')}
               </Button>
             )}
           </Group>
@@ -105,16 +105,18 @@ export function SacOverview({ sac, timeZone, temperatureUnit }: { sac: SacRespon
       </Card>
       <Card withBorder padding="sm">
         <Text size="xs" c="dimmed" tt="uppercase" fw={600}>
-          Rolling
+          {t('page.sacs.overview.rolling')}
         </Text>
         {sac.roll ? (
           <>
             <Text fw={700} className={ROLL_TEXT[sac.roll.status].tone} data-testid="roll-state">
               {ROLL_TEXT[sac.roll.status].label}
             </Text>
-            <Text size="sm">due {formatInstant(sac.roll.due, timeZone)}</Text>
+            <Text size="sm">{t('page.sacs.overview.due', { due: formatInstant(sac.roll.due, timeZone) })}</Text>
             <Text size="sm" c="dimmed">
-              every {sac.rollIntervalHours} h{sac.roll.lastRollAt ? ` · last ${formatInstant(sac.roll.lastRollAt, timeZone)}` : ' · not rolled yet'}
+              {sac.roll.lastRollAt
+                ? t('page.sacs.overview.everyLast', { hours: sac.rollIntervalHours, last: formatInstant(sac.roll.lastRollAt, timeZone) })
+                : t('page.sacs.overview.everyNotYet', { hours: sac.rollIntervalHours })}
             </Text>
           </>
         ) : (
@@ -126,15 +128,15 @@ export function SacOverview({ sac, timeZone, temperatureUnit }: { sac: SacRespon
           <>
             <Switch
               mt="xs"
-              label="Roll this sac"
+              label={t('page.sacs.overview.rollThis')}
               checked={!sac.rollingOff}
               onChange={(e) => change({ rollingOff: !e.currentTarget.checked })}
               disabled={update.isPending}
             />
             <Switch
               mt="xs"
-              label="Keep rolling after the legs form"
-              description="Usual practice stops at eggs with legs (trade facts §4)."
+              label={t('page.sacs.overview.rollPastLegs')}
+              description={t('page.sacs.overview.rollPastLegsHint')}
               checked={sac.rollPastLegs}
               onChange={(e) => change({ rollPastLegs: e.currentTarget.checked })}
               disabled={update.isPending}
@@ -143,10 +145,10 @@ export function SacOverview({ sac, timeZone, temperatureUnit }: { sac: SacRespon
         )}
       </Card>
       {sac.readingAlerts.length > 0 && (
-        <Alert color="clay" title="Reading outside the band" style={{ gridColumn: '1 / -1' }} data-testid="reading-alerts">
+        <Alert color="clay" title={t('page.sacs.overview.readingOutside')} style={{ gridColumn: '1 / -1' }} data-testid="reading-alerts">
           {sac.readingAlerts.map((a) => (
             <Text size="sm" key={a.kind}>
-              {readingAlertText(a, sac.band, temperatureUnit)}, logged {formatInstant(a.at, timeZone)}.
+              {t('page.sacs.overview.alertLogged', { alert: readingAlertText(a, sac.band, temperatureUnit), at: formatInstant(a.at, timeZone) })}
             </Text>
           ))}
         </Alert>
@@ -154,7 +156,7 @@ export function SacOverview({ sac, timeZone, temperatureUnit }: { sac: SacRespon
       {canEdit && sac.outcome === 'in-progress' && (
         <Group align="flex-end" style={{ gridColumn: '1 / -1' }}>
           <Button variant="light" loading={update.isPending} onClick={() => change({ outcome: 'emerged' })}>
-            The young have emerged
+            {t('page.sacs.overview.emerged')}
           </Button>
         </Group>
       )}
@@ -177,7 +179,7 @@ export function SacOverview({ sac, timeZone, temperatureUnit }: { sac: SacRespon
             try {
               await pull.mutateAsync({ pulledAt });
             } catch (e) {
-              setError(isApiError(e) ? e.message : 'The pull was not saved. Try again.');
+              setError(isApiError(e) ? e.message : t('page.sacs.overview.pullNotSaved'));
             }
           }}
         />

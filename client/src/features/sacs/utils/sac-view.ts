@@ -7,13 +7,18 @@ import {
   type SacResponse,
   type StageNumbering,
 } from '@broodsilk/shared';
-import { catalogueLabels, currentNumbering, words } from '@/lib/i18n';
-import { formatDate, formatInstant } from '@/lib/dates';
+import { catalogueLabels, currentNumbering, i18next, words } from '@/lib/i18n';
+import { formatInstant } from '@/lib/dates';
 import { PULL_WINDOW_TONE, ROLL_STATUS_TONE, type ToneStyle } from '@/lib/tones';
 
 /** A brood stage in the reader's language and numbering set (settings). */
 export function broodLabel(stage: BroodStage, numbering: StageNumbering = currentNumbering()): string {
   return broodStageLabel(words, stage, numbering);
+}
+
+/** A label placed inside a sentence: lower case in English; German keeps its capitals (nouns). */
+export function midSentence(label: string): string {
+  return i18next.language === 'de' ? label : label.toLowerCase();
 }
 
 /** Tone class and words for a pull window state. */
@@ -25,44 +30,41 @@ export const ROLL_TEXT = new Proxy({} as Record<RollStatus, { label: string } & 
   get: (_t, key: string) => ({ label: words(`roll.${key}`), ...ROLL_STATUS_TONE[key as RollStatus] }),
 });
 
-const days = (n: number) => (n === 1 ? '1 day' : `${n} days`);
-
 /** One sentence about the pull window, e.g. "Opens in 3 days (12 Dec 2026), closes 5 Jan 2027". */
 export function pullWindowSentence(sac: SacResponse): string {
   const w = sac.pullWindow;
-  if (sac.leftWithMother && !sac.pulled) return `Left with the mother by choice: she keeps and turns it herself (day ${sac.dayNumber}).`;
-  if (sac.pulled) return `Pulled${sac.pulledOn ? ` on ${formatDate(sac.pulledOn)}` : ''} (window was day ${w.fromDay}–${w.toDay}).`;
+  const s = (key: string, values: Record<string, unknown>) => words(`page.sacs.window.${key}`, { from: w.fromDay, to: w.toDay, ...values });
+  if (sac.leftWithMother && !sac.pulled) return s('leftWithMother', { day: sac.dayNumber });
+  if (sac.pulled) return sac.pulledOn ? s('pulledOn', { date: sac.pulledOn }) : s('pulled', {});
   switch (w.state) {
     case 'not-yet':
-      return `Opens in ${days(w.daysUntilOpens)} on ${formatDate(w.opensOn)} (day ${w.fromDay}); closes ${formatDate(w.closesOn)} (day ${w.toDay}).`;
+      return s('notYet', { count: w.daysUntilOpens, opens: w.opensOn, closes: w.closesOn });
     case 'open':
-      return `Open since ${formatDate(w.opensOn)}; closes ${formatDate(w.closesOn)}, in ${days(w.daysUntilCloses ?? 0)}.`;
+      return s('open', { count: w.daysUntilCloses ?? 0, opens: w.opensOn, closes: w.closesOn });
     case 'closing':
-      return w.daysUntilCloses === 0
-        ? `Closes today, ${formatDate(w.closesOn)}.`
-        : `Closing: last day ${formatDate(w.closesOn)}, in ${days(w.daysUntilCloses ?? 0)}.`;
+      return w.daysUntilCloses === 0 ? s('closesToday', { closes: w.closesOn }) : s('closing', { count: w.daysUntilCloses ?? 0, closes: w.closesOn });
     case 'past':
-      return `Closed ${formatDate(w.closesOn)}, ${days(w.daysPastClose)} ago.`;
+      return s('past', { count: w.daysPastClose, closes: w.closesOn });
   }
 }
 
 /** "Roll overdue · due Tue 1 Dec, 08:00" or null when rolling does not apply. */
 export function rollSentence(sac: SacResponse, timeZone: string): string | null {
   if (!sac.roll) return null;
-  return `${ROLL_TEXT[sac.roll.status].label} · due ${formatInstant(sac.roll.due, timeZone)}`;
+  return words('page.sacs.rollDue', { state: ROLL_TEXT[sac.roll.status].label, due: formatInstant(sac.roll.due, timeZone) });
 }
 
 export const SAC_OUTCOME_TEXT = catalogueLabels('sacOutcome');
 
 /** Where a sac is, in words. */
 export function whereSacIs(sac: SacResponse): string {
-  if (sac.pulled) return sac.container ? `in ${sac.container}` : 'in the incubator';
-  return sac.leftWithMother ? 'left with the mother' : 'with the mother';
+  if (sac.pulled) return sac.container ? words('page.sacs.where.inContainer', { container: sac.container }) : words('page.sacs.where.inIncubator');
+  return sac.leftWithMother ? words('page.sacs.where.leftWithMother') : words('page.sacs.where.withMother');
 }
 
-export { bandRangeWords as rangeText, readingAlertWords as readingAlertText } from '@broodsilk/shared';
+export { rangeText, readingAlertText } from '@/lib/band';
 
 /** The flag beside a logged reading outside the band. */
 export function bandFlag(side: BandSide | null): string | null {
-  return side ? `${side} the band` : null;
+  return side ? words(`page.sacs.band.flag.${side}`) : null;
 }
