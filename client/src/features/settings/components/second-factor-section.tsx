@@ -7,6 +7,8 @@ import { useSecondFactorStatus, useStartEnrolment } from '../api/second-factor';
 import { EnrolSecondFactor } from './enrol-second-factor';
 import { RecoveryCodes } from './recovery-codes';
 import { RemoveSecondFactorForm } from './remove-second-factor-form';
+import { RenewRecoveryCodes } from './renew-recovery-codes';
+import { useWords } from '@/lib/i18n';
 
 /** Sign-in security: set up or remove a TOTP second factor. */
 export function SecondFactorSection() {
@@ -14,8 +16,14 @@ export function SecondFactorSection() {
   const start = useStartEnrolment();
   const [enrolment, setEnrolment] = useState<TotpEnrolment | null>(null);
   const [codes, setCodes] = useState<string[] | null>(null);
+  const [renewed, setRenewed] = useState<string[] | null>(null);
+  const t = useWords();
 
   if (codes) return <RecoveryCodes codes={codes} onDone={() => setCodes(null)} />;
+  if (renewed) {
+    const notice = { title: t('page.settings.renewCodes.doneTitle'), body: t('page.settings.renewCodes.doneBody') };
+    return <RecoveryCodes codes={renewed} notice={notice} onDone={() => setRenewed(null)} />;
+  }
   if (!status.data) return null;
   if (enrolment) {
     return (
@@ -36,6 +44,7 @@ export function SecondFactorSection() {
         {status.data.required ? (
           <Alert color="clay">Administrators must keep a second factor. If you remove it, administrator pages stay closed until you set one up again.</Alert>
         ) : null}
+        <RenewRecoveryCodes onRenewed={setRenewed} />
         <RemoveSecondFactorForm />
       </Stack>
     );
