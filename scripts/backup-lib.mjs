@@ -3,7 +3,8 @@ import { S3Client } from '@aws-sdk/client-s3';
 
 export function settings(env = process.env) {
   return {
-    databaseUrl: env.DATABASE_URL ?? 'postgres://app@127.0.0.1:54329/broodsilk',
+    // The owner's connection: it reads every table and may create them again when restoring.
+    databaseUrl: env.DATABASE_OWNER_URL || env.DATABASE_URL || 'postgres://app@127.0.0.1:54329/broodsilk',
     bucket: env.S3_BUCKET ?? 'broodsilk-photos',
     s3: new S3Client({
       endpoint: env.S3_ENDPOINT ?? 'http://127.0.0.1:4569',

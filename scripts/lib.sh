@@ -94,6 +94,14 @@ pg_ensure_db() {
   fi
 }
 
+# pg_ensure_runtime_role DIR PORT ROLE — a login role that owns nothing; `npm run migrate` (run as
+# the owner app) grants it the right to read and write rows (docs/operations.md, "Database roles").
+pg_ensure_runtime_role() {
+  local dir="$1" port="$2" role="$3" bin; bin="$(pg_bindir)"
+  as_pg "$bin/psql" -h "$dir/sock" -p "$port" -U postgres -v ON_ERROR_STOP=1 -qtA \
+    -c "DO \$\$BEGIN IF NOT EXISTS (SELECT FROM pg_roles WHERE rolname='$role') THEN CREATE ROLE $role LOGIN; END IF; END\$\$;" >/dev/null
+}
+
 # A free TCP port on 127.0.0.1, chosen by the kernel.
 free_port() { node -e "const s=require('net').createServer();s.listen(0,'127.0.0.1',()=>{console.log(s.address().port);s.close()})"; }
 

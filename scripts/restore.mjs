@@ -1,5 +1,6 @@
 // npm run restore -- <backup folder>: restores a folder written by `npm run backup` into the database
-// at DATABASE_URL, which must be empty (no tables), and puts the photos back into the bucket.
+// at DATABASE_OWNER_URL (else DATABASE_URL), which must be empty (no tables), and puts the photos
+// back into the bucket. Privileges are not restored: `npm run migrate -w server` grants the runtime role again.
 import { execFileSync } from 'node:child_process';
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join, relative, resolve } from 'node:path';
@@ -18,7 +19,7 @@ const tables = execFileSync('psql', ['-tAc', "select count(*) from pg_tables whe
   encoding: 'utf8',
 });
 if (Number(tables.trim()) !== 0) {
-  console.error(`Refusing to restore: the database at DATABASE_URL already has ${tables.trim()} tables. Restore into an empty database.`);
+  console.error(`Refusing to restore: the database to restore into already has ${tables.trim()} tables. Restore into an empty database.`);
   process.exit(1);
 }
 // One transaction: a restore that fails part-way leaves the database empty, not half-filled.
@@ -39,4 +40,5 @@ for (const file of files(photoRoot)) {
   photos += 1;
 }
 console.log(`Restored ${manifest.database} taken ${manifest.takenAt}: database and ${photos} of ${manifest.photos} photos.`);
+console.log('Next: npm run migrate -w server (as the owner) gives the runtime role its rights again.');
 if (photos !== manifest.photos) process.exit(1);

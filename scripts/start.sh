@@ -35,7 +35,10 @@ else
   log "PostgreSQL on 127.0.0.1:$PGPORT (data in $PGDIR)"
   pg_start "$PGDIR" "$PGPORT"
   pg_ensure_db "$PGDIR" "$PGPORT" broodsilk
-  export DATABASE_URL="postgres://app@127.0.0.1:$PGPORT/broodsilk" BROODSILK_DEMO=1
+  # The owner app migrates; the server runs as broodsilk_app, which may read and write rows only.
+  pg_ensure_runtime_role "$PGDIR" "$PGPORT" broodsilk_app
+  export DATABASE_OWNER_URL="postgres://app@127.0.0.1:$PGPORT/broodsilk"
+  export DATABASE_URL="postgres://broodsilk_app@127.0.0.1:$PGPORT/broodsilk" BROODSILK_DEMO=1
 fi
 
 export NODE_ENV=production

@@ -54,8 +54,11 @@ step "build server and client" bash -c "npm run build --silent -w server && npm 
 step "server unit and integration tests" bash -c "cd server && npx vitest run --reporter=default --reporter=json --outputFile='$REPORTS/server.json'"
 step "client tests" bash -c "cd client && npx vitest run --reporter=default --reporter=json --outputFile='$REPORTS/client.json'"
 
-# Browser tests: the built app, served as in production, against its own seeded database.
-export DATABASE_URL="postgres://app@127.0.0.1:$PGPORT/broodsilk_e2e_test"
+# Browser tests: the built app, served as in production (as the runtime role broodsilk_app; the
+# owner app migrates and seeds), against its own seeded database.
+pg_ensure_runtime_role "$WORK/pg" "$PGPORT" broodsilk_app
+export DATABASE_OWNER_URL="postgres://app@127.0.0.1:$PGPORT/broodsilk_e2e_test"
+export DATABASE_URL="postgres://broodsilk_app@127.0.0.1:$PGPORT/broodsilk_e2e_test"
 if (cd server && node dist/cli/migrate.js >/dev/null && BROODSILK_DEMO=1 node dist/cli/seed.js >/dev/null); then
   (cd server && PORT="$APP_PORT" CLIENT_DIST="$ROOT/client/dist" PUBLIC_URL="http://127.0.0.1:$APP_PORT" NODE_ENV=production exec node dist/main.js >"$WORK/app.log" 2>&1) &
   PIDS+=($!)

@@ -53,7 +53,7 @@ describe('a sac left with the mother', () => {
     // The young have left the sac: the keeper counts them where they are.
     await page.getByRole('button', { name: 'The young have emerged' }).click();
     await eventually(() => page.getByText('Young emerged').first().isVisible()).toBe(true);
-    await fill(page, 'Nymphs', '600');
+    await fill(page, '1st instar', '600');
     await fill(page, 'Dark (non-viable)', '3');
     await page.getByRole('button', { name: 'Save opening' }).click();
     const confirm = page.getByRole('dialog', { name: 'Record the opening' });

@@ -50,9 +50,10 @@ export const READS = [
     params: (ids) => [ids.sac],
   },
   {
-    name: 'care log of a sac',
-    path: (ids) => `/api/sacs/${ids.sac}/log`,
-    sql: `select json_agg(l order by l.at desc) from sac_log_entries l where l.sac_id = $1`,
+    name: 'care log of a sac (first page of 100)',
+    path: (ids) => `/api/sacs/${ids.sac}/log?limit=100`,
+    sql: `select json_agg(x) from (select l.* from sac_log_entries l where l.sac_id = $1
+        order by l.at desc, l.created_at desc, l.id desc limit 101) x`,
     params: (ids) => [ids.sac],
   },
   {
@@ -80,9 +81,9 @@ export const READS = [
     params: (ids) => [ids.project],
   },
   {
-    name: 'ledger entries',
-    path: (ids) => `/api/projects/${ids.project}/entries`,
-    sql: `select json_agg(le order by le.seq) from ledger_entries le where le.project_id = $1`,
+    name: 'ledger entries (first page of 100)',
+    path: (ids) => `/api/projects/${ids.project}/entries?limit=100`,
+    sql: `select json_agg(x) from (select le.* from ledger_entries le where le.project_id = $1 order by le.seq limit 101) x`,
     params: (ids) => [ids.project],
   },
   {

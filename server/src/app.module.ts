@@ -25,16 +25,18 @@ import { SacsModule } from './sacs/sacs.module';
 import { DashboardModule } from './dashboard/dashboard.module';
 import { CalendarModule } from './calendar/calendar.module';
 import { RemindersModule } from './reminders/reminders.module';
+import { PartnerUpdatesModule } from './partner-updates/partner-updates.module';
 import { ProjectRoleGuard } from './projects/project-role.guard';
 import { ClockModule } from './common/clock.module';
 import { AccountsModule } from './accounts/accounts.module';
 import { SettlementsModule } from './settlements/settlements.module';
 import { IdempotencyModule } from './idempotency/idempotency.module';
 import { ExportModule } from './export/export.module';
+import { ProgressLinksModule } from './progress-links/progress-links.module';
 
-/** Calendar-feed and invitation tokens travel in the path; they are secrets, so not logged. */
+/** Calendar-feed, invitation and progress-link tokens travel in the path; they are secrets, so not logged. */
 function redactSecrets(url: string): string {
-  return url.split('?')[0].replace(/^(\/api\/(?:calendar|invitations)\/)[^/]+/, '$1[secret]');
+  return url.split('?')[0].replace(/^(\/(?:api\/(?:calendar|invitations|progress)|progress)\/)[^/]+/, '$1[secret]');
 }
 
 @Module({
@@ -75,10 +77,12 @@ function redactSecrets(url: string): string {
     DashboardModule,
     CalendarModule,
     RemindersModule,
+    PartnerUpdatesModule,
     AccountsModule,
     SettlementsModule,
     IdempotencyModule,
     ExportModule,
+    ProgressLinksModule,
   ],
   providers: [
     { provide: APP_FILTER, useClass: AllExceptionsFilter },

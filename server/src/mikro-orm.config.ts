@@ -1,7 +1,6 @@
 import { defineConfig, PostgreSqlDriver, type Options } from '@mikro-orm/postgresql';
 import { Migrator } from '@mikro-orm/migrations';
-
-export const DEFAULT_DATABASE_URL = 'postgres://app@127.0.0.1:54329/broodsilk';
+import { databaseUrls } from './database/database-urls';
 
 /**
  * Options shared by the Nest module (which adds `autoLoadEntities`, each
@@ -27,9 +26,9 @@ export function baseOrmOptions(url: string): Options {
   };
 }
 
-/** The CLI's configuration (`npx mikro-orm …`, `npm run migrate`). */
+/** The CLI's configuration (`npx mikro-orm …`, `npm run migrate`, the other CLIs): the owner's connection. */
 export default defineConfig({
-  ...baseOrmOptions(process.env.DATABASE_URL ?? DEFAULT_DATABASE_URL),
+  ...baseOrmOptions(databaseUrls().owner),
   entities: ['dist/**/*.entity.js'],
   entitiesTs: ['src/**/*.entity.ts'],
 });

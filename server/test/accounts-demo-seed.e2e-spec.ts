@@ -1,6 +1,6 @@
 /** The accounts demo: three parties with money owed both ways on the shared brood, and an older project settled. */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { BalancesResponse, LedgerEntryResponse, ProjectSummary } from '@broodsilk/shared';
+import type { BalancesResponse, LedgerEntryResponse, ProjectSummary, KeysetPage } from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
 import { login } from './support/users';
 import { seedDemo } from '../src/seed/demo-seed';
@@ -47,7 +47,9 @@ describe('accounts demo seeder', () => {
     expect(b.debts).toContainEqual(expect.objectContaining({ fromName: 'Tomasz Wierzba', toName: 'Mira Okonkwo', amountMinor: 1450 }));
     expect(b.debts).toContainEqual(expect.objectContaining({ fromName: 'Mira Okonkwo', toName: 'Dara Quill', amountMinor: 5400 }));
     expect(b.problems).toEqual([]);
-    const entries = (await api(t.app).get(`/api/projects/${brood.id}/entries`).set('Authorization', tomasz.bearer).expect(200)).body as LedgerEntryResponse[];
+    const entries = (
+      (await api(t.app).get(`/api/projects/${brood.id}/entries`).set('Authorization', tomasz.bearer).expect(200)).body as KeysetPage<LedgerEntryResponse>
+    ).items;
     expect(entries.find((e) => e.kind === 'hand-over')?.awaitingConfirmationBy?.name).toBe('Tomasz Wierzba');
   });
 });

@@ -1,6 +1,6 @@
 /** The project reaches stage `shares-settled` exactly when nothing is owed (the accounts module's stage fact). */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { BalancesResponse, LedgerEntryResponse, ProjectResponse } from '@broodsilk/shared';
+import type { BalancesResponse, LedgerEntryResponse, ProjectResponse, KeysetPage } from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
 import { accountScenario, api, type AccountScenario } from './accounts.fixtures';
 
@@ -57,7 +57,8 @@ describe('stage shares-settled', () => {
   });
 
   it('refuses an entry or a confirmation dated after the recorder’s today (400), writing nothing', async () => {
-    const before = ((await api(t.app).get(`/api/projects/${s.projectId}/entries`).set('Authorization', s.mira.bearer).expect(200)).body as unknown[]).length;
+    const before = ((await api(t.app).get(`/api/projects/${s.projectId}/entries`).set('Authorization', s.mira.bearer).expect(200)).body as KeysetPage<unknown>)
+      .items.length;
     const tomorrow = new Date(Date.now() + 2 * 86_400_000).toISOString().slice(0, 10);
     const res = await api(t.app)
       .post(`/api/projects/${s.projectId}/entries`)
@@ -67,8 +68,8 @@ describe('stage shares-settled', () => {
     expect(res.body.message).toMatch(
       new RegExp(`^The hand-over date ${tomorrow} is after today \\(\\d{4}-\\d{2}-\\d{2} where you are\\); record it once it has happened\\.$`),
     );
-    expect(((await api(t.app).get(`/api/projects/${s.projectId}/entries`).set('Authorization', s.mira.bearer).expect(200)).body as unknown[]).length).toBe(
-      before,
-    );
+    expect(
+      ((await api(t.app).get(`/api/projects/${s.projectId}/entries`).set('Authorization', s.mira.bearer).expect(200)).body as KeysetPage<unknown>).items.length,
+    ).toBe(before);
   });
 });

@@ -3,7 +3,7 @@
  * are worked by hand from the terms (largest remainder, checked against hare-niemeyer in shared).
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { BalancesResponse, LedgerEntryResponse, PartyBalanceView, SharesResponse } from '@broodsilk/shared';
+import type { BalancesResponse, LedgerEntryResponse, PartyBalanceView, SharesResponse, KeysetPage } from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
 import { accountScenario, api, recordCount, type AccountScenario } from './accounts.fixtures';
 
@@ -155,7 +155,9 @@ describe('balances after every kind of entry', () => {
   it('a correction reverses the sale, and a correction of the correction reinstates it', async () => {
     saleCorrection = await entry({ kind: 'correction', date: D, reversesId: sale.id, reason: 'the buyer withdrew' });
     expect(party(await balances(), s.lenaId)).toMatchObject({ sold: 0, salesMinor: 0, owedSpiderlings: 11 });
-    const list = (await api(t.app).get(`/api/projects/${s.projectId}/entries`).set('Authorization', s.mira.bearer).expect(200)).body as LedgerEntryResponse[];
+    const list = (
+      (await api(t.app).get(`/api/projects/${s.projectId}/entries`).set('Authorization', s.mira.bearer).expect(200)).body as KeysetPage<LedgerEntryResponse>
+    ).items;
     expect(list.find((e) => e.id === sale.id)!.status).toBe('reversed');
     const twice = await post({ kind: 'correction', date: D, reversesId: sale.id, reason: 'again' });
     expect(twice.status).toBe(409);
@@ -214,7 +216,9 @@ describe('bad input and who may do what', () => {
   });
 
   it('has no route that edits or deletes an entry, and the database refuses it too', async () => {
-    const list = (await api(t.app).get(`/api/projects/${s.projectId}/entries`).set('Authorization', s.mira.bearer).expect(200)).body as LedgerEntryResponse[];
+    const list = (
+      (await api(t.app).get(`/api/projects/${s.projectId}/entries`).set('Authorization', s.mira.bearer).expect(200)).body as KeysetPage<LedgerEntryResponse>
+    ).items;
     const id = list[0]!.id;
     await api(t.app).patch(`/api/projects/${s.projectId}/entries/${id}`).set('Authorization', s.mira.bearer).send({ count: 1 }).expect(404);
     await api(t.app).delete(`/api/projects/${s.projectId}/entries/${id}`).set('Authorization', s.mira.bearer).expect(404);

@@ -76,15 +76,18 @@ describe('calendar feed (RFC 5545)', () => {
     expect(DateTime.fromISO(pull.end).minus({ days: 1 }).toISODate()).toBe(sac.pullWindow.closesOn);
     expect(DateTime.fromISO('2024-02-05').plus({ days: 21 }).toISODate()).toBe(pull.start);
 
+    // G. pulchripes has no stage figures of its own: its group's. Prelarvae day 20–42 (brachypelma-smithi.de day 20;
+    // arachnoworld.de day 25–42; docs/trade-facts.md check values 1 and 2), young day 56–84 (Grammostola 8–12 weeks, from memory, §2).
     const legs = events.find((e) => e.uid === `eggs-with-legs-${sac.id}@broodsilk`)!;
     expect(legs).toMatchObject({
       start: DateTime.fromISO('2024-02-05').plus({ days: 20 }).toISODate(),
-      end: DateTime.fromISO('2024-02-05').plus({ days: 26 }).toISODate(),
+      end: DateTime.fromISO('2024-02-05').plus({ days: 43 }).toISODate(),
       isDate: true,
     });
-    expect(legs.description).toMatch(/medium confidence/);
+    expect(legs.description).toMatch(/A guide only, species differ: the figure for its group; source: arachnoworld\.de/);
     const young = events.find((e) => e.uid === `free-living-${sac.id}@broodsilk`)!;
-    expect([young.start, young.end]).toEqual([42, 57].map((d) => DateTime.fromISO('2024-02-05').plus({ days: d }).toISODate())); // day 42 to day 56 inclusive
+    expect([young.start, young.end]).toEqual([56, 85].map((d) => DateTime.fromISO('2024-02-05').plus({ days: d }).toISODate())); // day 56 to day 84 inclusive
+    expect(young.description).toMatch(/the figure for this species; source: from memory/);
 
     // The male matured 30 days before the feed's now; his later clock changes are in the feed, one day each.
     const clock = events.filter((e) => e.uid.startsWith('male-clock-'));
@@ -107,6 +110,23 @@ describe('calendar feed (RFC 5545)', () => {
     );
     expect(theirs.map((e) => e.uid)).toContain(`pull-window-${sac.id}@broodsilk`);
     expect(theirs.some((e) => e.uid.startsWith('male-clock-'))).toBe(false);
+  });
+
+  it('takes the stage days from the species: Theraphosa blondi young day 42–56 (Wikipedia mirror; thezooreviewer 2024; docs/trade-facts.md check value 4)', async () => {
+    vi.spyOn(t.app.get(Clock), 'now').mockReturnValue(new Date(FEED_NOW));
+    const blondi = (await createProject(t.app, t.orm, owner, { title: 'Goliath pair', maleAgeDays: 30, species: 'Theraphosa blondi' })).id;
+    const sac = await createSac(t.app, owner, blondi, { layDate: '2024-02-05' });
+    const events = parse(
+      (
+        await http()
+          .get((await feedOf(owner)).path)
+          .expect(200)
+      ).text,
+    );
+    const young = events.find((e) => e.uid === `free-living-${sac.id}@broodsilk`)!;
+    // luxon as the reference for the day arithmetic; DTEND is the day after the last day (RFC 5545 §3.6.1)
+    expect([young.start, young.end]).toEqual([42, 57].map((d) => DateTime.fromISO('2024-02-05').plus({ days: d }).toISODate()));
+    expect(young.description).toMatch(/the figure for this species; source: Wikipedia, "Goliath birdeater"/);
   });
 
   it('the same URL comes back until it is rotated; rotating kills the old URL (404)', async () => {

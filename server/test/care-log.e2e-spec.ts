@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
 import { DateTime } from 'luxon';
-import type { CareLogEntryResponse, SacResponse } from '@broodsilk/shared';
+import type { CareLogEntryResponse, SacResponse, KeysetPage } from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
 import type { SignedIn } from './support/users';
 import { projectWithRoles } from './support/projects';
@@ -48,7 +48,8 @@ describe('roll schedule through the API (interval 12 h; overdue after a quarter 
     const strike = await log(owner, sac.id, { kind: 'strike', strikes: recent.body.id, reason: 'Logged on the wrong sac' }).expect(201);
     expect(strike.body).toMatchObject({ kind: 'strike', strikes: recent.body.id, text: 'Logged on the wrong sac' });
     expect((await sacOf(sac.id)).roll).toMatchObject({ status: 'overdue', lastRollAt: hoursBefore(16) });
-    const entries = (await http().get(`/api/sacs/${sac.id}/log`).set('Authorization', partner.bearer).expect(200)).body as CareLogEntryResponse[];
+    const entries = ((await http().get(`/api/sacs/${sac.id}/log`).set('Authorization', partner.bearer).expect(200)).body as KeysetPage<CareLogEntryResponse>)
+      .items;
     expect(entries.find((e) => e.id === recent.body.id)!.struck).toMatchObject({ byEntryId: strike.body.id, reason: 'Logged on the wrong sac' });
     expect(entries.find((e) => e.id === old.body.id)!.struck).toBeNull();
     await log(owner, sac.id, { kind: 'strike', strikes: recent.body.id, reason: 'again' }).expect(409);
@@ -143,7 +144,8 @@ describe('who writes the log', () => {
     await log(caretaker, sac.id, { kind: 'roll' }).expect(201);
     const denied = await log(partner, sac.id, { kind: 'roll' }).expect(403);
     expect(denied.body.message).toMatch(/Only the owner or caretakers/);
-    const entries = (await http().get(`/api/sacs/${sac.id}/log`).set('Authorization', partner.bearer).expect(200)).body as CareLogEntryResponse[];
+    const entries = ((await http().get(`/api/sacs/${sac.id}/log`).set('Authorization', partner.bearer).expect(200)).body as KeysetPage<CareLogEntryResponse>)
+      .items;
     expect(entries.map((e) => e.kind)).toEqual(['roll', 'check']);
     expect(entries[0].author).toEqual({ id: caretaker.user.id, name: 'Cleo' });
     const timeline = (await http().get(`/api/projects/${projectId}/activity`).set('Authorization', owner.bearer)).body as {

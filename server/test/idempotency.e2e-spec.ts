@@ -1,6 +1,7 @@
 import request from 'supertest';
+import { createHash } from 'node:crypto';
 import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
-import type { CareLogEntryResponse } from '@broodsilk/shared';
+import type { CareLogEntryResponse, KeysetPage } from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
 import type { SignedIn } from './support/users';
 import { projectWithRoles } from './support/projects';
@@ -19,7 +20,9 @@ const roll = (who: SignedIn, sacId: string, key: string | null, body: object = {
   return (key ? r.set('Idempotency-Key', key) : r).send(body);
 };
 const rollsOf = async (sacId: string) =>
-  ((await http().get(`/api/sacs/${sacId}/log`).set('Authorization', owner.bearer).expect(200)).body as CareLogEntryResponse[]).filter((e) => e.kind === 'roll');
+  ((await http().get(`/api/sacs/${sacId}/log`).set('Authorization', owner.bearer).expect(200)).body as KeysetPage<CareLogEntryResponse>).items.filter(
+    (e) => e.kind === 'roll',
+  );
 const pulledSac = () => createSac(t.app, owner, projectId, { layDate: '2025-08-20', pulledAt: '2025-09-14T08:00:00Z' });
 const keyRows = async (key: string) =>
   t.orm.em.getConnection().execute<{ status: number | null }[]>(`select status from idempotency_keys where key = ?`, [key]);
@@ -84,6 +87,53 @@ describe('Idempotency-Key on button writes', () => {
     await roll(caretaker, sac.id, 'expiring-key-0005').expect(201);
     expect(await rollsOf(sac.id)).toHaveLength(2);
     expect(await keyRows('expiring-key-0005')).toEqual([{ status: 201 }]);
+  });
+
+  it('claims the key in the transaction of the write: when the answer cannot be stored, neither the key nor the write stays, and the retry writes once', async () => {
+    pin();
+    const sac = await pulledSac();
+    const db = t.orm.em.getConnection();
+    // A real failure from PostgreSQL after the write: storing any answer breaks a check constraint
+    // (as a lost connection or a killed process would stop it). Before, the roll stayed behind the 500.
+    await db.execute(`alter table idempotency_keys add constraint no_answers_yet check (status is null) not valid`);
+    try {
+      await roll(caretaker, sac.id, 'answer-lost-0006').expect(500);
+    } finally {
+      await db.execute(`alter table idempotency_keys drop constraint no_answers_yet`);
+    }
+    expect(await rollsOf(sac.id)).toHaveLength(0);
+    expect(await keyRows('answer-lost-0006')).toEqual([]);
+    const retry = await roll(caretaker, sac.id, 'answer-lost-0006').expect(201);
+    expect(retry.headers['idempotent-replayed']).toBeUndefined();
+    const again = await roll(caretaker, sac.id, 'answer-lost-0006').expect(201);
+    expect(again.body).toEqual(retry.body);
+    expect(await rollsOf(sac.id)).toHaveLength(1);
+  });
+
+  it('a repeat waits while another transaction holds the key, and writes once that transaction rolls back', async () => {
+    pin();
+    const sac = await pulledSac();
+    const body = { kind: 'roll' };
+    const path = `/api/sacs/${sac.id}/log`;
+    const fingerprint = createHash('sha256')
+      .update(`POST ${path}\n${JSON.stringify(body)}`)
+      .digest('hex');
+    // The first attempt, still running: its claim is written but not committed.
+    const first = t.orm.em.fork();
+    await first.begin();
+    await first.execute(
+      `insert into idempotency_keys (id, created_at, updated_at, user_id, key, method, path, fingerprint, expires_at)
+       values (gen_random_uuid(), now(), now(), ?, 'held-key-0007', 'POST', ?, ?, now() + interval '1 hour')`,
+      [caretaker.user.id, path, fingerprint],
+    );
+    let answered = false;
+    const repeat = roll(caretaker, sac.id, 'held-key-0007', body).then((r) => ((answered = true), r));
+    await new Promise((r) => setTimeout(r, 500));
+    expect(answered).toBe(false);
+    await first.rollback(); // the first attempt failed: nothing of it stays
+    expect((await repeat).status).toBe(201);
+    expect(await rollsOf(sac.id)).toHaveLength(1);
+    expect(await keyRows('held-key-0007')).toEqual([{ status: 201 }]);
   });
 
   it('refuses a malformed key', async () => {

@@ -1,6 +1,6 @@
 import request from 'supertest';
 import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
-import type { BroodCountsResponse, CareLogEntryResponse, DashboardResponse, SacResponse } from '@broodsilk/shared';
+import type { BroodCountsResponse, CareLogEntryResponse, DashboardResponse, SacResponse, KeysetPage } from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper, type SignedIn } from './support/users';
 import { projectWithRoles } from './support/projects';
@@ -76,7 +76,7 @@ describe('a sac left with the mother', () => {
       outcome: 'emerged',
       broodStage: 'first-instar',
     });
-    const log = (await as(owner).get(`/sacs/${sac.id}/log`).expect(200)).body as CareLogEntryResponse[];
+    const log = ((await as(owner).get(`/sacs/${sac.id}/log`).expect(200)).body as KeysetPage<CareLogEntryResponse>).items;
     expect(log.filter((e) => e.kind === 'stage').map((e) => [e.stage, e.at])).toEqual([['first-instar', '2025-10-20T08:00:00.000Z']]);
     // A later count naming an earlier stage is history at its instant; it does not move the stage back.
     await as(caretaker).post(`/sacs/${sac.id}/counts`, { at: '2025-10-20T09:00:00Z', stage: 'eggs-with-legs', alive: 85 }).expect(201);
@@ -214,7 +214,7 @@ describe('the target band', () => {
     ).body as SacResponse;
     expect(own.band).toMatchObject({ temperatureC: { min: 26, max: 31 }, origin: 'sac' });
     expect(own.readingAlerts).toEqual([]);
-    const log = (await as(owner).get(`/sacs/${sac.id}/log`).expect(200)).body as CareLogEntryResponse[];
+    const log = ((await as(owner).get(`/sacs/${sac.id}/log`).expect(200)).body as KeysetPage<CareLogEntryResponse>).items;
     expect(log.find((e) => e.id === hot.id)?.outsideBand).toBeNull();
     const reset = (await as(owner).patch(`/sacs/${sac.id}`, { temperatureBand: null }).expect(200)).body as SacResponse;
     expect(reset.band.origin).toBe('default');

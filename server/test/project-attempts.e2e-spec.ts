@@ -287,10 +287,11 @@ describe('ending, closing and reopening', () => {
     await api(t.app).post(`/api/projects/${s.projectId}/entries/${paid.id}/confirm`).set('Authorization', s.tomasz.bearer).send({}).expect(201);
     const correction = await entry(s.mira, { kind: 'correction', date: today, reversesId: paid.id, reason: 'the transfer bounced' });
     expect(correction.id).toBeTruthy();
-    const list = (await api(t.app).get(`/api/projects/${s.projectId}/entries`).set('Authorization', s.mira.bearer).expect(200)).body as {
-      id: string;
-      status: string;
-    }[];
+    const list = (
+      (await api(t.app).get(`/api/projects/${s.projectId}/entries`).set('Authorization', s.mira.bearer).expect(200)).body as {
+        items: { id: string; status: string }[];
+      }
+    ).items;
     expect(list.find((e) => e.id === paid.id)!.status).toBe('reversed');
   });
 });

@@ -88,6 +88,28 @@ describe('statements per read do not grow with the data', () => {
     expect(await cost(fiveSacs.who, path(fiveSacs))).toBe(await cost(oneSac.who, path(oneSac)));
   });
 
+  it('a page of the care log costs the same for a sac with 2 entries as for one with 30, and the same far back as at the start', async () => {
+    for (const [sacId, n] of [
+      [small.sacIds[0], 2],
+      [big.sacIds[0], 30],
+    ] as const)
+      for (let i = 0; i < n; i++)
+        await http()
+          .post(`/api/sacs/${sacId}/log`)
+          .set('Authorization', (sacId === small.sacIds[0] ? small : big).who.bearer)
+          .send({ kind: 'note', text: `note ${i}` })
+          .expect(201);
+    const first = (k: Keeper) => `/api/sacs/${k.sacIds[0]}/log?limit=1`;
+    expect(await cost(big.who, first(big))).toBe(await cost(small.who, first(small)));
+    const cursorOf = async (k: Keeper, query: string) =>
+      ((await http().get(`/api/sacs/${k.sacIds[0]}/log?${query}`).set('Authorization', k.who.bearer).expect(200)).body as { nextCursor: string }).nextCursor;
+    const deep = await cursorOf(big, 'limit=25');
+    const shallow = await cursorOf(small, 'limit=1');
+    expect(await cost(big.who, `/api/sacs/${big.sacIds[0]}/log?limit=2&after=${deep}`)).toBe(
+      await cost(small.who, `/api/sacs/${small.sacIds[0]}/log?limit=2&after=${shallow}`),
+    );
+  });
+
   it('a sac page costs the same in a project of 40 as in one of 2', async () => {
     expect(await cost(big.who, `/api/sacs/${big.sacIds[39]}`)).toBe(await cost(small.who, `/api/sacs/${small.sacIds[1]}`));
   });

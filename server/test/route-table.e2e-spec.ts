@@ -29,6 +29,9 @@ const PUBLIC = new Set([
   'POST /api/webhooks/payments',
   'GET /api/unsubscribe/:token',
   'POST /api/unsubscribe/:token',
+  'GET /api/progress/:token',
+  'GET /api/progress/:token/photos/:photoId',
+  'GET /api/progress/:token/photos/:photoId/thumb',
 ]);
 /** The shared species catalogue: every keeper reads it, only an admin edits it. */
 const CATALOGUE: Record<string, number> = { 'GET /api/species/:id': 200, 'PATCH /api/species/:id': 403 };

@@ -1,6 +1,6 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { dayNumber, todayIn, type DashboardResponse, type ProjectSummary, type SacResponse, type SharesResponse } from '@broodsilk/shared';
+import { dayNumber, todayIn, type DashboardResponse, type ProjectSummary, type SacResponse, type SharesResponse, type KeysetPage } from '@broodsilk/shared';
 import { seedDemo } from '../src/seed/demo-seed';
 import { seedCollection } from '../src/seed/collection.seeder';
 import { DEMO_PROJECTS, seedProjects } from '../src/seed/projects.seeder';
@@ -75,7 +75,9 @@ describe('demo sacs', () => {
         [DEMO_PROJECTS.hamoriiIncubator, expectedDay, 'due'],
       ]);
     }
-    const log = (await http().get(`/api/sacs/${h.id}/log`).set('Authorization', ines.bearer).expect(200)).body as { kind: string; author: { name: string } }[];
+    const log = (
+      (await http().get(`/api/sacs/${h.id}/log`).set('Authorization', ines.bearer).expect(200)).body as KeysetPage<{ kind: string; author: { name: string } }>
+    ).items;
     expect(new Set(log.map((e) => e.kind))).toEqual(new Set(['roll', 'temperature', 'humidity', 'note']));
     expect(log.find((e) => e.kind === 'roll')!.author.name).toBe('Ines Carvalho');
   });

@@ -81,7 +81,7 @@ describe('an opening with eggs kept back, exact or estimated', () => {
     const few = { ...INFERTILE, darkEggs: 10, spoiledEggs: 2 }; // 20 eggs, fewer than 400
     const warned = await post(owner, `/${sac.id}/opening`, few).expect(422);
     expect(warned.body.details).toEqual([expect.objectContaining({ field: 'acknowledgedWarnings', code: 'eggs-outside-species-range' })]);
-    expect(warned.body.message).toContain('20 eggs and nymphs is fewer than this species usually lays (400–1000 a sac)');
+    expect(warned.body.message).toContain('20 eggs and young is fewer than this species usually lays (400–1000 a sac)');
     await get(owner, `/${sac.id}/opening`).expect(404);
     await get(owner, `/${sac.id}/kept-back`).expect(404);
     const saved = await post(owner, `/${sac.id}/opening`, { ...few, acknowledgedWarnings: ['eggs-outside-species-range'], warningReason: 'Her first sac.' });
@@ -125,7 +125,7 @@ describe('the kept-back batch', () => {
       ['roll', false],
     ]);
     // The sac's own care log is untouched: the batch keeps its own.
-    expect((await get(owner, `/${sacId}/log`).expect(200)).body).toEqual([]);
+    expect((await get(owner, `/${sacId}/log`).expect(200)).body).toEqual({ items: [], nextCursor: null });
   });
 
   it('written off once, with a date and a reason: only the owner ends it; counting or logging it afterwards is 409', async () => {

@@ -84,7 +84,7 @@ describe('the opening', () => {
     expect(tooMany.body.details).toEqual([
       {
         field: 'keptBack',
-        message: 'Only viable young can go back into incubation: 161 kept back, but 160 counted as healthy eggs, eggs with legs and nymphs.',
+        message: 'Only viable young can go back into incubation: 161 kept back, but 160 counted as healthy eggs, eggs with legs and 1st instar young.',
       },
     ]);
     const empty = await open(owner, sac.id, { ...GOOD, healthyEggs: 0, eggsWithLegs: 0, darkEggs: 0, spoiledEggs: 0, keptBack: 0 }).expect(400);

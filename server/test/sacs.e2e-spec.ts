@@ -46,6 +46,8 @@ describe('recording a sac', () => {
     });
     // G. pulchripes has its own window (day 30–45) in the catalogue.
     expect(sac.pullWindow).toMatchObject({ fromDay: 30, toDay: 45, origin: 'species', state: 'not-yet', opensOn: '2025-06-28', closesOn: '2025-07-13' });
+    // the sac card says where the window comes from: the genus' usual pull days (docs/trade-facts.md §2, from memory)
+    expect(sac.pullWindow.source).toMatchObject({ kind: 'memory', note: expect.stringMatching(/usual pull days/) });
     for (const who of [partner, caretaker]) {
       const list = await http().get(`/api/projects/${projectId}/sacs`).set('Authorization', who.bearer).expect(200);
       expect(list.body.map((s: SacResponse) => s.id)).toContain(sac.id);
@@ -190,7 +192,7 @@ describe('changing the window', () => {
     pin('2025-06-10T12:00:00Z');
     const sac = await createSac(t.app, owner, projectId, { layDate: '2025-05-20', pullFromDay: 21, pullToDay: 45 });
     const moved = await http().patch(`/api/sacs/${sac.id}`).set('Authorization', owner.bearer).send({ pullToDay: 30 }).expect(200);
-    expect(moved.body.pullWindow).toMatchObject({ fromDay: 21, toDay: 30, origin: 'sac', closesOn: luxonPlus('2025-05-20', 30) });
+    expect(moved.body.pullWindow).toMatchObject({ fromDay: 21, toDay: 30, origin: 'sac', source: null, closesOn: luxonPlus('2025-05-20', 30) });
     await http().patch(`/api/sacs/${sac.id}`).set('Authorization', owner.bearer).send({ pullFromDay: 31 }).expect(400);
     const cleared = await http().patch(`/api/sacs/${sac.id}`).set('Authorization', owner.bearer).send({ pullFromDay: null, pullToDay: null }).expect(200);
     expect(cleared.body.pullWindow).toMatchObject({ fromDay: 30, toDay: 45, origin: 'species' });

@@ -6,7 +6,7 @@
 import type { AddressInfo } from 'node:net';
 import Stripe from 'stripe';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { BalancesResponse, CheckoutResponse, LedgerEntryResponse, PayoutAccountResponse } from '@broodsilk/shared';
+import type { BalancesResponse, CheckoutResponse, LedgerEntryResponse, PayoutAccountResponse, KeysetPage } from '@broodsilk/shared';
 import type { PaymentFake } from '../../scripts/payment-fake/server.mjs';
 import { createTestApp, type TestApp } from './support/test-app';
 import { accountScenario, api, type AccountScenario } from './accounts.fixtures';
@@ -85,9 +85,9 @@ const signedEvent = (id: string, object: Record<string, unknown>) => {
   return fetch(webhookUrl, { method: 'POST', headers: { 'content-type': 'application/json', 'stripe-signature': signature }, body: payload });
 };
 const moneyEntries = async () =>
-  ((await api(t.app).get(`/api/projects/${s.projectId}/entries`).set('Authorization', s.mira.bearer).expect(200)).body as LedgerEntryResponse[]).filter(
-    (e) => e.kind === 'money',
-  );
+  (
+    (await api(t.app).get(`/api/projects/${s.projectId}/entries`).set('Authorization', s.mira.bearer).expect(200)).body as KeysetPage<LedgerEntryResponse>
+  ).items.filter((e) => e.kind === 'money');
 
 describe('payout account', () => {
   it('cannot be paid before linking a payout account', async () => {

@@ -86,13 +86,62 @@ describe('species catalogue', () => {
 
   it('a species response carries cautions, sources and effective values', async () => {
     const [regalis] = (await search('Poecilotheria regalis')).items;
-    expect(regalis.cautions.medicallySignificantVenom.value).toBe(true);
-    expect(regalis.cautions.medicallySignificantVenom.source).toMatchObject({ kind: 'published' });
+    expect(regalis.cautions.venom.value).toBe('medically-significant');
+    expect(regalis.cautions.venom.source).toMatchObject({ kind: 'published' });
     expect(regalis.cautions.cautionText).toMatch(/local law/);
     expect(regalis.tradeListing.value).toBe('CITES Appendix II');
     expect(regalis.effective.pullWindow).toMatchObject({ value: { fromDay: 21, toDay: 30 }, from: 'species' });
     const [fimbriatus] = (await search('Chilobrachys')).items;
     expect(fimbriatus.effective.pullWindow).toEqual({ value: { fromDay: 21, toDay: 45 }, source: { kind: 'common-practice' }, from: 'default' });
+  });
+
+  it('the boolean venom flag became three-valued as the dataset says (docs/trade-facts.md §9: Ahmed et al. 2009, Fuchs et al. 2014, Hauke & Herzig 2020)', async () => {
+    // The catalogue migration wrote the old boolean column; the conversion must land on the dataset's own value and source.
+    const all = (await http().get('/api/species').query({ limit: 200 }).set('Authorization', keeper.bearer).expect(200)).body as Paged<SpeciesResponse>;
+    const byName = new Map(all.items.map((s) => [s.scientificName, s]));
+    for (const r of SPECIES_DATA) expect(byName.get(r.scientificName)?.cautions.venom, r.key).toEqual(r.venom);
+  });
+
+  it('tropical New World ground dwellers have their own pairing-to-sac days; the group value (seasonal genera) stays for the rest (docs/trade-facts.md §3)', async () => {
+    const all = (await http().get('/api/species').query({ limit: 200 }).set('Authorization', keeper.bearer).expect(200)).body as Paged<SpeciesResponse>;
+    const byName = new Map(all.items.map((s) => [s.scientificName, s]));
+    for (const r of SPECIES_DATA) expect(byName.get(r.scientificName)?.breeding.pairingToSacDays, r.key).toEqual(r.pairingToSacDays);
+    const lasiodora = byName.get('Lasiodora parahybana')!.effective.pairingToSacDays;
+    expect(lasiodora).toMatchObject({ value: { min: 45, max: 180 }, from: 'species', source: { kind: 'memory' } });
+    const smithi = byName.get('Brachypelma smithi')!.effective.pairingToSacDays;
+    expect(smithi).toMatchObject({ value: { min: 120, max: 300 }, from: 'group', source: { kind: 'memory', note: expect.stringMatching(/^seasonal genera/) } });
+    // the burrowers' figure has no source about burrowers: common practice, not a citation
+    expect(byName.get('Pelinobius muticus')!.effective.pairingToSacDays).toMatchObject({ from: 'group', source: { kind: 'common-practice' } });
+  });
+
+  it('T. vagans eggs per sac says it rests on two sacs (Dor & Hénaut 2012; docs/trade-facts.md check value 3)', async () => {
+    const [vagans] = (await search('Tliltocatl vagans')).items;
+    expect(vagans.breeding.eggsPerSac).toEqual({
+      value: { min: 200, max: 200 },
+      source: { kind: 'published', citation: expect.stringMatching(/^Dor, A\. & Hénaut, Y\. 2012/), sampleSize: { count: 2, unit: 'sacs' } },
+    });
+  });
+
+  it('an Old World species with no published bite is "not known" and still carries its group caution', async () => {
+    const [balfouri] = (await search('Monocentropus balfouri')).items;
+    expect(balfouri.cautions.venom).toMatchObject({ value: 'not-known', source: { kind: 'memory' } });
+    expect(balfouri.cautions.urticatingHairs.value).toBe(false);
+    expect(balfouri.cautions.cautionText).toMatch(/severe, long-lasting muscle cramps/);
+    expect(balfouri.cautions.cautionText).toMatch(/local law/);
+  });
+
+  it('an admin sets the venom flag to one of the three values, with a source; anything else is 400', async () => {
+    const [balfouri] = (await search('Monocentropus balfouri')).items;
+    const url = `/api/species/${balfouri.id}`;
+    const bad = await http().patch(url).set('Authorization', admin.bearer).send({ venom: true, sourceKind: 'memory' }).expect(400);
+    expect(JSON.stringify(bad.body)).toMatch(/venom must be one of medically-significant, no-cases-known, not-known/);
+    await http().patch(url).set('Authorization', keeper.bearer).send({ venom: 'no-cases-known', sourceKind: 'memory' }).expect(403);
+    const ok = await http()
+      .patch(url)
+      .set('Authorization', admin.bearer)
+      .send({ venom: 'medically-significant', sourceKind: 'published', sourceCitation: 'A bite report, 2026' })
+      .expect(200);
+    expect(ok.body.cautions.venom).toEqual({ value: 'medically-significant', source: { kind: 'published', citation: 'A bite report, 2026' } });
   });
 
   it('only an admin edits; a value change needs its source; bad ranges are 400', async () => {

@@ -80,8 +80,11 @@ describe('statement CSV', () => {
 
 describe('every entry that concerns the party, with numbers as numbers', () => {
   it('the keeper’s own statement lists the hand-overs, cash-outs and sales he made, and the arrival he was told of', async () => {
-    const entries = (await api(t.app).get(`/api/projects/${s.projectId}/entries`).set('Authorization', s.mira.bearer).expect(200))
-      .body as StatementResponse['entries'];
+    const entries = (
+      (await api(t.app).get(`/api/projects/${s.projectId}/entries`).set('Authorization', s.mira.bearer).expect(200)).body as {
+        items: StatementResponse['entries'];
+      }
+    ).items;
     const handOver = entries.find((e) => e.kind === 'hand-over')!;
     await api(t.app)
       .post(`/api/projects/${s.projectId}/entries/${handOver.id}/confirm`)

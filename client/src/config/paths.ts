@@ -22,4 +22,5 @@ export const paths = {
   incubator: { path: APP_PAGES.incubator, href: () => '/incubator' },
   incubatorSac: { path: APP_PAGES.incubatorSac, href: (sacId: string) => `/incubator/${sacId}` },
   invitation: { path: APP_PAGES.invitation, href: (token: string) => `/invitations/${encodeURIComponent(token)}` },
+  progress: { path: APP_PAGES.progress, href: (token: string) => `/progress/${encodeURIComponent(token)}` },
 } as const;

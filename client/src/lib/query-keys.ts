@@ -17,6 +17,7 @@ export const queryRoots = {
   invitations: ['invitations'],
   reminders: ['reminders'],
   notifications: ['notifications'],
+  progress: ['progress'],
 } as const satisfies Record<string, QueryKey>;
 
 /** The signed-in user: auth reads it, settings and the 401 handler write it. */

@@ -4,7 +4,7 @@ import type { AnimalSummary } from '@broodsilk/shared';
 export const animalSummary = (over: Partial<AnimalSummary>): AnimalSummary => ({
   id: 'a',
   label: 'A',
-  species: { id: 's', scientificName: 'Poecilotheria regalis', group: 'ow-arboreal', urticatingHairs: false, medicallySignificantVenom: true },
+  species: { id: 's', scientificName: 'Poecilotheria regalis', group: 'ow-arboreal', urticatingHairs: false, venom: 'medically-significant' },
   sex: 'female',
   maturity: 'mature',
   maturedOn: null,

@@ -32,6 +32,7 @@ export const PULLED_TEST_SAC: SacResponse = {
     fromDay: 21,
     toDay: 45,
     origin: 'default',
+    source: { kind: 'common-practice' },
     opensOn: '2026-11-22',
     closesOn: '2026-12-16',
     closingFrom: '2026-12-14',

@@ -1,5 +1,6 @@
-import { Body, Controller, Get, Param, ParseUUIDPipe, Post } from '@nestjs/common';
-import type { HandOverFormResponse, LedgerEntryResponse } from '@broodsilk/shared';
+import { Body, Controller, Get, Param, ParseUUIDPipe, Post, Query } from '@nestjs/common';
+import type { HandOverFormResponse, KeysetPage, LedgerEntryResponse } from '@broodsilk/shared';
+import { KeysetQueryDto } from '../common/paging/keyset-cursor';
 import { CurrentProject, ProjectRoles } from '../projects/project-roles.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import type { AuthUser } from '../common/auth-user';
@@ -19,8 +20,8 @@ export class EntriesController {
 
   @Get()
   @ProjectRoles('owner', 'partner')
-  list(@CurrentProject() a: ProjectAccess): Promise<LedgerEntryResponse[]> {
-    return this.entries.list(a);
+  list(@CurrentProject() a: ProjectAccess, @Query() page: KeysetQueryDto): Promise<KeysetPage<LedgerEntryResponse>> {
+    return this.entries.list(a, page);
   }
 
   @Get('hand-over-form')

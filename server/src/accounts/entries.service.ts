@@ -1,6 +1,7 @@
 import { BadRequestException, ConflictException, ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
-import { todayIn, type ConfirmEntryRequest, type CreateEntryRequest, type LedgerEntryResponse } from '@broodsilk/shared';
+import { todayIn, type ConfirmEntryRequest, type CreateEntryRequest, type KeysetPage, type KeysetQuery, type LedgerEntryResponse } from '@broodsilk/shared';
+import { decodeCursor, encodeCursor, pageSize } from '../common/paging/keyset-cursor';
 import type { AuthUser } from '../common/auth-user';
 import { ActivityService } from '../activity/activity.service';
 import type { ProjectAccess } from '../projects/project-access.service';
@@ -24,8 +25,25 @@ export class EntriesService {
     private readonly activity: ActivityService,
   ) {}
 
-  async list(access: ProjectAccess): Promise<LedgerEntryResponse[]> {
-    return toEntryResponses(await loadAccount(this.em, access.project));
+  /**
+   * The ledger in its order (seq), one page at a time by keyset: the page after a cursor holds the
+   * entries recorded after the cursor's entry. Each entry's state (in force, reversed, awaiting)
+   * depends on the whole account, so the account is loaded whole (a fixed number of statements);
+   * the page bounds what is sent.
+   */
+  async list(access: ProjectAccess, page: KeysetQuery = {}): Promise<KeysetPage<LedgerEntryResponse>> {
+    const view = await loadAccount(this.em, access.project);
+    const rows = view.data.rows;
+    let start = 0;
+    if (page.after) {
+      const seq = decodeCursor(page.after, 'seq', 'integer');
+      const at = rows.findIndex((r) => r.seq === seq);
+      if (at < 0) throw new BadRequestException({ message: 'after names no entry of this account: pass the nextCursor of the page before, unchanged.' });
+      start = at + 1;
+    }
+    const end = start + pageSize(page);
+    const items = toEntryResponses(view).slice(start, end);
+    return { items, nextCursor: end < rows.length ? encodeCursor({ seq: rows[end - 1].seq }) : null };
   }
 
   /** Checks and appends one entry under the account lock, with its activity record, in one transaction. */

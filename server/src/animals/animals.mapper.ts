@@ -26,7 +26,7 @@ export function toAnimalSummary(a: Animal, viewerId: string): AnimalSummary {
       scientificName: s.scientificName,
       group: s.group,
       urticatingHairs: s.urticatingHairs,
-      medicallySignificantVenom: s.medicallySignificantVenom,
+      venom: s.venom,
     },
     sex: a.sex,
     maturity: a.maturity,

@@ -7,6 +7,7 @@ import { Animal } from './animal.entity';
 import { Molt } from './molt.entity';
 import { FeedingEntry } from './feeding-entry.entity';
 import { AnimalDepartureRegistry } from './animal-departure.registry';
+import { AnimalMoltRegistry } from './animal-molt.registry';
 import { AnimalReadersRegistry } from './animal-readers.registry';
 import { AnimalLifeService } from './animal-life.service';
 import { AnimalLifeController } from './animal-life.controller';
@@ -41,12 +42,13 @@ import { AnimalOwnershipService } from './animal-ownership.service';
     AnimalsCsvService,
     AnimalUsageRegistry,
     AnimalDepartureRegistry,
+    AnimalMoltRegistry,
     AnimalReadersRegistry,
     MoltsService,
     AnimalPhotosService,
     AnimalLifeService,
     FeedingsService,
   ],
-  exports: [AnimalsService, AnimalUsageRegistry, AnimalDepartureRegistry, AnimalReadersRegistry],
+  exports: [AnimalsService, AnimalUsageRegistry, AnimalDepartureRegistry, AnimalMoltRegistry, AnimalReadersRegistry],
 })
 export class AnimalsModule {}

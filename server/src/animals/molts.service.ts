@@ -8,6 +8,7 @@ import { badRequest } from '../common/field-errors';
 import { Molt } from './molt.entity';
 import { toMoltResponse } from './molts.mapper';
 import { MOLT_PHOTO } from './animal-photos.service';
+import { AnimalMoltRegistry } from './animal-molt.registry';
 import type { CreateMoltDto } from './dto/create-molt.dto';
 
 @Injectable()
@@ -16,6 +17,7 @@ export class MoltsService {
     private readonly em: EntityManager,
     private readonly animals: AnimalsService,
     private readonly photos: PhotosService,
+    private readonly molts: AnimalMoltRegistry,
   ) {}
 
   async list(viewer: AuthUser, animalId: string): Promise<MoltResponse[]> {
@@ -63,6 +65,7 @@ export class MoltsService {
         animal.maturity = 'mature';
         animal.maturedOn = dto.moltedOn;
       }
+      await this.molts.molted(tx, { animal, moltedOn: dto.moltedOn, actorId: viewer.id });
       await tx.flush();
       return toMoltResponse(molt, []);
     });

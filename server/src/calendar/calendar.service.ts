@@ -14,6 +14,7 @@ import { SAC_POPULATE, SacViewsService } from '../sacs/sac-views.service';
 import { CalendarFeed } from './calendar-feed.entity';
 import { feedToken, hashToken, revokeFeeds } from './feed-token';
 import { maleClockEvents, sacEvents, type FeedEvent } from './feed-events';
+import { expectedStageDays } from '../species/stage-days';
 import { Clock } from '../common/clock';
 
 const NOT_FOUND = 'There is no such calendar feed. If you rotated its address, subscribe to the new one.';
@@ -85,6 +86,6 @@ export class CalendarService {
       { populate: SAC_POPULATE, orderBy: { layDate: 'asc' } },
     );
     const responses = await this.views.build(this.em, sacs, viewer.timeZone);
-    return sacs.flatMap((s, i) => sacEvents(s.project.title, responses[i], reader));
+    return sacs.flatMap((s, i) => sacEvents(s.project.title, responses[i], expectedStageDays(s.project.female.species), reader));
   }
 }

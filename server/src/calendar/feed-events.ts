@@ -1,4 +1,14 @@
-import { addDays, broodStageLabel, isBroodStageAtLeast, wordsFor, type CalendarDate, type MaleClockRow, type SacResponse } from '@broodsilk/shared';
+import {
+  addDays,
+  broodStageLabel,
+  isBroodStageAtLeast,
+  wordsFor,
+  type CalendarDate,
+  type ExpectedStageDays,
+  type MaleClockRow,
+  type SacResponse,
+  valueSourceLabel,
+} from '@broodsilk/shared';
 import type { Reader } from '../users/reader-words';
 
 const ENGLISH: Reader = { t: wordsFor('en'), lng: 'en', numbering: 'us', unit: 'C' };
@@ -12,35 +22,26 @@ export interface FeedEvent {
   description: string;
 }
 
-/**
- * Expected stage dates and where the figures come from (docs/trade-facts.md §1, §2; medium confidence):
- * prelarvae ("eggs with legs") hatch about day 20 in B. smithi (brachypelma-smithi.de, after
- * Vachon 1957), up to day 25 and later in other genera (arachnoworld.de: 25–42);
- * free-living young about 6–8 weeks after laying (Theraphosa blondi, day 42–56; a sac left with
- * the mother opens about week 6, tarantulaspider.net). Species differ: these are a guide only.
- */
-export const EXPECTED_STAGES = [
-  {
-    key: 'eggs-with-legs',
-    stage: 'eggs-with-legs',
-    fromDay: 20,
-    toDay: 25,
-    source:
-      'Guide only, medium confidence: prelarvae hatch about day 20 (B. smithi; brachypelma-smithi.de after Vachon 1957), later in some genera (arachnoworld.de: day 25–42).',
-  },
-  {
-    key: 'free-living',
-    stage: 'first-instar',
-    fromDay: 42,
-    toDay: 56,
-    source:
-      'Guide only, medium confidence: young leave the sac about 6–8 weeks after laying (Theraphosa blondi, day 42–56; with the mother about week 6, tarantulaspider.net).',
-  },
+/** The stages the calendar expects, each with its figure in the species' (or group's) values. */
+const EXPECTED_STAGES = [
+  { key: 'eggs-with-legs', stage: 'eggs-with-legs', days: 'eggsWithLegs' },
+  { key: 'free-living', stage: 'first-instar', days: 'freeLiving' },
 ] as const;
+
+/** Where a stage figure comes from, in the reader's words: a guide only, with its source or mark. */
+function stageSource(t: Reader['t'], days: ExpectedStageDays[keyof ExpectedStageDays]): string {
+  const from = t(`calendar.stageFrom.${days.from}`);
+  return t('calendar.stageGuide', { from, source: valueSourceLabel(t, days.source) });
+}
 
 const DOMAIN = 'broodsilk';
 
-export function sacEvents(projectTitle: string, sac: SacResponse, { t, numbering }: Reader = ENGLISH): FeedEvent[] {
+/**
+ * A sac's pull window and its expected stages. The stage days are the species' own figures, else
+ * its group's (`expectedStageDays`, docs/trade-facts.md §1, §2): species differ, so one fixed set
+ * would contradict the genus values.
+ */
+export function sacEvents(projectTitle: string, sac: SacResponse, stages: ExpectedStageDays, { t, numbering }: Reader = ENGLISH): FeedEvent[] {
   const out: FeedEvent[] = [];
   const where = t('calendar.where', { project: projectTitle, layDate: sac.layDate });
   if (!sac.pulled) {
@@ -60,12 +61,14 @@ export function sacEvents(projectTitle: string, sac: SacResponse, { t, numbering
   }
   for (const e of EXPECTED_STAGES) {
     if (isBroodStageAtLeast(sac.broodStage, e.stage)) continue;
+    const days = stages[e.days];
+    const { fromDay, toDay } = days.value;
     out.push({
       uid: `${e.key}-${sac.id}@${DOMAIN}`,
-      start: addDays(sac.layDate, e.fromDay),
-      end: addDays(sac.layDate, e.toDay + 1),
+      start: addDays(sac.layDate, fromDay),
+      end: addDays(sac.layDate, toDay + 1),
       summary: t('calendar.stageExpected', { stage: broodStageLabel(t, e.stage, numbering), project: projectTitle }),
-      description: t('calendar.stageDays', { where, from: e.fromDay, to: e.toDay, source: e.source }),
+      description: t('calendar.stageDays', { where, from: fromDay, to: toDay, source: stageSource(t, days) }),
     });
   }
   return out;

@@ -1,5 +1,7 @@
 import { registerAs } from '@nestjs/config';
+import { databaseUrls } from '../database/database-urls';
 
+/** The app's own (runtime) connection; the owner's (DATABASE_OWNER_URL) is for migrations only. */
 export const databaseConfig = registerAs('database', () => ({
-  url: process.env.DATABASE_URL ?? 'postgres://app@127.0.0.1:54329/broodsilk',
+  url: databaseUrls().runtime,
 }));

@@ -53,6 +53,7 @@ export const NOT_EXPORTED: Record<string, string> = {
   share_bases: 'computed from the terms and counts at settlement',
   invitations: 'pending links carrying secrets',
   calendar_feeds: 'a secret feed token',
+  progress_links: 'links for outside parties carrying secrets (stored hashed)',
   password_reset_tokens: 'secrets',
   email_confirmation_tokens: 'single-use links (hashed secrets) of the address confirmation',
   recovery_codes: 'second-factor recovery codes (hashed secrets)',

@@ -1,7 +1,8 @@
 import { BadRequestException, Injectable, type CallHandler, type ExecutionContext, type NestInterceptor } from '@nestjs/common';
+import { EntityManager } from '@mikro-orm/postgresql';
 import { createHash } from 'node:crypto';
 import type { Request, Response } from 'express';
-import { catchError, from, mergeMap, of, switchMap, type Observable } from 'rxjs';
+import { defaultIfEmpty, from, lastValueFrom, type Observable } from 'rxjs';
 import type { AuthUser } from '../common/auth-user';
 import { IdempotencyStore } from './idempotency.store';
 
@@ -13,10 +14,18 @@ const KEY = /^[\x21-\x7e]{8,255}$/;
  * A POST carrying `Idempotency-Key` is written once per user and key for 24 hours: a repeat gets
  * the first answer again (status and body), a different request under the same key 422.
  * Requests without the header, or without a session, pass through untouched.
+ *
+ * The key is claimed in a transaction that the handler's own writes join (their
+ * `em.transactional` becomes a savepoint in it) and the answer is stored in it too: a write that
+ * fails, or a process that dies, after the claim leaves neither the key nor the write, so a retry
+ * runs the write instead of replaying a success that never committed.
  */
 @Injectable()
 export class IdempotencyInterceptor implements NestInterceptor {
-  constructor(private readonly store: IdempotencyStore) {}
+  constructor(
+    private readonly store: IdempotencyStore,
+    private readonly em: EntityManager,
+  ) {}
 
   intercept(context: ExecutionContext, next: CallHandler): Observable<unknown> {
     if (context.getType() !== 'http') return next.handle();
@@ -30,22 +39,17 @@ export class IdempotencyInterceptor implements NestInterceptor {
     const fingerprint = createHash('sha256')
       .update(`${req.method} ${path}\n${JSON.stringify(req.body ?? null)}`)
       .digest('hex');
-    return from(this.store.claim({ userId: user.id, key, method: req.method, path, fingerprint })).pipe(
-      switchMap((claim) => {
+    return from(
+      this.em.transactional(async (tx) => {
+        const claim = await this.store.claim(tx, { userId: user.id, key, method: req.method, path, fingerprint });
         if ('replay' in claim) {
           res.status(claim.replay.status).setHeader('Idempotent-Replayed', 'true');
-          return of(claim.replay.body);
+          return claim.replay.body;
         }
-        return next.handle().pipe(
-          mergeMap(async (body: unknown) => {
-            await this.store.complete(claim.id, res.statusCode, body);
-            return body;
-          }),
-          catchError(async (e: unknown) => {
-            await this.store.release(claim.id);
-            throw e;
-          }),
-        );
+        // Subscribed inside the transaction's context, so the handler's EntityManager is `tx`.
+        const body = await lastValueFrom(next.handle().pipe(defaultIfEmpty(undefined)));
+        await this.store.complete(tx, claim.id, res.statusCode, body);
+        return body;
       }),
     );
   }

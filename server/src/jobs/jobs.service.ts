@@ -1,18 +1,18 @@
-import { Injectable, Logger, type OnApplicationBootstrap, type OnApplicationShutdown } from '@nestjs/common';
-import { ConfigService } from '@nestjs/config';
+import { Inject, Injectable, Logger, type OnApplicationBootstrap, type OnApplicationShutdown } from '@nestjs/common';
+import type { ConfigType } from '@nestjs/config';
+import { databaseConfig } from '../config/database.config';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import PgBoss from 'pg-boss';
 import { inTransaction } from './transaction-db';
 import { workersEnabled } from './jobs-enabled';
+import { JOBS_SCHEMA, type QueueName } from './job-queues';
 
-/** pg-boss keeps its tables in a schema of its own, away from the migrations' `public`. */
-export const JOBS_SCHEMA = 'pgboss';
+export { JOBS_SCHEMA } from './job-queues';
 
 /** One kind of job: its queue, how pg-boss keeps it, and who works it. */
 export interface JobKind<T> {
-  queue: string;
-  /** pg-boss queue settings (policy, retries, retention). */
-  settings?: Omit<PgBoss.Queue, 'name'>;
+  /** One of `JOB_QUEUES`, which holds its settings (policy, retries, retention). */
+  queue: QueueName;
   /** Planned ahead from facts (reminders): its worker stays off under vitest unless JOBS_ENABLED=true. */
   planned: boolean;
   pollingIntervalSeconds?: number;
@@ -36,7 +36,7 @@ export class JobsService implements OnApplicationBootstrap, OnApplicationShutdow
   private readonly kinds = new Map<string, JobKind<never>>();
   private boss: PgBoss | null = null;
 
-  constructor(private readonly config: ConfigService) {}
+  constructor(@Inject(databaseConfig.KEY) private readonly db: ConfigType<typeof databaseConfig>) {}
 
   /** Declares a job kind; call before the app has started (from a provider's `onModuleInit`). */
   define<T>(kind: JobKind<T>): void {
@@ -58,11 +58,17 @@ export class JobsService implements OnApplicationBootstrap, OnApplicationShutdow
   }
 
   async onApplicationBootstrap(): Promise<void> {
-    const boss = new PgBoss({ connectionString: this.config.getOrThrow<string>('database.url'), schema: JOBS_SCHEMA, schedule: false });
+    // The schema and the queues are the owner's work (`npm run migrate`): the app's role may not create tables.
+    const boss = new PgBoss({ connectionString: this.db.url, schema: JOBS_SCHEMA, schedule: false, migrate: false });
     boss.on('error', (e) => this.logger.error(`pg-boss: ${e.message}`));
-    await boss.start();
+    await boss.start().catch((e: Error) => {
+      throw new Error(`The job queue is not ready (${e.message}): run "npm run migrate -w server" as the database owner first.`);
+    });
     for (const kind of this.kinds.values()) {
-      await boss.createQueue(kind.queue, { name: kind.queue, ...kind.settings });
+      if (!(await boss.getQueue(kind.queue))) {
+        await boss.stop({ graceful: false });
+        throw new Error(`The job queue "${kind.queue}" does not exist: run "npm run migrate -w server" as the database owner first.`);
+      }
       if (!workersEnabled(kind.planned)) continue;
       await boss.work<never>(kind.queue, { pollingIntervalSeconds: kind.pollingIntervalSeconds ?? 2, batchSize: 1 }, async ([job]) => kind.handle(job));
       this.working.add(kind.queue);

@@ -1,11 +1,12 @@
 import { Injectable, type OnModuleInit } from '@nestjs/common';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { JobsService } from '../jobs/jobs.service';
+import type { QueueName } from '../jobs/job-queues';
 import { MailService, type OutgoingMail } from './mail.service';
 
-export const MAIL_QUEUE = 'mail-out';
+export const MAIL_QUEUE = 'mail-out' satisfies QueueName;
 /** Mail written by the job itself (see `enqueueComposed`). */
-export const COMPOSE_QUEUE = 'mail-compose';
+export const COMPOSE_QUEUE = 'mail-compose' satisfies QueueName;
 
 /** What the outbox carries: everything but attachments (a job's data is JSON). */
 export type QueuedMail = Omit<OutgoingMail, 'attachments'>;
@@ -33,9 +34,8 @@ export class MailOutbox implements OnModuleInit {
   ) {}
 
   onModuleInit(): void {
-    const settings = { retryLimit: 8, retryDelay: 30, retryBackoff: true };
-    this.jobs.define<QueuedMail>({ queue: MAIL_QUEUE, settings, planned: false, pollingIntervalSeconds: 0.5, handle: (job) => this.mail.send(job.data) });
-    this.jobs.define<ComposeJob>({ queue: COMPOSE_QUEUE, settings, planned: false, pollingIntervalSeconds: 0.5, handle: (job) => this.compose(job.data) });
+    this.jobs.define<QueuedMail>({ queue: MAIL_QUEUE, planned: false, pollingIntervalSeconds: 0.5, handle: (job) => this.mail.send(job.data) });
+    this.jobs.define<ComposeJob>({ queue: COMPOSE_QUEUE, planned: false, pollingIntervalSeconds: 0.5, handle: (job) => this.compose(job.data) });
   }
 
   /** Queues `mail` inside the transaction `tx`; it goes out once `tx` commits. */

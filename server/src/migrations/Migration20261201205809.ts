@@ -5,7 +5,7 @@ import { catalogueInsertSql } from '../species/catalogue-sql';
 /** Seeds the species catalogue in every database (demo or not); existing rows are kept. */
 export class Migration20261201205809 extends Migration {
   override async up(): Promise<void> {
-    this.addSql(catalogueInsertSql(SPECIES_DATA));
+    this.addSql(catalogueInsertSql(SPECIES_DATA, 'boolean'));
   }
 
   override async down(): Promise<void> {

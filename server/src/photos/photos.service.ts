@@ -9,6 +9,8 @@ import { PhotoAccessRegistry } from './photo-access.registry';
 import { processImage } from './image-processing';
 import { toPhotoRef } from './photos.mapper';
 
+export type PhotoVariant = 'full' | 'thumb';
+
 const NOT_FOUND = 'That photo does not exist or is not yours to see.';
 
 @Injectable()
@@ -57,9 +59,23 @@ export class PhotosService {
     return out;
   }
 
-  async read(viewer: AuthUser, id: string, variant: 'full' | 'thumb'): Promise<StreamableFile> {
+  async read(viewer: AuthUser, id: string, variant: PhotoVariant): Promise<StreamableFile> {
     const photo = await this.em.findOne(Photo, { id });
     if (!photo || !(await this.access.allows(this.em, viewer, photo.subjectType, photo.subjectId))) throw new NotFoundException({ message: NOT_FOUND });
+    return this.file(photo, variant);
+  }
+
+  /**
+   * A photo read through a link that carries its own secret (a progress page): served only when it
+   * belongs to one of `subjectIds`, which the caller worked out from the link.
+   */
+  async readOfSubjects(subjectType: string, subjectIds: string[], id: string, variant: PhotoVariant): Promise<StreamableFile> {
+    const photo = subjectIds.length ? await this.em.findOne(Photo, { id, subjectType, subjectId: { $in: subjectIds } }) : null;
+    if (!photo) throw new NotFoundException({ message: NOT_FOUND });
+    return this.file(photo, variant);
+  }
+
+  private async file(photo: Photo, variant: PhotoVariant): Promise<StreamableFile> {
     const body = await this.storage.get(variant === 'full' ? photo.storageKey : photo.thumbKey);
     return new StreamableFile(body, { type: photo.contentType, length: body.length });
   }

@@ -3,6 +3,7 @@ import { MikroOrmModule } from '@mikro-orm/nestjs';
 import { AnimalsModule } from '../animals/animals.module';
 import { AnimalUsageRegistry } from '../animals/animal-usage.registry';
 import { AnimalDepartureRegistry } from '../animals/animal-departure.registry';
+import { AnimalMoltRegistry } from '../animals/animal-molt.registry';
 import { AnimalReadersRegistry } from '../animals/animal-readers.registry';
 import { ActivityModule } from '../activity/activity.module';
 import { Project } from './project.entity';
@@ -24,6 +25,7 @@ import { TermsController } from './terms.controller';
 import { PairingsService } from './pairings.service';
 import { PairingsController } from './pairings.controller';
 import { AnimalDepartureListener } from './animal-departure.listener';
+import { FemaleMoltListener } from './female-molt.listener';
 import { AnimalBreedingService } from './animal-breeding.service';
 import { AnimalBreedingController } from './animal-breeding.controller';
 
@@ -40,6 +42,7 @@ import { AnimalBreedingController } from './animal-breeding.controller';
     TermsService,
     PairingsService,
     AnimalDepartureListener,
+    FemaleMoltListener,
     AnimalBreedingService,
   ],
   exports: [ProjectAccessService, ProjectResolverRegistry, ProjectFactsRegistry, ProjectStageService, TermsService],
@@ -50,10 +53,13 @@ export class ProjectsModule implements OnModuleInit {
     private readonly departures: AnimalDepartureRegistry,
     private readonly departureListener: AnimalDepartureListener,
     private readonly readers: AnimalReadersRegistry,
+    private readonly molts: AnimalMoltRegistry,
+    private readonly moltListener: FemaleMoltListener,
   ) {}
 
   onModuleInit(): void {
     this.departures.register((em, d) => this.departureListener.onDeparture(em, d));
+    this.molts.register((em, m) => this.moltListener.onMolt(em, m));
     // Members of a project see its animals (read-only): the female, the first male and every male paired with her.
     this.readers.register(async (em, animalId, userId) => {
       const paired = await em.find(Pairing, { male: animalId }, { fields: ['project'] });

@@ -160,7 +160,7 @@ export class ProjectsService {
       return {
         kind: 'project.ended',
         summary: wordsFor('en')('text.endedEarly', { reason: label(wordsFor('en'), 'endedEarly', dto.reason) }),
-        data: { reason: dto.reason, note: dto.note ?? null },
+        data: { reason: dto.reason, note: dto.note ?? null, ...(dto.partnerMessage?.trim() ? { partnerMessage: dto.partnerMessage } : {}) },
       };
     });
   }

@@ -1,9 +1,9 @@
 import { Entity, Enum, Index, ManyToOne, Property } from '@mikro-orm/core';
-import { NOTIFICATION_KINDS, type NotificationKind } from '@broodsilk/shared';
+import { NOTIFICATION_KINDS, NOTIFICATION_SUBJECT_TYPES, type NotificationKind, type NotificationSubjectType } from '@broodsilk/shared';
 import { BaseEntity } from '../database/base.entity';
 import { User } from '../users/user.entity';
 
-/** An in-app reminder for one user (the same words go out by e-mail when chosen). */
+/** An in-app reminder or partner update for one user (the same words go out by e-mail when chosen). */
 @Entity({ tableName: 'notifications' })
 @Index({ properties: ['user', 'createdAt'] })
 export class Notification extends BaseEntity {
@@ -20,8 +20,8 @@ export class Notification extends BaseEntity {
   body!: string;
 
   /** What it is about (for a link); none for a daily digest. */
-  @Enum({ items: ['sac', 'animal'], nativeEnumName: 'notification_subject', nullable: true })
-  subjectType?: 'sac' | 'animal' | null;
+  @Enum({ items: [...NOTIFICATION_SUBJECT_TYPES], nativeEnumName: 'notification_subject', nullable: true })
+  subjectType?: NotificationSubjectType | null;
 
   @Property({ type: 'uuid', nullable: true })
   subjectId?: string | null;

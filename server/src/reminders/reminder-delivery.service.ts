@@ -42,9 +42,7 @@ export class ReminderDelivery implements OnModuleInit {
 
   onModuleInit(): void {
     this.jobs.define<ReminderJob>({
-      queue: REMINDER_QUEUE,
-      // `short`: one waiting job per singleton key, so planning the same reminder twice queues it once.
-      settings: { policy: 'short', retryLimit: 5, retryDelay: 60, retryBackoff: true },
+      queue: REMINDER_QUEUE, // a `short` queue (JOB_QUEUES): planning the same reminder twice queues it once
       planned: true,
       handle: async (job) => {
         const outcome = await this.deliver(job.data);

@@ -14,8 +14,9 @@ import { ReminderSettings } from './reminder-settings.entity';
 import { animalFactsOf, digestRecipients, sacFactsOf } from './reminder-facts';
 import { planAnimalReminders, planDigest, planSacReminders } from './planning/plan-reminders';
 import type { PlannedReminder } from './planning/reminder-plan.types';
+import type { QueueName } from '../jobs/job-queues';
 
-export const REMINDER_QUEUE = 'reminder';
+export const REMINDER_QUEUE = 'reminder' satisfies QueueName;
 
 /** What a reminder job carries: enough to find its subject again and re-check it is still true. */
 export interface ReminderJob {

@@ -1,3 +1,4 @@
+import type { ReminderKind } from './planning/reminder-plan.types';
 import { NOTIFICATION_KIND_LABELS, wordsFor, type MaleClockState, type NotificationKind } from '@broodsilk/shared';
 
 /**
@@ -31,7 +32,7 @@ export function formatDay(date: string): string {
 
 type Details = Record<string, string | number>;
 
-const WORDS: Record<NotificationKind, (d: Details, c: WordsContext) => ReminderWords> = {
+const WORDS: Record<ReminderKind, (d: Details, c: WordsContext) => ReminderWords> = {
   'roll-due': (d, c) => ({
     title: `Roll due: ${c.about}`,
     body: `The sac laid ${c.layDate} is due for its next roll at ${formatInstantIn(String(d.due), c.timeZone)} (every ${d.intervalHours} h).`,
@@ -69,7 +70,7 @@ const WORDS: Record<NotificationKind, (d: Details, c: WordsContext) => ReminderW
   'daily-digest': (d) => ({ title: `Your day: ${formatDay(String(d.date))}`, body: String(d.summary ?? '') }),
 };
 
-export function reminderWords(kind: NotificationKind, details: Details, c: WordsContext): ReminderWords {
+export function reminderWords(kind: ReminderKind, details: Details, c: WordsContext): ReminderWords {
   return WORDS[kind](details, c);
 }
 

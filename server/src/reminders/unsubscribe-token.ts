@@ -19,8 +19,10 @@ export function unsubscribeToken(secret: string, userId: string, kind: Notificat
 export function readUnsubscribeToken(secret: string, token: string): { userId: string; kind: NotificationKind } | null {
   const [userId, kind, given, ...rest] = token.split('.');
   if (rest.length || !userId || !given || !(NOTIFICATION_KINDS as readonly string[]).includes(kind)) return null;
-  const expected = mac(secret, userId, kind);
-  const actual = Buffer.from(given, 'base64url');
+  // Compared as text: base64url's last character carries spare bits a decoder ignores, so a
+  // changed last character could decode to the same bytes; only our exact spelling counts.
+  const expected = Buffer.from(mac(secret, userId, kind).toString('base64url'));
+  const actual = Buffer.from(given);
   if (actual.length !== expected.length || !timingSafeEqual(actual, expected)) return null;
   return { userId, kind: kind as NotificationKind };
 }

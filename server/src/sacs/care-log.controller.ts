@@ -1,5 +1,6 @@
-import { Body, Controller, Get, Param, ParseUUIDPipe, Post } from '@nestjs/common';
-import type { CareLogEntryResponse } from '@broodsilk/shared';
+import { Body, Controller, Get, Param, ParseUUIDPipe, Post, Query } from '@nestjs/common';
+import type { CareLogEntryResponse, KeysetPage } from '@broodsilk/shared';
+import { KeysetQueryDto } from '../common/paging/keyset-cursor';
 import { AnyProjectMember, CurrentProject, ProjectFrom, ProjectRoles } from '../projects/project-roles.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import type { AuthUser } from '../common/auth-user';
@@ -15,8 +16,8 @@ export class CareLogController {
   @Get()
   @AnyProjectMember()
   @ProjectFrom('sac')
-  list(@CurrentProject() a: ProjectAccess, @Param('id', ParseUUIDPipe) id: string): Promise<CareLogEntryResponse[]> {
-    return this.log.list(a, id);
+  list(@CurrentProject() a: ProjectAccess, @Param('id', ParseUUIDPipe) id: string, @Query() page: KeysetQueryDto): Promise<KeysetPage<CareLogEntryResponse>> {
+    return this.log.list(a, id, page);
   }
 
   @Post()

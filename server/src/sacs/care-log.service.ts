@@ -1,6 +1,7 @@
 import { BadRequestException, ConflictException, Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
-import { isBroodStageAtLeast, todayIn, type CareLogEntryResponse } from '@broodsilk/shared';
+import { isBroodStageAtLeast, todayIn, type CareLogEntryResponse, type KeysetPage, type KeysetQuery } from '@broodsilk/shared';
+import { decodeCursor, encodeCursor, pageSize } from '../common/paging/keyset-cursor';
 import type { AuthUser } from '../common/auth-user';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { ActivityService } from '../activity/activity.service';
@@ -25,13 +26,37 @@ export class CareLogService {
     private readonly clock: Clock,
   ) {}
 
-  /** Newest first; struck entries stay, flagged with the strike that corrected them. */
-  async list(access: ProjectAccess, sacId: string): Promise<CareLogEntryResponse[]> {
+  /**
+   * Newest first by (at, created_at, id), one page at a time by keyset: the page after a cursor holds
+   * the entries strictly older than the cursor's entry, so a page costs the same however far back it
+   * is (index on sac_id, at, created_at, id). Struck entries stay, flagged with the strike that
+   * corrected them, even when the strike is on another page.
+   */
+  async list(access: ProjectAccess, sacId: string, page: KeysetQuery = {}): Promise<KeysetPage<CareLogEntryResponse>> {
     const sac = await this.sacs.find(access, sacId);
-    const entries = await this.em.find(SacLogEntry, { sac }, { populate: ['author'], orderBy: { at: 'desc', createdAt: 'desc' } });
-    const struckBy = new Map(entries.filter((e) => e.strikes).map((e) => [e.strikes!.id, e]));
+    const limit = pageSize(page);
+    const qb = this.em
+      .createQueryBuilder(SacLogEntry, 'e')
+      .select('*')
+      .leftJoinAndSelect('e.author', 'a')
+      .where({ sac: sac.id })
+      .orderBy({ at: 'desc', createdAt: 'desc', id: 'desc' })
+      .limit(limit + 1);
+    if (page.after) {
+      const afterId = decodeCursor(page.after, 'entry', 'uuid') as string;
+      if (!(await this.em.count(SacLogEntry, { id: afterId, sac: sac.id })))
+        throw new BadRequestException({ message: 'after names no entry of this sac’s log: pass the nextCursor of the page before, unchanged.' });
+      qb.andWhere('(e.at, e.created_at, e.id) < (select l.at, l.created_at, l.id from sac_log_entries l where l.id = ?)', [afterId]);
+    }
+    const rows = await qb.getResultList();
+    const entries = rows.slice(0, limit);
+    const strikes = entries.length ? await this.em.find(SacLogEntry, { strikes: { $in: entries.map((e) => e.id) } }) : [];
+    const struckBy = new Map(strikes.map((e) => [e.strikes!.id, e]));
     const band = bandOf(sac);
-    return entries.map((e) => toCareLogResponse(e, struckBy.get(e.id), band));
+    return {
+      items: entries.map((e) => toCareLogResponse(e, struckBy.get(e.id), band)),
+      nextCursor: rows.length > limit ? encodeCursor({ entry: entries[entries.length - 1].id }) : null,
+    };
   }
 
   async add(access: ProjectAccess, viewer: AuthUser, sacId: string, dto: CareLogEntryDto): Promise<CareLogEntryResponse> {

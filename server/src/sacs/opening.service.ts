@@ -65,11 +65,12 @@ export class OpeningService {
       throw badRequest([
         {
           field: 'keptBack',
-          message: `Only viable young can go back into incubation: ${dto.keptBack} kept back, but ${viable} counted as healthy eggs, eggs with legs and nymphs.`,
+          message: `Only viable young can go back into incubation: ${dto.keptBack} kept back, but ${viable} counted as healthy eggs, eggs with legs and 1st instar young.`,
         },
       ]);
     }
-    if (viable + dto.darkEggs + dto.spoiledEggs === 0) throw fieldError('healthyEggs', 'Nothing was counted; an opening records at least one egg or nymph.');
+    if (viable + dto.darkEggs + dto.spoiledEggs === 0)
+      throw fieldError('healthyEggs', 'Nothing was counted; an opening records at least one egg or young spider.');
     if (dto.corrects && !dto.reason?.trim()) throw fieldError('reason', 'Say briefly why the recorded opening was wrong.');
     if (!dto.corrects && dto.reason) throw fieldError('reason', 'A reason goes with a correction (corrects: the id of the opening it corrects).');
     await this.em.transactional(async (tx) => {

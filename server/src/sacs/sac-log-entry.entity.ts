@@ -9,7 +9,7 @@ import { Sac } from './sac.entity';
  * one (each entry can be struck once), and a struck roll no longer counts for the schedule.
  */
 @Entity({ tableName: 'sac_log_entries' })
-@Index({ properties: ['sac', 'at'] })
+@Index({ properties: ['sac', 'at', 'createdAt', 'id'] })
 export class SacLogEntry extends BaseEntity {
   @ManyToOne(() => Sac, { deleteRule: 'cascade' })
   sac!: Sac;

@@ -53,6 +53,8 @@ export async function latestCountsOf(em: EntityManager, sacIds: string[]): Promi
       where c.sac_id in ${marks(sacIds)} and ${NOT_STRUCK}
       order by c.sac_id, c.at desc, c.created_at desc`,
     sacIds,
+    'all',
+    em.getTransactionContext(),
   );
   return new Map(rows.map((r) => [r.sac_id, { alive: Number(r.alive), at: new Date(r.at), estimated: r.estimated }]));
 }
@@ -63,6 +65,8 @@ export async function currentCountsOf(em: EntityManager, sacIds: string[]): Prom
 
 export async function openedSacsOf(em: EntityManager, sacIds: string[]): Promise<Set<string>> {
   if (!sacIds.length) return new Set();
-  const rows = await em.getConnection().execute<{ sac_id: string }[]>(`select sac_id from sac_openings where sac_id in ${marks(sacIds)}`, sacIds);
+  const rows = await em
+    .getConnection()
+    .execute<{ sac_id: string }[]>(`select sac_id from sac_openings where sac_id in ${marks(sacIds)}`, sacIds, 'all', em.getTransactionContext());
   return new Set(rows.map((r) => r.sac_id));
 }

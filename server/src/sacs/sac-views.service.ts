@@ -10,10 +10,10 @@ import { Clock } from '../common/clock';
 
 /** The pull window in force: the sac's own days, else the species' (else day 21–45, common practice). Needs `project.female.species` loaded. */
 export function windowOf(sac: Sac): PullWindowInForce {
-  if (sac.pullFromDay != null && sac.pullToDay != null) return { fromDay: sac.pullFromDay, toDay: sac.pullToDay, origin: 'sac' };
+  if (sac.pullFromDay != null && sac.pullToDay != null) return { fromDay: sac.pullFromDay, toDay: sac.pullToDay, origin: 'sac', source: null };
   const species = sac.project.female.species;
   const w = effectiveBreeding(species.group, ownBreeding(species)).pullWindow;
-  return { fromDay: w.value.fromDay, toDay: w.value.toDay, origin: w.from === 'species' ? 'species' : 'default' };
+  return { fromDay: w.value.fromDay, toDay: w.value.toDay, origin: w.from === 'species' ? 'species' : 'default', source: w.source };
 }
 
 const READ_ONLY = (): ProjectRole => 'partner';

@@ -11,6 +11,7 @@ import {
   type ReadingAlert,
   type SacFact,
   type SacResponse,
+  type ValueSource,
 } from '@broodsilk/shared';
 import type { Sac } from './sac.entity';
 import type { LatestCare } from './sac-queries';
@@ -20,6 +21,8 @@ export interface PullWindowInForce {
   fromDay: number;
   toDay: number;
   origin: PullWindowOrigin;
+  /** Where a species or default window comes from; null for the keeper's own window. */
+  source: ValueSource | null;
 }
 
 export interface SacViewContext {
@@ -78,7 +81,7 @@ export function toSacResponse(sac: Sac, c: SacViewContext): SacResponse {
     pulledOn: sac.pulledOn ?? null,
     outcome: sac.outcome,
     failureReason: sac.failureReason ?? null,
-    pullWindow: { ...view, fromDay: c.window.fromDay, toDay: c.window.toDay, origin: c.window.origin },
+    pullWindow: { ...view, fromDay: c.window.fromDay, toDay: c.window.toDay, origin: c.window.origin, source: c.window.source },
     rollIntervalHours: sac.rollIntervalHours,
     rollingOff: sac.rollingOff,
     // An opened sac is not rolled: its eggs are counted, and any kept back are a batch with its own log.

@@ -187,6 +187,9 @@ export class SacsService {
       const failureReason = outcome === 'failed' ? ((dto.failureReason !== undefined ? dto.failureReason : sac.failureReason) ?? null) : null;
       if (outcome === 'failed' && !failureReason) throw fieldError('failureReason', 'Say why the sac failed: infertile, spoiled, eaten or other.');
       if (outcome !== 'failed' && dto.failureReason) throw fieldError('failureReason', 'A failure reason only goes with the outcome "failed".');
+      const failsNow = outcome === 'failed' && wasOutcome !== 'failed';
+      if (dto.partnerMessage !== undefined && !failsNow)
+        throw fieldError('partnerMessage', 'A message to the partners goes only with recording the sac as failed.');
 
       tx.assign(sac, {
         ...next,
@@ -209,7 +212,13 @@ export class SacsService {
         subjectType: 'sac',
         subjectId: sac.id,
         summary,
-        data: { changed: Object.keys(dto), outcome: sac.outcome, pulledOn: sac.pulledOn ?? null },
+        data: {
+          changed: Object.keys(dto),
+          outcome: sac.outcome,
+          pulledOn: sac.pulledOn ?? null,
+          ...(kind === 'sac.failed' ? { layDate: sac.layDate, failureReason: sac.failureReason ?? null } : {}),
+          ...(kind === 'sac.failed' && dto.partnerMessage?.trim() ? { partnerMessage: dto.partnerMessage } : {}),
+        },
       });
     });
     this.em.clear();

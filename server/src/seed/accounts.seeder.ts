@@ -138,13 +138,13 @@ export const seedAccounts: FeatureSeeder = async (ctx) => {
           party: tomaszM,
           count: handOver,
           method: 'shipment',
-          // Berlin to Chicago: an international live-animal shipment, with the permits it needs
-          // (docs/trade-facts.md §9), not a plain parcel.
-          carrier: 'Live-animal air freight, export permit and US import declaration filed',
+          // Berlin to Chicago: an international live-animal shipment through a shipping agent who files the
+          // US wildlife import declaration (docs/trade-facts.md §9), not a plain parcel; C. versicolor is not CITES-listed.
+          carrier: 'Live-animal shipping agent (air freight); US wildlife import declaration filed by the agent',
           tracking: 'BRS-DEMO-0412',
         },
         mira,
-        `${handOver} young handed over to ${tomaszM.name} (shipped with live-animal air freight, export permit and US import declaration filed, tracking BRS-DEMO-0412).`,
+        `${handOver} young handed over to ${tomaszM.name} (sent through a live-animal shipping agent by air freight, US wildlife import declaration filed, tracking BRS-DEMO-0412).`,
       );
       await append(
         brood,
@@ -155,7 +155,7 @@ export const seedAccounts: FeatureSeeder = async (ctx) => {
           toParty: tomaszM,
           amountMinor: 1450,
           currency: 'EUR',
-          note: 'Freight and permit fees for Tomasz’s shipment, paid by Mira; the terms say the recipient pays shipping.',
+          note: 'Courier to the shipping agent for Tomasz’s young, paid by Mira; the agent bills air freight and the import declaration to Tomasz directly. The terms say the recipient pays shipping.',
         },
         tomasz,
         `${miraM.name} paid ${tomaszM.name} EUR 14.50.`,

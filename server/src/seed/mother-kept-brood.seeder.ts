@@ -20,7 +20,7 @@ const eveningOf = (date: string) => new Date(`${date}T18:00:00Z`);
 /**
  * An invented season: Mira paired her G. pulchripes female with her own male, shares the brood
  * with Tomasz (Mira 2, Tomasz 1), and chose to leave the sac with the mother. The young left the
- * sac on day 64; she counted them at emergence (138 nymphs, 5 dark eggs, 2 spoiled), and the
+ * sac on day 64; she counted them at emergence (138 young at 1st instar, 5 dark eggs, 2 spoiled), and the
  * shares follow from that count as from any opened sac.
  */
 export const seedMotherKeptBrood: FeatureSeeder = async (ctx) => {
@@ -89,6 +89,6 @@ export const seedMotherKeptBrood: FeatureSeeder = async (ctx) => {
   const event = (when: Date, kind: string, summary: string) =>
     activity.record(em, { projectId: project.id, actorId: mira.id, kind, subjectType: 'sac', subjectId: sac.id, summary, at: when });
   event(eveningOf(laid), 'sac.laid', `Sac laid on ${laid}, left with the mother on purpose.`);
-  event(at, 'sac.opened', `Young emerged and counted on ${emerged}: 138 nymphs, 5 dark and 2 spoiled eggs.`);
+  event(at, 'sac.opened', `Young emerged and counted on ${emerged}: 138 young at 1st instar, 5 dark and 2 spoiled eggs.`);
   await em.flush();
 };

@@ -9,7 +9,7 @@ function sources(r: SpeciesDataRow): Partial<Record<SpeciesSourceKey, unknown>> 
   return {
     name: r.nameSource,
     urticatingHairs: r.urticatingHairs.source,
-    venom: r.medicallySignificantVenom.source,
+    venom: r.venom.source,
     tradeListing: r.tradeListing.source,
     ...(r.pullWindow ? { pullWindow: r.pullWindow.source } : {}),
     ...(r.pairingToSacDays ? { pairingToSac: r.pairingToSacDays.source } : {}),
@@ -19,10 +19,16 @@ function sources(r: SpeciesDataRow): Partial<Record<SpeciesSourceKey, unknown>> 
 }
 
 /**
+ * How the venom flag is stored: a boolean `medically_significant_venom` until the three-valued
+ * `venom` column replaced it (Migration20261203070400); the first catalogue migration writes the former.
+ */
+export type VenomColumn = 'boolean' | 'three-valued';
+
+/**
  * One statement inserting the checked-in catalogue. Rows already present (by key) are left alone,
  * so an admin's edits survive; a later migration can call this again to add new dataset rows.
  */
-export function catalogueInsertSql(rows: SpeciesDataRow[]): string {
+export function catalogueInsertSql(rows: SpeciesDataRow[], venomColumn: VenomColumn = 'three-valued'): string {
   const values = rows.map((r) =>
     [
       'gen_random_uuid()',
@@ -36,7 +42,7 @@ export function catalogueInsertSql(rows: SpeciesDataRow[]): string {
       arr(r.commonNames),
       `${lit(r.group)}::species_group`,
       String(r.urticatingHairs.value),
-      String(r.medicallySignificantVenom.value),
+      venomColumn === 'boolean' ? String(r.venom.value === 'medically-significant') : lit(r.venom.value),
       lit(r.tradeListing.value),
       num(r.pullWindow?.value.fromDay),
       num(r.pullWindow?.value.toDay),
@@ -49,7 +55,7 @@ export function catalogueInsertSql(rows: SpeciesDataRow[]): string {
       `${lit(JSON.stringify(sources(r)))}::jsonb`,
     ].join(', '),
   );
-  return `insert into "species" ("id", "created_at", "updated_at", "key", "scientific_name", "genus", "authority", "former_names", "common_names", "group", "urticating_hairs", "medically_significant_venom", "trade_listing", "pull_from_day", "pull_to_day", "pairing_to_sac_min_days", "pairing_to_sac_max_days", "eggs_min", "eggs_max", "lifespan_min_months", "lifespan_max_months", "sources") values\n(${values.join('),\n(')})\non conflict ("key") do nothing;`;
+  return `insert into "species" ("id", "created_at", "updated_at", "key", "scientific_name", "genus", "authority", "former_names", "common_names", "group", "urticating_hairs", ${venomColumn === 'boolean' ? '"medically_significant_venom"' : '"venom"'}, "trade_listing", "pull_from_day", "pull_to_day", "pairing_to_sac_min_days", "pairing_to_sac_max_days", "eggs_min", "eggs_max", "lifespan_min_months", "lifespan_max_months", "sources") values\n(${values.join('),\n(')})\non conflict ("key") do nothing;`;
 }
 
 /** Fills in the common names of catalogue rows that have none yet (an admin's own list stays). */

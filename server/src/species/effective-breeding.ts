@@ -1,4 +1,12 @@
-import type { EffectiveBreedingValues, NumberRange, SpeciesBreedingValues, SpeciesGroup, Sourced, ValueOrigin } from '@broodsilk/shared';
+import {
+  restsOnFew,
+  type EffectiveBreedingValues,
+  type NumberRange,
+  type SpeciesBreedingValues,
+  type SpeciesGroup,
+  type Sourced,
+  type ValueOrigin,
+} from '@broodsilk/shared';
 import { DEFAULT_PULL_WINDOW, GROUP_PROFILES } from './data/species-groups.data';
 
 type WithOrigin<T> = Sourced<T> & { from: ValueOrigin };
@@ -19,4 +27,16 @@ export function effectiveBreeding(group: SpeciesGroup, own: SpeciesBreedingValue
     eggsPerSac: pick<NumberRange>(own.eggsPerSac, g.eggsPerSac, 'group'),
     matureMaleLifespanMonths: pick<NumberRange>(own.matureMaleLifespanMonths, g.matureMaleLifespanMonths, 'group'),
   };
+}
+
+/**
+ * The eggs-per-sac range a count is checked against: the value in force, except that a species
+ * figure resting on few observations (T. vagans: 200 from two sacs) is a hint, not a range, so the
+ * check spans it and the group's range together (docs/trade-facts.md §6).
+ */
+export function eggsRangeForCheck(group: SpeciesGroup, own: SpeciesBreedingValues): NumberRange {
+  const eggs = effectiveBreeding(group, own).eggsPerSac;
+  if (eggs.from !== 'species' || !restsOnFew(eggs.source)) return eggs.value;
+  const g = GROUP_PROFILES[group].eggsPerSac.value;
+  return { min: Math.min(eggs.value.min, g.min), max: Math.max(eggs.value.max, g.max) };
 }

@@ -1,5 +1,5 @@
 import { Entity, Enum, Index, Property, Unique } from '@mikro-orm/core';
-import { SPECIES_GROUPS, type SpeciesGroup, type ValueSource } from '@broodsilk/shared';
+import { SPECIES_GROUPS, VENOM_FLAGS, type SpeciesGroup, type ValueSource, type VenomFlag } from '@broodsilk/shared';
 import { BaseEntity } from '../database/base.entity';
 
 /** Keys of `Species.sources`: one source per stored value. */
@@ -36,8 +36,9 @@ export class Species extends BaseEntity<'formerNames' | 'commonNames' | 'tradeLi
   @Property({ type: 'boolean' })
   urticatingHairs!: boolean;
 
-  @Property({ type: 'boolean' })
-  medicallySignificantVenom!: boolean;
+  /** What is known about its bite (three values; docs/trade-facts.md §9). */
+  @Enum({ items: [...VENOM_FLAGS] })
+  venom!: VenomFlag;
 
   @Property({ type: 'text', nullable: true })
   tradeListing: string | null = null;

@@ -43,7 +43,7 @@ export function toSpeciesResponse(s: Species): SpeciesResponse {
     nameSource: src(s, 'name'),
     cautions: {
       urticatingHairs: { value: s.urticatingHairs, source: src(s, 'urticatingHairs') },
-      medicallySignificantVenom: { value: s.medicallySignificantVenom, source: src(s, 'venom') },
+      venom: { value: s.venom, source: src(s, 'venom') },
       cautionText: groupCaution(wordsFor('en'), s.group),
     },
     tradeListing: { value: s.tradeListing, source: src(s, 'tradeListing') },

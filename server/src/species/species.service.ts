@@ -19,9 +19,9 @@ const PAIRS: Pair[] = [
   ['eggsMin', 'eggsMax', 'eggs', 'eggs per sac', 1],
   ['lifespanMinMonths', 'lifespanMaxMonths', 'lifespan', 'mature-male lifespan', 1],
 ];
-const FLAGS: ['urticatingHairs' | 'medicallySignificantVenom' | 'tradeListing', SpeciesSourceKey][] = [
+const FLAGS: ['urticatingHairs' | 'venom' | 'tradeListing', SpeciesSourceKey][] = [
   ['urticatingHairs', 'urticatingHairs'],
-  ['medicallySignificantVenom', 'venom'],
+  ['venom', 'venom'],
   ['tradeListing', 'tradeListing'],
 ];
 

@@ -72,6 +72,7 @@ const KIND: Record<string, string> = {
   invitations: 'token',
   calendar: 'token',
   unsubscribe: 'token',
+  progress: 'token',
 };
 
 /** The route's path with each `:param` filled from `ids`. */

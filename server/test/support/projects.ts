@@ -9,16 +9,16 @@ import { Clock } from '../../src/common/clock';
 
 let n = 0;
 
-/** A project of `owner` with a fresh mature female and a mature male (matured `maleAgeDays` before the app's clock says today). */
+/** A project of `owner` with a fresh mature female and a mature male (matured `maleAgeDays` before the app's clock says today), G. pulchripes unless `species` names another. */
 export async function createProject(
   app: INestApplication,
   orm: MikroORM,
   owner: SignedIn,
-  opts: { title?: string; maleAgeDays?: number } = {},
+  opts: { title?: string; maleAgeDays?: number; species?: string } = {},
 ): Promise<ProjectResponse> {
   n += 1;
   const today = todayIn('UTC', app.get(Clock).now());
-  const species = await speciesId(orm, 'Grammostola pulchripes');
+  const species = await speciesId(orm, opts.species ?? 'Grammostola pulchripes');
   const female = await createAnimal(app, owner, { speciesId: species, label: `F-${n}-${Date.now()}`, sex: 'female', maturity: 'mature' });
   const male = await createAnimal(app, owner, {
     speciesId: species,

@@ -4,9 +4,10 @@ import { MIKRO_ORM_MODULE_OPTIONS } from '@mikro-orm/nestjs';
 import { MikroORM } from '@mikro-orm/postgresql';
 import type { MigrationObject } from '@mikro-orm/core';
 import { AppModule } from '../../src/app.module';
+import { databaseConfig } from '../../src/config/database.config';
 import { configureApp } from '../../src/app.setup';
 import { baseOrmOptions } from '../../src/mikro-orm.config';
-import { JOBS_SCHEMA } from '../../src/jobs/jobs.service';
+import { JOBS_SCHEMA, installJobQueues } from '../../src/jobs/job-queues';
 
 // Node cannot require .ts migrations, so the migrator gets them as a list.
 const modules = import.meta.glob<Record<string, new () => unknown>>('../../src/migrations/Migration*.ts', { eager: true });
@@ -23,10 +24,17 @@ export interface TestApp {
   close(): Promise<void>;
 }
 
-/** The real AppModule against the test database, migrated up from empty. */
-export async function createTestApp(options: { fresh?: boolean } = { fresh: true }): Promise<TestApp> {
-  const base = baseOrmOptions(process.env.DATABASE_URL!);
+/**
+ * The real AppModule against the test database, migrated up from empty. The tests' role owns the
+ * database, so it also installs the job queues first (as `npm run migrate` does before the app starts).
+ */
+export async function createTestApp(options: { fresh?: boolean; runtimeUrl?: string } = { fresh: true }): Promise<TestApp> {
+  const url = options.runtimeUrl ?? process.env.DATABASE_URL!;
+  if (!options.runtimeUrl) await installJobQueues(url);
+  const base = baseOrmOptions(url);
   const moduleRef = await Test.createTestingModule({ imports: [AppModule] })
+    .overrideProvider(databaseConfig.KEY)
+    .useValue({ url })
     .overrideProvider(MIKRO_ORM_MODULE_OPTIONS)
     .useValue({ ...base, autoLoadEntities: true, registerRequestContext: true, migrations: { ...base.migrations, migrationsList } })
     .compile();
@@ -34,7 +42,7 @@ export async function createTestApp(options: { fresh?: boolean } = { fresh: true
   configureApp(app);
   await app.init();
   const orm = app.get(MikroORM) as unknown as MikroORM;
-  if (options.fresh !== false) {
+  if (options.fresh !== false && !options.runtimeUrl) {
     await resetDatabase(orm);
   }
   return { app, orm, close: () => app.close() };

@@ -1,4 +1,4 @@
-import type { SpeciesGroup, ValueOrigin } from './species.types.js';
+import type { SpeciesGroup, ValueOrigin, VenomFlag } from './species.types.js';
 import type { MaleClock } from './male-clock.js';
 import type { FemaleReadiness } from './female-readiness.js';
 import type { MaturingWindow } from './maturing-window.js';
@@ -101,7 +101,7 @@ export interface AnimalSpeciesRef {
   scientificName: string;
   group: SpeciesGroup;
   urticatingHairs: boolean;
-  medicallySignificantVenom: boolean;
+  venom: VenomFlag;
 }
 
 /** The male clock of a mature male (`maleClock` of shared/collection/male-clock.ts) and what it ran against. */

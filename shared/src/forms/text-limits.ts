@@ -27,6 +27,8 @@ export const TEXT_LIMITS = Object.freeze({
   password: 200,
   /** Six digits from an authenticator app, or a recovery code with its dashes. */
   secondFactorCode: 40,
+  /** The keeper's own words sent to the partners with bad news (a failed sac, a project ended early). */
+  partnerMessage: 1000,
 });
 
 export type TextLimitName = keyof typeof TEXT_LIMITS;

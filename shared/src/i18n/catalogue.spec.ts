@@ -13,8 +13,8 @@ import type { RollStatus } from '../breeding/roll-schedule.js';
 import type { MaleClockState } from '../collection/male-clock.js';
 import type { FemaleReadinessState } from '../collection/female-readiness.js';
 import { ANIMAL_SEXES, ANIMAL_STATUSES, CUSTODIES, EXUVIA_SEXES, MATURITIES, OWNER_KINDS } from '../collection/animals.types.js';
-import { SPECIES_GROUPS } from '../collection/species.types.js';
-import { SAC_FAILURE_REASONS, SAC_OUTCOMES } from '../sacs/sacs.types.js';
+import { SPECIES_GROUPS, VENOM_FLAGS } from '../collection/species.types.js';
+import { SAC_FAILURE_REASONS, SAC_OUTCOMES, type PullWindowOrigin } from '../sacs/sacs.types.js';
 import { BROOD_LOSS_REASONS } from '../sacs/brood.types.js';
 import { CARE_LOG_KINDS } from '../sacs/care-log.types.js';
 import { PROJECT_ROLES } from '../projects/project.types.js';
@@ -65,7 +65,9 @@ const ENUMS: Record<string, readonly string[]> = {
   language: LANGUAGES,
   activityKind: ACTIVITY_KINDS,
   'safety.groupCaution': SPECIES_GROUPS,
-  venom: ['medically-significant', 'no-cases-known', 'not-known'],
+  'page.species.group': SPECIES_GROUPS,
+  pullWindowOrigin: complete<PullWindowOrigin>()(['sac', 'species', 'default']),
+  venom: VENOM_FLAGS,
   ...Object.fromEntries(STAGE_NUMBERINGS.map((n) => [`broodStage.${n}`, BROOD_STAGES])),
   maleClock: complete<MaleClockState>()(['fresh', 'prime', 'late', 'past-typical']),
 };

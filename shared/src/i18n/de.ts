@@ -1,5 +1,6 @@
 import type { Catalogue } from './en.js';
 import { pagesDe } from './pages/index.js';
+import { partnerUpdatesDe } from './partner-updates.js';
 
 /** Every word for a shared state, in German; the `Catalogue` type makes a missing key a compile error. */
 export const de: Catalogue = {
@@ -60,6 +61,16 @@ export const de: Catalogue = {
   },
   pullWindow: { 'not-yet': 'Noch nicht', open: 'Entnahmefenster offen', closing: 'Entnahmefenster schließt', past: 'Entnahmefenster vorbei' },
   pullWindowEvent: { 'opens-today': 'Öffnet heute', open: 'Jetzt offen', 'closes-today': 'Schließt heute' },
+  pullWindowOrigin: { sac: 'dein eigenes Fenster für diesen Kokon', species: 'der Wert dieser Art', default: 'das übliche Fenster für jede Art' },
+  pullWindowFrom: 'Tag {{from}}–{{to}}: {{origin}}',
+  valueMark: { 'common-practice': 'gängige Praxis', memory: 'aus dem Gedächtnis' },
+  valueSource: 'Quelle: {{source}}',
+  openingCount: {
+    healthyEggs: 'Gesunde Eier',
+    darkEggs: 'Dunkel (nicht lebensfähig)',
+    spoiledEggs: 'Verdorben',
+    keptBack: 'Zur weiteren Inkubation zurückbehalten',
+  },
   roll: { upcoming: 'Nächstes Drehen', 'due-soon': 'Drehen bald fällig', due: 'Drehen jetzt fällig', overdue: 'Drehen überfällig' },
   rollShort: { overdue: 'Überfällig', due: 'Jetzt fällig', 'due-soon': 'Fällig in der nächsten Stunde', upcoming: 'Später' },
   sex: { female: 'Weibchen', male: 'Männchen', unsexed: 'Unbestimmt' },
@@ -94,7 +105,13 @@ export const de: Catalogue = {
   handOverMethod: { 'pick-up': 'Abholung', shipment: 'Versand' },
   entryStatus: { 'in-force': 'Zählt', reversed: 'Storniert', 'awaiting-confirmation': 'Wartet auf Bestätigung', 'left-out': 'Nicht berücksichtigt' },
   activityKind: {
-    project: { created: 'Projekt begonnen', updated: 'Projekt geändert', ended: 'Projekt vorzeitig beendet' },
+    project: {
+      created: 'Projekt begonnen',
+      updated: 'Projekt geändert',
+      ended: 'Projekt vorzeitig beendet',
+      reopened: 'Projekt wieder aufgenommen',
+      closed: 'Projekt abgeschlossen',
+    },
     member: { added: 'Mitglied hinzugefügt', joined: 'Mitglied beigetreten', removed: 'Mitglied entfernt' },
     invitation: { sent: 'Einladung verschickt', claimed: 'Einladung angenommen' },
     pairing: { recorded: 'Verpaarung eingetragen', corrected: 'Verpaarung korrigiert' },
@@ -105,6 +122,7 @@ export const de: Catalogue = {
       updated: 'Kokon geändert',
       failed: 'Kokon verdorben',
       opened: 'Kokon geöffnet',
+      'left-with-mother': 'Kokon bleibt beim Muttertier',
       'opening-corrected': 'Öffnung korrigiert',
     },
     brood: { counted: 'Jungtiere gezählt', corrected: 'Zählung korrigiert' },
@@ -127,6 +145,8 @@ export const de: Catalogue = {
       confirmation: 'Zahlung bestätigt',
     },
     male: { returned: 'Männchen zurückgegeben', died: 'Männchen gestorben' },
+    'progress-link': { issued: 'Fortschrittslink verschickt', revoked: 'Fortschrittslink widerrufen' },
+    female: { molted: 'Weibchen nach der Verpaarung gehäutet' },
   },
   activityKindOther: 'Ereignis',
   notificationKind: {
@@ -139,6 +159,7 @@ export const de: Catalogue = {
     'female-molted': 'Ein Weibchen hat sich nach der Verpaarung gehäutet',
     'loan-due-back': 'Ein geliehenes Tier muss in 7 Tagen zurück',
     'daily-digest': 'Die tägliche Zusammenfassung',
+    'partner-update': 'Neuigkeiten aus einem Projekt, an dem du beteiligt bist',
   },
   broodStage: {
     us: { eggs: 'Eier', 'eggs-with-legs': 'Eier mit Beinen', 'first-instar': '1. Instar', 'second-instar': '2. Instar' },
@@ -224,6 +245,8 @@ export const de: Catalogue = {
     broodCountLost: '{{about}}{{alive}} lebend im Stadium {{stage}}, {{lost}} verloren ({{reason}})',
     about: 'etwa ',
     memberRemoved: '{{name}} entfernt ({{role}}).',
+    progressLinkIssued: 'Neuen Fortschrittslink für {{name}} erstellt; frühere Links öffnen nicht mehr.',
+    progressLinkRevoked: 'Fortschrittslink von {{name}} widerrufen.',
   },
   statement: {
     title: 'Broodsilk-Kontoauszug',
@@ -266,12 +289,15 @@ export const de: Catalogue = {
     shippingHeading: 'Versand lebender Wirbelloser',
   },
   page: pagesDe,
+  partnerUpdate: partnerUpdatesDe,
   calendar: {
     pullWindow: 'Entnahmefenster: {{project}}',
     where: '{{project}}, Kokon vom {{layDate}}',
     pullBetween: '{{where}}. Entnahme zwischen Tag {{from}} und Tag {{to}} ({{opens}} bis {{closes}}).',
     stageExpected: '{{stage}} erwartet: {{project}}',
     stageDays: '{{where}}. Tag {{from}}–{{to}}. {{source}}',
+    stageGuide: 'Nur ein Anhaltspunkt, Arten unterscheiden sich: {{from}}; Quelle: {{source}}.',
+    stageFrom: { species: 'der Wert dieser Art', group: 'der Wert ihrer Gruppe', default: 'die Vorgabe von Broodsilk' },
     maleClock: '{{animal}}: {{state}}',
     maleClockFrom:
       'Uhr des Männchens {{animal}}: ab {{from}}, {{state}}. {{hint}} (Übliche Lebensspanne nach der Reifehäutung, aus dem Gedächtnis; Arten unterscheiden sich.)',

@@ -1,5 +1,6 @@
 import type { Widen } from './catalogue-shape.js';
 import { pagesEn } from './pages/index.js';
+import { partnerUpdatesEn } from './partner-updates.js';
 
 /**
  * Every word for a shared state, in English. Keys are the shared enums' own values, so a new value
@@ -49,6 +50,13 @@ export const en = {
   careLogKind: { roll: 'Rolled', temperature: 'Temperature', humidity: 'Humidity', check: 'Checked', stage: 'Stage', note: 'Note', strike: 'Correction' },
   pullWindow: { 'not-yet': 'Not yet', open: 'Pull window open', closing: 'Pull window closing', past: 'Pull window past' },
   pullWindowEvent: { 'opens-today': 'Opens today', open: 'Open now', 'closes-today': 'Closes today' },
+  /** Whose pull window a sac follows (shown on the sac card with its source). */
+  pullWindowOrigin: { sac: 'your own window for this sac', species: 'the figure for this species', default: 'the usual window for any species' },
+  pullWindowFrom: 'Day {{from}}–{{to}}: {{origin}}',
+  valueMark: { 'common-practice': 'common practice', memory: 'from memory' },
+  valueSource: 'Source: {{source}}',
+  /** The opening's counts; the young are named by their stage (`broodStage`), not as "nymphs". */
+  openingCount: { healthyEggs: 'Healthy eggs', darkEggs: 'Dark (non-viable)', spoiledEggs: 'Spoiled', keptBack: 'Kept back for more incubation' },
   roll: { upcoming: 'Next roll', 'due-soon': 'Roll due soon', due: 'Roll due now', overdue: 'Roll overdue' },
   rollShort: { overdue: 'Overdue', due: 'Due now', 'due-soon': 'Due within the hour', upcoming: 'Later' },
   sex: { female: 'Female', male: 'Male', unsexed: 'Unsexed' },
@@ -79,7 +87,13 @@ export const en = {
   entryStatus: { 'in-force': 'Counts', reversed: 'Reversed', 'awaiting-confirmation': 'Waiting for confirmation', 'left-out': 'Left out' },
   /** Timeline headings, by the event kind's dotted name (`pairing.recorded` → pairing.recorded). */
   activityKind: {
-    project: { created: 'Project started', updated: 'Project changed', ended: 'Project ended early' },
+    project: {
+      created: 'Project started',
+      updated: 'Project changed',
+      ended: 'Project ended early',
+      reopened: 'Project reopened',
+      closed: 'Project closed',
+    },
     member: { added: 'Member added', joined: 'Member joined', removed: 'Member removed' },
     invitation: { sent: 'Invitation sent', claimed: 'Invitation accepted' },
     pairing: { recorded: 'Pairing recorded', corrected: 'Pairing corrected' },
@@ -90,6 +104,7 @@ export const en = {
       updated: 'Sac changed',
       failed: 'Sac failed',
       opened: 'Sac opened',
+      'left-with-mother': 'Sac left with the mother',
       'opening-corrected': 'Opening corrected',
     },
     brood: { counted: 'Young counted', corrected: 'Count corrected' },
@@ -112,6 +127,8 @@ export const en = {
       confirmation: 'Payment confirmed',
     },
     male: { returned: 'Male returned', died: 'Male died' },
+    'progress-link': { issued: 'Progress link sent', revoked: 'Progress link revoked' },
+    female: { molted: 'Female molted after pairing' },
   },
   activityKindOther: 'Activity',
   notificationKind: {
@@ -124,6 +141,7 @@ export const en = {
     'female-molted': 'A female molted after pairing',
     'loan-due-back': 'A loaned animal is due back in 7 days',
     'daily-digest': 'The daily digest',
+    'partner-update': 'News from a project you are a partner in',
   },
   /** Stage names in the chosen numbering set (docs/rules.md, Stage numbering). */
   broodStage: {
@@ -205,6 +223,8 @@ export const en = {
     broodCountLost: '{{about}}{{alive}} alive at {{stage}}, {{lost}} lost ({{reason}})',
     about: 'about ',
     memberRemoved: 'Removed {{name}} ({{role}}).',
+    progressLinkIssued: 'Made a new progress link for {{name}}; earlier links no longer open.',
+    progressLinkRevoked: 'Revoked the progress link of {{name}}.',
   },
   statement: {
     title: 'Broodsilk account statement',
@@ -247,12 +267,16 @@ export const en = {
     shippingHeading: 'Shipping live invertebrates',
   },
   page: pagesEn,
+  /** What partners read when something is recorded in their project (in-app and e-mail). */
+  partnerUpdate: partnerUpdatesEn,
   calendar: {
     pullWindow: 'Pull window: {{project}}',
     where: '{{project}}, sac laid {{layDate}}',
     pullBetween: '{{where}}. Pull between day {{from}} and day {{to}} ({{opens}} to {{closes}}).',
     stageExpected: '{{stage}} expected: {{project}}',
     stageDays: '{{where}}. Day {{from}}–{{to}}. {{source}}',
+    stageGuide: 'A guide only, species differ: {{from}}; source: {{source}}.',
+    stageFrom: { species: 'the figure for this species', group: 'the figure for its group', default: 'the Broodsilk default' },
     maleClock: '{{animal}}: {{state}}',
     maleClockFrom: 'Male clock of {{animal}}: from {{from}}, {{state}}. {{hint}} (Typical lifespan after the maturing molt, from memory; species differ.)',
   },

@@ -11,6 +11,7 @@ describe('isAppPage', () => {
       '/projects/new',
       '/projects/p1/account',
       '/invitations/tok.en',
+      '/progress/tok_en-1',
       '/settings/payouts/',
     ])
       expect(isAppPage(path), path).toBe(true);

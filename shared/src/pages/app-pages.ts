@@ -23,6 +23,7 @@ export const APP_PAGES = {
   incubator: '/incubator',
   incubatorSac: '/incubator/:sacId',
   invitation: '/invitations/:token',
+  progress: '/progress/:token',
 } as const;
 
 /** Addresses people guess, sent on to the page they mean. */

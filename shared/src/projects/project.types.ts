@@ -29,6 +29,8 @@ export interface UpdateProjectRequest {
 export interface EndProjectRequest {
   reason: EndedEarlyReason;
   note?: string | null;
+  /** The keeper's own words, sent to every partner with the facts. */
+  partnerMessage?: string;
 }
 
 /** One of the project's animals as members see it: read-only, with clock and readiness. */

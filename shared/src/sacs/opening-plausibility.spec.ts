@@ -19,8 +19,8 @@ describe('opening counts against the species range (a warning, never a refusal)'
 
   it('warns below the range and says "about" for an estimate: a Theraphosa sac of about 250 (at most 200)', () => {
     const [w] = openingCountWarnings(250, { min: 50, max: 200 }, true);
-    expect(w!.message.startsWith('About 250 eggs and nymphs is more than')).toBe(true);
+    expect(w!.message.startsWith('About 250 eggs and young is more than')).toBe(true);
     const [low] = openingCountWarnings(12, smithi, false);
-    expect(low!.message).toContain('12 eggs and nymphs is fewer than');
+    expect(low!.message).toContain('12 eggs and young is fewer than');
   });
 });

@@ -1,3 +1,4 @@
+import type { ValueSource } from '../collection/species.types.js';
 import type { AcknowledgedWarnings } from '../errors/plausibility.js';
 import type { CalendarDate } from '../breeding/calendar-day.js';
 import type { BroodStage } from '../breeding/brood-stage.js';
@@ -62,6 +63,8 @@ export interface UpdateSacRequest {
   pulledAt?: string | null;
   outcome?: SacOutcomeState;
   failureReason?: SacFailureReason | null;
+  /** Only with the outcome `failed`: the keeper's own words, sent to every partner with the facts. */
+  partnerMessage?: string;
   /** Both set, or both null to fall back to the species / default window. */
   pullFromDay?: number | null;
   pullToDay?: number | null;
@@ -121,7 +124,8 @@ export interface SacResponse {
   pulledOn: CalendarDate | null;
   outcome: SacOutcomeState;
   failureReason: SacFailureReason | null;
-  pullWindow: PullWindowView & { fromDay: number; toDay: number; origin: PullWindowOrigin };
+  /** The window in force; `origin` says whose it is (the keeper's for this sac, the species', the usual default) and `source` where a species or default figure comes from. */
+  pullWindow: PullWindowView & { fromDay: number; toDay: number; origin: PullWindowOrigin; source: ValueSource | null };
   rollIntervalHours: number;
   rollingOff: boolean;
   /** Left with the mother by the keeper's choice (not pulled; no pull window warnings). */
@@ -155,4 +159,20 @@ export interface SacResponse {
   incubatorCaution: string | null;
   createdAt: string;
   updatedAt: string;
+}
+
+/** Asks what the partners will read if the sac is recorded as failed now (nothing is written). */
+export interface FailureNoticePreviewRequest {
+  failureReason: SacFailureReason;
+  partnerMessage?: string;
+}
+
+/** The update as a partner reads it, in the keeper's language, and how many will get it. */
+export interface FailureNoticePreview {
+  title: string;
+  body: string;
+  /** Partners with an account (in-app and e-mail as they chose). */
+  members: number;
+  /** Partners without an account who have an e-mail address (e-mail only). */
+  outsideParties: number;
 }

@@ -28,6 +28,7 @@ export const NOTIFICATION_KIND_LABELS: Record<NotificationKind, string> = {
   'female-molted': 'A female molted after pairing',
   'loan-due-back': 'A loaned animal is due back in 7 days',
   'daily-digest': 'The daily digest',
+  'partner-update': 'News from a project you are a partner in',
 };
 
 export const REMINDER_CHANNEL_LABELS: Record<ReminderChannel, string> = {

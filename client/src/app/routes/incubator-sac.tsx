@@ -1,11 +1,12 @@
 import { Alert, Anchor, Group } from '@mantine/core';
 import type { QueryClient } from '@tanstack/react-query';
 import { Link, type LoaderFunctionArgs } from 'react-router';
-import type { ProjectResponse } from '@broodsilk/shared';
+import { safetyText, type ProjectResponse, type Words } from '@broodsilk/shared';
 import { PageLoader } from '@/components/ui/page-loader';
 import { DocumentTitle } from '@/components/ui/document-title';
 import { paths } from '@/config/paths';
 import { formatDate } from '@/lib/dates';
+import { useWords } from '@/lib/i18n';
 import { projectQueries } from '@/features/projects/api/projects';
 import { sacQueries } from '@/features/sacs/api/sacs';
 import { IncubatorEntry } from '@/features/sacs/components/incubator-entry';
@@ -20,18 +21,19 @@ export const clientLoader =
     return null;
   };
 
-/** Species cautions of the pair, in words, for the incubator screen. */
-function speciesCautions(project: ProjectResponse | undefined): string[] {
+/** Species cautions of the pair, in the reader's words (the catalogue's safety section), for the incubator screen. */
+function speciesCautions(t: Words, project: ProjectResponse | undefined): string[] {
   if (!project) return [];
   const species = [project.femaleAnimal.species, project.maleAnimal.species];
   const out: string[] = [];
-  if (species.some((s) => s.urticatingHairs)) out.push('Urticating hairs: keep your face away when opening the container; gloves and eye protection help.');
-  if (species.some((s) => s.medicallySignificantVenom))
-    out.push('Medically significant venom: work with tools, never bare hands; young ones are fast. Follow local law and licensed practice.');
+  if (species.some((s) => s.urticatingHairs)) out.push(safetyText(t, 'urticatingHairs'));
+  if (species.some((s) => s.venom === 'medically-significant')) out.push(safetyText(t, 'venom'));
+  else if (species.some((s) => s.venom === 'not-known')) out.push(safetyText(t, 'venomNotKnown'));
   return out;
 }
 
 export function Component() {
+  const t = useWords();
   const { sacId, me, sac, project } = useSacPage();
   if (!me || sac.isPending) return <PageLoader />;
   if (sac.isError) return <Alert color="clay">{sac.error.message}</Alert>;
@@ -51,7 +53,7 @@ export function Component() {
         timeZone={me.timeZone}
         temperatureUnit={me.temperatureUnit}
         title={project.data?.title}
-        speciesCautions={speciesCautions(project.data)}
+        speciesCautions={speciesCautions(t, project.data)}
       />
     </>
   );

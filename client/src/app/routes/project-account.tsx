@@ -23,7 +23,7 @@ export const clientLoader =
       await preloadPanels(
         qc.ensureQueryData(sharesQueries.detail(id)),
         qc.ensureQueryData(balancesQueries.detail(id)),
-        qc.ensureQueryData(entriesQueries.list(id)),
+        qc.ensureInfiniteQueryData(entriesQueries.list(id)),
       );
     }
     return null;

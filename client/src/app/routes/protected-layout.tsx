@@ -6,8 +6,8 @@ import { paths } from '@/config/paths';
 import { meQuery, useMe } from '@/features/auth/api/me';
 import { useLogout } from '@/features/auth/api/session';
 import { InboxLink } from '@/features/notifications/components/inbox-link';
-import { NAV_ITEMS } from '../nav-items';
-import { useReaderSettings } from '@/lib/i18n';
+import { navItems } from '../nav-items';
+import { useReaderSettings, useWords } from '@/lib/i18n';
 
 /** Every signed-in page goes through here: no session, no page. */
 export const clientLoader =
@@ -26,10 +26,11 @@ export function Component() {
   const logout = useLogout();
   const navigate = useNavigate();
   const language = useReaderSettings(me);
+  const t = useWords();
   if (!me) return null;
   return (
     <AppLayout
-      nav={NAV_ITEMS}
+      nav={navItems(t)}
       userName={me.displayName}
       settingsHref={paths.settings.href()}
       headerExtra={<InboxLink />}

@@ -26,7 +26,7 @@ export const clientLoader =
   (qc: QueryClient) =>
   async ({ params }: LoaderFunctionArgs) => {
     const id = params.sacId!;
-    const log = preloadPanels(qc.ensureQueryData(careLogQueries.list(id)));
+    const log = preloadPanels(qc.ensureInfiniteQueryData(careLogQueries.list(id)));
     const sac = await qc.ensureQueryData(sacQueries.detail(id));
     await Promise.all([
       log,

@@ -10,6 +10,7 @@ import { secondFactorQuery } from '@/features/settings/api/second-factor';
 import { SecondFactorSection } from '@/features/settings/components/second-factor-section';
 import { ExportCard } from '@/features/export/components/export-card';
 import { PageHeader } from '@/components/ui/page-header';
+import { useWords } from '@/lib/i18n';
 
 export const clientLoader = (qc: QueryClient) => async () => {
   void preloadPanels(qc.ensureQueryData(reminderQueries.preferences()), qc.ensureQueryData(secondFactorQuery()));
@@ -17,26 +18,27 @@ export const clientLoader = (qc: QueryClient) => async () => {
 };
 
 export function Component() {
+  const t = useWords();
   const { data: me } = useMe();
   const { data: reminders } = useReminderPreferences();
   if (!me) return null;
   return (
     <Stack>
-      <PageHeader title="Settings" description="How Broodsilk shows dates and temperatures to you." />
+      <PageHeader title={t('page.settings.title')} description={t('page.settings.description')} />
       <ProfileForm me={me} />
       <Divider my="md" />
       <Title order={3} size="h4">
-        Password
+        {t('page.settings.passwordHeading')}
       </Title>
       <PasswordForm />
       <Divider my="md" />
       <Title order={3} size="h4" id="security">
-        Sign-in security
+        {t('page.settings.securityHeading')}
       </Title>
       <SecondFactorSection />
       <Divider my="md" />
       <Title order={3} size="h4">
-        Reminders
+        {t('page.settings.remindersHeading')}
       </Title>
       {reminders && <ReminderPreferencesForm key={reminders.timeZone} preferences={reminders} />}
       <Divider my="md" />

@@ -1,6 +1,7 @@
 import { TextInput, type TextInputProps } from '@mantine/core';
 import { useState, type ChangeEvent } from 'react';
-import { browserDateFormat, dateInWords, howToType, readTypedDate } from './typed-date';
+import { useWords } from '@/lib/i18n';
+import { browserDateFormat, dateExample, dateInWords, howToType, readTypedDate } from './typed-date';
 
 export type DateFieldProps = Omit<TextInputProps, 'type' | 'placeholder'>;
 
@@ -9,6 +10,7 @@ export type DateFieldProps = Omit<TextInputProps, 'type' | 'placeholder'>;
  * understood ("14 March 2025"); whether that day is allowed is the form's rule (`dateRule`).
  */
 export function DateField({ description, onChange, value, defaultValue, ...props }: DateFieldProps) {
+  const t = useWords();
   const [text, setText] = useState(String(value ?? defaultValue ?? ''));
   const shown = value === undefined ? text : String(value ?? '');
   const format = browserDateFormat();
@@ -23,7 +25,7 @@ export function DateField({ description, onChange, value, defaultValue, ...props
         setText(e.currentTarget.value);
         onChange?.(e);
       }}
-      placeholder={format.pattern === 'YYYY-MM-DD' ? 'YYYY-MM-DD' : `e.g. 2025-03-14`}
+      placeholder={format.pattern === 'YYYY-MM-DD' ? 'YYYY-MM-DD' : t('page.shell.fields.dateExample', { example: dateExample(format) })}
       autoComplete="off"
       description={
         description || hint ? (

@@ -10,8 +10,12 @@ import { TextAreaField } from './text-field';
 import { dateRule, readDate } from './typed-date';
 import { numberRule, readNumber } from './typed-number';
 import { textRule } from './text-rule';
+import { i18next } from '@/lib/i18n';
 
-afterEach(() => vi.restoreAllMocks());
+afterEach(async () => {
+  vi.restoreAllMocks();
+  await i18next.changeLanguage('en');
+});
 
 /** A small form as the app's forms use the fields: uncontrolled, rules checked on blur and on submit. */
 function Harness({ onSubmit }: { onSubmit: (v: { date: string | null; size: number | null; notes: string }) => void }) {
@@ -74,6 +78,23 @@ describe('DateField', { timeout: 30_000 }, () => {
     expect(input).toHaveValue('14/03/2025');
     expect(onSubmit).not.toHaveBeenCalled();
   });
+
+  it('reads 14.03.2025 as 14 March 2025 for a German reader, even in an English browser, and shows that order', async () => {
+    // German numeric date order DD.MM.YYYY (DIN 5008; CLDR de pattern dd.MM.y); the echo is Intl.DateTimeFormat('de-DE', long month).
+    await i18next.changeLanguage('de');
+    const onSubmit = setup('en-US');
+    const input = screen.getByLabelText('Molted on');
+    expect(input).toHaveAttribute('placeholder', 'z. B. 14.03.2025');
+    expect(input).toHaveAccessibleDescription('JJJJ-MM-TT oder TT.MM.JJJJ');
+    await userEvent.type(input, '14.03.2025');
+    const deWords = new Intl.DateTimeFormat('de-DE', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' }).format(
+      new Date(Date.UTC(2025, 2, 14)),
+    );
+    expect(deWords).toBe('14. März 2025');
+    expect(input).toHaveAccessibleDescription(deWords);
+    await userEvent.click(screen.getByRole('button', { name: 'Save' }));
+    expect(onSubmit).toHaveBeenCalledWith({ date: '2025-03-14', size: null, notes: '' });
+  });
 });
 
 describe('NumberField', { timeout: 30_000 }, () => {
@@ -97,6 +118,23 @@ describe('NumberField', { timeout: 30_000 }, () => {
     await userEvent.click(screen.getByRole('button', { name: 'Save' }));
     expect(input).toHaveValue('900');
     expect(onSubmit).not.toHaveBeenCalled();
+  });
+
+  it('says the range with a decimal comma to a German reader and takes a typed decimal comma', async () => {
+    // Reference: Intl.NumberFormat('de-DE') writes 0.1 as "0,1" (CLDR de decimal separator).
+    await i18next.changeLanguage('de');
+    const onSubmit = setup('en-GB');
+    await userEvent.type(screen.getByLabelText('Molted on'), '2025-03-14');
+    const input = screen.getByLabelText('Leg span (cm)');
+    await userEvent.type(input, '900');
+    await userEvent.tab();
+    await waitFor(() =>
+      expect(input).toHaveAccessibleDescription(`900 liegt außerhalb des Bereichs: Gib eine Zahl von ${new Intl.NumberFormat('de-DE').format(0.1)} bis 40 an.`),
+    );
+    await userEvent.clear(input);
+    await userEvent.type(input, '12,5');
+    await userEvent.click(screen.getByRole('button', { name: 'Save' }));
+    expect(onSubmit).toHaveBeenCalledWith({ date: '2025-03-14', size: 12.5, notes: '' });
   });
 });
 

@@ -1,3 +1,6 @@
+import { words } from '@/lib/i18n';
+import { formatNumber } from '@/lib/numbers';
+
 /** Length limits for text fields: shown as a counter near the limit, refused (never cut) above it. */
 
 export interface TextRule {
@@ -8,8 +11,7 @@ export interface TextRule {
 /** Counted as the server counts (UTF-16 code units, as class-validator's MaxLength does). */
 export function checkText(text: string, rule: TextRule): string | null {
   if (text.trim() === '') return rule.required ?? null;
-  if (text.length > rule.maxLength)
-    return `This is ${(text.length - rule.maxLength).toLocaleString('en-GB')} characters too long: keep it to ${rule.maxLength.toLocaleString('en-GB')}.`;
+  if (text.length > rule.maxLength) return words('page.shell.fields.tooLong', { count: text.length - rule.maxLength, max: formatNumber(rule.maxLength) });
   return null;
 }
 
@@ -18,5 +20,5 @@ export const textRule = (rule: TextRule) => (text: string) => checkText(text, ru
 /** The counter appears once four fifths of the limit are used. */
 export function counterText(length: number, maxLength: number): string | null {
   if (length < maxLength * 0.8) return null;
-  return `${length.toLocaleString('en-GB')} of ${maxLength.toLocaleString('en-GB')} characters`;
+  return words('page.shell.fields.counter', { length: formatNumber(length), max: formatNumber(maxLength) });
 }

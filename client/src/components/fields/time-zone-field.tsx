@@ -1,4 +1,5 @@
 import { Select, type SelectProps } from '@mantine/core';
+import { useWords } from '@/lib/i18n';
 
 const ZONES = typeof Intl.supportedValuesOf === 'function' ? Intl.supportedValuesOf('timeZone') : ['UTC'];
 
@@ -7,5 +8,8 @@ export const browserTimeZone = (): string => Intl.DateTimeFormat().resolvedOptio
 
 /** Picks an IANA time zone by typing part of its name; a zone the list lacks (an alias) is kept as given. */
 export function TimeZoneField({ current, ...props }: Omit<SelectProps, 'data' | 'searchable'> & { current: string }) {
-  return <Select label="Time zone" searchable allowDeselect={false} data={ZONES.includes(current) ? ZONES : [current, ...ZONES]} {...props} />;
+  const t = useWords();
+  return (
+    <Select label={t('page.shell.fields.timeZone')} searchable allowDeselect={false} data={ZONES.includes(current) ? ZONES : [current, ...ZONES]} {...props} />
+  );
 }

@@ -1,7 +1,8 @@
 import dayjs from 'dayjs';
 import customParseFormat from 'dayjs/plugin/customParseFormat';
-import { describe, expect, it } from 'vitest';
-import { checkDate, dateInWords, localeDateFormat, readTypedDate } from './typed-date';
+import { afterEach, describe, expect, it } from 'vitest';
+import { browserDateFormat, checkDate, dateInWords, localeDateFormat, readTypedDate } from './typed-date';
+import { i18next } from '@/lib/i18n';
 
 dayjs.extend(customParseFormat);
 
@@ -81,4 +82,21 @@ describe('checkDate', () => {
 
 it('dateInWords says the day in words', () => {
   expect(dateInWords('2025-03-14')).toBe('14 March 2025');
+});
+
+describe('a German reader', () => {
+  afterEach(async () => {
+    await i18next.changeLanguage('en');
+  });
+
+  it('types dates in German order (DD.MM.YYYY) and hears them in German words', async () => {
+    // German numeric order DD.MM.YYYY (DIN 5008, CLDR de dd.MM.y); reference parse: dayjs strict with the same pattern.
+    await i18next.changeLanguage('de');
+    expect(browserDateFormat()).toEqual({ order: 'DMY', pattern: 'DD.MM.YYYY' });
+    expect(readTypedDate('14.03.2025')).toEqual({ kind: 'date', iso: dayjs('14.03.2025', 'DD.MM.YYYY', true).format('YYYY-MM-DD') });
+    expect(readTypedDate('14.03.2025')).toEqual({ kind: 'date', iso: '2025-03-14' });
+    expect(dateInWords('2025-03-14')).toBe('14. März 2025');
+    expect(readTypedDate('2025-13-01')).toMatchObject({ kind: 'invalid', message: 'Einen Monat 13 gibt es nicht. Gib es als JJJJ-MM-TT oder TT.MM.JJJJ ein.' });
+    expect(readTypedDate('30.02.2025')).toMatchObject({ kind: 'invalid', message: expect.stringContaining('Februar 2025 hat keinen 30. Tag.') });
+  });
 });

@@ -3,6 +3,8 @@
  * numeric order (e.g. 14/03/2025 in en-GB, 03/14/2025 in en-US) with a four-digit year; anything
  * else is refused with a message. Nothing is guessed, completed or moved to the nearest allowed day.
  */
+import i18next from 'i18next';
+import { words } from '@/lib/i18n';
 
 export type DateOrder = 'DMY' | 'MDY' | 'YMD';
 
@@ -35,10 +37,17 @@ export function localeDateFormat(locale: string): LocaleDateFormat {
   return format;
 }
 
-/** The format of the browser this runs in. */
+/**
+ * The format the reader types in: German numeric order (DD.MM.YYYY) when the interface is German,
+ * else the browser's own locale (14/03/2025 in en-GB, 03/14/2025 in en-US).
+ */
 export function browserDateFormat(): LocaleDateFormat {
+  if (i18next.language === 'de') return localeDateFormat('de-DE');
   return localeDateFormat(typeof navigator === 'undefined' ? 'en-GB' : navigator.language || 'en-GB');
 }
+
+/** The locale dates are said in words: the interface language. */
+const wordsLocale = (): string => (i18next.language === 'de' ? 'de-DE' : 'en-GB');
 
 /** Years outside this span are almost surely a typing slip (a dropped or extra digit). */
 const YEARS = { first: 1900, last: 2199 };
@@ -47,14 +56,26 @@ const ISO = /^(\d{4})-(\d{2})-(\d{2})$/;
 const NUMERIC = /^(\d{1,4})\s*[./-]\s*(\d{1,2})\s*[./-]\s*(\d{1,4})\.?$/;
 
 export function howToType(format: LocaleDateFormat): string {
-  return format.pattern === 'YYYY-MM-DD' ? 'YYYY-MM-DD' : `YYYY-MM-DD or ${format.pattern}`;
+  if (format.pattern === 'YYYY-MM-DD') return 'YYYY-MM-DD';
+  return words('page.shell.fields.dateOr', {
+    pattern: i18next.language === 'de' ? format.pattern.replace('DD', 'TT').replace('YYYY', 'JJJJ') : format.pattern,
+  });
+}
+
+/** 14 March 2025 written in the format's numeric order, e.g. "14.03.2025" or "03/14/2025". */
+export function dateExample(format: LocaleDateFormat): string {
+  return format.pattern.replace('DD', '14').replace('MM', '03').replace('YYYY', '2025');
 }
 
 /** Reads a typed date; an invalid one carries the message to show next to the field. */
 export function readTypedDate(text: string, format: LocaleDateFormat = browserDateFormat()): TypedDate {
   const typed = text.trim();
   if (typed === '') return { kind: 'empty' };
-  const refuse = (why: string): TypedDate => ({ kind: 'invalid', message: `${why} Type it as ${howToType(format)}.` });
+  const how = howToType(format);
+  const refuse = (key: string, values: Record<string, unknown> = {}): TypedDate => ({
+    kind: 'invalid',
+    message: words(`page.shell.fields.${key}`, { ...values, how }),
+  });
   let y: string, m: string, d: string;
   const iso = ISO.exec(typed);
   const numeric = NUMERIC.exec(typed);
@@ -64,24 +85,25 @@ export function readTypedDate(text: string, format: LocaleDateFormat = browserDa
     if (format.order === 'YMD') [y, m, d] = [a, b, c];
     else if (format.order === 'MDY') [m, d, y] = [a, b, c];
     else [d, m, y] = [a, b, c];
-  } else return refuse(`"${typed}" is not a date this field can read.`);
-  if (y.length !== 4 || m.length > 2 || d.length > 2) return refuse('Write the year with four digits and the day and month with one or two.');
+  } else return refuse('notADate', { typed });
+  if (y.length !== 4 || m.length > 2 || d.length > 2) return refuse('dateDigits');
   const [year, month, day] = [Number(y), Number(m), Number(d)];
-  if (year < YEARS.first || year > YEARS.last) return refuse(`The year ${y} looks mistyped.`);
-  if (month < 1 || month > 12) return refuse(`There is no month ${month}.`);
+  if (year < YEARS.first || year > YEARS.last) return refuse('yearMistyped', { year: y });
+  if (month < 1 || month > 12) return refuse('noSuchMonth', { month });
   const date = new Date(Date.UTC(year, month - 1, day));
-  if (day < 1 || date.getUTCMonth() !== month - 1) return refuse(`${monthName(month)} ${year} has no day ${day}.`);
+  if (day < 1 || date.getUTCMonth() !== month - 1) return refuse('noSuchDay', { monthYear: monthYear(year, month), day });
   return { kind: 'date', iso: `${y}-${String(month).padStart(2, '0')}-${String(day).padStart(2, '0')}` };
 }
 
-function monthName(month: number): string {
-  return new Intl.DateTimeFormat('en-GB', { month: 'long', timeZone: 'UTC' }).format(new Date(Date.UTC(2025, month - 1, 1)));
+/** "February 2025" / "Februar 2025" in the reader's language. */
+function monthYear(year: number, month: number): string {
+  return new Intl.DateTimeFormat(wordsLocale(), { month: 'long', year: 'numeric', timeZone: 'UTC' }).format(new Date(Date.UTC(year, month - 1, 1)));
 }
 
-/** "14 March 2025": how the field echoes the date it understood. */
+/** "14 March 2025" ("14. März 2025" in German): how the field echoes the date it understood. */
 export function dateInWords(iso: string): string {
   const [y, m, d] = iso.split('-').map(Number);
-  return new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' }).format(new Date(Date.UTC(y, m - 1, d)));
+  return new Intl.DateTimeFormat(wordsLocale(), { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' }).format(new Date(Date.UTC(y, m - 1, d)));
 }
 
 export interface DateRule {
@@ -101,9 +123,9 @@ export function checkDate(text: string, rule: DateRule = {}, format: LocaleDateF
   if (read.kind === 'empty') return rule.required ?? null;
   if (read.kind === 'invalid') return read.message;
   if (rule.latest && read.iso > rule.latest)
-    return rule.latestMessage ?? `${dateInWords(read.iso)} is after ${dateInWords(rule.latest)}, the latest date this can be.`;
+    return rule.latestMessage ?? words('page.shell.fields.dateAfterLatest', { date: dateInWords(read.iso), latest: dateInWords(rule.latest) });
   if (rule.earliest && read.iso < rule.earliest)
-    return rule.earliestMessage ?? `${dateInWords(read.iso)} is before ${dateInWords(rule.earliest)}, the earliest date this can be.`;
+    return rule.earliestMessage ?? words('page.shell.fields.dateBeforeEarliest', { date: dateInWords(read.iso), earliest: dateInWords(rule.earliest) });
   return null;
 }
 

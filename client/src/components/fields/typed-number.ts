@@ -6,8 +6,13 @@
 
 export type TypedNumber = { kind: 'empty' } | { kind: 'number'; value: number } | { kind: 'invalid'; message: string };
 
+import i18next from 'i18next';
+import { words } from '@/lib/i18n';
+import { formatNumber } from '@/lib/numbers';
+
+/** The reader's decimal mark: the German interface writes a comma, else the browser's locale decides. */
 function browserDecimalSeparator(): string {
-  const locale = typeof navigator === 'undefined' ? 'en-GB' : navigator.language || 'en-GB';
+  const locale = i18next.language === 'de' ? 'de-DE' : typeof navigator === 'undefined' ? 'en-GB' : navigator.language || 'en-GB';
   return new Intl.NumberFormat(locale).formatToParts(1.5).find((p) => p.type === 'decimal')?.value ?? '.';
 }
 
@@ -17,9 +22,8 @@ const PLAIN = /^[+-]?(\d+([.,]\d+)?|[.,]\d+)$/;
 export function readTypedNumber(text: string, decimalSeparator = browserDecimalSeparator()): TypedNumber {
   const typed = text.trim();
   if (typed === '') return { kind: 'empty' };
-  if (!PLAIN.test(typed)) return { kind: 'invalid', message: `"${typed}" is not a number. Write digits only, e.g. 12.5.` };
-  if (typed.includes(',') && decimalSeparator !== ',')
-    return { kind: 'invalid', message: 'Write the number without a comma; use a point for decimals, e.g. 12.5.' };
+  if (!PLAIN.test(typed)) return { kind: 'invalid', message: words('page.shell.fields.notANumber', { typed, example: formatNumber(12.5) }) };
+  if (typed.includes(',') && decimalSeparator !== ',') return { kind: 'invalid', message: words('page.shell.fields.noComma') };
   return { kind: 'number', value: Number(typed.replace(',', '.')) };
 }
 
@@ -38,12 +42,15 @@ function decimalsOf(text: string): number {
   return fraction ? fraction.length : 0;
 }
 
-const show = (n: number) => n.toLocaleString('en-GB', { maximumFractionDigits: 20 });
-
-function rangeText(rule: NumberRule): string {
-  if (rule.min !== undefined && rule.max !== undefined) return `from ${show(rule.min)} to ${show(rule.max)}`;
-  if (rule.min !== undefined) return `of at least ${show(rule.min)}`;
-  return `of at most ${show(rule.max!)}`;
+function outOfRange(value: number, rule: NumberRule): string {
+  const values = {
+    value: formatNumber(value),
+    min: rule.min === undefined ? '' : formatNumber(rule.min),
+    max: rule.max === undefined ? '' : formatNumber(rule.max),
+  };
+  if (rule.min !== undefined && rule.max !== undefined) return words('page.shell.fields.outOfRangeBetween', values);
+  if (rule.min !== undefined) return words('page.shell.fields.outOfRangeMin', values);
+  return words('page.shell.fields.outOfRangeMax', values);
 }
 
 /** The message for a typed number under a rule, or null when it is accepted as typed. */
@@ -51,11 +58,11 @@ export function checkNumber(text: string, rule: NumberRule = {}, decimalSeparato
   const read = readTypedNumber(text, decimalSeparator);
   if (read.kind === 'empty') return rule.required ?? null;
   if (read.kind === 'invalid') return read.message;
-  if (rule.decimals === 0 && !Number.isInteger(read.value)) return 'Give a whole number.';
+  if (rule.decimals === 0 && !Number.isInteger(read.value)) return words('page.shell.fields.wholeNumber');
   if (rule.decimals !== undefined && rule.decimals > 0 && decimalsOf(text) > rule.decimals)
-    return `Give at most ${rule.decimals} decimal ${rule.decimals === 1 ? 'place' : 'places'}.`;
+    return words('page.shell.fields.decimals', { count: rule.decimals });
   if ((rule.min !== undefined && read.value < rule.min) || (rule.max !== undefined && read.value > rule.max))
-    return rule.rangeMessage ?? `${show(read.value)} is out of range: give a number ${rangeText(rule)}.`;
+    return rule.rangeMessage ?? outOfRange(read.value, rule);
   return null;
 }
 

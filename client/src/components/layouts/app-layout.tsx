@@ -3,6 +3,7 @@ import { useDisclosure } from '@mantine/hooks';
 import type { ReactNode } from 'react';
 import { NavLink as RouterNavLink, useLocation } from 'react-router';
 import { BroodsilkLogo } from '../ui/logo';
+import { useWords } from '@/lib/i18n';
 
 export interface NavItem {
   label: string;
@@ -22,6 +23,7 @@ interface AppLayoutProps {
 
 /** The signed-in shell: a header with the mark and the user, a navbar that folds away on a phone. */
 export function AppLayout({ nav, userName, onSignOut, settingsHref, headerExtra, children }: AppLayoutProps) {
+  const t = useWords();
   const [opened, { toggle, close }] = useDisclosure();
   const { toggleColorScheme, colorScheme } = useMantineColorScheme();
   const location = useLocation();
@@ -29,19 +31,19 @@ export function AppLayout({ nav, userName, onSignOut, settingsHref, headerExtra,
   return (
     <>
       <a href="#main" className="skip-link">
-        Skip to content
+        {t('page.shell.skipToContent')}
       </a>
       <AppShell header={{ height: 56 }} navbar={{ width: 220, breakpoint: 'sm', collapsed: { mobile: !opened } }} padding="md">
         <AppShell.Header>
           <Group h="100%" px="md" justify="space-between" wrap="nowrap">
             <Group gap="sm" wrap="nowrap">
-              <Burger opened={opened} onClick={toggle} hiddenFrom="sm" size="sm" aria-label="Open navigation" />
+              <Burger opened={opened} onClick={toggle} hiddenFrom="sm" size="sm" aria-label={t('page.shell.openNavigation')} />
               <BroodsilkLogo />
             </Group>
             <Group gap="xs" wrap="nowrap">
               {headerExtra}
-              <Tooltip label={colorScheme === 'dark' ? 'Light scheme' : 'Dark scheme'}>
-                <ActionIcon variant="subtle" color="gray" onClick={toggleColorScheme} aria-label="Switch colour scheme">
+              <Tooltip label={colorScheme === 'dark' ? t('page.shell.lightScheme') : t('page.shell.darkScheme')}>
+                <ActionIcon variant="subtle" color="gray" onClick={toggleColorScheme} aria-label={t('page.shell.switchScheme')}>
                   {colorScheme === 'dark' ? '☀' : '☾'}
                 </ActionIcon>
               </Tooltip>
@@ -59,10 +61,10 @@ export function AppLayout({ nav, userName, onSignOut, settingsHref, headerExtra,
                 </Menu.Target>
                 <Menu.Dropdown>
                   <Menu.Item component={RouterNavLink} to={settingsHref}>
-                    Settings
+                    {t('page.shell.settings')}
                   </Menu.Item>
                   <Menu.Item color="clay" onClick={onSignOut}>
-                    Sign out
+                    {t('page.shell.signOut')}
                   </Menu.Item>
                 </Menu.Dropdown>
               </Menu>

@@ -3,10 +3,10 @@ import type { ReactNode } from 'react';
 import { DocumentTitle } from '../ui/document-title';
 import { BroodsilkMark } from '../ui/logo';
 
-/** Sign-in, registration and reset: one calm card. */
-export function PublicLayout({ title, subtitle, children }: { title: string; subtitle?: string; children: ReactNode }) {
+/** Sign-in, registration and reset: one calm card (wider where a page has more to read). */
+export function PublicLayout({ title, subtitle, size = 440, children }: { title: string; subtitle?: string; size?: number; children: ReactNode }) {
   return (
-    <Container size={440} py={48} component="main" id="main">
+    <Container size={size} py={48} component="main" id="main">
       <DocumentTitle title={title} />
       <Stack gap="lg">
         <Center>

@@ -1,5 +1,6 @@
 import { Alert, Button, Group, Modal, Stack } from '@mantine/core';
 import type { ReactNode } from 'react';
+import { useWords } from '@/lib/i18n';
 
 interface ConfirmActionProps {
   opened: boolean;
@@ -20,12 +21,13 @@ interface ConfirmActionProps {
 
 /** Asks once before an action that cannot be taken back; the confirm button is disabled while it runs. */
 export function ConfirmAction({ opened, onClose, title, children, warning, message, confirmLabel, pending, ready = true, onConfirm }: ConfirmActionProps) {
+  const t = useWords();
   return (
     <Modal opened={opened} onClose={onClose} title={title} centered>
       <Stack>
         {children}
         {warning && (
-          <Alert color="amber" variant="light" title="Check before you go on" data-testid="confirm-warning">
+          <Alert color="amber" variant="light" title={t('page.shell.checkBeforeGoingOn')} data-testid="confirm-warning">
             {warning}
           </Alert>
         )}
@@ -36,7 +38,7 @@ export function ConfirmAction({ opened, onClose, title, children, warning, messa
         )}
         <Group justify="flex-end">
           <Button variant="default" onClick={onClose} disabled={pending}>
-            Not now
+            {t('page.shell.notNow')}
           </Button>
           <Button onClick={onConfirm} loading={pending} disabled={pending || !ready}>
             {confirmLabel}

@@ -1,8 +1,10 @@
 import { Button, Container, Stack, Text, Title } from '@mantine/core';
 import { Link } from 'react-router';
 import { DocumentTitle } from './document-title';
+import { useWords } from '@/lib/i18n';
 
 export function ErrorPage({ title, message, status }: { title: string; message: string; status?: number }) {
+  const t = useWords();
   return (
     <Container size={560} py={64} component="main" id="main">
       <DocumentTitle title={title} />
@@ -15,7 +17,7 @@ export function ErrorPage({ title, message, status }: { title: string; message: 
         <Title order={1}>{title}</Title>
         <Text>{message}</Text>
         <Button component={Link} to="/" variant="light">
-          Back to today
+          {t('page.shell.backToToday')}
         </Button>
       </Stack>
     </Container>

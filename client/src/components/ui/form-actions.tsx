@@ -1,4 +1,5 @@
 import { Alert, Button, Group } from '@mantine/core';
+import { useWords } from '@/lib/i18n';
 
 interface FormActionsProps {
   /** The server's refusal, if any. */
@@ -11,7 +12,8 @@ interface FormActionsProps {
 }
 
 /** The end of every form: the server's refusal, if any, then cancel and submit. */
-export function FormActions({ message, loading, submitLabel, onCancel, cancelLabel = 'Cancel' }: FormActionsProps) {
+export function FormActions({ message, loading, submitLabel, onCancel, cancelLabel }: FormActionsProps) {
+  const t = useWords();
   return (
     <>
       {message && (
@@ -22,7 +24,7 @@ export function FormActions({ message, loading, submitLabel, onCancel, cancelLab
       <Group justify={onCancel ? 'flex-end' : undefined}>
         {onCancel && (
           <Button variant="default" onClick={onCancel} disabled={loading}>
-            {cancelLabel}
+            {cancelLabel ?? t('page.shell.cancel')}
           </Button>
         )}
         <Button type="submit" loading={loading} disabled={loading}>

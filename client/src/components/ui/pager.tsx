@@ -1,13 +1,13 @@
 import { Pagination, type PaginationProps } from '@mantine/core';
-
-const CONTROL_NAMES = { first: 'First page', previous: 'Previous page', next: 'Next page', last: 'Last page' } as const;
+import { useWords } from '@/lib/i18n';
 
 /** Pagination whose arrow buttons have names and whose current page says so to screen readers. */
 export function Pager(props: PaginationProps) {
+  const t = useWords();
   return (
     <Pagination
-      getControlProps={(control) => ({ 'aria-label': CONTROL_NAMES[control] })}
-      getItemProps={(page) => ({ 'aria-label': `Page ${page}`, 'aria-current': page === props.value ? 'page' : undefined })}
+      getControlProps={(control) => ({ 'aria-label': t(`page.shell.pager.${control}`) })}
+      getItemProps={(page) => ({ 'aria-label': t('page.shell.pager.page', { page }), 'aria-current': page === props.value ? 'page' : undefined })}
       {...props}
     />
   );

@@ -2,6 +2,7 @@ import { Alert, Button, Group, List, Stack, Textarea } from '@mantine/core';
 import { useState } from 'react';
 import { WARNINGS_FIELD, type PlausibilityWarning, type PlausibilityWarningCode } from '@broodsilk/shared';
 import { isApiError } from '@/lib/api-error';
+import { useWords } from '@/lib/i18n';
 
 /** The plausibility warnings of a 422 answer (empty for any other error). */
 export function warningsOf(error: unknown): PlausibilityWarning[] {
@@ -55,9 +56,10 @@ export function WarningConfirm({
   onConfirm: (reason: string) => void;
   onCancel: () => void;
 }) {
+  const t = useWords();
   const [reason, setReason] = useState('');
   return (
-    <Alert color="amber" title="Please check before saving" data-testid="warning-confirm">
+    <Alert color="amber" title={t('page.shell.warningConfirm.title')} data-testid="warning-confirm">
       <Stack gap="xs">
         <List size="sm">
           {warnings.map((w) => (
@@ -65,18 +67,18 @@ export function WarningConfirm({
           ))}
         </List>
         <Textarea
-          label="Why is it right?"
-          description="Kept with the record, so your partners see it too."
+          label={t('page.shell.warningConfirm.reason')}
+          description={t('page.shell.warningConfirm.reasonHint')}
           rows={2}
           value={reason}
           onChange={(e) => setReason(e.currentTarget.value)}
         />
         <Group>
           <Button color="amber" loading={loading} disabled={!reason.trim()} onClick={() => onConfirm(reason)}>
-            Save anyway
+            {t('page.shell.warningConfirm.saveAnyway')}
           </Button>
           <Button variant="default" onClick={onCancel}>
-            Change it
+            {t('page.shell.warningConfirm.changeIt')}
           </Button>
         </Group>
       </Stack>

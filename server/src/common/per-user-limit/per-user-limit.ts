@@ -7,6 +7,8 @@ export interface PerUserLimitOptions {
   what: string;
   limit: number;
   windowMinutes: number;
+  /** Count per network address instead of per keeper, for public routes (no one is signed in). */
+  perAddress?: boolean;
 }
 
 const LIMIT = Symbol('per-user-limit');
@@ -25,11 +27,12 @@ export class PerUserLimitGuard implements CanActivate {
 
   async canActivate(ctx: ExecutionContext): Promise<boolean> {
     const options = this.reflector.get<PerUserLimitOptions | undefined>(LIMIT, ctx.getHandler());
-    const userId = (ctx.switchToHttp().getRequest<{ user?: { id: string } }>().user ?? {}).id;
-    if (!options || !userId) return true;
+    const req = ctx.switchToHttp().getRequest<{ user?: { id: string }; ip?: string }>();
+    const key = options?.perAddress ? req.ip : req.user?.id;
+    if (!options || !key) return true;
     let refusal: RateLimiterRes;
     try {
-      await limiterFor(options).consume(userId);
+      await limiterFor(options).consume(key);
       return true;
     } catch (e) {
       if (!(e instanceof RateLimiterRes)) throw e;
@@ -37,7 +40,7 @@ export class PerUserLimitGuard implements CanActivate {
     }
     const minutes = Math.max(1, Math.ceil(refusal.msBeforeNext / 60_000));
     throw new HttpException(
-      `You have reached the limit of ${options.limit} ${options.what} per ${options.windowMinutes} minutes. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}.`,
+      `${options.perAddress ? 'This network address has' : 'You have'} reached the limit of ${options.limit} ${options.what} per ${options.windowMinutes} minutes. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}.`,
       HttpStatus.TOO_MANY_REQUESTS,
     );
   }
@@ -50,4 +53,9 @@ export class PerUserLimitGuard implements CanActivate {
  */
 export function PerUserLimit(options: PerUserLimitOptions): MethodDecorator {
   return applyDecorators(SetMetadata(LIMIT, options), UseGuards(PerUserLimitGuard));
+}
+
+/** At most `limit` calls of this public route per network address in a sliding window (a guessed link costs as much as a real one). */
+export function PerAddressLimit(options: Omit<PerUserLimitOptions, 'perAddress'>): MethodDecorator {
+  return PerUserLimit({ ...options, perAddress: true });
 }

@@ -2,18 +2,21 @@ import Handlebars from 'handlebars';
 
 /** One notice by e-mail (a reminder, a digest): its words, a link to what it is about, and how to stop it. */
 export interface NoticeMail {
+  /** The reader's language (BCP 47), for the HTML part; English unless said. */
+  lang?: string;
   title: string;
   /** Paragraphs of plain text. */
   paragraphs: string[];
   link: { url: string; label: string } | null;
   why: string;
-  unsubscribe: { url: string; label: string };
+  /** None for someone without an account (nothing to unsubscribe from: the `why` says whom to ask). */
+  unsubscribe: { url: string; label: string } | null;
 }
 
 // Handlebars escapes every {{value}} in the HTML part (a project title is the keeper's own text).
 const html = Handlebars.compile<NoticeMail>(
   `<!doctype html>
-<html lang="en">
+<html lang="{{lang}}">
 <head><meta charset="utf-8"><meta name="viewport" content="width=device-width"><title>{{title}}</title></head>
 <body style="margin:0;padding:24px;background:#f6f5f2;font-family:system-ui,-apple-system,'Segoe UI',sans-serif;color:#1f1d1a">
   <main style="max-width:560px;margin:0 auto;background:#ffffff;border-radius:8px;padding:24px">
@@ -22,7 +25,7 @@ const html = Handlebars.compile<NoticeMail>(
     {{#if link}}<p style="margin:20px 0"><a href="{{link.url}}" style="color:#5a3e9b">{{link.label}}</a></p>{{/if}}
     <hr style="border:none;border-top:1px solid #e3e0da;margin:24px 0 12px">
     <p style="font-size:13px;color:#57534e;margin:0 0 8px">{{why}}</p>
-    <p style="font-size:13px;margin:0"><a href="{{unsubscribe.url}}" style="color:#57534e">{{unsubscribe.label}}</a></p>
+    {{#if unsubscribe}}<p style="font-size:13px;margin:0"><a href="{{unsubscribe.url}}" style="color:#57534e">{{unsubscribe.label}}</a></p>{{/if}}
   </main>
 </body>
 </html>
@@ -40,13 +43,14 @@ const text = Handlebars.compile<NoticeMail>(
 
 {{/if}}--
 {{why}}
-{{unsubscribe.label}}: {{unsubscribe.url}}
-`,
+{{#if unsubscribe}}{{unsubscribe.label}}: {{unsubscribe.url}}
+{{/if}}`,
   { noEscape: true, strict: true },
 );
 
 export function renderNoticeMail(mail: NoticeMail): { html: string; text: string } {
-  return { html: html(mail), text: text(mail) };
+  const full = { ...mail, lang: mail.lang ?? 'en' };
+  return { html: html(full), text: text(full) };
 }
 
 /** RFC 8058 one-click unsubscribe: a List-Unsubscribe URL that takes a POST, and the header saying so. */

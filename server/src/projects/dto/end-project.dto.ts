@@ -10,4 +10,10 @@ export class EndProjectDto implements EndProjectRequest {
   @IsString({ message: 'The note must be text.' })
   @MaxLength(TEXT_LIMITS.note, { message: `The note can be at most ${TEXT_LIMITS.note} characters.` })
   note?: string | null;
+
+  /** Sent to the partners with the news. */
+  @IsOptional()
+  @IsString({ message: 'The message to the partners must be text.' })
+  @MaxLength(TEXT_LIMITS.partnerMessage, { message: `The message to the partners can be at most ${TEXT_LIMITS.partnerMessage} characters.` })
+  partnerMessage?: string;
 }

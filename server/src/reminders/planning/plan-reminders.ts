@@ -1,15 +1,6 @@
-import {
-  DEFAULT_REMINDER_CHANNEL,
-  ROLL_OVERDUE_FRACTION,
-  addDays,
-  nextRollDue,
-  pullWindowDates,
-  rollingApplies,
-  todayIn,
-  type NotificationKind,
-} from '@broodsilk/shared';
+import { DEFAULT_REMINDER_CHANNEL, ROLL_OVERDUE_FRACTION, addDays, nextRollDue, pullWindowDates, rollingApplies, todayIn } from '@broodsilk/shared';
 import { afterQuietHours, atLocalHour } from './local-time';
-import type { AnimalFacts, PlannedReminder, Recipient, SacFacts } from './reminder-plan.types';
+import type { AnimalFacts, PlannedReminder, Recipient, ReminderKind, SacFacts } from './reminder-plan.types';
 
 /** Reminders about a day (a window opening, a loan due back) go out at this local hour. */
 export const DAY_REMINDER_HOUR = 8;
@@ -23,7 +14,7 @@ export const STALE_AFTER_MS = 24 * 3_600_000;
 const HOUR_MS = 3_600_000;
 
 interface Fact {
-  kind: NotificationKind;
+  kind: ReminderKind;
   /** What makes it unique besides kind, subject and person (the due instant, the day, the reading). */
   id: string;
   at: Date;

@@ -61,11 +61,14 @@ export interface AnimalFacts {
   moltAfterPairing: { moltedOn: string; pairedOn: string } | null;
 }
 
+/** What the planner plans: every notification kind but partner updates (written from activity events). */
+export type ReminderKind = Exclude<NotificationKind, 'partner-update'>;
+
 /** One reminder for one person: the fact it tells, when it goes out, and how. */
 export interface PlannedReminder {
   /** Same reminder, same key: `reminder_sent` holds it once sent. */
   key: string;
-  kind: NotificationKind;
+  kind: ReminderKind;
   userId: string;
   subject: { type: 'sac' | 'animal'; id: string } | null;
   projectId: string | null;

@@ -24,6 +24,9 @@ export const SRC = {
   haukeHerzig2020: pub(
     'Hauke, T.J. & Herzig, V. 2020. Preprint doi:10.20944/preprints202012.0145.v1 (cramps most frequent after bites of Poecilotheriinae, Harpactirinae and Stromatopelminae)',
   ),
+  handwikiPsalmopoeus: pub(
+    'HandWiki, "Psalmopoeus irminia" (Psalmopoeus described as having stronger venom than other New World tarantulas; no medically significant case given)',
+  ),
   carrim2010: pub('Carrim, Z.I. et al. 2010. Case report, The Lancet (urticating hairs of Grammostola in the cornea)'),
   dorHenaut2012: pub(
     'Dor, A. & Hénaut, Y. 2012. Silk use and spiderling behavior in the tarantula Brachypelma vagans. Acta Zoológica Mexicana 28(1) (200 young per sac, n = 2)',
@@ -31,6 +34,7 @@ export const SRC = {
   brachypelmaSmithiDe: pub('brachypelma-smithi.de, "Vermehrung: Entwicklung und Aufzucht" (B. smithi up to 600 eggs; genus Brachypelma 100–600)'),
   tarantulaspiderNet: pub('tarantulaspider.net, "How to Take Care of Tarantula Eggs" (Theraphosa under 100; Citharischius more than 1000 eggs)'),
   theraphosaClutch: pub('thezooreviewer.blogspot.com (2024), Theraphosa blondi: 50–200 eggs per sac'),
+  theraphosaTiming: pub('Wikipedia, "Goliath birdeater" (mirror); thezooreviewer.blogspot.com (2024): Theraphosa blondi spiderlings 6–8 weeks after laying'),
   lasiodoraZoo: pub('Zoo species page, Brazilian salmon pink bird-eating tarantula (app-czn-prod-uks-frontend.azurewebsites.net): up to 2000 eggs'),
   arachnoworld: pub(
     'arachnoworld.de, "Vom Schlüpfen bis zum Tod" (about 200 eggs in Grammostola mollicoma and Lasiodora klugi, about 800 in Pamphobeteus and Acanthoscurria)',

@@ -15,7 +15,7 @@ function sourcedValues(r: SpeciesDataRow): [string, Sourced<unknown> | { source:
   const out: [string, Sourced<unknown> | { source: ValueSource }][] = [
     ['name', { source: r.nameSource }],
     ['urticatingHairs', r.urticatingHairs],
-    ['venom', r.medicallySignificantVenom],
+    ['venom', r.venom],
     ['tradeListing', r.tradeListing],
   ];
   if (r.pullWindow) out.push(['pullWindow', r.pullWindow]);
@@ -138,15 +138,23 @@ describe('species dataset', () => {
     });
     it('venom cautions: Poecilotheria (Fuchs et al. 2014), Pterinochilus and Lampropelma (Ahmed, Pinkham & Warrell 2009)', () => {
       for (const r of SPECIES_DATA.filter((x) => x.scientificName.startsWith('Poecilotheria '))) {
-        expect(r.medicallySignificantVenom.value, r.key).toBe(true);
-        expect(citation(r.medicallySignificantVenom.source)).toMatch(/Fuchs/);
+        expect(r.venom.value, r.key).toBe('medically-significant');
+        expect(citation(r.venom.source)).toMatch(/Fuchs/);
       }
       for (const name of ['Pterinochilus murinus', 'Lampropelma nigerrimum']) {
-        expect(row(name).medicallySignificantVenom.value).toBe(true);
-        expect(citation(row(name).medicallySignificantVenom.source)).toMatch(/Ahmed, N\., Pinkham, M\. & Warrell/);
+        expect(row(name).venom.value).toBe('medically-significant');
+        expect(citation(row(name).venom.source)).toMatch(/Ahmed, N\., Pinkham, M\. & Warrell/);
       }
-      // New World species carry no venom caution in this dataset
-      expect(SPECIES_DATA.filter((r) => r.group.startsWith('nw') && r.medicallySignificantVenom.value)).toEqual([]);
+      // New World species carry no medically significant venom in this dataset
+      expect(SPECIES_DATA.filter((r) => r.group.startsWith('nw') && r.venom.value === 'medically-significant')).toEqual([]);
+    });
+    it('venom is three-valued: an Old World species without a published bite is "not known", never "no cases known" (Ahmed et al. 2009; Hauke & Herzig 2020)', () => {
+      for (const r of SPECIES_DATA.filter((x) => x.group.startsWith('ow'))) expect(r.venom.value, r.key).not.toBe('no-cases-known');
+      expect(row('Monocentropus balfouri').venom.value).toBe('not-known');
+      expect(row('Chilobrachys fimbriatus').venom.value).toBe('not-known');
+      // Old World burrowers too; Psalmopoeus is said to have a stronger venom (HandWiki), so not known either
+      for (const name of ['Pelinobius muticus', 'Cyriopagopus lividus', 'Psalmopoeus irminia']) expect(row(name).venom.value, name).toBe('not-known');
+      expect(row('Tliltocatl vagans').venom.value).toBe('no-cases-known');
     });
     it('CITES Appendix II for Brachypelma and Tliltocatl (Mendoza & Francke 2020; CEC 2019) and Poecilotheria (CoP18, memory)', () => {
       for (const r of SPECIES_DATA.filter((x) => /^(Brachypelma|Tliltocatl|Poecilotheria) /.test(x.scientificName))) {

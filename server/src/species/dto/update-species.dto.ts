@@ -1,5 +1,5 @@
 import { ArrayMaxSize, IsArray, IsBoolean, IsIn, IsInt, IsNotEmpty, IsOptional, IsString, Max, MaxLength, Min, ValidateIf } from 'class-validator';
-import { SPECIES_GROUPS, type SpeciesGroup, type UpdateSpeciesRequest, type ValueSource } from '@broodsilk/shared';
+import { SPECIES_GROUPS, VENOM_FLAGS, type SpeciesGroup, type UpdateSpeciesRequest, type ValueSource, type VenomFlag } from '@broodsilk/shared';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 
 const SOURCE_KINDS: ValueSource['kind'][] = ['published', 'common-practice', 'memory'];
@@ -39,8 +39,8 @@ export class UpdateSpeciesDto implements UpdateSpeciesRequest {
   urticatingHairs?: boolean;
 
   @IsOptionalNonNull()
-  @IsBoolean()
-  medicallySignificantVenom?: boolean;
+  @IsIn(VENOM_FLAGS, { message: `venom must be one of ${VENOM_FLAGS.join(', ')}.` })
+  venom?: VenomFlag;
 
   @IsOptional()
   @ValidateIf((_, v) => v !== null)

@@ -10,6 +10,8 @@ import { projectsEn, projectsDe } from './projects.js';
 import { accountEn, accountDe } from './account.js';
 import { collectionEn, collectionDe } from './collection.js';
 import { speciesEn, speciesDe } from './species.js';
+import { progressEn, progressDe } from './progress.js';
+import { failureNoticeEn, failureNoticeDe } from './failureNotice.js';
 
 /** Text of the pages, one section per area of the client; each area keeps English and German side by side. */
 export const pagesEn = {
@@ -25,6 +27,8 @@ export const pagesEn = {
   account: accountEn,
   collection: collectionEn,
   species: speciesEn,
+  progress: progressEn,
+  failureNotice: failureNoticeEn,
 } as const;
 
 export const pagesDe = {
@@ -40,4 +44,6 @@ export const pagesDe = {
   account: accountDe,
   collection: collectionDe,
   species: speciesDe,
+  progress: progressDe,
+  failureNotice: failureNoticeDe,
 };

@@ -1,10 +1,13 @@
-import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
-import type { ConfirmEntryRequest, CreateEntryRequest, HandOverFormResponse, LedgerEntryResponse } from '@broodsilk/shared';
+import { infiniteQueryOptions, queryOptions, useInfiniteQuery, useMutation, useQuery } from '@tanstack/react-query';
+import type { ConfirmEntryRequest, CreateEntryRequest, HandOverFormResponse, KeysetPage, LedgerEntryResponse } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
 import { accountKeys } from './keys';
 
-export function fetchEntries(projectId: string, signal?: AbortSignal): Promise<LedgerEntryResponse[]> {
-  return api.get<LedgerEntryResponse[]>(`/projects/${projectId}/entries`, { signal });
+/** Entries per page of the ledger (in ledger order); later ones come with "Show later entries". */
+export const ENTRIES_PAGE = 200;
+
+export function fetchEntries(projectId: string, after: string | null, signal?: AbortSignal): Promise<KeysetPage<LedgerEntryResponse>> {
+  return api.get<KeysetPage<LedgerEntryResponse>>(`/projects/${projectId}/entries`, { signal, query: { limit: ENTRIES_PAGE, after } });
 }
 
 export function fetchHandOverForm(projectId: string, signal?: AbortSignal): Promise<HandOverFormResponse> {
@@ -13,9 +16,11 @@ export function fetchHandOverForm(projectId: string, signal?: AbortSignal): Prom
 
 export const entriesQueries = {
   list: (projectId: string) =>
-    queryOptions({
+    infiniteQueryOptions({
       queryKey: accountKeys.entries(projectId),
-      queryFn: ({ signal }) => fetchEntries(projectId, signal),
+      queryFn: ({ signal, pageParam }) => fetchEntries(projectId, pageParam, signal),
+      initialPageParam: null as string | null,
+      getNextPageParam: (last) => last.nextCursor,
     }),
   handOverForm: (projectId: string) =>
     queryOptions({
@@ -24,8 +29,9 @@ export const entriesQueries = {
     }),
 };
 
+/** The ledger page by page (keyset); `entries` is every page loaded so far, in ledger order. */
 export function useEntries(projectId: string) {
-  return useQuery(entriesQueries.list(projectId));
+  return useInfiniteQuery({ ...entriesQueries.list(projectId), select: (data) => data.pages.flatMap((p) => p.items) });
 }
 
 export function useHandOverForm(projectId: string) {

@@ -28,7 +28,7 @@ function stubAccount() {
     'GET /api/auth/csrf': () => ({ status: 200, body: { csrfToken: 't' } }),
     [`GET ${base}/shares`]: () => ({ status: 200, body: shares() }),
     [`GET ${base}/balances`]: () => ({ status: 200, body: balances() }),
-    [`GET ${base}/entries`]: () => ({ status: 200, body: [HAND_OVER] }),
+    [`GET ${base}/entries`]: () => ({ status: 200, body: { items: [HAND_OVER], nextCursor: null } }),
     [`POST ${base}/entries/${HAND_OVER.id}/confirm`]: () => ({ status: 201, body: { ...HAND_OVER, status: 'in-force', awaitingConfirmationBy: null } }),
     'GET /api/settlements/payout-account': () => ({
       status: 200,

@@ -11,6 +11,7 @@ import { useCreateEntry, useEntries } from '../api/entries';
 import { applyEntryErrors } from '../utils/entry-errors';
 import { ENTRY_KIND_LABELS } from '../utils/labels';
 import { formatDate } from '@/lib/dates';
+import { useWords } from '@/lib/i18n';
 
 interface Values {
   reversesId: string;
@@ -21,6 +22,7 @@ interface Values {
 /** Nothing is deleted: a correction reverses one earlier entry and says why. */
 export function CorrectionForm({ projectId, today, onDone }: { projectId: string; today: string; onDone?: () => void }) {
   const entries = useEntries(projectId);
+  const t = useWords();
   const create = useCreateEntry(projectId);
   const [message, setMessage] = useState<string | null>(null);
   const form = useForm<Values>({
@@ -59,6 +61,7 @@ export function CorrectionForm({ projectId, today, onDone }: { projectId: string
           withAsterisk
           key={form.key('reversesId')}
           {...form.getInputProps('reversesId')}
+          description={entries.hasNextPage ? t('page.account.entriesNotAllShown') : undefined}
         />
         <TextAreaField label="Why" maxLength={TEXT_LIMITS.correctionReason} withAsterisk key={form.key('reason')} {...form.getInputProps('reason')} />
         <DateField label="Date" key={form.key('date')} {...form.getInputProps('date')} />

@@ -22,7 +22,10 @@ describe('EntriesTable', () => {
       status: 'in-force',
       awaitingConfirmationBy: null,
     });
-    vi.stubGlobal('fetch', stubFetch({ [`GET /api/projects/${PROJECT_ID}/entries`]: () => ({ status: 200, body: [handOver, correction] }) }).fetchStub);
+    vi.stubGlobal(
+      'fetch',
+      stubFetch({ [`GET /api/projects/${PROJECT_ID}/entries`]: () => ({ status: 200, body: { items: [handOver, correction], nextCursor: null } }) }).fetchStub,
+    );
     renderWithProviders(<EntriesTable projectId={PROJECT_ID} />);
     const table = await screen.findByRole('table', { name: 'Account entries' });
     const [first, second] = within(table).getAllByRole('row').slice(1);

@@ -2,6 +2,8 @@ import { Alert, Anchor, Card, Group, Stack, Table, Text } from '@mantine/core';
 import type { ReactNode } from 'react';
 import { formatMoney, type LedgerEntryResponse } from '@broodsilk/shared';
 import { formatDate } from '@/lib/dates';
+import { ShowMore } from '@/components/ui/show-more';
+import { useWords } from '@/lib/i18n';
 import { useEntries } from '../api/entries';
 import { ENTRY_KIND_LABELS, METHOD_LABELS, STATUS_LABELS, young } from '../utils/labels';
 
@@ -79,6 +81,7 @@ function EntryState({ e, reverser }: { e: LedgerEntryResponse; reverser?: Ledger
 /** The ledger as recorded: nothing here is editable; a correction is a new entry that reverses an old one. */
 export function EntriesTable({ projectId }: { projectId: string }) {
   const entries = useEntries(projectId);
+  const t = useWords();
   if (entries.isPending) return <Text c="dimmed">Loading entries…</Text>;
   if (entries.isError) return <Alert color="clay">{entries.error.message}</Alert>;
   const list = entries.data;
@@ -150,6 +153,12 @@ export function EntriesTable({ projectId }: { projectId: string }) {
           </Table.Tbody>
         </Table>
       </Table.ScrollContainer>
+      <ShowMore
+        label={t('page.account.entriesLater')}
+        hasMore={entries.hasNextPage}
+        loading={entries.isFetchingNextPage}
+        onMore={() => void entries.fetchNextPage()}
+      />
     </>
   );
 }

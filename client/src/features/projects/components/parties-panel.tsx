@@ -11,6 +11,7 @@ import { useAddProjectMember } from '../api/projects';
 import { useSendInvitation } from '../api/invitations';
 import { ROLE_LABELS } from '../utils/labels';
 import { FormActions } from '@/components/ui/form-actions';
+import { ProgressLinkActions } from './progress-link-actions';
 
 interface PartiesPanelProps {
   projectId: string;
@@ -65,35 +66,38 @@ export function PartiesPanel({ projectId, members, myRole, timeZone }: PartiesPa
                   <Table.Td visibleFrom="sm">{ROLE_LABELS[m.role]}</Table.Td>
                   {isOwner && (
                     <Table.Td>
-                      {m.role === 'owner' ? (
-                        <Text size="xs" c="dimmed">
-                          you
-                        </Text>
-                      ) : m.hasAccount ? (
-                        <Badge variant="light" color="moss" tt="none">
-                          joined
-                        </Badge>
-                      ) : m.email ? (
-                        <Group gap={6} wrap="nowrap">
-                          {invitation && (
-                            <Text size="xs" className="tone-due">
-                              sent, valid until {formatInstant(invitation.expiresAt, timeZone)}
-                            </Text>
-                          )}
-                          <Button
-                            size="compact-xs"
-                            variant={invitation ? 'subtle' : 'light'}
-                            loading={send.isPending && send.variables?.memberId === m.id}
-                            onClick={() => invite(m)}
-                          >
-                            {invitation ? 'Send again' : 'Send invitation'}
-                          </Button>
-                        </Group>
-                      ) : (
-                        <Text size="xs" c="dimmed">
-                          no e-mail, kept on record only
-                        </Text>
-                      )}
+                      <Stack gap={6}>
+                        {m.role === 'owner' ? (
+                          <Text size="xs" c="dimmed">
+                            you
+                          </Text>
+                        ) : m.hasAccount ? (
+                          <Badge variant="light" color="moss" tt="none">
+                            joined
+                          </Badge>
+                        ) : m.email ? (
+                          <Group gap={6} wrap="nowrap">
+                            {invitation && (
+                              <Text size="xs" className="tone-due">
+                                sent, valid until {formatInstant(invitation.expiresAt, timeZone)}
+                              </Text>
+                            )}
+                            <Button
+                              size="compact-xs"
+                              variant={invitation ? 'subtle' : 'light'}
+                              loading={send.isPending && send.variables?.memberId === m.id}
+                              onClick={() => invite(m)}
+                            >
+                              {invitation ? 'Send again' : 'Send invitation'}
+                            </Button>
+                          </Group>
+                        ) : (
+                          <Text size="xs" c="dimmed">
+                            no e-mail, kept on record only
+                          </Text>
+                        )}
+                        {m.role !== 'owner' && !m.hasAccount && <ProgressLinkActions projectId={projectId} member={m} />}
+                      </Stack>
                     </Table.Td>
                   )}
                 </Table.Tr>

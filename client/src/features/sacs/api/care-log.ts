@@ -1,10 +1,13 @@
-import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
-import type { CareLogEntryResponse, CareLogRequest } from '@broodsilk/shared';
+import { infiniteQueryOptions, useInfiniteQuery, useMutation } from '@tanstack/react-query';
+import type { CareLogEntryResponse, CareLogRequest, KeysetPage } from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
 import { AFTER_SAC_CHANGE, sacQueries } from './sacs';
 
-export function fetchCareLog(sacId: string, signal?: AbortSignal): Promise<CareLogEntryResponse[]> {
-  return api.get<CareLogEntryResponse[]>(`/sacs/${sacId}/log`, { signal });
+/** Entries per page of the care log (newest first); older ones come with "Show older entries". */
+export const CARE_LOG_PAGE = 50;
+
+export function fetchCareLog(sacId: string, after: string | null, signal?: AbortSignal): Promise<KeysetPage<CareLogEntryResponse>> {
+  return api.get<KeysetPage<CareLogEntryResponse>>(`/sacs/${sacId}/log`, { signal, query: { limit: CARE_LOG_PAGE, after } });
 }
 
 export function addCareLogEntry(sacId: string, body: CareLogRequest): Promise<CareLogEntryResponse> {
@@ -14,14 +17,17 @@ export function addCareLogEntry(sacId: string, body: CareLogRequest): Promise<Ca
 /** ['sacs','log',sacId] */
 export const careLogQueries = {
   list: (sacId: string) =>
-    queryOptions({
+    infiniteQueryOptions({
       queryKey: [...sacQueries.all(), 'log', sacId] as const,
-      queryFn: ({ signal }) => fetchCareLog(sacId, signal),
+      queryFn: ({ signal, pageParam }) => fetchCareLog(sacId, pageParam, signal),
+      initialPageParam: null as string | null,
+      getNextPageParam: (last) => last.nextCursor,
     }),
 };
 
+/** The care log page by page (keyset); `fetchNextPage` adds the next older page. */
 export function useCareLog(sacId: string) {
-  return useQuery(careLogQueries.list(sacId));
+  return useInfiniteQuery(careLogQueries.list(sacId));
 }
 
 /** Any log entry: a roll moves the next roll due, a stage entry may stop rolling, so the sac is refetched too. */

@@ -2,13 +2,14 @@ import { Alert, Badge, Button, Group, Popover, Stack, Table, Text } from '@manti
 import { TextField } from '@/components/fields/text-field';
 import { checkText } from '@/components/fields/text-rule';
 import { ScrollTable } from '@/components/ui/scroll-table';
+import { ShowMore } from '@/components/ui/show-more';
 import { useState } from 'react';
 import { TEXT_LIMITS, formatTemperature, type CareLogEntryResponse, type TemperatureUnit } from '@broodsilk/shared';
 import { formatInstant } from '@/lib/dates';
 import { isApiError } from '@/lib/api-error';
 import { useAddCareLogEntry, useCareLog } from '../api/care-log';
 import { bandFlag, broodLabel } from '../utils/sac-view';
-import { catalogueLabels } from '@/lib/i18n';
+import { catalogueLabels, useWords } from '@/lib/i18n';
 
 const KIND_LABELS = catalogueLabels('careLogKind');
 
@@ -90,57 +91,62 @@ export function CareLogList({
   canStrike: boolean;
 }) {
   const log = useCareLog(sacId);
+  const t = useWords();
   if (log.isPending) return <Text c="dimmed">Loading the care log…</Text>;
   if (log.isError) return <Alert color="clay">{log.error.message}</Alert>;
-  if (log.data.length === 0) return <Text c="dimmed">No entries yet.</Text>;
-  const entries = [...log.data].sort((a, b) => (a.at < b.at ? 1 : -1));
+  // Pages come newest first, each older than the one before (keyset on the server).
+  const entries = log.data.pages.flatMap((p) => p.items);
+  if (entries.length === 0) return <Text c="dimmed">No entries yet.</Text>;
   return (
-    <ScrollTable minWidth={360} label="Care log">
-      <Table verticalSpacing={4} fz="sm" data-testid="care-log">
-        <Table.Thead>
-          <Table.Tr>
-            <Table.Th>When</Table.Th>
-            <Table.Th>Entry</Table.Th>
-            <Table.Th visibleFrom="sm">By</Table.Th>
-            <Table.Th />
-          </Table.Tr>
-        </Table.Thead>
-        <Table.Tbody>
-          {entries.map((e) => {
-            const struck = !!e.struck;
-            return (
-              <Table.Tr key={e.id} data-struck={struck || undefined}>
-                <Table.Td style={{ textDecoration: struck ? 'line-through' : undefined }}>{formatInstant(e.at, timeZone)}</Table.Td>
-                <Table.Td>
-                  <Group gap={6} wrap="nowrap">
-                    <Badge size="sm" variant="light" tt="none" color={e.kind === 'strike' ? 'clay' : e.kind === 'roll' ? 'moss' : 'gray'}>
-                      {KIND_LABELS[e.kind]}
-                    </Badge>
-                    <Text size="sm" td={struck ? 'line-through' : undefined} c={struck ? 'dimmed' : undefined}>
-                      {what(e, temperatureUnit)}
-                    </Text>
-                    {bandFlag(e.outsideBand) && (
-                      <Badge size="sm" variant="light" color="clay" tt="none" data-testid="outside-band">
-                        {bandFlag(e.outsideBand)}
+    <>
+      <ScrollTable minWidth={360} label="Care log">
+        <Table verticalSpacing={4} fz="sm" data-testid="care-log">
+          <Table.Thead>
+            <Table.Tr>
+              <Table.Th>When</Table.Th>
+              <Table.Th>Entry</Table.Th>
+              <Table.Th visibleFrom="sm">By</Table.Th>
+              <Table.Th />
+            </Table.Tr>
+          </Table.Thead>
+          <Table.Tbody>
+            {entries.map((e) => {
+              const struck = !!e.struck;
+              return (
+                <Table.Tr key={e.id} data-struck={struck || undefined}>
+                  <Table.Td style={{ textDecoration: struck ? 'line-through' : undefined }}>{formatInstant(e.at, timeZone)}</Table.Td>
+                  <Table.Td>
+                    <Group gap={6} wrap="nowrap">
+                      <Badge size="sm" variant="light" tt="none" color={e.kind === 'strike' ? 'clay' : e.kind === 'roll' ? 'moss' : 'gray'}>
+                        {KIND_LABELS[e.kind]}
                       </Badge>
+                      <Text size="sm" td={struck ? 'line-through' : undefined} c={struck ? 'dimmed' : undefined}>
+                        {what(e, temperatureUnit)}
+                      </Text>
+                      {bandFlag(e.outsideBand) && (
+                        <Badge size="sm" variant="light" color="clay" tt="none" data-testid="outside-band">
+                          {bandFlag(e.outsideBand)}
+                        </Badge>
+                      )}
+                    </Group>
+                    {e.struck && (
+                      <Text size="xs" className="tone-failed">
+                        struck{e.struck.reason ? `: ${e.struck.reason}` : ''}
+                      </Text>
                     )}
-                  </Group>
-                  {e.struck && (
-                    <Text size="xs" className="tone-failed">
-                      struck{e.struck.reason ? `: ${e.struck.reason}` : ''}
+                    <Text size="xs" c="dimmed" hiddenFrom="sm">
+                      {e.author?.name}
                     </Text>
-                  )}
-                  <Text size="xs" c="dimmed" hiddenFrom="sm">
-                    {e.author?.name}
-                  </Text>
-                </Table.Td>
-                <Table.Td visibleFrom="sm">{e.author?.name ?? '—'}</Table.Td>
-                <Table.Td>{canStrike && !struck && e.kind !== 'strike' && <StrikeButton sacId={sacId} entry={e} />}</Table.Td>
-              </Table.Tr>
-            );
-          })}
-        </Table.Tbody>
-      </Table>
-    </ScrollTable>
+                  </Table.Td>
+                  <Table.Td visibleFrom="sm">{e.author?.name ?? '—'}</Table.Td>
+                  <Table.Td>{canStrike && !struck && e.kind !== 'strike' && <StrikeButton sacId={sacId} entry={e} />}</Table.Td>
+                </Table.Tr>
+              );
+            })}
+          </Table.Tbody>
+        </Table>
+      </ScrollTable>
+      <ShowMore label={t('page.sacs.careLogOlder')} hasMore={log.hasNextPage} loading={log.isFetchingNextPage} onMore={() => void log.fetchNextPage()} />
+    </>
   );
 }

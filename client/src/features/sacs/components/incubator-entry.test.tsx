@@ -1,7 +1,8 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { addDays, todayIn } from '@broodsilk/shared';
+import { addDays, todayIn, type CareLogKind } from '@broodsilk/shared';
+import { testCareLogEntry } from '@/testing/care-log-entry';
 import { PULLED_TEST_SAC } from '@/testing/sac-incubation-fields';
 import { renderWithProviders, stubFetch } from '@/testing/render';
 import { IncubatorEntry } from './incubator-entry';
@@ -10,22 +11,7 @@ afterEach(() => vi.unstubAllGlobals());
 
 const sac = PULLED_TEST_SAC;
 
-const entry = (kind: string) => ({
-  id: 'e1',
-  sacId: 's1',
-  kind,
-  at: '2026-12-01T09:30:00Z',
-  author: { id: 'u', name: 'Ines' },
-  temperatureC: null,
-  entered: null,
-  humidityPercent: null,
-  outsideBand: null,
-  stage: null,
-  text: null,
-  strikes: null,
-  struck: null,
-  createdAt: '2026-12-01T09:30:00Z',
-});
+const entry = (kind: CareLogKind) => testCareLogEntry({ id: 'e1', kind, at: '2026-12-01T09:30:00Z' });
 
 // A loaded machine renders these slowly; nothing here is timed.
 describe('IncubatorEntry', { timeout: 30_000 }, () => {

@@ -3,14 +3,14 @@ import type { UseFormReturnType } from '@mantine/form';
 import { TEXT_LIMITS } from '@broodsilk/shared';
 import { NumberField } from '@/components/fields/number-field';
 import { TextAreaField } from '@/components/fields/text-field';
-import { COUNT_FIELDS, type OpeningValues } from '../utils/opening-values';
+import { countFields, type OpeningValues } from '../utils/opening-values';
 
 /** The opening's counts, the estimate switch and the notes: the same fields for a first opening and a correction. */
 export function OpeningCountFields({ form }: { form: UseFormReturnType<OpeningValues> }) {
   return (
     <>
       <SimpleGrid cols={{ base: 2, sm: 3 }}>
-        {COUNT_FIELDS.map(([k, label]) => (
+        {countFields().map(([k, label]) => (
           <NumberField key={form.key(k)} label={label} whole {...form.getInputProps(k)} />
         ))}
       </SimpleGrid>

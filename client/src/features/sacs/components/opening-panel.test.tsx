@@ -44,7 +44,7 @@ describe('OpeningPanel', { timeout: 30_000 }, () => {
     const { fetchStub, calls } = stubFetch({ 'GET /api/sacs/s1/opening': () => ({ status: 200, body: null }) });
     vi.stubGlobal('fetch', fetchStub);
     renderWithProviders(<OpeningPanel sac={{ id: 's1', opened: false }} timeZone="UTC" canEdit />);
-    const nymphs = await screen.findByLabelText('Nymphs');
+    const nymphs = await screen.findByLabelText('1st instar');
     await userEvent.clear(nymphs);
     await userEvent.type(nymphs, '-4');
     await userEvent.click(screen.getByRole('button', { name: 'Save opening' }));
@@ -57,7 +57,7 @@ describe('OpeningPanel', { timeout: 30_000 }, () => {
   // docs/trade-facts.md check value 8: outside the species' eggs per sac is a warning, never a refusal.
   it('sends an estimate, and on the species-range warning saves it with the reason given', async () => {
     let posts = 0;
-    const warning = 'About 2400 eggs and nymphs is more than this species usually lays (100–300 a sac). Check the count, or save it with a reason.';
+    const warning = 'About 2400 eggs and young is more than this species usually lays (100–300 a sac). Check the count, or save it with a reason.';
     const { fetchStub, calls } = stubFetch({
       'GET /api/auth/csrf': () => ({ status: 200, body: { csrfToken: 't' } }),
       'GET /api/sacs/s1/opening': () => ({ status: 200, body: null }),

@@ -13,7 +13,7 @@ import { isApiError } from '@/lib/api-error';
 import { useOpening, useRecordOpening, useUploadOpeningPhoto } from '../api/opening';
 import { FormActions } from '@/components/ui/form-actions';
 import { SafetyNote } from '@/components/ui/safety-note';
-import { COUNT_FIELDS, openingRules, openingValues, toOpeningCounts, type OpeningValues } from '../utils/opening-values';
+import { countFields, openingRules, openingValues, toOpeningCounts, type OpeningValues } from '../utils/opening-values';
 import { OpeningCountFields } from './opening-count-fields';
 import { OpeningCorrection } from './opening-correction';
 
@@ -38,7 +38,7 @@ function OpeningCounts({ opening, timeZone, struck }: { opening: OpeningVersion;
       {opening.warningReason && <Text size="sm">Unusual count, saved because: {opening.warningReason}</Text>}
       <Table verticalSpacing={2} fz="sm" maw={420} aria-label={struck ? 'Struck opening counts' : 'Opening counts'}>
         <Table.Tbody>
-          {COUNT_FIELDS.map(([k, label]) => (
+          {countFields().map(([k, label]) => (
             <Table.Tr key={k}>
               <Table.Td>{label}</Table.Td>
               <Table.Td ta="right" fw={600}>

@@ -1,13 +1,14 @@
-import { Alert, Badge, Button, Card, Group, Select, SimpleGrid, Switch, Text } from '@mantine/core';
+import { Alert, Badge, Button, Card, Group, SimpleGrid, Switch, Text } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
 import { useState } from 'react';
-import { SAC_FAILURE_REASONS, type SacFailureReason, type SacResponse, type TemperatureUnit } from '@broodsilk/shared';
+import { valueSourceLabel, type SacResponse, type TemperatureUnit } from '@broodsilk/shared';
 import { formatDate, formatInstant } from '@/lib/dates';
 import { isApiError } from '@/lib/api-error';
 import { usePullSac, useUpdateSac } from '../api/sacs';
 import { PullConfirmation } from './pull-confirmation';
+import { FailureForm } from './failure-form';
 import { broodLabel, PULL_WINDOW_TEXT, pullWindowSentence, readingAlertText, ROLL_TEXT, SAC_OUTCOME_TEXT } from '../utils/sac-view';
-import { catalogueLabels } from '@/lib/i18n';
+import { catalogueLabels, useWords } from '@/lib/i18n';
 
 const FAILURE_LABELS = catalogueLabels('sacFailure');
 
@@ -24,12 +25,12 @@ function noRollText(sac: SacResponse): string {
  * the viewer may take (`sac.may`, the server's own rule): the pull, leaving the sac with the mother, the outcome.
  */
 export function SacOverview({ sac, timeZone, temperatureUnit }: { sac: SacResponse; timeZone: string; temperatureUnit: TemperatureUnit }) {
+  const t = useWords();
   const canEdit = sac.may.edit;
   const update = useUpdateSac(sac.id);
   const pull = usePullSac(sac.id);
   const [pulling, pullDialog] = useDisclosure(false);
   const [error, setError] = useState<string | null>(null);
-  const [failure, setFailure] = useState<string | null>(null);
   const w = sac.pullWindow;
   const windowText = PULL_WINDOW_TEXT[w.state];
 
@@ -67,10 +68,15 @@ export function SacOverview({ sac, timeZone, temperatureUnit }: { sac: SacRespon
           <Text size="xs" c="dimmed" tt="uppercase" fw={600}>
             Pull window
           </Text>
-          <Text size="xs" c="dimmed">
-            day {w.fromDay}–{w.toDay} ({w.origin === 'sac' ? 'set for this sac' : w.origin === 'species' ? 'species' : 'usual'})
+          <Text size="xs" c="dimmed" data-testid="pull-window-origin">
+            {t('pullWindowFrom', { from: w.fromDay, to: w.toDay, origin: t(`pullWindowOrigin.${w.origin}`) })}
           </Text>
         </Group>
+        {w.source && (
+          <Text size="xs" c="dimmed" fs="italic" data-testid="pull-window-source">
+            {t('valueSource', { source: valueSourceLabel(t, w.source) })}
+          </Text>
+        )}
         {!sac.pulled &&
           (sac.leftWithMother ? (
             <Text fw={700} data-testid="pull-window-state">
@@ -150,25 +156,9 @@ export function SacOverview({ sac, timeZone, temperatureUnit }: { sac: SacRespon
           <Button variant="light" loading={update.isPending} onClick={() => change({ outcome: 'emerged' })}>
             The young have emerged
           </Button>
-          <Select
-            label="The sac failed"
-            placeholder="Reason"
-            data={SAC_FAILURE_REASONS.map((r) => ({ value: r, label: FAILURE_LABELS[r] }))}
-            value={failure}
-            onChange={setFailure}
-            w={220}
-          />
-          <Button
-            variant="light"
-            color="clay"
-            disabled={!failure}
-            loading={update.isPending}
-            onClick={() => change({ outcome: 'failed', failureReason: failure as SacFailureReason })}
-          >
-            Record as failed
-          </Button>
         </Group>
       )}
+      {canEdit && sac.outcome === 'in-progress' && <FailureForm sacId={sac.id} />}
       {error && (
         <Alert color="clay" role="alert" style={{ gridColumn: '1 / -1' }}>
           {error}

@@ -6,6 +6,7 @@ import { FormActions } from '@/components/ui/form-actions';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useConfirmEnrolment } from '../api/second-factor';
 import { CodeAndPasswordFields, codeAndPasswordRules, type CodeAndPassword } from './second-factor-fields';
+import { useWords } from '@/lib/i18n';
 
 /** The new secret as a QR code and as text (shown this once), then the first code and the password to turn it on. */
 export function EnrolSecondFactor({
@@ -17,13 +18,14 @@ export function EnrolSecondFactor({
   onEnrolled: (codes: string[]) => void;
   onCancel: () => void;
 }) {
+  const t = useWords();
   const confirm = useConfirmEnrolment();
   const [problem, setProblem] = useState<string | null>(null);
   const form = useForm<CodeAndPassword>({
     mode: 'uncontrolled',
     validateInputOnBlur: true,
     initialValues: { code: '', password: '' },
-    validate: codeAndPasswordRules('Enter the six digits your app shows.'),
+    validate: codeAndPasswordRules(t, t('page.settings.secondFactor.enterSixDigits')),
   });
   return (
     <form
@@ -33,13 +35,13 @@ export function EnrolSecondFactor({
       })}
     >
       <Stack maw={480}>
-        <Text>Scan this code with an authenticator app on your phone, or type the key below into it.</Text>
-        <Image src={enrolment.qrCode} alt="QR code holding the key for your authenticator app" w={200} h={200} bg="white" />
+        <Text>{t('page.settings.secondFactor.scan')}</Text>
+        <Image src={enrolment.qrCode} alt={t('page.settings.secondFactor.qrAlt')} w={200} h={200} bg="white" />
         <Text size="sm">
-          Key: <Code data-testid="totp-secret">{enrolment.secret}</Code>
+          {t('page.settings.secondFactor.key')} <Code data-testid="totp-secret">{enrolment.secret}</Code>
         </Text>
-        <CodeAndPasswordFields form={form} codeLabel="Code from the app" codeDescription="Six digits; the app shows a new one every 30 seconds." />
-        <FormActions message={problem} loading={confirm.isPending} submitLabel="Turn on" onCancel={onCancel} />
+        <CodeAndPasswordFields form={form} codeLabel={t('page.settings.secondFactor.code')} codeDescription={t('page.settings.secondFactor.codeHint')} />
+        <FormActions message={problem} loading={confirm.isPending} submitLabel={t('page.settings.secondFactor.turnOn')} onCancel={onCancel} />
       </Stack>
     </form>
   );

@@ -5,13 +5,15 @@ import { notifications } from '@mantine/notifications';
 import { MIN_PASSWORD_LENGTH } from '@broodsilk/shared';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useChangePassword } from '../api/profile';
+import { useWords } from '@/lib/i18n';
 
 export function PasswordForm() {
+  const t = useWords();
   const change = useChangePassword();
   const form = useForm({
     mode: 'uncontrolled',
     initialValues: { currentPassword: '', newPassword: '' },
-    validate: { newPassword: (v) => (v.length >= MIN_PASSWORD_LENGTH ? null : `Use a password of at least ${MIN_PASSWORD_LENGTH} characters.`) },
+    validate: { newPassword: (v) => (v.length >= MIN_PASSWORD_LENGTH ? null : t('page.settings.password.tooShort', { count: MIN_PASSWORD_LENGTH })) },
   });
   return (
     <form
@@ -19,7 +21,7 @@ export function PasswordForm() {
         change.mutate(values, {
           onSuccess: () => {
             form.reset();
-            notifications.show({ color: 'moss', message: 'Password changed. Your other sessions were signed out.' });
+            notifications.show({ color: 'moss', message: t('page.settings.password.changed') });
           },
           onError: (e) => notifications.show({ color: 'clay', message: applyServerErrors(form, e) }),
         }),
@@ -27,14 +29,20 @@ export function PasswordForm() {
     >
       <Stack maw={480}>
         <PasswordInput
-          label="Current password"
+          label={t('page.settings.password.current')}
           autoComplete="current-password"
           withAsterisk
           key={form.key('currentPassword')}
           {...form.getInputProps('currentPassword')}
         />
-        <PasswordInput label="New password" autoComplete="new-password" withAsterisk key={form.key('newPassword')} {...form.getInputProps('newPassword')} />
-        <FormActions message={null} loading={change.isPending} submitLabel="Change password" />
+        <PasswordInput
+          label={t('page.settings.password.new')}
+          autoComplete="new-password"
+          withAsterisk
+          key={form.key('newPassword')}
+          {...form.getInputProps('newPassword')}
+        />
+        <FormActions message={null} loading={change.isPending} submitLabel={t('page.settings.password.change')} />
       </Stack>
     </form>
   );

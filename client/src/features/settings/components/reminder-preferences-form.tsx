@@ -2,24 +2,19 @@ import { useState } from 'react';
 import { Checkbox, Group, Select, Stack, Text } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { notifications } from '@mantine/notifications';
-import {
-  NOTIFICATION_KIND_LABELS,
-  NOTIFICATION_KINDS,
-  REMINDER_CHANNEL_LABELS,
-  REMINDER_CHANNELS,
-  REMINDER_HOURS,
-  type ReminderPreferences,
-} from '@broodsilk/shared';
+import { NOTIFICATION_KINDS, REMINDER_CHANNELS, REMINDER_HOURS, type ReminderPreferences } from '@broodsilk/shared';
 import { FormActions } from '@/components/ui/form-actions';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useUpdateReminderPreferences } from '../api/reminder-preferences';
 import { hourLabel, toReminderFormValues, toReminderRequest } from '../utils/reminder-form-values';
+import { useWords } from '@/lib/i18n';
 
-const channelOptions = REMINDER_CHANNELS.map((c) => ({ value: c, label: REMINDER_CHANNEL_LABELS[c] }));
 const hourOptions = REMINDER_HOURS.map((h) => ({ value: String(h), label: hourLabel(h) }));
 
 /** How each kind of reminder reaches the user, quiet hours and the daily digest. */
 export function ReminderPreferencesForm({ preferences }: { preferences: ReminderPreferences }) {
+  const t = useWords();
+  const channelOptions = REMINDER_CHANNELS.map((c) => ({ value: c, label: t(`page.settings.reminders.channel.${c}`) }));
   const update = useUpdateReminderPreferences();
   const form = useForm({ mode: 'uncontrolled', initialValues: toReminderFormValues(preferences) });
   const [quiet, setQuiet] = useState(preferences.quietHours !== null);
@@ -28,46 +23,58 @@ export function ReminderPreferencesForm({ preferences }: { preferences: Reminder
     <form
       onSubmit={form.onSubmit((values) =>
         update.mutate(toReminderRequest(values), {
-          onSuccess: () => notifications.show({ color: 'moss', message: 'Reminder settings saved.' }),
+          onSuccess: () => notifications.show({ color: 'moss', message: t('page.settings.reminders.saved') }),
           onError: (e) => notifications.show({ color: 'clay', message: applyServerErrors(form, e) }),
         }),
       )}
     >
       <Stack maw={640}>
         <Text size="sm" c="dimmed">
-          Times in reminders are shown in your zone, {preferences.timeZone} (change it above).
+          {t('page.settings.reminders.zone', { zone: preferences.timeZone })}
         </Text>
         {NOTIFICATION_KINDS.map((kind) => (
           <Select
             key={form.key(`channels.${kind}`)}
-            label={NOTIFICATION_KIND_LABELS[kind]}
+            label={t(`notificationKind.${kind}`)}
             data={channelOptions}
             allowDeselect={false}
             {...form.getInputProps(`channels.${kind}`)}
           />
         ))}
-        <Checkbox label="Quiet hours: hold reminders until they end" key={form.key('quiet')} {...form.getInputProps('quiet', { type: 'checkbox' })} />
+        <Checkbox label={t('page.settings.reminders.quiet')} key={form.key('quiet')} {...form.getInputProps('quiet', { type: 'checkbox' })} />
         {quiet && (
           <Group grow>
-            <Select label="From" data={hourOptions} allowDeselect={false} key={form.key('quietFrom')} {...form.getInputProps('quietFrom')} />
-            <Select label="Until" data={hourOptions} allowDeselect={false} key={form.key('quietTo')} {...form.getInputProps('quietTo')} />
+            <Select
+              label={t('page.settings.reminders.from')}
+              data={hourOptions}
+              allowDeselect={false}
+              key={form.key('quietFrom')}
+              {...form.getInputProps('quietFrom')}
+            />
+            <Select
+              label={t('page.settings.reminders.until')}
+              data={hourOptions}
+              allowDeselect={false}
+              key={form.key('quietTo')}
+              {...form.getInputProps('quietTo')}
+            />
           </Group>
         )}
         <Checkbox
-          label="An overdue roll may break the quiet hours"
-          description="An incubating sac does not wait for morning."
+          label={t('page.settings.reminders.overdueBreaksQuiet')}
+          description={t('page.settings.reminders.overdueBreaksQuietHint')}
           key={form.key('overdueBreaksQuiet')}
           {...form.getInputProps('overdueBreaksQuiet', { type: 'checkbox' })}
         />
         <Select
-          label="Daily digest"
-          description="What is planned for the next 24 hours, at this hour."
-          data={[{ value: '', label: 'No digest' }, ...hourOptions]}
+          label={t('page.settings.reminders.digest')}
+          description={t('page.settings.reminders.digestHint')}
+          data={[{ value: '', label: t('page.settings.reminders.noDigest') }, ...hourOptions]}
           allowDeselect={false}
           key={form.key('digestHour')}
           {...form.getInputProps('digestHour')}
         />
-        <FormActions message={null} loading={update.isPending} submitLabel="Save reminder settings" />
+        <FormActions message={null} loading={update.isPending} submitLabel={t('page.settings.reminders.save')} />
       </Stack>
     </form>
   );

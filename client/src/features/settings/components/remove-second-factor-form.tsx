@@ -6,29 +6,31 @@ import { FormActions } from '@/components/ui/form-actions';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useRemoveSecondFactor } from '../api/second-factor';
 import { CodeAndPasswordFields, codeAndPasswordRules, type CodeAndPassword } from './second-factor-fields';
+import { useWords } from '@/lib/i18n';
 
 export function RemoveSecondFactorForm() {
+  const t = useWords();
   const remove = useRemoveSecondFactor();
   const [problem, setProblem] = useState<string | null>(null);
   const form = useForm<CodeAndPassword>({
     mode: 'uncontrolled',
     validateInputOnBlur: true,
     initialValues: { code: '', password: '' },
-    validate: codeAndPasswordRules('Enter a code from your app or a recovery code.'),
+    validate: codeAndPasswordRules(t, t('page.settings.secondFactor.enterCodeOrRecovery')),
   });
   return (
     <form
       onSubmit={form.onSubmit((values) => {
         setProblem(null);
         remove.mutate(values, {
-          onSuccess: () => notifications.show({ color: 'moss', message: 'Second factor removed. Signing in asks only for your password again.' }),
+          onSuccess: () => notifications.show({ color: 'moss', message: t('page.settings.secondFactor.removed') }),
           onError: (e) => setProblem(applyServerErrors(form, e)),
         });
       })}
     >
       <Stack maw={480}>
-        <CodeAndPasswordFields form={form} codeLabel="Code from the app or a recovery code" />
-        <FormActions message={problem} loading={remove.isPending} submitLabel="Remove second factor" />
+        <CodeAndPasswordFields form={form} codeLabel={t('page.settings.secondFactor.codeOrRecovery')} />
+        <FormActions message={problem} loading={remove.isPending} submitLabel={t('page.settings.secondFactor.remove')} />
       </Stack>
     </form>
   );

@@ -1,16 +1,17 @@
 import { PasswordInput } from '@mantine/core';
 import type { UseFormReturnType } from '@mantine/form';
-import { TEXT_LIMITS } from '@broodsilk/shared';
+import { TEXT_LIMITS, type Words } from '@broodsilk/shared';
 import { TextField } from '@/components/fields/text-field';
 import { textRule } from '@/components/fields/text-rule';
+import { useWords } from '@/lib/i18n';
 
 export interface CodeAndPassword {
   password: string;
   code: string;
 }
 
-export const codeAndPasswordRules = (codeRequired: string) => ({
-  password: textRule({ required: 'Enter your password.', maxLength: TEXT_LIMITS.password }),
+export const codeAndPasswordRules = (t: Words, codeRequired: string) => ({
+  password: textRule({ required: t('page.settings.secondFactor.enterPassword'), maxLength: TEXT_LIMITS.password }),
   code: textRule({ required: codeRequired, maxLength: TEXT_LIMITS.secondFactorCode }),
 });
 
@@ -24,6 +25,7 @@ export function CodeAndPasswordFields({
   codeLabel: string;
   codeDescription?: string;
 }) {
+  const t = useWords();
   return (
     <>
       <TextField
@@ -35,7 +37,13 @@ export function CodeAndPasswordFields({
         key={form.key('code')}
         {...form.getInputProps('code')}
       />
-      <PasswordInput label="Your password" autoComplete="current-password" withAsterisk key={form.key('password')} {...form.getInputProps('password')} />
+      <PasswordInput
+        label={t('page.settings.secondFactor.yourPassword')}
+        autoComplete="current-password"
+        withAsterisk
+        key={form.key('password')}
+        {...form.getInputProps('password')}
+      />
     </>
   );
 }

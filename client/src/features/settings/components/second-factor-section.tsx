@@ -9,15 +9,16 @@ import { RecoveryCodes } from './recovery-codes';
 import { RemoveSecondFactorForm } from './remove-second-factor-form';
 import { RenewRecoveryCodes } from './renew-recovery-codes';
 import { useWords } from '@/lib/i18n';
+import { RECOVERY_CODE_COUNT } from '@broodsilk/shared';
 
 /** Sign-in security: set up or remove a TOTP second factor. */
 export function SecondFactorSection() {
+  const t = useWords();
   const status = useSecondFactorStatus();
   const start = useStartEnrolment();
   const [enrolment, setEnrolment] = useState<TotpEnrolment | null>(null);
   const [codes, setCodes] = useState<string[] | null>(null);
   const [renewed, setRenewed] = useState<string[] | null>(null);
-  const t = useWords();
 
   if (codes) return <RecoveryCodes codes={codes} onDone={() => setCodes(null)} />;
   if (renewed) {
@@ -40,10 +41,8 @@ export function SecondFactorSection() {
   if (status.data.enabled) {
     return (
       <Stack>
-        <Text>Signing in asks for a code from your authenticator app. Recovery codes left: {status.data.recoveryCodesLeft} of 10.</Text>
-        {status.data.required ? (
-          <Alert color="clay">Administrators must keep a second factor. If you remove it, administrator pages stay closed until you set one up again.</Alert>
-        ) : null}
+        <Text>{t('page.settings.secondFactor.enabled', { left: status.data.recoveryCodesLeft, total: RECOVERY_CODE_COUNT })}</Text>
+        {status.data.required ? <Alert color="clay">{t('page.settings.secondFactor.adminKeep')}</Alert> : null}
         <RenewRecoveryCodes onRenewed={setRenewed} />
         <RemoveSecondFactorForm />
       </Stack>
@@ -58,12 +57,12 @@ export function SecondFactorSection() {
     >
       <Stack maw={480}>
         {status.data.required ? (
-          <Alert color="clay" title="Second factor required">
-            Your account is an administrator account. Set up a second factor before using administrator pages.
+          <Alert color="clay" title={t('page.settings.secondFactor.requiredTitle')}>
+            {t('page.settings.secondFactor.requiredText')}
           </Alert>
         ) : null}
-        <Text>Add a second step to signing in: a six-digit code from an authenticator app on your phone, so a stolen password alone is not enough.</Text>
-        <FormActions message={start.error ? errorMessage(start.error) : null} loading={start.isPending} submitLabel="Set up an authenticator app" />
+        <Text>{t('page.settings.secondFactor.offText')}</Text>
+        <FormActions message={start.error ? errorMessage(start.error) : null} loading={start.isPending} submitLabel={t('page.settings.secondFactor.setUp')} />
       </Stack>
     </form>
   );

@@ -13,9 +13,10 @@ describe('CautionNotice', () => {
       scientificName: 'Poecilotheria metallica',
       cautions: {
         urticatingHairs: { value: false, source: cited },
-        medicallySignificantVenom: { value: true, source: cited },
+        venom: { value: 'medically-significant', source: cited },
         cautionText: 'Fast and defensive.',
       },
+      group: 'ow-arboreal',
       tradeListing: { value: 'CITES Appendix II', source: cited },
     });
     renderWithProviders(<CautionNotice species={pokie} />);
@@ -32,7 +33,7 @@ describe('CautionNotice', () => {
     const hairy = speciesResponse({
       id: 'h',
       scientificName: 'Tliltocatl vagans',
-      cautions: { urticatingHairs: { value: true, source: cited }, medicallySignificantVenom: { value: false, source: cited }, cautionText: '' },
+      cautions: { urticatingHairs: { value: true, source: cited }, venom: { value: 'no-cases-known', source: cited }, cautionText: '' },
     });
     renderWithProviders(<CautionNotice species={hairy} />);
     const note = screen.getByRole('note', { name: /^Take care/ });
@@ -42,7 +43,35 @@ describe('CautionNotice', () => {
     expect(note).toHaveTextContent(/licensed practice/);
   });
 
-  it('shows nothing for a species without hairs, venom or listing', () => {
+  it('shows the Old World group caution for a species whose venom is "not known", with the three-valued flag (docs/trade-facts.md §9: Ahmed et al. 2009)', () => {
+    const balfouri = speciesResponse({
+      id: 'b',
+      scientificName: 'Monocentropus balfouri',
+      group: 'ow-terrestrial',
+      cautions: { urticatingHairs: { value: false, source: cited }, venom: { value: 'not-known', source: { kind: 'memory' } }, cautionText: '' },
+    });
+    renderWithProviders(<CautionNotice species={balfouri} />);
+    const note = screen.getByRole('note', { name: /^Take care: venom not known/ });
+    expect(note).toHaveTextContent('Bites: Not known: no published account either way');
+    expect(note).toHaveTextContent(/severe, long-lasting muscle cramps/);
+    expect(note).toHaveTextContent(/never with bare hands/);
+    expect(note).toHaveTextContent('(Source: from memory)');
+    expect(note).toHaveTextContent(/Follow the law where you live and licensed practice/);
+  });
+
+  it('shows the Old World group caution even when no bite case is known', () => {
+    const calm = speciesResponse({
+      id: 'c',
+      scientificName: 'Old World calm one',
+      group: 'ow-arboreal',
+      cautions: { urticatingHairs: { value: false, source: cited }, venom: { value: 'no-cases-known', source: cited }, cautionText: '' },
+    });
+    renderWithProviders(<CautionNotice species={calm} />);
+    const note = screen.getByRole('note', { name: 'Take care: its group' });
+    expect(note).toHaveTextContent(/bites of Poecilotheria and related genera have caused severe cramps/);
+  });
+
+  it('shows nothing for a New World species without hairs, known bites or listing', () => {
     renderWithProviders(<CautionNotice species={speciesResponse({ id: 'x', scientificName: 'Plain species' })} />);
     expect(screen.queryByRole('note')).not.toBeInTheDocument();
   });

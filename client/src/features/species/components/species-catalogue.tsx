@@ -2,14 +2,17 @@ import { Badge, Card, Group, Select, SimpleGrid, Stack, Text, TextInput } from '
 import { Pager } from '@/components/ui/pager';
 import { useDebouncedValue } from '@mantine/hooks';
 import { useState } from 'react';
-import { SPECIES_GROUPS, type SpeciesGroup, type SpeciesResponse, type Sourced } from '@broodsilk/shared';
+import { SPECIES_GROUPS, type SpeciesGroup, type SpeciesResponse, type Sourced, type ValueOrigin } from '@broodsilk/shared';
+import { useWords } from '@/lib/i18n';
 import { useSpeciesList } from '../api/species';
-import { GROUP_LABELS, ORIGIN_LABELS, formatRange, matchedFormerName, sourceLabel } from '../utils/species-view';
+import { formatRange, matchedFormerName, sampledRange, useSourceLabel } from '../utils/species-view';
 
 const PAGE = 24;
 
-function Value({ label, text, value }: { label: string; text: string; value: Sourced<unknown> & { from: keyof typeof ORIGIN_LABELS } }) {
-  const source = `${sourceLabel(value.source)}${value.from !== 'species' ? ` · ${ORIGIN_LABELS[value.from]}` : ''}`;
+function Value({ label, text, value }: { label: string; text: string; value: Sourced<unknown> & { from: ValueOrigin } }) {
+  const t = useWords();
+  const sourceLabel = useSourceLabel();
+  const source = `${sourceLabel(value.source)}${value.from !== 'species' ? ` · ${t(`page.species.origin.${value.from}`)}` : ''}`;
   return (
     <div>
       <Group justify="space-between" gap="xs" wrap="nowrap">
@@ -21,13 +24,14 @@ function Value({ label, text, value }: { label: string; text: string; value: Sou
         </Text>
       </Group>
       <Text size="xs" c="dimmed" lineClamp={2} title={source}>
-        Source: {source}
+        {t('valueSource', { source })}
       </Text>
     </div>
   );
 }
 
 function SpeciesCard({ species, query }: { species: SpeciesResponse; query: string }) {
+  const t = useWords();
   const e = species.effective;
   const former = matchedFormerName(species, query);
   return (
@@ -42,7 +46,7 @@ function SpeciesCard({ species, query }: { species: SpeciesResponse; query: stri
           </Text>
           {former && (
             <Text size="xs" c="dimmed">
-              formerly <i>{former}</i>
+              {t('page.species.formerly')} <i>{former}</i>
             </Text>
           )}
           {species.commonNames.length > 0 && (
@@ -53,16 +57,21 @@ function SpeciesCard({ species, query }: { species: SpeciesResponse; query: stri
         </div>
         <Group gap={6}>
           <Badge variant="light" color="moss" size="sm">
-            {GROUP_LABELS[species.group]}
+            {t(`page.species.group.${species.group}`)}
           </Badge>
           {species.cautions.urticatingHairs.value && (
             <Badge variant="light" color="amber" size="sm">
-              urticating hairs
+              {t('page.species.badge.hairs')}
             </Badge>
           )}
-          {species.cautions.medicallySignificantVenom.value && (
+          {species.cautions.venom.value === 'medically-significant' && (
             <Badge variant="light" color="clay" size="sm">
-              strong venom
+              {t('page.species.badge.venom')}
+            </Badge>
+          )}
+          {species.cautions.venom.value === 'not-known' && (
+            <Badge variant="light" color="amber" size="sm">
+              {t('page.species.badge.venomNotKnown')}
             </Badge>
           )}
           {species.tradeListing.value && (
@@ -71,12 +80,20 @@ function SpeciesCard({ species, query }: { species: SpeciesResponse; query: stri
             </Badge>
           )}
         </Group>
-        <Value label="Pull window" text={`day ${e.pullWindow.value.fromDay}–${e.pullWindow.value.toDay}`} value={e.pullWindow} />
-        <Value label="Pairing → sac" text={`${formatRange(e.pairingToSacDays.value.min, e.pairingToSacDays.value.max)} days`} value={e.pairingToSacDays} />
-        <Value label="Eggs per sac" text={formatRange(e.eggsPerSac.value.min, e.eggsPerSac.value.max)} value={e.eggsPerSac} />
         <Value
-          label="Male lifespan after maturing"
-          text={`${formatRange(e.matureMaleLifespanMonths.value.min, e.matureMaleLifespanMonths.value.max)} months`}
+          label={t('page.species.value.pullWindow')}
+          text={t('page.species.value.pullDays', { from: e.pullWindow.value.fromDay, to: e.pullWindow.value.toDay })}
+          value={e.pullWindow}
+        />
+        <Value
+          label={t('page.species.value.pairingToSac')}
+          text={t('page.species.value.days', { range: formatRange(e.pairingToSacDays.value.min, e.pairingToSacDays.value.max) })}
+          value={e.pairingToSacDays}
+        />
+        <Value label={t('page.species.value.eggsPerSac')} text={sampledRange(t, e.eggsPerSac)} value={e.eggsPerSac} />
+        <Value
+          label={t('page.species.value.lifespan')}
+          text={t('page.species.value.months', { range: formatRange(e.matureMaleLifespanMonths.value.min, e.matureMaleLifespanMonths.value.max) })}
           value={e.matureMaleLifespanMonths}
         />
       </Stack>
@@ -86,6 +103,7 @@ function SpeciesCard({ species, query }: { species: SpeciesResponse; query: stri
 
 /** The catalogue: search by current, former or common name, filter by group, page through. */
 export function SpeciesCatalogue() {
+  const t = useWords();
   const [text, setText] = useState('');
   const [group, setGroup] = useState<SpeciesGroup | null>(null);
   const [page, setPage] = useState(1);
@@ -96,8 +114,8 @@ export function SpeciesCatalogue() {
     <Stack>
       <Group align="flex-end" wrap="wrap">
         <TextInput
-          label="Search names"
-          placeholder="Current, former or common name"
+          label={t('page.species.catalogue.search')}
+          placeholder={t('page.species.catalogue.searchHint')}
           value={text}
           onChange={(e) => {
             setText(e.currentTarget.value);
@@ -106,10 +124,10 @@ export function SpeciesCatalogue() {
           w={{ base: '100%', sm: 320 }}
         />
         <Select
-          label="Group"
-          placeholder="All groups"
+          label={t('page.species.catalogue.group')}
+          placeholder={t('page.species.catalogue.allGroups')}
           clearable
-          data={SPECIES_GROUPS.map((g) => ({ value: g, label: GROUP_LABELS[g] }))}
+          data={SPECIES_GROUPS.map((g) => ({ value: g, label: t(`page.species.group.${g}`) }))}
           value={group}
           onChange={(g) => {
             setGroup(g as SpeciesGroup | null);
@@ -120,11 +138,11 @@ export function SpeciesCatalogue() {
       </Group>
       {isError && <Text className="tone-failed">{error.message}</Text>}
       {isPending ? (
-        <Text c="dimmed">Loading the catalogue…</Text>
+        <Text c="dimmed">{t('page.species.catalogue.loading')}</Text>
       ) : (
         <>
           <Text size="sm" c="dimmed">
-            {data?.total ?? 0} species
+            {t('page.species.catalogue.count', { count: data?.total ?? 0 })}
           </Text>
           <SimpleGrid cols={{ base: 1, sm: 2, lg: 3 }}>
             {data?.items.map((s) => (

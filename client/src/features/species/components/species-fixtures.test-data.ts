@@ -13,7 +13,7 @@ export function speciesResponse(over: Partial<SpeciesResponse> & Pick<SpeciesRes
     nameSource: { kind: 'published', citation: 'World Spider Catalog' },
     cautions: {
       urticatingHairs: { value: false, source: common },
-      medicallySignificantVenom: { value: false, source: common },
+      venom: { value: 'no-cases-known', source: common },
       cautionText: 'Group note.',
     },
     tradeListing: { value: null, source: common },

@@ -1,6 +1,7 @@
 import { Group, Select, Stack, Text } from '@mantine/core';
 import { useDebouncedValue } from '@mantine/hooks';
 import { useMemo, useState } from 'react';
+import { useWords } from '@/lib/i18n';
 import { useSpeciesList } from '../api/species';
 import { matchedFormerName } from '../utils/species-view';
 
@@ -21,16 +22,8 @@ export interface SpeciesPickerProps {
  * Picks a species from the catalogue by its current or a former name. A hit through a former
  * name says so ("formerly Brachypelma vagans"), since keepers still buy and sell under old names.
  */
-export function SpeciesPicker({
-  label = 'Species',
-  defaultValue = null,
-  defaultName = null,
-  onChange,
-  error,
-  withAsterisk,
-  description,
-  size = 'sm',
-}: SpeciesPickerProps) {
+export function SpeciesPicker({ label, defaultValue = null, defaultName = null, onChange, error, withAsterisk, description, size = 'sm' }: SpeciesPickerProps) {
+  const t = useWords();
   const [value, setValue] = useState<string | null>(defaultValue);
   const [picked, setPicked] = useState<{ value: string; label: string } | null>(
     defaultValue && defaultName ? { value: defaultValue, label: defaultName } : null,
@@ -51,11 +44,11 @@ export function SpeciesPicker({
 
   return (
     <Select
-      label={label}
+      label={label ?? t('page.species.picker.label')}
       description={description}
       withAsterisk={withAsterisk}
       size={size}
-      placeholder="Type a current or former name"
+      placeholder={t('page.species.picker.placeholder')}
       searchable
       clearable
       data={options}
@@ -64,7 +57,9 @@ export function SpeciesPicker({
       onSearchChange={setSearch}
       // The server already matched current, former and common names.
       filter={({ options: all }) => all}
-      nothingFoundMessage={query.length < 2 ? 'Type at least two letters' : isFetching ? 'Searching…' : 'No species by that name in the catalogue'}
+      nothingFoundMessage={
+        query.length < 2 ? t('page.species.picker.tooShort') : isFetching ? t('page.species.picker.searching') : t('page.species.picker.nothing')
+      }
       onChange={(id, option) => {
         setValue(id);
         setPicked(id ? { value: id, label: option.label } : null);
@@ -81,7 +76,7 @@ export function SpeciesPicker({
             {former && (
               <Group gap={4}>
                 <Text size="xs" c="dimmed">
-                  formerly <i>{former}</i>
+                  {t('page.species.formerly')} <i>{former}</i>
                 </Text>
               </Group>
             )}

@@ -1,30 +1,15 @@
-import type { SpeciesGroup, SpeciesResponse, ValueOrigin, ValueSource } from '@broodsilk/shared';
+import { useCallback } from 'react';
+import { restsOnFew, valueSourceLabel, type NumberRange, type Sourced, type SpeciesResponse, type ValueSource, type Words } from '@broodsilk/shared';
+import { useWords } from '@/lib/i18n';
 
-export const GROUP_LABELS: Record<SpeciesGroup, string> = {
-  'nw-terrestrial': 'New World, ground-dwelling',
-  'nw-arboreal': 'New World, tree-dwelling',
-  'ow-terrestrial': 'Old World, ground-dwelling',
-  'ow-arboreal': 'Old World, tree-dwelling',
-  fossorial: 'Burrowing',
-};
+/** A short, plain label for where a value comes from, in the reader's language. */
+export const sourceLabel = valueSourceLabel;
 
-/** A short, plain label for where a value comes from. */
-export function sourceLabel(source: ValueSource): string {
-  switch (source.kind) {
-    case 'published':
-      return source.citation;
-    case 'common-practice':
-      return 'common practice';
-    case 'memory':
-      return 'from memory';
-  }
+/** `sourceLabel` with the reader's words. */
+export function useSourceLabel(): (source: ValueSource) => string {
+  const t = useWords();
+  return useCallback((source: ValueSource) => sourceLabel(t, source), [t]);
 }
-
-export const ORIGIN_LABELS: Record<ValueOrigin, string> = {
-  species: 'this species',
-  group: 'group default',
-  default: 'Broodsilk default',
-};
 
 function normalise(s: string): string {
   return s.trim().toLowerCase().replace(/\s+/g, ' ');
@@ -47,4 +32,15 @@ export function matchedFormerName(species: Pick<SpeciesResponse, 'scientificName
 
 export function formatRange(min: number, max: number): string {
   return min === max ? String(min) : `${min}–${max}`;
+}
+
+/**
+ * A range in words; a figure resting on few observations says so instead of passing for a range:
+ * "about 200, n = 2 sacs" (docs/trade-facts.md §6).
+ */
+export function sampledRange(t: Words, { value, source }: Sourced<NumberRange>): string {
+  const text = formatRange(value.min, value.max);
+  if (!restsOnFew(source) || !source.sampleSize) return text;
+  const { count, unit } = source.sampleSize;
+  return t('page.species.value.aboutSample', { value: text, count, unit: t(`page.species.value.sampleUnit.${unit}`, { count }) });
 }

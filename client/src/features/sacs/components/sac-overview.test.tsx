@@ -1,0 +1,32 @@
+import { screen } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import type { SacResponse } from '@broodsilk/shared';
+import { PULLED_TEST_SAC } from '@/testing/sac-incubation-fields';
+import { renderWithProviders } from '@/testing/render';
+import { SacOverview } from './sac-overview';
+
+const withWindow = (pullWindow: Partial<SacResponse['pullWindow']>): SacResponse => ({
+  ...PULLED_TEST_SAC,
+  pullWindow: { ...PULLED_TEST_SAC.pullWindow, ...pullWindow },
+});
+
+describe('SacOverview: where the pull window comes from', () => {
+  it('names the species figure and its source', () => {
+    const sac = withWindow({ fromDay: 21, toDay: 30, origin: 'species', source: { kind: 'memory', note: 'usual pull days for Poecilotheria' } });
+    renderWithProviders(<SacOverview sac={sac} timeZone="UTC" temperatureUnit="C" />);
+    expect(screen.getByTestId('pull-window-origin')).toHaveTextContent('Day 21–30: the figure for this species');
+    expect(screen.getByTestId('pull-window-source')).toHaveTextContent('Source: from memory');
+  });
+
+  it('says the day 21–45 window is the usual one, common practice (docs/trade-facts.md §2)', () => {
+    renderWithProviders(<SacOverview sac={withWindow({ origin: 'default', source: { kind: 'common-practice' } })} timeZone="UTC" temperatureUnit="C" />);
+    expect(screen.getByTestId('pull-window-origin')).toHaveTextContent('Day 21–45: the usual window for any species');
+    expect(screen.getByTestId('pull-window-source')).toHaveTextContent('Source: common practice');
+  });
+
+  it('says when the keeper set the window for this sac, with no source', () => {
+    renderWithProviders(<SacOverview sac={withWindow({ fromDay: 25, toDay: 40, origin: 'sac', source: null })} timeZone="UTC" temperatureUnit="C" />);
+    expect(screen.getByTestId('pull-window-origin')).toHaveTextContent('Day 25–40: your own window for this sac');
+    expect(screen.queryByTestId('pull-window-source')).not.toBeInTheDocument();
+  });
+});

@@ -1,0 +1,47 @@
+import { BadRequestException } from '@nestjs/common';
+import { Type } from 'class-transformer';
+import { IsInt, IsString, Matches, Max, MaxLength, Min } from 'class-validator';
+import { KEYSET_DEFAULT_LIMIT, KEYSET_MAX_LIMIT, type KeysetQuery } from '@broodsilk/shared';
+import { IsOptionalNonNull } from '../validators/is-optional-non-null.validator';
+
+/** `?after=&limit=` of a keyset-paged list. The cursor's content is checked by the list that reads it. */
+export class KeysetQueryDto implements KeysetQuery {
+  @IsOptionalNonNull()
+  @IsString({ message: 'after must be the nextCursor of the page before.' })
+  @MaxLength(200, { message: 'after must be the nextCursor of the page before.' })
+  @Matches(/^[A-Za-z0-9_-]+$/, { message: 'after must be the nextCursor of the page before.' })
+  after?: string;
+
+  @IsOptionalNonNull()
+  @Type(() => Number)
+  @IsInt({ message: 'limit must be a whole number.' })
+  @Min(1, { message: 'limit must be at least 1.' })
+  @Max(KEYSET_MAX_LIMIT, { message: `limit can be at most ${KEYSET_MAX_LIMIT}.` })
+  limit?: number;
+}
+
+export const pageSize = (q: KeysetQuery): number => q.limit ?? KEYSET_DEFAULT_LIMIT;
+
+/** The opaque cursor: base64url of a small JSON object naming the last item of a page. */
+export function encodeCursor(key: Record<string, string | number>): string {
+  return Buffer.from(JSON.stringify(key), 'utf8').toString('base64url');
+}
+
+const refused = () => new BadRequestException({ message: 'after is not a cursor of this list: pass the nextCursor of the page before, unchanged.' });
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/** Reads `{ [field]: value }` back; anything else is a 400 with a message, never a 500. */
+export function decodeCursor(cursor: string, field: string, kind: 'uuid' | 'integer'): string | number {
+  let key: unknown;
+  try {
+    key = JSON.parse(Buffer.from(cursor, 'base64url').toString('utf8'));
+  } catch {
+    throw refused();
+  }
+  if (!key || typeof key !== 'object' || Array.isArray(key) || Object.keys(key).length !== 1) throw refused();
+  const value = (key as Record<string, unknown>)[field];
+  if (kind === 'uuid' && typeof value === 'string' && UUID.test(value)) return value;
+  if (kind === 'integer' && typeof value === 'number' && Number.isSafeInteger(value) && value > 0) return value;
+  throw refused();
+}
