@@ -10,7 +10,7 @@ type Scheme = (typeof SCHEMES)[number];
 
 const ACCOUNTS = ['keeper@broodsilk.test', 'partner@broodsilk.test', 'caretaker@broodsilk.test'];
 const FIXED_ROUTES = ['/', '/collection', '/species', '/projects', '/projects/new', '/incubator', '/settings', '/settings/payouts', '/notifications'];
-const PUBLIC_ROUTES = ['/sign-in', '/register', '/forgot-password', '/reset-password', '/no-such-page'];
+const PUBLIC_ROUTES = ['/sign-in', '/register', '/forgot-password', '/reset-password', '/confirm-email', '/no-such-page'];
 /** Routes with an id: the first link of each kind found on the fixed pages. */
 const LINKED = [/^\/collection\/[0-9a-f-]{36}$/, /^\/projects\/[0-9a-f-]{36}$/, /^\/sacs\/[0-9a-f-]{36}$/, /^\/incubator\/[0-9a-f-]{36}$/];
 

@@ -15,6 +15,19 @@ const codeAt = (secret: string, ms: number) =>
 const WCAG_AA = ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa'];
 const violations = async (page: Page) => (await new AxeBuilder({ page }).withTags(WCAG_AA).analyze()).violations.map((v) => `${v.id}: ${v.help}`);
 
+/** The link of the confirmation e-mail to `email`, read from the mail sink's REST API (maildev, `GET /api/email`). */
+async function confirmationLink(email: string): Promise<string> {
+  const sink = process.env.MAILDEV_API ?? 'http://127.0.0.1:1080';
+  for (let attempt = 0; attempt < 100; attempt += 1) {
+    const mails = (await (await fetch(`${sink}/api/email`)).json()) as { to: { address: string }[]; text?: string }[];
+    const text = mails.find((m) => m.to.some((to) => to.address === email) && /confirm-email\?token=/.test(m.text ?? ''))?.text;
+    const token = text && /confirm-email\?token=([A-Za-z0-9_-]{43})/.exec(text)?.[1];
+    if (token) return `${BASE_URL}/confirm-email?token=${token}`;
+    await new Promise((r) => setTimeout(r, 200));
+  }
+  throw new Error(`no confirmation mail to ${email}`);
+}
+
 let b: Browser;
 beforeAll(async () => {
   b = await openBrowser();
@@ -28,9 +41,16 @@ describe('second factor', () => {
     const { page, context } = b;
     const email = `totp.${Date.now()}@example.test`;
     const password = 'two steps are safer';
-    // A fresh account through the API; its session cookie lands in this browser.
-    const reg = await page.request.post(`${BASE_URL}/api/auth/register`, { data: { email, password, displayName: 'Code Keeper' } });
-    expect(reg.status()).toBe(201);
+    // A fresh account through the register page; the confirmation link from the mail sink signs this browser in.
+    await page.goto(`${BASE_URL}/register`);
+    await page.getByLabel(/^Your name/).fill('Code Keeper');
+    await page.getByLabel(/^E-mail/).fill(email);
+    await page.getByLabel(/^Password/).fill(password);
+    await page.getByRole('button', { name: 'Create account' }).click();
+    await page.getByText('Check your e-mail').waitFor();
+    await page.goto(await confirmationLink(email));
+    await page.getByRole('button', { name: 'Confirm my address' }).click();
+    await page.getByTestId('shell-user').waitFor();
 
     await page.goto(`${BASE_URL}/settings`);
     await page.getByRole('button', { name: 'Set up an authenticator app' }).click();

@@ -7,6 +7,7 @@ import { registerKeeper, type SignedIn } from './support/users';
 import { mailsTo, waitForMail } from './support/mail-sink';
 import { createProject } from './support/projects';
 import { JOBS_SCHEMA } from '../src/jobs/jobs.service';
+import { COMPOSE_QUEUE } from '../src/mail/mail-outbox.service';
 
 let t: TestApp;
 let mira: SignedIn;
@@ -81,10 +82,10 @@ describe('invitations', () => {
       .expect(202);
     const mail = await waitForMail(newcomer, /Confirm your e-mail address/);
     const confirmation = /\/confirm-email\?token=([A-Za-z0-9_-]{43})\b/.exec(mail.text ?? '')![1];
-    // The job's data carries only the invitation token's hash, never the token itself.
+    // The registration job's data carries only the invitation token's hash, never the token itself.
     const jobs = await t.orm.em
       .getConnection()
-      .execute<{ data: string }[]>(`select data::text from ${JOBS_SCHEMA}.job where data::text like ?`, [`%${newcomer}%`]);
+      .execute<{ data: string }[]>(`select data::text from ${JOBS_SCHEMA}.job where name = ? and data::text like ?`, [COMPOSE_QUEUE, `%${newcomer}%`]);
     expect(jobs.length).toBeGreaterThan(0);
     expect(jobs.every((j) => !j.data.includes(invitation))).toBe(true);
 

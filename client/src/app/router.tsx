@@ -38,6 +38,7 @@ export function createRouter(queryClient: QueryClient) {
     { path: paths.register.path, ErrorBoundary: RouteError, lazy: lazy(() => import('./routes/register')) },
     { path: paths.forgotPassword.path, ErrorBoundary: RouteError, lazy: lazy(() => import('./routes/forgot-password')) },
     { path: paths.resetPassword.path, ErrorBoundary: RouteError, lazy: lazy(() => import('./routes/reset-password')) },
+    { path: paths.confirmEmail.path, ErrorBoundary: RouteError, lazy: lazy(() => import('./routes/confirm-email')) },
     { path: paths.invitation.path, ErrorBoundary: RouteError, lazy: lazy(() => import('./routes/invitation')) },
     { path: paths.progress.path, ErrorBoundary: RouteError, lazy: lazy(() => import('./routes/progress')) },
     { path: '*', lazy: lazy(() => import('./routes/not-found')) },

@@ -7,6 +7,7 @@ export const paths = {
   register: { path: APP_PAGES.register, href: (next?: string) => (next && next !== '/' ? `/register?next=${encodeURIComponent(next)}` : '/register') },
   forgotPassword: { path: APP_PAGES.forgotPassword, href: () => '/forgot-password' },
   resetPassword: { path: APP_PAGES.resetPassword, href: () => '/reset-password' },
+  confirmEmail: { path: APP_PAGES.confirmEmail, href: () => '/confirm-email' },
   settings: { path: APP_PAGES.settings, href: () => '/settings' },
   notifications: { path: APP_PAGES.notifications, href: () => '/notifications' },
   collection: { path: APP_PAGES.collection, href: () => '/collection' },

@@ -4,12 +4,15 @@ import type { ApiErrorBody, FieldError } from '@broodsilk/shared';
 export class ApiError extends Error {
   readonly statusCode: number;
   readonly details: FieldError[];
+  /** Set where the server offers a next step (e.g. `EMAIL_NOT_CONFIRMED`). */
+  readonly reason: string | null;
 
   constructor(body: ApiErrorBody) {
     super(body.message);
     this.name = 'ApiError';
     this.statusCode = body.statusCode;
     this.details = body.details ?? [];
+    this.reason = body.reason ?? null;
   }
 
   /** Field errors as `{ field: message }` for `form.setErrors`. */

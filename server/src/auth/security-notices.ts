@@ -6,7 +6,13 @@ import type { OutgoingMail } from '../mail/mail.service';
  * it was not them; none carries a link that signs in.
  */
 export type SecurityNotice =
-  'password-changed' | 'password-reset' | 'second-factor-added' | 'second-factor-removed' | 'recovery-code-used' | 'registration-attempt';
+  | 'password-changed'
+  | 'password-reset'
+  | 'second-factor-added'
+  | 'second-factor-removed'
+  | 'recovery-code-used'
+  | 'recovery-codes-renewed'
+  | 'registration-attempt';
 
 const WHAT: Record<SecurityNotice, { subject: string; body: string }> = {
   'password-changed': {
@@ -28,6 +34,10 @@ const WHAT: Record<SecurityNotice, { subject: string; body: string }> = {
   'recovery-code-used': {
     subject: 'A recovery code was used to sign in to your Broodsilk account',
     body: 'Someone signed in to your Broodsilk account with the password and one of its recovery codes. That code no longer works.',
+  },
+  'recovery-codes-renewed': {
+    subject: 'The recovery codes of your Broodsilk account were renewed',
+    body: 'New recovery codes were made for your Broodsilk account; the earlier ones no longer work.',
   },
   'registration-attempt': {
     subject: 'Someone tried to register with your e-mail address',

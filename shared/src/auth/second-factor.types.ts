@@ -52,6 +52,13 @@ export interface RecoveryCodesResponse {
   recoveryCodes: string[];
 }
 
+/** New recovery codes replace every old one; the current password or a code from the app proves it is the owner. */
+export interface RecoveryCodesRenewalRequest {
+  password?: string;
+  /** Six digits from the authenticator app (a recovery code does not renew the codes). */
+  code?: string;
+}
+
 export interface SecondFactorRemovalRequest {
   password: string;
   /** A code from the app or a recovery code. */

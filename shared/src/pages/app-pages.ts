@@ -8,6 +8,7 @@ export const APP_PAGES = {
   register: '/register',
   forgotPassword: '/forgot-password',
   resetPassword: '/reset-password',
+  confirmEmail: '/confirm-email',
   settings: '/settings',
   notifications: '/notifications',
   collection: '/collection',

@@ -1,4 +1,4 @@
-import { useNavigate, useSearchParams } from 'react-router';
+import { matchPath, useSearchParams } from 'react-router';
 import { PublicLayout } from '@/components/layouts/public-layout';
 import { RegisterForm } from '@/features/auth/components/register-form';
 import { paths } from '@/config/paths';
@@ -7,14 +7,13 @@ import { useWords } from '@/lib/i18n';
 
 export function Component() {
   const t = useWords();
-  const navigate = useNavigate();
   const [params] = useSearchParams();
+  const next = params.get('next') ? safeNext(params.get('next')) : undefined;
+  // Registering from an invitation: the confirmation e-mail carries it, and confirming accepts it.
+  const invitationToken = next ? matchPath(paths.invitation.path, next)?.params.token : undefined;
   return (
     <PublicLayout title={t('page.auth.registerTitle')} subtitle={t('page.auth.registerSubtitle')}>
-      <RegisterForm
-        onRegistered={() => navigate(safeNext(params.get('next')), { replace: true })}
-        signInHref={paths.signIn.href(params.get('next') ? safeNext(params.get('next')) : undefined)}
-      />
+      <RegisterForm signInHref={paths.signIn.href(next)} invitationToken={invitationToken} />
     </PublicLayout>
   );
 }

@@ -3,7 +3,11 @@ import type { RecoveryCodesResponse, SecondFactorStatus, TotpEnrolment } from '@
 import { CurrentUser } from '../../common/decorators/current-user.decorator';
 import type { AuthUser } from '../../common/auth-user';
 import { SecondFactorService } from './second-factor.service';
-import { SecondFactorRemovalDto, TotpConfirmDto } from './dto/second-factor.dto';
+import { RecoveryCodesRenewalDto, SecondFactorRemovalDto, TotpConfirmDto } from './dto/second-factor.dto';
+import { PerUserLimit } from '../../common/per-user-limit/per-user-limit';
+
+/** Renewals of the recovery codes per account per hour; each one re-checks the password or a code. */
+export const RECOVERY_CODE_RENEWALS_PER_HOUR = 10;
 
 @Controller('auth/second-factor')
 export class SecondFactorController {
@@ -23,6 +27,14 @@ export class SecondFactorController {
   @Post('enrolment/confirm')
   confirmEnrolment(@CurrentUser() user: AuthUser, @Body() dto: TotpConfirmDto): Promise<RecoveryCodesResponse> {
     return this.secondFactor.confirmEnrolment(user.id, dto);
+  }
+
+  /** New recovery codes, shown once; the old ones stop working. */
+  @HttpCode(200)
+  @Post('recovery-codes')
+  @PerUserLimit({ what: 'recovery code renewals', limit: RECOVERY_CODE_RENEWALS_PER_HOUR, windowMinutes: 60 })
+  renewRecoveryCodes(@CurrentUser() user: AuthUser, @Body() dto: RecoveryCodesRenewalDto): Promise<RecoveryCodesResponse> {
+    return this.secondFactor.renewRecoveryCodes(user.id, dto);
   }
 
   @HttpCode(204)

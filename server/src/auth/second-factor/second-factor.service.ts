@@ -2,7 +2,14 @@ import { BadRequestException, ConflictException, Inject, Injectable } from '@nes
 import type { ConfigType } from '@nestjs/config';
 import { EntityManager, LockMode } from '@mikro-orm/postgresql';
 import QRCode from 'qrcode';
-import type { RecoveryCodesResponse, SecondFactorRemovalRequest, SecondFactorStatus, TotpConfirmRequest, TotpEnrolment } from '@broodsilk/shared';
+import type {
+  RecoveryCodesRenewalRequest,
+  RecoveryCodesResponse,
+  SecondFactorRemovalRequest,
+  SecondFactorStatus,
+  TotpConfirmRequest,
+  TotpEnrolment,
+} from '@broodsilk/shared';
 import { appConfig } from '../../config/app.config';
 import { Clock } from '../../common/clock';
 import { MailOutbox } from '../../mail/mail-outbox.service';
@@ -64,13 +71,41 @@ export class SecondFactorService {
       const step = acceptedTotpStep(openSecret(this.key, user.id, user.totpPendingSecret), withoutBlanks(dto.code), this.clock.now(), null);
       if (step === null) throw codeRefusal('This code does not match. Check the clock of your phone and enter the code the app shows now.');
       Object.assign(user, { totpSecret: user.totpPendingSecret, totpPendingSecret: null, totpEnabledAt: this.clock.now(), totpLastStep: step });
-      await em.nativeDelete(RecoveryCode, { user: user.id });
-      const recoveryCodes = newRecoveryCodes();
-      for (const code of recoveryCodes) em.create(RecoveryCode, { user, codeHash: recoveryCodeHash(code)! });
-      await em.flush();
+      const recoveryCodes = await this.replaceRecoveryCodes(em, user);
       await this.outbox.enqueue(em, securityNotice('second-factor-added', user, this.app.publicUrl));
       return { recoveryCodes };
     });
+  }
+
+  /**
+   * A new set of recovery codes, shown this once; every older code stops working. The current
+   * password or the app's current code proves the owner (OWASP ASVS 5.0 V6.2.3 asks for it again
+   * before a change to how the account signs in); a recovery code does not, so one found code
+   * cannot turn into ten.
+   */
+  async renewRecoveryCodes(userId: string, dto: RecoveryCodesRenewalRequest): Promise<RecoveryCodesResponse> {
+    return this.em.transactional(async (em) => {
+      const user = await this.lockedUser(em, userId);
+      if (!user.totpEnabledAt) throw new ConflictException('This account has no second factor; recovery codes come with one.');
+      if (dto.password) await assertPassword(user, dto.password, 'password');
+      else if (dto.code) {
+        if (!(await this.takeCode(em, user, dto.code, false))) throw codeRefusal('This code is not right. Enter the code your app shows now.');
+      } else {
+        const message = 'Enter your password or the code your app shows now.';
+        throw new BadRequestException({ message, details: [{ field: 'password', message }] });
+      }
+      const recoveryCodes = await this.replaceRecoveryCodes(em, user);
+      await this.outbox.enqueue(em, securityNotice('recovery-codes-renewed', user, this.app.publicUrl));
+      return { recoveryCodes };
+    });
+  }
+
+  private async replaceRecoveryCodes(em: EntityManager, user: User): Promise<string[]> {
+    await em.nativeDelete(RecoveryCode, { user: user.id });
+    const recoveryCodes = newRecoveryCodes();
+    for (const code of recoveryCodes) em.create(RecoveryCode, { user, codeHash: recoveryCodeHash(code)! });
+    await em.flush();
+    return recoveryCodes;
   }
 
   /** Turning the second factor off needs the password and a code (from the app or a recovery code). */
@@ -90,9 +125,9 @@ export class SecondFactorService {
   /**
    * Which kind of code `code` is when it is the app's current code (not used before) or an unused
    * recovery code, else null; either is spent by one conditional UPDATE, so two requests with the
-   * same code cannot both pass.
+   * same code cannot both pass. With `recovery` false only the app's code counts.
    */
-  async takeCode(em: EntityManager, user: User, code: string): Promise<'app' | 'recovery' | null> {
+  async takeCode(em: EntityManager, user: User, code: string, recovery = true): Promise<'app' | 'recovery' | null> {
     await em.populate(user, ['totpSecret']);
     if (!user.totpSecret || !user.totpEnabledAt) return null;
     const step = acceptedTotpStep(openSecret(this.key, user.id, user.totpSecret), withoutBlanks(code), this.clock.now(), user.totpLastStep ?? null);
@@ -100,7 +135,7 @@ export class SecondFactorService {
       const taken = await em.nativeUpdate(User, { id: user.id, $or: [{ totpLastStep: null }, { totpLastStep: { $lt: step } }] }, { totpLastStep: step });
       return taken === 1 ? 'app' : null;
     }
-    const hash = recoveryCodeHash(code);
+    const hash = recovery ? recoveryCodeHash(code) : null;
     if (!hash) return null;
     return (await em.nativeUpdate(RecoveryCode, { user: user.id, codeHash: hash, usedAt: null }, { usedAt: this.clock.now() })) === 1 ? 'recovery' : null;
   }

@@ -65,6 +65,18 @@ export const settingsEn = {
     save: 'Save reminder settings',
     channel: { both: 'E-mail and in-app', email: 'E-mail only', 'in-app': 'In-app only', off: 'Off' },
   },
+  renewCodes: {
+    open: 'Make new recovery codes',
+    intro:
+      'New recovery codes replace all the earlier ones, used or not; the earlier ones stop working at once. Confirm with your password or with the code your app shows now.',
+    password: 'Your password',
+    code: 'Or the code your app shows now',
+    needOne: 'Enter your password or the code your app shows now.',
+    submit: 'Make new codes',
+    cancel: 'Cancel',
+    doneTitle: 'New recovery codes',
+    doneBody: 'The earlier recovery codes no longer work.',
+  },
 } as const;
 
 export const settingsDe: Widen<typeof settingsEn> = {
@@ -133,5 +145,17 @@ export const settingsDe: Widen<typeof settingsEn> = {
     noDigest: 'Keine Übersicht',
     save: 'Erinnerungen speichern',
     channel: { both: 'E-Mail und in der App', email: 'Nur E-Mail', 'in-app': 'Nur in der App', off: 'Aus' },
+  },
+  renewCodes: {
+    open: 'Neue Wiederherstellungscodes erstellen',
+    intro:
+      'Neue Wiederherstellungscodes ersetzen alle bisherigen, ob benutzt oder nicht; die bisherigen gelten ab sofort nicht mehr. Bestätige mit deinem Passwort oder mit dem Code, den deine App gerade anzeigt.',
+    password: 'Dein Passwort',
+    code: 'Oder der Code, den deine App gerade anzeigt',
+    needOne: 'Gib dein Passwort oder den Code ein, den deine App gerade anzeigt.',
+    submit: 'Neue Codes erstellen',
+    cancel: 'Abbrechen',
+    doneTitle: 'Neue Wiederherstellungscodes',
+    doneBody: 'Die bisherigen Wiederherstellungscodes gelten nicht mehr.',
   },
 };

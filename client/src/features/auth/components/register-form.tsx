@@ -10,11 +10,14 @@ import { FormActions } from '@/components/ui/form-actions';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useRegister } from '../api/session';
 import { useWords } from '@/lib/i18n';
+import { CheckEmail } from './check-email';
 
-export function RegisterForm({ onRegistered, signInHref }: { onRegistered: () => void; signInHref: string }) {
+/** `invitationToken`: the invitation link that led here; the confirmation e-mail carries it and confirming accepts it. */
+export function RegisterForm({ signInHref, invitationToken }: { signInHref: string; invitationToken?: string }) {
   const t = useWords();
   const register = useRegister();
   const [problem, setProblem] = useState<string | null>(null);
+  const [sentTo, setSentTo] = useState<string | null>(null);
   const form = useForm({
     mode: 'uncontrolled',
     initialValues: { displayName: '', email: '', password: '', timeZone: browserTimeZone() },
@@ -28,11 +31,16 @@ export function RegisterForm({ onRegistered, signInHref }: { onRegistered: () =>
     },
   });
 
+  if (sentTo) return <CheckEmail email={sentTo} withInvitation={!!invitationToken} />;
+
   return (
     <form
       onSubmit={form.onSubmit((values) => {
         setProblem(null);
-        register.mutate(values, { onSuccess: onRegistered, onError: (e) => setProblem(applyServerErrors(form, e)) });
+        register.mutate(
+          { ...values, ...(invitationToken ? { invitationToken } : {}) },
+          { onSuccess: () => setSentTo(values.email.trim()), onError: (e) => setProblem(applyServerErrors(form, e)) },
+        );
       })}
     >
       <Stack>

@@ -22,6 +22,28 @@ describe('SignInForm', () => {
     expect(onSignedIn).not.toHaveBeenCalled();
   });
 
+  it('a right password before the address is confirmed says so and offers to send the e-mail again', async () => {
+    const { fetchStub, calls } = stubFetch({
+      'GET /api/auth/csrf': () => ({ status: 200, body: { csrfToken: 't' } }),
+      'POST /api/auth/login': () => ({
+        status: 403,
+        body: { statusCode: 403, error: 'Forbidden', message: 'Confirm your e-mail address first.', reason: 'email-not-confirmed' },
+      }),
+      'POST /api/auth/confirm-email/resend': () => ({ status: 202, body: { message: 'sent' } }),
+    });
+    vi.stubGlobal('fetch', fetchStub);
+    const onSignedIn = vi.fn();
+    renderWithProviders(<SignInForm onSignedIn={onSignedIn} />);
+    await userEvent.type(screen.getByLabelText(/E-mail/), 'new@example.test');
+    await userEvent.type(screen.getByLabelText(/Password/), 'the right password');
+    await userEvent.click(screen.getByRole('button', { name: 'Sign in' }));
+    expect(await screen.findByRole('alert')).toHaveTextContent('Confirm your e-mail address first: open the link we sent when you registered.');
+    await userEvent.click(screen.getByRole('button', { name: 'Send the e-mail again' }));
+    expect(await screen.findByRole('status')).toHaveTextContent('a new link is on its way');
+    expect(calls.find((c) => c.path === '/api/auth/confirm-email/resend')?.body).toEqual({ email: 'new@example.test' });
+    expect(onSignedIn).not.toHaveBeenCalled();
+  });
+
   it('sends the credentials and reports success', async () => {
     const { fetchStub, calls } = stubFetch({
       'GET /api/auth/csrf': () => ({ status: 200, body: { csrfToken: 't' } }),

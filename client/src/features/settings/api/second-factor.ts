@@ -1,5 +1,12 @@
 import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
-import type { RecoveryCodesResponse, SecondFactorRemovalRequest, SecondFactorStatus, TotpConfirmRequest, TotpEnrolment } from '@broodsilk/shared';
+import type {
+  RecoveryCodesRenewalRequest,
+  RecoveryCodesResponse,
+  SecondFactorRemovalRequest,
+  SecondFactorStatus,
+  TotpConfirmRequest,
+  TotpEnrolment,
+} from '@broodsilk/shared';
 import { api } from '@/lib/api-client';
 import { queryRoots } from '@/lib/query-keys';
 
@@ -22,5 +29,12 @@ export const useConfirmEnrolment = () =>
 export const useRemoveSecondFactor = () =>
   useMutation({
     mutationFn: (body: SecondFactorRemovalRequest) => api.post<void>('/auth/second-factor/removal', body),
+    meta: { handlesErrors: true, invalidates: [queryRoots.auth] },
+  });
+
+/** New recovery codes, shown once; the count left in the status changes. */
+export const useRenewRecoveryCodes = () =>
+  useMutation({
+    mutationFn: (body: RecoveryCodesRenewalRequest) => api.post<RecoveryCodesResponse>('/auth/second-factor/recovery-codes', body),
     meta: { handlesErrors: true, invalidates: [queryRoots.auth] },
   });

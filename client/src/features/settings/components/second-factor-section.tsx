@@ -7,6 +7,7 @@ import { useSecondFactorStatus, useStartEnrolment } from '../api/second-factor';
 import { EnrolSecondFactor } from './enrol-second-factor';
 import { RecoveryCodes } from './recovery-codes';
 import { RemoveSecondFactorForm } from './remove-second-factor-form';
+import { RenewRecoveryCodes } from './renew-recovery-codes';
 import { useWords } from '@/lib/i18n';
 import { RECOVERY_CODE_COUNT } from '@broodsilk/shared';
 
@@ -17,8 +18,13 @@ export function SecondFactorSection() {
   const start = useStartEnrolment();
   const [enrolment, setEnrolment] = useState<TotpEnrolment | null>(null);
   const [codes, setCodes] = useState<string[] | null>(null);
+  const [renewed, setRenewed] = useState<string[] | null>(null);
 
   if (codes) return <RecoveryCodes codes={codes} onDone={() => setCodes(null)} />;
+  if (renewed) {
+    const notice = { title: t('page.settings.renewCodes.doneTitle'), body: t('page.settings.renewCodes.doneBody') };
+    return <RecoveryCodes codes={renewed} notice={notice} onDone={() => setRenewed(null)} />;
+  }
   if (!status.data) return null;
   if (enrolment) {
     return (
@@ -37,6 +43,7 @@ export function SecondFactorSection() {
       <Stack>
         <Text>{t('page.settings.secondFactor.enabled', { left: status.data.recoveryCodesLeft, total: RECOVERY_CODE_COUNT })}</Text>
         {status.data.required ? <Alert color="clay">{t('page.settings.secondFactor.adminKeep')}</Alert> : null}
+        <RenewRecoveryCodes onRenewed={setRenewed} />
         <RemoveSecondFactorForm />
       </Stack>
     );

@@ -1,6 +1,13 @@
 import { IsNotEmpty, IsString, MaxLength } from 'class-validator';
-import { TEXT_LIMITS, type SecondFactorRemovalRequest, type SecondFactorSignInRequest, type TotpConfirmRequest } from '@broodsilk/shared';
+import {
+  TEXT_LIMITS,
+  type RecoveryCodesRenewalRequest,
+  type SecondFactorRemovalRequest,
+  type SecondFactorSignInRequest,
+  type TotpConfirmRequest,
+} from '@broodsilk/shared';
 import { MAX_PASSWORD_LENGTH } from '../../password-policy';
+import { IsOptionalNonNull } from '../../../common/validators/is-optional-non-null.validator';
 
 const MAX_CODE_LENGTH = TEXT_LIMITS.secondFactorCode;
 
@@ -38,4 +45,17 @@ export class SecondFactorSignInDto implements SecondFactorSignInRequest {
   @IsNotEmpty({ message: 'Enter a code from your app or a recovery code.' })
   @MaxLength(MAX_CODE_LENGTH)
   code!: string;
+}
+
+/** Either the password or an app code; the service says which is missing when neither comes. */
+export class RecoveryCodesRenewalDto implements RecoveryCodesRenewalRequest {
+  @IsOptionalNonNull()
+  @IsString()
+  @MaxLength(MAX_PASSWORD_LENGTH)
+  password?: string;
+
+  @IsOptionalNonNull()
+  @IsString()
+  @MaxLength(MAX_CODE_LENGTH)
+  code?: string;
 }
