@@ -146,7 +146,7 @@ describe('Today shows each to-do to whom it concerns', () => {
     const todos = await page.getByTestId('account-todo').filter({ hasText: TITLE }).allTextContents();
     expect(todos).toEqual([
       `${TITLE}Terms version 2 waits for your acceptance`,
-      `${TITLE}Confirm the arrival of 3 young handed over to Tomasz Wierzba on ${longDate(daysAgo(0))}`,
+      `${TITLE}Confirm you received the 3 spiderlings handed over to you on ${longDate(daysAgo(0))}`,
       `${TITLE}Mira Okonkwo owes you €10.00`,
     ]);
     expect(mine(await card('card-pull-today'))).toBe(false);

@@ -47,7 +47,7 @@ export function AccountTodosCard({ todos }: { todos: Todos }) {
           key={h.entryId}
           projectId={h.projectId}
           title={h.projectTitle}
-          text={t('page.dashboard.todos.arrival', { count: h.count, party: h.partyName, date: h.date })}
+          text={t(h.mine ? 'page.account.todo.handOverMine' : 'page.account.todo.handOverFor', { count: h.count, party: h.partyName, date: h.date })}
           to={paths.projectAccount.href(h.projectId)}
         />
       ))}

@@ -102,7 +102,14 @@ describe('DashboardView', () => {
       {
         handOversToConfirm: [{ projectId: 'p1', projectTitle: 'Regalis pair', entryId: 'e1', date: '2026-11-20', count: 5, partyName: 'Tomasz', mine: false }],
       },
-      'Confirm the arrival of 5 young handed over to Tomasz on 20 Nov 2026',
+      'Confirm that Tomasz received the 5 spiderlings handed over on 20 Nov 2026',
+    ],
+    [
+      'a hand-over to me',
+      {
+        handOversToConfirm: [{ projectId: 'p1', projectTitle: 'Regalis pair', entryId: 'e1', date: '2026-11-20', count: 1, partyName: 'Tomasz', mine: true }],
+      },
+      'Confirm you received the spiderling handed over to you on 20 Nov 2026',
     ],
     [
       'money owed by me',
