@@ -172,6 +172,7 @@ describe('species catalogue', () => {
 
   it('an unknown id is 404, a malformed one 400', async () => {
     await http().get('/api/species/00000000-0000-4000-8000-000000000000').set('Authorization', keeper.bearer).expect(404);
-    await http().get('/api/species/not-a-uuid').set('Authorization', keeper.bearer).expect(400);
+    const malformed = await http().get('/api/species/not-a-uuid').set('Authorization', keeper.bearer).expect(400);
+    expect(malformed.body.message).toMatch(/does not name a record/);
   });
 });

@@ -1,4 +1,4 @@
-import { Body, Controller, Get, Param, ParseUUIDPipe, Post, Query } from '@nestjs/common';
+import { Body, Controller, Get, Param, Post, Query } from '@nestjs/common';
 import type { HandOverFormResponse, KeysetPage, LedgerEntryResponse } from '@broodsilk/shared';
 import { KeysetQueryDto } from '../common/paging/keyset-cursor';
 import { CurrentProject, ProjectRoles } from '../projects/project-roles.decorator';
@@ -9,6 +9,7 @@ import { EntriesService } from './entries.service';
 import { BalancesService } from './balances.service';
 import { CreateEntryDto } from './dto/create-entry.dto';
 import { ConfirmEntryDto } from './dto/confirm-entry.dto';
+import { RecordIdPipe } from '../common/pipes/record-id.pipe';
 
 /** The ledger is append-only: there is no PATCH or DELETE here on purpose. */
 @Controller('projects/:projectId/entries')
@@ -41,7 +42,7 @@ export class EntriesController {
   confirm(
     @CurrentProject() a: ProjectAccess,
     @CurrentUser() u: AuthUser,
-    @Param('entryId', ParseUUIDPipe) id: string,
+    @Param('entryId', RecordIdPipe) id: string,
     @Body() dto: ConfirmEntryDto,
   ): Promise<LedgerEntryResponse> {
     return this.entries.confirm(a, u, id, dto);

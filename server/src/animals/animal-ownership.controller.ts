@@ -1,8 +1,9 @@
-import { Controller, Get, HttpCode, Param, ParseUUIDPipe, Post } from '@nestjs/common';
+import { Controller, Get, HttpCode, Param, Post } from '@nestjs/common';
 import type { OwnershipRequest } from '@broodsilk/shared';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import type { AuthUser } from '../common/auth-user';
 import { AnimalOwnershipService } from './animal-ownership.service';
+import { RecordIdPipe } from '../common/pipes/record-id.pipe';
 
 @Controller('animals/ownership-requests')
 export class AnimalOwnershipController {
@@ -15,7 +16,7 @@ export class AnimalOwnershipController {
 
   @Post(':animalId/accept')
   @HttpCode(204)
-  accept(@CurrentUser() user: AuthUser, @Param('animalId', ParseUUIDPipe) animalId: string): Promise<void> {
+  accept(@CurrentUser() user: AuthUser, @Param('animalId', RecordIdPipe) animalId: string): Promise<void> {
     return this.ownership.accept(user, animalId);
   }
 }

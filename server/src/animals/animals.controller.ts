@@ -1,4 +1,4 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, ParseUUIDPipe, Patch, Post, Query } from '@nestjs/common';
+import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post, Query } from '@nestjs/common';
 import type { AnimalResponse, AnimalSummary, MaleClockRow, Paged } from '@broodsilk/shared';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import type { AuthUser } from '../common/auth-user';
@@ -6,6 +6,7 @@ import { AnimalsService } from './animals.service';
 import { CreateAnimalDto } from './dto/create-animal.dto';
 import { UpdateAnimalDto } from './dto/update-animal.dto';
 import { AnimalListQueryDto } from './dto/animal-list-query.dto';
+import { RecordIdPipe } from '../common/pipes/record-id.pipe';
 
 @Controller('animals')
 export class AnimalsController {
@@ -27,18 +28,18 @@ export class AnimalsController {
   }
 
   @Get(':id')
-  get(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<AnimalResponse> {
+  get(@CurrentUser() user: AuthUser, @Param('id', RecordIdPipe) id: string): Promise<AnimalResponse> {
     return this.animals.get(user, id);
   }
 
   @Patch(':id')
-  update(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: UpdateAnimalDto): Promise<AnimalResponse> {
+  update(@CurrentUser() user: AuthUser, @Param('id', RecordIdPipe) id: string, @Body() dto: UpdateAnimalDto): Promise<AnimalResponse> {
     return this.animals.update(user, id, dto);
   }
 
   @Delete(':id')
   @HttpCode(204)
-  remove(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<void> {
+  remove(@CurrentUser() user: AuthUser, @Param('id', RecordIdPipe) id: string): Promise<void> {
     return this.animals.remove(user, id);
   }
 }

@@ -1,4 +1,4 @@
-import { Body, Controller, Get, HttpCode, Param, ParseUUIDPipe, Post } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, Post } from '@nestjs/common';
 import type { AcceptInvitationResponse, InvitationPreview, InvitationResponse } from '@broodsilk/shared';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Public } from '../common/decorators/public.decorator';
@@ -8,6 +8,7 @@ import type { ProjectAccess } from '../projects/project-access.service';
 import { PerUserLimit } from '../common/per-user-limit/per-user-limit';
 import { InvitationsService } from './invitations.service';
 import { CreateInvitationDto } from './dto/create-invitation.dto';
+import { RecordIdPipe } from '../common/pipes/record-id.pipe';
 
 /** Invitations sent per keeper per hour; each one e-mails an outside address. */
 export const INVITATIONS_PER_HOUR = 30;
@@ -29,7 +30,7 @@ export class ProjectInvitationsController {
   approve(
     @CurrentUser() user: AuthUser,
     @CurrentProject() access: ProjectAccess,
-    @Param('invitationId', ParseUUIDPipe) invitationId: string,
+    @Param('invitationId', RecordIdPipe) invitationId: string,
   ): Promise<AcceptInvitationResponse> {
     return this.invitations.approveClaim(user, access, invitationId);
   }

@@ -1,4 +1,4 @@
-import { Controller, Delete, Get, Header, HttpCode, Param, ParseUUIDPipe, Post, StreamableFile } from '@nestjs/common';
+import { Controller, Delete, Get, Header, HttpCode, Param, Post, StreamableFile } from '@nestjs/common';
 import type { ProgressLinkResponse, ProgressView } from '@broodsilk/shared';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Public } from '../common/decorators/public.decorator';
@@ -7,6 +7,7 @@ import { PerAddressLimit } from '../common/per-user-limit/per-user-limit';
 import { CurrentProject, ProjectRoles } from '../projects/project-roles.decorator';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { ProgressLinksService } from './progress-links.service';
+import { RecordIdPipe } from '../common/pipes/record-id.pipe';
 
 /** Reads of progress pages and their photos per network address per 15 minutes (a page shows a few photos). */
 export const PROGRESS_READS = { what: 'progress page reads', limit: 600, windowMinutes: 15 };
@@ -20,7 +21,7 @@ export class MemberProgressLinksController {
   issue(
     @CurrentUser() user: AuthUser,
     @CurrentProject() access: ProjectAccess,
-    @Param('memberId', ParseUUIDPipe) memberId: string,
+    @Param('memberId', RecordIdPipe) memberId: string,
   ): Promise<ProgressLinkResponse> {
     return this.links.issueFor(access, memberId, user);
   }
@@ -28,7 +29,7 @@ export class MemberProgressLinksController {
   @Delete()
   @HttpCode(204)
   @ProjectRoles('owner')
-  revoke(@CurrentUser() user: AuthUser, @CurrentProject() access: ProjectAccess, @Param('memberId', ParseUUIDPipe) memberId: string): Promise<void> {
+  revoke(@CurrentUser() user: AuthUser, @CurrentProject() access: ProjectAccess, @Param('memberId', RecordIdPipe) memberId: string): Promise<void> {
     return this.links.revokeFor(access, memberId, user);
   }
 }
@@ -49,14 +50,14 @@ export class ProgressController {
   @Get(':token/photos/:photoId')
   @Header('Cache-Control', 'private, no-store')
   @PerAddressLimit(PROGRESS_READS)
-  photo(@Param('token') token: string, @Param('photoId', ParseUUIDPipe) photoId: string): Promise<StreamableFile> {
+  photo(@Param('token') token: string, @Param('photoId', RecordIdPipe) photoId: string): Promise<StreamableFile> {
     return this.links.photo(token, photoId, 'full');
   }
 
   @Get(':token/photos/:photoId/thumb')
   @Header('Cache-Control', 'private, no-store')
   @PerAddressLimit(PROGRESS_READS)
-  thumb(@Param('token') token: string, @Param('photoId', ParseUUIDPipe) photoId: string): Promise<StreamableFile> {
+  thumb(@Param('token') token: string, @Param('photoId', RecordIdPipe) photoId: string): Promise<StreamableFile> {
     return this.links.photo(token, photoId, 'thumb');
   }
 }

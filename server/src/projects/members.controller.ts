@@ -1,4 +1,4 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, ParseUUIDPipe, Post } from '@nestjs/common';
+import { Body, Controller, Delete, Get, HttpCode, Param, Post } from '@nestjs/common';
 import type { ProjectMemberResponse } from '@broodsilk/shared';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { AnyProjectMember, CurrentProject, ProjectRoles } from './project-roles.decorator';
@@ -6,6 +6,7 @@ import type { AuthUser } from '../common/auth-user';
 import type { ProjectAccess } from './project-access.service';
 import { MembersService } from './members.service';
 import { AddMemberDto } from './dto/add-member.dto';
+import { RecordIdPipe } from '../common/pipes/record-id.pipe';
 
 @Controller('projects/:projectId/members')
 export class MembersController {
@@ -26,7 +27,7 @@ export class MembersController {
   @Delete(':memberId')
   @HttpCode(204)
   @ProjectRoles('owner')
-  remove(@CurrentUser() user: AuthUser, @CurrentProject() access: ProjectAccess, @Param('memberId', ParseUUIDPipe) memberId: string): Promise<void> {
+  remove(@CurrentUser() user: AuthUser, @CurrentProject() access: ProjectAccess, @Param('memberId', RecordIdPipe) memberId: string): Promise<void> {
     return this.members.remove(user, access, memberId);
   }
 }

@@ -1,9 +1,10 @@
-import { Controller, Get, HttpCode, Param, ParseUUIDPipe, Post, Query } from '@nestjs/common';
+import { Controller, Get, HttpCode, Param, Post, Query } from '@nestjs/common';
 import { NOTIFICATION_PAGE_SIZE, type NotificationPage, type NotificationResponse } from '@broodsilk/shared';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import type { AuthUser } from '../common/auth-user';
 import { NotificationsService } from './notifications.service';
 import { NotificationListQueryDto } from './dto/notification-list-query.dto';
+import { RecordIdPipe } from '../common/pipes/record-id.pipe';
 
 /** One's own notifications only: every query is by the caller, so another user's id is a 404. */
 @Controller('notifications')
@@ -23,7 +24,7 @@ export class NotificationsController {
 
   @Post(':id/read')
   @HttpCode(200)
-  read(@CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<NotificationResponse> {
+  read(@CurrentUser() user: AuthUser, @Param('id', RecordIdPipe) id: string): Promise<NotificationResponse> {
     return this.notifications.markRead(user, id);
   }
 }

@@ -1,4 +1,4 @@
-import { Body, Controller, Get, Param, ParseUUIDPipe, Post, UploadedFile, UseInterceptors } from '@nestjs/common';
+import { Body, Controller, Get, Param, Post, UploadedFile, UseInterceptors } from '@nestjs/common';
 import type { BroodCountResponse, BroodCountsResponse, OpeningResponse, PhotoRef } from '@broodsilk/shared';
 import { AnyProjectMember, CurrentProject, ProjectFrom, ProjectRoles } from '../projects/project-roles.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
@@ -10,6 +10,7 @@ import { OpeningService } from './opening.service';
 import { BroodCountsService } from './brood-counts.service';
 import { OpeningDto } from './dto/opening.dto';
 import { BroodCountDto } from './dto/brood-count.dto';
+import { RecordIdPipe } from '../common/pipes/record-id.pipe';
 
 @Controller('sacs/:id')
 export class BroodController {
@@ -21,7 +22,7 @@ export class BroodController {
   @Get('opening')
   @AnyProjectMember()
   @ProjectFrom('sac')
-  opening(@CurrentProject() a: ProjectAccess, @Param('id', ParseUUIDPipe) id: string): Promise<OpeningResponse> {
+  opening(@CurrentProject() a: ProjectAccess, @Param('id', RecordIdPipe) id: string): Promise<OpeningResponse> {
     return this.openings.get(a, id);
   }
 
@@ -32,7 +33,7 @@ export class BroodController {
   open(
     @CurrentProject() a: ProjectAccess,
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', RecordIdPipe) id: string,
     @Body() dto: OpeningDto,
   ): Promise<OpeningResponse> {
     return this.openings.open(a, user, id, dto);
@@ -46,7 +47,7 @@ export class BroodController {
   photo(
     @CurrentProject() a: ProjectAccess,
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', RecordIdPipe) id: string,
     @UploadedFile() file?: { buffer?: Buffer },
   ): Promise<PhotoRef> {
     return this.openings.addPhoto(a, user, id, file);
@@ -55,7 +56,7 @@ export class BroodController {
   @Get('counts')
   @AnyProjectMember()
   @ProjectFrom('sac')
-  listCounts(@CurrentProject() a: ProjectAccess, @Param('id', ParseUUIDPipe) id: string): Promise<BroodCountsResponse> {
+  listCounts(@CurrentProject() a: ProjectAccess, @Param('id', RecordIdPipe) id: string): Promise<BroodCountsResponse> {
     return this.counts.list(a, id);
   }
 
@@ -65,7 +66,7 @@ export class BroodController {
   addCount(
     @CurrentProject() a: ProjectAccess,
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', RecordIdPipe) id: string,
     @Body() dto: BroodCountDto,
   ): Promise<BroodCountResponse> {
     return this.counts.add(a, user, id, dto);

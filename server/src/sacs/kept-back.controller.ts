@@ -1,4 +1,4 @@
-import { Body, Controller, Get, Param, ParseUUIDPipe, Post } from '@nestjs/common';
+import { Body, Controller, Get, Param, Post } from '@nestjs/common';
 import type { KeptBackBatchResponse } from '@broodsilk/shared';
 import { AnyProjectMember, CurrentProject, ProjectFrom, ProjectRoles } from '../projects/project-roles.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
@@ -6,6 +6,7 @@ import type { AuthUser } from '../common/auth-user';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { KeptBackService } from './kept-back.service';
 import { KeptBackEndDto, KeptBackLogDto } from './dto/kept-back.dto';
+import { RecordIdPipe } from '../common/pipes/record-id.pipe';
 
 /** The eggs kept back at a sac's opening: members read; owner and caretakers roll and check; the owner ends the batch, as the opening. */
 @Controller('sacs/:id/kept-back')
@@ -15,7 +16,7 @@ export class KeptBackController {
   @Get()
   @AnyProjectMember()
   @ProjectFrom('sac')
-  get(@CurrentProject() a: ProjectAccess, @Param('id', ParseUUIDPipe) id: string): Promise<KeptBackBatchResponse> {
+  get(@CurrentProject() a: ProjectAccess, @Param('id', RecordIdPipe) id: string): Promise<KeptBackBatchResponse> {
     return this.keptBack.get(a, id);
   }
 
@@ -25,7 +26,7 @@ export class KeptBackController {
   log(
     @CurrentProject() a: ProjectAccess,
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', RecordIdPipe) id: string,
     @Body() dto: KeptBackLogDto,
   ): Promise<KeptBackBatchResponse> {
     return this.keptBack.log(a, user, id, dto);
@@ -37,7 +38,7 @@ export class KeptBackController {
   end(
     @CurrentProject() a: ProjectAccess,
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', RecordIdPipe) id: string,
     @Body() dto: KeptBackEndDto,
   ): Promise<KeptBackBatchResponse> {
     return this.keptBack.end(a, user, id, dto);

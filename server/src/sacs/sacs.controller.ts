@@ -1,4 +1,4 @@
-import { Body, Controller, Get, Param, ParseUUIDPipe, Patch, Post, Put } from '@nestjs/common';
+import { Body, Controller, Get, Param, Patch, Post, Put } from '@nestjs/common';
 import type { IncubatorRightsResponse, SacResponse } from '@broodsilk/shared';
 import { AnyProjectMember, CurrentProject, ProjectFrom, ProjectRoles } from '../projects/project-roles.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
@@ -9,6 +9,7 @@ import { CreateSacDto } from './dto/create-sac.dto';
 import { UpdateSacDto } from './dto/update-sac.dto';
 import { PullSacDto } from './dto/pull-sac.dto';
 import { IncubatorRightsDto } from './dto/incubator-rights.dto';
+import { RecordIdPipe } from '../common/pipes/record-id.pipe';
 
 @Controller('projects/:projectId/sacs')
 export class ProjectSacsController {
@@ -46,7 +47,7 @@ export class SacsController {
   @Get(':id')
   @AnyProjectMember()
   @ProjectFrom('sac')
-  get(@CurrentProject() a: ProjectAccess, @CurrentUser() user: AuthUser, @Param('id', ParseUUIDPipe) id: string): Promise<SacResponse> {
+  get(@CurrentProject() a: ProjectAccess, @CurrentUser() user: AuthUser, @Param('id', RecordIdPipe) id: string): Promise<SacResponse> {
     return this.sacs.get(a, user, id);
   }
 
@@ -56,7 +57,7 @@ export class SacsController {
   update(
     @CurrentProject() a: ProjectAccess,
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', RecordIdPipe) id: string,
     @Body() dto: UpdateSacDto,
   ): Promise<SacResponse> {
     return this.sacs.update(a, user, id, dto);
@@ -69,7 +70,7 @@ export class SacsController {
   pull(
     @CurrentProject() a: ProjectAccess,
     @CurrentUser() user: AuthUser,
-    @Param('id', ParseUUIDPipe) id: string,
+    @Param('id', RecordIdPipe) id: string,
     @Body() dto: PullSacDto,
   ): Promise<SacResponse> {
     return this.sacs.pull(a, user, id, dto);
