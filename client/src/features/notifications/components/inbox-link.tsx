@@ -1,4 +1,4 @@
-import { Badge, Button } from '@mantine/core';
+import { Badge, Box, Button } from '@mantine/core';
 import { NavLink as RouterNavLink } from 'react-router';
 import { paths } from '@/config/paths';
 import { useUnreadCount } from '../api/notifications';
@@ -24,7 +24,13 @@ export function InboxLink() {
         ) : null
       }
     >
-      {t('page.notifications.inbox')}
+      {/* On a phone the header has room for the badge only; the word comes back from `xs` up. */}
+      <Box component="span" hiddenFrom="xs" aria-hidden>
+        ✉
+      </Box>
+      <Box component="span" visibleFrom="xs">
+        {t('page.notifications.inbox')}
+      </Box>
     </Button>
   );
 }
