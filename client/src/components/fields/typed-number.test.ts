@@ -11,6 +11,13 @@ describe('readTypedNumber', () => {
     expect(readTypedNumber('1,500', '.')).toMatchObject({ kind: 'invalid', message: expect.stringContaining('without a comma') });
   });
 
+  it('asks instead of guessing where a point could group thousands (German writes 1.250 for 1250, Intl.NumberFormat de-DE)', () => {
+    expect(new Intl.NumberFormat('de-DE').format(1250)).toBe('1.250');
+    expect(readTypedNumber('1.250', ',')).toMatchObject({ kind: 'invalid', message: expect.stringContaining('thousands point') });
+    expect(readTypedNumber('26.5', ',')).toEqual({ kind: 'number', value: 26.5 });
+    expect(readTypedNumber('1.250', '.')).toEqual({ kind: 'number', value: 1.25 });
+  });
+
   it('refuses what is not a number instead of dropping characters', () => {
     expect(readTypedNumber('12 cm', '.')).toMatchObject({ kind: 'invalid' });
     expect(readTypedNumber('1e3', '.')).toMatchObject({ kind: 'invalid' });

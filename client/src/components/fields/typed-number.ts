@@ -24,6 +24,9 @@ export function readTypedNumber(text: string, decimalSeparator = browserDecimalS
   if (typed === '') return { kind: 'empty' };
   if (!PLAIN.test(typed)) return { kind: 'invalid', message: words('page.shell.fields.notANumber', { typed, example: formatNumber(12.5) }) };
   if (typed.includes(',') && decimalSeparator !== ',') return { kind: 'invalid', message: words('page.shell.fields.noComma') };
+  // Where decimals take a comma, "1.250" is usually one thousand two hundred and fifty: asked, never guessed.
+  if (decimalSeparator === ',' && /^[+-]?\d{1,3}\.\d{3}$/.test(typed))
+    return { kind: 'invalid', message: words('page.shell.fields.pointOrThousands', { typed }) };
   return { kind: 'number', value: Number(typed.replace(',', '.')) };
 }
 

@@ -47,6 +47,8 @@ export const shellEn = {
     dateBeforeEarliest: '{{date}} is before {{earliest}}, the earliest date this can be.',
     notANumber: '“{{typed}}” is not a number. Write digits only, e.g. {{example}}.',
     noComma: 'Write the number without a comma; use a point for decimals, e.g. 12.5.',
+    pointOrThousands:
+      '“{{typed}}” could be a whole number with a thousands point or a decimal. Write decimals with a comma (e.g. 1,25) and whole numbers without a point (e.g. 1250).',
     wholeNumber: 'Give a whole number.',
     decimals_one: 'Give at most {{count}} decimal place.',
     decimals_other: 'Give at most {{count}} decimal places.',
@@ -105,6 +107,8 @@ export const shellDe: Widen<typeof shellEn> = {
     dateBeforeEarliest: 'Der {{date}} liegt vor dem {{earliest}}, dem frühesten möglichen Datum.',
     notANumber: '„{{typed}}“ ist keine Zahl. Schreib nur Ziffern, z. B. {{example}}.',
     noComma: 'Schreib die Zahl ohne Komma; Dezimalstellen mit Punkt, z. B. 12.5.',
+    pointOrThousands:
+      '„{{typed}}“ kann eine ganze Zahl mit Tausenderpunkt oder eine Dezimalzahl sein. Schreib Dezimalstellen mit Komma (z. B. 1,25) und ganze Zahlen ohne Punkt (z. B. 1250).',
     wholeNumber: 'Gib eine ganze Zahl an.',
     decimals_one: 'Gib höchstens {{count}} Nachkommastelle an.',
     decimals_other: 'Gib höchstens {{count}} Nachkommastellen an.',
