@@ -8,6 +8,7 @@ import {
   type KeptBackBatchResponse,
   type SacResponse,
   type SharesResponse,
+  wordsFor,
 } from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper, type SignedIn } from './support/users';
@@ -194,8 +195,12 @@ describe('shares from an estimated count', () => {
     // Statements say "about" and provisional, in the CSV and the PDF.
     const csv = await http().get(`/api/projects/${s.projectId}/statements/${s.tomaszId}.csv`).set('Authorization', s.tomasz.bearer).expect(200);
     const rows = Papa.parse<Record<string, string>>(csv.text.trimEnd(), { header: true }).data;
-    expect(rows.find((r) => r.kind === 'sac')).toMatchObject({ count: '500', estimated: 'yes' });
-    expect(rows.find((r) => r.kind === 'share')!.estimated).toBe('yes');
+    // The CSV is written in the reader's words (statementCsv in the catalogue).
+    const en = wordsFor('en');
+    const [kind, count, estimated] = (['kind', 'count', 'estimated'] as const).map((c) => en(`statementCsv.column.${c}`));
+    const sacRow = rows.find((r) => r[kind!] === en('statementCsv.line.sac'))!;
+    expect([sacRow[count!], sacRow[estimated!]]).toEqual(['500', en('statementCsv.yes')]);
+    expect(rows.find((r) => r[kind!] === en('statementCsv.line.share'))![estimated!]).toBe(en('statementCsv.yes'));
     const pdf = await http()
       .get(`/api/projects/${s.projectId}/statements/${s.tomaszId}.pdf`)
       .set('Authorization', s.tomasz.bearer)

@@ -3,6 +3,8 @@
  * before the server refuses; the server's DTOs take their @MaxLength from here, so both sides hold one number.
  */
 export const TEXT_LIMITS = Object.freeze({
+  /** A keyset page's cursor (`after`), as the server handed it out; not typed by a person. */
+  pageCursor: 200,
   /** An animal's label or enclosure. */
   animalLabel: 60,
   enclosure: 60,

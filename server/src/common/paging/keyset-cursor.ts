@@ -1,14 +1,14 @@
 import { BadRequestException } from '@nestjs/common';
 import { Type } from 'class-transformer';
 import { IsInt, IsString, Matches, Max, MaxLength, Min } from 'class-validator';
-import { KEYSET_DEFAULT_LIMIT, KEYSET_MAX_LIMIT, type KeysetQuery } from '@broodsilk/shared';
+import { KEYSET_DEFAULT_LIMIT, KEYSET_MAX_LIMIT, TEXT_LIMITS, type KeysetQuery } from '@broodsilk/shared';
 import { IsOptionalNonNull } from '../validators/is-optional-non-null.validator';
 
 /** `?after=&limit=` of a keyset-paged list. The cursor's content is checked by the list that reads it. */
 export class KeysetQueryDto implements KeysetQuery {
   @IsOptionalNonNull()
   @IsString({ message: 'after must be the nextCursor of the page before.' })
-  @MaxLength(200, { message: 'after must be the nextCursor of the page before.' })
+  @MaxLength(TEXT_LIMITS.pageCursor, { message: 'after must be the nextCursor of the page before.' })
   @Matches(/^[A-Za-z0-9_-]+$/, { message: 'after must be the nextCursor of the page before.' })
   after?: string;
 
