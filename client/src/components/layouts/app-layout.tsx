@@ -54,7 +54,7 @@ export function AppLayout({ nav, userName, onSignOut, settingsHref, headerExtra,
                     fw={600}
                     size="sm"
                     data-testid="shell-user"
-                    maw={{ base: 110, sm: 260 }}
+                    maw={{ base: 80, sm: 260 }}
                     truncate="end"
                     title={userName}
                     style={{ background: 'none', border: 0, cursor: 'pointer', color: 'inherit', whiteSpace: 'nowrap' }}
