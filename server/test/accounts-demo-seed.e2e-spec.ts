@@ -40,6 +40,8 @@ describe('partner updates in the demo', () => {
     expect(updates).toHaveLength(DEMO_PARTNER_UPDATES);
     expect(inbox.unread).toBeGreaterThanOrEqual(DEMO_PARTNER_UPDATES);
     expect(updates.every((n) => n.subject !== null && n.projectId !== null && n.body.length > 0)).toBe(true);
+    // Each update is told from its event's facts: no count of nothing, no stage left out.
+    expect(updates.map((n) => n.body).filter((b) => /\b0 young\b|alive at in\b/.test(b))).toEqual([]);
     const hers = (await api(t.app).get('/api/notifications').set('Authorization', mira.bearer).expect(200)).body as NotificationPage;
     expect(hers.items.filter((n) => n.kind === 'partner-update')).toEqual([]);
   });

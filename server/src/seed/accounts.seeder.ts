@@ -49,6 +49,8 @@ export const seedAccounts: FeatureSeeder = async (ctx) => {
       subjectType: 'ledger-entry',
       subjectId: row.id,
       summary,
+      // The same data the entries service writes, so partner updates read the count from it.
+      data: { kind: r.kind, count: r.count ?? null, amountMinor: r.amountMinor ?? null },
       at,
       audience: 'partners',
     });

@@ -173,6 +173,8 @@ export const seedSacs: FeatureSeeder = async (ctx) => {
         }),
         layDate: bLaid,
       }),
+      // The same data the brood-counts service writes, so partner updates read the count from it.
+      { stage, alive, lost },
     );
   }
 };

@@ -50,6 +50,8 @@ describe('inbox', () => {
     const link = await screen.findByRole('link', { name: 'Roll due: Spring pair' });
     expect(link).toHaveAttribute('href', '/sacs/s1');
     expect(screen.getByText(/1 unread/)).toBeInTheDocument();
+    // A date inside the stored sentence reads as the interface writes dates, not as its ISO 8601 value.
+    expect(screen.getByText('The sac laid 1 Nov 2026 is due for its next roll.')).toBeInTheDocument();
     fireEvent.click(link);
     await waitFor(() => expect(calls.some((c) => c.method === 'POST' && c.path === '/api/notifications/n1/read')).toBe(true));
   });

@@ -3,7 +3,7 @@ import { Link } from 'react-router';
 import { label, NOTIFICATION_PAGE_SIZE } from '@broodsilk/shared';
 import { words } from '@/lib/i18n';
 import { Pager } from '@/components/ui/pager';
-import { formatInstant } from '@/lib/dates';
+import { formatInstant, withReadableDates } from '@/lib/dates';
 import { useMarkAllRead, useMarkRead, useNotificationPage } from '../api/notifications';
 import { subjectHref } from '../utils/subject-href';
 import { useWords } from '@/lib/i18n';
@@ -33,10 +33,10 @@ export function NotificationList({ page, onPage, timeZone }: { page: number; onP
             {label(words, 'notificationKind', n.kind)} · {formatInstant(n.createdAt, timeZone)}
           </Text>
           <Anchor component={Link} to={subjectHref(n)} fw={n.readAt ? 400 : 700} onClick={() => !n.readAt && markRead.mutate(n.id)}>
-            {n.title}
+            {withReadableDates(n.title)}
           </Anchor>
           <Text size="sm" style={{ whiteSpace: 'pre-line' }}>
-            {n.body}
+            {withReadableDates(n.body)}
           </Text>
         </Card>
       ))}
