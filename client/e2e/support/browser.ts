@@ -53,7 +53,11 @@ export async function signIn(page: Page, email: string, password = DEMO_PASSWORD
   await page.getByLabel(/^E-mail/).fill(email);
   await page.getByLabel(/^Password/).fill(password);
   await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.getByTestId('shell-user').waitFor();
+  // Either the shell appears or the form says why not; a refusal fails here with its own words.
+  const shell = page.getByTestId('shell-user');
+  const refusal = page.getByRole('alert').filter({ hasText: /\S/ });
+  await shell.or(refusal).first().waitFor();
+  if (!(await shell.isVisible())) throw new Error(`sign-in as ${email} refused: ${await refusal.first().textContent()}`);
 }
 
 export async function screenshot(page: Page, name: string): Promise<string> {
