@@ -33,6 +33,14 @@ describe('architecture and client lint rules are on', { timeout: 30_000 }, () =>
     expect(await lint('client/src/lib/unkeyed-query.ts')).toContain('@tanstack/query/exhaustive-deps');
   });
 
+  it('words typed into the markup instead of read from the catalogue are an error (eslint-plugin-i18next)', async () => {
+    expect(await lint('client/src/components/inline-words.tsx')).toEqual(['i18next/no-literal-string', 'i18next/no-literal-string']);
+  });
+
+  it('words from the catalogue, codes and symbols pass', async () => {
+    expect(await lint('client/src/components/catalogue-words.tsx')).toEqual([]);
+  });
+
   it('a clean file passes', async () => {
     expect(await lint('client/src/lib/clean.ts')).toEqual([]);
   });

@@ -25,11 +25,12 @@ export function BroodsilkMark({ size = 28 }: { size?: number }) {
 }
 
 export function BroodsilkLogo() {
+  const t = useWords();
   return (
     <Group gap={8} wrap="nowrap">
       <BroodsilkMark />
       <Text fw={700} size="lg" className="tone-ok">
-        Broodsilk
+        {t('page.shell.brand')}
       </Text>
     </Group>
   );

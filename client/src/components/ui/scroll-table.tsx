@@ -1,5 +1,6 @@
 import { Table, Text } from '@mantine/core';
 import type { ReactNode } from 'react';
+import { useWords } from '@/lib/i18n';
 
 /** Narrower than this, a phone (390 px less padding) cannot show the whole table. */
 const PHONE_WIDTH = 340;
@@ -11,11 +12,12 @@ const PHONE_WIDTH = 340;
  * "scrollable-region-focusable" on a phone).
  */
 export function ScrollTable({ minWidth, label, children }: { minWidth: number; label: string; children: ReactNode }) {
+  const t = useWords();
   return (
     <>
       {minWidth > PHONE_WIDTH && (
         <Text size="xs" c="dimmed" hiddenFrom="sm" aria-hidden>
-          Swipe the table sideways to see all its columns.
+          {t('page.shell.swipeTable')}
         </Text>
       )}
       <Table.ScrollContainer type="native" minWidth={minWidth} tabIndex={0} role="region" aria-label={label}>
