@@ -31,6 +31,13 @@ export async function installJobQueues(ownerUrl: string): Promise<void> {
       await boss.createQueue(name, { name, ...settings });
       await boss.updateQueue(name, { name, ...settings });
     }
+    // The planner looks up a subject's pending reminders by `plannedFor` (JobsService.pendingFor).
+    await boss
+      .getDb()
+      .executeSql(
+        `create index if not exists job_planned_for on ${JOBS_SCHEMA}.job (name, (data->>'plannedFor')) where state in ('created', 'retry', 'active')`,
+        [],
+      );
   } finally {
     await boss.stop({ graceful: false, wait: true });
   }

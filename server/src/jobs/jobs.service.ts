@@ -22,6 +22,13 @@ export interface JobKind<T> {
   handle(job: PgBoss.Job<T>): Promise<void>;
 }
 
+export interface PendingJob {
+  id: string;
+  plannedFor: string;
+  singletonKey: string | null;
+  running: boolean;
+}
+
 export interface SendJob {
   startAfter?: Date;
   /** With a `short` queue policy: one waiting job per key; a second send with the key is dropped (null). */
@@ -38,6 +45,9 @@ export class JobsService implements OnApplicationBootstrap, OnApplicationShutdow
   private readonly logger = new Logger(JobsService.name);
   private readonly kinds = new Map<string, JobKind<never>>();
   private boss: PgBoss | null = null;
+  private markRunning!: () => void;
+  /** Settles once pg-boss runs: work started at bootstrap by other providers waits on it. */
+  private readonly runningSignal = new Promise<void>((resolve) => (this.markRunning = resolve));
 
   constructor(@Inject(databaseConfig.KEY) private readonly db: ConfigType<typeof databaseConfig>) {}
 
@@ -87,6 +97,12 @@ export class JobsService implements OnApplicationBootstrap, OnApplicationShutdow
       this.working.add(kind.queue);
     }
     this.boss = boss;
+    this.markRunning();
+  }
+
+  /** Resolves once the queue runs (Nest may bootstrap another module's providers first). */
+  whenRunning(): Promise<void> {
+    return this.runningSignal;
   }
 
   async onApplicationShutdown(): Promise<void> {
@@ -111,15 +127,25 @@ export class JobsService implements OnApplicationBootstrap, OnApplicationShutdow
     if (ids.length) await this.started().cancel(queue, ids, { db: inTransaction(tx) });
   }
 
-  /** Jobs of a queue not yet done (waiting, retrying or running) whose data has `field` = `value`, read inside `tx`. */
-  async pending(tx: EntityManager, queue: string, field: string, value: string): Promise<{ id: string; singletonKey: string | null; running: boolean }[]> {
-    return tx
-      .getConnection()
-      .execute<{ id: string; singletonKey: string | null; running: boolean }[]>(
-        `select id, singleton_key as "singletonKey", state = 'active' as running from ${JOBS_SCHEMA}.job where name = ? and state in ('created', 'retry', 'active') and data->>? = ?`,
-        [queue, field, value],
-        'all',
-        tx.getTransactionContext(),
-      );
+  /** Queues many jobs inside `tx` in one statement; one whose singleton key is already waiting is dropped. */
+  async sendMany<T extends object>(tx: EntityManager, queue: string, jobs: (SendJob & { data: T })[]): Promise<void> {
+    if (!jobs.length) return;
+    const rows = jobs.map((j) => ({ name: queue, data: j.data, startAfter: j.startAfter?.toISOString(), singletonKey: j.singletonKey }));
+    await this.started().insert(rows, { db: inTransaction(tx) });
+  }
+
+  /**
+   * Jobs of a queue not yet done (waiting, retrying or running) whose data's `plannedFor` is one
+   * of `subjects`, read inside `tx` (through the partial index `job_planned_for`).
+   */
+  async pendingFor(tx: EntityManager, queue: string, subjects: string[]): Promise<PendingJob[]> {
+    if (!subjects.length) return [];
+    return tx.getConnection().execute<PendingJob[]>(
+      `select id, data->>'plannedFor' as "plannedFor", singleton_key as "singletonKey", state = 'active' as running from ${JOBS_SCHEMA}.job
+        where name = ? and state in ('created', 'retry', 'active') and data->>'plannedFor' in (${subjects.map(() => '?').join(', ')})`,
+      [queue, ...subjects],
+      'all',
+      tx.getTransactionContext(),
+    );
   }
 }

@@ -61,10 +61,14 @@ export class ReminderPlanner implements OnModuleInit, OnApplicationBootstrap, Ev
    * Catches up at start: records written without the app (the demo seed, a restored backup) get
    * their plan. Safe to repeat and to run on several instances: a plan already queued is kept.
    */
-  async onApplicationBootstrap(): Promise<void> {
+  onApplicationBootstrap(): void {
     if (!this.jobs.plannedWorkersOn) return;
-    const planned = await this.planAll();
-    this.logger.log(`reminders planned at start: ${planned.sacs} sacs, ${planned.animals} animals, ${planned.users} digests`);
+    // In the background, once the queue runs: the app serves meanwhile (a big collection takes a while).
+    void this.jobs
+      .whenRunning()
+      .then(() => this.planAll())
+      .then((n) => this.logger.log(`reminders planned at start: ${n.sacs} sacs, ${n.animals} animals, ${n.users} digests`))
+      .catch((e: Error) => this.logger.error(`planning reminders at start failed: ${e.message}`));
   }
 
   async planAll(batch = 200): Promise<{ sacs: number; animals: number; users: number }> {
@@ -122,57 +126,63 @@ export class ReminderPlanner implements OnModuleInit, OnApplicationBootstrap, Ev
   async replanSacs(tx: EntityManager, ids: string[]): Promise<void> {
     const now = this.clock.now();
     const facts = await sacFactsOf(tx, ids);
-    const found = new Set(facts.map((f) => f.id));
-    for (const f of facts) await this.schedule(tx, `sac:${f.id}`, planSacReminders(f, now));
-    for (const id of ids) if (!found.has(id)) await this.schedule(tx, `sac:${id}`, []);
+    const plans = new Map<string, PlannedReminder[]>(ids.map((id) => [`sac:${id}`, []]));
+    for (const f of facts) plans.set(`sac:${f.id}`, planSacReminders(f, now));
+    await this.schedule(tx, plans);
   }
 
   async replanAnimals(tx: EntityManager, ids: string[]): Promise<void> {
     const now = this.clock.now();
     const facts = await animalFactsOf(tx, ids, now);
-    const found = new Set(facts.map((f) => f.id));
-    for (const f of facts) await this.schedule(tx, `animal:${f.id}`, planAnimalReminders(f, now));
-    for (const id of ids) if (!found.has(id)) await this.schedule(tx, `animal:${id}`, []);
+    const plans = new Map<string, PlannedReminder[]>(ids.map((id) => [`animal:${id}`, []]));
+    for (const f of facts) plans.set(`animal:${f.id}`, planAnimalReminders(f, now));
+    await this.schedule(tx, plans);
   }
 
   async replanDigests(tx: EntityManager, userIds: string[]): Promise<void> {
     const now = this.clock.now();
+    const plans = new Map<string, PlannedReminder[]>();
     for (const r of await digestRecipients(tx, userIds)) {
       const next = planDigest(r, now);
-      await this.schedule(tx, `digest:${r.userId}`, next ? [next] : []);
+      plans.set(`digest:${r.userId}`, next ? [next] : []);
     }
+    await this.schedule(tx, plans);
   }
 
   /**
-   * Makes the pending jobs of `plannedFor` match `plan`: waiting jobs that left it are cancelled,
+   * Makes the pending jobs of each subject match its plan: waiting jobs that left it are cancelled,
    * new reminders are queued; a running job is left to finish, and what was sent stays sent. The
    * jobs are read before `reminder_sent`: a job that finishes in between has committed its key.
+   * A fixed number of statements for any number of subjects.
    */
-  private async schedule(tx: EntityManager, plannedFor: string, plan: PlannedReminder[]): Promise<void> {
-    const pending = await this.jobs.pending(tx, REMINDER_QUEUE, 'plannedFor', plannedFor);
-    const sent = plan.length
-      ? await sentKeys(
-          tx,
-          plan.map((r) => r.key),
-        )
-      : new Set<string>();
-    const wanted = new Map(plan.filter((r) => !sent.has(r.key)).map((r) => [singletonKey(r), r]));
-    const obsolete = pending.filter((j) => !j.running && (!j.singletonKey || !wanted.has(j.singletonKey)));
+  private async schedule(tx: EntityManager, plans: Map<string, PlannedReminder[]>): Promise<void> {
+    if (!plans.size) return;
+    const pending = await this.jobs.pendingFor(tx, REMINDER_QUEUE, [...plans.keys()]);
+    const sent = await sentKeys(
+      tx,
+      [...plans.values()].flat().map((r) => r.key),
+    );
+    const wanted = new Map<string, { plannedFor: string; r: PlannedReminder }>();
+    for (const [plannedFor, plan] of plans) for (const r of plan) if (!sent.has(r.key)) wanted.set(singletonKey(r), { plannedFor, r });
+    const obsolete = pending.filter((j) => !j.running && (!j.singletonKey || wanted.get(j.singletonKey)?.plannedFor !== j.plannedFor));
     await this.jobs.cancel(
       tx,
       REMINDER_QUEUE,
       obsolete.map((j) => j.id),
     );
     const queued = new Set(pending.map((j) => j.singletonKey));
-    for (const [key, r] of wanted) {
-      if (queued.has(key)) continue;
-      const job: ReminderJob = { plannedFor, key: r.key, sendAt: r.sendAt.toISOString() };
-      await this.jobs.send(tx, REMINDER_QUEUE, job, { startAfter: r.sendAt, singletonKey: key });
-    }
+    await this.jobs.sendMany<ReminderJob>(
+      tx,
+      REMINDER_QUEUE,
+      [...wanted]
+        .filter(([key]) => !queued.has(key))
+        .map(([key, { plannedFor, r }]) => ({ data: { plannedFor, key: r.key, sendAt: r.sendAt.toISOString() }, startAfter: r.sendAt, singletonKey: key })),
+    );
   }
 }
 
 async function sentKeys(tx: EntityManager, keys: string[]): Promise<Set<string>> {
+  if (!keys.length) return new Set();
   const rows = await tx
     .getConnection()
     .execute<{ key: string }[]>(`select key from reminder_sent where key in (${keys.map(() => '?').join(', ')})`, keys, 'all', tx.getTransactionContext());
