@@ -181,7 +181,7 @@ describe('the catalogue (i18next, en and de)', () => {
     for (const lng of LANGUAGES) {
       const t = strict(lng);
       expect(shippingCautions(t).at(-1)).toMatch(lng === 'en' ? /local law/ : /örtliches Recht/);
-      for (const key of ['pairing', 'opening', 'sale', 'crossBorder', 'venom'])
+      for (const key of ['pairing', 'opening', 'openingHairs', 'openingNoHairs', 'sale', 'crossBorder', 'venom'])
         expect(t(`safety.${key}`)).toMatch(lng === 'en' ? /[Ll]ocal law/ : /[Öö]rtliche[sm]? Recht/);
     }
   });

@@ -214,6 +214,10 @@ export const de: Catalogue = {
       'Lege das Werkzeug zum Trennen des Paares bereit, bevor du beginnst (ein weicher Pinsel, eine lange Pinzette, ein Stück Karton); trenne die Tiere nie mit den Händen. Folge örtlichem Recht und fachkundiger Praxis.',
     opening:
       'Öffne den Kokon auf einem Tablett mit bereitliegendem Werkzeug. Bei Arten mit Brennhaaren trage Handschuhe und Schutzbrille: Mutter und Jungtiere verlieren Haare auf dem Kokon. Folge örtlichem Recht und fachkundiger Praxis.',
+    openingHairs:
+      'Öffne den Kokon auf einem Tablett mit bereitliegendem Werkzeug und trage Handschuhe und Schutzbrille: Diese Art hat Brennhaare, und Mutter und Jungtiere verlieren sie auf dem Kokon. Folge örtlichem Recht und fachkundiger Praxis.',
+    openingNoHairs:
+      'Öffne den Kokon auf einem Tablett mit bereitliegendem Werkzeug und fasse die Jungtiere nur mit Werkzeug an, nie mit bloßen Händen: Sie sind schnell. Folge örtlichem Recht und fachkundiger Praxis.',
     sale: 'Der Versand lebender Tiere ist geregelt: Prüfe, ob der Versanddienst sie annimmt, verpacke passend zum Wetter und prüfe die Handelslistung dieser Art (CITES und nationale Listen), bevor du verkaufst oder verschickst. Örtliches Recht geht vor.',
     saleListed: 'Diese Art ist gelistet ({{listing}}): Verkauf oder Versand brauchen die Papiere, die das Gesetz verlangt.',
     crossBorder:

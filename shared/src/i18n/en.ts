@@ -195,6 +195,10 @@ export const en = {
       'Have the tools to part the pair within reach before you start (a soft brush, a long pair of tongs, a piece of card); never separate them with your hands. Follow local law and licensed practice.',
     opening:
       'Open the sac on a tray with the tools ready. For species with urticating hairs wear gloves and eye protection: the mother and the young shed hairs on the sac. Follow local law and licensed practice.',
+    openingHairs:
+      'Open the sac on a tray with the tools ready, and wear gloves and eye protection: this species has urticating hairs, and the mother and the young shed them on the sac. Follow local law and licensed practice.',
+    openingNoHairs:
+      'Open the sac on a tray with the tools ready and handle the young with tools, never bare hands: they are fast. Follow local law and licensed practice.',
     sale: 'Shipping live animals is regulated: check the carrier accepts them, pack for the weather, and check this species’ trade listing (CITES and national lists) before you sell or send. Local law comes first.',
     saleListed: 'This species is listed ({{listing}}): a sale or shipment needs the papers the law asks for.',
     crossBorder:

@@ -18,3 +18,11 @@ export const groupCaution = (t: Words, group: SpeciesGroup): string => `${t(`saf
 
 /** The heat-source caution shown next to incubator settings, in English (stored API field). */
 export const INCUBATOR_CAUTION = wordsFor('en')('safety.heatSource');
+
+/**
+ * The caution at the opening of a sac, by what the species' facts say of urticating hairs:
+ * gloves and eye protection when the species has them, tools only when it is known to have none,
+ * and the general caution (naming both cases) when the species is not known.
+ */
+export const openingCaution = (urticatingHairs: boolean | null): SafetyText =>
+  urticatingHairs === null ? 'opening' : urticatingHairs ? 'openingHairs' : 'openingNoHairs';

@@ -8,6 +8,7 @@ import { useMe } from '@/features/auth/api/me';
 import { projectQueries, useProjects } from '@/features/projects/api/projects';
 import { sacQueries } from '@/features/sacs/api/sacs';
 import { IncubatorList } from '@/features/sacs/components/incubator-list';
+import { useWords } from '@/lib/i18n';
 import { preloadPanels } from '../preload';
 
 /** Open projects whose sacs this viewer looks after. */
@@ -20,13 +21,14 @@ export const clientLoader = (qc: QueryClient) => async () => {
 };
 
 export function Component() {
+  const t = useWords();
   const { data: me } = useMe();
   const projects = useProjects();
   if (!me || projects.isPending) return <PageLoader />;
   if (projects.isError) return <Alert color="clay">{projects.error.message}</Alert>;
   return (
     <Stack maw={520} mx="auto">
-      <PageHeader title="Incubator" description="Every sac in an incubator. Tap one to log a roll, a reading or a check." />
+      <PageHeader title={t('page.shell.nav.incubator')} description={t('page.sacs.page.incubatorIntro')} />
       <IncubatorList
         projects={incubatorProjects(projects.data)}
         timeZone={me.timeZone}

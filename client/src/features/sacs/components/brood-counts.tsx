@@ -7,28 +7,17 @@ import { ScrollTable } from '@/components/ui/scroll-table';
 import { useForm } from '@mantine/form';
 import { useDisclosure } from '@mantine/hooks';
 import { useState } from 'react';
-import {
-  BROOD_COUNT_MAX,
-  BROOD_LOSS_REASONS,
-  BROOD_STAGES,
-  TEXT_LIMITS,
-  countWords,
-  type BroodCountRequest,
-  type BroodLossReason,
-  type BroodStage,
-} from '@broodsilk/shared';
+import { BROOD_LOSS_REASONS, BROOD_STAGES, TEXT_LIMITS, type BroodCountRequest, type BroodLossReason, type BroodStage } from '@broodsilk/shared';
 import { formatInstant } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useBroodCounts, useRecordBroodCount } from '../api/brood';
-import { broodLabel } from '../utils/sac-view';
-import { catalogueLabels } from '@/lib/i18n';
+import { broodLabel, countRule, countText, midSentence } from '../utils/sac-view';
+import { catalogueLabels, useWords } from '@/lib/i18n';
 import { FormActions } from '@/components/ui/form-actions';
 import { WarningConfirm, useWarnedSave } from '@/components/ui/warning-confirm';
 import { CountCorrection } from './count-correction';
 
 const LOSS_LABELS = catalogueLabels('broodLoss');
-
-const COUNT = { min: 0, max: BROOD_COUNT_MAX, decimals: 0, rangeMessage: `A whole number from 0 to ${BROOD_COUNT_MAX}.` };
 
 const stageOptions = () => BROOD_STAGES.map((s) => ({ value: s, label: broodLabel(s) }));
 const lossOptions = () => BROOD_LOSS_REASONS.map((r) => ({ value: r, label: LOSS_LABELS[r] }));
@@ -44,6 +33,7 @@ interface Values {
 
 /** The brood's counts over time, and a form to record a new count. */
 export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: string; timeZone: string; canRecord: boolean; stage: BroodStage }) {
+  const t = useWords();
   const counts = useBroodCounts(sacId);
   const record = useRecordBroodCount(sacId);
   const [opened, { toggle, close }] = useDisclosure(false);
@@ -54,9 +44,9 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
     validateInputOnBlur: true,
     initialValues: { stage, alive: '', estimated: false, lost: '0', lossReason: null, note: '' },
     validate: {
-      alive: numberRule({ required: 'How many are alive?', ...COUNT }),
-      lost: numberRule(COUNT),
-      lossReason: (v, values) => ((readNumber(values.lost) ?? 0) > 0 && !v ? 'Why were they lost?' : null),
+      alive: numberRule({ required: t('page.sacs.brood.aliveRequired'), ...countRule(t) }),
+      lost: numberRule(countRule(t)),
+      lossReason: (v, values) => ((readNumber(values.lost) ?? 0) > 0 && !v ? t('page.sacs.brood.lossReasonRequired') : null),
       note: textRule({ maxLength: TEXT_LIMITS.note }),
     },
   });
@@ -82,22 +72,22 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
   return (
     <Stack>
       {counts.isError && <Alert color="clay">{counts.error.message}</Alert>}
-      {counts.data && counts.data.counts.length === 0 && <Text c="dimmed">No counts yet; the opening gives the first one.</Text>}
+      {counts.data && counts.data.counts.length === 0 && <Text c="dimmed">{t('page.sacs.brood.none')}</Text>}
       {counts.data && counts.data.counts.length > 0 && (
         <>
           <Text size="sm">
-            Alive now: <b>{counts.data.current === null ? '—' : countWords(counts.data.current, counts.data.currentEstimated)}</b>
-            {counts.data.currentEstimated && ' (an estimate: shares from it are provisional)'}
+            {t('page.sacs.brood.aliveNow')} <b>{counts.data.current === null ? '—' : countText(t, counts.data.current, counts.data.currentEstimated)}</b>
+            {counts.data.currentEstimated && ` ${t('page.sacs.brood.estimateNote')}`}
           </Text>
-          <ScrollTable minWidth={360} label="Brood counts">
+          <ScrollTable minWidth={360} label={t('page.sacs.brood.table')}>
             <Table verticalSpacing={4} fz="sm" data-testid="brood-counts">
               <Table.Thead>
                 <Table.Tr>
-                  <Table.Th>When</Table.Th>
-                  <Table.Th>Stage</Table.Th>
-                  <Table.Th>Alive</Table.Th>
-                  <Table.Th>Lost</Table.Th>
-                  {canRecord && <Table.Th>Correct</Table.Th>}
+                  <Table.Th>{t('page.sacs.columns.when')}</Table.Th>
+                  <Table.Th>{t('page.sacs.columns.stage')}</Table.Th>
+                  <Table.Th>{t('page.sacs.columns.alive')}</Table.Th>
+                  <Table.Th>{t('page.sacs.columns.lost')}</Table.Th>
+                  {canRecord && <Table.Th>{t('page.sacs.columns.correct')}</Table.Th>}
                 </Table.Tr>
               </Table.Thead>
               <Table.Tbody>
@@ -109,20 +99,19 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
                       <Table.Td>{broodLabel(c.stage)}</Table.Td>
                       <Table.Td>
                         <Text span size="sm" style={c.struckBy ? { textDecoration: 'line-through' } : undefined}>
-                          {countWords(c.alive, c.estimated)}
+                          {countText(t, c.alive, c.estimated)}
                         </Text>
-                        {c.struckBy ? ' (struck: corrected)' : ''}
+                        {c.struckBy ? ` ${t('page.sacs.brood.struck')}` : ''}
                         {c.reason && (
                           <Text size="xs" c="dimmed">
-                            Correction: {c.reason}
+                            {t('page.sacs.brood.correction', { reason: c.reason })}
                           </Text>
                         )}
                       </Table.Td>
                       <Table.Td>
                         {c.lost > 0 ? (
                           <Text size="sm" className="tone-failed">
-                            {c.lost}
-                            {c.lossReason ? ` (${LOSS_LABELS[c.lossReason].toLowerCase()})` : ''}
+                            {c.lossReason ? t('page.sacs.brood.lostWith', { lost: c.lost, reason: midSentence(LOSS_LABELS[c.lossReason]) }) : c.lost}
                           </Text>
                         ) : (
                           '—'
@@ -135,14 +124,14 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
                               variant="subtle"
                               size="compact-xs"
                               onClick={() => setCorrecting(c.id)}
-                              aria-label={`Correct the count of ${formatInstant(c.at, timeZone)}`}
+                              aria-label={t('page.sacs.brood.correctCountOf', { at: formatInstant(c.at, timeZone) })}
                             >
-                              Correct
+                              {t('page.sacs.columns.correct')}
                             </Button>
                           )}
                           {!c.struckBy && c.source === 'opening' && (
                             <Text size="xs" c="dimmed">
-                              Correct the opening
+                              {t('page.sacs.opening.correct')}
                             </Text>
                           )}
                         </Table.Td>
@@ -161,7 +150,7 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
         <>
           <Group>
             <Button variant="light" onClick={toggle}>
-              {opened ? 'Close' : 'Record a count'}
+              {opened ? t('page.sacs.close') : t('page.sacs.brood.recordCount')}
             </Button>
           </Group>
           <Collapse expanded={opened}>
@@ -169,27 +158,23 @@ export function BroodCounts({ sacId, timeZone, canRecord, stage }: { sacId: stri
               <Stack maw={520}>
                 <SimpleGrid cols={{ base: 2, sm: 4 }}>
                   <Select
-                    label="Stage"
-                    description="The sac's stage; a later one moves it"
+                    label={t('page.sacs.columns.stage')}
+                    description={t('page.sacs.brood.stageHint')}
                     data={stageOptions()}
                     allowDeselect={false}
                     key={form.key('stage')}
                     {...form.getInputProps('stage')}
                   />
-                  <NumberField label="Alive" whole key={form.key('alive')} {...form.getInputProps('alive')} />
-                  <Checkbox
-                    label="An estimate, not counted one by one"
-                    key={form.key('estimated')}
-                    {...form.getInputProps('estimated', { type: 'checkbox' })}
-                  />
-                  <NumberField label="Lost" whole key={form.key('lost')} {...form.getInputProps('lost')} />
-                  <Select label="Lost because" data={lossOptions()} key={form.key('lossReason')} {...form.getInputProps('lossReason')} />
+                  <NumberField label={t('page.sacs.columns.alive')} whole key={form.key('alive')} {...form.getInputProps('alive')} />
+                  <Checkbox label={t('page.sacs.brood.estimate')} key={form.key('estimated')} {...form.getInputProps('estimated', { type: 'checkbox' })} />
+                  <NumberField label={t('page.sacs.columns.lost')} whole key={form.key('lost')} {...form.getInputProps('lost')} />
+                  <Select label={t('page.sacs.brood.lostBecause')} data={lossOptions()} key={form.key('lossReason')} {...form.getInputProps('lossReason')} />
                 </SimpleGrid>
-                <TextField label="Note" maxLength={TEXT_LIMITS.note} key={form.key('note')} {...form.getInputProps('note')} />
+                <TextField label={t('page.sacs.entry.note')} maxLength={TEXT_LIMITS.note} key={form.key('note')} {...form.getInputProps('note')} />
                 {warned.warnings && (
                   <WarningConfirm warnings={warned.warnings} loading={record.isPending} onConfirm={warned.confirm} onCancel={warned.cancel} />
                 )}
-                <FormActions message={message} loading={record.isPending} submitLabel="Save count" />
+                <FormActions message={message} loading={record.isPending} submitLabel={t('page.sacs.brood.save')} />
               </Stack>
             </form>
           </Collapse>

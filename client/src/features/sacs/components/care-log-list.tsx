@@ -29,6 +29,7 @@ function what(e: CareLogEntryResponse, unit: TemperatureUnit): string {
 }
 
 function StrikeButton({ sacId, entry }: { sacId: string; entry: CareLogEntryResponse }) {
+  const t = useWords();
   const add = useAddCareLogEntry(sacId);
   const [opened, setOpened] = useState(false);
   const [reason, setReason] = useState('');
@@ -37,13 +38,13 @@ function StrikeButton({ sacId, entry }: { sacId: string; entry: CareLogEntryResp
     <Popover opened={opened} onChange={setOpened} position="bottom-end" withArrow trapFocus>
       <Popover.Target>
         <Button size="compact-xs" variant="subtle" color="clay" onClick={() => setOpened((o) => !o)}>
-          Strike
+          {t('page.sacs.careLog.strike')}
         </Button>
       </Popover.Target>
       <Popover.Dropdown>
         <Stack gap="xs" w={260}>
           <TextField
-            label="Why is this entry wrong?"
+            label={t('page.sacs.careLog.whyWrong')}
             maxLength={TEXT_LIMITS.correctionReason}
             value={reason}
             onChange={(e) => setReason(e.currentTarget.value)}
@@ -66,11 +67,11 @@ function StrikeButton({ sacId, entry }: { sacId: string; entry: CareLogEntryResp
                 await add.mutateAsync({ kind: 'strike', strikes: entry.id, reason: reason.trim(), text: reason.trim() });
                 setOpened(false);
               } catch (e) {
-                setError(isApiError(e) ? e.message : 'Not saved.');
+                setError(isApiError(e) ? e.message : t('page.sacs.careLog.notSaved'));
               }
             }}
           >
-            Strike entry
+            {t('page.sacs.careLog.strikeEntry')}
           </Button>
         </Stack>
       </Popover.Dropdown>
@@ -92,20 +93,20 @@ export function CareLogList({
 }) {
   const log = useCareLog(sacId);
   const t = useWords();
-  if (log.isPending) return <Text c="dimmed">Loading the care log…</Text>;
+  if (log.isPending) return <Text c="dimmed">{t('page.sacs.careLog.loading')}</Text>;
   if (log.isError) return <Alert color="clay">{log.error.message}</Alert>;
   // Pages come newest first, each older than the one before (keyset on the server).
   const entries = log.data.pages.flatMap((p) => p.items);
-  if (entries.length === 0) return <Text c="dimmed">No entries yet.</Text>;
+  if (entries.length === 0) return <Text c="dimmed">{t('page.sacs.careLog.none')}</Text>;
   return (
     <>
-      <ScrollTable minWidth={360} label="Care log">
+      <ScrollTable minWidth={360} label={t('page.sacs.page.careLog')}>
         <Table verticalSpacing={4} fz="sm" data-testid="care-log">
           <Table.Thead>
             <Table.Tr>
-              <Table.Th>When</Table.Th>
-              <Table.Th>Entry</Table.Th>
-              <Table.Th visibleFrom="sm">By</Table.Th>
+              <Table.Th>{t('page.sacs.columns.when')}</Table.Th>
+              <Table.Th>{t('page.sacs.columns.entry')}</Table.Th>
+              <Table.Th visibleFrom="sm">{t('page.sacs.columns.by')}</Table.Th>
               <Table.Th />
             </Table.Tr>
           </Table.Thead>
@@ -131,7 +132,7 @@ export function CareLogList({
                     </Group>
                     {e.struck && (
                       <Text size="xs" className="tone-failed">
-                        struck{e.struck.reason ? `: ${e.struck.reason}` : ''}
+                        {e.struck.reason ? t('page.sacs.careLog.struckBecause', { reason: e.struck.reason }) : t('page.sacs.careLog.struck')}
                       </Text>
                     )}
                     <Text size="xs" c="dimmed" hiddenFrom="sm">

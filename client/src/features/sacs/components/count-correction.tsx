@@ -1,7 +1,7 @@
 import { Checkbox, Select, SimpleGrid, Stack, Text } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import { BROOD_COUNT_MAX, BROOD_STAGES, TEXT_LIMITS, type BroodCountRequest, type BroodCountResponse, type BroodStage } from '@broodsilk/shared';
+import { BROOD_STAGES, TEXT_LIMITS, type BroodCountRequest, type BroodCountResponse, type BroodStage } from '@broodsilk/shared';
 import { NumberField } from '@/components/fields/number-field';
 import { TextAreaField } from '@/components/fields/text-field';
 import { textRule } from '@/components/fields/text-rule';
@@ -11,10 +11,10 @@ import { WarningConfirm, useWarnedSave } from '@/components/ui/warning-confirm';
 import { formatInstant } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useRecordBroodCount } from '../api/brood';
-import { broodLabel } from '../utils/sac-view';
+import { useWords } from '@/lib/i18n';
+import { broodLabel, countRule, countText } from '../utils/sac-view';
 
-const COUNT = { min: 0, max: BROOD_COUNT_MAX, decimals: 0, rangeMessage: `A whole number from 0 to ${BROOD_COUNT_MAX}.` };
-const stageOptions = BROOD_STAGES.map((s) => ({ value: s, label: broodLabel(s) }));
+const stageOptions = () => BROOD_STAGES.map((s) => ({ value: s, label: broodLabel(s) }));
 
 interface Values {
   stage: BroodStage;
@@ -28,6 +28,7 @@ interface Values {
  * the struck one marked) with a reason; the shares follow the corrected number.
  */
 export function CountCorrection({ count, timeZone, onDone }: { count: BroodCountResponse; timeZone: string; onDone: () => void }) {
+  const t = useWords();
   const record = useRecordBroodCount(count.sacId);
   const [message, setMessage] = useState<string | null>(null);
   const form = useForm<Values>({
@@ -35,8 +36,8 @@ export function CountCorrection({ count, timeZone, onDone }: { count: BroodCount
     validateInputOnBlur: true,
     initialValues: { stage: count.stage, alive: String(count.alive), estimated: count.estimated, reason: '' },
     validate: {
-      alive: numberRule({ required: 'How many were alive?', ...COUNT }),
-      reason: textRule({ required: 'Say briefly why the count was wrong.', maxLength: TEXT_LIMITS.correctionReason }),
+      alive: numberRule({ required: t('page.sacs.countCorrection.aliveRequired'), ...countRule(t) }),
+      reason: textRule({ required: t('page.sacs.countCorrection.reasonRequired'), maxLength: TEXT_LIMITS.correctionReason }),
     },
   });
   const warned = useWarnedSave(
@@ -57,20 +58,24 @@ export function CountCorrection({ count, timeZone, onDone }: { count: BroodCount
     });
   });
   return (
-    <form onSubmit={submit} noValidate aria-label="Correct the count">
+    <form onSubmit={submit} noValidate aria-label={t('page.sacs.countCorrection.form')}>
       <Stack gap="xs" maw={520}>
         <Text size="sm" c="dimmed">
-          Correcting the count of {formatInstant(count.at, timeZone)} ({count.estimated ? 'about ' : ''}
-          {count.alive} alive). It stays listed, struck through.
+          {t('page.sacs.countCorrection.intro', { at: formatInstant(count.at, timeZone), alive: countText(t, count.alive, count.estimated) })}
         </Text>
         <SimpleGrid cols={{ base: 2, sm: 3 }}>
-          <Select label="Stage" data={stageOptions} allowDeselect={false} key={form.key('stage')} {...form.getInputProps('stage')} />
-          <NumberField label="Alive" whole key={form.key('alive')} {...form.getInputProps('alive')} />
-          <Checkbox label="An estimate" key={form.key('estimated')} {...form.getInputProps('estimated', { type: 'checkbox' })} />
+          <Select label={t('page.sacs.columns.stage')} data={stageOptions()} allowDeselect={false} key={form.key('stage')} {...form.getInputProps('stage')} />
+          <NumberField label={t('page.sacs.columns.alive')} whole key={form.key('alive')} {...form.getInputProps('alive')} />
+          <Checkbox label={t('page.sacs.countCorrection.estimate')} key={form.key('estimated')} {...form.getInputProps('estimated', { type: 'checkbox' })} />
         </SimpleGrid>
-        <TextAreaField label="Why the count was wrong" maxLength={TEXT_LIMITS.correctionReason} key={form.key('reason')} {...form.getInputProps('reason')} />
+        <TextAreaField
+          label={t('page.sacs.countCorrection.reason')}
+          maxLength={TEXT_LIMITS.correctionReason}
+          key={form.key('reason')}
+          {...form.getInputProps('reason')}
+        />
         {warned.warnings && <WarningConfirm warnings={warned.warnings} loading={record.isPending} onConfirm={warned.confirm} onCancel={warned.cancel} />}
-        <FormActions message={message} loading={record.isPending} submitLabel="Save the correction" onCancel={onDone} />
+        <FormActions message={message} loading={record.isPending} submitLabel={t('page.sacs.saveCorrection')} onCancel={onDone} />
       </Stack>
     </form>
   );

@@ -25,8 +25,9 @@ export function failureRequest(v: Values): { failureReason: SacFailureReason; pa
 /**
  * Records the sac as failed, with the keeper's own message to the partners, and shows first what
  * they will read: the same words the server sends (counts, the failure clause for each party).
+ * `onCancel` folds it away again (the sac page opens it only on a press, so a stray tap starts nothing).
  */
-export function FailureForm({ sacId }: { sacId: string }) {
+export function FailureForm({ sacId, onCancel }: { sacId: string; onCancel?: () => void }) {
   const t = useWords();
   const update = useUpdateSac(sacId);
   const preview = useFailureNoticePreview(sacId);
@@ -110,7 +111,7 @@ export function FailureForm({ sacId }: { sacId: string }) {
             </Text>
           </Card>
         )}
-        <FormActions message={message} loading={update.isPending} submitLabel={t('page.failureNotice.submit')} />
+        <FormActions message={message} loading={update.isPending} submitLabel={t('page.failureNotice.submit')} onCancel={onCancel} />
       </Stack>
     </form>
   );

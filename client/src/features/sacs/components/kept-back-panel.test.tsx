@@ -2,12 +2,14 @@ import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { KeptBackBatchResponse } from '@broodsilk/shared';
+import { i18next } from '@/lib/i18n';
 import { renderWithProviders, stubFetch } from '@/testing/render';
 import { KeptBackPanel } from './kept-back-panel';
 
-afterEach(() => {
+afterEach(async () => {
   vi.unstubAllGlobals();
   vi.restoreAllMocks();
+  await i18next.changeLanguage('en');
 });
 
 const batch: KeptBackBatchResponse = {
@@ -63,5 +65,20 @@ describe('KeptBackPanel', { timeout: 30_000 }, () => {
     await screen.findByTestId('kept-back-words');
     expect(screen.queryByRole('form')).not.toBeInTheDocument();
     expect(screen.getByRole('table', { name: 'Log of the kept-back eggs' })).toHaveTextContent('Rolled');
+  });
+
+  it('speaks German to a German reader, and a batch of one egg in the singular', async () => {
+    // Plural categories by Intl.PluralRules (CLDR): German 1 is "one", 5 is "other".
+    await i18next.changeLanguage('de');
+    const { fetchStub, calls } = stubFetch({ 'GET /api/sacs/s1/kept-back': () => ({ status: 200, body: { ...batch, eggs: 1 } }) });
+    vi.stubGlobal('fetch', fetchStub);
+    renderWithProviders(<KeptBackPanel sacId="s1" timeZone="UTC" canLog canEnd />);
+    expect(await screen.findByRole('table', { name: 'Protokoll der zurückbehaltenen Eier' })).toHaveTextContent('Gedreht');
+    const form = screen.getByRole('form', { name: 'Die zurückbehaltenen Eier abschließen' });
+    await userEvent.type(within(form).getByLabelText('Warum'), 'Eingetrocknet');
+    await userEvent.click(within(form).getByRole('button', { name: 'Abschreiben' }));
+    const dialog = await screen.findByRole('dialog', { name: 'Abschreiben' });
+    expect(dialog).toHaveTextContent('Das eine zurückbehaltene Ei wird abgeschrieben; es kommt nie zur Nachzucht.');
+    expect(calls.filter((c) => c.method === 'POST')).toHaveLength(0);
   });
 });

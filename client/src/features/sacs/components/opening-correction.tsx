@@ -10,6 +10,7 @@ import { applyServerErrors } from '@/lib/form-errors';
 import { useRecordOpening } from '../api/opening';
 import { openingRules, openingValues, toOpeningCounts, type OpeningValues } from '../utils/opening-values';
 import { OpeningCountFields } from './opening-count-fields';
+import { useWords } from '@/lib/i18n';
 
 type Values = OpeningValues & { reason: string };
 
@@ -18,13 +19,14 @@ type Values = OpeningValues & { reason: string };
  * the brood's first count and the shares follow the corrected numbers.
  */
 export function OpeningCorrection({ opening, onDone }: { opening: OpeningResponse; onDone: () => void }) {
+  const t = useWords();
   const record = useRecordOpening(opening.sacId);
   const [message, setMessage] = useState<string | null>(null);
   const form = useForm<Values>({
     mode: 'uncontrolled',
     validateInputOnBlur: true,
     initialValues: { ...openingValues(opening), reason: '' },
-    validate: { ...openingRules, reason: textRule({ required: 'Say briefly why the recorded opening was wrong.', maxLength: TEXT_LIMITS.correctionReason }) },
+    validate: { ...openingRules(t), reason: textRule({ required: t('page.sacs.opening.correctReasonRequired'), maxLength: TEXT_LIMITS.correctionReason }) },
   });
   const warned = useWarnedSave(
     (body: OpeningRequest) => record.mutateAsync(body),
@@ -36,20 +38,20 @@ export function OpeningCorrection({ opening, onDone }: { opening: OpeningRespons
     return warned.save({ ...toOpeningCounts(v), corrects: opening.id, reason: v.reason.trim() });
   });
   return (
-    <form onSubmit={submit} noValidate aria-label="Correct the opening">
+    <form onSubmit={submit} noValidate aria-label={t('page.sacs.opening.correct')}>
       <Stack>
         <Text size="sm" c="dimmed">
-          The opening as recorded stays visible, struck through; these numbers take its place and the brood&apos;s first count follows them.
+          {t('page.sacs.opening.correctIntro')}
         </Text>
         <OpeningCountFields form={form} />
         <TextAreaField
-          label="Why the recorded opening was wrong"
+          label={t('page.sacs.opening.correctReason')}
           maxLength={TEXT_LIMITS.correctionReason}
           key={form.key('reason')}
           {...form.getInputProps('reason')}
         />
         {warned.warnings && <WarningConfirm warnings={warned.warnings} loading={record.isPending} onConfirm={warned.confirm} onCancel={warned.cancel} />}
-        <FormActions message={message} loading={record.isPending} submitLabel="Save the correction" onCancel={onDone} />
+        <FormActions message={message} loading={record.isPending} submitLabel={t('page.sacs.saveCorrection')} onCancel={onDone} />
       </Stack>
     </form>
   );

@@ -1,9 +1,10 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { addDays, todayIn } from '@broodsilk/shared';
+import { addDays, todayIn, wordsFor, type ProjectAnimal } from '@broodsilk/shared';
 import { renderWithProviders, stubFetch } from '@/testing/render';
 import { OpeningPanel } from './opening-panel';
+import { sacHasUrticatingHairs } from '../utils/sac-view';
 
 afterEach(() => {
   vi.unstubAllGlobals();
@@ -95,5 +96,46 @@ describe('OpeningPanel', { timeout: 30_000 }, () => {
       acknowledgedWarnings: ['eggs-outside-species-range'],
       warningReason: 'Counted a quarter and multiplied',
     });
+  });
+});
+
+// The caution where the hands are (docs/product.md, cautions): urticating hairs are a species fact
+// (server/src/species/data/species.data.ts: New World theraphosines flick them, from memory; Old World ones have none).
+describe('OpeningPanel: the caution at the opening follows the species', { timeout: 30_000 }, () => {
+  const t = wordsFor('en');
+  const stubEmptyOpening = () => vi.stubGlobal('fetch', stubFetch({ 'GET /api/sacs/s1/opening': () => ({ status: 200, body: null }) }).fetchStub);
+
+  it('asks for gloves and eye protection when the species has urticating hairs', async () => {
+    stubEmptyOpening();
+    renderWithProviders(<OpeningPanel sac={{ id: 's1', opened: false }} timeZone="UTC" canEdit urticatingHairs />);
+    const note = await screen.findByTestId('safety-openingHairs');
+    expect(note).toHaveTextContent(t('safety.openingHairs'));
+    expect(note).toHaveTextContent('wear gloves and eye protection: this species has urticating hairs');
+    expect(screen.queryByTestId('safety-opening')).not.toBeInTheDocument();
+  });
+
+  it('gives the general caution, naming both cases, when the species is not known', async () => {
+    stubEmptyOpening();
+    renderWithProviders(<OpeningPanel sac={{ id: 's1', opened: false }} timeZone="UTC" canEdit />);
+    const note = await screen.findByTestId('safety-opening');
+    expect(note).toHaveTextContent('For species with urticating hairs wear gloves and eye protection');
+    expect(screen.queryByTestId('safety-openingHairs')).not.toBeInTheDocument();
+  });
+
+  it('leaves out the hair advice for a species known to have none, and keeps the tools and the law', async () => {
+    stubEmptyOpening();
+    renderWithProviders(<OpeningPanel sac={{ id: 's1', opened: false }} timeZone="UTC" canEdit urticatingHairs={false} />);
+    const note = await screen.findByTestId('safety-openingNoHairs');
+    expect(note).not.toHaveTextContent(/urticating/);
+    expect(note).toHaveTextContent('never bare hands');
+    expect(note).toHaveTextContent('Follow local law and licensed practice.');
+  });
+
+  it('reads the hairs from the pair: either parent with them counts, an unknown project is unknown', () => {
+    const animal = (urticatingHairs: boolean) => ({ species: { urticatingHairs } }) as ProjectAnimal;
+    expect(sacHasUrticatingHairs(undefined)).toBeNull();
+    expect(sacHasUrticatingHairs({ femaleAnimal: animal(true), maleAnimal: animal(true) })).toBe(true);
+    expect(sacHasUrticatingHairs({ femaleAnimal: animal(false), maleAnimal: animal(true) })).toBe(true);
+    expect(sacHasUrticatingHairs({ femaleAnimal: animal(false), maleAnimal: animal(false) })).toBe(false);
   });
 });

@@ -3,7 +3,7 @@ import { Dropzone, IMAGE_MIME_TYPE } from '@mantine/dropzone';
 import '@mantine/dropzone/styles.css';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import { countWords, type OpeningRequest, type OpeningResponse, type SacResponse } from '@broodsilk/shared';
+import { openingCaution, type OpeningRequest, type OpeningResponse, type SacResponse } from '@broodsilk/shared';
 import { useWhen, WhenFields } from '@/components/fields/when-fields';
 import { ConfirmAction } from '@/components/ui/confirm-action';
 import { WarningConfirm, useWarnedSave } from '@/components/ui/warning-confirm';
@@ -13,6 +13,8 @@ import { isApiError } from '@/lib/api-error';
 import { useOpening, useRecordOpening, useUploadOpeningPhoto } from '../api/opening';
 import { FormActions } from '@/components/ui/form-actions';
 import { SafetyNote } from '@/components/ui/safety-note';
+import { useWords } from '@/lib/i18n';
+import { countText } from '../utils/sac-view';
 import { countFields, openingRules, openingValues, toOpeningCounts, type OpeningValues } from '../utils/opening-values';
 import { OpeningCountFields } from './opening-count-fields';
 import { OpeningCorrection } from './opening-correction';
@@ -25,18 +27,23 @@ type OpeningVersion = Omit<OpeningResponse, 'struck' | 'photos'>;
 
 /** What one version of the opening found; a struck version is drawn struck through and says so. */
 function OpeningCounts({ opening, timeZone, struck }: { opening: OpeningVersion; timeZone: string; struck?: boolean }) {
-  const about = (n: number) => countWords(n, opening.estimated);
+  const t = useWords();
+  const about = (n: number) => countText(t, n, opening.estimated);
+  const sentence = t(`page.sacs.opening.opened${opening.keptBack > 0 ? 'Kept' : ''}${opening.estimated ? 'Estimated' : ''}`, {
+    at: formatInstant(opening.openedAt, timeZone),
+    name: opening.recordedBy.name,
+    viable: about(opening.viable),
+    total: about(opening.total),
+    keptBack: opening.keptBack,
+  });
   return (
     <Stack gap={4} style={struck ? { textDecoration: 'line-through' } : undefined} data-testid={struck ? 'opening-struck' : 'opening-in-force'}>
       <Text size="sm" c="dimmed">
-        {struck ? 'Struck: ' : ''}Opened {formatInstant(opening.openedAt, timeZone)} by {opening.recordedBy.name}: {about(opening.viable)} viable of{' '}
-        {about(opening.total)}
-        {opening.keptBack > 0 ? `, ${opening.keptBack} of them kept back for more incubation` : ''}
-        {opening.estimated ? ' (estimated)' : ''}.
+        {struck ? t('page.sacs.opening.struck', { text: sentence }) : sentence}
       </Text>
-      {opening.reason && <Text size="sm">Corrected because: {opening.reason}</Text>}
-      {opening.warningReason && <Text size="sm">Unusual count, saved because: {opening.warningReason}</Text>}
-      <Table verticalSpacing={2} fz="sm" maw={420} aria-label={struck ? 'Struck opening counts' : 'Opening counts'}>
+      {opening.reason && <Text size="sm">{t('page.sacs.opening.correctedBecause', { reason: opening.reason })}</Text>}
+      {opening.warningReason && <Text size="sm">{t('page.sacs.opening.unusualBecause', { reason: opening.warningReason })}</Text>}
+      <Table verticalSpacing={2} fz="sm" maw={420} aria-label={struck ? t('page.sacs.opening.struckCounts') : t('page.sacs.opening.counts')}>
         <Table.Tbody>
           {countFields().map(([k, label]) => (
             <Table.Tr key={k}>
@@ -53,6 +60,7 @@ function OpeningCounts({ opening, timeZone, struck }: { opening: OpeningVersion;
 }
 
 function OpeningView({ opening, timeZone, sacId, canEdit }: { opening: OpeningResponse; timeZone: string; sacId: string; canEdit: boolean }) {
+  const t = useWords();
   const upload = useUploadOpeningPhoto(sacId);
   const [error, setError] = useState<string | null>(null);
   const [correcting, setCorrecting] = useState(false);
@@ -62,7 +70,7 @@ function OpeningView({ opening, timeZone, sacId, canEdit }: { opening: OpeningRe
       {canEdit && !correcting && (
         <Group>
           <Button variant="light" size="xs" onClick={() => setCorrecting(true)}>
-            Correct the opening
+            {t('page.sacs.opening.correct')}
           </Button>
         </Group>
       )}
@@ -74,7 +82,7 @@ function OpeningView({ opening, timeZone, sacId, canEdit }: { opening: OpeningRe
       {opening.photos.length > 0 && (
         <SimpleGrid cols={{ base: 3, sm: 5 }}>
           {opening.photos.map((p) => (
-            <Image key={p.id} src={photoSrc(p.thumbUrl)} alt="Photo of the opening" radius="sm" />
+            <Image key={p.id} src={photoSrc(p.thumbUrl)} alt={t('page.sacs.opening.photo')} radius="sm" />
           ))}
         </SimpleGrid>
       )}
@@ -89,15 +97,15 @@ function OpeningView({ opening, timeZone, sacId, canEdit }: { opening: OpeningRe
               try {
                 await upload.mutateAsync(f);
               } catch (e) {
-                setError(isApiError(e) ? e.message : 'The photo was not uploaded.');
+                setError(isApiError(e) ? e.message : t('page.sacs.opening.photoFailed'));
               }
             }
           }}
-          onReject={() => setError('Only images up to 15 MB.')}
-          inputProps={{ 'aria-label': 'Choose photos of the opening' }}
+          onReject={() => setError(t('page.sacs.opening.photoRefused'))}
+          inputProps={{ 'aria-label': t('page.sacs.opening.choosePhotos') }}
         >
           <Text size="sm" ta="center" c="dimmed">
-            Drop photos of the opening here, or tap to choose (location data is removed on upload).
+            {t('page.sacs.opening.dropPhotos')}
           </Text>
         </Dropzone>
       )}
@@ -110,23 +118,38 @@ function OpeningView({ opening, timeZone, sacId, canEdit }: { opening: OpeningRe
   );
 }
 
-/** The opening of a sac: what was found, once; before that, the form to record it. */
-export function OpeningPanel({ sac, timeZone, canEdit }: { sac: Pick<SacResponse, 'id' | 'opened'>; timeZone: string; canEdit: boolean }) {
+/**
+ * The opening of a sac: what was found, once; before that, the form to record it. `urticatingHairs`
+ * is what the species' facts say (null when the species is not known): it picks the caution at the form.
+ */
+export function OpeningPanel({
+  sac,
+  timeZone,
+  canEdit,
+  urticatingHairs = null,
+}: {
+  sac: Pick<SacResponse, 'id' | 'opened'>;
+  timeZone: string;
+  canEdit: boolean;
+  urticatingHairs?: boolean | null;
+}) {
+  const t = useWords();
   const sacId = sac.id;
   const opening = useOpening(sac);
-  if (sac.opened && opening.isPending) return <Text c="dimmed">Loading…</Text>;
+  if (sac.opened && opening.isPending) return <Text c="dimmed">{t('page.shell.loadingDots')}</Text>;
   if (opening.isError) return <Alert color="clay">{opening.error.message}</Alert>;
   if (opening.data) return <OpeningView opening={opening.data} timeZone={timeZone} sacId={sacId} canEdit={canEdit} />;
-  if (!canEdit) return <Text c="dimmed">Not opened yet.</Text>;
-  return <OpeningForm sacId={sacId} timeZone={timeZone} />;
+  if (!canEdit) return <Text c="dimmed">{t('page.sacs.opening.notYet')}</Text>;
+  return <OpeningForm sacId={sacId} timeZone={timeZone} urticatingHairs={urticatingHairs} />;
 }
 
 /** Recorded once: the form is checked, then the keeper confirms what will be saved and when the sac was opened. */
-function OpeningForm({ sacId, timeZone }: { sacId: string; timeZone: string }) {
+function OpeningForm({ sacId, timeZone, urticatingHairs }: { sacId: string; timeZone: string; urticatingHairs: boolean | null }) {
+  const t = useWords();
   const record = useRecordOpening(sacId);
   const [message, setMessage] = useState<string | null>(null);
   const [asking, setAsking] = useState<OpeningRequest | null>(null);
-  const form = useForm<OpeningValues>({ mode: 'uncontrolled', validateInputOnBlur: true, initialValues: openingValues(), validate: openingRules });
+  const form = useForm<OpeningValues>({ mode: 'uncontrolled', validateInputOnBlur: true, initialValues: openingValues(), validate: openingRules(t) });
   const warned = useWarnedSave(
     (body: OpeningRequest) => record.mutateAsync(body),
     () => undefined,
@@ -140,13 +163,12 @@ function OpeningForm({ sacId, timeZone }: { sacId: string; timeZone: string }) {
     <form onSubmit={submit} noValidate>
       <Stack>
         <Text size="sm" c="dimmed">
-          Count what the sac holds when you open it. The viable ones start the brood&apos;s count; doubtful eggs you keep back for more incubation are followed
-          as their own batch and join the count only if they develop.
+          {t('page.sacs.opening.intro')}
         </Text>
         <OpeningCountFields form={form} />
         {warned.warnings && <WarningConfirm warnings={warned.warnings} loading={record.isPending} onConfirm={warned.confirm} onCancel={warned.cancel} />}
-        <SafetyNote text="opening" />
-        <FormActions message={message} loading={record.isPending} submitLabel="Save opening" />
+        <SafetyNote text={openingCaution(urticatingHairs)} />
+        <FormActions message={message} loading={record.isPending} submitLabel={t('page.sacs.opening.save')} />
       </Stack>
       {asking && (
         <ConfirmOpening
@@ -177,24 +199,28 @@ function ConfirmOpening({
   onClose: () => void;
   onConfirm: (openedAt: string) => void;
 }) {
+  const t = useWords();
   const when = useWhen(timeZone);
   const viable = counts.healthyEggs + counts.eggsWithLegs + counts.nymphs;
+  const about = (n: number) => countText(t, n, !!counts.estimated);
   return (
     <ConfirmAction
       opened
       onClose={onClose}
-      title="Record the opening"
-      confirmLabel="Record the opening"
+      title={t('page.sacs.opening.record')}
+      confirmLabel={t('page.sacs.opening.record')}
       pending={pending}
       ready={when.instant !== null}
       onConfirm={() => when.instant && onConfirm(when.instant)}
     >
       <Text size="sm">
-        A sac is opened once: this records {countWords(viable, !!counts.estimated)} viable of{' '}
-        {countWords(viable + counts.darkEggs + counts.spoiledEggs, !!counts.estimated)}, and the viable ones
-        {counts.keptBack ? ` except the ${counts.keptBack} kept back` : ''} start the brood&apos;s count. Change the day or time if you opened it earlier.
+        {t(counts.keptBack ? 'page.sacs.opening.confirmKept' : 'page.sacs.opening.confirm', {
+          viable: about(viable),
+          total: about(viable + counts.darkEggs + counts.spoiledEggs),
+          keptBack: counts.keptBack,
+        })}
       </Text>
-      <WhenFields when={when} dateLabel="Opened on" />
+      <WhenFields when={when} dateLabel={t('page.sacs.opening.openedOn')} />
     </ConfirmAction>
   );
 }

@@ -10,6 +10,7 @@ import { useState } from 'react';
 import { TEXT_LIMITS, todayIn, type CreateSacRequest } from '@broodsilk/shared';
 import { dayjs } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
+import { useWords } from '@/lib/i18n';
 import { useCreateSac } from '../api/sacs';
 import { FormActions } from '@/components/ui/form-actions';
 import { WarningConfirm, useWarnedSave } from '@/components/ui/warning-confirm';
@@ -25,6 +26,7 @@ interface Values {
 
 /** Records a new sac: its lay date and whether it is still with the mother or already pulled. */
 export function RecordSacForm({ projectId, timeZone, onDone }: { projectId: string; timeZone: string; onDone?: () => void }) {
+  const t = useWords();
   const create = useCreateSac(projectId);
   const [message, setMessage] = useState<string | null>(null);
   const today = todayIn(timeZone, new Date());
@@ -33,15 +35,15 @@ export function RecordSacForm({ projectId, timeZone, onDone }: { projectId: stri
     validateInputOnBlur: true,
     initialValues: { layDate: '', where: 'mother', pulledOn: '', pulledTime: '08:00', notes: '' },
     validate: {
-      layDate: (v) => checkDate(v, { required: 'On which day was the sac laid?', latest: today, latestMessage: 'The lay date cannot be in the future.' }),
+      layDate: (v) => checkDate(v, { required: t('page.sacs.sacForm.layRequired'), latest: today, latestMessage: t('page.sacs.sacForm.layFuture') }),
       pulledOn: (v, values) =>
         values.where === 'pulled'
           ? checkDate(v, {
-              required: 'On which day was it pulled?',
+              required: t('page.sacs.sacForm.pullRequired'),
               latest: today,
-              latestMessage: 'A pull that has happened cannot be in the future.',
+              latestMessage: t('page.sacs.sacForm.pullFuture'),
               earliest: readDate(values.layDate) ?? undefined,
-              earliestMessage: 'The pull comes after the lay date.',
+              earliestMessage: t('page.sacs.sacForm.pullBeforeLay'),
             })
           : null,
       notes: textRule({ maxLength: TEXT_LIMITS.note }),
@@ -71,16 +73,16 @@ export function RecordSacForm({ projectId, timeZone, onDone }: { projectId: stri
   return (
     <form onSubmit={submit} noValidate>
       <Stack maw={480}>
-        <DateField label="Lay date" withAsterisk key={form.key('layDate')} {...form.getInputProps('layDate')} />
+        <DateField label={t('page.sacs.sacForm.layDate')} withAsterisk key={form.key('layDate')} {...form.getInputProps('layDate')} />
         <Stack gap={4}>
           <Text size="sm" fw={500}>
-            Where is the sac?
+            {t('page.sacs.sacForm.where')}
           </Text>
           <SegmentedControl
             data={[
-              { value: 'mother', label: 'With the mother, to pull' },
-              { value: 'kept', label: 'Stays with the mother' },
-              { value: 'pulled', label: 'Pulled' },
+              { value: 'mother', label: t('page.sacs.sacForm.withMother') },
+              { value: 'kept', label: t('page.sacs.sacForm.stays') },
+              { value: 'pulled', label: t('page.sacs.sacForm.pulled') },
             ]}
             key={form.key('where')}
             {...form.getInputProps('where')}
@@ -88,18 +90,18 @@ export function RecordSacForm({ projectId, timeZone, onDone }: { projectId: stri
         </Stack>
         {where === 'kept' && (
           <Text size="sm" c="dimmed">
-            She keeps and turns the sac herself: no pull window to watch. Record the opening when the young emerge.
+            {t('page.sacs.sacForm.staysHint')}
           </Text>
         )}
         {where === 'pulled' && (
           <Group grow align="flex-start">
-            <DateField label="Pulled on" key={form.key('pulledOn')} {...form.getInputProps('pulledOn')} />
-            <TimeInput label="At" key={form.key('pulledTime')} {...form.getInputProps('pulledTime')} />
+            <DateField label={t('page.sacs.pull.pulledOn')} key={form.key('pulledOn')} {...form.getInputProps('pulledOn')} />
+            <TimeInput label={t('page.shell.fields.at')} key={form.key('pulledTime')} {...form.getInputProps('pulledTime')} />
           </Group>
         )}
-        <TextAreaField label="Notes" maxLength={TEXT_LIMITS.note} key={form.key('notes')} {...form.getInputProps('notes')} />
+        <TextAreaField label={t('page.sacs.notes')} maxLength={TEXT_LIMITS.note} key={form.key('notes')} {...form.getInputProps('notes')} />
         {warned.warnings && <WarningConfirm warnings={warned.warnings} loading={create.isPending} onConfirm={warned.confirm} onCancel={warned.cancel} />}
-        <FormActions message={message} loading={create.isPending} submitLabel="Save sac" />
+        <FormActions message={message} loading={create.isPending} submitLabel={t('page.sacs.sacForm.save')} />
       </Stack>
     </form>
   );

@@ -30,6 +30,7 @@ export function SacOverview({ sac, timeZone, temperatureUnit }: { sac: SacRespon
   const update = useUpdateSac(sac.id);
   const pull = usePullSac(sac.id);
   const [pulling, pullDialog] = useDisclosure(false);
+  const [failing, failure] = useDisclosure(false);
   const [error, setError] = useState<string | null>(null);
   const w = sac.pullWindow;
   const windowText = PULL_WINDOW_TEXT[w.state];
@@ -158,9 +159,14 @@ export function SacOverview({ sac, timeZone, temperatureUnit }: { sac: SacRespon
           <Button variant="light" loading={update.isPending} onClick={() => change({ outcome: 'emerged' })}>
             {t('page.sacs.overview.emerged')}
           </Button>
+          {!failing && (
+            <Button variant="subtle" color="clay" onClick={failure.open}>
+              {t('page.sacs.failure.open')}
+            </Button>
+          )}
         </Group>
       )}
-      {canEdit && sac.outcome === 'in-progress' && <FailureForm sacId={sac.id} />}
+      {canEdit && sac.outcome === 'in-progress' && failing && <FailureForm sacId={sac.id} onCancel={failure.close} />}
       {error && (
         <Alert color="clay" role="alert" style={{ gridColumn: '1 / -1' }}>
           {error}

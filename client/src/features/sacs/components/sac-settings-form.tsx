@@ -10,7 +10,8 @@ import { FormActions } from '@/components/ui/form-actions';
 import { applyServerErrors } from '@/lib/form-errors';
 import { isApiError } from '@/lib/api-error';
 import { useSetIncubatorRights, useUpdateSac } from '../api/sacs';
-import { halfRange, SETTINGS_RULES, settingsRequest, settingsValuesOf, type SacSettingsValues } from '../utils/sac-settings-values';
+import { useWords } from '@/lib/i18n';
+import { halfRange, settingsRules, settingsRequest, settingsValuesOf, type SacSettingsValues } from '../utils/sac-settings-values';
 
 /**
  * The keeper's settings for one sac: where it sits, its pull window and roll interval, and the
@@ -18,6 +19,8 @@ import { halfRange, SETTINGS_RULES, settingsRequest, settingsValuesOf, type SacS
  * Band temperatures are in °C, as stored, so a typed value is kept exactly.
  */
 export function SacSettingsForm({ sac, temperatureUnit }: { sac: SacResponse; temperatureUnit: TemperatureUnit }) {
+  const t = useWords();
+  const rules = settingsRules(t);
   const update = useUpdateSac(sac.id);
   const [message, setMessage] = useState<string | null>(null);
   const [saved, setSaved] = useState(false);
@@ -27,13 +30,13 @@ export function SacSettingsForm({ sac, temperatureUnit }: { sac: SacResponse; te
     initialValues: settingsValuesOf(sac),
     validate: {
       container: textRule({ maxLength: TEXT_LIMITS.enclosure }),
-      pullFromDay: (v, all) => checkNumber(v, SETTINGS_RULES.pullFromDay) ?? halfRange(v, all.pullToDay, 'pull window'),
-      pullToDay: (v) => checkNumber(v, SETTINGS_RULES.pullToDay),
-      rollIntervalHours: (v) => checkNumber(v, SETTINGS_RULES.rollIntervalHours),
-      temperatureMin: (v, all) => checkNumber(v, SETTINGS_RULES.temperatureMin) ?? halfRange(v, all.temperatureMax, 'temperature band'),
-      temperatureMax: (v) => checkNumber(v, SETTINGS_RULES.temperatureMax),
-      humidityMin: (v, all) => checkNumber(v, SETTINGS_RULES.humidityMin) ?? halfRange(v, all.humidityMax, 'humidity band'),
-      humidityMax: (v) => checkNumber(v, SETTINGS_RULES.humidityMax),
+      pullFromDay: (v, all) => checkNumber(v, rules.pullFromDay) ?? halfRange(t, v, all.pullToDay, 'pullWindow'),
+      pullToDay: (v) => checkNumber(v, rules.pullToDay),
+      rollIntervalHours: (v) => checkNumber(v, rules.rollIntervalHours),
+      temperatureMin: (v, all) => checkNumber(v, rules.temperatureMin) ?? halfRange(t, v, all.temperatureMax, 'temperature'),
+      temperatureMax: (v) => checkNumber(v, rules.temperatureMax),
+      humidityMin: (v, all) => checkNumber(v, rules.humidityMin) ?? halfRange(t, v, all.humidityMax, 'humidity'),
+      humidityMax: (v) => checkNumber(v, rules.humidityMax),
     },
   });
   const submit = form.onSubmit(async (v) => {
@@ -48,41 +51,44 @@ export function SacSettingsForm({ sac, temperatureUnit }: { sac: SacResponse; te
       setMessage(applyServerErrors(form, e));
     }
   });
-  const t = sac.band.temperatureC;
+  const c = sac.band.temperatureC;
   const h = sac.band.humidityPercent;
+  const temperature =
+    temperatureUnit === 'F'
+      ? t('page.sacs.settings.temperatureCF', { min: c.min, max: c.max, fMin: formatTemperature(c.min, 'F'), fMax: formatTemperature(c.max, 'F') })
+      : t('page.sacs.settings.temperatureC', { min: c.min, max: c.max });
+  const band = { temperature, hMin: h.min, hMax: h.max, source: sac.band.source };
   return (
-    <form onSubmit={submit} noValidate aria-label="Incubation settings">
+    <form onSubmit={submit} noValidate aria-label={t('page.sacs.page.settings')}>
       <Stack gap="sm">
         <TextField
-          label="Incubator or container"
-          placeholder="e.g. Incubator B, top shelf"
+          label={t('page.sacs.settings.container')}
+          placeholder={t('page.sacs.settings.containerPlaceholder')}
           maxLength={TEXT_LIMITS.enclosure}
           key={form.key('container')}
           {...form.getInputProps('container')}
         />
         <SimpleGrid cols={{ base: 2, sm: 3 }}>
-          <NumberField label="Pull window from day" whole key={form.key('pullFromDay')} {...form.getInputProps('pullFromDay')} />
-          <NumberField label="Pull window to day" whole key={form.key('pullToDay')} {...form.getInputProps('pullToDay')} />
-          <NumberField label="Hours between rolls" whole key={form.key('rollIntervalHours')} {...form.getInputProps('rollIntervalHours')} />
+          <NumberField label={t('page.sacs.settings.pullFrom')} whole key={form.key('pullFromDay')} {...form.getInputProps('pullFromDay')} />
+          <NumberField label={t('page.sacs.settings.pullTo')} whole key={form.key('pullToDay')} {...form.getInputProps('pullToDay')} />
+          <NumberField label={t('page.sacs.settings.rollHours')} whole key={form.key('rollIntervalHours')} {...form.getInputProps('rollIntervalHours')} />
         </SimpleGrid>
         <Text size="xs" c="dimmed">
-          Leave the pull days empty for the {sac.pullWindow.origin === 'species' ? "species'" : 'usual'} window.
+          {sac.pullWindow.origin === 'species' ? t('page.sacs.settings.emptyPullSpecies') : t('page.sacs.settings.emptyPullUsual')}
         </Text>
         <SimpleGrid cols={{ base: 2, sm: 4 }}>
-          <NumberField label="Lowest °C" key={form.key('temperatureMin')} {...form.getInputProps('temperatureMin')} />
-          <NumberField label="Highest °C" key={form.key('temperatureMax')} {...form.getInputProps('temperatureMax')} />
-          <NumberField label="Lowest humidity %" whole key={form.key('humidityMin')} {...form.getInputProps('humidityMin')} />
-          <NumberField label="Highest humidity %" whole key={form.key('humidityMax')} {...form.getInputProps('humidityMax')} />
+          <NumberField label={t('page.sacs.settings.temperatureMin')} key={form.key('temperatureMin')} {...form.getInputProps('temperatureMin')} />
+          <NumberField label={t('page.sacs.settings.temperatureMax')} key={form.key('temperatureMax')} {...form.getInputProps('temperatureMax')} />
+          <NumberField label={t('page.sacs.settings.humidityMin')} whole key={form.key('humidityMin')} {...form.getInputProps('humidityMin')} />
+          <NumberField label={t('page.sacs.settings.humidityMax')} whole key={form.key('humidityMax')} {...form.getInputProps('humidityMax')} />
         </SimpleGrid>
         <Text size="xs" c="dimmed" data-testid="band-source">
-          Band in force: {t.min}–{t.max} °C{temperatureUnit === 'F' && ` (${formatTemperature(t.min, 'F')} to ${formatTemperature(t.max, 'F')})`}, {h.min}–
-          {h.max} % humidity
-          {sac.band.origin === 'sac' ? ', set for this sac.' : `. ${sac.band.source}. Leave the band empty to keep it.`}
+          {sac.band.origin === 'sac' ? t('page.sacs.settings.bandSac', band) : t('page.sacs.settings.bandDefault', band)}
         </Text>
-        <FormActions message={message} loading={update.isPending} submitLabel="Save settings" />
+        <FormActions message={message} loading={update.isPending} submitLabel={t('page.sacs.settings.save')} />
         {saved && (
           <Text size="sm" className="tone-ok" role="status">
-            Settings saved.
+            {t('page.sacs.settings.saved')}
           </Text>
         )}
       </Stack>
@@ -92,13 +98,14 @@ export function SacSettingsForm({ sac, temperatureUnit }: { sac: SacResponse; te
 
 /** The owner's project-wide switch: caretakers may record the pull and the opening. */
 export function IncubatorRightsSwitch({ sac }: { sac: SacResponse }) {
+  const t = useWords();
   const set = useSetIncubatorRights(sac.projectId);
   const [error, setError] = useState<string | null>(null);
   return (
     <Group>
       <Switch
-        label="Caretakers may record the pull and the opening"
-        description="For every sac of this project."
+        label={t('page.sacs.settings.caretakers')}
+        description={t('page.sacs.settings.caretakersHint')}
         checked={sac.caretakersMayPullAndOpen}
         disabled={set.isPending}
         onChange={async (e) => {
@@ -106,7 +113,7 @@ export function IncubatorRightsSwitch({ sac }: { sac: SacResponse }) {
           try {
             await set.mutateAsync({ caretakersMayPullAndOpen: e.currentTarget.checked });
           } catch (err) {
-            setError(isApiError(err) ? err.message : 'Not saved. Try again.');
+            setError(isApiError(err) ? err.message : t('page.sacs.notSaved'));
           }
         }}
       />

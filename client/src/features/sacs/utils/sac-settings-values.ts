@@ -6,6 +6,7 @@ import {
   type Range,
   type SacResponse,
   type UpdateSacRequest,
+  type Words,
 } from '@broodsilk/shared';
 import { readNumber, type NumberRule } from '@/components/fields/typed-number';
 
@@ -21,15 +22,21 @@ export interface SacSettingsValues {
   humidityMax: string;
 }
 
-export const SETTINGS_RULES: Record<Exclude<keyof SacSettingsValues, 'container'>, NumberRule> = {
+/** The rules of the number fields; the refusal of a missing roll interval in the reader's words. */
+export const settingsRules = (t: Words): Record<Exclude<keyof SacSettingsValues, 'container'>, NumberRule> => ({
   pullFromDay: { min: 0, max: PULL_DAY_MAX, decimals: 0 },
   pullToDay: { min: 0, max: PULL_DAY_MAX, decimals: 0 },
-  rollIntervalHours: { required: 'Give the hours between rolls.', min: ROLL_INTERVAL_LIMITS.minHours, max: ROLL_INTERVAL_LIMITS.maxHours, decimals: 0 },
+  rollIntervalHours: {
+    required: t('page.sacs.settings.rollHoursRequired'),
+    min: ROLL_INTERVAL_LIMITS.minHours,
+    max: ROLL_INTERVAL_LIMITS.maxHours,
+    decimals: 0,
+  },
   temperatureMin: { ...TEMPERATURE_LIMITS_C, decimals: 1 },
   temperatureMax: { ...TEMPERATURE_LIMITS_C, decimals: 1 },
   humidityMin: { ...HUMIDITY_LIMITS, decimals: 0 },
   humidityMax: { ...HUMIDITY_LIMITS, decimals: 0 },
-};
+});
 
 const text = (n: number | null | undefined) => (n === null || n === undefined ? '' : String(n));
 
@@ -67,6 +74,6 @@ export function settingsRequest(v: SacSettingsValues): UpdateSacRequest {
 }
 
 /** One end of a range without the other: said next to the empty one. */
-export function halfRange(min: string, max: string, what: string): string | null {
-  return (min.trim() === '') !== (max.trim() === '') ? `Give both ends of the ${what}, or neither for the usual one.` : null;
+export function halfRange(t: Words, min: string, max: string, what: 'pullWindow' | 'temperature' | 'humidity'): string | null {
+  return (min.trim() === '') !== (max.trim() === '') ? t(`page.sacs.settings.halfRange.${what}`) : null;
 }

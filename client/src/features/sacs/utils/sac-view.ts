@@ -1,11 +1,14 @@
 import {
+  BROOD_COUNT_MAX,
   broodStageLabel,
   type BandSide,
   type BroodStage,
+  type ProjectResponse,
   type PullWindowState,
   type RollStatus,
   type SacResponse,
   type StageNumbering,
+  type Words,
 } from '@broodsilk/shared';
 import { catalogueLabels, currentNumbering, i18next, words } from '@/lib/i18n';
 import { formatInstant } from '@/lib/dates';
@@ -67,4 +70,21 @@ export { rangeText, readingAlertText } from '@/lib/band';
 /** The flag beside a logged reading outside the band. */
 export function bandFlag(side: BandSide | null): string | null {
   return side ? words(`page.sacs.band.flag.${side}`) : null;
+}
+
+/** A count as read: "about 38" for an estimate, the number alone for a count made one by one. */
+export function countText(t: Words, n: number, estimated: boolean): string {
+  return estimated ? t('page.sacs.about', { n }) : String(n);
+}
+
+/** A count of eggs or young: a whole number from 0 to `max`, refused in the reader's words. */
+export const countRule = (t: Words, max: number = BROOD_COUNT_MAX) => ({ min: 0, max, decimals: 0, rangeMessage: t('page.sacs.wholeFrom0', { max }) });
+
+/**
+ * What the species' facts say of urticating hairs for this sac (the pair's species; a hybrid
+ * counts if either parent has them); null while the project and its animals are not known.
+ */
+export function sacHasUrticatingHairs(project: Pick<ProjectResponse, 'femaleAnimal' | 'maleAnimal'> | undefined): boolean | null {
+  if (!project) return null;
+  return [project.femaleAnimal, project.maleAnimal].some((a) => a.species.urticatingHairs);
 }
