@@ -126,7 +126,6 @@ export function createConfig({ root }) {
         'client/src/features/sacs/**',
         'client/src/features/account/**',
         'client/src/features/projects/**',
-        'client/src/features/invitations/**',
         'client/src/app/routes/**',
       ],
       plugins: { i18next },
