@@ -125,7 +125,6 @@ export function createConfig({ root }) {
         'client/src/features/collection/**',
         'client/src/features/sacs/**',
         'client/src/features/account/**',
-        'client/src/features/projects/**',
         'client/src/app/routes/**',
       ],
       plugins: { i18next },
