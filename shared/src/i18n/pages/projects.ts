@@ -402,7 +402,7 @@ export const projectsDe: Widen<typeof projectsEn> = {
     onRequired: 'An welchem Tag wurde das Männchen eingesetzt?',
     onFuture: 'Eine Verpaarung, die stattgefunden hat, kann nicht in der Zukunft liegen.',
     minutesRequired: 'Wie viele Minuten?',
-    minutesRange: 'Von 1 Minute bis 14 Tage (20160 Minuten).',
+    minutesRange: 'Von 1 Minute bis zu 14 Tagen (20160 Minuten).',
     reasonRequired: 'Sag kurz, warum die eingetragene Verpaarung falsch war.',
     save: 'Verpaarung speichern',
     saveCorrection: 'Korrektur speichern',
