@@ -6,15 +6,17 @@ import { paths } from '@/config/paths';
 import { useMe } from '@/features/auth/api/me';
 import { useInvitationPreview } from '@/features/invitations/api/invitation';
 import { InvitationCard } from '@/features/invitations/components/invitation-card';
+import { useWords } from '@/lib/i18n';
 
 export function Component() {
   const { token } = useParams() as { token: string };
+  const t = useWords();
   const navigate = useNavigate();
   const me = useMe();
   const preview = useInvitationPreview(token);
   const here = paths.invitation.href(token);
   return (
-    <PublicLayout title="You are invited" subtitle="A breeding project on Broodsilk">
+    <PublicLayout title={t('page.invitations.title')} subtitle={t('page.invitations.subtitle')}>
       {preview.isPending || me.isPending ? (
         <PageLoader />
       ) : preview.isError ? (
@@ -23,7 +25,7 @@ export function Component() {
         <InvitationCard
           token={token}
           preview={preview.data}
-          signedInAs={me.data ? `${me.data.displayName} (${me.data.email})` : null}
+          signedInAs={me.data ? t('page.invitations.who', { name: me.data.displayName, email: me.data.email }) : null}
           signInHref={paths.signIn.href(here)}
           registerHref={paths.register.href(here)}
           onJoined={(r) => navigate(paths.project.href(r.projectId), { replace: true })}

@@ -7,8 +7,10 @@ import { PageLoader } from '@/components/ui/page-loader';
 import { paths } from '@/config/paths';
 import { useAnimals } from '@/features/collection/api/animals';
 import { ProjectForm } from '@/features/projects/components/project-form';
+import { useWords } from '@/lib/i18n';
 
 export function Component() {
+  const t = useWords();
   const navigate = useNavigate();
   const females = useAnimals({ sex: 'female', mature: true, limit: 200, sort: 'label' });
   const males = useAnimals({ sex: 'male', mature: true, limit: 200, sort: 'label' });
@@ -17,11 +19,11 @@ export function Component() {
   return (
     <>
       <PageHeader
-        title="New project"
-        description="One breeding attempt: a female, a male, the partners and the agreed split."
+        title={t('page.projects.newProject.title')}
+        description={t('page.projects.newProject.description')}
         actions={
           <Anchor component={Link} to={paths.projects.href()} size="sm">
-            All projects
+            {t('page.projects.newProject.allProjects')}
           </Anchor>
         }
       />
@@ -29,7 +31,7 @@ export function Component() {
         females={females.data.items.filter(mayStartProject)}
         males={males.data.items.filter((a) => mayStartProject(a) && a.custody !== 'loan-out')}
         onCreated={({ project, problems }) => {
-          for (const p of problems) notifications.show({ color: 'amber', title: 'Not everything was saved', message: p, autoClose: false });
+          for (const p of problems) notifications.show({ color: 'amber', title: t('page.projects.newProject.notAllSaved'), message: p, autoClose: false });
           navigate(paths.project.href(project.id));
         }}
       />

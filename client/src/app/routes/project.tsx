@@ -5,7 +5,7 @@ import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
 import { PageHeader } from '@/components/ui/page-header';
 import { PageLoader } from '@/components/ui/page-loader';
 import { paths } from '@/config/paths';
-import { formatDate } from '@/lib/dates';
+import { useWords, words } from '@/lib/i18n';
 import { useMe } from '@/features/auth/api/me';
 import { pairingQueries } from '@/features/projects/api/pairings';
 import { projectQueries, useProject, useProjectActivity } from '@/features/projects/api/projects';
@@ -21,7 +21,7 @@ import { ProjectAnimals } from '@/features/projects/components/project-animals';
 import { StageLine } from '@/features/projects/components/stage-line';
 import { TermsPanel } from '@/features/projects/components/terms-panel';
 import { WarningsList } from '@/features/projects/components/warnings-list';
-import { ROLE_LABELS } from '@/features/projects/utils/labels';
+import { midSentence, ROLE_LABELS } from '@/features/projects/utils/labels';
 import { sacQueries } from '@/features/sacs/api/sacs';
 import { ProjectSacs } from '@/features/sacs/components/project-sacs';
 import { calendarQueries } from '@/features/dashboard/api/calendar-feed';
@@ -60,12 +60,15 @@ function maleOptions(p: ProjectResponse, mature: readonly MaleClockRow[]): MaleO
   const own = [...p.males].reverse().sort((a, b) => Number(a.status === 'deceased') - Number(b.status === 'deceased'));
   const ids = new Set(own.map((m) => m.id));
   return [
-    ...own.map((m) => ({ value: m.id, label: m.status === 'deceased' ? `${m.label} (died)` : m.label })),
-    ...mature.filter((r) => !ids.has(r.animal.id)).map((r) => ({ value: r.animal.id, label: `${r.animal.label} (backup)` })),
+    ...own.map((m) => ({ value: m.id, label: m.status === 'deceased' ? words('page.projects.page.maleDied', { label: m.label }) : m.label })),
+    ...mature
+      .filter((r) => !ids.has(r.animal.id))
+      .map((r) => ({ value: r.animal.id, label: words('page.projects.page.maleBackup', { label: r.animal.label }) })),
   ];
 }
 
 export function Component() {
+  const t = useWords();
   const { projectId } = useParams() as { projectId: string };
   const { data: me } = useMe();
   const project = useProject(projectId);
@@ -82,20 +85,21 @@ export function Component() {
     <Stack>
       <PageHeader
         title={p.title}
-        description={
-          <>
-            {p.femaleAnimal.label} × {p.males.map((m) => m.label).join(' / ')} · run by {p.owner.name} · you: {ROLE_LABELS[p.myRole].toLowerCase()}
-          </>
-        }
+        description={t('page.projects.page.description', {
+          female: p.femaleAnimal.label,
+          males: p.males.map((m) => m.label).join(' / '),
+          owner: p.owner.name,
+          role: midSentence(ROLE_LABELS[p.myRole]),
+        })}
         actions={
           <Group gap="md">
             {isDealParty(p.myRole) && (
               <Anchor component={Link} to={paths.projectAccount.href(p.id)} size="sm" fw={600}>
-                Account
+                {t('page.projects.page.account')}
               </Anchor>
             )}
             <Anchor component={Link} to={paths.projects.href()} size="sm">
-              All projects
+              {t('page.projects.page.allProjects')}
             </Anchor>
           </Group>
         }
@@ -105,7 +109,7 @@ export function Component() {
       <Grid>
         <Grid.Col span={{ base: 12, md: 7 }}>
           <Stack>
-            <SectionCard title="Sacs" testId="section-sacs">
+            <SectionCard title={t('page.projects.page.sacs')} testId="section-sacs">
               <ProjectSacs
                 projectId={p.id}
                 timeZone={me.timeZone}
@@ -114,7 +118,7 @@ export function Component() {
                 incubatorHref={paths.incubatorSac.href}
               />
             </SectionCard>
-            <SectionCard title="Pairings" testId="section-pairings">
+            <SectionCard title={t('page.projects.page.pairings')} testId="section-pairings">
               <PairingsPanel
                 projectId={p.id}
                 timeZone={me.timeZone}
@@ -123,35 +127,35 @@ export function Component() {
                 males={maleOptions(p, mature.data ?? [])}
               />
             </SectionCard>
-            <SectionCard title="Terms" testId="section-terms">
+            <SectionCard title={t('page.projects.page.terms')} testId="section-terms">
               {isDealParty(p.myRole) ? (
                 <TermsPanel projectId={p.id} me={me} myRole={p.myRole} members={p.members} />
               ) : (
-                <Text c="dimmed">The terms are between the keeper and the partners.</Text>
+                <Text c="dimmed">{t('page.projects.page.termsNotYours')}</Text>
               )}
             </SectionCard>
           </Stack>
         </Grid.Col>
         <Grid.Col span={{ base: 12, md: 5 }}>
           <Stack>
-            <SectionCard title={p.males.length > 1 ? 'The animals' : 'The pair'}>
+            <SectionCard title={t(p.males.length > 1 ? 'page.projects.page.theAnimals' : 'page.projects.page.thePair')}>
               <ProjectAnimals female={p.femaleAnimal} males={p.males} />
             </SectionCard>
-            <SectionCard title="Parties" testId="section-parties">
+            <SectionCard title={t('page.projects.parties.label')} testId="section-parties">
               <PartiesPanel projectId={p.id} members={p.members} myRole={p.myRole} timeZone={me.timeZone} />
             </SectionCard>
-            <SectionCard title="Timeline" testId="section-timeline">
+            <SectionCard title={t('page.projects.page.timeline')} testId="section-timeline">
               {activity.isError ? (
                 <Alert color="clay">{activity.error.message}</Alert>
               ) : activity.data ? (
                 <ActivityTimeline events={activity.data} timeZone={me.timeZone} />
               ) : (
-                <Text c="dimmed">Loading…</Text>
+                <Text c="dimmed">{t('page.shell.loadingDots')}</Text>
               )}
             </SectionCard>
             <CalendarFeedCard />
             {p.notes && (
-              <SectionCard title="Notes">
+              <SectionCard title={t('page.projects.page.notes')}>
                 <Text size="sm" style={{ whiteSpace: 'pre-wrap' }}>
                   {p.notes}
                 </Text>
@@ -163,8 +167,12 @@ export function Component() {
               <Group>
                 <Badge color="gray" variant="light" tt="none">
                   {p.stage.stage === 'closed'
-                    ? `Closed${p.closedOn ? ` ${formatDate(p.closedOn)}` : ''}`
-                    : `Ended${p.endedOn ? ` ${formatDate(p.endedOn)}` : ''}`}
+                    ? p.closedOn
+                      ? t('page.projects.page.closedOn', { date: p.closedOn })
+                      : t('page.projects.page.closed')
+                    : p.endedOn
+                      ? t('page.projects.page.endedOn', { date: p.endedOn })
+                      : t('page.projects.page.ended')}
                 </Badge>
               </Group>
             )}

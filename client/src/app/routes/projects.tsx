@@ -8,20 +8,20 @@ import { projectQueries, useProjects } from '@/features/projects/api/projects';
 import { ProjectTable } from '@/features/projects/components/project-table';
 import { useDashboard } from '@/features/dashboard/api/dashboard';
 import type { DashboardResponse, ProjectSummary } from '@broodsilk/shared';
-import { formatDate } from '@/lib/dates';
+import { words, useWords } from '@/lib/i18n';
 
 /** The next thing due per project, from the dashboard's lists (most pressing first). */
 function nextDueFrom(dashboard: DashboardResponse | undefined) {
   return (p: ProjectSummary): string | null => {
     if (!dashboard) return null;
     const roll = dashboard.dueToday.rolls.find((r) => r.projectId === p.id);
-    if (roll?.sac.roll) return roll.sac.roll.status === 'overdue' ? 'Roll overdue' : 'Roll due';
+    if (roll?.sac.roll) return words(roll.sac.roll.status === 'overdue' ? 'page.projects.list.rollOverdue' : 'page.projects.list.rollDue');
     const today = dashboard.dueToday.pullWindows.find((w) => w.projectId === p.id);
-    if (today) return today.event === 'closes-today' ? 'Pull window closes today' : 'Pull window opens today';
+    if (today) return words(today.event === 'closes-today' ? 'page.projects.list.pullClosesToday' : 'page.projects.list.pullOpensToday');
     const upcoming = dashboard.upcomingPullWindows.find((w) => w.projectId === p.id);
     if (upcoming) {
       const w = upcoming.sac.pullWindow;
-      return w.state === 'not-yet' ? `Pull from ${formatDate(w.opensOn)}` : `Pull by ${formatDate(w.closesOn)}`;
+      return w.state === 'not-yet' ? words('page.projects.list.pullFrom', { date: w.opensOn }) : words('page.projects.list.pullBy', { date: w.closesOn });
     }
     return null;
   };
@@ -33,16 +33,17 @@ export const clientLoader = (qc: QueryClient) => async () => {
 };
 
 export function Component() {
+  const t = useWords();
   const projects = useProjects();
   const dashboard = useDashboard();
   return (
     <>
       <PageHeader
-        title="Projects"
-        description="Every pairing you run or take part in, from plan to settled shares."
+        title={t('page.projects.list.title')}
+        description={t('page.projects.list.description')}
         actions={
           <Button component={Link} to={paths.newProject.href()}>
-            New project
+            {t('page.projects.list.newProject')}
           </Button>
         }
       />

@@ -2,6 +2,7 @@ import { screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { renderWithProviders, stubFetch } from '@/testing/render';
+import { i18next } from '@/lib/i18n';
 import { invitationPreview as preview } from './invitation-fixtures.test-data';
 import { InvitationCard } from './invitation-card';
 
@@ -69,5 +70,36 @@ describe('InvitationCard', () => {
     );
     expect(screen.getByText('This invitation was already used.')).toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Join the project' })).not.toBeInTheDocument();
+  });
+});
+
+describe('InvitationCard words', () => {
+  afterEach(async () => {
+    await i18next.changeLanguage('en');
+  });
+
+  it('shows the names as typed, angle brackets included', () => {
+    vi.stubGlobal('fetch', stubFetch({}).fetchStub);
+    renderWithProviders(
+      <InvitationCard
+        token="tok"
+        preview={{ ...preview, inviterName: 'Mira <3', projectTitle: '<b>Regalis</b> 2027', role: 'caretaker' }}
+        signedInAs={null}
+        signInHref="/sign-in"
+        registerHref="/register"
+        onJoined={vi.fn()}
+      />,
+    );
+    expect(screen.getByTestId('invitation')).toHaveTextContent(
+      'Mira <3 invites you to the project <b>Regalis</b> 2027 as the caretaker (you roll the eggs and keep the care log).',
+    );
+  });
+
+  it('speaks German to a German reader', async () => {
+    vi.stubGlobal('fetch', stubFetch({}).fetchStub);
+    await i18next.changeLanguage('de');
+    renderWithProviders(<InvitationCard token="tok" preview={preview} signedInAs={null} signInHref="/sign-in" registerHref="/register" onJoined={vi.fn()} />);
+    expect(screen.getByTestId('invitation')).toHaveTextContent('Mira lädt dich als Partner zum Projekt Regalis 2027 ein');
+    expect(screen.getByRole('link', { name: 'Anmelden und beitreten' })).toBeInTheDocument();
   });
 });

@@ -2,13 +2,10 @@ import { Alert, Button, Stack, Text } from '@mantine/core';
 import { useState } from 'react';
 import { Link } from 'react-router';
 import type { AcceptInvitationResponse, InvitationPreview } from '@broodsilk/shared';
+import { Trans } from 'react-i18next';
 import { isApiError } from '@/lib/api-error';
+import { useWords } from '@/lib/i18n';
 import { useAcceptInvitation } from '../api/invitation';
-
-const ROLE_TEXT = {
-  partner: 'a partner (you share in the brood and agree the terms)',
-  caretaker: 'the caretaker (you roll the eggs and keep the care log)',
-} as const;
 
 interface InvitationCardProps {
   token: string;
@@ -21,27 +18,31 @@ interface InvitationCardProps {
 
 /** What an invitation offers and the one action: join (after signing in, if needed). */
 export function InvitationCard({ token, preview, signedInAs, signInHref, registerHref, onJoined }: InvitationCardProps) {
+  const t = useWords();
   const accept = useAcceptInvitation(token);
   const [error, setError] = useState<string | null>(null);
   const [waiting, setWaiting] = useState(false);
   return (
     <Stack data-testid="invitation">
       <Text>
-        <b>{preview.inviterName}</b> invites you to the project <b>{preview.projectTitle}</b> as {ROLE_TEXT[preview.role]}.
+        {/* The names go in as elements, not as values, so a title with angle brackets is shown as typed. */}
+        <Trans
+          i18nKey={`page.invitations.invites.${preview.role}`}
+          components={{ inviter: <b>{preview.inviterName}</b>, project: <b>{preview.projectTitle}</b> }}
+        />
       </Text>
       {!preview.valid ? (
-        <Alert color="clay" title="This invitation no longer works">
-          {preview.problem ?? 'Ask the keeper to send a new one.'}
+        <Alert color="clay" title={t('page.invitations.noLongerWorks')}>
+          {preview.problem ?? t('page.invitations.askForNew')}
         </Alert>
       ) : waiting ? (
-        <Alert color="moss" title="Waiting for the owner" data-testid="invitation-waiting">
-          This invitation was sent to another e-mail address, so the project owner must approve your account before you join. You will see the project once they
-          have.
+        <Alert color="moss" title={t('page.invitations.waitingTitle')} data-testid="invitation-waiting">
+          {t('page.invitations.waiting')}
         </Alert>
       ) : signedInAs ? (
         <>
           <Text size="sm" c="dimmed">
-            Signed in as {signedInAs}.
+            {t('page.invitations.signedInAs', { who: signedInAs })}
           </Text>
           {error && (
             <Alert color="clay" role="alert">
@@ -58,21 +59,21 @@ export function InvitationCard({ token, preview, signedInAs, signInHref, registe
                 if (result.status === 'awaiting-owner') setWaiting(true);
                 else onJoined(result);
               } catch (e) {
-                setError(isApiError(e) ? e.message : 'Joining did not work. Try again.');
+                setError(isApiError(e) ? e.message : t('page.invitations.joinFailed'));
               }
             }}
           >
-            Join the project
+            {t('page.invitations.join')}
           </Button>
         </>
       ) : (
         <>
-          <Text size="sm">Sign in to join. New to Broodsilk? Create an account with the address the invitation went to; you come back here to join.</Text>
+          <Text size="sm">{t('page.invitations.signInFirst')}</Text>
           <Button component={Link} to={signInHref} size="md">
-            Sign in to join
+            {t('page.invitations.signIn')}
           </Button>
           <Button component={Link} to={registerHref} variant="light">
-            Create an account
+            {t('page.auth.createAccount')}
           </Button>
         </>
       )}

@@ -11,7 +11,7 @@ const FIRST_EVENTS = 15;
 export function ActivityTimeline({ events, timeZone, showProject = false }: { events: ActivityEventResponse[]; timeZone: string; showProject?: boolean }) {
   const [all, setAll] = useState(false);
   const t = useWords();
-  if (events.length === 0) return <Text c="dimmed">Nothing has happened yet.</Text>;
+  if (events.length === 0) return <Text c="dimmed">{t('page.projects.timeline.none')}</Text>;
   const sorted = [...events].sort((a, b) => (a.at < b.at ? 1 : -1));
   const shown = all ? sorted : sorted.slice(0, FIRST_EVENTS);
   return (
@@ -21,7 +21,7 @@ export function ActivityTimeline({ events, timeZone, showProject = false }: { ev
           <Timeline.Item key={e.id} color={e.kind.includes('fail') || e.kind.includes('end') ? 'clay' : 'moss'}>
             <Text size="sm">{withReadableDates(activitySentence(t, e, { unit: currentUnit(), numbering: currentNumbering() }))}</Text>
             <Text size="xs" c="dimmed">
-              {e.actor?.name ?? 'Broodsilk'} · {formatInstant(e.at, timeZone)}
+              {e.actor?.name ?? t('page.shell.brand')} · {formatInstant(e.at, timeZone)}
               {showProject && ` · ${e.projectTitle}`}
             </Text>
           </Timeline.Item>
@@ -29,7 +29,7 @@ export function ActivityTimeline({ events, timeZone, showProject = false }: { ev
       </Timeline>
       {sorted.length > shown.length && (
         <Button variant="subtle" size="xs" mt="sm" onClick={() => setAll(true)}>
-          Show all {sorted.length} events
+          {t('page.projects.timeline.showAll', { count: sorted.length })}
         </Button>
       )}
     </>

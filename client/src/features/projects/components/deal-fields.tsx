@@ -3,7 +3,7 @@ import type { ReactNode } from 'react';
 import type { BoundField } from '@/components/fields/bound-field';
 import { NumberField } from '@/components/fields/number-field';
 import { BROOD_STAGES, broodStageLabel, FAILURE_CLAUSES, SHIPPING_PAYERS } from '@broodsilk/shared';
-import { currentNumbering, words } from '@/lib/i18n';
+import { currentNumbering, useWords, words } from '@/lib/i18n';
 import { FAILURE_CLAUSE_LABELS, SHIPPING_LABELS } from '../utils/labels';
 
 export const CURRENCIES = ['EUR', 'USD', 'GBP', 'PLN', 'CHF', 'CZK', 'SEK', 'CAD', 'AUD'];
@@ -23,6 +23,7 @@ export interface DealFieldsProps {
 
 /** The project-wide part of the terms: price and currency, the failure clause, the hand-over stage and who pays shipping. */
 export function DealFields({ field, children }: DealFieldsProps) {
+  const t = useWords();
   const select = ({ key, ...props }: BoundField, label: string, data: { value: string; label: string }[] | string[]) => (
     <Select label={label} data={data} allowDeselect={false} key={key} {...props} />
   );
@@ -30,11 +31,11 @@ export function DealFields({ field, children }: DealFieldsProps) {
   const { key: currencyKey, ...currencyProps } = field('currency');
   return (
     <SimpleGrid cols={{ base: 1, sm: 3 }}>
-      <NumberField label="Price per spiderling" key={priceKey} {...priceProps} />
-      <Select label="Currency" data={CURRENCIES} searchable allowDeselect={false} key={currencyKey} {...currencyProps} />
-      {select(field('failureClause'), 'If the project fails', failureOptions())}
-      {select(field('handOverStage'), 'Handed over at', handOverOptions())}
-      {select(field('shippingPaidBy'), 'Shipping', shippingOptions())}
+      <NumberField label={t('page.projects.deal.price')} key={priceKey} {...priceProps} />
+      <Select label={t('page.projects.deal.currency')} data={CURRENCIES} searchable allowDeselect={false} key={currencyKey} {...currencyProps} />
+      {select(field('failureClause'), t('page.projects.deal.failureClause'), failureOptions())}
+      {select(field('handOverStage'), t('page.projects.deal.handOver'), handOverOptions())}
+      {select(field('shippingPaidBy'), t('page.projects.deal.shipping'), shippingOptions())}
       {children}
     </SimpleGrid>
   );

@@ -12,7 +12,8 @@ import { useWords } from '@/lib/i18n';
 import { useEndProject } from '../api/projects';
 import { ENDED_EARLY_LABELS } from '../utils/labels';
 
-const reasonOptions = ENDED_EARLY_REASONS.map((r) => ({ value: r, label: ENDED_EARLY_LABELS[r].replace(/^./, (c: string) => c.toUpperCase()) }));
+// A function, not a constant: the words follow the reader's language.
+const reasonOptions = () => ENDED_EARLY_REASONS.map((r) => ({ value: r, label: ENDED_EARLY_LABELS[r].replace(/^./, (c: string) => c.toUpperCase()) }));
 
 /** The keeper calls a project off, with the reason the stage line will show; a setback in the facts pre-fills it. */
 export function EndProjectForm({ projectId, setback }: { projectId: string; setback?: EndedEarlyReason }) {
@@ -24,7 +25,7 @@ export function EndProjectForm({ projectId, setback }: { projectId: string; setb
     mode: 'uncontrolled',
     initialValues: { reason: setback ?? null, note: '', partnerMessage: '' },
     validate: {
-      reason: (v) => (v ? null : 'Why does it end?'),
+      reason: (v) => (v ? null : t('page.projects.end.reasonRequired')),
       note: textRule({ maxLength: TEXT_LIMITS.note }),
       partnerMessage: textRule({ maxLength: TEXT_LIMITS.partnerMessage }),
     },
@@ -42,14 +43,14 @@ export function EndProjectForm({ projectId, setback }: { projectId: string; setb
     <Stack gap="xs">
       <Group>
         <Button variant="subtle" color="clay" onClick={toggle}>
-          {opened ? 'Keep the project going' : 'End this project early'}
+          {t(opened ? 'page.projects.end.keepGoing' : 'page.projects.end.endEarly')}
         </Button>
       </Group>
       <Collapse expanded={opened}>
         <form onSubmit={submit} noValidate>
           <Stack maw={420}>
-            <Select label="Reason" data={reasonOptions} key={form.key('reason')} {...form.getInputProps('reason')} />
-            <TextField label="Note" maxLength={TEXT_LIMITS.note} key={form.key('note')} {...form.getInputProps('note')} />
+            <Select label={t('page.projects.end.reason')} data={reasonOptions()} key={form.key('reason')} {...form.getInputProps('reason')} />
+            <TextField label={t('page.projects.end.note')} maxLength={TEXT_LIMITS.note} key={form.key('note')} {...form.getInputProps('note')} />
             <TextAreaField
               label={t('page.failureNotice.messageLabel')}
               description={t('page.failureNotice.endMessageHint')}
@@ -58,7 +59,7 @@ export function EndProjectForm({ projectId, setback }: { projectId: string; setb
               key={form.key('partnerMessage')}
               {...form.getInputProps('partnerMessage')}
             />
-            <FormActions message={message} loading={end.isPending} submitLabel="End project" />
+            <FormActions message={message} loading={end.isPending} submitLabel={t('page.projects.end.submit')} />
           </Stack>
         </form>
       </Collapse>

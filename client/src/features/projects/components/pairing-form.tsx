@@ -3,7 +3,7 @@ import { TimeInput } from '@mantine/dates';
 import '@mantine/dates/styles.css';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import { PAIRING_OUTCOMES, TEXT_LIMITS, todayIn, type CreatePairingRequest, type PairingOutcome, type PairingResponse } from '@broodsilk/shared';
+import { label, PAIRING_OUTCOMES, TEXT_LIMITS, todayIn, type CreatePairingRequest, type PairingOutcome, type PairingResponse } from '@broodsilk/shared';
 import { DateField } from '@/components/fields/date-field';
 import { NumberField } from '@/components/fields/number-field';
 import { TextAreaField, TextField } from '@/components/fields/text-field';
@@ -15,10 +15,12 @@ import { SafetyNote } from '@/components/ui/safety-note';
 import { WarningConfirm, useWarnedSave } from '@/components/ui/warning-confirm';
 import { dayjs } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
+import { useWords } from '@/lib/i18n';
 import { useRecordPairing } from '../api/pairings';
 import { PAIRING_OUTCOME_LABELS } from '../utils/labels';
 
-const outcomeOptions = PAIRING_OUTCOMES.map((o) => ({ value: o, label: PAIRING_OUTCOME_LABELS[o] }));
+// A function, not a constant: the words follow the reader's language.
+const outcomeOptions = () => PAIRING_OUTCOMES.map((o) => ({ value: o, label: PAIRING_OUTCOME_LABELS[o] }));
 
 export interface MaleOption {
   value: string;
@@ -60,6 +62,7 @@ function startFrom(p: PairingResponse, timeZone: string): Omit<Values, 'reason'>
 
 /** Records a pairing, or corrects one (a new row that strikes the old one, with a reason). */
 export function PairingForm({ projectId, timeZone, males, correcting, onDone }: PairingFormProps) {
+  const t = useWords();
   const today = todayIn(timeZone, new Date());
   const record = useRecordPairing(projectId);
   const [message, setMessage] = useState<string | null>(null);
@@ -70,18 +73,22 @@ export function PairingForm({ projectId, timeZone, males, correcting, onDone }: 
       ? { ...startFrom(correcting, timeZone), reason: '' }
       : { maleId: males[0]?.value ?? '', on: '', time: '20:00', durationMinutes: '20', outcome: 'connected', notes: '', reason: '' },
     validate: {
-      maleId: (v) => (v ? null : 'Which male went in?'),
-      on: dateRule({ required: 'On which day was the male put in?', latest: today, latestMessage: 'A pairing that has happened cannot be in the future.' }),
-      time: (v) => (/^\d{2}:\d{2}$/.test(v) ? null : 'The time as HH:MM.'),
+      maleId: (v) => (v ? null : t('page.projects.pairing.maleRequired')),
+      on: dateRule({
+        required: t('page.projects.pairing.onRequired'),
+        latest: today,
+        latestMessage: t('page.projects.pairing.onFuture'),
+      }),
+      time: (v) => (/^\d{2}:\d{2}$/.test(v) ? null : t('page.shell.fields.timeAsHhMm')),
       durationMinutes: numberRule({
-        required: 'How many minutes?',
+        required: t('page.projects.pairing.minutesRequired'),
         min: 1,
         max: 20_160,
         decimals: 0,
-        rangeMessage: 'From 1 minute to 14 days (20160 minutes).',
+        rangeMessage: t('page.projects.pairing.minutesRange'),
       }),
       notes: textRule({ maxLength: TEXT_LIMITS.note }),
-      reason: correcting ? textRule({ required: 'Say briefly why the recorded pairing was wrong.', maxLength: TEXT_LIMITS.correctionReason }) : () => null,
+      reason: correcting ? textRule({ required: t('page.projects.pairing.reasonRequired'), maxLength: TEXT_LIMITS.correctionReason }) : () => null,
     },
   });
 
@@ -110,18 +117,24 @@ export function PairingForm({ projectId, timeZone, males, correcting, onDone }: 
   return (
     <form onSubmit={submit} noValidate data-testid={correcting ? 'pairing-correction-form' : 'pairing-form'}>
       <Stack maw={480}>
-        {correcting && <Text size="sm">The recorded pairing stays in the list, struck through; this one counts in its place.</Text>}
-        <Select label="Male" data={males} allowDeselect={false} key={form.key('maleId')} {...form.getInputProps('maleId')} />
+        {correcting && <Text size="sm">{t('page.projects.pairing.replaces')}</Text>}
+        <Select label={label(t, 'sex', 'male')} data={males} allowDeselect={false} key={form.key('maleId')} {...form.getInputProps('maleId')} />
         <Group grow align="flex-start">
-          <DateField label="Day the male went in" withAsterisk key={form.key('on')} {...form.getInputProps('on')} />
-          <TimeInput label="At" key={form.key('time')} {...form.getInputProps('time')} />
+          <DateField label={t('page.projects.pairing.on')} withAsterisk key={form.key('on')} {...form.getInputProps('on')} />
+          <TimeInput label={t('page.shell.fields.at')} key={form.key('time')} {...form.getInputProps('time')} />
         </Group>
-        <NumberField label="How long (minutes)" whole key={form.key('durationMinutes')} {...form.getInputProps('durationMinutes')} />
-        <Select label="Outcome" data={outcomeOptions} allowDeselect={false} key={form.key('outcome')} {...form.getInputProps('outcome')} />
-        <TextAreaField label="Notes" maxLength={TEXT_LIMITS.note} key={form.key('notes')} {...form.getInputProps('notes')} />
+        <NumberField label={t('page.projects.pairing.minutes')} whole key={form.key('durationMinutes')} {...form.getInputProps('durationMinutes')} />
+        <Select
+          label={t('page.projects.pairing.outcome')}
+          data={outcomeOptions()}
+          allowDeselect={false}
+          key={form.key('outcome')}
+          {...form.getInputProps('outcome')}
+        />
+        <TextAreaField label={t('page.projects.pairing.notes')} maxLength={TEXT_LIMITS.note} key={form.key('notes')} {...form.getInputProps('notes')} />
         {correcting && (
           <TextField
-            label="Why the recorded pairing was wrong"
+            label={t('page.projects.pairing.reason')}
             withAsterisk
             maxLength={TEXT_LIMITS.correctionReason}
             key={form.key('reason')}
@@ -130,7 +143,12 @@ export function PairingForm({ projectId, timeZone, males, correcting, onDone }: 
         )}
         {warned.warnings && <WarningConfirm warnings={warned.warnings} loading={record.isPending} onConfirm={warned.confirm} onCancel={warned.cancel} />}
         <SafetyNote text="pairing" />
-        <FormActions message={message} loading={record.isPending} submitLabel={correcting ? 'Save correction' : 'Save pairing'} onCancel={onDone} />
+        <FormActions
+          message={message}
+          loading={record.isPending}
+          submitLabel={t(correcting ? 'page.projects.pairing.saveCorrection' : 'page.projects.pairing.save')}
+          onCancel={onDone}
+        />
       </Stack>
     </form>
   );

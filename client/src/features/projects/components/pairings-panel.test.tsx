@@ -2,6 +2,7 @@ import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { PairingResponse } from '@broodsilk/shared';
+import { i18next } from '@/lib/i18n';
 import { renderWithProviders, stubFetch } from '@/testing/render';
 import { PairingsPanel } from './pairings-panel';
 
@@ -81,4 +82,22 @@ describe('PairingsPanel', () => {
     expect(screen.queryByRole('button', { name: /Correct/ })).not.toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Record a pairing' })).not.toBeInTheDocument();
   });
+
+  it('asks a German reader in German, the correction refused with a German message', async () => {
+    vi.stubGlobal('fetch', stub([pairing({})]).fetchStub);
+    await i18next.changeLanguage('de');
+    try {
+      renderWithProviders(<PairingsPanel projectId="p1" timeZone="UTC" canRecord canCorrect males={males} />);
+      const row = await screen.findByTestId('pairing-row');
+      // catalogue pairingOutcome['interest-only'] in German
+      expect(row).toHaveTextContent('Nur Interesse');
+      expect(screen.getByRole('columnheader', { name: 'Männchen' })).toBeInTheDocument();
+      await userEvent.click(within(row).getByRole('button', { name: /Die Verpaarung vom .* korrigieren/ }));
+      const form = screen.getByTestId('pairing-correction-form');
+      await userEvent.click(within(form).getByRole('button', { name: 'Korrektur speichern' }));
+      expect(await within(form).findByText('Sag kurz, warum die eingetragene Verpaarung falsch war.')).toBeInTheDocument();
+    } finally {
+      await i18next.changeLanguage('en');
+    }
+  }, 20_000);
 });

@@ -1,7 +1,8 @@
 import { Alert, Badge, Button, Collapse, Group, Stack, Table, Text, VisuallyHidden } from '@mantine/core';
 import { useState } from 'react';
-import type { PairingResponse } from '@broodsilk/shared';
+import { label, type PairingResponse } from '@broodsilk/shared';
 import { formatInstant } from '@/lib/dates';
+import { useWords } from '@/lib/i18n';
 import { usePairings } from '../api/pairings';
 import { PAIRING_OUTCOME_LABELS } from '../utils/labels';
 import { ScrollTable } from '@/components/ui/scroll-table';
@@ -18,6 +19,7 @@ interface PairingsPanelProps {
 }
 
 function PairingRow({ p, timeZone, onCorrect }: { p: PairingResponse; timeZone: string; onCorrect?: () => void }) {
+  const t = useWords();
   const struck = !!p.struckBy;
   return (
     <Table.Tr data-testid="pairing-row" data-struck={struck || undefined} style={struck ? { textDecoration: 'line-through' } : undefined}>
@@ -38,12 +40,12 @@ function PairingRow({ p, timeZone, onCorrect }: { p: PairingResponse; timeZone: 
         <Stack gap={2}>
           {struck && (
             <Badge variant="outline" color="gray" tt="none" style={{ textDecoration: 'none' }}>
-              Corrected, no longer counts
+              {t('page.projects.pairings.struck')}
             </Badge>
           )}
           {p.corrects && (
             <Text size="xs" c="dimmed">
-              Correction: {p.reason}
+              {t('page.projects.pairings.correction', { reason: p.reason })}
             </Text>
           )}
           {p.notes && <Text size="sm">{p.notes}</Text>}
@@ -51,8 +53,13 @@ function PairingRow({ p, timeZone, onCorrect }: { p: PairingResponse; timeZone: 
       </Table.Td>
       <Table.Td>
         {onCorrect && !struck && (
-          <Button size="compact-sm" variant="subtle" onClick={onCorrect} aria-label={`Correct the pairing of ${formatInstant(p.startedAt, timeZone)}`}>
-            Correct
+          <Button
+            size="compact-sm"
+            variant="subtle"
+            onClick={onCorrect}
+            aria-label={t('page.projects.pairings.correctOf', { when: formatInstant(p.startedAt, timeZone) })}
+          >
+            {t('page.projects.pairings.correct')}
           </Button>
         )}
       </Table.Td>
@@ -62,6 +69,7 @@ function PairingRow({ p, timeZone, onCorrect }: { p: PairingResponse; timeZone: 
 
 /** Pairing attempts of a project, corrected ones struck through; for the keeper, forms to record and correct one. */
 export function PairingsPanel({ projectId, timeZone, canRecord, canCorrect, males }: PairingsPanelProps) {
+  const t = useWords();
   const pairings = usePairings(projectId);
   const [adding, setAdding] = useState(false);
   const [correcting, setCorrecting] = useState<PairingResponse | null>(null);
@@ -69,19 +77,19 @@ export function PairingsPanel({ projectId, timeZone, canRecord, canCorrect, male
   return (
     <Stack>
       {pairings.isError && <Alert color="clay">{pairings.error.message}</Alert>}
-      {pairings.data && pairings.data.length === 0 && <Text c="dimmed">No pairing recorded yet.</Text>}
+      {pairings.data && pairings.data.length === 0 && <Text c="dimmed">{t('page.projects.pairings.none')}</Text>}
       {pairings.data && pairings.data.length > 0 && (
-        <ScrollTable minWidth={560} label="Pairings">
+        <ScrollTable minWidth={560} label={t('page.projects.pairings.tableLabel')}>
           <Table striped verticalSpacing={4} fz="sm" data-testid="pairings-table">
             <Table.Thead>
               <Table.Tr>
-                <Table.Th>Started</Table.Th>
-                <Table.Th>Male</Table.Th>
-                <Table.Th visibleFrom="sm">Minutes</Table.Th>
-                <Table.Th>Outcome</Table.Th>
-                <Table.Th>Notes</Table.Th>
+                <Table.Th>{t('page.projects.pairings.started')}</Table.Th>
+                <Table.Th>{label(t, 'sex', 'male')}</Table.Th>
+                <Table.Th visibleFrom="sm">{t('page.projects.pairings.minutes')}</Table.Th>
+                <Table.Th>{t('page.projects.pairings.outcome')}</Table.Th>
+                <Table.Th>{t('page.projects.pairings.notes')}</Table.Th>
                 <Table.Th>
-                  <VisuallyHidden>Actions</VisuallyHidden>
+                  <VisuallyHidden>{t('page.projects.pairings.actions')}</VisuallyHidden>
                 </Table.Th>
               </Table.Tr>
             </Table.Thead>
@@ -112,7 +120,7 @@ export function PairingsPanel({ projectId, timeZone, canRecord, canCorrect, male
         <>
           <Group>
             <Button variant="light" onClick={() => setAdding((o) => !o)}>
-              {adding ? 'Close' : 'Record a pairing'}
+              {t(adding ? 'page.projects.pairings.close' : 'page.projects.pairings.record')}
             </Button>
           </Group>
           <Collapse expanded={adding}>

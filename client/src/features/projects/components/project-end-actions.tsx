@@ -4,33 +4,29 @@ import { useState } from 'react';
 import { mayClose, mayReopen, type ProjectStage } from '@broodsilk/shared';
 import { ConfirmAction } from '@/components/ui/confirm-action';
 import { isApiError } from '@/lib/api-error';
+import { useWords } from '@/lib/i18n';
 import { useProjectEndStep } from '../api/projects';
 
-const STEPS = {
-  close: {
-    button: 'Close project',
-    title: 'Close this project?',
-    says: 'Closing says the project is done: no more pairings or sacs. Payments, receipt confirmations and ledger corrections still go in. A closed project cannot be reopened.',
-  },
-  reopen: {
-    button: 'Reopen',
-    title: 'Reopen this project?',
-    says: 'The early end is undone: the project takes pairings and sacs again. The timeline keeps both steps.',
-  },
-} as const;
+/** The keeper's steps after the early end or at the close; their words are page.projects.endStep.<step>. */
+type Step = 'close' | 'reopen';
 
-function EndStep({ projectId, step }: { projectId: string; step: keyof typeof STEPS }) {
+function EndStep({ projectId, step }: { projectId: string; step: Step }) {
+  const t = useWords();
   const [opened, { open, close }] = useDisclosure(false);
   const [message, setMessage] = useState<string | null>(null);
   const run = useProjectEndStep(projectId, step);
-  const words = STEPS[step];
+  const words = {
+    button: t(`page.projects.endStep.${step}.button`),
+    title: t(`page.projects.endStep.${step}.title`),
+    says: t(`page.projects.endStep.${step}.says`),
+  };
   const confirm = async () => {
     setMessage(null);
     try {
       await run.mutateAsync();
       close();
     } catch (e) {
-      setMessage(isApiError(e) ? e.message : 'That did not work. Please try again.');
+      setMessage(isApiError(e) ? e.message : t('page.projects.endStep.failed'));
     }
   };
   return (

@@ -3,6 +3,8 @@ import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import {
   DEFAULT_HAND_OVER_STAGE,
+  INVITABLE_ROLES,
+  label,
   TEXT_LIMITS,
   toMinor,
   type AnimalSummary,
@@ -15,7 +17,7 @@ import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateProject, type NewProjectResult } from '../hooks/use-create-project';
 import { priceError } from '../utils/price';
 import { lineRules } from './propose-terms-form';
-import { words } from '@/lib/i18n';
+import { useWords, words } from '@/lib/i18n';
 import { DealFields } from './deal-fields';
 import { FormActions } from '@/components/ui/form-actions';
 import { NumberField } from '@/components/fields/number-field';
@@ -50,16 +52,14 @@ interface Values {
   shippingPaidBy: ShippingPayer;
 }
 
-const roleOptions = [
-  { value: 'partner', label: 'Partner' },
-  { value: 'caretaker', label: 'Caretaker' },
-];
+// Functions, not constants: the words follow the reader's language.
+const roleOptions = () => INVITABLE_ROLES.map((r) => ({ value: r, label: label(words, 'role', r) }));
 
 const emptyParty = (pickOrder: number): PartyValues => ({ name: '', email: '', role: 'partner', invite: true, weight: 1, fixedCount: 0, pickOrder });
 
 function animalOption(a: AnimalSummary) {
-  const loan = a.custody === 'loan-in' ? ' · on loan to you' : '';
-  return { value: a.id, label: `${a.label} · ${a.species.scientificName}${loan}` };
+  const text = a.custody === 'loan-in' ? 'page.projects.form.animalOnLoan' : 'page.projects.form.animal';
+  return { value: a.id, label: words(text, { label: a.label, species: a.species.scientificName }) };
 }
 
 interface ProjectFormProps {
@@ -75,7 +75,8 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
   const [partyCount, setPartyCount] = useState(0);
   const [withTerms, setWithTerms] = useState(true);
   const [maleId, setMaleId] = useState<string | null>(null);
-  const LINE_RULES = lineRules(words);
+  const t = useWords();
+  const LINE_RULES = lineRules(t);
   const form = useForm<Values>({
     mode: 'uncontrolled',
     validateInputOnBlur: true,
@@ -96,24 +97,26 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
       shippingPaidBy: 'recipient',
     },
     validate: {
-      femaleId: (v) => (v ? null : 'Choose the female.'),
-      maleId: (v) => (v ? null : 'Choose the male.'),
+      femaleId: (v) => (v ? null : t('page.projects.form.femaleRequired')),
+      maleId: (v) => (v ? null : t('page.projects.form.maleRequired')),
       parties: {
-        name: (v) => checkText(v, { required: 'Give the party a name.', maxLength: TEXT_LIMITS.personName }),
-        weight: (v) => checkNumber(String(v), { required: 'Give a weight.', ...LINE_RULES.weight }),
+        name: (v) => checkText(v, { required: t('page.projects.parties.nameRequired'), maxLength: TEXT_LIMITS.personName }),
+        weight: (v) => checkNumber(String(v), { required: t('page.projects.proposeTerms.weightRequired'), ...LINE_RULES.weight }),
         fixedCount: (v) => checkNumber(String(v), LINE_RULES.fixedCount),
-        pickOrder: (v) => checkNumber(String(v), { required: 'Give a pick order.', ...LINE_RULES.pickOrder }),
+        pickOrder: (v) => checkNumber(String(v), { required: t('page.projects.proposeTerms.pickOrderRequired'), ...LINE_RULES.pickOrder }),
         email: (v, values, path) => {
           const i = Number(path.split('.')[1]);
-          return values.parties[i]?.invite && !/^\S+@\S+\.\S+$/.test(v.trim()) ? 'An invitation needs an e-mail address.' : null;
+          return values.parties[i]?.invite && !/^\S+@\S+\.\S+$/.test(v.trim()) ? t('page.projects.parties.emailForInvitation') : null;
         },
       },
-      title: (v) => checkText(v, { required: 'Give the project a title.', maxLength: TEXT_LIMITS.projectTitle }),
+      title: (v) => checkText(v, { required: t('page.projects.form.titleRequired'), maxLength: TEXT_LIMITS.projectTitle }),
       notes: (v) => checkText(v, { maxLength: TEXT_LIMITS.projectNotes }),
-      ownerWeight: (v, values) => (values.withTerms ? checkNumber(String(v), { required: 'Give your weight.', ...LINE_RULES.weight }) : null),
+      ownerWeight: (v, values) =>
+        values.withTerms ? checkNumber(String(v), { required: t('page.projects.form.yourWeightRequired'), ...LINE_RULES.weight }) : null,
       ownerFixedCount: (v, values) => (values.withTerms ? checkNumber(String(v), LINE_RULES.fixedCount) : null),
-      ownerPickOrder: (v, values) => (values.withTerms ? checkNumber(String(v), { required: 'Give your pick order.', ...LINE_RULES.pickOrder }) : null),
-      currency: (v, values) => (!values.withTerms || /^[A-Z]{3}$/.test(v) ? null : 'A three-letter code, e.g. EUR.'),
+      ownerPickOrder: (v, values) =>
+        values.withTerms ? checkNumber(String(v), { required: t('page.projects.form.yourPickOrderRequired'), ...LINE_RULES.pickOrder }) : null,
+      currency: (v, values) => (!values.withTerms || /^[A-Z]{3}$/.test(v) ? null : t('page.projects.form.currency')),
       price: (v, values) => (values.withTerms ? priceError(v, values.currency) : null),
     },
   });
@@ -155,8 +158,8 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
     <form onSubmit={submit} noValidate>
       <Stack maw={760}>
         <TextField
-          label="Title"
-          placeholder="e.g. Regalis 2027, MO-007 × MO-030"
+          label={t('page.projects.form.title')}
+          placeholder={t('page.projects.form.titlePlaceholder')}
           maxLength={TEXT_LIMITS.projectTitle}
           withAsterisk
           key={form.key('title')}
@@ -164,22 +167,22 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
         />
         <SimpleGrid cols={{ base: 1, sm: 2 }}>
           <Select
-            label="Female"
-            placeholder="Mature female from your collection"
+            label={label(t, 'sex', 'female')}
+            placeholder={t('page.projects.form.femalePlaceholder')}
             data={females.map(animalOption)}
             searchable
             withAsterisk
-            nothingFoundMessage="No mature female in your collection"
+            nothingFoundMessage={t('page.projects.form.noFemale')}
             key={form.key('femaleId')}
             {...form.getInputProps('femaleId')}
           />
           <Select
-            label="Male"
-            placeholder="Mature male, yours or on loan"
+            label={label(t, 'sex', 'male')}
+            placeholder={t('page.projects.form.malePlaceholder')}
             data={males.map(animalOption)}
             searchable
             withAsterisk
-            nothingFoundMessage="No mature male in your collection"
+            nothingFoundMessage={t('page.projects.form.noMale')}
             key={form.key('maleId')}
             {...form.getInputProps('maleId')}
           />
@@ -187,72 +190,91 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
         {male?.custody === 'loan-in' && (
           <Alert color="moss" variant="light">
             <Stack gap="xs" align="flex-start">
-              <Text size="sm">{male.label} is on a breeding loan to you. Add his owner as a partner so they can follow the project and agree the split.</Text>
+              <Text size="sm">{t('page.projects.form.loanNote', { male: male.label })}</Text>
               {male.lender && !form.getValues().parties.some((p) => p.name === male.lender!.name) && (
                 <Button
                   size="xs"
                   variant="light"
                   onClick={() => form.insertListItem('parties', { ...emptyParty(partyCount + 2), name: male.lender!.name, email: male.lender!.email ?? '' })}
                 >
-                  Add {male.lender.name} as a partner
+                  {t('page.projects.form.addLender', { name: male.lender.name })}
                 </Button>
               )}
             </Stack>
           </Alert>
         )}
-        <TextAreaField label="Notes" maxLength={TEXT_LIMITS.projectNotes} key={form.key('notes')} {...form.getInputProps('notes')} />
+        <TextAreaField label={t('page.projects.form.notes')} maxLength={TEXT_LIMITS.projectNotes} key={form.key('notes')} {...form.getInputProps('notes')} />
 
         <Title order={3} size="h4" mt="sm">
-          Parties
+          {t('page.projects.form.parties')}
         </Title>
         <Text size="sm" c="dimmed">
-          You take part as the keeper. Add partners who share in the brood and a caretaker who rolls the eggs. With an e-mail address they get an invitation to
-          join; without one they are kept on record.
+          {t('page.projects.form.partiesIntro')}
         </Text>
         {Array.from({ length: partyCount }, (_, i) => (
           <Card withBorder key={form.key(`parties.${i}`)} padding="sm" data-testid={`party-${i}`}>
             <Stack gap="xs">
               <Group justify="space-between">
                 <Text fw={600} size="sm">
-                  Party {i + 1}
+                  {t('page.projects.form.partyN', { number: i + 1 })}
                 </Text>
-                <ActionIcon variant="subtle" color="clay" aria-label={`Remove party ${i + 1}`} onClick={() => form.removeListItem('parties', i)}>
+                <ActionIcon
+                  variant="subtle"
+                  color="clay"
+                  aria-label={t('page.projects.form.removeParty', { number: i + 1 })}
+                  onClick={() => form.removeListItem('parties', i)}
+                >
                   ×
                 </ActionIcon>
               </Group>
               <SimpleGrid cols={{ base: 1, sm: 3 }}>
                 <TextField
-                  label="Name"
+                  label={t('page.projects.parties.name')}
                   maxLength={TEXT_LIMITS.personName}
                   withAsterisk
                   key={form.key(`parties.${i}.name`)}
                   {...form.getInputProps(`parties.${i}.name`)}
                 />
                 <TextField
-                  label="E-mail"
+                  label={t('page.projects.parties.email')}
                   type="email"
                   maxLength={TEXT_LIMITS.email}
                   key={form.key(`parties.${i}.email`)}
                   {...form.getInputProps(`parties.${i}.email`)}
                 />
                 <Select
-                  label="Role"
-                  data={roleOptions}
+                  label={t('page.projects.parties.role')}
+                  data={roleOptions()}
                   allowDeselect={false}
                   key={form.key(`parties.${i}.role`)}
                   {...form.getInputProps(`parties.${i}.role`)}
                 />
               </SimpleGrid>
               <Checkbox
-                label="Send an invitation to join"
+                label={t('page.projects.form.invite')}
                 key={form.key(`parties.${i}.invite`)}
                 {...form.getInputProps(`parties.${i}.invite`, { type: 'checkbox' })}
               />
               {withTerms && (
                 <SimpleGrid cols={3}>
-                  <NumberField label="Weight" whole key={form.key(`parties.${i}.weight`)} {...form.getInputProps(`parties.${i}.weight`)} />
-                  <NumberField label="Fixed count" whole key={form.key(`parties.${i}.fixedCount`)} {...form.getInputProps(`parties.${i}.fixedCount`)} />
-                  <NumberField label="Pick order" whole key={form.key(`parties.${i}.pickOrder`)} {...form.getInputProps(`parties.${i}.pickOrder`)} />
+                  <NumberField
+                    label={t('page.projects.proposeTerms.weight')}
+                    whole
+                    key={form.key(`parties.${i}.weight`)}
+                    {...form.getInputProps(`parties.${i}.weight`)}
+                  />
+                  <NumberField
+                    label={t('page.projects.proposeTerms.fixedCount')}
+                    whole
+                    key={form.key(`parties.${i}.fixedCount`)}
+                    {...form.getInputProps(`parties.${i}.fixedCount`)}
+                  />
+                  <NumberField
+                    label={t('page.projects.proposeTerms.pickOrder')}
+                    whole
+                    key={form.key(`parties.${i}.pickOrder`)}
+                    {...form.getInputProps(`parties.${i}.pickOrder`)}
+                  />
                 </SimpleGrid>
               )}
             </Stack>
@@ -260,32 +282,28 @@ export function ProjectForm({ females, males, onCreated }: ProjectFormProps) {
         ))}
         <Group>
           <Button variant="light" onClick={() => form.insertListItem('parties', emptyParty(partyCount + 2))}>
-            Add a party
+            {t('page.projects.parties.add')}
           </Button>
         </Group>
 
         <Title order={3} size="h4" mt="sm">
-          Terms
+          {t('page.projects.form.terms')}
         </Title>
-        <Switch
-          label="Propose terms now (partners accept them on the project page)"
-          key={form.key('withTerms')}
-          {...form.getInputProps('withTerms', { type: 'checkbox' })}
-        />
+        <Switch label={t('page.projects.form.withTerms')} key={form.key('withTerms')} {...form.getInputProps('withTerms', { type: 'checkbox' })} />
         {withTerms && (
           <Stack>
             <Text size="sm" c="dimmed">
-              Shares are each party&apos;s weight over the sum of weights (partners only; caretakers take no share). A fixed count comes off the top first.
+              {t('page.projects.form.sharesExplain')}
             </Text>
             <SimpleGrid cols={3}>
-              <NumberField label="Your weight" whole key={form.key('ownerWeight')} {...form.getInputProps('ownerWeight')} />
-              <NumberField label="Your fixed count" whole key={form.key('ownerFixedCount')} {...form.getInputProps('ownerFixedCount')} />
-              <NumberField label="Your pick order" whole key={form.key('ownerPickOrder')} {...form.getInputProps('ownerPickOrder')} />
+              <NumberField label={t('page.projects.form.yourWeight')} whole key={form.key('ownerWeight')} {...form.getInputProps('ownerWeight')} />
+              <NumberField label={t('page.projects.form.yourFixedCount')} whole key={form.key('ownerFixedCount')} {...form.getInputProps('ownerFixedCount')} />
+              <NumberField label={t('page.projects.form.yourPickOrder')} whole key={form.key('ownerPickOrder')} {...form.getInputProps('ownerPickOrder')} />
             </SimpleGrid>
             <DealFields field={(name) => ({ key: form.key(name), ...form.getInputProps(name) })} />
           </Stack>
         )}
-        <FormActions message={message} loading={create.isPending} submitLabel="Create project" />
+        <FormActions message={message} loading={create.isPending} submitLabel={t('page.projects.form.submit')} />
       </Stack>
     </form>
   );

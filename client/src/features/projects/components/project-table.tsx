@@ -2,6 +2,7 @@ import { Anchor, Table, Text } from '@mantine/core';
 import { Link } from 'react-router';
 import type { ProjectSummary } from '@broodsilk/shared';
 import { formatDate } from '@/lib/dates';
+import { useWords } from '@/lib/i18n';
 import { StageBadge } from './stage-line';
 
 interface ProjectTableProps {
@@ -13,17 +14,18 @@ interface ProjectTableProps {
 
 /** Projects as a dense table; on a phone the animals and partners fold under the title. */
 export function ProjectTable({ projects, projectHref, nextDue }: ProjectTableProps) {
-  if (projects.length === 0) return <Text c="dimmed">No projects yet.</Text>;
+  const t = useWords();
+  if (projects.length === 0) return <Text c="dimmed">{t('page.projects.list.none')}</Text>;
   return (
     <Table.ScrollContainer minWidth={360}>
       <Table striped highlightOnHover verticalSpacing="xs" data-testid="project-table">
         <Table.Thead>
           <Table.Tr>
-            <Table.Th>Project</Table.Th>
-            <Table.Th visibleFrom="sm">Female × male</Table.Th>
-            <Table.Th>Stage</Table.Th>
-            <Table.Th visibleFrom="sm">Keeper · partners</Table.Th>
-            <Table.Th visibleFrom="md">Next</Table.Th>
+            <Table.Th>{t('page.projects.list.project')}</Table.Th>
+            <Table.Th visibleFrom="sm">{t('page.projects.list.pair')}</Table.Th>
+            <Table.Th>{t('page.projects.list.stage')}</Table.Th>
+            <Table.Th visibleFrom="sm">{t('page.projects.list.people')}</Table.Th>
+            <Table.Th visibleFrom="md">{t('page.projects.list.next')}</Table.Th>
           </Table.Tr>
         </Table.Thead>
         <Table.Tbody>
@@ -38,7 +40,7 @@ export function ProjectTable({ projects, projectHref, nextDue }: ProjectTablePro
                 </Text>
                 {p.myRole !== 'owner' && (
                   <Text size="xs" c="dimmed">
-                    you are {p.myRole === 'partner' ? 'a partner' : 'the caretaker'}
+                    {t(p.myRole === 'partner' ? 'page.projects.list.youArePartner' : 'page.projects.list.youAreCaretaker')}
                   </Text>
                 )}
               </Table.Td>
@@ -61,7 +63,7 @@ export function ProjectTable({ projects, projectHref, nextDue }: ProjectTablePro
               <Table.Td visibleFrom="sm">
                 <Text size="sm">{p.owner.name}</Text>
                 <Text size="xs" c="dimmed">
-                  {p.partners.length ? `with ${p.partners.join(', ')}` : 'no partner'}
+                  {p.partners.length ? t('page.projects.list.withPartners', { names: p.partners.join(', ') }) : t('page.projects.list.noPartner')}
                 </Text>
               </Table.Td>
               <Table.Td visibleFrom="md">

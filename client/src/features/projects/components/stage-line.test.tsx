@@ -1,7 +1,8 @@
 import { screen, within } from '@testing-library/react';
-import { describe, expect, it } from 'vitest';
+import { afterEach, describe, expect, it } from 'vitest';
 import { ENDED_EARLY_REASONS, PROJECT_STAGE_LINE } from '@broodsilk/shared';
 import { renderWithProviders } from '@/testing/render';
+import { i18next } from '@/lib/i18n';
 import { StageBadge, StageLine } from './stage-line';
 
 const NAMES = ['Planned', 'Paired', 'Waiting for sac', 'Sac laid', 'In incubator', 'Brood', 'Shares settled', 'Closed'];
@@ -59,5 +60,19 @@ describe('StageLine', () => {
   it('names a setback on the badge of an open project', () => {
     renderWithProviders(<StageBadge stage={{ stage: 'paired', setback: 'female-molted' }} />);
     expect(screen.getByTestId('stage-badge')).toHaveTextContent('Paired · the female molted');
+  });
+});
+
+describe('StageLine words', () => {
+  afterEach(async () => {
+    await i18next.changeLanguage('en');
+  });
+
+  it('names the steps and their state in German for a German reader', async () => {
+    await i18next.changeLanguage('de');
+    renderWithProviders(<StageLine stage={{ stage: 'sac-laid', unrecorded: ['paired'] }} />);
+    expect(screen.getByTestId('stage-current')).toHaveTextContent('Kokon gebaut · Schritt 4 von 8');
+    expect(steps()[1]).toHaveTextContent('Verpaart: nicht eingetragen');
+    expect(screen.getByTestId('stage-line')).toHaveAttribute('aria-label', 'Stand des Projekts');
   });
 });

@@ -1,10 +1,18 @@
 import { Alert, Badge, Box, Group, Stack, Text, Tooltip, VisuallyHidden } from '@mantine/core';
 import { label, PROJECT_STAGE_LINE, type DerivedProjectStage } from '@broodsilk/shared';
-import { words } from '@/lib/i18n';
+import { useWords } from '@/lib/i18n';
 import { ENDED_EARLY_LABELS, STAGE_LABELS, stageText } from '../utils/labels';
 import classes from './stage-line.module.css';
 
-const STATE_WORDS = { done: 'done', unrecorded: 'not recorded', current: 'now', ahead: 'ahead', ended: 'not reached' } as const;
+/** The state of one step, as screen readers hear it (page.projects.stageLine.state.<state>). */
+type StepState = 'done' | 'unrecorded' | 'current' | 'ahead' | 'ended';
+
+/** Where step `i` stands against the current one (-1 for an ended project); a step passed without a record is "unrecorded". */
+function stepState(stage: DerivedProjectStage, i: number, current: number): StepState {
+  if (stage.stage === 'ended-early') return 'ended';
+  if (i < current) return stage.unrecorded?.includes(PROJECT_STAGE_LINE[i]) ? 'unrecorded' : 'done';
+  return i === current ? 'current' : 'ahead';
+}
 
 /**
  * The progress line of a project: eight short bars, done ones filled in moss, the current one
@@ -12,13 +20,14 @@ const STATE_WORDS = { done: 'done', unrecorded: 'not recorded', current: 'now', 
  * (a sac eaten, a molt after pairing) is advice under the line: the project stays open.
  */
 export function StageLine({ stage, note }: { stage: DerivedProjectStage; note?: string | null }) {
+  const t = useWords();
   const ended = stage.stage === 'ended-early';
   const current = ended ? -1 : PROJECT_STAGE_LINE.indexOf(stage.stage);
   return (
-    <Stack gap={6} data-testid="stage-line" aria-label="Project stage">
+    <Stack gap={6} data-testid="stage-line" aria-label={t('page.projects.stageLine.label')}>
       <ol className={classes.line}>
         {PROJECT_STAGE_LINE.map((s, i) => {
-          const state = ended ? 'ended' : i < current ? (stage.unrecorded?.includes(s) ? 'unrecorded' : 'done') : i === current ? 'current' : 'ahead';
+          const state = stepState(stage, i, current);
           return (
             <Tooltip key={s} label={STAGE_LABELS[s]} withinPortal>
               <li className={classes.step} data-state={state} aria-current={state === 'current' ? 'step' : undefined}>
@@ -27,7 +36,7 @@ export function StageLine({ stage, note }: { stage: DerivedProjectStage; note?: 
                   {STAGE_LABELS[s]}
                 </Text>
                 <VisuallyHidden>
-                  {STAGE_LABELS[s]}: {STATE_WORDS[state]}
+                  {t('page.projects.stageLine.stepState', { stage: STAGE_LABELS[s], state: t(`page.projects.stageLine.state.${state}`) })}
                 </VisuallyHidden>
               </li>
             </Tooltip>
@@ -37,10 +46,10 @@ export function StageLine({ stage, note }: { stage: DerivedProjectStage; note?: 
       {ended ? (
         <Group gap="xs">
           <Badge color="clay" variant="light">
-            Ended early
+            {label(t, 'projectStage', 'ended-early')}
           </Badge>
           <Text size="sm" className="tone-failed" fw={600} data-testid="stage-current">
-            {stage.reason ? `Ended early: ${ENDED_EARLY_LABELS[stage.reason]}` : 'Ended early'}
+            {stageText(stage.stage, stage.reason)}
           </Text>
           {note && (
             <Text size="sm" c="dimmed">
@@ -53,15 +62,15 @@ export function StageLine({ stage, note }: { stage: DerivedProjectStage; note?: 
           <Text size="sm" fw={600} data-testid="stage-current">
             {stageText(stage.stage)}
             <Text span size="sm" c="dimmed" fw={400}>
-              {' '}
-              · step {current + 1} of {PROJECT_STAGE_LINE.length}
+              {' · '}
+              {t('page.projects.stageLine.step', { step: current + 1, count: PROJECT_STAGE_LINE.length })}
             </Text>
           </Text>
         </Box>
       )}
       {stage.setback && (
-        <Alert color="amber" variant="light" title="Try again" data-testid="stage-setback">
-          {label(words, 'setback', stage.setback)}
+        <Alert color="amber" variant="light" title={t('page.projects.stageLine.setbackTitle')} data-testid="stage-setback">
+          {label(t, 'setback', stage.setback)}
         </Alert>
       )}
     </Stack>

@@ -3,6 +3,7 @@ import type { CreateProjectRequest, InvitableRole, ProjectResponse, ProposeTerms
 import { addProjectMember, createProject, projectQueries } from '../api/projects';
 import { sendInvitation } from '../api/invitations';
 import { proposeTerms } from '../api/terms';
+import { words } from '@/lib/i18n';
 
 export interface NewParty {
   name: string;
@@ -47,11 +48,11 @@ export function useCreateProject() {
             try {
               await sendInvitation(project.id, { email: party.email, role: party.role, memberId: member.id });
             } catch (e) {
-              problems.push(`The invitation to ${party.email} was not sent: ${(e as Error).message}`);
+              problems.push(words('page.projects.newProject.invitationNotSent', { email: party.email, reason: (e as Error).message }));
             }
           }
         } catch (e) {
-          problems.push(`${party.name} was not added: ${(e as Error).message}`);
+          problems.push(words('page.projects.newProject.partyNotAdded', { name: party.name, reason: (e as Error).message }));
         }
       }
       if (input.terms) {
@@ -59,7 +60,7 @@ export function useCreateProject() {
         try {
           await proposeTerms(project.id, { ...deal, lines });
         } catch (e) {
-          problems.push(`The terms were not saved: ${(e as Error).message}`);
+          problems.push(words('page.projects.newProject.termsNotSaved', { reason: (e as Error).message }));
         }
       }
       return { project, problems };
