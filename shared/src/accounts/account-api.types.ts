@@ -1,4 +1,6 @@
+import type { BroodStage } from '../breeding/brood-stage.js';
 import type { CalendarDate } from '../breeding/calendar-day.js';
+import type { ShippingPayer } from '../projects/terms.types.js';
 import type { FailureClause } from '../breeding/pairing.types.js';
 import type { SacOutcomeState } from '../sacs/sacs.types.js';
 import type { ShareChange } from './shares.js';
@@ -162,8 +164,9 @@ export interface BalancesResponse {
 export interface HandOverFormResponse {
   parties: (PartyRef & { owedSpiderlings: number })[];
   methods: readonly HandOverMethod[];
-  handOverStage: string | null;
-  shippingPaidBy: string | null;
+  /** The terms' hand-over stage and who pays shipping, as codes the client names in the reader's words. */
+  handOverStage: BroodStage | null;
+  shippingPaidBy: ShippingPayer | null;
   /** Cautions for shipping live invertebrates; shown for `shipment`. */
   shippingCautions: string[];
 }

@@ -11,6 +11,8 @@ import { balancesQueries } from '@/features/account/api/balances';
 import { entriesQueries } from '@/features/account/api/entries';
 import { sharesQueries } from '@/features/account/api/shares';
 import { AccountPanel } from '@/features/account/components/account-panel';
+import { speciesQueries, useSpecies } from '@/features/species/api/species';
+import { useWords } from '@/lib/i18n';
 import { preloadPanels } from '../preload';
 
 /** A missing or foreign project throws its 404 into the route's error boundary; the account loads only for a party to the deal. */
@@ -24,6 +26,7 @@ export const clientLoader =
         qc.ensureQueryData(sharesQueries.detail(id)),
         qc.ensureQueryData(balancesQueries.detail(id)),
         qc.ensureInfiniteQueryData(entriesQueries.list(id)),
+        qc.ensureQueryData(speciesQueries.detail(project.femaleAnimal.species.id)),
       );
     }
     return null;
@@ -31,9 +34,12 @@ export const clientLoader =
 
 /** The Account of one project, for its owner and partners. */
 export function Component() {
+  const t = useWords();
   const { projectId } = useParams() as { projectId: string };
   const { data: me } = useMe();
   const project = useProject(projectId);
+  // The young are the female's species: its trade listing (e.g. CITES) decides the sale form's caution.
+  const species = useSpecies(project.data?.femaleAnimal.species.id);
   const [search] = useSearchParams();
   if (!me || project.isPending) return <PageLoader />;
   if (project.isError) return <Alert color="clay">{project.error.message}</Alert>;
@@ -42,30 +48,30 @@ export function Component() {
   return (
     <>
       <PageHeader
-        title={`Account · ${p.title}`}
-        description={`Shares, hand-overs, payments and the balance of each party, run by ${p.owner.name}`}
+        title={t('page.account.pageTitle', { title: p.title })}
+        description={t('page.account.pageDescription', { owner: p.owner.name })}
         actions={
           <Group gap="md">
             <Anchor component={Link} to={paths.project.href(p.id)} size="sm">
-              Back to the project
+              {t('page.account.backToProject')}
             </Anchor>
           </Group>
         }
       />
       {search.has('paid') && (
-        <Alert color="moss" mb="md" role="status" title="Payment made">
-          The payment provider took your payment. It shows in the entries below as soon as the provider confirms it.
+        <Alert color="moss" mb="md" role="status" title={t('page.account.paidTitle')}>
+          {t('page.account.paidText')}
         </Alert>
       )}
       {search.has('cancelled') && (
         <Alert color="amber" mb="md" role="status">
-          The payment was cancelled; nothing was paid.
+          {t('page.account.cancelledText')}
         </Alert>
       )}
       {isDealParty(p.myRole) ? (
-        <AccountPanel projectId={p.id} me={me} myRole={p.myRole} myMemberId={myMemberId} />
+        <AccountPanel projectId={p.id} me={me} myRole={p.myRole} myMemberId={myMemberId} tradeListing={species.data?.tradeListing.value ?? null} />
       ) : (
-        <Alert color="gray">The account of this project is seen by its owner and partners only.</Alert>
+        <Alert color="gray">{t('page.account.partiesOnly')}</Alert>
       )}
     </>
   );

@@ -87,4 +87,14 @@ describe('AccountPanel', { timeout: 30_000 }, () => {
     expect(within(table).getByText('Waiting for Tomasz to confirm receipt')).toBeInTheDocument();
     expect(await screen.findByRole('button', { name: 'Set up payouts' })).toBeInTheDocument();
   });
+
+  it("the owner's sale form carries the species' trade listing from the page (CITES Appendix II for every Brachypelma: docs/trade-facts.md §9)", async () => {
+    const { fetchStub } = stubAccount();
+    vi.stubGlobal('fetch', fetchStub);
+    renderWithProviders(<AccountPanel projectId={PROJECT_ID} me={me('Mira')} myRole="owner" myMemberId={MIRA.memberId} tradeListing="CITES Appendix II" />);
+    await userEvent.click(await screen.findByRole('button', { name: 'Record a sale' }));
+    const form = await screen.findByRole('form', { name: 'Record a sale' });
+    expect(within(form).getByTestId('safety-saleListed')).toHaveTextContent('CITES Appendix II');
+    expect(within(form).getByTestId('safety-sale')).toBeInTheDocument();
+  });
 });

@@ -1,6 +1,6 @@
 import { Alert, Button, Card, CloseButton, Group, Stack, Text } from '@mantine/core';
 import { useState } from 'react';
-import { todayIn, type Me, type ProjectRole } from '@broodsilk/shared';
+import { RECORDABLE_ENTRY_KINDS, todayIn, type Me, type ProjectRole, type RecordableEntryKind } from '@broodsilk/shared';
 import { useBalances } from '../api/balances';
 import { useEntries } from '../api/entries';
 import { useShares } from '../api/shares';
@@ -16,15 +16,10 @@ import { SharesPanel } from './shares-panel';
 import { StatementActions } from './statement-actions';
 import { WithdrawalForm } from './withdrawal-form';
 import { SectionCard } from '@/components/ui/section-card';
+import { useWords } from '@/lib/i18n';
 
-type OwnerAction = 'hand-over' | 'sale' | 'cash-out' | 'money' | 'correction';
-const OWNER_ACTIONS: { value: OwnerAction; label: string }[] = [
-  { value: 'hand-over', label: 'Record a hand-over' },
-  { value: 'sale', label: 'Record a sale' },
-  { value: 'cash-out', label: 'Record a cash-out' },
-  { value: 'money', label: 'Record a payment' },
-  { value: 'correction', label: 'Correct an entry' },
-];
+type OwnerAction = RecordableEntryKind;
+const OWNER_ACTIONS: readonly OwnerAction[] = RECORDABLE_ENTRY_KINDS;
 
 export interface AccountPanelProps {
   projectId: string;
@@ -32,6 +27,8 @@ export interface AccountPanelProps {
   /** The viewer's role and party in this project (from the project page). */
   myRole: ProjectRole;
   myMemberId: string | null;
+  /** The protected-trade listing of the project's species (e.g. "CITES Appendix II"), for the sale form's caution; null when not listed or not known. */
+  tradeListing?: string | null;
 }
 
 /**
@@ -39,13 +36,14 @@ export interface AccountPanelProps {
  * partner sees the same account read-only except confirming what reached them and paying what they owe.
  * Caretakers do not see the account.
  */
-export function AccountPanel({ projectId, me, myRole, myMemberId }: AccountPanelProps) {
+export function AccountPanel({ projectId, me, myRole, myMemberId, tradeListing = null }: AccountPanelProps) {
+  const t = useWords();
   const [action, setAction] = useState<OwnerAction | null>(null);
   const [payOutside, setPayOutside] = useState<string | null>(null);
   const shares = useShares(projectId);
   const balances = useBalances(projectId);
   const entries = useEntries(projectId);
-  if (myRole === 'caretaker') return <Alert color="gray">The account of this project is seen by its owner and partners only.</Alert>;
+  if (myRole === 'caretaker') return <Alert color="gray">{t('page.account.partiesOnly')}</Alert>;
 
   const isOwner = myRole === 'owner';
   const today = todayIn(me.timeZone, new Date());
@@ -62,13 +60,13 @@ export function AccountPanel({ projectId, me, myRole, myMemberId }: AccountPanel
   return (
     <Stack data-testid="account-panel">
       {awaiting.length > 0 && (
-        <SectionCard title="Waiting for you" testId="section-awaiting">
+        <SectionCard title={t('page.account.panel.awaiting')} testId="section-awaiting">
           <AwaitingMe projectId={projectId} entries={awaiting} today={today} />
         </SectionCard>
       )}
 
       {myDebts.length > 0 && (
-        <SectionCard title="What you owe" testId="section-pay">
+        <SectionCard title={t('page.account.panel.owe')} testId="section-pay">
           <Stack>
             {myDebts.map((d) => (
               <Stack key={d.toPartyId} gap="xs">
@@ -77,9 +75,9 @@ export function AccountPanel({ projectId, me, myRole, myMemberId }: AccountPanel
                   <Card withBorder padding="sm">
                     <Group justify="space-between" mb="xs">
                       <Text size="sm" fw={600}>
-                        A payment made outside Broodsilk
+                        {t('page.account.panel.paidOutside')}
                       </Text>
-                      <CloseButton aria-label="Close" onClick={() => setPayOutside(null)} />
+                      <CloseButton aria-label={t('page.account.panel.close')} onClick={() => setPayOutside(null)} />
                     </Group>
                     <MoneyForm
                       projectId={projectId}
@@ -95,7 +93,7 @@ export function AccountPanel({ projectId, me, myRole, myMemberId }: AccountPanel
                 ) : (
                   <Group>
                     <Button variant="subtle" size="xs" onClick={() => setPayOutside(d.toPartyId)}>
-                      I paid {d.toName} another way
+                      {t('page.account.panel.paidAnotherWay', { name: d.toName })}
                     </Button>
                   </Group>
                 )}
@@ -105,29 +103,24 @@ export function AccountPanel({ projectId, me, myRole, myMemberId }: AccountPanel
         </SectionCard>
       )}
 
-      <SectionCard title="Balance" testId="section-balance">
+      <SectionCard title={t('page.account.panel.balance')} testId="section-balance">
         <BalancesPanel projectId={projectId} />
       </SectionCard>
 
       {isOwner && (
-        <SectionCard title="Record in the account" testId="section-actions">
+        <SectionCard title={t('page.account.panel.record')} testId="section-actions">
           <Stack>
             <Group gap="xs">
               {OWNER_ACTIONS.map((a) => (
-                <Button
-                  key={a.value}
-                  size="xs"
-                  variant={action === a.value ? 'filled' : 'light'}
-                  onClick={() => setAction(action === a.value ? null : a.value)}
-                >
-                  {a.label}
+                <Button key={a} size="xs" variant={action === a ? 'filled' : 'light'} onClick={() => setAction(action === a ? null : a)}>
+                  {t(`page.account.action.${a}`)}
                 </Button>
               ))}
             </Group>
             {action && (
               <Card withBorder padding="sm">
                 <Group justify="flex-end">
-                  <CloseButton aria-label="Close the form" onClick={close} />
+                  <CloseButton aria-label={t('page.account.panel.closeForm')} onClick={close} />
                 </Group>
                 {action === 'hand-over' && <HandOverForm projectId={projectId} today={today} sacs={sacs} onDone={close} />}
                 {(action === 'sale' || action === 'cash-out') &&
@@ -139,17 +132,18 @@ export function AccountPanel({ projectId, me, myRole, myMemberId }: AccountPanel
                       sacs={sacs}
                       currency={currency}
                       termsPriceMinor={shares.data?.terms?.pricePerSpiderlingMinor ?? null}
+                      tradeListing={tradeListing}
                       today={today}
                       onDone={close}
                     />
                   ) : (
-                    <Text c="dimmed">No terms are in force yet.</Text>
+                    <Text c="dimmed">{t('page.account.panel.noTerms')}</Text>
                   ))}
                 {action === 'money' &&
                   (currency ? (
                     <MoneyForm projectId={projectId} parties={parties} currency={currency} today={today} onDone={close} />
                   ) : (
-                    <Text c="dimmed">No terms are in force yet.</Text>
+                    <Text c="dimmed">{t('page.account.panel.noTerms')}</Text>
                   ))}
                 {action === 'correction' && <CorrectionForm projectId={projectId} today={today} onDone={close} />}
               </Card>
@@ -158,20 +152,20 @@ export function AccountPanel({ projectId, me, myRole, myMemberId }: AccountPanel
         </SectionCard>
       )}
 
-      <SectionCard title="Shares" testId="section-shares">
+      <SectionCard title={t('page.account.panel.shares')} testId="section-shares">
         <SharesPanel projectId={projectId} timeZone={me.timeZone} />
       </SectionCard>
 
-      <SectionCard title="Entries" testId="section-entries">
+      <SectionCard title={t('page.account.panel.entries')} testId="section-entries">
         <EntriesTable projectId={projectId} />
       </SectionCard>
 
-      <SectionCard title="Statement" testId="section-statement">
+      <SectionCard title={t('page.account.panel.statement')} testId="section-statement">
         <StatementActions projectId={projectId} parties={parties} fixedMemberId={isOwner ? undefined : (myMemberId ?? undefined)} />
       </SectionCard>
 
       {(isOwner || owedToMe) && (
-        <SectionCard title="Receiving payments" testId="section-payouts">
+        <SectionCard title={t('page.account.panel.payouts')} testId="section-payouts">
           <PayoutSetup />
         </SectionCard>
       )}

@@ -1,4 +1,12 @@
-import type { BalancesResponse, HandOverFormResponse, LedgerEntryResponse, PartyBalanceView, SharesResponse } from '@broodsilk/shared';
+import {
+  shippingCautions,
+  wordsFor,
+  type BalancesResponse,
+  type HandOverFormResponse,
+  type LedgerEntryResponse,
+  type PartyBalanceView,
+  type SharesResponse,
+} from '@broodsilk/shared';
 
 /** Test data shaped like the server's answers. */
 export const MIRA = { memberId: '11111111-1111-4111-8111-111111111111', name: 'Mira' };
@@ -115,8 +123,9 @@ export function entry(over: Partial<LedgerEntryResponse>): LedgerEntryResponse {
   };
 }
 
-export const CAUTION_OVERNIGHT = 'Ship by an overnight service only.';
-export const CAUTION_LAW = 'Local law and the carrier’s rules come first.';
+/** Two of the catalogue's shipping cautions (docs/trade-facts.md §9), as an English reader sees them. */
+export const CAUTION_OVERNIGHT = wordsFor('en')('safety.shipping.overnight');
+export const CAUTION_LAW = wordsFor('en')('safety.shipping.general');
 
 export function handOverForm(): HandOverFormResponse {
   return {
@@ -125,8 +134,8 @@ export function handOverForm(): HandOverFormResponse {
       { ...TOMASZ, owedSpiderlings: 5 },
     ],
     methods: ['pick-up', 'shipment'],
-    handOverStage: 'second instar',
-    shippingPaidBy: 'the recipient',
-    shippingCautions: [CAUTION_OVERNIGHT, CAUTION_LAW],
+    handOverStage: 'second-instar',
+    shippingPaidBy: 'recipient',
+    shippingCautions: shippingCautions(wordsFor('en')),
   };
 }

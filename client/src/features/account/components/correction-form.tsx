@@ -5,11 +5,12 @@ import { TEXT_LIMITS } from '@broodsilk/shared';
 import { DateField } from '@/components/fields/date-field';
 import { TextAreaField } from '@/components/fields/text-field';
 import { checkText } from '@/components/fields/text-rule';
-import { dateRule, readDate } from '@/components/fields/typed-date';
+import { readDate } from '@/components/fields/typed-date';
 import { FormActions } from '@/components/ui/form-actions';
 import { useCreateEntry, useEntries } from '../api/entries';
 import { applyEntryErrors } from '../utils/entry-errors';
 import { ENTRY_KIND_LABELS } from '../utils/labels';
+import { pastDateRule } from './sac-count-date-fields';
 import { formatDate } from '@/lib/dates';
 import { useWords } from '@/lib/i18n';
 
@@ -30,9 +31,9 @@ export function CorrectionForm({ projectId, today, onDone }: { projectId: string
     validateInputOnBlur: true,
     initialValues: { reversesId: '', reason: '', date: today },
     validate: {
-      reversesId: (v) => (v ? null : 'Which entry is wrong?'),
-      reason: (v) => (v.trim().length >= 3 ? checkText(v, { maxLength: TEXT_LIMITS.correctionReason }) : 'Say in a few words why it is reversed.'),
-      date: dateRule({ required: 'Give the date.', latest: today, latestMessage: 'This has happened, so it cannot be after today.' }),
+      reversesId: (v) => (v ? null : t('page.account.correction.whichEntry')),
+      reason: (v) => (v.trim().length >= 3 ? checkText(v, { maxLength: TEXT_LIMITS.correctionReason }) : t('page.account.correction.sayWhy')),
+      date: pastDateRule(t, today),
     },
   });
   const submit = form.onSubmit(async (v) => {
@@ -47,12 +48,12 @@ export function CorrectionForm({ projectId, today, onDone }: { projectId: string
   });
   const reversible = (entries.data ?? []).filter((e) => e.status !== 'reversed' && e.kind !== 'confirmation' && e.source === 'manual');
   return (
-    <form onSubmit={submit} noValidate aria-label="Record a correction">
+    <form onSubmit={submit} noValidate aria-label={t('page.account.action.correction')}>
       <Stack maw={520} gap="sm">
         <NativeSelect
-          label="Entry to reverse"
+          label={t('page.account.correction.entry')}
           data={[
-            { value: '', label: 'Choose an entry' },
+            { value: '', label: t('page.account.form.chooseEntry') },
             ...reversible.map((e) => ({
               value: e.id,
               label: `#${e.seq} ${ENTRY_KIND_LABELS[e.kind]} · ${formatDate(e.date)}${e.party ? ` · ${e.party.name}` : ''}${e.count !== null ? ` · ${e.count}` : ''}`,
@@ -63,9 +64,15 @@ export function CorrectionForm({ projectId, today, onDone }: { projectId: string
           {...form.getInputProps('reversesId')}
           description={entries.hasNextPage ? t('page.account.entriesNotAllShown') : undefined}
         />
-        <TextAreaField label="Why" maxLength={TEXT_LIMITS.correctionReason} withAsterisk key={form.key('reason')} {...form.getInputProps('reason')} />
-        <DateField label="Date" key={form.key('date')} {...form.getInputProps('date')} />
-        <FormActions message={message} loading={create.isPending} submitLabel="Record correction" />
+        <TextAreaField
+          label={t('page.account.correction.why')}
+          maxLength={TEXT_LIMITS.correctionReason}
+          withAsterisk
+          key={form.key('reason')}
+          {...form.getInputProps('reason')}
+        />
+        <DateField label={t('page.account.form.date')} key={form.key('date')} {...form.getInputProps('date')} />
+        <FormActions message={message} loading={create.isPending} submitLabel={t('page.account.submit.correction')} />
       </Stack>
     </form>
   );

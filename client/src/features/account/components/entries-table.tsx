@@ -1,11 +1,11 @@
 import { Alert, Anchor, Card, Group, Stack, Table, Text } from '@mantine/core';
 import type { ReactNode } from 'react';
-import { formatMoney, type LedgerEntryResponse } from '@broodsilk/shared';
+import { formatMoney, type LedgerEntryResponse, type Words } from '@broodsilk/shared';
 import { formatDate } from '@/lib/dates';
 import { ShowMore } from '@/components/ui/show-more';
 import { useWords } from '@/lib/i18n';
 import { useEntries } from '../api/entries';
-import { ENTRY_KIND_LABELS, METHOD_LABELS, STATUS_LABELS, young } from '../utils/labels';
+import { ENTRY_KIND_LABELS, METHOD_LABELS, STATUS_LABELS, midSentence, young } from '../utils/labels';
 
 const rowId = (seq: number) => `account-entry-${seq}`;
 
@@ -15,32 +15,41 @@ function partyText(e: LedgerEntryResponse): string {
   return '—';
 }
 
-function amountText(e: LedgerEntryResponse): string {
+function amountText(t: Words, e: LedgerEntryResponse): string {
   const parts: string[] = [];
   if (e.count !== null) parts.push(young(e.count));
-  if (e.kind === 'arrival' && e.arrivedAlive !== null) parts.push(`${e.arrivedAlive} alive, ${e.arrivedDead ?? 0} dead`);
+  if (e.kind === 'arrival' && e.arrivedAlive !== null) parts.push(t('page.account.entries.arrived', { alive: e.arrivedAlive, dead: e.arrivedDead ?? 0 }));
   if (e.amountMinor !== null && e.currency) parts.push(formatMoney(e.amountMinor, e.currency));
-  if (e.priceMinor !== null && e.currency) parts.push(`for ${formatMoney(e.priceMinor, e.currency)}`);
-  if (e.pricePerSpiderlingMinor !== null && e.currency) parts.push(`at ${formatMoney(e.pricePerSpiderlingMinor, e.currency)} each`);
+  if (e.priceMinor !== null && e.currency) parts.push(t('page.account.entries.forPrice', { price: formatMoney(e.priceMinor, e.currency) }));
+  if (e.pricePerSpiderlingMinor !== null && e.currency)
+    parts.push(t('page.account.entries.each', { price: formatMoney(e.pricePerSpiderlingMinor, e.currency) }));
   return parts.join(' ') || '—';
 }
 
+function methodText(t: Words, e: LedgerEntryResponse & { method: NonNullable<LedgerEntryResponse['method']> }): string {
+  const method = METHOD_LABELS[e.method];
+  if (e.carrier && e.tracking) return t('page.account.entries.withCarrierTracking', { method, carrier: e.carrier, tracking: e.tracking });
+  if (e.carrier) return t('page.account.entries.withCarrier', { method, carrier: e.carrier });
+  if (e.tracking) return t('page.account.entries.withTracking', { method, tracking: e.tracking });
+  return method;
+}
+
 function Details({ e, bySeq }: { e: LedgerEntryResponse; bySeq: Map<string, LedgerEntryResponse> }) {
+  const t = useWords();
   const lines: ReactNode[] = [];
-  if (e.method) lines.push(`${METHOD_LABELS[e.method]}${e.carrier ? ` with ${e.carrier}` : ''}${e.tracking ? `, tracking ${e.tracking}` : ''}`);
+  if (e.method) lines.push(methodText(t, { ...e, method: e.method }));
   const target = e.reversesId ? bySeq.get(e.reversesId) : e.handOverId ? bySeq.get(e.handOverId) : e.confirmsId ? bySeq.get(e.confirmsId) : undefined;
   if (target) {
-    const verb = e.reversesId ? 'Reverses' : 'For';
     lines.push(
       <>
-        {verb}{' '}
+        {t(e.reversesId ? 'page.account.entries.reverses' : 'page.account.entries.for')}{' '}
         <Anchor href={`#${rowId(target.seq)}`} size="xs">
-          #{target.seq} {ENTRY_KIND_LABELS[target.kind].toLowerCase()}
+          {t('page.account.entries.target', { seq: target.seq, kind: midSentence(ENTRY_KIND_LABELS[target.kind]) })}
         </Anchor>
       </>,
     );
   }
-  if (e.reason) lines.push(`Why: ${e.reason}`);
+  if (e.reason) lines.push(t('page.account.entries.why', { reason: e.reason }));
   if (e.note) lines.push(e.note);
   if (e.problem) lines.push(<span className="tone-failed">{e.problem}</span>);
   if (!lines.length) return null;
@@ -56,6 +65,7 @@ function Details({ e, bySeq }: { e: LedgerEntryResponse; bySeq: Map<string, Ledg
 }
 
 function EntryState({ e, reverser }: { e: LedgerEntryResponse; reverser?: LedgerEntryResponse }) {
+  const t = useWords();
   const status = STATUS_LABELS[e.status];
   return (
     <>
@@ -66,12 +76,12 @@ function EntryState({ e, reverser }: { e: LedgerEntryResponse; reverser?: Ledger
       )}
       {e.awaitingConfirmationBy && e.status !== 'reversed' && e.status !== 'left-out' && (
         <Text size="sm" className="tone-due">
-          Waiting for {e.awaitingConfirmationBy.name} to confirm{e.kind === 'hand-over' ? ' receipt' : ''}
+          {t(e.kind === 'hand-over' ? 'page.account.entries.waitingReceipt' : 'page.account.entries.waiting', { name: e.awaitingConfirmationBy.name })}
         </Text>
       )}
       {reverser && (
         <Anchor href={`#${rowId(reverser.seq)}`} size="xs">
-          by correction #{reverser.seq}
+          {t('page.account.entries.byCorrection', { seq: reverser.seq })}
         </Anchor>
       )}
     </>
@@ -82,16 +92,16 @@ function EntryState({ e, reverser }: { e: LedgerEntryResponse; reverser?: Ledger
 export function EntriesTable({ projectId }: { projectId: string }) {
   const entries = useEntries(projectId);
   const t = useWords();
-  if (entries.isPending) return <Text c="dimmed">Loading entries…</Text>;
+  if (entries.isPending) return <Text c="dimmed">{t('page.account.entries.loading')}</Text>;
   if (entries.isError) return <Alert color="clay">{entries.error.message}</Alert>;
   const list = entries.data;
-  if (list.length === 0) return <Text c="dimmed">Nothing has been recorded in this account yet.</Text>;
+  if (list.length === 0) return <Text c="dimmed">{t('page.account.entries.none')}</Text>;
   const byId = new Map(list.map((e) => [e.id, e]));
   const reversedBy = new Map<string, LedgerEntryResponse>();
   for (const e of list) if (e.kind === 'correction' && e.reversesId && e.status === 'in-force') reversedBy.set(e.reversesId, e);
   return (
     <>
-      <Stack gap="xs" hiddenFrom="sm" component="ol" aria-label="Account entries, newest last" p={0} m={0} style={{ listStyle: 'none' }}>
+      <Stack gap="xs" hiddenFrom="sm" component="ol" aria-label={t('page.account.entries.listLabel')} p={0} m={0} style={{ listStyle: 'none' }}>
         {list.map((e) => (
           <Card key={e.id} withBorder padding="xs" component="li" data-testid={`entry-card-${e.kind}`}>
             <Group justify="space-between" gap="xs" wrap="nowrap" align="flex-start">
@@ -103,7 +113,7 @@ export function EntriesTable({ projectId }: { projectId: string }) {
               </Text>
             </Group>
             <Text size="sm">
-              {partyText(e)} · {amountText(e)}
+              {partyText(e)} · {amountText(t, e)}
             </Text>
             <Details e={e} bySeq={byId} />
             <Group justify="space-between" gap="xs" align="flex-end">
@@ -111,23 +121,23 @@ export function EntriesTable({ projectId }: { projectId: string }) {
                 <EntryState e={e} reverser={reversedBy.get(e.id)} />
               </Stack>
               <Text size="xs" c="dimmed">
-                {e.source === 'payment-provider' ? 'Payment provider' : (e.recordedBy?.name ?? '')}
+                {e.source === 'payment-provider' ? t('page.account.entries.paymentProvider') : (e.recordedBy?.name ?? '')}
               </Text>
             </Group>
           </Card>
         ))}
       </Stack>
       <Table.ScrollContainer minWidth={760} visibleFrom="sm">
-        <Table aria-label="Account entries" verticalSpacing="xs" striped>
+        <Table aria-label={t('page.account.entries.tableLabel')} verticalSpacing="xs" striped>
           <Table.Thead>
             <Table.Tr>
               <Table.Th>#</Table.Th>
-              <Table.Th>Date</Table.Th>
-              <Table.Th>Kind</Table.Th>
-              <Table.Th>Party</Table.Th>
-              <Table.Th>Count / amount</Table.Th>
-              <Table.Th>Recorded by</Table.Th>
-              <Table.Th>State</Table.Th>
+              <Table.Th>{t('page.account.entries.date')}</Table.Th>
+              <Table.Th>{t('page.account.entries.kind')}</Table.Th>
+              <Table.Th>{t('page.account.party')}</Table.Th>
+              <Table.Th>{t('page.account.entries.countAmount')}</Table.Th>
+              <Table.Th>{t('page.account.entries.recordedBy')}</Table.Th>
+              <Table.Th>{t('page.account.entries.state')}</Table.Th>
             </Table.Tr>
           </Table.Thead>
           <Table.Tbody>
@@ -142,8 +152,8 @@ export function EntriesTable({ projectId }: { projectId: string }) {
                     <Details e={e} bySeq={byId} />
                   </Table.Td>
                   <Table.Td>{partyText(e)}</Table.Td>
-                  <Table.Td>{amountText(e)}</Table.Td>
-                  <Table.Td>{e.source === 'payment-provider' ? 'Payment provider' : (e.recordedBy?.name ?? '—')}</Table.Td>
+                  <Table.Td>{amountText(t, e)}</Table.Td>
+                  <Table.Td>{e.source === 'payment-provider' ? t('page.account.entries.paymentProvider') : (e.recordedBy?.name ?? '—')}</Table.Td>
                   <Table.Td>
                     <EntryState e={e} reverser={reverser} />
                   </Table.Td>

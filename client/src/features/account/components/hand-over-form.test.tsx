@@ -1,11 +1,16 @@
 import { screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
+import { wordsFor } from '@broodsilk/shared';
+import { i18next } from '@/lib/i18n';
 import { renderWithProviders, stubFetch } from '@/testing/render';
 import { HandOverForm } from './hand-over-form';
 import { CAUTION_LAW, CAUTION_OVERNIGHT, handOverForm, PROJECT_ID, shares, TOMASZ } from './account.fixtures';
 
-afterEach(() => vi.unstubAllGlobals());
+afterEach(async () => {
+  vi.unstubAllGlobals();
+  await i18next.changeLanguage('en');
+});
 
 const OVER = 'Tomasz: This is 4 more than the 5 young still owed to this party (share 8; 3 handed over, 0 sold, 0 cashed out).';
 
@@ -50,5 +55,20 @@ describe('HandOverForm', { timeout: 30_000 }, () => {
     await userEvent.click(await screen.findByRole('button', { name: 'Record hand-over' }));
     await waitFor(() => expect(screen.getByLabelText(/^To/)).toHaveAccessibleDescription('Who receives the spiderlings?'));
     expect(calls.filter((c) => c.method === 'POST')).toHaveLength(0);
+  });
+
+  it('speaks German to a German reader: the terms name the stage and who pays shipping, the cautions come from the catalogue', async () => {
+    await i18next.changeLanguage('de');
+    const de = wordsFor('de');
+    const { fetchStub } = stubFetch({ [`GET /api/projects/${PROJECT_ID}/entries/hand-over-form`]: () => ({ status: 200, body: handOverForm() }) });
+    vi.stubGlobal('fetch', fetchStub);
+    renderWithProviders(<HandOverForm projectId={PROJECT_ID} today="2026-12-01" sacs={shares().sacs} />);
+    await screen.findByRole('form', { name: 'Übergabe erfassen' });
+    expect(screen.getByText('Laut den Bedingungen werden die Jungtiere im Stadium 2. Instar übergeben; Versand: Empfänger zahlt.')).toBeInTheDocument();
+    expect(screen.getByRole('option', { name: 'Tomasz (noch 5 Jungtiere geschuldet)' })).toBeInTheDocument();
+    await userEvent.click(screen.getByRole('radio', { name: 'Versand' }));
+    expect(await screen.findByText(de('safety.shipping.overnight'))).toBeInTheDocument();
+    await userEvent.click(screen.getByRole('button', { name: 'Übergabe speichern' }));
+    await waitFor(() => expect(screen.getByRole('combobox', { name: /^An/ })).toHaveAccessibleDescription('Wer bekommt die Jungtiere?'));
   });
 });

@@ -3,15 +3,16 @@ import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { TextField } from '@/components/fields/text-field';
 import { textRule } from '@/components/fields/text-rule';
-import { dateRule, readDate } from '@/components/fields/typed-date';
-import { numberRule, readNumber } from '@/components/fields/typed-number';
+import { readDate } from '@/components/fields/typed-date';
+import { readNumber } from '@/components/fields/typed-number';
 import { FormActions } from '@/components/ui/form-actions';
 import { SafetyNote } from '@/components/ui/safety-note';
-import { TEXT_LIMITS, type HandOverMethod, type SacSharesView } from '@broodsilk/shared';
+import { broodStageLabel, shippingCautions, TEXT_LIMITS, type HandOverMethod, type SacSharesView } from '@broodsilk/shared';
+import { currentNumbering, useWords } from '@/lib/i18n';
 import { useCreateEntry, useHandOverForm } from '../api/entries';
-import { SacCountDateFields } from './sac-count-date-fields';
+import { countRule, pastDateRule, SacCountDateFields } from './sac-count-date-fields';
 import { applyEntryErrors } from '../utils/entry-errors';
-import { METHOD_LABELS, young } from '../utils/labels';
+import { METHOD_LABELS, partyOwed, SHIPPING_PAYER_LABELS } from '../utils/labels';
 
 interface Values {
   memberId: string;
@@ -26,6 +27,7 @@ interface Values {
 
 /** The owner records spiderlings delivered to a party, by pick-up or shipment. */
 export function HandOverForm({ projectId, today, sacs, onDone }: { projectId: string; today: string; sacs: SacSharesView[]; onDone?: () => void }) {
+  const t = useWords();
   const info = useHandOverForm(projectId);
   const create = useCreateEntry(projectId);
   const [message, setMessage] = useState<string | null>(null);
@@ -36,10 +38,10 @@ export function HandOverForm({ projectId, today, sacs, onDone }: { projectId: st
     validateInputOnBlur: true,
     initialValues: { memberId: '', sacId: '', count: '', date: today, method: 'pick-up', carrier: '', tracking: '', note: '' },
     validate: {
-      memberId: (v) => (v ? null : 'Who receives the spiderlings?'),
-      count: numberRule({ required: 'How many spiderlings?', min: 1, max: 100_000, decimals: 0, rangeMessage: 'A count is a whole number from 1 to 100,000.' }),
-      date: dateRule({ required: 'Give the date.', latest: today, latestMessage: 'This has happened, so it cannot be after today.' }),
-      sacId: (v) => (withYoung.length > 1 && !v ? 'Several sacs have young in care: which one?' : null),
+      memberId: (v) => (v ? null : t('page.account.handOver.whoReceives')),
+      count: countRule(t),
+      date: pastDateRule(t, today),
+      sacId: (v) => (withYoung.length > 1 && !v ? t('page.account.form.whichSac') : null),
       carrier: textRule({ maxLength: TEXT_LIMITS.carrier }),
       tracking: textRule({ maxLength: TEXT_LIMITS.tracking }),
       note: textRule({ maxLength: TEXT_LIMITS.ledgerNote }),
@@ -68,23 +70,28 @@ export function HandOverForm({ projectId, today, sacs, onDone }: { projectId: st
     }
   });
 
-  if (info.isPending) return <Text c="dimmed">Loading…</Text>;
+  if (info.isPending) return <Text c="dimmed">{t('page.shell.loadingDots')}</Text>;
   if (info.isError) return <Alert color="clay">{info.error.message}</Alert>;
   const partyOptions = [
-    { value: '', label: 'Choose a party' },
-    ...info.data.parties.map((p) => ({ value: p.memberId, label: `${p.name} (${young(p.owedSpiderlings)} still owed)` })),
+    { value: '', label: t('page.account.form.chooseParty') },
+    ...info.data.parties.map((p) => ({ value: p.memberId, label: partyOwed(p) })),
   ];
+  const { handOverStage, shippingPaidBy } = info.data;
 
   return (
-    <form onSubmit={submit} noValidate aria-label="Record a hand-over">
+    <form onSubmit={submit} noValidate aria-label={t('page.account.action.hand-over')}>
       <Stack maw={520} gap="sm">
-        {info.data.handOverStage && (
+        {handOverStage && (
           <Text size="sm" c="dimmed">
-            The terms hand young over at {info.data.handOverStage}
-            {info.data.shippingPaidBy ? `; shipping is paid by ${info.data.shippingPaidBy}` : ''}.
+            {shippingPaidBy
+              ? t('page.account.handOver.termsStageShipping', {
+                  stage: broodStageLabel(t, handOverStage, currentNumbering()),
+                  payer: SHIPPING_PAYER_LABELS[shippingPaidBy],
+                })
+              : t('page.account.handOver.termsStage', { stage: broodStageLabel(t, handOverStage, currentNumbering()) })}
           </Text>
         )}
-        <NativeSelect label="To" data={partyOptions} withAsterisk key={form.key('memberId')} {...form.getInputProps('memberId')} />
+        <NativeSelect label={t('page.account.handOver.to')} data={partyOptions} withAsterisk key={form.key('memberId')} {...form.getInputProps('memberId')} />
         <SacCountDateFields
           withYoung={withYoung}
           sac={{ key: form.key('sacId'), ...form.getInputProps('sacId') }}
@@ -93,7 +100,7 @@ export function HandOverForm({ projectId, today, sacs, onDone }: { projectId: st
         />
         <Stack gap={4}>
           <Text size="sm" fw={500} id="hand-over-method">
-            How
+            {t('page.account.handOver.how')}
           </Text>
           <SegmentedControl
             aria-labelledby="hand-over-method"
@@ -105,21 +112,31 @@ export function HandOverForm({ projectId, today, sacs, onDone }: { projectId: st
         {method === 'shipment' && (
           <>
             <Group grow align="flex-start">
-              <TextField label="Carrier" maxLength={TEXT_LIMITS.carrier} key={form.key('carrier')} {...form.getInputProps('carrier')} />
-              <TextField label="Tracking number" maxLength={TEXT_LIMITS.tracking} key={form.key('tracking')} {...form.getInputProps('tracking')} />
+              <TextField
+                label={t('page.account.handOver.carrier')}
+                maxLength={TEXT_LIMITS.carrier}
+                key={form.key('carrier')}
+                {...form.getInputProps('carrier')}
+              />
+              <TextField
+                label={t('page.account.handOver.tracking')}
+                maxLength={TEXT_LIMITS.tracking}
+                key={form.key('tracking')}
+                {...form.getInputProps('tracking')}
+              />
             </Group>
-            <Alert color="amber" variant="light" title="Before you ship live spiderlings" role="note" data-testid="shipping-cautions">
+            <Alert color="amber" variant="light" title={t('page.account.handOver.shippingTitle')} role="note" data-testid="shipping-cautions">
               <List size="sm" spacing={4}>
-                {info.data.shippingCautions.map((c) => (
+                {shippingCautions(t).map((c) => (
                   <List.Item key={c}>{c}</List.Item>
                 ))}
               </List>
             </Alert>
           </>
         )}
-        <TextField label="Note" maxLength={TEXT_LIMITS.ledgerNote} key={form.key('note')} {...form.getInputProps('note')} />
+        <TextField label={t('page.account.form.note')} maxLength={TEXT_LIMITS.ledgerNote} key={form.key('note')} {...form.getInputProps('note')} />
         <SafetyNote text="crossBorder" />
-        <FormActions message={message} loading={create.isPending} submitLabel="Record hand-over" />
+        <FormActions message={message} loading={create.isPending} submitLabel={t('page.account.submit.hand-over')} />
       </Stack>
     </form>
   );

@@ -5,11 +5,13 @@ import { DateField } from '@/components/fields/date-field';
 import { NumberField } from '@/components/fields/number-field';
 import { TextField } from '@/components/fields/text-field';
 import { textRule } from '@/components/fields/text-rule';
-import { dateRule, readDate } from '@/components/fields/typed-date';
+import { readDate } from '@/components/fields/typed-date';
 import { FormActions } from '@/components/ui/form-actions';
 import { TEXT_LIMITS, minorToMajor, parseMoney, toMinor, type PartyRef } from '@broodsilk/shared';
 import { useCreateEntry } from '../api/entries';
 import { applyEntryErrors } from '../utils/entry-errors';
+import { pastDateRule } from './sac-count-date-fields';
+import { useWords } from '@/lib/i18n';
 
 interface Values {
   fromMemberId: string;
@@ -33,7 +35,8 @@ interface Props {
 }
 
 /** Money paid from one party to another; the other party confirms it before it counts. */
-export function MoneyForm({ projectId, parties, currency, today, fromMemberId, toMemberId, amountMinor, submitLabel = 'Record payment', onDone }: Props) {
+export function MoneyForm({ projectId, parties, currency, today, fromMemberId, toMemberId, amountMinor, submitLabel, onDone }: Props) {
+  const t = useWords();
   const create = useCreateEntry(projectId);
   const [message, setMessage] = useState<string | null>(null);
   const form = useForm<Values>({
@@ -47,14 +50,14 @@ export function MoneyForm({ projectId, parties, currency, today, fromMemberId, t
       note: '',
     },
     validate: {
-      fromMemberId: (v) => (v ? null : 'Who paid?'),
-      toMemberId: (v, all) => (!v ? 'Who was paid?' : v === all.fromMemberId ? 'The payer and the payee must be different parties.' : null),
+      fromMemberId: (v) => (v ? null : t('page.account.money.whoPaid')),
+      toMemberId: (v, all) => (!v ? t('page.account.money.whoWasPaid') : v === all.fromMemberId ? t('page.account.money.sameParty') : null),
       amount: (v) => {
         const amount = parseMoney(v, currency);
-        return !amount.ok ? amount.message : amount.minor > 0 ? null : 'The amount must be above 0.';
+        return !amount.ok ? amount.message : amount.minor > 0 ? null : t('page.account.form.amountAboveZero');
       },
       note: textRule({ maxLength: TEXT_LIMITS.ledgerNote }),
-      date: dateRule({ required: 'Give the date.', latest: today, latestMessage: 'This has happened, so it cannot be after today.' }),
+      date: pastDateRule(t, today),
     },
   });
   const submit = form.onSubmit(async (v) => {
@@ -75,26 +78,38 @@ export function MoneyForm({ projectId, parties, currency, today, fromMemberId, t
       setMessage(applyEntryErrors(form, e, 'amount'));
     }
   });
-  const options = [{ value: '', label: 'Choose a party' }, ...parties.map((p) => ({ value: p.memberId, label: p.name }))];
+  const options = [{ value: '', label: t('page.account.form.chooseParty') }, ...parties.map((p) => ({ value: p.memberId, label: p.name }))];
   return (
-    <form onSubmit={submit} noValidate aria-label="Record a payment">
+    <form onSubmit={submit} noValidate aria-label={t('page.account.action.money')}>
       <Stack maw={520} gap="sm">
         <Group grow align="flex-start">
           <NativeSelect
-            label="Paid by"
+            label={t('page.account.money.paidBy')}
             data={options}
             disabled={fromMemberId !== undefined}
             key={form.key('fromMemberId')}
             {...form.getInputProps('fromMemberId')}
           />
-          <NativeSelect label="Paid to" data={options} disabled={toMemberId !== undefined} key={form.key('toMemberId')} {...form.getInputProps('toMemberId')} />
+          <NativeSelect
+            label={t('page.account.money.paidTo')}
+            data={options}
+            disabled={toMemberId !== undefined}
+            key={form.key('toMemberId')}
+            {...form.getInputProps('toMemberId')}
+          />
         </Group>
         <Group grow align="flex-start">
-          <NumberField label={`Amount (${currency})`} withAsterisk key={form.key('amount')} {...form.getInputProps('amount')} />
-          <DateField label="Date" withAsterisk key={form.key('date')} {...form.getInputProps('date')} />
+          <NumberField label={t('page.account.form.amount', { currency })} withAsterisk key={form.key('amount')} {...form.getInputProps('amount')} />
+          <DateField label={t('page.account.form.date')} withAsterisk key={form.key('date')} {...form.getInputProps('date')} />
         </Group>
-        <TextField label="Note" placeholder="e.g. bank transfer" maxLength={TEXT_LIMITS.ledgerNote} key={form.key('note')} {...form.getInputProps('note')} />
-        <FormActions message={message} loading={create.isPending} submitLabel={submitLabel} />
+        <TextField
+          label={t('page.account.form.note')}
+          placeholder={t('page.account.money.notePlaceholder')}
+          maxLength={TEXT_LIMITS.ledgerNote}
+          key={form.key('note')}
+          {...form.getInputProps('note')}
+        />
+        <FormActions message={message} loading={create.isPending} submitLabel={submitLabel ?? t('page.account.submit.money')} />
       </Stack>
     </form>
   );

@@ -6,6 +6,7 @@ import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateCheckout } from '../api/settlements';
 import { formatMoney, minorToMajor, parseMoney, toMinor } from '@broodsilk/shared';
 import { FormActions } from '@/components/ui/form-actions';
+import { useWords } from '@/lib/i18n';
 
 interface Props {
   projectId: string;
@@ -19,6 +20,7 @@ interface Props {
 
 /** "Pay what you owe": an amount up to the debt, paid on the payment provider's page. */
 export function PayForm({ projectId, toMemberId, toName, owedMinor, currency, goTo = (url) => window.location.assign(url) }: Props) {
+  const t = useWords();
   const checkout = useCreateCheckout(projectId);
   const [message, setMessage] = useState<string | null>(null);
   const form = useForm<{ amount: string }>({
@@ -29,8 +31,8 @@ export function PayForm({ projectId, toMemberId, toName, owedMinor, currency, go
       amount: (v) => {
         const amount = parseMoney(v, currency);
         if (!amount.ok) return amount.message;
-        if (amount.minor <= 0) return 'The amount must be above 0.';
-        return amount.minor > owedMinor ? `You owe ${toName} ${formatMoney(owedMinor, currency)}; the amount cannot be more than that.` : null;
+        if (amount.minor <= 0) return t('page.account.form.amountAboveZero');
+        return amount.minor > owedMinor ? t('page.account.pay.tooMuch', { name: toName, amount: formatMoney(owedMinor, currency) }) : null;
       },
     },
   });
@@ -44,15 +46,13 @@ export function PayForm({ projectId, toMemberId, toName, owedMinor, currency, go
     }
   });
   return (
-    <form onSubmit={submit} noValidate aria-label={`Pay ${toName}`}>
+    <form onSubmit={submit} noValidate aria-label={t('page.account.pay.formLabel', { name: toName })}>
       <Stack gap="xs" maw={420}>
-        <Text size="sm">
-          You owe {toName} {formatMoney(owedMinor, currency)}.
-        </Text>
-        <NumberField label={`Amount (${currency})`} key={form.key('amount')} {...form.getInputProps('amount')} />
-        <FormActions message={message} loading={checkout.isPending} submitLabel="Pay what you owe" />
+        <Text size="sm">{t('page.account.pay.youOwe', { name: toName, amount: formatMoney(owedMinor, currency) })}</Text>
+        <NumberField label={t('page.account.form.amount', { currency })} key={form.key('amount')} {...form.getInputProps('amount')} />
+        <FormActions message={message} loading={checkout.isPending} submitLabel={t('page.account.pay.submit')} />
         <Text size="xs" c="dimmed">
-          You will pay on the payment provider’s page and come back here afterwards.
+          {t('page.account.pay.providerPage')}
         </Text>
       </Stack>
     </form>

@@ -4,15 +4,16 @@ import { useState } from 'react';
 import { NumberField } from '@/components/fields/number-field';
 import { TextField } from '@/components/fields/text-field';
 import { textRule } from '@/components/fields/text-rule';
-import { dateRule, readDate } from '@/components/fields/typed-date';
-import { numberRule, readNumber } from '@/components/fields/typed-number';
+import { readDate } from '@/components/fields/typed-date';
+import { readNumber } from '@/components/fields/typed-number';
 import { FormActions } from '@/components/ui/form-actions';
 import { SafetyNote } from '@/components/ui/safety-note';
 import { TEXT_LIMITS, parseMoney, toMinor, type PartyBalanceView, type SacSharesView } from '@broodsilk/shared';
 import { useCreateEntry } from '../api/entries';
-import { SacCountDateFields } from './sac-count-date-fields';
+import { countRule, pastDateRule, SacCountDateFields } from './sac-count-date-fields';
+import { useWords } from '@/lib/i18n';
 import { applyEntryErrors } from '../utils/entry-errors';
-import { young } from '../utils/labels';
+import { partyOwed } from '../utils/labels';
 
 interface Values {
   memberId: string;
@@ -31,12 +32,15 @@ interface Props {
   currency: string;
   /** The terms' price per spiderling, for the cash-out hint. */
   termsPriceMinor: number | null;
+  /** The species' protected-trade listing (e.g. "CITES Appendix II"); null when not listed or not known. */
+  tradeListing?: string | null;
   today: string;
   onDone?: () => void;
 }
 
 /** A sale to an outside buyer, or a cash-out (money instead of young): both take young off a party's share. */
-export function WithdrawalForm({ projectId, kind, parties, sacs, currency, termsPriceMinor, today, onDone }: Props) {
+export function WithdrawalForm({ projectId, kind, parties, sacs, currency, termsPriceMinor, tradeListing = null, today, onDone }: Props) {
+  const t = useWords();
   const create = useCreateEntry(projectId);
   const [message, setMessage] = useState<string | null>(null);
   const withYoung = sacs.filter((s) => s.aliveInCare > 0);
@@ -46,14 +50,14 @@ export function WithdrawalForm({ projectId, kind, parties, sacs, currency, terms
     validateInputOnBlur: true,
     initialValues: { memberId: '', sacId: '', count: '', date: today, price: '', note: '' },
     validate: {
-      memberId: (v) => (v ? null : 'Whose share is this from?'),
-      count: numberRule({ required: 'How many spiderlings?', min: 1, max: 100_000, decimals: 0, rangeMessage: 'A count is a whole number from 1 to 100,000.' }),
-      date: dateRule({ required: 'Give the date.', latest: today, latestMessage: 'This has happened, so it cannot be after today.' }),
-      sacId: (v) => (withYoung.length > 1 && !v ? 'Several sacs have young in care: which one?' : null),
+      memberId: (v) => (v ? null : t('page.account.withdrawal.whoseShare')),
+      count: countRule(t),
+      date: pastDateRule(t, today),
+      sacId: (v) => (withYoung.length > 1 && !v ? t('page.account.form.whichSac') : null),
       price: (v) => {
-        if (v.trim() === '') return sale ? 'What was the total price?' : null;
+        if (v.trim() === '') return sale ? t('page.account.withdrawal.totalPriceRequired') : null;
         const price = parseMoney(v, currency);
-        return !price.ok ? price.message : price.minor >= 0 ? null : 'The price must be 0 or more.';
+        return !price.ok ? price.message : price.minor >= 0 ? null : t('page.account.withdrawal.priceNotNegative');
       },
       note: textRule({ maxLength: TEXT_LIMITS.ledgerNote }),
     },
@@ -78,14 +82,11 @@ export function WithdrawalForm({ projectId, kind, parties, sacs, currency, terms
     }
   });
   return (
-    <form onSubmit={submit} noValidate aria-label={sale ? 'Record a sale' : 'Record a cash-out'}>
+    <form onSubmit={submit} noValidate aria-label={t(`page.account.action.${kind}`)}>
       <Stack maw={520} gap="sm">
         <NativeSelect
-          label={sale ? 'Sold from the share of' : 'Cashed out by'}
-          data={[
-            { value: '', label: 'Choose a party' },
-            ...parties.map((p) => ({ value: p.memberId, label: `${p.name} (${young(p.owedSpiderlings)} still owed)` })),
-          ]}
+          label={t(sale ? 'page.account.withdrawal.saleFrom' : 'page.account.withdrawal.cashedOutBy')}
+          data={[{ value: '', label: t('page.account.form.chooseParty') }, ...parties.map((p) => ({ value: p.memberId, label: partyOwed(p) }))]}
           withAsterisk
           key={form.key('memberId')}
           {...form.getInputProps('memberId')}
@@ -97,18 +98,19 @@ export function WithdrawalForm({ projectId, kind, parties, sacs, currency, terms
           date={{ key: form.key('date'), ...form.getInputProps('date') }}
         />
         <NumberField
-          label={sale ? `Total price (${currency})` : `Price per spiderling (${currency})`}
-          description={!sale && termsPriceMinor !== null ? 'Leave empty to use the price in the terms.' : undefined}
+          label={t(sale ? 'page.account.withdrawal.totalPrice' : 'page.account.withdrawal.pricePerSpiderling', { currency })}
+          description={!sale && termsPriceMinor !== null ? t('page.account.withdrawal.termsPriceHint') : undefined}
           withAsterisk={sale}
           key={form.key('price')}
           {...form.getInputProps('price')}
         />
-        <TextField label="Note" maxLength={TEXT_LIMITS.ledgerNote} key={form.key('note')} {...form.getInputProps('note')} />
+        <TextField label={t('page.account.form.note')} maxLength={TEXT_LIMITS.ledgerNote} key={form.key('note')} {...form.getInputProps('note')} />
+        {sale && tradeListing && <SafetyNote text="saleListed" values={{ listing: tradeListing }} />}
         {sale && <SafetyNote text="sale" />}
-        <FormActions message={message} loading={create.isPending} submitLabel={sale ? 'Record sale' : 'Record cash-out'} />
+        <FormActions message={message} loading={create.isPending} submitLabel={t(`page.account.submit.${kind}`)} />
         {!sale && (
           <Text size="xs" c="dimmed">
-            A cash-out makes the party running the project owe this party the count times the price.
+            {t('page.account.withdrawal.cashOutHint')}
           </Text>
         )}
       </Stack>
