@@ -5,6 +5,7 @@ import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import { dayjs } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
+import { useWords, words } from '@/lib/i18n';
 import { ModalFormEnd } from './modal-form-end';
 import { useAnimalStep, type AnimalStep } from '../api/animal-season';
 
@@ -12,7 +13,7 @@ export const localToday = () => dayjs().format('YYYY-MM-DD');
 
 /** A dated step may be today or earlier, never later (ISO dates compare as strings). */
 export function pastDateError(v: string | null, today = localToday()): string | null {
-  return !v ? 'Give the date.' : v > today ? 'The date cannot be in the future.' : null;
+  return !v ? words('page.collection.step.dateMissing') : v > today ? words('page.collection.step.dateInFuture') : null;
 }
 
 interface DatedStepFormProps {
@@ -31,6 +32,7 @@ interface DatedStepFormProps {
  * fine, a future one is refused here and by the server.
  */
 export function DatedStepForm({ animalId, step, dateLabel, submitLabel, explanation, onDone }: DatedStepFormProps) {
+  const t = useWords();
   const save = useAnimalStep(animalId, step);
   const [message, setMessage] = useState<string | null>(null);
   const form = useForm<{ on: string | null }>({
@@ -48,7 +50,14 @@ export function DatedStepForm({ animalId, step, dateLabel, submitLabel, explanat
     >
       <Stack>
         {explanation && <Text size="sm">{explanation}</Text>}
-        <DateInput label={dateLabel} withAsterisk valueFormat="YYYY-MM-DD" placeholder="YYYY-MM-DD" key={form.key('on')} {...form.getInputProps('on')} />
+        <DateInput
+          label={dateLabel}
+          withAsterisk
+          valueFormat="YYYY-MM-DD"
+          placeholder={t('page.collection.datePlaceholder')}
+          key={form.key('on')}
+          {...form.getInputProps('on')}
+        />
         <ModalFormEnd message={message} loading={save.isPending} submitLabel={submitLabel} onCancel={onDone} />
       </Stack>
     </form>

@@ -5,6 +5,7 @@ import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import type { FeedingResponse } from '@broodsilk/shared';
 import { applyServerErrors } from '@/lib/form-errors';
+import { useWords } from '@/lib/i18n';
 import { ModalFormEnd } from './modal-form-end';
 import { useAddFeeding } from '../api/animal-season';
 import { localToday, pastDateError } from './dated-step-form';
@@ -19,6 +20,7 @@ interface FeedingFormValues {
 
 /** A new feeding, or (with `correcting`) the corrected version of an entry, which strikes it. */
 export function FeedingForm({ animalId, correcting, onDone }: { animalId: string; correcting?: FeedingResponse; onDone: () => void }) {
+  const t = useWords();
   const add = useAddFeeding(animalId);
   const [message, setMessage] = useState<string | null>(null);
   const form = useForm<FeedingFormValues>({
@@ -32,13 +34,13 @@ export function FeedingForm({ animalId, correcting, onDone }: { animalId: string
     },
     validate: {
       fedOn: (v) => pastDateError(v),
-      prey: (v) => (v.trim() ? null : 'Say what prey was offered, e.g. "2 adult crickets".'),
-      reason: (v) => (correcting && !v.trim() ? 'Say briefly why the entry is corrected.' : null),
+      prey: (v) => (v.trim() ? null : t('page.collection.feeding.preyMissing')),
+      reason: (v) => (correcting && !v.trim() ? t('page.collection.feeding.reasonMissing') : null),
     },
   });
   return (
     <form
-      aria-label={correcting ? 'Correct a feeding' : 'Record a feeding'}
+      aria-label={t(correcting ? 'page.collection.feeding.correctTitle' : 'page.collection.feeding.record')}
       onSubmit={form.onSubmit((v) => {
         setMessage(null);
         add.mutate(
@@ -54,20 +56,38 @@ export function FeedingForm({ animalId, correcting, onDone }: { animalId: string
       })}
     >
       <Stack>
-        <DateInput label="Fed on" withAsterisk valueFormat="YYYY-MM-DD" placeholder="YYYY-MM-DD" key={form.key('fedOn')} {...form.getInputProps('fedOn')} />
-        <TextInput label="Prey" withAsterisk placeholder="2 adult crickets" key={form.key('prey')} {...form.getInputProps('prey')} />
+        <DateInput
+          label={t('page.collection.feeding.fedOn')}
+          withAsterisk
+          valueFormat="YYYY-MM-DD"
+          placeholder={t('page.collection.datePlaceholder')}
+          key={form.key('fedOn')}
+          {...form.getInputProps('fedOn')}
+        />
+        <TextInput
+          label={t('page.collection.feeding.prey')}
+          withAsterisk
+          placeholder={t('page.collection.feeding.preyExample')}
+          key={form.key('prey')}
+          {...form.getInputProps('prey')}
+        />
         <SegmentedControl
-          aria-label="Taken or refused"
+          aria-label={t('page.collection.feeding.takenOrRefused')}
           data={[
-            { value: 'taken', label: 'Taken' },
-            { value: 'refused', label: 'Refused' },
+            { value: 'taken', label: t('page.collection.feeding.taken') },
+            { value: 'refused', label: t('page.collection.feeding.refused') },
           ]}
           key={form.key('taken')}
           {...form.getInputProps('taken')}
         />
-        <Textarea label="Note" rows={2} key={form.key('note')} {...form.getInputProps('note')} />
-        {correcting && <TextInput label="Why the old entry was wrong" withAsterisk key={form.key('reason')} {...form.getInputProps('reason')} />}
-        <ModalFormEnd message={message} loading={add.isPending} submitLabel={correcting ? 'Save the correction' : 'Save feeding'} onCancel={onDone} />
+        <Textarea label={t('page.collection.feeding.note')} rows={2} key={form.key('note')} {...form.getInputProps('note')} />
+        {correcting && <TextInput label={t('page.collection.feeding.reason')} withAsterisk key={form.key('reason')} {...form.getInputProps('reason')} />}
+        <ModalFormEnd
+          message={message}
+          loading={add.isPending}
+          submitLabel={t(correcting ? 'page.collection.feeding.saveCorrection' : 'page.collection.feeding.save')}
+          onCancel={onDone}
+        />
       </Stack>
     </form>
   );
