@@ -259,6 +259,16 @@ export const collectionEn = {
     lastMolt_one: 'Last molt {{date}} · {{count}} day ago',
     lastMolt_other: 'Last molt {{date}} · {{count}} days ago',
     premoltNote: 'Premolt note:',
+    /** The advice under her state (the same facts as `femaleReadiness` in shared/src/collection). */
+    ago_one: '{{count}} day ago',
+    ago_other: '{{count}} days ago',
+    notePremolt:
+      'Not now: in premolt since {{date}}. Pairing her now would be lost with the coming molt; wait until she has molted and hardened (about {{days}} days).',
+    noteNoMolt: 'No molt recorded. Add her last molt to see how long ago it was. {{lost}}',
+    noteHardening_one: 'Molted {{ago}}. Give her new skin time to harden before pairing (about {{count}} more day).',
+    noteHardening_other: 'Molted {{ago}}. Give her new skin time to harden before pairing (about {{count}} more days).',
+    noteReady: 'Last molted {{ago}}. {{lost}}',
+    lostPairing: 'If she molts again before she lays, the pairing is lost: the stored sperm is shed with the old skin.',
   },
 } as const;
 
@@ -525,5 +535,14 @@ export const collectionDe: Widen<typeof collectionEn> = {
     lastMolt_one: 'Letzte Häutung am {{date}} · vor {{count}} Tag',
     lastMolt_other: 'Letzte Häutung am {{date}} · vor {{count}} Tagen',
     premoltNote: 'Notiz zur bevorstehenden Häutung:',
+    ago_one: 'vor {{count}} Tag',
+    ago_other: 'vor {{count}} Tagen',
+    notePremolt:
+      'Jetzt nicht: Sie steht seit {{date}} vor der Häutung. Eine Verpaarung jetzt ginge mit der kommenden Häutung verloren; warte, bis sie sich gehäutet hat und ausgehärtet ist (etwa {{days}} Tage).',
+    noteNoMolt: 'Keine Häutung eingetragen. Trag ihre letzte Häutung ein, um zu sehen, wie lange sie her ist. {{lost}}',
+    noteHardening_one: 'Gehäutet {{ago}}. Gib ihrer neuen Haut Zeit zum Aushärten, bevor du sie verpaarst (noch etwa {{count}} Tag).',
+    noteHardening_other: 'Gehäutet {{ago}}. Gib ihrer neuen Haut Zeit zum Aushärten, bevor du sie verpaarst (noch etwa {{count}} Tage).',
+    noteReady: 'Zuletzt gehäutet {{ago}}. {{lost}}',
+    lostPairing: 'Häutet sie sich erneut, bevor sie einen Kokon baut, ist die Verpaarung verloren: Das gespeicherte Sperma geht mit der alten Haut ab.',
   },
 };
