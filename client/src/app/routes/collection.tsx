@@ -37,6 +37,11 @@ export function shouldRevalidate({ currentUrl, nextUrl, defaultShouldRevalidate 
   return currentUrl.pathname === nextUrl.pathname ? false : defaultShouldRevalidate;
 }
 
+/** The page's description, one catalogue sentence whose word "catalogue" opens the species pages. */
+export function CollectionDescription() {
+  return <Trans i18nKey="page.collection.description" components={{ species: <Anchor component={Link} to={paths.species.href()} inherit /> }} />;
+}
+
 export function Component() {
   const t = useWords();
   const [params, setParams] = useSearchParams();
@@ -72,7 +77,7 @@ export function Component() {
     <Stack>
       <PageHeader
         title={t('page.collection.title')}
-        description={<Trans i18nKey="page.collection.description" components={{ link: <Anchor component={Link} to={paths.species.href()} inherit /> }} />}
+        description={<CollectionDescription />}
         actions={
           <Group gap="xs" align="flex-start">
             <Button onClick={() => setAdding(true)} size="md">

@@ -3,8 +3,8 @@ import type { Widen } from '../catalogue-shape.js';
 /** Page text: the collection and animal pages (client/src/features/collection). English first; German must fill the same keys. */
 export const collectionEn = {
   title: 'Collection',
-  /** `<link>` marks the words that open the species catalogue. */
-  description: 'Your animals, their molts and photos. Species names follow the <link>catalogue</link>.',
+  /** `<species>` marks the words that open the species catalogue (not `<link>`: react-i18next reads that HTML name as an element without content). */
+  description: 'Your animals, their molts and photos. Species names follow the <species>catalogue</species>.',
   addAnimal: 'Add animal',
   addAnimalTitle: 'Add an animal',
   added: '{{label}} was added to your collection.',
@@ -274,7 +274,7 @@ export const collectionEn = {
 
 export const collectionDe: Widen<typeof collectionEn> = {
   title: 'Sammlung',
-  description: 'Deine Tiere, ihre Häutungen und Fotos. Die Artnamen folgen dem <link>Katalog</link>.',
+  description: 'Deine Tiere, ihre Häutungen und Fotos. Die Artnamen folgen dem <species>Katalog</species>.',
   addAnimal: 'Tier hinzufügen',
   addAnimalTitle: 'Ein Tier hinzufügen',
   added: '{{label}} ist jetzt in deiner Sammlung.',
