@@ -9,24 +9,17 @@ afterEach(async () => {
 });
 
 describe('the collection page description', () => {
-  it('is one sentence whose word "catalogue" opens the species pages', () => {
+  it.each([
+    ['en', 'Your animals, their molts and photos. Species names follow the catalogue.', 'catalogue'],
+    ['de', 'Deine Tiere, ihre Häutungen und Fotos. Die Artnamen folgen dem Katalog.', 'Katalog'],
+  ])('is one sentence (%s) whose linked word opens the species pages', async (language, sentence, linked) => {
+    await i18next.changeLanguage(language);
     renderWithProviders(
       <p data-testid="description">
         <CollectionDescription />
       </p>,
     );
-    expect(screen.getByTestId('description')).toHaveTextContent('Your animals, their molts and photos. Species names follow the catalogue.');
-    expect(screen.getByRole('link', { name: 'catalogue' })).toHaveAttribute('href', '/species');
-  });
-
-  it('links the German word in a German interface', async () => {
-    await i18next.changeLanguage('de');
-    renderWithProviders(
-      <p data-testid="description">
-        <CollectionDescription />
-      </p>,
-    );
-    expect(screen.getByTestId('description')).toHaveTextContent('Deine Tiere, ihre Häutungen und Fotos. Die Artnamen folgen dem Katalog.');
-    expect(screen.getByRole('link', { name: 'Katalog' })).toHaveAttribute('href', '/species');
+    expect(screen.getByTestId('description')).toHaveTextContent(sentence);
+    expect(screen.getByRole('link', { name: linked })).toHaveAttribute('href', '/species');
   });
 });
