@@ -16,8 +16,6 @@ export const collectionEn = {
   range: '{{from}}–{{to}} of {{total}} animals',
   perPage: 'Animals per page',
   perPageOption: '{{count}} a page',
-  /** A field's format hint where a date is picked from a calendar. */
-  datePlaceholder: 'YYYY-MM-DD',
   filters: {
     search: 'Search',
     searchPlaceholder: 'Label, enclosure or species',
@@ -286,7 +284,6 @@ export const collectionDe: Widen<typeof collectionEn> = {
   range: '{{from}}–{{to}} von {{total}} Tieren',
   perPage: 'Tiere pro Seite',
   perPageOption: '{{count}} pro Seite',
-  datePlaceholder: 'JJJJ-MM-TT',
   filters: {
     search: 'Suche',
     searchPlaceholder: 'Bezeichnung, Terrarium oder Art',

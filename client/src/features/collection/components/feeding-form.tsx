@@ -1,9 +1,9 @@
 import { SegmentedControl, Stack, TextInput, Textarea } from '@mantine/core';
-import { DateInput } from '@mantine/dates';
-import '@mantine/dates/styles.css';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
 import type { FeedingResponse } from '@broodsilk/shared';
+import { DateField } from '@/components/fields/date-field';
+import { readDate } from '@/components/fields/typed-date';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useWords } from '@/lib/i18n';
 import { ModalFormEnd } from './modal-form-end';
@@ -11,7 +11,7 @@ import { useAddFeeding } from '../api/animal-season';
 import { localToday, pastDateError } from './dated-step-form';
 
 interface FeedingFormValues {
-  fedOn: string | null;
+  fedOn: string;
   prey: string;
   taken: 'taken' | 'refused';
   note: string;
@@ -45,7 +45,7 @@ export function FeedingForm({ animalId, correcting, onDone }: { animalId: string
         setMessage(null);
         add.mutate(
           {
-            fedOn: v.fedOn!,
+            fedOn: readDate(v.fedOn)!,
             prey: v.prey.trim(),
             taken: v.taken === 'taken',
             note: v.note.trim() || null,
@@ -56,14 +56,7 @@ export function FeedingForm({ animalId, correcting, onDone }: { animalId: string
       })}
     >
       <Stack>
-        <DateInput
-          label={t('page.collection.feeding.fedOn')}
-          withAsterisk
-          valueFormat="YYYY-MM-DD"
-          placeholder={t('page.collection.datePlaceholder')}
-          key={form.key('fedOn')}
-          {...form.getInputProps('fedOn')}
-        />
+        <DateField label={t('page.collection.feeding.fedOn')} withAsterisk key={form.key('fedOn')} {...form.getInputProps('fedOn')} />
         <TextInput
           label={t('page.collection.feeding.prey')}
           withAsterisk
