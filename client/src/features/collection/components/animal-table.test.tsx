@@ -40,6 +40,6 @@ describe('AnimalTable in German', () => {
     expect(screen.getByRole('table', { name: 'Tiere' })).toBeInTheDocument();
     expect(screen.getByRole('button', { name: 'Nach Bezeichnung sortieren' })).toBeInTheDocument();
     expect(screen.getByRole('columnheader', { name: 'Letzte Häutung' })).toBeInTheDocument();
-    expect(screen.getByTestId('held-by')).toHaveTextContent('Verliehen an Mira Okonkwonur lesen');
+    expect(screen.getByTestId('held-by')).toHaveTextContent('Verliehen an Mira Okonkwoschreibgeschützt');
   });
 });

@@ -45,6 +45,6 @@ describe('ReadinessPanel', () => {
     expect(
       await screen.findByText('Gehäutet vor 20 Tagen. Gib ihrer neuen Haut Zeit zum Aushärten, bevor du sie verpaarst (noch etwa 1 Tag).'),
     ).toBeInTheDocument();
-    expect(screen.getByText('Bereit zur Verpaarung?')).toBeInTheDocument();
+    expect(screen.getByText('Verpaarungsbereitschaft')).toBeInTheDocument();
   });
 });
