@@ -1,9 +1,11 @@
-import { SegmentedControl, Stack, TextInput, Textarea } from '@mantine/core';
+import { SegmentedControl, Stack } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import type { FeedingResponse } from '@broodsilk/shared';
+import { TEXT_LIMITS, type FeedingResponse } from '@broodsilk/shared';
 import { DateField } from '@/components/fields/date-field';
 import { readDate } from '@/components/fields/typed-date';
+import { TextAreaField, TextField } from '@/components/fields/text-field';
+import { textRule } from '@/components/fields/text-rule';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useWords } from '@/lib/i18n';
 import { ModalFormEnd } from './modal-form-end';
@@ -34,8 +36,9 @@ export function FeedingForm({ animalId, correcting, onDone }: { animalId: string
     },
     validate: {
       fedOn: (v) => pastDateError(v),
-      prey: (v) => (v.trim() ? null : t('page.collection.feeding.preyMissing')),
-      reason: (v) => (correcting && !v.trim() ? t('page.collection.feeding.reasonMissing') : null),
+      prey: textRule({ required: t('page.collection.feeding.preyMissing'), maxLength: TEXT_LIMITS.prey }),
+      note: textRule({ maxLength: TEXT_LIMITS.note }),
+      reason: textRule({ required: correcting ? t('page.collection.feeding.reasonMissing') : undefined, maxLength: TEXT_LIMITS.correctionReason }),
     },
   });
   return (
@@ -57,9 +60,10 @@ export function FeedingForm({ animalId, correcting, onDone }: { animalId: string
     >
       <Stack>
         <DateField label={t('page.collection.feeding.fedOn')} withAsterisk key={form.key('fedOn')} {...form.getInputProps('fedOn')} />
-        <TextInput
+        <TextField
           label={t('page.collection.feeding.prey')}
           withAsterisk
+          maxLength={TEXT_LIMITS.prey}
           placeholder={t('page.collection.feeding.preyExample')}
           key={form.key('prey')}
           {...form.getInputProps('prey')}
@@ -73,8 +77,16 @@ export function FeedingForm({ animalId, correcting, onDone }: { animalId: string
           key={form.key('taken')}
           {...form.getInputProps('taken')}
         />
-        <Textarea label={t('page.collection.feeding.note')} rows={2} key={form.key('note')} {...form.getInputProps('note')} />
-        {correcting && <TextInput label={t('page.collection.feeding.reason')} withAsterisk key={form.key('reason')} {...form.getInputProps('reason')} />}
+        <TextAreaField label={t('page.collection.feeding.note')} rows={2} maxLength={TEXT_LIMITS.note} key={form.key('note')} {...form.getInputProps('note')} />
+        {correcting && (
+          <TextField
+            label={t('page.collection.feeding.reason')}
+            withAsterisk
+            maxLength={TEXT_LIMITS.correctionReason}
+            key={form.key('reason')}
+            {...form.getInputProps('reason')}
+          />
+        )}
         <ModalFormEnd
           message={message}
           loading={add.isPending}
