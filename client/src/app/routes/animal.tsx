@@ -24,6 +24,7 @@ import { speciesQueries, useSpecies } from '@/features/species/api/species';
 import { CautionNotice } from '@/features/species/components/caution-notice';
 import { SpeciesPicker } from '@/features/species/components/species-picker';
 import { preloadPanels } from '../preload';
+import { useWords } from '@/lib/i18n';
 
 export const clientLoader =
   (qc: QueryClient) =>
@@ -46,6 +47,7 @@ function Fact({ label, children }: { label: string; children: React.ReactNode })
 }
 
 export function Component() {
+  const t = useWords();
   const { animalId } = useParams();
   const id = animalId!;
   const { data: animal } = useAnimal(id);
@@ -55,13 +57,19 @@ export function Component() {
   const [editing, setEditing] = useState(false);
   if (!animal) return null;
 
-  const owner = animal.owner.kind === 'self' ? 'You' : animal.owner.name;
+  const owner = animal.owner.kind === 'self' ? t('page.collection.animal.ownerYou') : animal.owner.name;
+  const custody = animal.custodyParty
+    ? t(animal.custody === 'loan-out' ? 'page.collection.animal.heldBy' : 'page.collection.animal.lentFrom', {
+        custody: CUSTODY_LABELS[animal.custody],
+        party: animal.custodyParty,
+      })
+    : CUSTODY_LABELS[animal.custody];
   return (
     <Stack>
       <DocumentTitle title={animal.label} />
       <Breadcrumbs>
         <Anchor component={Link} to={paths.collection.href()} size="sm">
-          Collection
+          {t('page.collection.title')}
         </Anchor>
         <Text size="sm">{animal.label}</Text>
       </Breadcrumbs>
@@ -77,21 +85,22 @@ export function Component() {
               {MATURITY_LABELS[animal.maturity]}
             </Badge>
             <Badge variant="light" color={animal.status === 'active' ? 'moss' : 'amber'} style={{ textTransform: 'none' }}>
-              {STATUS_LABELS[animal.status]}
-              {animal.statusOn ? ` since ${formatDate(animal.statusOn)}` : ''}
+              {animal.statusOn
+                ? t('page.collection.animal.statusSince', { status: STATUS_LABELS[animal.status], date: animal.statusOn })
+                : STATUS_LABELS[animal.status]}
             </Badge>
           </Group>
         </Stack>
         {animal.editable && (
           <Group gap="xs">
             <Button variant="light" onClick={() => setEditing(true)} size="md">
-              Edit
+              {t('page.collection.animal.edit')}
             </Button>
             <DeleteAnimal
               animalId={animal.id}
               label={animal.label}
               onDeleted={async () => {
-                notifications.show({ color: 'moss', message: `${animal.label} was deleted.` });
+                notifications.show({ color: 'moss', message: t('page.collection.animal.deleted', { label: animal.label }) });
                 await navigate(paths.collection.href());
               }}
             />
@@ -106,25 +115,23 @@ export function Component() {
             {animal.readiness && <ReadinessPanel readiness={animal.readiness} />}
             <LifeActions animal={animal} />
             <Stack gap={6}>
-              <Fact label="Enclosure">{animal.enclosure ?? '—'}</Fact>
-              <Fact label="Owner">{owner}</Fact>
-              <Fact label="Custody">
-                {CUSTODY_LABELS[animal.custody]}
-                {animal.custodyParty ? ` · ${animal.custody === 'loan-out' ? 'held by' : 'from'} ${animal.custodyParty}` : ''}
-                {animal.dueBackOn ? ` · due back ${formatDate(animal.dueBackOn)}` : ''}
+              <Fact label={t('page.collection.animal.enclosure')}>{animal.enclosure ?? '—'}</Fact>
+              <Fact label={t('page.collection.animal.owner')}>{owner}</Fact>
+              <Fact label={t('page.collection.animal.custody')}>
+                {[custody, animal.dueBackOn && t('page.collection.animal.dueBack', { date: animal.dueBackOn })].filter(Boolean).join(' · ')}
               </Fact>
-              <Fact label="Acquired">
+              <Fact label={t('page.collection.animal.acquired')}>
                 {[
                   animal.acquiredOn && formatDate(animal.acquiredOn),
-                  animal.acquiredFrom && `from ${animal.acquiredFrom}`,
+                  animal.acquiredFrom && t('page.collection.animal.acquiredFrom', { from: animal.acquiredFrom }),
                   animal.pricePaidMinor != null && animal.priceCurrency && formatMoney(animal.pricePaidMinor, animal.priceCurrency),
                 ]
                   .filter(Boolean)
                   .join(' · ') || '—'}
               </Fact>
-              {animal.maturedOn && !animal.maleClock && <Fact label="Matured">{formatDate(animal.maturedOn)}</Fact>}
-              {animal.notes && <Fact label="Notes">{animal.notes}</Fact>}
-              {!animal.editable && <Fact label="Recorded by">{animal.recordedBy.name}</Fact>}
+              {animal.maturedOn && !animal.maleClock && <Fact label={t('page.collection.animal.matured')}>{formatDate(animal.maturedOn)}</Fact>}
+              {animal.notes && <Fact label={t('page.collection.animal.notes')}>{animal.notes}</Fact>}
+              {!animal.editable && <Fact label={t('page.collection.animal.recordedBy')}>{animal.recordedBy.name}</Fact>}
             </Stack>
           </Stack>
         </Grid.Col>
@@ -143,7 +150,13 @@ export function Component() {
         </Grid>
       )}
       <PhotoPanel animalId={animal.id} photos={animal.photos} editable={animal.editable} label={animal.label} />
-      <Drawer opened={editing} onClose={() => setEditing(false)} title={`Edit ${animal.label}`} position="right" size={phone ? '100%' : 'lg'}>
+      <Drawer
+        opened={editing}
+        onClose={() => setEditing(false)}
+        title={t('page.collection.animal.editTitle', { label: animal.label })}
+        position="right"
+        size={phone ? '100%' : 'lg'}
+      >
         {editing && (
           <AnimalForm
             animal={animal}
@@ -151,7 +164,7 @@ export function Component() {
             onCancel={() => setEditing(false)}
             onSaved={() => {
               setEditing(false);
-              notifications.show({ color: 'moss', message: 'Changes saved.' });
+              notifications.show({ color: 'moss', message: t('page.collection.animal.saved') });
             }}
           />
         )}

@@ -17,6 +17,8 @@ import { PAGE_SIZES, filtersFromParams, hasFilters, filtersToParams, type Collec
 import { speciesQueries, useSpecies } from '@/features/species/api/species';
 import { SpeciesPicker } from '@/features/species/components/species-picker';
 import { preloadPanels } from '../preload';
+import { Trans } from 'react-i18next';
+import { useWords } from '@/lib/i18n';
 
 /** The whole catalogue is small (tens of species): one request gives every former name. */
 const ALL_SPECIES = { limit: 200 } as const;
@@ -35,7 +37,13 @@ export function shouldRevalidate({ currentUrl, nextUrl, defaultShouldRevalidate 
   return currentUrl.pathname === nextUrl.pathname ? false : defaultShouldRevalidate;
 }
 
+/** The page's description, one catalogue sentence whose word "catalogue" opens the species pages. */
+export function CollectionDescription() {
+  return <Trans i18nKey="page.collection.description" components={{ species: <Anchor component={Link} to={paths.species.href()} inherit /> }} />;
+}
+
 export function Component() {
+  const t = useWords();
   const [params, setParams] = useSearchParams();
   const filters = filtersFromParams(params);
   const view = params.get('view') === 'males' ? 'males' : 'all';
@@ -68,20 +76,12 @@ export function Component() {
   return (
     <Stack>
       <PageHeader
-        title="Collection"
-        description={
-          <>
-            Your animals, their molts and photos. Species names follow the{' '}
-            <Anchor component={Link} to={paths.species.href()} inherit>
-              catalogue
-            </Anchor>
-            .
-          </>
-        }
+        title={t('page.collection.title')}
+        description={<CollectionDescription />}
         actions={
           <Group gap="xs" align="flex-start">
             <Button onClick={() => setAdding(true)} size="md">
-              Add animal
+              {t('page.collection.addAnimal')}
             </Button>
             <CsvTools />
           </Group>
@@ -90,10 +90,10 @@ export function Component() {
       <Tabs value={view} onChange={setView} keepMounted={false}>
         <Tabs.List>
           <Tabs.Tab value="all" style={{ minHeight: 44 }}>
-            All animals
+            {t('page.collection.tabAll')}
           </Tabs.Tab>
           <Tabs.Tab value="males" style={{ minHeight: 44 }}>
-            Mature males{males.data?.length ? ` (${males.data.length})` : ''}
+            {males.data?.length ? t('page.collection.tabMalesCount', { count: males.data.length }) : t('page.collection.tabMales')}
           </Tabs.Tab>
         </Tabs.List>
         <Tabs.Panel value="all" pt="md">
@@ -104,7 +104,7 @@ export function Component() {
               speciesFilter={
                 <SpeciesPicker
                   key={`${filters.speciesId ?? 'none'}-${chosenSpecies.data ? 'named' : 'unnamed'}`}
-                  label="Species"
+                  label={t('page.species.picker.label')}
                   size="md"
                   defaultValue={filters.speciesId ?? null}
                   defaultName={chosenSpecies.data?.scientificName ?? null}
@@ -128,12 +128,14 @@ export function Component() {
             )}
             <Group justify="space-between" wrap="wrap">
               <Text size="sm" c="dimmed" aria-live="polite">
-                {total === 0 ? 'No animals' : `${filters.offset + 1}–${Math.min(filters.offset + filters.limit, total)} of ${total} animals`}
+                {total === 0
+                  ? t('page.collection.noAnimals')
+                  : t('page.collection.range', { from: filters.offset + 1, to: Math.min(filters.offset + filters.limit, total), total })}
               </Text>
               <Group gap="sm">
                 <Select
-                  aria-label="Animals per page"
-                  data={PAGE_SIZES.map((n) => ({ value: String(n), label: `${n} a page` }))}
+                  aria-label={t('page.collection.perPage')}
+                  data={PAGE_SIZES.map((n) => ({ value: String(n), label: t('page.collection.perPageOption', { count: n }) }))}
                   value={String(filters.limit)}
                   onChange={(v) => update({ limit: Number(v ?? 25), offset: 0 })}
                   allowDeselect={false}
@@ -149,19 +151,19 @@ export function Component() {
         </Tabs.Panel>
         <Tabs.Panel value="males" pt="md">
           <Text size="sm" c="dimmed" mb="sm">
-            Mature males with a maturing date, the one whose time runs out first at the top.
+            {t('page.collection.malesIntro')}
           </Text>
           <MatureMales hrefOf={hrefOf} />
         </Tabs.Panel>
       </Tabs>
-      <Drawer opened={adding} onClose={() => setAdding(false)} title="Add an animal" position="right" size={phone ? '100%' : 'lg'}>
+      <Drawer opened={adding} onClose={() => setAdding(false)} title={t('page.collection.addAnimalTitle')} position="right" size={phone ? '100%' : 'lg'}>
         {adding && (
           <AnimalForm
             renderSpeciesPicker={(p) => <SpeciesPicker {...p} />}
             onCancel={() => setAdding(false)}
             onSaved={(a) => {
               setAdding(false);
-              notifications.show({ color: 'moss', message: `${a.label} was added to your collection.` });
+              notifications.show({ color: 'moss', message: t('page.collection.added', { label: a.label }) });
               navigate(paths.animal.href(a.id));
             }}
           />

@@ -1,5 +1,7 @@
 import { ErrorPage } from '@/components/ui/error-page';
+import { useWords } from '@/lib/i18n';
 
 export function Component() {
-  return <ErrorPage status={404} title="Nothing here" message="This page does not exist, or it belongs to a project you are not part of." />;
+  const t = useWords();
+  return <ErrorPage status={404} title={t('page.shell.errorPage.nothingHere')} message={t('page.shell.errorPage.noSuchPage')} />;
 }

@@ -60,6 +60,17 @@ export const shellEn = {
     tooLong_other: 'This is {{count}} characters too long: keep it to {{max}}.',
     counter: '{{length}} of {{max}} characters',
   },
+  /** The pages shown when a route cannot be shown (not-found.tsx, route-error.tsx). */
+  errorPage: {
+    nothingHere: 'Nothing here',
+    noSuchPage: 'This page does not exist, or it belongs to a project you are not part of.',
+    notFound: 'Not found',
+    noSuchRecord: 'This record does not exist, or it is not yours to see.',
+    notAllowed: 'Not allowed',
+    roleForbids: 'Your role in this project does not allow this.',
+    failed: 'This page could not be shown',
+    failedLoading: 'Something went wrong while loading this page.',
+  },
 } as const;
 
 export const shellDe: Widen<typeof shellEn> = {
@@ -120,5 +131,15 @@ export const shellDe: Widen<typeof shellEn> = {
     tooLong_one: 'Das ist {{count}} Zeichen zu lang: Bleib bei höchstens {{max}}.',
     tooLong_other: 'Das ist {{count}} Zeichen zu lang: Bleib bei höchstens {{max}}.',
     counter: '{{length}} von {{max}} Zeichen',
+  },
+  errorPage: {
+    nothingHere: 'Hier ist nichts',
+    noSuchPage: 'Diese Seite gibt es nicht, oder sie gehört zu einem Projekt, an dem du nicht beteiligt bist.',
+    notFound: 'Nicht gefunden',
+    noSuchRecord: 'Diesen Eintrag gibt es nicht, oder er ist nicht für dich sichtbar.',
+    notAllowed: 'Nicht erlaubt',
+    roleForbids: 'Deine Rolle in diesem Projekt erlaubt das nicht.',
+    failed: 'Diese Seite konnte nicht angezeigt werden',
+    failedLoading: 'Beim Laden dieser Seite ist etwas schiefgegangen.',
   },
 };

@@ -2,6 +2,11 @@ import type { Widen } from '../catalogue-shape.js';
 
 /** Page text: species pages (client/src/features/species). English first; German must fill the same keys. */
 export const speciesEn = {
+  /** The species route (client/src/app/routes/species.tsx). */
+  page: {
+    title: 'Species',
+    description: 'The catalogue behind every animal and project: names old and new, safety flags, and the breeding values in force with where each comes from.',
+  },
   group: {
     'nw-terrestrial': 'New World, ground-dwelling',
     'nw-arboreal': 'New World, tree-dwelling',
@@ -63,6 +68,11 @@ export const speciesEn = {
 } as const;
 
 export const speciesDe: Widen<typeof speciesEn> = {
+  page: {
+    title: 'Arten',
+    description:
+      'Der Katalog hinter jedem Tier und jedem Projekt: alte und neue Namen, Sicherheitshinweise und die geltenden Zuchtwerte mit ihrer jeweiligen Herkunft.',
+  },
   group: {
     'nw-terrestrial': 'Neuwelt, bodenbewohnend',
     'nw-arboreal': 'Neuwelt, baumbewohnend',

@@ -10,6 +10,7 @@ import { checkDate, deviceToday } from '@/components/fields/typed-date';
 import { checkNumber } from '@/components/fields/typed-number';
 import { FormActions } from '@/components/ui/form-actions';
 import { applyServerErrors } from '@/lib/form-errors';
+import { useWords } from '@/lib/i18n';
 import { useCreateAnimal, useUpdateAnimal } from '../api/animals';
 import { animalFormValues, toAnimalRequest, type AnimalFormValues } from '../utils/animal-form-values';
 import { CUSTODY_LABELS, MATURITY_LABELS, OWNER_LABELS, SEX_LABELS, STATUS_LABELS } from '../utils/animal-view';
@@ -22,9 +23,6 @@ export interface SpeciesFieldProps {
   error?: ReactNode;
   withAsterisk?: boolean;
 }
-
-const MATURE_MALE_NEEDS_DATE = 'A mature male needs the date of his maturing molt: his male clock counts from it.';
-const NOT_IN_FUTURE = 'This has happened, so it cannot be after today.';
 
 /** Server field names that differ from the form's. */
 const SERVER_FIELDS: Record<string, keyof AnimalFormValues> = { pricePaidMinor: 'price' };
@@ -40,6 +38,8 @@ interface AnimalFormProps {
 type Shape = Pick<AnimalFormValues, 'sex' | 'maturity' | 'ownerKind' | 'custody' | 'status'>;
 
 export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: AnimalFormProps) {
+  const t = useWords();
+  const notInFuture = t('page.shell.fields.notAfterToday');
   const create = useCreateAnimal();
   const update = useUpdateAnimal(animal?.id ?? '');
   const save = animal ? update : create;
@@ -65,38 +65,40 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
           : { sex: v.sex, maturity: v.maturity, ownerKind: v.ownerKind, custody: v.custody, status: v.status },
       ),
     validate: {
-      speciesId: (v) => (v ? null : 'Choose a species from the catalogue.'),
-      label: textRule({ required: 'Give the animal a label (a name or a code on its enclosure).', maxLength: TEXT_LIMITS.animalLabel }),
+      speciesId: (v) => (v ? null : t('page.collection.form.chooseSpecies')),
+      label: textRule({ required: t('page.collection.form.labelMissing'), maxLength: TEXT_LIMITS.animalLabel }),
       enclosure: textRule({ maxLength: TEXT_LIMITS.enclosure }),
       maturedOn: (v, all) =>
         checkDate(v, {
-          required: all.sex === 'male' && all.maturity === 'mature' ? MATURE_MALE_NEEDS_DATE : undefined,
+          required: all.sex === 'male' && all.maturity === 'mature' ? t('page.collection.form.matureMaleNeedsDate') : undefined,
           latest: today,
-          latestMessage: NOT_IN_FUTURE,
+          latestMessage: notInFuture,
         }),
-      acquiredOn: (v) => checkDate(v, { latest: today, latestMessage: NOT_IN_FUTURE }),
+      acquiredOn: (v) => checkDate(v, { latest: today, latestMessage: notInFuture }),
       acquiredFrom: textRule({ maxLength: TEXT_LIMITS.acquiredFrom }),
       price: (v, all) =>
         checkNumber(v, {
           min: 0,
           max: 1_000_000,
           decimals: minorDigits(all.priceCurrency.trim().toUpperCase() || 'EUR'),
-          rangeMessage: 'A price is from 0 to 1,000,000.',
+          rangeMessage: t('page.collection.form.priceRange'),
         }),
-      priceCurrency: (v, all) => (all.price.trim() !== '' && !v.trim() ? 'Say which currency the price is in (e.g. EUR).' : null),
+      priceCurrency: (v, all) => (all.price.trim() !== '' && !v.trim() ? t('page.collection.form.currencyMissing') : null),
       custodyParty: textRule({ maxLength: TEXT_LIMITS.personName }),
       dueBackOn: (v) => checkDate(v),
       notes: textRule({ maxLength: TEXT_LIMITS.animalNotes }),
       premoltNote: textRule({ maxLength: TEXT_LIMITS.premoltNote }),
       ownerEmail: (v, all) =>
-        all.ownerKind === 'keeper' && !v.trim() && animal?.owner.kind !== 'keeper' ? 'Give the e-mail of the keeper who owns the animal.' : null,
-      ownerName: (v, all) => (all.ownerKind === 'party' && !v.trim() ? 'Give the name of the owner.' : null),
+        all.ownerKind === 'keeper' && !v.trim() && animal?.owner.kind !== 'keeper' ? t('page.collection.form.keeperEmailMissing') : null,
+      ownerName: (v, all) => (all.ownerKind === 'party' && !v.trim() ? t('page.collection.form.ownerNameMissing') : null),
       statusOn: (v, all) =>
         checkDate(v, {
           required:
-            all.status === 'sold' || all.status === 'deceased' ? `Give the date the animal was ${all.status === 'sold' ? 'sold' : 'found dead'}.` : undefined,
+            all.status === 'sold' || all.status === 'deceased'
+              ? t(all.status === 'sold' ? 'page.collection.form.soldOnMissing' : 'page.collection.form.diedOnMissing')
+              : undefined,
           latest: today,
-          latestMessage: NOT_IN_FUTURE,
+          latestMessage: notInFuture,
         }),
     },
   });
@@ -117,26 +119,31 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
   const loan = shape.custody !== 'with-owner';
 
   return (
-    <form onSubmit={submit} noValidate aria-label={animal ? 'Edit animal' : 'Add animal'}>
+    <form onSubmit={submit} noValidate aria-label={t(animal ? 'page.collection.form.editName' : 'page.collection.form.addName')}>
       <Stack>
         <Fragment key={form.key('speciesId')}>
           {renderSpeciesPicker({ ...form.getInputProps('speciesId'), defaultName: animal?.species.scientificName ?? null, withAsterisk: true })}
         </Fragment>
         <SimpleGrid cols={{ base: 1, sm: 2 }}>
           <TextField
-            label="Label"
-            description="A name or the code on its enclosure"
+            label={t('page.collection.form.label')}
+            description={t('page.collection.form.labelHint')}
             withAsterisk
             maxLength={TEXT_LIMITS.animalLabel}
             key={form.key('label')}
             {...form.getInputProps('label')}
           />
-          <TextField label="Enclosure" maxLength={TEXT_LIMITS.enclosure} key={form.key('enclosure')} {...form.getInputProps('enclosure')} />
+          <TextField
+            label={t('page.collection.form.enclosure')}
+            maxLength={TEXT_LIMITS.enclosure}
+            key={form.key('enclosure')}
+            {...form.getInputProps('enclosure')}
+          />
         </SimpleGrid>
         <SimpleGrid cols={{ base: 1, sm: 2 }}>
           <Stack gap={4}>
             <Text size="sm" fw={500} id="animal-sex-label">
-              Sex
+              {t('page.collection.form.sex')}
             </Text>
             <SegmentedControl
               aria-labelledby="animal-sex-label"
@@ -148,7 +155,7 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
           </Stack>
           <Stack gap={4}>
             <Text size="sm" fw={500} id="animal-maturity-label">
-              Maturity
+              {t('page.collection.form.maturity')}
             </Text>
             <SegmentedControl
               aria-labelledby="animal-maturity-label"
@@ -161,8 +168,8 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
         </SimpleGrid>
         {shape.maturity === 'mature' && (
           <DateField
-            label="Maturing molt"
-            description={matureMale ? 'His male clock counts from this date.' : 'The molt at which she matured, if known.'}
+            label={t('page.collection.form.maturingMolt')}
+            description={t(matureMale ? 'page.collection.form.maturingMoltMale' : 'page.collection.form.maturingMoltFemale')}
             withAsterisk={matureMale}
 
             key={form.key('maturedOn')}
@@ -172,32 +179,43 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
         {shape.sex === 'female' && (
           <TextAreaField
             maxLength={TEXT_LIMITS.premoltNote}
-            label="Premolt note"
-            description="Signs she may molt soon (off food, dark abdomen): a molt after pairing loses the pairing."
+            label={t('page.collection.form.premoltNote')}
+            description={t('page.collection.form.premoltNoteHint')}
             rows={2}
             key={form.key('premoltNote')}
             {...form.getInputProps('premoltNote')}
           />
         )}
 
-        <Fieldset legend="Acquisition">
+        <Fieldset legend={t('page.collection.form.acquisition')}>
           <SimpleGrid cols={{ base: 1, sm: 2 }}>
             <DateField
-              label="Acquired on"
+              label={t('page.collection.form.acquiredOn')}
 
               key={form.key('acquiredOn')}
               {...form.getInputProps('acquiredOn')}
             />
-            <TextField label="Acquired from" maxLength={TEXT_LIMITS.acquiredFrom} key={form.key('acquiredFrom')} {...form.getInputProps('acquiredFrom')} />
-            <NumberField label="Price paid" key={form.key('price')} {...form.getInputProps('price')} />
-            <TextField label="Currency" placeholder="EUR" maxLength={3} key={form.key('priceCurrency')} {...form.getInputProps('priceCurrency')} />
+            <TextField
+              label={t('page.collection.form.acquiredFrom')}
+              maxLength={TEXT_LIMITS.acquiredFrom}
+              key={form.key('acquiredFrom')}
+              {...form.getInputProps('acquiredFrom')}
+            />
+            <NumberField label={t('page.collection.form.pricePaid')} key={form.key('price')} {...form.getInputProps('price')} />
+            <TextField
+              label={t('page.collection.form.currency')}
+              placeholder="EUR"
+              maxLength={3}
+              key={form.key('priceCurrency')}
+              {...form.getInputProps('priceCurrency')}
+            />
           </SimpleGrid>
         </Fieldset>
 
-        <Fieldset legend="Owner and custody">
+        <Fieldset legend={t('page.collection.form.ownerAndCustody')}>
           <Stack>
             <Select
-              label="Owner"
+              label={t('page.collection.form.owner')}
               allowDeselect={false}
               data={OWNER_KINDS.map((k) => ({ value: k, label: OWNER_LABELS[k] }))}
               key={form.key('ownerKind')}
@@ -205,9 +223,13 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
             />
             {shape.ownerKind === 'keeper' && (
               <TextField
-                label="Owner's e-mail"
+                label={t('page.collection.form.ownerEmail')}
                 maxLength={TEXT_LIMITS.email}
-                description={animal?.owner.kind === 'keeper' ? `Now ${animal.owner.name}; leave empty to keep` : 'The e-mail they sign in to Broodsilk with'}
+                description={
+                  animal?.owner.kind === 'keeper'
+                    ? t('page.collection.form.ownerEmailNow', { name: animal.owner.name })
+                    : t('page.collection.form.ownerEmailHint')
+                }
                 type="email"
                 withAsterisk={animal?.owner.kind !== 'keeper'}
                 key={form.key('ownerEmail')}
@@ -217,14 +239,14 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
             {shape.ownerKind === 'party' && (
               <SimpleGrid cols={{ base: 1, sm: 2 }}>
                 <TextField
-                  label="Owner's name"
+                  label={t('page.collection.form.ownerName')}
                   withAsterisk
                   maxLength={TEXT_LIMITS.personName}
                   key={form.key('ownerName')}
                   {...form.getInputProps('ownerName')}
                 />
                 <TextField
-                  label="Owner's e-mail"
+                  label={t('page.collection.form.ownerEmail')}
                   type="email"
                   maxLength={TEXT_LIMITS.email}
                   key={form.key('ownerEmail')}
@@ -233,7 +255,7 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
               </SimpleGrid>
             )}
             <Select
-              label="Custody"
+              label={t('page.collection.form.custody')}
               allowDeselect={false}
               data={CUSTODIES.map((c) => ({ value: c, label: CUSTODY_LABELS[c] }))}
               key={form.key('custody')}
@@ -243,14 +265,14 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
               <SimpleGrid cols={{ base: 1, sm: 2 }}>
                 <TextField
                   maxLength={TEXT_LIMITS.personName}
-                  label={shape.custody === 'loan-in' ? 'Lent to me by' : 'Held by'}
-                  description={shape.custody === 'loan-in' ? 'Leave empty when it is the owner' : undefined}
+                  label={t(shape.custody === 'loan-in' ? 'page.collection.form.lentToMeBy' : 'page.collection.form.heldBy')}
+                  description={shape.custody === 'loan-in' ? t('page.collection.form.lentToMeByHint') : undefined}
                   withAsterisk={shape.custody === 'loan-out'}
                   key={form.key('custodyParty')}
                   {...form.getInputProps('custodyParty')}
                 />
                 <DateField
-                  label="Due back on"
+                  label={t('page.collection.form.dueBackOn')}
 
                   key={form.key('dueBackOn')}
                   {...form.getInputProps('dueBackOn')}
@@ -262,22 +284,27 @@ export function AnimalForm({ animal, renderSpeciesPicker, onSaved, onCancel }: A
 
         <SimpleGrid cols={{ base: 1, sm: 2 }}>
           <Select
-            label="Status"
+            label={t('page.collection.form.status')}
             allowDeselect={false}
             data={ANIMAL_STATUSES.map((s) => ({ value: s, label: STATUS_LABELS[s] }))}
             key={form.key('status')}
             {...form.getInputProps('status')}
           />
           <DateField
-            label="Status since"
+            label={t('page.collection.form.statusSince')}
             withAsterisk={shape.status === 'sold' || shape.status === 'deceased'}
 
             key={form.key('statusOn')}
             {...form.getInputProps('statusOn')}
           />
         </SimpleGrid>
-        <TextAreaField label="Notes" maxLength={TEXT_LIMITS.animalNotes} key={form.key('notes')} {...form.getInputProps('notes')} />
-        <FormActions message={message} loading={save.isPending} submitLabel={animal ? 'Save changes' : 'Add to collection'} onCancel={onCancel} />
+        <TextAreaField label={t('page.collection.form.notes')} maxLength={TEXT_LIMITS.animalNotes} key={form.key('notes')} {...form.getInputProps('notes')} />
+        <FormActions
+          message={message}
+          loading={save.isPending}
+          submitLabel={t(animal ? 'page.collection.form.saveChanges' : 'page.collection.form.addToCollection')}
+          onCancel={onCancel}
+        />
       </Stack>
     </form>
   );

@@ -1,5 +1,6 @@
 import { screen } from '@testing-library/react';
-import { describe, expect, it } from 'vitest';
+import { afterEach, describe, expect, it } from 'vitest';
+import { i18next } from '@/lib/i18n';
 import { renderWithProviders } from '@/testing/render';
 import { AnimalTable } from './animal-table';
 import { animalSummary } from '@/testing/animal-summary';
@@ -24,5 +25,21 @@ describe('AnimalTable with an animal held by another keeper', () => {
     const male = animalSummary({ id: 'm1', label: 'MO-030', sex: 'male', custody: 'loan-in', heldBy: { id: 'u1', name: 'Mira Okonkwo' } });
     renderWithProviders(<AnimalTable {...props} items={[male]} filtered={false} />);
     expect(screen.getByTestId('held-by')).toHaveTextContent('On loan to Mira Okonkworead-only');
+  });
+});
+
+describe('AnimalTable in German', () => {
+  afterEach(async () => {
+    await i18next.changeLanguage('en');
+  });
+
+  it('names its columns, sort buttons and loan in German', async () => {
+    await i18next.changeLanguage('de');
+    const male = animalSummary({ id: 'm1', label: 'MO-030', sex: 'male', custody: 'loan-in', heldBy: { id: 'u1', name: 'Mira Okonkwo' } });
+    renderWithProviders(<AnimalTable {...props} items={[male]} filtered={false} />);
+    expect(screen.getByRole('table', { name: 'Tiere' })).toBeInTheDocument();
+    expect(screen.getByRole('button', { name: 'Nach Bezeichnung sortieren' })).toBeInTheDocument();
+    expect(screen.getByRole('columnheader', { name: 'Letzte Häutung' })).toBeInTheDocument();
+    expect(screen.getByTestId('held-by')).toHaveTextContent('Verliehen an Mira Okonkwoschreibgeschützt');
   });
 });

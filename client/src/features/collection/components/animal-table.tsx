@@ -2,6 +2,7 @@ import { Anchor, Badge, Group, Table, Text, Tooltip, UnstyledButton } from '@man
 import { Link } from 'react-router';
 import type { AnimalSort, AnimalSummary, MaleClock } from '@broodsilk/shared';
 import { formatDate } from '@/lib/dates';
+import { useWords } from '@/lib/i18n';
 import { CUSTODY_LABELS, MATURITY_LABELS, SEX_LABELS, SEX_SIGNS, STATUS_LABELS } from '../utils/animal-view';
 import { ClockBadge } from './clock-badge';
 
@@ -19,17 +20,22 @@ interface AnimalTableProps {
   formerNames?: ReadonlyMap<string, string[]>;
 }
 
+/** Signs beside a sorted column (hidden from screen readers, which hear aria-sort). */
+const ORDER_SIGNS = { asc: '▲', desc: '▼', none: '↕' } as const;
+
 function SortHeader({ label, column, sort, order, onSort }: { label: string; column: AnimalSort } & Pick<AnimalTableProps, 'sort' | 'order' | 'onSort'>) {
+  const t = useWords();
   const active = sort === column;
   const next = active && order === 'asc' ? 'desc' : 'asc';
+  const sign = ORDER_SIGNS[active ? order : 'none'];
   return (
     <Table.Th aria-sort={active ? (order === 'asc' ? 'ascending' : 'descending') : 'none'}>
       <UnstyledButton
         onClick={() => onSort(column, next)}
         style={{ minHeight: 44, fontWeight: 700, fontSize: 'var(--mantine-font-size-sm)' }}
-        aria-label={`Sort by ${label.toLowerCase()}`}
+        aria-label={t(`page.collection.table.sortBy.${column}`)}
       >
-        {label} <span aria-hidden>{active ? (order === 'asc' ? '▲' : '▼') : '↕'}</span>
+        {label} <span aria-hidden>{sign}</span>
       </UnstyledButton>
     </Table.Th>
   );
@@ -37,20 +43,21 @@ function SortHeader({ label, column, sort, order, onSort }: { label: string; col
 
 /** The collection as a dense table; on a phone it scrolls sideways rather than squeezing. */
 export function AnimalTable({ items, sort, order, onSort, hrefOf, clocks, formerNames, filtered }: AnimalTableProps) {
+  const t = useWords();
   const head = { sort, order, onSort };
   return (
     <Table.ScrollContainer minWidth={860}>
-      <Table striped highlightOnHover verticalSpacing={4} aria-label="Animals">
+      <Table striped highlightOnHover verticalSpacing={4} aria-label={t('page.collection.table.name')}>
         <Table.Thead>
           <Table.Tr>
-            <SortHeader label="Label" column="label" {...head} />
-            <SortHeader label="Species" column="species" {...head} />
-            <SortHeader label="Sex" column="sex" {...head} />
-            <SortHeader label="Maturity" column="maturedOn" {...head} />
-            <SortHeader label="Status" column="status" {...head} />
-            <Table.Th>Custody</Table.Th>
-            <Table.Th>Enclosure</Table.Th>
-            <Table.Th>Last molt</Table.Th>
+            <SortHeader label={t('page.collection.table.label')} column="label" {...head} />
+            <SortHeader label={t('page.collection.table.species')} column="species" {...head} />
+            <SortHeader label={t('page.collection.table.sex')} column="sex" {...head} />
+            <SortHeader label={t('page.collection.table.maturity')} column="maturedOn" {...head} />
+            <SortHeader label={t('page.collection.table.status')} column="status" {...head} />
+            <Table.Th>{t('page.collection.table.custody')}</Table.Th>
+            <Table.Th>{t('page.collection.table.enclosure')}</Table.Th>
+            <Table.Th>{t('page.collection.table.lastMolt')}</Table.Th>
           </Table.Tr>
         </Table.Thead>
         <Table.Tbody>
@@ -66,7 +73,7 @@ export function AnimalTable({ items, sort, order, onSort, hrefOf, clocks, former
                 </Table.Td>
                 <Table.Td>
                   {former.length > 0 ? (
-                    <Tooltip label={`formerly ${former.join(', ')}`} events={{ hover: true, focus: true, touch: true }}>
+                    <Tooltip label={t('page.collection.table.formerly', { names: former.join(', ') })} events={{ hover: true, focus: true, touch: true }}>
                       <Text size="sm" fs="italic" tabIndex={0} style={{ textDecoration: 'underline dotted' }}>
                         {a.species.scientificName}
                       </Text>
@@ -94,8 +101,9 @@ export function AnimalTable({ items, sort, order, onSort, hrefOf, clocks, former
                 </Table.Td>
                 <Table.Td>
                   <Text size="sm" className={a.status === 'deceased' ? undefined : a.status === 'active' ? undefined : 'tone-due'}>
-                    {STATUS_LABELS[a.status]}
-                    {a.statusOn && a.status !== 'active' ? ` · ${formatDate(a.statusOn)}` : ''}
+                    {a.statusOn && a.status !== 'active'
+                      ? t('page.collection.table.statusOn', { status: STATUS_LABELS[a.status], date: a.statusOn })
+                      : STATUS_LABELS[a.status]}
                   </Text>
                 </Table.Td>
                 <Table.Td>
@@ -103,10 +111,10 @@ export function AnimalTable({ items, sort, order, onSort, hrefOf, clocks, former
                     // Hers, kept on another keeper's record: shown from her side, and only that keeper edits it.
                     <Group gap={4} wrap="nowrap" data-testid="held-by">
                       <Badge variant="outline" color="amber" size="sm" style={{ textTransform: 'none' }}>
-                        On loan to {a.heldBy.name}
+                        {t('page.collection.table.onLoanTo', { name: a.heldBy.name })}
                       </Badge>
                       <Text size="xs" c="dimmed">
-                        read-only
+                        {t('page.collection.table.readOnly')}
                       </Text>
                     </Group>
                   ) : a.custody === 'with-owner' ? (
@@ -120,7 +128,7 @@ export function AnimalTable({ items, sort, order, onSort, hrefOf, clocks, former
                       </Badge>
                       {(a.custodyParty || a.dueBackOn) && (
                         <Text size="xs" c="dimmed">
-                          {[a.custodyParty, a.dueBackOn ? `back ${formatDate(a.dueBackOn)}` : null].filter(Boolean).join(' · ')}
+                          {[a.custodyParty, a.dueBackOn ? t('page.collection.table.backOn', { date: a.dueBackOn }) : null].filter(Boolean).join(' · ')}
                         </Text>
                       )}
                     </Group>
@@ -139,7 +147,7 @@ export function AnimalTable({ items, sort, order, onSort, hrefOf, clocks, former
       </Table>
       {items.length === 0 && (
         <Group justify="center" p="lg">
-          <Text c="dimmed">{filtered ? 'No animals match these filters.' : 'Your collection is empty. Add your first animal to start.'}</Text>
+          <Text c="dimmed">{t(filtered ? 'page.collection.table.noMatch' : 'page.collection.table.empty')}</Text>
         </Group>
       )}
     </Table.ScrollContainer>

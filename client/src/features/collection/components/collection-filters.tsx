@@ -2,6 +2,7 @@ import { Box, Button, Group, Select, TextInput } from '@mantine/core';
 import { useDebouncedCallback } from '@mantine/hooks';
 import type { ReactNode } from 'react';
 import { ANIMAL_SEXES, ANIMAL_STATUSES, type AnimalSex, type AnimalStatus } from '@broodsilk/shared';
+import { useWords } from '@/lib/i18n';
 import { SEX_LABELS, STATUS_LABELS, hasFilters, type CollectionFilters as Filters } from '../utils/animal-view';
 
 interface CollectionFiltersProps {
@@ -13,13 +14,14 @@ interface CollectionFiltersProps {
 
 /** Text, species, sex and status filters; every change starts again at the first page. */
 export function CollectionFilters({ filters, onChange, speciesFilter }: CollectionFiltersProps) {
+  const t = useWords();
   const setText = useDebouncedCallback((q: string) => onChange({ q: q.trim() || undefined, offset: 0 }), 300);
   const any = hasFilters(filters);
   return (
     <Group align="flex-end" gap="sm" wrap="wrap">
       <TextInput
-        label="Search"
-        placeholder="Label, enclosure or species"
+        label={t('page.collection.filters.search')}
+        placeholder={t('page.collection.filters.searchPlaceholder')}
         defaultValue={filters.q ?? ''}
         key={`q-${filters.q ?? ''}`}
         onChange={(e) => setText(e.currentTarget.value)}
@@ -28,8 +30,8 @@ export function CollectionFilters({ filters, onChange, speciesFilter }: Collecti
       />
       <Box w={{ base: '100%', sm: 300 }}>{speciesFilter}</Box>
       <Select
-        label="Sex"
-        placeholder="Any"
+        label={t('page.collection.filters.sex')}
+        placeholder={t('page.collection.filters.any')}
         clearable
         data={ANIMAL_SEXES.map((s) => ({ value: s, label: SEX_LABELS[s] }))}
         value={filters.sex ?? null}
@@ -38,8 +40,8 @@ export function CollectionFilters({ filters, onChange, speciesFilter }: Collecti
         size="md"
       />
       <Select
-        label="Status"
-        placeholder="Any"
+        label={t('page.collection.filters.status')}
+        placeholder={t('page.collection.filters.any')}
         clearable
         data={ANIMAL_STATUSES.map((s) => ({ value: s, label: STATUS_LABELS[s] }))}
         value={filters.status ?? null}
@@ -49,7 +51,7 @@ export function CollectionFilters({ filters, onChange, speciesFilter }: Collecti
       />
       {any && (
         <Button variant="subtle" size="md" onClick={() => onChange({ q: undefined, sex: undefined, status: undefined, speciesId: undefined, offset: 0 })}>
-          Clear filters
+          {t('page.collection.filters.clear')}
         </Button>
       )}
     </Group>

@@ -1,18 +1,19 @@
 import { Stack, Text } from '@mantine/core';
-import { DateInput } from '@mantine/dates';
-import '@mantine/dates/styles.css';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
+import { DateField } from '@/components/fields/date-field';
+import { checkDate, readDate } from '@/components/fields/typed-date';
 import { dayjs } from '@/lib/dates';
 import { applyServerErrors } from '@/lib/form-errors';
+import { words } from '@/lib/i18n';
 import { ModalFormEnd } from './modal-form-end';
 import { useAnimalStep, type AnimalStep } from '../api/animal-season';
 
 export const localToday = () => dayjs().format('YYYY-MM-DD');
 
-/** A dated step may be today or earlier, never later (ISO dates compare as strings). */
+/** A dated step is typed as a date (ISO or the reader's own order) and may be today or earlier, never later. */
 export function pastDateError(v: string | null, today = localToday()): string | null {
-  return !v ? 'Give the date.' : v > today ? 'The date cannot be in the future.' : null;
+  return checkDate(v ?? '', { required: words('page.collection.step.dateMissing'), latest: today, latestMessage: words('page.collection.step.dateInFuture') });
 }
 
 interface DatedStepFormProps {
@@ -33,7 +34,7 @@ interface DatedStepFormProps {
 export function DatedStepForm({ animalId, step, dateLabel, submitLabel, explanation, onDone }: DatedStepFormProps) {
   const save = useAnimalStep(animalId, step);
   const [message, setMessage] = useState<string | null>(null);
-  const form = useForm<{ on: string | null }>({
+  const form = useForm<{ on: string }>({
     mode: 'uncontrolled',
     initialValues: { on: localToday() },
     validate: { on: (v) => pastDateError(v) },
@@ -43,12 +44,12 @@ export function DatedStepForm({ animalId, step, dateLabel, submitLabel, explanat
       aria-label={submitLabel}
       onSubmit={form.onSubmit((v) => {
         setMessage(null);
-        save.mutate({ on: v.on! }, { onSuccess: onDone, onError: (e) => setMessage(applyServerErrors(form, e)) });
+        save.mutate({ on: readDate(v.on)! }, { onSuccess: onDone, onError: (e) => setMessage(applyServerErrors(form, e)) });
       })}
     >
       <Stack>
         {explanation && <Text size="sm">{explanation}</Text>}
-        <DateInput label={dateLabel} withAsterisk valueFormat="YYYY-MM-DD" placeholder="YYYY-MM-DD" key={form.key('on')} {...form.getInputProps('on')} />
+        <DateField label={dateLabel} withAsterisk key={form.key('on')} {...form.getInputProps('on')} />
         <ModalFormEnd message={message} loading={save.isPending} submitLabel={submitLabel} onCancel={onDone} />
       </Stack>
     </form>

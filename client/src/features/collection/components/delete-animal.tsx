@@ -1,17 +1,19 @@
 import { Alert, Button, Group, Modal, Stack, Text } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
 import { useQueryClient } from '@tanstack/react-query';
+import { useWords } from '@/lib/i18n';
 import { forgetAnimal, useDeleteAnimal } from '../api/animals';
 
 /** Delete is for a record made by mistake; a sold or dead animal is marked so instead. */
 export function DeleteAnimal({ animalId, label, onDeleted }: { animalId: string; label: string; onDeleted: () => void | Promise<void> }) {
+  const t = useWords();
   const [opened, { open, close }] = useDisclosure();
   const remove = useDeleteAnimal(animalId);
   const qc = useQueryClient();
   return (
     <>
       <Button variant="subtle" color="clay" onClick={open} size="md">
-        Delete
+        {t('page.collection.remove.button')}
       </Button>
       <Modal
         opened={opened}
@@ -19,14 +21,11 @@ export function DeleteAnimal({ animalId, label, onDeleted }: { animalId: string;
           remove.reset();
           close();
         }}
-        title={`Delete ${label}?`}
+        title={t('page.collection.remove.title', { label })}
         centered
       >
         <Stack>
-          <Text size="sm">
-            Deleting removes the record, its molts and its photos for good. It is meant for a record made by mistake. If {label} was sold, lent out or has died,
-            edit the status instead, so the history stays in your collection and in any project it was part of.
-          </Text>
+          <Text size="sm">{t('page.collection.remove.explanation', { label })}</Text>
           {remove.error && (
             <Alert color="clay" variant="light" role="alert">
               <Text size="sm" className="tone-failed">
@@ -36,7 +35,7 @@ export function DeleteAnimal({ animalId, label, onDeleted }: { animalId: string;
           )}
           <Group justify="flex-end">
             <Button variant="default" onClick={close} size="md">
-              Keep it
+              {t('page.collection.remove.keep')}
             </Button>
             <Button
               color="clay"
@@ -51,7 +50,7 @@ export function DeleteAnimal({ animalId, label, onDeleted }: { animalId: string;
               }
               size="md"
             >
-              Delete for good
+              {t('page.collection.remove.confirm')}
             </Button>
           </Group>
         </Stack>

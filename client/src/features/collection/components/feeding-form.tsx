@@ -1,16 +1,19 @@
-import { SegmentedControl, Stack, TextInput, Textarea } from '@mantine/core';
-import { DateInput } from '@mantine/dates';
-import '@mantine/dates/styles.css';
+import { SegmentedControl, Stack } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import type { FeedingResponse } from '@broodsilk/shared';
+import { TEXT_LIMITS, type FeedingResponse } from '@broodsilk/shared';
+import { DateField } from '@/components/fields/date-field';
+import { readDate } from '@/components/fields/typed-date';
+import { TextAreaField, TextField } from '@/components/fields/text-field';
+import { textRule } from '@/components/fields/text-rule';
 import { applyServerErrors } from '@/lib/form-errors';
+import { useWords } from '@/lib/i18n';
 import { ModalFormEnd } from './modal-form-end';
 import { useAddFeeding } from '../api/animal-season';
 import { localToday, pastDateError } from './dated-step-form';
 
 interface FeedingFormValues {
-  fedOn: string | null;
+  fedOn: string;
   prey: string;
   taken: 'taken' | 'refused';
   note: string;
@@ -19,6 +22,7 @@ interface FeedingFormValues {
 
 /** A new feeding, or (with `correcting`) the corrected version of an entry, which strikes it. */
 export function FeedingForm({ animalId, correcting, onDone }: { animalId: string; correcting?: FeedingResponse; onDone: () => void }) {
+  const t = useWords();
   const add = useAddFeeding(animalId);
   const [message, setMessage] = useState<string | null>(null);
   const form = useForm<FeedingFormValues>({
@@ -32,18 +36,19 @@ export function FeedingForm({ animalId, correcting, onDone }: { animalId: string
     },
     validate: {
       fedOn: (v) => pastDateError(v),
-      prey: (v) => (v.trim() ? null : 'Say what prey was offered, e.g. "2 adult crickets".'),
-      reason: (v) => (correcting && !v.trim() ? 'Say briefly why the entry is corrected.' : null),
+      prey: textRule({ required: t('page.collection.feeding.preyMissing'), maxLength: TEXT_LIMITS.prey }),
+      note: textRule({ maxLength: TEXT_LIMITS.note }),
+      reason: textRule({ required: correcting ? t('page.collection.feeding.reasonMissing') : undefined, maxLength: TEXT_LIMITS.correctionReason }),
     },
   });
   return (
     <form
-      aria-label={correcting ? 'Correct a feeding' : 'Record a feeding'}
+      aria-label={t(correcting ? 'page.collection.feeding.correctTitle' : 'page.collection.feeding.record')}
       onSubmit={form.onSubmit((v) => {
         setMessage(null);
         add.mutate(
           {
-            fedOn: v.fedOn!,
+            fedOn: readDate(v.fedOn)!,
             prey: v.prey.trim(),
             taken: v.taken === 'taken',
             note: v.note.trim() || null,
@@ -54,20 +59,40 @@ export function FeedingForm({ animalId, correcting, onDone }: { animalId: string
       })}
     >
       <Stack>
-        <DateInput label="Fed on" withAsterisk valueFormat="YYYY-MM-DD" placeholder="YYYY-MM-DD" key={form.key('fedOn')} {...form.getInputProps('fedOn')} />
-        <TextInput label="Prey" withAsterisk placeholder="2 adult crickets" key={form.key('prey')} {...form.getInputProps('prey')} />
+        <DateField label={t('page.collection.feeding.fedOn')} withAsterisk key={form.key('fedOn')} {...form.getInputProps('fedOn')} />
+        <TextField
+          label={t('page.collection.feeding.prey')}
+          withAsterisk
+          maxLength={TEXT_LIMITS.prey}
+          placeholder={t('page.collection.feeding.preyExample')}
+          key={form.key('prey')}
+          {...form.getInputProps('prey')}
+        />
         <SegmentedControl
-          aria-label="Taken or refused"
+          aria-label={t('page.collection.feeding.takenOrRefused')}
           data={[
-            { value: 'taken', label: 'Taken' },
-            { value: 'refused', label: 'Refused' },
+            { value: 'taken', label: t('page.collection.feeding.taken') },
+            { value: 'refused', label: t('page.collection.feeding.refused') },
           ]}
           key={form.key('taken')}
           {...form.getInputProps('taken')}
         />
-        <Textarea label="Note" rows={2} key={form.key('note')} {...form.getInputProps('note')} />
-        {correcting && <TextInput label="Why the old entry was wrong" withAsterisk key={form.key('reason')} {...form.getInputProps('reason')} />}
-        <ModalFormEnd message={message} loading={add.isPending} submitLabel={correcting ? 'Save the correction' : 'Save feeding'} onCancel={onDone} />
+        <TextAreaField label={t('page.collection.feeding.note')} rows={2} maxLength={TEXT_LIMITS.note} key={form.key('note')} {...form.getInputProps('note')} />
+        {correcting && (
+          <TextField
+            label={t('page.collection.feeding.reason')}
+            withAsterisk
+            maxLength={TEXT_LIMITS.correctionReason}
+            key={form.key('reason')}
+            {...form.getInputProps('reason')}
+          />
+        )}
+        <ModalFormEnd
+          message={message}
+          loading={add.isPending}
+          submitLabel={t(correcting ? 'page.collection.feeding.saveCorrection' : 'page.collection.feeding.save')}
+          onCancel={onDone}
+        />
       </Stack>
     </form>
   );

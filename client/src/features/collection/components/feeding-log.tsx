@@ -3,26 +3,28 @@ import { useState } from 'react';
 import type { FeedingResponse } from '@broodsilk/shared';
 import { SectionCard } from '@/components/ui/section-card';
 import { formatDate } from '@/lib/dates';
+import { useWords } from '@/lib/i18n';
 import { useFeedings } from '../api/animal-season';
 import { FeedingForm } from './feeding-form';
 
 /** The feeding log, newest first; a corrected entry stays, struck through, under its correction. */
 export function FeedingLog({ animalId }: { animalId: string }) {
+  const t = useWords();
   const { data: entries = [] } = useFeedings(animalId);
   const [form, setForm] = useState<{ correcting?: FeedingResponse } | null>(null);
   return (
     <SectionCard
-      title="Feeding log"
+      title={t('page.collection.feeding.title')}
       testId="feeding-log"
       action={
         <Button variant="light" onClick={() => setForm({})}>
-          Record a feeding
+          {t('page.collection.feeding.record')}
         </Button>
       }
     >
       {entries.length === 0 ? (
         <Text size="sm" c="dimmed">
-          No feedings recorded yet.
+          {t('page.collection.feeding.none')}
         </Text>
       ) : (
         <Stack gap="xs">
@@ -34,7 +36,7 @@ export function FeedingLog({ animalId }: { animalId: string }) {
                     {formatDate(e.fedOn)}
                   </Text>
                   <Badge variant="light" tt="none" color={e.taken ? 'moss' : 'amber'}>
-                    {e.taken ? 'Taken' : 'Refused'}
+                    {t(e.taken ? 'page.collection.feeding.taken' : 'page.collection.feeding.refused')}
                   </Badge>
                 </Group>
                 <Text size="sm">{e.prey}</Text>
@@ -45,20 +47,24 @@ export function FeedingLog({ animalId }: { animalId: string }) {
                 )}
                 {e.strikes && (
                   <Text size="xs" c="dimmed">
-                    Corrects an earlier entry: {e.strikes.reason}
+                    {t('page.collection.feeding.corrects', { reason: e.strikes.reason })}
                   </Text>
                 )}
               </Stack>
               {!e.struckBy && (
                 <Button variant="subtle" size="compact-sm" onClick={() => setForm({ correcting: e })}>
-                  Correct
+                  {t('page.collection.feeding.correct')}
                 </Button>
               )}
             </Group>
           ))}
         </Stack>
       )}
-      <Modal opened={!!form} onClose={() => setForm(null)} title={form?.correcting ? 'Correct a feeding' : 'Record a feeding'}>
+      <Modal
+        opened={!!form}
+        onClose={() => setForm(null)}
+        title={t(form?.correcting ? 'page.collection.feeding.correctTitle' : 'page.collection.feeding.record')}
+      >
         {form && <FeedingForm animalId={animalId} correcting={form.correcting} onDone={() => setForm(null)} />}
       </Modal>
     </SectionCard>

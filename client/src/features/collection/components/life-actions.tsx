@@ -1,44 +1,18 @@
 import { Button, Group, Modal, Stack, Text } from '@mantine/core';
 import { useState } from 'react';
 import { PENULTIMATE_INTERVAL_MONTHS, type AnimalResponse } from '@broodsilk/shared';
-import { formatDate } from '@/lib/dates';
+import { label } from '@broodsilk/shared';
+import { useWords } from '@/lib/i18n';
 import type { AnimalStep } from '../api/animal-season';
 import { DatedStepForm } from './dated-step-form';
 
-interface StepCopy {
-  button: string;
-  title: string;
-  dateLabel: string;
-  submit: string;
-  explanation?: string;
-  danger?: boolean;
-}
-
-const STEPS: Record<AnimalStep, StepCopy> = {
-  premolt: {
-    button: 'Flag premolt',
-    title: 'In premolt',
-    dateLabel: 'Premolt since',
-    submit: 'Flag premolt',
-    explanation: 'She shows as “not now” for pairing until a molt is recorded or you clear the flag.',
-  },
-  'premolt/end': { button: 'Clear premolt', title: 'Premolt over', dateLabel: 'Premolt over on', submit: 'Clear premolt' },
-  'sperm-web': { button: 'Sperm web seen', title: 'Sperm web seen', dateLabel: 'Seen on', submit: 'Save' },
-  return: {
-    button: 'Returned to owner',
-    title: 'Returned to owner',
-    dateLabel: 'Returned on',
-    submit: 'Confirm the return',
-    explanation: 'This ends his breeding loan and writes the return on each project he is in.',
-  },
-  death: {
-    button: 'Record death',
-    title: 'Record a death',
-    dateLabel: 'Died on',
-    submit: 'Confirm the death',
-    explanation: 'This marks the animal deceased and writes it on each open project it is in, with what the terms now say.',
-    danger: true,
-  },
+/** Each step's words in the catalogue (`page.collection.step.<key>`: button, title, dateLabel, submit, explanation). */
+const STEPS: Record<AnimalStep, { key: string; explained?: boolean; danger?: boolean }> = {
+  premolt: { key: 'premolt', explained: true },
+  'premolt/end': { key: 'premoltEnd' },
+  'sperm-web': { key: 'spermWeb' },
+  return: { key: 'return', explained: true },
+  death: { key: 'death', explained: true, danger: true },
 };
 
 /** The dated steps that apply to this animal now, each behind a small confirming form. */
@@ -52,17 +26,26 @@ function stepsFor(a: AnimalResponse): AnimalStep[] {
 }
 
 export function LifeActions({ animal }: { animal: AnimalResponse }) {
+  const t = useWords();
   const [open, setOpen] = useState<AnimalStep | null>(null);
   const facts = [
-    animal.premoltSince && `In premolt since ${formatDate(animal.premoltSince)}`,
-    animal.spermWebOn && `Last sperm web seen ${formatDate(animal.spermWebOn)}`,
-    animal.returnedOn && `Returned to the owner ${formatDate(animal.returnedOn)}`,
+    animal.premoltSince && t('page.collection.step.premoltSince', { date: animal.premoltSince }),
+    animal.spermWebOn && t('page.collection.step.spermWebSeen', { date: animal.spermWebOn }),
+    animal.returnedOn && t('page.collection.step.returnedOn', { date: animal.returnedOn }),
     animal.maturingWindow &&
-      `Maturing molt expected ${formatDate(animal.maturingWindow.from)} – ${formatDate(animal.maturingWindow.to)} (${PENULTIMATE_INTERVAL_MONTHS.min}–${PENULTIMATE_INTERVAL_MONTHS.max} months after his last molt, ${animal.maturingWindow.source})`,
+      t('page.collection.step.maturingExpected', {
+        from: animal.maturingWindow.from,
+        to: animal.maturingWindow.to,
+        min: PENULTIMATE_INTERVAL_MONTHS.min,
+        max: PENULTIMATE_INTERVAL_MONTHS.max,
+        source: label(t, 'valueMark', 'memory'),
+      }),
   ].filter((f): f is string => !!f);
   const steps = animal.editable ? stepsFor(animal) : [];
   if (!facts.length && !steps.length) return null;
-  const copy = open ? STEPS[open] : null;
+  const stepWords = (step: AnimalStep, name: string) => t(`page.collection.step.${STEPS[step].key}.${name}`, { label: animal.label });
+  const title = open ? stepWords(open, 'title') : '';
+  const buttons = steps.map((s) => ({ step: s, text: stepWords(s, 'button') }));
   return (
     <Stack gap="xs" data-testid="life-actions">
       {facts.map((f) => (
@@ -71,20 +54,20 @@ export function LifeActions({ animal }: { animal: AnimalResponse }) {
         </Text>
       ))}
       <Group gap="xs">
-        {steps.map((s) => (
-          <Button key={s} variant="light" color={STEPS[s].danger ? 'clay' : undefined} onClick={() => setOpen(s)}>
-            {STEPS[s].button}
+        {buttons.map(({ step, text }) => (
+          <Button key={step} variant="light" color={STEPS[step].danger ? 'clay' : undefined} onClick={() => setOpen(step)}>
+            {text}
           </Button>
         ))}
       </Group>
-      <Modal opened={!!open} onClose={() => setOpen(null)} title={copy ? `${copy.title}: ${animal.label}` : ''}>
-        {open && copy && (
+      <Modal opened={!!open} onClose={() => setOpen(null)} title={title}>
+        {open && (
           <DatedStepForm
             animalId={animal.id}
             step={open}
-            dateLabel={copy.dateLabel}
-            submitLabel={copy.submit}
-            explanation={copy.explanation}
+            dateLabel={stepWords(open, 'dateLabel')}
+            submitLabel={stepWords(open, 'submit')}
+            explanation={STEPS[open].explained ? stepWords(open, 'explanation') : undefined}
             onDone={() => setOpen(null)}
           />
         )}

@@ -10,6 +10,7 @@ import { numberRule, readNumber } from '@/components/fields/typed-number';
 import { textRule } from '@/components/fields/text-rule';
 import { FormActions } from '@/components/ui/form-actions';
 import { applyServerErrors } from '@/lib/form-errors';
+import { useWords } from '@/lib/i18n';
 import { useRecordMolt } from '../api/molts';
 import { EXUVIA_LABELS } from '../utils/animal-view';
 
@@ -22,6 +23,7 @@ interface MoltFormValues {
 }
 
 export function MoltForm({ animalId, sex, onDone }: { animalId: string; sex: AnimalSex; onDone: () => void }) {
+  const t = useWords();
   const record = useRecordMolt(animalId);
   const today = deviceToday();
   const [message, setMessage] = useState<string | null>(null);
@@ -30,14 +32,14 @@ export function MoltForm({ animalId, sex, onDone }: { animalId: string; sex: Ani
     validateInputOnBlur: true,
     initialValues: { moltedOn: '', exuviaSex: null, sizeCm: '', maturing: false, notes: '' },
     validate: {
-      moltedOn: dateRule({ required: 'Give the date of the molt.', latest: today, latestMessage: 'A molt that has happened cannot be in the future.' }),
-      sizeCm: numberRule({ min: 0.1, max: 40, decimals: 1, rangeMessage: 'The leg span is from 0.1 to 40 cm.' }),
+      moltedOn: dateRule({ required: t('page.collection.molts.dateMissing'), latest: today, latestMessage: t('page.collection.molts.dateInFuture') }),
+      sizeCm: numberRule({ min: 0.1, max: 40, decimals: 1, rangeMessage: t('page.collection.molts.legSpanRange') }),
       notes: textRule({ maxLength: TEXT_LIMITS.note }),
     },
   });
   return (
     <form
-      aria-label="Record a molt"
+      aria-label={t('page.collection.molts.record')}
       onSubmit={form.onSubmit((v) => {
         setMessage(null);
         record.mutate(
@@ -53,27 +55,27 @@ export function MoltForm({ animalId, sex, onDone }: { animalId: string; sex: Ani
       })}
     >
       <Stack>
-        <DateField label="Molted on" withAsterisk key={form.key('moltedOn')} {...form.getInputProps('moltedOn')} />
+        <DateField label={t('page.collection.molts.moltedOn')} withAsterisk key={form.key('moltedOn')} {...form.getInputProps('moltedOn')} />
         <Select
-          label="Sexed from the exuvia"
-          placeholder="Not checked"
+          label={t('page.collection.molts.exuviaSex')}
+          placeholder={t('page.collection.molts.notChecked')}
           clearable
           data={EXUVIA_SEXES.map((s) => ({ value: s, label: EXUVIA_LABELS[s] }))}
           key={form.key('exuviaSex')}
           {...form.getInputProps('exuviaSex')}
         />
-        <NumberField label="Leg span (cm)" key={form.key('sizeCm')} {...form.getInputProps('sizeCm')} />
+        <NumberField label={t('page.collection.molts.legSpan')} key={form.key('sizeCm')} {...form.getInputProps('sizeCm')} />
         {sex === 'male' && (
           <Checkbox
-            label="This was his maturing molt"
-            description="Sets his maturing date and starts the male clock."
+            label={t('page.collection.molts.maturing')}
+            description={t('page.collection.molts.maturingHint')}
             size="md"
             key={form.key('maturing')}
             {...form.getInputProps('maturing', { type: 'checkbox' })}
           />
         )}
-        <TextAreaField label="Notes" maxLength={TEXT_LIMITS.note} key={form.key('notes')} {...form.getInputProps('notes')} />
-        <FormActions message={message} loading={record.isPending} submitLabel="Save molt" onCancel={onDone} />
+        <TextAreaField label={t('page.collection.molts.notes')} maxLength={TEXT_LIMITS.note} key={form.key('notes')} {...form.getInputProps('notes')} />
+        <FormActions message={message} loading={record.isPending} submitLabel={t('page.collection.molts.save')} onCancel={onDone} />
       </Stack>
     </form>
   );
