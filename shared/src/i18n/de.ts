@@ -1,6 +1,7 @@
 import type { Catalogue } from './en.js';
 import { pagesDe } from './pages/index.js';
 import { partnerUpdatesDe } from './partner-updates.js';
+import { mailDe } from './mail.js';
 
 /** Every word for a shared state, in German; the `Catalogue` type makes a missing key a compile error. */
 export const de: Catalogue = {
@@ -339,6 +340,7 @@ export const de: Catalogue = {
   },
   page: pagesDe,
   partnerUpdate: partnerUpdatesDe,
+  mail: mailDe,
   calendar: {
     pullWindow: 'Entnahmefenster: {{project}}',
     where: '{{project}}, Kokon vom {{layDate}}',
