@@ -188,6 +188,28 @@ describe('balances after every kind of entry', () => {
     expect(body.sacs[0]!.change?.lines).toEqual(['The count of young changed from 62 to 60.', 'Mira Keeper: 30 → 29 (−1).', 'Lena Outside: 15 → 14 (−1).']);
     expect(party(await balances(), s.lenaId)).toMatchObject({ share: 14, owedSpiderlings: 5 });
   });
+
+  // The same answer in the viewer's language: the catalogue's German `shares` words (shared/src/i18n/shares.ts).
+  it('tells a partner who chose German the explanation and the change in German, while the keeper reads English', async () => {
+    await api(t.app).patch('/api/users/me').set('Authorization', s.tomasz.bearer).send({ language: 'de' }).expect(200);
+    try {
+      const de = (await api(t.app).get(`/api/projects/${s.projectId}/shares`).set('Authorization', s.tomasz.bearer).expect(200)).body as SharesResponse;
+      const sac = de.sacs[0]!;
+      expect(sac.explanation[0]).toBe('Gezählt im Kokon: 60 Jungtiere.');
+      expect(sac.explanation.at(-1)).toBe('Insgesamt: Mira Keeper 29, Tomasz Partner 17, Lena Outside 14.');
+      expect(sac.change?.reasons).toEqual(['Die Zahl der Jungtiere hat sich von 62 auf 60 geändert.']);
+      expect(sac.change?.lines).toEqual([
+        'Die Zahl der Jungtiere hat sich von 62 auf 60 geändert.',
+        'Mira Keeper: 30 → 29 (−1).',
+        'Lena Outside: 15 → 14 (−1).',
+      ]);
+      for (const line of [...sac.explanation, ...sac.change!.lines]) expect(line).not.toMatch(/\{\{|shares\.|young/);
+      const en = (await api(t.app).get(`/api/projects/${s.projectId}/shares`).set('Authorization', s.mira.bearer).expect(200)).body as SharesResponse;
+      expect(en.sacs[0]!.explanation[0]).toBe('The sac counts 60 young.');
+    } finally {
+      await api(t.app).patch('/api/users/me').set('Authorization', s.tomasz.bearer).send({ language: 'en' }).expect(200);
+    }
+  });
 });
 
 describe('bad input and who may do what', () => {

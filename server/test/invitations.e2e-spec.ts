@@ -4,7 +4,7 @@ import { Invitation } from '../src/invitations/invitation.entity';
 import { hashInvitationToken } from '../src/invitations/invitation-token';
 import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper, type SignedIn } from './support/users';
-import { mailsTo, waitForMail } from './support/mail-sink';
+import { mailsTo, readableText, waitForMail } from './support/mail-sink';
 import { createProject } from './support/projects';
 import { JOBS_SCHEMA } from '../src/jobs/jobs.service';
 import { COMPOSE_QUEUE } from '../src/mail/mail-outbox.service';
@@ -199,5 +199,31 @@ describe('invitations', () => {
     const approve = (who: SignedIn) => http().post(`/api/projects/${p.id}/invitations/${open.body.id}/approve`).set('Authorization', who.bearer);
     expect((await approve(partner).expect(403)).body.message).toMatch(/Only the owner/);
     expect((await approve(mira).expect(409)).body.message).toBe('Nobody has asked to join with this invitation yet.');
+  });
+});
+
+/**
+ * The invitation in the invitee's language when the address has an account (its `language`
+ * setting), else in English: the server has no other clue to a stranger's language. German words
+ * from the catalogue's `mail.invitation` section (shared/src/i18n/mail.ts).
+ */
+describe("the invitation mail in the reader's language", () => {
+  it('a German keeper is invited in German, an address without an account in English', async () => {
+    const greta = await registerKeeper(t.app, 'Greta', 'de');
+    const p = await createProject(t.app, t.orm, mira, { title: `Sprache ${Date.now()}` });
+    await http().post(`/api/projects/${p.id}/invitations`).set('Authorization', mira.bearer).send({ email: greta.user.email, role: 'caretaker' }).expect(201);
+    const de = await waitForMail(greta.user.email, new RegExp(p.title));
+    expect(de.subject).toBe(`Mira lädt dich zum Zuchtprojekt „${p.title}“ ein`);
+    const text = readableText(de);
+    expect(text).toContain(`Hallo,\n\nMira lädt dich ein, beim Zuchtprojekt „${p.title}“ auf Broodsilk als Betreuer mitzumachen.`);
+    expect(text).toContain('innerhalb von 7 Tagen');
+    expect(text).toMatch(LINK);
+
+    const stranger = `fremd.${Date.now()}@example.test`;
+    await http().post(`/api/projects/${p.id}/invitations`).set('Authorization', mira.bearer).send({ email: stranger, role: 'partner' }).expect(201);
+    const en = await waitForMail(stranger, new RegExp(p.title));
+    expect(en.subject).toBe(`Mira invites you to the breeding project "${p.title}"`);
+    expect(readableText(en)).toContain(`invites you to join the breeding project "${p.title}" on Broodsilk as partner.`);
+    expect(en.text).toContain('Open this link within 7 days to accept');
   });
 });

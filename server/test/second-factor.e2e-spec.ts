@@ -7,10 +7,10 @@
 import request from 'supertest';
 import { Secret, TOTP } from 'otpauth';
 import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
-import type { RecoveryCodesResponse, SecondFactorChallenge, TotpEnrolment } from '@broodsilk/shared';
+import type { Language, RecoveryCodesResponse, SecondFactorChallenge, TotpEnrolment } from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper, type SignedIn } from './support/users';
-import { waitForMail } from './support/mail-sink';
+import { readableText, waitForMail } from './support/mail-sink';
 import { Clock } from '../src/common/clock';
 import { User } from '../src/users/user.entity';
 import { clearSecondFactor } from '../src/auth/second-factor/clear-second-factor';
@@ -34,8 +34,8 @@ afterEach(() => {
 });
 
 /** A keeper with a confirmed second factor at T0: its secret and recovery codes. */
-async function enrolled(name: string): Promise<{ k: SignedIn & { password: string }; secret: string; recoveryCodes: string[] }> {
-  const k = await registerKeeper(t.app, name);
+async function enrolled(name: string, language?: Language): Promise<{ k: SignedIn & { password: string }; secret: string; recoveryCodes: string[] }> {
+  const k = await registerKeeper(t.app, name, language);
   pinClock(T0);
   const start = await http().post('/api/auth/second-factor/enrolment').set('Authorization', k.bearer).expect(201);
   const { secret } = start.body as TotpEnrolment;
@@ -265,5 +265,36 @@ describe('administrators', () => {
     await t.orm.em.fork().nativeUpdate(User, { id: a.user.id }, { role: 'admin' });
     expect((await http().get('/api/auth/me').set('Authorization', a.bearer).expect(200)).body.secondFactorRequired).toBe(false);
     await http().get('/api/admin/users').set('Authorization', a.bearer).expect(200);
+  });
+});
+
+/** The notices in the account's language: the catalogue's German `mail.security` words (shared/src/i18n/mail.ts). */
+describe('notices to a German account', () => {
+  it('says in German that a factor was added, codes renewed, a recovery code used and the factor removed', async () => {
+    const { k, recoveryCodes } = await enrolled('Hanna', 'de');
+    const added = await waitForMail(k.user.email, /zweiter Faktor hinzugefügt/);
+    expect(added.subject).toBe('Deinem Broodsilk-Konto wurde ein zweiter Faktor hinzugefügt');
+    expect(readableText(added)).toContain('Hallo Hanna,');
+    expect(added.text).toContain('Bewahre deine Wiederherstellungscodes sicher auf.');
+
+    const renewed = (await http().post('/api/auth/second-factor/recovery-codes').set('Authorization', k.bearer).send({ password: k.password }).expect(200))
+      .body as RecoveryCodesResponse;
+    expect(renewed.recoveryCodes.filter((c) => recoveryCodes.includes(c))).toEqual([]);
+    const notice = await waitForMail(k.user.email, /Wiederherstellungscodes .* wurden erneuert/);
+    expect(readableText(notice)).toContain('die bisherigen gelten nicht mehr');
+
+    const challenge = (await signIn(k.user.email, k.password).expect(200)).body as SecondFactorChallenge;
+    await secondStep(challenge.pendingToken, renewed.recoveryCodes[0]).expect(200);
+    const used = await waitForMail(k.user.email, /Wiederherstellungscode wurde zur Anmeldung/);
+    expect(readableText(used)).toContain('Dieser Code gilt nicht mehr.');
+
+    await http()
+      .post('/api/auth/second-factor/removal')
+      .set('Authorization', k.bearer)
+      .send({ password: k.password, code: renewed.recoveryCodes[1] })
+      .expect(204);
+    const removed = await waitForMail(k.user.email, /zweite Faktor .* wurde entfernt/);
+    expect(readableText(removed)).toMatch(/Wenn du das warst, musst du nichts tun\. Wenn nicht, setze sofort dein Passwort unter http\S+ zurück/);
+    expect(removed.text).not.toMatch(/Hello|If this was you/);
   });
 });

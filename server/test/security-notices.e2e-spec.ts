@@ -8,7 +8,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper } from './support/users';
-import { waitForMail, mailsTo } from './support/mail-sink';
+import { waitForMail, mailsTo, readableText } from './support/mail-sink';
 import { argon2Runs } from '../src/auth/password-hasher';
 import { COMPOSE_QUEUE } from '../src/mail/mail-outbox.service';
 import { JOBS_SCHEMA } from '../src/jobs/jobs.service';
@@ -114,5 +114,66 @@ describe('the same work whether or not the address has an account', () => {
     // The new address gets its confirmation link instead, and nothing about an attempt.
     await waitForMail(fresh, /Confirm your e-mail address/);
     expect((await mailsTo(fresh)).map((m) => m.subject)).toEqual(['Confirm your e-mail address for Broodsilk']);
+  });
+});
+
+/**
+ * The same mails in the reader's language: the account's `language` (for a new account the one it
+ * registered with). Expected words are the catalogue's German `mail` section (shared/src/i18n/mail.ts);
+ * the count words follow CLDR plural rules ("45 Minuten", "24 Stunden"; Unicode CLDR, de plurals).
+ */
+describe("in the reader's language", () => {
+  it('a German keeper gets the password-changed notice in German, with the reset address filled in', async () => {
+    const k = await registerKeeper(t.app, 'Kerstin', 'de');
+    await http()
+      .patch('/api/auth/password')
+      .set('Authorization', k.bearer)
+      .send({ currentPassword: k.password, newPassword: 'eine ganz neue Passphrase' })
+      .expect(200);
+    const mail = await waitForMail(k.user.email, /Passwort wurde geändert/);
+    const text = readableText(mail);
+    expect(mail.subject).toBe('Dein Broodsilk-Passwort wurde geändert');
+    expect(text).toContain('Hallo Kerstin,');
+    expect(text).toContain('alle anderen Sitzungen wurden abgemeldet');
+    expect(text).toMatch(/setze sofort dein Passwort unter http\S+\/forgot-password zurück/);
+    expect(text).not.toMatch(/Hello|password was/);
+  });
+
+  it('a German keeper gets the reset link and the notice after it in German', async () => {
+    const k = await registerKeeper(t.app, 'Karl', 'de');
+    await http().post('/api/auth/password-reset').send({ email: k.user.email }).expect(202);
+    const link = await waitForMail(k.user.email, /Setze dein Broodsilk-Passwort zurück/);
+    expect(readableText(link)).toContain('öffne diesen Link innerhalb von 45 Minuten:');
+    expect(link.text).toContain('Der Link funktioniert nur einmal.');
+    const token = /reset-password\?token=([\w-]+)/.exec(link.text ?? '')![1];
+    await http().post('/api/auth/password-reset/confirm').send({ token, password: 'noch eine frische Passphrase' }).expect(204);
+    const notice = await waitForMail(k.user.email, /Passwort wurde zurückgesetzt/);
+    expect(readableText(notice)).toContain('über einen per E-Mail geschickten Link zurückgesetzt');
+  });
+
+  it('a German account registers in German: its link, and the notice to the owner of a taken German address', async () => {
+    const owner = await registerKeeper(t.app, 'Greta', 'de');
+    const fresh = `neu.${Date.now()}@example.test`;
+    const body = (email: string) => ({ email, password: 'noch eine Passphrase', displayName: 'Jemand', language: 'de' });
+    await http().post('/api/auth/register').send(body(fresh)).expect(202);
+    await http().post('/api/auth/register').send(body(owner.user.email)).expect(202);
+    const confirm = await waitForMail(fresh, /Bestätige deine E-Mail-Adresse/);
+    const text = readableText(confirm);
+    expect(confirm.subject).toBe('Bestätige deine E-Mail-Adresse für Broodsilk');
+    expect(text).toContain('Hallo Jemand,');
+    expect(text).toContain('innerhalb von 24 Stunden');
+    expect(text).toMatch(/\/confirm-email\?token=[\w-]+/);
+    const notice = await waitForMail(owner.user.email, /registrieren/);
+    expect(notice.subject).toBe('Jemand wollte sich mit deiner E-Mail-Adresse registrieren');
+    expect(readableText(notice)).toMatch(/melde dich unter http\S+\/sign-in an/);
+  });
+
+  it('English stays as it was, with the values filled in', async () => {
+    const fresh = `fresh.en.${Date.now()}@example.test`;
+    await http().post('/api/auth/register').send({ email: fresh, password: 'yet another passphrase', displayName: 'Sam' }).expect(202);
+    const mail = await waitForMail(fresh, /Confirm your e-mail address/);
+    expect(readableText(mail)).toMatch(
+      /^Confirm your e-mail address for Broodsilk\nHello Sam,\n\nTo finish creating your Broodsilk account, open this link within 24 hours and confirm the address:\n\nhttp\S+\/confirm-email\?token=[\w-]+\n\nThe link works once\./,
+    );
   });
 });

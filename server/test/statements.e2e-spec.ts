@@ -234,7 +234,10 @@ describe('statement PDF', () => {
       expect(text).toContain('Beteiligter: Tomasz Partner (Partner)');
       expect(text).toContain(`Noch geschuldet: ${b.owedSpiderlings} Jungtiere`);
       expect(text).toContain('Versand lebender Wirbelloser');
-      expect(text).not.toMatch(/\[in-force\]|\(in-progress\)|Still owed/);
+      // The share explanation too (catalogue section `shares`, German).
+      expect(text).toMatch(/Gezählt im Kokon: \d+ Jungtiere\./);
+      expect(text).toMatch(/Insgesamt: Mira Keeper \d+, Tomasz Partner \d+/);
+      expect(text).not.toMatch(/\[in-force\]|\(in-progress\)|Still owed|The sac counts|In all:/);
     } finally {
       await api(t.app).patch('/api/users/me').set('Authorization', s.tomasz.bearer).send({ language: 'en' }).expect(200);
     }

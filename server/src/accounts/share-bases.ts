@@ -1,5 +1,5 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
-import { diffShares, type SacShareChange, type ShareResult } from '@broodsilk/shared';
+import { diffShares, type SacShareChange, type ShareResult, type Words } from '@broodsilk/shared';
 import type { AccountView } from './account-view';
 
 interface BasisRow {
@@ -11,11 +11,17 @@ interface BasisRow {
   created_at: Date;
 }
 
-function describe(view: AccountView, before: BasisRow, after: { count: number; termsNumber: number | null; result: ShareResult }, at: Date): SacShareChange {
-  const diff = diffShares(before.result, after.result, view.nameOf);
+function describe(
+  view: AccountView,
+  before: BasisRow,
+  after: { count: number; termsNumber: number | null; result: ShareResult },
+  at: Date,
+  t: Words,
+): SacShareChange {
+  const diff = diffShares(before.result, after.result, view.nameOf, t);
   const reasons: string[] = [];
-  if (before.count !== after.count) reasons.push(`The count of young changed from ${before.count} to ${after.count}.`);
-  if (before.terms_number !== after.termsNumber) reasons.push(`Terms version ${after.termsNumber} came into force in place of version ${before.terms_number}.`);
+  if (before.count !== after.count) reasons.push(t('shares.countChanged', { before: before.count, after: after.count }));
+  if (before.terms_number !== after.termsNumber) reasons.push(t('shares.termsChanged', { before: before.terms_number, after: after.termsNumber }));
   return {
     changedAt: at.toISOString(),
     reasons,
@@ -26,9 +32,9 @@ function describe(view: AccountView, before: BasisRow, after: { count: number; t
 
 /**
  * Keeps one `share_bases` row per change of a sac's basis (count or terms version) and says what
- * changed since the one before. Adding is `on conflict do nothing`, so two readers at once agree.
+ * changed since the one before, in the reader's words `t`. Adding is `on conflict do nothing`, so two readers at once agree.
  */
-export async function trackShareBases(em: EntityManager, view: AccountView, now: Date): Promise<Map<string, SacShareChange | null>> {
+export async function trackShareBases(em: EntityManager, view: AccountView, now: Date, t: Words): Promise<Map<string, SacShareChange | null>> {
   const out = new Map<string, SacShareChange | null>();
   const termsNumber = view.data.terms?.number ?? null;
   const rows = await em.execute<BasisRow[]>(
@@ -47,9 +53,9 @@ export async function trackShareBases(em: EntityManager, view: AccountView, now:
          values (gen_random_uuid(), ?, ?, ?, ?, ?, ?, ?, ?) on conflict (sac_id, revision) do nothing`,
         [at, at, view.data.project.id, s.fact.sacId, (last?.revision ?? 0) + 1, s.count, termsNumber, JSON.stringify(s.result)],
       );
-      out.set(s.fact.sacId, last ? describe(view, last, current, at) : null);
+      out.set(s.fact.sacId, last ? describe(view, last, current, at, t) : null);
     } else {
-      out.set(s.fact.sacId, previous ? describe(view, previous, current, new Date(last.created_at)) : null);
+      out.set(s.fact.sacId, previous ? describe(view, previous, current, new Date(last.created_at), t) : null);
     }
   }
   return out;

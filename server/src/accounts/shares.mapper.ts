@@ -1,17 +1,18 @@
-import { explainShares, type FailureClause, type SacShareChange, type SacSharesView, type SharesResponse, type TermsSummary } from '@broodsilk/shared';
+import {
+  explainShares,
+  type FailureClause,
+  type SacShareChange,
+  type SacSharesView,
+  type SharesResponse,
+  type TermsSummary,
+  type Words,
+} from '@broodsilk/shared';
 import type { TermsVersion } from '../projects/terms-version.entity';
 import { memberName, type AccountView, type SacShareState } from './account-view';
 
 export const FAILURE_CLAUSE_TEXT: Record<FailureClause, string> = {
   'nothing-owed': 'If a sac fails, nothing is owed for it.',
   'carries-over': 'If a sac fails, the deal carries over to the next sac.',
-};
-
-const FAILED_SAC_TEXT: Record<FailureClause, string> = {
-  'nothing-owed':
-    'This sac failed. The terms say nothing is owed for a failed sac: no party is owed young from it beyond what was already handed over, sold or cashed out.',
-  'carries-over':
-    'This sac failed. The terms say the deal carries over: the parties are owed their shares from the next sac instead, worked out on that sac’s count.',
 };
 
 export function toTermsSummary(t: TermsVersion): TermsSummary {
@@ -30,12 +31,13 @@ export function toTermsSummary(t: TermsVersion): TermsSummary {
   };
 }
 
-export function failureNote(view: AccountView, s: SacShareState): string | null {
+/** What a failed sac means under the terms in force, in the reader's words; null for a sac that did not fail. */
+export function failureNote(view: AccountView, s: SacShareState, t: Words): string | null {
   if (s.fact.outcome !== 'failed') return null;
-  return view.data.terms ? FAILED_SAC_TEXT[view.data.terms.failureClause] : 'This sac failed. No terms are in force, so nothing is owed from it.';
+  return view.data.terms ? t(`shares.failed.${view.data.terms.failureClause}`) : t('shares.failedNoTerms');
 }
 
-export function toSacSharesView(view: AccountView, s: SacShareState, change: SacShareChange | null): SacSharesView {
+export function toSacSharesView(view: AccountView, s: SacShareState, change: SacShareChange | null, t: Words): SacSharesView {
   return {
     sacId: s.fact.sacId,
     layDate: s.fact.layDate,
@@ -53,21 +55,20 @@ export function toSacSharesView(view: AccountView, s: SacShareState, change: Sac
       exactQuota: p.exactQuota,
       roundedUp: p.roundedUp,
     })),
-    explanation: s.result ? explainShares(s.result, view.nameOf, s.fact.estimated) : [],
+    explanation: s.result ? explainShares(s.result, view.nameOf, s.fact.estimated, t) : [],
     change,
-    failure: failureNote(view, s),
+    failure: failureNote(view, s, t),
   };
 }
 
-export function toSharesResponse(view: AccountView, changes: Map<string, SacShareChange | null>): SharesResponse {
+export function toSharesResponse(view: AccountView, changes: Map<string, SacShareChange | null>, t: Words): SharesResponse {
   const notices: string[] = [];
-  if (!view.data.terms)
-    notices.push('No version of the terms is in force yet, so there are no shares. Shares follow once every partner has accepted the terms.');
-  if (!view.sacs.length) notices.push('This project has no sac yet; shares are worked out per sac from its count of young.');
+  if (!view.data.terms) notices.push(t('shares.noTerms'));
+  if (!view.sacs.length) notices.push(t('shares.noSac'));
   return {
     projectId: view.data.project.id,
     terms: view.data.terms ? toTermsSummary(view.data.terms) : null,
-    sacs: view.sacs.map((s) => toSacSharesView(view, s, changes.get(s.fact.sacId) ?? null)),
+    sacs: view.sacs.map((s) => toSacSharesView(view, s, changes.get(s.fact.sacId) ?? null, t)),
     totals: view.totals.map((t) => ({ memberId: t.partyId, name: view.nameOf(t.partyId), count: t.count })),
     notices,
   };

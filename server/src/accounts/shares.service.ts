@@ -6,6 +6,7 @@ import { loadAccount } from './account-loader';
 import { trackShareBases } from './share-bases';
 import { toSharesResponse } from './shares.mapper';
 import { Clock } from '../common/clock';
+import { loadReader } from '../users/reader-words';
 
 @Injectable()
 export class SharesService {
@@ -14,11 +15,12 @@ export class SharesService {
     private readonly clock: Clock,
   ) {}
 
-  /** Shares per sac with their explanation, and what changed since the basis before. */
+  /** Shares per sac with their explanation, and what changed since the basis before, in the viewer's language. */
   async shares(access: ProjectAccess): Promise<SharesResponse> {
     return this.em.transactional(async (tx) => {
       const view = await loadAccount(tx, access.project);
-      return toSharesResponse(view, await trackShareBases(tx, view, this.clock.now()));
+      const { t } = await loadReader(tx, access.member.user);
+      return toSharesResponse(view, await trackShareBases(tx, view, this.clock.now(), t), t);
     });
   }
 }

@@ -14,7 +14,7 @@ import { SHIPPING_CAUTIONS } from './shipping-cautions';
 import { statementCsv } from './statement-csv';
 import { statementPdf } from './statement-pdf';
 import { Clock } from '../common/clock';
-import { loadReader } from '../users/reader-words';
+import { loadReader, type Reader } from '../users/reader-words';
 
 /**
  * Whether a row concerns the party, made by or to them: it names them, they recorded it, it moves
@@ -36,20 +36,23 @@ export class StatementsService {
     private readonly mail: MailService,
   ) {}
 
-  async statement(access: ProjectAccess, memberId: string): Promise<StatementResponse> {
-    return this.build(await this.viewFor(access, memberId), memberId);
+  /** The statement with its sentences (share explanations, failure notes) in `reader`'s words: the asker's unless said. */
+  async statement(access: ProjectAccess, memberId: string, reader?: Reader): Promise<StatementResponse> {
+    return this.build(await this.viewFor(access, memberId), memberId, reader ?? (await loadReader(this.em, access.member.user)));
   }
 
   /** The CSV with its header row and words in the language of the member who asks for it. */
   async csv(access: ProjectAccess, memberId: string): Promise<{ filename: string; body: string }> {
-    const s = await this.statement(access, memberId);
-    return { filename: fileName(s, 'csv'), body: statementCsv(s, await loadReader(this.em, access.member.user)) };
+    const reader = await loadReader(this.em, access.member.user);
+    const s = await this.statement(access, memberId, reader);
+    return { filename: fileName(s, 'csv'), body: statementCsv(s, reader) };
   }
 
   /** The PDF in the language and stage numbering of the member who asks for it. */
   async pdf(access: ProjectAccess, memberId: string): Promise<{ filename: string; body: Buffer }> {
-    const s = await this.statement(access, memberId);
-    return { filename: fileName(s, 'pdf'), body: await statementPdf(s, await loadReader(this.em, access.member.user)) };
+    const reader = await loadReader(this.em, access.member.user);
+    const s = await this.statement(access, memberId, reader);
+    return { filename: fileName(s, 'pdf'), body: await statementPdf(s, reader) };
   }
 
   /**
@@ -61,9 +64,9 @@ export class StatementsService {
     const member = view.data.members.find((m) => m.id === memberId)!;
     const to = member.user?.email ?? member.email;
     if (!to) throw new NotFoundException(`${memberName(member)} has no e-mail address on this project; add one to e-mail the statement.`);
-    const s = this.build(view, memberId);
-    const b = s.balance;
     const reader = await loadReader(this.em, member.user);
+    const s = this.build(view, memberId, reader);
+    const b = s.balance;
     const { t } = reader;
     await this.mail.send({
       to,
@@ -96,7 +99,7 @@ export class StatementsService {
     return view;
   }
 
-  private build(view: AccountView, memberId: string): StatementResponse {
+  private build(view: AccountView, memberId: string, { t }: Reader): StatementResponse {
     const member = view.data.members.find((m) => m.id === memberId)!;
     const mine = new Set(view.data.rows.filter((r) => concerns(r, member, view.owner.id)).map((r) => r.id));
     const entries = toEntryResponses(view).filter((e) => mine.has(e.id));
@@ -106,14 +109,14 @@ export class StatementsService {
       party: { memberId, name: memberName(member), role: member.role },
       generatedAt: this.clock.now().toISOString(),
       terms: view.data.terms ? toTermsSummary(view.data.terms) : null,
-      sacs: view.sacs.map((s) => toSacSharesView(view, s, null)),
+      sacs: view.sacs.map((s) => toSacSharesView(view, s, null, t)),
       entries,
       balance: balance ? { ...balance, memberId, name: memberName(member) } : null,
       provisional: isProvisional(view),
       debts: view.balances.debts
         .filter((d) => d.fromPartyId === memberId || d.toPartyId === memberId)
         .map((d) => ({ ...d, fromName: view.nameOf(d.fromPartyId), toName: view.nameOf(d.toPartyId) })),
-      failureNotes: view.sacs.map((s) => failureNote(view, s)).filter((x): x is string => !!x),
+      failureNotes: view.sacs.map((s) => failureNote(view, s, t)).filter((x): x is string => !!x),
       shippingCautions: entries.some((e) => e.kind === 'hand-over' && e.method === 'shipment') ? [...SHIPPING_CAUTIONS] : [],
     };
   }

@@ -6,6 +6,7 @@ import { createHash, randomBytes } from 'node:crypto';
 import { EMAIL_NOT_CONFIRMED, PENDING_SIGN_IN_MINUTES, SESSION_HOURS, type Me, type SecondFactorChallenge } from '@broodsilk/shared';
 import { appConfig } from '../config/app.config';
 import { MailOutbox } from '../mail/mail-outbox.service';
+import { accountMail } from '../mail/account-mail';
 import { User } from '../users/user.entity';
 import { toMe } from '../users/users.mapper';
 import { dummyPasswordHash, hashPassword, verifyPassword } from './password-hasher';
@@ -179,11 +180,10 @@ export class AuthService {
       await em.nativeUpdate(PasswordResetToken, { user: user.id, usedAt: null }, { usedAt: this.clock.now() });
       em.create(PasswordResetToken, { user, tokenHash: sha256(token), expiresAt: new Date(this.clock.now().getTime() + RESET_LINK_MINUTES * 60_000) });
       await em.flush();
-      return {
-        to: user.email,
-        subject: 'Reset your Broodsilk password',
-        text: `Hello ${user.displayName},\n\nSomeone asked to reset the password of your Broodsilk account. If it was you, open this link within ${RESET_LINK_MINUTES} minutes:\n\n${link}\n\nThe link works once. If you did not ask for it, ignore this e-mail; your password stays as it is.\n`,
-      };
+      return accountMail(user, (t) => ({
+        subject: t('mail.passwordReset.subject'),
+        paragraphs: [t('mail.passwordReset.open', { count: RESET_LINK_MINUTES }), link, t('mail.passwordReset.after')],
+      }));
     });
   }
 

@@ -6,6 +6,7 @@ import { EMAIL_CONFIRMATION_HOURS, type AcceptInvitationResponse } from '@broods
 import { appConfig } from '../config/app.config';
 import { Clock } from '../common/clock';
 import { MailOutbox, type QueuedMail } from '../mail/mail-outbox.service';
+import { accountMail } from '../mail/account-mail';
 import { User } from '../users/user.entity';
 import { Invitation } from '../invitations/invitation.entity';
 import { InvitationsService } from '../invitations/invitations.service';
@@ -70,15 +71,13 @@ export class EmailConfirmations {
     return this.mail(user, await this.newLink(user, latest?.invitation ?? null));
   }
 
+  /** The confirmation link, in the language the account was registered with. */
   private mail(user: User, token: string): QueuedMail {
     const link = `${this.app.publicUrl}/confirm-email?token=${token}`;
-    return {
-      to: user.email,
-      subject: 'Confirm your e-mail address for Broodsilk',
-      text:
-        `Hello ${user.displayName},\n\nTo finish creating your Broodsilk account, open this link within ${EMAIL_CONFIRMATION_HOURS} hours and confirm the address:\n\n${link}\n\n` +
-        `The link works once. If you did not create an account, ignore this e-mail; without the confirmation nobody can sign in to it.\n`,
-    };
+    return accountMail(user, (t) => ({
+      subject: t('mail.confirmEmail.subject'),
+      paragraphs: [t('mail.confirmEmail.open', { count: EMAIL_CONFIRMATION_HOURS }), link, t('mail.confirmEmail.after')],
+    }));
   }
 
   /**

@@ -2,10 +2,11 @@ import { BadRequestException, ConflictException, GoneException, Inject, Injectab
 import type { ConfigType } from '@nestjs/config';
 import { EntityManager } from '@mikro-orm/postgresql';
 import { LockMode } from '@mikro-orm/core';
-import type { AcceptInvitationResponse, InvitationPreview, InvitationResponse } from '@broodsilk/shared';
+import { DEFAULT_LANGUAGE, type AcceptInvitationResponse, type InvitationPreview, type InvitationResponse } from '@broodsilk/shared';
 import { appConfig } from '../config/app.config';
 import type { AuthUser } from '../common/auth-user';
 import { MailOutbox } from '../mail/mail-outbox.service';
+import { accountMail } from '../mail/account-mail';
 import { User } from '../users/user.entity';
 import { ActivityService } from '../activity/activity.service';
 import type { ProjectAccess } from '../projects/project-access.service';
@@ -78,14 +79,23 @@ export class InvitationsService {
       await tx.flush();
       // Goes out after commit from the mail queue; a refused invitation sends nothing.
       const link = `${this.app.publicUrl}/invitations/${token}`;
-      await this.outbox.enqueue(tx, {
-        to: email,
-        subject: `${inviter.displayName} invites you to the breeding project "${access.project.title}"`,
-        text:
-          `Hello,\n\n${inviter.displayName} invites you to join the breeding project "${access.project.title}" on Broodsilk as ${dto.role}.\n\n` +
-          `Open this link within ${INVITATION_DAYS} days to accept (sign in or create an account first):\n\n${link}\n\n` +
-          `The link works once. If you did not expect this e-mail, ignore it.\n`,
-      });
+      // In the invitee's language when the address has an account; English otherwise (the server has no other clue to it).
+      const invitee = await tx.findOne(User, { email }, { fields: ['language'] });
+      await this.outbox.enqueue(
+        tx,
+        accountMail({ email, displayName: null, language: invitee?.language ?? DEFAULT_LANGUAGE }, (t) => {
+          const about = { inviter: inviter.displayName, project: access.project.title };
+          return {
+            subject: t('mail.invitation.subject', about),
+            paragraphs: [
+              t('mail.invitation.body', { ...about, role: t(`mail.invitation.role.${dto.role}`) }),
+              t('mail.invitation.open', { count: INVITATION_DAYS }),
+              link,
+              t('mail.invitation.after'),
+            ],
+          };
+        }),
+      );
       return invitation;
     });
     return toInvitationResponse(invitation);

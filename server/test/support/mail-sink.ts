@@ -1,4 +1,5 @@
 import { simpleParser, type ParsedMail } from 'mailparser';
+import { expect } from 'vitest';
 
 /** Reads the local mail sink (maildev) over its REST API; mails are parsed from raw with mailparser. */
 const base = () => process.env.MAILDEV_API ?? 'http://127.0.0.1:1080';
@@ -32,4 +33,15 @@ export async function waitForMail(address: string, subject: RegExp, timeoutMs = 
     await new Promise((r) => setTimeout(r, 150));
   }
   throw new Error(`no mail to ${address} matching ${subject} within ${timeoutMs} ms`);
+}
+
+/**
+ * The mail's subject and text, checked to be finished words: no `{{value}}` left unfilled and no
+ * catalogue key path (`mail.…`, `partnerUpdate.…`) where a sentence should be.
+ */
+export function readableText(mail: ParsedMail): string {
+  const all = `${mail.subject ?? ''}\n${mail.text ?? ''}`;
+  expect(all).not.toMatch(/\{\{|\}\}/);
+  expect(all).not.toMatch(/(?<![-\w])(mail|partnerUpdate|statement)\.\w/);
+  return all;
 }

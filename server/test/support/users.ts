@@ -1,7 +1,7 @@
 import request from 'supertest';
 import type { INestApplication } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
-import type { EmailConfirmationResult, LoginResponse, RegisterRequest } from '@broodsilk/shared';
+import type { EmailConfirmationResult, Language, LoginResponse, RegisterRequest } from '@broodsilk/shared';
 import { EmailConfirmations } from '../../src/auth/email-confirmations.service';
 import { User } from '../../src/users/user.entity';
 
@@ -32,12 +32,12 @@ export async function registerAndConfirm(app: INestApplication, body: RegisterRe
   return { ...session, bearer: `Bearer ${session.accessToken}` };
 }
 
-/** Registers a fresh keeper with a unique e-mail, confirms its address and returns its session. */
-export async function registerKeeper(app: INestApplication, name = 'Test Keeper'): Promise<SignedIn & { password: string }> {
+/** Registers a fresh keeper with a unique e-mail (in `language`, as a browser in it would), confirms its address and returns its session. */
+export async function registerKeeper(app: INestApplication, name = 'Test Keeper', language?: Language): Promise<SignedIn & { password: string }> {
   counter += 1;
   const email = `keeper${counter}.${Date.now()}@example.test`;
   const password = 'correct horse battery';
-  return { ...(await registerAndConfirm(app, { email, password, displayName: name })), password };
+  return { ...(await registerAndConfirm(app, { email, password, displayName: name, ...(language ? { language } : {}) })), password };
 }
 
 export async function login(app: INestApplication, email: string, password: string): Promise<SignedIn> {

@@ -1,3 +1,5 @@
+import { wordsFor } from '../i18n/words.js';
+
 /**
  * Counts of young may be estimates (a sac of a thousand eggs is not counted one by one). Every
  * place that shows a count says "about" for an estimate, and shares worked out from an estimate
@@ -8,8 +10,7 @@
 export const countWords = (n: number, estimated: boolean): string => (estimated ? `about ${n}` : String(n));
 
 /** Said once wherever shares rest on an estimated count. */
-export const PROVISIONAL_SHARES =
-  'The count is an estimate, so these shares are provisional: they change with the first exact count, and cash-outs and settling wait for it.';
+export const PROVISIONAL_SHARES = wordsFor('en')('shares.provisional');
 
 /** What a cash-out or settling needs and an estimated count cannot give. */
 export const exactCountNeeded = (layDate: string, alive: number): string =>

@@ -3,6 +3,7 @@ import hareNiemeyer from 'hare-niemeyer';
 import { describe, expect, it } from 'vitest';
 import { approxFraction, formatFraction } from './fraction.js';
 import { computeShares, diffShares, explainShares, type ShareParty } from './shares.js';
+import { wordsFor } from '../i18n/words.js';
 
 // Reference implementation: the npm package hare-niemeyer 3.0.0 (largest remainder / Hamilton),
 // called with draw = false so that parties tied for the last young keep their raw quota instead
@@ -236,6 +237,30 @@ describe('share explanation and changes', () => {
     ]);
     expect(d.lines).toEqual(['The count of young changed from 47 to 44.', 'Ana (female): 23 → 21 (−2).', 'Ben (male): 24 → 23 (−1).']);
     expect(diffShares(before, before).lines).toEqual([]);
+  });
+
+  // The same worked example in the German words of the catalogue (shared/src/i18n/shares.ts): plural by
+  // CLDR (1 Jungtier, 35 Jungtiere) and the German decimal comma (DIN 1333: "23,33").
+  it('says the same in German when given the German words', () => {
+    const de = wordsFor('de');
+    const r = computeShares(47, [party('f', 2, 1), party('m', 1, 2, 12)]);
+    expect(explainShares(r, names, false, de)).toEqual([
+      'Gezählt im Kokon: 47 Jungtiere.',
+      'Feste Anzahlen kommen zuerst, in der Reihenfolge der Auswahl: Ben (male) 12. Für die Aufteilung nach Gewicht bleiben: 35 Jungtiere.',
+      'Nach Gewicht aufgeteilt (35 Jungtiere): Ana (female) 35 × 2/3 = 70/3 ≈ 23,33; Ben (male) 35 × 1/3 = 35/3 ≈ 11,67.',
+      'Jeder Beteiligte bekommt zuerst den ganzzahligen Teil seiner Quote; das letzte übrige Jungtier geht an den größten Rest: Ben (male).',
+      'Insgesamt: Ana (female) 23, Ben (male) 24.',
+    ]);
+    const estimated = explainShares(computeShares(1, [party('f', 1, 1)]), names, true, de);
+    expect(estimated[0]).toBe('Gezählt im Kokon: etwa 1 Jungtier.');
+    expect(estimated.at(-1)).toMatch(/^Die Zahl ist geschätzt, deshalb sind diese Anteile vorläufig/);
+    const two = explainShares(computeShares(5, [party('a', 1, 1), party('b', 1, 2), party('c', 1, 3)]), undefined, false, de);
+    expect(two[2]).toBe(
+      'Jeder Beteiligte bekommt zuerst den ganzzahligen Teil seiner Quote; die 2 noch übrigen Jungtiere gehen einzeln an die größten Reste: a, b. Bei gleichem Rest hatte die frühere Stelle in der Reihenfolge Vorrang.',
+    );
+    const d = diffShares(r, computeShares(44, [party('f', 2, 1), party('m', 1, 2, 12)]), names, de);
+    expect(d.lines).toEqual(['Die Zahl der Jungtiere hat sich von 47 auf 44 geändert.', 'Ana (female): 23 → 21 (−2).', 'Ben (male): 24 → 23 (−1).']);
+    for (const line of [...explainShares(r, names, true, de), ...d.lines]) expect(line).not.toMatch(/\{\{|shares\./);
   });
 
   it('formats exact fractions and display decimals with integers only', () => {

@@ -1,4 +1,4 @@
-import { PROVISIONAL_SHARES } from './estimated-counts.js';
+import { wordsFor, type Words } from '../i18n/words.js';
 import { approxFraction, formatFraction } from './fraction.js';
 
 /** One party of the terms, as the share rule needs it. */
@@ -138,53 +138,58 @@ function namer(names?: PartyNames): (id: string) => string {
   return (id) => names[id] ?? id;
 }
 
-const young = (n: number) => (n === 1 ? '1 young' : `${n} young`);
-
 /**
- * The share calculation in plain words, one sentence per line, for the account page. From an
+ * The share calculation in plain words, one sentence per line, for the account page and the
+ * statement, in the words `t` gives (the reader's language; English unless said). From an
  * estimated count the total reads "about N" and a last line says the shares are provisional.
  */
-export function explainShares(result: ShareResult, names?: PartyNames, estimated = false): string[] {
+export function explainShares(result: ShareResult, names?: PartyNames, estimated = false, t: Words = wordsFor('en')): string[] {
   const name = namer(names);
+  const young = (count: number) => t('shares.young', { count });
   const byPick = [...result.parties].sort((a, b) => a.pickOrder - b.pickOrder);
-  const lines = [`The sac counts ${estimated ? 'about ' : ''}${young(result.total)}.`];
+  const lines = [t(estimated ? 'shares.countsAbout' : 'shares.counts', { young: young(result.total) })];
 
   const withFixed = byPick.filter((p) => p.fixedAsked > 0);
   if (withFixed.length > 0) {
     const parts = withFixed.map((p) =>
-      p.fixed === p.fixedAsked ? `${name(p.partyId)} ${p.fixed}` : `${name(p.partyId)} ${p.fixed} of the ${p.fixedAsked} agreed`,
+      p.fixed === p.fixedAsked
+        ? t('shares.party', { name: name(p.partyId), count: p.fixed })
+        : t('shares.fixedPartly', { name: name(p.partyId), fixed: p.fixed, asked: p.fixedAsked }),
     );
-    lines.push(`Fixed counts come first, in pick order: ${parts.join(', ')}. ${young(result.rest)} remain.`);
-    if (withFixed.some((p) => p.fixed < p.fixedAsked)) {
-      lines.push('There were not enough young to serve every fixed count in full; later picks got fewer.');
-    }
+    lines.push(t('shares.fixedFirst', { parts: parts.join(', '), rest: young(result.rest) }));
+    if (withFixed.some((p) => p.fixed < p.fixedAsked)) lines.push(t('shares.fixedShort'));
   }
   if (result.rest === 0) {
-    lines.push('Nothing is left to split by weight.');
+    lines.push(t('shares.nothingLeft'));
   } else {
     const W = BigInt(result.weightTotal);
     const R = BigInt(result.rest);
     const quotas = byPick
       .filter((p) => p.weight > 0)
-      .map((p) => `${name(p.partyId)} ${result.rest} × ${p.weight}/${result.weightTotal} = ${p.exactQuota} ≈ ${approxFraction(R * BigInt(p.weight), W)}`);
-    lines.push(`The remaining ${young(result.rest)} are split by weight: ${quotas.join('; ')}.`);
+      .map((p) =>
+        t('shares.quota', {
+          name: name(p.partyId),
+          rest: result.rest,
+          weight: p.weight,
+          total: result.weightTotal,
+          exact: p.exactQuota,
+          approx: approxFraction(R * BigInt(p.weight), W).replace('.', t('shares.decimalMark')),
+        }),
+      );
+    lines.push(t('shares.byWeight', { young: young(result.rest), quotas: quotas.join('; ') }));
     const up = byPick.filter((p) => p.roundedUp);
     if (up.length === 0) {
-      lines.push('Every quota is a whole number, so no rounding was needed.');
+      lines.push(t('shares.noRounding'));
     } else {
       const remainders = new Map(byPick.map((p) => [p.partyId, (R * BigInt(p.weight)) % W]));
       const cut = remainders.get(up[up.length - 1]!.partyId)!;
       const tiedOut = byPick.some((p) => !p.roundedUp && remainders.get(p.partyId) === cut);
-      const leftOver =
-        up.length === 1 ? 'the 1 young still left goes to the largest remainder' : `the ${up.length} young still left go one each to the largest remainders`;
-      lines.push(
-        `Each party first gets the whole part of its quota; ${leftOver}: ${up.map((p) => name(p.partyId)).join(', ')}.` +
-          (tiedOut ? ' Equal remainders went to the earlier pick.' : ''),
-      );
+      const leftOver = t('shares.leftOver', { count: up.length, names: up.map((p) => name(p.partyId)).join(', ') });
+      lines.push(tiedOut ? `${leftOver} ${t('shares.tiedOut')}` : leftOver);
     }
   }
-  lines.push(`In all: ${result.parties.map((p) => `${name(p.partyId)} ${p.count}`).join(', ')}.`);
-  if (estimated) lines.push(PROVISIONAL_SHARES);
+  lines.push(t('shares.inAll', { parts: result.parties.map((p) => t('shares.party', { name: name(p.partyId), count: p.count })).join(', ') }));
+  if (estimated) lines.push(t('shares.provisional'));
   return lines;
 }
 
@@ -205,7 +210,7 @@ export interface ShareDiff {
 }
 
 /** What changed between two share results (a new count of young, or new terms). */
-export function diffShares(before: ShareResult, after: ShareResult, names?: PartyNames): ShareDiff {
+export function diffShares(before: ShareResult, after: ShareResult, names?: PartyNames, t: Words = wordsFor('en')): ShareDiff {
   const name = namer(names);
   const ids = [...new Set([...before.parties, ...after.parties].map((p) => p.partyId))];
   const countOf = (r: ShareResult, id: string) => r.parties.find((p) => p.partyId === id)?.count ?? 0;
@@ -215,11 +220,11 @@ export function diffShares(before: ShareResult, after: ShareResult, names?: Part
     return { partyId: id, before: b, after: a, change: a - b };
   });
   const lines: string[] = [];
-  if (before.total !== after.total) lines.push(`The count of young changed from ${before.total} to ${after.total}.`);
+  if (before.total !== after.total) lines.push(t('shares.countChanged', { before: before.total, after: after.total }));
   for (const c of changes) {
     if (c.change === 0) continue;
-    const sign = c.change > 0 ? `+${c.change}` : `−${-c.change}`;
-    lines.push(`${name(c.partyId)}: ${c.before} → ${c.after} (${sign}).`);
+    const change = c.change > 0 ? `+${c.change}` : `−${-c.change}`;
+    lines.push(t('shares.partyChanged', { name: name(c.partyId), before: c.before, after: c.after, change }));
   }
   return { totalBefore: before.total, totalAfter: after.total, changes, lines };
 }

@@ -1,6 +1,8 @@
 import type { Catalogue } from './en.js';
 import { pagesDe } from './pages/index.js';
 import { partnerUpdatesDe } from './partner-updates.js';
+import { mailDe } from './mail.js';
+import { sharesDe } from './shares.js';
 
 /** Every word for a shared state, in German; the `Catalogue` type makes a missing key a compile error. */
 export const de: Catalogue = {
@@ -343,6 +345,8 @@ export const de: Catalogue = {
   },
   page: pagesDe,
   partnerUpdate: partnerUpdatesDe,
+  mail: mailDe,
+  shares: sharesDe,
   calendar: {
     pullWindow: 'Entnahmefenster: {{project}}',
     where: '{{project}}, Kokon vom {{layDate}}',

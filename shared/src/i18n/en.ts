@@ -1,6 +1,8 @@
 import type { Widen } from './catalogue-shape.js';
 import { pagesEn } from './pages/index.js';
 import { partnerUpdatesEn } from './partner-updates.js';
+import { mailEn } from './mail.js';
+import { sharesEn } from './shares.js';
 
 /**
  * Every word for a shared state, in English. Keys are the shared enums' own values, so a new value
@@ -327,6 +329,10 @@ export const en = {
   page: pagesEn,
   /** What partners read when something is recorded in their project (in-app and e-mail). */
   partnerUpdate: partnerUpdatesEn,
+  /** The e-mails about an account and its access (confirmation, reset, invitation, security notices). */
+  mail: mailEn,
+  /** How shares were worked out and what changed (shares page, statement). */
+  shares: sharesEn,
   calendar: {
     pullWindow: 'Pull window: {{project}}',
     where: '{{project}}, sac laid {{layDate}}',
