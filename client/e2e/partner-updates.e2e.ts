@@ -75,8 +75,12 @@ describe('partner updates', () => {
 
       // She records it as failed on the sac page, with her own words, and reads first what Tomasz will get.
       await k.goto(`${BASE_URL}/sacs/${sac.id}`);
+      await poll(() => k.getByTestId('sac-day-number').isVisible()).toBe(true);
+      // Where the form waits behind its own button, she opens it first.
+      const opener = k.getByRole('button', { name: 'Record that the sac failed' });
+      if (await opener.count()) await opener.click();
       const form = k.getByRole('form', { name: 'The sac failed' });
-      await form.getByLabel('The sac failed', { exact: true }).click();
+      await form.getByRole('combobox', { name: 'The sac failed' }).click();
       await k.getByRole('option', { name: 'Infertile' }).click();
       await form.getByLabel(/^Your message to the partners/).fill(MESSAGE);
       await form.getByRole('button', { name: 'Show what the partners will read' }).click();

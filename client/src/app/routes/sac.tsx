@@ -3,7 +3,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { Link, type LoaderFunctionArgs } from 'react-router';
 import { PageHeader } from '@/components/ui/page-header';
 import { PageLoader } from '@/components/ui/page-loader';
-import { formatDate } from '@/lib/dates';
+import { useWords } from '@/lib/i18n';
 import { paths } from '@/config/paths';
 import { projectQueries } from '@/features/projects/api/projects';
 import { broodQueries } from '@/features/sacs/api/brood';
@@ -40,6 +40,7 @@ export const clientLoader =
   };
 
 export function Component() {
+  const t = useWords();
   const { me, sac, project } = useSacPage();
   const opening = useOpening(sac.data ?? { id: '', opened: false });
   if (!me || sac.isPending) return <PageLoader />;
@@ -51,42 +52,42 @@ export function Component() {
   return (
     <Stack>
       <PageHeader
-        title={`Sac laid ${formatDate(s.layDate)}`}
+        title={t('page.sacs.laidOn', { date: s.layDate })}
         description={project.data ? `${project.data.title} · ${project.data.femaleAnimal.label} × ${project.data.maleAnimal.label}` : undefined}
         actions={
           <Group>
             {s.inIncubator && (
               <Button component={Link} to={paths.incubatorSac.href(s.id)}>
-                Incubator screen
+                {t('page.sacs.page.incubatorScreen')}
               </Button>
             )}
             <Anchor component={Link} to={paths.project.href(s.projectId)} size="sm">
-              Back to the project
+              {t('page.sacs.page.backToProject')}
             </Anchor>
           </Group>
         }
       />
       <SacOverview sac={s} timeZone={me.timeZone} temperatureUnit={me.temperatureUnit} />
-      <SectionCard title="Care log">
+      <SectionCard title={t('page.sacs.page.careLog')}>
         <CareLogList sacId={s.id} timeZone={me.timeZone} temperatureUnit={me.temperatureUnit} canStrike={s.may.log} />
       </SectionCard>
       {openable && (
-        <SectionCard title="Opening">
+        <SectionCard title={t('page.sacs.page.opening')}>
           <OpeningPanel sac={s} timeZone={me.timeZone} canEdit={s.may.pullAndOpen} />
         </SectionCard>
       )}
       {(opening.data?.keptBack ?? 0) > 0 && (
-        <SectionCard title="Eggs kept back" testId="kept-back-card">
+        <SectionCard title={t('page.sacs.page.keptBack')} testId="kept-back-card">
           <KeptBackPanel sacId={s.id} timeZone={me.timeZone} canLog={s.may.log} canEnd={s.may.edit} />
         </SectionCard>
       )}
       {s.opened && (
-        <SectionCard title="Brood">
+        <SectionCard title={t('page.sacs.page.brood')}>
           <BroodCounts sacId={s.id} timeZone={me.timeZone} canRecord={s.may.log} stage={s.broodStage} />
         </SectionCard>
       )}
       {s.may.edit && (
-        <SectionCard title="Incubation settings">
+        <SectionCard title={t('page.sacs.page.settings')}>
           <Stack>
             <SacSettingsForm sac={s} temperatureUnit={me.temperatureUnit} />
             {s.may.setIncubatorRights && <IncubatorRightsSwitch sac={s} />}

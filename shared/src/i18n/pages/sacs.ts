@@ -118,6 +118,15 @@ export const sacsEn = {
     rolledNow: 'Rolled now',
     pulledDone: 'Pulled: the first roll is counted from the pull.',
   },
+  page: {
+    incubatorScreen: 'Incubator screen',
+    backToProject: 'Back to the project',
+    careLog: 'Care log',
+    opening: 'Opening',
+    keptBack: 'Eggs kept back',
+    brood: 'Brood',
+    settings: 'Incubation settings',
+  },
 } as const;
 
 export const sacsDe: Widen<typeof sacsEn> = {
@@ -244,5 +253,14 @@ export const sacsDe: Widen<typeof sacsEn> = {
     pullNotMine: 'Die Entnahme dieses Kokons trägt der Halter ein.',
     rolledNow: 'Jetzt gedreht',
     pulledDone: 'Entnommen: Das erste Drehen zählt ab der Entnahme.',
+  },
+  page: {
+    incubatorScreen: 'Inkubator-Ansicht',
+    backToProject: 'Zurück zum Projekt',
+    careLog: 'Pflegeprotokoll',
+    opening: 'Öffnung',
+    keptBack: 'Zurückbehaltene Eier',
+    brood: 'Nachzucht',
+    settings: 'Inkubationseinstellungen',
   },
 };
