@@ -5,7 +5,7 @@ import { BASE_URL, DEMO_PASSWORD } from './browser';
  * Calls the API with the browser context's cookies (its session, plus the CSRF header as the app
  * sends it), to build a test's state without clicking through forms the test is not about.
  */
-export async function callApi<T = unknown>(context: BrowserContext, method: 'GET' | 'POST', path: string, body?: unknown): Promise<T> {
+export async function callApi<T = unknown>(context: BrowserContext, method: 'GET' | 'POST' | 'PATCH', path: string, body?: unknown): Promise<T> {
   const headers: Record<string, string> = {};
   if (method !== 'GET') headers['x-csrf-token'] = ((await (await context.request.get(`${BASE_URL}/api/auth/csrf`)).json()) as { csrfToken: string }).csrfToken;
   const res = await context.request.fetch(`${BASE_URL}/api${path}`, { method, headers, data: body });

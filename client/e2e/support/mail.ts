@@ -15,3 +15,33 @@ export async function invitationLink(address: string, title: string): Promise<st
   }
   throw new Error(`no invitation for ${title} to ${address}`);
 }
+
+/** A message in the mail sink as its REST API gives it (maildev `GET /api/email`; header names lower-cased). */
+export interface SinkMail {
+  id: string;
+  to: { address: string }[];
+  subject: string;
+  text?: string;
+  html?: string;
+}
+
+/** Every message in the mail sink to `address`, oldest first. */
+export async function mailsTo(address: string): Promise<SinkMail[]> {
+  const mails = (await (await fetch(`${MAIL_API}/api/email`)).json()) as SinkMail[];
+  return mails.filter((m) => m.to.some((t) => t.address === address));
+}
+
+/**
+ * The header fields of a message as it was sent, read from its raw source (the sink's parsed
+ * `headers` leave some out, e.g. List-Unsubscribe): unfolded as RFC 5322 §2.2.3 says, names lower-cased.
+ */
+export async function rawHeaders(id: string): Promise<Record<string, string>> {
+  const source = await (await fetch(`${MAIL_API}/api/email/${encodeURIComponent(id)}/source`)).text();
+  const head = source.split(/\r?\n\r?\n/)[0].replace(/\r?\n[ \t]+/g, ' ');
+  const fields: Record<string, string> = {};
+  for (const line of head.split(/\r?\n/)) {
+    const colon = line.indexOf(':');
+    if (colon > 0) fields[line.slice(0, colon).trim().toLowerCase()] = line.slice(colon + 1).trim();
+  }
+  return fields;
+}
