@@ -39,13 +39,19 @@ export function Component() {
   if (sac.isError) return <Alert color="clay">{sac.error.message}</Alert>;
   return (
     <>
-      <DocumentTitle title={`At the incubator: ${project.data?.title ?? `sac laid ${formatDate(sac.data.layDate)}`}`} />
+      <DocumentTitle
+        title={
+          project.data
+            ? t('page.sacs.incubator.pageTitle', { title: project.data.title })
+            : t('page.sacs.incubator.pageTitleLaid', { date: formatDate(sac.data.layDate) })
+        }
+      />
       <Group justify="space-between" mb="xs">
         <Anchor component={Link} to={paths.incubator.href()} size="sm">
-          All sacs in the incubator
+          {t('page.sacs.incubator.allSacs')}
         </Anchor>
         <Anchor component={Link} to={paths.sac.href(sacId)} size="sm">
-          Full care log
+          {t('page.sacs.incubator.fullCareLog')}
         </Anchor>
       </Group>
       <IncubatorEntry

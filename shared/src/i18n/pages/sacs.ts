@@ -67,6 +67,10 @@ export const sacsEn = {
     dayStage: 'Day {{day}} · {{stage}}',
     dayStageIn: 'Day {{day}} · {{stage}} · {{container}}',
     noRolls: 'No rolls now; checks and readings go on.',
+    allSacs: 'All sacs in the incubator',
+    fullCareLog: 'Full care log',
+    pageTitle: 'At the incubator: {{title}}',
+    pageTitleLaid: 'At the incubator: sac laid {{date}}',
   },
   card: {
     alive_one: '{{count}} alive',
@@ -343,6 +347,10 @@ export const sacsDe: Widen<typeof sacsEn> = {
     dayStage: 'Tag {{day}} · {{stage}}',
     dayStageIn: 'Tag {{day}} · {{stage}} · {{container}}',
     noRolls: 'Gerade kein Drehen; Kontrollen und Messwerte gehen weiter.',
+    allSacs: 'Alle Kokons im Inkubator',
+    fullCareLog: 'Ganzes Pflegeprotokoll',
+    pageTitle: 'Am Inkubator: {{title}}',
+    pageTitleLaid: 'Am Inkubator: Kokon vom {{date}}',
   },
   card: {
     alive_one: '{{count}} lebend',
