@@ -1,7 +1,8 @@
 import { Group, SimpleGrid, Stack, Switch, Text } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { useState } from 'react';
-import { TEXT_LIMITS, formatTemperature, type SacResponse, type TemperatureUnit } from '@broodsilk/shared';
+import { TEXT_LIMITS, type SacResponse, type TemperatureUnit } from '@broodsilk/shared';
+import { formatTemperature } from '@/lib/numbers';
 import { NumberField } from '@/components/fields/number-field';
 import { TextField } from '@/components/fields/text-field';
 import { textRule } from '@/components/fields/text-rule';
