@@ -6,6 +6,9 @@ export interface FieldError {
   message: string;
   /** Set on plausibility warnings (422): which warning this row is, to acknowledge it. */
   code?: PlausibilityWarningCode;
+  /** The catalogue key of `message` and its values, so it can be said in the reader's language. */
+  key?: string;
+  values?: Record<string, string | number>;
 }
 
 /** The single JSON shape of every error the API returns. */
@@ -16,4 +19,7 @@ export interface ApiErrorBody {
   details?: FieldError[];
   /** A machine-readable reason where the client offers a next step (e.g. `EMAIL_NOT_CONFIRMED`). */
   reason?: string;
+  /** The catalogue key of `message` and its values (see `FieldError.key`). */
+  key?: string;
+  values?: Record<string, string | number>;
 }
