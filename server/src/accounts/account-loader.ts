@@ -20,11 +20,9 @@ export async function loadAccounts(em: EntityManager, projects: Project[]): Prom
   const members = await em.find(ProjectMember, { project: { $in: ids } }, { populate: ['user'], orderBy: { createdAt: 'asc' } });
   const terms = await termsInForceOf(em, ids);
   const sacs = await sacCountsByProject(em, ids);
-  const rows = await em.find(
-    LedgerEntryRow,
-    { project: { $in: ids } },
-    { populate: ['party', 'fromParty', 'toParty', 'target', 'recordedBy'], orderBy: { seq: 'asc' } },
-  );
+  // Parties are members loaded just above and targets are rows of the same result: the identity map
+  // resolves both, so joining them again would only hydrate every row a second time.
+  const rows = await em.find(LedgerEntryRow, { project: { $in: ids } }, { populate: ['recordedBy'], orderBy: { seq: 'asc' } });
   const membersOf = byProject(members);
   const rowsOf = byProject(rows);
   return new Map(

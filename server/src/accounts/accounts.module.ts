@@ -31,7 +31,7 @@ export class AccountsModule implements OnModuleInit {
 
   onModuleInit(): void {
     // Stage `shares-settled`: nothing owed in young or money (see balances.mapper isSettled).
-    this.facts.register(async (em, projectIds) => {
+    this.facts.register('sharesSettled', async (em, projectIds) => {
       const accounts = await loadAccounts(em, await em.find(Project, { id: { $in: projectIds } }));
       return new Map([...accounts].map(([id, view]) => [id, { sharesSettled: isSettled(view) }]));
     });

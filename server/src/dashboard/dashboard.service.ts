@@ -6,6 +6,8 @@ import {
   todayIn,
   type DashboardResponse,
   type DashboardSac,
+  type DashboardSacView,
+  type SacResponse,
   type ProjectSummary,
   type PullWindowEvent,
   type RollStatus,
@@ -25,10 +27,15 @@ import { SAC_POPULATE, SacViewsService } from '../sacs/sac-views.service';
 import { Clock } from '../common/clock';
 import { loadAccounts } from '../accounts/account-loader';
 import { accountTodos } from '../accounts/account-todos';
+import { isSettled } from '../accounts/balances.mapper';
 import { termsAwaitingAcceptance } from '../projects/terms-todos';
 
 const ROLL_ORDER: Record<RollStatus, number> = { overdue: 0, due: 1, 'due-soon': 2, upcoming: 3 };
 const MONEY = new Set(['owner', 'partner']);
+
+function toDashboardSacView({ id, layDate, dayNumber, pullWindow, roll, readingAlerts, band }: SacResponse): DashboardSacView {
+  return { id, layDate, dayNumber, pullWindow, roll, readingAlerts, band };
+}
 
 /** Opens today, closes today, or open in between: each a reason to look at the sac today. */
 function pullWindowEvents(x: DashboardSac, today: string): (DashboardSac & { event: PullWindowEvent })[] {
@@ -59,7 +66,9 @@ export class DashboardService {
       { id: { $in: [...roleOf.keys()] } },
       { populate: ['owner', 'female.species', 'male.species'], orderBy: { createdAt: 'desc', id: 'asc' } },
     );
-    const standings = await this.stages.standings(projects);
+    // Every account once: for the money to-dos and for the stage's "shares settled" fact.
+    const accounts = await loadAccounts(this.em, projects);
+    const standings = await this.stages.standings(projects, { sharesSettled: new Map([...accounts].map(([id, v]) => [id, isSettled(v)])) });
     const partners = await partnerNamesOf(
       this.em,
       projects.map((p) => p.id),
@@ -69,22 +78,18 @@ export class DashboardService {
 
     const sacs = await this.em.find(Sac, { project: { $in: [...openIds] }, outcome: 'in-progress' }, { populate: SAC_POPULATE });
     const responses = await this.views.build(this.em, sacs, viewer.timeZone, now, (projectId) => roleOf.get(projectId)!);
+    // A sac the keeper chose to leave with the mother has no pull window to watch.
+    const watchedWithMother = new Set(responses.filter((r) => !r.pulled && !r.leftWithMother).map((r) => r.id));
     const items: DashboardSac[] = sacs.map((s, i) => ({
       projectId: s.project.id,
       projectTitle: s.project.title,
       myRole: roleOf.get(s.project.id)!,
-      sac: responses[i],
+      sac: toDashboardSacView(responses[i]),
     }));
     const handsOn = items.filter((x) => isHandsOn(x.myRole));
-    // A sac the keeper chose to leave with the mother has no pull window to watch.
-    const withMother = (x: DashboardSac) => !x.sac.pulled && !x.sac.leftWithMother;
+    const withMother = (x: DashboardSac) => watchedWithMother.has(x.sac.id);
     const horizon = addDays(today, DASHBOARD_PULL_WINDOW_DAYS);
-    // Money to-dos for owners and partners: every account loaded with a fixed number of queries.
-    const views = await loadAccounts(
-      this.em,
-      projects.filter((p) => MONEY.has(roleOf.get(p.id)!)),
-    );
-    const accounts = [...views.values()].map((v) => accountTodos(v, viewer.id));
+    const todos = projects.filter((p) => MONEY.has(roleOf.get(p.id)!)).map((p) => accountTodos(accounts.get(p.id)!, viewer.id));
 
     return {
       today,
@@ -99,8 +104,8 @@ export class DashboardService {
           viewer.id,
           projects.map((p) => p.id),
         ),
-        handOversToConfirm: accounts.flatMap((a) => a.handOvers),
-        payments: accounts.flatMap((a) => a.payments),
+        handOversToConfirm: todos.flatMap((a) => a.handOvers),
+        payments: todos.flatMap((a) => a.payments),
       },
       openProjects: summaries.filter((s) => openIds.has(s.id)),
       upcomingPullWindows: items

@@ -15,7 +15,7 @@ import { ownBreeding } from '../species/species.mapper';
 import { Pairing } from './pairing.entity';
 import { struckPairings } from './pairings.mapper';
 import type { Project } from './project.entity';
-import { ProjectFactsRegistry } from './project-facts.registry';
+import { ProjectFactsRegistry, type KnownProjectFacts } from './project-facts.registry';
 import type { Animal } from '../animals/animal.entity';
 import { diedOn, lastMaleDiedOn, projectMales } from './project-males';
 
@@ -37,15 +37,18 @@ export class ProjectStageService {
     private readonly registry: ProjectFactsRegistry,
   ) {}
 
-  /** Projects need `female` and `male` loaded (ids and status; `male.species` for warnings). */
-  async standings(projects: readonly Project[]): Promise<Map<string, ProjectStanding>> {
+  /**
+   * Projects need `female` and `male` loaded (ids and status; `male.species` for warnings). Facts
+   * the caller already has (`known`) are not loaded again.
+   */
+  async standings(projects: readonly Project[], known: KnownProjectFacts = {}): Promise<Map<string, ProjectStanding>> {
     const ids = projects.map((p) => p.id);
     const out = new Map<string, ProjectStanding>();
     if (!ids.length) return out;
     const [pairings, molts, contributed] = await Promise.all([
       this.em.find(Pairing, { project: { $in: ids } }, { fields: ['project', 'male', 'startedAt', 'startedOn', 'outcome', 'corrects'] }),
       this.em.find(Molt, { animal: { $in: projects.map((p) => p.female.id) } }, { fields: ['animal', 'moltedOn'] }),
-      this.registry.collect(this.em, ids),
+      this.registry.collect(this.em, ids, known),
     ]);
     const struck = struckPairings(pairings);
     const inForce = pairings.filter((x) => !struck.has(x.id));

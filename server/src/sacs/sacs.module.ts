@@ -54,7 +54,7 @@ export class SacsModule implements OnModuleInit {
       const o = await em.findOne(SacOpening, openingId, { populate: ['sac'] });
       return !!o && (await em.count(ProjectMember, { project: o.sac.project.id, user: viewer.id })) > 0;
     });
-    this.facts.register(async (em, projectIds) => {
+    this.facts.register('sacs', async (em, projectIds) => {
       const sacs = await em.find(Sac, { project: { $in: projectIds } });
       const out = new Map<string, { sacs: ReturnType<typeof toSacFact>[] }>();
       for (const s of sacs) {

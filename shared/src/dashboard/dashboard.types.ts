@@ -7,12 +7,18 @@ import type { SacResponse } from '../sacs/sacs.types.js';
 /** Days ahead the dashboard looks for pull windows. */
 export const DASHBOARD_PULL_WINDOW_DAYS = 30;
 
+/**
+ * What a Today card shows of a sac; the whole sac is on its own page. (A keeper with hundreds of
+ * sacs would otherwise download every sac's full record on each visit.)
+ */
+export type DashboardSacView = Pick<SacResponse, 'id' | 'layDate' | 'dayNumber' | 'pullWindow' | 'roll' | 'readingAlerts' | 'band'>;
+
 /** A sac with the project it belongs to, as the dashboard lists it. */
 export interface DashboardSac {
   projectId: string;
   projectTitle: string;
   myRole: ProjectRole;
-  sac: SacResponse;
+  sac: DashboardSacView;
 }
 
 /** `open`: the window is open now (between the day it opens and the day it closes). */
