@@ -19,6 +19,7 @@ import { StatementsController } from './statements.controller';
 import { StatementsService } from './statements.service';
 import { loadAccounts } from './account-loader';
 import { isSettled } from './balances.mapper';
+import { projectsWithBrood } from './projects-with-brood';
 
 @Module({
   imports: [MikroOrmModule.forFeature([ProjectAccount, LedgerEntryRow, ShareBasis]), ProjectsModule, ActivityModule, MailModule],
@@ -32,7 +33,8 @@ export class AccountsModule implements OnModuleInit {
   onModuleInit(): void {
     // Stage `shares-settled`: nothing owed in young or money (see balances.mapper isSettled).
     this.facts.register('sharesSettled', async (em, projectIds) => {
-      const accounts = await loadAccounts(em, await em.find(Project, { id: { $in: projectIds } }));
+      const withBrood = [...(await projectsWithBrood(em, projectIds))];
+      const accounts = await loadAccounts(em, withBrood.length ? await em.find(Project, { id: { $in: withBrood } }) : []);
       return new Map([...accounts].map(([id, view]) => [id, { sharesSettled: isSettled(view) }]));
     });
   }

@@ -28,6 +28,7 @@ import { Clock } from '../common/clock';
 import { loadAccounts } from '../accounts/account-loader';
 import { accountTodos } from '../accounts/account-todos';
 import { isSettled } from '../accounts/balances.mapper';
+import { projectsWithBrood } from '../accounts/projects-with-brood';
 import { termsAwaitingAcceptance } from '../projects/terms-todos';
 
 const ROLL_ORDER: Record<RollStatus, number> = { overdue: 0, due: 1, 'due-soon': 2, upcoming: 3 };
@@ -66,9 +67,18 @@ export class DashboardService {
       { id: { $in: [...roleOf.keys()] } },
       { populate: ['owner', 'female.species', 'male.species'], orderBy: { createdAt: 'desc', id: 'asc' } },
     );
-    // Every account once: for the money to-dos and for the stage's "shares settled" fact.
-    const accounts = await loadAccounts(this.em, projects);
-    const standings = await this.stages.standings(projects, { sharesSettled: new Map([...accounts].map(([id, v]) => [id, isSettled(v)])) });
+    // Each account once: for the money to-dos (owners and partners) and the stage's "shares settled"
+    // fact (only a project with a brood can be settled).
+    const withBrood = await projectsWithBrood(
+      this.em,
+      projects.map((p) => p.id),
+    );
+    const accounts = await loadAccounts(
+      this.em,
+      projects.filter((p) => MONEY.has(roleOf.get(p.id)!) || withBrood.has(p.id)),
+    );
+    const settled = new Map(projects.map((p) => [p.id, withBrood.has(p.id) && isSettled(accounts.get(p.id)!)]));
+    const standings = await this.stages.standings(projects, { sharesSettled: settled });
     const partners = await partnerNamesOf(
       this.em,
       projects.map((p) => p.id),
