@@ -57,6 +57,20 @@ describe('readTypedDate', () => {
     expect(readTypedDate('14/03/2025', US)).toMatchObject({ kind: 'invalid', message: expect.stringContaining('no month 14') });
   });
 
+  it('reads a dotted date as the locales that write dots do, whatever the browser locale', () => {
+    // Reference: CLDR numeric date patterns as shipped in Intl. Every locale here writes 14 March 2025
+    // with dots, day first (or year first in Hungarian); a US browser reads each the same way.
+    for (const locale of ['de-DE', 'ru-RU', 'pl-PL', 'fi-FI', 'nb-NO', 'tr-TR', 'cs-CZ', 'hu-HU']) {
+      const written = new Intl.DateTimeFormat(locale, { day: '2-digit', month: '2-digit', year: 'numeric', timeZone: 'UTC' }).format(
+        new Date(Date.UTC(2025, 2, 14)),
+      );
+      expect(written).toContain('.');
+      for (const format of [US, GB]) expect(readTypedDate(written, format)).toEqual({ kind: 'date', iso: '2025-03-14' });
+    }
+    // A day that does not exist is still refused, in the dotted order's own words.
+    expect(readTypedDate('31.02.2025', US)).toMatchObject({ kind: 'invalid', message: expect.stringContaining('February 2025') });
+  });
+
   it('refuses two-digit years, mistyped years and words with a message saying how to type it', () => {
     expect(readTypedDate('14/03/25', GB)).toMatchObject({ kind: 'invalid', message: expect.stringContaining('four digits') });
     expect(readTypedDate('0203-01-01', GB)).toMatchObject({ kind: 'invalid', message: expect.stringContaining('0203 looks mistyped') });

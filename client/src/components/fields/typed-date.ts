@@ -1,6 +1,7 @@
 /**
- * Reading a date as typed. A text is read as ISO 8601 (YYYY-MM-DD) or in the browser locale's
- * numeric order (e.g. 14/03/2025 in en-GB, 03/14/2025 in en-US) with a four-digit year; anything
+ * Reading a date as typed. A text is read as ISO 8601 (YYYY-MM-DD), as a dotted date day first
+ * (14.03.2025, as every locale that writes dots does), or in the browser locale's numeric order
+ * (e.g. 14/03/2025 in en-GB, 03/14/2025 in en-US) with a four-digit year; anything
  * else is refused with a message. Nothing is guessed, completed or moved to the nearest allowed day.
  */
 import i18next from 'i18next';
@@ -82,8 +83,11 @@ export function readTypedDate(text: string, format: LocaleDateFormat = browserDa
   if (iso) [, y, m, d] = iso;
   else if (numeric) {
     const [, a, b, c] = numeric;
-    if (format.order === 'YMD') [y, m, d] = [a, b, c];
-    else if (format.order === 'MDY') [m, d, y] = [a, b, c];
+    // Dots are read as every locale that writes dates with them does (CLDR): day first, or year first
+    // when the year leads (14.03.2025, 2025. 03. 14.). Only slashes and hyphens follow the browser's order.
+    const order = !typed.includes('.') || /[/-]/.test(typed) ? format.order : a.length === 4 ? 'YMD' : 'DMY';
+    if (order === 'YMD') [y, m, d] = [a, b, c];
+    else if (order === 'MDY') [m, d, y] = [a, b, c];
     else [d, m, y] = [a, b, c];
   } else return refuse('notADate', { typed });
   if (y.length !== 4 || m.length > 2 || d.length > 2) return refuse('dateDigits');
