@@ -72,6 +72,7 @@ describe('dashboard', () => {
     const alone = await dashboard(loner);
     expect(alone).toMatchObject({
       openProjects: [],
+      openProjectCount: 0,
       upcomingPullWindows: [],
       dueToday: { rolls: [], pullWindows: [], readings: [], termsToAccept: [], handOversToConfirm: [], payments: [] },
       recentActivity: [],

@@ -5,6 +5,7 @@
  * a difference; nothing here is timed (speed is measured by `npm run bench`).
  */
 import request from 'supertest';
+import { DASHBOARD_OPEN_PROJECTS } from '@broodsilk/shared';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper, type SignedIn } from './support/users';
@@ -72,6 +73,12 @@ afterAll(async () => {
 describe('statements per read do not grow with the data', () => {
   it('counts statements at all (the counter is wired to the driver)', async () => {
     expect(await cost(small.who, '/api/dashboard')).toBeGreaterThan(0);
+  });
+
+  it('the dashboard lists the newest open projects and counts them all (the projects page has the rest)', async () => {
+    const res = await http().get('/api/dashboard').set('Authorization', big.who.bearer).expect(200);
+    expect(res.body.openProjectCount).toBe(40);
+    expect(res.body.openProjects.map((p: { id: string }) => p.id)).toEqual(big.projectIds.slice().reverse().slice(0, DASHBOARD_OPEN_PROJECTS));
   });
 
   it.each(['/api/dashboard', '/api/projects'])('%s: 2 projects cost what 40 cost', async (path) => {

@@ -1,6 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
 import {
+  DASHBOARD_OPEN_PROJECTS,
   DASHBOARD_PULL_WINDOW_DAYS,
   addDays,
   todayIn,
@@ -8,11 +9,9 @@ import {
   type DashboardSac,
   type DashboardSacView,
   type SacResponse,
-  type ProjectSummary,
   type PullWindowEvent,
   type RollStatus,
   isHandsOn,
-  isProjectOpen,
 } from '@broodsilk/shared';
 import type { AuthUser } from '../common/auth-user';
 import { ProjectMember } from '../projects/project-member.entity';
@@ -62,29 +61,29 @@ export class DashboardService {
     const today = todayIn(viewer.timeZone, now);
     const memberships = await this.em.find(ProjectMember, { user: viewer.id });
     const roleOf = new Map(memberships.map((m) => [m.project.id, m.role]));
-    const projects = await this.em.find(
-      Project,
-      { id: { $in: [...roleOf.keys()] } },
-      { populate: ['owner', 'female.species', 'male.species'], orderBy: { createdAt: 'desc', id: 'asc' } },
-    );
-    // Each account once: for the money to-dos (owners and partners) and the stage's "shares settled"
-    // fact (only a project with a brood can be settled).
+    const projects = await this.em.find(Project, { id: { $in: [...roleOf.keys()] } }, { orderBy: { createdAt: 'desc', id: 'asc' } });
+    // Open: neither closed nor ended early (the stage's first two rules, what isProjectOpen reads from a
+    // stage), known without deriving any stage; only the listed ones get theirs.
+    const open = projects.filter((p) => !p.closedOn && !p.endedEarlyReason);
+    const listed = open.slice(0, DASHBOARD_OPEN_PROJECTS);
+    await this.em.populate(listed, ['owner', 'female.species', 'male.species']);
+    // Each account once: for the money to-dos (owners and partners, every project) and the listed
+    // projects' "shares settled" fact (only a project with a brood can be settled).
     const withBrood = await projectsWithBrood(
       this.em,
-      projects.map((p) => p.id),
+      listed.map((p) => p.id),
     );
     const accounts = await loadAccounts(
       this.em,
       projects.filter((p) => MONEY.has(roleOf.get(p.id)!) || withBrood.has(p.id)),
     );
-    const settled = new Map(projects.map((p) => [p.id, withBrood.has(p.id) && isSettled(accounts.get(p.id)!)]));
-    const standings = await this.stages.standings(projects, { sharesSettled: settled });
+    const settled = new Map(listed.map((p) => [p.id, withBrood.has(p.id) && isSettled(accounts.get(p.id)!)]));
+    const standings = await this.stages.standings(listed, { sharesSettled: settled });
     const partners = await partnerNamesOf(
       this.em,
-      projects.map((p) => p.id),
+      listed.map((p) => p.id),
     );
-    const summaries: ProjectSummary[] = projects.map((p) => toProjectSummary(p, standings.get(p.id)!.stage, roleOf.get(p.id)!, partners.get(p.id) ?? []));
-    const openIds = new Set(summaries.filter((s) => isProjectOpen(s.stage.stage)).map((s) => s.id));
+    const openIds = new Set(open.map((p) => p.id));
 
     const sacs = await this.em.find(Sac, { project: { $in: [...openIds] }, outcome: 'in-progress' }, { populate: SAC_POPULATE });
     const responses = await this.views.build(this.em, sacs, viewer.timeZone, now, (projectId) => roleOf.get(projectId)!);
@@ -117,7 +116,8 @@ export class DashboardService {
         handOversToConfirm: todos.flatMap((a) => a.handOvers),
         payments: todos.flatMap((a) => a.payments),
       },
-      openProjects: summaries.filter((s) => openIds.has(s.id)),
+      openProjects: listed.map((p) => toProjectSummary(p, standings.get(p.id)!.stage, roleOf.get(p.id)!, partners.get(p.id) ?? [])),
+      openProjectCount: open.length,
       upcomingPullWindows: items
         .filter((x) => withMother(x) && x.sac.pullWindow.state !== 'past' && x.sac.pullWindow.opensOn <= horizon)
         .sort((a, b) => a.sac.pullWindow.opensOn.localeCompare(b.sac.pullWindow.opensOn)),

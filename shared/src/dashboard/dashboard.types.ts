@@ -7,6 +7,9 @@ import type { SacResponse } from '../sacs/sacs.types.js';
 /** Days ahead the dashboard looks for pull windows. */
 export const DASHBOARD_PULL_WINDOW_DAYS = 30;
 
+/** Open projects the dashboard lists (newest first); the projects page lists them all. */
+export const DASHBOARD_OPEN_PROJECTS = 12;
+
 /**
  * What a Today card shows of a sac; the whole sac is on its own page. (A keeper with hundreds of
  * sacs would otherwise download every sac's full record on each visit.)
@@ -68,8 +71,10 @@ export interface DashboardResponse {
     handOversToConfirm: HandOverTodo[];
     payments: PaymentTodo[];
   };
-  /** Projects not closed or ended early, with their stage. */
+  /** The newest `DASHBOARD_OPEN_PROJECTS` projects not closed or ended early, with their stage. */
   openProjects: ProjectSummary[];
+  /** How many open projects there are in all. */
+  openProjectCount: number;
   /** Sacs still with the mother whose window is open or opens within 30 days; soonest first. */
   upcomingPullWindows: DashboardSac[];
   /** The viewer's own mature males, most urgent clock first. */

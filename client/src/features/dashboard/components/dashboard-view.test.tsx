@@ -1,6 +1,6 @@
 import { screen, within } from '@testing-library/react';
 import { afterEach, describe, expect, it } from 'vitest';
-import type { DashboardResponse, DashboardSac, RollStatus, SacResponse } from '@broodsilk/shared';
+import type { DashboardResponse, DashboardSac, ProjectSummary, RollStatus, SacResponse } from '@broodsilk/shared';
 import { PULLED_TEST_SAC } from '@/testing/sac-incubation-fields';
 import { renderWithProviders } from '@/testing/render';
 import { DashboardView } from './dashboard-view';
@@ -37,6 +37,7 @@ const data: DashboardResponse = {
     payments: [],
   },
   openProjects: [],
+  openProjectCount: 0,
   upcomingPullWindows: [item('Albopilosum pair', sac('d', null, 'not-yet'))],
   matureMales: [],
   recentActivity: [],
@@ -153,5 +154,33 @@ describe('DashboardView', () => {
       expect(within(screen.getByTestId('card-readings')).getByTestId('reading-alert')).toHaveTextContent('Temperatur 30,5 °C');
       expect(within(screen.getByTestId('card-rolls')).getByText('Kein Drehen fällig.')).toBeInTheDocument();
     });
+  });
+});
+
+describe('open projects card', () => {
+  const project = (n: number): ProjectSummary => ({
+    id: `p${n}`,
+    title: `Pair ${n}`,
+    stage: { stage: 'paired' },
+    myRole: 'owner',
+    owner: { id: 'me', name: 'Me' },
+    partners: [],
+    female: { id: `f${n}`, label: `F-${n}`, scientificName: 'Tliltocatl vagans' },
+    male: { id: `m${n}`, label: `M-${n}`, scientificName: 'Tliltocatl vagans' },
+    endedOn: null,
+    closedOn: null,
+    createdAt: '2026-11-01T00:00:00Z',
+    updatedAt: '2026-11-01T00:00:00Z',
+  });
+
+  it('links to all open projects when it lists only the newest', () => {
+    renderWithProviders(<DashboardView data={{ ...data, openProjects: [project(1), project(2)], openProjectCount: 40 }} timeZone="UTC" />);
+    const card = within(screen.getByTestId('card-projects'));
+    expect(card.getByRole('link', { name: 'All 40 open projects' })).toHaveAttribute('href', '/projects');
+  });
+
+  it('has no such link when it lists them all', () => {
+    renderWithProviders(<DashboardView data={{ ...data, openProjects: [project(1), project(2)], openProjectCount: 2 }} timeZone="UTC" />);
+    expect(within(screen.getByTestId('card-projects')).queryByRole('link', { name: /open projects/ })).toBeNull();
   });
 });

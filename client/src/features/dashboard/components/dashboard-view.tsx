@@ -33,7 +33,7 @@ export function DashboardView({ data, timeZone, temperatureUnit = 'C' }: { data:
       )}
       <SimpleGrid cols={{ base: 1, md: 2 }}>
         <UpcomingCard upcoming={data.upcomingPullWindows} />
-        <ProjectsCard projects={data.openProjects} />
+        <ProjectsCard projects={data.openProjects} count={data.openProjectCount} />
         <MalesCard males={data.matureMales} />
         <ActivityCard events={data.recentActivity} timeZone={timeZone} />
       </SimpleGrid>

@@ -8,8 +8,8 @@ import { paths } from '@/config/paths';
 import { SectionCard } from '@/components/ui/section-card';
 import { useWords } from '@/lib/i18n';
 
-/** Projects not closed or ended early, with their stage. */
-export function ProjectsCard({ projects }: { projects: ProjectSummary[] }) {
+/** The newest projects not closed or ended early, with their stage; the projects page has them all. */
+export function ProjectsCard({ projects, count }: { projects: ProjectSummary[]; count: number }) {
   const t = useWords();
   return (
     <SectionCard compact title={t('page.dashboard.projects.title')} testId="card-projects">
@@ -42,6 +42,11 @@ export function ProjectsCard({ projects }: { projects: ProjectSummary[] }) {
             ))}
           </Table.Tbody>
         </Table>
+      )}
+      {count > projects.length && (
+        <Anchor component={Link} to={paths.projects.href()} size="sm" mt="xs" display="inline-block">
+          {t('page.dashboard.projects.all', { count })}
+        </Anchor>
       )}
     </SectionCard>
   );
