@@ -65,10 +65,5 @@ async function digestSummary(tx: EntityManager, r: Recipient, now: Date): Promis
         planned.push({ at: p.factAt, title: reminderWords(p.kind, p.details, { reader: r, about: f.label }).title });
     }
   }
-  const unread = await tx.count(Notification, { user: r.userId, readAt: null });
-  return digestBody(
-    r,
-    planned.sort((a, b) => a.at.getTime() - b.at.getTime()),
-    unread,
-  );
+  return digestBody(r, planned, await tx.count(Notification, { user: r.userId, readAt: null }));
 }

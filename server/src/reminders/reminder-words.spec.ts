@@ -105,6 +105,15 @@ describe('reminder words in the reader’s language', () => {
     expect(digestBody(reader('en'), [], 0)).toBe('Nothing is planned for the next 24 hours.\n0 unread in your inbox.');
   });
 
+  it('lists the digest’s plan soonest first, each at its instant in the reader’s zone', () => {
+    const planned = [
+      { at: new Date('2026-03-14T10:00:00Z'), title: 'B' },
+      { at: new Date('2026-03-14T08:30:00Z'), title: 'A' },
+    ];
+    // CET is UTC+1 on 14 March 2026 (IANA tz database; see above).
+    expect(digestBody(reader('en'), planned, 0)).toBe('14 Mar 2026, 09:30 (Europe/Berlin): A\n14 Mar 2026, 11:00 (Europe/Berlin): B\n0 unread in your inbox.');
+  });
+
   it('gives a reading in the reader’s unit and decimal mark', () => {
     const body = (lng: Language, unit: 'C' | 'F') =>
       reminderWords('reading-out-of-band', DETAILS['reading-out-of-band'], { reader: reader(lng, unit), about: ABOUT, layDate: LAY_DATE }).body;

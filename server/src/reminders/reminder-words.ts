@@ -53,11 +53,13 @@ export function reminderWords(kind: ReminderKind, details: Details, c: WordsCont
   return { title: t(`reminders.${kind}.title`, values), body };
 }
 
-/** The daily digest's body: what is planned (instant and title, in order), or that nothing is, then the unread count. */
+/** The daily digest's body: what is planned (instant and title, soonest first), or that nothing is, then the unread count. */
 export function digestBody(reader: ReminderReader, planned: { at: Date; title: string }[], unread: number): string {
   const t = wordsFor(reader.language);
   const f = reminderFormats(reader);
-  const lines = planned.map((p) => t('reminders.daily-digest.line', { at: f.instant(p.at), what: p.title }));
+  const lines = [...planned]
+    .sort((a, b) => a.at.getTime() - b.at.getTime())
+    .map((p) => t('reminders.daily-digest.line', { at: f.instant(p.at), what: p.title }));
   return [...(lines.length ? lines : [t('reminders.daily-digest.nothing')]), t('reminders.daily-digest.unread', { count: unread })].join('\n');
 }
 
