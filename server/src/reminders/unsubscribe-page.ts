@@ -25,13 +25,22 @@ const page = Handlebars.compile<{ lang: Language; title: string; message: string
 /** The page in one language: the account's for a good link, the browser's for a bad one. */
 export function unsubscribePage(lang: Language, s: UnsubscribeStep): string {
   const t = wordsFor(lang);
-  const button = t('reminders.unsubscribe.button');
   if (s.step === 'ask') {
     const kind = label(t, 'notificationKind', s.kind);
-    return page({ lang, title: t('reminders.unsubscribe.confirm', { kind }), message: reminderMailWords(lang, s.kind).why, button });
+    return page({
+      lang,
+      title: t('reminders.unsubscribe.confirm', { kind }),
+      message: reminderMailWords(lang, s.kind).why,
+      button: t('reminders.unsubscribe.button'),
+    });
   }
   if (s.step === 'done')
-    return page({ lang, title: button, message: t('reminders.unsubscribe.done', { kind: label(t, 'notificationKind', s.kind) }), button: null });
+    return page({
+      lang,
+      title: t('reminders.unsubscribe.doneTitle'),
+      message: t('reminders.unsubscribe.done', { kind: label(t, 'notificationKind', s.kind) }),
+      button: null,
+    });
   const message = t(s.step === 'bad-link' ? 'reminders.unsubscribe.badLink' : 'reminders.unsubscribe.accountGone');
   return page({ lang, title: t('reminders.unsubscribe.badLinkTitle'), message, button: null });
 }

@@ -58,6 +58,7 @@ export const remindersEn = {
   unsubscribe: {
     confirm: 'Stop e-mails for “{{kind}}”?',
     button: 'Stop these e-mails',
+    doneTitle: 'E-mails stopped',
     done: 'You will get no more e-mails for “{{kind}}”. In-app reminders stay as they were; change either in your settings.',
     badLinkTitle: 'This link does not work',
     badLink: 'This unsubscribe link is not valid (it may have been cut short or changed). Nothing was changed.',
@@ -117,6 +118,7 @@ export const remindersDe: Widen<typeof remindersEn> = {
   unsubscribe: {
     confirm: 'Keine E-Mails mehr zu „{{kind}}“?',
     button: 'Diese E-Mails abbestellen',
+    doneTitle: 'E-Mails abbestellt',
     done: 'Du bekommst keine E-Mails mehr zu „{{kind}}“. Erinnerungen in der App bleiben, wie sie waren; beides kannst du in deinen Einstellungen ändern.',
     badLinkTitle: 'Dieser Link funktioniert nicht',
     badLink: 'Dieser Abmeldelink ist ungültig (vielleicht wurde er abgeschnitten oder verändert). Es wurde nichts geändert.',
