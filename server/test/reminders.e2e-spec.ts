@@ -11,7 +11,8 @@ import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper, type SignedIn } from './support/users';
 import { addMember, createProject } from './support/projects';
 import { createSac, setTimeZone } from './support/sacs';
-import { mailsTo, waitForMail } from './support/mail-sink';
+import type { ParsedMail } from 'mailparser';
+import { mailsTo, readableText, waitForMail } from './support/mail-sink';
 import { rowCounts } from './support/row-counts';
 import { JOBS_SCHEMA } from '../src/jobs/jobs.service';
 import { REMINDER_QUEUE, type ReminderJob } from '../src/reminders/reminder-planner.service';
@@ -319,5 +320,67 @@ describe('inbox', () => {
     expect((await inbox(owner)).unread).toBe(0);
     expect((await inbox(caretaker)).unread).toBe(caretakerUnread);
     await http().post('/api/notifications/read-all').expect(401);
+  });
+});
+
+describe('in the reader’s language', () => {
+  // German names by number (Unicode CLDR de, format-wide), picked by luxon's Gregorian weekday and month.
+  const WEEKDAYS_DE = ['Montag', 'Dienstag', 'Mittwoch', 'Donnerstag', 'Freitag', 'Samstag', 'Sonntag'];
+  const MONTHS_DE = ['Januar', 'Februar', 'März', 'April', 'Mai', 'Juni', 'Juli', 'August', 'September', 'Oktober', 'November', 'Dezember'];
+  const unsubscribePath = (mail: ParsedMail) => new URL(/<([^>]+)>/.exec(mail.headerLines.find((h) => h.key === 'list-unsubscribe')!.line)![1]).pathname;
+
+  it('a German keeper reads her roll reminder, its unsubscribe page and her digest in German, dates in the German form', async () => {
+    const who = await registerKeeper(t.app, 'Greta', 'de');
+    await setTimeZone(t.app, who, 'Europe/Berlin');
+    const layDate = addDays(todayIn('UTC', new Date()), -28);
+    const p = await createProject(t.app, t.orm, who, { title: 'Nordpaar' });
+    const sac = await createSac(t.app, who, p.id, { layDate, pulledAt: new Date(Date.now() - 30 * 60_000).toISOString() });
+    const job = (await waiting(`sac:${sac.id}`)).find((j) => kindOf(j) === 'roll-due')!.data;
+    expect(await deliver(job)).toBe('sent');
+
+    const mail = await waitForMail(who.user.email, /Drehen fällig: Nordpaar/);
+    const words = readableText(mail);
+    expect(words).not.toMatch(/(?<![-\w])(reminders|maleClock|notificationKind)\.\w/);
+    expect(words.replace(/https?:\S+/g, '')).not.toMatch(/\b(due|Roll|sac|Open|Stop)\b/); // the links carry the kind's code
+    // Unicode CLDR de: medium date "dd.MM.y", short time "HH:mm"; the wall time from luxon on the IANA tz database.
+    const due = DateTime.fromISO(job.sendAt).setZone('Europe/Berlin');
+    expect(mail.text).toContain(
+      `Der Kokon vom ${DateTime.fromISO(layDate).toFormat('dd.MM.yyyy')} muss am ${due.toFormat('dd.MM.yyyy, HH:mm')} (Europe/Berlin)`,
+    );
+    expect(mail.text).toContain('Keine E-Mails mehr zu „Drehen wird fällig“');
+    expect(mail.html).toContain('<html lang="de">');
+    expect((await inbox(who)).items.find((n) => n.subject?.id === sac.id)?.title).toBe('Drehen fällig: Nordpaar');
+
+    // The page speaks the account's language, whatever the browser asks for.
+    const page = await http().get(unsubscribePath(mail)).set('Accept-Language', 'en-GB,en;q=0.9').expect(200);
+    expect(page.text).toContain('<html lang="de">');
+    expect(page.text).toContain('Keine E-Mails mehr zu „Drehen wird fällig“?');
+    const done = await http().post(unsubscribePath(mail)).type('form').send('List-Unsubscribe=One-Click').expect(200);
+    expect(done.text).toContain('Du bekommst keine E-Mails mehr zu „Drehen wird fällig“.');
+
+    await http().patch('/api/reminder-preferences').set('Authorization', who.bearer).send({ digestHour: 6 }).expect(200);
+    const [digest] = await waiting(`digest:${who.user.id}`);
+    vi.spyOn(t.app.get(Clock), 'now').mockReturnValue(digest.startAfter);
+    expect(await deliver(digest.data)).toBe('sent');
+    const day = DateTime.fromJSDate(digest.startAfter).setZone('Europe/Berlin');
+    const title = `Dein Tag: ${WEEKDAYS_DE[day.weekday - 1]}, ${day.day}. ${MONTHS_DE[day.month - 1]} ${day.year}`;
+    const digestMail = await waitForMail(who.user.email, new RegExp(`^Broodsilk: ${title}$`));
+    // CLDR plural rules, de: 1 is "one".
+    expect(readableText(digestMail)).toMatch(/\n1 ungelesene Nachricht in deinem Posteingang\./);
+  });
+
+  it('a broken link answers in the browser’s language (Accept-Language, RFC 9110 §12.5.4), English when it asks for none of ours', async () => {
+    const broken = '/api/unsubscribe/not-a-link';
+    const german = await http().get(broken).set('Accept-Language', 'fr-CH, de-CH;q=0.8, en;q=0.5').expect(400);
+    expect(german.type).toBe('text/html');
+    expect(german.text).toContain('<html lang="de">');
+    expect(german.text).toContain('Dieser Abmeldelink ist ungültig');
+    for (const asked of ['fr', '']) {
+      const english = await http().get(broken).set('Accept-Language', asked).expect(400);
+      expect(english.text).toContain('<html lang="en">');
+      expect(english.text).toContain('This unsubscribe link is not valid');
+    }
+    const posted = await http().post(broken).set('Accept-Language', 'de').type('form').send('List-Unsubscribe=One-Click').expect(400);
+    expect(posted.body.message).toMatch(/^Dieser Abmeldelink ist ungültig/);
   });
 });

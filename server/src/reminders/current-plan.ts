@@ -6,7 +6,7 @@ import { Notification } from './notification.entity';
 import { animalFactsOf, digestRecipients, sacFactsOf } from './reminder-facts';
 import { planAnimalReminders, planDigest, planSacReminders } from './planning/plan-reminders';
 import type { PlannedReminder, Recipient } from './planning/reminder-plan.types';
-import { MAIL_WORDS, formatInstantIn, reminderWords } from './reminder-words';
+import { digestBody, reminderWords } from './reminder-words';
 
 export interface CurrentPlan {
   plan: PlannedReminder[];
@@ -46,26 +46,24 @@ export async function currentPlan(tx: EntityManager, plannedFor: string, now: Da
   };
 }
 
-/** The digest's body: what is planned for the person in the next 24 hours, in their zone, and their unread count. */
+/** The digest's body: what is planned for the person in the next 24 hours, in their zone and language, and their unread count. */
 async function digestSummary(tx: EntityManager, r: Recipient, now: Date): Promise<string> {
   const memberships = await tx.find(ProjectMember, { user: r.userId, role: { $in: ['owner', 'caretaker'] } }, { fields: ['project'] });
   const sacIds = (await tx.find(Sac, { outcome: 'in-progress', project: { $in: memberships.map((m) => m.project.id) } }, { fields: ['id'] })).map((s) => s.id);
   const animalIds = (await tx.find(Animal, { recordedBy: r.userId, status: { $in: ['active', 'on-loan'] } }, { fields: ['id'] })).map((a) => a.id);
-  const lines: { at: Date; text: string }[] = [];
+  const planned: { at: Date; title: string }[] = [];
   for (const f of await sacFactsOf(tx, sacIds)) {
     for (const p of planSacReminders(f, now)) {
       if (p.userId === r.userId && p.factAt >= now && p.factAt.getTime() < now.getTime() + DAY_MS) {
-        lines.push({ at: p.factAt, text: reminderWords(p.kind, p.details, { timeZone: r.timeZone, about: f.projectTitle, layDate: f.layDate }).title });
+        planned.push({ at: p.factAt, title: reminderWords(p.kind, p.details, { reader: r, about: f.projectTitle, layDate: f.layDate }).title });
       }
     }
   }
   for (const f of await animalFactsOf(tx, animalIds, now)) {
     for (const p of planAnimalReminders(f, now)) {
       if (p.factAt >= now && p.factAt.getTime() < now.getTime() + DAY_MS)
-        lines.push({ at: p.factAt, text: reminderWords(p.kind, p.details, { timeZone: r.timeZone, about: f.label }).title });
+        planned.push({ at: p.factAt, title: reminderWords(p.kind, p.details, { reader: r, about: f.label }).title });
     }
   }
-  const unread = await tx.count(Notification, { user: r.userId, readAt: null });
-  const planned = lines.sort((a, b) => a.at.getTime() - b.at.getTime()).map((l) => `${formatInstantIn(l.at.toISOString(), r.timeZone)}: ${l.text}`);
-  return [...(planned.length ? planned : [MAIL_WORDS.digestNothing]), MAIL_WORDS.digestUnread(unread)].join('\n');
+  return digestBody(r, planned, await tx.count(Notification, { user: r.userId, readAt: null }));
 }

@@ -12,7 +12,7 @@ import { Notification } from './notification.entity';
 import { REMINDER_QUEUE, ReminderPlanner, type ReminderJob } from './reminder-planner.service';
 import { currentPlan } from './current-plan';
 import { claimSent } from './claim-sent';
-import { MAIL_WORDS, reminderWords } from './reminder-words';
+import { reminderMailWords, reminderWords } from './reminder-words';
 import { unsubscribeToken } from './unsubscribe-token';
 import type { PlannedReminder, Recipient } from './planning/reminder-plan.types';
 
@@ -62,7 +62,7 @@ export class ReminderDelivery implements OnModuleInit {
       if (r.sendAt.getTime() > now.getTime() + EARLY_MS) return 'moved';
       if (!(await claimSent(tx, r.key))) return 'already-sent';
       const to = recipients.get(r.userId)!;
-      const words = reminderWords(r.kind, r.details, { timeZone: to.timeZone, ...about });
+      const words = reminderWords(r.kind, r.details, { reader: to, ...about });
       if (channelSendsInApp(r.channel)) {
         tx.create(Notification, {
           user: tx.getReference(User, r.userId),
@@ -85,17 +85,18 @@ export class ReminderDelivery implements OnModuleInit {
     const base = this.app.publicUrl.replace(/\/$/, '');
     const unsubscribeUrl = `${base}/api/unsubscribe/${unsubscribeToken(this.app.jwtSecret, r.userId, r.kind)}`;
     const path = r.subject ? `/${r.subject.type === 'sac' ? 'sacs' : 'collection'}/${r.subject.id}` : '/';
-    const link = { url: `${base}${path}`, label: MAIL_WORDS.open };
+    const frame = reminderMailWords(to.language, r.kind);
     const { html, text } = renderNoticeMail({
+      lang: to.language,
       title: words.title,
       paragraphs: words.body.split('\n').filter(Boolean),
-      link,
-      why: MAIL_WORDS.why(r.kind),
-      unsubscribe: { url: unsubscribeUrl, label: MAIL_WORDS.unsubscribe(r.kind) },
+      link: { url: `${base}${path}`, label: frame.open },
+      why: frame.why,
+      unsubscribe: { url: unsubscribeUrl, label: frame.unsubscribe },
     });
     await this.outbox.enqueue(tx, {
       to: to.email,
-      subject: `${MAIL_WORDS.subjectPrefix}${words.title}`,
+      subject: frame.subject(words.title),
       html,
       text,
       headers: unsubscribeHeaders(unsubscribeUrl),

@@ -21,6 +21,8 @@ export function recipientOf(u: User, s: ReminderSettings | undefined): Recipient
     userId: u.id,
     email: u.email,
     timeZone: u.timeZone,
+    language: u.language,
+    temperatureUnit: u.temperatureUnit,
     channels: s?.channels ?? {},
     quietHours: s?.quietFrom != null && s.quietTo != null ? { from: s.quietFrom, to: s.quietTo } : null,
     overdueBreaksQuiet: s?.overdueBreaksQuiet ?? false,

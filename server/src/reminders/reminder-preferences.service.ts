@@ -1,6 +1,13 @@
-import { Injectable, NotFoundException } from '@nestjs/common';
+import { Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
-import { DEFAULT_REMINDER_CHANNEL, NOTIFICATION_KINDS, type NotificationKind, type ReminderChannel, type ReminderPreferences } from '@broodsilk/shared';
+import {
+  DEFAULT_REMINDER_CHANNEL,
+  NOTIFICATION_KINDS,
+  type Language,
+  type NotificationKind,
+  type ReminderChannel,
+  type ReminderPreferences,
+} from '@broodsilk/shared';
 import type { AuthUser } from '../common/auth-user';
 import { User } from '../users/user.entity';
 import { ReminderSettings } from './reminder-settings.entity';
@@ -46,16 +53,17 @@ export class ReminderPreferencesService {
     });
   }
 
-  /** Stops e-mails of one kind (an unsubscribe link): both → in-app, e-mail → off. */
-  async stopEmails(userId: string, kind: NotificationKind): Promise<void> {
-    await this.em.transactional(async (tx) => {
+  /** Stops e-mails of one kind (an unsubscribe link): both → in-app, e-mail → off. Returns the account's language, null when it is gone. */
+  async stopEmails(userId: string, kind: NotificationKind): Promise<Language | null> {
+    return this.em.transactional(async (tx) => {
       const user = await tx.findOne(User, userId);
-      if (!user) throw new NotFoundException({ message: 'The account this link was for no longer exists.' });
+      if (!user) return null;
       const s = (await tx.findOne(ReminderSettings, { user: userId })) ?? tx.create(ReminderSettings, { user });
       const now = s.channels[kind] ?? DEFAULT_REMINDER_CHANNEL;
       const next: ReminderChannel = now === 'both' ? 'in-app' : now === 'email' ? 'off' : now;
       this.changeChannels(s, { [kind]: next });
       await tx.flush();
+      return user.language;
     });
   }
 

@@ -1,9 +1,11 @@
+import { label, wordsFor, type Language, type NotificationKind, type Words } from '@broodsilk/shared';
 import type { ReminderKind } from './planning/reminder-plan.types';
-import { label, wordsFor, type MaleClockState, type NotificationKind } from '@broodsilk/shared';
+import { LOAN_NOTICE_DAYS, PULL_CLOSES_NOTICE_DAYS } from './planning/plan-reminders';
+import { reminderFormats, type ReminderFormats, type ReminderReader } from './reminder-formats';
 
 /**
- * The words of every reminder, in one place (to move to the message catalogue with the rest of
- * the interface's words). Times are shown in the recipient's zone, named, in a day-month-year order.
+ * The words of every reminder in its reader's language, from the catalogue's `reminders` section:
+ * dates in the reader's locale, instants in their zone (named), temperatures in their unit.
  */
 
 export interface ReminderWords {
@@ -13,80 +15,62 @@ export interface ReminderWords {
 
 /** What a reminder is about, as the words need it. */
 export interface WordsContext {
-  timeZone: string;
+  reader: ReminderReader;
   /** The project's title for a sac, the animal's label for an animal. */
   about: string;
   layDate?: string;
 }
 
-export function formatInstantIn(iso: string, timeZone: string): string {
-  const text = new Intl.DateTimeFormat('en-GB', { timeZone, dateStyle: 'medium', timeStyle: 'short', hourCycle: 'h23' }).format(new Date(iso));
-  return `${text} (${timeZone})`;
-}
-
-export function formatDay(date: string): string {
-  return new Intl.DateTimeFormat('en-GB', { timeZone: 'UTC', weekday: 'long', day: 'numeric', month: 'long', year: 'numeric' }).format(
-    new Date(`${date}T00:00:00Z`),
-  );
-}
-
 type Details = Record<string, string | number>;
 
-const WORDS: Record<ReminderKind, (d: Details, c: WordsContext) => ReminderWords> = {
-  'roll-due': (d, c) => ({
-    title: `Roll due: ${c.about}`,
-    body: `The sac laid ${c.layDate} is due for its next roll at ${formatInstantIn(String(d.due), c.timeZone)} (every ${d.intervalHours} h).`,
-  }),
-  'roll-overdue': (d, c) => ({
-    title: `Roll overdue: ${c.about}`,
-    body: `The roll of the sac laid ${c.layDate} was due at ${formatInstantIn(String(d.due), c.timeZone)} and no roll is logged since. Roll it and log it.`,
-  }),
-  'pull-window-opens': (d, c) => ({
-    title: `Pull window opens today: ${c.about}`,
-    body: `The sac laid ${c.layDate} may be pulled from today, ${formatDay(String(d.opensOn))}, until ${formatDay(String(d.closesOn))}.`,
-  }),
-  'pull-window-closes': (d, c) => ({
-    title: `Pull window closes in 2 days: ${c.about}`,
-    body: `The last day to pull the sac laid ${c.layDate} is ${formatDay(String(d.closesOn))}.`,
-  }),
-  'reading-out-of-band': (d, c) => ({
-    title: `Reading outside the target band: ${c.about}`,
-    body: `The reading at ${formatInstantIn(String(d.readAt), c.timeZone)} (${d.temperatureC === '' ? '' : `${d.temperatureC} °C`}${d.humidityPercent === '' ? '' : ` ${d.humidityPercent} %`}) is outside the band set for the sac laid ${c.layDate}. Check the incubator and its heat source.`,
-  }),
-  'male-clock': (d, c) => {
-    const key = d.state as Exclude<MaleClockState, 'fresh'>;
-    const t = wordsFor('en');
-    const state = { label: t(`maleClock.${key}.label`), hint: t(`maleClock.${key}.hint`) };
-    return { title: `Male clock: ${c.about} — ${state.label}`, body: `From ${formatDay(String(d.from))}: ${state.hint}` };
-  },
-  'female-molted': (d, c) => ({
-    title: `Molted after pairing: ${c.about}`,
-    body: `${c.about} molted on ${formatDay(String(d.moltedOn))}, after her pairing on ${formatDay(String(d.pairedOn))}; a molt sheds the stored sperm, so that pairing no longer counts.`,
-  }),
-  'loan-due-back': (d, c) => ({
-    title: `Due back in 7 days: ${c.about}`,
-    body: `${c.about} is due back from the loan on ${formatDay(String(d.dueBackOn))}. Agree the journey with the other keeper and follow the rules for moving live animals where you both live.`,
-  }),
-  'daily-digest': (d) => ({ title: `Your day: ${formatDay(String(d.date))}`, body: String(d.summary ?? '') }),
+const text = (v: string | number | undefined): string => String(v ?? '');
+
+/** The reading's temperature and humidity, whichever it has (the planner passes '' for the other). */
+function readingOf(d: Details, f: ReminderFormats): string {
+  const parts = [d.temperatureC === '' ? null : f.temperature(Number(d.temperatureC)), d.humidityPercent === '' ? null : f.percent(Number(d.humidityPercent))];
+  return parts.filter(Boolean).join(', ');
+}
+
+/** Each kind's values for its entry `reminders.<kind>` (its title and body take the same ones); `count` picks the plural. */
+const VALUES: Record<ReminderKind, (d: Details, f: ReminderFormats, t: Words) => Record<string, string | number>> = {
+  'roll-due': (d, f) => ({ due: f.instant(text(d.due)), count: Number(d.intervalHours) }),
+  'roll-overdue': (d, f) => ({ due: f.instant(text(d.due)) }),
+  'pull-window-opens': (d, f) => ({ opensOn: f.day(text(d.opensOn)), closesOn: f.day(text(d.closesOn)) }),
+  'pull-window-closes': (d, f) => ({ closesOn: f.day(text(d.closesOn)), count: PULL_CLOSES_NOTICE_DAYS }),
+  'reading-out-of-band': (d, f) => ({ readAt: f.instant(text(d.readAt)), reading: readingOf(d, f) }),
+  'male-clock': (d, f, t) => ({ from: f.day(text(d.from)), state: t(`maleClock.${d.state}.label`), hint: t(`maleClock.${d.state}.hint`) }),
+  'female-molted': (d, f) => ({ moltedOn: f.day(text(d.moltedOn)), pairedOn: f.day(text(d.pairedOn)) }),
+  'loan-due-back': (d, f) => ({ dueBackOn: f.day(text(d.dueBackOn)), count: LOAN_NOTICE_DAYS }),
+  'daily-digest': (d, f) => ({ date: f.day(text(d.date)) }),
 };
 
 export function reminderWords(kind: ReminderKind, details: Details, c: WordsContext): ReminderWords {
-  return WORDS[kind](details, c);
+  const t = wordsFor(c.reader.language);
+  const f = reminderFormats(c.reader);
+  const values = { ...VALUES[kind](details, f, t), about: c.about, layDate: c.layDate ? f.date(c.layDate) : '' };
+  // The digest's body is its summary, already written for the reader (digestBody).
+  const body = kind === 'daily-digest' ? text(details.summary) : t(`reminders.${kind}.body`, values);
+  return { title: t(`reminders.${kind}.title`, values), body };
 }
 
-/** A reminder kind's name, as the settings page shows it (the reminder e-mails are written in English). */
-const kindName = (kind: NotificationKind) => label(wordsFor('en'), 'notificationKind', kind);
+/** The daily digest's body: what is planned (instant and title, soonest first), or that nothing is, then the unread count. */
+export function digestBody(reader: ReminderReader, planned: { at: Date; title: string }[], unread: number): string {
+  const t = wordsFor(reader.language);
+  const f = reminderFormats(reader);
+  const lines = [...planned]
+    .sort((a, b) => a.at.getTime() - b.at.getTime())
+    .map((p) => t('reminders.daily-digest.line', { at: f.instant(p.at), what: p.title }));
+  return [...(lines.length ? lines : [t('reminders.daily-digest.nothing')]), t('reminders.daily-digest.unread', { count: unread })].join('\n');
+}
 
-export const MAIL_WORDS = {
-  subjectPrefix: 'Broodsilk: ',
-  open: 'Open in Broodsilk',
-  why: (kind: NotificationKind) => `You get this because “${kindName(kind)}” is on in your reminder settings.`,
-  unsubscribe: (kind: NotificationKind) => `Stop e-mails for “${kindName(kind)}”`,
-  digestNothing: 'Nothing is planned for the next 24 hours.',
-  digestUnread: (n: number) => `${n} unread in your inbox.`,
-  unsubscribed: (kind: NotificationKind) =>
-    `You will get no more e-mails for “${kindName(kind)}”. In-app reminders stay as they were; change either in your settings.`,
-  unsubscribeConfirm: (kind: NotificationKind) => `Stop e-mails for “${kindName(kind)}”?`,
-  unsubscribeButton: 'Stop these e-mails',
-  badLink: 'This unsubscribe link is not valid (it may have been cut short or changed). Nothing was changed.',
-} as const;
+/** The frame of a reminder e-mail: the subject, the link's label, why it came and how to stop it. */
+export function reminderMailWords(lng: Language, kind: NotificationKind) {
+  const t = wordsFor(lng);
+  const name = label(t, 'notificationKind', kind);
+  return {
+    subject: (title: string) => t('reminders.mail.subject', { title }),
+    open: t('reminders.mail.open'),
+    why: t('reminders.mail.why', { kind: name }),
+    unsubscribe: t('reminders.mail.unsubscribe', { kind: name }),
+  };
+}

@@ -10,13 +10,14 @@ import { ReminderDelivery } from './reminder-delivery.service';
 import { ReminderPreferencesService } from './reminder-preferences.service';
 import { ReminderPreferencesController } from './reminder-preferences.controller';
 import { UnsubscribeController } from './unsubscribe.controller';
+import { UnsubscribeService } from './unsubscribe.service';
 import { NotificationsService } from './notifications.service';
 import { NotificationsController } from './notifications.controller';
 
 @Module({
   imports: [MikroOrmModule.forFeature([ReminderSent, Notification, ReminderSettings]), JobsModule, MailModule],
   controllers: [NotificationsController, ReminderPreferencesController, UnsubscribeController],
-  providers: [ReminderPlanner, ReminderDelivery, ReminderPreferencesService, NotificationsService],
+  providers: [ReminderPlanner, ReminderDelivery, ReminderPreferencesService, UnsubscribeService, NotificationsService],
   exports: [ReminderPlanner],
 })
 export class RemindersModule {}

@@ -2,6 +2,7 @@ import type { Catalogue } from './en.js';
 import { pagesDe } from './pages/index.js';
 import { partnerUpdatesDe } from './partner-updates.js';
 import { mailDe } from './mail.js';
+import { remindersDe } from './reminders.js';
 import { sharesDe } from './shares.js';
 
 /** Every word for a shared state, in German; the `Catalogue` type makes a missing key a compile error. */
@@ -345,6 +346,7 @@ export const de: Catalogue = {
   },
   page: pagesDe,
   partnerUpdate: partnerUpdatesDe,
+  reminders: remindersDe,
   mail: mailDe,
   shares: sharesDe,
   calendar: {

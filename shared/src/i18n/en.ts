@@ -2,6 +2,7 @@ import type { Widen } from './catalogue-shape.js';
 import { pagesEn } from './pages/index.js';
 import { partnerUpdatesEn } from './partner-updates.js';
 import { mailEn } from './mail.js';
+import { remindersEn } from './reminders.js';
 import { sharesEn } from './shares.js';
 
 /**
@@ -329,6 +330,7 @@ export const en = {
   page: pagesEn,
   /** What partners read when something is recorded in their project (in-app and e-mail). */
   partnerUpdate: partnerUpdatesEn,
+  reminders: remindersEn,
   /** The e-mails about an account and its access (confirmation, reset, invitation, security notices). */
   mail: mailEn,
   /** How shares were worked out and what changed (shares page, statement). */

@@ -6,6 +6,8 @@ const keeper: Recipient = {
   userId: 'u-keeper',
   email: 'keeper@example.test',
   timeZone: 'Europe/Berlin',
+  language: 'en',
+  temperatureUnit: 'C',
   channels: {},
   quietHours: null,
   overdueBreaksQuiet: false,

@@ -1,10 +1,13 @@
-import type { BroodStage, NotificationKind, PullWindow, ReminderChannel } from '@broodsilk/shared';
+import type { BroodStage, Language, NotificationKind, PullWindow, ReminderChannel, TemperatureUnit } from '@broodsilk/shared';
 
 /** A person a reminder may go to, with their choices. */
 export interface Recipient {
   userId: string;
   email: string;
   timeZone: string;
+  /** The words are written in this language, temperatures in this unit (their settings). */
+  language: Language;
+  temperatureUnit: TemperatureUnit;
   channels: Partial<Record<NotificationKind, ReminderChannel>>;
   quietHours: { from: number; to: number } | null;
   overdueBreaksQuiet: boolean;
