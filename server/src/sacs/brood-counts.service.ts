@@ -122,7 +122,7 @@ export class BroodCountsService {
       previous ? { alive: previous.alive, on: todayIn(timeZone, previous.at), estimated: previous.estimated } : null,
       joinedSince,
     );
-    if (check && 'refuse' in check) throw fieldError('alive', check.refuse);
+    if (check && 'refuse' in check) throw fieldError('alive', check.refuse.message);
     return acceptWarnings(check ? [check.warn] : [], dto);
   }
 }
