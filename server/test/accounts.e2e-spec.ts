@@ -32,6 +32,7 @@ describe('shares', () => {
     const res = await api(t.app).get(`/api/projects/${s.projectId}/shares`).set('Authorization', s.tomasz.bearer).expect(200);
     const body = res.body as SharesResponse;
     expect(body.terms).toMatchObject({ number: 1, currency: 'EUR', pricePerSpiderlingMinor: 500, failureClause: 'carries-over' });
+    expect(body.terms).not.toHaveProperty('failureClauseText'); // the code only: the client says it with the catalogue's failureClauseText
     expect(body.sacs).toHaveLength(1);
     expect(body.sacs[0]!.count).toBe(62);
     expect(body.sacs[0]!.parties.map((p) => [p.name, p.count])).toEqual([

@@ -65,7 +65,8 @@ describe('statement page data', () => {
     const other = await api(t.app).get(`/api/projects/${s.projectId}/statements/${s.lenaId}`).set('Authorization', s.tomasz.bearer);
     expect(other.status).toBe(403);
     expect(other.body.message).toBe('You can see only your own statement; the project owner sees every party’s.');
-    await api(t.app).get(`/api/projects/${s.projectId}/statements/${s.lenaId}`).set('Authorization', s.mira.bearer).expect(200);
+    const lena = await api(t.app).get(`/api/projects/${s.projectId}/statements/${s.lenaId}`).set('Authorization', s.mira.bearer).expect(200);
+    expect((lena.body as StatementResponse).hasShipment).toBe(false); // nothing was shipped to her: no shipping cautions
     await api(t.app).get(`/api/projects/${s.projectId}/statements/00000000-0000-4000-8000-000000000000`).set('Authorization', s.mira.bearer).expect(404);
   });
 });
