@@ -59,7 +59,9 @@ describe('a count may not exceed the last exact count', () => {
     expect(res.body.message).toBe(
       '220 were alive at the last count on 2025-10-19; 500 is more than that. Young are not added between counts: correct the earlier count if it was wrong.',
     );
-    expect(res.body.details).toEqual([{ field: 'alive', message: res.body.message }]);
+    expect(res.body.details).toEqual([
+      { field: 'alive', message: res.body.message, key: 'rule.count.aboveLast', values: { previous: 220, on: '2025-10-19', alive: 500 } },
+    ]);
     expect((await counts(sacId)).current).toBe(220);
     expect(await t.app.get(BroodService).currentCount(sacId)).toBe(220);
     // The opening's 220 viable young bound the first count as well.
@@ -87,6 +89,8 @@ describe('a count may not exceed the last exact count', () => {
         field: 'acknowledgedWarnings',
         code: 'count-above-estimate',
         message: 'About 150 were alive by the estimate on 2025-10-19; 180 is more than that. Save it if the estimate was low.',
+        key: 'rule.warning.count-above-estimate',
+        values: { previous: 150, on: '2025-10-19', alive: 180 },
       },
     ]);
     expect((await counts(sacId)).current).toBe(150);

@@ -1,5 +1,6 @@
 export * from './errors/api-error.js';
 export * from './errors/plausibility.js';
+export * from './errors/rule-text.js';
 export * from './auth/auth.types.js';
 export * from './auth/second-factor.types.js';
 export * from './users/users.types.js';

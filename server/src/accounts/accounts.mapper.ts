@@ -1,4 +1,4 @@
-import type { LedgerEntryResponse, PartyRef } from '@broodsilk/shared';
+import type { LedgerEntryResponse, LedgerProblem, PartyRef } from '@broodsilk/shared';
 import type { ProjectMember } from '../projects/project-member.entity';
 import type { LedgerEntryRow } from './ledger-entry.entity';
 import { acceptorOf, memberName, type AccountView } from './account-view';
@@ -11,7 +11,7 @@ const ref = (m: ProjectMember | null | undefined): PartyRef | null => (m ? { mem
 /** The ledger as the account page and statements show it, with each entry's status. */
 export function toEntryResponses(view: AccountView): LedgerEntryResponse[] {
   const inForce = new Set(view.balances.inForce);
-  const problems = new Map(view.balances.problems.map((p) => [p.entryId, p.message]));
+  const problems = new Map(view.balances.problems.map(({ entryId, ...said }) => [entryId, said]));
   const reversedTargets = new Set(view.data.rows.filter((r) => r.kind === 'correction' && r.target && inForce.has(r.id)).map((r) => r.target!.id));
   const arrivedFor = new Set(view.data.rows.filter((r) => r.kind === 'arrival' && inForce.has(r.id)).map((r) => r.target!.id));
   return view.data.rows.map((r, i) => toEntryResponse(r, i + 1, view, { inForce, problems, reversedTargets, arrivedFor }));
@@ -19,7 +19,7 @@ export function toEntryResponses(view: AccountView): LedgerEntryResponse[] {
 
 interface Lookups {
   inForce: Set<string>;
-  problems: Map<string, string>;
+  problems: Map<string, Omit<LedgerProblem, 'entryId'>>;
   reversedTargets: Set<string>;
   arrivedFor: Set<string>;
 }

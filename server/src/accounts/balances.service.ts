@@ -5,7 +5,6 @@ import { HAND_OVER_METHODS } from '@broodsilk/shared';
 import type { ProjectAccess } from '../projects/project-access.service';
 import { loadAccount } from './account-loader';
 import { toBalancesResponse } from './balances.mapper';
-import { SHIPPING_CAUTIONS } from './shipping-cautions';
 
 @Injectable()
 export class BalancesService {
@@ -23,7 +22,6 @@ export class BalancesService {
       methods: HAND_OVER_METHODS,
       handOverStage: terms?.handOverStage ?? null,
       shippingPaidBy: terms?.shippingPaidBy ?? null,
-      shippingCautions: [...SHIPPING_CAUTIONS],
     };
   }
 }

@@ -1,19 +1,6 @@
-import {
-  explainShares,
-  type FailureClause,
-  type SacShareChange,
-  type SacSharesView,
-  type SharesResponse,
-  type TermsSummary,
-  type Words,
-} from '@broodsilk/shared';
+import { explainShares, type SacShareChange, type SacSharesView, type SharesResponse, type TermsSummary, type Words } from '@broodsilk/shared';
 import type { TermsVersion } from '../projects/terms-version.entity';
 import { memberName, type AccountView, type SacShareState } from './account-view';
-
-export const FAILURE_CLAUSE_TEXT: Record<FailureClause, string> = {
-  'nothing-owed': 'If a sac fails, nothing is owed for it.',
-  'carries-over': 'If a sac fails, the deal carries over to the next sac.',
-};
 
 export function toTermsSummary(t: TermsVersion): TermsSummary {
   return {
@@ -21,7 +8,6 @@ export function toTermsSummary(t: TermsVersion): TermsSummary {
     pricePerSpiderlingMinor: t.pricePerSpiderlingMinor,
     currency: t.currency,
     failureClause: t.failureClause,
-    failureClauseText: FAILURE_CLAUSE_TEXT[t.failureClause],
     handOverStage: t.handOverStage,
     shippingPaidBy: t.shippingPaidBy,
     lines: t.lines

@@ -111,7 +111,7 @@ export function statementPdf(s: StatementResponse, reader: Reader): Promise<Buff
     heading(t('statement.failedHeading'));
     for (const n of s.failureNotes) line(n);
   }
-  if (s.shippingCautions.length) {
+  if (s.hasShipment) {
     heading(t('statement.shippingHeading'));
     for (const c of shippingCautions(t)) line(`- ${c}`);
   }

@@ -10,7 +10,6 @@ import type { ProjectMember } from '../projects/project-member.entity';
 import type { LedgerEntryRow } from './ledger-entry.entity';
 import { failureNote, toSacSharesView, toTermsSummary } from './shares.mapper';
 import { isProvisional } from './balances.mapper';
-import { SHIPPING_CAUTIONS } from './shipping-cautions';
 import { statementCsv } from './statement-csv';
 import { statementPdf } from './statement-pdf';
 import { Clock } from '../common/clock';
@@ -117,7 +116,7 @@ export class StatementsService {
         .filter((d) => d.fromPartyId === memberId || d.toPartyId === memberId)
         .map((d) => ({ ...d, fromName: view.nameOf(d.fromPartyId), toName: view.nameOf(d.toPartyId) })),
       failureNotes: view.sacs.map((s) => failureNote(view, s, t)).filter((x): x is string => !!x),
-      shippingCautions: entries.some((e) => e.kind === 'hand-over' && e.method === 'shipment') ? [...SHIPPING_CAUTIONS] : [],
+      hasShipment: entries.some((e) => e.kind === 'hand-over' && e.method === 'shipment'),
     };
   }
 }

@@ -12,7 +12,7 @@ export function acceptWarnings(found: readonly PlausibilityWarning[], request: A
   if (open.length) {
     throw new UnprocessableEntityException({
       message: open.length === 1 ? open[0]!.message : `Please check ${open.length} things before saving: ${open.map((w) => w.message).join(' ')}`,
-      details: open.map((w) => ({ field: WARNINGS_FIELD, code: w.code, message: w.message })),
+      details: open.map((w) => ({ field: WARNINGS_FIELD, code: w.code, message: w.message, key: w.key, values: w.values })),
     });
   }
   const reason = request.warningReason?.trim();

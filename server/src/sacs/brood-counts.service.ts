@@ -13,7 +13,7 @@ import { SacsService } from './sacs.service';
 import { CareLogService } from './care-log.service';
 import { Clock } from '../common/clock';
 import { assertNotFuture } from './sac-rules';
-import { fieldError } from '../common/field-errors';
+import { badRequest, fieldError } from '../common/field-errors';
 import { toBroodCountResponse } from './brood.mapper';
 import type { BroodCountDto } from './dto/brood-count.dto';
 import { broodStageLabel, label, wordsFor } from '@broodsilk/shared';
@@ -122,7 +122,7 @@ export class BroodCountsService {
       previous ? { alive: previous.alive, on: todayIn(timeZone, previous.at), estimated: previous.estimated } : null,
       joinedSince,
     );
-    if (check && 'refuse' in check) throw fieldError('alive', check.refuse);
+    if (check && 'refuse' in check) throw badRequest([{ field: 'alive', ...check.refuse }]);
     return acceptWarnings(check ? [check.warn] : [], dto);
   }
 }

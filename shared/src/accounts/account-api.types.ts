@@ -5,6 +5,7 @@ import type { FailureClause } from '../breeding/pairing.types.js';
 import type { SacOutcomeState } from '../sacs/sacs.types.js';
 import type { ShareChange } from './shares.js';
 import type { Debt, LedgerProblem, PartyBalance } from './balances.js';
+import type { RuleText } from '../errors/rule-text.js';
 import type { HandOverMethod, LedgerEntryKind } from './ledger.types.js';
 
 /** Kinds a person records through `POST …/entries` (arrivals and confirmations come from `…/confirm`). */
@@ -84,8 +85,8 @@ export interface LedgerEntryResponse {
   recordedBy: { id: string; name: string } | null;
   recordedAt: string;
   status: EntryStatus;
-  /** Why the entry does not count, when `left-out`. */
-  problem: string | null;
+  /** Why the entry does not count, when `left-out` (a `rule.ledger.*` sentence). */
+  problem: RuleText | null;
   /** Who still has to confirm (a hand-over's recipient, a money entry's other party). */
   awaitingConfirmationBy: PartyRef | null;
 }
@@ -128,8 +129,8 @@ export interface TermsSummary {
   number: number;
   pricePerSpiderlingMinor: number;
   currency: string;
+  /** Said by the catalogue's `failureClauseText.<clause>` in the reader's language. */
   failureClause: FailureClause;
-  failureClauseText: string;
   handOverStage: string;
   shippingPaidBy: string;
   lines: { memberId: string; name: string; weight: number; fixedCount: number; pickOrder: number }[];
@@ -167,8 +168,6 @@ export interface HandOverFormResponse {
   /** The terms' hand-over stage and who pays shipping, as codes the client names in the reader's words. */
   handOverStage: BroodStage | null;
   shippingPaidBy: ShippingPayer | null;
-  /** Cautions for shipping live invertebrates; shown for `shipment`. */
-  shippingCautions: string[];
 }
 
 export interface StatementResponse {
@@ -183,7 +182,8 @@ export interface StatementResponse {
   provisional: boolean;
   debts: BalancesResponse['debts'];
   failureNotes: string[];
-  shippingCautions: string[];
+  /** Young of this account were shipped: the statement adds the shipping cautions. */
+  hasShipment: boolean;
 }
 
 export interface CreatePayoutAccountRequest {

@@ -135,19 +135,27 @@ describe('balances', () => {
       { kind: 'arrival', id: 'a1', date: '2026-05-03', handOverId: 'h2', arrivedAlive: 2, arrivedDead: 0 },
       { kind: 'arrival', id: 'a2', date: '2026-05-03', handOverId: 'h2', arrivedAlive: 1, arrivedDead: 0 },
     ]);
-    const messages = b.problems.map((p) => `${p.entryId}: ${p.message}`);
-    expect(messages).toEqual([
-      'h1: Entry h1 appears twice; the later copy is ignored.',
-      'x1: Correction x1 refers to nope, which is not an earlier entry.',
-      'x3: Entry h1 was already corrected by x2; x3 is ignored.',
-      'm1: Payment m1 is in USD, but this account is kept in EUR.',
-      'm2: Payment m2 goes from a party to itself.',
-      'm3: Payment m3: the amount must be a whole number of minor units above 0.',
-      'c1: Cash-out c1: the project owner cannot cash out to themselves.',
-      'h2: Party dora has no share in the terms.',
-      'a1: Arrival a1 counts 2 young for a hand-over of 1; it is kept, but check the counts.',
-      'a2: Hand-over h2 already has an arrival count; a2 is ignored.',
+    expect(b.problems.map((p) => `${p.entryId}: ${p.key}`)).toEqual([
+      'h1: rule.ledger.duplicate',
+      'x1: rule.ledger.notEarlier',
+      'x3: rule.ledger.alreadyCorrected',
+      'm1: rule.ledger.otherCurrency',
+      'm2: rule.ledger.paymentToItself',
+      'm3: rule.ledger.paymentAmount',
+      'c1: rule.ledger.ownerCashOut',
+      'h2: rule.ledger.noShare',
+      'a1: rule.ledger.arrivalMismatch',
+      'a2: rule.ledger.arrivalTwice',
     ]);
+    // the values a sentence takes, and its English rendering
+    expect(b.problems[3]).toMatchObject({
+      values: { currency: 'USD', accountCurrency: 'EUR' },
+      message: 'This entry is in USD, but the account is kept in EUR.',
+    });
+    expect(b.problems[8]).toMatchObject({
+      values: { counted: 2, count: 1 },
+      message: 'This arrival counts 2 young for a hand-over of 1; it is kept, but check the counts.',
+    });
     expect(of(b, 'ben').handedOver).toBe(0);
     expect(of(b, 'dora')).toMatchObject({ share: 0, handedOver: 1, owedSpiderlings: -1 });
     expect(b.debts).toEqual([]);
@@ -233,7 +241,11 @@ describe('withdrawal check', () => {
     expect(checkWithdrawal(b, 3)).toEqual({ excess: 0, message: null });
     const over = checkWithdrawal(b, 5);
     expect(over.excess).toBe(2);
-    expect(over.message).toBe('This is 2 more than the 3 young still owed to this party (share 23; 20 handed over, 0 sold, 0 cashed out).');
+    expect(over).toMatchObject({
+      key: 'rule.withdrawal.excess',
+      values: { excess: 2, available: 3, share: 23, handedOver: 20, sold: 0, cashedOut: 0 },
+      message: 'This is 2 more than the 3 young still owed to this party (share 23; 20 handed over, 0 sold, 0 cashed out).',
+    });
     const drawn = of(bal([handOver('h1', 'ben', 25)]), 'ben'); // already 2 over
     expect(checkWithdrawal(drawn, 1).excess).toBe(1);
     expect(() => checkWithdrawal(b, 0)).toThrow(/above 0/);

@@ -1,4 +1,5 @@
 import type { LedgerEntry } from './ledger.types.js';
+import { ruleText, type RuleText } from '../errors/rule-text.js';
 
 export interface PartyBalance {
   partyId: string;
@@ -33,9 +34,9 @@ export interface Debt {
   currency: string;
 }
 
-export interface LedgerProblem {
+/** Why an entry is left out (or kept with a doubt): a `rule.ledger.*` sentence. */
+export interface LedgerProblem extends RuleText {
   entryId: string;
-  message: string;
 }
 
 export interface AccountBalances {
@@ -75,12 +76,14 @@ function emptyBalance(partyId: string, share: number): PartyBalance {
 }
 
 /** Which entries are in force: walking back from the newest, a correction in force reverses its target. */
+const problem = (entryId: string, key: string, values?: RuleText['values']): LedgerProblem => ({ entryId, ...ruleText(`ledger.${key}`, values) });
+
 function entriesInForce(entries: readonly LedgerEntry[], problems: LedgerProblem[]): { valid: LedgerEntry[]; inForce: Set<string> } {
   const position = new Map<string, number>();
   const valid: LedgerEntry[] = [];
   for (const e of entries) {
     if (position.has(e.id)) {
-      problems.push({ entryId: e.id, message: `Entry ${e.id} appears twice; the later copy is ignored.` });
+      problems.push(problem(e.id, 'duplicate'));
       continue;
     }
     position.set(e.id, valid.length);
@@ -91,9 +94,9 @@ function entriesInForce(entries: readonly LedgerEntry[], problems: LedgerProblem
     if (e.kind !== 'correction') continue;
     const target = position.get(e.reversesId);
     if (target === undefined || target >= position.get(e.id)!) {
-      problems.push({ entryId: e.id, message: `Correction ${e.id} refers to ${e.reversesId}, which is not an earlier entry.` });
+      problems.push(problem(e.id, 'notEarlier'));
     } else if (reversedBy.has(e.reversesId)) {
-      problems.push({ entryId: e.id, message: `Entry ${e.reversesId} was already corrected by ${reversedBy.get(e.reversesId)}; ${e.id} is ignored.` });
+      problems.push(problem(e.id, 'alreadyCorrected'));
     } else {
       reversedBy.set(e.reversesId, e.id);
     }
@@ -141,7 +144,7 @@ export function computeBalances(
   const party = (id: string, entryId: string) => {
     if (!balances.has(id)) {
       balances.set(id, emptyBalance(id, 0));
-      problems.push({ entryId, message: `Party ${id} has no share in the terms.` });
+      problems.push(problem(entryId, 'noShare'));
     }
     return balances.get(id)!;
   };
@@ -151,14 +154,14 @@ export function computeBalances(
   const { valid, inForce } = entriesInForce(entries, problems);
   const handOvers = new Map<string, { partyId: string; count: number }>();
   const arrived = new Set<string>();
-  const skip = (entryId: string, message: string) => problems.push({ entryId, message });
+  const skip = (entryId: string, key: string, values?: RuleText['values']) => problems.push(problem(entryId, key, values));
 
   for (const e of valid) {
     if (!inForce.has(e.id)) continue;
     switch (e.kind) {
       case 'hand-over': {
         if (!isCount(e.count)) {
-          skip(e.id, `Hand-over ${e.id}: the count must be a whole number above 0.`);
+          skip(e.id, 'handOverCount');
           inForce.delete(e.id);
           break;
         }
@@ -170,17 +173,17 @@ export function computeBalances(
       case 'arrival': {
         const h = handOvers.get(e.handOverId);
         if (!h) {
-          skip(e.id, `Arrival ${e.id} refers to ${e.handOverId}, which is not a hand-over in force.`);
+          skip(e.id, 'arrivalWithoutHandOver');
           inForce.delete(e.id);
           break;
         }
         if (!isMinor(e.arrivedAlive) || !isMinor(e.arrivedDead)) {
-          skip(e.id, `Arrival ${e.id}: counts must be whole numbers, 0 or more.`);
+          skip(e.id, 'arrivalCounts');
           inForce.delete(e.id);
           break;
         }
         if (arrived.has(e.handOverId)) {
-          skip(e.id, `Hand-over ${e.handOverId} already has an arrival count; ${e.id} is ignored.`);
+          skip(e.id, 'arrivalTwice');
           inForce.delete(e.id);
           break;
         }
@@ -189,18 +192,18 @@ export function computeBalances(
         b.arrivedAlive += e.arrivedAlive;
         b.arrivedDead += e.arrivedDead;
         if (e.arrivedAlive + e.arrivedDead !== h.count) {
-          skip(e.id, `Arrival ${e.id} counts ${e.arrivedAlive + e.arrivedDead} young for a hand-over of ${h.count}; it is kept, but check the counts.`);
+          skip(e.id, 'arrivalMismatch', { counted: e.arrivedAlive + e.arrivedDead, count: h.count });
         }
         break;
       }
       case 'sale': {
         if (!isCount(e.count) || !isMinor(e.priceMinor)) {
-          skip(e.id, `Sale ${e.id}: the count must be above 0 and the price a whole number of minor units.`);
+          skip(e.id, 'saleNumbers');
           inForce.delete(e.id);
           break;
         }
         if (e.currency !== currency) {
-          skip(e.id, `Sale ${e.id} is in ${e.currency}, but this account is kept in ${currency}.`);
+          skip(e.id, 'otherCurrency', { currency: e.currency, accountCurrency: currency });
           inForce.delete(e.id);
           break;
         }
@@ -212,12 +215,12 @@ export function computeBalances(
       case 'cash-out': {
         const price = e.pricePerSpiderlingMinor ?? pricePerSpiderlingMinor;
         if (!isCount(e.count) || !isMinor(price)) {
-          skip(e.id, `Cash-out ${e.id}: the count must be above 0 and the price a whole number of minor units.`);
+          skip(e.id, 'cashOutNumbers');
           inForce.delete(e.id);
           break;
         }
         if (e.partyId === ownerPartyId) {
-          skip(e.id, `Cash-out ${e.id}: the project owner cannot cash out to themselves.`);
+          skip(e.id, 'ownerCashOut');
           inForce.delete(e.id);
           break;
         }
@@ -229,17 +232,17 @@ export function computeBalances(
       }
       case 'money': {
         if (!isCount(e.amountMinor)) {
-          skip(e.id, `Payment ${e.id}: the amount must be a whole number of minor units above 0.`);
+          skip(e.id, 'paymentAmount');
           inForce.delete(e.id);
           break;
         }
         if (e.currency !== currency) {
-          skip(e.id, `Payment ${e.id} is in ${e.currency}, but this account is kept in ${currency}.`);
+          skip(e.id, 'otherCurrency', { currency: e.currency, accountCurrency: currency });
           inForce.delete(e.id);
           break;
         }
         if (e.fromPartyId === e.toPartyId) {
-          skip(e.id, `Payment ${e.id} goes from a party to itself.`);
+          skip(e.id, 'paymentToItself');
           inForce.delete(e.id);
           break;
         }
@@ -281,12 +284,8 @@ export function computeBalances(
   };
 }
 
-export interface WithdrawalCheck {
-  /** How many young more than the party is owed this would take; 0 when it fits. */
-  excess: number;
-  /** A sentence for the form, or null when it fits. */
-  message: string | null;
-}
+/** How many young more than the party is owed a withdrawal would take, and the sentence that says so (none when it fits). */
+export type WithdrawalCheck = { excess: 0; message: null } | ({ excess: number } & RuleText);
 
 /** Whether a hand-over, sale or cash-out of `count` young fits within what the party is still owed. */
 export function checkWithdrawal(balance: PartyBalance, count: number): WithdrawalCheck {
@@ -294,8 +293,6 @@ export function checkWithdrawal(balance: PartyBalance, count: number): Withdrawa
   const available = Math.max(0, balance.owedSpiderlings);
   const excess = Math.max(0, count - available);
   if (excess === 0) return { excess, message: null };
-  return {
-    excess,
-    message: `This is ${excess} more than the ${available} young still owed to this party (share ${balance.share}; ${balance.handedOver} handed over, ${balance.sold} sold, ${balance.cashedOut} cashed out).`,
-  };
+  const { share, handedOver, sold, cashedOut } = balance;
+  return { excess, ...ruleText('withdrawal.excess', { excess, available, share, handedOver, sold, cashedOut }) };
 }

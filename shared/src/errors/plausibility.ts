@@ -1,3 +1,5 @@
+import { ruleText, type RuleText } from './rule-text.js';
+
 /**
  * Plausibility warnings: a value that is possible but unusual. The server answers 422 with one
  * `details` row per warning (field `acknowledgedWarnings`, `code`, message) and writes nothing;
@@ -22,9 +24,14 @@ export const PLAUSIBILITY_WARNINGS = [
 ] as const;
 export type PlausibilityWarningCode = (typeof PLAUSIBILITY_WARNINGS)[number];
 
-export interface PlausibilityWarning {
+/** One warning: its code (to acknowledge it) and its sentence (`rule.warning.*`, see `RuleText`). */
+export interface PlausibilityWarning extends RuleText {
   code: PlausibilityWarningCode;
-  message: string;
+}
+
+/** The warning `code`, said by `rule.warning.<sentence>` (the code itself unless a code has several sentences). */
+export function plausibilityWarning(code: PlausibilityWarningCode, values: RuleText['values'], sentence: string = code): PlausibilityWarning {
+  return { code, ...ruleText(`warning.${sentence}`, values) };
 }
 
 /** What a request that can raise warnings carries to have them accepted. */

@@ -4,6 +4,7 @@ import { partnerUpdatesDe } from './partner-updates.js';
 import { mailDe } from './mail.js';
 import { remindersDe } from './reminders.js';
 import { sharesDe } from './shares.js';
+import { refusalsDe } from './refusals.js';
 
 /** Every word for a shared state, in German; the `Catalogue` type makes a missing key a compile error. */
 export const de: Catalogue = {
@@ -349,6 +350,7 @@ export const de: Catalogue = {
   reminders: remindersDe,
   mail: mailDe,
   shares: sharesDe,
+  rule: refusalsDe,
   calendar: {
     pullWindow: 'Entnahmefenster: {{project}}',
     where: '{{project}}, Kokon vom {{layDate}}',

@@ -4,6 +4,7 @@ import { partnerUpdatesEn } from './partner-updates.js';
 import { mailEn } from './mail.js';
 import { remindersEn } from './reminders.js';
 import { sharesEn } from './shares.js';
+import { refusalsEn } from './refusals.js';
 
 /**
  * Every word for a shared state, in English. Keys are the shared enums' own values, so a new value
@@ -335,6 +336,7 @@ export const en = {
   mail: mailEn,
   /** How shares were worked out and what changed (shares page, statement). */
   shares: sharesEn,
+  rule: refusalsEn,
   calendar: {
     pullWindow: 'Pull window: {{project}}',
     where: '{{project}}, sac laid {{layDate}}',

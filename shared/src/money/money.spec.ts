@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { formatMoney, formatMoneyCode, minorDigits, minorToMajor, parseMoney, toMinor } from './money.js';
+import { wordsFor } from '../i18n/words.js';
 
 // ISO 4217 (list one, "minor unit" column; values from memory of the published list):
 // JPY 0, EUR 2, USD 2, CHF 2, KWD 3.
@@ -68,18 +69,32 @@ describe('typed amounts', () => {
     expect(parseMoney(0.1 + 0.2, 'EUR')).toMatchObject({ ok: false }); // 0.30000000000000004: refused, not rounded
   });
 
+  // The refusal names its catalogue sentence and values; `message` is that sentence in English.
+  const refusal = (key: string, values: Record<string, string | number>, message: string) => ({ ok: false, key: `rule.money.${key}`, values, message });
+
   it('refuses more decimals than the currency has instead of rounding', () => {
-    expect(parseMoney('12.345', 'EUR')).toEqual({ ok: false, message: 'EUR has 2 decimal places; give at most 2.' });
-    expect(parseMoney('5.5', 'JPY')).toEqual({ ok: false, message: 'JPY has no smaller unit; give a whole amount.' });
-    expect(parseMoney('1.2345', 'KWD')).toEqual({ ok: false, message: 'KWD has 3 decimal places; give at most 3.' });
+    expect(parseMoney('12.345', 'EUR')).toEqual(refusal('decimals', { currency: 'EUR', count: 2 }, 'EUR has 2 decimal places; give at most 2.'));
+    expect(parseMoney('5.5', 'JPY')).toEqual(refusal('wholeOnly', { currency: 'JPY' }, 'JPY has no smaller unit; give a whole amount.'));
+    expect(parseMoney('1.2345', 'KWD')).toEqual(refusal('decimals', { currency: 'KWD', count: 3 }, 'KWD has 3 decimal places; give at most 3.'));
   });
 
-  it('refuses what is not a plain number', () => {
-    expect(parseMoney('', 'EUR')).toEqual({ ok: false, message: 'Give an amount.' });
-    expect(parseMoney('1,234.50', 'EUR')).toEqual({ ok: false, message: 'Give the amount as a plain number, such as 12.50.' });
-    expect(parseMoney('twelve', 'JPY')).toEqual({ ok: false, message: 'Give the amount as a plain number, such as 1250.' });
-    expect(parseMoney('1e3', 'EUR')).toMatchObject({ ok: false });
-    expect(parseMoney('99999999999999999', 'EUR')).toEqual({ ok: false, message: 'That amount is too large.' });
+  it("refuses what is not a plain number, with an example in the currency's own digits", () => {
+    expect(parseMoney('', 'EUR')).toEqual(refusal('required', {}, 'Give an amount.'));
+    expect(parseMoney('1,234.50', 'EUR')).toEqual(refusal('notNumber', { example: 12.5 }, 'Give the amount as a plain number, such as 12.5.'));
+    expect(parseMoney('twelve', 'JPY')).toEqual(refusal('notNumber', { example: 1250 }, 'Give the amount as a plain number, such as 1250.'));
+    expect(parseMoney('1e3', 'EUR')).toMatchObject({ ok: false, key: 'rule.money.notNumber' });
+    expect(parseMoney('99999999999999999', 'EUR')).toEqual(refusal('tooLarge', {}, 'That amount is too large.'));
+  });
+
+  it('is said in German from the same key and values, with the decimal comma (Duden: Komma als Dezimalzeichen)', () => {
+    const de = wordsFor('de');
+    const said = (typed: string, currency: string) => {
+      const r = parseMoney(typed, currency);
+      return r.ok ? null : de(r.key, r.values);
+    };
+    expect(said('12.345', 'EUR')).toBe('EUR hat 2 Nachkommastellen; gib höchstens 2 an.');
+    expect(said('abc', 'EUR')).toBe('Gib den Betrag als einfache Zahl an, etwa 12,5.');
+    expect(said('abc', 'JPY')).toBe('Gib den Betrag als einfache Zahl an, etwa 1250.');
   });
 
   it('converts a validated amount for sending, and throws rather than send a refused one', () => {

@@ -3,6 +3,7 @@
  * after the decimal point (EUR 2, JPY 0, KWD 3) is the ISO 4217 "minor unit", taken from the
  * runtime's ICU data through Intl so no table of our own can drift from it.
  */
+import { ruleText, type RuleText } from '../errors/rule-text.js';
 
 /** Digits after the decimal point of an ISO 4217 currency: EUR 2, JPY 0, KWD 3. Throws a RangeError for a malformed code. */
 export function minorDigits(currency: string): number {
@@ -28,10 +29,12 @@ export function formatMoneyCode(minor: number, currency: string): string {
   return `${currency} ${sign}${major}`;
 }
 
-/** A typed amount kept exactly as minor units, or refused with a message a form can show next to the field. */
-export type ParsedMoney = { ok: true; minor: number } | { ok: false; message: string };
+/** A typed amount kept exactly as minor units, or refused with a sentence a form can show next to the field. */
+export type ParsedMoney = { ok: true; minor: number } | ({ ok: false } & RuleText);
 
 const TYPED_AMOUNT = /^(-?)(\d+)(?:[.,](\d*))?$/;
+
+const refused = (key: string, values?: Record<string, string | number>): ParsedMoney => ({ ok: false, ...ruleText(`money.${key}`, values) });
 
 /**
  * "12.5" EUR → 1250. A comma counts as the decimal point. More decimals than the currency has
@@ -39,19 +42,14 @@ const TYPED_AMOUNT = /^(-?)(\d+)(?:[.,](\d*))?$/;
  */
 export function parseMoney(typed: number | string, currency: string): ParsedMoney {
   const text = (typeof typed === 'number' ? String(typed) : typed).trim();
-  if (text === '') return { ok: false, message: 'Give an amount.' };
+  if (text === '') return refused('required');
   const match = TYPED_AMOUNT.exec(text);
   const digits = minorDigits(currency);
-  if (!match) return { ok: false, message: `Give the amount as a plain number, such as ${digits === 0 ? '1250' : `12.${'5'.padEnd(digits, '0')}`}.` };
+  if (!match) return refused('notNumber', { example: digits === 0 ? 1250 : 12.5 });
   const [, sign, whole, fraction = ''] = match;
-  if (fraction.length > digits) {
-    return {
-      ok: false,
-      message: digits === 0 ? `${currency} has no smaller unit; give a whole amount.` : `${currency} has ${digits} decimal places; give at most ${digits}.`,
-    };
-  }
+  if (fraction.length > digits) return digits === 0 ? refused('wholeOnly', { currency }) : refused('decimals', { currency, count: digits });
   const minor = Number(`${sign}${whole}${fraction.padEnd(digits, '0')}`);
-  if (!Number.isSafeInteger(minor)) return { ok: false, message: 'That amount is too large.' };
+  if (!Number.isSafeInteger(minor)) return refused('tooLarge');
   return { ok: true, minor: minor === 0 ? 0 : minor };
 }
 

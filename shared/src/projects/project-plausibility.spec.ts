@@ -7,7 +7,12 @@ describe('secondProjectWarnings', () => {
     expect(secondProjectWarnings('MO-7', [])).toEqual([]);
     expect(secondProjectWarnings('MO-7', [{ title: 'Spring', sacs: [{ layDate: '2026-01-01', fate: 'failed' }] }])).toEqual([]);
     expect(secondProjectWarnings('MO-7', [{ title: 'Spring', sacs: [{ layDate: '2026-01-01', fate: 'developing' }] }])).toEqual([
-      { code: 'female-has-brood-in-progress', message: expect.stringContaining('MO-7 has a brood in progress in the open project "Spring"') },
+      {
+        code: 'female-has-brood-in-progress',
+        key: 'rule.warning.female-has-brood-in-progress',
+        values: { female: 'MO-7', project: 'Spring' },
+        message: expect.stringContaining('MO-7 has a brood in progress in the open project "Spring"'),
+      },
     ]);
   });
 });

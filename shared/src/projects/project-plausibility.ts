@@ -1,5 +1,5 @@
 import type { SacFact } from '../breeding/pairing.types.js';
-import type { PlausibilityWarning } from '../errors/plausibility.js';
+import { plausibilityWarning, type PlausibilityWarning } from '../errors/plausibility.js';
 
 export interface OpenProjectOfFemale {
   title: string;
@@ -13,10 +13,5 @@ export interface OpenProjectOfFemale {
 export function secondProjectWarnings(femaleLabel: string, open: readonly OpenProjectOfFemale[]): PlausibilityWarning[] {
   const busy = open.find((p) => p.sacs.some((s) => s.fate === 'developing'));
   if (!busy) return [];
-  return [
-    {
-      code: 'female-has-brood-in-progress',
-      message: `${femaleLabel} has a brood in progress in the open project "${busy.title}". Finish or end that project first, or save with a reason.`,
-    },
-  ];
+  return [plausibilityWarning('female-has-brood-in-progress', { female: femaleLabel, project: busy.title })];
 }

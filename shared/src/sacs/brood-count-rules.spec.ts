@@ -11,19 +11,30 @@ describe('checkCount', () => {
   });
   it('refuses more than the last exact count, giving both numbers and the date', () => {
     expect(checkCount(500, exact)).toEqual({
-      refuse:
-        '220 were alive at the last count on 2026-03-08; 500 is more than that. Young are not added between counts: correct the earlier count if it was wrong.',
+      refuse: {
+        key: 'rule.count.aboveLast',
+        values: { previous: 220, on: '2026-03-08', alive: 500 },
+        message:
+          '220 were alive at the last count on 2026-03-08; 500 is more than that. Young are not added between counts: correct the earlier count if it was wrong.',
+      },
     });
     expect(checkCount(221, exact)).not.toBeNull();
   });
   it('lets a kept-back batch that joined since raise the ceiling', () => {
     expect(checkCount(260, exact, 40)).toBeNull();
-    expect(checkCount(261, exact, 40)).toEqual({ refuse: expect.stringContaining('40 kept-back young joined the brood since (260 in all); 261 is more') });
+    expect(checkCount(261, exact, 40)).toMatchObject({
+      refuse: { key: 'rule.count.aboveLastJoined', message: expect.stringContaining('40 kept-back young joined the brood since (260 in all); 261 is more') },
+    });
   });
   it('only warns above an estimate', () => {
     const check = checkCount(240, { ...exact, estimated: true });
-    expect(check).toEqual({
-      warn: { code: 'count-above-estimate', message: expect.stringContaining('About 220 were alive by the estimate on 2026-03-08; 240') },
+    expect(check).toMatchObject({
+      warn: {
+        code: 'count-above-estimate',
+        key: 'rule.warning.count-above-estimate',
+        values: { previous: 220, on: '2026-03-08', alive: 240 },
+        message: expect.stringContaining('About 220 were alive by the estimate on 2026-03-08; 240'),
+      },
     });
   });
 });

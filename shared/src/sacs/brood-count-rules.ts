@@ -1,5 +1,6 @@
 import type { CalendarDate } from '../breeding/calendar-day.js';
-import type { PlausibilityWarning } from '../errors/plausibility.js';
+import { plausibilityWarning, type PlausibilityWarning } from '../errors/plausibility.js';
+import { ruleText, type RuleText } from '../errors/rule-text.js';
 
 /** The count a new count is measured against: the latest one before it that is not struck. */
 export interface PreviousCount {
@@ -10,7 +11,7 @@ export interface PreviousCount {
   estimated: boolean;
 }
 
-export type CountCheck = { refuse: string } | { warn: PlausibilityWarning } | null;
+export type CountCheck = { refuse: RuleText } | { warn: PlausibilityWarning } | null;
 
 /**
  * Young do not appear in a brood between counts: a count may not exceed the last exact count plus
@@ -21,16 +22,9 @@ export function checkCount(alive: number, previous: PreviousCount | null, joined
   if (!previous) return null;
   const ceiling = previous.alive + joinedSince;
   if (alive <= ceiling) return null;
-  const joined = joinedSince ? `, and ${joinedSince} kept-back young joined the brood since (${ceiling} in all)` : '';
+  const values = { previous: previous.alive, on: previous.on, alive, ...(joinedSince ? { joined: joinedSince, ceiling } : {}) };
   if (previous.estimated) {
-    return {
-      warn: {
-        code: 'count-above-estimate',
-        message: `About ${previous.alive} were alive by the estimate on ${previous.on}${joined}; ${alive} is more than that. Save it if the estimate was low.`,
-      },
-    };
+    return { warn: plausibilityWarning('count-above-estimate', values, joinedSince ? 'count-above-estimate-joined' : 'count-above-estimate') };
   }
-  return {
-    refuse: `${previous.alive} were alive at the last count on ${previous.on}${joined}; ${alive} is more than that. Young are not added between counts: correct the earlier count if it was wrong.`,
-  };
+  return { refuse: ruleText(joinedSince ? 'count.aboveLastJoined' : 'count.aboveLast', values) };
 }

@@ -1,4 +1,4 @@
-import type { PlausibilityWarning } from '../errors/plausibility.js';
+import { plausibilityWarning, type PlausibilityWarning } from '../errors/plausibility.js';
 import type { NumberRange } from '../collection/species.types.js';
 
 /**
@@ -8,12 +8,6 @@ import type { NumberRange } from '../collection/species.types.js';
  */
 export function openingCountWarnings(total: number, usual: NumberRange, estimated: boolean): PlausibilityWarning[] {
   if (total >= usual.min && total <= usual.max) return [];
-  const counted = `${estimated ? 'About ' : ''}${total} eggs and young`;
-  const side = total < usual.min ? 'fewer than' : 'more than';
-  return [
-    {
-      code: 'eggs-outside-species-range',
-      message: `${counted} is ${side} this species usually lays (${usual.min}–${usual.max} a sac). Check the count, or save it with a reason.`,
-    },
-  ];
+  const sentence = `${total < usual.min ? 'eggsFewer' : 'eggsMore'}${estimated ? 'About' : ''}`;
+  return [plausibilityWarning('eggs-outside-species-range', { total, min: usual.min, max: usual.max }, sentence)];
 }

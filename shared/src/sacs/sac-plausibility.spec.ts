@@ -15,7 +15,14 @@ describe('sacLayWarnings', () => {
   // New World terrestrials: about 4 months from pairing to sac (from memory, the group's minimum of 120 days).
   it('warns below the species minimum, counting calendar days', () => {
     const w = sacLayWarnings({ layDate: '2026-05-09', pairings, minDays: 120 });
-    expect(w).toEqual([{ code: 'sac-soon-after-pairing', message: expect.stringContaining('laid 119 days after the last successful pairing (2026-01-10)') }]);
+    expect(w).toEqual([
+      {
+        code: 'sac-soon-after-pairing',
+        key: 'rule.warning.sac-soon-after-pairing',
+        values: { count: 119, paired: '2026-01-10', minDays: 120 },
+        message: expect.stringContaining('laid 119 days after the last successful pairing (2026-01-10)'),
+      },
+    ]);
     expect(sacLayWarnings({ layDate: '2026-05-10', pairings, minDays: 120 })).toEqual([]);
   });
   // TRADE-FACTS §3: a sac rarely follows more than a year after the pairing.

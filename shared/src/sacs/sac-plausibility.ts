@@ -1,7 +1,7 @@
 import { diffDays, type CalendarDate } from '../breeding/calendar-day.js';
 import { PAIRING_TO_SAC_MAX_DAYS } from '../breeding/pairing-warnings.js';
 import type { PairingFact } from '../breeding/pairing.types.js';
-import type { PlausibilityWarning } from '../errors/plausibility.js';
+import { plausibilityWarning, type PlausibilityWarning } from '../errors/plausibility.js';
 
 export interface SacLayFacts {
   layDate: CalendarDate;
@@ -22,29 +22,14 @@ export function sacLayWarnings(f: SacLayFacts): PlausibilityWarning[] {
     .sort()
     .at(-1);
   if (!last) {
-    return [
-      {
-        code: 'sac-without-pairing',
-        message: `No successful pairing is recorded on or before ${f.layDate}. Record the pairing first, or save the sac with a reason (e.g. paired before she came to you).`,
-      },
-    ];
+    return [plausibilityWarning('sac-without-pairing', { layDate: f.layDate })];
   }
   const days = diffDays(last, f.layDate);
   if (days < f.minDays) {
-    return [
-      {
-        code: 'sac-soon-after-pairing',
-        message: `The sac would be laid ${days} days after the last successful pairing (${last}); this species usually needs at least ${f.minDays} days. Check the dates.`,
-      },
-    ];
+    return [plausibilityWarning('sac-soon-after-pairing', { count: days, paired: last, minDays: f.minDays })];
   }
   if (days > PAIRING_TO_SAC_MAX_DAYS) {
-    return [
-      {
-        code: 'sac-long-after-pairing',
-        message: `The sac would be laid ${days} days after the last successful pairing (${last}), more than a year. Check the dates, or record a later pairing.`,
-      },
-    ];
+    return [plausibilityWarning('sac-long-after-pairing', { days, paired: last })];
   }
   return [];
 }
@@ -52,10 +37,5 @@ export function sacLayWarnings(f: SacLayFacts): PlausibilityWarning[] {
 /** A pairing before the male's maturing molt: he could not have carried sperm (common practice). */
 export function pairingBeforeMaturingWarnings(on: CalendarDate, maleMaturedOn: CalendarDate | null): PlausibilityWarning[] {
   if (!maleMaturedOn || on >= maleMaturedOn) return [];
-  return [
-    {
-      code: 'pairing-before-male-matured',
-      message: `The pairing (${on}) is dated before the male's maturing molt (${maleMaturedOn}); an immature male cannot pair. Check the dates.`,
-    },
-  ];
+  return [plausibilityWarning('pairing-before-male-matured', { on, matured: maleMaturedOn })];
 }

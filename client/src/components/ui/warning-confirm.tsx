@@ -1,13 +1,19 @@
 import { Alert, Button, Group, List, Stack, Textarea } from '@mantine/core';
 import { useState } from 'react';
-import { WARNINGS_FIELD, type PlausibilityWarning, type PlausibilityWarningCode } from '@broodsilk/shared';
+import { WARNINGS_FIELD, type PlausibilityWarningCode } from '@broodsilk/shared';
 import { isApiError } from '@/lib/api-error';
 import { useWords } from '@/lib/i18n';
+import { sentence, type Sayable } from '@/lib/sentence';
+
+/** A warning as a 422 answer carries it: its code to acknowledge, its sentence to show. */
+type PlausibilityWarning = Sayable & { code: PlausibilityWarningCode };
 
 /** The plausibility warnings of a 422 answer (empty for any other error). */
 export function warningsOf(error: unknown): PlausibilityWarning[] {
   if (!isApiError(error) || error.statusCode !== 422) return [];
-  return error.details.filter((d) => d.field === WARNINGS_FIELD && d.code).map((d) => ({ code: d.code as PlausibilityWarningCode, message: d.message }));
+  return error.details
+    .filter((d) => d.field === WARNINGS_FIELD && d.code)
+    .map((d) => ({ code: d.code as PlausibilityWarningCode, message: d.message, key: d.key, values: d.values }));
 }
 
 /** What a request sends to save despite the warnings. */
@@ -63,7 +69,7 @@ export function WarningConfirm({
       <Stack gap="xs">
         <List size="sm">
           {warnings.map((w) => (
-            <List.Item key={w.code}>{w.message}</List.Item>
+            <List.Item key={w.code}>{sentence(t, w)}</List.Item>
           ))}
         </List>
         <Textarea

@@ -1,5 +1,4 @@
 import {
-  shippingCautions,
   wordsFor,
   type BalancesResponse,
   type HandOverFormResponse,
@@ -57,7 +56,6 @@ export function shares(): SharesResponse {
       pricePerSpiderlingMinor: 400,
       currency: 'EUR',
       failureClause: 'nothing-owed',
-      failureClauseText: 'nothing is owed',
       handOverStage: 'second instar',
       shippingPaidBy: 'the recipient',
       lines: [],
@@ -136,6 +134,5 @@ export function handOverForm(): HandOverFormResponse {
     methods: ['pick-up', 'shipment'],
     handOverStage: 'second-instar',
     shippingPaidBy: 'recipient',
-    shippingCautions: shippingCautions(wordsFor('en')),
   };
 }

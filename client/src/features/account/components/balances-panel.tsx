@@ -3,6 +3,7 @@ import { PartyTable } from '@/components/ui/party-table';
 import { useBalances } from '../api/balances';
 import { formatMoney } from '@broodsilk/shared';
 import { useWords } from '@/lib/i18n';
+import { sentence } from '@/lib/sentence';
 
 /** Spiderlings still owed to a party; a negative count is more than the share. */
 function Owed({ count }: { count: number }) {
@@ -110,7 +111,7 @@ export function BalancesPanel({ projectId }: { projectId: string }) {
           <Stack gap={2}>
             {b.problems.map((p) => (
               <Text key={p.entryId} size="sm">
-                {p.message}
+                {sentence(t, p)}
               </Text>
             ))}
           </Stack>

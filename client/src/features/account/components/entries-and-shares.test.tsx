@@ -1,6 +1,7 @@
 import { screen, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { renderWithProviders, stubFetch } from '@/testing/render';
+import { i18next } from '@/lib/i18n';
 import { EntriesTable } from './entries-table';
 import { SharesPanel } from './shares-panel';
 import { entry, PROJECT_ID, shares } from './account.fixtures';
@@ -66,5 +67,20 @@ describe('SharesPanel', () => {
     expect(change).toHaveTextContent('The count went from 24 to 20.');
     expect(change).toHaveTextContent('Tomasz: 10 → 8');
     expect(screen.getByText('20 young are shared 3 : 2.')).toBeInTheDocument();
+    // the terms line names the failure clause in the catalogue's one wording (failureClauseText)
+    expect(screen.getByText(/Terms version 1 in force/)).toHaveTextContent(/· Under these terms nothing is owed when a project fails\.$/);
+  });
+
+  it('says the terms in force in the German reader’s words, the failure clause included', async () => {
+    await i18next.changeLanguage('de');
+    try {
+      vi.stubGlobal('fetch', stubFetch({ [`GET /api/projects/${PROJECT_ID}/shares`]: () => ({ status: 200, body: shares() }) }).fetchStub);
+      renderWithProviders(<SharesPanel projectId={PROJECT_ID} timeZone="Europe/Berlin" />);
+      expect(await screen.findByText(/Fassung 1 der Bedingungen gilt/)).toHaveTextContent(
+        /Nach diesen Bedingungen schuldet niemand etwas, wenn ein Projekt scheitert\.$/,
+      );
+    } finally {
+      await i18next.changeLanguage('en');
+    }
   });
 });

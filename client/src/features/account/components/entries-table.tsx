@@ -4,6 +4,7 @@ import { formatMoney, type LedgerEntryResponse, type Words } from '@broodsilk/sh
 import { formatDate } from '@/lib/dates';
 import { ShowMore } from '@/components/ui/show-more';
 import { useWords } from '@/lib/i18n';
+import { sentence } from '@/lib/sentence';
 import { useEntries } from '../api/entries';
 import { ENTRY_KIND_LABELS, METHOD_LABELS, STATUS_LABELS, midSentence, young } from '../utils/labels';
 
@@ -51,7 +52,7 @@ function Details({ e, bySeq }: { e: LedgerEntryResponse; bySeq: Map<string, Ledg
   }
   if (e.reason) lines.push(t('page.account.entries.why', { reason: e.reason }));
   if (e.note) lines.push(e.note);
-  if (e.problem) lines.push(<span className="tone-failed">{e.problem}</span>);
+  if (e.problem) lines.push(<span className="tone-failed">{sentence(t, e.problem)}</span>);
   if (!lines.length) return null;
   return (
     <Stack gap={0}>

@@ -12,6 +12,7 @@ import { useCreateEntry } from '../api/entries';
 import { applyEntryErrors } from '../utils/entry-errors';
 import { pastDateRule } from './sac-count-date-fields';
 import { useWords } from '@/lib/i18n';
+import { sentence } from '@/lib/sentence';
 
 interface Values {
   fromMemberId: string;
@@ -54,7 +55,7 @@ export function MoneyForm({ projectId, parties, currency, today, fromMemberId, t
       toMemberId: (v, all) => (!v ? t('page.account.money.whoWasPaid') : v === all.fromMemberId ? t('page.account.money.sameParty') : null),
       amount: (v) => {
         const amount = parseMoney(v, currency);
-        return !amount.ok ? amount.message : amount.minor > 0 ? null : t('page.account.form.amountAboveZero');
+        return !amount.ok ? sentence(t, amount) : amount.minor > 0 ? null : t('page.account.form.amountAboveZero');
       },
       note: textRule({ maxLength: TEXT_LIMITS.ledgerNote }),
       date: pastDateRule(t, today),

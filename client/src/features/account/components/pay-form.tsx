@@ -7,6 +7,7 @@ import { useCreateCheckout } from '../api/settlements';
 import { formatMoney, minorToMajor, parseMoney, toMinor } from '@broodsilk/shared';
 import { FormActions } from '@/components/ui/form-actions';
 import { useWords } from '@/lib/i18n';
+import { sentence } from '@/lib/sentence';
 
 interface Props {
   projectId: string;
@@ -30,7 +31,7 @@ export function PayForm({ projectId, toMemberId, toName, owedMinor, currency, go
     validate: {
       amount: (v) => {
         const amount = parseMoney(v, currency);
-        if (!amount.ok) return amount.message;
+        if (!amount.ok) return sentence(t, amount);
         if (amount.minor <= 0) return t('page.account.form.amountAboveZero');
         return amount.minor > owedMinor ? t('page.account.pay.tooMuch', { name: toName, amount: formatMoney(owedMinor, currency) }) : null;
       },

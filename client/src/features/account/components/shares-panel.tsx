@@ -1,6 +1,6 @@
 import { Alert, Badge, Card, Group, List, Stack, Text } from '@mantine/core';
 import { PartyTable } from '@/components/ui/party-table';
-import { formatMoney, type SacSharesView } from '@broodsilk/shared';
+import { formatMoney, label, type SacSharesView } from '@broodsilk/shared';
 import { formatInstant } from '@/lib/dates';
 import { useWords } from '@/lib/i18n';
 import { useShares } from '../api/shares';
@@ -110,7 +110,7 @@ export function SharesPanel({ projectId, timeZone }: { projectId: string; timeZo
           {t('page.account.shares.terms', {
             number: s.terms.number,
             price: formatMoney(s.terms.pricePerSpiderlingMinor, s.terms.currency),
-            clause: s.terms.failureClauseText,
+            clause: label(t, 'failureClauseText', s.terms.failureClause),
           })}
         </Text>
       ) : (

@@ -12,6 +12,7 @@ import { TEXT_LIMITS, parseMoney, toMinor, type PartyBalanceView, type SacShares
 import { useCreateEntry } from '../api/entries';
 import { countRule, pastDateRule, SacCountDateFields } from './sac-count-date-fields';
 import { useWords } from '@/lib/i18n';
+import { sentence } from '@/lib/sentence';
 import { applyEntryErrors } from '../utils/entry-errors';
 import { partyOwed } from '../utils/labels';
 
@@ -57,7 +58,7 @@ export function WithdrawalForm({ projectId, kind, parties, sacs, currency, terms
       price: (v) => {
         if (v.trim() === '') return sale ? t('page.account.withdrawal.totalPriceRequired') : null;
         const price = parseMoney(v, currency);
-        return !price.ok ? price.message : price.minor >= 0 ? null : t('page.account.withdrawal.priceNotNegative');
+        return !price.ok ? sentence(t, price) : price.minor >= 0 ? null : t('page.account.withdrawal.priceNotNegative');
       },
       note: textRule({ maxLength: TEXT_LIMITS.ledgerNote }),
     },
