@@ -76,13 +76,13 @@ export class PartnerUpdates implements OnModuleInit, EventSubscriber, UpdateMail
       lang: to.lng,
       title: words.title,
       paragraphs: words.paragraphs,
-      link: { url: this.href(link), label: t('partnerUpdate.mailOpen') },
+      link: { url: this.href(link), label: t('mail.openInApp') },
       why: t('partnerUpdate.mailWhy', { project: to.projectTitle }),
       unsubscribe: { url: unsubscribeUrl, label: t('partnerUpdate.mailUnsubscribe') },
     });
     await this.outbox.enqueue(tx, {
       to: to.email,
-      subject: t('partnerUpdate.mailSubject', { title: words.title }),
+      subject: t('mail.subject', { title: words.title }),
       html,
       text,
       headers: unsubscribeHeaders(unsubscribeUrl),
@@ -109,7 +109,7 @@ export class PartnerUpdates implements OnModuleInit, EventSubscriber, UpdateMail
       why: t('partnerUpdate.mailWhyOutside', { owner: to.ownerName, project: to.projectTitle }),
       unsubscribe: null,
     });
-    await this.outbox.enqueue(tx, { to: to.member.email!, subject: t('partnerUpdate.mailSubject', { title: words.title }), html, text });
+    await this.outbox.enqueue(tx, { to: to.member.email!, subject: t('mail.subject', { title: words.title }), html, text });
   }
 
   /**

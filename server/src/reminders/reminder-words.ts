@@ -68,8 +68,8 @@ export function reminderMailWords(lng: Language, kind: NotificationKind) {
   const t = wordsFor(lng);
   const name = label(t, 'notificationKind', kind);
   return {
-    subject: (title: string) => t('reminders.mail.subject', { title }),
-    open: t('reminders.mail.open'),
+    subject: (title: string) => t('mail.subject', { title }),
+    open: t('mail.openInApp'),
     why: t('reminders.mail.why', { kind: name }),
     unsubscribe: t('reminders.mail.unsubscribe', { kind: name }),
   };

@@ -7,6 +7,9 @@ import type { Widen } from './catalogue-shape.js';
  */
 export const mailEn = {
   hello: 'Hello {{name}},',
+  /** The subject and link of every e-mail about something in the app (reminders, partner updates). */
+  subject: 'Broodsilk: {{title}}',
+  openInApp: 'Open in Broodsilk',
   helloNobody: 'Hello,',
   confirmEmail: {
     subject: 'Confirm your e-mail address for Broodsilk',
@@ -64,6 +67,8 @@ export const mailEn = {
 
 export const mailDe: Widen<typeof mailEn> = {
   hello: 'Hallo {{name}},',
+  subject: 'Broodsilk: {{title}}',
+  openInApp: 'In Broodsilk öffnen',
   helloNobody: 'Hallo,',
   confirmEmail: {
     subject: 'Bestätige deine E-Mail-Adresse für Broodsilk',

@@ -50,8 +50,6 @@ export const remindersEn = {
     unread_other: '{{count}} unread in your inbox.',
   },
   mail: {
-    subject: 'Broodsilk: {{title}}',
-    open: 'Open in Broodsilk',
     why: 'You get this because “{{kind}}” is on in your reminder settings.',
     unsubscribe: 'Stop e-mails for “{{kind}}”',
   },
@@ -110,8 +108,6 @@ export const remindersDe: Widen<typeof remindersEn> = {
     unread_other: '{{count}} ungelesene Nachrichten in deinem Posteingang.',
   },
   mail: {
-    subject: 'Broodsilk: {{title}}',
-    open: 'In Broodsilk öffnen',
     why: 'Du bekommst diese Nachricht, weil „{{kind}}“ in deinen Erinnerungseinstellungen an ist.',
     unsubscribe: 'Keine E-Mails mehr zu „{{kind}}“',
   },
