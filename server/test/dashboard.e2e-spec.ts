@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
 import { DateTime } from 'luxon';
-import type { DashboardResponse } from '@broodsilk/shared';
+import { DASHBOARD_MATURE_MALES, type DashboardResponse } from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper, type SignedIn } from './support/users';
 import { projectWithRoles } from './support/projects';
@@ -86,6 +86,10 @@ describe('dashboard', () => {
     const urgency = res.matureMales.map((m) => m.clock.daysUntilPastTypical);
     expect(urgency).toEqual([...urgency].sort((a, b) => a - b));
     expect((await dashboard(partner)).matureMales).toEqual([]);
+    // The card lists the most urgent few and counts them all; the collection's list has every one.
+    const all = await http().get('/api/animals/males/clock').set('Authorization', owner.bearer).expect(200);
+    expect(res.matureMaleCount).toBe(all.body.length);
+    expect(res.matureMales).toEqual(all.body.slice(0, DASHBOARD_MATURE_MALES));
   });
 
   it('needs a session (401)', async () => {

@@ -1,6 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
 import {
+  DASHBOARD_MATURE_MALES,
   DASHBOARD_OPEN_PROJECTS,
   DASHBOARD_PULL_WINDOW_DAYS,
   addDays,
@@ -100,6 +101,7 @@ export class DashboardService {
     const horizon = addDays(today, DASHBOARD_PULL_WINDOW_DAYS);
     const todos = projects.filter((p) => MONEY.has(roleOf.get(p.id)!)).map((p) => accountTodos(accounts.get(p.id)!, viewer.id));
 
+    const males = await this.animals.malesByClock(viewer);
     return {
       today,
       dueToday: {
@@ -121,7 +123,8 @@ export class DashboardService {
       upcomingPullWindows: items
         .filter((x) => withMother(x) && x.sac.pullWindow.state !== 'past' && x.sac.pullWindow.opensOn <= horizon)
         .sort((a, b) => a.sac.pullWindow.opensOn.localeCompare(b.sac.pullWindow.opensOn)),
-      matureMales: await this.animals.malesByClock(viewer),
+      matureMales: males.slice(0, DASHBOARD_MATURE_MALES),
+      matureMaleCount: males.length,
       recentActivity: await this.activity.recentFromOthers(viewer.id, 20),
     };
   }

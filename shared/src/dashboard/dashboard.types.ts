@@ -7,6 +7,9 @@ import type { SacResponse } from '../sacs/sacs.types.js';
 /** Days ahead the dashboard looks for pull windows. */
 export const DASHBOARD_PULL_WINDOW_DAYS = 30;
 
+/** Mature males the dashboard lists (most urgent clock first); the collection lists them all. */
+export const DASHBOARD_MATURE_MALES = 8;
+
 /** Open projects the dashboard lists (newest first); the projects page lists them all. */
 export const DASHBOARD_OPEN_PROJECTS = 12;
 
@@ -77,8 +80,10 @@ export interface DashboardResponse {
   openProjectCount: number;
   /** Sacs still with the mother whose window is open or opens within 30 days; soonest first. */
   upcomingPullWindows: DashboardSac[];
-  /** The viewer's own mature males, most urgent clock first. */
+  /** The viewer's own mature males with the most urgent clocks, most urgent first (`DASHBOARD_MATURE_MALES`). */
   matureMales: MaleClockRow[];
+  /** How many mature males the viewer has in all. */
+  matureMaleCount: number;
   /** What others did lately in the viewer's projects. */
   recentActivity: ActivityEventResponse[];
 }

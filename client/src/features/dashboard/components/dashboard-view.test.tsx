@@ -40,6 +40,7 @@ const data: DashboardResponse = {
   openProjectCount: 0,
   upcomingPullWindows: [item('Albopilosum pair', sac('d', null, 'not-yet'))],
   matureMales: [],
+  matureMaleCount: 0,
   recentActivity: [],
 };
 
@@ -182,5 +183,13 @@ describe('open projects card', () => {
   it('has no such link when it lists them all', () => {
     renderWithProviders(<DashboardView data={{ ...data, openProjects: [project(1), project(2)], openProjectCount: 2 }} timeZone="UTC" />);
     expect(within(screen.getByTestId('card-projects')).queryByRole('link', { name: /open projects/ })).toBeNull();
+  });
+});
+
+describe('mature males card', () => {
+  it('links to every mature male in the collection when it lists only the most urgent', () => {
+    renderWithProviders(<DashboardView data={{ ...data, matureMales: [], matureMaleCount: 20 }} timeZone="UTC" />);
+    const link = within(screen.getByTestId('card-males')).getByRole('link', { name: 'All 20 mature males' });
+    expect(link).toHaveAttribute('href', '/collection?view=males');
   });
 });

@@ -34,7 +34,7 @@ export function DashboardView({ data, timeZone, temperatureUnit = 'C' }: { data:
       <SimpleGrid cols={{ base: 1, md: 2 }}>
         <UpcomingCard upcoming={data.upcomingPullWindows} />
         <ProjectsCard projects={data.openProjects} count={data.openProjectCount} />
-        <MalesCard males={data.matureMales} />
+        <MalesCard males={data.matureMales} count={data.matureMaleCount} />
         <ActivityCard events={data.recentActivity} timeZone={timeZone} />
       </SimpleGrid>
     </Stack>

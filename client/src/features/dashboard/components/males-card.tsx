@@ -1,12 +1,14 @@
-import { Table, Text } from '@mantine/core';
+import { Anchor, Table, Text } from '@mantine/core';
+import { Link } from 'react-router';
+import { paths } from '@/config/paths';
 import type { MaleClockRow } from '@broodsilk/shared';
 import { MALE_CLOCK_LABELS } from '@/lib/i18n';
 import { MALE_CLOCK_TONE } from '@/lib/tones';
 import { SectionCard } from '@/components/ui/section-card';
 import { useWords } from '@/lib/i18n';
 
-/** The viewer's own mature males, most urgent clock first. */
-export function MalesCard({ males }: { males: MaleClockRow[] }) {
+/** The viewer's own mature males with the most urgent clocks; the collection has them all. */
+export function MalesCard({ males, count }: { males: MaleClockRow[]; count: number }) {
   const t = useWords();
   return (
     <SectionCard compact title={t('page.dashboard.males.title')} testId="card-males">
@@ -17,7 +19,7 @@ export function MalesCard({ males }: { males: MaleClockRow[] }) {
       ) : (
         <Table verticalSpacing={4} fz="sm">
           <Table.Tbody>
-            {males.slice(0, 8).map((m) => {
+            {males.map((m) => {
               const c = { ...MALE_CLOCK_LABELS[m.clock.state], ...MALE_CLOCK_TONE[m.clock.state] };
               return (
                 <Table.Tr key={m.animal.id}>
@@ -46,6 +48,11 @@ export function MalesCard({ males }: { males: MaleClockRow[] }) {
             })}
           </Table.Tbody>
         </Table>
+      )}
+      {count > males.length && (
+        <Anchor component={Link} to={`${paths.collection.href()}?view=males`} size="sm" mt="xs" display="inline-block">
+          {t('page.dashboard.males.all', { count })}
+        </Anchor>
       )}
     </SectionCard>
   );
