@@ -3,6 +3,7 @@ import { pagesDe } from './pages/index.js';
 import { partnerUpdatesDe } from './partner-updates.js';
 import { mailDe } from './mail.js';
 import { sharesDe } from './shares.js';
+import { serverRefusalsDe } from './server-refusals.js';
 
 /** Every word for a shared state, in German; the `Catalogue` type makes a missing key a compile error. */
 export const de: Catalogue = {
@@ -347,6 +348,7 @@ export const de: Catalogue = {
   partnerUpdate: partnerUpdatesDe,
   mail: mailDe,
   shares: sharesDe,
+  refusal: serverRefusalsDe,
   calendar: {
     pullWindow: 'Entnahmefenster: {{project}}',
     where: '{{project}}, Kokon vom {{layDate}}',

@@ -3,6 +3,7 @@ import { pagesEn } from './pages/index.js';
 import { partnerUpdatesEn } from './partner-updates.js';
 import { mailEn } from './mail.js';
 import { sharesEn } from './shares.js';
+import { serverRefusalsEn } from './server-refusals.js';
 
 /**
  * Every word for a shared state, in English. Keys are the shared enums' own values, so a new value
@@ -333,6 +334,7 @@ export const en = {
   mail: mailEn,
   /** How shares were worked out and what changed (shares page, statement). */
   shares: sharesEn,
+  refusal: serverRefusalsEn,
   calendar: {
     pullWindow: 'Pull window: {{project}}',
     where: '{{project}}, sac laid {{layDate}}',
