@@ -1,4 +1,4 @@
-import { wordsFor, type Catalogue, type FieldError } from '@broodsilk/shared';
+import { DEFAULT_LANGUAGE, wordsFor, type Catalogue, type FieldError, type Language } from '@broodsilk/shared';
 
 /** A refusal's key below `refusal.` (`'sac.alreadyPulled'`), checked against the English catalogue; plural forms are picked by `count`. */
 type Keys<T, P extends string = ''> = {
@@ -17,11 +17,24 @@ export interface Refusal {
 /** What `fieldError` takes: a refusal, or (explicitly, as `{ message }`) a sentence a shared rule wrote. */
 export type Said = Pick<Refusal, 'message'> & Partial<Refusal>;
 
-const english = wordsFor('en');
+const TERM = /^\$t\(([^()]+)\)$/;
+/** A value that is itself a catalogue word (a role, an end reason), said in the reader's language. */
+export const term = (key: string): string => `$t(${key})`;
+
+/** A keyed sentence in `lng`; values written with `term` are looked up first (only whole values, so typed text is never read as a key). */
+export function say(lng: Language, key: string, values?: FieldError['values']): string {
+  const t = wordsFor(lng);
+  const said = values && Object.fromEntries(Object.entries(values).map(([k, v]) => [k, typeof v === 'string' && TERM.test(v) ? t(v.slice(3, -1)) : v]));
+  return t(key, said);
+}
 
 export function refusal(key: RefusalKey, values?: RefusalValues): Refusal {
-  const path = `refusal.${key}`;
-  return { message: english(path, values), key: path, ...(values ? { values } : {}) };
+  return refusalFrom(`refusal.${key}`, values);
+}
+
+/** A refusal whose sentence another catalogue section already has (e.g. `text.alreadyEnded`). */
+export function refusalFrom(path: string, values?: RefusalValues): Refusal {
+  return { message: say(DEFAULT_LANGUAGE, path, values), key: path, ...(values ? { values } : {}) };
 }
 
 /** One field's refusal, for `details`. */

@@ -1,5 +1,6 @@
-import { DEFAULT_LANGUAGE, LANGUAGES, isLanguage, wordsFor, type ApiErrorBody, type FieldError, type Language } from '@broodsilk/shared';
+import { DEFAULT_LANGUAGE, LANGUAGES, isLanguage, type ApiErrorBody, type FieldError, type Language } from '@broodsilk/shared';
 import type { Request } from 'express';
+import { say } from '../refusal';
 
 /** The reader's language from Accept-Language (Express's `accepts`, i.e. negotiator), English when none of ours is asked for. */
 export function readerLanguage(req: Pick<Request, 'acceptsLanguages'>): Language {
@@ -10,7 +11,7 @@ export function readerLanguage(req: Pick<Request, 'acceptsLanguages'>): Language
 /** A sentence said in `lng` where it has a key; text without a key stays as written. */
 function said<T extends { message: string; key?: string; values?: FieldError['values'] }>(x: T, lng: Language): Omit<T, 'key' | 'values'> {
   const { key, values, ...rest } = x;
-  return key && lng !== DEFAULT_LANGUAGE ? { ...rest, message: wordsFor(lng)(key, values) } : rest;
+  return key && lng !== DEFAULT_LANGUAGE ? { ...rest, message: say(lng, key, values) } : rest;
 }
 
 /**
