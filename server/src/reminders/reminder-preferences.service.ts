@@ -5,6 +5,7 @@ import type { AuthUser } from '../common/auth-user';
 import { User } from '../users/user.entity';
 import { ReminderSettings } from './reminder-settings.entity';
 import type { UpdateReminderPreferencesDto } from './dto/update-reminder-preferences.dto';
+import { refusal } from '../common/refusal';
 
 export function toReminderPreferences(user: User, s: ReminderSettings | null): ReminderPreferences {
   const channels = Object.fromEntries(NOTIFICATION_KINDS.map((k) => [k, s?.channels[k] ?? DEFAULT_REMINDER_CHANNEL])) as Record<
@@ -50,7 +51,7 @@ export class ReminderPreferencesService {
   async stopEmails(userId: string, kind: NotificationKind): Promise<void> {
     await this.em.transactional(async (tx) => {
       const user = await tx.findOne(User, userId);
-      if (!user) throw new NotFoundException({ message: 'The account this link was for no longer exists.' });
+      if (!user) throw new NotFoundException(refusal('reminder.accountGone'));
       const s = (await tx.findOne(ReminderSettings, { user: userId })) ?? tx.create(ReminderSettings, { user });
       const now = s.channels[kind] ?? DEFAULT_REMINDER_CHANNEL;
       const next: ReminderChannel = now === 'both' ? 'in-app' : now === 'email' ? 'off' : now;

@@ -343,6 +343,10 @@ export const serverRefusalsEn = {
     noPayout: '{{name}} has not linked a payout account yet, so they cannot be paid here. Pay them another way and record the payment.',
     payoutUnfinished: '{{name}} has not finished setting up their payout account yet.',
   },
+  reminder: {
+    noSuchNotification: 'There is no such notification.',
+    accountGone: 'The account this link was for no longer exists.',
+  },
 } as const;
 
 export const serverRefusalsDe: Widen<typeof serverRefusalsEn> = {
@@ -689,5 +693,9 @@ export const serverRefusalsDe: Widen<typeof serverRefusalsEn> = {
     moreThanOwed: 'Du schuldest {{name}} {{owed}}; {{amount}} sind {{over}} mehr als das.',
     noPayout: '{{name}} hat noch kein Auszahlungskonto verknüpft und kann hier deshalb nicht bezahlt werden. Bezahl auf anderem Weg und trag die Zahlung ein.',
     payoutUnfinished: '{{name}} hat die Einrichtung des Auszahlungskontos noch nicht abgeschlossen.',
+  },
+  reminder: {
+    noSuchNotification: 'Diese Benachrichtigung gibt es nicht.',
+    accountGone: 'Das Konto, für das dieser Link war, gibt es nicht mehr.',
   },
 };
