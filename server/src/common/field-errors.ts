@@ -5,8 +5,7 @@ import { refusal, type Said } from './refusal';
 /** The 400 every refusal of typed input uses: one sentence for one field, else the list of fields. */
 export function badRequest(errors: FieldError[]): BadRequestException {
   const summary = errors.length === 1 ? errors[0] : refusal('common.correctFields', { count: errors.length, fields: errors.map((d) => d.field).join(', ') });
-  const { message, key, values } = summary;
-  return new BadRequestException({ message, ...(key ? { key, values } : {}), details: errors });
+  return new BadRequestException({ message: summary.message, key: summary.key, values: summary.values, details: errors });
 }
 
 /** A 400 naming one field, e.g. `fieldError('at', refusal('sac.logBeforeLaid', { at, laid }))`. */
