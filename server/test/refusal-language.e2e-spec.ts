@@ -37,21 +37,21 @@ function lang(req: request.Test, lng?: string): request.Test {
   return lng ? req.set('Accept-Language', lng) : req;
 }
 
+/** The 400 for the two unknown fields of the validation request, with its summary and each field's sentence. */
+const unknownFields = (message: string, each: (field: string) => string): ApiErrorBody => ({
+  statusCode: 400,
+  error: 'Bad Request',
+  message,
+  details: ['bogus', 'other'].map((field) => ({ field, message: each(field) })),
+});
+
 /** Every sentence a person reads in the body. */
 const sentences = (b: ApiErrorBody) => [b.message, ...(b.details ?? []).map((d) => d.message)];
 
 describe('refusals in the reader’s language', () => {
   it('a German reader (Accept-Language: de) gets each kind of refusal in German, with the same status and fields', async () => {
     const validation = await REQUESTS.validation('de').expect(400);
-    expect(validation.body).toEqual({
-      statusCode: 400,
-      error: 'Bad Request',
-      message: 'Bitte korrigiere 2 Felder: bogus, other.',
-      details: [
-        { field: 'bogus', message: '„bogus“ ist kein Feld, das dieses Formular annimmt.' },
-        { field: 'other', message: '„other“ ist kein Feld, das dieses Formular annimmt.' },
-      ],
-    });
+    expect(validation.body).toEqual(unknownFields('Bitte korrigiere 2 Felder: bogus, other.', (f) => `„${f}“ ist kein Feld, das dieses Formular annimmt.`));
     expect((await REQUESTS.notFound('de').expect(404)).body.message).toBe('Dieses Projekt gibt es nicht, oder du bist kein Mitglied.');
     expect((await REQUESTS.conflict('de').expect(409)).body.message).toMatch(/^Dieses Projekt wurde schon am \d{4}-\d{2}-\d{2} abgeschlossen\.$/);
     expect((await REQUESTS.forbidden('de').expect(403)).body.message).toBe('Das darf in diesem Projekt nur der Halter; du bist Partner.');
@@ -71,15 +71,9 @@ describe('refusals in the reader’s language', () => {
   });
 
   it('without Accept-Language the refusals are today’s English sentences', async () => {
-    expect((await REQUESTS.validation().expect(400)).body).toEqual({
-      statusCode: 400,
-      error: 'Bad Request',
-      message: 'Please correct 2 fields: bogus, other.',
-      details: [
-        { field: 'bogus', message: '"bogus" is not a field this form accepts.' },
-        { field: 'other', message: '"other" is not a field this form accepts.' },
-      ],
-    });
+    expect((await REQUESTS.validation().expect(400)).body).toEqual(
+      unknownFields('Please correct 2 fields: bogus, other.', (f) => `"${f}" is not a field this form accepts.`),
+    );
     expect((await REQUESTS.notFound().expect(404)).body.message).toBe('There is no such project, or you are not one of its members.');
     expect((await REQUESTS.conflict().expect(409)).body.message).toMatch(/^This project was already closed on \d{4}-\d{2}-\d{2}\.$/);
     expect((await REQUESTS.forbidden().expect(403)).body.message).toBe('Only the owner of this project may do this; you are a partner.');
