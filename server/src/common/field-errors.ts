@@ -8,7 +8,7 @@ export function badRequest(errors: FieldError[]): BadRequestException {
   return new BadRequestException({ message: summary.message, key: summary.key, values: summary.values, details: errors });
 }
 
-/** A 400 naming one field, e.g. `fieldError('at', refusal('sac.logBeforeLaid', { at, laid }))`. */
+/** A 400 naming one field, e.g. `fieldError('at', refusal('careLog.beforeLaid', { at, layDate }))`. */
 export function fieldError(field: string, why: Said): BadRequestException {
   return badRequest([{ field, ...why }]);
 }

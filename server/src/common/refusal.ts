@@ -28,6 +28,7 @@ export function say(lng: Language, key: string, values?: FieldError['values']): 
   return t(key, said);
 }
 
+/** What every 4xx throws: `throw new ConflictException(refusal('sac.alreadyPulled', { on }))`. */
 export function refusal(key: RefusalKey, values?: RefusalValues): Refusal {
   return refusalFrom(`refusal.${key}`, values);
 }
