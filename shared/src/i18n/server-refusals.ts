@@ -391,7 +391,7 @@ export const serverRefusalsDe: Widen<typeof serverRefusalsEn> = {
     recordId: 'Diese Adresse nennt keinen Eintrag: Die ID ist unvollständig oder wurde verändert. Öffne den Eintrag noch einmal aus seiner Liste.',
     cursor: 'after ist kein Cursor dieser Liste: Gib den nextCursor der vorigen Seite unverändert weiter.',
     nulCharacter: 'Text darf das NUL-Zeichen (U+0000) nicht enthalten; entferne es und versuch es noch einmal.',
-    brokenCharacter: 'Der Text enthält ein kaputtes Zeichen (eine halbe UTF-16-Hälfte); tipp ihn neu und versuch es noch einmal.',
+    brokenCharacter: 'Der Text enthält ein kaputtes Zeichen (die Hälfte eines UTF-16-Paars); tipp ihn neu und versuch es noch einmal.',
     signIn: 'Bitte melde dich an, um weiterzumachen.',
     accountRole: 'Dein Konto darf das nicht.',
     adminSecondFactor: 'Richte einen zweiten Faktor ein (Einstellungen, Anmeldesicherheit), bevor du Verwaltungsseiten benutzt.',
