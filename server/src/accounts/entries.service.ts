@@ -145,13 +145,12 @@ function confirmationDraft(view: AccountView, access: ProjectAccess, userId: str
     return { kind: 'arrival', date, target: row, party: row.party!, arrivedAlive: dto.arrivedAlive, arrivedDead: dto.arrivedDead };
   }
   if (row.kind === 'money' || row.kind === 'cash-out' || row.kind === 'sale') {
-    const what = row.kind === 'money' ? 'payment' : row.kind;
     const acceptor = acceptorOf(row, view.data.terms?.pricePerSpiderlingMinor ?? 0);
-    if (!acceptor) throw new ConflictException(`This ${what} already counts; there is nothing to confirm.`);
+    if (!acceptor) throw new ConflictException(refusal(`account.alreadyCounts.${row.kind}`));
     assertConfirmer(access, userId, acceptor, row.kind === 'money' ? 'the party who received the payment' : 'the party whose young these were');
-    if (!view.pending.has(row.id)) throw new ConflictException(`This ${what} already counts; there is nothing to confirm.`);
+    if (!view.pending.has(row.id)) throw new ConflictException(refusal(`account.alreadyCounts.${row.kind}`));
     if (view.data.rows.some((r) => r.kind === 'correction' && r.target?.id === row.id)) {
-      throw new ConflictException(`This ${what} was reversed by a correction; there is nothing to confirm.`);
+      throw new ConflictException(refusal(`account.reversedEntry.${row.kind}`));
     }
     if (row.kind !== 'money') assertWithdrawalFits(view, row);
     return { kind: 'confirmation', date, target: row, party: acceptor };

@@ -376,6 +376,16 @@ export const serverRefusalsEn = {
     noEmail: '{{name}} has no e-mail address on this project; add one to e-mail the statement.',
     ownStatementOnly: 'You can see only your own statement; the project owner sees every party’s.',
     noSuchParty: 'There is no such party in this project.',
+    alreadyCounts: {
+      money: 'This payment already counts; there is nothing to confirm.',
+      'cash-out': 'This cash-out already counts; there is nothing to confirm.',
+      sale: 'This sale already counts; there is nothing to confirm.',
+    },
+    reversedEntry: {
+      money: 'This payment was reversed by a correction; there is nothing to confirm.',
+      'cash-out': 'This cash-out was reversed by a correction; there is nothing to confirm.',
+      sale: 'This sale was reversed by a correction; there is nothing to confirm.',
+    },
   },
 } as const;
 
@@ -758,5 +768,15 @@ export const serverRefusalsDe: Widen<typeof serverRefusalsEn> = {
     noEmail: '{{name}} hat in diesem Projekt keine E-Mail-Adresse; füg eine hinzu, um die Abrechnung per E-Mail zu schicken.',
     ownStatementOnly: 'Du siehst nur deine eigene Abrechnung; der Halter des Projekts sieht die aller Parteien.',
     noSuchParty: 'Diese Partei gibt es in diesem Projekt nicht.',
+    alreadyCounts: {
+      money: 'Diese Zahlung zählt schon; es gibt nichts zu bestätigen.',
+      'cash-out': 'Diese Auszahlung zählt schon; es gibt nichts zu bestätigen.',
+      sale: 'Dieser Verkauf zählt schon; es gibt nichts zu bestätigen.',
+    },
+    reversedEntry: {
+      money: 'Diese Zahlung wurde durch eine Korrektur aufgehoben; es gibt nichts zu bestätigen.',
+      'cash-out': 'Diese Auszahlung wurde durch eine Korrektur aufgehoben; es gibt nichts zu bestätigen.',
+      sale: 'Dieser Verkauf wurde durch eine Korrektur aufgehoben; es gibt nichts zu bestätigen.',
+    },
   },
 };
