@@ -35,7 +35,14 @@ export function configureApp(app: INestApplication): INestApplication {
   app.use(answerMiddlewareErrors);
   app.useGlobalPipes(
     new RefuseUnstorableTextPipe(),
-    new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true, exceptionFactory: validationExceptionFactory }),
+    // `target` lets the factory tell a DTO's own sentence from class-validator's default (it never sends it).
+    new ValidationPipe({
+      whitelist: true,
+      forbidNonWhitelisted: true,
+      transform: true,
+      validationError: { target: true },
+      exceptionFactory: validationExceptionFactory,
+    }),
   );
   app.enableShutdownHooks();
   return app;

@@ -1,5 +1,7 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
+import { CSRF_OUT_OF_DATE } from '@broodsilk/shared';
 import { api, setCsrfToken } from './api-client';
+import { i18next } from './i18n';
 
 afterEach(() => vi.unstubAllGlobals());
 
@@ -36,12 +38,24 @@ describe('Idempotency-Key', () => {
   it('the retry after a stale CSRF token sends the same key', async () => {
     setCsrfToken('old');
     const calls = recordFetch([
-      json(403, { statusCode: 403, error: 'Forbidden', message: 'The form is out of date.' }),
+      json(403, { statusCode: 403, error: 'Forbidden', message: 'The form is out of date.', reason: CSRF_OUT_OF_DATE }),
       json(200, { csrfToken: 'new' }),
       json(201, {}),
     ]);
     await api.post('/sacs/s1/log', { kind: 'roll' });
     expect(calls).toHaveLength(3);
     expect(calls[2]!.get('Idempotency-Key')).toBe(calls[0]!.get('Idempotency-Key'));
+  });
+});
+
+describe('Accept-Language', () => {
+  it('every request names the language the interface shows now, so refusals come back in it', async () => {
+    setCsrfToken('t');
+    const calls = recordFetch([json(200, {}), json(201, {})]);
+    await i18next.changeLanguage('de');
+    await api.get('/animals');
+    await i18next.changeLanguage('en');
+    await api.post('/animals', { label: 'x' });
+    expect(calls.map((h) => h.get('Accept-Language'))).toEqual(['de', 'en']);
   });
 });

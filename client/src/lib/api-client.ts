@@ -1,5 +1,6 @@
-import { CSRF_HEADER, type ApiErrorBody, type CsrfResponse } from '@broodsilk/shared';
+import { CSRF_HEADER, CSRF_OUT_OF_DATE, type ApiErrorBody, type CsrfResponse } from '@broodsilk/shared';
 import { ApiError } from './api-error';
+import { i18next } from './i18n';
 
 type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
 
@@ -50,7 +51,8 @@ async function toError(res: Response): Promise<ApiError> {
 }
 
 async function send<T>(method: Method, path: string, options: RequestOptions = {}, retried = false): Promise<T> {
-  const headers: Record<string, string> = { Accept: 'application/json' };
+  // The server says its refusals in the language the interface shows now.
+  const headers: Record<string, string> = { Accept: 'application/json', 'Accept-Language': i18next.language };
   let body: BodyInit | undefined;
   if (options.body instanceof FormData) body = options.body;
   else if (options.body !== undefined) {
@@ -69,7 +71,7 @@ async function send<T>(method: Method, path: string, options: RequestOptions = {
   }
   const error = await toError(res);
   // A stale CSRF token (after a reload or a new session): fetch a fresh one once.
-  if (res.status === 403 && method !== 'GET' && !retried && /out of date/.test(error.message)) {
+  if (res.status === 403 && method !== 'GET' && !retried && error.reason === CSRF_OUT_OF_DATE) {
     csrfToken = null;
     return send<T>(method, path, { ...options, idempotencyKey }, true);
   }

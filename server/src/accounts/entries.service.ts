@@ -15,6 +15,7 @@ import { assertNotFutureDate, assertWithdrawalFits, draftEntry, type EntryDraft 
 import { LedgerEntryRow } from './ledger-entry.entity';
 import { describeEntry } from './entry-words';
 import { Clock } from '../common/clock';
+import { refusal } from '../common/refusal';
 
 @Injectable()
 export class EntriesService {
@@ -38,7 +39,7 @@ export class EntriesService {
     if (page.after) {
       const seq = decodeCursor(page.after, 'seq', 'integer');
       const at = rows.findIndex((r) => r.seq === seq);
-      if (at < 0) throw new BadRequestException({ message: 'after names no entry of this account: pass the nextCursor of the page before, unchanged.' });
+      if (at < 0) throw new BadRequestException(refusal('account.cursorNotInAccount'));
       start = at + 1;
     }
     const end = start + pageSize(page);
@@ -125,37 +126,34 @@ function assertConfirmer(access: ProjectAccess, userId: string, party: NonNullab
 
 function confirmationDraft(view: AccountView, access: ProjectAccess, userId: string, entryId: string, dto: ConfirmEntryRequest, today: string): EntryDraft {
   const row = view.data.rows.find((r) => r.id === entryId);
-  if (!row) throw new NotFoundException('There is no such entry in this project.');
+  if (!row) throw new NotFoundException(refusal('account.noSuchEntry'));
   const date = dto.date ?? today;
   assertNotFutureDate(date, today, 'confirmation');
   const inForce = new Set(view.balances.inForce);
   if (row.kind === 'hand-over') {
     assertConfirmer(access, userId, row.party!, 'the party who received the hand-over');
-    if (!inForce.has(row.id)) throw new ConflictException('This hand-over was reversed by a correction; there is nothing to confirm.');
+    if (!inForce.has(row.id)) throw new ConflictException(refusal('account.handOverReversed'));
     if (view.data.rows.some((r) => r.kind === 'arrival' && r.target?.id === row.id && inForce.has(r.id))) {
-      throw new ConflictException('This hand-over is already confirmed.');
+      throw new ConflictException(refusal('account.handOverConfirmed'));
     }
     if (dto.arrivedAlive === undefined || dto.arrivedDead === undefined) {
-      throw new BadRequestException('Say how many arrived alive (arrivedAlive) and how many dead (arrivedDead).');
+      throw new BadRequestException(refusal('account.arrivedCounts'));
     }
     if (dto.arrivedAlive + dto.arrivedDead !== row.count) {
-      throw new BadRequestException(
-        `The hand-over was of ${row.count} young; arrived alive and arrived dead must add up to ${row.count} (got ${dto.arrivedAlive + dto.arrivedDead}).`,
-      );
+      throw new BadRequestException(refusal('account.arrivedSum', { count: row.count!, got: dto.arrivedAlive + dto.arrivedDead }));
     }
     return { kind: 'arrival', date, target: row, party: row.party!, arrivedAlive: dto.arrivedAlive, arrivedDead: dto.arrivedDead };
   }
   if (row.kind === 'money' || row.kind === 'cash-out' || row.kind === 'sale') {
-    const what = row.kind === 'money' ? 'payment' : row.kind;
     const acceptor = acceptorOf(row, view.data.terms?.pricePerSpiderlingMinor ?? 0);
-    if (!acceptor) throw new ConflictException(`This ${what} already counts; there is nothing to confirm.`);
+    if (!acceptor) throw new ConflictException(refusal(`account.alreadyCounts.${row.kind}`));
     assertConfirmer(access, userId, acceptor, row.kind === 'money' ? 'the party who received the payment' : 'the party whose young these were');
-    if (!view.pending.has(row.id)) throw new ConflictException(`This ${what} already counts; there is nothing to confirm.`);
+    if (!view.pending.has(row.id)) throw new ConflictException(refusal(`account.alreadyCounts.${row.kind}`));
     if (view.data.rows.some((r) => r.kind === 'correction' && r.target?.id === row.id)) {
-      throw new ConflictException(`This ${what} was reversed by a correction; there is nothing to confirm.`);
+      throw new ConflictException(refusal(`account.reversedEntry.${row.kind}`));
     }
     if (row.kind !== 'money') assertWithdrawalFits(view, row);
     return { kind: 'confirmation', date, target: row, party: acceptor };
   }
-  throw new BadRequestException('Only hand-overs, payments, and cash-outs or sales below the price in the terms are confirmed.');
+  throw new BadRequestException(refusal('account.notConfirmable'));
 }

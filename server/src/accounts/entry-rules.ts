@@ -4,6 +4,7 @@ import type { ProjectMember } from '../projects/project-member.entity';
 import type { ProjectAccess } from '../projects/project-access.service';
 import type { AccountView, SacShareState } from './account-view';
 import type { LedgerEntryRow } from './ledger-entry.entity';
+import { refusal } from '../common/refusal';
 
 /** The checked parts of a new row; EntriesService turns them into an entity. */
 export type EntryDraft = Partial<
@@ -39,21 +40,21 @@ const need = (value: unknown, message: string): void => {
 function partyOf(view: AccountView, id: string | undefined, field: string): ProjectMember {
   need(id, `${field} is required: say which party of the project this is about.`);
   const m = view.data.members.find((x) => x.id === id);
-  if (!m) throw new BadRequestException(`${field} is not a party of this project.`);
-  if (m.role === 'caretaker') throw new BadRequestException(`${view.nameOf(m.id)} is a caretaker of this project and holds no share in its account.`);
+  if (!m) throw new BadRequestException(refusal('account.notParty', { field }));
+  if (m.role === 'caretaker') throw new BadRequestException(refusal('account.caretakerNoShare', { name: view.nameOf(m.id) }));
   return m;
 }
 
 function sacFor(view: AccountView, dto: CreateEntryRequest): SacShareState {
   if (dto.sacId) {
     const s = view.sacs.find((x) => x.fact.sacId === dto.sacId);
-    if (!s) throw new BadRequestException('sacId is not a sac of this project.');
+    if (!s) throw new BadRequestException(refusal('account.notSac'));
     return s;
   }
   const withYoung = view.sacs.filter((s) => s.aliveInCare > 0);
   if (withYoung.length === 1) return withYoung[0]!;
-  if (withYoung.length === 0) throw new ConflictException('No sac of this project has young in care, so none can be handed over, sold or cashed out.');
-  throw new BadRequestException('Several sacs have young in care: say which one with sacId.');
+  if (withYoung.length === 0) throw new ConflictException(refusal('account.noYoungInCare'));
+  throw new BadRequestException(refusal('account.whichSac'));
 }
 
 /** Young out of a share: fits the sac's live count and what the party is still owed (409 saying by how much). */
@@ -62,11 +63,11 @@ function withdrawal(view: AccountView, dto: CreateEntryRequest, party: ProjectMe
   const sac = sacFor(view, dto);
   const count = dto.count!;
   if (count > sac.aliveInCare) {
-    throw new ConflictException(`Only ${sac.aliveInCare} young of this sac are alive in care; this is ${count - sac.aliveInCare} more than that.`);
+    throw new ConflictException(refusal('account.moreThanAlive', { alive: sac.aliveInCare, over: count - sac.aliveInCare }));
   }
   const balance = view.balances.parties.find((p) => p.partyId === party.id);
   if (!balance || !view.data.terms?.lines.getItems().some((l) => l.member.id === party.id)) {
-    throw new ConflictException(`${view.nameOf(party.id)} has no share in the terms in force.`);
+    throw new ConflictException(refusal('account.noShare', { name: view.nameOf(party.id) }));
   }
   const check = checkWithdrawal(balance, count);
   if (check.message) throw new ConflictException(`${view.nameOf(party.id)}: ${check.message}`);
@@ -75,7 +76,7 @@ function withdrawal(view: AccountView, dto: CreateEntryRequest, party: ProjectMe
 
 function currencyOf(view: AccountView, given: string | undefined): string {
   const currency = view.data.terms!.currency;
-  if (given && given !== currency) throw new BadRequestException(`This account is kept in ${currency}; ${given} cannot be recorded in it.`);
+  if (given && given !== currency) throw new BadRequestException(refusal('account.otherCurrency', { currency, given }));
   return currency;
 }
 
@@ -87,10 +88,10 @@ function assertMayRecord(view: AccountView, access: ProjectAccess, userId: strin
   if (dto.kind === 'correction') {
     const target = view.data.rows.find((r) => r.id === dto.reversesId);
     if (target && target.recordedBy?.id === userId) return;
-    throw new ForbiddenException('A partner may only correct entries they recorded themselves; ask the project owner for others.');
+    throw new ForbiddenException(refusal('account.partnerOwnCorrections'));
   }
-  if (dto.kind === 'money') throw new ForbiddenException('A partner may only record payments they made or received.');
-  throw new ForbiddenException('Only the owner of this project records hand-overs, sales and cash-outs; partners confirm hand-overs and record payments.');
+  if (dto.kind === 'money') throw new ForbiddenException(refusal('account.partnerOwnPayments'));
+  throw new ForbiddenException(refusal('account.ownerRecords'));
 }
 
 /** An entry records what has happened: its date is the recorder's today or earlier. */
@@ -107,16 +108,13 @@ export function draftEntry(view: AccountView, access: ProjectAccess, userId: str
   assertNotFutureDate(dto.date, today, dto.kind);
   const base = { kind: dto.kind, date: dto.date, note: dto.note ?? null };
   if (dto.kind !== 'correction' && !view.data.terms) {
-    throw new ConflictException(
-      'No version of the terms is in force yet, so nothing can be recorded against shares. Every partner must accept the terms first.',
-    );
+    throw new ConflictException(refusal('account.noTermsInForce'));
   }
   switch (dto.kind) {
     case 'hand-over': {
       need(dto.method, 'method is required: pick-up or shipment.');
-      if (dto.method === 'shipment' && (!dto.carrier || !dto.tracking))
-        throw new BadRequestException('A shipment needs the carrier and the tracking reference.');
-      if (dto.method === 'pick-up' && (dto.carrier || dto.tracking)) throw new BadRequestException('A pick-up has no carrier or tracking reference.');
+      if (dto.method === 'shipment' && (!dto.carrier || !dto.tracking)) throw new BadRequestException(refusal('account.shipmentNeeds'));
+      if (dto.method === 'pick-up' && (dto.carrier || dto.tracking)) throw new BadRequestException(refusal('account.pickUpNoCarrier'));
       const party = partyOf(view, dto.memberId, 'memberId');
       return { ...base, party, method: dto.method, carrier: dto.carrier ?? null, tracking: dto.tracking ?? null, ...withdrawal(view, dto, party) };
     }
@@ -127,7 +125,7 @@ export function draftEntry(view: AccountView, access: ProjectAccess, userId: str
     }
     case 'cash-out': {
       const party = partyOf(view, dto.memberId, 'memberId');
-      if (party.id === view.owner.id) throw new BadRequestException('The project owner cannot cash out to themselves; cash-outs are paid by the owner.');
+      if (party.id === view.owner.id) throw new BadRequestException(refusal('account.ownerNoCashOut'));
       const out = withdrawal(view, dto, party);
       const sac = view.sacs.find((s) => s.fact.sacId === out.sacId)!;
       if (sac.fact.estimated) throw new ConflictException(exactCountNeeded(sac.fact.layDate, sac.fact.aliveAtCount));
@@ -137,18 +135,18 @@ export function draftEntry(view: AccountView, access: ProjectAccess, userId: str
       need(dto.amountMinor, 'amountMinor is required: the amount in minor units (cents).');
       const fromParty = partyOf(view, dto.fromMemberId, 'fromMemberId');
       const toParty = partyOf(view, dto.toMemberId, 'toMemberId');
-      if (fromParty.id === toParty.id) throw new BadRequestException('A payment goes from one party to another, not to the same party.');
+      if (fromParty.id === toParty.id) throw new BadRequestException(refusal('account.paymentSameParty'));
       return { ...base, fromParty, toParty, amountMinor: dto.amountMinor, currency: currencyOf(view, dto.currency) };
     }
     case 'correction': {
       need(dto.reversesId, 'reversesId is required: the entry this correction reverses.');
       need(dto.reason, 'reason is required: say why the entry is reversed.');
       const target = view.data.rows.find((r) => r.id === dto.reversesId);
-      if (!target) throw new NotFoundException('There is no such entry in this project.');
-      if (target.kind === 'confirmation') throw new BadRequestException('A confirmation cannot be reversed on its own; reverse the payment it confirms.');
+      if (!target) throw new NotFoundException(refusal('account.noSuchEntry'));
+      if (target.kind === 'confirmation') throw new BadRequestException(refusal('account.confirmationAlone'));
       const inForce = new Set(view.balances.inForce);
       const already = view.data.rows.find((r) => r.kind === 'correction' && r.target?.id === target.id && (inForce.has(r.id) || view.pending.has(target.id)));
-      if (already) throw new ConflictException('This entry is already reversed by an earlier correction.');
+      if (already) throw new ConflictException(refusal('account.alreadyReversed'));
       assertReinstatementFits(view, target);
       return { ...base, target, reason: dto.reason };
     }

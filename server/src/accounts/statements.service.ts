@@ -14,6 +14,7 @@ import { statementCsv } from './statement-csv';
 import { statementPdf } from './statement-pdf';
 import { Clock } from '../common/clock';
 import { loadReader, type Reader } from '../users/reader-words';
+import { refusal } from '../common/refusal';
 
 /**
  * Whether a row concerns the party, made by or to them: it names them, they recorded it, it moves
@@ -62,7 +63,7 @@ export class StatementsService {
     const view = await this.viewFor(access, memberId);
     const member = view.data.members.find((m) => m.id === memberId)!;
     const to = member.user?.email ?? member.email;
-    if (!to) throw new NotFoundException(`${memberName(member)} has no e-mail address on this project; add one to e-mail the statement.`);
+    if (!to) throw new NotFoundException(refusal('account.noEmail', { name: memberName(member) }));
     const reader = await loadReader(this.em, member.user);
     const s = this.build(view, memberId, reader);
     const b = s.balance;
@@ -90,11 +91,11 @@ export class StatementsService {
 
   private async viewFor(access: ProjectAccess, memberId: string): Promise<AccountView> {
     if (access.role !== 'owner' && access.member.id !== memberId) {
-      throw new ForbiddenException('You can see only your own statement; the project owner sees every party’s.');
+      throw new ForbiddenException(refusal('account.ownStatementOnly'));
     }
     const view = await loadAccount(this.em, access.project);
     const member = view.data.members.find((m) => m.id === memberId);
-    if (!member || member.role === 'caretaker') throw new NotFoundException('There is no such party in this project.');
+    if (!member || member.role === 'caretaker') throw new NotFoundException(refusal('account.noSuchParty'));
     return view;
   }
 

@@ -8,6 +8,7 @@ import { ProjectMember } from '../projects/project-member.entity';
 import { toActivityResponse } from './activity.mapper';
 import { Clock } from '../common/clock';
 import { TIMELINE_PAGE } from './activity-timeline-query.dto';
+import { refusal } from '../common/refusal';
 
 export interface ActivityInput {
   projectId: string;
@@ -65,7 +66,7 @@ export class ActivityService {
     let after = {};
     if (page.before) {
       const last = await this.em.findOne(ActivityEvent, { id: page.before, project: projectId, audience: { $in: audiences } }, { fields: ['at', 'createdAt'] });
-      if (!last) throw new NotFoundException({ message: 'That event is not in this project’s timeline.' });
+      if (!last) throw new NotFoundException(refusal('timeline.noSuchEvent'));
       after = {
         $or: [{ at: { $lt: last.at } }, { at: last.at, createdAt: { $lt: last.createdAt } }, { at: last.at, createdAt: last.createdAt, id: { $lt: last.id } }],
       };

@@ -7,8 +7,9 @@ import type { Animal } from './animal.entity';
 import { AnimalsService, lockAnimal } from './animals.service';
 import { AnimalDepartureRegistry } from './animal-departure.registry';
 import { lastMoltOf, premoltSinceOf } from './animals.mapper';
+import { refusal, type Refusal } from '../common/refusal';
 
-const conflict = (message: string) => new ConflictException({ message });
+const conflict = (why: Refusal) => new ConflictException(why);
 
 /**
  * Dated steps in an animal's life besides molts: the premolt flag, a sperm web seen, the return of
@@ -23,9 +24,9 @@ export class AnimalLifeService {
   ) {}
 
   /** Refuses a date in the future or before the animal came into the keeper's hands. */
-  private assertPast(viewer: AuthUser, a: Animal, on: string, what: string): void {
-    if (on > this.animals.today(viewer)) throw fieldError('on', `The ${what} date ${on} is in the future.`);
-    if (a.acquiredOn && on < a.acquiredOn) throw fieldError('on', `The ${what} date ${on} is before you acquired the animal (${a.acquiredOn}).`);
+  private assertPast(viewer: AuthUser, a: Animal, on: string, what: 'Premolt' | 'PremoltEnd' | 'SpermWeb' | 'Return' | 'Death'): void {
+    if (on > this.animals.today(viewer)) throw fieldError('on', refusal(`animal.future${what}`, { on }));
+    if (a.acquiredOn && on < a.acquiredOn) throw fieldError('on', refusal(`animal.beforeAcquired${what}`, { on, acquiredOn: a.acquiredOn }));
   }
 
   private async change(viewer: AuthUser, id: string, step: (tx: EntityManager, a: Animal) => Promise<void> | void): Promise<AnimalResponse> {
@@ -40,10 +41,10 @@ export class AnimalLifeService {
   setPremolt(viewer: AuthUser, id: string, on: string): Promise<AnimalResponse> {
     return this.change(viewer, id, (_, a) => {
       const since = premoltSinceOf(a);
-      if (since) throw conflict(`${a.label} is already flagged as in premolt since ${since}.`);
-      this.assertPast(viewer, a, on, 'premolt');
+      if (since) throw conflict(refusal('animal.alreadyPremolt', { animal: a.label, since }));
+      this.assertPast(viewer, a, on, 'Premolt');
       const molted = lastMoltOf(a);
-      if (molted && on <= molted) throw fieldError('on', `${a.label} molted on ${molted}; premolt can only start after her last molt.`);
+      if (molted && on <= molted) throw fieldError('on', refusal('animal.premoltBeforeMolt', { animal: a.label, molted }));
       a.premoltSince = on;
     });
   }
@@ -51,9 +52,9 @@ export class AnimalLifeService {
   endPremolt(viewer: AuthUser, id: string, on: string): Promise<AnimalResponse> {
     return this.change(viewer, id, (_, a) => {
       const since = premoltSinceOf(a);
-      if (!since) throw conflict(`${a.label} is not flagged as in premolt.`);
-      this.assertPast(viewer, a, on, 'end of premolt');
-      if (on < since) throw fieldError('on', `The premolt began on ${since}; it cannot end before that.`);
+      if (!since) throw conflict(refusal('animal.notPremolt', { animal: a.label }));
+      this.assertPast(viewer, a, on, 'PremoltEnd');
+      if (on < since) throw fieldError('on', refusal('animal.premoltEndBefore', { since }));
       a.premoltSince = null;
       a.premoltEndedOn = on;
     });
@@ -61,9 +62,9 @@ export class AnimalLifeService {
 
   spermWeb(viewer: AuthUser, id: string, on: string): Promise<AnimalResponse> {
     return this.change(viewer, id, (_, a) => {
-      if (a.sex !== 'male' || a.maturity !== 'mature') throw conflict('Only a mature male builds sperm webs: record his maturing molt first.');
-      this.assertPast(viewer, a, on, 'sperm web');
-      if (a.maturedOn && on < a.maturedOn) throw fieldError('on', `${a.label} matured on ${a.maturedOn}; a sperm web comes after that.`);
+      if (a.sex !== 'male' || a.maturity !== 'mature') throw conflict(refusal('animal.spermWebMatureMale'));
+      this.assertPast(viewer, a, on, 'SpermWeb');
+      if (a.maturedOn && on < a.maturedOn) throw fieldError('on', refusal('animal.spermWebBeforeMature', { animal: a.label, maturedOn: a.maturedOn }));
       a.spermWebOn = on;
     });
   }
@@ -78,12 +79,12 @@ export class AnimalLifeService {
 
   private depart(viewer: AuthUser, id: string, departure: MaleDeparture, on: string): Promise<AnimalResponse> {
     return this.change(viewer, id, async (tx, a) => {
-      if (a.status === 'deceased') throw conflict(`${a.label} is already recorded as dead (${a.statusOn}).`);
+      if (a.status === 'deceased') throw conflict(refusal('animal.alreadyDead', { animal: a.label, on: a.statusOn ?? '' }));
       if (departure === 'returned') {
-        if (a.status === 'returned') throw conflict(`${a.label} already went back to the owner on ${a.returnedOn}.`);
-        if (a.custody !== 'loan-in' || a.status !== 'active') throw conflict(`${a.label} is not on loan to you, so there is no owner to return it to.`);
+        if (a.status === 'returned') throw conflict(refusal('animal.alreadyReturned', { animal: a.label, on: a.returnedOn ?? '' }));
+        if (a.custody !== 'loan-in' || a.status !== 'active') throw conflict(refusal('animal.notOnLoan', { animal: a.label }));
       }
-      this.assertPast(viewer, a, on, departure === 'returned' ? 'return' : 'death');
+      this.assertPast(viewer, a, on, departure === 'returned' ? 'Return' : 'Death');
       await this.departures.depart(tx, { animal: a, departure, on, actorId: viewer.id });
     });
   }

@@ -4,8 +4,7 @@ import type { OwnershipRequest } from '@broodsilk/shared';
 import type { AuthUser } from '../common/auth-user';
 import { User } from '../users/user.entity';
 import { Animal } from './animal.entity';
-
-const NOT_FOUND = 'There is no animal waiting for you to accept it.';
+import { refusal } from '../common/refusal';
 
 /**
  * A keeper named as an animal's owner by e-mail sees the request and accepts it; only then is
@@ -22,7 +21,7 @@ export class AnimalOwnershipService {
 
   async accept(viewer: AuthUser, animalId: string): Promise<void> {
     const animal = await this.em.findOne(Animal, { ...this.waitingFor(viewer), id: animalId });
-    if (!animal) throw new NotFoundException(NOT_FOUND);
+    if (!animal) throw new NotFoundException(refusal('animal.noneWaiting'));
     animal.ownerUser = this.em.getReference(User, viewer.id);
     await this.em.flush();
   }

@@ -15,6 +15,7 @@ import { CreateAnimalDto } from './dto/create-animal.dto';
 import { resolveAnimalInput, type AnimalValues } from './animal-input';
 import { neutraliseCell, restoreCell } from '../common/csv/formula-cells';
 import { CSV_COLUMNS, CSV_FIELDS, CSV_MAX_BYTES, CSV_MAX_ROWS } from './animals-csv.columns';
+import { refusal } from '../common/refusal';
 
 interface ParsedRow {
   line: number;
@@ -31,10 +32,8 @@ function messages(errors: ValidationError[]): string[] {
 
 function tooMany(errors: FieldError[]): BadRequestException {
   const lines = [...new Set(errors.map((e) => e.field))];
-  return new BadRequestException({
-    message: `Nothing was imported: ${lines.length === 1 ? `${lines[0]} has a problem` : `${lines.length} lines have problems`}. Correct them and import the file again.`,
-    details: errors,
-  });
+  const summary = lines.length === 1 ? refusal('csv.problemsOne', { line: lines[0] }) : refusal('csv.problemsMany', { count: lines.length });
+  return new BadRequestException({ ...summary, details: errors });
 }
 
 @Injectable()
@@ -66,7 +65,7 @@ export class AnimalsCsvService {
 
   /** Checks every row like the create route does, then imports all of them in one transaction, or none. */
   async import(viewer: AuthUser, text: string): Promise<ImportResult> {
-    if (Buffer.byteLength(text) > CSV_MAX_BYTES) throw new PayloadTooLargeException({ message: 'The file is larger than 5 MB; import it in parts.' });
+    if (Buffer.byteLength(text) > CSV_MAX_BYTES) throw new PayloadTooLargeException(refusal('csv.tooLarge'));
     const rows = this.parse(text);
     const today = this.animals.today(viewer);
     const errors: FieldError[] = [];
@@ -101,7 +100,7 @@ export class AnimalsCsvService {
       else ready.push(values);
     }
     if (errors.length) throw tooMany(errors);
-    if (!ready.length) throw new BadRequestException({ message: 'The file has a header but no animals.' });
+    if (!ready.length) throw new BadRequestException(refusal('csv.noAnimals'));
 
     await this.em.transactional(async (tx) => {
       const recorder = tx.getReference(User, viewer.id);
@@ -123,9 +122,13 @@ export class AnimalsCsvService {
       });
     } catch (e) {
       const err = e as { message?: string; lines?: number };
-      throw new BadRequestException({ message: `The file is not valid CSV${err.lines ? ` near line ${err.lines}` : ''}: ${err.message ?? 'unreadable'}.` });
+      throw new BadRequestException(
+        err.lines
+          ? refusal('csv.notCsvAt', { line: err.lines, why: err.message ?? 'unreadable' })
+          : refusal('csv.notCsv', { why: err.message ?? 'unreadable' }),
+      );
     }
-    if (parsed.length > CSV_MAX_ROWS) throw new PayloadTooLargeException({ message: `A file can hold at most ${CSV_MAX_ROWS} animals; import it in parts.` });
+    if (parsed.length > CSV_MAX_ROWS) throw new PayloadTooLargeException(refusal('csv.tooManyRows', { max: CSV_MAX_ROWS }));
     return numberLines(Buffer.from(text, 'utf8'), parsed);
   }
 

@@ -20,6 +20,7 @@ import type { CreateAnimalDto } from './dto/create-animal.dto';
 import type { UpdateAnimalDto } from './dto/update-animal.dto';
 import type { AnimalListQueryDto } from './dto/animal-list-query.dto';
 import { Clock } from '../common/clock';
+import { refusal } from '../common/refusal';
 
 const SORT_COLUMNS = {
   label: 'a.label',
@@ -106,9 +107,9 @@ export class AnimalsService {
     const a = await em.findOne(Animal, { id, recordedBy: viewer.id }, { populate: ['species', 'recordedBy', 'ownerUser'] });
     if (a) return a;
     if (await this.readers.canRead(em, id, viewer.id)) {
-      throw new ForbiddenException({ message: 'Only the keeper who keeps this animal’s record may change it or read its logs.' });
+      throw new ForbiddenException(refusal('animal.onlyRecorder'));
     }
-    throw new NotFoundException({ message: 'There is no such animal in your collection.' });
+    throw new NotFoundException(refusal('animal.notFound'));
   }
 
   /** An animal the viewer recorded or owns (held by another keeper: read-only); anybody else's is a 404. */
@@ -165,12 +166,12 @@ export class AnimalsService {
   async remove(viewer: AuthUser, id: string): Promise<void> {
     const animal = await this.own(viewer, id);
     const reasons = await this.usage.reasons(this.em, id);
-    if (reasons.length) throw new ConflictException({ message: `This animal cannot be deleted: ${reasons.join(' ')} Mark it sold or deceased instead.` });
+    if (reasons.length) throw new ConflictException(refusal('animal.notDeletable', { reasons: reasons.join(' ') }));
     try {
       await this.em.remove(animal).flush();
     } catch (e) {
       if (e instanceof ForeignKeyConstraintViolationException) {
-        throw new ConflictException({ message: 'This animal is part of a breeding project, so it cannot be deleted. Mark it sold or deceased instead.' });
+        throw new ConflictException(refusal('animal.inProject'));
       }
       throw e;
     }

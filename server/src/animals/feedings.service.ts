@@ -8,6 +8,7 @@ import type { Animal } from './animal.entity';
 import { AnimalsService } from './animals.service';
 import { FeedingEntry } from './feeding-entry.entity';
 import type { CreateFeedingDto } from './dto/create-feeding.dto';
+import { refusal } from '../common/refusal';
 
 function toFeedingResponse(e: FeedingEntry, struckBy: FeedingEntry | undefined): FeedingResponse {
   return {
@@ -38,13 +39,13 @@ export class FeedingsService {
   }
 
   async add(viewer: AuthUser, animalId: string, dto: CreateFeedingDto): Promise<FeedingResponse> {
-    if (dto.fedOn > this.animals.today(viewer)) throw fieldError('fedOn', `The feeding date ${dto.fedOn} is in the future.`);
+    if (dto.fedOn > this.animals.today(viewer)) throw fieldError('fedOn', refusal('feeding.future', { on: dto.fedOn }));
     const prey = dto.prey.trim();
-    if (!prey) throw fieldError('prey', 'Say what prey was offered, e.g. "2 adult crickets".');
+    if (!prey) throw fieldError('prey', refusal('feeding.preyNeeded'));
     return this.em.transactional(async (tx) => {
       const animal = await this.animals.ownOrForbid(viewer, animalId, tx);
       const strikes = dto.strikes ? await this.strikeTarget(tx, animal, dto) : null;
-      if (!strikes && dto.reason) throw fieldError('reason', 'A reason goes with a correction: say which entry it corrects.');
+      if (!strikes && dto.reason) throw fieldError('reason', refusal('feeding.reasonOnlyCorrection'));
       const entry = tx.create(FeedingEntry, {
         animal,
         fedOn: dto.fedOn,
@@ -61,10 +62,10 @@ export class FeedingsService {
   }
 
   private async strikeTarget(tx: EntityManager, animal: Animal, dto: CreateFeedingDto): Promise<FeedingEntry> {
-    if (!dto.reason?.trim()) throw fieldError('reason', 'Say briefly why the entry is corrected.');
+    if (!dto.reason?.trim()) throw fieldError('reason', refusal('feeding.correctionWhy'));
     const target = await tx.findOne(FeedingEntry, { id: dto.strikes!, animal });
-    if (!target) throw fieldError('strikes', 'There is no such entry in this animal’s feeding log.');
-    if (await tx.count(FeedingEntry, { strikes: target })) throw new ConflictException({ message: 'That entry has already been corrected.' });
+    if (!target) throw fieldError('strikes', refusal('feeding.noSuchEntry'));
+    if (await tx.count(FeedingEntry, { strikes: target })) throw new ConflictException(refusal('feeding.alreadyCorrected'));
     return target;
   }
 }

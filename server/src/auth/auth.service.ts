@@ -23,6 +23,7 @@ import { securityNotice } from './security-notices';
 import { assertPassword } from './wrong-password';
 import { EmailConfirmations } from './email-confirmations.service';
 import { hashInvitationToken } from '../invitations/invitation-token';
+import { refusal } from '../common/refusal';
 
 export const RESET_LINK_MINUTES = 45;
 /** The composed mail behind every reset request: a link for a known address, nothing for an unknown one. */
@@ -100,15 +101,12 @@ export class AuthService {
     const ok = await verifyPassword(user?.passwordHash ?? (await dummyPasswordHash()), dto.password);
     if (!user || !ok) {
       await this.limits.recordFailure(dto.email);
-      throw new UnauthorizedException('The e-mail or password is not right.');
+      throw new UnauthorizedException(refusal('auth.wrongCredentials'));
     }
     if (!user.emailConfirmedAt) {
       // Only a right password learns this: the address's owner has not opened the link yet.
       await this.limits.recordSuccess(dto.email);
-      throw new ForbiddenException({
-        message: 'Confirm your e-mail address first: open the link we sent when you registered. No e-mail? Send it again.',
-        reason: EMAIL_NOT_CONFIRMED,
-      });
+      throw new ForbiddenException({ ...refusal('auth.confirmEmailFirst'), reason: EMAIL_NOT_CONFIRMED });
     }
     if (user.totpEnabledAt) {
       const expiresAt = new Date(this.clock.now().getTime() + PENDING_SIGN_IN_MINUTES * 60_000);
@@ -127,14 +125,14 @@ export class AuthService {
     const pending = readPendingSignIn(this.jwt, this.app.jwtSecret, pendingToken, this.clock.now());
     const user = pending && (await this.em.findOne(User, { id: pending.userId }));
     if (!pending || !user || user.tokenVersion !== pending.ver) {
-      throw new UnauthorizedException('This sign-in has expired. Enter your e-mail and password again.');
+      throw new UnauthorizedException(refusal('auth.signInExpired'));
     }
     await this.limits.assertAccountOpen(user.email, ip);
     const kind = await this.secondFactor.takeCode(this.em, user, code);
     if (!kind) {
       await this.limits.recordFailure(user.email);
-      const message = 'This code is not right. Enter the code your app shows now, or a recovery code.';
-      throw new UnauthorizedException({ message, details: [{ field: 'code', message }] });
+      const why = refusal('auth.codeOrRecovery');
+      throw new UnauthorizedException({ ...why, details: [{ field: 'code', ...why }] });
     }
     await this.limits.recordSuccess(user.email);
     // A recovery code in someone else's hands would pass for the owner: tell them it was used.
@@ -191,7 +189,7 @@ export class AuthService {
     await this.em.transactional(async (em) => {
       const row = await em.findOne(PasswordResetToken, { tokenHash: sha256(token) }, { populate: ['user'], lockMode: LockMode.PESSIMISTIC_WRITE });
       if (!row || row.usedAt || row.expiresAt.getTime() < this.clock.now().getTime()) {
-        throw new BadRequestException('This reset link has expired or was already used. Ask for a new one.');
+        throw new BadRequestException(refusal('auth.resetExpired'));
       }
       row.usedAt = this.clock.now();
       const user = row.user.getEntity();

@@ -11,6 +11,7 @@ import { User } from '../users/user.entity';
 import { Invitation } from '../invitations/invitation.entity';
 import { InvitationsService } from '../invitations/invitations.service';
 import { EmailConfirmationToken } from './email-confirmation-token.entity';
+import { refusal } from '../common/refusal';
 
 /** The composed mail behind "send the e-mail again": a new link for an unconfirmed account, nothing otherwise. */
 const RESEND_MAIL = 'email-confirmation';
@@ -89,7 +90,7 @@ export class EmailConfirmations {
     return this.em.transactional(async (em) => {
       const row = await em.findOne(EmailConfirmationToken, { tokenHash: sha256(token) }, { populate: ['user'], lockMode: LockMode.PESSIMISTIC_WRITE });
       if (!row || row.usedAt || row.expiresAt.getTime() <= this.clock.now().getTime()) {
-        throw new BadRequestException('This confirmation link has expired or was already used. Sign in to have a new one sent.');
+        throw new BadRequestException(refusal('auth.confirmationExpired'));
       }
       const user = row.user.getEntity();
       await em.nativeUpdate(EmailConfirmationToken, { user: user.id, usedAt: null }, { usedAt: this.clock.now() });

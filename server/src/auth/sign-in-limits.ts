@@ -5,6 +5,7 @@ import { Pool } from 'pg';
 import { RateLimiterPostgres, RateLimiterRes } from 'rate-limiter-flexible';
 import { appConfig } from '../config/app.config';
 import { databaseConfig } from '../config/database.config';
+import { refusal, type Refusal } from '../common/refusal';
 
 /** Consecutive wrong passwords for one account before it is locked. */
 export const FAILURES_BEFORE_LOCK = 5;
@@ -48,7 +49,7 @@ export class SignInLimits implements OnModuleDestroy {
       await this.perAddress.consume(`${route}:${ip}`);
     } catch (e) {
       if (!(e instanceof RateLimiterRes)) throw e;
-      this.refuse({ scope: 'address', route, ip }, 'Too many attempts. Wait a minute and try again.', e);
+      this.refuse({ scope: 'address', route, ip }, refusal('auth.tooManyAttempts'), e);
     }
   }
 
@@ -57,7 +58,7 @@ export class SignInLimits implements OnModuleDestroy {
     const state = await this.failures.get(email);
     if (state && state.consumedPoints > FAILURES_BEFORE_LOCK && state.msBeforeNext > 0) {
       const seconds = Math.ceil(state.msBeforeNext / 1000);
-      this.refuse({ scope: 'account', account: digest(email), ip }, `Too many wrong passwords for this account. Wait ${seconds} seconds and try again.`, state);
+      this.refuse({ scope: 'account', account: digest(email), ip }, refusal('auth.tooManyWrongPasswords', { seconds }), state);
     }
   }
 
@@ -76,9 +77,9 @@ export class SignInLimits implements OnModuleDestroy {
     await this.failures.delete(email);
   }
 
-  private refuse(fields: Record<string, string>, message: string, res: RateLimiterRes): never {
+  private refuse(fields: Record<string, string>, why: Refusal, res: RateLimiterRes): never {
     const retryAfter = Math.max(1, Math.ceil(res.msBeforeNext / 1000));
     this.logger.warn({ event: 'security.rate_limited', ...fields, retryAfter }, 'sign-in refused by a rate limit');
-    throw new HttpException({ message, retryAfter }, HttpStatus.TOO_MANY_REQUESTS);
+    throw new HttpException({ ...why, retryAfter }, HttpStatus.TOO_MANY_REQUESTS);
   }
 }

@@ -2,6 +2,7 @@ import { ForbiddenException, Inject, Injectable, UnsupportedMediaTypeException, 
 import type { ConfigType } from '@nestjs/config';
 import type { Request } from 'express';
 import { appConfig } from '../config/app.config';
+import { refusal } from '../common/refusal';
 
 /**
  * Sign-in and registration come only from our own pages or a non-browser client: the body must be
@@ -15,10 +16,10 @@ export class SignInRequestGuard implements CanActivate {
 
   canActivate(context: ExecutionContext): boolean {
     const req = context.switchToHttp().getRequest<Request>();
-    if (!req.is('application/json')) throw new UnsupportedMediaTypeException('Send the form as JSON (Content-Type: application/json).');
+    if (!req.is('application/json')) throw new UnsupportedMediaTypeException(refusal('auth.sendJson'));
     const origin = req.get('origin');
     if (origin !== undefined && !this.ownOrigins(req).includes(origin)) {
-      throw new ForbiddenException('This sign-in did not come from a Broodsilk page.');
+      throw new ForbiddenException(refusal('auth.foreignOrigin'));
     }
     return true;
   }

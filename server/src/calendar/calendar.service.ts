@@ -16,8 +16,7 @@ import { feedToken, hashToken, revokeFeeds } from './feed-token';
 import { maleClockEvents, sacEvents, type FeedEvent } from './feed-events';
 import { expectedStageDays } from '../species/stage-days';
 import { Clock } from '../common/clock';
-
-const NOT_FOUND = 'There is no such calendar feed. If you rotated its address, subscribe to the new one.';
+import { refusal } from '../common/refusal';
 
 @Injectable()
 export class CalendarService {
@@ -66,7 +65,7 @@ export class CalendarService {
   /** The iCalendar text for a token; unknown or revoked tokens are a 404. */
   async render(token: string): Promise<string> {
     const feed = await this.em.findOne(CalendarFeed, { tokenHash: hashToken(token), revokedAt: null }, { populate: ['user'] });
-    if (!feed) throw new NotFoundException({ message: NOT_FOUND });
+    if (!feed) throw new NotFoundException(refusal('timeline.noSuchFeed'));
     const u = feed.user;
     const viewer: AuthUser = { id: u.id, email: u.email, role: u.role, timeZone: u.timeZone, mustEnrolSecondFactor: false };
     const reader = readerFrom(u);

@@ -1,6 +1,7 @@
 import { Controller, Get, ServiceUnavailableException } from '@nestjs/common';
 import { Public } from '../common/decorators/public.decorator';
 import { HealthService } from './health.service';
+import { fieldRefusal, refusal } from '../common/refusal';
 
 @Public()
 @Controller('health')
@@ -10,7 +11,7 @@ export class HealthController {
   @Get()
   async check(): Promise<{ status: 'ok'; db: 'up' }> {
     if (!(await this.health.databaseUp())) {
-      throw new ServiceUnavailableException({ message: 'The database cannot be reached.', details: [{ field: 'db', message: 'down' }] });
+      throw new ServiceUnavailableException({ ...refusal('request.databaseDown'), details: [fieldRefusal('db', 'request.down')] });
     }
     return { status: 'ok', db: 'up' };
   }

@@ -5,6 +5,7 @@ import type { Request, Response } from 'express';
 import { defaultIfEmpty, from, lastValueFrom, type Observable } from 'rxjs';
 import type { AuthUser } from '../common/auth-user';
 import { IdempotencyStore } from './idempotency.store';
+import { refusal } from '../common/refusal';
 
 export const IDEMPOTENCY_HEADER = 'Idempotency-Key';
 // A UUID or any other opaque token a client makes up: printable ASCII, bounded.
@@ -34,7 +35,7 @@ export class IdempotencyInterceptor implements NestInterceptor {
     const key = req.header(IDEMPOTENCY_HEADER);
     const user = req.user as AuthUser | undefined;
     if (req.method !== 'POST' || key === undefined || !user) return next.handle();
-    if (!KEY.test(key)) throw new BadRequestException({ message: `${IDEMPOTENCY_HEADER} must be 8 to 255 visible characters, e.g. a UUID.` });
+    if (!KEY.test(key)) throw new BadRequestException(refusal('request.idempotencyKey', { header: IDEMPOTENCY_HEADER }));
     const path = req.originalUrl.split('?')[0]!;
     const fingerprint = createHash('sha256')
       .update(`${req.method} ${path}\n${JSON.stringify(req.body ?? null)}`)

@@ -1,6 +1,7 @@
 import { ConflictException, Injectable, UnprocessableEntityException } from '@nestjs/common';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { randomUUID } from 'node:crypto';
+import { refusal } from '../common/refusal';
 
 /** How long a key is remembered (the usual window for client retries; common practice, e.g. 24 hours in payment APIs). */
 export const IDEMPOTENCY_TTL_HOURS = 24;
@@ -64,9 +65,7 @@ export class IdempotencyStore {
     const [row] = await run<Row[]>(`select id, method, path, fingerprint, status, body from idempotency_keys where user_id = ? and key = ?`, [r.userId, r.key]);
     if (!row) throw busy(); // expired and deleted by a parallel request meanwhile: the client retries
     if (row.method !== r.method || row.path !== r.path || row.fingerprint !== r.fingerprint) {
-      throw new UnprocessableEntityException({
-        message: 'This Idempotency-Key was already used for a different request. Send a new key for a new request.',
-      });
+      throw new UnprocessableEntityException(refusal('request.idempotencyReused'));
     }
     if (row.status === null) throw busy(); // only a key written before answers were stored with their write
     return { replay: { status: row.status, body: row.body } };
@@ -85,4 +84,4 @@ export class IdempotencyStore {
   }
 }
 
-const busy = () => new ConflictException({ message: 'The same request is still being processed; try again in a moment.' });
+const busy = () => new ConflictException(refusal('request.busy'));

@@ -1,15 +1,16 @@
 import type { InvitationPreview, InvitationResponse } from '@broodsilk/shared';
 import type { Invitation } from './invitation.entity';
+import { refusal, type Refusal } from '../common/refusal';
 
 export function toInvitationResponse(i: Invitation): InvitationResponse {
   return { id: i.id, email: i.email, role: i.role, memberId: i.member?.id ?? null, expiresAt: i.expiresAt.toISOString(), createdAt: i.createdAt.toISOString() };
 }
 
 /** Why a link no longer works, in words; null while it does. */
-export function invitationProblem(i: Invitation, now: Date): string | null {
-  if (i.acceptedAt) return 'This invitation has already been used.';
-  if (i.replacedAt) return 'This invitation was replaced by a newer one; use the link in the latest e-mail.';
-  if (i.expiresAt.getTime() <= now.getTime()) return 'This invitation has expired; ask the project owner to send a new one.';
+export function invitationProblem(i: Invitation, now: Date): Refusal | null {
+  if (i.acceptedAt) return refusal('invitation.used');
+  if (i.replacedAt) return refusal('invitation.replaced');
+  if (i.expiresAt.getTime() <= now.getTime()) return refusal('invitation.expired');
   return null;
 }
 
@@ -21,7 +22,7 @@ export function toInvitationPreview(i: Invitation, now: Date): InvitationPreview
     inviterName: i.invitedBy.displayName,
     role: i.role,
     valid: problem === null,
-    problem,
+    problem: problem?.message ?? null,
     expiresAt: i.expiresAt.toISOString(),
   };
 }

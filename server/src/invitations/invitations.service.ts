@@ -16,8 +16,9 @@ import { hashInvitationToken, INVITATION_DAYS, newInvitationToken } from './invi
 import { invitationProblem, toInvitationPreview, toInvitationResponse } from './invitations.mapper';
 import type { CreateInvitationDto } from './dto/create-invitation.dto';
 import { Clock } from '../common/clock';
+import { fieldRefusal, refusal, term } from '../common/refusal';
 
-const INVALID_LINK = 'This invitation link is not valid. Check that you copied all of it.';
+const INVALID_LINK = refusal('invitation.invalidLink');
 
 @Injectable()
 export class InvitationsService {
@@ -35,25 +36,20 @@ export class InvitationsService {
     const { token, hash } = newInvitationToken();
     const invitation = await this.em.transactional(async (tx) => {
       const members = await tx.find(ProjectMember, { project: access.project.id }, { populate: ['user'] });
-      if (members.some((m) => m.user?.email.toLowerCase() === email))
-        throw new ConflictException({ message: 'Someone with this e-mail address is already a member of the project.' });
+      if (members.some((m) => m.user?.email.toLowerCase() === email)) throw new ConflictException(refusal('invitation.alreadyMemberEmail'));
       let member: ProjectMember | null = null;
       if (dto.memberId) {
         member = members.find((m) => m.id === dto.memberId) ?? null;
-        if (!member)
-          throw new BadRequestException({
-            message: 'This project has no such party.',
-            details: [{ field: 'memberId', message: 'This project has no such party.' }],
-          });
+        if (!member) throw new BadRequestException({ ...refusal('project.noSuchParty'), details: [fieldRefusal('memberId', 'project.noSuchParty')] });
         if (member.user)
           throw new BadRequestException({
-            message: `${member.user.displayName} already has an account in this project.`,
-            details: [{ field: 'memberId', message: 'This party already has an account.' }],
+            ...refusal('invitation.partyHasAccount', { name: member.user.displayName }),
+            details: [fieldRefusal('memberId', 'invitation.partyHasAccountField')],
           });
         if (member.role !== dto.role)
           throw new BadRequestException({
-            message: `${member.name} is a ${member.role} of this project; invite them as ${member.role}.`,
-            details: [{ field: 'role', message: `${member.name} is a ${member.role}.` }],
+            ...refusal('invitation.roleMismatch', { name: member.name, role: term(`refusal.projectRole.${member.role}`) }),
+            details: [fieldRefusal('role', 'invitation.roleMismatchField', { name: member.name, role: term(`refusal.projectRole.${member.role}`) })],
           });
       }
       await tx.nativeUpdate(Invitation, { project: access.project.id, email, acceptedAt: null, replacedAt: null }, { replacedAt: this.clock.now() });
@@ -139,9 +135,9 @@ export class InvitationsService {
    */
   async acceptAfterConfirmation(tx: EntityManager, invitationId: string, user: User): Promise<AcceptInvitationResponse | { problem: string }> {
     const inv = await tx.findOne(Invitation, { id: invitationId }, { populate: ['project', 'invitedBy', 'member'], lockMode: LockMode.PESSIMISTIC_WRITE });
-    if (!inv) return { problem: INVALID_LINK };
+    if (!inv) return { problem: INVALID_LINK.message };
     const problem = invitationProblem(inv, this.clock.now());
-    if (problem) return { problem };
+    if (problem) return { problem: problem.message };
     try {
       return await this.acceptAs(tx, inv, user);
     } catch (e) {
@@ -175,17 +171,17 @@ export class InvitationsService {
         { id: invitationId, project: access.project.id },
         { populate: ['project', 'member', 'claimedBy'], lockMode: LockMode.PESSIMISTIC_WRITE },
       );
-      if (!inv) throw new NotFoundException('This project has no such invitation.');
+      if (!inv) throw new NotFoundException(refusal('invitation.noSuchInvitation'));
       const problem = invitationProblem(inv, this.clock.now());
       if (problem) throw new GoneException(problem);
-      if (!inv.claimedBy) throw new ConflictException({ message: 'Nobody has asked to join with this invitation yet.' });
+      if (!inv.claimedBy) throw new ConflictException(refusal('invitation.nobodyAsked'));
       return this.join(tx, inv, inv.claimedBy, viewer.id);
     });
   }
 
   private async assertNotMember(tx: EntityManager, inv: Invitation, user: User): Promise<void> {
     if (await tx.count(ProjectMember, { project: inv.project.id, user: user.id })) {
-      throw new ConflictException({ message: 'You are already a member of this project.' });
+      throw new ConflictException(refusal('invitation.alreadyMember'));
     }
   }
 
@@ -194,7 +190,7 @@ export class InvitationsService {
     const projectId = inv.project.id;
     let member: ProjectMember;
     if (inv.member) {
-      if (inv.member.user) throw new ConflictException({ message: 'This party of the project is already linked to an account.' });
+      if (inv.member.user) throw new ConflictException(refusal('invitation.partyLinked'));
       member = inv.member;
       member.user = user;
       member.role = inv.role;

@@ -2,6 +2,7 @@ import { BadGatewayException, Inject, Injectable, Logger, OnModuleDestroy, Servi
 import { ConfigType } from '@nestjs/config';
 import nodemailer, { type Transporter } from 'nodemailer';
 import { mailConfig } from '../config/mail.config';
+import { refusal } from '../common/refusal';
 
 export interface OutgoingMail {
   to: string;
@@ -37,9 +38,9 @@ export class MailService implements OnModuleDestroy {
       const code = (e as { responseCode?: unknown }).responseCode;
       this.logger.error(`mail "${mail.subject}" not sent: ${e instanceof Error ? e.message : String(e)}`);
       if (typeof code === 'number' && code >= 500) {
-        throw new BadGatewayException(`The mail server refused the message to ${mail.to}. Check the address and try again.`);
+        throw new BadGatewayException(refusal('request.mailRefused', { to: String(mail.to) }));
       }
-      throw new ServiceUnavailableException('The mail server cannot be reached just now. Nothing was sent; try again in a few minutes.');
+      throw new ServiceUnavailableException(refusal('request.mailUnreachable'));
     }
     this.logger.log(`mail "${mail.subject}" sent`);
   }

@@ -19,6 +19,7 @@ import { badNewsFacts } from './partner-update-facts';
 import { ProgressLinksService } from '../progress-links/progress-links.service';
 import { writePartnerUpdates, type UpdateLink, type UpdateMailer, type UpdateWords } from './partner-update-writer';
 import type { FailureNoticePreviewDto } from './dto/failure-notice-preview.dto';
+import { refusal } from '../common/refusal';
 
 /**
  * Partner updates follow the activity events: after every flush that writes an event partners hear
@@ -119,7 +120,7 @@ export class PartnerUpdates implements OnModuleInit, EventSubscriber, UpdateMail
   async failurePreview(access: ProjectAccess, viewer: { id: string }, sacId: string, dto: FailureNoticePreviewDto): Promise<FailureNoticePreview> {
     const em = this.em.fork();
     const sac = await em.findOne(Sac, { id: sacId, project: access.project.id }, { fields: ['layDate'] });
-    if (!sac) throw new NotFoundException({ message: 'There is no such sac in this project.' });
+    if (!sac) throw new NotFoundException(refusal('sac.notFound'));
     const keeper = await em.findOneOrFail(User, viewer.id);
     const partners = await em.find(ProjectMember, { project: access.project.id, role: 'partner' });
     const message = dto.partnerMessage?.trim() ? dto.partnerMessage : null;

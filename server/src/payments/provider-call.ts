@@ -1,5 +1,6 @@
 import { BadGatewayException, ServiceUnavailableException } from '@nestjs/common';
 import Stripe from 'stripe';
+import { refusal } from '../common/refusal';
 
 /**
  * Runs one call to the payment provider. Its refusals become a 502 and an unreachable provider a
@@ -10,10 +11,10 @@ export async function providerCall<T>(call: () => Promise<T>): Promise<T> {
     return await call();
   } catch (e) {
     if (e instanceof Stripe.errors.StripeConnectionError) {
-      throw new ServiceUnavailableException('The payment provider cannot be reached just now. Nothing was charged or saved; try again in a few minutes.');
+      throw new ServiceUnavailableException(refusal('request.paymentUnreachable'));
     }
     if (e instanceof Stripe.errors.StripeError) {
-      throw new BadGatewayException(`The payment provider refused the request (${e.message}). Nothing was charged or saved.`);
+      throw new BadGatewayException(refusal('request.paymentRefused', { why: e.message }));
     }
     throw e;
   }

@@ -1,5 +1,6 @@
 import { PayloadTooLargeException, UnsupportedMediaTypeException } from '@nestjs/common';
 import sharp, { type Metadata } from 'sharp';
+import { refusal } from '../common/refusal';
 
 /** Formats we take, as sharp reads them from the bytes (the file name and declared type are not trusted). */
 const ACCEPTED = new Set(['jpeg', 'png', 'webp', 'heif', 'avif', 'tiff']);
@@ -16,7 +17,7 @@ export interface ProcessedImage {
   contentType: 'image/jpeg';
 }
 
-const refuse = () => new UnsupportedMediaTypeException({ message: 'That file is not a photo we can read: upload a JPEG, PNG, WebP or HEIF/AVIF image.' });
+const refuse = () => new UnsupportedMediaTypeException(refusal('photo.unreadable'));
 
 /**
  * Turns an upload into a JPEG and a thumbnail. `.rotate()` applies the EXIF orientation first, and
@@ -31,9 +32,8 @@ export async function processImage(input: Buffer): Promise<ProcessedImage> {
   }
   if (!meta.format || !ACCEPTED.has(meta.format)) throw refuse();
   if (meta.width * meta.height > MAX_PHOTO_PIXELS) {
-    throw new PayloadTooLargeException({
-      message: `The photo has ${((meta.width * meta.height) / 1e6).toFixed(1)} megapixels (${meta.width} × ${meta.height}); at most ${MAX_PHOTO_PIXELS / 1e6} are taken. Send a smaller one.`,
-    });
+    const values = { megapixels: ((meta.width * meta.height) / 1e6).toFixed(1), width: meta.width, height: meta.height, max: MAX_PHOTO_PIXELS / 1e6 };
+    throw new PayloadTooLargeException(refusal('photo.tooManyPixels', values));
   }
   try {
     // The same bound inside the decoder too, should a header understate the size.

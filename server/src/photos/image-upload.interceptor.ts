@@ -3,6 +3,7 @@ import type { ConfigType } from '@nestjs/config';
 import { FileInterceptor } from '@nestjs/platform-express';
 import type { Observable } from 'rxjs';
 import { storageConfig } from '../config/storage.config';
+import { refusal } from '../common/refusal';
 
 /** Multipart field `file`, one file, held in memory up to the configured limit (15 MB); a larger one is a clear 413. */
 @Injectable()
@@ -20,8 +21,7 @@ export class ImageUploadInterceptor implements NestInterceptor {
     try {
       return await (this.inner.intercept(ctx, next) as Promise<Observable<unknown>>);
     } catch (e) {
-      if (e instanceof PayloadTooLargeException)
-        throw new PayloadTooLargeException({ message: `The photo is larger than ${this.limitMb} MB. Send a smaller one.` });
+      if (e instanceof PayloadTooLargeException) throw new PayloadTooLargeException(refusal('photo.tooLarge', { mb: this.limitMb }));
       throw e;
     }
   }

@@ -8,10 +8,9 @@ import { PhotoStorageService } from './photo-storage.service';
 import { PhotoAccessRegistry } from './photo-access.registry';
 import { processImage } from './image-processing';
 import { toPhotoRef } from './photos.mapper';
+import { fieldRefusal, refusal } from '../common/refusal';
 
 export type PhotoVariant = 'full' | 'thumb';
-
-const NOT_FOUND = 'That photo does not exist or is not yours to see.';
 
 @Injectable()
 export class PhotosService {
@@ -23,8 +22,7 @@ export class PhotosService {
 
   /** Re-encodes and stores an upload for a subject the caller has already checked the viewer may change. */
   async store(viewer: AuthUser, subjectType: string, subjectId: string, file: { buffer?: Buffer } | undefined): Promise<PhotoRef> {
-    if (!file?.buffer?.length)
-      throw new BadRequestException({ message: 'Attach the photo as the form field "file".', details: [{ field: 'file', message: 'Attach a photo.' }] });
+    if (!file?.buffer?.length) throw new BadRequestException({ ...refusal('photo.attach'), details: [fieldRefusal('file', 'photo.attachField')] });
     const image = await processImage(file.buffer);
     const photo = this.em.create(Photo, {
       uploadedBy: this.em.getReference(User, viewer.id),
@@ -61,7 +59,7 @@ export class PhotosService {
 
   async read(viewer: AuthUser, id: string, variant: PhotoVariant): Promise<StreamableFile> {
     const photo = await this.em.findOne(Photo, { id });
-    if (!photo || !(await this.access.allows(this.em, viewer, photo.subjectType, photo.subjectId))) throw new NotFoundException({ message: NOT_FOUND });
+    if (!photo || !(await this.access.allows(this.em, viewer, photo.subjectType, photo.subjectId))) throw new NotFoundException(refusal('photo.notFound'));
     return this.file(photo, variant);
   }
 
@@ -71,7 +69,7 @@ export class PhotosService {
    */
   async readOfSubjects(subjectType: string, subjectIds: string[], id: string, variant: PhotoVariant): Promise<StreamableFile> {
     const photo = subjectIds.length ? await this.em.findOne(Photo, { id, subjectType, subjectId: { $in: subjectIds } }) : null;
-    if (!photo) throw new NotFoundException({ message: NOT_FOUND });
+    if (!photo) throw new NotFoundException(refusal('photo.notFound'));
     return this.file(photo, variant);
   }
 

@@ -1,5 +1,6 @@
 import { BadRequestException, UnprocessableEntityException } from '@nestjs/common';
 import { WARNINGS_FIELD, unacknowledged, type AcknowledgedWarnings, type PlausibilityWarning } from '@broodsilk/shared';
+import { fieldRefusal, refusal } from '../common/refusal';
 
 /**
  * Lets a write with plausibility warnings go ahead only once every warning is acknowledged with a
@@ -11,16 +12,15 @@ export function acceptWarnings(found: readonly PlausibilityWarning[], request: A
   const open = unacknowledged(found, request.acknowledgedWarnings);
   if (open.length) {
     throw new UnprocessableEntityException({
-      message: open.length === 1 ? open[0]!.message : `Please check ${open.length} things before saving: ${open.map((w) => w.message).join(' ')}`,
+      ...(open.length === 1
+        ? { message: open[0]!.message }
+        : refusal('plausibility.checkMany', { count: open.length, list: open.map((w) => w.message).join(' ') })),
       details: open.map((w) => ({ field: WARNINGS_FIELD, code: w.code, message: w.message, key: w.key, values: w.values })),
     });
   }
   const reason = request.warningReason?.trim();
   if (!reason) {
-    throw new BadRequestException({
-      message: 'Say briefly why the unusual value is right (warningReason); it is kept with the record.',
-      details: [{ field: 'warningReason', message: 'Say briefly why the unusual value is right.' }],
-    });
+    throw new BadRequestException({ ...refusal('plausibility.reasonNeeded'), details: [fieldRefusal('warningReason', 'plausibility.reasonNeededField')] });
   }
   return reason;
 }

@@ -19,11 +19,10 @@ import { loadAccount } from '../accounts/account-loader';
 import { User } from '../users/user.entity';
 import { ProgressLink } from './progress-link.entity';
 import { toProgressShare } from './progress-share';
+import { refusal } from '../common/refusal';
 
 /** What a revoked, rotated or made-up link answers: said to a person, revealing nothing. */
-export const PROGRESS_NOT_FOUND =
-  'This progress link does not open (any more). The keeper may have sent a newer one or revoked it; ask them for the current link.';
-const NO_SUCH_PARTY = 'This project has no such party.';
+export const PROGRESS_NOT_FOUND = refusal('progress.linkNotFound').message;
 /** The newest events the page lists. */
 const TIMELINE_LIMIT = 100;
 
@@ -177,7 +176,7 @@ export class ProgressLinksService {
       { tokenHash: hashLinkToken(token), revokedAt: null },
       { populate: ['member.project.female.species', 'member.project.male.species'] },
     );
-    if (!link) throw new NotFoundException({ message: PROGRESS_NOT_FOUND });
+    if (!link) throw new NotFoundException(refusal('progress.linkNotFound'));
     return link;
   }
 
@@ -198,15 +197,12 @@ export class ProgressLinksService {
 
   private async memberOf(em: EntityManager, access: ProjectAccess, memberId: string): Promise<ProjectMember> {
     const member = await em.findOne(ProjectMember, { id: memberId, project: access.project.id }, { populate: ['project', 'user'] });
-    if (!member) throw new NotFoundException({ message: NO_SUCH_PARTY });
+    if (!member) throw new NotFoundException(refusal('project.noSuchParty'));
     return member;
   }
 
   private assertOutside(member: ProjectMember): void {
-    if (member.user)
-      throw new ConflictException({
-        message: `${member.user.displayName ?? member.name} has a Broodsilk account and follows the project by signing in; progress links are for parties without an account.`,
-      });
+    if (member.user) throw new ConflictException(refusal('progress.hasAccount', { name: member.user.displayName ?? member.name }));
   }
 
   private async revokeRows(em: EntityManager, member: ProjectMember): Promise<number> {

@@ -9,6 +9,7 @@ import { TermsLine } from './terms-line.entity';
 import { toMemberResponse } from './projects.mapper';
 import type { AddMemberDto } from './dto/add-member.dto';
 import { label, wordsFor } from '@broodsilk/shared';
+import { refusal } from '../common/refusal';
 
 @Injectable()
 export class MembersService {
@@ -29,7 +30,7 @@ export class MembersService {
       if (email) {
         const all = await tx.find(ProjectMember, { project: access.project.id }, { populate: ['user'] });
         const same = all.find((m) => (m.user?.email ?? m.email)?.toLowerCase() === email);
-        if (same) throw new ConflictException({ message: `${same.user?.displayName ?? same.name} already has this e-mail address in the project.` });
+        if (same) throw new ConflictException(refusal('project.emailTaken', { name: same.user?.displayName ?? same.name }));
       }
       const m = tx.create(ProjectMember, { project: access.project.id, user: null, role: dto.role, name: dto.name.trim(), email });
       this.activity.record(tx, {
@@ -50,13 +51,10 @@ export class MembersService {
   async remove(viewer: AuthUser, access: ProjectAccess, memberId: string): Promise<void> {
     await this.em.transactional(async (tx) => {
       const m = await tx.findOne(ProjectMember, { id: memberId, project: access.project.id }, { populate: ['user'] });
-      if (!m) throw new NotFoundException('This project has no such party.');
-      if (m.role === 'owner') throw new BadRequestException({ message: 'The owner cannot be removed from their own project.' });
+      if (!m) throw new NotFoundException(refusal('project.noSuchParty'));
+      if (m.role === 'owner') throw new BadRequestException(refusal('project.ownerStays'));
       const inTerms = await tx.count(TermsLine, { member: m.id });
-      if (inTerms)
-        throw new ConflictException({
-          message: `${m.user?.displayName ?? m.name} is a party of the project's terms, so they stay on the record. Propose new terms giving them weight 0 instead.`,
-        });
+      if (inTerms) throw new ConflictException(refusal('project.partyInTerms', { name: m.user?.displayName ?? m.name }));
       this.activity.record(tx, {
         projectId: access.project.id,
         actorId: viewer.id,

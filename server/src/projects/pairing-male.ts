@@ -5,6 +5,7 @@ import { Animal } from '../animals/animal.entity';
 import { fieldError } from '../common/field-errors';
 import type { Project } from './project.entity';
 import { diedOn } from './project-males';
+import { refusal, term, type RefusalKey, type RefusalValues } from '../common/refusal';
 
 /**
  * The male a pairing that started on `startedOn` names. The project's first male was checked when
@@ -15,14 +16,14 @@ import { diedOn } from './project-males';
  */
 export async function pairingMale(tx: EntityManager, project: Project, maleId: string, startedOn: string): Promise<Animal> {
   const male = maleId === project.male.id ? project.male : await tx.findOne(Animal, { id: maleId, recordedBy: project.owner.id });
-  if (!male) throw new NotFoundException({ message: 'There is no such male in your collection.' });
-  const refuse = (why: string) => fieldError('maleId', `${male.label} ${why}`);
+  if (!male) throw new NotFoundException(refusal('pairing.noSuchMale'));
+  const refuse = (key: RefusalKey, values: RefusalValues = {}) => fieldError('maleId', refusal(key, { male: male.label, ...values }));
   const died = diedOn(male);
-  if (died && startedOn > died) throw refuse(`died on ${died}, so a pairing on ${startedOn} cannot be with him.`);
+  if (died && startedOn > died) throw refuse('pairing.maleDied', { died, on: startedOn });
   if (male === project.male) return male;
-  if (male.sex !== 'male') throw refuse(`is recorded as ${male.sex}, not male.`);
-  if (!died && !mayStartProject(male)) throw refuse(`is marked ${male.status === 'returned' ? 'returned to its owner' : male.status}, so he cannot be paired.`);
-  if (male.custody === 'loan-out') throw refuse('is out on loan to someone else; only a male in your care can be paired.');
-  if (male.maturity !== 'mature') throw refuse('is not recorded as mature; only a male who has had his maturing molt can pair.');
+  if (male.sex !== 'male') throw refuse(male.sex === 'female' ? 'pairing.maleIsFemale' : 'pairing.maleIsUnsexed');
+  if (!died && !mayStartProject(male)) throw refuse('pairing.maleStatus', { status: term(`refusal.animalStatusWord.${male.status}`) });
+  if (male.custody === 'loan-out') throw refuse('pairing.maleLentOut');
+  if (male.maturity !== 'mature') throw refuse('pairing.maleNotMature');
   return male;
 }

@@ -2,7 +2,7 @@ import { ConflictException, Injectable } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
 import { pairingBeforeMaturingWarnings, todayIn, type PairingResponse } from '@broodsilk/shared';
 import type { AuthUser } from '../common/auth-user';
-import { badRequest } from '../common/field-errors';
+import { fieldError } from '../common/field-errors';
 import { User } from '../users/user.entity';
 import { ActivityService } from '../activity/activity.service';
 import { acceptWarnings } from '../plausibility/plausibility';
@@ -15,6 +15,7 @@ import { assertTakesNew } from './project-open';
 import type { CreatePairingDto } from './dto/create-pairing.dto';
 import { Clock } from '../common/clock';
 import { label, wordsFor } from '@broodsilk/shared';
+import { refusal } from '../common/refusal';
 
 // A clock a few minutes fast on the keeper's phone is not a pairing in the future.
 const FUTURE_SLACK_MS = 5 * 60_000;
@@ -40,10 +41,9 @@ export class PairingsService {
 
   async create(viewer: AuthUser, access: ProjectAccess, dto: CreatePairingDto): Promise<PairingResponse> {
     const startedAt = new Date(dto.startedAt);
-    if (startedAt.getTime() > this.clock.now().getTime() + FUTURE_SLACK_MS)
-      throw badRequest([{ field: 'startedAt', message: 'The pairing start is in the future; record a pairing once it has happened.' }]);
-    if (dto.corrects && !dto.reason?.trim()) throw badRequest([{ field: 'reason', message: 'Say briefly why the recorded pairing was wrong.' }]);
-    if (!dto.corrects && dto.reason) throw badRequest([{ field: 'reason', message: 'A reason goes with a correction (corrects: the id of the pairing).' }]);
+    if (startedAt.getTime() > this.clock.now().getTime() + FUTURE_SLACK_MS) throw fieldError('startedAt', refusal('pairing.startFuture'));
+    if (dto.corrects && !dto.reason?.trim()) throw fieldError('reason', refusal('pairing.correctionWhy'));
+    if (!dto.corrects && dto.reason) throw fieldError('reason', refusal('pairing.reasonOnlyCorrection'));
     const id = await this.em.transactional(async (tx) => {
       const p = await tx.findOneOrFail(Project, access.project.id, { populate: ['owner', 'male'] });
       // A correction mends the record of a pairing that happened, so it is taken after the end too.
@@ -101,9 +101,8 @@ export class PairingsService {
 
   private async correctionTarget(tx: EntityManager, project: Project, id: string): Promise<Pairing> {
     const target = await tx.findOne(Pairing, { id, project });
-    if (!target) throw badRequest([{ field: 'corrects', message: 'There is no such pairing in this project.' }]);
-    if (await tx.count(Pairing, { corrects: target }))
-      throw new ConflictException({ message: 'That pairing has already been corrected; correct the correction instead.' });
+    if (!target) throw fieldError('corrects', refusal('pairing.noSuchPairing'));
+    if (await tx.count(Pairing, { corrects: target })) throw new ConflictException(refusal('pairing.alreadyCorrected'));
     return target;
   }
 }

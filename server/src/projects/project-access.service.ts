@@ -3,6 +3,7 @@ import { EntityManager } from '@mikro-orm/postgresql';
 import type { ProjectRole } from '@broodsilk/shared';
 import { Project } from './project.entity';
 import { ProjectMember } from './project-member.entity';
+import { refusal, term } from '../common/refusal';
 
 /** The caller's standing in one project, as the guard leaves it on the request. */
 export interface ProjectAccess {
@@ -13,10 +14,6 @@ export interface ProjectAccess {
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
-export const NOT_FOUND_MESSAGE = 'There is no such project, or you are not one of its members.';
-
-const ROLE_WORDS: Record<ProjectRole, string> = { owner: 'the owner', partner: 'partners', caretaker: 'caretakers' };
-
 /**
  * The one place that decides who may do what in a project. A non-member gets a 404 (the project's
  * existence is not revealed); a member without the right gets a 403 that says who may.
@@ -26,11 +23,13 @@ export class ProjectAccessService {
   constructor(private readonly em: EntityManager) {}
 
   async assertRole(projectId: string, userId: string, roles: readonly ProjectRole[], em: EntityManager = this.em): Promise<ProjectAccess> {
-    if (!UUID.test(projectId)) throw new NotFoundException(NOT_FOUND_MESSAGE);
+    if (!UUID.test(projectId)) throw new NotFoundException(refusal('project.notFound'));
     const member = await em.findOne(ProjectMember, { project: projectId, user: userId }, { populate: ['project'] });
-    if (!member) throw new NotFoundException(NOT_FOUND_MESSAGE);
+    if (!member) throw new NotFoundException(refusal('project.notFound'));
     if (!roles.includes(member.role)) {
-      throw new ForbiddenException(`Only ${roles.map((r) => ROLE_WORDS[r]).join(' or ')} of this project may do this; you are a ${member.role}.`);
+      throw new ForbiddenException(
+        refusal('project.onlyRoles', { roles: term(`refusal.projectRoles.${roles.join('-')}`), role: term(`refusal.projectRole.${member.role}`) }),
+      );
     }
     return { project: member.project, member, role: member.role };
   }

@@ -5,8 +5,9 @@ import type { ProjectRole } from '@broodsilk/shared';
 import type { Request } from 'express';
 import type { AuthUser } from '../common/auth-user';
 import { PROJECT_FROM_KEY, PROJECT_ROLES_KEY, type ProjectFromSpec } from './project-roles.decorator';
-import { NOT_FOUND_MESSAGE, ProjectAccessService } from './project-access.service';
+import { ProjectAccessService } from './project-access.service';
 import { ProjectResolverRegistry } from './project-resolver.registry';
+import { refusal } from '../common/refusal';
 
 /**
  * Global guard after authentication: on routes with `@ProjectRoles(...)` it finds the project,
@@ -26,7 +27,7 @@ export class ProjectRoleGuard implements CanActivate {
     const roles = this.reflector.getAllAndOverride<ProjectRole[] | undefined>(PROJECT_ROLES_KEY, targets);
     if (!roles?.length) return true;
     const req = context.switchToHttp().getRequest<Request & { user?: AuthUser; projectAccess?: unknown }>();
-    if (!req.user) throw new UnauthorizedException('Please sign in to continue.');
+    if (!req.user) throw new UnauthorizedException(refusal('common.signIn'));
     const from = this.reflector.getAllAndOverride<ProjectFromSpec | undefined>(PROJECT_FROM_KEY, targets);
     const params = req.params as Record<string, string | undefined>;
     let projectId: string | null | undefined;
@@ -36,7 +37,7 @@ export class ProjectRoleGuard implements CanActivate {
     } else {
       projectId = params.projectId ?? params.id;
     }
-    if (!projectId) throw new NotFoundException(NOT_FOUND_MESSAGE);
+    if (!projectId) throw new NotFoundException(refusal('project.notFound'));
     req.projectAccess = await this.access.assertRole(projectId, req.user.id, roles);
     return true;
   }

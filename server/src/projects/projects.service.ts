@@ -20,6 +20,7 @@ import type { UpdateProjectDto } from './dto/update-project.dto';
 import type { EndProjectDto } from './dto/end-project.dto';
 import { Clock } from '../common/clock';
 import { label, wordsFor } from '@broodsilk/shared';
+import { fieldRefusal, refusal, refusalFrom, term } from '../common/refusal';
 
 const PROJECT_POPULATE = ['owner', 'female.species', 'male.species'] as const;
 const DETAIL_POPULATE = ['owner', 'female.species', 'female.recordedBy', 'female.ownerUser', 'male.species', 'male.recordedBy', 'male.ownerUser'] as const;
@@ -77,10 +78,7 @@ export class ProjectsService {
         if (!a) errors.push({ field, message: `There is no such animal in your collection; choose the ${sex} from the animals you recorded.` });
         else if (a.sex !== sex) errors.push({ field, message: `${a.label} is recorded as ${a.sex}, not ${sex}.` });
         else if (!mayStartProject(a))
-          errors.push({
-            field,
-            message: `${a.label} is marked ${a.status === 'returned' ? 'returned to its owner' : a.status}, so it cannot start a project.`,
-          });
+          errors.push(fieldRefusal(field, 'project.animalNotStartable', { animal: a.label, status: term(`refusal.animalStatusWord.${a.status}`) }));
       };
       check(female, 'femaleId', 'female');
       check(male, 'maleId', 'male');
@@ -149,11 +147,9 @@ export class ProjectsService {
   /** The owner calls the project off, with a reason; `reopen` undoes it, `close` makes it final. */
   end(viewer: AuthUser, access: ProjectAccess, dto: EndProjectDto): Promise<ProjectResponse> {
     return this.changeEnd(viewer, access, (p) => {
-      if (p.closedOn) throw new ConflictException({ message: `This project was closed on ${p.closedOn}.` });
+      if (p.closedOn) throw new ConflictException(refusal('project.closedOn', { on: p.closedOn }));
       if (p.endedEarlyReason)
-        throw new ConflictException({
-          message: wordsFor('en')('text.alreadyEnded', { date: p.endedOn, reason: label(wordsFor('en'), 'endedEarly', p.endedEarlyReason) }),
-        });
+        throw new ConflictException(refusalFrom('text.alreadyEnded', { date: p.endedOn ?? '', reason: term(`endedEarly.${p.endedEarlyReason}`) }));
       p.endedEarlyReason = dto.reason;
       p.endedEarlyNote = dto.note ?? null;
       p.endedOn = this.today(viewer);
@@ -168,7 +164,7 @@ export class ProjectsService {
   /** The owner closes the project when it is done (also after an early end). Final: a closed project is not reopened. */
   close(viewer: AuthUser, access: ProjectAccess): Promise<ProjectResponse> {
     return this.changeEnd(viewer, access, (p) => {
-      if (p.closedOn) throw new ConflictException({ message: `This project was already closed on ${p.closedOn}.` });
+      if (p.closedOn) throw new ConflictException(refusal('project.alreadyClosed', { on: p.closedOn }));
       p.closedOn = this.today(viewer);
       return { kind: 'project.closed', summary: 'Closed the project.', data: { on: p.closedOn } };
     });
@@ -177,8 +173,8 @@ export class ProjectsService {
   /** Undoes an early end (she laid after all, a backup male turned up); the project takes pairings and sacs again. */
   reopen(viewer: AuthUser, access: ProjectAccess): Promise<ProjectResponse> {
     return this.changeEnd(viewer, access, (p) => {
-      if (p.closedOn) throw new ConflictException({ message: `This project was closed on ${p.closedOn}; a closed project stays closed.` });
-      if (!p.endedEarlyReason) throw new ConflictException({ message: 'This project has not ended, so there is nothing to reopen.' });
+      if (p.closedOn) throw new ConflictException(refusal('project.closedStaysClosed', { on: p.closedOn }));
+      if (!p.endedEarlyReason) throw new ConflictException(refusal('project.notEnded'));
       const was = { reason: p.endedEarlyReason, on: p.endedOn ?? null };
       p.endedEarlyReason = null;
       p.endedEarlyNote = null;

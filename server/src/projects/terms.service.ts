@@ -9,7 +9,7 @@ import {
   type TermsVersionResponse,
 } from '@broodsilk/shared';
 import type { AuthUser } from '../common/auth-user';
-import { badRequest } from '../common/field-errors';
+import { badRequest, fieldError } from '../common/field-errors';
 import { User } from '../users/user.entity';
 import { ActivityService } from '../activity/activity.service';
 import type { ProjectAccess } from './project-access.service';
@@ -21,6 +21,7 @@ import { termsStatuses } from './terms-status';
 import { toTermsVersionResponse } from './terms.mapper';
 import type { ProposeTermsDto } from './dto/propose-terms.dto';
 import type { AcceptTermsDto } from './dto/accept-terms.dto';
+import { refusal, term } from '../common/refusal';
 
 const POPULATE = ['createdBy', 'lines.member.user', 'acceptances.member.user', 'acceptances.recordedBy'] as const;
 
@@ -150,7 +151,7 @@ export class TermsService {
     const versions = await this.versions(projectId);
     const { status } = this.statuses(versions);
     const v = versions.find((x) => x.number === number);
-    if (!v) throw new NotFoundException(`This project has no terms version ${number}.`);
+    if (!v) throw new NotFoundException(refusal('terms.noSuchVersion', { number }));
     return toTermsVersionResponse(v, status.get(number)!);
   }
 
@@ -162,29 +163,27 @@ export class TermsService {
     await this.em.transactional(async (tx) => {
       const versions = await this.versions(access.project.id, tx);
       const v = versions.find((x) => x.number === number);
-      if (!v) throw new NotFoundException(`This project has no terms version ${number}.`);
+      if (!v) throw new NotFoundException(refusal('terms.noSuchVersion', { number }));
       const before = this.statuses(versions);
       if (before.status.get(number) !== 'proposed') {
-        throw new ConflictException({ message: `Terms version ${number} is ${before.status.get(number)}; there is nothing to accept.` });
+        throw new ConflictException(refusal('terms.nothingToAccept', { number, status: term(`refusal.termsStatus.${before.status.get(number)}`) }));
       }
       let party: ProjectMember;
       const onBehalf = dto.memberId !== undefined && dto.memberId !== access.member.id;
       if (onBehalf) {
-        if (access.role !== 'owner')
-          throw new ForbiddenException('Only the owner may record acceptance on behalf of another party; accept for yourself instead.');
+        if (access.role !== 'owner') throw new ForbiddenException(refusal('terms.onlyOwnerOnBehalf'));
         const line = [...v.lines].find((l) => l.member.id === dto.memberId);
-        if (!line) throw badRequest([{ field: 'memberId', message: `This party is not in terms version ${number}.` }]);
-        if (line.member.user) throw badRequest([{ field: 'memberId', message: `${line.member.user.displayName} has an account and accepts for themselves.` }]);
-        if (!dto.note?.trim())
-          throw badRequest([{ field: 'note', message: 'Say how the party agreed (e.g. "agreed by e-mail on 3 May"); it is kept with the acceptance.' }]);
+        if (!line) throw fieldError('memberId', refusal('terms.partyNotInVersion', { number }));
+        if (line.member.user) throw fieldError('memberId', refusal('terms.acceptsThemselves', { name: line.member.user.displayName }));
+        if (!dto.note?.trim()) throw fieldError('note', refusal('terms.howAgreed'));
         party = line.member;
       } else {
         const line = [...v.lines].find((l) => l.member.id === access.member.id);
-        if (!line) throw new BadRequestException({ message: `You are not a party of terms version ${number}.` });
+        if (!line) throw new BadRequestException(refusal('terms.youNotParty', { number }));
         party = line.member;
       }
       if ([...v.acceptances].some((a) => a.member.id === party.id)) {
-        throw new ConflictException({ message: `${party.user?.displayName ?? party.name} has already accepted terms version ${number}.` });
+        throw new ConflictException(refusal('terms.alreadyAccepted', { name: party.user?.displayName ?? party.name, number }));
       }
       const acceptance = tx.create(TermsAcceptance, {
         version: v,

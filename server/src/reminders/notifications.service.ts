@@ -5,6 +5,7 @@ import type { AuthUser } from '../common/auth-user';
 import { Clock } from '../common/clock';
 import { Notification } from './notification.entity';
 import { toNotificationResponse } from './notifications.mapper';
+import { refusal } from '../common/refusal';
 
 @Injectable()
 export class NotificationsService {
@@ -24,7 +25,7 @@ export class NotificationsService {
 
   async markRead(viewer: AuthUser, id: string): Promise<NotificationResponse> {
     const n = await this.em.findOne(Notification, { id, user: viewer.id });
-    if (!n) throw new NotFoundException({ message: 'There is no such notification.' });
+    if (!n) throw new NotFoundException(refusal('reminder.noSuchNotification'));
     n.readAt ??= this.clock.now();
     await this.em.flush();
     return toNotificationResponse(n);

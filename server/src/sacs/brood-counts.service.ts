@@ -18,6 +18,7 @@ import { toBroodCountResponse } from './brood.mapper';
 import type { BroodCountDto } from './dto/brood-count.dto';
 import { broodStageLabel, label, wordsFor } from '@broodsilk/shared';
 import { KeptBackBatch } from './kept-back-batch.entity';
+import { refusal } from '../common/refusal';
 
 const byInstant = (a: BroodCount, b: BroodCount) => a.at.getTime() - b.at.getTime() || a.createdAt.getTime() - b.createdAt.getTime();
 
@@ -50,19 +51,19 @@ export class BroodCountsService {
   async add(access: ProjectAccess, viewer: AuthUser, sacId: string, dto: BroodCountDto): Promise<BroodCountResponse> {
     const now = this.clock.now();
     const lost = dto.lost ?? 0;
-    if (lost > 0 && !dto.lossReason) throw fieldError('lossReason', 'Say why young were lost (died, failed-molt, cannibalism, mould, escaped or other).');
-    if (lost === 0 && dto.lossReason) throw fieldError('lossReason', 'A loss reason goes with a number lost above 0.');
-    if (dto.corrects && !dto.reason?.trim()) throw fieldError('reason', 'Say briefly why the earlier count was wrong.');
-    if (!dto.corrects && dto.reason) throw fieldError('reason', 'A reason goes with a correction (corrects: the id of the count it corrects).');
+    if (lost > 0 && !dto.lossReason) throw fieldError('lossReason', refusal('broodCount.lossReasonNeeded'));
+    if (lost === 0 && dto.lossReason) throw fieldError('lossReason', refusal('broodCount.lossReasonOnlyLoss'));
+    if (dto.corrects && !dto.reason?.trim()) throw fieldError('reason', refusal('broodCount.correctionWhy'));
+    if (!dto.corrects && dto.reason) throw fieldError('reason', refusal('broodCount.reasonOnlyCorrection'));
     const id = await this.em.transactional(async (tx) => {
       const sac = await this.sacs.find(access, sacId, tx);
       const opening = await tx.findOne(SacOpening, { sac, corrects: null });
-      if (!opening) throw new BadRequestException({ message: 'Record the opening first: it starts the brood and its first count.' });
+      if (!opening) throw new BadRequestException(refusal('broodCount.openingFirst'));
       const counts = await tx.find(BroodCount, { sac }, { orderBy: { at: 'asc', createdAt: 'asc' } });
       const target = dto.corrects ? correctionTarget(counts, dto.corrects) : null;
       const at = dto.at ? new Date(dto.at) : (target?.at ?? now);
-      assertNotFuture('at', 'time of the count', at, now);
-      if (at < opening.openedAt) throw fieldError('at', `A count cannot come before the opening (${opening.openedAt.toISOString()}).`);
+      assertNotFuture('at', 'sac.futureCount', at, now);
+      if (at < opening.openedAt) throw fieldError('at', refusal('broodCount.beforeOpening', { openedAt: opening.openedAt.toISOString() }));
       const batch = await tx.findOne(KeptBackBatch, { sac, state: 'joined' });
       const warningReason = this.checkAgainstPrevious(counts, target, at, viewer.timeZone, dto, batch);
       const c = tx.create(BroodCount, {
@@ -129,10 +130,9 @@ export class BroodCountsService {
 
 function correctionTarget(counts: BroodCount[], id: string): BroodCount {
   const target = counts.find((c) => c.id === id);
-  if (!target) throw fieldError('corrects', 'There is no such count of this sac.');
-  if (target.source === 'opening') throw fieldError('corrects', 'The first count comes from the opening: correct the opening instead.');
-  if (counts.some((c) => c.corrects?.id === id))
-    throw new ConflictException({ message: 'That count has already been corrected; correct the correction instead.' });
+  if (!target) throw fieldError('corrects', refusal('broodCount.noSuchCount'));
+  if (target.source === 'opening') throw fieldError('corrects', refusal('broodCount.firstFromOpening'));
+  if (counts.some((c) => c.corrects?.id === id)) throw new ConflictException(refusal('broodCount.alreadyCorrected'));
   return target;
 }
 

@@ -16,6 +16,7 @@ import { assertStageMove, entryValues } from './care-log-rules';
 import { careLogSummary, toCareLogResponse } from './care-log.mapper';
 import { bandOf } from './sac-band';
 import type { CareLogEntryDto } from './dto/care-log-entry.dto';
+import { fieldRefusal, refusal } from '../common/refusal';
 
 @Injectable()
 export class CareLogService {
@@ -44,8 +45,7 @@ export class CareLogService {
       .limit(limit + 1);
     if (page.after) {
       const afterId = decodeCursor(page.after, 'entry', 'uuid') as string;
-      if (!(await this.em.count(SacLogEntry, { id: afterId, sac: sac.id })))
-        throw new BadRequestException({ message: 'after names no entry of this sac’s log: pass the nextCursor of the page before, unchanged.' });
+      if (!(await this.em.count(SacLogEntry, { id: afterId, sac: sac.id }))) throw new BadRequestException(refusal('careLog.cursorNotInLog'));
       qb.andWhere('(e.at, e.created_at, e.id) < (select l.at, l.created_at, l.id from sac_log_entries l where l.id = ?)', [afterId]);
     }
     const rows = await qb.getResultList();
@@ -62,12 +62,12 @@ export class CareLogService {
   async add(access: ProjectAccess, viewer: AuthUser, sacId: string, dto: CareLogEntryDto): Promise<CareLogEntryResponse> {
     const now = this.clock.now();
     const at = dto.at ? new Date(dto.at) : now;
-    assertNotFuture('at', 'time of the entry', at, now);
+    assertNotFuture('at', 'sac.futureEntry', at, now);
     const values = entryValues(dto);
     const id = await this.em.transactional(async (tx) => {
       const sac = await this.sacs.find(access, sacId, tx);
       const atDate = todayIn(viewer.timeZone, at);
-      if (atDate < sac.layDate) throw fieldError('at', `The entry (${atDate}) is dated before the sac was laid (${sac.layDate}).`);
+      if (atDate < sac.layDate) throw fieldError('at', refusal('careLog.beforeLaid', { at: atDate, layDate: sac.layDate }));
       const strikes = dto.kind === 'strike' ? await this.strikeTarget(tx, sac, dto) : null;
       if (dto.kind === 'roll') this.assertRollable(sac, at);
       if (dto.kind === 'stage') assertStageMove(sac.broodStage, values.stage!);
@@ -108,22 +108,18 @@ export class CareLogService {
   }
 
   private async strikeTarget(tx: EntityManager, sac: Sac, dto: CareLogEntryDto): Promise<SacLogEntry> {
-    if (!dto.strikes) throw fieldError('strikes', 'Say which entry this corrects (its id).');
-    if (!dto.reason?.trim()) throw fieldError('reason', 'Say briefly why the entry is struck.');
+    if (!dto.strikes) throw fieldError('strikes', refusal('careLog.strikeWhich'));
+    if (!dto.reason?.trim()) throw fieldError('reason', refusal('careLog.strikeWhy'));
     const target = await tx.findOne(SacLogEntry, { id: dto.strikes, sac });
-    if (!target) throw fieldError('strikes', 'There is no such entry in this sac’s log.');
-    if (target.kind === 'strike') throw fieldError('strikes', 'A correction cannot be struck; add the entry again instead.');
-    if (await tx.count(SacLogEntry, { strikes: target })) throw new ConflictException({ message: 'That entry has already been struck.' });
+    if (!target) throw fieldError('strikes', refusal('careLog.noSuchEntry'));
+    if (target.kind === 'strike') throw fieldError('strikes', refusal('careLog.strikeOfStrike'));
+    if (await tx.count(SacLogEntry, { strikes: target })) throw new ConflictException(refusal('careLog.alreadyStruck'));
     return target;
   }
 
   private assertRollable(sac: Sac, at: Date): void {
-    if (!sac.pulledAt)
-      throw new BadRequestException({
-        message: 'This sac is with its mother: she turns it herself, so rolls apply only once it is pulled.',
-        details: [{ field: 'kind', message: 'No rolls for a sac left with the mother.' }],
-      });
-    if (at < sac.pulledAt) throw fieldError('at', `A roll cannot come before the pull (${sac.pulledAt.toISOString()}).`);
+    if (!sac.pulledAt) throw new BadRequestException({ ...refusal('careLog.withMother'), details: [fieldRefusal('kind', 'careLog.noRollsWithMother')] });
+    if (at < sac.pulledAt) throw fieldError('at', refusal('careLog.rollBeforePull', { pulledAt: sac.pulledAt.toISOString() }));
   }
 
   /**

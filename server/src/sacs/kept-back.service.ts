@@ -15,8 +15,7 @@ import type { Sac } from './sac.entity';
 import { SacsService } from './sacs.service';
 import { assertNotFuture } from './sac-rules';
 import type { KeptBackEndDto, KeptBackLogDto } from './dto/kept-back.dto';
-
-const NONE = 'No eggs of this sac were kept back at its opening.';
+import { refusal } from '../common/refusal';
 
 /** The eggs kept back at the opening: their own log of rolls and checks, and how the batch ended. */
 @Injectable()
@@ -40,15 +39,14 @@ export class KeptBackService {
   async log(access: ProjectAccess, viewer: AuthUser, sacId: string, dto: KeptBackLogDto): Promise<KeptBackBatchResponse> {
     const now = this.clock.now();
     const at = dto.at ? new Date(dto.at) : now;
-    assertNotFuture('at', 'time of the entry', at, now);
-    if (dto.kind === 'strike' && !dto.reason?.trim()) throw fieldError('reason', 'Say briefly why the entry is struck.');
-    if (dto.kind !== 'strike' && (dto.strikes || dto.reason)) throw fieldError('strikes', 'Only a strike names an entry to strike and a reason.');
+    assertNotFuture('at', 'sac.futureEntry', at, now);
+    if (dto.kind === 'strike' && !dto.reason?.trim()) throw fieldError('reason', refusal('keptBack.strikeWhy'));
+    if (dto.kind !== 'strike' && (dto.strikes || dto.reason)) throw fieldError('strikes', refusal('keptBack.onlyStrikeNames'));
     await this.em.transactional(async (tx) => {
       const sac = await this.sacs.find(access, sacId, tx);
       const { batch, opening } = await this.batchOf(tx, sac);
-      if (batch.state !== 'incubating') throw new ConflictException({ message: `This batch has ended (${batch.state}); nothing more is logged for it.` });
-      if (at < opening.openedAt)
-        throw fieldError('at', `The batch was kept back at the opening (${opening.openedAt.toISOString()}); an entry cannot come before it.`);
+      if (batch.state !== 'incubating') throw new ConflictException(refusal('keptBack.ended', { state: batch.state }));
+      if (at < opening.openedAt) throw fieldError('at', refusal('keptBack.entryBeforeKept', { openedAt: opening.openedAt.toISOString() }));
       const strikes = dto.kind === 'strike' ? await this.strikeTarget(tx, batch, dto.strikes) : null;
       const entry = tx.create(KeptBackLogEntry, {
         batch,
@@ -77,21 +75,19 @@ export class KeptBackService {
   async end(access: ProjectAccess, viewer: AuthUser, sacId: string, dto: KeptBackEndDto): Promise<KeptBackBatchResponse> {
     const now = this.clock.now();
     const at = dto.at ? new Date(dto.at) : now;
-    assertNotFuture('at', 'end of the batch', at, now);
-    if (dto.outcome === 'joined' && dto.joined == null) throw fieldError('joined', 'Say how many of the kept-back eggs joined the brood.');
-    if (dto.outcome === 'written-off' && dto.joined != null) throw fieldError('joined', 'A written-off batch joins nothing to the brood; leave out joined.');
+    assertNotFuture('at', 'sac.futureBatchEnd', at, now);
+    if (dto.outcome === 'joined' && dto.joined == null) throw fieldError('joined', refusal('keptBack.joinedHowMany'));
+    if (dto.outcome === 'written-off' && dto.joined != null) throw fieldError('joined', refusal('keptBack.writtenOffJoinsNothing'));
     await this.em.transactional(async (tx) => {
       const sac = await this.sacs.find(access, sacId, tx);
       const { batch, opening } = await this.batchOf(tx, sac);
       if (batch.state !== 'incubating') {
-        throw new ConflictException({
-          message: `This batch was already ${batch.state === 'joined' ? 'counted into the brood' : 'written off'}; it ends only once.`,
-        });
+        throw new ConflictException(refusal(batch.state === 'joined' ? 'keptBack.alreadyJoined' : 'keptBack.alreadyWrittenOff'));
       }
       if (dto.joined != null && dto.joined > opening.keptBack) {
-        throw fieldError('joined', `Only ${opening.keptBack} eggs were kept back; ${dto.joined} cannot have joined the brood.`);
+        throw fieldError('joined', refusal('keptBack.joinedTooMany', { keptBack: opening.keptBack, joined: dto.joined }));
       }
-      if (at < opening.openedAt) throw fieldError('at', `The batch was kept back at the opening (${opening.openedAt.toISOString()}); it cannot end before it.`);
+      if (at < opening.openedAt) throw fieldError('at', refusal('keptBack.endBeforeKept', { openedAt: opening.openedAt.toISOString() }));
       const reason = dto.reason.trim();
       Object.assign(batch, { state: dto.outcome, endedAt: at, joined: dto.joined ?? null, reason, endedBy: tx.getReference(User, viewer.id) });
       this.activity.record(tx, {
@@ -117,16 +113,16 @@ export class KeptBackService {
     const openings = batch ? await em.find(SacOpening, { sac }, { orderBy: { createdAt: 'desc' } }) : [];
     const struck = new Set(openings.map((o) => o.corrects?.id).filter(Boolean));
     const opening = openings.find((o) => !struck.has(o.id));
-    if (!batch || !opening || opening.keptBack === 0) throw new NotFoundException({ message: NONE });
+    if (!batch || !opening || opening.keptBack === 0) throw new NotFoundException(refusal('keptBack.none'));
     return { batch, opening };
   }
 
   private async strikeTarget(tx: EntityManager, batch: KeptBackBatch, id: string | undefined): Promise<KeptBackLogEntry> {
-    if (!id) throw fieldError('strikes', 'Say which entry this corrects (its id).');
+    if (!id) throw fieldError('strikes', refusal('keptBack.strikeWhich'));
     const target = await tx.findOne(KeptBackLogEntry, { id, batch });
-    if (!target) throw fieldError('strikes', 'There is no such entry in this batch’s log.');
-    if (target.kind === 'strike') throw fieldError('strikes', 'A strike cannot itself be struck.');
-    if (await tx.count(KeptBackLogEntry, { strikes: target })) throw new ConflictException({ message: 'That entry is already struck.' });
+    if (!target) throw fieldError('strikes', refusal('keptBack.noSuchEntry'));
+    if (target.kind === 'strike') throw fieldError('strikes', refusal('keptBack.strikeOfStrike'));
+    if (await tx.count(KeptBackLogEntry, { strikes: target })) throw new ConflictException(refusal('keptBack.alreadyStruck'));
     return target;
   }
 }

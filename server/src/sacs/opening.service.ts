@@ -12,11 +12,12 @@ import { BroodCount } from './brood-count.entity';
 import { SacsService } from './sacs.service';
 import { Clock } from '../common/clock';
 import { assertNotFuture } from './sac-rules';
-import { badRequest, fieldError } from '../common/field-errors';
+import { fieldError } from '../common/field-errors';
 import { toOpeningResponse, viableOf } from './brood.mapper';
 import type { OpeningDto } from './dto/opening.dto';
 import { KeptBackBatch } from './kept-back-batch.entity';
 import { checkOpeningAgainstSpecies } from './opening-plausibility';
+import { refusal } from '../common/refusal';
 
 /** Photo subject type of an opening's photos; members of the sac's project see them. */
 export const OPENING_PHOTO = 'opening';
@@ -34,7 +35,7 @@ export class OpeningService {
   async get(access: ProjectAccess, sacId: string): Promise<OpeningResponse> {
     const sac = await this.sacs.find(access, sacId);
     const versions = await this.versions(this.em, sac);
-    if (!versions.length) throw new NotFoundException({ message: 'This sac has not been opened yet.' });
+    if (!versions.length) throw new NotFoundException(refusal('opening.notYet'));
     const [current, ...struck] = versions;
     const photos = await this.photos.refsFor(
       OPENING_PHOTO,
@@ -59,30 +60,23 @@ export class OpeningService {
     this.sacs.assertMayPullAndOpen(access);
     const now = this.clock.now();
     const given = dto.openedAt ? new Date(dto.openedAt) : null;
-    if (given) assertNotFuture('openedAt', 'opening time', given, now);
+    if (given) assertNotFuture('openedAt', 'sac.futureOpening', given, now);
     const viable = viableOf(dto);
     if (dto.keptBack > viable) {
-      throw badRequest([
-        {
-          field: 'keptBack',
-          message: `Only viable young can go back into incubation: ${dto.keptBack} kept back, but ${viable} counted as healthy eggs, eggs with legs and 1st instar young.`,
-        },
-      ]);
+      throw fieldError('keptBack', refusal('opening.keptBackNotViable', { keptBack: dto.keptBack, viable }));
     }
-    if (viable + dto.darkEggs + dto.spoiledEggs === 0)
-      throw fieldError('healthyEggs', 'Nothing was counted; an opening records at least one egg or young spider.');
-    if (dto.corrects && !dto.reason?.trim()) throw fieldError('reason', 'Say briefly why the recorded opening was wrong.');
-    if (!dto.corrects && dto.reason) throw fieldError('reason', 'A reason goes with a correction (corrects: the id of the opening it corrects).');
+    if (viable + dto.darkEggs + dto.spoiledEggs === 0) throw fieldError('healthyEggs', refusal('opening.nothingCounted'));
+    if (dto.corrects && !dto.reason?.trim()) throw fieldError('reason', refusal('opening.correctionWhy'));
+    if (!dto.corrects && dto.reason) throw fieldError('reason', refusal('opening.reasonOnlyCorrection'));
     await this.em.transactional(async (tx) => {
       const sac = await this.sacs.find(access, sacId, tx);
       const [current] = await this.versions(tx, sac);
       const target = dto.corrects ? this.correctionTarget(current, dto.corrects) : null;
-      if (current && !target)
-        throw new ConflictException({ message: 'This sac has already been opened; record later changes as brood counts, or correct the opening.' });
+      if (current && !target) throw new ConflictException(refusal('opening.alreadyOpened'));
       // A correction keeps the opening's time unless it gives another.
       const openedAt = given ?? target?.openedAt ?? now;
       const on = todayIn(viewer.timeZone, openedAt);
-      if (on < sac.layDate) throw fieldError('openedAt', `The opening (${on}) is dated before the sac was laid (${sac.layDate}).`);
+      if (on < sac.layDate) throw fieldError('openedAt', refusal('opening.beforeLaid', { on, layDate: sac.layDate }));
       const warningReason = await checkOpeningAgainstSpecies(tx, sac, dto);
       const batch = await this.keepBack(tx, sac, dto.keptBack);
       const recordedBy = tx.getReference(User, viewer.id);
@@ -106,7 +100,7 @@ export class OpeningService {
       // The brood's first count follows the opening; a corrected opening strikes the old first count.
       const firstCount = target ? await tx.findOne(BroodCount, { sac, source: 'opening', at: target.openedAt }, { orderBy: { createdAt: 'desc' } }) : null;
       if (target && firstCount && (await tx.count(BroodCount, { corrects: firstCount }))) {
-        throw new ConflictException({ message: 'The first count of this brood was already corrected.' });
+        throw new ConflictException(refusal('opening.firstCountCorrected'));
       }
       // The kept-back eggs are their own batch: they join the brood's count only when the batch does.
       const alive = viable - dto.keptBack;
@@ -157,15 +151,15 @@ export class OpeningService {
   private async keepBack(tx: EntityManager, sac: Sac, keptBack: number): Promise<KeptBackBatch | null> {
     const batch = await tx.findOne(KeptBackBatch, { sac });
     if (batch?.state === 'joined' && keptBack < batch.joined!) {
-      throw fieldError('keptBack', `${batch.joined} of the kept-back eggs already joined the brood; the opening cannot have kept back fewer (${keptBack}).`);
+      throw fieldError('keptBack', refusal('opening.keptBackBelowJoined', { joined: batch.joined!, keptBack }));
     }
     if (batch || keptBack === 0) return batch;
     return tx.create(KeptBackBatch, { sac });
   }
 
   private correctionTarget(current: SacOpening | undefined, id: string): SacOpening {
-    if (!current) throw fieldError('corrects', 'This sac has not been opened yet; there is nothing to correct.');
-    if (current.id !== id) throw new ConflictException({ message: 'Only the opening in force can be corrected; that one was already corrected.' });
+    if (!current) throw fieldError('corrects', refusal('opening.nothingToCorrect'));
+    if (current.id !== id) throw new ConflictException(refusal('opening.onlyInForce'));
     return current;
   }
 
@@ -173,7 +167,7 @@ export class OpeningService {
     this.sacs.assertMayPullAndOpen(access);
     const sac = await this.sacs.find(access, sacId);
     const [o] = await this.versions(this.em, sac);
-    if (!o) throw new NotFoundException({ message: 'Record the opening first; its photos belong to it.' });
+    if (!o) throw new NotFoundException(refusal('opening.photosNeedOpening'));
     return this.photos.store(viewer, OPENING_PHOTO, o.id, file);
   }
 }

@@ -1,10 +1,14 @@
 import { LOG_FUTURE_TOLERANCE_MS, assertPullWindow, bandProblem, todayIn, type Range } from '@broodsilk/shared';
 import { fieldError } from '../common/field-errors';
+import { refusal, type RefusalKey } from '../common/refusal';
+
+/** The refusal of a time in the future, by what the time is of. */
+type FutureKey = Extract<RefusalKey, `sac.future${string}`>;
 
 /** An instant may be up to a minute ahead of the server's clock (phones and servers disagree a little). */
-export function assertNotFuture(field: string, what: string, at: Date, now: Date): void {
+export function assertNotFuture(field: string, what: FutureKey, at: Date, now: Date): void {
   if (at.getTime() > now.getTime() + LOG_FUTURE_TOLERANCE_MS) {
-    throw fieldError(field, `The ${what} ${at.toISOString()} is in the future; record it when it has happened.`);
+    throw fieldError(field, refusal(what, { at: at.toISOString() }));
   }
 }
 
@@ -18,20 +22,20 @@ export interface SacDates {
 /** Checks a sac's dates and window together, as they will be stored; `timeZone` is the recorder's. */
 export function assertSacDates(s: SacDates, timeZone: string, now: Date): void {
   const today = todayIn(timeZone, now);
-  if (s.layDate > today) throw fieldError('layDate', `The lay date ${s.layDate} is after today (${today} where you are); a sac is recorded once it is laid.`);
+  if (s.layDate > today) throw fieldError('layDate', refusal('sac.layDateAfterToday', { layDate: s.layDate, today }));
   if (s.pulledAt) {
-    assertNotFuture('pulledAt', 'pull time', s.pulledAt, now);
+    assertNotFuture('pulledAt', 'sac.futurePull', s.pulledAt, now);
     const pulledOn = todayIn(timeZone, s.pulledAt);
-    if (pulledOn < s.layDate) throw fieldError('pulledAt', `The sac cannot be pulled (${pulledOn}) before it was laid (${s.layDate}).`);
+    if (pulledOn < s.layDate) throw fieldError('pulledAt', refusal('sac.pulledBeforeLaid', { pulledOn, layDate: s.layDate }));
   }
   if ((s.pullFromDay == null) !== (s.pullToDay == null)) {
-    throw fieldError(s.pullFromDay == null ? 'pullFromDay' : 'pullToDay', 'Give both the first and the last pull day, or neither to use the species window.');
+    throw fieldError(s.pullFromDay == null ? 'pullFromDay' : 'pullToDay', refusal('sac.pullDaysBoth'));
   }
   if (s.pullFromDay != null && s.pullToDay != null) {
     try {
       assertPullWindow({ fromDay: s.pullFromDay, toDay: s.pullToDay });
     } catch (e) {
-      throw fieldError('pullToDay', (e as Error).message);
+      throw fieldError('pullToDay', { message: (e as Error).message }); // a shared rule's sentence
     }
   }
 }
@@ -46,10 +50,10 @@ export interface SacChoices {
 /** A sac is either pulled or left with the mother; each band is one the readings could hold. */
 export function assertSacChoices(c: SacChoices): void {
   if (c.leftWithMother && c.pulledAt) {
-    throw fieldError('leftWithMother', 'This sac is recorded as pulled; remove the pull first if it went back to the mother.');
+    throw fieldError('leftWithMother', refusal('sac.pulledNotWithMother'));
   }
   const t = c.temperatureBand && bandProblem('temperature', c.temperatureBand);
-  if (t) throw fieldError('temperatureBand', t);
+  if (t) throw fieldError('temperatureBand', { message: t }); // shared rules' sentences
   const h = c.humidityBand && bandProblem('humidity', c.humidityBand);
-  if (h) throw fieldError('humidityBand', h);
+  if (h) throw fieldError('humidityBand', { message: h });
 }

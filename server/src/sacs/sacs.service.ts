@@ -22,9 +22,7 @@ import { assertTakesNew } from '../projects/project-open';
 import type { PullSacDto } from './dto/pull-sac.dto';
 import type { IncubatorRightsDto } from './dto/incubator-rights.dto';
 import { label, wordsFor } from '@broodsilk/shared';
-
-export const SAC_NOT_FOUND = 'There is no such sac in this project.';
-export const PULL_AND_OPEN_REFUSED = 'Only the keeper records the pull and the opening of this project’s sacs, unless the keeper allows caretakers to.';
+import { refusal } from '../common/refusal';
 
 @Injectable()
 export class SacsService {
@@ -44,7 +42,7 @@ export class SacsService {
   /** The sac within the project the guard established (the guard found the project from the sac). */
   async find(access: ProjectAccess, id: string, em: EntityManager = this.em): Promise<Sac> {
     const sac = await em.findOne(Sac, { id, project: access.project.id }, { populate: SAC_POPULATE });
-    if (!sac) throw new NotFoundException(SAC_NOT_FOUND);
+    if (!sac) throw new NotFoundException(refusal('sac.notFound'));
     return sac;
   }
 
@@ -54,7 +52,7 @@ export class SacsService {
 
   /** The pull and the opening: the owner, or a caretaker where the project allows it (403 otherwise). */
   assertMayPullAndOpen(access: ProjectAccess): void {
-    if (!sacPermissions(access.role, access.project.caretakersMayPullAndOpen).pullAndOpen) throw new ForbiddenException({ message: PULL_AND_OPEN_REFUSED });
+    if (!sacPermissions(access.role, access.project.caretakersMayPullAndOpen).pullAndOpen) throw new ForbiddenException(refusal('sac.pullAndOpenRefused'));
   }
 
   /** Records the pull of a sac still with the mother, now or at an earlier instant. */
@@ -64,8 +62,8 @@ export class SacsService {
     const pulledAt = dto.pulledAt ? new Date(dto.pulledAt) : now;
     await this.em.transactional(async (tx) => {
       const sac = await this.find(access, id, tx);
-      if (sac.pulledAt) throw new ConflictException({ message: `This sac was already pulled on ${sac.pulledOn}.` });
-      if (sac.outcome !== 'in-progress') throw new ConflictException({ message: 'This sac has ended; there is nothing left to pull.' });
+      if (sac.pulledAt) throw new ConflictException(refusal('sac.alreadyPulled', { on: sac.pulledOn! }));
+      if (sac.outcome !== 'in-progress') throw new ConflictException(refusal('sac.endedNothingToPull'));
       assertSacDates({ layDate: sac.layDate, pulledAt, pullFromDay: sac.pullFromDay ?? null, pullToDay: sac.pullToDay ?? null }, viewer.timeZone, now);
       tx.assign(sac, { pulledAt, pulledOn: todayIn(viewer.timeZone, pulledAt), leftWithMother: false });
       this.activity.record(tx, {
@@ -185,11 +183,10 @@ export class SacsService {
       });
       const outcome = dto.outcome ?? sac.outcome;
       const failureReason = outcome === 'failed' ? ((dto.failureReason !== undefined ? dto.failureReason : sac.failureReason) ?? null) : null;
-      if (outcome === 'failed' && !failureReason) throw fieldError('failureReason', 'Say why the sac failed: infertile, spoiled, eaten or other.');
-      if (outcome !== 'failed' && dto.failureReason) throw fieldError('failureReason', 'A failure reason only goes with the outcome "failed".');
+      if (outcome === 'failed' && !failureReason) throw fieldError('failureReason', refusal('sac.failureReasonNeeded'));
+      if (outcome !== 'failed' && dto.failureReason) throw fieldError('failureReason', refusal('sac.failureReasonOnlyFailed'));
       const failsNow = outcome === 'failed' && wasOutcome !== 'failed';
-      if (dto.partnerMessage !== undefined && !failsNow)
-        throw fieldError('partnerMessage', 'A message to the partners goes only with recording the sac as failed.');
+      if (dto.partnerMessage !== undefined && !failsNow) throw fieldError('partnerMessage', refusal('sac.partnerMessageOnlyFailed'));
 
       tx.assign(sac, {
         ...next,

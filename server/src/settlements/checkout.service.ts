@@ -12,6 +12,7 @@ import { loadAccount } from '../accounts/account-loader';
 import { User } from '../users/user.entity';
 import { PayoutAccount } from './payout-account.entity';
 import { SettlementCheckout } from './settlement-checkout.entity';
+import { refusal } from '../common/refusal';
 
 @Injectable()
 export class CheckoutService {
@@ -30,22 +31,18 @@ export class CheckoutService {
     const view = await loadAccount(this.em, access.project);
     const me = access.member;
     const creditor = view.data.members.find((m) => m.id === dto.toMemberId);
-    if (!creditor || creditor.role === 'caretaker') throw new BadRequestException('toMemberId is not a party of this project.');
-    if (creditor.id === me.id) throw new BadRequestException('You cannot pay yourself.');
+    if (!creditor || creditor.role === 'caretaker') throw new BadRequestException(refusal('checkout.notParty'));
+    if (creditor.id === me.id) throw new BadRequestException(refusal('checkout.notYourself'));
     const currency = view.balances.currency;
     const debt = view.balances.debts.find((d) => d.fromPartyId === me.id && d.toPartyId === creditor.id);
-    if (!debt) throw new ConflictException(`You owe ${view.nameOf(creditor.id)} nothing on this project's account.`);
+    if (!debt) throw new ConflictException(refusal('checkout.owesNothing', { name: view.nameOf(creditor.id) }));
     if (dto.amountMinor > debt.amountMinor) {
-      throw new ConflictException(
-        `You owe ${view.nameOf(creditor.id)} ${formatMoneyCode(debt.amountMinor, currency)}; ${formatMoneyCode(dto.amountMinor, currency)} is ${formatMoneyCode(dto.amountMinor - debt.amountMinor, currency)} more than that.`,
-      );
+      const [owed, amount, over] = [debt.amountMinor, dto.amountMinor, dto.amountMinor - debt.amountMinor].map((m) => formatMoneyCode(m, currency));
+      throw new ConflictException(refusal('checkout.moreThanOwed', { name: view.nameOf(creditor.id), owed, amount, over }));
     }
     const payout = creditor.user ? await this.em.findOne(PayoutAccount, { user: creditor.user.id }) : null;
-    if (!payout)
-      throw new ConflictException(
-        `${view.nameOf(creditor.id)} has not linked a payout account yet, so they cannot be paid here. Pay them another way and record the payment.`,
-      );
-    if (!payout.chargesEnabled) throw new ConflictException(`${view.nameOf(creditor.id)} has not finished setting up their payout account yet.`);
+    if (!payout) throw new ConflictException(refusal('checkout.noPayout', { name: view.nameOf(creditor.id) }));
+    if (!payout.chargesEnabled) throw new ConflictException(refusal('checkout.payoutUnfinished', { name: view.nameOf(creditor.id) }));
 
     const back = `${this.app.publicUrl}/projects/${access.project.id}/account`;
     const session = await providerCall(() =>

@@ -6,6 +6,8 @@ import { ownBreeding, toSpeciesResponse } from './species.mapper';
 import { effectiveBreeding } from './effective-breeding';
 import type { SpeciesListQueryDto } from './dto/species-list-query.dto';
 import type { UpdateSpeciesDto } from './dto/update-species.dto';
+import { fieldRefusal, refusal, term } from '../common/refusal';
+import { badRequest } from '../common/field-errors';
 
 /** `%`, `_` and `\` typed by a keeper are letters, not wildcards. */
 export function escapeLike(text: string): string {
@@ -61,8 +63,7 @@ export class SpeciesService {
   /** For other modules: the entity, or a 400 naming the field when the id is not in the catalogue. */
   async require(id: string, field = 'speciesId'): Promise<Species> {
     const found = await this.em.findOne(Species, { id });
-    if (!found)
-      throw new BadRequestException({ message: 'Choose a species from the catalogue.', details: [{ field, message: 'Choose a species from the catalogue.' }] });
+    if (!found) throw new BadRequestException({ ...refusal('species.choose'), details: [fieldRefusal(field, 'species.choose')] });
     return found;
   }
 
@@ -76,15 +77,16 @@ export class SpeciesService {
     const problems: FieldError[] = [];
     const source = this.sourceOf(sourceKind, sourceCitation, changed.length > 0, problems);
     this.em.assign(s, values);
-    for (const [a, b, , what, least] of PAIRS) {
+    for (const [a, b, key, , least] of PAIRS) {
       const lo = s[a] as number | null | undefined;
       const hi = s[b] as number | null | undefined;
       if ((lo == null) !== (hi == null))
-        problems.push({ field: String(lo == null ? a : b), message: `Give both ends of the ${what}, or clear both to use the default.` });
-      else if (lo != null && hi != null && lo > hi) problems.push({ field: String(a), message: `The ${what} starts after it ends (${lo} > ${hi}).` });
-      else if (lo != null && lo < least) problems.push({ field: String(a), message: `The ${what} must start at ${least} or more.` });
+        problems.push(fieldRefusal(String(lo == null ? a : b), 'species.bothEnds', { what: term(`refusal.speciesRange.${key}`) }));
+      else if (lo != null && hi != null && lo > hi)
+        problems.push(fieldRefusal(String(a), 'species.upsideDown', { what: term(`refusal.speciesRange.${key}`), lo, hi }));
+      else if (lo != null && lo < least) problems.push(fieldRefusal(String(a), 'species.startAtLeast', { what: term(`refusal.speciesRange.${key}`), least }));
     }
-    if (problems.length) throw new BadRequestException({ message: problems.map((p) => p.message).join(' '), details: problems });
+    if (problems.length) throw badRequest(problems);
     if (source) s.sources = { ...s.sources, ...Object.fromEntries(changed.map((k) => [k, source])) };
     await this.em.flush();
     return toSpeciesResponse(s);
@@ -93,11 +95,11 @@ export class SpeciesService {
   private sourceOf(kind: ValueSource['kind'] | undefined, citation: string | undefined, needed: boolean, problems: FieldError[]): ValueSource | null {
     if (!needed) return null;
     if (!kind) {
-      problems.push({ field: 'sourceKind', message: 'Say where the new values come from: published, common-practice or memory.' });
+      problems.push(fieldRefusal('sourceKind', 'species.sourceKind'));
       return null;
     }
     if (kind === 'published') {
-      if (!citation) problems.push({ field: 'sourceCitation', message: 'Name the publication the new values come from.' });
+      if (!citation) problems.push(fieldRefusal('sourceCitation', 'species.citation'));
       return { kind, citation: citation ?? '' };
     }
     return citation ? { kind, note: citation } : { kind };

@@ -23,3 +23,6 @@ export interface ApiErrorBody {
   key?: string;
   values?: Record<string, string | number>;
 }
+
+/** The `reason` of a 403 for a stale CSRF token: the client fetches a fresh token and sends the write once more. */
+export const CSRF_OUT_OF_DATE = 'csrf-out-of-date';

@@ -5,6 +5,7 @@ import { mailDe } from './mail.js';
 import { remindersDe } from './reminders.js';
 import { sharesDe } from './shares.js';
 import { refusalsDe } from './refusals.js';
+import { serverRefusalsDe } from './server-refusals.js';
 
 /** Every word for a shared state, in German; the `Catalogue` type makes a missing key a compile error. */
 export const de: Catalogue = {
@@ -351,6 +352,7 @@ export const de: Catalogue = {
   mail: mailDe,
   shares: sharesDe,
   rule: refusalsDe,
+  refusal: serverRefusalsDe,
   calendar: {
     pullWindow: 'Entnahmefenster: {{project}}',
     where: '{{project}}, Kokon vom {{layDate}}',

@@ -5,6 +5,7 @@ import { mailEn } from './mail.js';
 import { remindersEn } from './reminders.js';
 import { sharesEn } from './shares.js';
 import { refusalsEn } from './refusals.js';
+import { serverRefusalsEn } from './server-refusals.js';
 
 /**
  * Every word for a shared state, in English. Keys are the shared enums' own values, so a new value
@@ -337,6 +338,7 @@ export const en = {
   /** How shares were worked out and what changed (shares page, statement). */
   shares: sharesEn,
   rule: refusalsEn,
+  refusal: serverRefusalsEn,
   calendar: {
     pullWindow: 'Pull window: {{project}}',
     where: '{{project}}, sac laid {{layDate}}',

@@ -22,8 +22,9 @@ import { secondFactorRequired } from './second-factor-rule';
 import { openSecret, sealSecret } from './totp-secret-box';
 import { readTotpKey } from '../../config/totp-key';
 import { acceptedTotpStep, newTotpSecret, totpUri } from './totp';
+import { refusal, type Refusal } from '../../common/refusal';
 
-const codeRefusal = (message: string) => new BadRequestException({ message, details: [{ field: 'code', message }] });
+const codeRefusal = (why: Refusal) => new BadRequestException({ ...why, details: [{ field: 'code', ...why }] });
 /** Authenticator apps show the six digits as "123 456"; the blank is not part of the code. */
 const withoutBlanks = (code: string) => code.replace(/\s/g, '');
 
@@ -52,7 +53,7 @@ export class SecondFactorService {
   /** A new secret, kept aside (sealed) until a code from it is confirmed; asking again replaces it. */
   async startEnrolment(userId: string): Promise<TotpEnrolment> {
     const user = await this.em.findOneOrFail(User, { id: userId });
-    if (user.totpEnabledAt) throw new ConflictException('A second factor is set up already. Remove it first to set up another one.');
+    if (user.totpEnabledAt) throw new ConflictException(refusal('auth.secondFactorExists'));
     const secret = newTotpSecret();
     user.totpPendingSecret = sealSecret(this.key, user.id, secret);
     await this.em.flush();
@@ -66,10 +67,10 @@ export class SecondFactorService {
     return this.em.transactional(async (em) => {
       const user = await this.lockedUser(em, userId);
       await assertPassword(user, dto.password, 'password');
-      if (user.totpEnabledAt) throw new ConflictException('A second factor is set up already.');
-      if (!user.totpPendingSecret) throw new ConflictException('Start the set-up first, then enter a code from the new entry in your app.');
+      if (user.totpEnabledAt) throw new ConflictException(refusal('auth.secondFactorAlready'));
+      if (!user.totpPendingSecret) throw new ConflictException(refusal('auth.startSetupFirst'));
       const step = acceptedTotpStep(openSecret(this.key, user.id, user.totpPendingSecret), withoutBlanks(dto.code), this.clock.now(), null);
-      if (step === null) throw codeRefusal('This code does not match. Check the clock of your phone and enter the code the app shows now.');
+      if (step === null) throw codeRefusal(refusal('auth.codeNoMatch'));
       Object.assign(user, { totpSecret: user.totpPendingSecret, totpPendingSecret: null, totpEnabledAt: this.clock.now(), totpLastStep: step });
       const recoveryCodes = await this.replaceRecoveryCodes(em, user);
       await this.outbox.enqueue(em, securityNotice('second-factor-added', user, this.app.publicUrl));
@@ -86,13 +87,13 @@ export class SecondFactorService {
   async renewRecoveryCodes(userId: string, dto: RecoveryCodesRenewalRequest): Promise<RecoveryCodesResponse> {
     return this.em.transactional(async (em) => {
       const user = await this.lockedUser(em, userId);
-      if (!user.totpEnabledAt) throw new ConflictException('This account has no second factor; recovery codes come with one.');
+      if (!user.totpEnabledAt) throw new ConflictException(refusal('auth.noSecondFactorCodes'));
       if (dto.password) await assertPassword(user, dto.password, 'password');
       else if (dto.code) {
-        if (!(await this.takeCode(em, user, dto.code, false))) throw codeRefusal('This code is not right. Enter the code your app shows now.');
+        if (!(await this.takeCode(em, user, dto.code, false))) throw codeRefusal(refusal('auth.codeWrong'));
       } else {
-        const message = 'Enter your password or the code your app shows now.';
-        throw new BadRequestException({ message, details: [{ field: 'password', message }] });
+        const why = refusal('auth.passwordOrCode');
+        throw new BadRequestException({ ...why, details: [{ field: 'password', ...why }] });
       }
       const recoveryCodes = await this.replaceRecoveryCodes(em, user);
       await this.outbox.enqueue(em, securityNotice('recovery-codes-renewed', user, this.app.publicUrl));
@@ -113,8 +114,8 @@ export class SecondFactorService {
     await this.em.transactional(async (em) => {
       const user = await this.lockedUser(em, userId);
       await assertPassword(user, dto.password, 'password');
-      if (!user.totpEnabledAt) throw new ConflictException('This account has no second factor to remove.');
-      if (!(await this.takeCode(em, user, dto.code))) throw codeRefusal('This code is not right. Enter the code your app shows now, or a recovery code.');
+      if (!user.totpEnabledAt) throw new ConflictException(refusal('auth.noSecondFactor'));
+      if (!(await this.takeCode(em, user, dto.code))) throw codeRefusal(refusal('auth.codeOrRecovery'));
       Object.assign(user, { totpSecret: null, totpPendingSecret: null, totpEnabledAt: null, totpLastStep: null });
       await em.nativeDelete(RecoveryCode, { user: user.id });
       await em.flush();

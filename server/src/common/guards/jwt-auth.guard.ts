@@ -2,6 +2,7 @@ import { ExecutionContext, Injectable, UnauthorizedException } from '@nestjs/com
 import { Reflector } from '@nestjs/core';
 import { AuthGuard } from '@nestjs/passport';
 import { IS_PUBLIC } from '../decorators/public.decorator';
+import { refusal } from '../refusal';
 
 /** Global guard: a route needs a valid session unless marked @Public(). */
 @Injectable()
@@ -17,7 +18,7 @@ export class JwtAuthGuard extends AuthGuard('jwt') {
   }
 
   override handleRequest<T>(err: unknown, user: T): T {
-    if (err || !user) throw new UnauthorizedException('Please sign in to continue.');
+    if (err || !user) throw new UnauthorizedException(refusal('common.signIn'));
     return user;
   }
 }

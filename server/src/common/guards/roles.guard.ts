@@ -3,6 +3,7 @@ import { Reflector } from '@nestjs/core';
 import type { AccountRole } from '@broodsilk/shared';
 import { ACCOUNT_ROLES_KEY } from '../decorators/roles.decorator';
 import type { AuthUser } from '../auth-user';
+import { refusal } from '../refusal';
 
 /** Global guard after authentication: checks @Roles(...) against the caller's account role. */
 @Injectable()
@@ -13,9 +14,9 @@ export class RolesGuard implements CanActivate {
     const roles = this.reflector.getAllAndOverride<AccountRole[] | undefined>(ACCOUNT_ROLES_KEY, [context.getHandler(), context.getClass()]);
     if (!roles?.length) return true;
     const user = context.switchToHttp().getRequest().user as AuthUser | undefined;
-    if (!user || !roles.includes(user.role)) throw new ForbiddenException('Your account is not allowed to do this.');
+    if (!user || !roles.includes(user.role)) throw new ForbiddenException(refusal('common.accountRole'));
     if (user.mustEnrolSecondFactor) {
-      throw new ForbiddenException('Set up a second factor (Settings, Sign-in security) before using administrator pages.');
+      throw new ForbiddenException(refusal('common.adminSecondFactor'));
     }
     return true;
   }

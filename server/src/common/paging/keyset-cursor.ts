@@ -3,20 +3,22 @@ import { Type } from 'class-transformer';
 import { IsInt, IsString, Matches, Max, MaxLength, Min } from 'class-validator';
 import { KEYSET_DEFAULT_LIMIT, KEYSET_MAX_LIMIT, TEXT_LIMITS, type KeysetQuery } from '@broodsilk/shared';
 import { IsOptionalNonNull } from '../validators/is-optional-non-null.validator';
+import { keyedBy } from '../filters/validation-exception.factory';
+import { refusal } from '../refusal';
 
 /** `?after=&limit=` of a keyset-paged list. The cursor's content is checked by the list that reads it. */
 export class KeysetQueryDto implements KeysetQuery {
   @IsOptionalNonNull()
-  @IsString({ message: 'after must be the nextCursor of the page before.' })
-  @MaxLength(TEXT_LIMITS.pageCursor, { message: 'after must be the nextCursor of the page before.' })
-  @Matches(/^[A-Za-z0-9_-]+$/, { message: 'after must be the nextCursor of the page before.' })
+  @IsString({ context: keyedBy('field.cursor') })
+  @MaxLength(TEXT_LIMITS.pageCursor, { context: keyedBy('field.cursor') })
+  @Matches(/^[A-Za-z0-9_-]+$/, { context: keyedBy('field.cursor') })
   after?: string;
 
   @IsOptionalNonNull()
   @Type(() => Number)
-  @IsInt({ message: 'limit must be a whole number.' })
-  @Min(1, { message: 'limit must be at least 1.' })
-  @Max(KEYSET_MAX_LIMIT, { message: `limit can be at most ${KEYSET_MAX_LIMIT}.` })
+  @IsInt({ context: keyedBy('field.limitWhole') })
+  @Min(1, { context: keyedBy('field.limitMin') })
+  @Max(KEYSET_MAX_LIMIT, { context: keyedBy('field.limitMax', { max: KEYSET_MAX_LIMIT }) })
   limit?: number;
 }
 
@@ -27,7 +29,7 @@ export function encodeCursor(key: Record<string, string | number>): string {
   return Buffer.from(JSON.stringify(key), 'utf8').toString('base64url');
 }
 
-const refused = () => new BadRequestException({ message: 'after is not a cursor of this list: pass the nextCursor of the page before, unchanged.' });
+const refused = () => new BadRequestException(refusal('common.cursor'));
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 

@@ -1,6 +1,7 @@
 import { applyDecorators, HttpException, HttpStatus, Injectable, SetMetadata, UseGuards, type CanActivate, type ExecutionContext } from '@nestjs/common';
 import { Reflector } from '@nestjs/core';
 import { RateLimiterMemory, RateLimiterRes } from 'rate-limiter-flexible';
+import { refusal } from '../refusal';
 
 export interface PerUserLimitOptions {
   /** Names the bucket and, in the refusal, what was limited: "statement e-mails". */
@@ -30,19 +31,17 @@ export class PerUserLimitGuard implements CanActivate {
     const req = ctx.switchToHttp().getRequest<{ user?: { id: string }; ip?: string }>();
     const key = options?.perAddress ? req.ip : req.user?.id;
     if (!options || !key) return true;
-    let refusal: RateLimiterRes;
+    let refused: RateLimiterRes;
     try {
       await limiterFor(options).consume(key);
       return true;
     } catch (e) {
       if (!(e instanceof RateLimiterRes)) throw e;
-      refusal = e;
+      refused = e;
     }
-    const minutes = Math.max(1, Math.ceil(refusal.msBeforeNext / 60_000));
-    throw new HttpException(
-      `${options.perAddress ? 'This network address has' : 'You have'} reached the limit of ${options.limit} ${options.what} per ${options.windowMinutes} minutes. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}.`,
-      HttpStatus.TOO_MANY_REQUESTS,
-    );
+    const minutes = Math.max(1, Math.ceil(refused.msBeforeNext / 60_000));
+    const values = { limit: options.limit, what: options.what, window: options.windowMinutes, minutes, count: minutes };
+    throw new HttpException(refusal(options.perAddress ? 'common.addressLimit' : 'common.userLimit', values), HttpStatus.TOO_MANY_REQUESTS);
   }
 }
 

@@ -1,4 +1,5 @@
-import { registerDecorator, type ValidationOptions } from 'class-validator';
+import { registerDecorator, type ValidationArguments, type ValidationOptions } from 'class-validator';
+import { refusal } from '../refusal';
 import { isInstant } from '@broodsilk/shared';
 
 /** A real instant with its offset, e.g. 2026-03-08T07:30:00-05:00 or …Z (see `isInstant` in shared). */
@@ -8,7 +9,8 @@ export function IsInstant(options?: ValidationOptions) {
       name: 'isInstant',
       target: object.constructor,
       propertyName,
-      options: { message: `${propertyName} must be a date and time with its offset, e.g. 2026-03-08T07:30:00Z.`, ...options },
-      validator: { validate: isInstant },
+      options,
+      // The sentence class-validator's own callers (the CSV import) read; the API's filter keys it (validation-exception.factory).
+      validator: { validate: isInstant, defaultMessage: (a: ValidationArguments) => refusal('field.instant', { field: a.property }).message },
     });
 }

@@ -2,6 +2,7 @@ import { applyDecorators } from '@nestjs/common';
 import { Type } from 'class-transformer';
 import { IsInt, Max, Min } from 'class-validator';
 import { IsOptionalNonNull } from './is-optional-non-null.validator';
+import { keyedBy } from '../filters/validation-exception.factory';
 
 /** Far beyond any list a keeper has, and well inside PostgreSQL's bigint OFFSET (1e19 would fail there as a 500). */
 export const MAX_LIST_OFFSET = 1_000_000;
@@ -11,8 +12,8 @@ export function IsListOffset(): PropertyDecorator {
   return applyDecorators(
     IsOptionalNonNull(),
     Type(() => Number),
-    IsInt({ message: 'offset must be a whole number.' }),
-    Min(0, { message: 'offset cannot be negative.' }),
-    Max(MAX_LIST_OFFSET, { message: `offset can be at most ${MAX_LIST_OFFSET}.` }),
+    IsInt({ context: keyedBy('field.offsetWhole') }),
+    Min(0, { context: keyedBy('field.offsetNegative') }),
+    Max(MAX_LIST_OFFSET, { context: keyedBy('field.offsetMax', { max: MAX_LIST_OFFSET }) }),
   );
 }

@@ -10,6 +10,6 @@ import { IsDefined, ValidateIf } from 'class-validator';
 export function IsOptionalNonNull(): PropertyDecorator {
   return applyDecorators(
     ValidateIf((_, value) => value !== undefined),
-    IsDefined({ message: ({ property }) => `"${property}" cannot be null; leave it out instead.` }),
+    IsDefined(),
   );
 }

@@ -1,4 +1,5 @@
 import { registerDecorator, type ValidationOptions } from 'class-validator';
+import { refusal } from '../refusal';
 import { isValidTimeZone } from '@broodsilk/shared';
 
 /** An IANA time-zone name the runtime knows, e.g. "Europe/Berlin". */
@@ -8,7 +9,8 @@ export function IsTimeZone(options?: ValidationOptions) {
       name: 'isTimeZone',
       target: object.constructor,
       propertyName,
-      options: { message: 'Choose a time zone from the list (for example Europe/Berlin).', ...options },
-      validator: { validate: (value: unknown) => typeof value === 'string' && isValidTimeZone(value) },
+      options,
+      // The sentence class-validator's own callers (the CSV import) read; the API's filter keys it (validation-exception.factory).
+      validator: { validate: (value: unknown) => typeof value === 'string' && isValidTimeZone(value), defaultMessage: () => refusal('field.timeZone').message },
     });
 }

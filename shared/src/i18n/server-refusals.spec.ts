@@ -1,0 +1,48 @@
+import { describe, expect, it } from 'vitest';
+import { createWords, LANGUAGES, wordsOf } from './words.js';
+import { serverRefusalsDe, serverRefusalsEn } from './server-refusals.js';
+
+/** Every leaf of the `refusal` section as [key path, English text]; plural forms stay separate keys. */
+function leaves(node: object, prefix = 'refusal'): [string, string][] {
+  return Object.entries(node).flatMap(([k, v]) =>
+    typeof v === 'string' ? [[`${prefix}.${k}`, v] as [string, string]] : leaves(v as object, `${prefix}.${k}`),
+  );
+}
+const PLURAL = /_(one|other)$/;
+const placeholders = (text: string) => [...text.matchAll(/\{\{(\w+)\}\}/g)].map((m) => m[1]!).sort();
+
+/** A sample value per placeholder: a count picks the plural form its key names, anything else a marked word. */
+function sampleValues(key: string, text: string): Record<string, string | number> {
+  const count = key.endsWith('_one') ? 1 : 2;
+  const values = Object.fromEntries(placeholders(text).map((p) => [p, p === 'count' || p === 'minutes' ? count : `‹${p}›`]));
+  // i18next picks a plural form by `count` (Intl.PluralRules), whether or not the sentence shows it.
+  return PLURAL.test(key) ? { ...values, count } : values;
+}
+
+const ALL = leaves(serverRefusalsEn);
+
+describe('the server’s refusals in every language', () => {
+  it('has refusals to check (a broken walk would pass vacuously)', () => {
+    expect(ALL.length).toBeGreaterThan(150);
+  });
+
+  for (const lng of LANGUAGES) {
+    // No fallback: a German sentence missing from the catalogue must fail here, not come out in English.
+    const t = wordsOf(createWords(lng, { fallback: false }));
+    it(`${lng}: every refusal renders with its values: no placeholder, key path or empty text left`, () => {
+      for (const [key, english] of ALL) {
+        const values = sampleValues(key, english);
+        const said = t(key.replace(PLURAL, ''), values);
+        expect(said.trim(), key).not.toBe('');
+        expect(said, key).not.toMatch(/\{\{|\}\}|\$t\(|\brefusal\./);
+        expect(said, key).not.toBe(key.replace(PLURAL, ''));
+        for (const [name, value] of Object.entries(values)) if (typeof value === 'string') expect(said, `${key} keeps {{${name}}}`).toContain(value);
+      }
+    });
+  }
+
+  it('de: each sentence uses exactly the values its English sentence uses', () => {
+    const german = new Map(leaves(serverRefusalsDe));
+    for (const [key, english] of ALL) expect(placeholders(german.get(key) ?? ''), key).toEqual(placeholders(english));
+  });
+});
