@@ -1,6 +1,6 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { CSRF_OUT_OF_DATE, SESSION_COOKIE, type ApiErrorBody } from '@broodsilk/shared';
+import { CSRF_OUT_OF_DATE, PULL_DAY_MAX, SESSION_COOKIE, type ApiErrorBody } from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper, type SignedIn } from './support/users';
 import { addMember, createProject } from './support/projects';
@@ -78,6 +78,30 @@ describe('refusals in the reader’s language', () => {
     expect((await REQUESTS.conflict().expect(409)).body.message).toMatch(/^This project was already closed on \d{4}-\d{2}-\d{2}\.$/);
     expect((await REQUESTS.forbidden().expect(403)).body.message).toBe('Only the owner of this project may do this; you are a partner.');
     expect((await REQUESTS.badJson().expect(400)).body.message).toBe('The request body is not valid JSON.');
+  });
+
+  /** A sac whose temperature band has a word for its lowest value, and a first pull day that is not whole. */
+  const ownSentences = (lng?: string) =>
+    lang(
+      http()
+        .post(`/api/projects/${projectId}/sacs`)
+        .set('Authorization', owner.bearer)
+        .send({ layDate: '2026-03-01', temperatureBand: { min: 'warm', max: 28 }, pullFromDay: 2.5 }),
+      lng,
+    );
+
+  it('a DTO’s own sentences (the band’s value, the pull day and its limit) are said in German, and stay today’s English without Accept-Language', async () => {
+    const de = (await ownSentences('de').expect(400)).body as ApiErrorBody;
+    const en = (await ownSentences().expect(400)).body as ApiErrorBody;
+    expect(en.details).toEqual([
+      { field: 'pullFromDay', message: `The first pull day must be a whole day number from 0 to ${PULL_DAY_MAX}.` },
+      { field: 'temperatureBand.min', message: 'The lowest value of the band must be a number.' },
+    ]);
+    expect(de.details).toEqual([
+      { field: 'pullFromDay', message: `Der erste Entnahmetag muss eine ganze Tageszahl von 0 bis ${PULL_DAY_MAX} sein.` },
+      { field: 'temperatureBand.min', message: 'Der untere Wert des Bereichs muss eine Zahl sein.' },
+    ]);
+    expect(de.message).toBe('Bitte korrigiere 2 Felder: pullFromDay, temperatureBand.min.');
   });
 
   it('the language is negotiated as RFC 9110 §12.5.4 says: region tags, weights, and English for a language we lack', async () => {

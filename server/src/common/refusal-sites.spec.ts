@@ -15,6 +15,9 @@ const ENGLISH_ONLY: Record<string, { sites: number; why: string }> = {
   // passes (the entry kind, a party's role, a shared rule's check message), which need more than the throw line changed.
   'accounts/entries.service.ts': { sites: 1, why: 'caller-built sentence' },
   'accounts/entry-rules.ts': { sites: 3, why: 'caller-built sentence' },
+  // The password policy's sentence (auth/password-policy.ts) is English and also read by the administrator CLI;
+  // keying it needs the policy to name its problems by key first.
+  'auth/dto/is-acceptable-password.validator.ts': { sites: 1, why: 'password policy sentence' },
 };
 
 const sourceFiles = (dir: string): string[] =>
@@ -27,6 +30,13 @@ const ENGLISH_REFUSAL = [
   /new \w+Exception\(\s*(?:['"`]|\{\s*message\s*(?::\s*['"`]|[,}]))/g,
   /badRequest\(\[\s*\{[^}]*\bmessage:\s*['"`]/g,
   /fieldError\(\s*[^,]+,\s*['"`]/g,
+  // A class-validator decorator's own sentence takes `sentence('dto.…')` (validation-exception.factory), never its own
+  // `message`: in the decorator's options (`@IsInt({ message: '…' })`, a constant, a function), in options built
+  // beside it (`(what) => ({ message: … })`), in a registered decorator's options or its default message.
+  /(?<!new\s)\b[A-Z]\w*\(\s*(?:[^()]|\([^()]*\))*?\{\s*(?:[^{}]*,\s*)?message\s*[:,}]/g,
+  /=>\s*\(\{\s*message:\s*(?:['"`]|[A-Z_]+\b)/g,
+  /\boptions:\s*\{[^}]*\bmessage\s*[:,}]/g,
+  /\bdefaultMessage:\s*\([^)]*\)\s*=>\s*['"`]/g,
 ];
 
 function englishRefusals(text: string): number {
@@ -40,6 +50,19 @@ describe('every refusal the server writes can be said in the reader’s language
     expect(englishRefusals(`throw new BadRequestException({ message, details: [{ field: 'code', message }] });`)).toBe(1);
     expect(englishRefusals(`throw badRequest([{ field: 'at', message: 'Too early.' }]);`)).toBe(1);
     expect(englishRefusals(`throw fieldError('at', 'Too early.');`)).toBe(1);
+    expect(englishRefusals(`@IsInt({ message: 'The roll interval must be a whole number of hours.' })`)).toBe(1);
+    expect(englishRefusals("@IsIn(ROLES, { each: true, message: `The role must be one of: ${ROLES.join(', ')}.` })")).toBe(1);
+    expect(englishRefusals(`const dayRule = (what: string) => ({ message: \`The \${what} must be a whole day.\` });`)).toBe(1);
+    expect(englishRefusals(`@IsInstant({ message: INSTANT })`)).toBe(1);
+    expect(englishRefusals(`options: { message: (args: ValidationArguments) => problem(args.value) },`)).toBe(1);
+    expect(englishRefusals("defaultMessage: () => `Each kind must be one of ${KINDS.join(', ')}.`,")).toBe(1);
+    expect(englishRefusals(`IsInt({ message })(target, key);`)).toBe(1);
+    expect(englishRefusals(`defaultMessage: (a: ValidationArguments) => refusal('field.instant', { field: a.property }).message,`)).toBe(0);
+    expect(englishRefusals(`errors.push({ field: 'at', message: sentence });`)).toBe(0);
+    expect(englishRefusals(`const said = (key: RefusalKey) => ({ message: refusal(key).message, context: keyedBy(key) });`)).toBe(0);
+    expect(englishRefusals(`@IsInt(sentence('dto.sac.rollWhole'))`)).toBe(0);
+    expect(englishRefusals(`@IsIn(ROLES, { each: true, ...sentence('dto.common.roleOneOf', { allowed }) })`)).toBe(0);
+    expect(englishRefusals(`@Min(1, { context: keyedBy('field.limitMin') })`)).toBe(0);
     expect(englishRefusals(`throw new ConflictException(refusal('sac.alreadyPulled', { on }));`)).toBe(0);
     expect(englishRefusals(`throw new BadRequestException({ ...refusal('photo.attach'), details: [fieldRefusal('file', 'photo.attachField')] });`)).toBe(0);
   });

@@ -11,10 +11,20 @@ function leaves(node: object, prefix = 'refusal'): [string, string][] {
 const PLURAL = /_(one|other)$/;
 const placeholders = (text: string) => [...text.matchAll(/\{\{(\w+)\}\}/g)].map((m) => m[1]!).sort();
 
-/** A sample value per placeholder: a count picks the plural form its key names, anything else a marked word. */
+/** Values as the request checks (`refusal.dto.*`) pass them: a limit, a field's name, the codes a field allows. */
+const SAMPLES: Record<string, string | number> = {
+  max: 5000,
+  min: 1,
+  field: 'arrivedAlive',
+  allowed: 'female, male, unsexed',
+  kinds: 'roll-due, male-clock',
+  channels: 'email, off',
+};
+
+/** A sample value per placeholder: a count picks the plural form its key names, a known name its sample, anything else a marked word. */
 function sampleValues(key: string, text: string): Record<string, string | number> {
   const count = key.endsWith('_one') ? 1 : 2;
-  const values = Object.fromEntries(placeholders(text).map((p) => [p, p === 'count' || p === 'minutes' ? count : `‹${p}›`]));
+  const values = Object.fromEntries(placeholders(text).map((p) => [p, p === 'count' || p === 'minutes' ? count : (SAMPLES[p] ?? `‹${p}›`)]));
   // i18next picks a plural form by `count` (Intl.PluralRules), whether or not the sentence shows it.
   return PLURAL.test(key) ? { ...values, count } : values;
 }
@@ -36,10 +46,17 @@ describe('the server’s refusals in every language', () => {
         expect(said.trim(), key).not.toBe('');
         expect(said, key).not.toMatch(/\{\{|\}\}|\$t\(|\brefusal\./);
         expect(said, key).not.toBe(key.replace(PLURAL, ''));
-        for (const [name, value] of Object.entries(values)) if (typeof value === 'string') expect(said, `${key} keeps {{${name}}}`).toContain(value);
+        for (const [name, value] of Object.entries(values)) if (name !== 'count') expect(said, `${key} keeps {{${name}}}`).toContain(String(value));
       }
     });
   }
+
+  it('de: every request-check sentence (refusal.dto) is German, not a copied English one', () => {
+    const german = new Map(leaves(serverRefusalsDe));
+    const dto = ALL.filter(([key]) => key.startsWith('refusal.dto.'));
+    expect(dto.length).toBeGreaterThan(100);
+    for (const [key, english] of dto) expect(german.get(key), key).not.toBe(english);
+  });
 
   it('de: each sentence uses exactly the values its English sentence uses', () => {
     const german = new Map(leaves(serverRefusalsDe));

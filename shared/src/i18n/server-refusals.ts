@@ -1,4 +1,5 @@
 import type { Widen } from './catalogue-shape.js';
+import { dtoRefusalsDe, dtoRefusalsEn } from './dto-refusals.js';
 
 /**
  * Every refusal the server writes (the `message` of a 4xx and of its field details), by feature.
@@ -6,6 +7,7 @@ import type { Widen } from './catalogue-shape.js';
  * in the reader's language (Accept-Language). Dates in values are ISO 8601, as the English has them.
  */
 export const serverRefusalsEn = {
+  dto: dtoRefusalsEn,
   common: {
     correctFields: 'Please correct {{count}} fields: {{fields}}.',
     notFound: 'That record does not exist or is not yours to see.',
@@ -390,6 +392,7 @@ export const serverRefusalsEn = {
 } as const;
 
 export const serverRefusalsDe: Widen<typeof serverRefusalsEn> = {
+  dto: dtoRefusalsDe,
   common: {
     correctFields: 'Bitte korrigiere {{count}} Felder: {{fields}}.',
     notFound: 'Diesen Eintrag gibt es nicht, oder du darfst ihn nicht sehen.',

@@ -9,33 +9,34 @@ import {
 } from '@broodsilk/shared';
 import { IsCalendarDate } from '../../common/validators/is-calendar-date.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
+import { sentence } from '../../common/filters/validation-exception.factory';
 
 const MAX_MINOR = 2_000_000_000; // fits the integer columns
 
 /** Types only; which fields each kind needs is checked in EntriesService with messages per kind. */
 export class CreateEntryDto implements CreateEntryRequest {
-  @IsIn(RECORDABLE_ENTRY_KINDS, { message: `kind must be one of: ${RECORDABLE_ENTRY_KINDS.join(', ')}.` })
+  @IsIn(RECORDABLE_ENTRY_KINDS)
   kind!: RecordableEntryKind;
 
   @IsCalendarDate()
   date!: string;
 
   @IsOptionalNonNull()
-  @IsUUID('all', { message: 'memberId must be the id of a party of this project.' })
+  @IsUUID('all', sentence('dto.account.partyId', { field: 'memberId' }))
   memberId?: string;
 
   @IsOptionalNonNull()
-  @IsUUID('all', { message: 'sacId must be the id of a sac of this project.' })
+  @IsUUID('all', sentence('dto.account.sacId'))
   sacId?: string;
 
   @IsOptionalNonNull()
-  @IsInt({ message: 'count must be a whole number.' })
-  @Min(1, { message: 'count must be at least 1.' })
+  @IsInt()
+  @Min(1)
   @Max(100_000)
   count?: number;
 
   @IsOptionalNonNull()
-  @IsIn(HAND_OVER_METHODS, { message: 'method must be pick-up or shipment.' })
+  @IsIn(HAND_OVER_METHODS, sentence('dto.account.method'))
   method?: HandOverMethod;
 
   @IsOptionalNonNull()
@@ -51,42 +52,42 @@ export class CreateEntryDto implements CreateEntryRequest {
   tracking?: string;
 
   @IsOptionalNonNull()
-  @IsInt({ message: 'priceMinor must be a whole number of minor units (cents).' })
+  @IsInt(sentence('dto.common.minorUnits', { field: 'priceMinor' }))
   @Min(0)
   @Max(MAX_MINOR)
   priceMinor?: number;
 
   @IsOptionalNonNull()
-  @IsInt({ message: 'pricePerSpiderlingMinor must be a whole number of minor units (cents).' })
+  @IsInt(sentence('dto.common.minorUnits', { field: 'pricePerSpiderlingMinor' }))
   @Min(0)
   @Max(MAX_MINOR)
   pricePerSpiderlingMinor?: number;
 
   @IsOptionalNonNull()
-  @IsUUID('all', { message: 'fromMemberId must be the id of a party of this project.' })
+  @IsUUID('all', sentence('dto.account.partyId', { field: 'fromMemberId' }))
   fromMemberId?: string;
 
   @IsOptionalNonNull()
-  @IsUUID('all', { message: 'toMemberId must be the id of a party of this project.' })
+  @IsUUID('all', sentence('dto.account.partyId', { field: 'toMemberId' }))
   toMemberId?: string;
 
   @IsOptionalNonNull()
-  @IsInt({ message: 'amountMinor must be a whole number of minor units (cents).' })
-  @Min(1, { message: 'amountMinor must be above 0.' })
+  @IsInt(sentence('dto.common.minorUnits', { field: 'amountMinor' }))
+  @Min(1, sentence('dto.common.amountAboveZero'))
   @Max(MAX_MINOR)
   amountMinor?: number;
 
   @IsOptionalNonNull()
-  @Matches(/^[A-Z]{3}$/, { message: 'currency must be an ISO 4217 code such as EUR.' })
+  @Matches(/^[A-Z]{3}$/, sentence('dto.account.currency'))
   currency?: string;
 
   @IsOptionalNonNull()
-  @IsUUID('all', { message: 'reversesId must be the id of an earlier entry.' })
+  @IsUUID('all', sentence('dto.account.reversesId'))
   reversesId?: string;
 
   @IsOptionalNonNull()
   @IsString()
-  @MinLength(3, { message: 'reason must say in a few words why the entry is reversed.' })
+  @MinLength(3, sentence('dto.account.reversedWhy'))
   @MaxLength(TEXT_LIMITS.correctionReason)
   reason?: string;
 

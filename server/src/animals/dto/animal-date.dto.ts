@@ -1,7 +1,8 @@
 import type { AnimalDateRequest } from '@broodsilk/shared';
 import { IsCalendarDate } from '../../common/validators/is-calendar-date.validator';
+import { sentence } from '../../common/filters/validation-exception.factory';
 
 export class AnimalDateDto implements AnimalDateRequest {
-  @IsCalendarDate({ message: 'The date must be a date written YYYY-MM-DD.' })
+  @IsCalendarDate(sentence('dto.animal.date'))
   on!: string;
 }

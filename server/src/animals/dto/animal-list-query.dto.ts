@@ -3,41 +3,42 @@ import { IsBoolean, IsIn, IsInt, IsString, IsUUID, Max, MaxLength, Min } from 'c
 import { ANIMAL_SEXES, ANIMAL_SORTS, ANIMAL_STATUSES, type AnimalListQuery, type AnimalSex, type AnimalSort, type AnimalStatus } from '@broodsilk/shared';
 import { IsListOffset } from '../../common/validators/is-list-offset.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
+import { sentence } from '../../common/filters/validation-exception.factory';
 
 export class AnimalListQueryDto implements AnimalListQuery {
   @IsOptionalNonNull()
   @Type(() => Number)
-  @IsInt({ message: 'limit must be a whole number.' })
+  @IsInt()
   @Min(1)
-  @Max(500, { message: 'limit can be at most 500.' })
+  @Max(500)
   limit?: number;
 
   @IsListOffset()
   offset?: number;
 
   @IsOptionalNonNull()
-  @IsIn(ANIMAL_SORTS, { message: `sort must be one of: ${ANIMAL_SORTS.join(', ')}.` })
+  @IsIn(ANIMAL_SORTS)
   sort?: AnimalSort;
 
   @IsOptionalNonNull()
-  @IsIn(['asc', 'desc'], { message: 'order must be asc or desc.' })
+  @IsIn(['asc', 'desc'], sentence('dto.animal.order'))
   order?: 'asc' | 'desc';
 
   @IsOptionalNonNull()
-  @IsUUID('all', { message: 'speciesId must be a species id.' })
+  @IsUUID('all', sentence('dto.animal.speciesId'))
   speciesId?: string;
 
   @IsOptionalNonNull()
-  @IsIn(ANIMAL_SEXES, { message: `sex must be one of: ${ANIMAL_SEXES.join(', ')}.` })
+  @IsIn(ANIMAL_SEXES)
   sex?: AnimalSex;
 
   @IsOptionalNonNull()
-  @IsIn(ANIMAL_STATUSES, { message: `status must be one of: ${ANIMAL_STATUSES.join(', ')}.` })
+  @IsIn(ANIMAL_STATUSES)
   status?: AnimalStatus;
 
   @IsOptionalNonNull()
   @Transform(({ value }) => (value === 'true' ? true : value === 'false' ? false : value))
-  @IsBoolean({ message: 'mature must be true or false.' })
+  @IsBoolean()
   mature?: boolean;
 
   @IsOptionalNonNull()

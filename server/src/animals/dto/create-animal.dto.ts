@@ -16,22 +16,24 @@ import {
 } from '@broodsilk/shared';
 import { IsCalendarDate } from '../../common/validators/is-calendar-date.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
+import { sentence } from '../../common/filters/validation-exception.factory';
 
 const trim = ({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value);
 /** Blank text means "none": a form's empty box and a CSV's empty cell both arrive as "". */
 const blankToNull = ({ value }: { value: unknown }) => (typeof value === 'string' ? (value.trim() === '' ? null : value.trim()) : value);
 const notNull = (_: object, v: unknown) => v !== null && v !== undefined;
-const oneOf = (what: string, list: readonly string[]) => ({ message: `${what} must be one of: ${list.join(', ')}.` });
+// The filter's sentence for isIn, given here so the CSV import (it reads class-validator's messages itself) has it too.
+const oneOf = (field: string, list: readonly string[]) => sentence('field.isIn', { field, allowed: list.join(', ') });
 
 /** The create form and every CSV row are checked by this class. */
 export class CreateAnimalDto implements CreateAnimalRequest {
-  @IsUUID('all', { message: 'Choose a species from the catalogue.' })
+  @IsUUID('all', sentence('species.choose'))
   speciesId!: string;
 
   @Transform(trim)
   @IsString()
-  @IsNotEmpty({ message: 'Give the animal a label or code.' })
-  @MaxLength(TEXT_LIMITS.animalLabel, { message: `A label can be at most ${TEXT_LIMITS.animalLabel} characters.` })
+  @IsNotEmpty(sentence('dto.animal.labelNeeded'))
+  @MaxLength(TEXT_LIMITS.animalLabel, sentence('dto.animal.labelMax', { max: TEXT_LIMITS.animalLabel }))
   label!: string;
 
   @IsIn(ANIMAL_SEXES, oneOf('sex', ANIMAL_SEXES))
@@ -43,12 +45,12 @@ export class CreateAnimalDto implements CreateAnimalRequest {
 
   @Transform(blankToNull)
   @ValidateIf(notNull)
-  @IsCalendarDate({ message: 'The maturing date must be a date written YYYY-MM-DD.' })
+  @IsCalendarDate(sentence('dto.animal.maturedOn'))
   maturedOn?: string | null;
 
   @Transform(blankToNull)
   @ValidateIf(notNull)
-  @IsCalendarDate({ message: 'The acquisition date must be a date written YYYY-MM-DD.' })
+  @IsCalendarDate(sentence('dto.animal.acquiredOn'))
   acquiredOn?: string | null;
 
   @Transform(blankToNull)
@@ -59,14 +61,14 @@ export class CreateAnimalDto implements CreateAnimalRequest {
 
   @Transform(({ value }) => (value === '' ? null : typeof value === 'string' && /^-?\d+$/.test(value.trim()) ? Number(value) : value))
   @ValidateIf(notNull)
-  @IsInt({ message: 'The price is a whole number of minor units (cents), e.g. 4500 for 45.00.' })
-  @Min(0, { message: 'The price cannot be negative.' })
-  @Max(100_000_000, { message: 'The price is too large.' })
+  @IsInt(sentence('dto.animal.priceWhole'))
+  @Min(0, sentence('dto.animal.priceNegative'))
+  @Max(100_000_000, sentence('dto.animal.priceTooLarge'))
   pricePaidMinor?: number | null;
 
   @Transform(({ value }) => (typeof value === 'string' ? (value.trim() === '' ? null : value.trim().toUpperCase()) : value))
   @ValidateIf(notNull)
-  @Matches(/^[A-Z]{3}$/, { message: 'The currency is a three-letter ISO 4217 code such as EUR or USD.' })
+  @Matches(/^[A-Z]{3}$/, sentence('dto.animal.currency'))
   priceCurrency?: string | null;
 
   @Transform(blankToNull)
@@ -76,7 +78,7 @@ export class CreateAnimalDto implements CreateAnimalRequest {
 
   @Transform(({ value }) => (typeof value === 'string' ? (value.trim() === '' ? null : value.trim().toLowerCase()) : value))
   @ValidateIf(notNull)
-  @IsEmail({}, { message: 'The owner’s e-mail does not look like an e-mail address.' })
+  @IsEmail({}, sentence('dto.animal.ownerEmail'))
   @MaxLength(TEXT_LIMITS.email)
   ownerEmail?: string | null;
 
@@ -99,7 +101,7 @@ export class CreateAnimalDto implements CreateAnimalRequest {
 
   @Transform(blankToNull)
   @ValidateIf(notNull)
-  @IsCalendarDate({ message: 'The due-back date must be a date written YYYY-MM-DD.' })
+  @IsCalendarDate(sentence('dto.animal.dueBackOn'))
   dueBackOn?: string | null;
 
   @Transform(blankToNull)
@@ -109,7 +111,7 @@ export class CreateAnimalDto implements CreateAnimalRequest {
 
   @Transform(blankToNull)
   @ValidateIf(notNull)
-  @IsCalendarDate({ message: 'The status date must be a date written YYYY-MM-DD.' })
+  @IsCalendarDate(sentence('dto.animal.statusOn'))
   statusOn?: string | null;
 
   @Transform(blankToNull)

@@ -2,33 +2,34 @@ import { IsBoolean, IsNotEmpty, IsOptional, IsString, IsUUID, MaxLength, Validat
 import { TEXT_LIMITS } from '@broodsilk/shared';
 import type { CreateFeedingRequest } from '@broodsilk/shared';
 import { IsCalendarDate } from '../../common/validators/is-calendar-date.validator';
+import { sentence } from '../../common/filters/validation-exception.factory';
 
 export class CreateFeedingDto implements CreateFeedingRequest {
-  @IsCalendarDate({ message: 'The feeding date must be a date written YYYY-MM-DD.' })
+  @IsCalendarDate(sentence('dto.feeding.fedOn'))
   fedOn!: string;
 
-  @IsString({ message: 'Say what prey was offered, e.g. "2 adult crickets".' })
-  @IsNotEmpty({ message: 'Say what prey was offered, e.g. "2 adult crickets".' })
-  @MaxLength(TEXT_LIMITS.prey, { message: `The prey is at most ${TEXT_LIMITS.prey} characters.` })
+  @IsString(sentence('feeding.preyNeeded'))
+  @IsNotEmpty(sentence('feeding.preyNeeded'))
+  @MaxLength(TEXT_LIMITS.prey, sentence('dto.feeding.preyMax', { max: TEXT_LIMITS.prey }))
   prey!: string;
 
-  @IsBoolean({ message: 'Say whether the prey was taken (true) or refused (false).' })
+  @IsBoolean(sentence('dto.feeding.taken'))
   taken!: boolean;
 
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
   @IsString()
-  @MaxLength(TEXT_LIMITS.note, { message: `The note is at most ${TEXT_LIMITS.note} characters.` })
+  @MaxLength(TEXT_LIMITS.note, sentence('dto.feeding.noteMax', { max: TEXT_LIMITS.note }))
   note?: string | null;
 
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
-  @IsUUID('all', { message: 'Say which entry this corrects (its id).' })
+  @IsUUID('all', sentence('careLog.strikeWhich'))
   strikes?: string | null;
 
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
   @IsString()
-  @MaxLength(TEXT_LIMITS.correctionReason, { message: `The reason is at most ${TEXT_LIMITS.correctionReason} characters.` })
+  @MaxLength(TEXT_LIMITS.correctionReason, sentence('dto.feeding.reasonMax', { max: TEXT_LIMITS.correctionReason }))
   reason?: string | null;
 }

@@ -3,26 +3,29 @@ import { IsBoolean, IsIn, IsNumber, IsOptional, IsString, Max, MaxLength, Min, V
 import { EXUVIA_SEXES, type CreateMoltRequest, type ExuviaSex, TEXT_LIMITS } from '@broodsilk/shared';
 import { IsCalendarDate } from '../../common/validators/is-calendar-date.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
+import { sentence } from '../../common/filters/validation-exception.factory';
+
+const SIZE_MAX_CM = 40;
 
 export class CreateMoltDto implements CreateMoltRequest {
-  @IsCalendarDate({ message: 'The molt date must be a date written YYYY-MM-DD.' })
+  @IsCalendarDate(sentence('dto.molt.moltedOn'))
   moltedOn!: string;
 
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
-  @IsIn(EXUVIA_SEXES, { message: `The exuvia result must be one of: ${EXUVIA_SEXES.join(', ')}.` })
+  @IsIn(EXUVIA_SEXES, sentence('dto.molt.exuvia', { allowed: EXUVIA_SEXES.join(', ') }))
   exuviaSex?: ExuviaSex | null;
 
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
   @Type(() => Number)
-  @IsNumber({ maxDecimalPlaces: 1 }, { message: 'The size is in centimetres with at most one decimal, e.g. 12.5.' })
-  @Min(0.1, { message: 'The size must be more than 0 cm.' })
-  @Max(40, { message: 'The size cannot be more than 40 cm.' })
+  @IsNumber({ maxDecimalPlaces: 1 }, sentence('dto.molt.sizeNumber'))
+  @Min(0.1, sentence('dto.molt.sizeMin'))
+  @Max(SIZE_MAX_CM, sentence('dto.molt.sizeMax', { max: SIZE_MAX_CM }))
   sizeCm?: number | null;
 
   @IsOptionalNonNull()
-  @IsBoolean({ message: 'maturing must be true or false.' })
+  @IsBoolean()
   maturing?: boolean;
 
   @IsOptional()

@@ -1,10 +1,11 @@
 import { IsString, Length } from 'class-validator';
 import type { EmailConfirmationRequest, EmailConfirmationResendRequest } from '@broodsilk/shared';
 import { PasswordResetDto } from './password-reset.dto';
+import { sentence } from '../../common/filters/validation-exception.factory';
 
 export class EmailConfirmationDto implements EmailConfirmationRequest {
   @IsString()
-  @Length(20, 200, { message: 'This confirmation link is not valid. Check that you copied all of it.' })
+  @Length(20, 200, sentence('dto.auth.confirmationLink'))
   token!: string;
 }
 

@@ -4,10 +4,11 @@ import { Transform } from 'class-transformer';
 import { LANGUAGES, type Language, type RegisterRequest } from '@broodsilk/shared';
 import { IsTimeZone } from '../../common/validators/is-time-zone.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
+import { sentence } from '../../common/filters/validation-exception.factory';
 
 export class RegisterDto implements RegisterRequest {
   @Transform(({ value }) => (typeof value === 'string' ? value.trim().toLowerCase() : value))
-  @IsEmail({}, { message: 'Enter a valid e-mail address.' })
+  @IsEmail({}, sentence('dto.auth.email'))
   @MaxLength(254)
   email!: string;
 
@@ -16,7 +17,7 @@ export class RegisterDto implements RegisterRequest {
 
   @Transform(({ value }) => (typeof value === 'string' ? value.trim() : value))
   @IsString()
-  @IsNotEmpty({ message: 'Tell us the name to show to your partners.' })
+  @IsNotEmpty(sentence('dto.auth.displayName'))
   @MaxLength(80)
   displayName!: string;
 
@@ -25,11 +26,11 @@ export class RegisterDto implements RegisterRequest {
   timeZone?: string;
 
   @IsOptionalNonNull()
-  @IsIn(LANGUAGES, { message: `Choose one of the languages ${LANGUAGES.join(', ')}.` })
+  @IsIn(LANGUAGES, sentence('dto.common.languageOneOf', { allowed: LANGUAGES.join(', ') }))
   language?: Language;
 
   @IsOptionalNonNull()
   @IsString()
-  @Length(20, 200, { message: 'This invitation link is not valid. Check that you copied all of it.' })
+  @Length(20, 200, sentence('invitation.invalidLink'))
   invitationToken?: string;
 }

@@ -2,35 +2,36 @@ import { IsIn, IsInt, IsOptional, IsString, IsUUID, Max, MaxLength, Min, Validat
 import { PAIRING_OUTCOMES, type CreatePairingRequest, type PairingOutcome, TEXT_LIMITS } from '@broodsilk/shared';
 import { IsInstant } from '../../common/validators/is-instant.validator';
 import { AcknowledgedWarningsDto } from '../../plausibility/acknowledged-warnings.dto';
+import { sentence } from '../../common/filters/validation-exception.factory';
 
 export class CreatePairingDto extends AcknowledgedWarningsDto implements CreatePairingRequest {
-  @IsInstant({ message: 'The start must be a date and time with its offset, such as 2026-05-03T19:30:00+02:00.' })
+  @IsInstant(sentence('dto.pairing.startedAt'))
   startedAt!: string;
 
-  @IsInt({ message: 'The duration is a whole number of minutes.' })
-  @Min(1, { message: 'The duration must be at least 1 minute.' })
-  @Max(20_160, { message: 'The duration can be at most 14 days (20160 minutes).' })
+  @IsInt(sentence('dto.pairing.durationWhole'))
+  @Min(1, sentence('dto.pairing.durationMin'))
+  @Max(20_160, sentence('dto.pairing.durationMax'))
   durationMinutes!: number;
 
-  @IsIn(PAIRING_OUTCOMES, { message: `The outcome must be one of: ${PAIRING_OUTCOMES.join(', ')}.` })
+  @IsIn(PAIRING_OUTCOMES, sentence('dto.common.outcomeOneOf', { allowed: PAIRING_OUTCOMES.join(', ') }))
   outcome!: PairingOutcome;
 
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
   @IsString()
-  @MaxLength(TEXT_LIMITS.note, { message: `The notes can be at most ${TEXT_LIMITS.note} characters.` })
+  @MaxLength(TEXT_LIMITS.note, sentence('dto.common.notesMax', { max: TEXT_LIMITS.note }))
   notes?: string | null;
 
   @IsOptional()
-  @IsUUID('all', { message: 'maleId must be the id of a male in your collection.' })
+  @IsUUID('all', sentence('dto.pairing.maleId'))
   maleId?: string;
 
   @IsOptional()
-  @IsUUID('all', { message: 'corrects must be the id of the pairing to correct.' })
+  @IsUUID('all', sentence('dto.pairing.correctsId'))
   corrects?: string;
 
   @IsOptional()
   @IsString()
-  @MaxLength(TEXT_LIMITS.correctionReason, { message: `Keep the reason under ${TEXT_LIMITS.correctionReason} characters.` })
+  @MaxLength(TEXT_LIMITS.correctionReason, sentence('dto.common.reasonUnder', { max: TEXT_LIMITS.correctionReason }))
   reason?: string;
 }

@@ -2,22 +2,23 @@ import { IsOptional, IsString, IsUUID, MaxLength, MinLength, ValidateIf } from '
 import { TEXT_LIMITS } from '@broodsilk/shared';
 import type { CreateProjectRequest } from '@broodsilk/shared';
 import { AcknowledgedWarningsDto } from '../../plausibility/acknowledged-warnings.dto';
+import { sentence } from '../../common/filters/validation-exception.factory';
 
 export class CreateProjectDto extends AcknowledgedWarningsDto implements CreateProjectRequest {
-  @IsString({ message: 'The title must be text.' })
-  @MinLength(1, { message: 'Give the project a title.' })
-  @MaxLength(TEXT_LIMITS.projectTitle, { message: `The title can be at most ${TEXT_LIMITS.projectTitle} characters.` })
+  @IsString(sentence('dto.project.titleText'))
+  @MinLength(1, sentence('dto.project.titleNeeded'))
+  @MaxLength(TEXT_LIMITS.projectTitle, sentence('dto.project.titleMax', { max: TEXT_LIMITS.projectTitle }))
   title!: string;
 
-  @IsUUID('all', { message: 'Choose the female from your collection.' })
+  @IsUUID('all', sentence('dto.project.female'))
   femaleId!: string;
 
-  @IsUUID('all', { message: 'Choose the male from your collection.' })
+  @IsUUID('all', sentence('dto.project.male'))
   maleId!: string;
 
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
-  @IsString({ message: 'The notes must be text.' })
-  @MaxLength(TEXT_LIMITS.projectNotes, { message: `The notes can be at most ${TEXT_LIMITS.projectNotes} characters.` })
+  @IsString(sentence('dto.common.notesText'))
+  @MaxLength(TEXT_LIMITS.projectNotes, sentence('dto.common.notesMax', { max: TEXT_LIMITS.projectNotes }))
   notes?: string | null;
 }

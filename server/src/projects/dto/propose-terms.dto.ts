@@ -12,58 +12,59 @@ import {
   TEXT_LIMITS,
 } from '@broodsilk/shared';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
+import { sentence } from '../../common/filters/validation-exception.factory';
 
 export class TermsLineDto implements TermsLineInput {
-  @IsUUID('all', { message: 'Each line names a party of the project (memberId).' })
+  @IsUUID('all', sentence('dto.terms.lineMember'))
   memberId!: string;
 
-  @IsInt({ message: 'A weight must be a whole number.' })
-  @Min(0, { message: 'A weight cannot be negative.' })
-  @Max(1_000_000, { message: 'A weight can be at most 1,000,000.' })
+  @IsInt(sentence('dto.terms.weightWhole'))
+  @Min(0, sentence('dto.terms.weightNegative'))
+  @Max(1_000_000, sentence('dto.terms.weightMax'))
   weight!: number;
 
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
-  @IsInt({ message: 'A fixed count must be a whole number of young.' })
-  @Min(0, { message: 'A fixed count cannot be negative.' })
-  @Max(100_000, { message: 'A fixed count can be at most 100,000.' })
+  @IsInt(sentence('dto.terms.fixedWhole'))
+  @Min(0, sentence('dto.terms.fixedNegative'))
+  @Max(100_000, sentence('dto.terms.fixedMax'))
   fixedCount?: number | null;
 
-  @IsInt({ message: 'A pick order must be a whole number (1 picks first).' })
-  @Min(1, { message: 'Pick orders start at 1 (picks first).' })
-  @Max(1000, { message: 'A pick order can be at most 1000.' })
+  @IsInt(sentence('dto.terms.pickWhole'))
+  @Min(1, sentence('dto.terms.pickMin'))
+  @Max(1000, sentence('dto.terms.pickMax'))
   pickOrder!: number;
 }
 
 export class ProposeTermsDto implements ProposeTermsRequest {
-  @IsArray({ message: 'lines must be a list with one line per party.' })
-  @ArrayMinSize(1, { message: 'The terms need a line for each party.' })
+  @IsArray(sentence('dto.terms.linesList'))
+  @ArrayMinSize(1, sentence('dto.terms.linesNeeded'))
   @ValidateNested({ each: true })
   @Type(() => TermsLineDto)
   lines!: TermsLineDto[];
 
-  @IsInt({ message: 'The price per spiderling is a whole number of minor units (e.g. cents).' })
-  @Min(0, { message: 'The price per spiderling cannot be negative.' })
-  @Max(100_000_000, { message: 'The price per spiderling is too large.' })
+  @IsInt(sentence('dto.terms.priceWhole'))
+  @Min(0, sentence('dto.terms.priceNegative'))
+  @Max(100_000_000, sentence('dto.terms.priceTooLarge'))
   pricePerSpiderlingMinor!: number;
 
-  @IsString({ message: 'The currency is a three-letter ISO 4217 code such as EUR.' })
-  @Matches(/^[A-Z]{3}$/, { message: 'The currency is a three-letter ISO 4217 code in capitals, such as EUR.' })
+  @IsString(sentence('dto.terms.currencyText'))
+  @Matches(/^[A-Z]{3}$/, sentence('dto.terms.currencyCapitals'))
   currency!: string;
 
-  @IsIn(FAILURE_CLAUSES, { message: `The failure clause must be one of: ${FAILURE_CLAUSES.join(', ')}.` })
+  @IsIn(FAILURE_CLAUSES, sentence('dto.terms.failureClause', { allowed: FAILURE_CLAUSES.join(', ') }))
   failureClause!: FailureClause;
 
   @IsOptionalNonNull()
-  @IsIn(BROOD_STAGES, { message: `The hand-over stage must be one of: ${BROOD_STAGES.join(', ')}.` })
+  @IsIn(BROOD_STAGES, sentence('dto.terms.handOverStage', { allowed: BROOD_STAGES.join(', ') }))
   handOverStage?: BroodStage;
 
-  @IsIn(SHIPPING_PAYERS, { message: `Who pays shipping must be one of: ${SHIPPING_PAYERS.join(', ')}.` })
+  @IsIn(SHIPPING_PAYERS, sentence('dto.terms.shippingPaidBy', { allowed: SHIPPING_PAYERS.join(', ') }))
   shippingPaidBy!: ShippingPayer;
 
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
   @IsString()
-  @MaxLength(TEXT_LIMITS.note, { message: `The note can be at most ${TEXT_LIMITS.note} characters.` })
+  @MaxLength(TEXT_LIMITS.note, sentence('dto.common.noteMax', { max: TEXT_LIMITS.note }))
   note?: string | null;
 }

@@ -2,18 +2,19 @@ import { IsOptional, IsString, MaxLength, MinLength, ValidateIf } from 'class-va
 import { TEXT_LIMITS } from '@broodsilk/shared';
 import type { UpdateProjectRequest } from '@broodsilk/shared';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
+import { sentence } from '../../common/filters/validation-exception.factory';
 
 /** Title and notes only: the animals of a project never change (start a new project instead). */
 export class UpdateProjectDto implements UpdateProjectRequest {
   @IsOptionalNonNull()
-  @IsString({ message: 'The title must be text.' })
-  @MinLength(1, { message: 'Give the project a title.' })
-  @MaxLength(TEXT_LIMITS.projectTitle, { message: `The title can be at most ${TEXT_LIMITS.projectTitle} characters.` })
+  @IsString(sentence('dto.project.titleText'))
+  @MinLength(1, sentence('dto.project.titleNeeded'))
+  @MaxLength(TEXT_LIMITS.projectTitle, sentence('dto.project.titleMax', { max: TEXT_LIMITS.projectTitle }))
   title?: string;
 
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
-  @IsString({ message: 'The notes must be text.' })
-  @MaxLength(TEXT_LIMITS.projectNotes, { message: `The notes can be at most ${TEXT_LIMITS.projectNotes} characters.` })
+  @IsString(sentence('dto.common.notesText'))
+  @MaxLength(TEXT_LIMITS.projectNotes, sentence('dto.common.notesMax', { max: TEXT_LIMITS.projectNotes }))
   notes?: string | null;
 }

@@ -7,9 +7,9 @@ import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.
 export class NotificationListQueryDto implements NotificationListQuery {
   @IsOptionalNonNull()
   @Type(() => Number)
-  @IsInt({ message: 'limit must be a whole number.' })
-  @Min(1, { message: 'limit must be at least 1.' })
-  @Max(100, { message: 'limit can be at most 100.' })
+  @IsInt()
+  @Min(1)
+  @Max(100)
   limit?: number;
 
   @IsListOffset()

@@ -2,9 +2,10 @@ import { Type } from 'class-transformer';
 import { IsBoolean, IsInt, IsOptional, Max, Min, ValidateIf, ValidateNested, registerDecorator } from 'class-validator';
 import { NOTIFICATION_KINDS, REMINDER_CHANNELS, type NotificationKind, type ReminderChannel, type UpdateReminderPreferencesRequest } from '@broodsilk/shared';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
+import { sentence } from '../../common/filters/validation-exception.factory';
 
-const HOUR_MESSAGE = 'An hour must be a whole hour from 0 to 23.';
-const hour = () => [IsInt({ message: HOUR_MESSAGE }), Min(0, { message: HOUR_MESSAGE }), Max(23, { message: HOUR_MESSAGE })];
+const HOUR = sentence('dto.reminder.hour');
+const hour = () => [IsInt(HOUR), Min(0, HOUR), Max(23, HOUR)];
 const apply =
   (decorators: PropertyDecorator[]): PropertyDecorator =>
   (target, key) =>
@@ -17,6 +18,7 @@ function IsChannelChoices(): PropertyDecorator {
       name: 'isChannelChoices',
       target: object.constructor,
       propertyName: String(propertyName),
+      options: sentence('dto.reminder.channels', { kinds: NOTIFICATION_KINDS.join(', '), channels: REMINDER_CHANNELS.join(', ') }),
       validator: {
         validate: (value: unknown) =>
           typeof value === 'object' &&
@@ -25,7 +27,6 @@ function IsChannelChoices(): PropertyDecorator {
           Object.entries(value).every(
             ([k, v]) => (NOTIFICATION_KINDS as readonly string[]).includes(k) && (REMINDER_CHANNELS as readonly unknown[]).includes(v),
           ),
-        defaultMessage: () => `Each reminder kind must be one of ${NOTIFICATION_KINDS.join(', ')}, and each channel one of ${REMINDER_CHANNELS.join(', ')}.`,
       },
     });
 }
@@ -51,7 +52,7 @@ export class UpdateReminderPreferencesDto implements UpdateReminderPreferencesRe
   quietHours?: QuietHoursDto | null;
 
   @IsOptionalNonNull()
-  @IsBoolean({ message: 'overdueBreaksQuiet must be true or false.' })
+  @IsBoolean()
   overdueBreaksQuiet?: boolean;
 
   /** Null turns the digest off. */

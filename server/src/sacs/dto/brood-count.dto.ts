@@ -4,21 +4,22 @@ import { AcknowledgedWarningsDto } from '../../plausibility/acknowledged-warning
 import { IsInstant } from '../../common/validators/is-instant.validator';
 import { IsCount } from './opening.dto';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
+import { sentence } from '../../common/filters/validation-exception.factory';
 
 export class BroodCountDto extends AcknowledgedWarningsDto implements BroodCountRequest {
   @IsOptionalNonNull()
-  @IsInstant({ message: 'The time of the count must be a date and time with its offset, e.g. 2026-03-08T07:30:00Z.' })
+  @IsInstant(sentence('dto.broodCount.at'))
   at?: string;
 
-  @IsIn(BROOD_STAGES, { message: `The stage must be one of: ${BROOD_STAGES.join(', ')}.` })
+  @IsIn(BROOD_STAGES, sentence('dto.common.stageOneOf', { allowed: BROOD_STAGES.join(', ') }))
   stage!: BroodStage;
 
-  @IsCount('young alive') alive!: number;
+  @IsCount('alive') alive!: number;
 
-  @IsOptional() @IsCount('young lost') lost?: number;
+  @IsOptional() @IsCount('lost') lost?: number;
 
   @IsOptionalNonNull()
-  @IsIn(BROOD_LOSS_REASONS, { message: `The loss reason must be one of: ${BROOD_LOSS_REASONS.join(', ')}.` })
+  @IsIn(BROOD_LOSS_REASONS, sentence('dto.broodCount.lossReason', { allowed: BROOD_LOSS_REASONS.join(', ') }))
   lossReason?: BroodLossReason;
 
   @IsOptional()
@@ -28,15 +29,15 @@ export class BroodCountDto extends AcknowledgedWarningsDto implements BroodCount
   note?: string | null;
 
   @IsOptional()
-  @IsBoolean({ message: 'estimated must be true or false.' })
+  @IsBoolean()
   estimated?: boolean;
 
   @IsOptional()
-  @IsUUID('all', { message: 'corrects must be the id of the count to correct.' })
+  @IsUUID('all', sentence('dto.broodCount.correctsId'))
   corrects?: string;
 
   @IsOptional()
   @IsString()
-  @MaxLength(TEXT_LIMITS.correctionReason, { message: `Keep the reason under ${TEXT_LIMITS.correctionReason} characters.` })
+  @MaxLength(TEXT_LIMITS.correctionReason, sentence('dto.common.reasonUnder', { max: TEXT_LIMITS.correctionReason }))
   reason?: string;
 }

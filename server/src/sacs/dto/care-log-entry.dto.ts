@@ -12,22 +12,23 @@ import {
 } from '@broodsilk/shared';
 import { IsInstant } from '../../common/validators/is-instant.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
+import { sentence } from '../../common/filters/validation-exception.factory';
 
 export class TemperatureReadingDto {
-  @IsDefined({ message: 'Give the temperature value.' })
-  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'The temperature must be a number, e.g. 26.5.' })
+  @IsDefined(sentence('dto.careLog.temperatureNeeded'))
+  @IsNumber({ allowNaN: false, allowInfinity: false }, sentence('dto.careLog.temperatureNumber'))
   value!: number;
 
-  @IsIn(TEMPERATURE_UNITS, { message: 'The temperature unit must be C or F.' })
+  @IsIn(TEMPERATURE_UNITS, sentence('dto.careLog.temperatureUnit'))
   unit!: TemperatureUnit;
 }
 
 export class CareLogEntryDto implements CareLogRequest {
-  @IsIn(CARE_LOG_KINDS, { message: `The kind of entry must be one of: ${CARE_LOG_KINDS.join(', ')}.` })
+  @IsIn(CARE_LOG_KINDS, sentence('dto.common.entryKindOneOf', { allowed: CARE_LOG_KINDS.join(', ') }))
   kind!: CareLogKind;
 
   @IsOptionalNonNull()
-  @IsInstant({ message: 'The time of the entry must be a date and time with its offset, e.g. 2026-03-08T07:30:00Z.' })
+  @IsInstant(sentence('dto.careLog.at'))
   at?: string;
 
   @IsOptionalNonNull()
@@ -36,24 +37,24 @@ export class CareLogEntryDto implements CareLogRequest {
   temperature?: TemperatureReadingDto;
 
   @IsOptionalNonNull()
-  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'The humidity must be a number of percent, e.g. 75.' })
+  @IsNumber({ allowNaN: false, allowInfinity: false }, sentence('dto.careLog.humidity'))
   humidityPercent?: number;
 
   @IsOptionalNonNull()
-  @IsIn(BROOD_STAGES, { message: `The stage must be one of: ${BROOD_STAGES.join(', ')}.` })
+  @IsIn(BROOD_STAGES, sentence('dto.common.stageOneOf', { allowed: BROOD_STAGES.join(', ') }))
   stage?: BroodStage;
 
   @IsOptionalNonNull()
   @IsString()
-  @MaxLength(TEXT_LIMITS.note, { message: `Keep the text under ${TEXT_LIMITS.note} characters.` })
+  @MaxLength(TEXT_LIMITS.note, sentence('dto.careLog.textUnder', { max: TEXT_LIMITS.note }))
   text?: string;
 
   @IsOptionalNonNull()
-  @IsUUID('all', { message: 'strikes must be the id of the entry to strike.' })
+  @IsUUID('all', sentence('dto.common.strikesId'))
   strikes?: string;
 
   @IsOptionalNonNull()
   @IsString()
-  @MaxLength(TEXT_LIMITS.correctionReason, { message: `Keep the reason under ${TEXT_LIMITS.correctionReason} characters.` })
+  @MaxLength(TEXT_LIMITS.correctionReason, sentence('dto.common.reasonUnder', { max: TEXT_LIMITS.correctionReason }))
   reason?: string;
 }

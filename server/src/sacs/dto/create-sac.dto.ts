@@ -5,51 +5,53 @@ import { IsCalendarDate } from '../../common/validators/is-calendar-date.validat
 import { IsInstant } from '../../common/validators/is-instant.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 import { AcknowledgedWarningsDto } from '../../plausibility/acknowledged-warnings.dto';
+import { sentence } from '../../common/filters/validation-exception.factory';
 
-const dayRule = (what: string) => ({ message: `The ${what} must be a whole day number from 0 to ${PULL_DAY_MAX}.` });
+const FROM_DAY = sentence('dto.sac.pullFromDay', { max: PULL_DAY_MAX });
+const TO_DAY = sentence('dto.sac.pullToDay', { max: PULL_DAY_MAX });
 
 /** A band's two ends; whether they make a band is checked by the shared `bandProblem`. */
 export class RangeDto implements Range {
-  @IsDefined({ message: 'Give the lowest value of the band.' })
-  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'The lowest value of the band must be a number.' })
+  @IsDefined(sentence('dto.sac.bandLowNeeded'))
+  @IsNumber({ allowNaN: false, allowInfinity: false }, sentence('dto.sac.bandLowNumber'))
   min!: number;
 
-  @IsDefined({ message: 'Give the highest value of the band.' })
-  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'The highest value of the band must be a number.' })
+  @IsDefined(sentence('dto.sac.bandHighNeeded'))
+  @IsNumber({ allowNaN: false, allowInfinity: false }, sentence('dto.sac.bandHighNumber'))
   max!: number;
 }
 
 export class CreateSacDto extends AcknowledgedWarningsDto implements CreateSacRequest {
-  @IsCalendarDate({ message: 'The lay date must be a date written YYYY-MM-DD.' })
+  @IsCalendarDate(sentence('dto.sac.layDate'))
   layDate!: string;
 
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
-  @IsInstant({ message: 'The pull time must be a date and time with its offset, e.g. 2026-03-08T07:30:00Z.' })
+  @IsInstant(sentence('dto.sac.pullTime'))
   pulledAt?: string | null;
 
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
-  @IsInt(dayRule('first pull day'))
-  @Min(0, dayRule('first pull day'))
-  @Max(PULL_DAY_MAX, dayRule('first pull day'))
+  @IsInt(FROM_DAY)
+  @Min(0, FROM_DAY)
+  @Max(PULL_DAY_MAX, FROM_DAY)
   pullFromDay?: number | null;
 
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
-  @IsInt(dayRule('last pull day'))
-  @Min(0, dayRule('last pull day'))
-  @Max(PULL_DAY_MAX, dayRule('last pull day'))
+  @IsInt(TO_DAY)
+  @Min(0, TO_DAY)
+  @Max(PULL_DAY_MAX, TO_DAY)
   pullToDay?: number | null;
 
   @IsOptionalNonNull()
-  @IsInt({ message: 'The roll interval must be a whole number of hours.' })
-  @Min(ROLL_INTERVAL_LIMITS.minHours, { message: `The roll interval must be at least ${ROLL_INTERVAL_LIMITS.minHours} hour.` })
-  @Max(ROLL_INTERVAL_LIMITS.maxHours, { message: `The roll interval cannot be more than ${ROLL_INTERVAL_LIMITS.maxHours} hours.` })
+  @IsInt(sentence('dto.sac.rollWhole'))
+  @Min(ROLL_INTERVAL_LIMITS.minHours, sentence('dto.sac.rollMin', { min: ROLL_INTERVAL_LIMITS.minHours }))
+  @Max(ROLL_INTERVAL_LIMITS.maxHours, sentence('dto.sac.rollMax', { max: ROLL_INTERVAL_LIMITS.maxHours }))
   rollIntervalHours?: number;
 
   @IsOptionalNonNull()
-  @IsBoolean({ message: 'rollingOff must be true or false.' })
+  @IsBoolean()
   rollingOff?: boolean;
 
   @IsOptional()
@@ -59,17 +61,17 @@ export class CreateSacDto extends AcknowledgedWarningsDto implements CreateSacRe
   notes?: string | null;
 
   @IsOptionalNonNull()
-  @IsBoolean({ message: 'leftWithMother must be true or false.' })
+  @IsBoolean()
   leftWithMother?: boolean;
 
   @IsOptionalNonNull()
-  @IsBoolean({ message: 'rollPastLegs must be true or false.' })
+  @IsBoolean()
   rollPastLegs?: boolean;
 
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
-  @IsString({ message: 'The incubator or container must be text.' })
-  @MaxLength(TEXT_LIMITS.enclosure, { message: `Name the incubator or container in at most ${TEXT_LIMITS.enclosure} characters.` })
+  @IsString(sentence('dto.sac.containerText'))
+  @MaxLength(TEXT_LIMITS.enclosure, sentence('dto.sac.containerMax', { max: TEXT_LIMITS.enclosure }))
   container?: string | null;
 
   @IsOptional()

@@ -3,47 +3,50 @@ import { KEPT_BACK_LOG_KINDS, type KeptBackEndRequest, type KeptBackLogKind, typ
 import { IsInstant } from '../../common/validators/is-instant.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 import { IsCount } from './opening.dto';
+import { sentence } from '../../common/filters/validation-exception.factory';
 
-const INSTANT = 'The time must be a date and time with its offset, e.g. 2026-03-08T07:30:00Z.';
+const INSTANT = sentence('dto.keptBack.at');
+const REASON = sentence('dto.common.reasonUnder', { max: TEXT_LIMITS.correctionReason });
+const WHY_ENDED = sentence('dto.keptBack.whyEnded');
 
 export class KeptBackLogDto implements KeptBackLogRequest {
-  @IsIn(KEPT_BACK_LOG_KINDS, { message: `The kind of entry must be one of: ${KEPT_BACK_LOG_KINDS.join(', ')}.` })
+  @IsIn(KEPT_BACK_LOG_KINDS, sentence('dto.common.entryKindOneOf', { allowed: KEPT_BACK_LOG_KINDS.join(', ') }))
   kind!: KeptBackLogKind;
 
   @IsOptionalNonNull()
-  @IsInstant({ message: INSTANT })
+  @IsInstant(INSTANT)
   at?: string;
 
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
   @IsString()
-  @MaxLength(TEXT_LIMITS.note, { message: `Keep the note under ${TEXT_LIMITS.note} characters.` })
+  @MaxLength(TEXT_LIMITS.note, sentence('dto.keptBack.noteUnder', { max: TEXT_LIMITS.note }))
   note?: string | null;
 
   @IsOptionalNonNull()
-  @IsUUID('all', { message: 'strikes must be the id of the entry to strike.' })
+  @IsUUID('all', sentence('dto.common.strikesId'))
   strikes?: string;
 
   @IsOptionalNonNull()
   @IsString()
-  @MaxLength(TEXT_LIMITS.correctionReason, { message: `Keep the reason under ${TEXT_LIMITS.correctionReason} characters.` })
+  @MaxLength(TEXT_LIMITS.correctionReason, REASON)
   reason?: string;
 }
 
 export class KeptBackEndDto implements KeptBackEndRequest {
-  @IsIn(['joined', 'written-off'], { message: 'The outcome must be joined (into the brood) or written-off.' })
+  @IsIn(['joined', 'written-off'], sentence('dto.keptBack.outcome'))
   outcome!: 'joined' | 'written-off';
 
   @IsOptionalNonNull()
-  @IsInstant({ message: INSTANT })
+  @IsInstant(INSTANT)
   at?: string;
 
   @IsOptionalNonNull()
-  @IsCount('kept-back young that joined the brood')
+  @IsCount('joined')
   joined?: number;
 
-  @IsString({ message: 'Say briefly why the batch ended so.' })
-  @IsNotEmpty({ message: 'Say briefly why the batch ended so.' })
-  @MaxLength(TEXT_LIMITS.correctionReason, { message: `Keep the reason under ${TEXT_LIMITS.correctionReason} characters.` })
+  @IsString(WHY_ENDED)
+  @IsNotEmpty(WHY_ENDED)
+  @MaxLength(TEXT_LIMITS.correctionReason, REASON)
   reason!: string;
 }

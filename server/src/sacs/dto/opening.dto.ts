@@ -1,33 +1,34 @@
 import { IsBoolean, IsInt, IsOptional, IsString, IsUUID, Max, MaxLength, Min, ValidateIf } from 'class-validator';
-import { BROOD_COUNT_MAX, type OpeningRequest, TEXT_LIMITS } from '@broodsilk/shared';
+import { BROOD_COUNT_MAX, type Catalogue, type OpeningRequest, TEXT_LIMITS } from '@broodsilk/shared';
 import { IsInstant } from '../../common/validators/is-instant.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 import { AcknowledgedWarningsDto } from '../../plausibility/acknowledged-warnings.dto';
+import { sentence } from '../../common/filters/validation-exception.factory';
 
-/** A count is a whole number from 0 to BROOD_COUNT_MAX. */
-export function IsCount(what: string): PropertyDecorator {
-  const message = `The number of ${what} must be a whole number from 0 to ${BROOD_COUNT_MAX}.`;
+/** A count is a whole number from 0 to BROOD_COUNT_MAX; `what` names its sentence. */
+export function IsCount(what: keyof Catalogue['refusal']['dto']['count']): PropertyDecorator {
+  const said = sentence(`dto.count.${what}`, { max: BROOD_COUNT_MAX });
   return (target, key) => {
-    IsInt({ message })(target, key);
-    Min(0, { message })(target, key);
-    Max(BROOD_COUNT_MAX, { message })(target, key);
+    IsInt(said)(target, key);
+    Min(0, said)(target, key);
+    Max(BROOD_COUNT_MAX, said)(target, key);
   };
 }
 
 export class OpeningDto extends AcknowledgedWarningsDto implements OpeningRequest {
   @IsOptionalNonNull()
-  @IsInstant({ message: 'The opening time must be a date and time with its offset, e.g. 2026-03-08T07:30:00Z.' })
+  @IsInstant(sentence('dto.opening.at'))
   openedAt?: string;
 
-  @IsCount('healthy eggs') healthyEggs!: number;
-  @IsCount('eggs with legs') eggsWithLegs!: number;
+  @IsCount('healthyEggs') healthyEggs!: number;
+  @IsCount('eggsWithLegs') eggsWithLegs!: number;
   @IsCount('nymphs') nymphs!: number;
-  @IsCount('dark eggs') darkEggs!: number;
-  @IsCount('spoiled eggs') spoiledEggs!: number;
-  @IsCount('kept-back eggs') keptBack!: number;
+  @IsCount('darkEggs') darkEggs!: number;
+  @IsCount('spoiledEggs') spoiledEggs!: number;
+  @IsCount('keptBack') keptBack!: number;
 
   @IsOptional()
-  @IsBoolean({ message: 'estimated must be true or false.' })
+  @IsBoolean()
   estimated?: boolean;
 
   @IsOptional()
@@ -37,11 +38,11 @@ export class OpeningDto extends AcknowledgedWarningsDto implements OpeningReques
   notes?: string | null;
 
   @IsOptional()
-  @IsUUID('all', { message: 'corrects must be the id of the opening to correct.' })
+  @IsUUID('all', sentence('dto.opening.correctsId'))
   corrects?: string;
 
   @IsOptional()
   @IsString()
-  @MaxLength(TEXT_LIMITS.correctionReason, { message: `Keep the reason under ${TEXT_LIMITS.correctionReason} characters.` })
+  @MaxLength(TEXT_LIMITS.correctionReason, sentence('dto.common.reasonUnder', { max: TEXT_LIMITS.correctionReason }))
   reason?: string;
 }

@@ -1,12 +1,13 @@
 import { IsInt, IsUUID, Max, Min } from 'class-validator';
 import type { CreateCheckoutRequest } from '@broodsilk/shared';
+import { sentence } from '../../common/filters/validation-exception.factory';
 
 export class CreateCheckoutDto implements CreateCheckoutRequest {
-  @IsUUID('all', { message: 'toMemberId must be the id of the party you are paying.' })
+  @IsUUID('all', sentence('dto.checkout.payee'))
   toMemberId!: string;
 
-  @IsInt({ message: 'amountMinor must be a whole number of minor units (cents).' })
-  @Min(1, { message: 'amountMinor must be above 0.' })
+  @IsInt(sentence('dto.common.minorUnits', { field: 'amountMinor' }))
+  @Min(1, sentence('dto.common.amountAboveZero'))
   @Max(2_000_000_000)
   amountMinor!: number;
 }

@@ -1,7 +1,8 @@
 import { Matches } from 'class-validator';
 import type { CreatePayoutAccountRequest } from '@broodsilk/shared';
+import { sentence } from '../../common/filters/validation-exception.factory';
 
 export class CreatePayoutAccountDto implements CreatePayoutAccountRequest {
-  @Matches(/^[A-Z]{2}$/, { message: 'country must be a two-letter ISO 3166 country code such as DE.' })
+  @Matches(/^[A-Z]{2}$/, sentence('dto.checkout.country'))
   country!: string;
 }

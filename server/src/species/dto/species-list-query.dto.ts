@@ -3,6 +3,7 @@ import { IsIn, IsInt, IsString, Max, MaxLength, Min } from 'class-validator';
 import { SPECIES_GROUPS, type SpeciesGroup, type SpeciesListQuery } from '@broodsilk/shared';
 import { IsListOffset } from '../../common/validators/is-list-offset.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
+import { sentence } from '../../common/filters/validation-exception.factory';
 
 export class SpeciesListQueryDto implements SpeciesListQuery {
   @IsOptionalNonNull()
@@ -11,14 +12,14 @@ export class SpeciesListQueryDto implements SpeciesListQuery {
   q?: string;
 
   @IsOptionalNonNull()
-  @IsIn(SPECIES_GROUPS, { message: `group must be one of ${SPECIES_GROUPS.join(', ')}.` })
+  @IsIn(SPECIES_GROUPS, sentence('dto.species.oneOf', { field: 'group', allowed: SPECIES_GROUPS.join(', ') }))
   group?: SpeciesGroup;
 
   @IsOptionalNonNull()
   @Type(() => Number)
-  @IsInt({ message: 'limit must be a whole number.' })
+  @IsInt()
   @Min(1)
-  @Max(200, { message: 'limit can be at most 200.' })
+  @Max(200)
   limit?: number;
 
   @IsListOffset()

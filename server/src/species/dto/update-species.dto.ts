@@ -1,6 +1,7 @@
 import { ArrayMaxSize, IsArray, IsBoolean, IsIn, IsInt, IsNotEmpty, IsOptional, IsString, Max, MaxLength, Min, ValidateIf } from 'class-validator';
 import { SPECIES_GROUPS, VENOM_FLAGS, type SpeciesGroup, type UpdateSpeciesRequest, type ValueSource, type VenomFlag } from '@broodsilk/shared';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
+import { sentence } from '../../common/filters/validation-exception.factory';
 
 const SOURCE_KINDS: ValueSource['kind'][] = ['published', 'common-practice', 'memory'];
 
@@ -9,9 +10,9 @@ function Count(max: number): PropertyDecorator {
   return (target, key) => {
     IsOptional()(target, key);
     ValidateIf((_, v) => v !== null)(target, key);
-    IsInt({ message: `${String(key)} must be a whole number.` })(target, key);
-    Min(0, { message: `${String(key)} cannot be negative.` })(target, key);
-    Max(max, { message: `${String(key)} can be at most ${max}.` })(target, key);
+    IsInt()(target, key);
+    Min(0, sentence('dto.common.notNegative', { field: String(key) }))(target, key);
+    Max(max)(target, key);
   };
 }
 
@@ -31,7 +32,7 @@ export class UpdateSpeciesDto implements UpdateSpeciesRequest {
   formerNames?: string[];
 
   @IsOptionalNonNull()
-  @IsIn(SPECIES_GROUPS, { message: `group must be one of ${SPECIES_GROUPS.join(', ')}.` })
+  @IsIn(SPECIES_GROUPS, sentence('dto.species.oneOf', { field: 'group', allowed: SPECIES_GROUPS.join(', ') }))
   group?: SpeciesGroup;
 
   @IsOptionalNonNull()
@@ -39,7 +40,7 @@ export class UpdateSpeciesDto implements UpdateSpeciesRequest {
   urticatingHairs?: boolean;
 
   @IsOptionalNonNull()
-  @IsIn(VENOM_FLAGS, { message: `venom must be one of ${VENOM_FLAGS.join(', ')}.` })
+  @IsIn(VENOM_FLAGS, sentence('dto.species.oneOf', { field: 'venom', allowed: VENOM_FLAGS.join(', ') }))
   venom?: VenomFlag;
 
   @IsOptional()
@@ -58,7 +59,7 @@ export class UpdateSpeciesDto implements UpdateSpeciesRequest {
   @Count(60) lifespanMaxMonths?: number | null;
 
   @IsOptionalNonNull()
-  @IsIn(SOURCE_KINDS, { message: 'sourceKind must be published, common-practice or memory.' })
+  @IsIn(SOURCE_KINDS, sentence('dto.species.sourceKind'))
   sourceKind?: ValueSource['kind'];
 
   @IsOptionalNonNull()

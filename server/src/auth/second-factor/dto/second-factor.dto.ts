@@ -8,29 +8,30 @@ import {
 } from '@broodsilk/shared';
 import { MAX_PASSWORD_LENGTH } from '../../password-policy';
 import { IsOptionalNonNull } from '../../../common/validators/is-optional-non-null.validator';
+import { sentence } from '../../../common/filters/validation-exception.factory';
 
 const MAX_CODE_LENGTH = TEXT_LIMITS.secondFactorCode;
 
 export class TotpConfirmDto implements TotpConfirmRequest {
   @IsString()
-  @IsNotEmpty({ message: 'Enter the six digits your app shows.' })
+  @IsNotEmpty(sentence('dto.auth.appCode'))
   @MaxLength(MAX_CODE_LENGTH)
   code!: string;
 
   @IsString()
-  @IsNotEmpty({ message: 'Enter your password.' })
+  @IsNotEmpty(sentence('dto.auth.password'))
   @MaxLength(MAX_PASSWORD_LENGTH)
   password!: string;
 }
 
 export class SecondFactorRemovalDto implements SecondFactorRemovalRequest {
   @IsString()
-  @IsNotEmpty({ message: 'Enter your password.' })
+  @IsNotEmpty(sentence('dto.auth.password'))
   @MaxLength(MAX_PASSWORD_LENGTH)
   password!: string;
 
   @IsString()
-  @IsNotEmpty({ message: 'Enter a code from your app or a recovery code.' })
+  @IsNotEmpty(sentence('dto.auth.codeOrRecovery'))
   @MaxLength(MAX_CODE_LENGTH)
   code!: string;
 }
@@ -42,7 +43,7 @@ export class SecondFactorSignInDto implements SecondFactorSignInRequest {
   pendingToken!: string;
 
   @IsString()
-  @IsNotEmpty({ message: 'Enter a code from your app or a recovery code.' })
+  @IsNotEmpty(sentence('dto.auth.codeOrRecovery'))
   @MaxLength(MAX_CODE_LENGTH)
   code!: string;
 }
