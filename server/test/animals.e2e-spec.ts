@@ -245,9 +245,9 @@ describe('male clock in responses', () => {
 describe('deleting an animal that is used elsewhere', () => {
   it('a registered usage check refuses DELETE with 409 and its reason', async () => {
     const a = await createAnimal(t.app, mira, { speciesId: vagans, label: 'USED-1', sex: 'female' });
-    t.app.get(AnimalUsageRegistry).register(async (_em, id) => (id === a.id ? 'It is the female of project "Spring pairing".' : null));
+    t.app.get(AnimalUsageRegistry).register(async (_em, id) => (id === a.id ? { key: 'animal.femaleOfProject', values: { project: 'Spring pairing' } } : null));
     const res = await http().delete(`/api/animals/${a.id}`).set('Authorization', mira.bearer).expect(409);
-    expect(res.body.message).toBe('This animal cannot be deleted: It is the female of project "Spring pairing". Mark it sold or deceased instead.');
+    expect(res.body.message).toBe('This animal cannot be deleted: it is the female of the project "Spring pairing". Mark it sold or deceased instead.');
     await http().get(`/api/animals/${a.id}`).set('Authorization', mira.bearer).expect(200);
   });
 

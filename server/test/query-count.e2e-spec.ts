@@ -117,6 +117,18 @@ describe('statements per read do not grow with the data', () => {
     );
   });
 
+  it('a note replans no reminder; a reading does (the planner reads only rolls, readings, stages and strikes)', async () => {
+    const post = async (body: object) => {
+      statements = 0;
+      await http().post(`/api/sacs/${small.sacIds[0]}/log`).set('Authorization', small.who.bearer).send(body).expect(201);
+      return statements;
+    };
+    await post({ kind: 'note', text: 'warm-up' });
+    const note = await post({ kind: 'note', text: 'eggs look fine' });
+    const reading = await post({ kind: 'temperature', temperature: { value: 26.5, unit: 'C' } });
+    expect(note).toBeLessThan(reading);
+  });
+
   it('a sac page costs the same in a project of 40 as in one of 2', async () => {
     expect(await cost(big.who, `/api/sacs/${big.sacIds[39]}`)).toBe(await cost(small.who, `/api/sacs/${small.sacIds[1]}`));
   });

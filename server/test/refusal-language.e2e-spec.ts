@@ -4,6 +4,9 @@ import { CSRF_OUT_OF_DATE, PULL_DAY_MAX, SESSION_COOKIE, type ApiErrorBody } fro
 import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper, type SignedIn } from './support/users';
 import { addMember, createProject } from './support/projects';
+import { ANY_PAIRING } from './support/sacs';
+import { accountScenario, type AccountScenario } from './accounts.fixtures';
+import { INVITATIONS_PER_HOUR } from '../src/invitations/invitations.controller';
 
 let t: TestApp;
 let owner: SignedIn;
@@ -124,5 +127,107 @@ describe('refusals in the reader’s language', () => {
       message: 'Dieses Formular ist veraltet. Lade die Seite neu und versuch es noch einmal.',
       reason: CSRF_OUT_OF_DATE,
     });
+  });
+});
+
+/**
+ * Sentences that were built from words their caller passed: each is asked for once in German. A
+ * German body keeps no placeholder, catalogue key or nested key, and none of the English words
+ * the caller used to pass (`english`).
+ */
+describe('refusals built from other words, in German', () => {
+  let s: AccountScenario;
+  const de = (req: request.Test) => req.set('Accept-Language', 'de');
+  const entry = (body: object) => de(http().post(`/api/projects/${s.projectId}/entries`).set('Authorization', s.mira.bearer).send(body));
+  const sac = (body: object) => de(http().post(`/api/projects/${s.projectId}/sacs`).set('Authorization', s.mira.bearer).send(body));
+  function german(body: ApiErrorBody, english: RegExp): string[] {
+    const said = sentences(body);
+    for (const text of said) {
+      expect(text).not.toMatch(/\{\{|\}\}|\brefusal\.|\brule\.|\$t\(/);
+      expect(text).not.toMatch(english);
+    }
+    return said;
+  }
+
+  beforeAll(async () => {
+    s = await accountScenario(t.app, t.orm);
+  });
+
+  it('1. account entries: a missing value, a future date and a share overdrawn (the shared rule’s sentence after the name)', async () => {
+    const missing = await entry({ kind: 'hand-over', date: '2025-01-01', memberId: s.tomaszId, method: 'pick-up' }).expect(400);
+    expect(german(missing.body, /is required/)).toEqual(['count fehlt: Wie viele Junge?']);
+    const future = await entry({ kind: 'sale', date: '2999-01-01', memberId: s.tomaszId, count: 1, priceMinor: 500 }).expect(400);
+    expect(german(future.body, /after today|in the future/)).toEqual([
+      expect.stringMatching(/^Das Datum des Verkaufs 2999-01-01 liegt nach heute \(\d{4}-\d{2}-\d{2} bei dir\); trag ihn ein, wenn er geschehen ist\.$/),
+      'Das Datum 2999-01-01 liegt in der Zukunft.',
+    ]);
+    const over = await entry({ kind: 'hand-over', date: '2025-01-01', memberId: s.tomaszId, count: 40, method: 'pick-up' }).expect(409);
+    expect(german(over.body, /more than|young still owed/)).toEqual([
+      expect.stringMatching(
+        /^Tomasz Partner: Das sind \d+ mehr als die \d+ Jungtiere, die diesem Beteiligten noch zustehen \(Anteil \d+; 0 übergeben, 0 verkauft, 0 ausbezahlt\)\.$/,
+      ),
+    ]);
+  });
+
+  it('2. a rate limit names what it counts in German', async () => {
+    const send = () => de(http().post(`/api/projects/${s.projectId}/invitations`).set('Authorization', s.mira.bearer).send({}));
+    for (let i = 0; i < INVITATIONS_PER_HOUR; i += 1) expect((await send()).status).not.toBe(429);
+    const limited = await send().expect(429);
+    expect(german(limited.body, /invitations/)).toEqual([
+      expect.stringMatching(
+        new RegExp(`^Du hast die Grenze von ${INVITATIONS_PER_HOUR} Einladungen pro 60 Minuten erreicht\\. Versuch es in \\d+ Minuten? noch einmal\\.$`),
+      ),
+    ]);
+  });
+
+  it('2. an animal in a project cannot be deleted: the reason in German, with the project’s title as typed', async () => {
+    const p = await createProject(t.app, t.orm, owner, { title: 'Frühjahr & "Zucht"' });
+    const res = await de(http().delete(`/api/animals/${p.femaleAnimal.id}`).set('Authorization', owner.bearer)).expect(409);
+    expect(german(res.body, /female of|Mark it/)).toEqual([
+      'Dieses Tier kann nicht gelöscht werden: Es ist das Weibchen des Projekts „Frühjahr & "Zucht"“. Markiere es stattdessen als verkauft oder verstorben.',
+    ]);
+  });
+
+  it('2. a plausibility warning: the summary is the warning itself, in German', async () => {
+    const res = await sac({ layDate: '2025-01-01' }).expect(422);
+    const [summary, detail] = german(res.body, /successful pairing/);
+    expect(summary).toMatch(/^Am oder vor dem 2025-01-01 ist keine erfolgreiche Verpaarung eingetragen\./);
+    expect(detail).toBe(summary);
+  });
+
+  it('3. a sac’s band and pull window are refused with the shared rule’s sentence in German', async () => {
+    const band = await sac({ ...ANY_PAIRING, layDate: '2025-01-01', temperatureBand: { min: 29, max: 25 } }).expect(400);
+    expect(german(band.body, /lowest|highest/)).toEqual([
+      'Die niedrigste Temperatur (29 °C) muss unter der höchsten (25 °C) liegen.',
+      'Die niedrigste Temperatur (29 °C) muss unter der höchsten (25 °C) liegen.',
+    ]);
+    const humidity = await sac({ ...ANY_PAIRING, layDate: '2025-01-01', humidityBand: { min: 60, max: 120 } }).expect(400);
+    expect(german(humidity.body, /band lies|outside/)[0]).toBe('Ein Feuchtebereich liegt zwischen 0 und 100 %; 120 liegt außerhalb.');
+    const window = await sac({ ...ANY_PAIRING, layDate: '2025-01-01', pullFromDay: 30, pullToDay: 20 }).expect(400);
+    expect(german(window.body, /pull window/i)[0]).toBe(
+      'Ein Entnahmefenster muss am Tag seiner Öffnung oder danach schließen (öffnet Tag 30, schließt Tag 20).',
+    );
+  });
+
+  it('4. a CSV import says each line’s problem in German', async () => {
+    const text = [
+      'label,species,sex,acquiredFrom,colour',
+      `G-1,Not a spider,female,,`,
+      `G-2,Tliltocatl vagans,female,${'x'.repeat(201)},`,
+      'G-3,Tliltocatl vagans,female,,red',
+    ].join('\n');
+    const res = await de(
+      http()
+        .post('/api/animals/import')
+        .set('Authorization', owner.bearer)
+        .attach('file', Buffer.from(text, 'utf8'), { filename: 'a.csv', contentType: 'text/csv' }),
+    ).expect(400);
+    expect(german(res.body, /Nothing was imported|not a name|characters long|not a column/)).toEqual([
+      'Es wurde nichts importiert: 3 Zeilen haben Probleme. Korrigiere sie und importiere die Datei noch einmal.',
+      'species: „Not a spider“ ist kein Name im Katalog.',
+      'acquiredFrom: acquiredFrom darf höchstens 200 Zeichen lang sein.',
+      '„colour“ ist keine Spalte, die dieser Import kennt.',
+    ]);
+    expect(res.body.details.map((d: { field: string }) => d.field)).toEqual(['line 2', 'line 3', 'line 4']);
   });
 });

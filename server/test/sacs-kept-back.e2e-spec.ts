@@ -1,15 +1,7 @@
 import request from 'supertest';
 import Papa from 'papaparse';
 import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
-import {
-  PROVISIONAL_SHARES,
-  exactCountNeeded,
-  type BroodCountsResponse,
-  type KeptBackBatchResponse,
-  type SacResponse,
-  type SharesResponse,
-  wordsFor,
-} from '@broodsilk/shared';
+import { PROVISIONAL_SHARES, type BroodCountsResponse, type KeptBackBatchResponse, type SacResponse, type SharesResponse, wordsFor } from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper, type SignedIn } from './support/users';
 import { projectWithRoles } from './support/projects';
@@ -189,7 +181,9 @@ describe('shares from an estimated count', () => {
     const cashOut = { kind: 'cash-out', date: today, memberId: s.lenaId, count: 4 };
     const refused = await http().post(`/api/projects/${s.projectId}/entries`).set('Authorization', s.mira.bearer).send(cashOut).expect(409);
     const layDate = shares.sacs[0]!.layDate;
-    expect(refused.body.message).toBe(exactCountNeeded(layDate, 500));
+    expect(refused.body.message).toBe(
+      `The count of the sac laid ${layDate} is an estimate (about 500 young). Record an exact count first: a cash-out pays for a number of young, so it needs one.`,
+    );
     const balances = await http().get(`/api/projects/${s.projectId}/balances`).set('Authorization', s.mira.bearer).expect(200);
     expect(balances.body).toMatchObject({ settled: false, provisional: true });
     // Statements say "about" and provisional, in the CSV and the PDF.

@@ -119,9 +119,9 @@ export class EntriesService {
 }
 
 /** Who confirms: the party it is about, or the owner for a party without an account. */
-function assertConfirmer(access: ProjectAccess, userId: string, party: NonNullable<LedgerEntryRow['party']>, what: string): void {
+function assertConfirmer(access: ProjectAccess, userId: string, party: NonNullable<LedgerEntryRow['party']>, who: 'handOver' | 'payment' | 'young'): void {
   const mine = party.user ? party.user.id === userId : access.role === 'owner';
-  if (!mine) throw new ForbiddenException(`Only ${what} confirms this${party.user ? '' : ' (or the owner, for a party without an account)'}.`);
+  if (!mine) throw new ForbiddenException(refusal(`account.onlyConfirmer.${who}${party.user ? '' : 'OrOwner'}`));
 }
 
 function confirmationDraft(view: AccountView, access: ProjectAccess, userId: string, entryId: string, dto: ConfirmEntryRequest, today: string): EntryDraft {
@@ -131,7 +131,7 @@ function confirmationDraft(view: AccountView, access: ProjectAccess, userId: str
   assertNotFutureDate(date, today, 'confirmation');
   const inForce = new Set(view.balances.inForce);
   if (row.kind === 'hand-over') {
-    assertConfirmer(access, userId, row.party!, 'the party who received the hand-over');
+    assertConfirmer(access, userId, row.party!, 'handOver');
     if (!inForce.has(row.id)) throw new ConflictException(refusal('account.handOverReversed'));
     if (view.data.rows.some((r) => r.kind === 'arrival' && r.target?.id === row.id && inForce.has(r.id))) {
       throw new ConflictException(refusal('account.handOverConfirmed'));
@@ -147,7 +147,7 @@ function confirmationDraft(view: AccountView, access: ProjectAccess, userId: str
   if (row.kind === 'money' || row.kind === 'cash-out' || row.kind === 'sale') {
     const acceptor = acceptorOf(row, view.data.terms?.pricePerSpiderlingMinor ?? 0);
     if (!acceptor) throw new ConflictException(refusal(`account.alreadyCounts.${row.kind}`));
-    assertConfirmer(access, userId, acceptor, row.kind === 'money' ? 'the party who received the payment' : 'the party whose young these were');
+    assertConfirmer(access, userId, acceptor, row.kind === 'money' ? 'payment' : 'young');
     if (!view.pending.has(row.id)) throw new ConflictException(refusal(`account.alreadyCounts.${row.kind}`));
     if (view.data.rows.some((r) => r.kind === 'correction' && r.target?.id === row.id)) {
       throw new ConflictException(refusal(`account.reversedEntry.${row.kind}`));

@@ -1,10 +1,10 @@
 import { BadRequestException, ConflictException, ForbiddenException, NotFoundException } from '@nestjs/common';
-import { checkWithdrawal, exactCountNeeded, type CreateEntryRequest } from '@broodsilk/shared';
+import { checkWithdrawal, type CreateEntryRequest } from '@broodsilk/shared';
 import type { ProjectMember } from '../projects/project-member.entity';
 import type { ProjectAccess } from '../projects/project-access.service';
 import type { AccountView, SacShareState } from './account-view';
 import type { LedgerEntryRow } from './ledger-entry.entity';
-import { refusal } from '../common/refusal';
+import { fieldRefusal, refusal, type Refusal } from '../common/refusal';
 
 /** The checked parts of a new row; EntriesService turns them into an entity. */
 export type EntryDraft = Partial<
@@ -33,12 +33,12 @@ export type EntryDraft = Partial<
   target?: LedgerEntryRow;
 };
 
-const need = (value: unknown, message: string): void => {
-  if (value === undefined || value === null) throw new BadRequestException(message);
+const need = (value: unknown, why: Refusal): void => {
+  if (value === undefined || value === null) throw new BadRequestException(why);
 };
 
 function partyOf(view: AccountView, id: string | undefined, field: string): ProjectMember {
-  need(id, `${field} is required: say which party of the project this is about.`);
+  need(id, refusal('account.partyNeeded', { field }));
   const m = view.data.members.find((x) => x.id === id);
   if (!m) throw new BadRequestException(refusal('account.notParty', { field }));
   if (m.role === 'caretaker') throw new BadRequestException(refusal('account.caretakerNoShare', { name: view.nameOf(m.id) }));
@@ -59,7 +59,7 @@ function sacFor(view: AccountView, dto: CreateEntryRequest): SacShareState {
 
 /** Young out of a share: fits the sac's live count and what the party is still owed (409 saying by how much). */
 function withdrawal(view: AccountView, dto: CreateEntryRequest, party: ProjectMember): Pick<EntryDraft, 'sacId' | 'count'> {
-  need(dto.count, 'count is required: how many young.');
+  need(dto.count, refusal('account.countNeeded'));
   const sac = sacFor(view, dto);
   const count = dto.count!;
   if (count > sac.aliveInCare) {
@@ -70,7 +70,7 @@ function withdrawal(view: AccountView, dto: CreateEntryRequest, party: ProjectMe
     throw new ConflictException(refusal('account.noShare', { name: view.nameOf(party.id) }));
   }
   const check = checkWithdrawal(balance, count);
-  if (check.message) throw new ConflictException(`${view.nameOf(party.id)}: ${check.message}`);
+  if (check.message) throw new ConflictException(refusal('account.withdrawalExcess', { name: view.nameOf(party.id), ...check.values }));
   return { sacId: sac.fact.sacId, count };
 }
 
@@ -95,11 +95,11 @@ function assertMayRecord(view: AccountView, access: ProjectAccess, userId: strin
 }
 
 /** An entry records what has happened: its date is the recorder's today or earlier. */
-export function assertNotFutureDate(date: string, today: string, what: string): void {
+export function assertNotFutureDate(date: string, today: string, what: CreateEntryRequest['kind'] | 'confirmation'): void {
   if (date > today)
     throw new BadRequestException({
-      message: `The ${what} date ${date} is after today (${today} where you are); record it once it has happened.`,
-      details: [{ field: 'date', message: `The date ${date} is in the future.` }],
+      ...refusal(`account.futureDate.${what}`, { date, today }),
+      details: [fieldRefusal('date', 'account.futureDateField', { date })],
     });
 }
 
@@ -112,14 +112,14 @@ export function draftEntry(view: AccountView, access: ProjectAccess, userId: str
   }
   switch (dto.kind) {
     case 'hand-over': {
-      need(dto.method, 'method is required: pick-up or shipment.');
+      need(dto.method, refusal('account.methodNeeded'));
       if (dto.method === 'shipment' && (!dto.carrier || !dto.tracking)) throw new BadRequestException(refusal('account.shipmentNeeds'));
       if (dto.method === 'pick-up' && (dto.carrier || dto.tracking)) throw new BadRequestException(refusal('account.pickUpNoCarrier'));
       const party = partyOf(view, dto.memberId, 'memberId');
       return { ...base, party, method: dto.method, carrier: dto.carrier ?? null, tracking: dto.tracking ?? null, ...withdrawal(view, dto, party) };
     }
     case 'sale': {
-      need(dto.priceMinor, 'priceMinor is required: the total price in minor units (cents).');
+      need(dto.priceMinor, refusal('account.priceNeeded'));
       const party = partyOf(view, dto.memberId, 'memberId');
       return { ...base, party, priceMinor: dto.priceMinor, currency: currencyOf(view, dto.currency), ...withdrawal(view, dto, party) };
     }
@@ -128,19 +128,19 @@ export function draftEntry(view: AccountView, access: ProjectAccess, userId: str
       if (party.id === view.owner.id) throw new BadRequestException(refusal('account.ownerNoCashOut'));
       const out = withdrawal(view, dto, party);
       const sac = view.sacs.find((s) => s.fact.sacId === out.sacId)!;
-      if (sac.fact.estimated) throw new ConflictException(exactCountNeeded(sac.fact.layDate, sac.fact.aliveAtCount));
+      if (sac.fact.estimated) throw new ConflictException(refusal('account.exactCountNeeded', { layDate: sac.fact.layDate, alive: sac.fact.aliveAtCount }));
       return { ...base, party, pricePerSpiderlingMinor: dto.pricePerSpiderlingMinor ?? null, ...out };
     }
     case 'money': {
-      need(dto.amountMinor, 'amountMinor is required: the amount in minor units (cents).');
+      need(dto.amountMinor, refusal('account.amountNeeded'));
       const fromParty = partyOf(view, dto.fromMemberId, 'fromMemberId');
       const toParty = partyOf(view, dto.toMemberId, 'toMemberId');
       if (fromParty.id === toParty.id) throw new BadRequestException(refusal('account.paymentSameParty'));
       return { ...base, fromParty, toParty, amountMinor: dto.amountMinor, currency: currencyOf(view, dto.currency) };
     }
     case 'correction': {
-      need(dto.reversesId, 'reversesId is required: the entry this correction reverses.');
-      need(dto.reason, 'reason is required: say why the entry is reversed.');
+      need(dto.reversesId, refusal('account.reversesNeeded'));
+      need(dto.reason, refusal('account.reasonNeeded'));
       const target = view.data.rows.find((r) => r.id === dto.reversesId);
       if (!target) throw new NotFoundException(refusal('account.noSuchEntry'));
       if (target.kind === 'confirmation') throw new BadRequestException(refusal('account.confirmationAlone'));
@@ -156,14 +156,17 @@ export function draftEntry(view: AccountView, access: ProjectAccess, userId: str
 /** Reversing a correction brings its target back; a hand-over, sale or cash-out coming back must still fit the share. */
 function assertReinstatementFits(view: AccountView, correction: LedgerEntryRow): void {
   const back = correction.kind === 'correction' ? correction.target : null;
-  if (back) assertWithdrawalFits(view, back, `Reinstating that ${back.kind} would take too many young.`);
+  if (back) assertWithdrawalFits(view, back, 'reinstateExcess');
 }
 
+const WITHDRAWALS = ['hand-over', 'sale', 'cash-out'] as const;
+const isWithdrawal = (kind: string): kind is (typeof WITHDRAWALS)[number] => (WITHDRAWALS as readonly string[]).includes(kind);
+
 /** A withdrawal that starts to count (reinstated, or accepted by its party) must still fit the party's share. */
-export function assertWithdrawalFits(view: AccountView, row: LedgerEntryRow, lead = `This ${row.kind} no longer fits.`): void {
-  if (!['hand-over', 'sale', 'cash-out'].includes(row.kind) || !row.party) return;
+export function assertWithdrawalFits(view: AccountView, row: LedgerEntryRow, lead: 'reinstateExcess' | 'noLongerFits' = 'noLongerFits'): void {
+  if (!isWithdrawal(row.kind) || !row.party) return;
   const balance = view.balances.parties.find((p) => p.partyId === row.party!.id);
   if (!balance) return;
   const check = checkWithdrawal(balance, row.count!);
-  if (check.message) throw new ConflictException(`${lead} ${view.nameOf(row.party.id)}: ${check.message}`);
+  if (check.message) throw new ConflictException(refusal(`account.${lead}.${row.kind}`, { name: view.nameOf(row.party.id), ...check.values }));
 }

@@ -39,7 +39,7 @@ export class StatementsController {
 
   @Post(':memberId/email')
   @ProjectRoles('owner', 'partner')
-  @PerUserLimit({ what: 'statement e-mails', limit: STATEMENT_EMAILS_PER_HOUR, windowMinutes: 60 })
+  @PerUserLimit({ what: 'statementEmails', limit: STATEMENT_EMAILS_PER_HOUR, windowMinutes: 60 })
   email(@CurrentProject() a: ProjectAccess, @Param('memberId', RecordIdPipe) id: string): Promise<{ sentTo: string }> {
     return this.statements.email(a, id);
   }

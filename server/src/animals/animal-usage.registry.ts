@@ -1,8 +1,15 @@
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from '@mikro-orm/postgresql';
+import type { RefusalKey, RefusalValues } from '../common/refusal';
 
-/** Says why an animal cannot be deleted (e.g. "It is the female of project P-3."), or null when it is not used. */
-export type AnimalUsageCheck = (em: EntityManager, animalId: string) => Promise<string | null>;
+/** Why an animal cannot be deleted: a whole refusal sentence (`animal.femaleOfProject`) and its values. */
+export interface AnimalUsage {
+  key: Extract<RefusalKey, `animal.${string}`>;
+  values?: RefusalValues;
+}
+
+/** Says why an animal cannot be deleted, or null when it is not used. */
+export type AnimalUsageCheck = (em: EntityManager, animalId: string) => Promise<AnimalUsage | null>;
 
 /**
  * Other modules register here what makes an animal undeletable, so this module need not know them.
@@ -17,8 +24,8 @@ export class AnimalUsageRegistry {
     this.checks.push(check);
   }
 
-  async reasons(em: EntityManager, animalId: string): Promise<string[]> {
+  async reasons(em: EntityManager, animalId: string): Promise<AnimalUsage[]> {
     const found = await Promise.all(this.checks.map((c) => c(em, animalId)));
-    return found.filter((r): r is string => r !== null);
+    return found.filter((r): r is AnimalUsage => r !== null);
   }
 }

@@ -8,6 +8,7 @@ import { AnimalsCsvService } from './animals-csv.service';
 import { CSV_MAX_BYTES } from './animals-csv.columns';
 import { csvText } from './csv-text';
 import { PerUserLimit } from '../common/per-user-limit/per-user-limit';
+import { readerLanguage } from '../common/filters/reader-language';
 
 /** Registered before AnimalsController so `export.csv` is not taken for an animal id. */
 /** Each import is checked row by row against the catalogue; this many per keeper per hour covers fixing and retrying a file. */
@@ -26,9 +27,10 @@ export class AnimalsCsvController {
 
   @Post('import')
   @HttpCode(201)
-  @PerUserLimit({ what: 'CSV imports', limit: CSV_IMPORTS_PER_HOUR, windowMinutes: 60 })
+  @PerUserLimit({ what: 'csvImports', limit: CSV_IMPORTS_PER_HOUR, windowMinutes: 60 })
   @UseInterceptors(FileInterceptor('file', { limits: { fileSize: CSV_MAX_BYTES, files: 1 } }))
   async import(@CurrentUser() user: AuthUser, @Req() req: Request, @UploadedFile() file?: { buffer?: Buffer }): Promise<ImportResult> {
-    return this.csv.import(user, await csvText(req, file));
+    // Each line's problem is said here in the reader's language; the filter says the summary.
+    return this.csv.import(user, await csvText(req, file), readerLanguage(req));
   }
 }

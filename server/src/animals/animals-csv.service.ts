@@ -1,10 +1,10 @@
 import { BadRequestException, Injectable, PayloadTooLargeException } from '@nestjs/common';
 import { EntityManager } from '@mikro-orm/postgresql';
 import { plainToInstance } from 'class-transformer';
-import { validate, type ValidationError } from 'class-validator';
+import { validate } from 'class-validator';
 import { parse } from 'csv-parse/sync';
 import { stringify } from 'csv-stringify/sync';
-import type { FieldError, ImportResult } from '@broodsilk/shared';
+import type { FieldError, ImportResult, Language } from '@broodsilk/shared';
 import type { AuthUser } from '../common/auth-user';
 import { User } from '../users/user.entity';
 import { Species } from '../species/species.entity';
@@ -15,25 +15,42 @@ import { CreateAnimalDto } from './dto/create-animal.dto';
 import { resolveAnimalInput, type AnimalValues } from './animal-input';
 import { neutraliseCell, restoreCell } from '../common/csv/formula-cells';
 import { CSV_COLUMNS, CSV_FIELDS, CSV_MAX_BYTES, CSV_MAX_ROWS } from './animals-csv.columns';
-import { refusal } from '../common/refusal';
+import { refusal, say, type RefusalKey, type RefusalValues } from '../common/refusal';
+import { flatten } from '../common/filters/validation-exception.factory';
 
 interface ParsedRow {
   line: number;
   record: Record<string, string>;
 }
 
-function messages(errors: ValidationError[]): string[] {
-  return errors.flatMap((e) =>
-    Object.values(e.constraints ?? {}).map((m) =>
-      m.endsWith('should not exist') ? `"${e.property}" is not a column this import knows.` : `${e.property}: ${m}`,
-    ),
-  );
-}
+/**
+ * A refused line's problems, said in the reader's language here: the detail's field is the line
+ * ("line 5", which the client reads), so the column goes into the sentence and no key is left for
+ * the filter. A sentence without a key (a DTO's own) stays as written.
+ */
+class LineProblems {
+  readonly found: { line: number; message: string }[] = [];
+  constructor(private readonly lng: Language) {}
 
-function tooMany(errors: FieldError[]): BadRequestException {
-  const lines = [...new Set(errors.map((e) => e.field))];
-  const summary = lines.length === 1 ? refusal('csv.problemsOne', { line: lines[0] }) : refusal('csv.problemsMany', { count: lines.length });
-  return new BadRequestException({ ...summary, details: errors });
+  /** A problem in one column of the line. */
+  add(line: number, column: string, key: RefusalKey, values?: RefusalValues): void {
+    this.addFields(line, [{ field: column, ...refusal(key, values) }]);
+  }
+
+  /** Field errors of one line (class-validator's, keyed by the validation factory, or the animal rules'), each with its column. */
+  addFields(line: number, errors: FieldError[]): void {
+    for (const e of errors) {
+      const said = (key: string, values?: FieldError['values']) => this.found.push({ line, message: say(this.lng, key, values) });
+      if (e.key === 'refusal.field.notAccepted') said('refusal.csv.unknownColumn', { column: e.field });
+      else said('refusal.csv.inColumn', { column: e.field, problem: e.key ? say(this.lng, e.key, e.values) : e.message });
+    }
+  }
+
+  refusal(): BadRequestException {
+    const lines = [...new Set(this.found.map((e) => e.line))];
+    const summary = lines.length === 1 ? refusal('csv.problemsOne', { line: lines[0]! }) : refusal('csv.problemsMany', { count: lines.length });
+    return new BadRequestException({ ...summary, details: this.found.map((e) => ({ field: `line ${e.line}`, message: e.message })) });
+  }
 }
 
 @Injectable()
@@ -64,42 +81,41 @@ export class AnimalsCsvService {
   }
 
   /** Checks every row like the create route does, then imports all of them in one transaction, or none. */
-  async import(viewer: AuthUser, text: string): Promise<ImportResult> {
+  async import(viewer: AuthUser, text: string, lng: Language): Promise<ImportResult> {
     if (Buffer.byteLength(text) > CSV_MAX_BYTES) throw new PayloadTooLargeException(refusal('csv.tooLarge'));
     const rows = this.parse(text);
     const today = this.animals.today(viewer);
-    const errors: FieldError[] = [];
+    const problems = new LineProblems(lng);
     const ready: AnimalValues[] = [];
     const labels = new Map<string, number>();
     const speciesByName = await this.speciesNames();
 
     for (const { line, record } of rows) {
-      const at = `line ${line}`;
       const plain: Record<string, string> = {};
       let speciesReported = false;
       for (const [k, v] of Object.entries(record)) if (v !== '' && k !== 'lastMoltOn') plain[k] = v;
       if (plain.species !== undefined) {
         const id = speciesByName.get(plain.species.trim().toLowerCase());
         speciesReported = !id || (plain.speciesId !== undefined && plain.speciesId !== id);
-        if (!id) errors.push({ field: at, message: `species: "${plain.species}" is not a name in the catalogue.` });
-        else if (speciesReported) errors.push({ field: at, message: `species: "${plain.species}" and speciesId name different species.` });
+        if (!id) problems.add(line, 'species', 'csv.unknownSpecies', { species: plain.species });
+        else if (speciesReported) problems.add(line, 'species', 'csv.speciesMismatch', { species: plain.species });
         else plain.speciesId = id;
         delete plain.species;
       }
       const dto = plainToInstance(CreateAnimalDto, plain);
       const invalid = (await validate(dto, { whitelist: true, forbidNonWhitelisted: true })).filter((e) => !(speciesReported && e.property === 'speciesId'));
       if (invalid.length || speciesReported) {
-        errors.push(...messages(invalid).map((m) => ({ field: at, message: m })));
+        problems.addFields(line, flatten(invalid));
         continue;
       }
       const { errors: ruleErrors, values } = await resolveAnimalInput(this.em, viewer, dto, null, today);
       const first = labels.get(dto.label);
-      if (first !== undefined) ruleErrors.push({ field: 'label', message: `The label "${dto.label}" is also on line ${first}.` });
-      labels.set(dto.label, line);
-      if (ruleErrors.length) errors.push(...ruleErrors.map((e) => ({ field: at, message: `${e.field}: ${e.message}` })));
-      else ready.push(values);
+      labels.set(dto.label, first ?? line);
+      problems.addFields(line, ruleErrors);
+      if (first !== undefined) problems.add(line, 'label', 'csv.labelRepeated', { label: dto.label, first });
+      if (!ruleErrors.length && first === undefined) ready.push(values);
     }
-    if (errors.length) throw tooMany(errors);
+    if (problems.found.length) throw problems.refusal();
     if (!ready.length) throw new BadRequestException(refusal('csv.noAnimals'));
 
     await this.em.transactional(async (tx) => {

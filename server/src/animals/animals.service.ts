@@ -165,8 +165,9 @@ export class AnimalsService {
   /** Only for mistakes: a sold or dead animal keeps its record (set its status instead). */
   async remove(viewer: AuthUser, id: string): Promise<void> {
     const animal = await this.own(viewer, id);
-    const reasons = await this.usage.reasons(this.em, id);
-    if (reasons.length) throw new ConflictException(refusal('animal.notDeletable', { reasons: reasons.join(' ') }));
+    // Each reason is a whole sentence; the first one is enough to say why.
+    const [used] = await this.usage.reasons(this.em, id);
+    if (used) throw new ConflictException(refusal(used.key, used.values));
     try {
       await this.em.remove(animal).flush();
     } catch (e) {

@@ -13,7 +13,7 @@ export class ExportController {
 
   /** All of the signed-in keeper's data as one zip, streamed (its length is not known in advance). */
   @Get()
-  @PerUserLimit({ what: 'data exports', limit: EXPORTS_PER_HOUR, windowMinutes: 60 })
+  @PerUserLimit({ what: 'dataExports', limit: EXPORTS_PER_HOUR, windowMinutes: 60 })
   async download(@CurrentUser() user: AuthUser): Promise<StreamableFile> {
     const day = new Date().toISOString().slice(0, 10);
     return new StreamableFile(await this.exports.archive(user.id), {

@@ -11,12 +11,10 @@ export function acceptWarnings(found: readonly PlausibilityWarning[], request: A
   if (!found.length) return null;
   const open = unacknowledged(found, request.acknowledgedWarnings);
   if (open.length) {
-    throw new UnprocessableEntityException({
-      ...(open.length === 1
-        ? { message: open[0]!.message }
-        : refusal('plausibility.checkMany', { count: open.length, list: open.map((w) => w.message).join(' ') })),
-      details: open.map((w) => ({ field: WARNINGS_FIELD, code: w.code, message: w.message, key: w.key, values: w.values })),
-    });
+    const details = open.map((w) => ({ field: WARNINGS_FIELD, code: w.code, message: w.message, key: w.key, values: w.values }));
+    // Several warnings: the summary counts them and the details say each, so no sentence is quoted into another.
+    const summary = details.length === 1 ? details[0]! : refusal('plausibility.checkMany', { count: details.length });
+    throw new UnprocessableEntityException({ message: summary.message, key: summary.key, values: summary.values, details });
   }
   const reason = request.warningReason?.trim();
   if (!reason) {

@@ -10,7 +10,7 @@ import { ProgressLinksService } from './progress-links.service';
 import { RecordIdPipe } from '../common/pipes/record-id.pipe';
 
 /** Reads of progress pages and their photos per network address per 15 minutes (a page shows a few photos). */
-export const PROGRESS_READS = { what: 'progress page reads', limit: 600, windowMinutes: 15 };
+export const PROGRESS_READS = { what: 'progressReads', limit: 600, windowMinutes: 15 } as const;
 
 @Controller('projects/:projectId/members/:memberId/progress-links')
 export class MemberProgressLinksController {

@@ -69,9 +69,9 @@ export class ProjectsModule implements OnModuleInit {
     // An animal in a project keeps its record; the FK (restrict) is the safety net.
     this.usage.register(async (em, animalId) => {
       const p = await em.findOne(Project, { $or: [{ female: animalId }, { male: animalId }] }, { fields: ['title', 'female'] });
-      if (p) return `It is the ${p.female.id === animalId ? 'female' : 'male'} of the project "${p.title}".`;
+      if (p) return { key: p.female.id === animalId ? 'animal.femaleOfProject' : 'animal.maleOfProject', values: { project: p.title } };
       const paired = await em.findOne(Pairing, { male: animalId }, { populate: ['project'] });
-      return paired ? `It is a male paired in the project "${paired.project.title}".` : null;
+      return paired ? { key: 'animal.pairedInProject', values: { project: paired.project.title } } : null;
     });
   }
 }

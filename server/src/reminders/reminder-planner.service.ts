@@ -1,6 +1,7 @@
 import { Injectable, Logger, type OnApplicationBootstrap, type OnModuleInit } from '@nestjs/common';
 import { EntityManager, MikroORM } from '@mikro-orm/postgresql';
 import type { EventSubscriber, FlushEventArgs } from '@mikro-orm/core';
+import type { CareLogKind } from '@broodsilk/shared';
 import { JobsService } from '../jobs/jobs.service';
 import { Clock } from '../common/clock';
 import { Sac } from '../sacs/sac.entity';
@@ -43,6 +44,12 @@ interface Changed {
  * plan is made afresh and its jobs are scheduled (`startAfter`, one singleton key per reminder
  * and instant) or cancelled, in the same transaction as the write.
  */
+/**
+ * Care-log entries a sac's reminders depend on: its latest roll and readings (sacFactsOf), and a
+ * strike that may take one back. A check or a note changes no plan, so it costs no replanning.
+ */
+const PLAN_CHANGING_LOG_KINDS: ReadonlySet<CareLogKind> = new Set(['roll', 'temperature', 'humidity', 'stage', 'strike']);
+
 @Injectable()
 export class ReminderPlanner implements OnModuleInit, OnApplicationBootstrap, EventSubscriber {
   private readonly logger = new Logger(ReminderPlanner.name);
@@ -91,7 +98,7 @@ export class ReminderPlanner implements OnModuleInit, OnApplicationBootstrap, Ev
     for (const cs of uow.getChangeSets()) {
       const e = cs.entity as object;
       if (e instanceof Sac) changed.sacs.add(e.id);
-      else if (e instanceof SacLogEntry) changed.sacs.add(e.sac.id);
+      else if (e instanceof SacLogEntry && PLAN_CHANGING_LOG_KINDS.has(e.kind)) changed.sacs.add(e.sac.id);
       else if (e instanceof Animal) changed.animals.add(e.id);
       else if (e instanceof Molt) changed.animals.add(e.animal.id);
       else if (e instanceof Project && cs.type === 'update') changed.projects.add(e.id);

@@ -1,4 +1,4 @@
-import { LOG_FUTURE_TOLERANCE_MS, assertPullWindow, bandProblem, todayIn, type Range } from '@broodsilk/shared';
+import { LOG_FUTURE_TOLERANCE_MS, bandProblem, pullWindowProblem, todayIn, type Range } from '@broodsilk/shared';
 import { fieldError } from '../common/field-errors';
 import { refusal, type RefusalKey } from '../common/refusal';
 
@@ -31,13 +31,8 @@ export function assertSacDates(s: SacDates, timeZone: string, now: Date): void {
   if ((s.pullFromDay == null) !== (s.pullToDay == null)) {
     throw fieldError(s.pullFromDay == null ? 'pullFromDay' : 'pullToDay', refusal('sac.pullDaysBoth'));
   }
-  if (s.pullFromDay != null && s.pullToDay != null) {
-    try {
-      assertPullWindow({ fromDay: s.pullFromDay, toDay: s.pullToDay });
-    } catch (e) {
-      throw fieldError('pullToDay', { message: (e as Error).message }); // a shared rule's sentence
-    }
-  }
+  const window = s.pullFromDay != null && s.pullToDay != null && pullWindowProblem({ fromDay: s.pullFromDay, toDay: s.pullToDay });
+  if (window) throw fieldError('pullToDay', window); // a shared rule's keyed sentence
 }
 
 export interface SacChoices {
@@ -53,7 +48,7 @@ export function assertSacChoices(c: SacChoices): void {
     throw fieldError('leftWithMother', refusal('sac.pulledNotWithMother'));
   }
   const t = c.temperatureBand && bandProblem('temperature', c.temperatureBand);
-  if (t) throw fieldError('temperatureBand', { message: t }); // shared rules' sentences
+  if (t) throw fieldError('temperatureBand', t); // shared rules' keyed sentences
   const h = c.humidityBand && bandProblem('humidity', c.humidityBand);
-  if (h) throw fieldError('humidityBand', { message: h });
+  if (h) throw fieldError('humidityBand', h);
 }

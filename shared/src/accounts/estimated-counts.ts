@@ -12,10 +12,6 @@ export const countWords = (n: number, estimated: boolean): string => (estimated 
 /** Said once wherever shares rest on an estimated count. */
 export const PROVISIONAL_SHARES = wordsFor('en')('shares.provisional');
 
-/** What a cash-out or settling needs and an estimated count cannot give. */
-export const exactCountNeeded = (layDate: string, alive: number): string =>
-  `The count of the sac laid ${layDate} is an estimate (about ${alive} young). Record an exact count first: a cash-out pays for a number of young, so it needs one.`;
-
 /** A sac's count line on a statement or the shares page. */
 export function sacCountLine(s: { layDate: string; outcome: string; count: number; estimated: boolean }): string {
   const counted = `Sac laid ${s.layDate} (${s.outcome}): ${countWords(s.count, s.estimated)} young counted`;

@@ -1,4 +1,5 @@
 import { addDays, dayNumber, type CalendarDate } from './calendar-day.js';
+import { ruleText, type RuleText } from '../errors/rule-text.js';
 
 /** Days after the lay date (day 0) in which a sac should be pulled; both ends inclusive. */
 export interface PullWindow {
@@ -33,18 +34,19 @@ export interface PullWindowView extends PullWindowDates {
   daysPastClose: number;
 }
 
-/** Throws a RangeError with a readable message unless the window is usable. */
-export function assertPullWindow(window: PullWindow): void {
+/** Why a window is not usable (a keyed sentence), or null when it is. */
+export function pullWindowProblem(window: PullWindow): RuleText | null {
   const { fromDay, toDay } = window;
-  if (!Number.isInteger(fromDay) || !Number.isInteger(toDay)) {
-    throw new RangeError(`Pull window days must be whole numbers (got day ${fromDay} to day ${toDay}).`);
-  }
-  if (fromDay < 0) {
-    throw new RangeError(`A pull window cannot open before the lay date (day 0); it opens on day ${fromDay}.`);
-  }
-  if (toDay < fromDay) {
-    throw new RangeError(`A pull window must close on or after the day it opens (opens day ${fromDay}, closes day ${toDay}).`);
-  }
+  if (!Number.isInteger(fromDay) || !Number.isInteger(toDay)) return ruleText('pullWindow.wholeDays', { fromDay, toDay });
+  if (fromDay < 0) return ruleText('pullWindow.beforeLaid', { fromDay });
+  if (toDay < fromDay) return ruleText('pullWindow.closesBeforeOpens', { fromDay, toDay });
+  return null;
+}
+
+/** Throws a RangeError with the English sentence of `pullWindowProblem` unless the window is usable. */
+export function assertPullWindow(window: PullWindow): void {
+  const problem = pullWindowProblem(window);
+  if (problem) throw new RangeError(problem.message);
 }
 
 function closingFromDay(window: PullWindow): number {

@@ -29,6 +29,11 @@ const SAMPLES: Record<string, string | number> = {
   sold: 0,
   cashedOut: 0,
   counted: 2,
+  lo: 24,
+  hi: 28,
+  value: 80,
+  fromDay: 21,
+  toDay: 45,
   count: 5, // plural sentences are said with 1 and 5 below
 };
 

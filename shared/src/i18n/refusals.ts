@@ -46,6 +46,19 @@ export const refusalsEn = {
     aboveLastJoined:
       '{{previous}} were alive at the last count on {{on}}, and {{joined}} kept-back young joined the brood since ({{ceiling}} in all); {{alive}} is more than that. Young are not added between counts: correct the earlier count if it was wrong.',
   },
+  /** A sac's incubation band (`bandProblem`). */
+  band: {
+    temperatureOutside: 'A temperature band lies between {{lo}} and {{hi}} °C; {{value}} is outside.',
+    humidityOutside: 'A humidity band lies between {{lo}} and {{hi}} %; {{value}} is outside.',
+    temperatureUpsideDown: 'The lowest temperature ({{lo}} °C) must be below the highest ({{hi}} °C).',
+    humidityUpsideDown: 'The lowest humidity ({{lo}} %) must be below the highest ({{hi}} %).',
+  },
+  /** A sac's own pull window (`pullWindowProblem`), in days after the lay date. */
+  pullWindow: {
+    wholeDays: 'Pull window days must be whole numbers (got day {{fromDay}} to day {{toDay}}).',
+    beforeLaid: 'A pull window cannot open before the lay date (day 0); it opens on day {{fromDay}}.',
+    closesBeforeOpens: 'A pull window must close on or after the day it opens (opens day {{fromDay}}, closes day {{toDay}}).',
+  },
   withdrawal: {
     excess:
       'This is {{excess}} more than the {{available}} young still owed to this party (share {{share}}; {{handedOver}} handed over, {{sold}} sold, {{cashedOut}} cashed out).',
@@ -109,6 +122,17 @@ export const refusalsDe: Widen<typeof refusalsEn> = {
       'Bei der letzten Zählung am {{on}} lebten {{previous}}; {{alive}} sind mehr. Zwischen zwei Zählungen kommen keine Jungtiere hinzu: korrigiere die frühere Zählung, wenn sie falsch war.',
     aboveLastJoined:
       'Bei der letzten Zählung am {{on}} lebten {{previous}}, und seitdem kamen {{joined}} zurückbehaltene Jungtiere zur Brut ({{ceiling}} insgesamt); {{alive}} sind mehr. Zwischen zwei Zählungen kommen keine Jungtiere hinzu: korrigiere die frühere Zählung, wenn sie falsch war.',
+  },
+  band: {
+    temperatureOutside: 'Ein Temperaturbereich liegt zwischen {{lo}} und {{hi}} °C; {{value}} liegt außerhalb.',
+    humidityOutside: 'Ein Feuchtebereich liegt zwischen {{lo}} und {{hi}} %; {{value}} liegt außerhalb.',
+    temperatureUpsideDown: 'Die niedrigste Temperatur ({{lo}} °C) muss unter der höchsten ({{hi}} °C) liegen.',
+    humidityUpsideDown: 'Die niedrigste Feuchte ({{lo}} %) muss unter der höchsten ({{hi}} %) liegen.',
+  },
+  pullWindow: {
+    wholeDays: 'Die Tage des Entnahmefensters müssen ganze Zahlen sein (angegeben: Tag {{fromDay}} bis Tag {{toDay}}).',
+    beforeLaid: 'Ein Entnahmefenster kann nicht vor dem Legetag (Tag 0) öffnen; es öffnet an Tag {{fromDay}}.',
+    closesBeforeOpens: 'Ein Entnahmefenster muss am Tag seiner Öffnung oder danach schließen (öffnet Tag {{fromDay}}, schließt Tag {{toDay}}).',
   },
   withdrawal: {
     excess:

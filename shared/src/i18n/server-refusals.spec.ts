@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { createWords, LANGUAGES, wordsOf } from './words.js';
 import { serverRefusalsDe, serverRefusalsEn } from './server-refusals.js';
+import { refusalsEn } from './refusals.js';
 
 /** Every leaf of the `refusal` section as [key path, English text]; plural forms stay separate keys. */
 function leaves(node: object, prefix = 'refusal'): [string, string][] {
@@ -21,10 +22,17 @@ const SAMPLES: Record<string, string | number> = {
   channels: 'email, off',
 };
 
+/** A sentence with the rule sentences it nests (`$t(rule.withdrawal.excess)`) written out, so their values get samples too. */
+const withNested = (text: string) =>
+  text.replace(
+    /\$t\(rule\.([\w.]+)\)/g,
+    (_, path: string) => path.split('.').reduce<unknown>((o, k) => (o as Record<string, unknown>)[k], refusalsEn) as string,
+  );
+
 /** A sample value per placeholder: a count picks the plural form its key names, a known name its sample, anything else a marked word. */
 function sampleValues(key: string, text: string): Record<string, string | number> {
   const count = key.endsWith('_one') ? 1 : 2;
-  const values = Object.fromEntries(placeholders(text).map((p) => [p, p === 'count' || p === 'minutes' ? count : (SAMPLES[p] ?? `‹${p}›`)]));
+  const values = Object.fromEntries(placeholders(withNested(text)).map((p) => [p, p === 'count' || p === 'minutes' ? count : (SAMPLES[p] ?? `‹${p}›`)]));
   // i18next picks a plural form by `count` (Intl.PluralRules), whether or not the sentence shows it.
   return PLURAL.test(key) ? { ...values, count } : values;
 }

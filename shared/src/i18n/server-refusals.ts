@@ -216,7 +216,10 @@ export const serverRefusalsEn = {
   animal: {
     notFound: 'There is no such animal in your collection.',
     onlyRecorder: 'Only the keeper who keeps this animal’s record may change it or read its logs.',
-    notDeletable: 'This animal cannot be deleted: {{reasons}} Mark it sold or deceased instead.',
+    /** Why an animal cannot be deleted (`AnimalUsageRegistry`); a project's title is typed text. */
+    femaleOfProject: 'This animal cannot be deleted: it is the female of the project "{{project}}". Mark it sold or deceased instead.',
+    maleOfProject: 'This animal cannot be deleted: it is the male of the project "{{project}}". Mark it sold or deceased instead.',
+    pairedInProject: 'This animal cannot be deleted: it is a male paired in the project "{{project}}". Mark it sold or deceased instead.',
     inProject: 'This animal is part of a breeding project, so it cannot be deleted. Mark it sold or deceased instead.',
     noneWaiting: 'There is no animal waiting for you to accept it.',
     futurePremolt: 'The premolt date {{on}} is in the future.',
@@ -248,7 +251,7 @@ export const serverRefusalsEn = {
     alreadyCorrected: 'That entry has already been corrected.',
   },
   csv: {
-    problemsOne: 'Nothing was imported: {{line}} has a problem. Correct them and import the file again.',
+    problemsOne: 'Nothing was imported: line {{line}} has a problem. Correct it and import the file again.',
     problemsMany: 'Nothing was imported: {{count}} lines have problems. Correct them and import the file again.',
     tooLarge: 'The file is larger than 5 MB; import it in parts.',
     noAnimals: 'The file has a header but no animals.',
@@ -257,6 +260,12 @@ export const serverRefusalsEn = {
     tooManyRows: 'A file can hold at most {{max}} animals; import it in parts.',
     howToSend: 'Send the CSV as the form field "file", or as the body with Content-Type text/csv.',
     notUtf8: 'The file is not UTF-8 text. Save it as "CSV UTF-8" and try again.',
+    /** One refused line's problem, in the column it concerns (`details`, field "line 5"). */
+    inColumn: '{{column}}: {{problem}}',
+    unknownColumn: '"{{column}}" is not a column this import knows.',
+    unknownSpecies: '"{{species}}" is not a name in the catalogue.',
+    speciesMismatch: '"{{species}}" and speciesId name different species.',
+    labelRepeated: 'The label "{{label}}" is also on line {{first}}.',
   },
   auth: {
     wrongCredentials: 'The e-mail or password is not right.',
@@ -318,7 +327,7 @@ export const serverRefusalsEn = {
     lifespan: 'mature-male lifespan',
   },
   plausibility: {
-    checkMany: 'Please check {{count}} things before saving: {{list}}',
+    checkMany: 'Please check these {{count}} things before saving; each is listed below.',
     reasonNeeded: 'Say briefly why the unusual value is right (warningReason); it is kept with the record.',
     reasonNeededField: 'Say briefly why the unusual value is right.',
   },
@@ -388,6 +397,55 @@ export const serverRefusalsEn = {
       'cash-out': 'This cash-out was reversed by a correction; there is nothing to confirm.',
       sale: 'This sale was reversed by a correction; there is nothing to confirm.',
     },
+    partyNeeded: '{{field}} is required: say which party of the project this is about.',
+    countNeeded: 'count is required: how many young.',
+    methodNeeded: 'method is required: pick-up or shipment.',
+    priceNeeded: 'priceMinor is required: the total price in minor units (cents).',
+    amountNeeded: 'amountMinor is required: the amount in minor units (cents).',
+    reversesNeeded: 'reversesId is required: the entry this correction reverses.',
+    reasonNeeded: 'reason is required: say why the entry is reversed.',
+    exactCountNeeded:
+      'The count of the sac laid {{layDate}} is an estimate (about {{alive}} young). Record an exact count first: a cash-out pays for a number of young, so it needs one.',
+    futureDateField: 'The date {{date}} is in the future.',
+    futureDate: {
+      'hand-over': 'The hand-over date {{date}} is after today ({{today}} where you are); record it once it has happened.',
+      sale: 'The sale date {{date}} is after today ({{today}} where you are); record it once it has happened.',
+      'cash-out': 'The cash-out date {{date}} is after today ({{today}} where you are); record it once it has happened.',
+      money: 'The payment date {{date}} is after today ({{today}} where you are); record it once it has happened.',
+      correction: 'The correction date {{date}} is after today ({{today}} where you are); record it once it has happened.',
+      confirmation: 'The confirmation date {{date}} is after today ({{today}} where you are); record it once it has happened.',
+    },
+    /** Who confirms an entry; `…OrOwner` where the party has no account, so the owner may confirm for them. */
+    onlyConfirmer: {
+      handOver: 'Only the party who received the hand-over confirms this.',
+      handOverOrOwner: 'Only the party who received the hand-over confirms this (or the owner, for a party without an account).',
+      payment: 'Only the party who received the payment confirms this.',
+      paymentOrOwner: 'Only the party who received the payment confirms this (or the owner, for a party without an account).',
+      young: 'Only the party whose young these were confirms this.',
+      youngOrOwner: 'Only the party whose young these were confirms this (or the owner, for a party without an account).',
+    },
+    /** A withdrawal beyond a party's share: the shared rule's sentence (`rule.withdrawal.excess`) after the party's name. */
+    withdrawalExcess: '{{name}}: $t(rule.withdrawal.excess)',
+    reinstateExcess: {
+      'hand-over': 'Reinstating that hand-over would take too many young. {{name}}: $t(rule.withdrawal.excess)',
+      sale: 'Reinstating that sale would take too many young. {{name}}: $t(rule.withdrawal.excess)',
+      'cash-out': 'Reinstating that cash-out would take too many young. {{name}}: $t(rule.withdrawal.excess)',
+    },
+    noLongerFits: {
+      'hand-over': 'This hand-over no longer fits. {{name}}: $t(rule.withdrawal.excess)',
+      sale: 'This sale no longer fits. {{name}}: $t(rule.withdrawal.excess)',
+      'cash-out': 'This cash-out no longer fits. {{name}}: $t(rule.withdrawal.excess)',
+    },
+  },
+  /** What a rate limit counts, in the limit sentences (`common.userLimit`: "the limit of 10 invitations"). */
+  limitedWork: {
+    invitations: 'invitations',
+    statementEmails: 'statement e-mails',
+    dataExports: 'data exports',
+    csvImports: 'CSV imports',
+    photoUploads: 'photo uploads',
+    recoveryCodeRenewals: 'recovery code renewals',
+    progressReads: 'progress page reads',
   },
 } as const;
 
@@ -606,7 +664,12 @@ export const serverRefusalsDe: Widen<typeof serverRefusalsEn> = {
   animal: {
     notFound: 'Dieses Tier gibt es in deiner Sammlung nicht.',
     onlyRecorder: 'Nur der Halter, der den Eintrag dieses Tiers führt, darf ihn ändern oder seine Protokolle lesen.',
-    notDeletable: 'Dieses Tier kann nicht gelöscht werden: {{reasons}} Markiere es stattdessen als verkauft oder verstorben.',
+    femaleOfProject:
+      'Dieses Tier kann nicht gelöscht werden: Es ist das Weibchen des Projekts „{{project}}“. Markiere es stattdessen als verkauft oder verstorben.',
+    maleOfProject:
+      'Dieses Tier kann nicht gelöscht werden: Es ist das Männchen des Projekts „{{project}}“. Markiere es stattdessen als verkauft oder verstorben.',
+    pairedInProject:
+      'Dieses Tier kann nicht gelöscht werden: Es ist ein Männchen, das im Projekt „{{project}}“ verpaart wurde. Markiere es stattdessen als verkauft oder verstorben.',
     inProject: 'Dieses Tier gehört zu einem Zuchtprojekt und kann deshalb nicht gelöscht werden. Markiere es stattdessen als verkauft oder verstorben.',
     noneWaiting: 'Es wartet kein Tier darauf, dass du es annimmst.',
     futurePremolt: 'Das Datum der Prämolt {{on}} liegt in der Zukunft.',
@@ -638,7 +701,7 @@ export const serverRefusalsDe: Widen<typeof serverRefusalsEn> = {
     alreadyCorrected: 'Dieser Eintrag wurde schon korrigiert.',
   },
   csv: {
-    problemsOne: 'Es wurde nichts importiert: {{line}} hat ein Problem. Korrigiere es und importiere die Datei noch einmal.',
+    problemsOne: 'Es wurde nichts importiert: Zeile {{line}} hat ein Problem. Korrigiere es und importiere die Datei noch einmal.',
     problemsMany: 'Es wurde nichts importiert: {{count}} Zeilen haben Probleme. Korrigiere sie und importiere die Datei noch einmal.',
     tooLarge: 'Die Datei ist größer als 5 MB; importiere sie in Teilen.',
     noAnimals: 'Die Datei hat eine Kopfzeile, aber keine Tiere.',
@@ -647,6 +710,11 @@ export const serverRefusalsDe: Widen<typeof serverRefusalsEn> = {
     tooManyRows: 'Eine Datei kann höchstens {{max}} Tiere enthalten; importiere sie in Teilen.',
     howToSend: 'Schick die CSV als Formularfeld „file“ oder als Inhalt mit Content-Type text/csv.',
     notUtf8: 'Die Datei ist kein UTF-8-Text. Speichere sie als „CSV UTF-8“ und versuch es noch einmal.',
+    inColumn: '{{column}}: {{problem}}',
+    unknownColumn: '„{{column}}“ ist keine Spalte, die dieser Import kennt.',
+    unknownSpecies: '„{{species}}“ ist kein Name im Katalog.',
+    speciesMismatch: '„{{species}}“ und speciesId nennen verschiedene Arten.',
+    labelRepeated: 'Die Bezeichnung „{{label}}“ steht auch in Zeile {{first}}.',
   },
   auth: {
     wrongCredentials: 'E-Mail oder Passwort stimmen nicht.',
@@ -709,7 +777,7 @@ export const serverRefusalsDe: Widen<typeof serverRefusalsEn> = {
     lifespan: 'Lebensspanne adulter Männchen',
   },
   plausibility: {
-    checkMany: 'Bitte prüfe vor dem Speichern {{count}} Dinge: {{list}}',
+    checkMany: 'Bitte prüfe vor dem Speichern diese {{count}} Dinge; jedes steht unten.',
     reasonNeeded: 'Sag kurz, warum der ungewöhnliche Wert stimmt (warningReason); das wird mit dem Eintrag aufbewahrt.',
     reasonNeededField: 'Sag kurz, warum der ungewöhnliche Wert stimmt.',
   },
@@ -781,5 +849,52 @@ export const serverRefusalsDe: Widen<typeof serverRefusalsEn> = {
       'cash-out': 'Diese Auszahlung wurde durch eine Korrektur aufgehoben; es gibt nichts zu bestätigen.',
       sale: 'Dieser Verkauf wurde durch eine Korrektur aufgehoben; es gibt nichts zu bestätigen.',
     },
+    partyNeeded: '{{field}} fehlt: Sag, um welche Partei des Projekts es geht.',
+    countNeeded: 'count fehlt: Wie viele Junge?',
+    methodNeeded: 'method fehlt: Abholung (pick-up) oder Versand (shipment).',
+    priceNeeded: 'priceMinor fehlt: der Gesamtpreis in der kleinsten Währungseinheit (Cent).',
+    amountNeeded: 'amountMinor fehlt: der Betrag in der kleinsten Währungseinheit (Cent).',
+    reversesNeeded: 'reversesId fehlt: der Eintrag, den diese Korrektur aufhebt.',
+    reasonNeeded: 'reason fehlt: Sag, warum der Eintrag aufgehoben wird.',
+    exactCountNeeded:
+      'Die Zahl des Kokons vom {{layDate}} ist geschätzt (etwa {{alive}} Junge). Trag zuerst eine genaue Zählung ein: Eine Auszahlung bezahlt eine Anzahl Junge und braucht deshalb eine.',
+    futureDateField: 'Das Datum {{date}} liegt in der Zukunft.',
+    futureDate: {
+      'hand-over': 'Das Datum der Übergabe {{date}} liegt nach heute ({{today}} bei dir); trag sie ein, wenn sie geschehen ist.',
+      sale: 'Das Datum des Verkaufs {{date}} liegt nach heute ({{today}} bei dir); trag ihn ein, wenn er geschehen ist.',
+      'cash-out': 'Das Datum der Auszahlung {{date}} liegt nach heute ({{today}} bei dir); trag sie ein, wenn sie geschehen ist.',
+      money: 'Das Datum der Zahlung {{date}} liegt nach heute ({{today}} bei dir); trag sie ein, wenn sie geschehen ist.',
+      correction: 'Das Datum der Korrektur {{date}} liegt nach heute ({{today}} bei dir); trag sie ein, wenn sie geschehen ist.',
+      confirmation: 'Das Datum der Bestätigung {{date}} liegt nach heute ({{today}} bei dir); trag sie ein, wenn sie geschehen ist.',
+    },
+    onlyConfirmer: {
+      handOver: 'Das bestätigt nur die Partei, die die Übergabe erhalten hat.',
+      handOverOrOwner: 'Das bestätigt nur die Partei, die die Übergabe erhalten hat (oder der Halter, wenn die Partei kein Konto hat).',
+      payment: 'Das bestätigt nur die Partei, die die Zahlung erhalten hat.',
+      paymentOrOwner: 'Das bestätigt nur die Partei, die die Zahlung erhalten hat (oder der Halter, wenn die Partei kein Konto hat).',
+      young: 'Das bestätigt nur die Partei, der diese Jungen gehörten.',
+      youngOrOwner: 'Das bestätigt nur die Partei, der diese Jungen gehörten (oder der Halter, wenn die Partei kein Konto hat).',
+    },
+    withdrawalExcess: '{{name}}: $t(rule.withdrawal.excess)',
+    reinstateExcess: {
+      'hand-over': 'Würde diese Übergabe wieder gelten, wären es zu viele Junge. {{name}}: $t(rule.withdrawal.excess)',
+      sale: 'Würde dieser Verkauf wieder gelten, wären es zu viele Junge. {{name}}: $t(rule.withdrawal.excess)',
+      'cash-out': 'Würde diese Auszahlung wieder gelten, wären es zu viele Junge. {{name}}: $t(rule.withdrawal.excess)',
+    },
+    noLongerFits: {
+      'hand-over': 'Diese Übergabe passt nicht mehr. {{name}}: $t(rule.withdrawal.excess)',
+      sale: 'Dieser Verkauf passt nicht mehr. {{name}}: $t(rule.withdrawal.excess)',
+      'cash-out': 'Diese Auszahlung passt nicht mehr. {{name}}: $t(rule.withdrawal.excess)',
+    },
+  },
+  /** Im Dativ Plural: „die Grenze von 10 Einladungen“. */
+  limitedWork: {
+    invitations: 'Einladungen',
+    statementEmails: 'Abrechnungs-E-Mails',
+    dataExports: 'Datenexporten',
+    csvImports: 'CSV-Importen',
+    photoUploads: 'Foto-Uploads',
+    recoveryCodeRenewals: 'Erneuerungen der Wiederherstellungscodes',
+    progressReads: 'Aufrufen der Fortschrittsseite',
   },
 };

@@ -1,6 +1,7 @@
 import { HUMIDITY_LIMITS, TEMPERATURE_LIMITS_C } from './care-log.types.js';
 import { formatTemperature } from '../time/temperature.js';
 import type { TemperatureUnit } from '../auth/auth.types.js';
+import { ruleText, type RuleText } from '../errors/rule-text.js';
 
 export interface Range {
   min: number;
@@ -35,13 +36,12 @@ export function outsideRange(value: number, range: Range): BandSide | null {
 }
 
 /** Why a band cannot be stored (null when it can): each range within the plausible readings and min below max. */
-export function bandProblem(what: 'temperature' | 'humidity', range: Range): string | null {
+export function bandProblem(what: 'temperature' | 'humidity', range: Range): RuleText | null {
   const limits = what === 'temperature' ? TEMPERATURE_LIMITS_C : HUMIDITY_LIMITS;
-  const unit = what === 'temperature' ? ' °C' : ' %';
   for (const v of [range.min, range.max]) {
-    if (!Number.isFinite(v) || v < limits.min || v > limits.max) return `A ${what} band lies between ${limits.min} and ${limits.max}${unit}; ${v} is outside.`;
+    if (!Number.isFinite(v) || v < limits.min || v > limits.max) return ruleText(`band.${what}Outside`, { lo: limits.min, hi: limits.max, value: v });
   }
-  if (range.min >= range.max) return `The lowest ${what} (${range.min}${unit}) must be below the highest (${range.max}${unit}).`;
+  if (range.min >= range.max) return ruleText(`band.${what}UpsideDown`, { lo: range.min, hi: range.max });
   return null;
 }
 

@@ -32,7 +32,7 @@ export class SecondFactorController {
   /** New recovery codes, shown once; the old ones stop working. */
   @HttpCode(200)
   @Post('recovery-codes')
-  @PerUserLimit({ what: 'recovery code renewals', limit: RECOVERY_CODE_RENEWALS_PER_HOUR, windowMinutes: 60 })
+  @PerUserLimit({ what: 'recoveryCodeRenewals', limit: RECOVERY_CODE_RENEWALS_PER_HOUR, windowMinutes: 60 })
   renewRecoveryCodes(@CurrentUser() user: AuthUser, @Body() dto: RecoveryCodesRenewalDto): Promise<RecoveryCodesResponse> {
     return this.secondFactor.renewRecoveryCodes(user.id, dto);
   }

@@ -59,7 +59,8 @@ function fieldErrorOf(e: ValidationError, field: string, constraint: string, mes
   return { field, message };
 }
 
-function flatten(errors: ValidationError[], prefix = ''): FieldError[] {
+/** Every failed constraint as a field error, keyed where our words exist (the CSV import says them per line). */
+export function flatten(errors: ValidationError[], prefix = ''): FieldError[] {
   return errors.flatMap((e) => {
     const field = prefix ? `${prefix}.${e.property}` : e.property;
     // A null where a value is needed fails every check on the field; saying so once is enough.

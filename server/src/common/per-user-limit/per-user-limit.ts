@@ -1,11 +1,12 @@
 import { applyDecorators, HttpException, HttpStatus, Injectable, SetMetadata, UseGuards, type CanActivate, type ExecutionContext } from '@nestjs/common';
 import { Reflector } from '@nestjs/core';
 import { RateLimiterMemory, RateLimiterRes } from 'rate-limiter-flexible';
-import { refusal } from '../refusal';
+import type { Catalogue } from '@broodsilk/shared';
+import { refusal, term } from '../refusal';
 
 export interface PerUserLimitOptions {
-  /** Names the bucket and, in the refusal, what was limited: "statement e-mails". */
-  what: string;
+  /** Names the bucket and, in the refusal, what was limited (said in the reader's language): `'statementEmails'`. */
+  what: keyof Catalogue['refusal']['limitedWork'];
   limit: number;
   windowMinutes: number;
   /** Count per network address instead of per keeper, for public routes (no one is signed in). */
@@ -40,7 +41,7 @@ export class PerUserLimitGuard implements CanActivate {
       refused = e;
     }
     const minutes = Math.max(1, Math.ceil(refused.msBeforeNext / 60_000));
-    const values = { limit: options.limit, what: options.what, window: options.windowMinutes, minutes, count: minutes };
+    const values = { limit: options.limit, what: term(`refusal.limitedWork.${options.what}`), window: options.windowMinutes, minutes, count: minutes };
     throw new HttpException(refusal(options.perAddress ? 'common.addressLimit' : 'common.userLimit', values), HttpStatus.TOO_MANY_REQUESTS);
   }
 }
