@@ -26,7 +26,7 @@ const ENGLISH_REFUSAL = [
   /new \w+Exception\(\s*(?:['"`]|\{\s*message\s*(?::\s*['"`]|[,}]))/g,
   /badRequest\(\[\s*\{[^}]*\bmessage:\s*['"`]/g,
   /fieldError\(\s*[^,]+,\s*['"`]/g,
-  // A class-validator decorator's own sentence takes `sentence('dto.…')` (validation-exception.factory), never its own
+  // A class-validator decorator's own sentence takes `{ context: keyedBy('dto.…') }` (validation-exception.factory), never its own
   // `message`: in the decorator's options (`@IsInt({ message: '…' })`, a constant, a function), in options built
   // beside it (`(what) => ({ message: … })`), in a registered decorator's options or its default message.
   /(?<!new\s)\b[A-Z]\w*\(\s*(?:[^()]|\([^()]*\))*?\{\s*(?:[^{}]*,\s*)?message\s*[:,}]/g,
@@ -56,8 +56,8 @@ describe('every refusal the server writes can be said in the reader’s language
     expect(englishRefusals(`defaultMessage: (a: ValidationArguments) => refusal('field.instant', { field: a.property }).message,`)).toBe(0);
     expect(englishRefusals(`errors.push({ field: 'at', message: sentence });`)).toBe(0);
     expect(englishRefusals(`const said = (key: RefusalKey) => ({ message: refusal(key).message, context: keyedBy(key) });`)).toBe(0);
-    expect(englishRefusals(`@IsInt(sentence('dto.sac.rollWhole'))`)).toBe(0);
-    expect(englishRefusals(`@IsIn(ROLES, { each: true, ...sentence('dto.common.roleOneOf', { allowed }) })`)).toBe(0);
+    expect(englishRefusals(`@IsInt({ context: keyedBy('dto.sac.rollWhole') })`)).toBe(0);
+    expect(englishRefusals(`@IsIn(ROLES, { each: true, context: keyedBy('dto.common.roleOneOf', { allowed }) })`)).toBe(0);
     expect(englishRefusals(`@Min(1, { context: keyedBy('field.limitMin') })`)).toBe(0);
     expect(englishRefusals(`throw new ConflictException(refusal('sac.alreadyPulled', { on }));`)).toBe(0);
     expect(englishRefusals(`throw new BadRequestException({ ...refusal('photo.attach'), details: [fieldRefusal('file', 'photo.attachField')] });`)).toBe(0);

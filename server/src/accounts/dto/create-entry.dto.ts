@@ -9,7 +9,7 @@ import {
 } from '@broodsilk/shared';
 import { IsCalendarDate } from '../../common/validators/is-calendar-date.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
-import { sentence } from '../../common/filters/validation-exception.factory';
+import { keyedBy } from '../../common/filters/validation-exception.factory';
 
 const MAX_MINOR = 2_000_000_000; // fits the integer columns
 
@@ -22,11 +22,11 @@ export class CreateEntryDto implements CreateEntryRequest {
   date!: string;
 
   @IsOptionalNonNull()
-  @IsUUID('all', sentence('dto.account.partyId', { field: 'memberId' }))
+  @IsUUID('all', { context: keyedBy('dto.account.partyId', { field: 'memberId' }) })
   memberId?: string;
 
   @IsOptionalNonNull()
-  @IsUUID('all', sentence('dto.account.sacId'))
+  @IsUUID('all', { context: keyedBy('dto.account.sacId') })
   sacId?: string;
 
   @IsOptionalNonNull()
@@ -36,7 +36,7 @@ export class CreateEntryDto implements CreateEntryRequest {
   count?: number;
 
   @IsOptionalNonNull()
-  @IsIn(HAND_OVER_METHODS, sentence('dto.account.method'))
+  @IsIn(HAND_OVER_METHODS, { context: keyedBy('dto.account.method') })
   method?: HandOverMethod;
 
   @IsOptionalNonNull()
@@ -52,42 +52,42 @@ export class CreateEntryDto implements CreateEntryRequest {
   tracking?: string;
 
   @IsOptionalNonNull()
-  @IsInt(sentence('dto.common.minorUnits', { field: 'priceMinor' }))
+  @IsInt({ context: keyedBy('dto.common.minorUnits', { field: 'priceMinor' }) })
   @Min(0)
   @Max(MAX_MINOR)
   priceMinor?: number;
 
   @IsOptionalNonNull()
-  @IsInt(sentence('dto.common.minorUnits', { field: 'pricePerSpiderlingMinor' }))
+  @IsInt({ context: keyedBy('dto.common.minorUnits', { field: 'pricePerSpiderlingMinor' }) })
   @Min(0)
   @Max(MAX_MINOR)
   pricePerSpiderlingMinor?: number;
 
   @IsOptionalNonNull()
-  @IsUUID('all', sentence('dto.account.partyId', { field: 'fromMemberId' }))
+  @IsUUID('all', { context: keyedBy('dto.account.partyId', { field: 'fromMemberId' }) })
   fromMemberId?: string;
 
   @IsOptionalNonNull()
-  @IsUUID('all', sentence('dto.account.partyId', { field: 'toMemberId' }))
+  @IsUUID('all', { context: keyedBy('dto.account.partyId', { field: 'toMemberId' }) })
   toMemberId?: string;
 
   @IsOptionalNonNull()
-  @IsInt(sentence('dto.common.minorUnits', { field: 'amountMinor' }))
-  @Min(1, sentence('dto.common.amountAboveZero'))
+  @IsInt({ context: keyedBy('dto.common.minorUnits', { field: 'amountMinor' }) })
+  @Min(1, { context: keyedBy('dto.common.amountAboveZero') })
   @Max(MAX_MINOR)
   amountMinor?: number;
 
   @IsOptionalNonNull()
-  @Matches(/^[A-Z]{3}$/, sentence('dto.account.currency'))
+  @Matches(/^[A-Z]{3}$/, { context: keyedBy('dto.account.currency') })
   currency?: string;
 
   @IsOptionalNonNull()
-  @IsUUID('all', sentence('dto.account.reversesId'))
+  @IsUUID('all', { context: keyedBy('dto.account.reversesId') })
   reversesId?: string;
 
   @IsOptionalNonNull()
   @IsString()
-  @MinLength(3, sentence('dto.account.reversedWhy'))
+  @MinLength(3, { context: keyedBy('dto.account.reversedWhy') })
   @MaxLength(TEXT_LIMITS.correctionReason)
   reason?: string;
 

@@ -3,7 +3,7 @@ import { IsBoolean, IsIn, IsInt, IsString, IsUUID, Max, MaxLength, Min } from 'c
 import { ANIMAL_SEXES, ANIMAL_SORTS, ANIMAL_STATUSES, type AnimalListQuery, type AnimalSex, type AnimalSort, type AnimalStatus } from '@broodsilk/shared';
 import { IsListOffset } from '../../common/validators/is-list-offset.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
-import { sentence } from '../../common/filters/validation-exception.factory';
+import { keyedBy } from '../../common/filters/validation-exception.factory';
 
 export class AnimalListQueryDto implements AnimalListQuery {
   @IsOptionalNonNull()
@@ -21,11 +21,11 @@ export class AnimalListQueryDto implements AnimalListQuery {
   sort?: AnimalSort;
 
   @IsOptionalNonNull()
-  @IsIn(['asc', 'desc'], sentence('dto.animal.order'))
+  @IsIn(['asc', 'desc'], { context: keyedBy('dto.animal.order') })
   order?: 'asc' | 'desc';
 
   @IsOptionalNonNull()
-  @IsUUID('all', sentence('dto.animal.speciesId'))
+  @IsUUID('all', { context: keyedBy('dto.animal.speciesId') })
   speciesId?: string;
 
   @IsOptionalNonNull()

@@ -16,41 +16,39 @@ import {
 } from '@broodsilk/shared';
 import { IsCalendarDate } from '../../common/validators/is-calendar-date.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
-import { sentence } from '../../common/filters/validation-exception.factory';
+import { keyedBy } from '../../common/filters/validation-exception.factory';
 
 const trim = ({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value);
 /** Blank text means "none": a form's empty box and a CSV's empty cell both arrive as "". */
 const blankToNull = ({ value }: { value: unknown }) => (typeof value === 'string' ? (value.trim() === '' ? null : value.trim()) : value);
 const notNull = (_: object, v: unknown) => v !== null && v !== undefined;
-// The filter's sentence for isIn, given here so the CSV import (it reads class-validator's messages itself) has it too.
-const oneOf = (field: string, list: readonly string[]) => sentence('field.isIn', { field, allowed: list.join(', ') });
 
 /** The create form and every CSV row are checked by this class. */
 export class CreateAnimalDto implements CreateAnimalRequest {
-  @IsUUID('all', sentence('species.choose'))
+  @IsUUID('all', { context: keyedBy('species.choose') })
   speciesId!: string;
 
   @Transform(trim)
   @IsString()
-  @IsNotEmpty(sentence('dto.animal.labelNeeded'))
-  @MaxLength(TEXT_LIMITS.animalLabel, sentence('dto.animal.labelMax', { max: TEXT_LIMITS.animalLabel }))
+  @IsNotEmpty({ context: keyedBy('dto.animal.labelNeeded') })
+  @MaxLength(TEXT_LIMITS.animalLabel, { context: keyedBy('dto.animal.labelMax', { max: TEXT_LIMITS.animalLabel }) })
   label!: string;
 
-  @IsIn(ANIMAL_SEXES, oneOf('sex', ANIMAL_SEXES))
+  @IsIn(ANIMAL_SEXES)
   sex!: AnimalSex;
 
   @IsOptionalNonNull()
-  @IsIn(MATURITIES, oneOf('maturity', MATURITIES))
+  @IsIn(MATURITIES)
   maturity?: Maturity;
 
   @Transform(blankToNull)
   @ValidateIf(notNull)
-  @IsCalendarDate(sentence('dto.animal.maturedOn'))
+  @IsCalendarDate({ context: keyedBy('dto.animal.maturedOn') })
   maturedOn?: string | null;
 
   @Transform(blankToNull)
   @ValidateIf(notNull)
-  @IsCalendarDate(sentence('dto.animal.acquiredOn'))
+  @IsCalendarDate({ context: keyedBy('dto.animal.acquiredOn') })
   acquiredOn?: string | null;
 
   @Transform(blankToNull)
@@ -61,24 +59,24 @@ export class CreateAnimalDto implements CreateAnimalRequest {
 
   @Transform(({ value }) => (value === '' ? null : typeof value === 'string' && /^-?\d+$/.test(value.trim()) ? Number(value) : value))
   @ValidateIf(notNull)
-  @IsInt(sentence('dto.animal.priceWhole'))
-  @Min(0, sentence('dto.animal.priceNegative'))
-  @Max(100_000_000, sentence('dto.animal.priceTooLarge'))
+  @IsInt({ context: keyedBy('dto.animal.priceWhole') })
+  @Min(0, { context: keyedBy('dto.animal.priceNegative') })
+  @Max(100_000_000, { context: keyedBy('dto.animal.priceTooLarge') })
   pricePaidMinor?: number | null;
 
   @Transform(({ value }) => (typeof value === 'string' ? (value.trim() === '' ? null : value.trim().toUpperCase()) : value))
   @ValidateIf(notNull)
-  @Matches(/^[A-Z]{3}$/, sentence('dto.animal.currency'))
+  @Matches(/^[A-Z]{3}$/, { context: keyedBy('dto.animal.currency') })
   priceCurrency?: string | null;
 
   @Transform(blankToNull)
   @ValidateIf(notNull)
-  @IsIn(OWNER_KINDS, oneOf('ownerKind', OWNER_KINDS))
+  @IsIn(OWNER_KINDS)
   ownerKind?: OwnerKind;
 
   @Transform(({ value }) => (typeof value === 'string' ? (value.trim() === '' ? null : value.trim().toLowerCase()) : value))
   @ValidateIf(notNull)
-  @IsEmail({}, sentence('dto.animal.ownerEmail'))
+  @IsEmail({}, { context: keyedBy('dto.animal.ownerEmail') })
   @MaxLength(TEXT_LIMITS.email)
   ownerEmail?: string | null;
 
@@ -90,7 +88,7 @@ export class CreateAnimalDto implements CreateAnimalRequest {
 
   @Transform(blankToNull)
   @ValidateIf(notNull)
-  @IsIn(CUSTODIES, oneOf('custody', CUSTODIES))
+  @IsIn(CUSTODIES)
   custody?: Custody;
 
   @Transform(blankToNull)
@@ -101,17 +99,17 @@ export class CreateAnimalDto implements CreateAnimalRequest {
 
   @Transform(blankToNull)
   @ValidateIf(notNull)
-  @IsCalendarDate(sentence('dto.animal.dueBackOn'))
+  @IsCalendarDate({ context: keyedBy('dto.animal.dueBackOn') })
   dueBackOn?: string | null;
 
   @Transform(blankToNull)
   @ValidateIf(notNull)
-  @IsIn(ANIMAL_STATUSES, oneOf('status', ANIMAL_STATUSES))
+  @IsIn(ANIMAL_STATUSES)
   status?: AnimalStatus;
 
   @Transform(blankToNull)
   @ValidateIf(notNull)
-  @IsCalendarDate(sentence('dto.animal.statusOn'))
+  @IsCalendarDate({ context: keyedBy('dto.animal.statusOn') })
   statusOn?: string | null;
 
   @Transform(blankToNull)

@@ -1,11 +1,11 @@
 import { IsString, Length } from 'class-validator';
 import type { EmailConfirmationRequest, EmailConfirmationResendRequest } from '@broodsilk/shared';
 import { PasswordResetDto } from './password-reset.dto';
-import { sentence } from '../../common/filters/validation-exception.factory';
+import { keyedBy } from '../../common/filters/validation-exception.factory';
 
 export class EmailConfirmationDto implements EmailConfirmationRequest {
   @IsString()
-  @Length(20, 200, sentence('dto.auth.confirmationLink'))
+  @Length(20, 200, { context: keyedBy('dto.auth.confirmationLink') })
   token!: string;
 }
 

@@ -1,11 +1,11 @@
 import { IsEmail, IsString, MaxLength } from 'class-validator';
 import { Transform } from 'class-transformer';
 import type { LoginRequest } from '@broodsilk/shared';
-import { sentence } from '../../common/filters/validation-exception.factory';
+import { keyedBy } from '../../common/filters/validation-exception.factory';
 
 export class LoginDto implements LoginRequest {
   @Transform(({ value }) => (typeof value === 'string' ? value.trim().toLowerCase() : value))
-  @IsEmail({}, sentence('dto.auth.email'))
+  @IsEmail({}, { context: keyedBy('dto.auth.email') })
   email!: string;
 
   @IsString()

@@ -4,11 +4,11 @@ import { Transform } from 'class-transformer';
 import { LANGUAGES, type Language, type RegisterRequest } from '@broodsilk/shared';
 import { IsTimeZone } from '../../common/validators/is-time-zone.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
-import { sentence } from '../../common/filters/validation-exception.factory';
+import { keyedBy } from '../../common/filters/validation-exception.factory';
 
 export class RegisterDto implements RegisterRequest {
   @Transform(({ value }) => (typeof value === 'string' ? value.trim().toLowerCase() : value))
-  @IsEmail({}, sentence('dto.auth.email'))
+  @IsEmail({}, { context: keyedBy('dto.auth.email') })
   @MaxLength(254)
   email!: string;
 
@@ -17,7 +17,7 @@ export class RegisterDto implements RegisterRequest {
 
   @Transform(({ value }) => (typeof value === 'string' ? value.trim() : value))
   @IsString()
-  @IsNotEmpty(sentence('dto.auth.displayName'))
+  @IsNotEmpty({ context: keyedBy('dto.auth.displayName') })
   @MaxLength(80)
   displayName!: string;
 
@@ -26,11 +26,11 @@ export class RegisterDto implements RegisterRequest {
   timeZone?: string;
 
   @IsOptionalNonNull()
-  @IsIn(LANGUAGES, sentence('dto.common.languageOneOf', { allowed: LANGUAGES.join(', ') }))
+  @IsIn(LANGUAGES, { context: keyedBy('dto.common.languageOneOf', { allowed: LANGUAGES.join(', ') }) })
   language?: Language;
 
   @IsOptionalNonNull()
   @IsString()
-  @Length(20, 200, sentence('invitation.invalidLink'))
+  @Length(20, 200, { context: keyedBy('invitation.invalidLink') })
   invitationToken?: string;
 }

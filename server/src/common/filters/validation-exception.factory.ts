@@ -2,7 +2,7 @@ import type { BadRequestException, ValidationError } from '@nestjs/common';
 import { getMetadataStorage } from 'class-validator';
 import type { FieldError } from '@broodsilk/shared';
 import { badRequest } from '../field-errors';
-import { fieldRefusal, refusal, type RefusalKey, type RefusalValues } from '../refusal';
+import { fieldRefusal, type RefusalKey, type RefusalValues } from '../refusal';
 
 type Args = readonly unknown[];
 type ValidationMetadata = ReturnType<ReturnType<typeof getMetadataStorage>['getTargetValidationMetadatas']>[number];
@@ -31,14 +31,8 @@ const CONSTRAINT_WORDS: Record<string, (field: string, args: Args, value: unknow
   isTimeZone: (f) => fieldRefusal(f, 'field.timeZone'),
 };
 
-/** A decorator may name its sentence: `IsInt({ context: keyedBy('field.offsetWhole', { … }) })`. */
+/** A decorator names its own sentence by key, never as `message`: `IsInt({ context: keyedBy('dto.sac.rollWhole', { … }) })`. */
 export const keyedBy = (key: RefusalKey, values?: RefusalValues) => ({ refusal: { key, values } });
-
-/**
- * A DTO's own sentence, `@IsInt(sentence('dto.sac.rollWhole'))`: keyed for the filter, and its English kept as
- * class-validator's message for callers that read the library's errors themselves (the CSV import).
- */
-export const sentence = (key: RefusalKey, values?: RefusalValues) => ({ message: refusal(key, values).message, context: keyedBy(key, values) });
 
 /** The decorator behind one failed constraint, to tell class-validator's default sentence from a DTO's own. */
 function metadataOf(e: ValidationError, constraint: string): ValidationMetadata | undefined {

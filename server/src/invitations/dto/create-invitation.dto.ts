@@ -1,16 +1,16 @@
 import { IsEmail, IsIn, IsUUID } from 'class-validator';
 import { INVITABLE_ROLES, type CreateInvitationRequest, type InvitableRole } from '@broodsilk/shared';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
-import { sentence } from '../../common/filters/validation-exception.factory';
+import { keyedBy } from '../../common/filters/validation-exception.factory';
 
 export class CreateInvitationDto implements CreateInvitationRequest {
-  @IsEmail({}, sentence('dto.common.emailLooksWrong'))
+  @IsEmail({}, { context: keyedBy('dto.common.emailLooksWrong') })
   email!: string;
 
-  @IsIn(INVITABLE_ROLES, sentence('dto.common.roleOneOf', { allowed: INVITABLE_ROLES.join(', ') }))
+  @IsIn(INVITABLE_ROLES, { context: keyedBy('dto.common.roleOneOf', { allowed: INVITABLE_ROLES.join(', ') }) })
   role!: InvitableRole;
 
   @IsOptionalNonNull()
-  @IsUUID('all', sentence('dto.common.memberOfProject'))
+  @IsUUID('all', { context: keyedBy('dto.common.memberOfProject') })
   memberId?: string;
 }

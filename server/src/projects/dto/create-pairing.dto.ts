@@ -2,36 +2,36 @@ import { IsIn, IsInt, IsOptional, IsString, IsUUID, Max, MaxLength, Min, Validat
 import { PAIRING_OUTCOMES, type CreatePairingRequest, type PairingOutcome, TEXT_LIMITS } from '@broodsilk/shared';
 import { IsInstant } from '../../common/validators/is-instant.validator';
 import { AcknowledgedWarningsDto } from '../../plausibility/acknowledged-warnings.dto';
-import { sentence } from '../../common/filters/validation-exception.factory';
+import { keyedBy } from '../../common/filters/validation-exception.factory';
 
 export class CreatePairingDto extends AcknowledgedWarningsDto implements CreatePairingRequest {
-  @IsInstant(sentence('dto.pairing.startedAt'))
+  @IsInstant({ context: keyedBy('dto.pairing.startedAt') })
   startedAt!: string;
 
-  @IsInt(sentence('dto.pairing.durationWhole'))
-  @Min(1, sentence('dto.pairing.durationMin'))
-  @Max(20_160, sentence('dto.pairing.durationMax'))
+  @IsInt({ context: keyedBy('dto.pairing.durationWhole') })
+  @Min(1, { context: keyedBy('dto.pairing.durationMin') })
+  @Max(20_160, { context: keyedBy('dto.pairing.durationMax') })
   durationMinutes!: number;
 
-  @IsIn(PAIRING_OUTCOMES, sentence('dto.common.outcomeOneOf', { allowed: PAIRING_OUTCOMES.join(', ') }))
+  @IsIn(PAIRING_OUTCOMES, { context: keyedBy('dto.common.outcomeOneOf', { allowed: PAIRING_OUTCOMES.join(', ') }) })
   outcome!: PairingOutcome;
 
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
   @IsString()
-  @MaxLength(TEXT_LIMITS.note, sentence('dto.common.notesMax', { max: TEXT_LIMITS.note }))
+  @MaxLength(TEXT_LIMITS.note, { context: keyedBy('dto.common.notesMax', { max: TEXT_LIMITS.note }) })
   notes?: string | null;
 
   @IsOptional()
-  @IsUUID('all', sentence('dto.pairing.maleId'))
+  @IsUUID('all', { context: keyedBy('dto.pairing.maleId') })
   maleId?: string;
 
   @IsOptional()
-  @IsUUID('all', sentence('dto.pairing.correctsId'))
+  @IsUUID('all', { context: keyedBy('dto.pairing.correctsId') })
   corrects?: string;
 
   @IsOptional()
   @IsString()
-  @MaxLength(TEXT_LIMITS.correctionReason, sentence('dto.common.reasonUnder', { max: TEXT_LIMITS.correctionReason }))
+  @MaxLength(TEXT_LIMITS.correctionReason, { context: keyedBy('dto.common.reasonUnder', { max: TEXT_LIMITS.correctionReason }) })
   reason?: string;
 }

@@ -12,59 +12,59 @@ import {
   TEXT_LIMITS,
 } from '@broodsilk/shared';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
-import { sentence } from '../../common/filters/validation-exception.factory';
+import { keyedBy } from '../../common/filters/validation-exception.factory';
 
 export class TermsLineDto implements TermsLineInput {
-  @IsUUID('all', sentence('dto.terms.lineMember'))
+  @IsUUID('all', { context: keyedBy('dto.terms.lineMember') })
   memberId!: string;
 
-  @IsInt(sentence('dto.terms.weightWhole'))
-  @Min(0, sentence('dto.terms.weightNegative'))
-  @Max(1_000_000, sentence('dto.terms.weightMax'))
+  @IsInt({ context: keyedBy('dto.terms.weightWhole') })
+  @Min(0, { context: keyedBy('dto.terms.weightNegative') })
+  @Max(1_000_000, { context: keyedBy('dto.terms.weightMax') })
   weight!: number;
 
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
-  @IsInt(sentence('dto.terms.fixedWhole'))
-  @Min(0, sentence('dto.terms.fixedNegative'))
-  @Max(100_000, sentence('dto.terms.fixedMax'))
+  @IsInt({ context: keyedBy('dto.terms.fixedWhole') })
+  @Min(0, { context: keyedBy('dto.terms.fixedNegative') })
+  @Max(100_000, { context: keyedBy('dto.terms.fixedMax') })
   fixedCount?: number | null;
 
-  @IsInt(sentence('dto.terms.pickWhole'))
-  @Min(1, sentence('dto.terms.pickMin'))
-  @Max(1000, sentence('dto.terms.pickMax'))
+  @IsInt({ context: keyedBy('dto.terms.pickWhole') })
+  @Min(1, { context: keyedBy('dto.terms.pickMin') })
+  @Max(1000, { context: keyedBy('dto.terms.pickMax') })
   pickOrder!: number;
 }
 
 export class ProposeTermsDto implements ProposeTermsRequest {
-  @IsArray(sentence('dto.terms.linesList'))
-  @ArrayMinSize(1, sentence('dto.terms.linesNeeded'))
+  @IsArray({ context: keyedBy('dto.terms.linesList') })
+  @ArrayMinSize(1, { context: keyedBy('dto.terms.linesNeeded') })
   @ValidateNested({ each: true })
   @Type(() => TermsLineDto)
   lines!: TermsLineDto[];
 
-  @IsInt(sentence('dto.terms.priceWhole'))
-  @Min(0, sentence('dto.terms.priceNegative'))
-  @Max(100_000_000, sentence('dto.terms.priceTooLarge'))
+  @IsInt({ context: keyedBy('dto.terms.priceWhole') })
+  @Min(0, { context: keyedBy('dto.terms.priceNegative') })
+  @Max(100_000_000, { context: keyedBy('dto.terms.priceTooLarge') })
   pricePerSpiderlingMinor!: number;
 
-  @IsString(sentence('dto.terms.currencyText'))
-  @Matches(/^[A-Z]{3}$/, sentence('dto.terms.currencyCapitals'))
+  @IsString({ context: keyedBy('dto.terms.currencyText') })
+  @Matches(/^[A-Z]{3}$/, { context: keyedBy('dto.terms.currencyCapitals') })
   currency!: string;
 
-  @IsIn(FAILURE_CLAUSES, sentence('dto.terms.failureClause', { allowed: FAILURE_CLAUSES.join(', ') }))
+  @IsIn(FAILURE_CLAUSES, { context: keyedBy('dto.terms.failureClause', { allowed: FAILURE_CLAUSES.join(', ') }) })
   failureClause!: FailureClause;
 
   @IsOptionalNonNull()
-  @IsIn(BROOD_STAGES, sentence('dto.terms.handOverStage', { allowed: BROOD_STAGES.join(', ') }))
+  @IsIn(BROOD_STAGES, { context: keyedBy('dto.terms.handOverStage', { allowed: BROOD_STAGES.join(', ') }) })
   handOverStage?: BroodStage;
 
-  @IsIn(SHIPPING_PAYERS, sentence('dto.terms.shippingPaidBy', { allowed: SHIPPING_PAYERS.join(', ') }))
+  @IsIn(SHIPPING_PAYERS, { context: keyedBy('dto.terms.shippingPaidBy', { allowed: SHIPPING_PAYERS.join(', ') }) })
   shippingPaidBy!: ShippingPayer;
 
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
   @IsString()
-  @MaxLength(TEXT_LIMITS.note, sentence('dto.common.noteMax', { max: TEXT_LIMITS.note }))
+  @MaxLength(TEXT_LIMITS.note, { context: keyedBy('dto.common.noteMax', { max: TEXT_LIMITS.note }) })
   note?: string | null;
 }

@@ -2,9 +2,9 @@ import { Type } from 'class-transformer';
 import { IsBoolean, IsInt, IsOptional, Max, Min, ValidateIf, ValidateNested, registerDecorator } from 'class-validator';
 import { NOTIFICATION_KINDS, REMINDER_CHANNELS, type NotificationKind, type ReminderChannel, type UpdateReminderPreferencesRequest } from '@broodsilk/shared';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
-import { sentence } from '../../common/filters/validation-exception.factory';
+import { keyedBy } from '../../common/filters/validation-exception.factory';
 
-const HOUR = sentence('dto.reminder.hour');
+const HOUR = { context: keyedBy('dto.reminder.hour') };
 const hour = () => [IsInt(HOUR), Min(0, HOUR), Max(23, HOUR)];
 const apply =
   (decorators: PropertyDecorator[]): PropertyDecorator =>
@@ -18,7 +18,7 @@ function IsChannelChoices(): PropertyDecorator {
       name: 'isChannelChoices',
       target: object.constructor,
       propertyName: String(propertyName),
-      options: sentence('dto.reminder.channels', { kinds: NOTIFICATION_KINDS.join(', '), channels: REMINDER_CHANNELS.join(', ') }),
+      options: { context: keyedBy('dto.reminder.channels', { kinds: NOTIFICATION_KINDS.join(', '), channels: REMINDER_CHANNELS.join(', ') }) },
       validator: {
         validate: (value: unknown) =>
           typeof value === 'object' &&

@@ -4,14 +4,14 @@ import { AcknowledgedWarningsDto } from '../../plausibility/acknowledged-warning
 import { IsInstant } from '../../common/validators/is-instant.validator';
 import { IsCount } from './opening.dto';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
-import { sentence } from '../../common/filters/validation-exception.factory';
+import { keyedBy } from '../../common/filters/validation-exception.factory';
 
 export class BroodCountDto extends AcknowledgedWarningsDto implements BroodCountRequest {
   @IsOptionalNonNull()
-  @IsInstant(sentence('dto.broodCount.at'))
+  @IsInstant({ context: keyedBy('dto.broodCount.at') })
   at?: string;
 
-  @IsIn(BROOD_STAGES, sentence('dto.common.stageOneOf', { allowed: BROOD_STAGES.join(', ') }))
+  @IsIn(BROOD_STAGES, { context: keyedBy('dto.common.stageOneOf', { allowed: BROOD_STAGES.join(', ') }) })
   stage!: BroodStage;
 
   @IsCount('alive') alive!: number;
@@ -19,7 +19,7 @@ export class BroodCountDto extends AcknowledgedWarningsDto implements BroodCount
   @IsOptional() @IsCount('lost') lost?: number;
 
   @IsOptionalNonNull()
-  @IsIn(BROOD_LOSS_REASONS, sentence('dto.broodCount.lossReason', { allowed: BROOD_LOSS_REASONS.join(', ') }))
+  @IsIn(BROOD_LOSS_REASONS, { context: keyedBy('dto.broodCount.lossReason', { allowed: BROOD_LOSS_REASONS.join(', ') }) })
   lossReason?: BroodLossReason;
 
   @IsOptional()
@@ -33,11 +33,11 @@ export class BroodCountDto extends AcknowledgedWarningsDto implements BroodCount
   estimated?: boolean;
 
   @IsOptional()
-  @IsUUID('all', sentence('dto.broodCount.correctsId'))
+  @IsUUID('all', { context: keyedBy('dto.broodCount.correctsId') })
   corrects?: string;
 
   @IsOptional()
   @IsString()
-  @MaxLength(TEXT_LIMITS.correctionReason, sentence('dto.common.reasonUnder', { max: TEXT_LIMITS.correctionReason }))
+  @MaxLength(TEXT_LIMITS.correctionReason, { context: keyedBy('dto.common.reasonUnder', { max: TEXT_LIMITS.correctionReason }) })
   reason?: string;
 }

@@ -12,23 +12,23 @@ import {
 } from '@broodsilk/shared';
 import { IsInstant } from '../../common/validators/is-instant.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
-import { sentence } from '../../common/filters/validation-exception.factory';
+import { keyedBy } from '../../common/filters/validation-exception.factory';
 
 export class TemperatureReadingDto {
-  @IsDefined(sentence('dto.careLog.temperatureNeeded'))
-  @IsNumber({ allowNaN: false, allowInfinity: false }, sentence('dto.careLog.temperatureNumber'))
+  @IsDefined({ context: keyedBy('dto.careLog.temperatureNeeded') })
+  @IsNumber({ allowNaN: false, allowInfinity: false }, { context: keyedBy('dto.careLog.temperatureNumber') })
   value!: number;
 
-  @IsIn(TEMPERATURE_UNITS, sentence('dto.careLog.temperatureUnit'))
+  @IsIn(TEMPERATURE_UNITS, { context: keyedBy('dto.careLog.temperatureUnit') })
   unit!: TemperatureUnit;
 }
 
 export class CareLogEntryDto implements CareLogRequest {
-  @IsIn(CARE_LOG_KINDS, sentence('dto.common.entryKindOneOf', { allowed: CARE_LOG_KINDS.join(', ') }))
+  @IsIn(CARE_LOG_KINDS, { context: keyedBy('dto.common.entryKindOneOf', { allowed: CARE_LOG_KINDS.join(', ') }) })
   kind!: CareLogKind;
 
   @IsOptionalNonNull()
-  @IsInstant(sentence('dto.careLog.at'))
+  @IsInstant({ context: keyedBy('dto.careLog.at') })
   at?: string;
 
   @IsOptionalNonNull()
@@ -37,24 +37,24 @@ export class CareLogEntryDto implements CareLogRequest {
   temperature?: TemperatureReadingDto;
 
   @IsOptionalNonNull()
-  @IsNumber({ allowNaN: false, allowInfinity: false }, sentence('dto.careLog.humidity'))
+  @IsNumber({ allowNaN: false, allowInfinity: false }, { context: keyedBy('dto.careLog.humidity') })
   humidityPercent?: number;
 
   @IsOptionalNonNull()
-  @IsIn(BROOD_STAGES, sentence('dto.common.stageOneOf', { allowed: BROOD_STAGES.join(', ') }))
+  @IsIn(BROOD_STAGES, { context: keyedBy('dto.common.stageOneOf', { allowed: BROOD_STAGES.join(', ') }) })
   stage?: BroodStage;
 
   @IsOptionalNonNull()
   @IsString()
-  @MaxLength(TEXT_LIMITS.note, sentence('dto.careLog.textUnder', { max: TEXT_LIMITS.note }))
+  @MaxLength(TEXT_LIMITS.note, { context: keyedBy('dto.careLog.textUnder', { max: TEXT_LIMITS.note }) })
   text?: string;
 
   @IsOptionalNonNull()
-  @IsUUID('all', sentence('dto.common.strikesId'))
+  @IsUUID('all', { context: keyedBy('dto.common.strikesId') })
   strikes?: string;
 
   @IsOptionalNonNull()
   @IsString()
-  @MaxLength(TEXT_LIMITS.correctionReason, sentence('dto.common.reasonUnder', { max: TEXT_LIMITS.correctionReason }))
+  @MaxLength(TEXT_LIMITS.correctionReason, { context: keyedBy('dto.common.reasonUnder', { max: TEXT_LIMITS.correctionReason }) })
   reason?: string;
 }

@@ -5,29 +5,29 @@ import { IsCalendarDate } from '../../common/validators/is-calendar-date.validat
 import { IsInstant } from '../../common/validators/is-instant.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 import { AcknowledgedWarningsDto } from '../../plausibility/acknowledged-warnings.dto';
-import { sentence } from '../../common/filters/validation-exception.factory';
+import { keyedBy } from '../../common/filters/validation-exception.factory';
 
-const FROM_DAY = sentence('dto.sac.pullFromDay', { max: PULL_DAY_MAX });
-const TO_DAY = sentence('dto.sac.pullToDay', { max: PULL_DAY_MAX });
+const FROM_DAY = { context: keyedBy('dto.sac.pullFromDay', { max: PULL_DAY_MAX }) };
+const TO_DAY = { context: keyedBy('dto.sac.pullToDay', { max: PULL_DAY_MAX }) };
 
 /** A band's two ends; whether they make a band is checked by the shared `bandProblem`. */
 export class RangeDto implements Range {
-  @IsDefined(sentence('dto.sac.bandLowNeeded'))
-  @IsNumber({ allowNaN: false, allowInfinity: false }, sentence('dto.sac.bandLowNumber'))
+  @IsDefined({ context: keyedBy('dto.sac.bandLowNeeded') })
+  @IsNumber({ allowNaN: false, allowInfinity: false }, { context: keyedBy('dto.sac.bandLowNumber') })
   min!: number;
 
-  @IsDefined(sentence('dto.sac.bandHighNeeded'))
-  @IsNumber({ allowNaN: false, allowInfinity: false }, sentence('dto.sac.bandHighNumber'))
+  @IsDefined({ context: keyedBy('dto.sac.bandHighNeeded') })
+  @IsNumber({ allowNaN: false, allowInfinity: false }, { context: keyedBy('dto.sac.bandHighNumber') })
   max!: number;
 }
 
 export class CreateSacDto extends AcknowledgedWarningsDto implements CreateSacRequest {
-  @IsCalendarDate(sentence('dto.sac.layDate'))
+  @IsCalendarDate({ context: keyedBy('dto.sac.layDate') })
   layDate!: string;
 
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
-  @IsInstant(sentence('dto.sac.pullTime'))
+  @IsInstant({ context: keyedBy('dto.sac.pullTime') })
   pulledAt?: string | null;
 
   @IsOptional()
@@ -45,9 +45,9 @@ export class CreateSacDto extends AcknowledgedWarningsDto implements CreateSacRe
   pullToDay?: number | null;
 
   @IsOptionalNonNull()
-  @IsInt(sentence('dto.sac.rollWhole'))
-  @Min(ROLL_INTERVAL_LIMITS.minHours, sentence('dto.sac.rollMin', { min: ROLL_INTERVAL_LIMITS.minHours }))
-  @Max(ROLL_INTERVAL_LIMITS.maxHours, sentence('dto.sac.rollMax', { max: ROLL_INTERVAL_LIMITS.maxHours }))
+  @IsInt({ context: keyedBy('dto.sac.rollWhole') })
+  @Min(ROLL_INTERVAL_LIMITS.minHours, { context: keyedBy('dto.sac.rollMin', { min: ROLL_INTERVAL_LIMITS.minHours }) })
+  @Max(ROLL_INTERVAL_LIMITS.maxHours, { context: keyedBy('dto.sac.rollMax', { max: ROLL_INTERVAL_LIMITS.maxHours }) })
   rollIntervalHours?: number;
 
   @IsOptionalNonNull()
@@ -70,8 +70,8 @@ export class CreateSacDto extends AcknowledgedWarningsDto implements CreateSacRe
 
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
-  @IsString(sentence('dto.sac.containerText'))
-  @MaxLength(TEXT_LIMITS.enclosure, sentence('dto.sac.containerMax', { max: TEXT_LIMITS.enclosure }))
+  @IsString({ context: keyedBy('dto.sac.containerText') })
+  @MaxLength(TEXT_LIMITS.enclosure, { context: keyedBy('dto.sac.containerMax', { max: TEXT_LIMITS.enclosure }) })
   container?: string | null;
 
   @IsOptional()

@@ -3,14 +3,14 @@ import { KEPT_BACK_LOG_KINDS, type KeptBackEndRequest, type KeptBackLogKind, typ
 import { IsInstant } from '../../common/validators/is-instant.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 import { IsCount } from './opening.dto';
-import { sentence } from '../../common/filters/validation-exception.factory';
+import { keyedBy } from '../../common/filters/validation-exception.factory';
 
-const INSTANT = sentence('dto.keptBack.at');
-const REASON = sentence('dto.common.reasonUnder', { max: TEXT_LIMITS.correctionReason });
-const WHY_ENDED = sentence('dto.keptBack.whyEnded');
+const INSTANT = { context: keyedBy('dto.keptBack.at') };
+const REASON = { context: keyedBy('dto.common.reasonUnder', { max: TEXT_LIMITS.correctionReason }) };
+const WHY_ENDED = { context: keyedBy('dto.keptBack.whyEnded') };
 
 export class KeptBackLogDto implements KeptBackLogRequest {
-  @IsIn(KEPT_BACK_LOG_KINDS, sentence('dto.common.entryKindOneOf', { allowed: KEPT_BACK_LOG_KINDS.join(', ') }))
+  @IsIn(KEPT_BACK_LOG_KINDS, { context: keyedBy('dto.common.entryKindOneOf', { allowed: KEPT_BACK_LOG_KINDS.join(', ') }) })
   kind!: KeptBackLogKind;
 
   @IsOptionalNonNull()
@@ -20,11 +20,11 @@ export class KeptBackLogDto implements KeptBackLogRequest {
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
   @IsString()
-  @MaxLength(TEXT_LIMITS.note, sentence('dto.keptBack.noteUnder', { max: TEXT_LIMITS.note }))
+  @MaxLength(TEXT_LIMITS.note, { context: keyedBy('dto.keptBack.noteUnder', { max: TEXT_LIMITS.note }) })
   note?: string | null;
 
   @IsOptionalNonNull()
-  @IsUUID('all', sentence('dto.common.strikesId'))
+  @IsUUID('all', { context: keyedBy('dto.common.strikesId') })
   strikes?: string;
 
   @IsOptionalNonNull()
@@ -34,7 +34,7 @@ export class KeptBackLogDto implements KeptBackLogRequest {
 }
 
 export class KeptBackEndDto implements KeptBackEndRequest {
-  @IsIn(['joined', 'written-off'], sentence('dto.keptBack.outcome'))
+  @IsIn(['joined', 'written-off'], { context: keyedBy('dto.keptBack.outcome') })
   outcome!: 'joined' | 'written-off';
 
   @IsOptionalNonNull()

@@ -3,11 +3,11 @@ import { BROOD_COUNT_MAX, type Catalogue, type OpeningRequest, TEXT_LIMITS } fro
 import { IsInstant } from '../../common/validators/is-instant.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 import { AcknowledgedWarningsDto } from '../../plausibility/acknowledged-warnings.dto';
-import { sentence } from '../../common/filters/validation-exception.factory';
+import { keyedBy } from '../../common/filters/validation-exception.factory';
 
 /** A count is a whole number from 0 to BROOD_COUNT_MAX; `what` names its sentence. */
 export function IsCount(what: keyof Catalogue['refusal']['dto']['count']): PropertyDecorator {
-  const said = sentence(`dto.count.${what}`, { max: BROOD_COUNT_MAX });
+  const said = { context: keyedBy(`dto.count.${what}`, { max: BROOD_COUNT_MAX }) };
   return (target, key) => {
     IsInt(said)(target, key);
     Min(0, said)(target, key);
@@ -17,7 +17,7 @@ export function IsCount(what: keyof Catalogue['refusal']['dto']['count']): Prope
 
 export class OpeningDto extends AcknowledgedWarningsDto implements OpeningRequest {
   @IsOptionalNonNull()
-  @IsInstant(sentence('dto.opening.at'))
+  @IsInstant({ context: keyedBy('dto.opening.at') })
   openedAt?: string;
 
   @IsCount('healthyEggs') healthyEggs!: number;
@@ -38,11 +38,11 @@ export class OpeningDto extends AcknowledgedWarningsDto implements OpeningReques
   notes?: string | null;
 
   @IsOptional()
-  @IsUUID('all', sentence('dto.opening.correctsId'))
+  @IsUUID('all', { context: keyedBy('dto.opening.correctsId') })
   corrects?: string;
 
   @IsOptional()
   @IsString()
-  @MaxLength(TEXT_LIMITS.correctionReason, sentence('dto.common.reasonUnder', { max: TEXT_LIMITS.correctionReason }))
+  @MaxLength(TEXT_LIMITS.correctionReason, { context: keyedBy('dto.common.reasonUnder', { max: TEXT_LIMITS.correctionReason }) })
   reason?: string;
 }

@@ -1,8 +1,8 @@
 import { Matches } from 'class-validator';
 import type { CreatePayoutAccountRequest } from '@broodsilk/shared';
-import { sentence } from '../../common/filters/validation-exception.factory';
+import { keyedBy } from '../../common/filters/validation-exception.factory';
 
 export class CreatePayoutAccountDto implements CreatePayoutAccountRequest {
-  @Matches(/^[A-Z]{2}$/, sentence('dto.checkout.country'))
+  @Matches(/^[A-Z]{2}$/, { context: keyedBy('dto.checkout.country') })
   country!: string;
 }

@@ -3,7 +3,7 @@ import { IsIn, IsInt, IsString, Max, MaxLength, Min } from 'class-validator';
 import { SPECIES_GROUPS, type SpeciesGroup, type SpeciesListQuery } from '@broodsilk/shared';
 import { IsListOffset } from '../../common/validators/is-list-offset.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
-import { sentence } from '../../common/filters/validation-exception.factory';
+import { keyedBy } from '../../common/filters/validation-exception.factory';
 
 export class SpeciesListQueryDto implements SpeciesListQuery {
   @IsOptionalNonNull()
@@ -12,7 +12,7 @@ export class SpeciesListQueryDto implements SpeciesListQuery {
   q?: string;
 
   @IsOptionalNonNull()
-  @IsIn(SPECIES_GROUPS, sentence('dto.species.oneOf', { field: 'group', allowed: SPECIES_GROUPS.join(', ') }))
+  @IsIn(SPECIES_GROUPS, { context: keyedBy('dto.species.oneOf', { field: 'group', allowed: SPECIES_GROUPS.join(', ') }) })
   group?: SpeciesGroup;
 
   @IsOptionalNonNull()

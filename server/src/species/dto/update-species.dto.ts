@@ -1,7 +1,7 @@
 import { ArrayMaxSize, IsArray, IsBoolean, IsIn, IsInt, IsNotEmpty, IsOptional, IsString, Max, MaxLength, Min, ValidateIf } from 'class-validator';
 import { SPECIES_GROUPS, VENOM_FLAGS, type SpeciesGroup, type UpdateSpeciesRequest, type ValueSource, type VenomFlag } from '@broodsilk/shared';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
-import { sentence } from '../../common/filters/validation-exception.factory';
+import { keyedBy } from '../../common/filters/validation-exception.factory';
 
 const SOURCE_KINDS: ValueSource['kind'][] = ['published', 'common-practice', 'memory'];
 
@@ -11,7 +11,7 @@ function Count(max: number): PropertyDecorator {
     IsOptional()(target, key);
     ValidateIf((_, v) => v !== null)(target, key);
     IsInt()(target, key);
-    Min(0, sentence('dto.common.notNegative', { field: String(key) }))(target, key);
+    Min(0, { context: keyedBy('dto.common.notNegative', { field: String(key) }) })(target, key);
     Max(max)(target, key);
   };
 }
@@ -32,7 +32,7 @@ export class UpdateSpeciesDto implements UpdateSpeciesRequest {
   formerNames?: string[];
 
   @IsOptionalNonNull()
-  @IsIn(SPECIES_GROUPS, sentence('dto.species.oneOf', { field: 'group', allowed: SPECIES_GROUPS.join(', ') }))
+  @IsIn(SPECIES_GROUPS, { context: keyedBy('dto.species.oneOf', { field: 'group', allowed: SPECIES_GROUPS.join(', ') }) })
   group?: SpeciesGroup;
 
   @IsOptionalNonNull()
@@ -40,7 +40,7 @@ export class UpdateSpeciesDto implements UpdateSpeciesRequest {
   urticatingHairs?: boolean;
 
   @IsOptionalNonNull()
-  @IsIn(VENOM_FLAGS, sentence('dto.species.oneOf', { field: 'venom', allowed: VENOM_FLAGS.join(', ') }))
+  @IsIn(VENOM_FLAGS, { context: keyedBy('dto.species.oneOf', { field: 'venom', allowed: VENOM_FLAGS.join(', ') }) })
   venom?: VenomFlag;
 
   @IsOptional()
@@ -59,7 +59,7 @@ export class UpdateSpeciesDto implements UpdateSpeciesRequest {
   @Count(60) lifespanMaxMonths?: number | null;
 
   @IsOptionalNonNull()
-  @IsIn(SOURCE_KINDS, sentence('dto.species.sourceKind'))
+  @IsIn(SOURCE_KINDS, { context: keyedBy('dto.species.sourceKind') })
   sourceKind?: ValueSource['kind'];
 
   @IsOptionalNonNull()

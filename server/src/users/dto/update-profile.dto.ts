@@ -12,13 +12,13 @@ import {
 } from '@broodsilk/shared';
 import { IsTimeZone } from '../../common/validators/is-time-zone.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
-import { sentence } from '../../common/filters/validation-exception.factory';
+import { keyedBy } from '../../common/filters/validation-exception.factory';
 
 export class UpdateProfileDto implements UpdateProfileRequest {
   @IsOptionalNonNull()
   @Transform(({ value }) => (typeof value === 'string' ? value.trim() : value))
   @IsString()
-  @IsNotEmpty(sentence('dto.profile.displayName'))
+  @IsNotEmpty({ context: keyedBy('dto.profile.displayName') })
   @MaxLength(TEXT_LIMITS.displayName)
   displayName?: string;
 
@@ -27,14 +27,14 @@ export class UpdateProfileDto implements UpdateProfileRequest {
   timeZone?: string;
 
   @IsOptionalNonNull()
-  @IsIn(TEMPERATURE_UNITS, sentence('dto.profile.temperatureUnit', { allowed: TEMPERATURE_UNITS.join(', ') }))
+  @IsIn(TEMPERATURE_UNITS, { context: keyedBy('dto.profile.temperatureUnit', { allowed: TEMPERATURE_UNITS.join(', ') }) })
   temperatureUnit?: TemperatureUnit;
 
   @IsOptionalNonNull()
-  @IsIn(LANGUAGES, sentence('dto.common.languageOneOf', { allowed: LANGUAGES.join(', ') }))
+  @IsIn(LANGUAGES, { context: keyedBy('dto.common.languageOneOf', { allowed: LANGUAGES.join(', ') }) })
   language?: Language;
 
   @IsOptionalNonNull()
-  @IsIn(STAGE_NUMBERINGS, sentence('dto.profile.stageNumbering', { allowed: STAGE_NUMBERINGS.join(', ') }))
+  @IsIn(STAGE_NUMBERINGS, { context: keyedBy('dto.profile.stageNumbering', { allowed: STAGE_NUMBERINGS.join(', ') }) })
   stageNumbering?: StageNumbering;
 }

@@ -8,30 +8,30 @@ import {
 } from '@broodsilk/shared';
 import { MAX_PASSWORD_LENGTH } from '../../password-policy';
 import { IsOptionalNonNull } from '../../../common/validators/is-optional-non-null.validator';
-import { sentence } from '../../../common/filters/validation-exception.factory';
+import { keyedBy } from '../../../common/filters/validation-exception.factory';
 
 const MAX_CODE_LENGTH = TEXT_LIMITS.secondFactorCode;
 
 export class TotpConfirmDto implements TotpConfirmRequest {
   @IsString()
-  @IsNotEmpty(sentence('dto.auth.appCode'))
+  @IsNotEmpty({ context: keyedBy('dto.auth.appCode') })
   @MaxLength(MAX_CODE_LENGTH)
   code!: string;
 
   @IsString()
-  @IsNotEmpty(sentence('dto.auth.password'))
+  @IsNotEmpty({ context: keyedBy('dto.auth.password') })
   @MaxLength(MAX_PASSWORD_LENGTH)
   password!: string;
 }
 
 export class SecondFactorRemovalDto implements SecondFactorRemovalRequest {
   @IsString()
-  @IsNotEmpty(sentence('dto.auth.password'))
+  @IsNotEmpty({ context: keyedBy('dto.auth.password') })
   @MaxLength(MAX_PASSWORD_LENGTH)
   password!: string;
 
   @IsString()
-  @IsNotEmpty(sentence('dto.auth.codeOrRecovery'))
+  @IsNotEmpty({ context: keyedBy('dto.auth.codeOrRecovery') })
   @MaxLength(MAX_CODE_LENGTH)
   code!: string;
 }
@@ -43,7 +43,7 @@ export class SecondFactorSignInDto implements SecondFactorSignInRequest {
   pendingToken!: string;
 
   @IsString()
-  @IsNotEmpty(sentence('dto.auth.codeOrRecovery'))
+  @IsNotEmpty({ context: keyedBy('dto.auth.codeOrRecovery') })
   @MaxLength(MAX_CODE_LENGTH)
   code!: string;
 }
