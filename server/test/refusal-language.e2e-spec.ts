@@ -1,6 +1,6 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { CSRF_OUT_OF_DATE, PULL_DAY_MAX, SESSION_COOKIE, type ApiErrorBody } from '@broodsilk/shared';
+import { CSRF_OUT_OF_DATE, NOTIFICATION_KINDS, PULL_DAY_MAX, REMINDER_CHANNELS, SESSION_COOKIE, type ApiErrorBody } from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper, type SignedIn } from './support/users';
 import { addMember, createProject } from './support/projects';
@@ -105,6 +105,21 @@ describe('refusals in the reader’s language', () => {
       { field: 'temperatureBand.min', message: 'Der untere Wert des Bereichs muss eine Zahl sein.' },
     ]);
     expect(de.message).toBe('Bitte korrigiere 2 Felder: pullFromDay, temperatureBand.min.');
+  });
+
+  it('a registered decorator’s own sentence (the reminder channels) is said in German too, its allowed codes as values', async () => {
+    const channels = (lng?: string) =>
+      lang(
+        http()
+          .patch('/api/reminder-preferences')
+          .set('Authorization', owner.bearer)
+          .send({ channels: { 'roll-late': 'email' } }),
+        lng,
+      );
+    const [de, en] = [(await channels('de').expect(400)).body as ApiErrorBody, (await channels().expect(400)).body as ApiErrorBody];
+    const [kinds, channelCodes] = [NOTIFICATION_KINDS.join(', '), REMINDER_CHANNELS.join(', ')];
+    expect(en.message).toBe(`Each reminder kind must be one of ${kinds}, and each channel one of ${channelCodes}.`);
+    expect(de.message).toBe(`Jede Erinnerungsart muss eine von ${kinds} sein und jeder Kanal einer von ${channelCodes}.`);
   });
 
   it('the language is negotiated as RFC 9110 §12.5.4 says: region tags, weights, and English for a language we lack', async () => {

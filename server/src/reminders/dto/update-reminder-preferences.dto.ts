@@ -3,6 +3,7 @@ import { IsBoolean, IsInt, IsOptional, Max, Min, ValidateIf, ValidateNested, reg
 import { NOTIFICATION_KINDS, REMINDER_CHANNELS, type NotificationKind, type ReminderChannel, type UpdateReminderPreferencesRequest } from '@broodsilk/shared';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 import { keyedBy } from '../../common/filters/validation-exception.factory';
+import { refusal } from '../../common/refusal';
 
 const HOUR = { context: keyedBy('dto.reminder.hour') };
 const hour = () => [IsInt(HOUR), Min(0, HOUR), Max(23, HOUR)];
@@ -11,6 +12,9 @@ const apply =
   (target, key) =>
     decorators.forEach((d) => d(target, key));
 
+const CHANNELS = 'dto.reminder.channels';
+const CHOICES = { kinds: NOTIFICATION_KINDS.join(', '), channels: REMINDER_CHANNELS.join(', ') };
+
 /** `{ kind: channel }` with known kinds and channels only; the message lists what is allowed. */
 function IsChannelChoices(): PropertyDecorator {
   return (object, propertyName) =>
@@ -18,7 +22,7 @@ function IsChannelChoices(): PropertyDecorator {
       name: 'isChannelChoices',
       target: object.constructor,
       propertyName: String(propertyName),
-      options: { context: keyedBy('dto.reminder.channels', { kinds: NOTIFICATION_KINDS.join(', '), channels: REMINDER_CHANNELS.join(', ') }) },
+      options: { context: keyedBy(CHANNELS, CHOICES) },
       validator: {
         validate: (value: unknown) =>
           typeof value === 'object' &&
@@ -27,6 +31,8 @@ function IsChannelChoices(): PropertyDecorator {
           Object.entries(value).every(
             ([k, v]) => (NOTIFICATION_KINDS as readonly string[]).includes(k) && (REMINDER_CHANNELS as readonly unknown[]).includes(v),
           ),
+        // class-validator hands the context on only with a message, so the English is given too.
+        defaultMessage: () => refusal(CHANNELS, CHOICES).message,
       },
     });
 }
