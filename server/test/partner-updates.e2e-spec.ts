@@ -8,7 +8,7 @@
  */
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { addDays, TEXT_LIMITS, todayIn, wordsFor, type FailureNoticePreview, type NotificationPage, type ProjectResponse } from '@broodsilk/shared';
+import { addDays, TEXT_LIMITS, todayIn, serverWordsFor, type FailureNoticePreview, type NotificationPage, type ProjectResponse } from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper, type SignedIn } from './support/users';
 import { addMember, createProject } from './support/projects';
@@ -86,8 +86,8 @@ describe('partner updates', () => {
     // Proposed (by the owner), then in force once everyone accepted (the last acceptance was the owner's).
     expect(mine.map((n) => n.title)).toEqual(
       expect.arrayContaining([
-        `Update pair: ${wordsFor('en')('activityKind.terms.in-force')}`,
-        `Update pair: ${wordsFor('en')('activityKind.terms.proposed')}`,
+        `Update pair: ${serverWordsFor('en')('activityKind.terms.in-force')}`,
+        `Update pair: ${serverWordsFor('en')('activityKind.terms.proposed')}`,
       ]),
     );
     expect(mine.every((n) => n.subject?.type === 'project' && n.subject.id === p.id)).toBe(true);
@@ -132,9 +132,9 @@ describe('partner updates', () => {
     expect(mine.length).toBe(before + 1);
     const failed = mine[0];
     expect(failed).toMatchObject({ title: 'Update pair: Sac failed', subject: { type: 'sac', id: sac.id }, projectId: p.id, readAt: null });
-    expect(failed.body).toContain(`The sac laid ${sac.layDate} failed. Reason: ${wordsFor('en')('sacFailure.spoiled')}.`);
+    expect(failed.body).toContain(`The sac laid ${sac.layDate} failed. Reason: ${serverWordsFor('en')('sacFailure.spoiled')}.`);
     expect(failed.body).toContain('No count was recorded for this sac.');
-    expect(failed.body).toContain(wordsFor('en')('failureClauseText.carries-over'));
+    expect(failed.body).toContain(serverWordsFor('en')('failureClauseText.carries-over'));
     expect(failed.body).toContain('Piet (weight 1): the share carries over to the next sac or pairing of this deal.');
     expect(failed.body).toContain(`${OUTSIDE.name} (weight 1)`);
     expect(failed.body).toContain('Oona (weight 2)');
@@ -159,7 +159,7 @@ describe('partner updates', () => {
 
   it('a German partner reads it in German', async () => {
     const [failed] = await updatesOf(german);
-    expect(failed.title).toBe(`Update pair: ${wordsFor('de')('activityKind.sac.failed')}`);
+    expect(failed.title).toBe(`Update pair: ${serverWordsFor('de')('activityKind.sac.failed')}`);
     expect(failed.body).toContain('Eine Nachricht von Oona:');
     expect(failed.body).toContain(MESSAGE);
     const mail = await waitForMail(german.user.email, /Kokon verdorben/);
@@ -210,7 +210,7 @@ describe('partner updates', () => {
     const sac = await createSac(t.app, owner, p.id, { layDate: addDays(today(), -3) });
     await http().put(`/api/projects/${p.id}/incubator-rights`).set('Authorization', owner.bearer).send({ caretakersMayPullAndOpen: true }).expect(200);
     await http().post(`/api/sacs/${sac.id}/pull`).set('Authorization', caretaker.bearer).send({}).expect(201);
-    const pulled = (await updatesOf(partner)).find((n) => n.title.endsWith(wordsFor('en')('activityKind.sac.pulled')));
+    const pulled = (await updatesOf(partner)).find((n) => n.title.endsWith(serverWordsFor('en')('activityKind.sac.pulled')));
     expect(pulled?.body).toContain('Recorded by Cato');
     await waitForMail(german.user.email, /Kokon entnommen/);
     expect((await mailsTo(partner.user.email)).filter((m) => /Sac pulled/.test(m.subject ?? ''))).toEqual([]);
@@ -230,7 +230,7 @@ describe('partner updates', () => {
       .set('Authorization', owner.bearer)
       .send({ moltedOn: addDays(today(), -2) })
       .expect(201);
-    const molted = (await updatesOf(partner)).find((n) => n.title.endsWith(wordsFor('en')('activityKind.female.molted')));
+    const molted = (await updatesOf(partner)).find((n) => n.title.endsWith(serverWordsFor('en')('activityKind.female.molted')));
     expect(molted?.body).toContain(`molted on ${addDays(today(), -2)}, after the pairing on ${addDays(today(), -30)}`);
     expect(molted?.subject).toEqual({ type: 'project', id: p.id });
   });
@@ -241,7 +241,7 @@ describe('partner updates', () => {
       .set('Authorization', owner.bearer)
       .send({ reason: 'female-molted', partnerMessage: 'She molted; we start again next season.' })
       .expect(200);
-    const ended = (await updatesOf(german)).find((n) => n.title.endsWith(wordsFor('de')('activityKind.project.ended')));
+    const ended = (await updatesOf(german)).find((n) => n.title.endsWith(serverWordsFor('de')('activityKind.project.ended')));
     expect(ended?.body).toContain('She molted; we start again next season.');
     const mail = await waitForMail(OUTSIDE.email, /Project ended early/);
     expect(mail.text).toContain('She molted; we start again next season.');

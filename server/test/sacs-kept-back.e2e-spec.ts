@@ -1,7 +1,14 @@
 import request from 'supertest';
 import Papa from 'papaparse';
 import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
-import { PROVISIONAL_SHARES, type BroodCountsResponse, type KeptBackBatchResponse, type SacResponse, type SharesResponse, wordsFor } from '@broodsilk/shared';
+import {
+  PROVISIONAL_SHARES,
+  type BroodCountsResponse,
+  type KeptBackBatchResponse,
+  type SacResponse,
+  type SharesResponse,
+  serverWordsFor,
+} from '@broodsilk/shared';
 import { createTestApp, type TestApp } from './support/test-app';
 import { registerKeeper, type SignedIn } from './support/users';
 import { projectWithRoles } from './support/projects';
@@ -190,7 +197,7 @@ describe('shares from an estimated count', () => {
     const csv = await http().get(`/api/projects/${s.projectId}/statements/${s.tomaszId}.csv`).set('Authorization', s.tomasz.bearer).expect(200);
     const rows = Papa.parse<Record<string, string>>(csv.text.trimEnd(), { header: true }).data;
     // The CSV is written in the reader's words (statementCsv in the catalogue).
-    const en = wordsFor('en');
+    const en = serverWordsFor('en');
     const [kind, count, estimated] = (['kind', 'count', 'estimated'] as const).map((c) => en(`statementCsv.column.${c}`));
     const sacRow = rows.find((r) => r[kind!] === en('statementCsv.line.sac'))!;
     expect([sacRow[count!], sacRow[estimated!]]).toEqual(['500', en('statementCsv.yes')]);

@@ -5,7 +5,7 @@
  */
 import Papa from 'papaparse';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { wordsFor, type BalancesResponse, type Language, type StatementResponse } from '@broodsilk/shared';
+import { serverWordsFor, type BalancesResponse, type Language, type StatementResponse } from '@broodsilk/shared';
 import { STATEMENT_CSV_COLUMNS } from '../src/accounts/statement-csv';
 import { createTestApp, type TestApp } from './support/test-app';
 import { waitForMail } from './support/mail-sink';
@@ -36,8 +36,8 @@ afterAll(async () => t?.close());
 const tomasz = () => balances.parties.find((p) => p.memberId === s.tomaszId)!;
 
 /** The header row a reader of this language gets, from the catalogue (statementCsv.column). */
-const headerRow = (lng: Language) => STATEMENT_CSV_COLUMNS.map((c) => wordsFor(lng)(`statementCsv.column.${c}`));
-const en = wordsFor('en');
+const headerRow = (lng: Language) => STATEMENT_CSV_COLUMNS.map((c) => serverWordsFor(lng)(`statementCsv.column.${c}`));
+const en = serverWordsFor('en');
 /** Reads a statement CSV back with papaparse, each cell under its column's code (the header row is in the reader's words). */
 function readCsv<T = string>(text: string, lng: Language = 'en', dynamicTyping = false): { fields: string[]; rows: Record<string, T>[]; errors: unknown[] } {
   const headers = headerRow(lng);
@@ -97,7 +97,7 @@ describe('statement CSV', () => {
     await api(t.app).patch('/api/users/me').set('Authorization', s.tomasz.bearer).send({ language: 'de' }).expect(200);
     try {
       const res = await api(t.app).get(`/api/projects/${s.projectId}/statements/${s.tomaszId}.csv`).set('Authorization', s.tomasz.bearer).expect(200);
-      const de = wordsFor('de');
+      const de = serverWordsFor('de');
       expect(res.text.split('\r\n')[0]).toBe(headerRow('de').join(','));
       expect(res.text.split('\r\n')[0]).not.toBe(headerRow('en').join(','));
       const { rows, errors } = readCsv(res.text, 'de');
@@ -262,7 +262,7 @@ describe('statement e-mail', () => {
     await api(t.app).patch('/api/users/me').set('Authorization', s.tomasz.bearer).send({ language: 'de' }).expect(200);
     try {
       await api(t.app).post(`/api/projects/${s.projectId}/statements/${s.tomaszId}/email`).set('Authorization', s.mira.bearer).expect(201);
-      const de = wordsFor('de');
+      const de = serverWordsFor('de');
       const subject = de('statement.mailSubject', { project: 'Account test project', party: 'Tomasz Partner' });
       expect(subject).toBe('Broodsilk-Kontoauszug: Account test project (Tomasz Partner)');
       const mail = await waitForMail(s.tomasz.user.email, new RegExp(subject.replace(/[()]/g, '\\$&')));

@@ -45,6 +45,7 @@ export * from './i18n/safety.js';
 export * from './i18n/value-source.js';
 export * from './i18n/vocabulary.js';
 export type { Catalogue } from './i18n/en.js';
+export * from './i18n/server-catalogue.js';
 export * from './reminders/reminder-preferences.types.js';
 export * from './sacs/brood-count-rules.js';
 export * from './sacs/sac-plausibility.js';

@@ -2,7 +2,7 @@ import {
   addDays,
   broodStageLabel,
   isBroodStageAtLeast,
-  wordsFor,
+  serverWordsFor,
   type CalendarDate,
   type ExpectedStageDays,
   type MaleClockRow,
@@ -11,7 +11,7 @@ import {
 } from '@broodsilk/shared';
 import type { Reader } from '../users/reader-words';
 
-const ENGLISH: Reader = { t: wordsFor('en'), lng: 'en', numbering: 'us', unit: 'C' };
+const ENGLISH: Reader = { t: serverWordsFor('en'), lng: 'en', numbering: 'us', unit: 'C' };
 
 /** One all-day event: `end` is exclusive (the day after the last day), as RFC 5545 §3.6.1 has it. */
 export interface FeedEvent {

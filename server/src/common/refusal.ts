@@ -1,10 +1,10 @@
-import { DEFAULT_LANGUAGE, wordsFor, type Catalogue, type FieldError, type Language } from '@broodsilk/shared';
+import { DEFAULT_LANGUAGE, serverWordsFor, type ServerCatalogue, type FieldError, type Language } from '@broodsilk/shared';
 
 /** A refusal's key below `refusal.` (`'sac.alreadyPulled'`), checked against the English catalogue; plural forms are picked by `count`. */
 type Keys<T, P extends string = ''> = {
   [K in keyof T & string]: T[K] extends string ? `${P}${K extends `${infer B}_${'one' | 'other'}` ? B : K}` : Keys<T[K], `${P}${K}.`>;
 }[keyof T & string];
-export type RefusalKey = Keys<Catalogue['refusal']>;
+export type RefusalKey = Keys<ServerCatalogue['refusal']>;
 export type RefusalValues = Record<string, string | number>;
 
 /** What an exception carries: the English sentence, and its key and values so the filter can say it in the reader's language. */
@@ -23,7 +23,7 @@ export const term = (key: string): string => `$t(${key})`;
 
 /** A keyed sentence in `lng`; values written with `term` are looked up first (only whole values, so typed text is never read as a key). */
 export function say(lng: Language, key: string, values?: FieldError['values']): string {
-  const t = wordsFor(lng);
+  const t = serverWordsFor(lng);
   const said = values && Object.fromEntries(Object.entries(values).map(([k, v]) => [k, typeof v === 'string' && TERM.test(v) ? t(v.slice(3, -1)) : v]));
   return t(key, said);
 }

@@ -2,7 +2,7 @@ import { Inject, Injectable, NotFoundException, type OnModuleInit } from '@nestj
 import { ConfigType } from '@nestjs/config';
 import { EntityManager, MikroORM } from '@mikro-orm/postgresql';
 import type { EventSubscriber, FlushEventArgs } from '@mikro-orm/core';
-import { wordsFor, type FailureNoticePreview, type Language } from '@broodsilk/shared';
+import { serverWordsFor, type FailureNoticePreview, type Language } from '@broodsilk/shared';
 import { appConfig } from '../config/app.config';
 import { Clock } from '../common/clock';
 import { MailOutbox } from '../mail/mail-outbox.service';
@@ -71,7 +71,7 @@ export class PartnerUpdates implements OnModuleInit, EventSubscriber, UpdateMail
     words: UpdateWords,
     link: UpdateLink,
   ): Promise<void> {
-    const t = wordsFor(to.lng);
+    const t = serverWordsFor(to.lng);
     const unsubscribeUrl = `${this.base}/api/unsubscribe/${unsubscribeToken(this.app.jwtSecret, to.userId, 'partner-update')}`;
     const { html, text } = renderNoticeMail({
       lang: to.lng,
@@ -100,7 +100,7 @@ export class PartnerUpdates implements OnModuleInit, EventSubscriber, UpdateMail
     words: UpdateWords,
     actorId: string | null,
   ): Promise<void> {
-    const t = wordsFor(to.lng);
+    const t = serverWordsFor(to.lng);
     const progress = await this.progressLinks.issue(tx, to.member, { id: actorId ?? to.ownerId });
     const { html, text } = renderNoticeMail({
       lang: to.lng,

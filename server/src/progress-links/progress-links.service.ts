@@ -1,7 +1,7 @@
 import { ConflictException, Inject, Injectable, NotFoundException, StreamableFile } from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
 import { EntityManager } from '@mikro-orm/postgresql';
-import { PROGRESS_TIMELINE_KINDS, wordsFor, type PhotoRef, type ProgressLinkResponse, type ProgressView } from '@broodsilk/shared';
+import { PROGRESS_TIMELINE_KINDS, serverWordsFor, type PhotoRef, type ProgressLinkResponse, type ProgressView } from '@broodsilk/shared';
 import { appConfig } from '../config/app.config';
 import { Clock } from '../common/clock';
 import { hashLinkToken, newLinkToken } from '../common/link-token';
@@ -64,7 +64,7 @@ export class ProgressLinksService {
       kind: 'progress-link.issued',
       subjectType: 'member',
       subjectId: member.id,
-      summary: wordsFor('en')('text.progressLinkIssued', { name: member.name }),
+      summary: serverWordsFor('en')('text.progressLinkIssued', { name: member.name }),
     });
     return { url: `${this.config.publicUrl.replace(/\/$/, '')}/progress/${token}` };
   }
@@ -79,7 +79,7 @@ export class ProgressLinksService {
         kind: 'progress-link.revoked',
         subjectType: 'member',
         subjectId: member.id,
-        summary: wordsFor('en')('text.progressLinkRevoked', { name: member.name }),
+        summary: serverWordsFor('en')('text.progressLinkRevoked', { name: member.name }),
       });
     return n;
   }

@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from '@mikro-orm/postgresql';
-import { wordsFor } from '@broodsilk/shared';
+import { serverWordsFor } from '@broodsilk/shared';
 import type { AnimalMolted } from '../animals/animal-molt.registry';
 import { ActivityService } from '../activity/activity.service';
 import { Project } from './project.entity';
@@ -30,7 +30,7 @@ export class FemaleMoltListener {
         kind: 'female.molted',
         subjectType: 'animal',
         subjectId: m.animal.id,
-        summary: wordsFor('en')('partnerUpdate.femaleMolted', data),
+        summary: serverWordsFor('en')('partnerUpdate.femaleMolted', data),
         data,
       });
     }

@@ -8,7 +8,7 @@ import { ProjectMember } from './project-member.entity';
 import { TermsLine } from './terms-line.entity';
 import { toMemberResponse } from './projects.mapper';
 import type { AddMemberDto } from './dto/add-member.dto';
-import { label, wordsFor } from '@broodsilk/shared';
+import { label, serverWordsFor } from '@broodsilk/shared';
 import { refusal } from '../common/refusal';
 
 @Injectable()
@@ -61,7 +61,7 @@ export class MembersService {
         kind: 'member.removed',
         subjectType: 'member',
         subjectId: m.id,
-        summary: wordsFor('en')('text.memberRemoved', { name: m.user?.displayName ?? m.name, role: label(wordsFor('en'), 'role', m.role) }),
+        summary: serverWordsFor('en')('text.memberRemoved', { name: m.user?.displayName ?? m.name, role: label(serverWordsFor('en'), 'role', m.role) }),
         data: { role: m.role },
       });
       tx.remove(m);

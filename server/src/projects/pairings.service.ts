@@ -14,7 +14,7 @@ import { pairingMale } from './pairing-male';
 import { assertTakesNew } from './project-open';
 import type { CreatePairingDto } from './dto/create-pairing.dto';
 import { Clock } from '../common/clock';
-import { label, wordsFor } from '@broodsilk/shared';
+import { label, serverWordsFor } from '@broodsilk/shared';
 import { refusal } from '../common/refusal';
 
 // A clock a few minutes fast on the keeper's phone is not a pairing in the future.
@@ -67,7 +67,7 @@ export class PairingsService {
         reason: target ? dto.reason!.trim() : null,
         warningReason,
       });
-      const t = wordsFor('en');
+      const t = serverWordsFor('en');
       const outcome = label(t, 'pairingOutcome', dto.outcome);
       this.activity.record(tx, {
         projectId: p.id,

@@ -19,7 +19,7 @@ import type { CreateProjectDto } from './dto/create-project.dto';
 import type { UpdateProjectDto } from './dto/update-project.dto';
 import type { EndProjectDto } from './dto/end-project.dto';
 import { Clock } from '../common/clock';
-import { label, wordsFor } from '@broodsilk/shared';
+import { label, serverWordsFor } from '@broodsilk/shared';
 import { fieldRefusal, refusal, refusalFrom, term } from '../common/refusal';
 
 const PROJECT_POPULATE = ['owner', 'female.species', 'male.species'] as const;
@@ -155,7 +155,7 @@ export class ProjectsService {
       p.endedOn = this.today(viewer);
       return {
         kind: 'project.ended',
-        summary: wordsFor('en')('text.endedEarly', { reason: label(wordsFor('en'), 'endedEarly', dto.reason) }),
+        summary: serverWordsFor('en')('text.endedEarly', { reason: label(serverWordsFor('en'), 'endedEarly', dto.reason) }),
         data: { reason: dto.reason, note: dto.note ?? null, ...(dto.partnerMessage?.trim() ? { partnerMessage: dto.partnerMessage } : {}) },
       };
     });
@@ -181,7 +181,7 @@ export class ProjectsService {
       p.endedOn = null;
       return {
         kind: 'project.reopened',
-        summary: `Reopened the project (it had ended early${was.on ? ` on ${was.on}` : ''}: ${label(wordsFor('en'), 'endedEarly', was.reason)}).`,
+        summary: `Reopened the project (it had ended early${was.on ? ` on ${was.on}` : ''}: ${label(serverWordsFor('en'), 'endedEarly', was.reason)}).`,
         data: was,
       };
     });

@@ -1,4 +1,4 @@
-import { label, wordsFor, type Language, type NotificationKind, type Words } from '@broodsilk/shared';
+import { label, serverWordsFor, type Language, type NotificationKind, type Words } from '@broodsilk/shared';
 import type { ReminderKind } from './planning/reminder-plan.types';
 import { LOAN_NOTICE_DAYS, PULL_CLOSES_NOTICE_DAYS } from './planning/plan-reminders';
 import { reminderFormats, type ReminderFormats, type ReminderReader } from './reminder-formats';
@@ -45,7 +45,7 @@ const VALUES: Record<ReminderKind, (d: Details, f: ReminderFormats, t: Words) =>
 };
 
 export function reminderWords(kind: ReminderKind, details: Details, c: WordsContext): ReminderWords {
-  const t = wordsFor(c.reader.language);
+  const t = serverWordsFor(c.reader.language);
   const f = reminderFormats(c.reader);
   const values = { ...VALUES[kind](details, f, t), about: c.about, layDate: c.layDate ? f.date(c.layDate) : '' };
   // The digest's body is its summary, already written for the reader (digestBody).
@@ -55,7 +55,7 @@ export function reminderWords(kind: ReminderKind, details: Details, c: WordsCont
 
 /** The daily digest's body: what is planned (instant and title, soonest first), or that nothing is, then the unread count. */
 export function digestBody(reader: ReminderReader, planned: { at: Date; title: string }[], unread: number): string {
-  const t = wordsFor(reader.language);
+  const t = serverWordsFor(reader.language);
   const f = reminderFormats(reader);
   const lines = [...planned]
     .sort((a, b) => a.at.getTime() - b.at.getTime())
@@ -65,7 +65,7 @@ export function digestBody(reader: ReminderReader, planned: { at: Date; title: s
 
 /** The frame of a reminder e-mail: the subject, the link's label, why it came and how to stop it. */
 export function reminderMailWords(lng: Language, kind: NotificationKind) {
-  const t = wordsFor(lng);
+  const t = serverWordsFor(lng);
   const name = label(t, 'notificationKind', kind);
   return {
     subject: (title: string) => t('mail.subject', { title }),

@@ -1,5 +1,5 @@
 import Handlebars from 'handlebars';
-import { label, wordsFor, type Language, type NotificationKind } from '@broodsilk/shared';
+import { label, serverWordsFor, type Language, type NotificationKind } from '@broodsilk/shared';
 import { reminderMailWords } from './reminder-words';
 
 /** What the page says: asks before stopping, says it stopped, or says why nothing was changed. */
@@ -24,7 +24,7 @@ const page = Handlebars.compile<{ lang: Language; title: string; message: string
 
 /** The page in one language: the account's for a good link, the browser's for a bad one. */
 export function unsubscribePage(lang: Language, s: UnsubscribeStep): string {
-  const t = wordsFor(lang);
+  const t = serverWordsFor(lang);
   if (s.step === 'ask') {
     const kind = label(t, 'notificationKind', s.kind);
     return page({

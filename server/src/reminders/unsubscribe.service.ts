@@ -1,7 +1,7 @@
 import { BadRequestException, Inject, Injectable, NotFoundException } from '@nestjs/common';
 import { ConfigType } from '@nestjs/config';
 import { EntityManager } from '@mikro-orm/postgresql';
-import { wordsFor, type Language } from '@broodsilk/shared';
+import { serverWordsFor, type Language } from '@broodsilk/shared';
 import { appConfig } from '../config/app.config';
 import { User } from '../users/user.entity';
 import { ReminderPreferencesService } from './reminder-preferences.service';
@@ -32,7 +32,7 @@ export class UnsubscribeService {
 
   /** Stops the kind's e-mails (a mail client's one-click POST, RFC 8058, or the page's button) and says so. */
   async stop(token: string, browser: Language): Promise<string> {
-    const t = wordsFor(browser);
+    const t = serverWordsFor(browser);
     const found = readUnsubscribeToken(this.app.jwtSecret, token);
     if (!found) throw new BadRequestException({ message: t('reminders.unsubscribe.badLink') });
     const language = await this.preferences.stopEmails(found.userId, found.kind);

@@ -16,7 +16,7 @@ import { assertNotFuture } from './sac-rules';
 import { badRequest, fieldError } from '../common/field-errors';
 import { toBroodCountResponse } from './brood.mapper';
 import type { BroodCountDto } from './dto/brood-count.dto';
-import { broodStageLabel, label, wordsFor } from '@broodsilk/shared';
+import { broodStageLabel, label, serverWordsFor } from '@broodsilk/shared';
 import { KeptBackBatch } from './kept-back-batch.entity';
 import { refusal } from '../common/refusal';
 
@@ -137,7 +137,7 @@ function correctionTarget(counts: BroodCount[], id: string): BroodCount {
 }
 
 function countSummary(sac: Sac, dto: BroodCountDto, lost: number, target: BroodCount | null): string {
-  const t = wordsFor('en');
+  const t = serverWordsFor('en');
   const values = { about: dto.estimated ? t('text.about') : '', alive: dto.alive, stage: broodStageLabel(t, dto.stage), lost };
   const what = lost
     ? t('text.broodCountLost', { ...values, reason: dto.lossReason ? label(t, 'broodLoss', dto.lossReason).toLowerCase() : '' })

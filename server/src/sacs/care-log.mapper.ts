@@ -1,4 +1,4 @@
-import { broodStageLabel, formatTemperature, label, wordsFor, type CareLogEntryResponse, type SacResponse, type Words } from '@broodsilk/shared';
+import { broodStageLabel, formatTemperature, label, serverWordsFor, type CareLogEntryResponse, type SacResponse, type Words } from '@broodsilk/shared';
 import type { SacLogEntry } from './sac-log-entry.entity';
 import { readingSide } from './sac-band';
 
@@ -23,7 +23,7 @@ export function toCareLogResponse(e: SacLogEntry, struckBy: SacLogEntry | undefi
 }
 
 /** The timeline sentence for a care-log entry, in the catalogue's words (stored in English; readers re-render from `data`). */
-export function careLogSummary(e: SacLogEntry, layDate: string, t: Words = wordsFor('en')): string {
+export function careLogSummary(e: SacLogEntry, layDate: string, t: Words = serverWordsFor('en')): string {
   const what =
     e.kind === 'temperature'
       ? t('text.temperatureNow', { temperature: formatTemperature(e.temperatureC!, 'C') })

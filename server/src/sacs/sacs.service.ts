@@ -21,7 +21,7 @@ import type { UpdateSacDto } from './dto/update-sac.dto';
 import { assertTakesNew } from '../projects/project-open';
 import type { PullSacDto } from './dto/pull-sac.dto';
 import type { IncubatorRightsDto } from './dto/incubator-rights.dto';
-import { label, wordsFor } from '@broodsilk/shared';
+import { label, serverWordsFor } from '@broodsilk/shared';
 import { refusal } from '../common/refusal';
 
 @Injectable()
@@ -223,12 +223,12 @@ export class SacsService {
   }
 }
 
-const failureWords = (sac: Sac): string => (sac.failureReason ? label(wordsFor('en'), 'sacFailure', sac.failureReason).toLowerCase() : '');
+const failureWords = (sac: Sac): string => (sac.failureReason ? label(serverWordsFor('en'), 'sacFailure', sac.failureReason).toLowerCase() : '');
 
 /** One activity kind per write: the most telling change wins. */
 function describeChange(sac: Sac, wasPulled: boolean, pulledChanged: boolean, outcomeChanged: boolean, wasLeft: boolean): { kind: string; summary: string } {
   if (outcomeChanged && sac.outcome === 'failed')
-    return { kind: 'sac.failed', summary: wordsFor('en')('text.sacFailed', { layDate: sac.layDate, reason: failureWords(sac) }) };
+    return { kind: 'sac.failed', summary: serverWordsFor('en')('text.sacFailed', { layDate: sac.layDate, reason: failureWords(sac) }) };
   if (pulledChanged && sac.pulledAt) return { kind: 'sac.pulled', summary: `Sac laid ${sac.layDate} pulled on ${sac.pulledOn} and moved to the incubator.` };
   if (pulledChanged && wasPulled) return { kind: 'sac.updated', summary: `Sac laid ${sac.layDate}: pull removed, it is with the mother.` };
   if (!wasLeft && sac.leftWithMother) return { kind: 'sac.left-with-mother', summary: `Sac laid ${sac.layDate}: left with the mother on purpose.` };

@@ -1,4 +1,4 @@
-import { addDays, label, todayIn, wordsFor, type EndedEarlyReason, type PairingOutcome, type ProjectRole } from '@broodsilk/shared';
+import { addDays, label, todayIn, serverWordsFor, type EndedEarlyReason, type PairingOutcome, type ProjectRole } from '@broodsilk/shared';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { Animal } from '../animals/animal.entity';
 import { User } from '../users/user.entity';
@@ -199,7 +199,7 @@ export const seedProjects: FeatureSeeder = async (ctx) => {
         mira,
         eveningOf(startedOn),
         'pairing.recorded',
-        wordsFor('en')('text.pairingOn', { date: startedOn, minutes, outcome: label(wordsFor('en'), 'pairingOutcome', outcome) }),
+        serverWordsFor('en')('text.pairingOn', { date: startedOn, minutes, outcome: label(serverWordsFor('en'), 'pairingOutcome', outcome) }),
         {
           subjectType: 'pairing',
           subjectId: pairing.id,
@@ -266,9 +266,15 @@ export const seedProjects: FeatureSeeder = async (ctx) => {
       p.endedEarlyReason = s.ended.reason;
       p.endedEarlyNote = s.ended.note;
       p.endedOn = on;
-      log(mira, eveningOf(on), 'project.ended', wordsFor('en')('text.endedEarly', { reason: label(wordsFor('en'), 'endedEarly', s.ended.reason) }), {
-        data: { reason: s.ended.reason },
-      });
+      log(
+        mira,
+        eveningOf(on),
+        'project.ended',
+        serverWordsFor('en')('text.endedEarly', { reason: label(serverWordsFor('en'), 'endedEarly', s.ended.reason) }),
+        {
+          data: { reason: s.ended.reason },
+        },
+      );
     }
   }
 };

@@ -1,4 +1,4 @@
-import { addDays, broodStageLabel, label, todayIn, wordsFor, type BroodStage } from '@broodsilk/shared';
+import { addDays, broodStageLabel, label, todayIn, serverWordsFor, type BroodStage } from '@broodsilk/shared';
 import { careLogSummary } from '../sacs/care-log.mapper';
 import type { User } from '../users/user.entity';
 import { ActivityService } from '../activity/activity.service';
@@ -22,7 +22,7 @@ const HOUR = 3_600_000;
  * - "Versicolor shared brood": laid 70 days ago, opened on day 40, counted at first and second
  *   instar with a few losses (brood); the accounts seeder shares out its latest count.
  */
-const en = wordsFor('en');
+const en = serverWordsFor('en');
 
 export const seedSacs: FeatureSeeder = async (ctx) => {
   const { em, users, today: now } = ctx;

@@ -1,4 +1,4 @@
-import { groupCaution, wordsFor, type SpeciesBreedingValues, type SpeciesResponse, type Sourced, type ValueSource } from '@broodsilk/shared';
+import { groupCaution, serverWordsFor, type SpeciesBreedingValues, type SpeciesResponse, type Sourced, type ValueSource } from '@broodsilk/shared';
 import type { Species, SpeciesSourceKey } from './species.entity';
 import { effectiveBreeding } from './effective-breeding';
 
@@ -44,7 +44,7 @@ export function toSpeciesResponse(s: Species): SpeciesResponse {
     cautions: {
       urticatingHairs: { value: s.urticatingHairs, source: src(s, 'urticatingHairs') },
       venom: { value: s.venom, source: src(s, 'venom') },
-      cautionText: groupCaution(wordsFor('en'), s.group),
+      cautionText: groupCaution(serverWordsFor('en'), s.group),
     },
     tradeListing: { value: s.tradeListing, source: src(s, 'tradeListing') },
     breeding,

@@ -1,5 +1,5 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
-import { wordsFor, type StageNumbering, type TemperatureUnit, type Words } from '@broodsilk/shared';
+import { serverWordsFor, type StageNumbering, type TemperatureUnit, type Words } from '@broodsilk/shared';
 import { User } from './user.entity';
 
 /** What a server text needs to speak to one reader: their language's words, numbering set and unit. */
@@ -11,7 +11,7 @@ export interface Reader {
 }
 
 export const readerFrom = (u: Pick<User, 'language' | 'stageNumbering' | 'temperatureUnit'>): Reader => ({
-  t: wordsFor(u.language),
+  t: serverWordsFor(u.language),
   lng: u.language,
   numbering: u.stageNumbering,
   unit: u.temperatureUnit,

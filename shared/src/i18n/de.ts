@@ -1,11 +1,8 @@
 import type { Catalogue } from './en.js';
 import { pagesDe } from './pages/index.js';
 import { partnerUpdatesDe } from './partner-updates.js';
-import { mailDe } from './mail.js';
-import { remindersDe } from './reminders.js';
 import { sharesDe } from './shares.js';
 import { refusalsDe } from './refusals.js';
-import { serverRefusalsDe } from './server-refusals.js';
 
 /** Every word for a shared state, in German; the `Catalogue` type makes a missing key a compile error. */
 export const de: Catalogue = {
@@ -348,11 +345,8 @@ export const de: Catalogue = {
   },
   page: pagesDe,
   partnerUpdate: partnerUpdatesDe,
-  reminders: remindersDe,
-  mail: mailDe,
   shares: sharesDe,
   rule: refusalsDe,
-  refusal: serverRefusalsDe,
   calendar: {
     pullWindow: 'Entnahmefenster: {{project}}',
     where: '{{project}}, Kokon vom {{layDate}}',

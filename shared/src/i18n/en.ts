@@ -1,11 +1,8 @@
 import type { Widen } from './catalogue-shape.js';
 import { pagesEn } from './pages/index.js';
 import { partnerUpdatesEn } from './partner-updates.js';
-import { mailEn } from './mail.js';
-import { remindersEn } from './reminders.js';
 import { sharesEn } from './shares.js';
 import { refusalsEn } from './refusals.js';
-import { serverRefusalsEn } from './server-refusals.js';
 
 /**
  * Every word for a shared state, in English. Keys are the shared enums' own values, so a new value
@@ -332,13 +329,10 @@ export const en = {
   page: pagesEn,
   /** What partners read when something is recorded in their project (in-app and e-mail). */
   partnerUpdate: partnerUpdatesEn,
-  reminders: remindersEn,
   /** The e-mails about an account and its access (confirmation, reset, invitation, security notices). */
-  mail: mailEn,
   /** How shares were worked out and what changed (shares page, statement). */
   shares: sharesEn,
   rule: refusalsEn,
-  refusal: serverRefusalsEn,
   calendar: {
     pullWindow: 'Pull window: {{project}}',
     where: '{{project}}, sac laid {{layDate}}',

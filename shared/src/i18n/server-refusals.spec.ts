@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { createWords, LANGUAGES, wordsOf } from './words.js';
+import { LANGUAGES, wordsOf } from './words.js';
+import { createServerWords } from './server-catalogue.js';
 import { serverRefusalsDe, serverRefusalsEn } from './server-refusals.js';
 import { refusalsEn } from './refusals.js';
 
@@ -46,7 +47,7 @@ describe('the server’s refusals in every language', () => {
 
   for (const lng of LANGUAGES) {
     // No fallback: a German sentence missing from the catalogue must fail here, not come out in English.
-    const t = wordsOf(createWords(lng, { fallback: false }));
+    const t = wordsOf(createServerWords(lng, { fallback: false }));
     it(`${lng}: every refusal renders with its values: no placeholder, key path or empty text left`, () => {
       for (const [key, english] of ALL) {
         const values = sampleValues(key, english);

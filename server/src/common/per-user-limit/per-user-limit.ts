@@ -1,12 +1,12 @@
 import { applyDecorators, HttpException, HttpStatus, Injectable, SetMetadata, UseGuards, type CanActivate, type ExecutionContext } from '@nestjs/common';
 import { Reflector } from '@nestjs/core';
 import { RateLimiterMemory, RateLimiterRes } from 'rate-limiter-flexible';
-import type { Catalogue } from '@broodsilk/shared';
+import type { ServerCatalogue } from '@broodsilk/shared';
 import { refusal, term } from '../refusal';
 
 export interface PerUserLimitOptions {
   /** Names the bucket and, in the refusal, what was limited (said in the reader's language): `'statementEmails'`. */
-  what: keyof Catalogue['refusal']['limitedWork'];
+  what: keyof ServerCatalogue['refusal']['limitedWork'];
   limit: number;
   windowMinutes: number;
   /** Count per network address instead of per keeper, for public routes (no one is signed in). */

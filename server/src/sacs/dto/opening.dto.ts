@@ -1,12 +1,12 @@
 import { IsBoolean, IsInt, IsOptional, IsString, IsUUID, Max, MaxLength, Min, ValidateIf } from 'class-validator';
-import { BROOD_COUNT_MAX, type Catalogue, type OpeningRequest, TEXT_LIMITS } from '@broodsilk/shared';
+import { BROOD_COUNT_MAX, type ServerCatalogue, type OpeningRequest, TEXT_LIMITS } from '@broodsilk/shared';
 import { IsInstant } from '../../common/validators/is-instant.validator';
 import { IsOptionalNonNull } from '../../common/validators/is-optional-non-null.validator';
 import { AcknowledgedWarningsDto } from '../../plausibility/acknowledged-warnings.dto';
 import { keyedBy } from '../../common/filters/validation-exception.factory';
 
 /** A count is a whole number from 0 to BROOD_COUNT_MAX; `what` names its sentence. */
-export function IsCount(what: keyof Catalogue['refusal']['dto']['count']): PropertyDecorator {
+export function IsCount(what: keyof ServerCatalogue['refusal']['dto']['count']): PropertyDecorator {
   const said = { context: keyedBy(`dto.count.${what}`, { max: BROOD_COUNT_MAX }) };
   return (target, key) => {
     IsInt(said)(target, key);
