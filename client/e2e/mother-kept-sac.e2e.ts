@@ -30,8 +30,11 @@ afterAll(async () => {
 describe('a sac left with the mother', () => {
   it('is recorded as staying with her, shows no pull warning, is counted at emergence, and its shares follow from the count', async () => {
     const page = keeper.page;
+    // Opened by its address, read from the list: a click while the list is still being re-rendered
+    // by its second query (the dashboard's next-due column) could land on a replaced row.
     await page.goto(`${BASE_URL}/projects`);
-    await page.getByRole('link', { name: PROJECT }).first().click();
+    const href = await page.getByRole('link', { name: PROJECT }).first().getAttribute('href');
+    await page.goto(`${BASE_URL}${href}`);
     await eventually(() => page.getByTestId('section-sacs').isVisible()).toBe(true);
     const projectUrl = page.url();
 
