@@ -1,14 +1,15 @@
 import type { HandOverTodo, PaymentTodo } from '@broodsilk/shared';
-import { handOversAwaitingArrival, type AccountView } from './account-view';
+import { handOversAwaitingArrival, type AccountView, type LedgerRowFacts } from './account-view';
 
 /** What the viewer must do in one project's account: confirm hand-overs they received, pay or be paid. */
-export function accountTodos(view: AccountView, userId: string): { handOvers: HandOverTodo[]; payments: PaymentTodo[] } {
+export function accountTodos(view: AccountView<LedgerRowFacts>, userId: string): { handOvers: HandOverTodo[]; payments: PaymentTodo[] } {
   const project = { projectId: view.data.project.id, projectTitle: view.data.project.title };
   const isOwner = view.owner.user?.id === userId;
   const awaiting = handOversAwaitingArrival(view);
+  const recipientUser = (r: LedgerRowFacts) => view.memberOf(r.party!.id)?.user?.id;
   const handOvers = view.data.rows
-    .filter((r) => awaiting.has(r.id) && (r.party!.user ? r.party!.user.id === userId : isOwner))
-    .map((r) => ({ ...project, entryId: r.id, date: r.date, count: r.count!, partyName: view.nameOf(r.party!.id), mine: r.party!.user?.id === userId }));
+    .filter((r) => awaiting.has(r.id) && (recipientUser(r) ? recipientUser(r) === userId : isOwner))
+    .map((r) => ({ ...project, entryId: r.id, date: r.date, count: r.count!, partyName: view.nameOf(r.party!.id), mine: recipientUser(r) === userId }));
   const userOf = new Map(view.data.members.map((m) => [m.id, m.user?.id ?? null]));
   const payments = view.balances.debts.flatMap((d): PaymentTodo[] => {
     const base = { ...project, amountMinor: d.amountMinor, currency: d.currency };

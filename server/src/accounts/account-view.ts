@@ -5,14 +5,41 @@ import type { TermsVersion } from '../projects/terms-version.entity';
 import type { LedgerEntryRow } from './ledger-entry.entity';
 import type { SacCountFact } from './sac-counts';
 
+type Ref = { id: string } | null | undefined;
+
+/**
+ * What the account's rules read of a ledger row. The entity has all of it; a read that only needs
+ * balances and to-dos loads the same columns without hydrating entities (ledger-row-facts.ts).
+ */
+export type LedgerRowFacts = Pick<
+  LedgerEntryRow,
+  | 'id'
+  | 'createdAt'
+  | 'kind'
+  | 'date'
+  | 'sacId'
+  | 'count'
+  | 'method'
+  | 'carrier'
+  | 'tracking'
+  | 'priceMinor'
+  | 'pricePerSpiderlingMinor'
+  | 'amountMinor'
+  | 'currency'
+  | 'arrivedAlive'
+  | 'arrivedDead'
+  | 'reason'
+  | 'source'
+> & { party?: Ref; fromParty?: Ref; toParty?: Ref; target?: Ref; recordedBy?: Ref };
+
 /** Everything an account is worked out from, loaded in one place (account-loader.ts). */
-export interface AccountData {
+export interface AccountData<R extends LedgerRowFacts = LedgerEntryRow> {
   project: Project;
   members: ProjectMember[];
   terms: TermsVersion | null;
   sacs: SacCountFact[];
   /** In ledger order. */
-  rows: LedgerEntryRow[];
+  rows: R[];
 }
 
 export interface SacShareState {
@@ -25,9 +52,10 @@ export interface SacShareState {
   result: ShareResult | null;
 }
 
-export interface AccountView {
-  data: AccountData;
+export interface AccountView<R extends LedgerRowFacts = LedgerEntryRow> {
+  data: AccountData<R>;
   owner: ProjectMember;
+  memberOf: (memberId: string) => ProjectMember | undefined;
   nameOf: (memberId: string) => string;
   sacs: SacShareState[];
   totals: { partyId: string; count: number }[];
@@ -49,10 +77,10 @@ const WITHDRAWALS = new Set(['hand-over', 'sale', 'cash-out']);
  * of a payment (unless it came through the payment provider), and the party whose young are
  * cashed out or sold below the price in the terms in force (the owner alone cannot waive a claim).
  */
-export function acceptorOf(r: LedgerEntryRow, price: number): ProjectMember | null {
-  if (r.kind === 'money') return r.source === 'payment-provider' ? null : r.toParty!;
-  if (r.kind === 'cash-out' && (r.pricePerSpiderlingMinor ?? price) < price) return r.party!;
-  if (r.kind === 'sale' && r.priceMinor! < r.count! * price) return r.party!;
+export function acceptorOf(r: LedgerRowFacts, price: number, memberOf: (id: string) => ProjectMember | undefined): ProjectMember | null {
+  if (r.kind === 'money') return r.source === 'payment-provider' ? null : memberOf(r.toParty!.id)!;
+  if (r.kind === 'cash-out' && (r.pricePerSpiderlingMinor ?? price) < price) return memberOf(r.party!.id)!;
+  if (r.kind === 'sale' && r.priceMinor! < r.count! * price) return memberOf(r.party!.id)!;
   return null;
 }
 
@@ -60,12 +88,13 @@ export function acceptorOf(r: LedgerEntryRow, price: number): ProjectMember | nu
  * Entries that do not count yet: the acceptor has not recorded or confirmed them. For an acceptor
  * without an account, the owner's record stands in for theirs.
  */
-export function pendingEntries(data: AccountData, owner: ProjectMember): Set<string> {
+export function pendingEntries(data: AccountData<LedgerRowFacts>, owner: ProjectMember): Set<string> {
+  const members = new Map(data.members.map((m) => [m.id, m]));
   const confirmed = new Set(data.rows.filter((r) => r.kind === 'confirmation' && r.target).map((r) => r.target!.id));
   const price = data.terms?.pricePerSpiderlingMinor ?? 0;
   const pending = new Set<string>();
   for (const r of data.rows) {
-    const acceptor = acceptorOf(r, price);
+    const acceptor = acceptorOf(r, price, (id) => members.get(id));
     if (!acceptor || confirmed.has(r.id)) continue;
     const recorder = r.recordedBy?.id ?? null;
     if (acceptor.user ? recorder === acceptor.user.id : recorder === owner.user?.id) continue;
@@ -74,7 +103,7 @@ export function pendingEntries(data: AccountData, owner: ProjectMember): Set<str
   return pending;
 }
 
-function toLedgerEntry(r: LedgerEntryRow): LedgerEntry | null {
+function toLedgerEntry(r: LedgerRowFacts): LedgerEntry | null {
   const base = { id: r.id, date: r.date };
   switch (r.kind) {
     case 'hand-over':
@@ -112,11 +141,12 @@ function toLedgerEntry(r: LedgerEntryRow): LedgerEntry | null {
  * Works out shares per sac and the balances. The sac counts need to know which withdrawals are in
  * force, and that depends only on the corrections, so a first pass with zero shares finds them.
  */
-export function buildAccountView(data: AccountData): AccountView {
+export function buildAccountView<R extends LedgerRowFacts>(data: AccountData<R>): AccountView<R> {
   const owner = data.members.find((m) => m.role === 'owner');
   if (!owner) throw new Error(`Project ${data.project.id} has no owner member.`);
-  const names = new Map(data.members.map((m) => [m.id, memberName(m)]));
-  const nameOf = (id: string) => names.get(id) ?? 'an unknown party';
+  const members = new Map(data.members.map((m) => [m.id, m]));
+  const memberOf = (id: string) => members.get(id);
+  const nameOf = (id: string) => (members.has(id) ? memberName(members.get(id)!) : 'an unknown party');
   const pending = pendingEntries(data, owner);
   const excluded = new Set(pending);
   for (const r of data.rows) if (r.kind === 'correction' && r.target && excluded.has(r.target.id)) excluded.add(r.id);
@@ -160,11 +190,11 @@ export function buildAccountView(data: AccountData): AccountView {
     count: sacs.reduce((sum, s) => sum + (s.result?.parties.find((p) => p.partyId === partyId)?.count ?? 0), 0),
   }));
   const balances = computeBalances(totals, entries, price, currency, owner.id);
-  return { data, owner, nameOf, sacs, totals, entries, pending, balances };
+  return { data, owner, memberOf, nameOf, sacs, totals, entries, pending, balances };
 }
 
 /** Hand-overs in force whose recipient has not yet confirmed the arrival: young on their way, not yet settled. */
-export function handOversAwaitingArrival(view: AccountView): Set<string> {
+export function handOversAwaitingArrival(view: AccountView<LedgerRowFacts>): Set<string> {
   const inForce = new Set(view.balances.inForce);
   const arrived = new Set(view.data.rows.filter((r) => r.kind === 'arrival' && inForce.has(r.id)).map((r) => r.target!.id));
   return new Set(view.data.rows.filter((r) => r.kind === 'hand-over' && inForce.has(r.id) && !arrived.has(r.id)).map((r) => r.id));

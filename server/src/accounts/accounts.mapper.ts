@@ -32,7 +32,7 @@ function toEntryResponse(r: LedgerEntryRow, seq: number, view: AccountView, l: L
   else status = l.problems.has(r.id) ? 'left-out' : 'reversed';
   let awaiting: PartyRef | null = null;
   if (r.kind === 'hand-over' && status === 'in-force' && !l.arrivedFor.has(r.id)) awaiting = ref(r.party);
-  if (status === 'awaiting-confirmation') awaiting = ref(acceptorOf(r, view.data.terms?.pricePerSpiderlingMinor ?? 0));
+  if (status === 'awaiting-confirmation') awaiting = ref(acceptorOf(r, view.data.terms?.pricePerSpiderlingMinor ?? 0, view.memberOf));
   return {
     id: r.id,
     seq,

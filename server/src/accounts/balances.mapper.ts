@@ -1,5 +1,5 @@
 import type { BalancesResponse } from '@broodsilk/shared';
-import { handOversAwaitingArrival, type AccountView } from './account-view';
+import { handOversAwaitingArrival, type AccountView, type LedgerRowFacts } from './account-view';
 
 /**
  * Nothing owed: a counted sac under terms in force, every other party has had its share (the
@@ -8,9 +8,9 @@ import { handOversAwaitingArrival, type AccountView } from './account-view';
  * from an estimated count are provisional, so they are never settled until an exact count.
  */
 /** Shares resting on an estimated count (of a sac with young) are provisional. */
-export const isProvisional = (view: AccountView): boolean => view.sacs.some((s) => s.fact.estimated && s.count > 0);
+export const isProvisional = (view: AccountView<LedgerRowFacts>): boolean => view.sacs.some((s) => s.fact.estimated && s.count > 0);
 
-export function isSettled(view: AccountView): boolean {
+export function isSettled(view: AccountView<LedgerRowFacts>): boolean {
   if (!view.data.terms || !view.sacs.some((s) => s.count > 0)) return false;
   if (isProvisional(view)) return false;
   const others = view.balances.parties.filter((p) => p.partyId !== view.owner.id);

@@ -145,7 +145,7 @@ function confirmationDraft(view: AccountView, access: ProjectAccess, userId: str
     return { kind: 'arrival', date, target: row, party: row.party!, arrivedAlive: dto.arrivedAlive, arrivedDead: dto.arrivedDead };
   }
   if (row.kind === 'money' || row.kind === 'cash-out' || row.kind === 'sale') {
-    const acceptor = acceptorOf(row, view.data.terms?.pricePerSpiderlingMinor ?? 0);
+    const acceptor = acceptorOf(row, view.data.terms?.pricePerSpiderlingMinor ?? 0, view.memberOf);
     if (!acceptor) throw new ConflictException(refusal(`account.alreadyCounts.${row.kind}`));
     assertConfirmer(access, userId, acceptor, row.kind === 'money' ? 'payment' : 'young');
     if (!view.pending.has(row.id)) throw new ConflictException(refusal(`account.alreadyCounts.${row.kind}`));

@@ -23,9 +23,9 @@ import { partnerNamesOf } from '../projects/partner-names';
 import { AnimalsService } from '../animals/animals.service';
 import { ActivityService } from '../activity/activity.service';
 import { Sac } from '../sacs/sac.entity';
-import { SAC_POPULATE, SacViewsService } from '../sacs/sac-views.service';
+import { SacViewsService } from '../sacs/sac-views.service';
 import { Clock } from '../common/clock';
-import { loadAccounts } from '../accounts/account-loader';
+import { loadAccountFacts } from '../accounts/account-loader';
 import { accountTodos } from '../accounts/account-todos';
 import { isSettled } from '../accounts/balances.mapper';
 import { projectsWithBrood } from '../accounts/projects-with-brood';
@@ -67,14 +67,16 @@ export class DashboardService {
     // stage), known without deriving any stage; only the listed ones get theirs.
     const open = projects.filter((p) => !p.closedOn && !p.endedEarlyReason);
     const listed = open.slice(0, DASHBOARD_OPEN_PROJECTS);
-    await this.em.populate(listed, ['owner', 'female.species', 'male.species']);
+    // Every open project's female with her species: the sac lines below read the pull window from it.
+    await this.em.populate(open, ['female.species']);
+    await this.em.populate(listed, ['owner', 'male.species']);
     // Each account once: for the money to-dos (owners and partners, every project) and the listed
     // projects' "shares settled" fact (only a project with a brood can be settled).
     const withBrood = await projectsWithBrood(
       this.em,
       listed.map((p) => p.id),
     );
-    const accounts = await loadAccounts(
+    const accounts = await loadAccountFacts(
       this.em,
       projects.filter((p) => MONEY.has(roleOf.get(p.id)!) || withBrood.has(p.id)),
     );
@@ -86,7 +88,8 @@ export class DashboardService {
     );
     const openIds = new Set(open.map((p) => p.id));
 
-    const sacs = await this.em.find(Sac, { project: { $in: [...openIds] }, outcome: 'in-progress' }, { populate: SAC_POPULATE });
+    // Their projects, females and species are loaded above: a join (SAC_POPULATE) would hydrate them all again.
+    const sacs = await this.em.find(Sac, { project: { $in: [...openIds] }, outcome: 'in-progress' });
     const responses = await this.views.build(this.em, sacs, viewer.timeZone, now, (projectId) => roleOf.get(projectId)!);
     // A sac the keeper chose to leave with the mother has no pull window to watch.
     const watchedWithMother = new Set(responses.filter((r) => !r.pulled && !r.leftWithMother).map((r) => r.id));
