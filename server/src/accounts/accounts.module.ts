@@ -17,7 +17,7 @@ import { BalancesController } from './balances.controller';
 import { EntriesController } from './entries.controller';
 import { StatementsController } from './statements.controller';
 import { StatementsService } from './statements.service';
-import { loadAccounts } from './account-loader';
+import { loadAccountFacts } from './account-loader';
 import { isSettled } from './balances.mapper';
 import { projectsWithBrood } from './projects-with-brood';
 
@@ -34,7 +34,7 @@ export class AccountsModule implements OnModuleInit {
     // Stage `shares-settled`: nothing owed in young or money (see balances.mapper isSettled).
     this.facts.register('sharesSettled', async (em, projectIds) => {
       const withBrood = [...(await projectsWithBrood(em, projectIds))];
-      const accounts = await loadAccounts(em, withBrood.length ? await em.find(Project, { id: { $in: withBrood } }) : []);
+      const accounts = await loadAccountFacts(em, withBrood.length ? await em.find(Project, { id: { $in: withBrood } }) : []);
       return new Map([...accounts].map(([id, view]) => [id, { sharesSettled: isSettled(view) }]));
     });
   }

@@ -1,5 +1,6 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import type { LedgerRowFacts } from './account-view';
+import { LedgerEntryRow } from './ledger-entry.entity';
 
 interface FactsRow {
   project_id: string;
@@ -37,6 +38,9 @@ const ref = (id: string | null) => (id ? { id } : null);
 export async function ledgerRowFactsOf(em: EntityManager, projectIds: string[]): Promise<Map<string, LedgerRowFacts[]>> {
   const out = new Map<string, LedgerRowFacts[]>();
   if (!projectIds.length) return out;
+  // A plain query does not flush as em.find does first: a row persisted in this unit of work but
+  // not yet written would be missed. Flush when em.find would (MikroORM's auto-flush rule).
+  if (em.getUnitOfWork().shouldAutoFlush(em.getMetadata().get(LedgerEntryRow.name))) await em.flush();
   const rows = await em.execute<FactsRow[]>(
     `select project_id, id, created_at, kind, date::text as date, sac_id, count, method, carrier, tracking, price_minor,
             price_per_spiderling_minor, amount_minor, currency, arrived_alive, arrived_dead, reason, source,
