@@ -256,4 +256,44 @@ describe('refusals built from other words, in German', () => {
     ]);
     expect(res.body.details.map((d: { field: string }) => d.field)).toEqual(['line 2', 'line 3', 'line 4']);
   });
+
+  it('5. field refusals gathered before the throw: a project’s animals, a terms proposal and a molt, in German', async () => {
+    const p = await createProject(t.app, t.orm, owner, { title: 'Felder' });
+    const project = await de(
+      http().post('/api/projects').set('Authorization', owner.bearer).send({ title: 'Vertauscht', femaleId: p.maleAnimal.id, maleId: p.femaleAnimal.id }),
+    ).expect(400);
+    expect(german(project.body, /recorded as/).slice(1)).toEqual([
+      `${p.maleAnimal.label} ist als Männchen eingetragen, nicht als Weibchen.`,
+      `${p.femaleAnimal.label} ist als Weibchen eingetragen, nicht als Männchen.`,
+    ]);
+    const members = (await http().get(`/api/projects/${s.projectId}/members`).set('Authorization', s.mira.bearer).expect(200)).body as {
+      id: string;
+      role: string;
+    }[];
+    const parties = members.filter((m) => m.role !== 'caretaker');
+    const lines = parties.map((m) => ({ memberId: m.id, weight: 1, pickOrder: 1 }));
+    const terms = await de(
+      http().post(`/api/projects/${s.projectId}/terms`).set('Authorization', s.mira.bearer).send({
+        lines,
+        currency: 'XYZ',
+        pricePerSpiderlingMinor: 0,
+        failureClause: 'nothing-owed',
+        handOverStage: 'second-instar',
+        shippingPaidBy: 'recipient',
+      }),
+    ).expect(400);
+    expect(german(terms.body, /used twice|currency code/)).toEqual(
+      expect.arrayContaining([
+        'Die Wahlreihenfolge 1 ist doppelt vergeben; jede Partei braucht ihren eigenen Platz.',
+        'XYZ ist kein Währungscode nach ISO 4217.',
+      ]),
+    );
+    const molt = await de(
+      http().post(`/api/animals/${p.femaleAnimal.id}/molts`).set('Authorization', owner.bearer).send({ moltedOn: '2999-01-01', maturing: true }),
+    ).expect(400);
+    expect(german(molt.body, /in the future|maturing molt/).slice(1)).toEqual([
+      'Das Häutungsdatum 2999-01-01 liegt in der Zukunft.',
+      'Nur ein Männchen hat eine Reifehäutung; trag zuerst sein Geschlecht ein (oder das Ergebnis an der Exuvie).',
+    ]);
+  });
 });

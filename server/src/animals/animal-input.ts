@@ -3,6 +3,7 @@ import type { FieldError } from '@broodsilk/shared';
 import { Species } from '../species/species.entity';
 import { User } from '../users/user.entity';
 import type { AuthUser } from '../common/auth-user';
+import { fieldRefusal } from '../common/refusal';
 import { Animal } from './animal.entity';
 import type { CreateAnimalDto } from './dto/create-animal.dto';
 import { animalRuleErrors, type AnimalState } from './animal-rules';
@@ -33,7 +34,7 @@ export async function resolveAnimalInput(
   if (dto.speciesId !== undefined) {
     const species = await em.findOne(Species, { id: dto.speciesId });
     if (species) values.species = species;
-    else errors.push({ field: 'speciesId', message: 'Choose a species from the catalogue.' });
+    else errors.push(fieldRefusal('speciesId', 'species.choose'));
   }
 
   const merged: AnimalState = {
@@ -58,7 +59,7 @@ export async function resolveAnimalInput(
     // Nothing is looked up: whether an account has this address, and its id and name, stay
     // hidden until that keeper accepts (AnimalOwnershipService), so the form cannot probe addresses.
     const email = merged.ownerEmail.toLowerCase();
-    if (email === viewer.email.toLowerCase()) errors.push({ field: 'ownerEmail', message: 'That is your own e-mail: choose yourself as the owner instead.' });
+    if (email === viewer.email.toLowerCase()) errors.push(fieldRefusal('ownerEmail', 'animal.ownEmail'));
     const unchanged = current?.ownerKind === 'keeper' && current.ownerEmail === email;
     values.ownerUser = unchanged ? (current.ownerUser ?? null) : null;
     values.ownerEmail = email;
@@ -76,7 +77,7 @@ export async function resolveAnimalInput(
   const label = dto.label;
   if (label !== undefined && label !== current?.label) {
     const taken = await em.count(Animal, { recordedBy: viewer.id, label });
-    if (taken > 0) errors.push({ field: 'label', message: `You already have an animal labelled "${label}".` });
+    if (taken > 0) errors.push(fieldRefusal('label', 'animal.labelTaken', { label }));
   }
   return { errors, values };
 }

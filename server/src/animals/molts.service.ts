@@ -10,6 +10,7 @@ import { toMoltResponse } from './molts.mapper';
 import { MOLT_PHOTO } from './animal-photos.service';
 import { AnimalMoltRegistry } from './animal-molt.registry';
 import type { CreateMoltDto } from './dto/create-molt.dto';
+import { fieldRefusal } from '../common/refusal';
 
 @Injectable()
 export class MoltsService {
@@ -39,15 +40,14 @@ export class MoltsService {
     return this.em.transactional(async (tx) => {
       const animal = await this.animals.own(viewer, animalId, tx);
       const errors: FieldError[] = [];
-      if (dto.moltedOn > today) errors.push({ field: 'moltedOn', message: `The molt date ${dto.moltedOn} is in the future.` });
+      if (dto.moltedOn > today) errors.push(fieldRefusal('moltedOn', 'animal.futureMolt', { on: dto.moltedOn }));
       if (animal.acquiredOn && dto.moltedOn < animal.acquiredOn) {
-        errors.push({ field: 'moltedOn', message: `The molt date ${dto.moltedOn} is before you acquired the animal (${animal.acquiredOn}).` });
+        errors.push(fieldRefusal('moltedOn', 'animal.beforeAcquiredMolt', { on: dto.moltedOn, acquiredOn: animal.acquiredOn }));
       }
       const sex = animal.sex === 'unsexed' && (dto.exuviaSex === 'male' || dto.exuviaSex === 'female') ? dto.exuviaSex : animal.sex;
-      if (dto.maturing && sex !== 'male')
-        errors.push({ field: 'maturing', message: 'Only a male has a maturing molt; record his sex first (or the exuvia result).' });
+      if (dto.maturing && sex !== 'male') errors.push(fieldRefusal('maturing', 'animal.maturingOnlyMale'));
       if (dto.maturing && animal.maturity === 'mature' && animal.maturedOn && animal.maturedOn !== dto.moltedOn) {
-        errors.push({ field: 'maturing', message: `He already matured on ${animal.maturedOn}.` });
+        errors.push(fieldRefusal('maturing', 'animal.alreadyMatured', { on: animal.maturedOn }));
       }
       if (errors.length) throw badRequest(errors);
 

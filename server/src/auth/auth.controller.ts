@@ -1,7 +1,18 @@
 import { Body, Controller, Get, HttpCode, Inject, Patch, Post, Req, Res, UseGuards } from '@nestjs/common';
 import { ConfigType } from '@nestjs/config';
 import type { Request, Response } from 'express';
-import { type CsrfResponse, type EmailConfirmationResult, type LoginResponse, type Me, type RegisterResponse, type SignInResult } from '@broodsilk/shared';
+import {
+  DEFAULT_LANGUAGE,
+  EMAIL_CONFIRMATION_HOURS,
+  RESET_LINK_MINUTES,
+  type CsrfResponse,
+  type EmailConfirmationResult,
+  type LoginResponse,
+  type Me,
+  type RegisterResponse,
+  type SignInResult,
+} from '@broodsilk/shared';
+import { say } from '../common/refusal';
 import { appConfig } from '../config/app.config';
 import { Public } from '../common/decorators/public.decorator';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
@@ -56,7 +67,7 @@ export class AuthController {
   @Post('confirm-email/resend')
   async resendConfirmation(@Body() dto: EmailConfirmationResendDto): Promise<{ message: string }> {
     await this.confirmations.requestAgain(dto.email);
-    return { message: 'If this address has an account waiting for confirmation, a new link is on its way. It works once, within 24 hours.' };
+    return { message: say(DEFAULT_LANGUAGE, 'page.auth.sentAgain', { hours: EMAIL_CONFIRMATION_HOURS }) };
   }
 
   @Public()
@@ -113,7 +124,7 @@ export class AuthController {
   @Post('password-reset')
   async requestReset(@Body() dto: PasswordResetDto): Promise<{ message: string }> {
     await this.auth.requestPasswordReset(dto.email);
-    return { message: 'If an account uses this e-mail, a reset link is on its way. It works once, within 45 minutes.' };
+    return { message: say(DEFAULT_LANGUAGE, 'page.auth.resetSent', { minutes: RESET_LINK_MINUTES }) };
   }
 
   @Public()

@@ -3,7 +3,7 @@ import { ConfigType } from '@nestjs/config';
 import { JwtService } from '@nestjs/jwt';
 import { EntityManager, LockMode, raw, type RequiredEntityData } from '@mikro-orm/postgresql';
 import { createHash, randomBytes } from 'node:crypto';
-import { EMAIL_NOT_CONFIRMED, PENDING_SIGN_IN_MINUTES, SESSION_HOURS, type Me, type SecondFactorChallenge } from '@broodsilk/shared';
+import { EMAIL_NOT_CONFIRMED, PENDING_SIGN_IN_MINUTES, RESET_LINK_MINUTES, SESSION_HOURS, type Me, type SecondFactorChallenge } from '@broodsilk/shared';
 import { appConfig } from '../config/app.config';
 import { MailOutbox } from '../mail/mail-outbox.service';
 import { accountMail } from '../mail/account-mail';
@@ -25,7 +25,6 @@ import { EmailConfirmations } from './email-confirmations.service';
 import { hashInvitationToken } from '../invitations/invitation-token';
 import { refusal } from '../common/refusal';
 
-export const RESET_LINK_MINUTES = 45;
 /** The composed mail behind every reset request: a link for a known address, nothing for an unknown one. */
 const RESET_MAIL = 'password-reset-link';
 /** The composed mail behind every registration: a notice to the owner of a taken address, the confirmation link for a new one. */

@@ -23,6 +23,8 @@ const ENGLISH_REFUSAL = [
   /new \w+Exception\(\s*(?:['"`]|\{\s*message\s*(?::\s*['"`]|[,}]))/g,
   /badRequest\(\[\s*\{[^}]*\bmessage:\s*['"`]/g,
   /fieldError\(\s*[^,]+,\s*['"`]/g,
+  // A field's refusal gathered before it is thrown: `errors.push({ field, message: '…' })`.
+  /\.push\(\s*\{\s*field\b[^;]*?\bmessage:\s*['"`]/g,
   // A class-validator decorator's own sentence takes `{ context: keyedBy('dto.…') }` (validation-exception.factory), never its own
   // `message`: in the decorator's options (`@IsInt({ message: '…' })`, a constant, a function), in options built
   // beside it (`(what) => ({ message: … })`), in a registered decorator's options or its default message.
@@ -43,6 +45,8 @@ describe('every refusal the server writes can be said in the reader’s language
     expect(englishRefusals(`throw new BadRequestException({ message, details: [{ field: 'code', message }] });`)).toBe(1);
     expect(englishRefusals(`throw badRequest([{ field: 'at', message: 'Too early.' }]);`)).toBe(1);
     expect(englishRefusals(`throw fieldError('at', 'Too early.');`)).toBe(1);
+    expect(englishRefusals('if (!a) errors.push({ field, message: `There is no ${sex} of that name.` });')).toBe(1);
+    expect(englishRefusals("errors.push({ field: `lines.${i}.pickOrder`, message: 'Used twice.' });")).toBe(1);
     expect(englishRefusals(`@IsInt({ message: 'The roll interval must be a whole number of hours.' })`)).toBe(1);
     expect(englishRefusals("@IsIn(ROLES, { each: true, message: `The role must be one of: ${ROLES.join(', ')}.` })")).toBe(1);
     expect(englishRefusals(`const dayRule = (what: string) => ({ message: \`The \${what} must be a whole day.\` });`)).toBe(1);

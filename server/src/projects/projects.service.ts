@@ -75,8 +75,14 @@ export class ProjectsService {
       ]);
       const errors: FieldError[] = [];
       const check = (a: Animal | null, field: 'femaleId' | 'maleId', sex: 'female' | 'male') => {
-        if (!a) errors.push({ field, message: `There is no such animal in your collection; choose the ${sex} from the animals you recorded.` });
-        else if (a.sex !== sex) errors.push({ field, message: `${a.label} is recorded as ${a.sex}, not ${sex}.` });
+        if (!a) errors.push(fieldRefusal(field, sex === 'female' ? 'project.noSuchFemale' : 'project.noSuchMale'));
+        // The male's sentences are the pairing's own ("… is recorded as female, not male").
+        else if (a.sex !== sex)
+          errors.push(
+            sex === 'female'
+              ? fieldRefusal(field, a.sex === 'male' ? 'project.femaleIsMale' : 'project.femaleIsUnsexed', { animal: a.label })
+              : fieldRefusal(field, a.sex === 'female' ? 'pairing.maleIsFemale' : 'pairing.maleIsUnsexed', { male: a.label }),
+          );
         else if (!mayStartProject(a))
           errors.push(fieldRefusal(field, 'project.animalNotStartable', { animal: a.label, status: term(`refusal.animalStatusWord.${a.status}`) }));
       };

@@ -21,7 +21,7 @@ import { termsStatuses } from './terms-status';
 import { toTermsVersionResponse } from './terms.mapper';
 import type { ProposeTermsDto } from './dto/propose-terms.dto';
 import type { AcceptTermsDto } from './dto/accept-terms.dto';
-import { refusal, term } from '../common/refusal';
+import { fieldRefusal, refusal, term } from '../common/refusal';
 
 const POPULATE = ['createdBy', 'lines.member.user', 'acceptances.member.user', 'acceptances.recordedBy'] as const;
 
@@ -71,24 +71,19 @@ export class TermsService {
     const byId = new Map(parties.map((m) => [m.id, m]));
     const seen = new Set<string>();
     dto.lines.forEach((l, i) => {
-      if (!byId.has(l.memberId))
-        errors.push({ field: `lines.${i}.memberId`, message: 'This line names nobody who is an owner or partner of the project (caretakers hold no share).' });
-      else if (seen.has(l.memberId))
-        errors.push({ field: `lines.${i}.memberId`, message: `${byId.get(l.memberId)!.name} is listed twice; give each party one line.` });
+      if (!byId.has(l.memberId)) errors.push(fieldRefusal(`lines.${i}.memberId`, 'terms.lineNobody'));
+      else if (seen.has(l.memberId)) errors.push(fieldRefusal(`lines.${i}.memberId`, 'terms.listedTwice', { name: byId.get(l.memberId)!.name }));
       seen.add(l.memberId);
     });
     const missing = parties.filter((m) => !seen.has(m.id));
-    if (missing.length)
-      errors.push({ field: 'lines', message: `Every party needs a line; missing: ${missing.map((m) => m.user?.displayName ?? m.name).join(', ')}.` });
-    if (dto.lines.reduce((s, l) => s + l.weight, 0) <= 0)
-      errors.push({ field: 'lines', message: 'At least one party needs a weight above 0, or nobody would get a share.' });
+    if (missing.length) errors.push(fieldRefusal('lines', 'terms.partiesMissing', { names: missing.map((m) => m.user?.displayName ?? m.name).join(', ') }));
+    if (dto.lines.reduce((s, l) => s + l.weight, 0) <= 0) errors.push(fieldRefusal('lines', 'terms.noWeight'));
     const picks = new Map<number, number>();
     dto.lines.forEach((l, i) => {
-      if (picks.has(l.pickOrder))
-        errors.push({ field: `lines.${i}.pickOrder`, message: `Pick order ${l.pickOrder} is used twice; each party needs its own place.` });
+      if (picks.has(l.pickOrder)) errors.push(fieldRefusal(`lines.${i}.pickOrder`, 'terms.pickTwice', { pick: l.pickOrder }));
       picks.set(l.pickOrder, i);
     });
-    if (!CURRENCIES.has(dto.currency)) errors.push({ field: 'currency', message: `${dto.currency} is not an ISO 4217 currency code.` });
+    if (!CURRENCIES.has(dto.currency)) errors.push(fieldRefusal('currency', 'terms.notCurrency', { currency: dto.currency }));
     if (!errors.length) {
       // The share rule has its own input checks; run it once so terms it would refuse never get stored.
       try {

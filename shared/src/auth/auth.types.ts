@@ -28,6 +28,9 @@ export interface RegisterResponse {
 /** How long the link in the confirmation e-mail works. */
 export const EMAIL_CONFIRMATION_HOURS = 24;
 
+/** How long the link in the password-reset e-mail works. */
+export const RESET_LINK_MINUTES = 45;
+
 export interface EmailConfirmationRequest {
   token: string;
 }

@@ -42,6 +42,7 @@ export const authEn = {
   notConfirmed: 'Confirm your e-mail address first: open the link we sent when you registered.',
   sendAgain: 'Send the e-mail again',
   sentAgain: 'If this address has an account waiting for confirmation, a new link is on its way. It works once, within {{hours}} hours.',
+  resetSent: 'If an account uses this e-mail, a reset link is on its way. It works once, within {{minutes}} minutes.',
   confirm: {
     title: 'Confirm your e-mail address',
     subtitle: 'The last step of creating your account',
@@ -97,6 +98,7 @@ export const authDe: Widen<typeof authEn> = {
   notConfirmed: 'Bestätige zuerst deine E-Mail-Adresse: Öffne den Link, den wir dir bei der Registrierung geschickt haben.',
   sendAgain: 'E-Mail noch einmal senden',
   sentAgain: 'Wenn zu dieser Adresse ein Konto auf die Bestätigung wartet, ist ein neuer Link unterwegs. Er gilt einmal, innerhalb von {{hours}} Stunden.',
+  resetSent: 'Wenn ein Konto diese E-Mail-Adresse benutzt, ist ein Link zum Zurücksetzen unterwegs. Er gilt einmal, innerhalb von {{minutes}} Minuten.',
   confirm: {
     title: 'Bestätige deine E-Mail-Adresse',
     subtitle: 'Der letzte Schritt beim Anlegen deines Kontos',

@@ -5,6 +5,7 @@ import { useState } from 'react';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useRequestPasswordReset } from '../api/password-reset';
 import { useWords } from '@/lib/i18n';
+import { RESET_LINK_MINUTES } from '@broodsilk/shared';
 
 export function ForgotPasswordForm() {
   const t = useWords();
@@ -15,7 +16,7 @@ export function ForgotPasswordForm() {
     <form
       onSubmit={form.onSubmit((values) =>
         request.mutate(values, {
-          onSuccess: (res) => setAnswer({ ok: true, text: res.message }),
+          onSuccess: () => setAnswer({ ok: true, text: t('page.auth.resetSent', { minutes: RESET_LINK_MINUTES }) }),
           onError: (e) => setAnswer({ ok: false, text: applyServerErrors(form, e) }),
         }),
       )}
