@@ -41,7 +41,7 @@ async function loadWith<R extends LedgerRowFacts>(
 ): Promise<Map<string, AccountView<R>>> {
   const ids = projects.map((p) => p.id);
   const members = await em.find(ProjectMember, { project: { $in: ids } }, { populate: ['user'], orderBy: { createdAt: 'asc' } });
-  const terms = await termsInForceOf(em, ids);
+  const terms = await termsInForceOf(em, ids, { membersLoaded: true });
   const sacs = await sacCountsByProject(em, ids);
   const ledgers = await ledgersOf(ids);
   const membersOf = byProject(members);

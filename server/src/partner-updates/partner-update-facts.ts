@@ -5,24 +5,10 @@ import { Sac } from '../sacs/sac.entity';
 import { SacOpening } from '../sacs/sac-opening.entity';
 import { BroodCount } from '../sacs/brood-count.entity';
 import { viableOf } from '../sacs/brood.mapper';
-import { TermsVersion } from '../projects/terms-version.entity';
-import { termsStatuses } from '../projects/terms-status';
+import { termsInForce } from '../accounts/terms-in-force';
 import type { Project } from '../projects/project.entity';
 import { User } from '../users/user.entity';
 import { isBadNews, type BadNewsFacts, type UpdateFacts } from './partner-update-words';
-
-/** The terms version in force with its lines, or null (the same rule as the terms page). */
-async function termsInForce(em: EntityManager, projectId: string): Promise<TermsVersion | null> {
-  const versions = await em.find(TermsVersion, { project: projectId }, { populate: ['lines.member.user', 'acceptances.member'], orderBy: { number: 'asc' } });
-  const { inForce } = termsStatuses(
-    versions.map((v) => ({
-      number: v.number,
-      mustAccept: [...v.lines].filter((l) => l.member.role === 'partner').map((l) => l.member.id),
-      accepted: [...v.acceptances].map((a) => a.member.id),
-    })),
-  );
-  return versions.find((v) => v.number === inForce) ?? null;
-}
 
 /** The counts of a sac (its opening unless corrected, its latest count unless struck), the terms, the keeper's words. */
 export async function badNewsFacts(em: EntityManager, projectId: string, sacId: string | null, message: string | null): Promise<BadNewsFacts> {

@@ -1,10 +1,23 @@
 import type { TermsStatus } from '@broodsilk/shared';
+import type { TermsVersion } from './terms-version.entity';
 
 export interface VersionAcceptanceFacts {
   number: number;
   /** Member ids of the partner-role parties listed in the version: each must accept. */
   mustAccept: readonly string[];
   accepted: readonly string[];
+}
+
+/** What the rule reads of a version loaded with its lines' members and its acceptances. */
+export function acceptanceFacts(v: TermsVersion): VersionAcceptanceFacts {
+  return {
+    number: v.number,
+    mustAccept: v.lines
+      .getItems()
+      .filter((l) => l.member.role === 'partner')
+      .map((l) => l.member.id),
+    accepted: v.acceptances.getItems().map((a) => a.member.id),
+  };
 }
 
 /**

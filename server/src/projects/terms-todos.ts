@@ -1,7 +1,7 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import type { TermsTodo } from '@broodsilk/shared';
 import { TermsVersion } from './terms-version.entity';
-import { termsStatuses } from './terms-status';
+import { acceptanceFacts, termsStatuses } from './terms-status';
 
 /** Proposed terms versions waiting for the user's own acceptance, over many projects in a fixed number of queries. */
 export async function termsAwaitingAcceptance(em: EntityManager, userId: string, projectIds: string[]): Promise<TermsTodo[]> {
@@ -14,15 +14,7 @@ export async function termsAwaitingAcceptance(em: EntityManager, userId: string,
   const out: TermsTodo[] = [];
   for (const projectId of projectIds) {
     const mine = versions.filter((v) => v.project.id === projectId);
-    const facts = mine.map((v) => ({
-      number: v.number,
-      mustAccept: v.lines
-        .getItems()
-        .filter((l) => l.member.role === 'partner')
-        .map((l) => l.member.id),
-      accepted: v.acceptances.getItems().map((a) => a.member.id),
-    }));
-    const { status } = termsStatuses(facts);
+    const { status } = termsStatuses(mine.map(acceptanceFacts));
     for (const v of mine) {
       const line = v.lines.getItems().find((l) => l.member.role === 'partner' && l.member.user?.id === userId);
       if (status.get(v.number) === 'proposed' && line && !v.acceptances.getItems().some((a) => a.member.id === line.member.id)) {

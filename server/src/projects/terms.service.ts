@@ -17,7 +17,7 @@ import { ProjectMember } from './project-member.entity';
 import { TermsVersion } from './terms-version.entity';
 import { TermsLine } from './terms-line.entity';
 import { TermsAcceptance } from './terms-acceptance.entity';
-import { termsStatuses } from './terms-status';
+import { acceptanceFacts, termsStatuses } from './terms-status';
 import { toTermsVersionResponse } from './terms.mapper';
 import type { ProposeTermsDto } from './dto/propose-terms.dto';
 import type { AcceptTermsDto } from './dto/accept-terms.dto';
@@ -40,13 +40,7 @@ export class TermsService {
   }
 
   private statuses(versions: TermsVersion[]) {
-    return termsStatuses(
-      versions.map((v) => ({
-        number: v.number,
-        mustAccept: [...v.lines].filter((l) => l.member.role === 'partner').map((l) => l.member.id),
-        accepted: [...v.acceptances].map((a) => a.member.id),
-      })),
-    );
+    return termsStatuses(versions.map(acceptanceFacts));
   }
 
   async list(access: ProjectAccess): Promise<TermsListResponse> {
