@@ -28,7 +28,7 @@ export async function loadAccounts(em: EntityManager, projects: Project[]): Prom
 /**
  * The same accounts with their ledgers read as plain rows (`ledgerRowFactsOf`): for reads of
  * balances, settlement and to-dos across many projects, where hydrating thousands of ledger
- * entities was most of the time. Same rules, same results (account-facts.spec.ts).
+ * entities was most of the time. Same rules, same results (the last spec of test/accounts.e2e-spec.ts).
  */
 export async function loadAccountFacts(em: EntityManager, projects: Project[]): Promise<Map<string, AccountView<LedgerRowFacts>>> {
   return loadWith(em, projects, (ids) => ledgerRowFactsOf(em, ids));

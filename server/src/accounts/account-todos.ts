@@ -6,15 +6,15 @@ export function accountTodos(view: AccountView<LedgerRowFacts>, userId: string):
   const project = { projectId: view.data.project.id, projectTitle: view.data.project.title };
   const isOwner = view.owner.user?.id === userId;
   const awaiting = handOversAwaitingArrival(view);
-  const recipientUser = (r: LedgerRowFacts) => view.memberOf(r.party!.id)?.user?.id;
+  const userOf = (memberId: string) => view.memberOf(memberId)?.user?.id;
+  const recipientUser = (r: LedgerRowFacts) => userOf(r.party!.id);
   const handOvers = view.data.rows
     .filter((r) => awaiting.has(r.id) && (recipientUser(r) ? recipientUser(r) === userId : isOwner))
     .map((r) => ({ ...project, entryId: r.id, date: r.date, count: r.count!, partyName: view.nameOf(r.party!.id), mine: recipientUser(r) === userId }));
-  const userOf = new Map(view.data.members.map((m) => [m.id, m.user?.id ?? null]));
   const payments = view.balances.debts.flatMap((d): PaymentTodo[] => {
     const base = { ...project, amountMinor: d.amountMinor, currency: d.currency };
-    if (userOf.get(d.fromPartyId) === userId) return [{ ...base, direction: 'owed-by-me', otherName: view.nameOf(d.toPartyId) }];
-    if (userOf.get(d.toPartyId) === userId) return [{ ...base, direction: 'owed-to-me', otherName: view.nameOf(d.fromPartyId) }];
+    if (userOf(d.fromPartyId) === userId) return [{ ...base, direction: 'owed-by-me', otherName: view.nameOf(d.toPartyId) }];
+    if (userOf(d.toPartyId) === userId) return [{ ...base, direction: 'owed-to-me', otherName: view.nameOf(d.fromPartyId) }];
     return [];
   });
   return { handOvers, payments };

@@ -2,7 +2,7 @@ import { computeBalances, computeShares, type AccountBalances, type LedgerEntry,
 import type { Project } from '../projects/project.entity';
 import type { ProjectMember } from '../projects/project-member.entity';
 import type { TermsVersion } from '../projects/terms-version.entity';
-import type { LedgerEntryRow } from './ledger-entry.entity';
+import type { LedgerEntryRow, LedgerRowValues } from './ledger-entry.entity';
 import type { SacCountFact } from './sac-counts';
 
 type Ref = { id: string } | null | undefined;
@@ -11,26 +11,8 @@ type Ref = { id: string } | null | undefined;
  * What the account's rules read of a ledger row. The entity has all of it; a read that only needs
  * balances and to-dos loads the same columns without hydrating entities (ledger-row-facts.ts).
  */
-export type LedgerRowFacts = Pick<
-  LedgerEntryRow,
-  | 'id'
-  | 'createdAt'
-  | 'kind'
-  | 'date'
-  | 'sacId'
-  | 'count'
-  | 'method'
-  | 'carrier'
-  | 'tracking'
-  | 'priceMinor'
-  | 'pricePerSpiderlingMinor'
-  | 'amountMinor'
-  | 'currency'
-  | 'arrivedAlive'
-  | 'arrivedDead'
-  | 'reason'
-  | 'source'
-> & { party?: Ref; fromParty?: Ref; toParty?: Ref; target?: Ref; recordedBy?: Ref };
+export type LedgerRowFacts = Pick<LedgerEntryRow, 'id' | 'createdAt' | 'kind' | 'date' | 'source'> &
+  Omit<LedgerRowValues, 'note'> & { party?: Ref; fromParty?: Ref; toParty?: Ref; target?: Ref; recordedBy?: Ref };
 
 /** Everything an account is worked out from, loaded in one place (account-loader.ts). */
 export interface AccountData<R extends LedgerRowFacts = LedgerEntryRow> {

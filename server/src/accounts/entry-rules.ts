@@ -3,28 +3,11 @@ import { checkWithdrawal, type CreateEntryRequest } from '@broodsilk/shared';
 import type { ProjectMember } from '../projects/project-member.entity';
 import type { ProjectAccess } from '../projects/project-access.service';
 import type { AccountView, SacShareState } from './account-view';
-import type { LedgerEntryRow } from './ledger-entry.entity';
+import type { LedgerEntryRow, LedgerRowValues } from './ledger-entry.entity';
 import { fieldRefusal, refusal, type Refusal } from '../common/refusal';
 
 /** The checked parts of a new row; EntriesService turns them into an entity. */
-export type EntryDraft = Partial<
-  Pick<
-    LedgerEntryRow,
-    | 'sacId'
-    | 'count'
-    | 'method'
-    | 'carrier'
-    | 'tracking'
-    | 'priceMinor'
-    | 'pricePerSpiderlingMinor'
-    | 'amountMinor'
-    | 'currency'
-    | 'arrivedAlive'
-    | 'arrivedDead'
-    | 'reason'
-    | 'note'
-  >
-> & {
+export type EntryDraft = Partial<LedgerRowValues> & {
   kind: LedgerEntryRow['kind'];
   date: string;
   party?: ProjectMember;

@@ -97,3 +97,21 @@ export class LedgerEntryRow extends BaseEntity<'source'> {
   @ManyToOne(() => User, { nullable: true, deleteRule: 'restrict' })
   recordedBy?: User | null;
 }
+
+/** The values a row carries besides its kind, date and references (which of them depends on the kind). */
+export type LedgerRowValues = Pick<
+  LedgerEntryRow,
+  | 'sacId'
+  | 'count'
+  | 'method'
+  | 'carrier'
+  | 'tracking'
+  | 'priceMinor'
+  | 'pricePerSpiderlingMinor'
+  | 'amountMinor'
+  | 'currency'
+  | 'arrivedAlive'
+  | 'arrivedDead'
+  | 'reason'
+  | 'note'
+>;

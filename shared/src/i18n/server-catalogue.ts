@@ -1,11 +1,11 @@
-import i18next, { type i18n } from 'i18next';
+import type { i18n } from 'i18next';
 import type { Widen } from './catalogue-shape.js';
 import { en } from './en.js';
 import { de } from './de.js';
 import { mailDe, mailEn } from './mail.js';
 import { remindersDe, remindersEn } from './reminders.js';
 import { serverRefusalsDe, serverRefusalsEn } from './server-refusals.js';
-import { DEFAULT_LANGUAGE, I18N_OPTIONS, LANGUAGES, wordsOf, type Language, type Words } from './words.js';
+import { createInstanceOn, wordsCache, type Language } from './words.js';
 
 /**
  * The server's catalogue: the interface's words plus the sections only the server writes (the
@@ -20,24 +20,8 @@ const SERVER_CATALOGUES: Readonly<Record<Language, ServerCatalogue>> = { en: ser
 
 /** A separate, synchronously ready instance on the server's catalogue (see `createWords`). */
 export function createServerWords(lng: Language, options: { fallback?: boolean } = {}): i18n {
-  const instance = i18next.createInstance();
-  void instance.init({
-    ...I18N_OPTIONS,
-    resources: Object.fromEntries(LANGUAGES.map((l) => [l, { translation: SERVER_CATALOGUES[l] }])),
-    lng,
-    fallbackLng: options.fallback === false ? false : DEFAULT_LANGUAGE,
-    initAsync: false,
-  });
-  return instance;
+  return createInstanceOn(SERVER_CATALOGUES, lng, options);
 }
 
-const fixed = new Map<Language, Words>();
 /** `Words` on the server's catalogue, fixed to one language and cached (one per reader's language). */
-export function serverWordsFor(lng: Language = DEFAULT_LANGUAGE): Words {
-  let t = fixed.get(lng);
-  if (!t) {
-    t = wordsOf(createServerWords(lng));
-    fixed.set(lng, t);
-  }
-  return t;
-}
+export const serverWordsFor = wordsCache(createServerWords);

@@ -33,11 +33,22 @@ export const I18N_OPTIONS = {
   returnNull: false,
 } as const;
 
-/** A separate, synchronously ready instance in one language (the server makes one per reader). */
-export function createWords(lng: Language, options: { fallback?: boolean } = {}): i18n {
+/** A separate, synchronously ready instance in one language over `catalogues` (one namespace, `translation`). */
+export function createInstanceOn(catalogues: Readonly<Record<Language, object>>, lng: Language, options: { fallback?: boolean } = {}): i18n {
   const instance = i18next.createInstance();
-  void instance.init({ ...I18N_OPTIONS, lng, fallbackLng: options.fallback === false ? false : DEFAULT_LANGUAGE, initAsync: false });
+  void instance.init({
+    ...I18N_OPTIONS,
+    resources: Object.fromEntries(LANGUAGES.map((l) => [l, { translation: catalogues[l] }])),
+    lng,
+    fallbackLng: options.fallback === false ? false : DEFAULT_LANGUAGE,
+    initAsync: false,
+  });
   return instance;
+}
+
+/** An instance on the interface's catalogue. */
+export function createWords(lng: Language, options: { fallback?: boolean } = {}): i18n {
+  return createInstanceOn(CATALOGUES, lng, options);
 }
 
 /** A `t` function with i18next's heavy key typing left out: a key and its values in, text out. */
@@ -49,16 +60,21 @@ export const wordsOf =
   (key, values) =>
     String(instance.t(key, values ?? {}));
 
-const fixed = new Map<Language, Words>();
-/** `Words` fixed to one language, cached (the server makes one per reader's language). */
-export function wordsFor(lng: Language = DEFAULT_LANGUAGE): Words {
-  let t = fixed.get(lng);
-  if (!t) {
-    t = wordsOf(createWords(lng));
-    fixed.set(lng, t);
-  }
-  return t;
+/** `Words` fixed to one language, made by `create` on first use and kept (one per reader's language). */
+export function wordsCache(create: (lng: Language) => i18n): (lng?: Language) => Words {
+  const fixed = new Map<Language, Words>();
+  return (lng = DEFAULT_LANGUAGE) => {
+    let t = fixed.get(lng);
+    if (!t) {
+      t = wordsOf(create(lng));
+      fixed.set(lng, t);
+    }
+    return t;
+  };
 }
+
+/** `Words` on the interface's catalogue, fixed to one language. */
+export const wordsFor = wordsCache(createWords);
 
 /** Catalogue sections whose keys are one shared enum's values (string entries only). */
 export type EnumSection = {
